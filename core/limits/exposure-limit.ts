@@ -1,0 +1,316 @@
+/**
+ * The exposure limit (MPE / ELV) for eye or skin at one wavelength, duration and source size,
+ * evaluated from the rule-set tables (limit specification, section 3):
+ *  1. factors at (lambda, t, alpha);
+ *  2. every row whose band and duration contain the query and whose 'when' holds; at an exact
+ *     boundary the rows on both sides (the lower governs: EU Table 2.2 note a);
+ *  3. 'ref' rows resolved into the other tissue's rows (one level; skin -> eye uses non-retinal rows);
+ *  4. E rows converted to H = E * t; conservative alternatives applied;
+ *  5. the minimum over all candidates governs (dual limits), and the result names it.
+ */
+import { Dec, recordString, roundSig } from '../numeric/decimal.js';
+import { InputError, requireInRange } from '../errors.js';
+import type { LimitSettings, RuleSetId, Tissue } from '../model/inputs.js';
+import { addStep, newTrace, type Trace } from '../trace/trace.js';
+import { condition, evaluate, substitute, variablesOf } from './expression.js';
+import { conservativeOn, evaluateFactors, type FactorSet } from './factors.js';
+import { DEFAULT_RULE_SET, DURATION_RANGE_S, RULE_SET_IDS, RULE_SET_NAME, ruleSetTable, WAVELENGTH_RANGE_NM } from './rule-sets.js';
+import type { Interval, LimitRow, RuleSetTable } from './table-types.js';
+import { limitingAperture, type ApertureResult } from './apertures.js';
+
+export interface ExposureLimitQuery {
+  readonly ruleSet?: RuleSetId;
+  readonly tissue: Tissue;
+  readonly wavelength_nm: number;
+  readonly duration_s: number;
+  /** Angular subtense of the apparent source, radians (eye only); default: point source. */
+  readonly sourceAngle_rad?: number;
+  readonly settings?: LimitSettings;
+}
+
+export interface LimitCandidate {
+  readonly rowId: string;
+  readonly tissueTable: Tissue;
+  readonly effect: string;
+  readonly quantity: 'H' | 'E';
+  readonly expr: string;
+  readonly substituted: string;
+  /** The limit as radiant exposure over the duration, J/m² (decimal string). */
+  readonly H_Jm2: string;
+  readonly source: string;
+  readonly confidence: string;
+  readonly conservativeApplied: boolean;
+  /** The remembered value the conservative alternative replaced (J/m²), if any. */
+  readonly rememberedH_Jm2?: string;
+  /** Factor applied for a photochemical limit when the source is larger than gamma_p. */
+  readonly fieldOfViewFactor?: string;
+  /** Aperture over which exposure is averaged for this candidate. */
+  readonly aperture: ApertureResult;
+}
+
+export interface ExposureLimitResult {
+  readonly ruleSet: RuleSetId;
+  readonly ruleSetName: string;
+  readonly tissue: Tissue;
+  readonly wavelength_nm: number;
+  readonly duration_s: number;
+  readonly sourceAngle_rad: number;
+  /** Governing limit as radiant exposure over the duration, J/m² (full precision, decimal string). */
+  readonly H_Jm2: string;
+  /** Governing limit as mean irradiance over the duration, W/m² (= H / t). */
+  readonly E_Wm2: string;
+  /** Rounded DOWN to 3 significant figures (a smaller limit is the safe side). */
+  readonly H_Jm2_reported: string;
+  readonly E_Wm2_reported: string;
+  readonly governing: LimitCandidate;
+  readonly candidates: readonly LimitCandidate[];
+  readonly factors: Readonly<Record<string, string>>;
+  /** Limiting aperture of the governing candidate. */
+  readonly aperture: ApertureResult;
+  /** Ids of rows/factors where conservative mode used the stricter alternative. */
+  readonly conservativeReplacements: readonly string[];
+  /** Ids of rows used whose values are from memory (not read in a published source). */
+  readonly fromMemoryRows: readonly string[];
+  readonly trace: Trace;
+}
+
+const REL_EDGE = new Dec('1e-9');
+
+/** Is x inside [lo, hi), or on an edge (within a relative tolerance, spec convention 'boundary_values')? */
+function position(x: Dec, iv: Interval, topInclusive: boolean): 'inside' | 'edge' | 'outside' {
+  const lo = new Dec(iv[0]);
+  const hi = new Dec(iv[1]);
+  const near = (a: Dec, b: Dec): boolean => a.minus(b).abs().lte(Dec.max(a.abs(), b.abs()).mul(REL_EDGE));
+  if (near(x, hi)) return topInclusive ? 'inside' : 'edge';
+  if (near(x, lo)) return 'inside';
+  if (x.gt(lo) && x.lt(hi)) return 'inside';
+  return 'outside';
+}
+
+function rowApplies(row: LimitRow, lambda: Dec, t: Dec): boolean {
+  const pl = position(lambda, row.band_nm, row.band_nm[1] === WAVELENGTH_RANGE_NM[1]);
+  const pt = position(t, row.t_s, row.t_s[1] === DURATION_RANGE_S[1]);
+  return pl !== 'outside' && pt !== 'outside';
+}
+
+function isRetinal(row: LimitRow): boolean {
+  return row.effect.startsWith('retinal');
+}
+
+function fmt(d: Dec): string {
+  return d.toSignificantDigits(6).toString();
+}
+
+/** Validate a query and return normalised decimals. Throws InputError naming the field. */
+export function validateLimitQuery(q: ExposureLimitQuery): { ruleSet: RuleSetId; lambda: Dec; t: Dec; alphaMrad: Dec } {
+  const ruleSet = q.ruleSet ?? DEFAULT_RULE_SET;
+  if (!RULE_SET_IDS.includes(ruleSet)) throw new InputError('invalid_choice', 'ruleSet', q.ruleSet, RULE_SET_IDS.join(' | '));
+  if (q.tissue !== 'eye' && q.tissue !== 'skin') throw new InputError('invalid_choice', 'tissue', q.tissue, "'eye' | 'skin'");
+  requireInRange('wavelength_nm', q.wavelength_nm, WAVELENGTH_RANGE_NM[0], WAVELENGTH_RANGE_NM[1], 'nm (180 nm to 1 mm)');
+  requireInRange('duration_s', q.duration_s, DURATION_RANGE_S[0], DURATION_RANGE_S[1], 's');
+  let alphaMrad = new Dec(0);
+  if (q.sourceAngle_rad !== undefined) {
+    requireInRange('sourceAngle_rad', q.sourceAngle_rad, 0, Math.PI, 'rad');
+    alphaMrad = new Dec(q.sourceAngle_rad).mul(1000);
+  }
+  return { ruleSet, lambda: new Dec(q.wavelength_nm), t: new Dec(q.duration_s), alphaMrad };
+}
+
+interface Ctx {
+  readonly table: RuleSetTable;
+  readonly ruleSet: RuleSetId;
+  readonly lambda: Dec;
+  readonly t: Dec;
+  readonly f: FactorSet;
+  readonly settings: LimitSettings | undefined;
+  readonly tissue: Tissue;
+}
+
+function candidatesFor(ctx: Ctx, tableTissue: Tissue, followRefs: boolean, onlyNonRetinal: boolean, apertureTissue: Tissue): LimitCandidate[] {
+  const out: LimitCandidate[] = [];
+  const rows = ctx.table[tableTissue];
+  for (const row of rows) {
+    if (!rowApplies(row, ctx.lambda, ctx.t)) continue;
+    if (row.when && !condition(row.when, ctx.f.vars)) continue;
+    if (row.quantity === 'ref') {
+      if (!followRefs) continue; // spec convention 'ref_rows': one level only
+      const other: Tissue = row.expr.trim() === 'skin' ? 'skin' : 'eye';
+      // skin 'ref eye' uses only non-retinal rows; the eye's corneal check uses the skin aperture (ours)
+      out.push(...candidatesFor(ctx, other, false, tableTissue === 'skin', 'skin'));
+      continue;
+    }
+    if (onlyNonRetinal && isRetinal(row)) continue;
+    out.push(evaluateRow(ctx, row, tableTissue, apertureTissue));
+  }
+  return out;
+}
+
+function evaluateRow(ctx: Ctx, row: LimitRow, tableTissue: Tissue, apertureTissue: Tissue): LimitCandidate {
+  const vars = ctx.f.vars;
+  const toH = (v: Dec): Dec => (row.quantity === 'E' ? v.mul(ctx.t) : v);
+  let H = toH(evaluate(row.expr, vars));
+  let expr = row.expr;
+  let conservativeApplied = false;
+  let remembered: Dec | undefined;
+  if (row.conservative_alt && conservativeOn(ctx.settings, row.id)) {
+    const alt = toH(evaluate(row.conservative_alt, vars));
+    if (alt.lt(H)) {
+      remembered = H;
+      H = alt;
+      expr = row.conservative_alt;
+      conservativeApplied = true;
+    }
+  }
+  // Photochemical limits are measured within the field of view gamma_p: for a uniform source larger
+  // than gamma_p only the fraction (gamma_p/alpha)^2 of its irradiance counts, which is the same as
+  // raising the limit by (alpha/gamma_p)^2 (derived; limit specification sections 4.2 and 8).
+  let fov: Dec | undefined;
+  const gamma = vars['gamma_p'];
+  const alpha = vars['alpha'] as Dec;
+  if (row.effect.includes('photochemical') && row.effect.startsWith('retinal') && gamma && alpha.gt(gamma)) {
+    fov = alpha.div(gamma).pow(2);
+    H = H.mul(fov);
+  }
+  const aperture = limitingAperture(ctx.ruleSet, apertureTissue, ctx.lambda, ctx.t, ctx.settings);
+  const c: LimitCandidate = {
+    rowId: row.id,
+    tissueTable: tableTissue,
+    effect: row.effect,
+    quantity: row.quantity === 'E' ? 'E' : 'H',
+    expr,
+    substituted: substitute(expr, vars, fmt),
+    H_Jm2: recordString(H),
+    source: row.source,
+    confidence: row.confidence,
+    conservativeApplied,
+    aperture,
+    ...(remembered ? { rememberedH_Jm2: recordString(remembered) } : {}),
+    ...(fov ? { fieldOfViewFactor: recordString(fov) } : {}),
+  };
+  return c;
+}
+
+/**
+ * The exposure limit for one query. Throws InputError for bad input; never returns NaN,
+ * Infinity or a non-positive limit.
+ */
+export function exposureLimit(q: ExposureLimitQuery): ExposureLimitResult {
+  const { ruleSet, lambda, t, alphaMrad } = validateLimitQuery(q);
+  const table = ruleSetTable(ruleSet);
+  const settings = q.settings;
+  // Source size only matters for the retina; skin limits are for a point of skin (alpha unused).
+  const alphaForFactors = q.tissue === 'eye' ? alphaMrad : new Dec(0);
+  const f = evaluateFactors(table, lambda, t, alphaForFactors, settings);
+  const ctx: Ctx = { table, ruleSet, lambda, t, f, settings, tissue: q.tissue };
+  const candidates = candidatesFor(ctx, q.tissue, true, false, q.tissue);
+  if (candidates.length === 0) {
+    throw new InputError('not_covered', 'wavelength_nm', q.wavelength_nm, `a band of rule set ${ruleSet} at ${t.toString()} s`);
+  }
+  let governing = candidates[0] as LimitCandidate;
+  // On a tie the later row wins: it is the one that starts at the boundary (the row 'inside').
+  for (const c of candidates) if (new Dec(c.H_Jm2).lte(governing.H_Jm2)) governing = c;
+  const H = new Dec(governing.H_Jm2);
+  if (!H.isFinite() || H.lte(0)) throw new Error(`internal: limit not positive for ${JSON.stringify(q)}`);
+  const E = H.div(t);
+
+  const factors: Record<string, string> = {};
+  for (const [k, v] of f.used) factors[k] = recordString(v.value);
+
+  const conservativeReplacements = [
+    ...candidates.filter((c) => c.conservativeApplied).map((c) => c.rowId),
+    ...[...f.used.values()].filter((v) => v.conservativeApplied).map((v) => `factor:${v.name}`),
+    ...(governing.aperture.conservativeApplied ? [governing.aperture.key] : []),
+  ];
+  const fromMemoryRows = candidates.filter((c) => c.confidence.startsWith('from memory')).map((c) => c.rowId);
+
+  const trace = newTrace(`Exposure limit, ${q.tissue}, ${lambda.toString()} nm, ${t.toString()} s (${RULE_SET_NAME[ruleSet]})`);
+  addStep(trace, { kind: 'input', label: 'Rule set', detail: `${RULE_SET_NAME[ruleSet]}: ${table.status}` });
+  addStep(trace, {
+    kind: 'input',
+    label: 'Source',
+    detail: alphaMrad.lte(1.5) ? `point source (alpha = ${fmt(alphaMrad)} mrad <= alpha_min = 1.5 mrad)` : `extended source, alpha = ${fmt(alphaMrad)} mrad`,
+  });
+  const shown = new Set<string>();
+  for (const c of candidates) for (const n of variablesOf(c.expr)) shown.add(n);
+  for (const row of [...table.eye, ...table.skin]) if (candidates.some((c) => c.rowId === row.id) && row.when) for (const n of ['alpha', 'T1', 'T2']) if (row.when.includes(n)) shown.add(n);
+  if (shown.has('CE')) ['alpha_min', 'alpha_max'].forEach((n) => shown.add(n));
+  if (candidates.some((c) => c.fieldOfViewFactor)) shown.add('gamma_p');
+  for (const v of f.used.values()) {
+    if (!shown.has(v.name)) continue;
+    addStep(trace, {
+      kind: v.conservativeApplied ? 'conservative' : 'factor',
+      label: v.name,
+      detail: v.conservativeApplied
+        ? `${v.expr} (unverified remembered value ${fmt(v.remembered as Dec)} replaced by the stricter value)`
+        : v.expr,
+      value: fmt(v.value),
+      source: v.source,
+      confidence: v.confidence,
+    });
+  }
+  for (const c of candidates) {
+    addStep(trace, {
+      kind: c.conservativeApplied ? 'conservative' : 'row',
+      label: `Row ${c.rowId} (${c.effect})`,
+      detail:
+        `${c.quantity === 'E' ? 'E = ' : 'H = '}${c.expr} = ${c.substituted}` +
+        (c.quantity === 'E' ? ', H = E * t' : '') +
+        (c.fieldOfViewFactor ? `, times (alpha/gamma_p)^2 = ${fmt(new Dec(c.fieldOfViewFactor))} for a source larger than gamma_p (derived)` : '') +
+        (c.conservativeApplied
+          ? `; unverified entry: remembered value H = ${fmt(new Dec(c.rememberedH_Jm2 as string))} J/m² replaced by the stricter value (conservative mode)`
+          : ''),
+      value: fmt(new Dec(c.H_Jm2)),
+      unit: 'J/m²',
+      source: c.source,
+      confidence: c.confidence,
+    });
+  }
+  if (candidates.length > 1) {
+    addStep(trace, {
+      kind: 'note',
+      label: 'Lowest applies',
+      detail: `${candidates.length} rows apply (dual limits or an exact boundary); the lowest governs: ${governing.rowId} (${governing.effect})`,
+      source: 'limit specification convention 2 and 3; EU Table 2.2 note a',
+      confidence: 'read',
+    });
+  }
+  addStep(trace, { kind: 'result', label: 'Limit H', detail: `governing row ${governing.rowId}`, value: fmt(H), unit: 'J/m²' });
+  addStep(trace, { kind: 'result', label: 'Limit E', detail: `H / t = ${fmt(H)} / ${t.toString()}`, value: fmt(E), unit: 'W/m²' });
+  addStep(trace, {
+    kind: 'input',
+    label: 'Limiting aperture',
+    detail: `${governing.aperture.diameter_mm} mm (${governing.aperture.expr})${governing.aperture.conservativeApplied ? '; unverified aperture replaced by the stricter (smaller) one' : ''}`,
+    source: governing.aperture.source,
+    confidence: governing.aperture.confidence,
+  });
+  const Hr = roundSig(H, 3, 'down');
+  const Er = roundSig(E, 3, 'down');
+  addStep(trace, { kind: 'rounding', label: 'Reported', detail: 'limits are rounded DOWN to 3 significant figures (the safe direction)', value: `${Hr.toString()} J/m²; ${Er.toString()} W/m²` });
+  if (conservativeReplacements.length) {
+    addStep(trace, {
+      kind: 'warning',
+      label: 'Conservative mode',
+      detail: `unverified entries replaced by the stricter value: ${conservativeReplacements.join(', ')}`,
+    });
+  }
+
+  return {
+    ruleSet,
+    ruleSetName: RULE_SET_NAME[ruleSet],
+    tissue: q.tissue,
+    wavelength_nm: q.wavelength_nm,
+    duration_s: q.duration_s,
+    sourceAngle_rad: q.sourceAngle_rad ?? 0,
+    H_Jm2: recordString(H),
+    E_Wm2: recordString(E),
+    H_Jm2_reported: Hr.toString(),
+    E_Wm2_reported: Er.toString(),
+    governing,
+    candidates,
+    factors,
+    aperture: governing.aperture,
+    conservativeReplacements,
+    fromMemoryRows,
+    trace,
+  };
+}

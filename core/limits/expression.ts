@@ -1,0 +1,188 @@
+/**
+ * A tiny evaluator for the limit specification's expressions and conditions, in decimal.js.
+ * Grammar (specification section 1, convention 5): numbers in e-notation, variables, + - * / ^,
+ * parentheses; negative exponents are always parenthesised. Conditions: comparisons (<, <=, >, >=)
+ * joined by 'and', with chains such as "a < alpha <= b". Parsed expressions are cached: the tables
+ * are fixed, so each string is parsed once per process.
+ */
+import { Dec } from '../numeric/decimal.js';
+
+type Node =
+  | { k: 'num'; v: Dec }
+  | { k: 'var'; name: string }
+  | { k: 'neg'; a: Node }
+  | { k: 'bin'; op: '+' | '-' | '*' | '/' | '^'; a: Node; b: Node };
+
+export type Vars = Readonly<Record<string, Dec | undefined>>;
+
+const TOKEN = /\s*(\d+(?:\.\d*)?(?:[eE][+-]?\d+)?|\.\d+(?:[eE][+-]?\d+)?|[A-Za-z_][A-Za-z_0-9]*|<=|>=|[-+*/^()<>])/y;
+
+function tokenize(src: string): string[] {
+  const out: string[] = [];
+  TOKEN.lastIndex = 0;
+  let pos = 0;
+  while (pos < src.length) {
+    if (/^\s*$/.test(src.slice(pos))) break;
+    TOKEN.lastIndex = pos;
+    const m = TOKEN.exec(src);
+    if (!m || m[1] === undefined) throw new Error(`limit table expression: cannot read '${src.slice(pos)}' in '${src}'`);
+    out.push(m[1]);
+    pos = TOKEN.lastIndex;
+  }
+  return out;
+}
+
+class Parser {
+  private i = 0;
+  constructor(private readonly toks: string[], private readonly src: string) {}
+  peek(): string | undefined {
+    return this.toks[this.i];
+  }
+  next(): string {
+    const t = this.toks[this.i++];
+    if (t === undefined) throw new Error(`limit table expression: unexpected end of '${this.src}'`);
+    return t;
+  }
+  done(): boolean {
+    return this.i >= this.toks.length;
+  }
+  expr(): Node {
+    let a = this.term();
+    for (let t = this.peek(); t === '+' || t === '-'; t = this.peek()) {
+      this.next();
+      a = { k: 'bin', op: t, a, b: this.term() };
+    }
+    return a;
+  }
+  term(): Node {
+    let a = this.unary();
+    for (let t = this.peek(); t === '*' || t === '/'; t = this.peek()) {
+      this.next();
+      a = { k: 'bin', op: t, a, b: this.unary() };
+    }
+    return a;
+  }
+  unary(): Node {
+    if (this.peek() === '-') {
+      this.next();
+      return { k: 'neg', a: this.unary() };
+    }
+    return this.power();
+  }
+  power(): Node {
+    const base = this.atom();
+    if (this.peek() === '^') {
+      this.next();
+      // right-associative; the specification always parenthesises negative exponents
+      return { k: 'bin', op: '^', a: base, b: this.power() };
+    }
+    return base;
+  }
+  atom(): Node {
+    const t = this.next();
+    if (t === '(') {
+      const e = this.expr();
+      if (this.next() !== ')') throw new Error(`limit table expression: missing ')' in '${this.src}'`);
+      return e;
+    }
+    if (/^[\d.]/.test(t)) return { k: 'num', v: new Dec(t) };
+    if (/^[A-Za-z_]/.test(t)) return { k: 'var', name: t };
+    throw new Error(`limit table expression: unexpected '${t}' in '${this.src}'`);
+  }
+}
+
+const exprCache = new Map<string, Node>();
+
+function parseExpression(src: string): Node {
+  let n = exprCache.get(src);
+  if (!n) {
+    const p = new Parser(tokenize(src), src);
+    n = p.expr();
+    if (!p.done()) throw new Error(`limit table expression: trailing input in '${src}'`);
+    exprCache.set(src, n);
+  }
+  return n;
+}
+
+function evalNode(n: Node, vars: Vars): Dec {
+  switch (n.k) {
+    case 'num':
+      return n.v;
+    case 'var': {
+      const v = vars[n.name];
+      if (v === undefined) throw new Error(`limit table expression: variable '${n.name}' has no value here`);
+      return v;
+    }
+    case 'neg':
+      return evalNode(n.a, vars).neg();
+    case 'bin': {
+      const a = evalNode(n.a, vars);
+      const b = evalNode(n.b, vars);
+      switch (n.op) {
+        case '+':
+          return a.plus(b);
+        case '-':
+          return a.minus(b);
+        case '*':
+          return a.mul(b);
+        case '/':
+          return a.div(b);
+        case '^':
+          return a.pow(b);
+      }
+    }
+  }
+}
+
+/** Evaluate an arithmetic expression of the tables with the given variables. */
+export function evaluate(src: string, vars: Vars): Dec {
+  return evalNode(parseExpression(src), vars);
+}
+
+/** Names of the variables an expression uses, in order of first appearance. */
+export function variablesOf(src: string): string[] {
+  const out: string[] = [];
+  const walk = (n: Node): void => {
+    if (n.k === 'var') {
+      if (!out.includes(n.name)) out.push(n.name);
+    } else if (n.k === 'neg') walk(n.a);
+    else if (n.k === 'bin') {
+      walk(n.a);
+      walk(n.b);
+    }
+  };
+  walk(parseExpression(src));
+  return out;
+}
+
+/** Substitute values into an expression for the trace, e.g. "18*t^0.75*CE" -> "18*(0.25)^0.75*(1)". */
+export function substitute(src: string, vars: Vars, fmt: (d: Dec) => string): string {
+  return tokenize(src)
+    .map((t) => {
+      if (/^[A-Za-z_]/.test(t)) {
+        const v = vars[t];
+        return v === undefined ? t : `(${fmt(v)})`;
+      }
+      return t;
+    })
+    .join('');
+}
+
+/**
+ * Evaluate a condition such as "alpha > 1.5 and t <= T2" or "alpha_min < alpha <= alpha_max".
+ * Comparisons are exact: the tables' boundaries are decimal numbers, and so are the inputs.
+ */
+export function condition(src: string, vars: Vars): boolean {
+  return src.split(/\s+and\s+/).every((clause) => {
+    const parts = clause.split(/(<=|>=|<|>)/).map((s) => s.trim());
+    if (parts.length < 3 || parts.length % 2 === 0) throw new Error(`limit table condition: cannot read '${src}'`);
+    for (let i = 1; i < parts.length; i += 2) {
+      const left = evaluate(parts[i - 1] as string, vars);
+      const right = evaluate(parts[i + 1] as string, vars);
+      const op = parts[i];
+      const ok = op === '<' ? left.lt(right) : op === '<=' ? left.lte(right) : op === '>' ? left.gt(right) : left.gte(right);
+      if (!ok) return false;
+    }
+    return true;
+  });
+}

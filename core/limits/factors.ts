@@ -1,0 +1,111 @@
+/**
+ * Correction factors and parameters (C_A, C_B, C_C, C_E, T1, T2, alpha_max, gamma_p, C1, C2, T_i /
+ * T_min), defined ONCE per rule set in the tables and evaluated here at (lambda, t, alpha).
+ * Pieces are half-open [lo, hi); at the top edge of the last piece the piece ending there is used.
+ */
+import { Dec } from '../numeric/decimal.js';
+import { condition, evaluate, type Vars } from './expression.js';
+import type { FactorDef, FactorPiece, Interval, RuleSetTable } from './table-types.js';
+import type { LimitSettings } from '../model/inputs.js';
+
+export interface FactorValue {
+  readonly name: string;
+  readonly value: Dec;
+  readonly expr: string;
+  readonly source: string;
+  readonly confidence: string;
+  /** True where conservative mode replaced a remembered value by its stricter alternative. */
+  readonly conservativeApplied: boolean;
+  readonly remembered?: Dec;
+}
+
+function inInterval(x: Dec, iv: Interval): boolean {
+  return x.gte(iv[0]) && x.lt(iv[1]);
+}
+
+function atTop(x: Dec, iv: Interval): boolean {
+  return x.eq(iv[1]);
+}
+
+function pickPiece(def: FactorDef, vars: Vars): FactorPiece | undefined {
+  const pieces = def.pieces ?? [];
+  const lambda = vars['lambda'] as Dec;
+  const t = vars['t'] as Dec;
+  const ok = (p: FactorPiece, edge: boolean): boolean => {
+    if (p.band_nm && !(inInterval(lambda, p.band_nm) || (edge && atTop(lambda, p.band_nm)))) return false;
+    if (p.t_s && !(inInterval(t, p.t_s) || (edge && atTop(t, p.t_s)))) return false;
+    if (p.alpha_mrad && !condition(p.alpha_mrad, vars)) return false;
+    if (p.when && !condition(p.when, vars)) return false;
+    return true;
+  };
+  return pieces.find((p) => ok(p, false)) ?? pieces.find((p) => ok(p, true));
+}
+
+export function conservativeOn(settings: LimitSettings | undefined, key: string): boolean {
+  if (settings?.conservative === false) return false;
+  return !(settings?.verifiedRows ?? []).includes(key);
+}
+
+/** Evaluate one factor; undefined where the factor is not defined at this wavelength/time. */
+export function evalFactor(
+  table: RuleSetTable,
+  name: string,
+  vars: Vars,
+  settings: LimitSettings | undefined,
+): FactorValue | undefined {
+  const def = table.factors[name];
+  if (!def) return undefined;
+  const source = def.source ?? '';
+  if (def.value !== undefined) {
+    return { name, value: new Dec(def.value), expr: String(def.value), source, confidence: def.confidence ?? '', conservativeApplied: false };
+  }
+  if (def.pieces) {
+    const p = pickPiece(def, vars);
+    if (!p) return undefined;
+    const v = evaluate(p.expr, vars);
+    if (p.conservative_alt && conservativeOn(settings, `factor:${name}`)) {
+      const alt = evaluate(p.conservative_alt, vars);
+      if (alt.lt(v)) {
+        return { name, value: alt, expr: p.conservative_alt, source: p.source ?? source, confidence: p.confidence ?? def.confidence ?? '', conservativeApplied: true, remembered: v };
+      }
+    }
+    return { name, value: v, expr: p.expr, source: p.source ?? source, confidence: p.confidence ?? def.confidence ?? '', conservativeApplied: false };
+  }
+  if (def.expr) {
+    const lambda = vars['lambda'] as Dec;
+    if (def.band_nm && !(inInterval(lambda, def.band_nm) || atTop(lambda, def.band_nm))) return undefined;
+    return { name, value: evaluate(def.expr, vars), expr: def.expr, source, confidence: def.confidence ?? '', conservativeApplied: false };
+  }
+  return undefined;
+}
+
+/** Order matters: later factors use earlier ones (C_E needs alpha_min and alpha_max). */
+const FACTOR_ORDER = ['alpha_min', 'alpha_max', 'CA', 'CB', 'CC', 'CE', 'T2', 'T1', 'C1', 'C2', 'gamma_p', 'T1_vis', 'T_i', 'T_min'] as const;
+
+export interface FactorSet {
+  readonly vars: Record<string, Dec | undefined>;
+  readonly used: Map<string, FactorValue>;
+}
+
+/**
+ * All factors at (lambda nm, t s, alpha mrad). Returns the variables map for expressions and the
+ * factor details for the trace.
+ */
+export function evaluateFactors(
+  table: RuleSetTable,
+  lambda: Dec,
+  t: Dec,
+  alpha: Dec,
+  settings: LimitSettings | undefined,
+): FactorSet {
+  const vars: Record<string, Dec | undefined> = { lambda, t, alpha };
+  const used = new Map<string, FactorValue>();
+  for (const name of FACTOR_ORDER) {
+    const f = evalFactor(table, name, vars, settings);
+    if (f) {
+      vars[name] = f.value;
+      used.set(name, f);
+    }
+  }
+  return { vars, used };
+}

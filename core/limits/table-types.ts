@@ -1,0 +1,71 @@
+/** Shapes of the limit tables (see ./tables). Field names follow the project's limit specification. */
+
+export type Confidence = 'read' | 'derived' | 'from memory' | 'from memory, uncertain' | 'ours';
+
+/** A closed-open interval [lo, hi) as written in the specification. */
+export type Interval = readonly [number, number];
+
+export interface FactorPiece {
+  readonly band_nm?: Interval;
+  readonly t_s?: Interval;
+  /** Condition on alpha (mrad), e.g. "alpha_min < alpha <= alpha_max". */
+  readonly alpha_mrad?: string;
+  readonly when?: string;
+  readonly expr: string;
+  readonly source?: string;
+  readonly confidence?: string;
+  readonly conservative_alt?: string;
+}
+
+export interface FactorDef {
+  readonly pieces?: readonly FactorPiece[];
+  readonly value?: number;
+  readonly band_nm?: Interval;
+  readonly expr?: string;
+  readonly unit?: string;
+  readonly source?: string;
+  readonly confidence?: string;
+  readonly note?: string;
+  readonly [extra: string]: unknown;
+}
+
+export interface LimitRow {
+  readonly id: string;
+  readonly band_nm: Interval;
+  readonly t_s: Interval;
+  /** H: radiant exposure J/m²; E: irradiance W/m²; ref: use the rows of the other tissue table. */
+  readonly quantity: 'H' | 'E' | 'ref';
+  readonly expr: string;
+  readonly unit: string;
+  readonly effect: string;
+  readonly source: string;
+  readonly confidence: string;
+  readonly when?: string;
+  readonly conservative_alt?: string;
+  readonly note?: string;
+}
+
+export interface ApertureRow {
+  readonly band_nm: Interval;
+  readonly t_s: Interval;
+  readonly diameter_mm: string;
+  readonly source: string;
+  readonly confidence: string;
+  readonly conservative_alt?: string;
+}
+
+export interface RuleSetTable {
+  readonly id: string;
+  readonly specKey: string;
+  readonly title: string;
+  readonly status: string;
+  readonly factors: Readonly<Record<string, FactorDef>>;
+  readonly eye: readonly LimitRow[];
+  readonly skin: readonly LimitRow[];
+  readonly apertures: {
+    readonly eye: readonly ApertureRow[];
+    readonly skin: readonly ApertureRow[];
+    readonly note?: string;
+  };
+  readonly repetitivePulses: Readonly<Record<string, unknown>>;
+}

@@ -1,0 +1,119 @@
+/**
+ * Inputs of an evaluation: beams, lasers, viewing conditions, eyewear and rooms.
+ * Plain JSON-compatible data (numbers in SI units, suffixes name the unit) so that the same object
+ * is typed in the UI, validated at the IPC/HTTP boundary, stored in a record and recomputed by
+ * `verify`. Field names of `BeamInput` are the public API of issue 'Calculation core, part 2'.
+ */
+
+export type RuleSetId = 'icnirp2013' | 'eu2006';
+export type Tissue = 'eye' | 'skin';
+
+/** Conservative mode (limit specification, section 0): on by default. */
+export interface LimitSettings {
+  /** false turns conservative mode off entirely (not recommended). Default true. */
+  readonly conservative?: boolean;
+  /**
+   * Ids of table rows (or 'factor:CC', 'rule:CP', 'aperture:<tissue>:<lo>-<hi>') that a named
+   * person has checked against the published document: for those, the remembered value is used
+   * instead of the stricter alternative.
+   */
+  readonly verifiedRows?: readonly string[];
+}
+
+export type Emission =
+  | { readonly kind: 'cw'; readonly power_W: number }
+  | {
+      readonly kind: 'pulsed';
+      readonly pulseEnergy_J: number;
+      readonly pulseDuration_s: number;
+      /** Missing means a single pulse. */
+      readonly repetitionRate_Hz?: number;
+    };
+
+export type BeamDefinition = '1/e' | '1/e2' | 'd63';
+
+export interface BeamGeometry {
+  /** Diameter at the exit aperture (or waist), metres. */
+  readonly diameter_m: number;
+  /** Full-angle divergence, radians. */
+  readonly divergence_rad: number;
+  /** Which points the diameter and divergence refer to. */
+  readonly definition: BeamDefinition;
+  readonly profile?: 'gaussian' | 'tophat';
+}
+
+/** Relative tolerances (0.1 = ±10 %) on inputs, for the conservative bound. */
+export interface InputTolerances {
+  readonly power?: number;
+  readonly energy?: number;
+  readonly divergence?: number;
+  readonly diameter?: number;
+  readonly pulseDuration?: number;
+  readonly repetitionRate?: number;
+}
+
+/** Viewing conditions beyond the direct beam. All optional; each present one adds a result. */
+export interface ViewingConditions {
+  readonly diffuse?: {
+    readonly reflectance: number;
+    /** Viewing angle from the surface normal, radians. */
+    readonly viewingAngle_rad?: number;
+    /** Distance from the laser to the reflecting surface, metres (beam size on the target). */
+    readonly targetDistance_m?: number;
+  };
+  readonly specular?: { readonly reflectance: number; readonly pathToSurface_m?: number };
+  readonly lens?: { readonly focalLength_m: number; readonly beamDiameterAtLens_m?: number };
+  readonly fiber?: { readonly kind: 'multimode' | 'singlemode'; readonly numericalAperture: number; readonly modeFieldDiameter_m?: number };
+  readonly aided?: { readonly magnification: number; readonly objectiveDiameter_m: number; readonly transmission?: number };
+  /** Atmospheric attenuation coefficient, 1/m (long outdoor paths only). */
+  readonly attenuation_per_m?: number;
+  /** Closest distance a person can reach, metres; default 0 (at the aperture). */
+  readonly closestApproach_m?: number;
+}
+
+/** One beam: one wavelength and one operating mode of a laser. */
+export interface BeamInput {
+  readonly id?: string;
+  readonly label?: string;
+  readonly ruleSet?: RuleSetId;
+  readonly wavelength_nm: number;
+  readonly emission: Emission;
+  readonly beam: BeamGeometry;
+  /** Exposure duration to evaluate; default by band (common practice, see core/limits/durations.ts). */
+  readonly exposureDuration_s?: number;
+  /** Angular subtense of the apparent source, radians; default point source. */
+  readonly sourceAngle_rad?: number;
+  readonly viewing?: ViewingConditions;
+  readonly tolerances?: InputTolerances;
+  readonly settings?: LimitSettings;
+}
+
+/** Eyewear on the shelf: OD per band and/or EN 207/208 markings. */
+export interface EyewearSpec {
+  readonly id: string;
+  readonly label: string;
+  readonly od?: ReadonlyArray<{ readonly from_nm: number; readonly to_nm: number; readonly od: number }>;
+  readonly en207?: ReadonlyArray<{
+    readonly from_nm: number;
+    readonly to_nm: number;
+    readonly modes: string; // e.g. "DIR" or "DIRM"
+    readonly scale: number; // LB number
+  }>;
+  readonly en208?: ReadonlyArray<{ readonly from_nm: number; readonly to_nm: number; readonly scale: number }>;
+  readonly visibleTransmission?: number;
+}
+
+export interface LaserInput {
+  readonly id: string;
+  readonly name: string;
+  readonly classAsLabelled?: '1' | '1M' | '2' | '2M' | '3R' | '3B' | '4';
+  /** One entry per wavelength or operating mode. */
+  readonly beams: readonly BeamInput[];
+}
+
+export interface RoomInput {
+  readonly ruleSet?: RuleSetId;
+  readonly settings?: LimitSettings;
+  readonly lasers: readonly LaserInput[];
+  readonly eyewear?: readonly EyewearSpec[];
+}

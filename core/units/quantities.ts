@@ -1,0 +1,230 @@
+/**
+ * Parsing what officers type ("5 mW", "1064 nm", "10.6 µm", "10 ns", "1.5 mrad", "0.5 J/cm²") into
+ * SI decimal values, and formatting values back in the unit habit the officer chose: W/m² (IEC,
+ * ICNIRP, EU habit) or W/cm² (ANSI habit). 1 W/cm² = 1e4 W/m² (limit specification, section 1).
+ */
+import { Dec, dec, type Dec as DecT, roundSig } from '../numeric/decimal.js';
+import { InputError } from '../errors.js';
+
+export type Dimension =
+  | 'power'
+  | 'energy'
+  | 'length'
+  | 'wavelength'
+  | 'time'
+  | 'frequency'
+  | 'angle'
+  | 'irradiance'
+  | 'radiantExposure'
+  | 'ratio';
+
+/** SI base unit of each dimension. */
+export const SI_UNIT: Readonly<Record<Dimension, string>> = {
+  power: 'W',
+  energy: 'J',
+  length: 'm',
+  wavelength: 'm',
+  time: 's',
+  frequency: 'Hz',
+  angle: 'rad',
+  irradiance: 'W/m²',
+  radiantExposure: 'J/m²',
+  ratio: '',
+};
+
+const PREFIX: Readonly<Record<string, string>> = {
+  f: '1e-15',
+  p: '1e-12',
+  n: '1e-9',
+  u: '1e-6',
+  'µ': '1e-6',
+  'μ': '1e-6',
+  m: '1e-3',
+  c: '1e-2',
+  '': '1',
+  k: '1e3',
+  M: '1e6',
+  G: '1e9',
+};
+
+interface UnitDef {
+  readonly dim: Dimension;
+  readonly factor: string;
+}
+
+/** Base symbols and, for area units, their own factor. Prefixes combine with the base. */
+const BASES: ReadonlyArray<{ sym: string; dim: Dimension; factor: string; prefixed: boolean }> = [
+  { sym: 'W/m2', dim: 'irradiance', factor: '1', prefixed: true },
+  { sym: 'W/cm2', dim: 'irradiance', factor: '1e4', prefixed: true },
+  { sym: 'W/mm2', dim: 'irradiance', factor: '1e6', prefixed: true },
+  { sym: 'J/m2', dim: 'radiantExposure', factor: '1', prefixed: true },
+  { sym: 'J/cm2', dim: 'radiantExposure', factor: '1e4', prefixed: true },
+  { sym: 'J/mm2', dim: 'radiantExposure', factor: '1e6', prefixed: true },
+  { sym: 'rad', dim: 'angle', factor: '1', prefixed: true },
+  { sym: 'deg', dim: 'angle', factor: String(Math.PI / 180), prefixed: false },
+  { sym: 'Hz', dim: 'frequency', factor: '1', prefixed: true },
+  { sym: 'W', dim: 'power', factor: '1', prefixed: true },
+  { sym: 'J', dim: 'energy', factor: '1', prefixed: true },
+  { sym: 'm', dim: 'length', factor: '1', prefixed: true },
+  { sym: 's', dim: 'time', factor: '1', prefixed: true },
+  { sym: 'min', dim: 'time', factor: '60', prefixed: false },
+  { sym: 'h', dim: 'time', factor: '3600', prefixed: false },
+  { sym: '%', dim: 'ratio', factor: '0.01', prefixed: false },
+];
+
+function normaliseUnit(u: string): string {
+  return u
+    .replace(/\s+/g, '')
+    .replace(/²/g, '2')
+    .replace(/\^2/g, '2')
+    .replace(/·/g, '')
+    .replace(/μ/g, 'µ')
+    .replace(/^um$/, 'µm');
+}
+
+const UNIT_TABLE: ReadonlyMap<string, UnitDef> = (() => {
+  const m = new Map<string, UnitDef>();
+  for (const b of BASES) {
+    if (!b.prefixed) {
+      m.set(b.sym, { dim: b.dim, factor: b.factor });
+      continue;
+    }
+    for (const [p, pf] of Object.entries(PREFIX)) {
+      const sym = p + b.sym;
+      if (m.has(sym)) continue; // e.g. "min" is minutes, not milli-inches
+      m.set(sym, { dim: b.dim, factor: new Dec(pf).mul(b.factor).toString() });
+    }
+  }
+  // u for µ on every prefixed unit
+  for (const [sym, def] of [...m]) if (sym.startsWith('µ')) m.set('u' + sym.slice(1), def);
+  return m;
+})();
+
+export interface ParsedQuantity {
+  readonly value: DecT;
+  readonly dimension: Dimension;
+}
+
+const NUMBER = /^\s*([+-]?(?:\d+(?:[.,]\d*)?|[.,]\d+)(?:[eE][+-]?\d+)?)\s*(.*?)\s*$/;
+
+/**
+ * Parse "5 mW" into { value: 0.005, dimension: 'power' }. When `expect` is given, the unit must
+ * be of that dimension (a wavelength may be typed in nm or µm; a bare number takes `defaultUnit`).
+ */
+export function parseQuantity(
+  field: string,
+  text: string,
+  expect: Dimension,
+  defaultUnit?: string,
+): ParsedQuantity {
+  const m = NUMBER.exec(text);
+  if (!m || m[1] === undefined) throw new InputError('unparseable', field, text, `a number with a unit, e.g. ${example(expect)}`);
+  const num = new Dec(m[1].replace(',', '.'));
+  let unitText = m[2] ?? '';
+  if (unitText === '' && defaultUnit !== undefined) unitText = defaultUnit;
+  const unit = normaliseUnit(unitText);
+  const want = expect === 'wavelength' ? 'length' : expect;
+  const def = unit === '' && want === 'ratio' ? { dim: 'ratio' as const, factor: '1' } : UNIT_TABLE.get(unit);
+  if (!def) throw new InputError('unknown_unit', field, text, `a ${expect} unit, e.g. ${example(expect)}`);
+  if (def.dim !== want) throw new InputError('unknown_unit', field, text, `a ${expect} unit, e.g. ${example(expect)}`, `'${unitText}' is not a ${expect} unit`);
+  const value = num.mul(def.factor);
+  if (!value.isFinite()) throw new InputError('not_finite', field, text, 'a finite number');
+  return { value, dimension: expect };
+}
+
+function example(d: Dimension): string {
+  switch (d) {
+    case 'power':
+      return '5 mW';
+    case 'energy':
+      return '2 mJ';
+    case 'length':
+      return '3 mm';
+    case 'wavelength':
+      return '1064 nm';
+    case 'time':
+      return '10 ns';
+    case 'frequency':
+      return '10 kHz';
+    case 'angle':
+      return '1.5 mrad';
+    case 'irradiance':
+      return '25 W/m²';
+    case 'radiantExposure':
+      return '0.5 J/cm²';
+    case 'ratio':
+      return '0.15 or 15 %';
+  }
+}
+
+/** The officer's unit habit for irradiance and radiant exposure. */
+export type UnitHabit = 'SI' | 'ANSI';
+
+export interface FormattedQuantity {
+  readonly text: string;
+  readonly value: string;
+  readonly unit: string;
+}
+
+/**
+ * Format an irradiance (W/m²) or radiant exposure (J/m²) in the chosen habit, rounded to `sig`
+ * significant figures in the stated direction (limits: 'down'; exposures and distances: 'up').
+ */
+export function formatDensity(
+  valueSI: DecT | string,
+  kind: 'irradiance' | 'radiantExposure',
+  habit: UnitHabit,
+  direction: 'up' | 'down',
+  sig = 3,
+): FormattedQuantity {
+  const base = kind === 'irradiance' ? 'W' : 'J';
+  let v = dec(valueSI);
+  let unit = `${base}/m²`;
+  if (habit === 'ANSI') {
+    v = v.div(1e4);
+    unit = `${base}/cm²`;
+    // choose a readable prefix for ANSI figures (mW/cm², µJ/cm²)
+    const pre = pickPrefix(v);
+    v = v.div(pre.factor);
+    unit = `${pre.sym}${base}/cm²`;
+  }
+  const r = roundSig(v, sig, direction);
+  return { text: `${plain(r)} ${unit}`, value: plain(r), unit };
+}
+
+function pickPrefix(v: DecT): { sym: string; factor: string } {
+  const a = v.abs();
+  if (a.isZero() || a.gte(1)) return { sym: '', factor: '1' };
+  if (a.gte('1e-3')) return { sym: 'm', factor: '1e-3' };
+  if (a.gte('1e-6')) return { sym: 'µ', factor: '1e-6' };
+  return { sym: 'n', factor: '1e-9' };
+}
+
+/** Plain decimal text without exponent for moderate magnitudes, engineering exponent otherwise. */
+export function plain(v: DecT): string {
+  const a = v.abs();
+  if (!a.isZero() && (a.gte('1e7') || a.lt('1e-4'))) return v.toExponential().replace('e+', 'e');
+  return v.toString();
+}
+
+/** Format a value with an SI prefix, e.g. 0.005 W -> "5 mW". */
+export function formatSI(valueSI: DecT | string, unit: string, sig = 3, direction: 'up' | 'down' = 'up'): string {
+  const v = dec(valueSI);
+  const a = v.abs();
+  const steps: Array<[string, string]> = [
+    ['G', '1e9'],
+    ['M', '1e6'],
+    ['k', '1e3'],
+    ['', '1'],
+    ['m', '1e-3'],
+    ['µ', '1e-6'],
+    ['n', '1e-9'],
+    ['p', '1e-12'],
+    ['f', '1e-15'],
+  ];
+  if (a.isZero()) return `0 ${unit}`;
+  for (const [sym, f] of steps) {
+    if (a.gte(f)) return `${plain(roundSig(v.div(f), sig, direction))} ${sym}${unit}`;
+  }
+  return `${plain(roundSig(v, sig, direction))} ${unit}`;
+}
