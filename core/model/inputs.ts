@@ -40,6 +40,10 @@ export interface BeamGeometry {
   /** Which points the diameter and divergence refer to. */
   readonly definition: BeamDefinition;
   readonly profile?: 'gaussian' | 'tophat';
+  /** Elliptical beams: diameter along the second axis, metres (same definition); default round. */
+  readonly diameterY_m?: number;
+  /** Elliptical beams: full-angle divergence along the second axis, radians; default = divergence_rad. */
+  readonly divergenceY_rad?: number;
 }
 
 /** Relative tolerances (0.1 = ±10 %) on inputs, for the conservative bound. */
@@ -60,6 +64,8 @@ export interface ViewingConditions {
     readonly viewingAngle_rad?: number;
     /** Distance from the laser to the reflecting surface, metres (beam size on the target). */
     readonly targetDistance_m?: number;
+    /** Distance from the reflecting surface to a viewer to assess (e.g. a person at the table), metres. */
+    readonly viewerDistance_m?: number;
   };
   readonly specular?: { readonly reflectance: number; readonly pathToSurface_m?: number };
   readonly lens?: { readonly focalLength_m: number; readonly beamDiameterAtLens_m?: number };
