@@ -8,3 +8,4 @@ export * from './limits/rule-sets.js';
 export * from './limits/exposure-limit.js';
 export * from './limits/apertures.js';
 export * from './limits/durations.js';
+export * from './limits/pulse-rules.js';

@@ -1,0 +1,443 @@
+/**
+ * Exposure limits for pulsed and repetitively pulsed lasers: the three rules of the rule set
+ * (limit specification sections 3 step 7, 4.6 and 5.6), all evaluated and shown, the lowest
+ * per-pulse limit governing.
+ *
+ *  1. Single pulse: every pulse <= the limit for its own duration.
+ *  2. Average power: the train over the exposure duration T <= the limit for T; per pulse H_T / N_T.
+ *  3. Pulse train: every pulse <= single-pulse limit * C_P.
+ *     - icnirp2013: retinal thermal limits only (400-1400 nm, eye), scope confirmed by ILSC2019
+ *       (read); pulses < 0.25 s; N counted within min(T, T2). C_P = N^(-0.25) in conservative mode
+ *       (the remembered alpha-dependent form with caps is uncertain, spec 4.6); the key 'rule:CP'
+ *       in settings.verifiedRows switches to that piecewise form once someone has checked it.
+ *     - eu2006: C_P = N^(-0.25) for all THERMAL limits (retina, cornea, skin; not photochemical),
+ *       EU Directive 2006/25/EC Annex II Table 2.6 (read). N counted over T, at most T2 for
+ *       400-1400 nm and 10 s above (BGI 832 practice, read); pulses < 0.25 s (BGI 832, read).
+ *  Grouping: pulses closer together than T_i (icnirp2013) / T_min (eu2006) count as one pulse, and
+ *  their summed energy is compared with the limit for that time. The summed check is also rule 2
+ *  applied to the sub-group inside T_i ("any group of pulses", Table 2.6 rule 2), so it is made
+ *  whenever pulses arrive that close; counting them as ONE pulse for C_P additionally requires, in
+ *  eu2006, pulses longer than 1 ns (BGI 832, read).
+ */
+import { Dec, recordString } from '../numeric/decimal.js';
+import { InputError, requireInRange, requirePositive } from '../errors.js';
+import type { LimitSettings, RuleSetId, Tissue } from '../model/inputs.js';
+import { addStep, newTrace, type Trace } from '../trace/trace.js';
+import { condition, evaluate } from './expression.js';
+import { conservativeOn } from './factors.js';
+import { exposureLimit, type ExposureLimitResult, type LimitCandidate } from './exposure-limit.js';
+import { DEFAULT_RULE_SET, DURATION_RANGE_S, RULE_SET_NAME, ruleSetTable } from './rule-sets.js';
+import { groupsAmong, groupWithin, pulsesIn, type Grouping } from './pulse-counting.js';
+import { readCpRule } from './pulse-cp.js';
+
+export interface PulsedLimitQuery {
+  readonly ruleSet?: RuleSetId;
+  readonly tissue: Tissue;
+  readonly wavelength_nm: number;
+  readonly pulseDuration_s: number;
+  /** Pulses per second; missing = a single pulse. */
+  readonly repetitionRate_Hz?: number;
+  /** Exposure duration T over which the train is assessed (rule 2, and the window for N). */
+  readonly exposureDuration_s: number;
+  readonly sourceAngle_rad?: number;
+  readonly settings?: LimitSettings;
+}
+
+export type GoverningPulseRule = 'single-pulse' | 'average-power' | 'pulse-train';
+
+export interface PulsedLimitResult {
+  /**
+   * Rule 1: limit for one pulse of its own duration (J/m² per pulse). Where pulses are grouped
+   * inside T_i / T_min, the group is a pulse too: its per-pulse value is in `grouping`, and when it
+   * is the lowest the governing rule is still named 'single-pulse'.
+   */
+  readonly singlePulse: { readonly H_Jm2: string; readonly limit: ExposureLimitResult };
+  /** Rule 2: the train over T against the limit for T (null for a single pulse). */
+  readonly averagePower: {
+    /** Per pulse: H_T / N_T. */
+    readonly H_Jm2: string;
+    readonly E_Wm2: string;
+    readonly N: string;
+    readonly limit: ExposureLimitResult;
+  } | null;
+  /** Rule 3: single-pulse limit times C_P (null for a single pulse). */
+  readonly pulseTrain: {
+    /** Per pulse. */
+    readonly H_Jm2: string;
+    readonly CP: string;
+    readonly N: string;
+    readonly applies: boolean;
+    readonly why: string;
+  } | null;
+  /** Pulses inside T_i / T_min counted as one (null when none arrive that close). */
+  readonly grouping: {
+    readonly groupedPulses: string;
+    readonly groupDuration_s: string;
+    readonly why: string;
+    /** Per pulse: limit for the group duration divided by the pulses in the group. */
+    readonly perPulse_H_Jm2: string;
+    readonly limit: ExposureLimitResult;
+  } | null;
+  readonly governingRule: GoverningPulseRule;
+  /** Governing per-pulse limit (the lowest of the rules that apply), J/m², full precision. */
+  readonly perPulse_H_Jm2: string;
+  /** perPulse_H * repetition rate (single pulse: H / pulse duration), W/m². */
+  readonly average_E_Wm2: string;
+  readonly conservativeReplacements: string[];
+  readonly trace: Trace;
+}
+
+const QUARTER_SECOND = new Dec('0.25');
+const ONE_NS = new Dec('1e-9');
+
+/** Six significant figures for the trace; e-notation for very small or large values. */
+function fmt(d: Dec): string {
+  const r = d.toSignificantDigits(6);
+  const a = r.abs();
+  return !a.isZero() && (a.lt('1e-3') || a.gte('1e7')) ? r.toExponential().replace('e+', 'e') : r.toString();
+}
+
+function validatePulsed(q: PulsedLimitQuery): { tp: Dec; T: Dec; f: Dec | null } {
+  const range = `${DURATION_RANGE_S[0]} to ${DURATION_RANGE_S[1]} s`;
+  requirePositive('pulseDuration_s', q.pulseDuration_s, 's');
+  requireInRange('pulseDuration_s', q.pulseDuration_s, DURATION_RANGE_S[0], DURATION_RANGE_S[1], 's');
+  requirePositive('exposureDuration_s', q.exposureDuration_s, 's');
+  requireInRange('exposureDuration_s', q.exposureDuration_s, DURATION_RANGE_S[0], DURATION_RANGE_S[1], 's');
+  if (q.exposureDuration_s < q.pulseDuration_s) {
+    throw new InputError('out_of_range', 'exposureDuration_s', q.exposureDuration_s, `at least the pulse duration (${q.pulseDuration_s} s) and at most ${range}`);
+  }
+  let f: Dec | null = null;
+  if (q.repetitionRate_Hz !== undefined) {
+    requirePositive('repetitionRate_Hz', q.repetitionRate_Hz, 'Hz');
+    f = new Dec(q.repetitionRate_Hz);
+    // Pulses cannot overlap: duty cycle f * t_p <= 1.
+    if (f.mul(q.pulseDuration_s).gt(1)) {
+      throw new InputError('out_of_range', 'repetitionRate_Hz', q.repetitionRate_Hz, `at most 1 / pulseDuration_s = ${fmt(new Dec(1).div(q.pulseDuration_s))} Hz (pulses would overlap)`);
+    }
+  }
+  return { tp: new Dec(q.pulseDuration_s), T: new Dec(q.exposureDuration_s), f };
+}
+
+/** Is this candidate one that rule 3 reduces? */
+function reducedByCp(ruleSet: RuleSetId, c: LimitCandidate): boolean {
+  if (ruleSet === 'icnirp2013') return c.effect.startsWith('retinal thermal');
+  // EU Table 2.6: all limits protecting against thermal injury. Rows whose effect is not named
+  // purely photochemical are treated as thermal (the stricter reading, ours).
+  return c.effect.includes('thermal') || !c.effect.includes('photochemical');
+}
+
+function minH(cands: readonly LimitCandidate[]): { H: Dec; row: LimitCandidate } | null {
+  let best: { H: Dec; row: LimitCandidate } | null = null;
+  for (const c of cands) {
+    const h = new Dec(c.H_Jm2);
+    if (!best || h.lt(best.H)) best = { H: h, row: c };
+  }
+  return best;
+}
+
+interface GroupingTime {
+  readonly T_g: Dec;
+  readonly name: 'T_i' | 'T_min';
+  readonly source: string;
+  readonly confidence: string;
+}
+
+function groupingTime(ruleSet: RuleSetId, single: ExposureLimitResult, lambda: number): GroupingTime | null {
+  const table = ruleSetTable(ruleSet);
+  const name = ruleSet === 'icnirp2013' ? 'T_i' : 'T_min';
+  const def = table.factors[name];
+  const v = single.factors[name];
+  if (v !== undefined) return { T_g: new Dec(v), name, source: def?.source ?? '', confidence: def?.confidence ?? '' };
+  if (ruleSet === 'eu2006' && lambda < 315) {
+    // Table 2.2 note d sums UV pulses inside T_min, but Table 2.6 lists no T_min below 315 nm:
+    // use 1 ns, the 315-400 nm value, until clarified (limit specification 5.6, ours).
+    return { T_g: ONE_NS, name, source: 'limit specification 5.6: gap in the Directive, 315-400 nm value used', confidence: 'ours' };
+  }
+  return null; // icnirp2013 gives no T_i below 400 nm: UV doses simply add (rule 2)
+}
+
+/** Window in which N is counted for rule 3. */
+function countingWindow(ruleSet: RuleSetId, lambda: number, T: Dec, T2: Dec | undefined): { window: Dec; why: string } {
+  if (lambda >= 400 && lambda < 1400 && T2) {
+    return T.gt(T2)
+      ? { window: T2, why: `N counted within T2 = ${fmt(T2)} s (shorter than T)` }
+      : { window: T, why: `N counted within T = ${fmt(T)} s (not longer than T2 = ${fmt(T2)} s)` };
+  }
+  if (lambda >= 1400) {
+    const ten = new Dec(10);
+    return T.gt(ten) ? { window: ten, why: 'N counted within 10 s (above 1400 nm)' } : { window: T, why: `N counted within T = ${fmt(T)} s` };
+  }
+  return {
+    window: T,
+    why: ruleSet === 'eu2006' ? `N counted over the whole exposure T = ${fmt(T)} s (no cap below 400 nm; the stricter reading, ours)` : `N counted within T = ${fmt(T)} s`,
+  };
+}
+
+/**
+ * The exposure limit for a pulse or a train of pulses: all three rules, the governing one named.
+ * Throws InputError naming the field for bad input.
+ */
+export function pulsedExposureLimit(q: PulsedLimitQuery): PulsedLimitResult {
+  const { tp, T, f } = validatePulsed(q);
+  const ruleSet = q.ruleSet ?? DEFAULT_RULE_SET;
+  const base = {
+    ruleSet,
+    tissue: q.tissue,
+    wavelength_nm: q.wavelength_nm,
+    ...(q.sourceAngle_rad !== undefined ? { sourceAngle_rad: q.sourceAngle_rad } : {}),
+    ...(q.settings !== undefined ? { settings: q.settings } : {}),
+  };
+  const single = exposureLimit({ ...base, duration_s: q.pulseDuration_s });
+  const H1 = new Dec(single.H_Jm2);
+  const trace = newTrace(
+    `Pulsed exposure limit, ${q.tissue}, ${q.wavelength_nm} nm, pulses of ${fmt(tp)} s` +
+      (f ? ` at ${fmt(f)} Hz over ${fmt(T)} s` : ' (single pulse)') +
+      ` (${RULE_SET_NAME[ruleSet]})`,
+  );
+  trace.children.push(single.trace);
+  addStep(trace, {
+    kind: 'row',
+    label: 'Rule 1: single pulse',
+    detail: `limit for one pulse of ${fmt(tp)} s, governing row ${single.governing.rowId} (${single.governing.effect})`,
+    value: fmt(H1),
+    unit: 'J/m² per pulse',
+    source: ruleSet === 'eu2006' ? 'EU 2006/25/EC Annex II Table 2.6 rule 1 (read)' : 'ICNIRP2013; IEC2014 4.3 f) rule 1 (from memory)',
+    confidence: ruleSet === 'eu2006' ? 'read' : 'from memory',
+  });
+  const replacements = new Set<string>(single.conservativeReplacements);
+
+  if (f === null) {
+    addStep(trace, { kind: 'note', label: 'Single pulse', detail: 'no repetition rate given: rules 2 and 3 do not arise' });
+    addStep(trace, { kind: 'result', label: 'Governing', detail: 'single-pulse limit', value: fmt(H1), unit: 'J/m²' });
+    return finish({ single, H1, avg: null, train: null, grouping: null, governing: 'single-pulse', perPulse: H1, averageE: H1.div(tp), replacements, trace });
+  }
+
+  // Rule 2: the whole train over T against the limit for T.
+  const NT = pulsesIn(f, T);
+  const avg = exposureLimit({ ...base, duration_s: q.exposureDuration_s });
+  avg.conservativeReplacements.forEach((r) => replacements.add(r));
+  trace.children.push(avg.trace);
+  const H2 = new Dec(avg.H_Jm2).div(NT);
+  addStep(trace, {
+    kind: 'row',
+    label: 'Rule 2: average power',
+    detail: `N_T = ceil(f * T) = ceil(${fmt(f)} * ${fmt(T)}) = ${NT.toString()} pulses; per pulse H_T / N_T = ${fmt(new Dec(avg.H_Jm2))} / ${NT.toString()} (row ${avg.governing.rowId}; mean irradiance limit ${fmt(new Dec(avg.E_Wm2))} W/m²)`,
+    value: fmt(H2),
+    unit: 'J/m² per pulse',
+    source: ruleSet === 'eu2006' ? 'EU 2006/25/EC Annex II Table 2.6 rule 2 (read)' : 'ICNIRP2013; IEC2014 4.3 f) rule 2 (from memory)',
+    confidence: ruleSet === 'eu2006' ? 'read' : 'from memory',
+  });
+
+  // Grouping inside T_i / T_min: the summed energy against the limit for the group duration.
+  const gt = groupingTime(ruleSet, single, q.wavelength_nm);
+  const g: Grouping | null = gt ? groupWithin(f, gt.T_g, T, NT) : null;
+  let grouping: PulsedLimitResult['grouping'] = null;
+  let groupLimit: ExposureLimitResult | null = null;
+  let rule1 = H1;
+  if (g && gt) {
+    groupLimit = exposureLimit({ ...base, duration_s: g.groupDuration_s.toNumber() });
+    groupLimit.conservativeReplacements.forEach((r) => replacements.add(r));
+    trace.children.push(groupLimit.trace);
+    const perPulse = new Dec(groupLimit.H_Jm2).div(g.groupedPulses);
+    const why =
+      `pulse period ${fmt(new Dec(1).div(f))} s is shorter than ${gt.name} = ${fmt(gt.T_g)} s: ` +
+      `${g.groupedPulses.toString()} pulses inside ${fmt(g.groupDuration_s)} s are one pulse; their summed energy is compared with the limit for ${fmt(g.groupDuration_s)} s`;
+    grouping = { groupedPulses: g.groupedPulses.toString(), groupDuration_s: recordString(g.groupDuration_s), why, perPulse_H_Jm2: recordString(perPulse), limit: groupLimit };
+    addStep(trace, { kind: 'row', label: `Grouping inside ${gt.name}`, detail: `${why}: ${fmt(new Dec(groupLimit.H_Jm2))} / ${g.groupedPulses.toString()}`, value: fmt(perPulse), unit: 'J/m² per pulse', source: gt.source, confidence: gt.confidence });
+    // The merged pulse is a pulse for rule 1: the lower of the two per-pulse values counts.
+    if (perPulse.lt(rule1)) rule1 = perPulse;
+  } else if (gt) {
+    addStep(trace, { kind: 'note', label: `Grouping inside ${gt.name}`, detail: `pulse period ${fmt(new Dec(1).div(f))} s is not shorter than ${gt.name} = ${fmt(gt.T_g)} s: every pulse counts on its own`, source: gt.source, confidence: gt.confidence });
+  }
+
+  // Rule 3: C_P on the thermal (icnirp2013: retinal thermal) part of the single-pulse limit.
+  const train = pulseTrainRule({ q, ruleSet, single, groupLimit, g, tp, T, f, NT, replacements });
+  addStep(trace, {
+    kind: train.cpReplaced ? 'conservative' : 'row',
+    label: 'Rule 3: pulse train',
+    detail: train.applies ? `${train.detail}` : `does not apply: ${train.why}`,
+    value: fmt(train.H),
+    unit: 'J/m² per pulse',
+    source: train.source,
+    confidence: train.confidence,
+  });
+
+  // The lowest per-pulse limit governs; on a tie the earlier rule is named.
+  let governing: GoverningPulseRule = 'single-pulse';
+  let perPulse = rule1;
+  if (H2.lt(perPulse)) {
+    governing = 'average-power';
+    perPulse = H2;
+  }
+  if (train.applies && train.H.lt(perPulse)) {
+    governing = 'pulse-train';
+    perPulse = train.H;
+  }
+  addStep(trace, {
+    kind: 'result',
+    label: 'Governing',
+    detail: `lowest per-pulse limit: ${governing} (rule 1 ${fmt(rule1)}, rule 2 ${fmt(H2)}, rule 3 ${train.applies ? fmt(train.H) : 'n/a'} J/m²)`,
+    value: fmt(perPulse),
+    unit: 'J/m² per pulse',
+  });
+  addStep(trace, { kind: 'result', label: 'Mean irradiance limit', detail: `per-pulse limit * f = ${fmt(perPulse)} * ${fmt(f)}`, value: fmt(perPulse.mul(f)), unit: 'W/m²' });
+
+  return finish({
+    single,
+    H1,
+    avg: { H_Jm2: recordString(H2), E_Wm2: avg.E_Wm2, N: NT.toString(), limit: avg },
+    train: { H_Jm2: recordString(train.H), CP: recordString(train.CP), N: train.N.toString(), applies: train.applies, why: train.why },
+    grouping,
+    governing,
+    perPulse,
+    averageE: perPulse.mul(f),
+    replacements,
+    trace,
+  });
+}
+
+interface TrainInput {
+  readonly q: PulsedLimitQuery;
+  readonly ruleSet: RuleSetId;
+  readonly single: ExposureLimitResult;
+  readonly groupLimit: ExposureLimitResult | null;
+  readonly g: Grouping | null;
+  readonly tp: Dec;
+  readonly T: Dec;
+  readonly f: Dec;
+  readonly NT: Dec;
+  readonly replacements: Set<string>;
+}
+
+interface TrainOutcome {
+  readonly H: Dec;
+  readonly CP: Dec;
+  readonly N: Dec;
+  readonly applies: boolean;
+  readonly why: string;
+  readonly detail: string;
+  readonly source: string;
+  readonly confidence: string;
+  readonly cpReplaced: boolean;
+}
+
+function pulseTrainRule(x: TrainInput): TrainOutcome {
+  const { q, ruleSet, single, groupLimit, g, tp, T, f, NT } = x;
+  const cp = readCpRule(ruleSet);
+  const notApplying = (why: string): TrainOutcome => ({
+    H: new Dec(single.H_Jm2),
+    CP: new Dec(1),
+    N: NT,
+    applies: false,
+    why,
+    detail: why,
+    source: cp.source,
+    confidence: cp.confidence,
+    cpReplaced: false,
+  });
+  const thermal = minH(single.candidates.filter((c) => reducedByCp(ruleSet, c)));
+  if (!thermal) {
+    return notApplying(
+      ruleSet === 'icnirp2013'
+        ? 'C_P applies only to retinal thermal limits (400-1400 nm, eye); ILSC2019 (read)'
+        : 'C_P applies only to limits protecting against thermal injury (EU Table 2.6 rule 3); the limits here are photochemical',
+    );
+  }
+  // Counting as one pulse (for N) needs, in eu2006, pulses longer than 1 ns (BGI 832, read).
+  const countAsOne = g !== null && (ruleSet === 'icnirp2013' || tp.gt(ONE_NS));
+  const effectiveDuration = countAsOne && g ? g.groupDuration_s : tp;
+  if (effectiveDuration.gte(QUARTER_SECOND)) {
+    return notApplying(`C_P applies only to pulses shorter than 0.25 s (pulse${countAsOne ? ' group' : ''} lasts ${fmt(effectiveDuration)} s)`);
+  }
+  const T2 = single.factors['T2'];
+  const win = countingWindow(ruleSet, q.wavelength_nm, T, T2 !== undefined ? new Dec(T2) : undefined);
+  const inWindow = Dec.min(NT, pulsesIn(f, win.window));
+  const N = countAsOne && g ? groupsAmong(inWindow, g.groupedPulses) : inWindow;
+  const alpha = new Dec(q.sourceAngle_rad ?? 0).mul(1000);
+  const amax = single.factors['alpha_max'];
+  const vars = { N, alpha, alpha_max: amax !== undefined ? new Dec(amax) : undefined };
+  let CP = evaluate(cp.expr, vars);
+  let cpExpr = cp.expr;
+  let cpReplaced = false;
+  if (cp.pieces) {
+    const piece = cp.pieces.find((p) => condition(p.when, vars));
+    const remembered = piece ? evaluate(piece.expr, vars) : undefined;
+    const useAlt = cp.conservative_alt !== undefined && conservativeOn(x.q.settings, 'rule:CP');
+    if (remembered && !useAlt) {
+      CP = remembered;
+      cpExpr = `${piece?.expr ?? ''} (piecewise, verified: ${piece?.when ?? ''})`;
+    } else if (cp.conservative_alt !== undefined) {
+      CP = evaluate(cp.conservative_alt, vars);
+      cpExpr = cp.conservative_alt;
+      if (remembered && CP.lt(remembered)) {
+        cpReplaced = true;
+        x.replacements.add('rule:CP');
+        cpExpr += ` (unverified remembered piecewise value ${fmt(remembered)} replaced by the stricter value, conservative mode)`;
+      }
+    }
+  }
+  // Base: the thermal single-pulse limit; with grouping also the group's thermal limit per pulse
+  // (the lower of the two, ours: never less strict than either reading).
+  let baseH = thermal.H;
+  let baseWhy = `thermal single-pulse limit ${fmt(thermal.H)} J/m² (row ${thermal.row.rowId})`;
+  if (countAsOne && g && groupLimit) {
+    const gThermal = minH(groupLimit.candidates.filter((c) => reducedByCp(ruleSet, c)));
+    if (gThermal) {
+      const perPulse = gThermal.H.div(g.groupedPulses);
+      if (perPulse.lt(baseH)) {
+        baseH = perPulse;
+        baseWhy = `thermal limit of the pulse group ${fmt(gThermal.H)} J/m² (row ${gThermal.row.rowId}) / ${g.groupedPulses.toString()} pulses`;
+      }
+    }
+  }
+  const H = baseH.mul(CP);
+  const why =
+    `${win.why}` +
+    (countAsOne && g ? `; groups of ${g.groupedPulses.toString()} pulses counted as one` : '') +
+    `; N = ${N.toString()}, C_P = ${cpExpr} = ${fmt(CP)}`;
+  return {
+    H,
+    CP,
+    N,
+    applies: true,
+    why,
+    detail: `${baseWhy} * C_P; ${why}`,
+    source: cp.source,
+    confidence: cpReplaced ? 'from memory, uncertain' : cp.confidence,
+    cpReplaced,
+  };
+}
+
+interface FinishInput {
+  readonly single: ExposureLimitResult;
+  readonly H1: Dec;
+  readonly avg: PulsedLimitResult['averagePower'];
+  readonly train: PulsedLimitResult['pulseTrain'];
+  readonly grouping: PulsedLimitResult['grouping'];
+  readonly governing: GoverningPulseRule;
+  readonly perPulse: Dec;
+  readonly averageE: Dec;
+  readonly replacements: Set<string>;
+  readonly trace: Trace;
+}
+
+function finish(x: FinishInput): PulsedLimitResult {
+  if (!x.perPulse.isFinite() || x.perPulse.lte(0) || !x.averageE.isFinite() || x.averageE.lte(0)) {
+    throw new Error('internal: pulsed limit not positive');
+  }
+  const conservativeReplacements = [...x.replacements];
+  if (conservativeReplacements.length) {
+    addStep(x.trace, { kind: 'warning', label: 'Conservative mode', detail: `unverified entries replaced by the stricter value: ${conservativeReplacements.join(', ')}` });
+  }
+  return {
+    singlePulse: { H_Jm2: recordString(x.H1), limit: x.single },
+    averagePower: x.avg,
+    pulseTrain: x.train,
+    grouping: x.grouping,
+    governingRule: x.governing,
+    perPulse_H_Jm2: recordString(x.perPulse),
+    average_E_Wm2: recordString(x.averageE),
+    conservativeReplacements,
+    trace: x.trace,
+  };
+}
