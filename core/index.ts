@@ -9,3 +9,4 @@ export * from './limits/exposure-limit.js';
 export * from './limits/apertures.js';
 export * from './limits/durations.js';
 export * from './limits/pulse-rules.js';
+export * from './limits/additive.js';
