@@ -1,0 +1,195 @@
+/**
+ * The door hazard notice: a one-page poster for the entrance of the laser controlled area, laid out
+ * in the ANSI Z535.2 manner adopted by ANSI Z136.1-2014 (domain reference 5.1): a signal-word panel
+ * across the top, the laser symbol in a left panel, the message in a right panel. The layout,
+ * proportions and wording are our own.
+ *
+ * Legibility at 3 m: the signal word, the hazard line, the class and the eyewear requirement are
+ * set with capital heights of 9 mm or more (Roboto capitals are 0.71 em: 36 pt -> 9 mm), about
+ * 1 mm of capital height per 0.3 m of reading distance (common practice, from memory). Details
+ * (lasers, contact, fingerprint) are read at the door and set from 11 pt.
+ */
+import type { Content, TableCell, TDocumentDefinitions } from 'pdfmake/interfaces';
+import { dec } from '../../../../core/numeric/decimal.js';
+import type { DocumentInput, RenderOptions } from '../document-input.js';
+import * as fmt from '../format.js';
+import { baseDocument, cautionBlock, COLOR, contentWidth, DRAFT_HEADER, fingerprintBlock, ruleSetLine } from '../page.js';
+import { roomView, type RoomView } from '../room-view.js';
+import { precautionFor, signalWordFor, type SignalChoice } from '../signal-word.js';
+import { laserWarningSymbolSvg, safetyAlertSymbolSvg } from '../symbols/laser-warning.js';
+
+const SIDE = 30;
+
+/** Point sizes of the parts read from 3 m (see the file comment). */
+export const NOTICE_SIZES = { signalWord: 80, hazardLine: 36, classLine: 40, eyewearLine: 36 } as const;
+
+export function noticeSignal(doc: DocumentInput, view: RoomView, override?: 'DANGER'): SignalChoice {
+  const class3RAbove = view.beams.some((b) => (b.classAsLabelled === '3R' || b.result.classEstimate.estimate === '3R') && !dec(b.result.nohd_m).isZero());
+  return signalWordFor(view.highestClass, class3RAbove, override);
+}
+
+/** "LASER RADIATION" with INVISIBLE / VISIBLE AND INVISIBLE prefixes (domain reference 5.3). */
+export function hazardLine(view: RoomView): string {
+  if (view.anyInvisible && view.anyVisible) return 'VISIBLE AND INVISIBLE LASER RADIATION';
+  if (view.anyInvisible) return 'INVISIBLE LASER RADIATION';
+  return 'LASER RADIATION';
+}
+
+function signalPanel(choice: SignalChoice, width: number): Content {
+  const s = choice.style;
+  const word: Content = { text: s.word, fontSize: NOTICE_SIZES.signalWord, bold: true, color: s.text, characterSpacing: 2 };
+  return {
+    table: {
+      widths: [width - 2],
+      body: [
+        [
+          {
+            fillColor: s.panel,
+            margin: [0, 6, 0, 2],
+            columns: s.alertSymbol
+              ? [{ width: '*', text: '' }, { svg: safetyAlertSymbolSvg(82, s.text, s.panel), width: 82, margin: [0, 8, 14, 0] }, { ...word, width: 'auto' }, { width: '*', text: '' }]
+              : [{ ...word, alignment: 'center', width: '*' }],
+          },
+        ],
+      ],
+    },
+    layout: { hLineWidth: () => 2, vLineWidth: () => 2, hLineColor: () => '#000000', vLineColor: () => '#000000', paddingLeft: () => 0, paddingRight: () => 0 },
+  };
+}
+
+function entryInstructions(doc: DocumentInput, view: RoomView): string[] {
+  const needEyewear = doc.results.requiredEyewear.some((r) => dec(r.odRequired).gt(0));
+  const items = ['Authorised personnel only.'];
+  if (needEyewear) items.push('Put on the laser eyewear listed here BEFORE entering; check it matches the wavelengths in use.');
+  items.push(`${precautionFor(view.highestClass)}.`);
+  if (view.anyInvisible) items.push('Part of the radiation is invisible: a beam can be present without being seen.');
+  // Administrative controls the officer accepted are the room's own entry rules.
+  for (const c of doc.content.controls) {
+    if (c.category === 'administrative' && c.decision === 'accepted' && items.length < 7) items.push(c.measure.endsWith('.') ? c.measure : `${c.measure}.`);
+  }
+  return items;
+}
+
+function laserRows(view: RoomView): TableCell[][] {
+  return view.lasers.map((l) => {
+    const beams = l.laser.beams;
+    const wl = [...new Set(beams.map((b) => fmt.wavelength(b.wavelength_nm)))].join(', ');
+    const ems = beams.map((b) => fmt.emission(b.emission));
+    // The maximum output of each mode, and the pulse duration where pulsed (Z136.1 sign content).
+    const outputs = [...new Set(ems.map((e) => e.output))].join(' / ');
+    const pulses = [...new Set(ems.map((e) => e.pulse))].join(' / ');
+    return [
+      { text: l.type, bold: true },
+      wl,
+      outputs,
+      pulses,
+      { text: l.classAsLabelled === null ? 'not labelled' : `Class ${l.classAsLabelled}`, bold: true },
+    ];
+  });
+}
+
+function eyewearRows(doc: DocumentInput): TableCell[][] {
+  return doc.results.requiredEyewear
+    .filter((r) => dec(r.odRequired).gt(0) || r.scaleNumbers.some((s) => s.applies && s.scale > 0))
+    .map((r) => [{ text: fmt.wavelength(r.wavelength_nm), bold: true }, { text: fmt.od(r.odRequired), bold: true }, fmt.scaleNumbers(r.scaleNumbers)]);
+}
+
+const CELL_LAYOUT = {
+  hLineWidth: () => 0.8,
+  vLineWidth: () => 0.8,
+  hLineColor: () => '#333333',
+  vLineColor: () => '#333333',
+  paddingTop: () => 2,
+  paddingBottom: () => 2,
+  fillColor: (row: number) => (row === 0 ? '#E6E6E6' : null),
+};
+
+export function doorNoticeDefinition(doc: DocumentInput, opts: RenderOptions): TDocumentDefinitions {
+  const view = roomView(doc);
+  const width = contentWidth(opts.paper, SIDE);
+  const choice = noticeSignal(doc, view, opts.signalWord);
+  const eyewear = eyewearRows(doc);
+  const many = view.lasers.length > 5;
+  const detail = many ? 9.5 : 11.5;
+  const officerContact = [doc.officer.phone, doc.officer.email].filter((x) => x.trim() !== '').join(' · ');
+  const suitable = doc.results.eyewearCoveringAll;
+
+  const content: Content[] = [
+    signalPanel(choice, width),
+    {
+      margin: [0, 10, 0, 0],
+      columns: [
+        { width: 170, svg: laserWarningSymbolSvg(170), margin: [0, 4, 0, 0] },
+        {
+          width: '*',
+          margin: [14, 0, 0, 0],
+          stack: [
+            { text: hazardLine(view), fontSize: view.anyInvisible && view.anyVisible ? 26 : NOTICE_SIZES.hazardLine, bold: true, lineHeight: 1 },
+            { text: `CLASS ${view.highestClass} LASER AREA`, fontSize: NOTICE_SIZES.classLine, bold: true, margin: [0, 4, 0, 4], lineHeight: 1 },
+            { text: precautionFor(view.highestClass).toUpperCase(), fontSize: 17, bold: true, lineHeight: 1.05 },
+          ],
+        },
+      ],
+    },
+    eyewear.length > 0
+      ? {
+          margin: [0, 10, 0, 0],
+          stack: [
+            { text: 'LASER EYEWEAR REQUIRED', fontSize: NOTICE_SIZES.eyewearLine, bold: true, color: '#000000', background: '#FFD100' },
+            {
+              margin: [0, 4, 0, 0],
+              table: { headerRows: 1, widths: [110, 120, '*'], body: [[{ text: 'Wavelength', bold: true }, { text: 'Optical density', bold: true }, { text: 'Scale numbers (EN 207/208)', bold: true }], ...eyewear] },
+              layout: CELL_LAYOUT,
+              fontSize: 15,
+            },
+            {
+              text: suitable.length > 0 ? [{ text: 'Eyewear here that covers every beam: ', bold: true }, suitable.join(', ')] : [{ text: 'No single eyewear covers every beam: see the eyewear sheet by the rack.', bold: true }],
+              fontSize: 12,
+              margin: [0, 3, 0, 0],
+            },
+          ],
+        }
+      : { text: 'No protective eyewear is required for the beams assessed.', fontSize: 16, bold: true, margin: [0, 10, 0, 0] },
+    { text: 'Lasers in this room', bold: true, fontSize: 13, margin: [0, 10, 0, 2] },
+    {
+      table: {
+        headerRows: 1,
+        widths: ['*', 'auto', 'auto', 'auto', 'auto'],
+        body: [[{ text: 'Laser type', bold: true }, { text: 'Wavelength', bold: true }, { text: 'Maximum output', bold: true }, { text: 'Pulse', bold: true }, { text: 'Class', bold: true }], ...laserRows(view)],
+      },
+      layout: CELL_LAYOUT,
+      fontSize: detail,
+    },
+    { text: 'Before you enter', bold: true, fontSize: 13, margin: [0, 10, 0, 2] },
+    { ul: entryInstructions(doc, view), fontSize: 12.5, lineHeight: 1.1 },
+    {
+      margin: [0, 10, 0, 0],
+      columns: [
+        {
+          width: '*',
+          stack: [
+            { text: [{ text: 'Laser safety officer: ', bold: true }, doc.officer.name], fontSize: 13 },
+            { text: officerContact, fontSize: 13, bold: true },
+            { text: [{ text: 'Responsible person: ', bold: true }, `${doc.room.responsiblePerson}${doc.room.contact ? ' · ' + doc.room.contact : ''}`], fontSize: 11, margin: [0, 3, 0, 0] },
+            { text: [{ text: 'Room: ', bold: true }, `${doc.room.code}${doc.room.name ? ' — ' + doc.room.name : ''}, ${doc.site.name}`], fontSize: 11 },
+            {
+              text: [{ text: 'Valid until: ', bold: true }, { text: fmt.calendarDate(doc.content.reviewBy), bold: true }],
+              fontSize: 14,
+              margin: [0, 3, 0, 0],
+            },
+            ...(doc.signature === null ? [{ text: DRAFT_HEADER + ' — do not post', bold: true, color: COLOR.draft, fontSize: 16 } as Content] : []),
+          ],
+        },
+        { width: 210, stack: [fingerprintBlock(doc, 64, 9)] },
+      ],
+    },
+    { text: '', margin: [0, 8, 0, 0] },
+    cautionBlock(10.5),
+    { ...ruleSetLine(doc, 8.5), margin: [0, 3, 0, 0] },
+  ];
+  return {
+    ...baseDocument(doc, opts.paper, 'Laser hazard notice'),
+    pageMargins: [SIDE, 28, SIDE, 24],
+    content,
+  };
+}

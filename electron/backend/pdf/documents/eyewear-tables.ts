@@ -1,0 +1,82 @@
+/**
+ * Eyewear tables shared by the report and the eyewear sheet: what the room needs per wavelength,
+ * and which eyewear on the shelf covers which beam (from the core's coverage verdicts; nothing is
+ * re-judged here).
+ */
+import type { Content, TableCell } from 'pdfmake/interfaces';
+import type { EyewearSpec } from '../../../../core/model/inputs.js';
+import type { EyewearVerdict } from '../../../../core/model/results.js';
+import { Dec, dec } from '../../../../core/numeric/decimal.js';
+import { plain } from '../../../../core/units/quantities.js';
+import type { DocumentInput } from '../document-input.js';
+import { gridTable, verdictCell } from '../blocks.js';
+import * as fmt from '../format.js';
+import { COLOR } from '../page.js';
+import type { RoomView } from '../room-view.js';
+
+export function requiredEyewearTable(doc: DocumentInput, fontSize: number): Content {
+  const rows: TableCell[][] = doc.results.requiredEyewear.map((r) => [
+    { text: fmt.wavelength(r.wavelength_nm), bold: true },
+    { text: fmt.od(r.odRequired), bold: true },
+    fmt.scaleNumbers(r.scaleNumbers),
+  ]);
+  return gridTable(['Wavelength', 'Required optical density', 'EN 207 / EN 208 scale numbers'], rows, [90, 130, '*'], fontSize);
+}
+
+/** One line per band the eyewear is marked for, e.g. "OD 7 at 740–1100 nm; D LB5 at 740–1100 nm". */
+export function eyewearMarkings(e: EyewearSpec): string {
+  const parts: string[] = [];
+  for (const b of e.od ?? []) parts.push(`OD ${b.od} at ${band(b.from_nm, b.to_nm)}`);
+  for (const b of e.en207 ?? []) parts.push(`${b.modes} LB${b.scale} at ${band(b.from_nm, b.to_nm)}`);
+  for (const b of e.en208 ?? []) parts.push(`RB${b.scale} at ${band(b.from_nm, b.to_nm)}`);
+  if (e.visibleTransmission !== undefined) parts.push(`visible light transmission ${fmt.percent(e.visibleTransmission)}`);
+  return parts.join('; ');
+}
+
+function band(from: number, to: number): string {
+  return from === to ? fmt.wavelength(from) : `${plain(dec(from))}–${fmt.wavelength(to)}`;
+}
+
+export function verdictOf(doc: DocumentInput, beamId: string, eyewearId: string): EyewearVerdict | null {
+  return doc.results.coverage.find((v) => v.beamId === beamId && v.eyewearId === eyewearId) ?? null;
+}
+
+function marginText(v: EyewearVerdict): string {
+  if (v.odMargin === null) return 'no OD given';
+  const m = dec(v.odMargin);
+  // The margin is provided minus required; show it rounded towards minus infinity (the safe side).
+  const shown = m.toDecimalPlaces(1, Dec.ROUND_FLOOR);
+  return `OD margin ${m.gte(0) ? '+' : ''}${plain(shown)}`;
+}
+
+/** Rows: eyewear; columns: beams. YES (green) / NO (red) with the OD margin. */
+export function coverageMatrix(doc: DocumentInput, view: RoomView, fontSize: number): Content {
+  const eyewear = doc.content.input.eyewear ?? [];
+  if (eyewear.length === 0) return { text: 'No eyewear is listed for this room.', bold: true, color: COLOR.bad };
+  const beamCols = view.beams.map((b, i) => `${i + 1}. ${fmt.wavelength(b.result.wavelength_nm)}`);
+  const rows: TableCell[][] = eyewear.map((e) => [
+    { text: e.label, bold: true },
+    ...view.beams.map((b) => {
+      const v = verdictOf(doc, b.result.beamId, e.id);
+      return v === null ? ({ text: 'not checked', color: COLOR.muted } as TableCell) : verdictCell(v.adequate, marginText(v), fontSize);
+    }),
+  ]);
+  const first = 80;
+  return gridTable(['Eyewear', ...beamCols], rows, [first, ...view.beams.map(() => '*')], fontSize);
+}
+
+/** Per eyewear: the beams it covers and the beams it must not be used for, with the reason. */
+export function eyewearUseLists(doc: DocumentInput, view: RoomView): Array<{ eyewear: EyewearSpec; covers: string[]; mustNot: string[] }> {
+  return (doc.content.input.eyewear ?? []).map((e) => {
+    const covers: string[] = [];
+    const mustNot: string[] = [];
+    view.beams.forEach((b, i) => {
+      const v = verdictOf(doc, b.result.beamId, e.id);
+      const name = `${i + 1}. ${b.result.label} (${fmt.wavelength(b.result.wavelength_nm)})`;
+      if (v === null) mustNot.push(`${name}: not checked`);
+      else if (v.adequate) covers.push(name);
+      else mustNot.push(`${name}: ${v.reason}`);
+    });
+    return { eyewear: e, covers, mustNot };
+  });
+}

@@ -1,0 +1,62 @@
+/** Report: per beam, the two plots and the core's derivation trace. */
+import type { Content } from 'pdfmake/interfaces';
+import type { UnitHabit } from '../../../../core/units/quantities.js';
+import type { DocumentInput } from '../document-input.js';
+import { heading, paragraph } from '../blocks.js';
+import * as fmt from '../format.js';
+import { COLOR } from '../page.js';
+import type { RoomView } from '../room-view.js';
+import { limitVsDurationSvg, type CurveCache } from '../plots/limit-vs-duration.js';
+import { exposureVsDistanceSvg } from '../plots/exposure-vs-distance.js';
+import { traceContent } from './trace-content.js';
+
+export function plotsSection(doc: DocumentInput, view: RoomView, units: UnitHabit, width: number): Content[] {
+  const cache: CurveCache = new Map();
+  const plotW = (width - 12) / 2;
+  const out: Content[] = [
+    heading('Plots'),
+    paragraph(
+      'Left: the eye exposure limit against exposure duration, with the duration assessed marked (and, for pulsed beams, the per-pulse limit that governs). ' +
+        'Right: the exposure the beam delivers at the eye against distance, with the limit and the NOHD.',
+      { fontSize: 8, color: COLOR.muted },
+    ),
+  ];
+  view.beams.forEach((b, i) => {
+    const settings = doc.content.input.settings;
+    const left = limitVsDurationSvg(b.result, b.input, b.input?.settings ?? settings, units, plotW, cache);
+    const right = exposureVsDistanceSvg(b.result, b.input, units, plotW);
+    out.push({
+      unbreakable: true,
+      stack: [
+        { text: `${i + 1}. ${b.result.label} — ${fmt.wavelength(b.result.wavelength_nm)}`, bold: true, fontSize: 9.5, margin: [0, 6, 0, 2] },
+        {
+          columns: [
+            { svg: left, width: plotW },
+            right === null
+              ? { width: plotW, text: 'Exposure against distance: not drawn (no beam input for this result).', fontSize: 8, color: COLOR.muted }
+              : { svg: right, width: plotW },
+          ],
+          columnGap: 12,
+        },
+      ],
+    });
+  });
+  return out;
+}
+
+export function derivationsSection(doc: DocumentInput, view: RoomView): Content[] {
+  const out: Content[] = [
+    heading('Appendix — derivations'),
+    paragraph(
+      'Every figure above, step by step as the calculation core made it: inputs, table rows with their source and confidence mark, formulas with the numbers substituted, conservative replacements and rounding.',
+      { fontSize: 8, color: COLOR.muted },
+    ),
+  ];
+  view.beams.forEach((b, i) => {
+    out.push(heading(`${i + 1}. ${b.result.label}`, 2));
+    out.push({ stack: traceContent(b.result.trace), fontSize: 7.4 });
+  });
+  out.push(heading('Room', 2));
+  out.push({ stack: traceContent(doc.results.trace), fontSize: 7.4 });
+  return out;
+}

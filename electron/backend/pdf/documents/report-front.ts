@@ -1,0 +1,115 @@
+/** Report page 1: identification, status, caution, room verdict, and the per-beam summary table. */
+import type { Content, TableCell } from 'pdfmake/interfaces';
+import type { UnitHabit } from '../../../../core/units/quantities.js';
+import type { DocumentInput } from '../document-input.js';
+import { factTable, gridTable, heading, paragraph } from '../blocks.js';
+import * as fmt from '../format.js';
+import { COLOR, cautionBlock, DRAFT_HEADER } from '../page.js';
+import type { RoomView } from '../room-view.js';
+import { beamFigures } from './beam-figures.js';
+
+const OPERATING_STATE: Readonly<Record<string, string>> = {
+  normal: 'normal operation',
+  alignment: 'alignment',
+  maintenance: 'maintenance',
+  service: 'service',
+  'set-up': 'set-up',
+};
+
+export function statusText(doc: DocumentInput): Content {
+  if (doc.signature === null) {
+    return { text: `${DRAFT_HEADER} (revision ${doc.assessment.revisionNo})`, bold: true, color: COLOR.draft };
+  }
+  const superseded = doc.assessment.status === 'superseded' ? ' — SUPERSEDED by a later revision' : '';
+  return {
+    text: `Signed, revision ${doc.assessment.revisionNo}, on ${fmt.calendarDate(doc.signature.signedAt)} by ${doc.signature.name}${superseded}`,
+    bold: true,
+    color: superseded === '' ? COLOR.good : COLOR.bad,
+  };
+}
+
+function contactOf(p: { phone: string; email: string }): string {
+  return [p.phone, p.email].filter((x) => x.trim() !== '').join(' · ');
+}
+
+export function frontPage(doc: DocumentInput, view: RoomView): Content[] {
+  const c = doc.content;
+  const r = doc.results;
+  const site = [doc.site.name, doc.site.building, doc.site.address].filter((x) => x.trim() !== '').join(', ');
+  const officer = `${doc.officer.name}${doc.officer.role ? ` (${doc.officer.role})` : ''}${contactOf(doc.officer) ? ' · ' + contactOf(doc.officer) : ''}`;
+  const states = c.operatingStates.map((s) => OPERATING_STATE[s] ?? s).join(', ') || 'not stated';
+  return [
+    { text: 'Laser hazard assessment', fontSize: 22, bold: true, margin: [0, 0, 0, 2] },
+    { text: `Room ${doc.room.code}${doc.room.name ? ' — ' + doc.room.name : ''}`, fontSize: 15, margin: [0, 0, 0, 2] },
+    { text: c.title, fontSize: 11, color: COLOR.muted, margin: [0, 0, 0, 10] },
+    factTable([
+      ['Site', site],
+      ['Room', `${doc.room.code}${doc.room.name ? ' — ' + doc.room.name : ''}`],
+      ['Responsible person', `${doc.room.responsiblePerson || 'not named'}${doc.room.contact ? ' · ' + doc.room.contact : ''}`],
+      ['Laser safety officer', officer],
+      ['Status', statusText(doc)],
+      ['Assessment date', `${fmt.calendarDate(doc.assessment.updatedAt)} (revision ${doc.assessment.revisionNo}, opened ${fmt.calendarDate(doc.assessment.createdAt)})`],
+      ['Review by', fmt.calendarDate(c.reviewBy)],
+      ['Operating states covered', states],
+      ['Rule set', r.ruleSetName],
+      ['Calculated with', doc.assessment.calculatedWith],
+    ]),
+    { text: '', margin: [0, 6, 0, 0] },
+    cautionBlock(11),
+    heading('Room at a glance', 2),
+    factTable(
+      [
+        ['Highest class', `Class ${view.highestClass} (the higher of the labelled classes and the estimates)`],
+        ['Largest hazard distance', fmt.distanceFull(r.largestHazardDistance_m)],
+        [
+          'Eyewear covering every beam',
+          r.eyewearCoveringAll.length > 0
+            ? r.eyewearCoveringAll.join(', ')
+            : { text: 'None of the listed eyewear covers every beam — see the eyewear section.', bold: true, color: COLOR.bad },
+        ],
+        ['Beams assessed', `${r.beams.length} beam${r.beams.length === 1 ? '' : 's'} from ${c.input.lasers.length} laser${c.input.lasers.length === 1 ? '' : 's'}`],
+      ],
+      130,
+      9.5,
+    ),
+  ];
+}
+
+export function beamSummary(doc: DocumentInput, view: RoomView, units: UnitHabit): Content[] {
+  const rows: TableCell[][] = view.beams.map((b, i) => {
+    const f = beamFigures(b.result, units);
+    return [
+      { text: [{ text: `${i + 1}. ${b.result.label}`, bold: true }, b.laser ? `\n${b.laser.name}` : ''] },
+      f.wavelength,
+      b.result.emissionSummary,
+      { text: [{ text: f.limit, bold: true }, `\n${f.governing}`] },
+      { text: f.nohd, bold: true },
+      f.diffuse,
+      f.skin,
+      { text: f.od, bold: true },
+      f.scale,
+      `${f.classEstimate} / ${b.classAsLabelled ?? '–'}`,
+    ];
+  });
+  const warnings = view.beams.flatMap((b, i) => b.result.warnings.map((w) => `Beam ${i + 1} (${b.result.label}): ${w}`));
+  return [
+    heading('Summary per beam'),
+    paragraph(
+      `Limits are rounded down, distances, optical densities and scale numbers up (${units === 'ANSI' ? 'W/cm², J/cm²' : 'W/m², J/m²'}; distances in metres). ` +
+        'Diffuse: hazard zone radius for diffuse reflection. Class: estimate / as labelled — the manufacturer\'s class governs.',
+      { fontSize: 8, color: COLOR.muted },
+    ),
+    gridTable(
+      ['Beam', 'Wave-length', 'Emission', 'Eye limit (governing rule)', 'NOHD', 'Diffuse', 'Skin', 'OD', 'Scale numbers', 'Class est./ label'],
+      rows,
+      [78, 34, 62, 108, 32, 32, 30, 30, 48, 30],
+      7.2,
+    ),
+    ...(warnings.length === 0
+      ? []
+      : [
+          heading('Points to check', 3),
+          { ul: warnings.map((w) => ({ text: w, color: COLOR.bad })), fontSize: 8.5, margin: [0, 0, 0, 4] } as Content,
+        ]),
+  ];
+}

@@ -1,0 +1,115 @@
+/** Report: the inputs and assumptions behind every number (domain reference 6.2 items 3-6). */
+import type { Content, TableCell } from 'pdfmake/interfaces';
+import type { BeamInput, ViewingConditions } from '../../../../core/model/inputs.js';
+import { dec, roundPlaces, roundSig } from '../../../../core/numeric/decimal.js';
+import { formatSI, plain } from '../../../../core/units/quantities.js';
+import type { UnitHabit } from '../../../../core/units/quantities.js';
+import type { DocumentInput } from '../document-input.js';
+import { bullets, gridTable, heading, paragraph } from '../blocks.js';
+import * as fmt from '../format.js';
+import { COLOR } from '../page.js';
+import type { RoomView } from '../room-view.js';
+
+const DEFINITION: Readonly<Record<string, string>> = { '1/e': '1/e', '1/e2': '1/e²', d63: 'D63' };
+
+function beamGeometry(b: BeamInput): string {
+  const def = DEFINITION[b.beam.definition] ?? b.beam.definition;
+  return `${formatSI(String(b.beam.diameter_m), 'm', 3, 'up')} (${def}), ${formatSI(String(b.beam.divergence_rad), 'rad', 3, 'up')} full angle`;
+}
+
+function viewingText(v: ViewingConditions | undefined): string {
+  if (v === undefined) return 'direct beam only';
+  const parts: string[] = ['direct beam'];
+  if (v.diffuse) {
+    const angle = v.diffuse.viewingAngle_rad === undefined ? '' : `, viewed at ${plain(dec(v.diffuse.viewingAngle_rad).mul(180).div(Math.PI).toDecimalPlaces(1))}°`;
+    parts.push(`diffuse reflection ρ = ${v.diffuse.reflectance}${angle}`);
+  }
+  if (v.specular) parts.push(`specular reflection ρ = ${v.specular.reflectance}`);
+  if (v.lens) parts.push(`lens f = ${formatSI(String(v.lens.focalLength_m), 'm')}`);
+  if (v.fiber) parts.push(`${v.fiber.kind} fibre, NA ${v.fiber.numericalAperture}`);
+  if (v.aided) parts.push(`optical aid ${v.aided.magnification}×, ${formatSI(String(v.aided.objectiveDiameter_m), 'm')} objective`);
+  if (v.attenuation_per_m !== undefined) parts.push(`atmospheric attenuation ${v.attenuation_per_m} /m credited`);
+  if (v.closestApproach_m !== undefined) parts.push(`closest approach ${formatSI(String(v.closestApproach_m), 'm')}`);
+  return parts.join('; ');
+}
+
+function tolerancesText(b: BeamInput): string {
+  const t = b.tolerances;
+  if (t === undefined) return 'none given';
+  const parts = Object.entries(t)
+    .filter((e): e is [string, number] => typeof e[1] === 'number')
+    .map(([k, v]) => `${k} ±${plain(dec(v).mul(100))} %`);
+  return parts.length === 0 ? 'none given' : parts.join(', ');
+}
+
+export function inputsSection(doc: DocumentInput, view: RoomView, units: UnitHabit): Content[] {
+  const c = doc.content;
+  const chosen = new Map(c.assumptions.exposureDurations.map((d) => [d.beamId, d]));
+  const beamRows: TableCell[][] = view.beams.map((b, i) => {
+    const input = b.input;
+    const em = input ? fmt.emission(input.emission) : null;
+    const choice = chosen.get(b.result.beamId);
+    const why = choice ? choice.why : b.result.mpe.durationWhy;
+    return [
+      `${i + 1}. ${b.result.label}`,
+      fmt.wavelength(b.result.wavelength_nm),
+      em ? `${em.output}\n${em.pulse}` : { text: 'input missing', color: COLOR.bad },
+      input ? beamGeometry(input) : '–',
+      { text: [{ text: fmt.duration(b.result.mpe.exposureDuration_s), bold: true }, `\n${why}`] },
+      input ? viewingText(input.viewing) : '–',
+      input ? tolerancesText(input) : '–',
+    ];
+  });
+
+  const settings = c.input.settings;
+  const conservative = settings?.conservative !== false;
+  const replacements = [...new Set(view.beams.flatMap((b) => [...b.result.mpe.conservativeReplacements, ...b.result.skinMpe.conservativeReplacements]))];
+  const boundRows: TableCell[][] = view.beams.map((b, i) => {
+    const bd = b.result.bounds;
+    return [
+      `${i + 1}. ${b.result.label}`,
+      `${fmt.distanceFull(bd.nohd_m.nominal)} / ${fmt.distanceFull(bd.nohd_m.conservative)}`,
+      `${fmt.od(roundOd(bd.odRequired.nominal))} / ${fmt.od(roundOd(bd.odRequired.conservative))}`,
+      `${fmt.limitE(bd.limit_E_Wm2.nominal, units)} / ${fmt.limitE(bd.limit_E_Wm2.conservative, units)}`,
+      bd.dominantInput ?? 'no tolerances given',
+    ];
+  });
+  const a = c.assumptions;
+  const additive = doc.results.additive.map(
+    (g) => `${g.tissue === 'eye' ? 'Eye' : 'Skin'}, ${g.effect}: beams ${g.beamIds.join(', ')} — sum of exposure/limit fractions ${plain(roundSig(g.sumOfFractions, 3, 'up'))}${dec(g.sumOfFractions).gt(1) ? ' (over the limit combined)' : ''}. ${g.note}`,
+  );
+  return [
+    heading('Inputs and assumptions'),
+    gridTable(['Beam', 'Wave-length', 'Output', 'Beam at exit (definition)', 'Exposure duration and why', 'Viewing conditions', 'Tolerances'], beamRows, [70, 36, 66, 80, 100, 100, 50], 7.2),
+    heading('Rule set and conservative mode', 2),
+    paragraph([{ text: 'Rule set: ', bold: true }, doc.results.ruleSetName]),
+    paragraph(
+      conservative
+        ? 'Conservative mode is on: where a table entry could not be checked against the published document, the stricter alternative was used.'
+        : [{ text: 'Conservative mode is OFF: remembered table values were used where they could not be checked. This is not recommended.', bold: true, color: COLOR.bad }],
+    ),
+    replacements.length > 0
+      ? paragraph([{ text: 'Unverified entries replaced by the stricter alternative: ', bold: true }, replacements.join(', ')], { fontSize: 8.5 })
+      : paragraph('No table entry needed replacing.', { fontSize: 8.5 }),
+    ...(settings?.verifiedRows && settings.verifiedRows.length > 0
+      ? [paragraph([{ text: 'Entries checked by a named person and used as remembered: ', bold: true }, settings.verifiedRows.join(', ')], { fontSize: 8.5 })]
+      : []),
+    heading('Uncertainty bounds (nominal / with input tolerances)', 2),
+    gridTable(['Beam', 'NOHD', 'Required OD', 'Eye limit as irradiance', 'Input that moves the NOHD most'], boundRows, [110, 90, 90, 120, '*'], 7.5),
+    heading('Who and what was assumed', 2),
+    bullets(
+      [
+        `Persons who can be present: ${a.personsPresent || 'not stated'}.`,
+        `Optical aids (binoculars, loupes, telescopes) ${a.opticalAidsPossible ? 'may be used in the area' : 'are not used in the area'}.`,
+        ...a.other,
+      ],
+      9,
+    ),
+    ...(additive.length > 0 ? [heading('Beams acting on the same tissue and effect (added)', 2), bullets(additive, 8.5)] : []),
+  ];
+}
+
+/** Bounds carry full-precision OD; print them rounded up to one decimal like the core's figure. */
+function roundOd(v: string): string {
+  return roundPlaces(v, 1, 'up').toString();
+}

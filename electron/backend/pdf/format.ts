@@ -1,0 +1,108 @@
+/**
+ * Numbers as printed, in the officer's unit habit and rounded in the safe direction
+ * (SAFETY.md, conservative policy): limits DOWN; exposures, outputs, distances, optical densities
+ * and scale numbers UP. Values that the core already reports rounded are printed as reported.
+ */
+import { dec, roundSig } from '../../../core/numeric/decimal.js';
+import { formatDensity, formatSI, plain, type UnitHabit } from '../../../core/units/quantities.js';
+import type { Emission } from '../../../core/model/inputs.js';
+import type { LaserClass, ScaleNumberRequirement } from '../../../core/model/results.js';
+
+/** Exposure limit as irradiance, rounded DOWN (a smaller limit is the safe side). */
+export function limitE(E_Wm2: string, units: UnitHabit): string {
+  return formatDensity(E_Wm2, 'irradiance', units, 'down').text;
+}
+
+/** Exposure limit as radiant exposure, rounded DOWN. */
+export function limitH(H_Jm2: string, units: UnitHabit): string {
+  return formatDensity(H_Jm2, 'radiantExposure', units, 'down').text;
+}
+
+/** An exposure (what reaches the eye), rounded UP. */
+export function exposure(value: string, quantity: 'H' | 'E', units: UnitHabit): string {
+  return formatDensity(value, quantity === 'E' ? 'irradiance' : 'radiantExposure', units, 'up').text;
+}
+
+/** A hazard distance in metres: the core's reported value is already rounded up. */
+export function distance(reported_m: string | null): string {
+  if (reported_m === null) return 'not assessed';
+  const v = dec(reported_m);
+  if (v.isZero()) return '0 m';
+  if (v.gte(1000)) return `${plain(roundSig(v.div(1000), 3, 'up'))} km`;
+  return `${plain(v)} m`;
+}
+
+/** A full-precision distance the core gives without a reported twin: 3 significant figures, up. */
+export function distanceFull(value_m: string | null): string {
+  if (value_m === null) return 'not assessed';
+  return distance(roundSig(value_m, 3, 'up').toString());
+}
+
+export function wavelength(nm: number): string {
+  if (nm >= 10000) return `${plain(dec(nm).div(1000))} µm`;
+  return `${plain(dec(nm))} nm`;
+}
+
+/** A duration: seconds from 1 s up (e.g. "30 000 s"), SI prefixes below. */
+export function duration(s: number | string): string {
+  const v = dec(s);
+  if (v.gte(1)) return `${groupThousands(plain(v))} s`;
+  if (v.gte('0.01')) return `${plain(v)} s`;
+  return formatSI(v, 's', 3, 'up');
+}
+
+function groupThousands(text: string): string {
+  const [int, frac] = text.split('.');
+  if (int === undefined || int.length < 5) return text;
+  const grouped = int.replace(/\B(?=(\d{3})+(?!\d))/g, '\u202f');
+  return frac === undefined ? grouped : `${grouped}.${frac}`;
+}
+
+/** Output as printed on the door: maximum power or energy rounded UP, pulse duration and rate. */
+export function emission(e: Emission): { output: string; pulse: string } {
+  if (e.kind === 'cw') return { output: formatSI(String(e.power_W), 'W', 3, 'up'), pulse: 'CW' };
+  const rate = e.repetitionRate_Hz === undefined ? 'single pulse' : formatSI(String(e.repetitionRate_Hz), 'Hz', 3, 'up');
+  return {
+    output: `${formatSI(String(e.pulseEnergy_J), 'J', 3, 'up')} per pulse`,
+    pulse: `${formatSI(String(e.pulseDuration_s), 's', 3, 'up')}, ${rate}`,
+  };
+}
+
+/** Required optical density (already rounded up to one decimal by the core). */
+export function od(reported: string): string {
+  const v = dec(reported);
+  return v.lte(0) ? 'none needed' : `OD ${plain(v)}`;
+}
+
+/** EN 207 / EN 208 scale numbers that apply, e.g. "D LB5, I LB6, R LB6"; "none" when none apply. */
+export function scaleNumbers(reqs: readonly ScaleNumberRequirement[]): string {
+  const parts = reqs
+    .filter((r) => r.applies && r.scale > 0)
+    .map((r) => (r.mode === 'RB' ? `RB${r.scale}` : `${r.mode} LB${r.scale}`));
+  return parts.length === 0 ? 'none' : parts.join(', ');
+}
+
+export const CLASS_ORDER: readonly LaserClass[] = ['1', '1M', '2', '2M', '3R', '3B', '4'];
+
+export function classRank(c: LaserClass): number {
+  return CLASS_ORDER.indexOf(c);
+}
+
+export function higherClass(a: LaserClass, b: LaserClass): LaserClass {
+  return classRank(a) >= classRank(b) ? a : b;
+}
+
+/** Calendar date as printed: ISO form (unambiguous across A4 and Letter countries). */
+export function calendarDate(iso: string | null | undefined): string {
+  if (iso === null || iso === undefined || iso === '') return 'not set';
+  return iso.slice(0, 10);
+}
+
+/** Short form of a SHA-256 fingerprint: first 16 hex digits in groups of four. */
+export function shortFingerprint(hex: string): string {
+  return (hex.slice(0, 16).match(/.{1,4}/g) ?? []).join(' ');
+}
+
+export function percent(ratio: number | undefined): string {
+  return ratio === undefined ? '–' : `${plain(roundSig(ratio * 100, 3, 'down'))} %`;
+}

@@ -1,0 +1,61 @@
+/** Maps a stored assessment revision (record store) to the documents' input. */
+import type { Person, RecordStore, Revision } from '../records/types.js';
+import type { DocumentInput } from './document-input.js';
+
+/** The officer named on the documents: the signer when signed, else the site's LSO in the register. */
+function officerFor(store: RecordStore, revision: Revision): Pick<Person, 'name' | 'role' | 'email' | 'phone'> {
+  const people = store.listPeople();
+  const signerId = revision.signature?.personId ?? null;
+  const signer = signerId === null ? undefined : people.find((p) => p.id === signerId);
+  if (signer) return signer;
+  const lso = people.find((p) => /laser safety officer/i.test(p.role) && !/deputy/i.test(p.role)) ?? people.find((p) => /\bLSO\b/.test(p.role));
+  if (lso) return lso;
+  if (revision.signature) return { name: revision.signature.name, role: revision.signature.role, email: '', phone: '' };
+  return { name: 'not named in the register', role: 'Laser safety officer', email: '', phone: '' };
+}
+
+export interface FromAssessmentOptions {
+  /** A specific revision; default the assessment's current one. */
+  readonly revisionId?: string;
+}
+
+export function documentInputFromAssessment(store: RecordStore, assessmentId: string, options: FromAssessmentOptions = {}): DocumentInput {
+  const assessment = store.getAssessment(assessmentId);
+  const revision = options.revisionId === undefined ? assessment.current : store.getRevision(options.revisionId);
+  if (revision.assessmentId !== assessment.id) {
+    throw new Error(`revisionId: revision ${options.revisionId ?? ''} belongs to another assessment`);
+  }
+  const room = store.getRoom(assessment.roomId);
+  const site = store.getSite(room.siteId);
+  const eyewear = store.listEyewear(site.id);
+  const sig = revision.signature;
+  return {
+    site: { name: site.name, building: site.building, address: site.address },
+    room: { code: room.code, name: room.name, responsiblePerson: room.responsiblePerson, contact: room.contact },
+    officer: officerFor(store, revision),
+    installations: store.listInstallations(room.id).map((i) => ({
+      id: i.id,
+      laserType: i.laserType,
+      maker: i.maker,
+      model: i.model,
+      serialNumber: i.serialNumber,
+      registrationNumber: i.registrationNumber,
+      classAsLabelled: i.classAsLabelled,
+    })),
+    eyewearLocations: Object.fromEntries(eyewear.filter((e) => e.location.trim() !== '').map((e) => [e.spec.id, e.location])),
+    assessment: {
+      id: assessment.id,
+      revisionNo: revision.revisionNo,
+      status: revision.status,
+      createdAt: revision.createdAt,
+      updatedAt: revision.updatedAt,
+      calculatedWith: revision.calculatedWith,
+    },
+    content: revision.content,
+    results: revision.results,
+    signature:
+      sig === null
+        ? null
+        : { name: sig.name, role: sig.role, signedAt: sig.signedAt, statement: sig.statement, fingerprint: sig.fingerprint, keyId: sig.keyId },
+  };
+}

@@ -1,0 +1,45 @@
+/**
+ * Printed output: the assessment report, the door hazard notice and the eyewear sheet as PDF.
+ * Plain Node (pdfmake 0.3), usable from the Electron main process, the loopback host and the CLI.
+ */
+import type { DocumentInput, RenderOptions } from './document-input.js';
+import { renderPdf } from './runtime.js';
+import { reportDefinition } from './documents/report.js';
+import { doorNoticeDefinition } from './documents/door-notice.js';
+import { eyewearSheetDefinition } from './documents/eyewear-sheet.js';
+
+export type { DocumentInput, RenderOptions, Paper, InstallationInfo, SignatureInfo } from './document-input.js';
+export { renderOptionsSchema, DEFAULT_RENDER_OPTIONS } from './document-input.js';
+export { documentInputFromAssessment } from './from-assessment.js';
+
+export function renderReport(doc: DocumentInput, opts: RenderOptions): Promise<Buffer> {
+  return renderPdf(reportDefinition(doc, opts));
+}
+
+export function renderDoorNotice(doc: DocumentInput, opts: RenderOptions): Promise<Buffer> {
+  return renderPdf(doorNoticeDefinition(doc, opts));
+}
+
+export function renderEyewearSheet(doc: DocumentInput, opts: RenderOptions): Promise<Buffer> {
+  return renderPdf(eyewearSheetDefinition(doc, opts));
+}
+
+export type DocumentKind = 'report' | 'door-notice' | 'eyewear-sheet';
+
+export const DOCUMENT_FILE_NAME: Readonly<Record<DocumentKind, string>> = {
+  report: 'assessment-report',
+  'door-notice': 'door-notice',
+  'eyewear-sheet': 'eyewear-sheet',
+};
+
+/** Render one of the three documents by kind (the UI's print/save actions use this). */
+export function renderDocument(kind: DocumentKind, doc: DocumentInput, opts: RenderOptions): Promise<Buffer> {
+  switch (kind) {
+    case 'report':
+      return renderReport(doc, opts);
+    case 'door-notice':
+      return renderDoorNotice(doc, opts);
+    case 'eyewear-sheet':
+      return renderEyewearSheet(doc, opts);
+  }
+}

@@ -1,0 +1,153 @@
+/**
+ * Page furniture shared by the three documents: paper, colours, the caution block, the DRAFT mark,
+ * the rule-set line and the fingerprint block with its QR code.
+ */
+import type { Content, ContentText, DynamicContent, TDocumentDefinitions, Watermark } from 'pdfmake/interfaces';
+import { RESULT_CAUTION } from '../../../core/model/results.js';
+import type { DocumentInput, Paper } from './document-input.js';
+import { calendarDate, shortFingerprint } from './format.js';
+
+export const PAGE_SIZE: Readonly<Record<Paper, 'A4' | 'LETTER'>> = { A4: 'A4', Letter: 'LETTER' };
+
+/** Printable width in points for the given paper and side margins. */
+export function contentWidth(paper: Paper, sideMargin: number, landscape = false): number {
+  const [w, h] = paper === 'A4' ? [595.28, 841.89] : [612, 792];
+  return (landscape ? h : w) - 2 * sideMargin;
+}
+
+export const COLOR = {
+  ink: '#111111',
+  muted: '#555555',
+  rule: '#999999',
+  tint: '#F2F2F2',
+  draft: '#C8102E',
+  bad: '#B00020',
+  badTint: '#FBE3E6',
+  good: '#1B6E2E',
+  goodTint: '#E2F2E5',
+  caution: '#FFF4CC',
+  cautionEdge: '#B38600',
+} as const;
+
+export const DRAFT_HEADER = 'DRAFT — NOT SIGNED';
+
+export function isDraft(doc: DocumentInput): boolean {
+  return doc.signature === null;
+}
+
+/** The DRAFT watermark across every page of an unsigned document. */
+export function draftWatermark(doc: DocumentInput): Watermark | undefined {
+  return isDraft(doc) ? { text: 'DRAFT', color: COLOR.draft, opacity: 0.13, bold: true, fontSize: 150 } : undefined;
+}
+
+/** The caution sentence in a framed, tinted block: visible, never fine print. */
+export function cautionBlock(fontSize: number): Content {
+  return {
+    table: {
+      widths: ['*'],
+      body: [[{ text: RESULT_CAUTION, bold: true, fontSize, color: COLOR.ink, margin: [6, 4, 6, 4] }]],
+    },
+    layout: {
+      fillColor: () => COLOR.caution,
+      hLineColor: () => COLOR.cautionEdge,
+      vLineColor: () => COLOR.cautionEdge,
+      hLineWidth: () => 1.2,
+      vLineWidth: () => 1.2,
+    },
+  };
+}
+
+export function ruleSetLine(doc: DocumentInput, fontSize: number): ContentText {
+  const conservative = doc.content.input.settings?.conservative !== false;
+  return {
+    text: [
+      { text: 'Rule set: ', bold: true },
+      doc.results.ruleSetName,
+      conservative ? ' · conservative mode on' : ' · conservative mode OFF',
+    ],
+    fontSize,
+  };
+}
+
+/**
+ * The record fingerprint in short form with a QR code holding the full SHA-256, or the statement
+ * that a draft has none.
+ */
+export function fingerprintBlock(doc: DocumentInput, qrSize: number, fontSize: number): Content {
+  if (doc.signature === null) {
+    return {
+      text: [
+        { text: `${DRAFT_HEADER}. `, bold: true, color: COLOR.draft },
+        'A draft has no record fingerprint; sign the assessment before posting or filing this document.',
+      ],
+      fontSize,
+    };
+  }
+  const s = doc.signature;
+  return {
+    columns: [
+      { qr: s.fingerprint, fit: qrSize, eccLevel: 'M', width: 'auto' },
+      {
+        width: '*',
+        margin: [8, 0, 0, 0],
+        stack: [
+          { text: 'Record fingerprint', bold: true, fontSize },
+          { text: shortFingerprint(s.fingerprint), fontSize: fontSize + 2, bold: true, characterSpacing: 0.5 },
+          { text: `Signed by ${s.name} (${s.role}) on ${calendarDate(s.signedAt)}`, fontSize: fontSize - 1 },
+          { text: `Assessment revision ${doc.assessment.revisionNo} · the QR code holds the full SHA-256 fingerprint`, fontSize: fontSize - 1, color: COLOR.muted },
+        ],
+      },
+    ],
+  };
+}
+
+export function headerFor(doc: DocumentInput, title: string, sideMargin: number): DynamicContent {
+  const where = `${doc.site.name}${doc.site.building ? ', ' + doc.site.building : ''} · Room ${doc.room.code}`;
+  return () => ({
+    margin: [sideMargin, 18, sideMargin, 0],
+    columns: [
+      { text: [{ text: title, bold: true }, `  ·  ${where}`], fontSize: 8.5, color: COLOR.muted },
+      isDraft(doc)
+        ? { text: DRAFT_HEADER, bold: true, color: COLOR.draft, fontSize: 10, alignment: 'right', width: 'auto' }
+        : {
+            text: `Revision ${doc.assessment.revisionNo} · signed ${calendarDate(doc.signature?.signedAt)}`,
+            fontSize: 8.5,
+            color: COLOR.muted,
+            alignment: 'right',
+            width: 'auto',
+          },
+    ],
+  });
+}
+
+export function footerFor(doc: DocumentInput, sideMargin: number): DynamicContent {
+  const fp = doc.signature === null ? 'no fingerprint (draft)' : `fingerprint ${shortFingerprint(doc.signature.fingerprint)}`;
+  return (currentPage: number, pageCount: number) => ({
+    margin: [sideMargin, 6, sideMargin, 0],
+    stack: [
+      cautionBlock(8.5),
+      {
+        margin: [0, 3, 0, 0],
+        columns: [
+          { ...ruleSetLine(doc, 7.5), width: '*' },
+          { text: `${fp} · page ${currentPage} of ${pageCount}`, fontSize: 7.5, alignment: 'right', width: 'auto' },
+        ],
+      },
+    ],
+  });
+}
+
+export function baseDocument(doc: DocumentInput, paper: Paper, title: string): Partial<TDocumentDefinitions> {
+  return {
+    pageSize: PAGE_SIZE[paper],
+    info: {
+      title: `${title} – Room ${doc.room.code}`,
+      author: doc.signature?.name ?? doc.officer.name,
+      subject: `${title}; ${doc.results.ruleSetName}`,
+      creator: 'Beamwarden',
+      producer: 'Beamwarden (pdfmake)',
+    },
+    defaultStyle: { font: 'Roboto', fontSize: 9.5, color: COLOR.ink, lineHeight: 1.15 },
+    ...(draftWatermark(doc) ? { watermark: draftWatermark(doc) } : {}),
+  };
+}
