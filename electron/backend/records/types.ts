@@ -477,7 +477,7 @@ export class RecordError extends Error {
 /**
  * Module-level entry points (electron/backend/records/index.ts):
  * - `openRecordStore(options?: OpenOptions): RecordStore` — creates the folder and database on first start;
- * - `restoreBackup(args: { from: string; to?: string; nativeBinding?: string }): RestoreReport` — replaces
+ * - `restoreBackup(args: { from: string; to: string; nativeBinding?: string }): Promise<RestoreReport>` — replaces
  *   the database (store must be closed) with a checked backup, keeping the replaced file beside it;
  * - `defaultDataDir()` / `defaultDatabasePath()` — the platform user-data folder.
  */

@@ -1,0 +1,589 @@
+/**
+ * Assessments and their revisions: draft -> signed -> superseded.
+ *
+ * An assessment is a series of revisions. Saving writes into the open draft; saving when the newest
+ * revision is signed starts a new draft revision based on it (the signed one is never touched, and
+ * the database triggers would refuse it anyway). Signing turns the draft into the signed revision
+ * and marks the previously signed one superseded, all in one transaction.
+ */
+import type { RoomInput } from '../../../core/model/inputs.js';
+import type { RoomResult } from '../../../core/model/results.js';
+import { AssessmentContentSchema, SignOffSchema } from '../schemas/records.js';
+import { RoomResultSchema } from '../schemas/results.js';
+import { canonicalJson } from './canonical.js';
+import { notFound, parseOrThrow, translateSqliteError, type StoreContext } from './context.js';
+import { diffValues } from './diff.js';
+import { getInstallation, getPerson, getRoom, roomInputFromRegister } from './register.js';
+import { fingerprintOf, keyIdOf, signStatement, verifyStatement, type SignedStatement } from './signing.js';
+import {
+  RecordError,
+  type Assessment,
+  type AssessmentContent,
+  type AssessmentSummary,
+  type CalendarDate,
+  type FieldDifference,
+  type Id,
+  type NonBeamHazardKind,
+  type Revision,
+  type RevisionStatus,
+  type RevisionSummary,
+  type Signature,
+  type SignOff,
+  type VerifyReport,
+} from './types.js';
+
+// ---------------------------------------------------------------- rows
+
+export interface AssessmentRow {
+  id: string;
+  room_id: string;
+  installation_id: string | null;
+  created_at: string;
+}
+export interface RevisionRow {
+  id: string;
+  assessment_id: string;
+  revision_no: number;
+  status: RevisionStatus;
+  content_json: string;
+  results_json: string;
+  calculated_with: string;
+  based_on: string | null;
+  created_at: string;
+  updated_at: string;
+  title: string;
+  review_by: string | null;
+}
+export interface SignatureRow {
+  revision_id: string;
+  person_id: string | null;
+  name: string;
+  role: string;
+  signed_at: string;
+  statement: string;
+  fingerprint: string;
+  algorithm: string;
+  signature: string;
+  key_id: string;
+  /** Joined from signing_key (null if the key row is missing, e.g. after tampering). */
+  public_key: string | null;
+}
+
+const SIGNATURE_SELECT = `SELECT s.*, k.public_key FROM signature s LEFT JOIN signing_key k ON k.key_id = s.key_id WHERE s.revision_id = ?`;
+
+function signatureFromRow(r: SignatureRow): Signature {
+  return {
+    revisionId: r.revision_id,
+    personId: r.person_id,
+    name: r.name,
+    role: r.role,
+    signedAt: r.signed_at,
+    statement: r.statement,
+    fingerprint: r.fingerprint,
+    algorithm: 'Ed25519',
+    signature: r.signature,
+    keyId: r.key_id,
+    publicKey: r.public_key ?? '',
+  };
+}
+
+function getSignatureRow(ctx: StoreContext, revisionId: Id): SignatureRow | undefined {
+  return ctx.db.prepare(SIGNATURE_SELECT).get(revisionId) as SignatureRow | undefined;
+}
+
+function revisionFromRow(ctx: StoreContext, r: RevisionRow): Revision {
+  const content = parseOrThrow(AssessmentContentSchema, JSON.parse(r.content_json), `Stored content of revision ${r.revision_no}`);
+  const results = parseOrThrow(RoomResultSchema, JSON.parse(r.results_json), `Stored results of revision ${r.revision_no}`);
+  const sig = getSignatureRow(ctx, r.id);
+  return {
+    id: r.id,
+    assessmentId: r.assessment_id,
+    revisionNo: r.revision_no,
+    status: r.status,
+    content,
+    results,
+    calculatedWith: r.calculated_with,
+    basedOn: r.based_on,
+    createdAt: r.created_at,
+    updatedAt: r.updated_at,
+    signature: sig ? signatureFromRow(sig) : null,
+  };
+}
+
+function getAssessmentRow(ctx: StoreContext, id: Id): AssessmentRow {
+  const row = ctx.db.prepare('SELECT * FROM assessment WHERE id = ?').get(id) as AssessmentRow | undefined;
+  if (!row) throw notFound('assessment', id);
+  return row;
+}
+
+function newestRevisionRow(ctx: StoreContext, assessmentId: Id): RevisionRow {
+  const r = ctx.db.prepare('SELECT * FROM revision WHERE assessment_id = ? ORDER BY revision_no DESC LIMIT 1').get(assessmentId) as
+    | RevisionRow
+    | undefined;
+  if (!r) throw new RecordError('corrupt-database', `Assessment ${assessmentId} has no revision`);
+  return r;
+}
+
+function getRevisionRow(ctx: StoreContext, revisionId: Id): RevisionRow {
+  const r = ctx.db.prepare('SELECT * FROM revision WHERE id = ?').get(revisionId) as RevisionRow | undefined;
+  if (!r) throw notFound('revision', revisionId);
+  return r;
+}
+
+// ---------------------------------------------------------------- content
+
+const NON_BEAM_KINDS: readonly NonBeamHazardKind[] = [
+  'electrical',
+  'x-rays',
+  'collateral-optical',
+  'air-contaminants',
+  'biological',
+  'dyes-solvents',
+  'gases',
+  'cryogens',
+  'fire-explosion',
+  'photosensitisation',
+  'glare',
+  'other',
+];
+
+function addOneYear(isoTimestamp: string): CalendarDate {
+  const d = new Date(isoTimestamp);
+  d.setUTCFullYear(d.getUTCFullYear() + 1);
+  return d.toISOString().slice(0, 10);
+}
+
+/**
+ * A fresh content skeleton: the register snapshot, every non-beam hazard listed as "not present"
+ * for the officer to go through (domain reference section 7), and a review date one year ahead
+ * (institutional practice is annual review plus review on any change — domain reference 6.3).
+ */
+export function newAssessmentContent(ctx: StoreContext, roomId: Id, installationId: Id | null = null): AssessmentContent {
+  const room = getRoom(ctx, roomId);
+  const registerInput = roomInputFromRegister(ctx, roomId);
+  let input: RoomInput = registerInput;
+  let title = `Laser hazard evaluation, room ${room.code}${room.name ? ` (${room.name})` : ''}`;
+  if (installationId !== null) {
+    const inst = getInstallation(ctx, installationId);
+    if (inst.roomId !== roomId) throw new RecordError('invalid', `Installation ${installationId} is not in room ${room.code}`);
+    input = { ...registerInput, lasers: [inst.laser] };
+    title = `Laser hazard evaluation, ${inst.laser.name}, room ${room.code}`;
+  }
+  return {
+    title,
+    input,
+    operatingStates: ['normal', 'alignment', 'maintenance'],
+    assumptions: { exposureDurations: [], personsPresent: 'Authorised laser users only', opticalAidsPossible: false, other: [] },
+    controls: [],
+    nonBeamHazards: NON_BEAM_KINDS.map((kind) => ({ kind, present: false, note: '', controls: [] })),
+    eyewearChosen: [],
+    notes: '',
+    reviewBy: addOneYear(ctx.now()),
+  };
+}
+
+/** Validate content and cross-check references; write chosen exposure durations into the input. */
+function normaliseContent(raw: unknown): AssessmentContent {
+  const content = parseOrThrow(AssessmentContentSchema, raw, 'Assessment content');
+  const beamIds = new Set<string>();
+  content.input.lasers.forEach((l) => l.beams.forEach((b) => b.id !== undefined && beamIds.add(b.id)));
+  const tags = new Set((content.input.eyewear ?? []).map((e) => e.id));
+  const issues: Array<{ path: string; problem: string }> = [];
+  content.assumptions.exposureDurations.forEach((c, i) => {
+    if (!beamIds.has(c.beamId)) issues.push({ path: `assumptions.exposureDurations[${i}].beamId`, problem: `no beam with id "${c.beamId}" in the input` });
+  });
+  content.eyewearChosen.forEach((c, i) => {
+    if (!tags.has(c.eyewearTag)) issues.push({ path: `eyewearChosen[${i}].eyewearTag`, problem: `no eyewear "${c.eyewearTag}" in the input's eyewear` });
+    c.beamIds.forEach((b, j) => {
+      if (!beamIds.has(b)) issues.push({ path: `eyewearChosen[${i}].beamIds[${j}]`, problem: `no beam with id "${b}" in the input` });
+    });
+  });
+  if (issues.length) {
+    throw new RecordError('invalid', `Assessment content is not valid: ${issues.map((i) => `${i.path}: ${i.problem}`).join('; ')}`, issues);
+  }
+  // The durations the officer chose (with their reasons) are the ones evaluated: one source of truth.
+  const chosen = new Map(content.assumptions.exposureDurations.map((c) => [c.beamId, c.duration_s]));
+  if (chosen.size === 0) return content;
+  return {
+    ...content,
+    input: {
+      ...content.input,
+      lasers: content.input.lasers.map((l) => ({
+        ...l,
+        beams: l.beams.map((b) => (b.id !== undefined && chosen.has(b.id) ? { ...b, exposureDuration_s: chosen.get(b.id) } : b)),
+      })),
+    },
+  };
+}
+
+/** Run the core; its input errors become RecordError('invalid') naming the field under `input`. */
+function evaluate(ctx: StoreContext, input: RoomInput): RoomResult {
+  try {
+    return ctx.evaluate(input);
+  } catch (e) {
+    if (e instanceof Error && e.name === 'InputError') {
+      const field = (e as Error & { field?: unknown }).field;
+      const path = `input.${typeof field === 'string' ? field : '?'}`;
+      throw new RecordError('invalid', `The calculation refused the input: ${e.message}`, [{ path, problem: e.message }]);
+    }
+    throw e;
+  }
+}
+
+// ---------------------------------------------------------------- queries
+
+export function getRevision(ctx: StoreContext, revisionId: Id): Revision {
+  return revisionFromRow(ctx, getRevisionRow(ctx, revisionId));
+}
+
+export function getAssessment(ctx: StoreContext, id: Id): Assessment {
+  const a = getAssessmentRow(ctx, id);
+  return {
+    id: a.id,
+    roomId: a.room_id,
+    installationId: a.installation_id,
+    createdAt: a.created_at,
+    current: revisionFromRow(ctx, newestRevisionRow(ctx, id)),
+  };
+}
+
+const SUMMARY_SELECT = `
+  SELECT a.id, a.room_id, a.installation_id, r.title, r.revision_no, r.status, r.review_by, r.updated_at,
+    (SELECT s.signed_at FROM revision r3 JOIN signature s ON s.revision_id = r3.id
+      WHERE r3.assessment_id = a.id AND r3.status = 'signed') AS signed_at
+  FROM assessment a
+  JOIN revision r ON r.assessment_id = a.id
+   AND r.revision_no = (SELECT max(r2.revision_no) FROM revision r2 WHERE r2.assessment_id = a.id)`;
+
+interface SummaryRow {
+  id: string;
+  room_id: string;
+  installation_id: string | null;
+  title: string;
+  revision_no: number;
+  status: RevisionStatus;
+  review_by: string | null;
+  updated_at: string;
+  signed_at: string | null;
+}
+const summaryFromRow = (r: SummaryRow): AssessmentSummary => ({
+  id: r.id,
+  roomId: r.room_id,
+  installationId: r.installation_id,
+  title: r.title,
+  revisionNo: r.revision_no,
+  status: r.status,
+  reviewBy: r.review_by,
+  signedAt: r.signed_at,
+  updatedAt: r.updated_at,
+});
+
+export function listAssessments(ctx: StoreContext, roomId: Id): AssessmentSummary[] {
+  getRoom(ctx, roomId);
+  return (ctx.db.prepare(`${SUMMARY_SELECT} WHERE a.room_id = ? ORDER BY r.updated_at DESC, a.id`).all(roomId) as SummaryRow[]).map(summaryFromRow);
+}
+
+export function listDueForReview(ctx: StoreContext, date: CalendarDate): AssessmentSummary[] {
+  if (!/^\d{4}-\d{2}-\d{2}$/.test(date)) throw new RecordError('invalid', `date: must be a calendar date YYYY-MM-DD (got "${date}")`);
+  return (
+    ctx.db.prepare(`${SUMMARY_SELECT} WHERE r.review_by IS NOT NULL AND r.review_by <= ? ORDER BY r.review_by, a.id`).all(date) as SummaryRow[]
+  ).map(summaryFromRow);
+}
+
+export function listRevisions(ctx: StoreContext, assessmentId: Id): RevisionSummary[] {
+  getAssessmentRow(ctx, assessmentId);
+  const rows = ctx.db.prepare('SELECT * FROM revision WHERE assessment_id = ? ORDER BY revision_no').all(assessmentId) as RevisionRow[];
+  return rows.map((r) => {
+    const sig = getSignatureRow(ctx, r.id);
+    return {
+      id: r.id,
+      assessmentId: r.assessment_id,
+      revisionNo: r.revision_no,
+      status: r.status,
+      calculatedWith: r.calculated_with,
+      basedOn: r.based_on,
+      createdAt: r.created_at,
+      updatedAt: r.updated_at,
+      signature: sig ? signatureFromRow(sig) : null,
+      title: r.title,
+      reviewBy: r.review_by,
+    };
+  });
+}
+
+export function compareRevisions(ctx: StoreContext, fromId: Id, toId: Id): FieldDifference[] {
+  const a = getRevision(ctx, fromId);
+  const b = getRevision(ctx, toId);
+  if (a.assessmentId !== b.assessmentId) throw new RecordError('invalid', 'Both revisions must belong to the same assessment');
+  return diffValues(
+    { content: a.content, results: a.results, calculatedWith: a.calculatedWith },
+    { content: b.content, results: b.results, calculatedWith: b.calculatedWith },
+  );
+}
+
+// ---------------------------------------------------------------- writes
+
+const INSERT_REVISION = `INSERT INTO revision (id, assessment_id, revision_no, status, content_json, results_json, calculated_with, based_on,
+  created_at, updated_at, title, review_by)
+  VALUES (@id, @assessment_id, @revision_no, @status, @content_json, @results_json, @calculated_with, @based_on,
+  @created_at, @updated_at, @title, @review_by)`;
+
+export function insertRevisionRow(ctx: StoreContext, row: RevisionRow): void {
+  ctx.db.prepare(INSERT_REVISION).run(row);
+}
+
+function write<T>(ctx: StoreContext, what: string, fn: () => T): T {
+  try {
+    return ctx.db.transaction(fn).immediate();
+  } catch (e) {
+    throw translateSqliteError(e, what);
+  }
+}
+
+export function createAssessment(
+  ctx: StoreContext,
+  args: { roomId: Id; installationId?: Id | null; content: AssessmentContent },
+): Assessment {
+  const content = normaliseContent(args.content);
+  const room = getRoom(ctx, args.roomId);
+  const installationId = args.installationId ?? null;
+  if (installationId !== null && getInstallation(ctx, installationId).roomId !== room.id) {
+    throw new RecordError('invalid', `installationId: installation ${installationId} is not in room ${room.code}`);
+  }
+  const results = evaluate(ctx, content.input);
+  const now = ctx.now();
+  const id = ctx.newId();
+  write(ctx, 'Assessment', () => {
+    ctx.db.prepare('INSERT INTO assessment (id, room_id, installation_id, created_at) VALUES (?, ?, ?, ?)').run(id, room.id, installationId, now);
+    insertRevisionRow(ctx, {
+      id: ctx.newId(),
+      assessment_id: id,
+      revision_no: 1,
+      status: 'draft',
+      content_json: JSON.stringify(content),
+      results_json: JSON.stringify(results),
+      calculated_with: ctx.calculatedWith,
+      based_on: null,
+      created_at: now,
+      updated_at: now,
+      title: content.title,
+      review_by: content.reviewBy,
+    });
+    ctx.audit('created', 'assessment', id, content.title);
+  });
+  return getAssessment(ctx, id);
+}
+
+export function saveAssessment(ctx: StoreContext, id: Id, rawContent: AssessmentContent): Assessment {
+  const content = normaliseContent(rawContent);
+  getAssessmentRow(ctx, id);
+  const results = evaluate(ctx, content.input);
+  const now = ctx.now();
+  write(ctx, 'Assessment', () => {
+    const current = newestRevisionRow(ctx, id);
+    if (current.status === 'draft') {
+      ctx.db
+        .prepare(
+          `UPDATE revision SET content_json = ?, results_json = ?, calculated_with = ?, updated_at = ?, title = ?, review_by = ?
+           WHERE id = ? AND status = 'draft'`,
+        )
+        .run(JSON.stringify(content), JSON.stringify(results), ctx.calculatedWith, now, content.title, content.reviewBy, current.id);
+      ctx.audit('saved', 'revision', current.id, `revision ${current.revision_no}`);
+    } else {
+      const revId = ctx.newId();
+      insertRevisionRow(ctx, {
+        id: revId,
+        assessment_id: id,
+        revision_no: current.revision_no + 1,
+        status: 'draft',
+        content_json: JSON.stringify(content),
+        results_json: JSON.stringify(results),
+        calculated_with: ctx.calculatedWith,
+        based_on: current.id,
+        created_at: now,
+        updated_at: now,
+        title: content.title,
+        review_by: content.reviewBy,
+      });
+      ctx.audit('revised', 'revision', revId, `revision ${current.revision_no + 1} based on ${current.revision_no}`);
+    }
+  });
+  return getAssessment(ctx, id);
+}
+
+export function discardDraft(ctx: StoreContext, id: Id): void {
+  getAssessmentRow(ctx, id);
+  write(ctx, 'Draft', () => {
+    const current = newestRevisionRow(ctx, id);
+    if (current.status !== 'draft') throw new RecordError('conflict', `Assessment ${id} has no open draft (revision ${current.revision_no} is ${current.status})`);
+    ctx.db.prepare("DELETE FROM revision WHERE id = ? AND status = 'draft'").run(current.id);
+    if (current.revision_no === 1) ctx.db.prepare('DELETE FROM assessment WHERE id = ?').run(id);
+    ctx.audit('discarded', 'revision', current.id, `revision ${current.revision_no}`);
+  });
+}
+
+export function statementFor(
+  a: AssessmentRow,
+  r: Pick<RevisionRow, 'id' | 'revision_no'>,
+  s: Omit<SignatureRow, 'public_key' | 'signature' | 'algorithm' | 'key_id' | 'revision_id'>): SignedStatement {
+  return {
+    format: 'beamwarden-signed-statement',
+    version: 1,
+    assessmentId: a.id,
+    roomId: a.room_id,
+    installationId: a.installation_id,
+    revisionId: r.id,
+    revisionNo: r.revision_no,
+    fingerprint: s.fingerprint,
+    personId: s.person_id,
+    name: s.name,
+    role: s.role,
+    signedAt: s.signed_at,
+    statement: s.statement,
+  };
+}
+
+export function registerKey(ctx: StoreContext, keyId: string, publicKey: string, origin: 'this-database' | 'imported'): void {
+  ctx.db
+    .prepare('INSERT INTO signing_key (key_id, public_key, origin, added_at) VALUES (?, ?, ?, ?) ON CONFLICT(key_id) DO NOTHING')
+    .run(keyId, publicKey, origin, ctx.now());
+}
+
+export function signAssessment(ctx: StoreContext, id: Id, rawSignOff: SignOff): Assessment {
+  const signOff = parseOrThrow(SignOffSchema, rawSignOff, 'Sign-off');
+  if (signOff.personId !== undefined) getPerson(ctx, signOff.personId);
+  const a = getAssessmentRow(ctx, id);
+  const draft = newestRevisionRow(ctx, id);
+  if (draft.status !== 'draft') throw new RecordError('conflict', `Nothing to sign: revision ${draft.revision_no} is already ${draft.status}`);
+  const content = parseOrThrow(AssessmentContentSchema, JSON.parse(draft.content_json), 'Draft content');
+  // Sign what this core computes now, so the signed results are never stale.
+  const results = evaluate(ctx, content.input);
+  const key = ctx.signingKey();
+  const signedAt = signOff.signedAt ?? ctx.now();
+  write(ctx, 'Sign-off', () => {
+    const again = newestRevisionRow(ctx, id);
+    if (again.id !== draft.id || again.status !== 'draft') throw new RecordError('conflict', 'The assessment changed while signing; try again');
+    const resultsJson = JSON.stringify(results);
+    if (resultsJson !== draft.results_json || draft.calculated_with !== ctx.calculatedWith) {
+      ctx.db.prepare("UPDATE revision SET results_json = ?, calculated_with = ? WHERE id = ? AND status = 'draft'").run(resultsJson, ctx.calculatedWith, draft.id);
+    }
+    registerKey(ctx, key.keyId, key.publicKeyPem, 'this-database');
+    const fingerprint = fingerprintOf(content, results, ctx.calculatedWith);
+    const fields = {
+      person_id: signOff.personId ?? null,
+      name: signOff.name,
+      role: signOff.role,
+      signed_at: signedAt,
+      statement: signOff.statement,
+      fingerprint,
+    };
+    const signature = signStatement(key, statementFor(a, draft, fields));
+    ctx.db
+      .prepare(
+        `INSERT INTO signature (revision_id, person_id, name, role, signed_at, statement, fingerprint, algorithm, signature, key_id)
+         VALUES (?, ?, ?, ?, ?, ?, ?, 'Ed25519', ?, ?)`,
+      )
+      .run(draft.id, fields.person_id, fields.name, fields.role, fields.signed_at, fields.statement, fingerprint, signature, key.keyId);
+    ctx.db.prepare("UPDATE revision SET status = 'superseded' WHERE assessment_id = ? AND status = 'signed'").run(id);
+    ctx.db.prepare("UPDATE revision SET status = 'signed' WHERE id = ?").run(draft.id);
+    ctx.audit('signed', 'revision', draft.id, `revision ${draft.revision_no} by ${signOff.name} (${signOff.role})`);
+  });
+  return getAssessment(ctx, id);
+}
+
+// ---------------------------------------------------------------- verify
+
+const MAX_DIFFERENCES = 200;
+
+export function verifyAssessment(ctx: StoreContext, assessmentId: Id, revisionId?: Id): VerifyReport {
+  const a = getAssessmentRow(ctx, assessmentId);
+  let r: RevisionRow;
+  if (revisionId !== undefined) {
+    r = getRevisionRow(ctx, revisionId);
+    if (r.assessment_id !== assessmentId) throw new RecordError('invalid', `Revision ${revisionId} does not belong to assessment ${assessmentId}`);
+  } else {
+    r =
+      (ctx.db
+        .prepare("SELECT * FROM revision WHERE assessment_id = ? AND status <> 'draft' ORDER BY revision_no DESC LIMIT 1")
+        .get(assessmentId) as RevisionRow | undefined) ?? newestRevisionRow(ctx, assessmentId);
+  }
+  const findings: string[] = [];
+  const sig = getSignatureRow(ctx, r.id);
+
+  // 1. Stored content and results readable?
+  let content: AssessmentContent | null = null;
+  let storedResults: unknown = null;
+  try {
+    storedResults = JSON.parse(r.results_json);
+    const c = AssessmentContentSchema.safeParse(JSON.parse(r.content_json));
+    if (c.success) content = c.data;
+    else findings.push(`The stored content is not a valid assessment (${c.error.issues[0]?.message ?? 'schema'}): it was changed outside Beamwarden.`);
+  } catch {
+    findings.push('The stored content or results are not valid JSON: the record was changed outside Beamwarden.');
+  }
+
+  // 2. Recompute with this core.
+  let differences: FieldDifference[] = [];
+  let resultsMatchCore = false;
+  if (content !== null) {
+    try {
+      const recomputed = ctx.evaluate(content.input);
+      resultsMatchCore = canonicalJson(recomputed) === canonicalJson(storedResults);
+      if (!resultsMatchCore) {
+        differences = diffValues(storedResults, recomputed, 'results');
+        findings.push(
+          r.calculated_with === ctx.calculatedWith
+            ? `Recomputing the stored inputs gives different results (${differences.length} values) with the same core version: the stored results were changed.`
+            : `Recomputing with ${ctx.calculatedWith} gives different results (${differences.length} values) from those stored by ${r.calculated_with}.`,
+        );
+      }
+    } catch (e) {
+      findings.push(`The stored inputs cannot be recomputed with ${ctx.calculatedWith}: ${(e as Error).message}`);
+    }
+  }
+  if (differences.length > MAX_DIFFERENCES) {
+    findings.push(`Only the first ${MAX_DIFFERENCES} of ${differences.length} differences are listed.`);
+    differences = differences.slice(0, MAX_DIFFERENCES);
+  }
+
+  // 3. Fingerprint and signature.
+  let fingerprintMatches = false;
+  let signatureValid = false;
+  let keyKnown = false;
+  if (!sig) {
+    findings.push(
+      r.status === 'draft'
+        ? `Revision ${r.revision_no} is a draft: it has not been signed, so there is nothing to check it against.`
+        : `Revision ${r.revision_no} is marked ${r.status} but its signature is missing: the record was changed outside Beamwarden.`,
+    );
+  } else {
+    if (content !== null && RoomResultSchema.safeParse(storedResults).success) {
+      fingerprintMatches = fingerprintOf(content, storedResults as RoomResult, r.calculated_with) === sig.fingerprint;
+    }
+    if (!fingerprintMatches) findings.push('The fingerprint does not match the stored content and results: they were changed after signing.');
+    keyKnown = sig.public_key !== null && keyIdOf(sig.public_key) === sig.key_id;
+    if (!keyKnown) findings.push('The signing key of this signature is missing from the database or does not match its key id.');
+    signatureValid = keyKnown && sig.public_key !== null && verifyStatement(sig.public_key, statementFor(a, r, sig), sig.signature);
+    if (!signatureValid) findings.push('The signature is not valid for the signer, date, statement and fingerprint recorded: the sign-off was changed.');
+    if (r.status === 'draft') findings.push('A signature exists but the revision is marked as a draft: the status was changed outside Beamwarden.');
+  }
+  const signed = sig !== undefined && r.status !== 'draft';
+  const ok = signed && fingerprintMatches && signatureValid && keyKnown && resultsMatchCore;
+  if (ok) findings.push(`Revision ${r.revision_no} is intact: fingerprint, signature and recomputed results all match.`);
+  return {
+    ok,
+    assessmentId,
+    revisionId: r.id,
+    revisionNo: r.revision_no,
+    status: r.status,
+    signed,
+    fingerprintMatches,
+    signatureValid,
+    keyKnown,
+    resultsMatchCore,
+    calculatedWith: r.calculated_with,
+    verifiedWith: ctx.calculatedWith,
+    differences,
+    findings,
+  };
+}

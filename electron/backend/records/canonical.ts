@@ -1,0 +1,41 @@
+/**
+ * Canonical serialisation for fingerprints and signatures: JSON with object keys sorted by UTF-16
+ * code units, no whitespace, strings (including the core's decimal strings) written exactly as
+ * stored, numbers in JavaScript's shortest round-trip form. Properties whose value is `undefined`
+ * are left out (as JSON.stringify does), so an absent optional field and an undefined one hash alike.
+ * Anything that JSON cannot carry exactly (NaN, Infinity, functions, bigint, non-plain objects)
+ * is refused rather than silently changed, because a fingerprint must describe the record exactly.
+ */
+export function canonicalJson(value: unknown): string {
+  return write(value, '$');
+}
+
+function write(value: unknown, path: string): string {
+  if (value === null) return 'null';
+  switch (typeof value) {
+    case 'string':
+      return JSON.stringify(value);
+    case 'boolean':
+      return value ? 'true' : 'false';
+    case 'number':
+      if (!Number.isFinite(value)) throw new TypeError(`canonicalJson: ${path} is ${value}, which JSON cannot represent`);
+      // -0 and 0 are the same number in a record; JSON.stringify(-0) is "0" too.
+      return JSON.stringify(value);
+    case 'object': {
+      if (Array.isArray(value)) {
+        return `[${value.map((v, i) => (v === undefined ? 'null' : write(v, `${path}[${i}]`))).join(',')}]`;
+      }
+      const proto: unknown = Object.getPrototypeOf(value);
+      if (proto !== Object.prototype && proto !== null) {
+        throw new TypeError(`canonicalJson: ${path} is not a plain object`);
+      }
+      const obj = value as Record<string, unknown>;
+      const keys = Object.keys(obj)
+        .filter((k) => obj[k] !== undefined)
+        .sort();
+      return `{${keys.map((k) => `${JSON.stringify(k)}:${write(obj[k], `${path}.${k}`)}`).join(',')}}`;
+    }
+    default:
+      throw new TypeError(`canonicalJson: ${path} has type ${typeof value}, which JSON cannot represent`);
+  }
+}

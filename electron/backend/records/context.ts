@@ -1,0 +1,63 @@
+/** What every part of the store shares: the connection, the clock, ids, the core and the signing key. */
+import { randomUUID } from 'node:crypto';
+import type { z } from 'zod';
+import { formatZodIssues } from '../schemas/issues.js';
+import type { Evaluate } from './core-link.js';
+import type { Db } from './database.js';
+import { loadOrCreateSigningKey, type SigningKey } from './signing.js';
+import { RecordError } from './types.js';
+
+export interface StoreContext {
+  readonly db: Db;
+  readonly keyDir: string;
+  readonly evaluate: Evaluate;
+  readonly calculatedWith: string;
+  now(): string;
+  newId(): string;
+  /** Loaded (or created) on first use: a database that never signs needs no key. */
+  signingKey(): SigningKey;
+  audit(action: string, entity: string, entityId: string, detail?: string): void;
+}
+
+export function makeContext(db: Db, keyDir: string, evaluate: Evaluate, calculatedWith: string): StoreContext {
+  let key: SigningKey | undefined;
+  const insertAudit = db.prepare('INSERT INTO audit_event (at, action, entity, entity_id, detail) VALUES (?, ?, ?, ?, ?)');
+  return {
+    db,
+    keyDir,
+    evaluate,
+    calculatedWith,
+    now: () => new Date().toISOString(),
+    newId: () => randomUUID(),
+    signingKey() {
+      key ??= loadOrCreateSigningKey(keyDir);
+      return key;
+    },
+    audit(action, entity, entityId, detail = '') {
+      insertAudit.run(new Date().toISOString(), action, entity, entityId, detail);
+    },
+  };
+}
+
+/** Validate with a zod schema or throw RecordError('invalid') naming every path and problem. */
+export function parseOrThrow<S extends z.ZodType>(schema: S, value: unknown, what: string): z.output<S> {
+  const r = schema.safeParse(value);
+  if (r.success) return r.data;
+  const issues = formatZodIssues(r.error);
+  const shown = issues.slice(0, 10).map((i) => `${i.path}: ${i.problem}`).join('; ');
+  throw new RecordError('invalid', `${what} is not valid: ${shown}${issues.length > 10 ? ` (and ${issues.length - 10} more)` : ''}`, issues);
+}
+
+export function notFound(kind: string, id: string): RecordError {
+  return new RecordError('not-found', `No ${kind} with id ${id}`);
+}
+
+/** Map SQLite constraint errors (raised by our triggers and keys) to RecordError with plain words. */
+export function translateSqliteError(e: unknown, what: string): unknown {
+  if (!(e instanceof Error) || !('code' in e)) return e;
+  const code = String((e as { code: unknown }).code);
+  if (e.message.startsWith('beamwarden: ')) return new RecordError('immutable', e.message.slice('beamwarden: '.length));
+  if (code === 'SQLITE_CONSTRAINT_FOREIGNKEY') return new RecordError('conflict', `${what}: other records still refer to it (or it refers to a record that does not exist)`);
+  if (code === 'SQLITE_CONSTRAINT_UNIQUE' || code === 'SQLITE_CONSTRAINT_PRIMARYKEY') return new RecordError('conflict', `${what}: ${e.message.replace(/^UNIQUE constraint failed: /, 'already exists: ')}`);
+  return e;
+}

@@ -1,0 +1,318 @@
+/**
+ * CSV import of a laser inventory into one room: one row per beam (a laser with two wavelengths
+ * or modes takes two rows with the same `laser` name). The columns are documented in README.md,
+ * "CSV columns for laser inventory import". Cells with quantities take a unit ("5 mW",
+ * "10.6 µm", "35 fs"); a bare number is read in the column's default unit.
+ *
+ * Policy: every row is checked first and every problem is reported with its spreadsheet row
+ * number (the header is row 1), column and problem; if any row is bad nothing is imported.
+ * Otherwise all lasers are added in one transaction.
+ */
+import type { BeamInput, LaserInput } from '../../../core/model/inputs.js';
+import { parseQuantity, type Dimension } from '../../../core/units/quantities.js';
+import { BeamInputSchema, LaserClassSchema } from '../schemas/inputs.js';
+import { translateSqliteError, type StoreContext } from './context.js';
+import { getRoom, insertInstallation } from './register.js';
+import { RecordError, type CsvImportReport, type Id, type LaserInstallation } from './types.js';
+
+// ---------------------------------------------------------------- RFC 4180 parsing
+
+/** Parse CSV text into records of cells. Handles quotes, doubled quotes, CRLF and a UTF-8 BOM. */
+export function parseCsv(text: string, delimiter: ',' | ';'): string[][] {
+  const records: string[][] = [];
+  let row: string[] = [];
+  let cell = '';
+  let quoted = false;
+  let i = text.charCodeAt(0) === 0xfeff ? 1 : 0;
+  for (; i < text.length; i++) {
+    const ch = text[i];
+    if (quoted) {
+      if (ch === '"') {
+        if (text[i + 1] === '"') {
+          cell += '"';
+          i++;
+        } else quoted = false;
+      } else cell += ch;
+    } else if (ch === '"' && cell === '') quoted = true;
+    else if (ch === delimiter) {
+      row.push(cell);
+      cell = '';
+    } else if (ch === '\n' || ch === '\r') {
+      if (ch === '\r' && text[i + 1] === '\n') i++;
+      row.push(cell);
+      records.push(row);
+      row = [];
+      cell = '';
+    } else cell += ch;
+  }
+  if (quoted) throw new RecordError('invalid', 'CSV: a quoted cell is not closed (missing ")');
+  if (cell !== '' || row.length > 0) {
+    row.push(cell);
+    records.push(row);
+  }
+  return records;
+}
+
+/** Spreadsheets in decimal-comma locales write ';' between cells. */
+function detectDelimiter(headerLine: string): ',' | ';' {
+  const commas = headerLine.split(',').length;
+  const semis = headerLine.split(';').length;
+  return semis > commas ? ';' : ',';
+}
+
+// ---------------------------------------------------------------- columns
+
+interface QuantityColumn {
+  readonly dim: Dimension;
+  readonly unit: string;
+}
+/** Quantity columns and the unit a bare number is read in (what datasheets usually print). */
+export const QUANTITY_COLUMNS: Readonly<Record<string, QuantityColumn>> = {
+  wavelength: { dim: 'wavelength', unit: 'nm' },
+  power: { dim: 'power', unit: 'W' },
+  pulse_energy: { dim: 'energy', unit: 'J' },
+  pulse_duration: { dim: 'time', unit: 's' },
+  repetition_rate: { dim: 'frequency', unit: 'Hz' },
+  beam_diameter: { dim: 'length', unit: 'mm' },
+  divergence: { dim: 'angle', unit: 'mrad' },
+  exposure_duration: { dim: 'time', unit: 's' },
+};
+const TEXT_COLUMNS = [
+  'laser',
+  'laser_type',
+  'maker',
+  'model',
+  'serial_number',
+  'registration_number',
+  'class',
+  'status',
+  'laser_notes',
+  'beam_id',
+  'beam_label',
+  'emission',
+  'beam_definition',
+] as const;
+export const CSV_COLUMNS: readonly string[] = [...TEXT_COLUMNS, ...Object.keys(QUANTITY_COLUMNS)];
+const REQUIRED = ['laser', 'wavelength', 'emission', 'beam_diameter', 'divergence', 'beam_definition'] as const;
+/** Columns describing the laser, not the beam: rows of one laser must agree on them. */
+const LASER_LEVEL = ['laser_type', 'maker', 'model', 'serial_number', 'registration_number', 'class', 'status', 'laser_notes'] as const;
+
+/** Where a BeamInput schema problem is shown: the CSV column it came from. */
+const COLUMN_OF_PATH: Readonly<Record<string, string>> = {
+  wavelength_nm: 'wavelength',
+  'emission.power_W': 'power',
+  'emission.pulseEnergy_J': 'pulse_energy',
+  'emission.pulseDuration_s': 'pulse_duration',
+  'emission.repetitionRate_Hz': 'repetition_rate',
+  'beam.diameter_m': 'beam_diameter',
+  'beam.divergence_rad': 'divergence',
+  'beam.definition': 'beam_definition',
+  exposureDuration_s: 'exposure_duration',
+  id: 'beam_id',
+  label: 'beam_label',
+};
+
+type CsvError = { row: number; column: string; problem: string };
+
+const MAX_ROWS = 10_000;
+
+interface LaserGroup {
+  name: string;
+  firstRow: number;
+  fields: Partial<Record<(typeof LASER_LEVEL)[number], string>>;
+  beams: Array<{ row: number; beam: BeamInput; givenId: string | null }>;
+}
+
+export function importLaserCsv(ctx: StoreContext, roomId: Id, csvText: string): CsvImportReport {
+  getRoom(ctx, roomId);
+  const firstLine = csvText.replace(/^\uFEFF/, '').split(/\r?\n/, 1)[0] ?? '';
+  const records = parseCsv(csvText, detectDelimiter(firstLine)).filter((r) => r.some((c) => c.trim() !== ''));
+  const errors: CsvError[] = [];
+  const header = (records[0] ?? []).map((h) => h.trim().toLowerCase());
+  if (header.length === 0) return { imported: 0, errors: [{ row: 1, column: '(header)', problem: 'the file is empty: a header row is needed' }], installationIds: [] };
+  if (records.length - 1 > MAX_ROWS) {
+    return { imported: 0, errors: [{ row: MAX_ROWS + 2, column: '(file)', problem: `more than ${MAX_ROWS} rows; split the file` }], installationIds: [] };
+  }
+  header.forEach((h, i) => {
+    if (!CSV_COLUMNS.includes(h)) errors.push({ row: 1, column: h || `(column ${i + 1})`, problem: `unknown column; known columns: ${CSV_COLUMNS.join(', ')}` });
+    if (header.indexOf(h) !== i) errors.push({ row: 1, column: h, problem: 'column appears twice' });
+  });
+  for (const req of REQUIRED) if (!header.includes(req)) errors.push({ row: 1, column: req, problem: 'required column is missing' });
+  if (errors.length) return { imported: 0, errors, installationIds: [] };
+  if (records.length < 2) return { imported: 0, errors: [{ row: 2, column: '(file)', problem: 'no data rows after the header' }], installationIds: [] };
+
+  const groups = new Map<string, LaserGroup>();
+  records.slice(1).forEach((cells, idx) => {
+    const row = idx + 2;
+    const cell = (col: string): string => {
+      const i = header.indexOf(col);
+      return i < 0 ? '' : (cells[i] ?? '').trim();
+    };
+    if (cells.length > header.length) errors.push({ row, column: `(column ${header.length + 1})`, problem: `more cells (${cells.length}) than header columns (${header.length})` });
+    const rowErrors: CsvError[] = [];
+    for (const req of REQUIRED) if (cell(req) === '') rowErrors.push({ row, column: req, problem: 'required, but empty' });
+
+    const q = (col: keyof typeof QUANTITY_COLUMNS): number | undefined => {
+      const text = cell(col);
+      if (text === '') return undefined;
+      const spec = QUANTITY_COLUMNS[col];
+      if (!spec) return undefined;
+      try {
+        const si = parseQuantity(col, text, spec.dim, spec.unit).value;
+        // The parser gives metres; wavelengths are carried in nm (decimal arithmetic, so 1064 stays 1064).
+        return Number((spec.dim === 'wavelength' ? si.mul(1e9) : si).toString());
+      } catch {
+        rowErrors.push({ row, column: col, problem: `"${text}" is not a ${spec.dim} (e.g. "${exampleFor(col)}"; a bare number is read in ${spec.unit})` });
+        return undefined;
+      }
+    };
+    const wavelength_nm = q('wavelength');
+    const emissionKind = cell('emission').toLowerCase();
+    const power_W = q('power');
+    const pulseEnergy_J = q('pulse_energy');
+    const pulseDuration_s = q('pulse_duration');
+    const repetitionRate_Hz = q('repetition_rate');
+    const diameter_m = q('beam_diameter');
+    const divergence_rad = q('divergence');
+    const exposureDuration_s = q('exposure_duration');
+
+    if (emissionKind !== '' && emissionKind !== 'cw' && emissionKind !== 'pulsed') rowErrors.push({ row, column: 'emission', problem: `must be "cw" or "pulsed" (got "${cell('emission')}")` });
+    if (emissionKind === 'cw') {
+      if (cell('power') === '') rowErrors.push({ row, column: 'power', problem: 'required for a cw beam' });
+      for (const c of ['pulse_energy', 'pulse_duration', 'repetition_rate']) if (cell(c) !== '') rowErrors.push({ row, column: c, problem: 'only for pulsed beams; leave empty for cw' });
+    }
+    if (emissionKind === 'pulsed') {
+      if (cell('pulse_energy') === '') rowErrors.push({ row, column: 'pulse_energy', problem: 'required for a pulsed beam' });
+      if (cell('pulse_duration') === '') rowErrors.push({ row, column: 'pulse_duration', problem: 'required for a pulsed beam' });
+      if (cell('power') !== '') rowErrors.push({ row, column: 'power', problem: 'give pulse_energy (and repetition_rate) for a pulsed beam, not power' });
+    }
+    const cls = cell('class').toUpperCase();
+    if (cls !== '' && !LaserClassSchema.safeParse(cls).success) rowErrors.push({ row, column: 'class', problem: `must be one of 1, 1M, 2, 2M, 3R, 3B, 4 (got "${cell('class')}")` });
+    const status = cell('status').toLowerCase();
+    if (status !== '' && status !== 'in-service' && status !== 'retired') rowErrors.push({ row, column: 'status', problem: 'must be "in-service" or "retired"' });
+
+    if (rowErrors.length === 0) {
+      const beamDraft: Record<string, unknown> = {
+        wavelength_nm,
+        emission:
+          emissionKind === 'cw'
+            ? { kind: 'cw', power_W }
+            : { kind: 'pulsed', pulseEnergy_J, pulseDuration_s, ...(repetitionRate_Hz !== undefined ? { repetitionRate_Hz } : {}) },
+        beam: { diameter_m: diameter_m !== undefined ? diameter_m : undefined, divergence_rad, definition: normaliseDefinition(cell('beam_definition')) },
+        ...(cell('beam_label') !== '' ? { label: cell('beam_label') } : {}),
+        ...(exposureDuration_s !== undefined ? { exposureDuration_s } : {}),
+      };
+      const parsed = BeamInputSchema.safeParse(beamDraft);
+      if (!parsed.success) {
+        for (const issue of parsed.error.issues) {
+          const path = issue.path.map(String).join('.');
+          rowErrors.push({ row, column: COLUMN_OF_PATH[path] ?? path, problem: issue.message });
+        }
+      } else {
+        const name = cell('laser');
+        let g = groups.get(name);
+        if (!g) {
+          g = { name, firstRow: row, fields: {}, beams: [] };
+          groups.set(name, g);
+        }
+        for (const col of LASER_LEVEL) {
+          let v = cell(col);
+          if (col === 'class') v = cls;
+          if (col === 'status') v = status;
+          if (v === '') continue;
+          const before = g.fields[col];
+          if (before !== undefined && before !== v) rowErrors.push({ row, column: col, problem: `"${v}" differs from "${before}" on row ${g.firstRow} for the same laser "${name}"` });
+          else g.fields[col] = v;
+        }
+        g.beams.push({ row, beam: parsed.data, givenId: cell('beam_id') || null });
+      }
+    }
+    errors.push(...rowErrors);
+  });
+
+  // Beam ids must be unique within the room (assessments refer to beams by id).
+  const existingBeamIds = new Set<string>();
+  for (const r of ctx.db.prepare('SELECT laser_json FROM laser_installation WHERE room_id = ?').all(roomId) as Array<{ laser_json: string }>) {
+    const l = JSON.parse(r.laser_json) as LaserInput;
+    l.beams.forEach((b) => b.id !== undefined && existingBeamIds.add(b.id));
+  }
+  const seenIds = new Map<string, number>();
+  for (const g of groups.values()) {
+    for (const b of g.beams) {
+      if (b.givenId === null) continue;
+      if (existingBeamIds.has(b.givenId)) errors.push({ row: b.row, column: 'beam_id', problem: `beam id "${b.givenId}" is already used in this room` });
+      const prev = seenIds.get(b.givenId);
+      if (prev !== undefined) errors.push({ row: b.row, column: 'beam_id', problem: `beam id "${b.givenId}" is also on row ${prev}` });
+      seenIds.set(b.givenId, b.row);
+    }
+  }
+
+  if (errors.length) {
+    errors.sort((a, b) => a.row - b.row);
+    return { imported: 0, errors, installationIds: [] };
+  }
+
+  const now = ctx.now();
+  const installations: LaserInstallation[] = [...groups.values()].map((g) => {
+    const id = ctx.newId();
+    const cls = g.fields.class;
+    const laser: LaserInput = {
+      id,
+      name: g.name,
+      ...(cls ? { classAsLabelled: LaserClassSchema.parse(cls) } : {}),
+      beams: g.beams.map((b, i) => ({ ...b.beam, id: b.givenId ?? `${id.slice(0, 8)}-${i + 1}` })),
+    };
+    return {
+      id,
+      roomId,
+      laserType: g.fields.laser_type ?? '',
+      maker: g.fields.maker ?? '',
+      model: g.fields.model ?? '',
+      serialNumber: g.fields.serial_number ?? '',
+      registrationNumber: g.fields.registration_number ?? '',
+      laser,
+      classAsLabelled: laser.classAsLabelled ?? null,
+      status: g.fields.status === 'retired' ? 'retired' : 'in-service',
+      notes: g.fields.laser_notes ?? '',
+      createdAt: now,
+      updatedAt: now,
+    };
+  });
+  try {
+    ctx.db
+      .transaction(() => {
+        for (const inst of installations) insertInstallation(ctx, inst);
+        ctx.audit('imported-csv', 'room', roomId, `${installations.length} lasers`);
+      })
+      .immediate();
+  } catch (e) {
+    throw translateSqliteError(e, 'CSV import (nothing was imported)');
+  }
+  return { imported: installations.length, errors: [], installationIds: installations.map((i) => i.id) };
+}
+
+function normaliseDefinition(text: string): string {
+  const t = text.replace(/\s+/g, '').replace('²', '2').replace('^2', '2').toLowerCase();
+  return t === '1/e' || t === '1/e2' || t === 'd63' ? t : text;
+}
+
+function exampleFor(col: string): string {
+  switch (col) {
+    case 'wavelength':
+      return '1064 nm';
+    case 'power':
+      return '5 mW';
+    case 'pulse_energy':
+      return '4 mJ';
+    case 'pulse_duration':
+      return '10 ns';
+    case 'repetition_rate':
+      return '1 kHz';
+    case 'beam_diameter':
+      return '2 mm';
+    case 'divergence':
+      return '0.5 mrad';
+    default:
+      return '0.25 s';
+  }
+}

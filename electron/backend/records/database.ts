@@ -1,0 +1,180 @@
+/**
+ * Opening the SQLite file: checks, pragmas and migrations.
+ *
+ * - `integrity_check` at every open, with a clear error naming the file and what to do.
+ * - WAL journal (readers never block the writer; a crash leaves only whole transactions) with
+ *   synchronous=FULL, so a signed record survives a power cut once `sign` has returned
+ *   (SQLite documentation, "Write-Ahead Logging" and "PRAGMA synchronous").
+ * - foreign_keys ON (SQLite leaves it off by default, per connection).
+ * - Migrations forward-only, each in one IMMEDIATE transaction together with its `user_version`
+ *   and `schema_migrations` entry; a copy of the file is written (VACUUM INTO) before the first.
+ * - A database newer than this code, or with a migration history that is not a prefix of ours,
+ *   is refused: an old build must never write to a newer schema.
+ */
+import Database from 'better-sqlite3';
+import { existsSync, mkdirSync, statSync } from 'node:fs';
+import { dirname } from 'node:path';
+import { LATEST_VERSION, MIGRATIONS } from './migrations/index.js';
+import { RecordError } from './types.js';
+
+export type Db = Database.Database;
+
+export interface OpenDatabaseOptions {
+  readonly nativeBinding?: string;
+  readonly readonly?: boolean;
+  /** Stop at this schema version (test fixtures only); default the latest. */
+  readonly targetVersion?: number;
+}
+
+export interface OpenedDatabase {
+  readonly db: Db;
+  readonly schemaVersion: number;
+  readonly migrationBackups: string[];
+}
+
+function sqliteMessage(e: unknown): string {
+  return e instanceof Error ? e.message : String(e);
+}
+
+export function openDatabase(path: string, opts: OpenDatabaseOptions = {}): OpenedDatabase {
+  const readonly = opts.readonly === true;
+  const target = opts.targetVersion ?? LATEST_VERSION;
+  if (!Number.isInteger(target) || target < 1 || target > LATEST_VERSION) {
+    throw new RangeError(`targetVersion must be 1..${LATEST_VERSION}`);
+  }
+  if (!readonly) mkdirSync(dirname(path), { recursive: true });
+  const existedBefore = existsSync(path) && statSync(path).size > 0;
+
+  let db: Db;
+  try {
+    db = new Database(path, {
+      readonly,
+      fileMustExist: readonly,
+      ...(opts.nativeBinding !== undefined ? { nativeBinding: opts.nativeBinding } : {}),
+    });
+  } catch (e) {
+    throw new RecordError('corrupt-database', `Cannot open the database ${path}: ${sqliteMessage(e)}`);
+  }
+  try {
+    db.pragma('busy_timeout = 5000');
+    checkIntegrity(db, path);
+    if (!readonly) {
+      const mode = db.pragma('journal_mode = WAL', { simple: true });
+      if (mode !== 'wal') throw new RecordError('corrupt-database', `The database ${path} cannot use WAL journaling (got ${String(mode)})`);
+      db.pragma('synchronous = FULL');
+    }
+    db.pragma('foreign_keys = ON');
+    const migrationBackups = migrate(db, path, target, readonly, existedBefore);
+    const schemaVersion = userVersion(db);
+    return { db, schemaVersion, migrationBackups };
+  } catch (e) {
+    db.close();
+    throw e;
+  }
+}
+
+function checkIntegrity(db: Db, path: string): void {
+  let rows: string[];
+  try {
+    const result = db.pragma('integrity_check') as Array<{ integrity_check: string }>;
+    rows = result.map((r) => r.integrity_check);
+  } catch (e) {
+    throw new RecordError(
+      'corrupt-database',
+      `${path} is not a Beamwarden database or is damaged (SQLite: ${sqliteMessage(e)}). Restore it from a backup (README: "Backup and restore").`,
+    );
+  }
+  if (rows.length !== 1 || rows[0] !== 'ok') {
+    throw new RecordError(
+      'corrupt-database',
+      `The database ${path} failed its integrity check: ${rows.slice(0, 5).join('; ')}${rows.length > 5 ? ` (and ${rows.length - 5} more)` : ''}. ` +
+        'Do not keep working in it: restore it from a backup (README: "Backup and restore").',
+    );
+  }
+}
+
+function userVersion(db: Db): number {
+  const v = db.pragma('user_version', { simple: true });
+  if (typeof v !== 'number') throw new RecordError('corrupt-database', 'PRAGMA user_version is not a number');
+  return v;
+}
+
+function hasTable(db: Db, name: string): boolean {
+  return db.prepare("SELECT 1 FROM sqlite_schema WHERE type = 'table' AND name = ?").get(name) !== undefined;
+}
+
+function checkHistory(db: Db, path: string, version: number): void {
+  if (version > LATEST_VERSION) {
+    throw new RecordError(
+      'newer-database',
+      `The database ${path} has schema version ${version}, newer than this Beamwarden build understands (${LATEST_VERSION}). ` +
+        'Open it with the newer Beamwarden that wrote it; this build will not change it.',
+    );
+  }
+  if (version === 0) {
+    const tables = db.prepare("SELECT count(*) AS n FROM sqlite_schema WHERE type = 'table'").get() as { n: number };
+    if (tables.n > 0) {
+      throw new RecordError('corrupt-database', `${path} is an SQLite database but not a Beamwarden one (it has tables but no Beamwarden schema version).`);
+    }
+    return;
+  }
+  if (!hasTable(db, 'schema_migrations')) {
+    throw new RecordError('corrupt-database', `${path} has schema version ${version} but no migration history: not a Beamwarden database.`);
+  }
+  const applied = db.prepare('SELECT version, name FROM schema_migrations ORDER BY version').all() as Array<{ version: number; name: string }>;
+  const isPrefix =
+    applied.length === version && applied.every((row, i) => row.version === i + 1 && row.name === MIGRATIONS[i]?.name);
+  if (!isPrefix) {
+    throw new RecordError(
+      'corrupt-database',
+      `The migration history of ${path} (${applied.map((r) => `${r.version}:${r.name}`).join(', ')}) does not match this build's; it was written by another build.`,
+    );
+  }
+}
+
+function backupName(path: string, fromVersion: number): string {
+  const stamp = new Date().toISOString().replace(/[:.]/g, '-');
+  return `${path}.before-migration-v${fromVersion}-${stamp}.sqlite`;
+}
+
+function migrate(db: Db, path: string, target: number, readonly: boolean, existedBefore: boolean): string[] {
+  const backups: string[] = [];
+  let version = userVersion(db);
+  checkHistory(db, path, version);
+  if (version >= target) return backups;
+  if (readonly) {
+    throw new RecordError('migration-failed', `The database ${path} has schema version ${version} and needs migrating to ${target}; open it read-write once.`);
+  }
+  if (existedBefore && version > 0) {
+    // A consistent copy of the whole database (including what is still in the WAL) before any change.
+    const copy = backupName(path, version);
+    db.prepare('VACUUM INTO ?').run(copy);
+    backups.push(copy);
+  }
+  for (const m of MIGRATIONS) {
+    if (m.version > target) break;
+    const apply = db.transaction(() => {
+      // Re-read inside the write lock: another process may have migrated meanwhile.
+      const now = userVersion(db);
+      if (now >= m.version) return;
+      if (now !== m.version - 1) throw new RecordError('migration-failed', `Cannot apply migration ${m.version} to schema version ${now}`);
+      db.exec(m.sql);
+      db.prepare('INSERT INTO schema_migrations (version, name, applied_at) VALUES (?, ?, ?)').run(m.version, m.name, new Date().toISOString());
+      if (!Number.isInteger(m.version)) throw new Error('migration version must be an integer');
+      // PRAGMA takes no bound parameters; m.version is an integer from our own list.
+      db.pragma(`user_version = ${m.version}`);
+    });
+    try {
+      apply.immediate();
+    } catch (e) {
+      if (e instanceof RecordError) throw e;
+      throw new RecordError(
+        'migration-failed',
+        `Migration ${m.version} (${m.name}) of ${path} failed and was rolled back: ${sqliteMessage(e)}` +
+          (backups.length ? `. The copy made before migrating is ${backups[0]}` : ''),
+      );
+    }
+    version = m.version;
+  }
+  return backups;
+}

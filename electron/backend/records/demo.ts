@@ -1,0 +1,81 @@
+/**
+ * The invented demo site (assets/demo/demo-scenario.json; every name, room and device is invented)
+ * loaded into the register on request, with one assessment per room so the screens and printed
+ * documents have something to show. The first room's assessment is signed by the demo officer.
+ */
+import { z } from 'zod';
+import demoScenario from '../../../assets/demo/demo-scenario.json' with { type: 'json' };
+import { EyewearSpecSchema, RoomInputSchema } from '../schemas/inputs.js';
+import { parseOrThrow, type StoreContext } from './context.js';
+import { createAssessment, newAssessmentContent, signAssessment } from './assessments.js';
+import { createEyewear, createInstallation, createPerson, createRoom, createSite, listSites } from './register.js';
+import type { AssessmentContent, ControlChoice, Site } from './types.js';
+
+/** Our own asset: validated, but extra fields are ignored so the scenario can grow. */
+export const DemoScenarioSchema = z.object({
+  about: z.string(),
+  site: z.object({ name: z.string().min(1), building: z.string(), kind: z.string() }),
+  officer: z.object({ name: z.string().min(1), phone: z.string().optional(), email: z.string().optional() }),
+  deputy: z.object({ name: z.string().min(1) }).optional(),
+  eyewear: z.array(EyewearSpecSchema),
+  rooms: z.array(
+    z.object({ code: z.string().min(1), name: z.string(), responsible: z.string(), notes: z.string(), input: RoomInputSchema }),
+  ),
+});
+export type DemoScenario = z.infer<typeof DemoScenarioSchema>;
+
+/** Typical controls for a Class 4 area (domain reference section 4), as an officer might record them. */
+const DEMO_CONTROLS: readonly ControlChoice[] = [
+  { category: 'engineering', measure: 'Interlocked entry door with warning light', decision: 'accepted', implementation: 'in-place' },
+  { category: 'engineering', measure: 'Beam enclosures and beam stops at the table edge', decision: 'accepted', implementation: 'to-do', owner: 'Responsible person', due: '2027-03-31' },
+  { category: 'administrative', measure: 'Written procedure for beam alignment', decision: 'accepted', implementation: 'in-place' },
+  { category: 'administrative', measure: 'Access restricted to authorised, trained users', decision: 'accepted', implementation: 'in-place' },
+  { category: 'ppe', measure: 'Laser eyewear as listed on the eyewear sheet', decision: 'accepted', implementation: 'in-place' },
+  { category: 'engineering', measure: 'Remote viewing by camera', decision: 'rejected', reason: 'Experiments need direct access to the optics; enclosures and eyewear used instead.' },
+];
+
+export function seedDemo(ctx: StoreContext, raw: unknown = demoScenario): Site {
+  const scenario = parseOrThrow(DemoScenarioSchema, raw, 'Demo scenario');
+  const existing = listSites(ctx).find((s) => s.name === scenario.site.name && s.building === scenario.site.building);
+  if (existing) return existing;
+  return ctx.db.transaction(() => {
+    const site = createSite(ctx, { name: scenario.site.name, building: scenario.site.building, notes: `${scenario.site.kind}. ${scenario.about}` });
+    const officer = createPerson(ctx, {
+      name: scenario.officer.name,
+      role: 'Laser safety officer',
+      ...(scenario.officer.email ? { email: scenario.officer.email } : {}),
+      ...(scenario.officer.phone ? { phone: scenario.officer.phone } : {}),
+    });
+    if (scenario.deputy) createPerson(ctx, { name: scenario.deputy.name, role: 'Deputy laser safety officer' });
+    for (const spec of scenario.eyewear) createEyewear(ctx, { siteId: site.id, spec, location: 'Eyewear cabinet, corridor B2' });
+    scenario.rooms.forEach((r, index) => {
+      const room = createRoom(ctx, { siteId: site.id, code: r.code, name: r.name, responsiblePerson: r.responsible, notes: r.notes });
+      for (const laser of r.input.lasers) {
+        createInstallation(ctx, { roomId: room.id, laser, laserType: laser.name });
+      }
+      const skeleton = newAssessmentContent(ctx, room.id);
+      const content: AssessmentContent = {
+        ...skeleton,
+        input: {
+          ...skeleton.input,
+          ...(r.input.ruleSet ? { ruleSet: r.input.ruleSet } : {}),
+          ...(r.input.settings ? { settings: r.input.settings } : {}),
+        },
+        controls: DEMO_CONTROLS,
+        notes: r.notes,
+        reviewBy: '2027-06-30',
+      };
+      const assessment = createAssessment(ctx, { roomId: room.id, content });
+      if (index === 0) {
+        signAssessment(ctx, assessment.id, {
+          personId: officer.id,
+          name: officer.name,
+          role: officer.role,
+          statement: 'I have evaluated the laser hazards of this area with the inputs and assumptions recorded here and approve the controls listed.',
+        });
+      }
+    });
+    ctx.audit('seeded-demo', 'site', site.id, scenario.site.name);
+    return site;
+  })();
+}

@@ -1,0 +1,405 @@
+/**
+ * Export and import: a whole site, one room or one assessment as one JSON document of our own
+ * design, `{ format: 'beamwarden-export', version: 1, ... }` (see types.ts ExportDocument).
+ *
+ * Import policy (all or nothing, one transaction):
+ * - The document is validated against ExportDocumentSchema (strict: unknown fields are errors),
+ *   then cross-checked (every reference resolves, ids are unique, every signed revision's
+ *   fingerprint and Ed25519 signature match its content). Any problem: nothing is written, and
+ *   the error lists each path and problem.
+ * - Records are matched by id. A record not present is added. A register entry (site, room,
+ *   installation, eyewear, person) already present is replaced only if the imported copy is newer
+ *   (updatedAt); a draft revision likewise. A signed revision already present must be identical,
+ *   otherwise the import is refused: two different signed records with one id mean one was altered.
+ */
+import { z } from 'zod';
+import { ExportDocumentSchema } from '../schemas/records.js';
+import { formatZodIssues } from '../schemas/issues.js';
+import { canonicalJson } from './canonical.js';
+import type { StoreContext } from './context.js';
+import { translateSqliteError } from './context.js';
+import { insertRevisionRow, registerKey, statementFor, type RevisionRow } from './assessments.js';
+import { getAssessment, getRevision, listRevisions } from './assessments.js';
+import {
+  getInstallation,
+  getRoom,
+  getSite,
+  insertEyewear,
+  insertInstallation,
+  insertPerson,
+  insertRoom,
+  insertSite,
+  listEyewear,
+  listInstallations,
+  listPeople,
+  listRooms,
+} from './register.js';
+import { getEyewear, getPerson } from './register.js';
+import { fingerprintOf, keyIdOf, verifyStatement } from './signing.js';
+import {
+  EXPORT_FORMAT,
+  EXPORT_VERSION,
+  RecordError,
+  type ExportDocument,
+  type ExportedAssessment,
+  type Id,
+  type ImportIssue,
+  type ImportSummary,
+  type Person,
+  type Revision,
+  type Room,
+  type Site,
+} from './types.js';
+
+// ---------------------------------------------------------------- export
+
+function assessmentIdsOfRooms(ctx: StoreContext, roomIds: readonly Id[]): Id[] {
+  const stmt = ctx.db.prepare('SELECT id FROM assessment WHERE room_id = ? ORDER BY created_at, id');
+  return roomIds.flatMap((rid) => (stmt.all(rid) as Array<{ id: string }>).map((r) => r.id));
+}
+
+function exportedAssessment(ctx: StoreContext, id: Id): ExportedAssessment {
+  const a = getAssessment(ctx, id);
+  const revisions = listRevisions(ctx, id).map((s) => getRevision(ctx, s.id));
+  return { id: a.id, roomId: a.roomId, installationId: a.installationId, createdAt: a.createdAt, revisions };
+}
+
+function signersOf(ctx: StoreContext, assessments: readonly ExportedAssessment[]): Person[] {
+  const ids = new Set<string>();
+  for (const a of assessments) for (const r of a.revisions) if (r.signature?.personId) ids.add(r.signature.personId);
+  return [...ids].sort().map((id) => getPerson(ctx, id));
+}
+
+function keysOf(assessments: readonly ExportedAssessment[]): ExportDocument['signingKeys'] {
+  const keys = new Map<string, string>();
+  for (const a of assessments) for (const r of a.revisions) if (r.signature) keys.set(r.signature.keyId, r.signature.publicKey);
+  return [...keys].sort(([a], [b]) => (a < b ? -1 : 1)).map(([keyId, publicKey]) => ({ keyId, publicKey }));
+}
+
+function document(
+  ctx: StoreContext,
+  scope: ExportDocument['scope'],
+  parts: Pick<ExportDocument, 'sites' | 'rooms' | 'installations' | 'eyewear' | 'assessments'> & { people?: Person[] },
+): ExportDocument {
+  return {
+    format: EXPORT_FORMAT,
+    version: EXPORT_VERSION,
+    exportedAt: ctx.now(),
+    scope,
+    sites: parts.sites,
+    rooms: parts.rooms,
+    installations: parts.installations,
+    eyewear: parts.eyewear,
+    people: parts.people ?? signersOf(ctx, parts.assessments),
+    assessments: parts.assessments,
+    signingKeys: keysOf(parts.assessments),
+  };
+}
+
+/** Everything about a site: its rooms, lasers, eyewear, assessments, and every person in the register. */
+export function exportSite(ctx: StoreContext, siteId: Id): ExportDocument {
+  const site = getSite(ctx, siteId);
+  const rooms = listRooms(ctx, siteId);
+  const assessments = assessmentIdsOfRooms(ctx, rooms.map((r) => r.id)).map((id) => exportedAssessment(ctx, id));
+  return document(ctx, { kind: 'site', id: siteId }, {
+    sites: [site],
+    rooms,
+    installations: rooms.flatMap((r) => listInstallations(ctx, r.id)),
+    eyewear: listEyewear(ctx, siteId),
+    people: listPeople(ctx),
+    assessments,
+  });
+}
+
+/** One room with its site entry, lasers, the site's eyewear, its assessments and their signers. */
+export function exportRoom(ctx: StoreContext, roomId: Id): ExportDocument {
+  const room = getRoom(ctx, roomId);
+  const assessments = assessmentIdsOfRooms(ctx, [roomId]).map((id) => exportedAssessment(ctx, id));
+  return document(ctx, { kind: 'room', id: roomId }, {
+    sites: [getSite(ctx, room.siteId)],
+    rooms: [room],
+    installations: listInstallations(ctx, roomId),
+    eyewear: listEyewear(ctx, room.siteId),
+    assessments,
+  });
+}
+
+/** One assessment with every revision, plus the site, room and installation it refers to. */
+export function exportAssessment(ctx: StoreContext, assessmentId: Id): ExportDocument {
+  const a = exportedAssessment(ctx, assessmentId);
+  const room = getRoom(ctx, a.roomId);
+  return document(ctx, { kind: 'assessment', id: assessmentId }, {
+    sites: [getSite(ctx, room.siteId)],
+    rooms: [room],
+    installations: a.installationId ? [getInstallation(ctx, a.installationId)] : [],
+    eyewear: [],
+    assessments: [a],
+  });
+}
+
+// ---------------------------------------------------------------- import: validation
+
+function invalid(issues: ImportIssue[]): RecordError {
+  const shown = issues.slice(0, 10).map((i) => `${i.path}: ${i.problem}`).join('; ');
+  return new RecordError('invalid', `The file cannot be imported, nothing was changed: ${shown}${issues.length > 10 ? ` (and ${issues.length - 10} more)` : ''}`, issues);
+}
+
+/** Parse JSON text (or take an object), check the format header first for a precise message. */
+export function parseExportDocument(input: unknown): ExportDocument {
+  let value: unknown = input;
+  if (typeof input === 'string') {
+    try {
+      value = JSON.parse(input);
+    } catch (e) {
+      throw invalid([{ path: '(document)', problem: `not valid JSON: ${(e as Error).message}` }]);
+    }
+  }
+  const header = z.object({ format: z.unknown(), version: z.unknown() }).safeParse(value);
+  if (!header.success) throw invalid([{ path: '(document)', problem: 'must be a JSON object with "format": "beamwarden-export"' }]);
+  if (header.data.format !== EXPORT_FORMAT) {
+    throw invalid([{ path: 'format', problem: `must be "${EXPORT_FORMAT}" (this is not a Beamwarden export file)` }]);
+  }
+  if (header.data.version !== EXPORT_VERSION) {
+    const v = JSON.stringify(header.data.version);
+    const newer = typeof header.data.version === 'number' && header.data.version > EXPORT_VERSION;
+    throw invalid([
+      {
+        path: 'version',
+        problem: `export version ${v} is not supported; this Beamwarden reads version ${EXPORT_VERSION}${newer ? ' (the file was written by a newer Beamwarden: update this one)' : ''}`,
+      },
+    ]);
+  }
+  const r = ExportDocumentSchema.safeParse(value);
+  if (!r.success) throw invalid(formatZodIssues(r.error));
+  return r.data;
+}
+
+function crossCheck(ctx: StoreContext, doc: ExportDocument): ImportIssue[] {
+  const issues: ImportIssue[] = [];
+  const exists = (table: 'site' | 'room' | 'laser_installation' | 'person', id: string) =>
+    ctx.db.prepare(`SELECT 1 FROM ${table} WHERE id = ?`).get(id) !== undefined;
+  const unique = (list: ReadonlyArray<{ id: string }>, name: string) => {
+    const seen = new Set<string>();
+    list.forEach((x, i) => {
+      if (seen.has(x.id)) issues.push({ path: `${name}[${i}].id`, problem: `id ${x.id} appears twice` });
+      seen.add(x.id);
+    });
+    return seen;
+  };
+  const siteIds = unique(doc.sites, 'sites');
+  const roomIds = unique(doc.rooms, 'rooms');
+  const instIds = unique(doc.installations, 'installations');
+  unique(doc.eyewear, 'eyewear');
+  const personIds = unique(doc.people, 'people');
+  unique(doc.assessments, 'assessments');
+  doc.rooms.forEach((r, i) => {
+    if (!siteIds.has(r.siteId) && !exists('site', r.siteId)) issues.push({ path: `rooms[${i}].siteId`, problem: `site ${r.siteId} is neither in the file nor in this database` });
+  });
+  doc.installations.forEach((x, i) => {
+    if (!roomIds.has(x.roomId) && !exists('room', x.roomId)) issues.push({ path: `installations[${i}].roomId`, problem: `room ${x.roomId} is neither in the file nor in this database` });
+    if (x.laser.id !== x.id) issues.push({ path: `installations[${i}].laser.id`, problem: 'must equal the installation id' });
+    if ((x.laser.classAsLabelled ?? null) !== x.classAsLabelled) issues.push({ path: `installations[${i}].classAsLabelled`, problem: 'must equal laser.classAsLabelled' });
+  });
+  doc.eyewear.forEach((x, i) => {
+    if (!siteIds.has(x.siteId) && !exists('site', x.siteId)) issues.push({ path: `eyewear[${i}].siteId`, problem: `site ${x.siteId} is neither in the file nor in this database` });
+  });
+  const keys = new Map(doc.signingKeys.map((k) => [k.keyId, k.publicKey]));
+  doc.signingKeys.forEach((k, i) => {
+    let actual = '';
+    try {
+      actual = keyIdOf(k.publicKey);
+    } catch {
+      /* reported below */
+    }
+    if (actual !== k.keyId) issues.push({ path: `signingKeys[${i}].keyId`, problem: 'does not match the public key (not an Ed25519 key, or altered)' });
+  });
+  doc.assessments.forEach((a, ai) => {
+    const base = `assessments[${ai}]`;
+    if (!roomIds.has(a.roomId) && !exists('room', a.roomId)) issues.push({ path: `${base}.roomId`, problem: `room ${a.roomId} is neither in the file nor in this database` });
+    if (a.installationId !== null && !instIds.has(a.installationId) && !exists('laser_installation', a.installationId)) {
+      issues.push({ path: `${base}.installationId`, problem: `installation ${a.installationId} is neither in the file nor in this database` });
+    }
+    const revIds = new Set(a.revisions.map((r) => r.id));
+    let drafts = 0;
+    let signedNow = 0;
+    a.revisions.forEach((r, ri) => {
+      const p = `${base}.revisions[${ri}]`;
+      if (r.assessmentId !== a.id) issues.push({ path: `${p}.assessmentId`, problem: 'must equal the assessment id' });
+      if (r.revisionNo !== ri + 1) issues.push({ path: `${p}.revisionNo`, problem: `must be ${ri + 1} (revisions listed in order, numbered from 1)` });
+      if (r.basedOn !== null && !revIds.has(r.basedOn)) issues.push({ path: `${p}.basedOn`, problem: `revision ${r.basedOn} is not in this assessment` });
+      if (r.status === 'draft') drafts++;
+      if (r.status === 'signed') signedNow++;
+      if (r.status === 'draft' && ri !== a.revisions.length - 1) issues.push({ path: `${p}.status`, problem: 'only the newest revision can be a draft' });
+      const s = r.signature;
+      if (!s) return;
+      if (s.personId !== null && !personIds.has(s.personId) && !exists('person', s.personId)) {
+        issues.push({ path: `${p}.signature.personId`, problem: `person ${s.personId} is neither in the file nor in this database` });
+      }
+      const publicKey = keys.get(s.keyId);
+      if (publicKey === undefined || publicKey !== s.publicKey) {
+        issues.push({ path: `${p}.signature.keyId`, problem: 'its public key is not listed in signingKeys' });
+        return;
+      }
+      if (fingerprintOf(r.content, r.results, r.calculatedWith) !== s.fingerprint) {
+        issues.push({ path: `${p}.signature.fingerprint`, problem: 'does not match the content and results: the file was changed after signing' });
+      }
+      const row = { id: a.id, room_id: a.roomId, installation_id: a.installationId, created_at: a.createdAt };
+      const rev = { id: r.id, revision_no: r.revisionNo };
+      const stmt = statementFor(row, rev, {
+        person_id: s.personId,
+        name: s.name,
+        role: s.role,
+        signed_at: s.signedAt,
+        statement: s.statement,
+        fingerprint: s.fingerprint,
+      });
+      if (!verifyStatement(publicKey, stmt, s.signature)) {
+        issues.push({ path: `${p}.signature.signature`, problem: 'the Ed25519 signature is not valid for this sign-off: the file was changed after signing' });
+      }
+    });
+    if (drafts > 1) issues.push({ path: `${base}.revisions`, problem: 'more than one draft revision' });
+    if (signedNow > 1) issues.push({ path: `${base}.revisions`, problem: 'more than one revision marked signed (older ones are superseded)' });
+  });
+  return issues;
+}
+
+// ---------------------------------------------------------------- import: writing
+
+const same = (a: unknown, b: unknown) => canonicalJson(a) === canonicalJson(b);
+
+function revisionRow(r: Revision): RevisionRow {
+  return {
+    id: r.id,
+    assessment_id: r.assessmentId,
+    revision_no: r.revisionNo,
+    status: 'draft',
+    content_json: JSON.stringify(r.content),
+    results_json: JSON.stringify(r.results),
+    calculated_with: r.calculatedWith,
+    based_on: r.basedOn,
+    created_at: r.createdAt,
+    updated_at: r.updatedAt,
+    title: r.content.title,
+    review_by: r.content.reviewBy,
+  };
+}
+
+export function importDocument(ctx: StoreContext, input: unknown): ImportSummary {
+  const doc = parseExportDocument(input);
+  const issues = crossCheck(ctx, doc);
+  if (issues.length) throw invalid(issues);
+  const count = { sites: 0, rooms: 0, installations: 0, eyewear: 0, people: 0, assessments: 0, revisions: 0, unchanged: 0 };
+  const db = ctx.db;
+
+  const run = db.transaction(() => {
+    const upsert = <T extends { id: string; updatedAt: string }>(
+      list: readonly T[],
+      key: keyof typeof count,
+      read: (id: string) => T | null,
+      insert: (x: T) => void,
+      replace: (x: T) => void,
+    ) => {
+      for (const x of list) {
+        const local = read(x.id);
+        if (local === null) {
+          insert(x);
+          count[key]++;
+        } else if (same(local, x) || local.updatedAt >= x.updatedAt) {
+          count.unchanged++;
+        } else {
+          replace(x);
+          count[key]++;
+        }
+      }
+    };
+    const tryGet = <T>(fn: () => T): T | null => {
+      try {
+        return fn();
+      } catch (e) {
+        if (e instanceof RecordError && e.code === 'not-found') return null;
+        throw e;
+      }
+    };
+    upsert(doc.sites, 'sites', (id) => tryGet(() => getSite(ctx, id)), (x) => insertSite(ctx, x), (x: Site) =>
+      db.prepare('UPDATE site SET name=@name, building=@building, address=@address, notes=@notes, updated_at=@updatedAt WHERE id=@id').run(x),
+    );
+    upsert(doc.people, 'people', (id) => tryGet(() => getPerson(ctx, id)), (x) => insertPerson(ctx, x), (x) =>
+      db.prepare('UPDATE person SET name=@name, role=@role, email=@email, phone=@phone, updated_at=@updatedAt WHERE id=@id').run(x),
+    );
+    upsert(doc.rooms, 'rooms', (id) => tryGet(() => getRoom(ctx, id)), (x) => insertRoom(ctx, x), (x: Room) =>
+      db
+        .prepare('UPDATE room SET code=@code, name=@name, responsible_person=@responsiblePerson, contact=@contact, notes=@notes, updated_at=@updatedAt WHERE id=@id')
+        .run(x),
+    );
+    upsert(doc.installations, 'installations', (id) => tryGet(() => getInstallation(ctx, id)), (x) => insertInstallation(ctx, x), (x) => {
+      db.prepare('DELETE FROM laser_installation WHERE id = ?').run(x.id);
+      insertInstallation(ctx, x);
+    });
+    upsert(doc.eyewear, 'eyewear', (id) => tryGet(() => getEyewear(ctx, id)), (x) => insertEyewear(ctx, x), (x) => {
+      db.prepare('DELETE FROM eyewear WHERE id = ?').run(x.id);
+      insertEyewear(ctx, x);
+    });
+    for (const k of doc.signingKeys) registerKey(ctx, k.keyId, k.publicKey, 'imported');
+
+    for (const [ai, a] of doc.assessments.entries()) {
+      const localA = db.prepare('SELECT room_id, installation_id FROM assessment WHERE id = ?').get(a.id) as
+        | { room_id: string; installation_id: string | null }
+        | undefined;
+      if (!localA) {
+        db.prepare('INSERT INTO assessment (id, room_id, installation_id, created_at) VALUES (?, ?, ?, ?)').run(a.id, a.roomId, a.installationId, a.createdAt);
+        count.assessments++;
+      } else if (localA.room_id !== a.roomId || localA.installation_id !== a.installationId) {
+        throw invalid([{ path: `assessments[${ai}].roomId`, problem: 'this assessment exists here for a different room or installation' }]);
+      }
+      for (const [ri, r] of a.revisions.entries()) {
+        const path = `assessments[${ai}].revisions[${ri}]`;
+        const local = db.prepare('SELECT status, revision_no FROM revision WHERE id = ?').get(r.id) as { status: string; revision_no: number } | undefined;
+        if (local) {
+          const mine = getRevision(ctx, r.id);
+          if (same(mine, r)) {
+            count.unchanged++;
+            continue;
+          }
+          if (local.status === 'draft' && r.status === 'draft' && mine.updatedAt < r.updatedAt) {
+            db.prepare("DELETE FROM revision WHERE id = ? AND status = 'draft'").run(r.id);
+          } else if (local.status === 'draft' && r.status !== 'draft') {
+            // Our draft was signed elsewhere: the signed copy replaces it.
+            db.prepare("DELETE FROM revision WHERE id = ? AND status = 'draft'").run(r.id);
+          } else if (local.status === 'signed' && r.status === 'superseded' && same({ ...mine, status: 'superseded' }, r)) {
+            db.prepare("UPDATE revision SET status = 'superseded' WHERE id = ?").run(r.id);
+            count.revisions++;
+            continue;
+          } else if (local.status !== 'draft' && r.status === 'signed' && mine.status === 'superseded' && same({ ...mine, status: 'signed' }, r)) {
+            count.unchanged++; // we already know a newer signed revision
+            continue;
+          } else if (local.status === 'draft') {
+            count.unchanged++; // our draft is newer
+            continue;
+          } else {
+            throw invalid([{ path, problem: `revision ${r.revisionNo} is signed here with different content: one of the two copies was altered` }]);
+          }
+        }
+        insertRevisionRow(ctx, revisionRow(r));
+        const s = r.signature;
+        if (s) {
+          db.prepare(
+            `INSERT INTO signature (revision_id, person_id, name, role, signed_at, statement, fingerprint, algorithm, signature, key_id)
+             VALUES (?, ?, ?, ?, ?, ?, ?, 'Ed25519', ?, ?)`,
+          ).run(r.id, s.personId, s.name, s.role, s.signedAt, s.statement, s.fingerprint, s.signature, s.keyId);
+          if (r.status === 'signed') db.prepare("UPDATE revision SET status = 'superseded' WHERE assessment_id = ? AND status = 'signed'").run(a.id);
+          db.prepare('UPDATE revision SET status = ? WHERE id = ?').run(r.status, r.id);
+        }
+        count.revisions++;
+      }
+    }
+    ctx.audit('imported', doc.scope.kind, doc.scope.id, `export of ${doc.exportedAt}`);
+  });
+  try {
+    run.immediate();
+  } catch (e) {
+    if (e instanceof RecordError) throw e;
+    const t = translateSqliteError(e, 'Import (nothing was changed)');
+    throw t instanceof RecordError ? new RecordError(t.code, t.message, [{ path: '(document)', problem: t.message }]) : t;
+  }
+  return count;
+}

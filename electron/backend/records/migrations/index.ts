@@ -1,0 +1,21 @@
+/**
+ * The numbered, forward-only migrations. Version N is the N-th entry; `PRAGMA user_version` holds
+ * the version applied, and `schema_migrations` lists each applied migration by number and name so
+ * that a database whose history is not a prefix of this list is refused (it came from another
+ * build). Never edit or reorder an entry once released: add a new one.
+ */
+import * as m0001 from './0001_initial.js';
+import * as m0002 from './0002_list_columns_and_audit_log.js';
+
+export interface Migration {
+  readonly version: number;
+  readonly name: string;
+  readonly sql: string;
+}
+
+export const MIGRATIONS: readonly Migration[] = [
+  { version: 1, name: m0001.name, sql: m0001.sql },
+  { version: 2, name: m0002.name, sql: m0002.sql },
+];
+
+export const LATEST_VERSION = MIGRATIONS.length;

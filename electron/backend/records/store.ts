@@ -1,0 +1,141 @@
+/**
+ * The record store: one object with typed methods over one SQLite file, for the API/IPC handler
+ * table, the loopback host and the CLI. Synchronous (better-sqlite3) except `backup`.
+ */
+import { dirname, resolve } from 'node:path';
+import type { RoomInput } from '../../../core/model/inputs.js';
+import * as A from './assessments.js';
+import { backupTo } from './backup.js';
+import { makeContext, type StoreContext } from './context.js';
+import { CALCULATED_WITH, evaluateRoom, type Evaluate } from './core-link.js';
+import { importLaserCsv } from './csv.js';
+import { openDatabase } from './database.js';
+import { seedDemo } from './demo.js';
+import * as X from './exchange.js';
+import { defaultDatabasePath } from './paths.js';
+import * as R from './register.js';
+import type {
+  Assessment,
+  AssessmentContent,
+  AssessmentSummary,
+  CalendarDate,
+  CsvImportReport,
+  Eyewear,
+  EyewearDraft,
+  ExportDocument,
+  FieldDifference,
+  Id,
+  ImportSummary,
+  LaserInstallation,
+  LaserInstallationDraft,
+  OpenOptions,
+  Person,
+  PersonDraft,
+  RecordStore,
+  Revision,
+  RevisionSummary,
+  Room,
+  RoomDraft,
+  SignOff,
+  Site,
+  SiteDraft,
+  StoreInfo,
+  VerifyReport,
+} from './types.js';
+
+class SqliteRecordStore implements RecordStore {
+  constructor(
+    private readonly ctx: StoreContext,
+    readonly info: StoreInfo,
+    private readonly nativeBinding: string | undefined,
+  ) {}
+
+  close(): void {
+    if (this.ctx.db.open) this.ctx.db.close();
+  }
+
+  listSites(): Site[] { return R.listSites(this.ctx); }
+  getSite(id: Id): Site { return R.getSite(this.ctx, id); }
+  createSite(draft: SiteDraft): Site { return R.createSite(this.ctx, draft); }
+  updateSite(id: Id, patch: Partial<SiteDraft>): Site { return R.updateSite(this.ctx, id, patch); }
+  deleteSite(id: Id): void { R.deleteSite(this.ctx, id); }
+
+  listRooms(siteId: Id): Room[] { return R.listRooms(this.ctx, siteId); }
+  getRoom(id: Id): Room { return R.getRoom(this.ctx, id); }
+  createRoom(draft: RoomDraft): Room { return R.createRoom(this.ctx, draft); }
+  updateRoom(id: Id, patch: Partial<Omit<RoomDraft, 'siteId'>>): Room { return R.updateRoom(this.ctx, id, patch); }
+  deleteRoom(id: Id): void { R.deleteRoom(this.ctx, id); }
+
+  listInstallations(roomId: Id): LaserInstallation[] { return R.listInstallations(this.ctx, roomId); }
+  getInstallation(id: Id): LaserInstallation { return R.getInstallation(this.ctx, id); }
+  createInstallation(draft: LaserInstallationDraft): LaserInstallation { return R.createInstallation(this.ctx, draft); }
+  updateInstallation(id: Id, patch: Partial<Omit<LaserInstallationDraft, 'roomId'>>): LaserInstallation {
+    return R.updateInstallation(this.ctx, id, patch);
+  }
+  deleteInstallation(id: Id): void { R.deleteInstallation(this.ctx, id); }
+
+  listEyewear(siteId: Id): Eyewear[] { return R.listEyewear(this.ctx, siteId); }
+  getEyewear(id: Id): Eyewear { return R.getEyewear(this.ctx, id); }
+  createEyewear(draft: EyewearDraft): Eyewear { return R.createEyewear(this.ctx, draft); }
+  updateEyewear(id: Id, patch: Partial<Omit<EyewearDraft, 'siteId'>>): Eyewear { return R.updateEyewear(this.ctx, id, patch); }
+  deleteEyewear(id: Id): void { R.deleteEyewear(this.ctx, id); }
+
+  listPeople(): Person[] { return R.listPeople(this.ctx); }
+  getPerson(id: Id): Person { return R.getPerson(this.ctx, id); }
+  createPerson(draft: PersonDraft): Person { return R.createPerson(this.ctx, draft); }
+  updatePerson(id: Id, patch: Partial<PersonDraft>): Person { return R.updatePerson(this.ctx, id, patch); }
+  deletePerson(id: Id): void { R.deletePerson(this.ctx, id); }
+
+  roomInputFromRegister(roomId: Id): RoomInput { return R.roomInputFromRegister(this.ctx, roomId); }
+  newAssessmentContent(roomId: Id, installationId: Id | null = null): AssessmentContent {
+    return A.newAssessmentContent(this.ctx, roomId, installationId);
+  }
+
+  createAssessment(args: { roomId: Id; installationId?: Id | null; content: AssessmentContent }): Assessment {
+    return A.createAssessment(this.ctx, args);
+  }
+  getAssessment(id: Id): Assessment { return A.getAssessment(this.ctx, id); }
+  listAssessments(roomId: Id): AssessmentSummary[] { return A.listAssessments(this.ctx, roomId); }
+  listDueForReview(date: CalendarDate): AssessmentSummary[] { return A.listDueForReview(this.ctx, date); }
+  saveAssessment(id: Id, content: AssessmentContent): Assessment { return A.saveAssessment(this.ctx, id, content); }
+  discardDraft(id: Id): void { A.discardDraft(this.ctx, id); }
+  listRevisions(assessmentId: Id): RevisionSummary[] { return A.listRevisions(this.ctx, assessmentId); }
+  getRevision(revisionId: Id): Revision { return A.getRevision(this.ctx, revisionId); }
+  compareRevisions(fromRevisionId: Id, toRevisionId: Id): FieldDifference[] {
+    return A.compareRevisions(this.ctx, fromRevisionId, toRevisionId);
+  }
+  signAssessment(id: Id, signOff: SignOff): Assessment { return A.signAssessment(this.ctx, id, signOff); }
+  verify(assessmentId: Id, revisionId?: Id): VerifyReport { return A.verifyAssessment(this.ctx, assessmentId, revisionId); }
+
+  exportSite(siteId: Id): ExportDocument { return X.exportSite(this.ctx, siteId); }
+  exportRoom(roomId: Id): ExportDocument { return X.exportRoom(this.ctx, roomId); }
+  exportAssessment(assessmentId: Id): ExportDocument { return X.exportAssessment(this.ctx, assessmentId); }
+  importDocument(doc: unknown): ImportSummary { return X.importDocument(this.ctx, doc); }
+  importLaserCsv(roomId: Id, csvText: string): CsvImportReport { return importLaserCsv(this.ctx, roomId, csvText); }
+
+  backup(path: string): Promise<void> { return backupTo(this.ctx.db, path, this.nativeBinding); }
+  seedDemo(): Site { return seedDemo(this.ctx); }
+}
+
+/** Internal options on top of OpenOptions (tests of a different core version). */
+export interface InternalOpenOptions extends OpenOptions {
+  readonly evaluate?: Evaluate;
+  readonly calculatedWith?: string;
+}
+
+/**
+ * Open (creating on first start) the record store. Default location: the platform user-data
+ * folder (paths.ts); the signing key pair lives beside the database unless `keyDir` is given.
+ */
+export function openRecordStore(options: InternalOpenOptions = {}): RecordStore {
+  const path = resolve(options.path ?? defaultDatabasePath());
+  const keyDir = resolve(options.keyDir ?? dirname(path));
+  const opened = openDatabase(path, {
+    ...(options.nativeBinding !== undefined ? { nativeBinding: options.nativeBinding } : {}),
+    ...(options.readonly !== undefined ? { readonly: options.readonly } : {}),
+  });
+  const calculatedWith = options.calculatedWith ?? CALCULATED_WITH;
+  const ctx = makeContext(opened.db, keyDir, options.evaluate ?? evaluateRoom, calculatedWith);
+  const info: StoreInfo = { path, keyDir, schemaVersion: opened.schemaVersion, migrationBackups: opened.migrationBackups, calculatedWith };
+  return new SqliteRecordStore(ctx, info, options.nativeBinding);
+}
