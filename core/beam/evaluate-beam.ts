@@ -1,0 +1,254 @@
+/**
+ * evaluateBeam: everything an officer needs for one beam (one wavelength, one operating mode):
+ * the eye and skin limits with all pulse rules, the direct NOHD, the hazard distances of every
+ * stated viewing condition, the required OD and EN 207 / EN 208 scale numbers, a class estimate,
+ * the bounds from input tolerances, warnings for unusual inputs, and the full trace.
+ * Results support, and do not replace, the judgement of the site laser safety officer.
+ */
+import { Dec } from '../numeric/decimal.js';
+import { InputError } from '../errors.js';
+import type { BeamInput, LimitSettings, RuleSetId } from '../model/inputs.js';
+import { RESULT_CAUTION, type BeamResult, type DistanceResult } from '../model/results.js';
+import { RULE_SET_NAME } from '../limits/rule-sets.js';
+import { defaultExposureDuration } from '../limits/durations.js';
+import { formatSI } from '../units/quantities.js';
+import { addStep, newTrace } from '../trace/trace.js';
+import { beamModel, describeBeam, type BeamModel } from './beam-model.js';
+import { tissueLimits, type TissueLimits } from './tissue-limits.js';
+import { validateBeamInput } from './validate-beam.js';
+import { distanceReported, fmt, maxOf, rec } from './format.js';
+import { computeBounds } from './bounds.js';
+import { distanceOver } from '../hazard/distance.js';
+import { aidedGain, aidedSpec, directSpec, lensSpec, multimodeFiberSpec, singlemodeFiberSpec, skinSpec, specularSpec } from '../hazard/geometries.js';
+import { diffuseDistance } from '../hazard/diffuse.js';
+import { requiredOd, type OdOutcome } from '../eyewear/od.js';
+import { en207Requirements } from '../eyewear/en207.js';
+import { en208Requirement } from '../eyewear/en208.js';
+import { estimateClass } from '../classes/estimate.js';
+
+export interface BeamContext {
+  /** Path prefix for field names in errors, e.g. 'lasers[2].beams[0].'. */
+  readonly fieldPrefix?: string;
+  readonly laserId?: string;
+  readonly roomRuleSet?: RuleSetId;
+  readonly roomSettings?: LimitSettings;
+  readonly fallbackId?: string;
+}
+
+/** Map a field named by a limit function to the beam input's own path. */
+const LIMIT_FIELD: Readonly<Record<string, string>> = {
+  wavelength_nm: 'wavelength_nm',
+  duration_s: 'exposureDuration_s',
+  exposureDuration_s: 'exposureDuration_s',
+  pulseDuration_s: 'emission.pulseDuration_s',
+  repetitionRate_Hz: 'emission.repetitionRate_Hz',
+  sourceAngle_rad: 'sourceAngle_rad',
+  ruleSet: 'ruleSet',
+  tissue: 'tissue',
+};
+
+function rethrowWithPath<T>(prefix: string, fn: () => T): T {
+  try {
+    return fn();
+  } catch (err) {
+    if (err instanceof InputError) {
+      const field = err.field.startsWith(prefix) && prefix !== '' ? err.field : `${prefix}${LIMIT_FIELD[err.field] ?? err.field}`;
+      if (field === err.field) throw err;
+      throw new InputError(err.code, field, err.value, err.validRange);
+    }
+    throw err;
+  }
+}
+
+function emissionSummary(input: BeamInput): string {
+  const e = input.emission;
+  if (e.kind === 'cw') return `CW ${formatSI(String(e.power_W), 'W')}`;
+  return `pulsed ${formatSI(String(e.pulseEnergy_J), 'J')} per pulse, ${formatSI(String(e.pulseDuration_s), 's')}` + (e.repetitionRate_Hz !== undefined ? `, ${formatSI(String(e.repetitionRate_Hz), 'Hz')}` : ', single pulse');
+}
+
+/** Public API: evaluate one beam. Throws InputError naming the field for any invalid input. */
+export function evaluateBeam(input: BeamInput): BeamResult {
+  return evaluateBeamIn(input, {});
+}
+
+export function evaluateBeamIn(input: BeamInput, ctx: BeamContext): BeamResult {
+  return evaluateBeamDetailed(input, ctx).result;
+}
+
+/** The result plus the internal pieces a room evaluation needs (limits, OD outcome). */
+export interface BeamEvaluation {
+  readonly result: BeamResult;
+  readonly eye: TissueLimits;
+  readonly skin: TissueLimits;
+  readonly od: OdOutcome;
+  readonly model: BeamModel;
+  /** A lens is on the beam path (its focus can bring the whole beam inside the aperture). */
+  readonly lensPresent: boolean;
+}
+
+export function evaluateBeamDetailed(input: BeamInput, ctx: BeamContext): BeamEvaluation {
+  const prefix = ctx.fieldPrefix ?? '';
+  const ruleSet = validateBeamInput(input, prefix, ctx.roomRuleSet);
+  return rethrowWithPath(prefix, () => evaluateValid(input, ruleSet, input.settings ?? ctx.roomSettings, ctx));
+}
+
+function evaluateValid(input: BeamInput, ruleSet: RuleSetId, settings: LimitSettings | undefined, ctx: BeamContext): BeamEvaluation {
+  const lambda = input.wavelength_nm;
+  const beamId = input.id ?? ctx.fallbackId ?? `beam-${lambda}nm`;
+  const label = input.label ?? `${lambda} nm ${input.emission.kind === 'cw' ? 'CW' : 'pulsed'}`;
+  const warnings: string[] = [];
+  const trace = newTrace(`Beam ${label} (${RULE_SET_NAME[ruleSet]})`);
+  addStep(trace, { kind: 'note', label: 'Caution', detail: RESULT_CAUTION });
+  addStep(trace, { kind: 'input', label: 'Wavelength', detail: `${lambda} nm`, value: String(lambda), unit: 'nm' });
+  addStep(trace, { kind: 'input', label: 'Emission', detail: emissionSummary(input) });
+  const m = beamModel(input.beam);
+  addStep(trace, { kind: 'input', label: 'Beam', detail: `diameter ${input.beam.diameter_m} m, divergence ${input.beam.divergence_rad} rad, definition ${input.beam.definition}, profile ${m.profile}${m.elliptical ? `, second axis ${input.beam.diameterY_m ?? input.beam.diameter_m} m / ${input.beam.divergenceY_rad ?? input.beam.divergence_rad} rad` : ''}` });
+  addStep(trace, { kind: 'assumption', label: 'Definition', detail: `${m.conversion}: ${describeBeam(m)}`, source: 'domain notes 1.1 (derived)', confidence: 'derived' });
+  if (m.definitionWarning) {
+    warnings.push(m.definitionWarning);
+    addStep(trace, { kind: 'warning', label: 'Beam definition', detail: m.definitionWarning });
+  }
+
+  // Exposure durations (common practice, core/limits/durations.ts).
+  const dd = defaultExposureDuration(lambda);
+  const T = input.exposureDuration_s ?? dd.duration_s;
+  const durationWhy = input.exposureDuration_s !== undefined ? 'given by the caller' : `${dd.why} (${dd.basis})`;
+  const visible = lambda >= 400 && lambda <= 700;
+  if (!visible && T === 0.25) {
+    const w = `Exposure duration 0.25 s for an invisible beam (${lambda} nm): the aversion response only works for visible light; 10 s (infrared) or 30 000 s (ultraviolet) is the usual assumption.`;
+    warnings.push(w);
+    addStep(trace, { kind: 'warning', label: 'Exposure duration', detail: w });
+  }
+  if (visible && input.exposureDuration_s === undefined) {
+    addStep(trace, { kind: 'note', label: 'Exposure duration', detail: 'the 0.25 s default covers unintended viewing only; deliberate viewing or tasks such as alignment need a longer duration (common practice)' });
+  }
+  const skinT = input.exposureDuration_s ?? (lambda < 400 ? 30000 : 10);
+  const skinWhy = input.exposureDuration_s !== undefined ? 'given by the caller' : lambda < 400 ? 'ultraviolet: 30 000 s (common practice)' : 'skin: no aversion response, 10 s (common practice, ours)';
+  const base = {
+    ruleSet,
+    wavelength_nm: lambda,
+    emission: input.emission,
+    ...(input.sourceAngle_rad !== undefined ? { sourceAngle_rad: input.sourceAngle_rad } : {}),
+    ...(settings !== undefined ? { settings } : {}),
+  };
+  const eye: TissueLimits = tissueLimits({ ...base, tissue: 'eye', exposureDuration_s: T, durationWhy });
+  const skin: TissueLimits = tissueLimits({ ...base, tissue: 'skin', exposureDuration_s: skinT, durationWhy: skinWhy });
+  for (const w of eye.warnings) warnings.push(w);
+  trace.children.push(eye.trace, skin.trace);
+
+  const v = input.viewing ?? {};
+  const mu = v.attenuation_per_m !== undefined && v.attenuation_per_m > 0 ? new Dec(v.attenuation_per_m) : undefined;
+  if (mu) addStep(trace, { kind: 'assumption', label: 'Atmospheric attenuation', detail: `mu = ${fmt(mu)} 1/m credited on the direct, specular and aided paths (Beer-Lambert; optional, from memory for ANSI Z136.6; ignoring it is the conservative default)`, confidence: 'from memory' });
+
+  const distances: DistanceResult[] = [];
+  const direct = distanceOver(eye, directSpec(m, eye.S, mu));
+  distances.push(direct.result);
+  trace.children.push(direct.result.trace);
+
+  let nhzDiffuse: Dec | null = null;
+  if (v.diffuse) {
+    const d = diffuseDistance(eye, m, v.diffuse);
+    distances.push(d.result);
+    trace.children.push(d.result.trace);
+    nhzDiffuse = d.r;
+    if (d.viewer && d.viewer.ratio.gt(1)) {
+      warnings.push(`Diffuse reflection: ${fmt(d.viewer.distance_m)} m from the surface the exposure is ${fmt(d.viewer.ratio)} times the limit (OD ${fmt(d.viewer.od)} needed for diffuse viewing there).`);
+    }
+  }
+  if (v.specular) {
+    const s = distanceOver(eye, specularSpec(m, eye.S, new Dec(v.specular.reflectance), v.specular.pathToSurface_m !== undefined ? new Dec(v.specular.pathToSurface_m) : undefined, mu));
+    distances.push(s.result);
+    trace.children.push(s.result.trace);
+  }
+  if (v.lens) {
+    const f = new Dec(v.lens.focalLength_m);
+    // b0: beam on the lens in the beam's own definition, converted like the exit diameter; default
+    // the exit diameter (the beam only grows, so the exit value is the smaller, conservative b0).
+    // Elliptical beam: the smaller axis (slower spread past the focus, longer distance).
+    const b0 = v.lens.beamDiameterAtLens_m !== undefined ? new Dec(v.lens.beamDiameterAtLens_m).mul(m.factor) : Dec.min(m.a, m.ay);
+    if (b0.isZero()) throw new InputError('missing', `${ctx.fieldPrefix ?? ''}viewing.lens.beamDiameterAtLens_m`, undefined, 'the beam diameter on the lens in m (the exit diameter is 0)');
+    const b0Text = `${fmt(b0.mul(1000))} mm (1/e)` + (v.lens.beamDiameterAtLens_m === undefined ? ', taken as the exit diameter' : '');
+    const l = distanceOver(eye, lensSpec(eye.S, f, b0, b0Text));
+    distances.push(l.result);
+    trace.children.push(l.result.trace);
+  }
+  if (v.fiber) {
+    const NA = new Dec(v.fiber.numericalAperture);
+    const spec = v.fiber.kind === 'multimode' ? multimodeFiberSpec(eye.S, NA) : singlemodeFiberSpec(eye.S, new Dec(lambda).mul('1e-9'), new Dec(v.fiber.modeFieldDiameter_m as number), NA);
+    const fr = distanceOver(eye, spec);
+    distances.push(fr.result);
+    trace.children.push(fr.result.trace);
+  }
+  if (v.aided) {
+    const M = new Dec(v.aided.magnification);
+    const D0 = new Dec(v.aided.objectiveDiameter_m);
+    const tau = new Dec(v.aided.transmission ?? 1);
+    const a = distanceOver(eye, aidedSpec(m, eye.S, M, D0, tau, mu));
+    distances.push(a.result);
+    trace.children.push(a.result.trace);
+    const gain = aidedGain(M, D0, tau, a.governing.aperture_m);
+    if (gain.lte(1)) addStep(a.result.trace, { kind: 'note', label: 'Gain', detail: `K*tau = ${fmt(gain)} <= 1: the instrument collects no more than the naked eye; the direct NOHD governs` });
+    if (v.aided.transmission === undefined) addStep(a.result.trace, { kind: 'assumption', label: 'Transmission', detail: 'not given: tau = 1 (the conservative value)' });
+  }
+  const skinD = distanceOver(skin, skinSpec(m, skin.S, mu));
+  distances.push(skinD.result);
+  trace.children.push(skinD.result.trace);
+
+  // Required OD and scale numbers at the worst reachable position.
+  const position = v.closestApproach_m ?? 0;
+  const od = requiredOd(eye, m, lambda, position, v.lens !== undefined);
+  trace.children.push(od.requirement.trace);
+  const conservative = settings?.conservative !== false;
+  const scaleNumbers = en207Requirements({ wavelength_nm: lambda, model: m, position_m: position, emission: input.emission, needed: od.od.gt(0), conservative });
+  const rb = en208Requirement({ wavelength_nm: lambda, model: m, position_m: position, emission: input.emission });
+  if (rb) scaleNumbers.push(od.od.gt(0) || rb.scale === 0 ? rb : { ...rb, scale: 0, note: `exposure below the limit: no filter needed; ${rb.note}` });
+  const snTrace = newTrace('EN 207 / EN 208 scale numbers');
+  addStep(snTrace, {
+    kind: 'formula',
+    label: 'Method',
+    detail: 'N = ceil(log10(X/X1)) + 1 from the EN 207 table (LB) or the EN 208 table (RB, visible only), rounded up to the next table step',
+    source: 'EN 207:2017 via [WIKI-EN207] (secondary); EN 208:2009 Table B.1 via [SUP-EN208] (read, RB1)',
+    confidence: 'secondary; mode boundaries, N^(1/4) rule and beam-size rule from memory (domain notes section 10 items 4, 5)',
+  });
+  for (const s of scaleNumbers) addStep(snTrace, { kind: s.applies ? 'result' : 'note', label: s.mode, detail: s.note, value: s.applies ? `${s.mode === 'RB' ? 'RB' : 'LB'}${s.scale}` : 'n/a' });
+  trace.children.push(snTrace);
+
+  const classEstimate = estimateClass({ ruleSet, wavelength_nm: lambda, emission: input.emission, model: m, ...(input.sourceAngle_rad !== undefined ? { sourceAngle_rad: input.sourceAngle_rad } : {}), ...(settings !== undefined ? { settings } : {}) });
+  trace.children.push(classEstimate.trace);
+
+  const nominal = { nohd: direct.r, od: od.od, limitE: new Dec(eye.summary.E_Wm2) };
+  const { bounds, trace: bTrace } = computeBounds(input, ruleSet, settings, nominal);
+  trace.children.push(bTrace);
+
+  const largest = maxOf(distances.filter((d) => d.kind !== 'skin').map((d) => new Dec(d.distance_m)));
+  addStep(trace, {
+    kind: 'result',
+    label: 'Summary',
+    detail: `NOHD ${direct.result.distance_m_reported} m (${direct.result.governingRule}); largest ocular hazard distance ${distanceReported(largest)} m; required OD ${od.requirement.odRequired_reported}; skin ${skinD.result.distance_m_reported} m; class estimate ${classEstimate.estimate}`,
+  });
+
+  const result: BeamResult = {
+    beamId,
+    label,
+    ...(ctx.laserId !== undefined ? { laserId: ctx.laserId } : {}),
+    ruleSet,
+    ruleSetName: RULE_SET_NAME[ruleSet],
+    wavelength_nm: lambda,
+    emissionSummary: emissionSummary(input),
+    mpe: eye.summary,
+    skinMpe: skin.summary,
+    nohd_m: direct.result.distance_m,
+    nohd_m_reported: direct.result.distance_m_reported,
+    odRequired: od.requirement.odRequired_reported,
+    od: od.requirement,
+    distances,
+    nhzDiffuse_m: nhzDiffuse ? rec(nhzDiffuse) : null,
+    skinHazardDistance_m: skinD.result.distance_m,
+    scaleNumbers,
+    classEstimate,
+    bounds,
+    warnings,
+    trace,
+  };
+  return { result, eye, skin, od, model: m, lensPresent: v.lens !== undefined };
+}

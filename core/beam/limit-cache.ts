@@ -1,0 +1,42 @@
+/**
+ * Memoised exposure-limit look-ups. A limit depends only on (rule set, tissue, wavelength,
+ * durations, source size, settings), not on power or beam size, so while an officer edits a power
+ * or a divergence, every limit of a room is reused and the room recomputes within one frame.
+ * Results are treated as read-only by every caller in the core.
+ */
+import { exposureLimit, type ExposureLimitQuery, type ExposureLimitResult } from '../limits/exposure-limit.js';
+import { pulsedExposureLimit, type PulsedLimitQuery, type PulsedLimitResult } from '../limits/pulse-rules.js';
+
+const MAX_ENTRIES = 4000;
+const cwCache = new Map<string, ExposureLimitResult>();
+const pulsedCache = new Map<string, PulsedLimitResult>();
+
+function keyOf(q: object): string {
+  return JSON.stringify(q);
+}
+
+export function cachedExposureLimit(q: ExposureLimitQuery): ExposureLimitResult {
+  const k = keyOf(q);
+  const hit = cwCache.get(k);
+  if (hit) return hit;
+  const r = exposureLimit(q);
+  if (cwCache.size >= MAX_ENTRIES) cwCache.clear();
+  cwCache.set(k, r);
+  return r;
+}
+
+export function cachedPulsedLimit(q: PulsedLimitQuery): PulsedLimitResult {
+  const k = keyOf(q);
+  const hit = pulsedCache.get(k);
+  if (hit) return hit;
+  const r = pulsedExposureLimit(q);
+  if (pulsedCache.size >= MAX_ENTRIES) pulsedCache.clear();
+  pulsedCache.set(k, r);
+  return r;
+}
+
+/** Empty both caches (the benchmark uses it to time a cold evaluation). */
+export function clearLimitCache(): void {
+  cwCache.clear();
+  pulsedCache.clear();
+}

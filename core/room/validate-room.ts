@@ -1,0 +1,116 @@
+/**
+ * Validation of a RoomInput's own fields (the beams are validated by the beam evaluation with
+ * their path prefix, e.g. 'lasers[2].beams[0].wavelength_nm'). Every problem is an InputError
+ * naming the field.
+ */
+import { InputError, requireInRange } from '../errors.js';
+import type { EyewearSpec, RoomInput, RuleSetId } from '../model/inputs.js';
+import { RULE_SET_IDS, WAVELENGTH_RANGE_NM } from '../limits/rule-sets.js';
+
+const CLASSES = ['1', '1M', '2', '2M', '3R', '3B', '4'] as const;
+
+function isObject(x: unknown): x is Record<string, unknown> {
+  return typeof x === 'object' && x !== null && !Array.isArray(x);
+}
+
+function requireString(field: string, x: unknown): string {
+  if (typeof x !== 'string' || x.trim() === '') throw new InputError('missing', field, x, 'a non-empty text');
+  return x;
+}
+
+function requireArray(field: string, x: unknown, nonEmpty: boolean): unknown[] {
+  if (!Array.isArray(x)) throw new InputError('missing', field, x, nonEmpty ? 'a list with at least one entry' : 'a list');
+  if (nonEmpty && x.length === 0) throw new InputError('missing', field, x, 'a list with at least one entry');
+  return x;
+}
+
+function band(field: string, o: Record<string, unknown>): void {
+  requireInRange(`${field}.from_nm`, o['from_nm'], WAVELENGTH_RANGE_NM[0], WAVELENGTH_RANGE_NM[1], 'nm');
+  requireInRange(`${field}.to_nm`, o['to_nm'], WAVELENGTH_RANGE_NM[0], WAVELENGTH_RANGE_NM[1], 'nm');
+}
+
+function integerIn(field: string, x: unknown, lo: number, hi: number): void {
+  requireInRange(field, x, lo, hi, '');
+  if (!Number.isInteger(x)) throw new InputError('out_of_range', field, x, `a whole number from ${lo} to ${hi}`);
+}
+
+export function validateEyewear(x: unknown, field: string): EyewearSpec {
+  if (!isObject(x)) throw new InputError('missing', field, x, 'an eyewear specification');
+  requireString(`${field}.id`, x['id']);
+  requireString(`${field}.label`, x['label']);
+  if (x['od'] !== undefined) {
+    requireArray(`${field}.od`, x['od'], false).forEach((b, i) => {
+      const f = `${field}.od[${i}]`;
+      if (!isObject(b)) throw new InputError('missing', f, b, 'an object {from_nm, to_nm, od}');
+      band(f, b);
+      requireInRange(`${f}.od`, b['od'], 0, 20, '(optical density)');
+    });
+  }
+  if (x['en207'] !== undefined) {
+    requireArray(`${field}.en207`, x['en207'], false).forEach((b, i) => {
+      const f = `${field}.en207[${i}]`;
+      if (!isObject(b)) throw new InputError('missing', f, b, 'an object {from_nm, to_nm, modes, scale}');
+      band(f, b);
+      const modes = requireString(`${f}.modes`, b['modes']);
+      if (!/^[DIRMdirm]+$/.test(modes)) throw new InputError('invalid_choice', `${f}.modes`, modes, "letters of 'DIRM', e.g. 'DIR'");
+      integerIn(`${f}.scale`, b['scale'], 1, 10);
+    });
+  }
+  if (x['en208'] !== undefined) {
+    requireArray(`${field}.en208`, x['en208'], false).forEach((b, i) => {
+      const f = `${field}.en208[${i}]`;
+      if (!isObject(b)) throw new InputError('missing', f, b, 'an object {from_nm, to_nm, scale}');
+      band(f, b);
+      integerIn(`${f}.scale`, b['scale'], 1, 5);
+    });
+  }
+  if (x['visibleTransmission'] !== undefined) requireInRange(`${field}.visibleTransmission`, x['visibleTransmission'], 0, 1, '(fraction)');
+  return x as unknown as EyewearSpec;
+}
+
+/** Check the room's own fields; returns the room's rule set (stated, or the first beam's, or the default). */
+export function validateRoomShape(input: unknown): RuleSetId {
+  if (!isObject(input)) throw new InputError('missing', '(room input)', input, 'an object {lasers, eyewear?, ruleSet?}');
+  let ruleSet: RuleSetId | undefined;
+  if (input['ruleSet'] !== undefined) {
+    if (typeof input['ruleSet'] !== 'string' || !RULE_SET_IDS.includes(input['ruleSet'] as RuleSetId)) {
+      throw new InputError('invalid_choice', 'ruleSet', input['ruleSet'], RULE_SET_IDS.map((r) => `'${r}'`).join(' | '));
+    }
+    ruleSet = input['ruleSet'] as RuleSetId;
+  }
+  if (input['settings'] !== undefined && !isObject(input['settings'])) throw new InputError('missing', 'settings', input['settings'], 'an object');
+  const lasers = requireArray('lasers', input['lasers'], true);
+  const laserIds = new Set<string>();
+  const beamIds = new Set<string>();
+  lasers.forEach((l, i) => {
+    const f = `lasers[${i}]`;
+    if (!isObject(l)) throw new InputError('missing', f, l, 'a laser {id, name, beams}');
+    const id = requireString(`${f}.id`, l['id']);
+    if (laserIds.has(id)) throw new InputError('invalid_choice', `${f}.id`, id, 'an id not used by another laser of the room');
+    laserIds.add(id);
+    requireString(`${f}.name`, l['name']);
+    if (l['classAsLabelled'] !== undefined && !CLASSES.includes(l['classAsLabelled'] as (typeof CLASSES)[number])) {
+      throw new InputError('invalid_choice', `${f}.classAsLabelled`, l['classAsLabelled'], CLASSES.map((c) => `'${c}'`).join(' | '));
+    }
+    requireArray(`${f}.beams`, l['beams'], true).forEach((b, j) => {
+      if (!isObject(b)) throw new InputError('missing', `${f}.beams[${j}]`, b, 'a beam');
+      const bid = b['id'] === undefined ? `${id}-b${j}` : requireString(`${f}.beams[${j}].id`, b['id']);
+      if (beamIds.has(bid)) throw new InputError('invalid_choice', `${f}.beams[${j}].id`, bid, 'an id not used by another beam of the room');
+      beamIds.add(bid);
+      if (ruleSet === undefined && typeof b['ruleSet'] === 'string' && RULE_SET_IDS.includes(b['ruleSet'] as RuleSetId)) ruleSet = b['ruleSet'] as RuleSetId;
+    });
+  });
+  if (input['eyewear'] !== undefined) {
+    const ids = new Set<string>();
+    requireArray('eyewear', input['eyewear'], false).forEach((e, k) => {
+      const ew = validateEyewear(e, `eyewear[${k}]`);
+      if (ids.has(ew.id)) throw new InputError('invalid_choice', `eyewear[${k}].id`, ew.id, 'an id not used by other eyewear of the room');
+      ids.add(ew.id);
+    });
+  }
+  return ruleSet ?? 'icnirp2013';
+}
+
+export function isRoomInput(x: unknown): x is RoomInput {
+  return isObject(x) && Array.isArray(x['lasers']);
+}
