@@ -25,7 +25,15 @@ export interface Criterion {
   readonly label: string;
 }
 
-export interface TissueLimits {
+/** What the distance and OD code reads: the source and the criteria. */
+export interface LimitCriteria {
+  readonly quantity: 'H' | 'E';
+  /** Power (W, CW) or energy per pulse (J) the criteria are compared with. */
+  readonly S: Dec;
+  readonly criteria: readonly Criterion[];
+}
+
+export interface TissueLimits extends LimitCriteria {
   readonly tissue: Tissue;
   readonly quantity: 'H' | 'E';
   /** Power (W, CW) or energy per pulse (J) the criteria are compared with. */

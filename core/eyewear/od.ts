@@ -11,7 +11,7 @@ import { Dec, PI } from '../numeric/decimal.js';
 import type { OdRequirement } from '../model/results.js';
 import { addStep, newTrace } from '../trace/trace.js';
 import { exposureAt, spreadOf, type BeamModel } from '../beam/beam-model.js';
-import type { Criterion, TissueLimits } from '../beam/tissue-limits.js';
+import type { Criterion, LimitCriteria } from '../beam/tissue-limits.js';
 import { fmt, odReported, rec } from '../beam/format.js';
 
 /** OD from an exposure and a limit in the same units (may be <= 0: no filter needed). */
@@ -27,7 +27,7 @@ export interface OdOutcome {
   readonly governing: Criterion;
 }
 
-export function requiredOd(tl: TissueLimits, m: BeamModel, wavelength_nm: number, closestApproach_m: number, lensPresent: boolean): OdOutcome {
+export function requiredOd(tl: LimitCriteria, m: BeamModel, wavelength_nm: number, closestApproach_m: number, lensPresent: boolean): OdOutcome {
   const r0 = new Dec(closestApproach_m);
   const trace = newTrace('Required optical density');
   addStep(trace, {

@@ -11,7 +11,7 @@ import { Dec, PI } from '../numeric/decimal.js';
 import type { DistanceResult } from '../model/results.js';
 import { addStep, newTrace } from '../trace/trace.js';
 import type { BeamModel } from '../beam/beam-model.js';
-import type { TissueLimits } from '../beam/tissue-limits.js';
+import type { LimitCriteria } from '../beam/tissue-limits.js';
 import { distanceReported, fmt, odReported, rec } from '../beam/format.js';
 
 export interface DiffuseQuery {
@@ -30,7 +30,7 @@ export interface DiffuseViewer {
   readonly od: Dec;
 }
 
-export function diffuseDistance(tl: TissueLimits, m: BeamModel, q: DiffuseQuery): { result: DistanceResult; r: Dec; viewer: DiffuseViewer | null } {
+export function diffuseDistance(tl: LimitCriteria, m: BeamModel, q: DiffuseQuery): { result: DistanceResult; r: Dec; viewer: DiffuseViewer | null } {
   const rho = new Dec(q.reflectance);
   const theta = new Dec(q.viewingAngle_rad ?? 0);
   const cos = theta.cos();

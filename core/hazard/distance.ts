@@ -6,7 +6,7 @@ import { Dec } from '../numeric/decimal.js';
 import type { DistanceKind, DistanceResult, PulseRule } from '../model/results.js';
 import { addStep, newTrace, type Trace } from '../trace/trace.js';
 import type { Spread } from '../beam/beam-model.js';
-import type { Criterion, TissueLimits } from '../beam/tissue-limits.js';
+import type { Criterion, LimitCriteria } from '../beam/tissue-limits.js';
 import { distanceReported, fmt, rec } from '../beam/format.js';
 import { solveRange, type RangeResult } from './range.js';
 
@@ -37,7 +37,7 @@ export interface DistanceOutcome {
   readonly range: RangeResult;
 }
 
-export function distanceOver(tl: TissueLimits, spec: DistanceSpec): DistanceOutcome {
+export function distanceOver(tl: LimitCriteria, spec: DistanceSpec): DistanceOutcome {
   const trace: Trace = newTrace(`${spec.label}`);
   addStep(trace, { kind: 'formula', label: 'Method', detail: spec.formula, source: spec.source, confidence: spec.confidence });
   for (const n of spec.notes ?? []) addStep(trace, { kind: 'input', label: n.label, detail: n.detail, ...(n.source ? { source: n.source } : {}), ...(n.confidence ? { confidence: n.confidence } : {}) });
