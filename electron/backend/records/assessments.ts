@@ -6,6 +6,7 @@
  * the database triggers would refuse it anyway). Signing turns the draft into the signed revision
  * and marks the previously signed one superseded, all in one transaction.
  */
+import { deflateRawSync, inflateRawSync } from 'node:zlib';
 import type { RoomInput } from '../../../core/model/inputs.js';
 import type { RoomResult } from '../../../core/model/results.js';
 import { AssessmentContentSchema, SignOffSchema } from '../schemas/records.js';
@@ -46,7 +47,8 @@ export interface RevisionRow {
   revision_no: number;
   status: RevisionStatus;
   content_json: string;
-  results_json: string;
+  /** DEFLATE-compressed JSON of the RoomResult (see migration 0001). */
+  results_z: Buffer;
   calculated_with: string;
   based_on: string | null;
   created_at: string;
@@ -93,7 +95,7 @@ function getSignatureRow(ctx: StoreContext, revisionId: Id): SignatureRow | unde
 
 function revisionFromRow(ctx: StoreContext, r: RevisionRow): Revision {
   const content = parseOrThrow(AssessmentContentSchema, JSON.parse(r.content_json), `Stored content of revision ${r.revision_no}`);
-  const results = parseOrThrow(RoomResultSchema, JSON.parse(r.results_json), `Stored results of revision ${r.revision_no}`);
+  const results = parseOrThrow(RoomResultSchema, decodeResults(r.results_z), `Stored results of revision ${r.revision_no}`);
   const sig = getSignatureRow(ctx, r.id);
   return {
     id: r.id,
@@ -128,6 +130,14 @@ function getRevisionRow(ctx: StoreContext, revisionId: Id): RevisionRow {
   const r = ctx.db.prepare('SELECT * FROM revision WHERE id = ?').get(revisionId) as RevisionRow | undefined;
   if (!r) throw notFound('revision', revisionId);
   return r;
+}
+
+/** Results are stored DEFLATE-compressed (migration 0001 explains why). */
+export function encodeResults(results: RoomResult): Buffer {
+  return deflateRawSync(Buffer.from(JSON.stringify(results), 'utf8'));
+}
+export function decodeResults(z: Buffer): unknown {
+  return JSON.parse(inflateRawSync(z).toString('utf8'));
 }
 
 // ---------------------------------------------------------------- content
@@ -323,9 +333,9 @@ export function compareRevisions(ctx: StoreContext, fromId: Id, toId: Id): Field
 
 // ---------------------------------------------------------------- writes
 
-const INSERT_REVISION = `INSERT INTO revision (id, assessment_id, revision_no, status, content_json, results_json, calculated_with, based_on,
+const INSERT_REVISION = `INSERT INTO revision (id, assessment_id, revision_no, status, content_json, results_z, calculated_with, based_on,
   created_at, updated_at, title, review_by)
-  VALUES (@id, @assessment_id, @revision_no, @status, @content_json, @results_json, @calculated_with, @based_on,
+  VALUES (@id, @assessment_id, @revision_no, @status, @content_json, @results_z, @calculated_with, @based_on,
   @created_at, @updated_at, @title, @review_by)`;
 
 export function insertRevisionRow(ctx: StoreContext, row: RevisionRow): void {
@@ -361,7 +371,7 @@ export function createAssessment(
       revision_no: 1,
       status: 'draft',
       content_json: JSON.stringify(content),
-      results_json: JSON.stringify(results),
+      results_z: encodeResults(results),
       calculated_with: ctx.calculatedWith,
       based_on: null,
       created_at: now,
@@ -374,20 +384,34 @@ export function createAssessment(
   return getAssessment(ctx, id);
 }
 
+/**
+ * Results for `content`: reused from `previous` when its input is identical and it was computed by
+ * this core (saving notes, controls or sign-off text does not recompute), otherwise recomputed.
+ */
+function resultsFor(ctx: StoreContext, content: AssessmentContent, previous: RevisionRow | null): Buffer {
+  if (previous !== null && previous.calculated_with === ctx.calculatedWith) {
+    const prevInput: unknown = (JSON.parse(previous.content_json) as { input?: unknown }).input;
+    if (canonicalJson(prevInput) === canonicalJson(content.input)) return previous.results_z;
+  }
+  return encodeResults(evaluate(ctx, content.input));
+}
+
 export function saveAssessment(ctx: StoreContext, id: Id, rawContent: AssessmentContent): Assessment {
   const content = normaliseContent(rawContent);
   getAssessmentRow(ctx, id);
-  const results = evaluate(ctx, content.input);
+  const before = newestRevisionRow(ctx, id);
+  const resultsZ = resultsFor(ctx, content, before);
   const now = ctx.now();
   write(ctx, 'Assessment', () => {
     const current = newestRevisionRow(ctx, id);
+    if (current.id !== before.id || current.status !== before.status) throw new RecordError('conflict', 'The assessment changed while saving; reload and try again');
     if (current.status === 'draft') {
       ctx.db
         .prepare(
-          `UPDATE revision SET content_json = ?, results_json = ?, calculated_with = ?, updated_at = ?, title = ?, review_by = ?
+          `UPDATE revision SET content_json = ?, results_z = ?, calculated_with = ?, updated_at = ?, title = ?, review_by = ?
            WHERE id = ? AND status = 'draft'`,
         )
-        .run(JSON.stringify(content), JSON.stringify(results), ctx.calculatedWith, now, content.title, content.reviewBy, current.id);
+        .run(JSON.stringify(content), resultsZ, ctx.calculatedWith, now, content.title, content.reviewBy, current.id);
       ctx.audit('saved', 'revision', current.id, `revision ${current.revision_no}`);
     } else {
       const revId = ctx.newId();
@@ -397,7 +421,7 @@ export function saveAssessment(ctx: StoreContext, id: Id, rawContent: Assessment
         revision_no: current.revision_no + 1,
         status: 'draft',
         content_json: JSON.stringify(content),
-        results_json: JSON.stringify(results),
+        results_z: resultsZ,
         calculated_with: ctx.calculatedWith,
         based_on: current.id,
         created_at: now,
@@ -463,9 +487,9 @@ export function signAssessment(ctx: StoreContext, id: Id, rawSignOff: SignOff): 
   write(ctx, 'Sign-off', () => {
     const again = newestRevisionRow(ctx, id);
     if (again.id !== draft.id || again.status !== 'draft') throw new RecordError('conflict', 'The assessment changed while signing; try again');
-    const resultsJson = JSON.stringify(results);
-    if (resultsJson !== draft.results_json || draft.calculated_with !== ctx.calculatedWith) {
-      ctx.db.prepare("UPDATE revision SET results_json = ?, calculated_with = ? WHERE id = ? AND status = 'draft'").run(resultsJson, ctx.calculatedWith, draft.id);
+    const resultsZ = encodeResults(results);
+    if (!resultsZ.equals(draft.results_z) || draft.calculated_with !== ctx.calculatedWith) {
+      ctx.db.prepare("UPDATE revision SET results_z = ?, calculated_with = ? WHERE id = ? AND status = 'draft'").run(resultsZ, ctx.calculatedWith, draft.id);
     }
     registerKey(ctx, key.keyId, key.publicKeyPem, 'this-database');
     const fingerprint = fingerprintOf(content, results, ctx.calculatedWith);
@@ -514,12 +538,12 @@ export function verifyAssessment(ctx: StoreContext, assessmentId: Id, revisionId
   let content: AssessmentContent | null = null;
   let storedResults: unknown = null;
   try {
-    storedResults = JSON.parse(r.results_json);
+    storedResults = decodeResults(r.results_z);
     const c = AssessmentContentSchema.safeParse(JSON.parse(r.content_json));
     if (c.success) content = c.data;
     else findings.push(`The stored content is not a valid assessment (${c.error.issues[0]?.message ?? 'schema'}): it was changed outside Beamwarden.`);
   } catch {
-    findings.push('The stored content or results are not valid JSON: the record was changed outside Beamwarden.');
+    findings.push('The stored content or results cannot be read (not valid JSON or not valid compressed data): the record was changed outside Beamwarden.');
   }
 
   // 2. Recompute with this core.

@@ -5,17 +5,12 @@
  */
 import type { RoomInput } from '../../../core/model/inputs.js';
 import type { RoomResult } from '../../../core/model/results.js';
-import * as core from '../../../core/index.js';
+import { evaluateRoom as coreEvaluateRoom } from '../../../core/index.js';
 import pkg from '../../../package.json' with { type: 'json' };
-import { RecordError } from './types.js';
 
 export type Evaluate = (input: RoomInput) => RoomResult;
 
 /** e.g. "beamwarden-core 0.1.0" (the package version; the core ships inside it). */
 export const CALCULATED_WITH = `beamwarden-core ${pkg.version}`;
 
-export const evaluateRoom: Evaluate = (input) => {
-  const fn = (core as unknown as Record<string, unknown>)['evaluateRoom'];
-  if (typeof fn !== 'function') throw new RecordError('invalid', 'The calculation core has no evaluateRoom yet');
-  return (fn as Evaluate)(input);
-};
+export const evaluateRoom: Evaluate = coreEvaluateRoom;

@@ -18,7 +18,7 @@ import { formatZodIssues } from '../schemas/issues.js';
 import { canonicalJson } from './canonical.js';
 import type { StoreContext } from './context.js';
 import { translateSqliteError } from './context.js';
-import { insertRevisionRow, registerKey, statementFor, type RevisionRow } from './assessments.js';
+import { encodeResults, insertRevisionRow, registerKey, statementFor, type RevisionRow } from './assessments.js';
 import { getAssessment, getRevision, listRevisions } from './assessments.js';
 import {
   getInstallation,
@@ -274,7 +274,7 @@ function revisionRow(r: Revision): RevisionRow {
     revision_no: r.revisionNo,
     status: 'draft',
     content_json: JSON.stringify(r.content),
-    results_json: JSON.stringify(r.results),
+    results_z: encodeResults(r.results),
     calculated_with: r.calculatedWith,
     based_on: r.basedOn,
     created_at: r.createdAt,

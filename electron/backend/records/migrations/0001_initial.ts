@@ -101,7 +101,10 @@ CREATE TABLE revision (
   revision_no INTEGER NOT NULL CHECK (revision_no >= 1),
   status TEXT NOT NULL CHECK (status IN ('draft','signed','superseded')),
   content_json TEXT NOT NULL CHECK (json_valid(content_json)),
-  results_json TEXT NOT NULL CHECK (json_valid(results_json)),
+  -- The core's RoomResult as JSON, DEFLATE-compressed (RFC 1951): results carry full derivation
+  -- traces (tens to hundreds of kB per room) and compress about tenfold; they are derived data,
+  -- recomputable from content_json, and exports carry them as plain JSON.
+  results_z BLOB NOT NULL CHECK (length(results_z) > 0),
   calculated_with TEXT NOT NULL,
   based_on TEXT REFERENCES revision(id) ON DELETE RESTRICT,
   created_at TEXT NOT NULL,
@@ -135,7 +138,7 @@ CREATE TRIGGER revision_signed_immutable BEFORE UPDATE ON revision
 WHEN OLD.status <> 'draft' AND NOT (
   OLD.status = 'signed' AND NEW.status = 'superseded'
   AND NEW.id IS OLD.id AND NEW.assessment_id IS OLD.assessment_id AND NEW.revision_no IS OLD.revision_no
-  AND NEW.content_json IS OLD.content_json AND NEW.results_json IS OLD.results_json
+  AND NEW.content_json IS OLD.content_json AND NEW.results_z IS OLD.results_z
   AND NEW.calculated_with IS OLD.calculated_with AND NEW.based_on IS OLD.based_on
   AND NEW.created_at IS OLD.created_at AND NEW.updated_at IS OLD.updated_at)
 BEGIN SELECT RAISE(ABORT, 'beamwarden: a signed revision cannot be changed; save creates a new draft revision'); END;

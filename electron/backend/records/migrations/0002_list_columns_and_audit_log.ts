@@ -22,7 +22,7 @@ CREATE TRIGGER revision_signed_immutable BEFORE UPDATE ON revision
 WHEN OLD.status <> 'draft' AND NOT (
   OLD.status = 'signed' AND NEW.status = 'superseded'
   AND NEW.id IS OLD.id AND NEW.assessment_id IS OLD.assessment_id AND NEW.revision_no IS OLD.revision_no
-  AND NEW.content_json IS OLD.content_json AND NEW.results_json IS OLD.results_json
+  AND NEW.content_json IS OLD.content_json AND NEW.results_z IS OLD.results_z
   AND NEW.calculated_with IS OLD.calculated_with AND NEW.based_on IS OLD.based_on
   AND NEW.created_at IS OLD.created_at AND NEW.updated_at IS OLD.updated_at
   AND NEW.title IS OLD.title AND NEW.review_by IS OLD.review_by)
