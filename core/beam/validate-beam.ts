@@ -81,7 +81,10 @@ export function validateBeamInput(input: unknown, prefix = '', roomRuleSet?: Rul
   }
 
   if (b['exposureDuration_s'] !== undefined) {
-    requireInRange(p('exposureDuration_s'), b['exposureDuration_s'], DURATION_RANGE_S[0], DURATION_RANGE_S[1], 's');
+    const T = requireInRange(p('exposureDuration_s'), b['exposureDuration_s'], DURATION_RANGE_S[0], DURATION_RANGE_S[1], 's');
+    if (kind === 'pulsed' && T < (e['pulseDuration_s'] as number)) {
+      throw new InputError('out_of_range', p('exposureDuration_s'), T, `at least the pulse duration (${String(e['pulseDuration_s'])} s)`);
+    }
   }
   if (b['sourceAngle_rad'] !== undefined) requireInRange(p('sourceAngle_rad'), b['sourceAngle_rad'], 0, Math.PI, 'rad');
 
