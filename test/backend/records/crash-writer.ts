@@ -1,0 +1,43 @@
+/**
+ * Child process for crash-safety.test.ts: writes assessments in a loop until it is killed.
+ * After each call returns (the transaction has committed) it prints one line:
+ *   committed <assessmentId> <revisionNo> <status> <counter>
+ * The parent kills it with SIGKILL at an arbitrary moment and then checks the file.
+ */
+import { join } from 'node:path';
+import { openRecordStore } from '../../../electron/backend/records/index.js';
+import { DemoScenarioSchema } from '../../../electron/backend/records/demo.js';
+import demo from '../../../assets/demo/demo-scenario.json' with { type: 'json' };
+
+const [dbPath, keyDir] = process.argv.slice(2);
+if (!dbPath || !keyDir) throw new Error('usage: crash-writer <db> <keyDir>');
+const store = openRecordStore({ path: dbPath, keyDir });
+const scenario = DemoScenarioSchema.parse(demo);
+const r = scenario.rooms.find((x) => x.code === 'A0.07');
+if (!r) throw new Error('demo room missing');
+
+let site = store.listSites()[0];
+site ??= store.createSite({ name: scenario.site.name });
+let room = store.listRooms(site.id)[0];
+if (!room) {
+  room = store.createRoom({ siteId: site.id, code: r.code, name: r.name });
+  for (const laser of r.input.lasers) store.createInstallation({ roomId: room.id, laser });
+}
+const base = store.newAssessmentContent(room.id);
+const say = (line: string) => process.stdout.write(`${line}\n`);
+say(`ready ${join(dbPath)}`);
+
+let counter = 0;
+for (;;) {
+  const a = store.createAssessment({ roomId: room.id, content: { ...base, notes: `n${++counter}` } });
+  say(`committed ${a.id} ${a.current.revisionNo} ${a.current.status} ${counter}`);
+  for (let i = 0; i < 8; i++) {
+    const cur = store.getAssessment(a.id).current;
+    const saved = store.saveAssessment(a.id, { ...cur.content, notes: `n${++counter}` });
+    say(`committed ${a.id} ${saved.current.revisionNo} ${saved.current.status} ${counter}`);
+    if (i % 3 === 2) {
+      const s = store.signAssessment(a.id, { name: 'Crash Test Officer', role: 'LSO', statement: 'Signed in a loop.' });
+      say(`committed ${a.id} ${s.current.revisionNo} ${s.current.status} ${counter}`);
+    }
+  }
+}

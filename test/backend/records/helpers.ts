@@ -1,0 +1,60 @@
+/**
+ * Shared set-up for the record-store tests: real SQLite files in fresh temporary folders (no mocks),
+ * and a small register built from the invented demo site (assets/demo/demo-scenario.json). The
+ * records tests check storage, signing and exchange — not physics, so invented inputs are fine.
+ */
+import { mkdtempSync, rmSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import Database from 'better-sqlite3';
+import demo from '../../../assets/demo/demo-scenario.json' with { type: 'json' };
+import { DemoScenarioSchema } from '../../../electron/backend/records/demo.js';
+import { openRecordStore, type RecordStore, type Room, type Site } from '../../../electron/backend/records/index.js';
+
+export const scenario = DemoScenarioSchema.parse(demo);
+
+export function tempDir(prefix = 'bw-records-'): { dir: string; cleanup: () => void } {
+  const dir = mkdtempSync(join(tmpdir(), prefix));
+  return { dir, cleanup: () => rmSync(dir, { recursive: true, force: true }) };
+}
+
+export function openTemp(dir: string, name = 'records.sqlite'): RecordStore {
+  return openRecordStore({ path: join(dir, name), keyDir: join(dir, 'keys') });
+}
+
+/** Demo room by code (invented), e.g. A0.07 telecom bench: two lasers, fast to evaluate. */
+export function demoRoom(code: string) {
+  const r = scenario.rooms.find((x) => x.code === code);
+  if (!r) throw new Error(`no demo room ${code}`);
+  return r;
+}
+
+/** A site with one room registered from the demo scenario, its lasers and the site eyewear. */
+export function registerRoom(store: RecordStore, code = 'A0.07'): { site: Site; room: Room } {
+  const r = demoRoom(code);
+  const site = store.createSite({ name: scenario.site.name, building: scenario.site.building });
+  const room = store.createRoom({ siteId: site.id, code: r.code, name: r.name, responsiblePerson: r.responsible });
+  for (const laser of r.input.lasers) store.createInstallation({ roomId: room.id, laser, laserType: laser.name });
+  for (const spec of scenario.eyewear) store.createEyewear({ siteId: site.id, spec });
+  return { site, room };
+}
+
+/** Every row of every table of a database file, for "nothing changed" checks (raw SQL, read-only). */
+export function snapshot(path: string): string {
+  const db = new Database(path, { readonly: true });
+  try {
+    const tables = (db.prepare("SELECT name FROM sqlite_schema WHERE type = 'table' ORDER BY name").all() as Array<{ name: string }>).map((t) => t.name);
+    const out: Record<string, unknown[]> = {};
+    for (const t of tables) {
+      // Table names come from sqlite_schema itself; they cannot be bound as parameters.
+      out[t] = db.prepare(`SELECT * FROM "${t.replace(/"/g, '""')}" ORDER BY rowid`).all().map((row) =>
+        Object.fromEntries(Object.entries(row as Record<string, unknown>).map(([k, v]) => [k, Buffer.isBuffer(v) ? v.toString('base64') : v])),
+      );
+    }
+    return JSON.stringify(out);
+  } finally {
+    db.close();
+  }
+}
+
+export const STATEMENT = 'I have evaluated the laser hazards of this area with the inputs and assumptions recorded here and approve the controls listed.';
