@@ -13,7 +13,7 @@ import { InputError, requireInRange } from '../errors.js';
 import type { LimitSettings, RuleSetId, Tissue } from '../model/inputs.js';
 import { addStep, newTrace, type Trace } from '../trace/trace.js';
 import { condition, evaluate, substitute, variablesOf } from './expression.js';
-import { conservativeOn, evaluateFactors, type FactorSet } from './factors.js';
+import { conservativeOn, evaluateFactors, FACTOR_ORDER, type FactorSet, type FactorValue } from './factors.js';
 import { DEFAULT_RULE_SET, DURATION_RANGE_S, RULE_SET_IDS, RULE_SET_NAME, ruleSetTable, WAVELENGTH_RANGE_NM } from './rule-sets.js';
 import type { Interval, LimitRow, RuleSetTable } from './table-types.js';
 import { limitingAperture, type ApertureResult } from './apertures.js';
@@ -77,9 +77,19 @@ export interface ExposureLimitResult {
 const REL_EDGE = new Dec('1e-9');
 
 /** Is x inside [lo, hi), or on an edge (within a relative tolerance, spec convention 'boundary_values')? */
+/** The interval edges as decimals, built once per table interval (the tables are fixed). */
+const edgeCache = new WeakMap<Interval, readonly [Dec, Dec]>();
+function edges(iv: Interval): readonly [Dec, Dec] {
+  let e = edgeCache.get(iv);
+  if (!e) {
+    e = [new Dec(iv[0]), new Dec(iv[1])];
+    edgeCache.set(iv, e);
+  }
+  return e;
+}
+
 function position(x: Dec, iv: Interval, topInclusive: boolean): 'inside' | 'edge' | 'outside' {
-  const lo = new Dec(iv[0]);
-  const hi = new Dec(iv[1]);
+  const [lo, hi] = edges(iv);
   const near = (a: Dec, b: Dec): boolean => a.minus(b).abs().lte(Dec.max(a.abs(), b.abs()).mul(REL_EDGE));
   if (near(x, hi)) return topInclusive ? 'inside' : 'edge';
   if (near(x, lo)) return 'inside';
@@ -87,10 +97,25 @@ function position(x: Dec, iv: Interval, topInclusive: boolean): 'inside' | 'edge
   return 'outside';
 }
 
-function rowApplies(row: LimitRow, lambda: Dec, t: Dec): boolean {
+/**
+ * Quick reject in plain numbers before the exact decimal test: a value more than 1e-6 (relative)
+ * outside [lo, hi] can never be inside or on an edge (the exact test's tolerance is 1e-9). This only
+ * skips work; every row that may apply still gets the exact decimal test (speed, see npm run bench).
+ */
+function clearlyOutside(x: number, iv: Interval): boolean {
+  return x < iv[0] * (1 - 1e-6) || x > iv[1] * (1 + 1e-6);
+}
+
+function rowApplies(row: LimitRow, lambda: Dec, t: Dec, lambdaN: number, tN: number): boolean {
+  if (clearlyOutside(lambdaN, row.band_nm) || clearlyOutside(tN, row.t_s)) return false;
   const pl = position(lambda, row.band_nm, row.band_nm[1] === WAVELENGTH_RANGE_NM[1]);
   const pt = position(t, row.t_s, row.t_s[1] === DURATION_RANGE_S[1]);
   return pl !== 'outside' && pt !== 'outside';
+}
+
+/** Does any piece of this factor carry a conservative alternative (only those can be replaced)? */
+function hasConservativePiece(table: RuleSetTable, name: string): boolean {
+  return (table.factors[name]?.pieces ?? []).some((p) => p.conservative_alt !== undefined);
 }
 
 function isRetinal(row: LimitRow): boolean {
@@ -124,13 +149,17 @@ interface Ctx {
   readonly f: FactorSet;
   readonly settings: LimitSettings | undefined;
   readonly tissue: Tissue;
+  /** lambda and t as plain numbers, for the quick reject in rowApplies only. */
+  readonly lambdaN: number;
+  readonly tN: number;
+  readonly apertures: Map<Tissue, ApertureResult>;
 }
 
 function candidatesFor(ctx: Ctx, tableTissue: Tissue, followRefs: boolean, onlyNonRetinal: boolean, apertureTissue: Tissue): LimitCandidate[] {
   const out: LimitCandidate[] = [];
   const rows = ctx.table[tableTissue];
   for (const row of rows) {
-    if (!rowApplies(row, ctx.lambda, ctx.t)) continue;
+    if (!rowApplies(row, ctx.lambda, ctx.t, ctx.lambdaN, ctx.tN)) continue;
     if (row.when && !condition(row.when, ctx.f.vars)) continue;
     if (row.quantity === 'ref') {
       if (!followRefs) continue; // spec convention 'ref_rows': one level only
@@ -165,13 +194,20 @@ function evaluateRow(ctx: Ctx, row: LimitRow, tableTissue: Tissue, apertureTissu
   // than gamma_p only the fraction (gamma_p/alpha)^2 of its irradiance counts, which is the same as
   // raising the limit by (alpha/gamma_p)^2 (derived; limit specification sections 4.2 and 8).
   let fov: Dec | undefined;
-  const gamma = vars['gamma_p'];
-  const alpha = vars['alpha'] as Dec;
-  if (row.effect.includes('photochemical') && row.effect.startsWith('retinal') && gamma && alpha.gt(gamma)) {
-    fov = alpha.div(gamma).pow(2);
-    H = H.mul(fov);
+  if (row.effect.includes('photochemical') && row.effect.startsWith('retinal')) {
+    const gamma = vars['gamma_p'];
+    const alpha = vars['alpha'] as Dec;
+    if (gamma && alpha.gt(gamma)) {
+      fov = alpha.div(gamma).pow(2);
+      H = H.mul(fov);
+    }
   }
-  const aperture = limitingAperture(ctx.ruleSet, apertureTissue, ctx.lambda, ctx.t, ctx.settings);
+  // Same tissue, wavelength and duration for every candidate: look the aperture up once per tissue.
+  let aperture = ctx.apertures.get(apertureTissue);
+  if (!aperture) {
+    aperture = limitingAperture(ctx.ruleSet, apertureTissue, ctx.lambda, ctx.t, ctx.settings);
+    ctx.apertures.set(apertureTissue, aperture);
+  }
   const c: LimitCandidate = {
     rowId: row.id,
     tissueTable: tableTissue,
@@ -201,7 +237,7 @@ export function exposureLimit(q: ExposureLimitQuery): ExposureLimitResult {
   // Source size only matters for the retina; skin limits are for a point of skin (alpha unused).
   const alphaForFactors = q.tissue === 'eye' ? alphaMrad : new Dec(0);
   const f = evaluateFactors(table, lambda, t, alphaForFactors, settings);
-  const ctx: Ctx = { table, ruleSet, lambda, t, f, settings, tissue: q.tissue };
+  const ctx: Ctx = { table, ruleSet, lambda, t, f, settings, tissue: q.tissue, lambdaN: lambda.toNumber(), tN: t.toNumber(), apertures: new Map() };
   const candidates = candidatesFor(ctx, q.tissue, true, false, q.tissue);
   if (candidates.length === 0) {
     throw new InputError('not_covered', 'wavelength_nm', q.wavelength_nm, `a band of rule set ${ruleSet} at ${t.toString()} s`);
@@ -213,12 +249,22 @@ export function exposureLimit(q: ExposureLimitQuery): ExposureLimitResult {
   if (!H.isFinite() || H.lte(0)) throw new Error(`internal: limit not positive for ${JSON.stringify(q)}`);
   const E = H.div(t);
 
-  const factors: Record<string, string> = {};
-  for (const [k, v] of f.used) factors[k] = recordString(v.value);
+  // Every factor defined here, in FACTOR_ORDER; built on first read (factors are lazy, see factors.ts).
+  let factorsCache: Record<string, string> | undefined;
+  const allFactors = (): Record<string, string> => {
+    if (!factorsCache) {
+      factorsCache = {};
+      for (const [k, v] of f.used) factorsCache[k] = recordString(v.value);
+    }
+    return factorsCache;
+  };
 
   const conservativeReplacements = [
     ...candidates.filter((c) => c.conservativeApplied).map((c) => c.rowId),
-    ...[...f.used.values()].filter((v) => v.conservativeApplied).map((v) => `factor:${v.name}`),
+    ...FACTOR_ORDER.filter((n) => hasConservativePiece(table, n))
+      .map((n) => f.get(n))
+      .filter((v): v is FactorValue => v !== undefined && v.conservativeApplied)
+      .map((v) => `factor:${v.name}`),
     ...(governing.aperture.conservativeApplied ? [governing.aperture.key] : []),
   ];
   const fromMemoryRows = candidates.filter((c) => c.confidence.startsWith('from memory')).map((c) => c.rowId);
@@ -235,8 +281,10 @@ export function exposureLimit(q: ExposureLimitQuery): ExposureLimitResult {
   for (const row of [...table.eye, ...table.skin]) if (candidates.some((c) => c.rowId === row.id) && row.when) for (const n of ['alpha', 'T1', 'T2']) if (row.when.includes(n)) shown.add(n);
   if (shown.has('CE')) ['alpha_min', 'alpha_max'].forEach((n) => shown.add(n));
   if (candidates.some((c) => c.fieldOfViewFactor)) shown.add('gamma_p');
-  for (const v of f.used.values()) {
-    if (!shown.has(v.name)) continue;
+  for (const name of FACTOR_ORDER) {
+    if (!shown.has(name)) continue;
+    const v = f.get(name);
+    if (!v) continue;
     addStep(trace, {
       kind: v.conservativeApplied ? 'conservative' : 'factor',
       label: v.name,
@@ -307,7 +355,9 @@ export function exposureLimit(q: ExposureLimitQuery): ExposureLimitResult {
     E_Wm2_reported: Er.toString(),
     governing,
     candidates,
-    factors,
+    get factors(): Record<string, string> {
+      return allFactors();
+    },
     aperture: governing.aperture,
     conservativeReplacements,
     fromMemoryRows,

@@ -91,6 +91,31 @@ class Parser {
   }
 }
 
+const LN10 = Dec.ln(10);
+
+/**
+ * a^b for the tables' exponents, fast and deterministic. decimal.js computes a non-integer power as
+ * exp(b*ln(a)) at 40 digits, which takes a large part of a millisecond; the tables only use
+ * exponents k/2^n (t^0.75, t^0.25, t^0.5, t^0.375, T2^(-0.25)) and powers of ten. For those:
+ * n square roots (correctly rounded in decimal.js) then an integer power, and 10^b = exp(b*ln 10)
+ * with ln 10 computed once. Both agree with a.pow(b) far beyond the 20 digits kept in records.
+ */
+function power(a: Dec, b: Dec): Dec {
+  if (b.isInteger()) return a.pow(b);
+  if (a.gt(0)) {
+    for (let n = 1, scale = 2; n <= 3; n++, scale *= 2) {
+      const k = b.mul(scale);
+      if (k.isInteger()) {
+        let r = a;
+        for (let i = 0; i < n; i++) r = r.sqrt();
+        return r.pow(k);
+      }
+    }
+    if (a.eq(10)) return Dec.exp(b.mul(LN10));
+  }
+  return a.pow(b);
+}
+
 const exprCache = new Map<string, Node>();
 
 function parseExpression(src: string): Node {
@@ -128,7 +153,7 @@ function evalNode(n: Node, vars: Vars): Dec {
         case '/':
           return a.div(b);
         case '^':
-          return a.pow(b);
+          return power(a, b);
       }
     }
   }
@@ -156,8 +181,15 @@ export function variablesOf(src: string): string[] {
 }
 
 /** Substitute values into an expression for the trace, e.g. "18*t^0.75*CE" -> "18*(0.25)^0.75*(1)". */
+const tokenCache = new Map<string, string[]>();
+
 export function substitute(src: string, vars: Vars, fmt: (d: Dec) => string): string {
-  return tokenize(src)
+  let toks = tokenCache.get(src);
+  if (!toks) {
+    toks = tokenize(src);
+    tokenCache.set(src, toks);
+  }
+  return toks
     .map((t) => {
       if (/^[A-Za-z_]/.test(t)) {
         const v = vars[t];

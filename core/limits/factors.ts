@@ -80,16 +80,23 @@ export function evalFactor(
 }
 
 /** Order matters: later factors use earlier ones (C_E needs alpha_min and alpha_max). */
-const FACTOR_ORDER = ['alpha_min', 'alpha_max', 'CA', 'CB', 'CC', 'CE', 'T2', 'T1', 'C1', 'C2', 'gamma_p', 'T1_vis', 'T_i', 'T_min'] as const;
+export const FACTOR_ORDER = ['alpha_min', 'alpha_max', 'CA', 'CB', 'CC', 'CE', 'T2', 'T1', 'C1', 'C2', 'gamma_p', 'T1_vis', 'T_i', 'T_min'] as const;
 
 export interface FactorSet {
+  /** Variables for expressions; each factor is evaluated on first use (see evaluateFactors). */
   readonly vars: Record<string, Dec | undefined>;
+  /** Every factor defined at this point, in FACTOR_ORDER (evaluates those not yet used). */
   readonly used: Map<string, FactorValue>;
+  /** One factor, evaluated on first use; undefined where it is not defined at this point. */
+  get(name: string): FactorValue | undefined;
 }
 
 /**
- * All factors at (lambda nm, t s, alpha mrad). Returns the variables map for expressions and the
- * factor details for the trace.
+ * The factors at (lambda nm, t s, alpha mrad). Returns the variables map for expressions and the
+ * factor details for the trace. Factors are evaluated lazily, when an expression, a condition or
+ * the caller first asks for them: a non-integer power in 40-digit decimals is slow, and most rows
+ * use two or three of the twelve factors (speed, see npm run bench). The values are the same as an
+ * eager evaluation in FACTOR_ORDER.
  */
 export function evaluateFactors(
   table: RuleSetTable,
@@ -99,13 +106,28 @@ export function evaluateFactors(
   settings: LimitSettings | undefined,
 ): FactorSet {
   const vars: Record<string, Dec | undefined> = { lambda, t, alpha };
-  const used = new Map<string, FactorValue>();
-  for (const name of FACTOR_ORDER) {
-    const f = evalFactor(table, name, vars, settings);
-    if (f) {
-      vars[name] = f.value;
-      used.set(name, f);
+  const cache = new Map<string, FactorValue | null>();
+  const get = (name: string): FactorValue | undefined => {
+    let f = cache.get(name);
+    if (f === undefined) {
+      f = evalFactor(table, name, vars, settings) ?? null;
+      cache.set(name, f);
     }
+    return f ?? undefined;
+  };
+  for (const name of FACTOR_ORDER) {
+    Object.defineProperty(vars, name, { enumerable: true, get: () => get(name)?.value });
   }
-  return { vars, used };
+  return {
+    vars,
+    get,
+    get used(): Map<string, FactorValue> {
+      const all = new Map<string, FactorValue>();
+      for (const name of FACTOR_ORDER) {
+        const f = get(name);
+        if (f) all.set(name, f);
+      }
+      return all;
+    },
+  };
 }
