@@ -79,9 +79,11 @@ function checkIntegrity(db: Db, path: string): void {
     const result = db.pragma('integrity_check') as Array<{ integrity_check: string }>;
     rows = result.map((r) => r.integrity_check);
   } catch (e) {
+    const code = e instanceof Error && 'code' in e ? String((e as { code: unknown }).code) : '';
+    const what = code === 'SQLITE_NOTADB' ? 'is not a database file' : code.startsWith('SQLITE_CORRUPT') ? 'is damaged' : 'cannot be checked';
     throw new RecordError(
       'corrupt-database',
-      `${path} is not a Beamwarden database or is damaged (SQLite: ${sqliteMessage(e)}). Restore it from a backup (README: "Backup and restore").`,
+      `${path} ${what} (SQLite: ${sqliteMessage(e)}). Do not keep working in it: restore it from a backup (README: "Backup and restore").`,
     );
   }
   if (rows.length !== 1 || rows[0] !== 'ok') {
