@@ -146,8 +146,8 @@ describe('properties over random valid queries (fast-check)', () => {
   // either rule set (where the published rounding steps are; random pairs almost never land there).
   const edgesAll = [...new Set([...breakpoints('icnirp2013'), ...breakpoints('eu2006')])];
   const pair = fc.oneof(
-    fc.tuple(logUniform(1e-13, 3e4), logUniform(1e-13, 3e4)).map(([a, b]) => (a <= b ? [a, b] : [b, a]) as const),
-    fc.tuple(fc.constantFrom(...edgesAll), fc.double({ min: 1e-9, max: 0.05, noNaN: true })).map(([e, d]) => [e * (1 - d), Math.min(3e4, e * (1 + d))] as const),
+    fc.tuple(logUniform(1e-13, 3e4), logUniform(1e-13, 3e4)).map(([a, b]): [number, number] => (a <= b ? [a, b] : [b, a])),
+    fc.tuple(fc.constantFrom(...edgesAll), fc.double({ min: 1e-9, max: 0.05, noNaN: true })).map(([e, d]): [number, number] => [e * (1 - d), Math.min(3e4, e * (1 + d))]),
   );
 
   it('H never decreases with duration by more than 4.9 % (largest published rounding step), photochemical onset excepted', () => {
