@@ -1,0 +1,15 @@
+/**
+ * What every handler may use. Built once per process by the Electron main process or the loopback
+ * host; handlers never reach for globals, so the same table runs in both shells and in tests.
+ */
+import type { RecordStore } from '../backend/records/types.js';
+
+export type ShellKind = 'electron' | 'loopback';
+
+export interface ApiContext {
+  readonly shell: ShellKind;
+  readonly version: string;
+  /** Absolute path of the SQLite database in use. */
+  readonly databasePath: string;
+  readonly store: RecordStore;
+}

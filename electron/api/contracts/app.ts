@@ -1,0 +1,15 @@
+/** Contract of the 'app' area: what the renderer learns about the running application. */
+import type { RuleSetId } from '../../../core/model/inputs.js';
+import type { ShellKind } from '../context.js';
+
+export interface AppInfo {
+  readonly name: 'Beamwarden';
+  readonly version: string;
+  readonly shell: ShellKind;
+  readonly databasePath: string;
+  readonly ruleSets: ReadonlyArray<{ readonly id: RuleSetId; readonly name: string }>;
+}
+
+export type AppHandlers = {
+  'app-info': (args: Record<string, never>) => Promise<AppInfo>;
+};

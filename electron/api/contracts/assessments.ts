@@ -1,0 +1,29 @@
+/** Contract of the 'assessments' area: drafts, revisions, comparison, sign-off and verification. */
+import type { RoomInput } from '../../../core/model/inputs.js';
+import type {
+  Assessment,
+  AssessmentContent,
+  AssessmentSummary,
+  FieldDifference,
+  Id,
+  Revision,
+  RevisionSummary,
+  SignOff,
+  VerifyReport,
+} from '../../backend/records/types.js';
+
+export type AssessmentHandlers = {
+  'room-input-from-register': (args: { readonly roomId: Id }) => Promise<RoomInput>;
+  'assessment-new-content': (args: { readonly roomId: Id; readonly installationId?: Id | null }) => Promise<AssessmentContent>;
+  'assessment-create': (args: { readonly roomId: Id; readonly installationId?: Id | null; readonly content: AssessmentContent }) => Promise<Assessment>;
+  'assessment-get': (args: { readonly id: Id }) => Promise<Assessment>;
+  'assessments-list': (args: { readonly roomId: Id }) => Promise<AssessmentSummary[]>;
+  /** Saves into the open draft, or opens a new draft revision when the newest one is signed. */
+  'assessment-save': (args: { readonly id: Id; readonly content: AssessmentContent }) => Promise<Assessment>;
+  'assessment-discard-draft': (args: { readonly id: Id }) => Promise<void>;
+  'revisions-list': (args: { readonly assessmentId: Id }) => Promise<RevisionSummary[]>;
+  'revision-get': (args: { readonly revisionId: Id }) => Promise<Revision>;
+  'revisions-compare': (args: { readonly fromRevisionId: Id; readonly toRevisionId: Id }) => Promise<FieldDifference[]>;
+  'assessment-sign': (args: { readonly id: Id; readonly signOff: SignOff }) => Promise<Assessment>;
+  'assessment-verify': (args: { readonly assessmentId: Id; readonly revisionId?: Id }) => Promise<VerifyReport>;
+};

@@ -1,0 +1,26 @@
+/** Contract of the 'documents' area: the three printed documents as PDF bytes. */
+import type { Id } from '../../backend/records/types.js';
+
+export type DocumentKind = 'report' | 'door-notice' | 'eyewear-sheet';
+
+export interface BinaryFile {
+  readonly fileName: string;
+  readonly mime: 'application/pdf';
+  /** The file's bytes, base64 (travels unchanged over IPC and JSON). */
+  readonly base64: string;
+}
+
+export interface DocumentRequest {
+  readonly kind: DocumentKind;
+  readonly assessmentId: Id;
+  /** Default: the current revision. */
+  readonly revisionId?: Id;
+  readonly paper: 'A4' | 'Letter';
+  readonly units: 'SI' | 'ANSI';
+  /** The officer may raise the door notice's signal word to DANGER (domain 5.1). */
+  readonly signalWord?: 'DANGER';
+}
+
+export type DocumentHandlers = {
+  'document-render': (args: DocumentRequest) => Promise<BinaryFile>;
+};

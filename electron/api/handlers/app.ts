@@ -1,0 +1,18 @@
+import { RULE_SET_IDS, RULE_SET_NAME } from '../../../core/index.js';
+import type { AppHandlers } from '../contracts/app.js';
+import type { ApiContext } from '../context.js';
+import type { AreaTable } from '../operation.js';
+import { EmptySchema } from '../schemas/common.js';
+
+export const appTable: AreaTable<AppHandlers, ApiContext> = {
+  'app-info': {
+    input: EmptySchema,
+    run: (_args, ctx) => ({
+      name: 'Beamwarden',
+      version: ctx.version,
+      shell: ctx.shell,
+      databasePath: ctx.databasePath,
+      ruleSets: RULE_SET_IDS.map((id) => ({ id, name: RULE_SET_NAME[id] })),
+    }),
+  },
+};

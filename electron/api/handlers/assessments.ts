@@ -1,0 +1,41 @@
+import { z } from 'zod';
+import { AssessmentContentSchema, IdSchema, SignOffSchema } from '../../backend/schemas/index.js';
+import type { AssessmentHandlers } from '../contracts/assessments.js';
+import type { ApiContext } from '../context.js';
+import type { AreaTable } from '../operation.js';
+import { ByIdSchema } from '../schemas/common.js';
+
+const RoomRef = z.strictObject({ roomId: IdSchema });
+
+export const assessmentTable: AreaTable<AssessmentHandlers, ApiContext> = {
+  'room-input-from-register': { input: RoomRef, run: (a, { store }) => store.roomInputFromRegister(a.roomId) },
+  'assessment-new-content': {
+    input: z.strictObject({ roomId: IdSchema, installationId: IdSchema.nullable().optional() }),
+    run: (a, { store }) => store.newAssessmentContent(a.roomId, a.installationId ?? null),
+  },
+  'assessment-create': {
+    input: z.strictObject({ roomId: IdSchema, installationId: IdSchema.nullable().optional(), content: AssessmentContentSchema }),
+    run: (a, { store }) => store.createAssessment({ roomId: a.roomId, installationId: a.installationId ?? null, content: a.content }),
+  },
+  'assessment-get': { input: ByIdSchema, run: (a, { store }) => store.getAssessment(a.id) },
+  'assessments-list': { input: RoomRef, run: (a, { store }) => store.listAssessments(a.roomId) },
+  'assessment-save': {
+    input: z.strictObject({ id: IdSchema, content: AssessmentContentSchema }),
+    run: (a, { store }) => store.saveAssessment(a.id, a.content),
+  },
+  'assessment-discard-draft': { input: ByIdSchema, run: (a, { store }) => store.discardDraft(a.id) },
+  'revisions-list': { input: z.strictObject({ assessmentId: IdSchema }), run: (a, { store }) => store.listRevisions(a.assessmentId) },
+  'revision-get': { input: z.strictObject({ revisionId: IdSchema }), run: (a, { store }) => store.getRevision(a.revisionId) },
+  'revisions-compare': {
+    input: z.strictObject({ fromRevisionId: IdSchema, toRevisionId: IdSchema }),
+    run: (a, { store }) => store.compareRevisions(a.fromRevisionId, a.toRevisionId),
+  },
+  'assessment-sign': {
+    input: z.strictObject({ id: IdSchema, signOff: SignOffSchema }),
+    run: (a, { store }) => store.signAssessment(a.id, a.signOff),
+  },
+  'assessment-verify': {
+    input: z.strictObject({ assessmentId: IdSchema, revisionId: IdSchema.optional() }),
+    run: (a, { store }) => store.verify(a.assessmentId, a.revisionId),
+  },
+};

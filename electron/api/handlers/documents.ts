@@ -1,0 +1,36 @@
+import { z } from 'zod';
+import { IdSchema } from '../../backend/schemas/index.js';
+import { DOCUMENT_FILE_NAME, documentInputFromAssessment, renderDocument } from '../../backend/pdf/index.js';
+import type { DocumentHandlers } from '../contracts/documents.js';
+import type { ApiContext } from '../context.js';
+import type { AreaTable } from '../operation.js';
+
+export const DocumentRequestSchema = z.strictObject({
+  kind: z.enum(['report', 'door-notice', 'eyewear-sheet']),
+  assessmentId: IdSchema,
+  revisionId: IdSchema.optional(),
+  paper: z.enum(['A4', 'Letter']),
+  units: z.enum(['SI', 'ANSI']),
+  signalWord: z.literal('DANGER').optional(),
+});
+
+function fileSafe(s: string): string {
+  return s.replace(/[^A-Za-z0-9._-]+/g, '-').replace(/^-+|-+$/g, '').slice(0, 40) || 'room';
+}
+
+export const documentTable: AreaTable<DocumentHandlers, ApiContext> = {
+  'document-render': {
+    input: DocumentRequestSchema,
+    run: async (req, { store }) => {
+      const doc = documentInputFromAssessment(store, req.assessmentId, req.revisionId !== undefined ? { revisionId: req.revisionId } : {});
+      const pdf = await renderDocument(req.kind, doc, {
+        paper: req.paper,
+        units: req.units,
+        ...(req.signalWord !== undefined ? { signalWord: req.signalWord } : {}),
+      });
+      const state = doc.signature ? 'signed' : 'DRAFT';
+      const fileName = `${DOCUMENT_FILE_NAME[req.kind]}-${fileSafe(doc.room.code)}-rev${doc.assessment.revisionNo}-${state}.pdf`;
+      return { fileName, mime: 'application/pdf', base64: pdf.toString('base64') };
+    },
+  },
+};

@@ -1,0 +1,22 @@
+/**
+ * The ONE handler table (operation name -> zod input schema -> handler), merged from the areas.
+ * Registered by electron/main (ipcMain.handle loop) and by electron/host (HTTP); nothing else
+ * answers the renderer.
+ */
+import type { ApiContext } from './context.js';
+import type { HandlerTable, OperationName } from './operation.js';
+import { appTable } from './handlers/app.js';
+import { assessmentTable } from './handlers/assessments.js';
+import { documentTable } from './handlers/documents.js';
+import { exchangeTable } from './handlers/exchange.js';
+import { registerTable } from './handlers/register.js';
+
+export const handlerTable: HandlerTable<ApiContext> = {
+  ...appTable,
+  ...registerTable,
+  ...assessmentTable,
+  ...exchangeTable,
+  ...documentTable,
+};
+
+export const OPERATION_NAMES = Object.keys(handlerTable) as readonly OperationName[];

@@ -1,0 +1,147 @@
+/**
+ * The workspace draft: an AssessmentContent opened for editing (beams as text fields) and turned
+ * back into content for saving. Pure functions over plain objects; the Svelte state wraps them.
+ */
+import {
+  DEFAULT_RULE_SET,
+  defaultExposureDuration,
+  type EyewearSpec,
+  type LimitSettings,
+  type RoomInput,
+  type RuleSetId,
+} from '../../core/index.js';
+import type {
+  AssessmentContent,
+  ControlChoice,
+  EyewearChoice,
+  NonBeamHazard,
+  OperatingState,
+} from '../../electron/backend/records/types.js';
+import { laserFormFrom, laserInputFrom, beamErrors, missingValues, type BeamForm, type LaserForm } from './beam-form.js';
+import { wavelengthNm } from './fields.js';
+
+export interface Draft {
+  title: string;
+  ruleSet: RuleSetId;
+  settings: LimitSettings;
+  lasers: LaserForm[];
+  eyewear: EyewearSpec[];
+  operatingStates: OperatingState[];
+  personsPresent: string;
+  opticalAidsPossible: boolean;
+  /** One assumption per line. */
+  otherAssumptions: string;
+  controls: ControlChoice[];
+  nonBeamHazards: NonBeamHazard[];
+  eyewearChosen: EyewearChoice[];
+  notes: string;
+  /** '' = no review date. */
+  reviewBy: string;
+}
+
+/** Deep, mutable copy of plain JSON data (records arrive frozen-shaped as readonly types). */
+export function plainCopy<T>(x: T): T {
+  return JSON.parse(JSON.stringify(x)) as T;
+}
+
+export function draftFrom(content: AssessmentContent, registeredLaserIds: ReadonlySet<string>): Draft {
+  const why = new Map(content.assumptions.exposureDurations.map((d) => [d.beamId, d.why]));
+  return {
+    title: content.title,
+    ruleSet: content.input.ruleSet ?? DEFAULT_RULE_SET,
+    settings: plainCopy(content.input.settings ?? {}),
+    lasers: content.input.lasers.map((l) => laserFormFrom(l, !registeredLaserIds.has(l.id), why)),
+    eyewear: plainCopy([...(content.input.eyewear ?? [])]),
+    operatingStates: [...content.operatingStates],
+    personsPresent: content.assumptions.personsPresent,
+    opticalAidsPossible: content.assumptions.opticalAidsPossible,
+    otherAssumptions: content.assumptions.other.join('\n'),
+    controls: plainCopy([...content.controls]),
+    nonBeamHazards: plainCopy([...content.nonBeamHazards]),
+    eyewearChosen: plainCopy([...content.eyewearChosen]),
+    notes: content.notes,
+    reviewBy: content.reviewBy ?? '',
+  };
+}
+
+export interface DraftInput {
+  /** The core input from every complete beam (what the live results show). */
+  readonly input: RoomInput;
+  /** Beams left out because a required value is missing or a field shows an error. */
+  readonly incomplete: ReadonlyArray<{ readonly laser: LaserForm; readonly beam: BeamForm; readonly problems: readonly string[] }>;
+}
+
+export function roomInputFrom(d: Draft): DraftInput {
+  const lasers: RoomInput['lasers'][number][] = [];
+  const incomplete: Array<{ laser: LaserForm; beam: BeamForm; problems: string[] }> = [];
+  for (const lf of d.lasers) {
+    const { laser, incomplete: inc } = laserInputFrom(lf);
+    if (laser) lasers.push(laser);
+    for (const b of inc) incomplete.push({ laser: lf, beam: b, problems: missingValues(b).map((m) => `${m} is required`) });
+  }
+  for (const lf of d.lasers) {
+    for (const b of lf.beams) {
+      const errs = beamErrors(b);
+      if (errs.length > 0) {
+        const existing = incomplete.find((x) => x.beam === b);
+        if (existing) existing.problems.push(...errs);
+        else incomplete.push({ laser: lf, beam: b, problems: errs });
+      }
+    }
+  }
+  const settings = Object.keys(d.settings).length > 0 ? { settings: d.settings } : {};
+  return { input: { ruleSet: d.ruleSet, ...settings, lasers, eyewear: d.eyewear }, incomplete };
+}
+
+/** The exposure duration and its reason recorded for each beam (officer's choice, or the default). */
+export function durationChoices(d: Draft): AssessmentContent['assumptions']['exposureDurations'] {
+  const out: Array<AssessmentContent['assumptions']['exposureDurations'][number]> = [];
+  for (const l of d.lasers) {
+    for (const b of l.beams) {
+      const wl = wavelengthNm(b.f.wavelength);
+      if (wl === undefined) continue;
+      const typed = b.f.exposureDuration.value;
+      if (typed !== undefined) {
+        out.push({ beamId: b.id, duration_s: typed, why: b.durationWhy.trim() || 'chosen by the laser safety officer' });
+      } else {
+        const def = defaultExposureDuration(wl);
+        out.push({ beamId: b.id, duration_s: def.duration_s, why: `${def.why} (${def.basis})` });
+      }
+    }
+  }
+  return out;
+}
+
+export function contentFrom(d: Draft): AssessmentContent {
+  const { input } = roomInputFrom(d);
+  return {
+    title: d.title.trim() || 'Laser hazard assessment',
+    input,
+    operatingStates: d.operatingStates,
+    assumptions: {
+      exposureDurations: durationChoices(d),
+      personsPresent: d.personsPresent,
+      opticalAidsPossible: d.opticalAidsPossible,
+      other: d.otherAssumptions
+        .split('\n')
+        .map((s) => s.trim())
+        .filter((s) => s.length > 0),
+    },
+    controls: d.controls,
+    nonBeamHazards: d.nonBeamHazards,
+    eyewearChosen: d.eyewearChosen,
+    notes: d.notes,
+    reviewBy: d.reviewBy.trim() === '' ? null : d.reviewBy.trim(),
+  };
+}
+
+/** Why the draft cannot be saved yet (empty = it can). */
+export function saveBlockers(d: Draft): string[] {
+  const { incomplete } = roomInputFrom(d);
+  const out = incomplete.map((x) => `${x.laser.name || 'Unnamed laser'} / ${x.beam.label || 'beam'}: ${x.problems.join('; ')}`);
+  for (const c of d.controls) {
+    if (c.decision !== 'accepted' && !(c.reason ?? '').trim()) out.push(`Control "${c.measure}": give the reason it is ${c.decision === 'rejected' ? 'rejected' : 'not applicable'}`);
+  }
+  if (d.reviewBy.trim() !== '' && !/^\d{4}-\d{2}-\d{2}$/.test(d.reviewBy.trim())) out.push('Review-by date must be YYYY-MM-DD');
+  return out;
+}

@@ -1,0 +1,215 @@
+/**
+ * Application state shared by the screens: the register overview, the room being assessed, its
+ * assessment (as last saved) and the draft being edited, with live core results of the draft.
+ */
+import type { AppInfo } from '../../electron/api/contracts/app.js';
+import type { RegisterOverview, RoomOverview } from '../../electron/api/contracts/register.js';
+import type { Assessment, AssessmentContent, LaserInstallation, Room, Site } from '../../electron/backend/records/types.js';
+import { invoke, messageOf } from './api.js';
+import { contentFrom, draftFrom, roomInputFrom, saveBlockers, type Draft } from './draft.js';
+import { completeHazards } from './hazards-catalogue.js';
+import { laserInputFrom } from './beam-form.js';
+
+const LAST_KEY = 'beamwarden.last.v1';
+
+export interface Notice {
+  readonly kind: 'ok' | 'error' | 'info';
+  readonly text: string;
+}
+
+export function today(): string {
+  return new Date().toISOString().slice(0, 10);
+}
+
+class Session {
+  info = $state<AppInfo | null>(null);
+  overview = $state<RegisterOverview | null>(null);
+  loadError = $state<string | null>(null);
+  notice = $state<Notice | null>(null);
+  busy = $state(false);
+
+  room = $state<Room | null>(null);
+  site = $state<Site | null>(null);
+  installations = $state<LaserInstallation[]>([]);
+  assessment = $state<Assessment | null>(null);
+  draft = $state<Draft | null>(null);
+  private savedJson = $state('');
+
+  readonly draftInput = $derived(this.draft ? roomInputFrom(this.draft) : null);
+  readonly contentJson = $derived(this.draft ? JSON.stringify(contentFrom(this.draft)) : '');
+  readonly dirty = $derived(this.draft !== null && (this.contentJson !== this.savedJson || this.draft.lasers.some((l) => l.isNew)));
+  readonly blockers = $derived(this.draft ? saveBlockers(this.draft) : []);
+
+  get firstStart(): boolean {
+    return this.overview !== null && this.overview.sites.length === 0;
+  }
+
+  say(kind: Notice['kind'], text: string): void {
+    this.notice = { kind, text };
+  }
+
+  async init(): Promise<void> {
+    try {
+      this.info = await invoke('app-info', {});
+      await this.refreshOverview();
+      const last = readLast();
+      if (last && this.roomOverview(last.roomId)) await this.openRoom(last.roomId, last.assessmentId ?? undefined);
+    } catch (e) {
+      this.loadError = messageOf(e);
+    }
+  }
+
+  async refreshOverview(): Promise<void> {
+    this.overview = await invoke('register-overview', { dueBy: addDays(today(), 30) });
+  }
+
+  roomOverview(roomId: string): RoomOverview | null {
+    for (const s of this.overview?.sites ?? []) for (const r of s.rooms) if (r.room.id === roomId) return r;
+    return null;
+  }
+
+  siteOfRoom(roomId: string): Site | null {
+    for (const s of this.overview?.sites ?? []) if (s.rooms.some((r) => r.room.id === roomId)) return s.site;
+    return null;
+  }
+
+  /** Open a room in the workspace: its newest assessment, or a new draft from the register. */
+  async openRoom(roomId: string, assessmentId?: string): Promise<void> {
+    await this.run(async () => {
+      const [room, installations, list] = await Promise.all([
+        invoke('room-get', { id: roomId }),
+        invoke('installations-list', { roomId }),
+        invoke('assessments-list', { roomId }),
+      ]);
+      this.room = room;
+      this.site = this.siteOfRoom(roomId);
+      this.installations = installations;
+      const chosen = list.find((a) => a.id === assessmentId) ?? [...list].sort((a, b) => b.updatedAt.localeCompare(a.updatedAt))[0];
+      if (chosen) {
+        this.setAssessment(await invoke('assessment-get', { id: chosen.id }));
+      } else {
+        const content = await invoke('assessment-new-content', { roomId });
+        this.assessment = null;
+        this.loadDraft(content, '');
+      }
+      writeLast({ roomId, assessmentId: this.assessment?.id ?? null });
+    });
+  }
+
+  /** Start a fresh assessment for the open room (a second one, e.g. for one installation). */
+  async newAssessment(): Promise<void> {
+    const room = this.room;
+    if (!room) return;
+    await this.run(async () => {
+      const content = await invoke('assessment-new-content', { roomId: room.id });
+      this.assessment = null;
+      this.loadDraft(content, '');
+      writeLast({ roomId: room.id, assessmentId: null });
+    });
+  }
+
+  private setAssessment(a: Assessment): void {
+    this.assessment = a;
+    const content = a.current.content;
+    this.loadDraft(content, JSON.stringify(content));
+  }
+
+  private loadDraft(content: AssessmentContent, savedJson: string): void {
+    const ids = new Set(this.installations.map((i) => i.id));
+    const d = draftFrom(content, ids);
+    d.nonBeamHazards = completeHazards(d.nonBeamHazards);
+    this.draft = d;
+    // Compare against the draft's own normalised content, so opening a record is not a change.
+    this.savedJson = savedJson === '' ? '' : JSON.stringify(contentFrom(d));
+  }
+
+  /** Save: new lasers go into the register, changed ones are updated, then the assessment is saved. */
+  async save(): Promise<boolean> {
+    const d = this.draft;
+    const room = this.room;
+    if (!d || !room) return false;
+    if (this.blockers.length > 0) {
+      this.say('error', `Not saved. Fix first: ${this.blockers.join(' | ')}`);
+      return false;
+    }
+    return this.run(async () => {
+      for (const lf of d.lasers) {
+        const { laser } = laserInputFrom(lf);
+        if (!laser) continue;
+        if (lf.isNew) {
+          const inst = await invoke('installation-create', { roomId: room.id, laser, laserType: laser.name });
+          lf.id = inst.id;
+          lf.isNew = false;
+        } else {
+          const reg = this.installations.find((i) => i.id === lf.id);
+          if (reg && JSON.stringify(reg.laser) !== JSON.stringify(laser)) await invoke('installation-update', { id: lf.id, patch: { laser } });
+        }
+      }
+      const content = contentFrom(d);
+      const saved = this.assessment
+        ? await invoke('assessment-save', { id: this.assessment.id, content })
+        : await invoke('assessment-create', { roomId: room.id, content });
+      this.installations = await invoke('installations-list', { roomId: room.id });
+      this.setAssessment(saved);
+      writeLast({ roomId: room.id, assessmentId: saved.id });
+      await this.refreshOverview();
+      this.say('ok', `Saved: revision ${saved.current.revisionNo} (${saved.current.status}).`);
+    });
+  }
+
+  async reloadAssessment(): Promise<void> {
+    const a = this.assessment;
+    if (!a) return;
+    await this.run(async () => {
+      this.setAssessment(await invoke('assessment-get', { id: a.id }));
+    });
+  }
+
+  /** Replace the open assessment after an operation returned a newer copy (sign-off). */
+  adopt(a: Assessment): void {
+    this.setAssessment(a);
+  }
+
+  /** Run an operation with the busy flag; errors become a notice. */
+  async run(fn: () => Promise<void>): Promise<boolean> {
+    this.busy = true;
+    try {
+      await fn();
+      return true;
+    } catch (e) {
+      this.say('error', messageOf(e));
+      return false;
+    } finally {
+      this.busy = false;
+    }
+  }
+}
+
+export function addDays(date: string, days: number): string {
+  const d = new Date(date + 'T00:00:00Z');
+  d.setUTCDate(d.getUTCDate() + days);
+  return d.toISOString().slice(0, 10);
+}
+
+function readLast(): { roomId: string; assessmentId: string | null } | null {
+  try {
+    const raw: unknown = JSON.parse(localStorage.getItem(LAST_KEY) ?? 'null');
+    if (typeof raw === 'object' && raw !== null && 'roomId' in raw && typeof raw.roomId === 'string') {
+      const aid = 'assessmentId' in raw && typeof raw.assessmentId === 'string' ? raw.assessmentId : null;
+      return { roomId: raw.roomId, assessmentId: aid };
+    }
+  } catch {
+    // ignore a damaged preference
+  }
+  return null;
+}
+
+function writeLast(v: { roomId: string; assessmentId: string | null }): void {
+  try {
+    localStorage.setItem(LAST_KEY, JSON.stringify(v));
+  } catch {
+    // not essential
+  }
+}
+
+export const session = new Session();
