@@ -50,7 +50,7 @@ export const EmissionSchema = z.discriminatedUnion('kind', [
   }),
 ]);
 
-export const BeamDefinitionSchema = z.enum(['1/e', '1/e2', 'd63']);
+export const BeamDefinitionSchema = z.enum(['1/e', '1/e2', 'd63'], { error: 'must be "1/e", "1/e2" or "d63" (points where the beam diameter is measured)' });
 
 export const BeamGeometrySchema = z.strictObject({
   diameter_m: positive('m'),

@@ -1,0 +1,144 @@
+/**
+ * Bad input at the import boundary: malformed JSON, wrong format or version, unknown fields,
+ * out-of-range numbers, broken references, files altered after signing. Each is refused with a
+ * message naming the path and the problem, and the database is left exactly as it was (import is
+ * one transaction; validation happens before it). Ranges: wavelengths 180 nm - 1 mm are the span
+ * of the ICNIRP 2013 and EU 2006/25/EC limit tables; OD at most 20 and scale numbers 1-10 (EN 207).
+ */
+import { join } from 'node:path';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { RecordError, type ExportDocument, type RecordStore } from '../../../electron/backend/records/index.js';
+import { openTemp, registerRoom, snapshot, STATEMENT, tempDir } from './helpers.js';
+
+let t: ReturnType<typeof tempDir>;
+let source: RecordStore;
+let target: RecordStore;
+let targetPath: string;
+let doc: ExportDocument;
+
+beforeAll(() => {
+  t = tempDir('bw-bad-');
+  source = openTemp(t.dir, 'source.sqlite');
+  const { site, room } = registerRoom(source, 'A0.07');
+  const c = source.newAssessmentContent(room.id);
+  const a = source.createAssessment({
+    roomId: room.id,
+    content: { ...c, controls: [{ category: 'engineering', measure: 'Fibre connector shutters', decision: 'accepted', implementation: 'in-place' }] },
+  });
+  source.signAssessment(a.id, { name: 'Dr. Imre Calloway-Senn', role: 'Laser safety officer', statement: STATEMENT });
+  doc = source.exportSite(site.id);
+  // The target already holds other records, which must survive every failed import untouched.
+  targetPath = join(t.dir, 'target.sqlite');
+  target = openTemp(t.dir, 'target.sqlite');
+  registerRoom(target, 'C1.03');
+});
+afterAll(() => {
+  source.close();
+  target.close();
+  t.cleanup();
+});
+
+/** A deep copy of the valid document, changed by `edit`. */
+function edited(edit: (d: Record<string, any>) => void): unknown {
+  const d = JSON.parse(JSON.stringify(doc)) as Record<string, any>;
+  edit(d);
+  return d;
+}
+
+function importError(input: unknown): RecordError {
+  try {
+    target.importDocument(input);
+  } catch (e) {
+    if (e instanceof RecordError) return e;
+    throw e;
+  }
+  throw new Error('import was accepted');
+}
+
+describe('export document import refuses bad input and changes nothing', () => {
+  const cases: Array<[name: string, input: () => unknown, path: string, problem: RegExp]> = [
+    ['malformed JSON', () => '{"format": "beamwarden-export", "version": 1,', '(document)', /not valid JSON/],
+    ['not an object', () => '[1, 2, 3]', '(document)', /JSON object with "format"/],
+    ['another format', () => edited((d) => (d.format = 'spreadsheet-dump')), 'format', /must be "beamwarden-export"/],
+    ['newer export version', () => edited((d) => (d.version = 2)), 'version', /version 2 is not supported.*newer Beamwarden/],
+    ['version as a string', () => edited((d) => (d.version = '1')), 'version', /"1" is not supported/],
+    ['unknown top-level field', () => edited((d) => (d.comment = 'hi')), '(document)', /unknown field\(s\) "comment"/],
+    ['unknown nested field', () => edited((d) => (d.rooms[0].colour = 'blue')), 'rooms[0]', /unknown field\(s\) "colour"/],
+    ['missing field', () => edited((d) => delete d.rooms[0].code), 'rooms[0].code', /expected string/i],
+    ['wavelength below the tables', () => edited((d) => (d.installations[0].laser.beams[0].wavelength_nm = 50)), 'installations[0].laser.beams[0].wavelength_nm', /at least 180 nm/],
+    ['negative power', () => edited((d) => (d.installations[0].laser.beams[0].emission.power_W = -1)), 'installations[0].laser.beams[0].emission.power_W', /greater than 0 W/],
+    ['optical density out of range', () => edited((d) => (d.eyewear[0].spec.od[0].od = 25)), 'eyewear[0].spec.od[0].od', /at most 20/],
+    ['scale number out of range', () => edited((d) => (d.eyewear[0].spec.en207[0].scale = 11)), 'eyewear[0].spec.en207[0].scale', /whole number 1 to 10/],
+    ['review date in another format', () => edited((d) => (d.assessments[0].revisions[0].content.reviewBy = '31/12/2027')), 'assessments[0].revisions[0].content.reviewBy', /calendar date/],
+    [
+      'rejected control without a reason',
+      () => edited((d) => (d.assessments[0].revisions[0].content.controls[0].decision = 'rejected')),
+      'assessments[0].revisions[0].content.controls[0].reason',
+      /needs a reason/,
+    ],
+    ['reference to a missing site', () => edited((d) => (d.rooms[0].siteId = 'no-such-site')), 'rooms[0].siteId', /neither in the file nor in this database/],
+    [
+      'signed content edited in the file',
+      () => edited((d) => (d.assessments[0].revisions[0].content.notes = 'quietly changed')),
+      'assessments[0].revisions[0].signature.fingerprint',
+      /changed after signing/,
+    ],
+    [
+      'signer edited in the file',
+      () => edited((d) => (d.assessments[0].revisions[0].signature.name = 'Someone Else')),
+      'assessments[0].revisions[0].signature.signature',
+      /signature is not valid/,
+    ],
+    [
+      'revision numbering broken',
+      () => edited((d) => (d.assessments[0].revisions[0].revisionNo = 3)),
+      'assessments[0].revisions[0].revisionNo',
+      /must be 1/,
+    ],
+  ];
+
+  it.each(cases)('%s', (_name, input, path, problem) => {
+    const before = snapshot(targetPath);
+    const err = importError(input());
+    expect(err.code).toBe('invalid');
+    expect(err.message).toMatch(/nothing was changed/);
+    const issue = err.issues.find((i) => i.path === path);
+    expect(issue, `issues: ${JSON.stringify(err.issues)}`).toBeDefined();
+    expect(issue?.problem).toMatch(problem);
+    expect(snapshot(targetPath)).toBe(before);
+  });
+
+  it('the unchanged document imports (the cases above fail for their own reason only)', () => {
+    const other = openTemp(t.dir, `fresh-${Date.now()}.sqlite`);
+    try {
+      expect(other.importDocument(JSON.stringify(doc)).revisions).toBe(1);
+    } finally {
+      other.close();
+    }
+  });
+});
+
+describe('store methods validate their arguments', () => {
+  it('unknown field in assessment content', () => {
+    const { room } = registerRoom(target, 'B2.16');
+    const c = target.newAssessmentContent(room.id);
+    const before = snapshot(targetPath);
+    expect(() => target.createAssessment({ roomId: room.id, content: { ...c, colour: 'red' } as typeof c })).toThrow(/Assessment content is not valid: \(document\): unknown field\(s\) "colour"/);
+    expect(() =>
+      target.createAssessment({ roomId: room.id, content: { ...c, eyewearChosen: [{ eyewearTag: 'EW-Z', beamIds: [], note: '' }] } }),
+    ).toThrow(/eyewearChosen\[0\]\.eyewearTag: no eyewear "EW-Z"/);
+    expect(snapshot(targetPath)).toBe(before);
+  });
+
+  it('duplicate room code in a site', () => {
+    const site = target.createSite({ name: 'Invented Annex' });
+    target.createRoom({ siteId: site.id, code: 'X1' });
+    expect(() => target.createRoom({ siteId: site.id, code: 'X1' })).toThrow(/Room X1: already exists/);
+  });
+
+  it('empty sign-off fields', () => {
+    const { room } = registerRoom(target, 'A0.07');
+    const a = target.createAssessment({ roomId: room.id, content: target.newAssessmentContent(room.id) });
+    expect(() => target.signAssessment(a.id, { name: ' ', role: 'LSO', statement: 'ok' })).toThrow(/Sign-off is not valid: name: must not be empty/);
+  });
+});
