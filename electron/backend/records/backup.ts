@@ -22,7 +22,8 @@ function checkCopy(path: string, nativeBinding: string | undefined): number {
     try {
       result = db.pragma('integrity_check') as Array<{ integrity_check: string }>;
     } catch (e) {
-      throw new RecordError('corrupt-database', `${path} is not a Beamwarden database or is damaged (SQLite: ${(e as Error).message})`);
+      const code = e instanceof Error && 'code' in e ? String((e as { code: unknown }).code) : '';
+      throw new RecordError('corrupt-database', `${path} ${code === 'SQLITE_NOTADB' ? 'is not a database file' : 'is damaged'} (SQLite: ${(e as Error).message})`);
     }
     if (result.length !== 1 || result[0]?.integrity_check !== 'ok') {
       throw new RecordError('corrupt-database', `The backup ${path} failed its integrity check: ${result.slice(0, 3).map((r) => r.integrity_check).join('; ')}`);
