@@ -13,7 +13,7 @@ export * from './limits/additive.js';
 export * from './model/results.js';
 export { evaluateBeam } from './beam/evaluate-beam.js';
 export { evaluateRoom } from './room/evaluate-room.js';
-export { clearLimitCache } from './beam/limit-cache.js';
+export { clearCoreCaches } from './caches.js';
 export { opticalDensity } from './eyewear/od.js';
 export { EN207_LB1, en207Band, en207Column, en207Limit, en207Mode, scaleFor, type En207Band } from './eyewear/en207.js';
 export { en208Limit } from './eyewear/en208.js';

@@ -33,3 +33,28 @@ export function odReported(od: Dec): string {
 export function maxOf(xs: readonly Dec[]): Dec {
   return xs.reduce((m, x) => (x.gt(m) ? x : m));
 }
+
+/**
+ * log10(x) for DISPLAY-ONLY figures (an unrounded scale number printed in a note; never a
+ * recorded number or a decision). Deterministic and cheap: the decimal exponent gives the integer
+ * part; 30 binary digits of the fraction come from repeated squaring of the mantissa in IEEE
+ * doubles (each squaring doubles the log; a value >= 10 is a one-bit). Only +, *, / of doubles are
+ * used, which IEEE 754 rounds identically on every machine (Math.log10 is not so specified).
+ * Truncated; accurate to about 1e-8, far below the 6 digits shown.
+ */
+export function displayLog10(x: Dec): Dec {
+  if (!x.gt(0)) throw new Error('internal: log10 of a non-positive value');
+  const e = x.e; // x = m * 10^e with 1 <= m < 10
+  let m = x.div(new Dec(10).pow(e)).toNumber();
+  let frac = 0;
+  let bit = 0.5;
+  for (let i = 0; i < 30; i++) {
+    m = m * m;
+    if (m >= 10) {
+      frac += bit;
+      m = m / 10;
+    }
+    bit /= 2;
+  }
+  return new Dec(e).plus(new Dec(frac)).toSignificantDigits(12, Dec.ROUND_DOWN);
+}

@@ -5,6 +5,7 @@
  * Results are treated as read-only by every caller in the core.
  */
 import { exposureLimit, type ExposureLimitQuery, type ExposureLimitResult } from '../limits/exposure-limit.js';
+import { clearTissueLimitCache } from './tissue-limits.js';
 import { pulsedExposureLimit, type PulsedLimitQuery, type PulsedLimitResult } from '../limits/pulse-rules.js';
 
 const MAX_ENTRIES = 4000;
@@ -35,8 +36,9 @@ export function cachedPulsedLimit(q: PulsedLimitQuery): PulsedLimitResult {
   return r;
 }
 
-/** Empty both caches (the benchmark uses it to time a cold evaluation). */
+/** Empty the limit caches (the benchmark uses it to time a cold evaluation). */
 export function clearLimitCache(): void {
   cwCache.clear();
   pulsedCache.clear();
+  clearTissueLimitCache();
 }

@@ -76,7 +76,33 @@ function candidateCriteria(lim: ExposureLimitResult, rule: PulseRule, toL: (H: D
   }));
 }
 
+const CACHE_MAX = 4000;
+const cache = new Map<string, TissueLimits>();
+
+/**
+ * The criteria depend on everything but the power or pulse energy, so they are memoised on the
+ * query without it (an officer editing a power reuses them); S is attached afresh.
+ */
 export function tissueLimits(q: TissueQuery): TissueLimits {
+  const e = q.emission;
+  const S = new Dec(e.kind === 'cw' ? e.power_W : e.pulseEnergy_J);
+  const shape = e.kind === 'cw' ? { kind: 'cw' } : { kind: 'pulsed', t: e.pulseDuration_s, f: e.repetitionRate_Hz ?? null };
+  const key = JSON.stringify([q.ruleSet, q.tissue, q.wavelength_nm, shape, q.exposureDuration_s, q.durationWhy, q.sourceAngle_rad ?? null, q.settings ?? null]);
+  let hit = cache.get(key);
+  if (!hit) {
+    hit = computeTissueLimits(q);
+    if (cache.size >= CACHE_MAX) cache.clear();
+    cache.set(key, hit);
+  }
+  return { ...hit, S };
+}
+
+/** Empty the criteria cache (benchmarks of a cold evaluation). */
+export function clearTissueLimitCache(): void {
+  cache.clear();
+}
+
+function computeTissueLimits(q: TissueQuery): TissueLimits {
   const base = {
     ruleSet: q.ruleSet,
     tissue: q.tissue,

@@ -24,7 +24,7 @@
  */
 import { Dec, PI } from '../numeric/decimal.js';
 import type { En207Mode, ScaleNumberRequirement } from '../model/results.js';
-import { fmt, rec } from '../beam/format.js';
+import { displayLog10, fmt, rec } from '../beam/format.js';
 import type { BeamModel } from '../beam/beam-model.js';
 
 export type En207Band = '180-315' | '315-1400' | '1400-1e6';
@@ -76,7 +76,9 @@ export function en207Mode(pulseDuration_s: number | null): En207Mode {
  */
 export function scaleFor(X: Dec, X1: Dec): { n: number; unrounded: Dec } {
   if (!X.gt(0) || !X.isFinite()) return { n: X.gt(0) ? 99 : 0, unrounded: X.gt(0) ? new Dec(99) : new Dec(0) };
-  const unrounded = X.div(X1).log(10).plus(1);
+  const ratio = X.div(X1);
+  // Display value to 12 digits; the integer is then settled by exact decimal comparisons.
+  const unrounded = displayLog10(ratio).plus(1);
   let n = Math.ceil(unrounded.toNumber());
   // exact decade boundaries: the row whose limit equals X is adequate
   while (X.lte(X1.mul(new Dec(10).pow(n - 2)))) n -= 1;

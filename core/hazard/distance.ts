@@ -5,10 +5,12 @@
 import { Dec } from '../numeric/decimal.js';
 import type { DistanceKind, DistanceResult, PulseRule } from '../model/results.js';
 import { addStep, newTrace, type Trace } from '../trace/trace.js';
-import type { Spread } from '../beam/beam-model.js';
+import { exposureAt, type Spread } from '../beam/beam-model.js';
 import type { Criterion, LimitCriteria } from '../beam/tissue-limits.js';
 import { distanceReported, fmt, rec } from '../beam/format.js';
 import { solveRange, type RangeResult } from './range.js';
+
+const ZERO = new Dec(0);
 
 export interface RangeSetup {
   readonly S: Dec;
@@ -41,28 +43,67 @@ export function distanceOver(tl: LimitCriteria, spec: DistanceSpec): DistanceOut
   const trace: Trace = newTrace(`${spec.label}`);
   addStep(trace, { kind: 'formula', label: 'Method', detail: spec.formula, source: spec.source, confidence: spec.confidence });
   for (const n of spec.notes ?? []) addStep(trace, { kind: 'input', label: n.label, detail: n.detail, ...(n.source ? { source: n.source } : {}), ...(n.confidence ? { confidence: n.confidence } : {}) });
-  let best: { r: Dec; c: Criterion; range: RangeResult; setup: RangeSetup } | null = null;
   const unit = tl.quantity === 'E' ? 'W/m²' : 'J/m²';
-  for (const c of tl.criteria) {
-    const setup = spec.setup(c);
-    const range = solveRange({ S: setup.S, L: c.L, cap: setup.cap, spread: setup.spread, ...(setup.mu ? { mu: setup.mu } : {}) });
-    addStep(trace, {
-      kind: 'formula',
-      label: `${c.rule}`,
-      detail: range.zero
-        ? `${c.label}: exposure at the start ${fmt(range.X0)} ${unit} <= limit ${fmt(c.L)} ${unit}: not exceeded at any distance`
-        : `${c.label}: S = ${fmt(setup.S)} ${tl.quantity === 'E' ? 'W' : 'J'}, limit ${fmt(c.L)} ${unit}, sqrt(4S/(pi*L)) = ${fmt(range.dLimit.mul(1000))} mm, ` +
-          `a = ${fmt(setup.spread.a.mul(1000))} mm, phi = ${fmt(setup.spread.phi.mul(1000))} mrad` +
-          (setup.spread.a.eq(setup.spread.ay) && setup.spread.phi.eq(setup.spread.phiy) ? '' : ` (second axis ${fmt(setup.spread.ay.mul(1000))} mm, ${fmt(setup.spread.phiy.mul(1000))} mrad)`) +
-          (setup.mu && setup.mu.gt(0) ? `, attenuation mu = ${fmt(setup.mu)} 1/m` : '') +
-          ` -> r = ${fmt(range.r)} m (${range.method})`,
-      value: fmt(range.r),
-      unit: 'm',
-    });
-    if (!best || range.r.gt(best.r)) best = { r: range.r, c, range, setup };
+  const sUnit = tl.quantity === 'E' ? 'W' : 'J';
+  const setups = tl.criteria.map((c) => ({ c, setup: spec.setup(c) }));
+  const round = (x: RangeSetup): boolean => x.spread.a.eq(x.spread.ay) && x.spread.phi.eq(x.spread.phiy) && !(x.mu && x.mu.gt(0));
+  let best: { r: Dec; c: Criterion; range: RangeResult; setup: RangeSetup } | null = null;
+  if (setups.every((x) => round(x.setup))) {
+    // Round beam without attenuation: r = (sqrt(4S/(pi L)) - a)/phi grows with S/L, so only the
+    // criterion with the largest S/L among those exceeded at the start needs the square root.
+    let pick: { c: Criterion; setup: RangeSetup; q: Dec } | null = null;
+    for (const { c, setup } of setups) {
+      const X0 = exposureAt(setup.S, setup.spread, setup.cap, ZERO);
+      const exceeded = X0.gt(c.L);
+      const q = setup.S.div(c.L);
+      addStep(trace, {
+        kind: 'formula',
+        label: c.rule,
+        detail: `${c.label}: S = ${fmt(setup.S)} ${sUnit}, exposure at the start ${fmt(X0)} ${unit} ${exceeded ? '>' : '<='} limit ${fmt(c.L)} ${unit}` + (exceeded ? `; S/L = ${fmt(q)} m²` : ': not exceeded at any distance'),
+      });
+      if (exceeded && (!pick || q.gt(pick.q) || (q.eq(pick.q) && setup.spread.phi.lt(pick.setup.spread.phi)))) pick = { c, setup, q };
+    }
+    if (pick) {
+      const range = solveRange({ S: pick.setup.S, L: pick.c.L, cap: pick.setup.cap, spread: pick.setup.spread });
+      best = { r: range.r, c: pick.c, range, setup: pick.setup };
+    } else {
+      const first = setups[0];
+      if (!first) throw new Error('internal: no limit criterion');
+      const range = solveRange({ S: first.setup.S, L: first.c.L, cap: first.setup.cap, spread: first.setup.spread });
+      best = { r: range.r, c: first.c, range, setup: first.setup };
+    }
+  } else {
+    for (const { c, setup } of setups) {
+      const range = solveRange({ S: setup.S, L: c.L, cap: setup.cap, spread: setup.spread, ...(setup.mu ? { mu: setup.mu } : {}) });
+      addStep(trace, {
+        kind: 'formula',
+        label: c.rule,
+        detail: range.zero
+          ? `${c.label}: exposure at the start ${fmt(range.X0)} ${unit} <= limit ${fmt(c.L)} ${unit}: not exceeded at any distance`
+          : `${c.label}: S = ${fmt(setup.S)} ${sUnit}, limit ${fmt(c.L)} ${unit} -> r = ${fmt(range.r)} m (${range.method})`,
+        value: fmt(range.r),
+        unit: 'm',
+      });
+      if (!best || range.r.gt(best.r)) best = { r: range.r, c, range, setup };
+    }
   }
   if (!best) throw new Error('internal: no limit criterion');
   const zero = best.r.isZero();
+  const sp = best.setup.spread;
+  if (!zero) {
+    addStep(trace, {
+      kind: 'formula',
+      label: 'Range equation',
+      detail:
+        `governing ${best.c.rule}: S = ${fmt(best.setup.S)} ${sUnit}, L = ${fmt(best.c.L)} ${unit}, sqrt(4S/(pi*L)) = ${fmt(best.range.dLimit.mul(1000))} mm, ` +
+        `a = ${fmt(sp.a.mul(1000))} mm, phi = ${fmt(sp.phi.mul(1000))} mrad` +
+        (sp.a.eq(sp.ay) && sp.phi.eq(sp.phiy) ? '' : ` (second axis ${fmt(sp.ay.mul(1000))} mm, ${fmt(sp.phiy.mul(1000))} mrad)`) +
+        (best.setup.mu && best.setup.mu.gt(0) ? `, attenuation mu = ${fmt(best.setup.mu)} 1/m` : '') +
+        ` -> r = ${fmt(best.r)} m (${best.range.method})`,
+      value: fmt(best.r),
+      unit: 'm',
+    });
+  }
   addStep(trace, {
     kind: 'result',
     label: zero ? 'Zero distance' : 'Hazard distance',

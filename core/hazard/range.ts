@@ -36,7 +36,7 @@ export interface RangeResult {
   readonly X0: Dec;
   /** sqrt(4S/(pi L)): the 1/e diameter at which the peak exposure equals the limit. */
   readonly dLimit: Dec;
-  readonly method: 'closed-form' | 'quadratic' | 'bisection';
+  readonly method: 'closed-form' | 'quadratic' | 'newton-bisection';
 }
 
 const ZERO = new Dec(0);
@@ -59,8 +59,8 @@ export function solveRange(q: RangeQuery): RangeResult {
     method = 'quadratic';
   }
   if (q.mu && q.mu.gt(0)) {
-    r = bisect((x) => exposureAt(S, s, cap, x, q.mu).gt(L), r);
-    method = 'bisection';
+    r = attenuatedRoot(K, cap, s, q.mu, r);
+    method = 'newton-bisection';
   }
   return { r, zero: false, X0, dLimit, method };
 }
@@ -97,16 +97,43 @@ function ellipticalRoot(K: Dec, D: Dec, s: Spread): Dec {
   throw new Error('internal: elliptical range root not found');
 }
 
-/** Largest r in [0, hi] with pred(r) true, for a predicate true below the root and false above. */
-function bisect(pred: (r: Dec) => boolean, hi: Dec): Dec {
+/**
+ * Root of h(r) = ln K - mu*r - ln(max(dx, D) * max(dy, D)) on [0, hi], where hi is the root
+ * without attenuation (h(hi) = -mu*hi < 0) and h(0) > 0. h decreases; safeguarded Newton steps
+ * (a bisection whenever a step leaves the bracket). Returns the upper end of the final bracket, so
+ * the exposure there is at or below the limit (the longer, safe side).
+ */
+function attenuatedRoot(K: Dec, D: Dec, s: Spread, mu: Dec, hi: Dec): Dec {
+  const lnK = K.ln();
+  const h = (r: Dec): { v: Dec; dv: Dec } => {
+    const dx = s.a.plus(s.phi.mul(r));
+    const dy = s.ay.plus(s.phiy.mul(r));
+    const cx = Dec.max(dx, D);
+    const cy = Dec.max(dy, D);
+    const v = lnK.minus(mu.mul(r)).minus(cx.mul(cy).ln());
+    let dv = mu.neg();
+    if (dx.gt(D)) dv = dv.minus(s.phi.div(dx));
+    if (dy.gt(D)) dv = dv.minus(s.phiy.div(dy));
+    return { v, dv };
+  };
   let lo = ZERO;
   let up = hi;
-  for (let i = 0; i < 80; i++) {
-    const mid = lo.plus(up).div(2);
-    if (pred(mid)) lo = mid;
-    else up = mid;
-    if (up.minus(lo).lte(up.mul('1e-12'))) break;
+  let r = hi;
+  for (let i = 0; i < 100; i++) {
+    const { v, dv } = h(r);
+    if (v.isZero()) return r;
+    if (v.gt(0)) lo = r;
+    else up = r;
+    if (up.minus(lo).lte(up.mul('1e-18'))) break;
+    let next = dv.isZero() ? lo.plus(up).div(2) : r.minus(v.div(dv));
+    if (!dv.isZero() && next.minus(r).abs().lte(r.mul('1e-19'))) {
+      // Newton has converged from one side: step just past the root, onto the safe side.
+      const past = Dec.max(r, next).mul('1.000000000000000001');
+      if (h(past).v.lte(0)) return past;
+      lo = past;
+    }
+    if (next.lte(lo) || next.gte(up)) next = lo.plus(up).div(2);
+    r = next;
   }
-  // report the upper end: a distance rounded toward the longer side
   return up;
 }

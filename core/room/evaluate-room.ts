@@ -5,12 +5,12 @@
  * the judgement of the site laser safety officer and the local regulations.
  */
 import { Dec, PI } from '../numeric/decimal.js';
-import type { RoomInput } from '../model/inputs.js';
+import type { BeamInput, RoomInput } from '../model/inputs.js';
 import { RESULT_CAUTION, type AdditiveGroup, type BeamResult, type LaserClass, type RoomResult } from '../model/results.js';
 import { RULE_SET_NAME } from '../limits/rule-sets.js';
 import { additiveFractions, type AdditiveItem } from '../limits/additive.js';
 import { addStep, newTrace } from '../trace/trace.js';
-import { evaluateBeamDetailed, type BeamEvaluation } from '../beam/evaluate-beam.js';
+import { evaluateBeamDetailed, type BeamContext, type BeamEvaluation } from '../beam/evaluate-beam.js';
 import { exposureAt, spreadOf } from '../beam/beam-model.js';
 import type { TissueLimits } from '../beam/tissue-limits.js';
 import { distanceReported, fmt, rec } from '../beam/format.js';
@@ -35,6 +35,28 @@ function additiveItem(ev: BeamEvaluation, tl: TissueLimits): AdditiveItem {
   return { label, H_Jm2: rec(X.mul(tl.governingLimit.duration_s)), limit: tl.governingLimit };
 }
 
+/**
+ * Beam evaluations memoised on the beam's input and its place in the room: when an officer edits
+ * one value, only that beam is recomputed and the room result is reassembled (the UI recomputes on
+ * every keystroke). Results are read-only data; the room never mutates a cached one.
+ */
+const BEAM_CACHE_MAX = 2000;
+const beamCache = new Map<string, BeamEvaluation>();
+
+export function clearBeamCache(): void {
+  beamCache.clear();
+}
+
+function cachedBeam(beam: BeamInput, ctx: BeamContext): BeamEvaluation {
+  const key = JSON.stringify([beam, ctx]);
+  const hit = beamCache.get(key);
+  if (hit) return hit;
+  const ev = evaluateBeamDetailed(beam, ctx);
+  if (beamCache.size >= BEAM_CACHE_MAX) beamCache.clear();
+  beamCache.set(key, ev);
+  return ev;
+}
+
 function maxClass(a: LaserClass, b: LaserClass): LaserClass {
   return classRank(a) >= classRank(b) ? a : b;
 }
@@ -48,7 +70,7 @@ export function evaluateRoom(input: RoomInput): RoomResult {
   let highest: LaserClass = '1';
   input.lasers.forEach((laser, i) => {
     laser.beams.forEach((beam, j) => {
-      const ev = evaluateBeamDetailed(beam, {
+      const ev = cachedBeam(beam, {
         fieldPrefix: `lasers[${i}].beams[${j}].`,
         laserId: laser.id,
         roomRuleSet: ruleSet,

@@ -1,0 +1,8 @@
+/** Every memo of the calculation core, emptied at once (benchmarks of a cold evaluation; tests). */
+import { clearLimitCache } from './beam/limit-cache.js';
+import { clearBeamCache } from './room/evaluate-room.js';
+
+export function clearCoreCaches(): void {
+  clearLimitCache();
+  clearBeamCache();
+}
