@@ -101,6 +101,21 @@ export function fingerprintBlock(doc: DocumentInput, qrSize: number, fontSize: n
   };
 }
 
+/** The fingerprint as a narrow stack (QR above, short form below), for the door notice. */
+export function fingerprintStack(doc: DocumentInput, qrSize: number, fontSize: number): Content {
+  if (doc.signature === null) {
+    return { text: [{ text: `${DRAFT_HEADER}\n`, bold: true, color: COLOR.draft, fontSize: fontSize + 4 }, 'No record fingerprint: do not post a draft.'], fontSize };
+  }
+  return {
+    stack: [
+      { qr: doc.signature.fingerprint, fit: qrSize, eccLevel: 'M' },
+      { text: 'Record fingerprint', bold: true, fontSize: fontSize - 1, margin: [0, 2, 0, 0] },
+      { text: shortFingerprint(doc.signature.fingerprint), bold: true, fontSize },
+      { text: `rev. ${doc.assessment.revisionNo}, signed ${calendarDate(doc.signature.signedAt)}`, fontSize: fontSize - 1.5, color: COLOR.muted },
+    ],
+  };
+}
+
 export function headerFor(doc: DocumentInput, title: string, sideMargin: number): DynamicContent {
   const where = `${doc.site.name}${doc.site.building ? ', ' + doc.site.building : ''} · Room ${doc.room.code}`;
   return () => ({
@@ -129,9 +144,10 @@ export function footerFor(doc: DocumentInput, sideMargin: number): DynamicConten
       {
         margin: [0, 3, 0, 0],
         columns: [
-          { ...ruleSetLine(doc, 7.5), width: '*' },
-          { text: `${fp} · page ${currentPage} of ${pageCount}`, fontSize: 7.5, alignment: 'right', width: 'auto' },
+          { ...ruleSetLine(doc, 7), width: '*' },
+          { text: `${fp} · page ${currentPage} of ${pageCount}`, fontSize: 7, alignment: 'right', width: 150 },
         ],
+        columnGap: 8,
       },
     ],
   });

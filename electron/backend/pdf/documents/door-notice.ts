@@ -5,15 +5,16 @@
  * proportions and wording are our own.
  *
  * Legibility at 3 m: the signal word, the hazard line, the class and the eyewear requirement are
- * set with capital heights of 9 mm or more (Roboto capitals are 0.71 em: 36 pt -> 9 mm), about
- * 1 mm of capital height per 0.3 m of reading distance (common practice, from memory). Details
- * (lasers, contact, fingerprint) are read at the door and set from 11 pt.
+ * set with capital heights of 9 mm or more (Roboto capitals are 0.71 em: 36 pt -> 9 mm), close to
+ * 25 mm of letter height per 7.5 m of reading distance (common practice, from memory). The long
+ * hazard line "VISIBLE AND INVISIBLE LASER RADIATION" is set smaller so it fits one line; the
+ * symbol carries the same message. Details (lasers, contact, fingerprint) are read at the door.
  */
 import type { Content, TableCell, TDocumentDefinitions } from 'pdfmake/interfaces';
 import { dec } from '../../../../core/numeric/decimal.js';
 import type { DocumentInput, RenderOptions } from '../document-input.js';
 import * as fmt from '../format.js';
-import { baseDocument, cautionBlock, COLOR, contentWidth, DRAFT_HEADER, fingerprintBlock, ruleSetLine } from '../page.js';
+import { baseDocument, cautionBlock, COLOR, contentWidth, fingerprintStack, ruleSetLine } from '../page.js';
 import { roomView, type RoomView } from '../room-view.js';
 import { precautionFor, signalWordFor, type SignalChoice } from '../signal-word.js';
 import { laserWarningSymbolSvg, safetyAlertSymbolSvg } from '../symbols/laser-warning.js';
@@ -21,7 +22,7 @@ import { laserWarningSymbolSvg, safetyAlertSymbolSvg } from '../symbols/laser-wa
 const SIDE = 30;
 
 /** Point sizes of the parts read from 3 m (see the file comment). */
-export const NOTICE_SIZES = { signalWord: 80, hazardLine: 36, classLine: 40, eyewearLine: 36 } as const;
+export const NOTICE_SIZES = { signalWord: 72, hazardLine: 36, classLine: 44, eyewearLine: 36 } as const;
 
 export function noticeSignal(doc: DocumentInput, view: RoomView, override?: 'DANGER'): SignalChoice {
   const class3RAbove = view.beams.some((b) => (b.classAsLabelled === '3R' || b.result.classEstimate.estimate === '3R') && !dec(b.result.nohd_m).isZero());
@@ -30,14 +31,19 @@ export function noticeSignal(doc: DocumentInput, view: RoomView, override?: 'DAN
 
 /** "LASER RADIATION" with INVISIBLE / VISIBLE AND INVISIBLE prefixes (domain reference 5.3). */
 export function hazardLine(view: RoomView): string {
-  if (view.anyInvisible && view.anyVisible) return 'VISIBLE AND INVISIBLE LASER RADIATION';
-  if (view.anyInvisible) return 'INVISIBLE LASER RADIATION';
-  return 'LASER RADIATION';
+  return hazardLines(view).join(' ');
+}
+
+/** The hazard line broken where it reads best on the notice. */
+function hazardLines(view: RoomView): string[] {
+  if (view.anyInvisible && view.anyVisible) return ['VISIBLE AND INVISIBLE', 'LASER RADIATION'];
+  if (view.anyInvisible) return ['INVISIBLE', 'LASER RADIATION'];
+  return ['LASER RADIATION'];
 }
 
 function signalPanel(choice: SignalChoice, width: number): Content {
   const s = choice.style;
-  const word: Content = { text: s.word, fontSize: NOTICE_SIZES.signalWord, bold: true, color: s.text, characterSpacing: 2 };
+  const word: Content = { text: s.word, fontSize: NOTICE_SIZES.signalWord, bold: true, color: s.text, characterSpacing: 2, lineHeight: 1 };
   return {
     table: {
       widths: [width - 2],
@@ -45,9 +51,9 @@ function signalPanel(choice: SignalChoice, width: number): Content {
         [
           {
             fillColor: s.panel,
-            margin: [0, 6, 0, 2],
+            margin: [0, 2, 0, 0],
             columns: s.alertSymbol
-              ? [{ width: '*', text: '' }, { svg: safetyAlertSymbolSvg(82, s.text, s.panel), width: 82, margin: [0, 8, 14, 0] }, { ...word, width: 'auto' }, { width: '*', text: '' }]
+              ? [{ width: '*', text: '' }, { svg: safetyAlertSymbolSvg(68, s.text, s.panel), width: 68, margin: [0, 9, 12, 0] }, { ...word, width: 'auto' }, { width: '*', text: '' }]
               : [{ ...word, alignment: 'center', width: '*' }],
           },
         ],
@@ -88,10 +94,36 @@ function laserRows(view: RoomView): TableCell[][] {
   });
 }
 
-function eyewearRows(doc: DocumentInput): TableCell[][] {
-  return doc.results.requiredEyewear
-    .filter((r) => dec(r.odRequired).gt(0) || r.scaleNumbers.some((s) => s.applies && s.scale > 0))
-    .map((r) => [{ text: fmt.wavelength(r.wavelength_nm), bold: true }, { text: fmt.od(r.odRequired), bold: true }, fmt.scaleNumbers(r.scaleNumbers)]);
+/**
+ * Required eyewear per wavelength; wavelengths needing the same OD and scale numbers share a row
+ * (the OD stays per wavelength: nothing is combined across different requirements).
+ */
+export function eyewearRows(doc: DocumentInput): TableCell[][] {
+  const groups = new Map<string, { wl: string[]; od: string; scale: string }>();
+  for (const r of doc.results.requiredEyewear) {
+    if (!(dec(r.odRequired).gt(0) || r.scaleNumbers.some((s) => s.applies && s.scale > 0))) continue;
+    const od = fmt.od(r.odRequired);
+    const scale = fmt.scaleNumbers(r.scaleNumbers);
+    const key = `${od}|${scale}`;
+    const g = groups.get(key) ?? { wl: [], od, scale };
+    g.wl.push(fmt.wavelength(r.wavelength_nm));
+    groups.set(key, g);
+  }
+  return [...groups.values()].map((g) => [{ text: g.wl.join(', '), bold: true }, { text: g.od, bold: true }, g.scale]);
+}
+
+/** One table, or two side by side when the room needs many rows (keeps the notice on one page). */
+function eyewearTables(rows: TableCell[][]): Content {
+  // pdfmake annotates cell objects while laying out: each table gets its own header cells.
+  const header = (): TableCell[] => [{ text: 'Wavelength', bold: true }, { text: 'OD', bold: true }, { text: 'Scale numbers', bold: true }];
+  const table = (body: TableCell[][], fontSize: number): Content => ({
+    table: { headerRows: 1, widths: ['*', 'auto', 'auto'], body: [header(), ...body] },
+    layout: CELL_LAYOUT,
+    fontSize,
+  });
+  if (rows.length <= 4) return { margin: [0, 4, 0, 0], stack: [table(rows, 15)] };
+  const half = Math.ceil(rows.length / 2);
+  return { margin: [0, 4, 0, 0], columns: [table(rows.slice(0, half), 12.5), table(rows.slice(half), 12.5)], columnGap: 10 };
 }
 
 const CELL_LAYOUT = {
@@ -109,24 +141,25 @@ export function doorNoticeDefinition(doc: DocumentInput, opts: RenderOptions): T
   const width = contentWidth(opts.paper, SIDE);
   const choice = noticeSignal(doc, view, opts.signalWord);
   const eyewear = eyewearRows(doc);
-  const many = view.lasers.length > 5;
-  const detail = many ? 9.5 : 11.5;
+  // The lasers table is read at the door; it shrinks for crowded rooms so the notice stays one page.
+  const letter = opts.paper === 'Letter'; // 50 pt shorter than A4
+  const detail = view.lasers.length <= 4 && !letter ? 10.5 : view.lasers.length <= 7 ? 9 : 7.5;
   const officerContact = [doc.officer.phone, doc.officer.email].filter((x) => x.trim() !== '').join(' · ');
   const suitable = doc.results.eyewearCoveringAll;
 
   const content: Content[] = [
     signalPanel(choice, width),
     {
-      margin: [0, 10, 0, 0],
+      margin: [0, 8, 0, 0],
       columns: [
-        { width: 170, svg: laserWarningSymbolSvg(170), margin: [0, 4, 0, 0] },
+        { width: letter ? 112 : 124, svg: laserWarningSymbolSvg(letter ? 112 : 124), margin: [0, 2, 0, 0] },
         {
           width: '*',
           margin: [14, 0, 0, 0],
           stack: [
-            { text: hazardLine(view), fontSize: view.anyInvisible && view.anyVisible ? 26 : NOTICE_SIZES.hazardLine, bold: true, lineHeight: 1 },
-            { text: `CLASS ${view.highestClass} LASER AREA`, fontSize: NOTICE_SIZES.classLine, bold: true, margin: [0, 4, 0, 4], lineHeight: 1 },
-            { text: precautionFor(view.highestClass).toUpperCase(), fontSize: 17, bold: true, lineHeight: 1.05 },
+            ...hazardLines(view).map((t, i, all) => ({ text: t, fontSize: all.length > 1 && i === 0 ? 22 : all.length > 1 ? 30 : NOTICE_SIZES.hazardLine, bold: true, lineHeight: 1 })),
+            { text: [{ text: `CLASS ${view.highestClass} `, fontSize: NOTICE_SIZES.classLine }, { text: 'LASER AREA', fontSize: 24 }], bold: true, margin: [0, 2, 0, 2], lineHeight: 1 },
+            { text: precautionFor(view.highestClass).toUpperCase(), fontSize: 13, bold: true, lineHeight: 1.05 },
           ],
         },
       ],
@@ -135,61 +168,58 @@ export function doorNoticeDefinition(doc: DocumentInput, opts: RenderOptions): T
       ? {
           margin: [0, 10, 0, 0],
           stack: [
-            { text: 'LASER EYEWEAR REQUIRED', fontSize: NOTICE_SIZES.eyewearLine, bold: true, color: '#000000', background: '#FFD100' },
-            {
-              margin: [0, 4, 0, 0],
-              table: { headerRows: 1, widths: [110, 120, '*'], body: [[{ text: 'Wavelength', bold: true }, { text: 'Optical density', bold: true }, { text: 'Scale numbers (EN 207/208)', bold: true }], ...eyewear] },
-              layout: CELL_LAYOUT,
-              fontSize: 15,
-            },
+            { text: 'LASER EYEWEAR REQUIRED', fontSize: NOTICE_SIZES.eyewearLine, bold: true, color: '#000000', background: '#FFD100', lineHeight: 1 },
+            eyewearTables(eyewear),
             {
               text: suitable.length > 0 ? [{ text: 'Eyewear here that covers every beam: ', bold: true }, suitable.join(', ')] : [{ text: 'No single eyewear covers every beam: see the eyewear sheet by the rack.', bold: true }],
-              fontSize: 12,
-              margin: [0, 3, 0, 0],
+              fontSize: 11,
+              margin: [0, 2, 0, 0],
             },
           ],
         }
       : { text: 'No protective eyewear is required for the beams assessed.', fontSize: 16, bold: true, margin: [0, 10, 0, 0] },
-    { text: 'Lasers in this room', bold: true, fontSize: 13, margin: [0, 10, 0, 2] },
+    { text: 'Lasers in this room', bold: true, fontSize: 11.5, margin: [0, 4, 0, 1] },
     {
       table: {
         headerRows: 1,
-        widths: ['*', 'auto', 'auto', 'auto', 'auto'],
-        body: [[{ text: 'Laser type', bold: true }, { text: 'Wavelength', bold: true }, { text: 'Maximum output', bold: true }, { text: 'Pulse', bold: true }, { text: 'Class', bold: true }], ...laserRows(view)],
+        widths: ['*', 120, 80, 64, 44],
+        body: [[{ text: 'Laser type', bold: true }, { text: 'Wavelength', bold: true }, { text: 'Max. output', bold: true }, { text: 'Pulse', bold: true }, { text: 'Class', bold: true }], ...laserRows(view)],
       },
       layout: CELL_LAYOUT,
       fontSize: detail,
     },
-    { text: 'Before you enter', bold: true, fontSize: 13, margin: [0, 10, 0, 2] },
-    { ul: entryInstructions(doc, view), fontSize: 12.5, lineHeight: 1.1 },
     {
-      margin: [0, 10, 0, 0],
+      margin: [0, 8, 0, 0],
+      columnGap: 12,
       columns: [
         {
           width: '*',
           stack: [
-            { text: [{ text: 'Laser safety officer: ', bold: true }, doc.officer.name], fontSize: 13 },
-            { text: officerContact, fontSize: 13, bold: true },
-            { text: [{ text: 'Responsible person: ', bold: true }, `${doc.room.responsiblePerson}${doc.room.contact ? ' · ' + doc.room.contact : ''}`], fontSize: 11, margin: [0, 3, 0, 0] },
-            { text: [{ text: 'Room: ', bold: true }, `${doc.room.code}${doc.room.name ? ' — ' + doc.room.name : ''}, ${doc.site.name}`], fontSize: 11 },
-            {
-              text: [{ text: 'Valid until: ', bold: true }, { text: fmt.calendarDate(doc.content.reviewBy), bold: true }],
-              fontSize: 14,
-              margin: [0, 3, 0, 0],
-            },
-            ...(doc.signature === null ? [{ text: DRAFT_HEADER + ' — do not post', bold: true, color: COLOR.draft, fontSize: 16 } as Content] : []),
+            { text: 'Before you enter', bold: true, fontSize: 12, margin: [0, 0, 0, 2] },
+            { ul: entryInstructions(doc, view), fontSize: view.lasers.length <= 4 && !letter ? 10.5 : 9.5, lineHeight: 1.05 },
           ],
         },
-        { width: 210, stack: [fingerprintBlock(doc, 64, 9)] },
+        {
+          width: 170,
+          stack: [
+            { text: 'Laser safety officer', bold: true, fontSize: 9.5 },
+            { text: doc.officer.name, fontSize: 12.5, bold: true },
+            { text: officerContact, fontSize: 11 },
+            { text: [{ text: 'Responsible person: ', bold: true }, `${doc.room.responsiblePerson}${doc.room.contact ? ' · ' + doc.room.contact : ''}`], fontSize: 9, margin: [0, 3, 0, 0] },
+            { text: [{ text: 'Room: ', bold: true }, `${doc.room.code}${doc.room.name ? ' — ' + doc.room.name : ''}, ${doc.site.name}`], fontSize: 9 },
+            { text: [{ text: 'Valid until: ', bold: true }, { text: fmt.calendarDate(doc.content.reviewBy), bold: true }], fontSize: 13, margin: [0, 3, 0, 0] },
+          ],
+        },
+        { width: 92, stack: [fingerprintStack(doc, 76, 8.5)] },
       ],
     },
-    { text: '', margin: [0, 8, 0, 0] },
-    cautionBlock(10.5),
+    { text: '', margin: [0, 6, 0, 0] },
+    cautionBlock(10),
     { ...ruleSetLine(doc, 8.5), margin: [0, 3, 0, 0] },
   ];
   return {
     ...baseDocument(doc, opts.paper, 'Laser hazard notice'),
-    pageMargins: [SIDE, 28, SIDE, 24],
+    pageMargins: [SIDE, 22, SIDE, 16],
     content,
   };
 }

@@ -8,7 +8,7 @@ import { COLOR } from '../page.js';
 import type { RoomView } from '../room-view.js';
 import { limitVsDurationSvg, type CurveCache } from '../plots/limit-vs-duration.js';
 import { exposureVsDistanceSvg } from '../plots/exposure-vs-distance.js';
-import { traceContent } from './trace-content.js';
+import { TracePrinter } from './trace-content.js';
 
 export function plotsSection(doc: DocumentInput, view: RoomView, units: UnitHabit, width: number): Content[] {
   const cache: CurveCache = new Map();
@@ -24,7 +24,7 @@ export function plotsSection(doc: DocumentInput, view: RoomView, units: UnitHabi
   view.beams.forEach((b, i) => {
     const settings = doc.content.input.settings;
     const left = limitVsDurationSvg(b.result, b.input, b.input?.settings ?? settings, units, plotW, cache);
-    const right = exposureVsDistanceSvg(b.result, b.input, units, plotW);
+    const right = exposureVsDistanceSvg(b.result, b.input, units, plotW, settings);
     out.push({
       unbreakable: true,
       stack: [
@@ -48,15 +48,17 @@ export function derivationsSection(doc: DocumentInput, view: RoomView): Content[
   const out: Content[] = [
     heading('Appendix — derivations'),
     paragraph(
-      'Every figure above, step by step as the calculation core made it: inputs, table rows with their source and confidence mark, formulas with the numbers substituted, conservative replacements and rounding.',
+      'Every figure above, step by step as the calculation core made it: inputs, table rows with their source and confidence mark, formulas with the numbers substituted, conservative replacements and rounding. ' +
+        'A sub-derivation identical to one printed earlier is referred to by its number; a step identical to one already printed for the same beam is not repeated.',
       { fontSize: 8, color: COLOR.muted },
     ),
   ];
+  const printer = new TracePrinter();
   view.beams.forEach((b, i) => {
     out.push(heading(`${i + 1}. ${b.result.label}`, 2));
-    out.push({ stack: traceContent(b.result.trace), fontSize: 7.4 });
+    out.push(...printer.render(b.result.trace, `D${i + 1}`));
   });
   out.push(heading('Room', 2));
-  out.push({ stack: traceContent(doc.results.trace), fontSize: 7.4 });
+  out.push(...printer.render(doc.results.trace, 'R'));
   return out;
 }

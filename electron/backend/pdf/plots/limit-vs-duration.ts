@@ -5,7 +5,7 @@
  * that governs after the pulse rules.
  */
 import { exposureLimit } from '../../../../core/limits/exposure-limit.js';
-import { DURATION_RANGE_S } from '../../../../core/limits/rule-sets.js';
+import { DURATION_RANGE_S, ruleSetTable } from '../../../../core/limits/rule-sets.js';
 import type { BeamInput, LimitSettings, RuleSetId } from '../../../../core/model/inputs.js';
 import type { BeamResult } from '../../../../core/model/results.js';
 import type { UnitHabit } from '../../../../core/units/quantities.js';
@@ -30,41 +30,49 @@ function limitAt(ruleSet: RuleSetId, wavelength_nm: number, t: number, sourceAng
 }
 
 /**
- * Sample H(t) on a log grid (one point per decade), then halve intervals where the curve bends
- * (piecewise power laws are straight in log-log), so the kinks at table breakpoints are drawn
- * without evaluating hundreds of points.
+ * Durations where the limit can change form at this wavelength: the ends of every table row and
+ * factor piece whose band holds the wavelength. Between two neighbours every candidate row is a
+ * power law in t, i.e. a straight line on the log-log plot.
+ */
+function breakpoints(ruleSet: RuleSetId, wavelength_nm: number, from_s: number): number[] {
+  const table = ruleSetTable(ruleSet);
+  const inBand = (b: readonly [number, number] | undefined): boolean => b === undefined || (wavelength_nm >= b[0] && wavelength_nm <= b[1]);
+  const ts = new Set<number>([from_s, DURATION_RANGE_S[1]]);
+  const add = (iv: readonly [number, number] | undefined): void => {
+    if (iv === undefined) return;
+    for (const t of iv) if (t > from_s && t < DURATION_RANGE_S[1]) ts.add(t);
+  };
+  for (const row of [...table.eye, ...table.skin]) if (inBand(row.band_nm)) add(row.t_s);
+  for (const f of Object.values(table.factors)) for (const piece of f.pieces ?? []) if (inBand(piece.band_nm)) add(piece.t_s);
+  return [...ts].sort((a, b) => a - b);
+}
+
+/**
+ * H(t) at each breakpoint, just below the next one (limits can step there), and at the log-midpoint
+ * between them (where a dual limit can cross over). Far fewer look-ups than a dense grid, and exact
+ * at the corners.
  */
 export function limitCurve(ruleSet: RuleSetId, wavelength_nm: number, sourceAngle_rad: number | undefined, settings: LimitSettings | undefined, from_s: number, cache?: CurveCache): ReadonlyArray<readonly [number, number]> {
-  const key = JSON.stringify([ruleSet, wavelength_nm, sourceAngle_rad ?? null, settings ?? null, from_s]);
+  const lo = Math.max(from_s, DURATION_RANGE_S[0]);
+  const key = JSON.stringify([ruleSet, wavelength_nm, sourceAngle_rad ?? null, settings ?? null, lo]);
   const hit = cache?.get(key);
   if (hit) return hit;
-  const lo = Math.log10(Math.max(from_s, DURATION_RANGE_S[0]));
-  const hi = Math.log10(DURATION_RANGE_S[1]);
-  const f = (e: number): number | null => {
-    const h = limitAt(ruleSet, wavelength_nm, 10 ** e, sourceAngle_rad, settings);
-    return h === null ? null : Number(h);
-  };
-  const pts: Array<[number, number | null]> = [];
-  for (let e = lo; e < hi; e += 1) pts.push([e, f(e)]);
-  pts.push([hi, f(hi)]);
-  const refine = (a: [number, number | null], b: [number, number | null], depth: number): Array<[number, number | null]> => {
-    if (depth === 0 || a[1] === null || b[1] === null) return [];
-    const m = (a[0] + b[0]) / 2;
-    const v = f(m);
-    if (v === null) return [[m, v]];
-    const straight = (Math.log10(a[1]) + Math.log10(b[1])) / 2;
-    if (Math.abs(Math.log10(v) - straight) < 0.01) return [];
-    return [...refine(a, [m, v], depth - 1), [m, v], ...refine([m, v], b, depth - 1)];
-  };
-  const out: Array<[number, number | null]> = [];
-  for (let i = 0; i < pts.length; i++) {
-    const p = pts[i];
-    const q = pts[i + 1];
-    if (p === undefined) continue;
-    out.push(p);
-    if (q !== undefined) out.push(...refine(p, q, 3));
+  const bps = breakpoints(ruleSet, wavelength_nm, lo);
+  const ts: number[] = [];
+  for (let i = 0; i < bps.length; i++) {
+    const a = bps[i];
+    const b = bps[i + 1];
+    if (a === undefined) continue;
+    ts.push(a);
+    if (b === undefined) continue;
+    ts.push(Math.sqrt(a * b));
+    ts.push(b * (1 - 1e-9));
   }
-  const curve = out.filter((p): p is [number, number] => p[1] !== null).map(([e, v]) => [10 ** e, v] as const);
+  const curve: Array<readonly [number, number]> = [];
+  for (const t of ts) {
+    const h = limitAt(ruleSet, wavelength_nm, t, sourceAngle_rad, settings);
+    if (h !== null) curve.push([t, Number(h)] as const);
+  }
   cache?.set(key, curve);
   return curve;
 }

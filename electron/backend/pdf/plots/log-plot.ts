@@ -32,6 +32,8 @@ export interface LogPlot {
   readonly markers?: readonly Marker[];
   readonly vLines?: readonly RefLine[];
   readonly hLines?: readonly RefLine[];
+  /** One line of text printed inside the frame, bottom left. */
+  readonly note?: string;
 }
 
 const SUPERSCRIPT: Readonly<Record<string, string>> = {
@@ -63,7 +65,7 @@ function decades(values: readonly number[]): [number, number] {
 }
 
 export function logPlotSvg(p: LogPlot): string {
-  const m = { left: 52, right: 14, top: 12, bottom: 40 };
+  const m = { left: 46, right: 10, top: 8, bottom: 30 };
   const w = p.width - m.left - m.right;
   const h = p.height - m.top - m.bottom;
   const xs = [...p.series.flatMap((s) => s.points.map((pt) => pt[0])), ...(p.markers ?? []).map((k) => k.x), ...(p.vLines ?? []).map((l) => l.at)];
@@ -74,24 +76,29 @@ export function logPlotSvg(p: LogPlot): string {
   const Y = (v: number): number => m.top + h - ((Math.log10(v) - y0) / (y1 - y0)) * h;
   const out: string[] = [];
   out.push(`<svg xmlns="http://www.w3.org/2000/svg" width="${p.width}" height="${p.height}" viewBox="0 0 ${p.width} ${p.height}">`);
-  out.push(`<rect x="${m.left}" y="${m.top}" width="${w}" height="${h}" fill="#ffffff" stroke="#444444" stroke-width="0.8"/>`);
-  const xStep = Math.max(1, Math.ceil((x1 - x0) / 10));
+  out.push(`<rect x="${m.left}" y="${m.top}" width="${w}" height="${h}" fill="#ffffff"/>`);
+  // Grid lines as one path each way (fewer SVG elements keep the PDF conversion fast).
+  const grid: string[] = [];
+  const xStep = Math.max(1, Math.ceil((x1 - x0) / 9));
   for (let e = x0; e <= x1; e++) {
     const x = X(10 ** e);
-    out.push(`<line x1="${n(x)}" y1="${m.top}" x2="${n(x)}" y2="${m.top + h}" stroke="#dddddd" stroke-width="0.5"/>`);
+    grid.push(`M${n(x)} ${m.top}V${m.top + h}`);
     if ((e - x0) % xStep === 0) {
       out.push(`<text x="${n(x)}" y="${m.top + h + 11}" font-size="7.5" text-anchor="middle" fill="#222222">${decadeLabel(e)}</text>`);
     }
   }
-  const yStep = Math.max(1, Math.ceil((y1 - y0) / 8));
+  const yStep = Math.max(1, Math.ceil((y1 - y0) / 7));
   for (let e = y0; e <= y1; e++) {
     const y = Y(10 ** e);
-    out.push(`<line x1="${m.left}" y1="${n(y)}" x2="${m.left + w}" y2="${n(y)}" stroke="#dddddd" stroke-width="0.5"/>`);
+    grid.push(`M${m.left} ${n(y)}H${m.left + w}`);
     if ((e - y0) % yStep === 0) {
       out.push(`<text x="${m.left - 4}" y="${n(y + 2.5)}" font-size="7.5" text-anchor="end" fill="#222222">${decadeLabel(e)}</text>`);
     }
   }
-  out.push(`<text x="${n(m.left + w / 2)}" y="${p.height - 6}" font-size="8" text-anchor="middle" fill="#000000">${esc(p.xLabel)}</text>`);
+  out.push(`<path d="${grid.join('')}" stroke="#dddddd" stroke-width="0.5" fill="none"/>`);
+  // The frame after the grid, so the outermost grid lines do not paint over it.
+  out.push(`<rect x="${m.left}" y="${m.top}" width="${w}" height="${h}" fill="none" stroke="#444444" stroke-width="0.8"/>`);
+  out.push(`<text x="${n(m.left + w / 2)}" y="${p.height - 4}" font-size="8" text-anchor="middle" fill="#000000">${esc(p.xLabel)}</text>`);
   out.push(`<text x="10" y="${n(m.top + h / 2)}" font-size="8" text-anchor="middle" fill="#000000" transform="rotate(-90 10 ${n(m.top + h / 2)})">${esc(p.yLabel)}</text>`);
   for (const l of p.hLines ?? []) {
     const y = Y(l.at);
@@ -102,7 +109,8 @@ export function logPlotSvg(p: LogPlot): string {
     const x = X(l.at);
     out.push(`<line x1="${n(x)}" y1="${m.top}" x2="${n(x)}" y2="${m.top + h}" stroke="${l.color}" stroke-width="1.2"/>`);
     const anchorEnd = x > m.left + w * 0.7;
-    out.push(`<text x="${n(anchorEnd ? x - 3 : x + 3)}" y="${m.top + 10}" font-size="7.5" text-anchor="${anchorEnd ? 'end' : 'start'}" fill="${l.color}">${esc(l.label)}</text>`);
+    // Label at the foot of the line: the legend sits at the top left.
+    out.push(`<text x="${n(anchorEnd ? x - 3 : x + 3)}" y="${m.top + h - 4}" font-size="7.5" text-anchor="${anchorEnd ? 'end' : 'start'}" fill="${l.color}" font-weight="bold">${esc(l.label)}</text>`);
   }
   for (const s of p.series) {
     const pts = s.points.filter(([a, b]) => a > 0 && b > 0 && Number.isFinite(a) && Number.isFinite(b));
@@ -124,6 +132,7 @@ export function logPlotSvg(p: LogPlot): string {
     out.push(`<text x="${m.left + 24}" y="${ly}" font-size="7.5" fill="#000000">${esc(s.label)}</text>`);
     ly += 10;
   }
+  if (p.note !== undefined) out.push(`<text x="${m.left + 6}" y="${m.top + h - 6}" font-size="7.5" fill="#1B6E2E" font-weight="bold">${esc(p.note)}</text>`);
   out.push('</svg>');
   return out.join('');
 }
