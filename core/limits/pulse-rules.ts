@@ -157,18 +157,18 @@ function groupingTime(ruleSet: RuleSetId, single: ExposureLimitResult, lambda: n
 }
 
 /** Window in which N is counted for rule 3. */
-function countingWindow(ruleSet: RuleSetId, lambda: number, T: Dec, T2: Dec | undefined): { window: Dec; why: string } {
+function countingWindow(ruleSet: RuleSetId, lambda: number, T: Dec, T2: Dec | undefined): { span: Dec; why: string } {
   if (lambda >= 400 && lambda < 1400 && T2) {
     return T.gt(T2)
-      ? { window: T2, why: `N counted within T2 = ${fmt(T2)} s (shorter than T)` }
-      : { window: T, why: `N counted within T = ${fmt(T)} s (not longer than T2 = ${fmt(T2)} s)` };
+      ? { span: T2, why: `N counted within T2 = ${fmt(T2)} s (shorter than T)` }
+      : { span: T, why: `N counted within T = ${fmt(T)} s (not longer than T2 = ${fmt(T2)} s)` };
   }
   if (lambda >= 1400) {
     const ten = new Dec(10);
-    return T.gt(ten) ? { window: ten, why: 'N counted within 10 s (above 1400 nm)' } : { window: T, why: `N counted within T = ${fmt(T)} s` };
+    return T.gt(ten) ? { span: ten, why: 'N counted within 10 s (above 1400 nm)' } : { span: T, why: `N counted within T = ${fmt(T)} s` };
   }
   return {
-    window: T,
+    span: T,
     why: ruleSet === 'eu2006' ? `N counted over the whole exposure T = ${fmt(T)} s (no cap below 400 nm; the stricter reading, ours)` : `N counted within T = ${fmt(T)} s`,
   };
 }
@@ -351,7 +351,7 @@ function pulseTrainRule(x: TrainInput): TrainOutcome {
   }
   const T2 = single.factors['T2'];
   const win = countingWindow(ruleSet, q.wavelength_nm, T, T2 !== undefined ? new Dec(T2) : undefined);
-  const inWindow = Dec.min(NT, pulsesIn(f, win.window));
+  const inWindow = Dec.min(NT, pulsesIn(f, win.span));
   const N = countAsOne && g ? groupsAmong(inWindow, g.groupedPulses) : inWindow;
   const alpha = new Dec(q.sourceAngle_rad ?? 0).mul(1000);
   const amax = single.factors['alpha_max'];
