@@ -24,7 +24,7 @@ import { InputError, requireInRange, requirePositive } from '../errors.js';
 import type { LimitSettings, RuleSetId, Tissue } from '../model/inputs.js';
 import { addStep, newTrace, type Trace } from '../trace/trace.js';
 import { condition, evaluate } from './expression.js';
-import { conservativeOn } from './factors.js';
+import { conservativeOn, evaluateFactors, type FactorSet } from './factors.js';
 import { exposureLimit, type ExposureLimitResult, type LimitCandidate } from './exposure-limit.js';
 import { DEFAULT_RULE_SET, DURATION_RANGE_S, RULE_SET_NAME, ruleSetTable } from './rule-sets.js';
 import { groupsAmong, groupWithin, pulsesIn, type Grouping } from './pulse-counting.js';
@@ -142,12 +142,21 @@ interface GroupingTime {
   readonly confidence: string;
 }
 
-function groupingTime(ruleSet: RuleSetId, single: ExposureLimitResult, lambda: number): GroupingTime | null {
+/**
+ * Factors the pulse rules need (T_i / T_min, T2, alpha_max), evaluated on their own at the pulse
+ * duration: reading ExposureLimitResult.factors would evaluate all twelve factors.
+ */
+function pulseFactors(q: PulsedLimitQuery, ruleSet: RuleSetId, tp: Dec): FactorSet {
+  const alpha = q.tissue === 'eye' ? new Dec(q.sourceAngle_rad ?? 0).mul(1000) : new Dec(0);
+  return evaluateFactors(ruleSetTable(ruleSet), new Dec(q.wavelength_nm), tp, alpha, q.settings);
+}
+
+function groupingTime(ruleSet: RuleSetId, pf: FactorSet, lambda: number): GroupingTime | null {
   const table = ruleSetTable(ruleSet);
   const name = ruleSet === 'icnirp2013' ? 'T_i' : 'T_min';
   const def = table.factors[name];
-  const v = single.factors[name];
-  if (v !== undefined) return { T_g: new Dec(v), name, source: def?.source ?? '', confidence: def?.confidence ?? '' };
+  const v = pf.get(name);
+  if (v !== undefined) return { T_g: v.value, name, source: def?.source ?? '', confidence: def?.confidence ?? '' };
   if (ruleSet === 'eu2006' && lambda < 315) {
     // Table 2.2 note d sums UV pulses inside T_min, but Table 2.6 lists no T_min below 315 nm:
     // use 1 ns, the 315-400 nm value, until clarified (limit specification 5.6, ours).
@@ -229,7 +238,8 @@ export function pulsedExposureLimit(q: PulsedLimitQuery): PulsedLimitResult {
   });
 
   // Grouping inside T_i / T_min: the summed energy against the limit for the group duration.
-  const gt = groupingTime(ruleSet, single, q.wavelength_nm);
+  const pf = pulseFactors(q, ruleSet, tp);
+  const gt = groupingTime(ruleSet, pf, q.wavelength_nm);
   const g: Grouping | null = gt ? groupWithin(f, gt.T_g, T, NT) : null;
   let grouping: PulsedLimitResult['grouping'] = null;
   let groupLimit: ExposureLimitResult | null = null;
@@ -251,7 +261,7 @@ export function pulsedExposureLimit(q: PulsedLimitQuery): PulsedLimitResult {
   }
 
   // Rule 3: C_P on the thermal (icnirp2013: retinal thermal) part of the single-pulse limit.
-  const train = pulseTrainRule({ q, ruleSet, single, groupLimit, g, tp, T, f, NT, replacements });
+  const train = pulseTrainRule({ q, ruleSet, single, pf, groupLimit, g, tp, T, f, NT, replacements });
   addStep(trace, {
     kind: train.cpReplaced ? 'conservative' : 'row',
     label: 'Rule 3: pulse train',
@@ -300,6 +310,7 @@ interface TrainInput {
   readonly q: PulsedLimitQuery;
   readonly ruleSet: RuleSetId;
   readonly single: ExposureLimitResult;
+  readonly pf: FactorSet;
   readonly groupLimit: ExposureLimitResult | null;
   readonly g: Grouping | null;
   readonly tp: Dec;
@@ -322,7 +333,7 @@ interface TrainOutcome {
 }
 
 function pulseTrainRule(x: TrainInput): TrainOutcome {
-  const { q, ruleSet, single, groupLimit, g, tp, T, f, NT } = x;
+  const { q, ruleSet, single, pf, groupLimit, g, tp, T, f, NT } = x;
   const cp = readCpRule(ruleSet);
   const notApplying = (why: string): TrainOutcome => ({
     H: new Dec(single.H_Jm2),
@@ -349,13 +360,11 @@ function pulseTrainRule(x: TrainInput): TrainOutcome {
   if (effectiveDuration.gte(QUARTER_SECOND)) {
     return notApplying(`C_P applies only to pulses shorter than 0.25 s (pulse${countAsOne ? ' group' : ''} lasts ${fmt(effectiveDuration)} s)`);
   }
-  const T2 = single.factors['T2'];
-  const win = countingWindow(ruleSet, q.wavelength_nm, T, T2 !== undefined ? new Dec(T2) : undefined);
+  const win = countingWindow(ruleSet, q.wavelength_nm, T, pf.get('T2')?.value);
   const inWindow = Dec.min(NT, pulsesIn(f, win.span));
   const N = countAsOne && g ? groupsAmong(inWindow, g.groupedPulses) : inWindow;
   const alpha = new Dec(q.sourceAngle_rad ?? 0).mul(1000);
-  const amax = single.factors['alpha_max'];
-  const vars = { N, alpha, alpha_max: amax !== undefined ? new Dec(amax) : undefined };
+  const vars = { N, alpha, alpha_max: pf.get('alpha_max')?.value };
   let CP = evaluate(cp.expr, vars);
   let cpExpr = cp.expr;
   let cpReplaced = false;
