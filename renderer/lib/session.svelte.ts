@@ -44,8 +44,13 @@ class Session {
     return this.overview !== null && this.overview.sites.length === 0;
   }
 
+  private noticeTimer: ReturnType<typeof setTimeout> | undefined;
+
+  /** Show a message; confirmations fade after a few seconds, errors stay until dismissed. */
   say(kind: Notice['kind'], text: string): void {
     this.notice = { kind, text };
+    clearTimeout(this.noticeTimer);
+    if (kind !== 'error') this.noticeTimer = setTimeout(() => (this.notice = null), 6000);
   }
 
   async init(): Promise<void> {

@@ -1,0 +1,76 @@
+/**
+ * Saves a PNG of each main screen at 1280x800 for a person to look at (not part of `npm test`):
+ *   npm run screenshots            -> test/artifacts/screens/*.png
+ * Uses the loopback host on a temporary database with the invented demo site.
+ */
+import { mkdirSync } from 'node:fs';
+import path from 'node:path';
+import type { Page } from 'playwright-core';
+import { launch } from './browser.js';
+import { REPO, removeDir, startHost } from './host-process.js';
+
+const OUT = path.join(REPO, 'test', 'artifacts', 'screens');
+
+async function shot(page: Page, name: string): Promise<void> {
+  await page.waitForTimeout(400);
+  await page.screenshot({ path: path.join(OUT, `${name}.png`) });
+  process.stdout.write(`${name}.png\n`);
+}
+
+async function main(): Promise<void> {
+  mkdirSync(OUT, { recursive: true });
+  const empty = await startHost();
+  const ctx = await launch();
+  const page = ctx.pages()[0] ?? (await ctx.newPage());
+  page.on('pageerror', (e) => process.stderr.write(`page error: ${e.message}\n`));
+  page.on('console', (m) => {
+    if (m.type() === 'error') process.stderr.write(`console: ${m.text()}\n`);
+  });
+  try {
+    await page.goto(empty.url);
+    await page.getByRole('heading', { name: 'Welcome to Beamwarden' }).waitFor();
+    await shot(page, '00-first-start');
+    await page.getByRole('button', { name: 'Load the demo site' }).click();
+    await page.getByRole('heading', { name: 'Register' }).waitFor();
+    await page.getByRole('button', { name: /^B2\.14/ }).click();
+    await shot(page, '01-register');
+    await page.getByRole('tab', { name: 'Eyewear shelf' }).click();
+    await shot(page, '02-register-eyewear');
+    await page.getByRole('tab', { name: 'Rooms & lasers' }).click();
+    await page.getByRole('button', { name: /^B2\.16/ }).click();
+    await page.getByRole('button', { name: 'Open in workspace' }).click();
+    await page.getByRole('heading', { level: 1, name: /Workspace/ }).waitFor();
+    await page.locator('[data-testid="nohd"]').first().waitFor({ timeout: 60_000 });
+    await page.getByRole('button', { name: /^Beam 1/ }).first().click();
+    await shot(page, '03-workspace');
+    await page.getByRole('button', { name: 'Show plots' }).first().click();
+    await page.locator('figure.plot').first().waitFor();
+    await page.locator('figure.plot').first().scrollIntoViewIfNeeded();
+    await shot(page, '04-workspace-plots');
+    await page.getByRole('button', { name: 'derivation', exact: true }).first().click();
+    await page.getByRole('dialog').waitFor();
+    await shot(page, '05-derivation');
+    await page.keyboard.press('Escape');
+    await page.keyboard.press('Alt+3');
+    await page.getByRole('heading', { level: 1, name: /^Eyewear/ }).waitFor();
+    await shot(page, '06-eyewear');
+    await page.keyboard.press('Alt+4');
+    await page.getByRole('heading', { level: 1, name: /^Controls/ }).waitFor();
+    await shot(page, '07-controls');
+    await page.keyboard.press('Alt+5');
+    await page.getByRole('heading', { level: 1, name: /^Review/ }).waitFor();
+    await shot(page, '08-review');
+    await page.keyboard.press('Alt+6');
+    await page.getByRole('heading', { level: 1, name: /^Print/ }).waitFor();
+    await shot(page, '09-print-export');
+  } finally {
+    await ctx.close();
+    await empty.stop();
+    removeDir(empty.dir);
+  }
+}
+
+main().catch((e: unknown) => {
+  process.stderr.write(`${e instanceof Error ? (e.stack ?? e.message) : String(e)}\n`);
+  process.exit(1);
+});
