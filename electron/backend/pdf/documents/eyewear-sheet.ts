@@ -1,95 +1,118 @@
 /**
- * The eyewear sheet, posted by the goggle rack: for each eyewear on the shelf, the beams it covers
- * and the beams it must NOT be used for, then the full coverage matrix and what the room needs per
- * wavelength. Landscape, so the matrix has room for every beam.
+ * The eyewear sheet, posted by the goggle rack: one landscape page that says, for each eyewear on
+ * the shelf, which beams of the room it protects against and which it must NOT be used for (from
+ * the core's coverage verdicts), and what the room needs per wavelength.
  */
 import type { Content, TableCell, TDocumentDefinitions } from 'pdfmake/interfaces';
+import type { EyewearSpec } from '../../../../core/model/inputs.js';
 import type { DocumentInput, RenderOptions } from '../document-input.js';
 import * as fmt from '../format.js';
-import { baseDocument, cautionBlock, COLOR, contentWidth, fingerprintBlock, footerFor, headerFor, ruleSetLine } from '../page.js';
+import { baseDocument, cautionBlock, COLOR, fingerprintBlock, footerFor, headerFor } from '../page.js';
 import { roomView } from '../room-view.js';
-import { coverageMatrix, eyewearMarkings, eyewearUseLists, requiredEyewearTable } from './eyewear-tables.js';
+import { coverageMatrix, eyewearMarkings, verdictOf } from './eyewear-tables.js';
+import type { RoomView } from '../room-view.js';
+
+/** Beam numbers (1-based, as in the matrix) each eyewear covers and must not be used for. */
+function useByNumber(doc: DocumentInput, view: RoomView): Array<{ eyewear: EyewearSpec; covers: number[]; mustNot: number[] }> {
+  return (doc.content.input.eyewear ?? []).map((e) => {
+    const covers: number[] = [];
+    const mustNot: number[] = [];
+    view.beams.forEach((b, i) => {
+      const v = verdictOf(doc, b.result.beamId, e.id);
+      (v !== null && v.adequate ? covers : mustNot).push(i + 1);
+    });
+    return { eyewear: e, covers, mustNot };
+  });
+}
+
+/** 1, 2, 4, 5, 6 -> "1, 2, 4–6". */
+export function numberRanges(ns: readonly number[]): string {
+  const out: string[] = [];
+  for (let i = 0; i < ns.length; i++) {
+    const start = ns[i] as number;
+    let end = start;
+    while (ns[i + 1] === end + 1) {
+      end++;
+      i++;
+    }
+    out.push(end === start ? String(start) : end === start + 1 ? `${start}, ${end}` : `${start}–${end}`);
+  }
+  return out.join(', ');
+}
 
 const SIDE = 32;
 
 export function eyewearSheetDefinition(doc: DocumentInput, opts: RenderOptions): TDocumentDefinitions {
   const view = roomView(doc);
-  const width = contentWidth(opts.paper, SIDE, true);
   const location = (tag: string): string => doc.eyewearLocations[tag] ?? '';
-  const uses = eyewearUseLists(doc, view);
-  const rows: TableCell[][] = uses.map((u) => [
-    {
-      stack: [
-        { text: u.eyewear.id, bold: true, fontSize: 16 },
-        { text: u.eyewear.label, fontSize: 9 },
-        ...(location(u.eyewear.id) ? [{ text: `kept at: ${location(u.eyewear.id)}`, fontSize: 8.5, color: COLOR.muted }] : []),
-      ],
-    },
-    { text: eyewearMarkings(u.eyewear), fontSize: 8.5 },
-    u.covers.length > 0
-      ? { stack: u.covers.map((c) => ({ text: c, bold: true, color: COLOR.good })), fontSize: 10, fillColor: COLOR.goodTint }
-      : { text: 'no beam in this room', color: COLOR.muted, fontSize: 10 },
-    u.mustNot.length > 0
-      ? { stack: [{ text: 'DO NOT USE FOR', bold: true, color: COLOR.bad, fontSize: 10 }, ...u.mustNot.map((c) => ({ text: c, fontSize: 8.5 }))], fillColor: COLOR.badTint }
-      : { text: 'usable for every beam in this room', bold: true, color: COLOR.good, fontSize: 10 },
-  ]);
   const covering = doc.results.eyewearCoveringAll;
+  const many = view.beams.length > 8;
+  const eyewearCell = (e: EyewearSpec): TableCell => ({
+    stack: [
+      { text: e.id, bold: true, fontSize: 12 },
+      { text: e.label === e.id ? '' : e.label.replace(e.id, '').replace(/^\s*[(–-]\s*|\)\s*$/g, ''), fontSize: 7.5 },
+      ...(location(e.id) ? [{ text: location(e.id), fontSize: 7, color: COLOR.muted }] : []),
+    ],
+  });
+  const useRows: TableCell[][] = useByNumber(doc, view).map((u) => [
+    { text: u.eyewear.id, bold: true, fontSize: 11 },
+    u.covers.length > 0
+      ? { text: [{ text: 'USE for beams ', bold: true }, numberRanges(u.covers)], color: COLOR.good, fillColor: COLOR.goodTint }
+      : { text: 'no beam in this room', color: COLOR.muted },
+    u.mustNot.length > 0
+      ? { text: [{ text: 'NOT for beams ', bold: true, color: COLOR.bad }, numberRanges(u.mustNot)], fillColor: COLOR.badTint }
+      : { text: 'usable for every beam in this room', bold: true, color: COLOR.good },
+    { text: [{ text: 'marked: ', bold: true }, eyewearMarkings(u.eyewear)], fontSize: 7.5 },
+  ]);
   const content: Content[] = [
     {
       columns: [
         {
           width: '*',
           stack: [
-            { text: `Laser eyewear — Room ${doc.room.code}`, fontSize: 22, bold: true },
-            { text: `${doc.room.name ? doc.room.name + ', ' : ''}${doc.site.name}`, fontSize: 12, margin: [0, 0, 0, 4] },
+            { text: `Laser eyewear — Room ${doc.room.code}`, fontSize: 20, bold: true, lineHeight: 1 },
+            { text: `${doc.room.name ? doc.room.name + ', ' : ''}${doc.site.name}`, fontSize: 11, margin: [0, 0, 0, 3] },
             {
               text:
                 covering.length > 0
                   ? [{ text: 'Covers every beam here: ', bold: true }, { text: covering.join(', '), bold: true, color: COLOR.good }]
-                  : [{ text: 'No single eyewear covers every beam here: choose by the beams in use (table below).', bold: true, color: COLOR.bad }],
-              fontSize: 14,
+                  : [{ text: 'No single eyewear covers every beam here: choose by the beams in use.', bold: true, color: COLOR.bad }],
+              fontSize: 13,
+            },
+            {
+              text: 'Eyewear protects only at the wavelengths and levels it is marked for; seeing a visible beam through it is no proof of protection. Check the frame marking before each use.',
+              fontSize: 8.5,
+              bold: true,
+              margin: [0, 2, 0, 0],
             },
           ],
         },
-        { width: 230, stack: [fingerprintBlock(doc, 58, 8.5)] },
+        { width: 250, stack: [fingerprintBlock(doc, 56, 8.5)] },
       ],
     },
-    { text: '', margin: [0, 4, 0, 0] },
+    { text: '', margin: [0, 2, 0, 0] },
     cautionBlock(10),
-    { text: 'Which eyewear for which beam', bold: true, fontSize: 13, margin: [0, 8, 0, 3] },
+    { text: 'Which eyewear protects against which beam', bold: true, fontSize: 12, margin: [0, 4, 0, 0] },
+    coverageMatrix(doc, view, many ? 7 : 8, eyewearCell, true),
     {
-      table: {
-        headerRows: 1,
-        dontBreakRows: true,
-        widths: [110, 160, '*', '*'],
-        body: [[{ text: 'Eyewear', bold: true }, { text: 'Marked for', bold: true }, { text: 'Use for', bold: true }, { text: 'Must not be used for', bold: true }], ...rows],
-      },
-      layout: {
-        hLineWidth: () => 0.8,
-        vLineWidth: () => 0.8,
-        hLineColor: () => '#444444',
-        vLineColor: () => '#444444',
-        fillColor: (row: number) => (row === 0 ? COLOR.tint : null),
-      },
-      fontSize: 9,
-    },
-    { text: 'What the room needs', bold: true, fontSize: 13, margin: [0, 8, 0, 3] },
-    requiredEyewearTable(doc, 10),
-    { text: 'Coverage matrix', bold: true, fontSize: 13, margin: [0, 6, 0, 3] },
-    coverageMatrix(doc, view, 8),
-    {
-      text: view.beams.map((b, i) => `${i + 1}. ${b.result.label} (${fmt.wavelength(b.result.wavelength_nm)}, ${fmt.od(b.result.odRequired)}, ${fmt.scaleNumbers(b.result.scaleNumbers)})`).join('   ·   '),
-      fontSize: 7.5,
+      text: view.beams
+        .map((b, i) => `${i + 1}: ${b.result.label}`)
+        .join('   ·   '),
+      fontSize: 7,
       color: COLOR.muted,
+      margin: [0, 0, 0, 4],
     },
-    { text: 'Eyewear protects only at the wavelengths and levels it is marked for; a visible beam seen through it is no proof of protection. Check the frame marking before each use.', fontSize: 9, margin: [0, 6, 0, 0] },
-    { ...ruleSetLine(doc, 8), margin: [0, 3, 0, 0] },
+    { text: 'Use and do not use (beam numbers as in the matrix)', bold: true, fontSize: 12, margin: [0, 0, 0, 2] },
+    {
+      table: { headerRows: 0, dontBreakRows: true, widths: [36, 150, 170, '*'], body: useRows },
+      layout: { hLineWidth: () => 0.6, vLineWidth: () => 0.6, hLineColor: () => '#999999', vLineColor: () => '#999999' },
+      fontSize: 8.5,
+    },
   ];
-  void width;
   return {
     ...baseDocument(doc, opts.paper, 'Laser eyewear sheet'),
     pageOrientation: 'landscape',
-    pageMargins: [SIDE, 40, SIDE, 62],
+    pageMargins: [SIDE, 30, SIDE, 52],
     header: headerFor(doc, 'Laser eyewear sheet', SIDE),
     footer: footerFor(doc, SIDE),
     content,

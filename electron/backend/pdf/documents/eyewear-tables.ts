@@ -14,13 +14,13 @@ import * as fmt from '../format.js';
 import { COLOR } from '../page.js';
 import type { RoomView } from '../room-view.js';
 
-export function requiredEyewearTable(doc: DocumentInput, fontSize: number): Content {
+export function requiredEyewearTable(doc: DocumentInput, fontSize: number, widths: Array<number | string> = [90, 130, '*']): Content {
   const rows: TableCell[][] = doc.results.requiredEyewear.map((r) => [
     { text: fmt.wavelength(r.wavelength_nm), bold: true },
     { text: fmt.od(r.odRequired), bold: true },
     fmt.scaleNumbers(r.scaleNumbers),
   ]);
-  return gridTable(['Wavelength', 'Required optical density', 'EN 207 / EN 208 scale numbers'], rows, [90, 130, '*'], fontSize);
+  return gridTable(['Wavelength', 'Required OD', 'EN 207 / EN 208 scale numbers'], rows, widths, fontSize);
 }
 
 /** One line per band the eyewear is marked for, e.g. "OD 7 at 740–1100 nm; D LB5 at 740–1100 nm". */
@@ -41,41 +41,54 @@ export function verdictOf(doc: DocumentInput, beamId: string, eyewearId: string)
   return doc.results.coverage.find((v) => v.beamId === beamId && v.eyewearId === eyewearId) ?? null;
 }
 
+/** OD margin (provided minus required), rounded towards minus infinity: the safe side. */
 function marginText(v: EyewearVerdict): string {
-  if (v.odMargin === null) return 'no OD given';
-  const m = dec(v.odMargin);
-  // The margin is provided minus required; show it rounded towards minus infinity (the safe side).
-  const shown = m.toDecimalPlaces(1, Dec.ROUND_FLOOR);
-  return `OD margin ${m.gte(0) ? '+' : ''}${plain(shown)}`;
+  if (v.odMargin === null) return '';
+  const shown = dec(v.odMargin).toDecimalPlaces(1, Dec.ROUND_FLOOR);
+  return `${shown.gte(0) ? '+' : ''}${plain(shown)}`;
+}
+
+/** A few words for a matrix cell: why the eyewear is or is not adequate for the beam. */
+export function shortReason(v: EyewearVerdict, wavelength_nm: number): string {
+  if (v.adequate) {
+    if (v.odMargin === null) return 'no filter needed';
+    const low = v.scaleChecks.find((c) => c.includes('not marked'));
+    return `OD margin ${marginText(v)}${low ? '; LB not marked' : ''}`;
+  }
+  if (v.odMargin === null) return `no OD at ${fmt.wavelength(wavelength_nm)}`;
+  if (dec(v.odMargin).lt(0)) return `OD short by ${plain(dec(v.odMargin).neg().toDecimalPlaces(1, Dec.ROUND_UP))}`;
+  const failing = v.scaleChecks.find((c) => /TOO LOW|too low|not marked/.test(c));
+  return failing ?? 'see the report';
 }
 
 /** Rows: eyewear; columns: beams. YES (green) / NO (red) with the OD margin. */
-export function coverageMatrix(doc: DocumentInput, view: RoomView, fontSize: number): Content {
+export function coverageMatrix(doc: DocumentInput, view: RoomView, fontSize: number, firstColumn?: (e: EyewearSpec) => TableCell, withNeeds = false): Content {
   const eyewear = doc.content.input.eyewear ?? [];
   if (eyewear.length === 0) return { text: 'No eyewear is listed for this room.', bold: true, color: COLOR.bad };
-  const beamCols = view.beams.map((b, i) => `${i + 1}. ${fmt.wavelength(b.result.wavelength_nm)}`);
+  const beamCols = view.beams.map(
+    (b, i) => `${i + 1}. ${fmt.wavelength(b.result.wavelength_nm)}${withNeeds ? `\nneeds ${fmt.od(b.result.odRequired)}\n${fmt.scaleNumbers(b.result.scaleNumbers)}` : ''}`,
+  );
   const rows: TableCell[][] = eyewear.map((e) => [
-    { text: e.label, bold: true },
+    firstColumn ? firstColumn(e) : { text: e.label, bold: true },
     ...view.beams.map((b) => {
       const v = verdictOf(doc, b.result.beamId, e.id);
-      return v === null ? ({ text: 'not checked', color: COLOR.muted } as TableCell) : verdictCell(v.adequate, marginText(v), fontSize);
+      return v === null ? ({ text: 'not checked', color: COLOR.muted } as TableCell) : verdictCell(v.adequate, shortReason(v, b.result.wavelength_nm), fontSize);
     }),
   ]);
-  const first = 80;
-  return gridTable(['Eyewear', ...beamCols], rows, [first, ...view.beams.map(() => '*')], fontSize);
+  return gridTable(['Eyewear', ...beamCols], rows, [firstColumn ? 92 : 80, ...view.beams.map(() => '*')], fontSize);
 }
 
-/** Per eyewear: the beams it covers and the beams it must not be used for, with the reason. */
-export function eyewearUseLists(doc: DocumentInput, view: RoomView): Array<{ eyewear: EyewearSpec; covers: string[]; mustNot: string[] }> {
+/** Per eyewear: the beams it covers and the beams it must not be used for, with a short reason. */
+export function eyewearUseLists(doc: DocumentInput, view: RoomView, withReasons = true): Array<{ eyewear: EyewearSpec; covers: string[]; mustNot: string[] }> {
   return (doc.content.input.eyewear ?? []).map((e) => {
     const covers: string[] = [];
     const mustNot: string[] = [];
     view.beams.forEach((b, i) => {
       const v = verdictOf(doc, b.result.beamId, e.id);
-      const name = `${i + 1}. ${b.result.label} (${fmt.wavelength(b.result.wavelength_nm)})`;
+      const name = `${i + 1} (${fmt.wavelength(b.result.wavelength_nm)})`;
       if (v === null) mustNot.push(`${name}: not checked`);
       else if (v.adequate) covers.push(name);
-      else mustNot.push(`${name}: ${v.reason}`);
+      else mustNot.push(withReasons ? `${name}: ${shortReason(v, b.result.wavelength_nm)}` : name);
     });
     return { eyewear: e, covers, mustNot };
   });
