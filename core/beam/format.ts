@@ -45,7 +45,7 @@ export function maxOf(xs: readonly Dec[]): Dec {
 export function displayLog10(x: Dec): Dec {
   if (!x.gt(0)) throw new Error('internal: log10 of a non-positive value');
   const e = x.e; // x = m * 10^e with 1 <= m < 10
-  let m = x.div(new Dec(10).pow(e)).toNumber();
+  let m = x.div(tenTo(e)).toNumber();
   let frac = 0;
   let bit = 0.5;
   for (let i = 0; i < 30; i++) {
@@ -57,4 +57,24 @@ export function displayLog10(x: Dec): Dec {
     bit /= 2;
   }
   return new Dec(e).plus(new Dec(frac)).toSignificantDigits(12, Dec.ROUND_DOWN);
+}
+
+/** 10^k for an integer k, exactly (parsed, not multiplied). */
+export function tenTo(k: number): Dec {
+  return new Dec(`1e${k}`);
+}
+
+/** x^(1/4) as two square roots (exact-rounded, cheaper than a general power). */
+export function fourthRoot(x: Dec): Dec {
+  return x.sqrt().sqrt();
+}
+
+/**
+ * log10 of a ratio for a RECORDED optical density: computed in a 26-digit context (recorded with
+ * 20 significant digits), deterministic like every decimal operation, and cheaper than the 40-digit
+ * default for the logarithm, the costliest step of an evaluation.
+ */
+const Dec26 = Dec.clone({ precision: 26, rounding: Dec.ROUND_HALF_EVEN });
+export function log10Record(x: Dec): Dec {
+  return new Dec(new Dec26(x.toString()).log(10).toString());
 }

@@ -16,7 +16,7 @@ import type { LimitSettings, RuleSetId } from '../model/inputs.js';
 import type { ClassEstimate, LaserClass } from '../model/results.js';
 import { addStep, newTrace } from '../trace/trace.js';
 import type { BeamModel } from '../beam/beam-model.js';
-import { tissueLimits, type TissueLimits, type TissueQuery } from '../beam/tissue-limits.js';
+import { tissueLimits, type Criterion, type TissueLimits, type TissueQuery } from '../beam/tissue-limits.js';
 import { fmt } from '../beam/format.js';
 import { CLASS2_CW_W, CLASS3R_VISIBLE_CW_W, class3bCw, class3bPulse, classTimeBase, has3R, hasMClasses, isClass2Band } from './aels.js';
 
@@ -46,11 +46,24 @@ function fractionThrough(m: BeamModel, D: Dec, z: Dec): Dec {
   return Dec.min(new Dec(1), f);
 }
 
+/** AEL per criterion (limit x aperture area), memoised per criteria list (independent of power and beam). */
+const aelMemo = new WeakMap<readonly Criterion[], Dec[]>();
+function aelsOf(criteria: readonly Criterion[]): Dec[] {
+  let a = aelMemo.get(criteria);
+  if (!a) {
+    a = criteria.map((c) => c.L.mul(PI).mul(c.aperture_m).mul(c.aperture_m).div(4));
+    aelMemo.set(criteria, a);
+  }
+  return a;
+}
+
 /** Largest AE/AEL over the criteria, AEL = limit x aperture area; AE through that aperture at z (or through D_fixed). */
 function ratioOver(tl: TissueLimits, m: BeamModel, z: Dec, fixed?: Dec): { ratio: Dec; ael: Dec; ae: Dec } {
   let best: { ratio: Dec; ael: Dec; ae: Dec } | null = null;
-  for (const c of tl.criteria) {
-    const ael = c.L.mul(PI).mul(c.aperture_m).mul(c.aperture_m).div(4);
+  const aels = aelsOf(tl.criteria);
+  for (let i = 0; i < tl.criteria.length; i++) {
+    const c = tl.criteria[i] as Criterion;
+    const ael = aels[i] as Dec;
     const ae = tl.S.mul(fractionThrough(m, fixed ?? c.aperture_m, z));
     const ratio = ae.div(ael);
     if (!best || ratio.gt(best.ratio)) best = { ratio, ael, ae };
@@ -88,7 +101,7 @@ export function estimateClass(q: ClassQuery): ClassEstimate {
     detail: `AEL = exposure limit at the time base x aperture area (derived) = ${fmt(c1n.ael)} ${unit}; naked eye (aperture at 100 mm) AE = ${fmt(c1n.ae)} ${unit}` + (c1a ? `; telescope (50 mm at 2 m) AE = ${fmt(c1a.ae)} ${unit}` : ''),
     value: fmt(c1n.ratio),
     unit: 'x AEL',
-    source: 'IEC 60825-1:2014 4.3 and Table 10 (from memory); relation checked against 0.39 mW and 10 mW (domain notes 3.2)',
+    source: 'IEC 60825-1:2014 4.3 and Table 10 (from memory; domain notes section 10 item 7); relation checked against 0.39 mW and 10 mW (domain notes 3.2)',
     confidence: 'derived / from memory',
   });
 

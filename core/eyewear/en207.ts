@@ -24,7 +24,7 @@
  */
 import { Dec, PI } from '../numeric/decimal.js';
 import type { En207Mode, ScaleNumberRequirement } from '../model/results.js';
-import { displayLog10, fmt, rec } from '../beam/format.js';
+import { displayLog10, fmt, fourthRoot, rec, tenTo } from '../beam/format.js';
 import type { BeamModel } from '../beam/beam-model.js';
 
 export type En207Band = '180-315' | '315-1400' | '1400-1e6';
@@ -58,7 +58,7 @@ export function en207Column(band: En207Band, mode: En207Mode, conservative = tru
 
 /** The most a filter of scale number N protects against (table entry). */
 export function en207Limit(band: En207Band, mode: En207Mode, N: number, conservative = true): Dec {
-  return en207Column(band, mode, conservative).X1.mul(new Dec(10).pow(N - 1));
+  return en207Column(band, mode, conservative).X1.mul(tenTo(N - 1));
 }
 
 /** Mode of a pulse of duration t (s); CW is D. */
@@ -81,8 +81,8 @@ export function scaleFor(X: Dec, X1: Dec): { n: number; unrounded: Dec } {
   const unrounded = displayLog10(ratio).plus(1);
   let n = Math.ceil(unrounded.toNumber());
   // exact decade boundaries: the row whose limit equals X is adequate
-  while (X.lte(X1.mul(new Dec(10).pow(n - 2)))) n -= 1;
-  while (X.gt(X1.mul(new Dec(10).pow(n - 1)))) n += 1;
+  while (X.lte(X1.mul(tenTo(n - 2)))) n -= 1;
+  while (X.gt(X1.mul(tenTo(n - 1)))) n += 1;
   return { n, unrounded };
 }
 
@@ -124,7 +124,7 @@ export function en207Requirements(x: En207Input): ScaleNumberRequirement[] {
     const window = x.conservative ? 10 : 5;
     const f = e.repetitionRate_Hz !== undefined ? new Dec(e.repetitionRate_Hz) : null;
     const N = f ? Dec.max(new Dec(1), f.mul(window).floor()) : new Dec(1);
-    const nFactor = N.pow('0.25');
+    const nFactor = fourthRoot(N);
     const H = Q.div(area);
     const col = en207Column(band, mode, x.conservative);
     if (mode === 'D') {

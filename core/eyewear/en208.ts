@@ -13,7 +13,7 @@
 import { Dec } from '../numeric/decimal.js';
 import type { ScaleNumberRequirement } from '../model/results.js';
 import type { BeamModel } from '../beam/beam-model.js';
-import { fmt, rec } from '../beam/format.js';
+import { fmt, fourthRoot, rec, tenTo } from '../beam/format.js';
 import { scaleFor } from './en207.js';
 
 export const RB1_POWER_W = new Dec('0.01');
@@ -28,7 +28,7 @@ export const RB_CONFIDENCE: Readonly<Record<number, string>> = {
 };
 
 export function en208Limit(kind: 'power' | 'energy', n: number): Dec {
-  return (kind === 'power' ? RB1_POWER_W : RB1_ENERGY_J).mul(new Dec(10).pow(n - 1));
+  return (kind === 'power' ? RB1_POWER_W : RB1_ENERGY_J).mul(tenTo(n - 1));
 }
 
 export function isVisible(wavelength_nm: number): boolean {
@@ -70,7 +70,7 @@ export function en208Requirement(x: En208Input): ScaleNumberRequirement | null {
     }
     if (tp.lte('2e-4')) {
       const N = f ? Dec.max(new Dec(1), f.mul(10).floor()) : new Dec(1);
-      X = Q.mul(N.pow('0.25'));
+      X = Q.mul(fourthRoot(N));
       kind = 'energy';
       why = `pulse energy through a 7 mm aperture times N^(1/4) (N = ${N.toString()} pulses in 10 s)`;
     } else {

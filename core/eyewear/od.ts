@@ -12,11 +12,11 @@ import type { OdRequirement } from '../model/results.js';
 import { addStep, newTrace } from '../trace/trace.js';
 import { exposureAt, spreadOf, type BeamModel } from '../beam/beam-model.js';
 import type { Criterion, LimitCriteria } from '../beam/tissue-limits.js';
-import { fmt, odReported, rec } from '../beam/format.js';
+import { fmt, log10Record, odReported, rec } from '../beam/format.js';
 
 /** OD from an exposure and a limit in the same units (may be <= 0: no filter needed). */
 export function opticalDensity(exposure: Dec | number | string, limit: Dec | number | string): Dec {
-  return new Dec(exposure).div(limit).log(10);
+  return log10Record(new Dec(exposure).div(limit));
 }
 
 export interface OdOutcome {
@@ -56,7 +56,7 @@ export function requiredOd(tl: LimitCriteria, m: BeamModel, wavelength_nm: numbe
     if (!best || ratio.gt(best.ratio)) best = { X, c, ratio };
   }
   if (!best) throw new Error('internal: no limit criterion');
-  const od = best.ratio.log(10);
+  const od = log10Record(best.ratio);
   const reported = odReported(od);
   addStep(trace, { kind: 'result', label: 'OD', detail: `log10(${fmt(best.X)} / ${fmt(best.c.L)}), governing ${best.c.rule}`, value: fmt(od) });
   addStep(trace, {

@@ -73,7 +73,21 @@ export function distanceOver(tl: LimitCriteria, spec: DistanceSpec): DistanceOut
       best = { r: range.r, c: first.c, range, setup: first.setup };
     }
   } else {
+    // Same spread and attenuation for every criterion: for a given aperture the distance grows with
+    // S/L, so per aperture only the criterion with the largest S/L needs solving.
+    const perCap = new Map<string, { c: Criterion; setup: RangeSetup; q: Dec }>();
     for (const { c, setup } of setups) {
+      const q = setup.S.div(c.L);
+      const k = setup.cap.toString();
+      const prev = perCap.get(k);
+      if (!prev || q.gt(prev.q)) perCap.set(k, { c, setup, q });
+    }
+    for (const { c, setup } of setups) {
+      if (!perCap.has(setup.cap.toString()) || perCap.get(setup.cap.toString())?.c !== c) {
+        addStep(trace, { kind: 'formula', label: c.rule, detail: `${c.label}: S/L = ${fmt(setup.S.div(c.L))} m², not above the largest S/L for the same aperture: a shorter distance` });
+      }
+    }
+    for (const { c, setup } of perCap.values()) {
       const range = solveRange({ S: setup.S, L: c.L, cap: setup.cap, spread: setup.spread, ...(setup.mu ? { mu: setup.mu } : {}) });
       addStep(trace, {
         kind: 'formula',

@@ -97,43 +97,79 @@ function ellipticalRoot(K: Dec, D: Dec, s: Spread): Dec {
   throw new Error('internal: elliptical range root not found');
 }
 
+/** A 20-digit context for the first Newton iterations; the root is then polished at full precision. */
+const Dec20 = Dec.clone({ precision: 20, rounding: Dec.ROUND_HALF_EVEN });
+
 /**
  * Root of h(r) = ln K - mu*r - ln(max(dx, D) * max(dy, D)) on [0, hi], where hi is the root
  * without attenuation (h(hi) = -mu*hi < 0) and h(0) > 0. h decreases; safeguarded Newton steps
- * (a bisection whenever a step leaves the bracket). Returns the upper end of the final bracket, so
- * the exposure there is at or below the limit (the longer, safe side).
+ * (a bisection whenever a step leaves the bracket), first in 20 digits, then polished in the full
+ * context. Returns a point where h <= 0 (exposure at or below the limit: the longer, safe side).
  */
 function attenuatedRoot(K: Dec, D: Dec, s: Spread, mu: Dec, hi: Dec): Dec {
-  const lnK = K.ln();
-  const h = (r: Dec): { v: Dec; dv: Dec } => {
-    const dx = s.a.plus(s.phi.mul(r));
-    const dy = s.ay.plus(s.phiy.mul(r));
-    const cx = Dec.max(dx, D);
-    const cy = Dec.max(dy, D);
-    const v = lnK.minus(mu.mul(r)).minus(cx.mul(cy).ln());
-    let dv = mu.neg();
-    if (dx.gt(D)) dv = dv.minus(s.phi.div(dx));
-    if (dy.gt(D)) dv = dv.minus(s.phiy.div(dy));
+  const rough = newton(hFn(Dec20, K, D, s, mu), new Dec20(0), new Dec20(hi.toString()), true, '1e-15');
+  const full = hFn(Dec, K, D, s, mu);
+  const r0 = new Dec(rough.r.toString());
+  const lo = Dec.max(ZERO, r0.mul('0.999999999'));
+  const up = Dec.min(hi, r0.mul('1.000000001'));
+  const polished = newton(full, lo, up, false, '1e-19');
+  if (polished.safe) return polished.r;
+  // the narrowed bracket did not hold the root (never expected): solve on the full bracket
+  return newton(full, ZERO, hi, true, '1e-19').r;
+}
+
+type DecCtor = typeof Dec;
+type H = (r: Dec) => { v: Dec; dv: Dec };
+
+function hFn(C: DecCtor, K: Dec, D: Dec, s: Spread, mu: Dec): H {
+  const lnK = new C(K.toString()).ln();
+  const d = new C(D.toString());
+  const [a, ay, phi, phiy, m] = [s.a, s.ay, s.phi, s.phiy, mu].map((x) => new C(x.toString())) as [Dec, Dec, Dec, Dec, Dec];
+  return (r: Dec) => {
+    const dx = a.plus(phi.mul(r));
+    const dy = ay.plus(phiy.mul(r));
+    const cx = C.max(dx, d);
+    const cy = C.max(dy, d);
+    const v = lnK.minus(m.mul(r)).minus(cx.mul(cy).ln());
+    let dv = m.neg();
+    if (dx.gt(d)) dv = dv.minus(phi.div(dx));
+    if (dy.gt(d)) dv = dv.minus(phiy.div(dy));
     return { v, dv };
   };
-  let lo = ZERO;
-  let up = hi;
-  let r = hi;
-  for (let i = 0; i < 100; i++) {
+}
+
+/** Iteration counter (diagnostics). */
+export let newtonSteps = 0;
+
+/**
+ * Safeguarded Newton on [lo, up] for a decreasing h. `safe` tells whether h(r) <= 0 was seen at
+ * the returned r (upKnown: the caller knows h(up) <= 0 already).
+ */
+function newton(h: H, lo0: Dec, up0: Dec, upKnown: boolean, tol: string): { r: Dec; safe: boolean } {
+  let lo = lo0;
+  let up = up0;
+  let upSafe = upKnown;
+  let r = up;
+  const tolD = new Dec(tol);
+  for (let i = 0; i < 200; i++) {
+    newtonSteps += 1;
     const { v, dv } = h(r);
-    if (v.isZero()) return r;
-    if (v.gt(0)) lo = r;
-    else up = r;
-    if (up.minus(lo).lte(up.mul('1e-18'))) break;
+    if (v.lte(0)) {
+      up = r;
+      upSafe = true;
+      if (v.isZero()) return { r, safe: true };
+    } else lo = r;
+    if (up.minus(lo).lte(up.mul(tolD))) break;
     let next = dv.isZero() ? lo.plus(up).div(2) : r.minus(v.div(dv));
-    if (!dv.isZero() && next.minus(r).abs().lte(r.mul('1e-19'))) {
-      // Newton has converged from one side: step just past the root, onto the safe side.
-      const past = Dec.max(r, next).mul('1.000000000000000001');
-      if (h(past).v.lte(0)) return past;
-      lo = past;
+    if (!dv.isZero() && next.minus(r).abs().lte(r.mul(tolD).div(10))) {
+      // Newton has converged from one side: try a point just past the root, on the safe side.
+      const past = Dec.max(r, next).mul(tolD.div(10).plus(1));
+      if (past.gte(up)) break;
+      next = past;
+    } else if (next.lte(lo) || next.gte(up)) {
+      next = lo.plus(up).div(2);
     }
-    if (next.lte(lo) || next.gte(up)) next = lo.plus(up).div(2);
     r = next;
   }
-  return up;
+  return { r: up, safe: upSafe };
 }

@@ -13,9 +13,28 @@ export function needOf(b: BeamResult): BeamNeed {
   return { beamId: b.beamId, wavelength_nm: b.wavelength_nm, odRequired: b.odRequired, scaleNumbers: b.scaleNumbers };
 }
 
+/** Verdicts memoised per beam result (read-only, itself memoised) and eyewear specification. */
+const verdictMemo = new WeakMap<BeamResult, Map<string, EyewearVerdict>>();
+
 export function coverageMatrix(beams: readonly BeamResult[], eyewear: readonly EyewearSpec[]): EyewearVerdict[] {
   const out: EyewearVerdict[] = [];
-  for (const b of beams) for (const ew of eyewear) out.push(eyewearVerdict(needOf(b), ew));
+  const keys = eyewear.map((ew) => JSON.stringify(ew));
+  for (const b of beams) {
+    let m = verdictMemo.get(b);
+    if (!m) {
+      m = new Map<string, EyewearVerdict>();
+      verdictMemo.set(b, m);
+    }
+    eyewear.forEach((ew, k) => {
+      const key = keys[k] as string;
+      let v = m.get(key);
+      if (!v) {
+        v = eyewearVerdict(needOf(b), ew);
+        m.set(key, v);
+      }
+      out.push(v);
+    });
+  }
   return out;
 }
 

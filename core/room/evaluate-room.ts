@@ -18,8 +18,18 @@ import { classRank } from '../classes/estimate.js';
 import { validateRoomShape } from './validate-room.js';
 import { coverageMatrix, coveringAll, purchaseAdvice, requiredByWavelength } from './coverage.js';
 
+const itemMemo = new WeakMap<TissueLimits, AdditiveItem>();
+
 /** Exposure at the worst reachable position through the governing limit's aperture, for the additive rule. */
 function additiveItem(ev: BeamEvaluation, tl: TissueLimits): AdditiveItem {
+  const hit = itemMemo.get(tl);
+  if (hit) return hit;
+  const item = computeAdditiveItem(ev, tl);
+  itemMemo.set(tl, item);
+  return item;
+}
+
+function computeAdditiveItem(ev: BeamEvaluation, tl: TissueLimits): AdditiveItem {
   const r0 = new Dec(ev.od.requirement.position_m);
   const D = new Dec(tl.governingLimit.aperture.diameter_m);
   let X = exposureAt(tl.S, spreadOf(ev.model), D, r0);
@@ -47,14 +57,24 @@ export function clearBeamCache(): void {
   beamCache.clear();
 }
 
-function cachedBeam(beam: BeamInput, ctx: BeamContext): BeamEvaluation {
-  const key = JSON.stringify([beam, ctx]);
+function cachedBeam(beam: BeamInput, ctx: BeamContext, classAsLabelled: LaserClass | undefined): BeamEvaluation {
+  const key = JSON.stringify([beam, ctx, classAsLabelled ?? null]);
   const hit = beamCache.get(key);
   if (hit) return hit;
   const ev = evaluateBeamDetailed(beam, ctx);
+  let result = ev.result;
+  const est = result.classEstimate.estimate;
+  if (classAsLabelled && classAsLabelled !== est) {
+    const w =
+      classRank(est) > classRank(classAsLabelled)
+        ? `Class estimate ${est} is higher than the labelled class ${classAsLabelled}: check the data sheet and the classification.`
+        : `Class estimate ${est} is lower than the labelled class ${classAsLabelled}; the labelled (manufacturer's) class governs.`;
+    result = { ...result, warnings: [...result.warnings, w] };
+  }
+  const out: BeamEvaluation = { ...ev, result };
   if (beamCache.size >= BEAM_CACHE_MAX) beamCache.clear();
-  beamCache.set(key, ev);
-  return ev;
+  beamCache.set(key, out);
+  return out;
 }
 
 function maxClass(a: LaserClass, b: LaserClass): LaserClass {
@@ -70,24 +90,21 @@ export function evaluateRoom(input: RoomInput): RoomResult {
   let highest: LaserClass = '1';
   input.lasers.forEach((laser, i) => {
     laser.beams.forEach((beam, j) => {
-      const ev = cachedBeam(beam, {
-        fieldPrefix: `lasers[${i}].beams[${j}].`,
-        laserId: laser.id,
-        roomRuleSet: ruleSet,
-        ...(input.settings !== undefined ? { roomSettings: input.settings } : {}),
-        fallbackId: `${laser.id}-b${j}`,
-      });
-      let result = ev.result;
+      const ev = cachedBeam(
+        beam,
+        {
+          fieldPrefix: `lasers[${i}].beams[${j}].`,
+          laserId: laser.id,
+          roomRuleSet: ruleSet,
+          ...(input.settings !== undefined ? { roomSettings: input.settings } : {}),
+          fallbackId: `${laser.id}-b${j}`,
+        },
+        laser.classAsLabelled,
+      );
+      const result = ev.result;
       const est = result.classEstimate.estimate;
-      if (laser.classAsLabelled && laser.classAsLabelled !== est) {
-        const w =
-          classRank(est) > classRank(laser.classAsLabelled)
-            ? `Class estimate ${est} is higher than the labelled class ${laser.classAsLabelled}: check the data sheet and the classification.`
-            : `Class estimate ${est} is lower than the labelled class ${laser.classAsLabelled}; the labelled (manufacturer's) class governs.`;
-        result = { ...result, warnings: [...result.warnings, w] };
-      }
       highest = maxClass(highest, maxClass(est, laser.classAsLabelled ?? est));
-      evaluations.push({ ...ev, result });
+      evaluations.push(ev);
       beams.push(result);
     });
   });

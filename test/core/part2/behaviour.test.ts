@@ -134,7 +134,7 @@ describe('class estimate (IEC 60825-1:2014 AELs; trade facts class2-ael-visible,
     [10600, 0.005, '1', 'Class 1 at 10.6 um about 10 mW [SUP-EN207], read'],
     [10600, 1, '4', 'above 0.5 W'],
     [1064, 0.0015, '1', 'Class 1 at 1064 nm about 2.0 mW (domain notes 3.2, derived)'],
-  ] as const)('%s nm %s W -> %s (%s)', (nm, P, cls) => {
+  ] as const)('%s nm %s W -> %s (%s)', (nm, P, cls, _source) => {
     const r = evaluateBeam(cwBeam(nm, P));
     expect(r.classEstimate.estimate).toBe(cls);
     expect(r.classEstimate.caveat).toMatch(/manufacturer's classification governs/);

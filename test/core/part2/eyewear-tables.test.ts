@@ -73,7 +73,7 @@ describe('EN 208 alignment table (domain notes 2.3)', () => {
     [0.1, 2, 'RB2 up to 0.1 W'],
     [1, 3, 'RB3 up to 1 W'],
     [10, 4, 'RB4 up to 10 W'],
-  ] as const)('CW 633 nm %s W -> RB%s (%s)', (P, N) => {
+  ] as const)('CW 633 nm %s W -> RB%s (%s)', (P, N, _why) => {
     const r = evaluateBeam({ wavelength_nm: 633, emission: { kind: 'cw', power_W: P }, beam: { diameter_m: 0.001, divergence_rad: 0.001, definition: '1/e' } });
     expect(r.scaleNumbers.find((s) => s.mode === 'RB')?.scale).toBe(N);
   });
