@@ -9,7 +9,7 @@
 // photochemical limit starts at 10 s for extended sources at 400-600 nm (section 8, "not an error").
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { exposureLimit, RULE_SETS, type RuleSetId, type Tissue } from '../../core/index.js';
+import { exposureLimit, limitingAperture, RULE_SETS, type RuleSetId, type Tissue } from '../../core/index.js';
 
 const LAMBDAS = [200, 302.7, 303.5, 305.5, 308, 310.5, 314.5, 355, 450, 475, 532, 633, 800, 1000, 1064, 1175, 1300, 1450, 1550, 2000, 3000, 10600, 200000];
 
@@ -101,6 +101,16 @@ describe('continuity at duration breakpoints (limit specification section 8)', (
 
   it('in conservative mode the remembered 1e-11 s step of set (a) is gone (section 8)', () => {
     expect(steps.filter((s) => s.ruleSet === 'icnirp2013' && !s.remembered && near(s.t, 1e-11) && Math.abs(s.ratio - 1) > 0.02)).toEqual([]);
+  });
+});
+
+describe('aperture step named in section 8 (not a limit value, but worth a test)', () => {
+  it('eu2006 eye aperture at 0.3 s: 1 mm below, 1.5*0.3^0.375 = 0.95 mm above (-5 %; EU limiting apertures, spec 5.5)', () => {
+    const below = Number(limitingAperture('eu2006', 'eye', 1550, 0.3 * (1 - 1e-9)).diameter_mm);
+    const above = Number(limitingAperture('eu2006', 'eye', 1550, 0.3 * (1 + 1e-9)).diameter_mm);
+    expect(below).toBe(1);
+    expect(above / (1.5 * 0.3 ** 0.375)).toBeCloseTo(1, 6);
+    expect(above / below).toBeCloseTo(0.9532, 3);
   });
 });
 
