@@ -3,6 +3,7 @@ import { randomUUID } from 'node:crypto';
 import type { z } from 'zod';
 import { formatZodIssues } from '../schemas/issues.js';
 import type { Evaluate } from './core-link.js';
+import type { Statement } from 'better-sqlite3';
 import type { Db } from './database.js';
 import { loadOrCreateSigningKey, type SigningKey } from './signing.js';
 import { RecordError } from './types.js';
@@ -12,6 +13,8 @@ export interface StoreContext {
   readonly keyDir: string;
   readonly evaluate: Evaluate;
   readonly calculatedWith: string;
+  /** A prepared statement for `sql`, prepared once per connection and reused. */
+  sql(sql: string): Statement;
   now(): string;
   newId(): string;
   /** Loaded (or created) on first use: a database that never signs needs no key. */
@@ -21,9 +24,18 @@ export interface StoreContext {
 
 export function makeContext(db: Db, keyDir: string, evaluate: Evaluate, calculatedWith: string): StoreContext {
   let key: SigningKey | undefined;
-  const insertAudit = db.prepare('INSERT INTO audit_event (at, action, entity, entity_id, detail) VALUES (?, ?, ?, ?, ?)');
+  const statements = new Map<string, Statement>();
+  const sql = (text: string): Statement => {
+    let st = statements.get(text);
+    if (!st) {
+      st = db.prepare(text);
+      statements.set(text, st);
+    }
+    return st;
+  };
   return {
     db,
+    sql,
     keyDir,
     evaluate,
     calculatedWith,
@@ -34,7 +46,7 @@ export function makeContext(db: Db, keyDir: string, evaluate: Evaluate, calculat
       return key;
     },
     audit(action, entity, entityId, detail = '') {
-      insertAudit.run(new Date().toISOString(), action, entity, entityId, detail);
+      sql('INSERT INTO audit_event (at, action, entity, entity_id, detail) VALUES (?, ?, ?, ?, ?)').run(new Date().toISOString(), action, entity, entityId, detail);
     },
   };
 }

@@ -232,7 +232,7 @@ export function importLaserCsv(ctx: StoreContext, roomId: Id, csvText: string): 
 
   // Beam ids must be unique within the room (assessments refer to beams by id).
   const existingBeamIds = new Set<string>();
-  for (const r of ctx.db.prepare('SELECT laser_json FROM laser_installation WHERE room_id = ?').all(roomId) as Array<{ laser_json: string }>) {
+  for (const r of ctx.sql('SELECT laser_json FROM laser_installation WHERE room_id = ?').all(roomId) as Array<{ laser_json: string }>) {
     const l = JSON.parse(r.laser_json) as LaserInput;
     l.beams.forEach((b) => b.id !== undefined && existingBeamIds.add(b.id));
   }

@@ -54,7 +54,7 @@ import {
 // ---------------------------------------------------------------- export
 
 function assessmentIdsOfRooms(ctx: StoreContext, roomIds: readonly Id[]): Id[] {
-  const stmt = ctx.db.prepare('SELECT id FROM assessment WHERE room_id = ? ORDER BY created_at, id');
+  const stmt = ctx.sql('SELECT id FROM assessment WHERE room_id = ? ORDER BY created_at, id');
   return roomIds.flatMap((rid) => (stmt.all(rid) as Array<{ id: string }>).map((r) => r.id));
 }
 
@@ -177,7 +177,7 @@ export function parseExportDocument(input: unknown): ExportDocument {
 function crossCheck(ctx: StoreContext, doc: ExportDocument): ImportIssue[] {
   const issues: ImportIssue[] = [];
   const exists = (table: 'site' | 'room' | 'laser_installation' | 'person', id: string) =>
-    ctx.db.prepare(`SELECT 1 FROM ${table} WHERE id = ?`).get(id) !== undefined;
+    ctx.sql(`SELECT 1 FROM ${table} WHERE id = ?`).get(id) !== undefined;
   const unique = (list: ReadonlyArray<{ id: string }>, name: string) => {
     const seen = new Set<string>();
     list.forEach((x, i) => {
@@ -321,39 +321,39 @@ export function importDocument(ctx: StoreContext, input: unknown): ImportSummary
       }
     };
     upsert(doc.sites, 'sites', (id) => tryGet(() => getSite(ctx, id)), (x) => insertSite(ctx, x), (x: Site) =>
-      db.prepare('UPDATE site SET name=@name, building=@building, address=@address, notes=@notes, updated_at=@updatedAt WHERE id=@id').run(x),
+      ctx.sql('UPDATE site SET name=@name, building=@building, address=@address, notes=@notes, updated_at=@updatedAt WHERE id=@id').run(x),
     );
     upsert(doc.people, 'people', (id) => tryGet(() => getPerson(ctx, id)), (x) => insertPerson(ctx, x), (x) =>
-      db.prepare('UPDATE person SET name=@name, role=@role, email=@email, phone=@phone, updated_at=@updatedAt WHERE id=@id').run(x),
+      ctx.sql('UPDATE person SET name=@name, role=@role, email=@email, phone=@phone, updated_at=@updatedAt WHERE id=@id').run(x),
     );
     upsert(doc.rooms, 'rooms', (id) => tryGet(() => getRoom(ctx, id)), (x) => insertRoom(ctx, x), (x: Room) =>
-      db
-        .prepare('UPDATE room SET code=@code, name=@name, responsible_person=@responsiblePerson, contact=@contact, notes=@notes, updated_at=@updatedAt WHERE id=@id')
+      ctx
+        .sql('UPDATE room SET code=@code, name=@name, responsible_person=@responsiblePerson, contact=@contact, notes=@notes, updated_at=@updatedAt WHERE id=@id')
         .run(x),
     );
     upsert(doc.installations, 'installations', (id) => tryGet(() => getInstallation(ctx, id)), (x) => insertInstallation(ctx, x), (x) => {
-      db.prepare('DELETE FROM laser_installation WHERE id = ?').run(x.id);
+      ctx.sql('DELETE FROM laser_installation WHERE id = ?').run(x.id);
       insertInstallation(ctx, x);
     });
     upsert(doc.eyewear, 'eyewear', (id) => tryGet(() => getEyewear(ctx, id)), (x) => insertEyewear(ctx, x), (x) => {
-      db.prepare('DELETE FROM eyewear WHERE id = ?').run(x.id);
+      ctx.sql('DELETE FROM eyewear WHERE id = ?').run(x.id);
       insertEyewear(ctx, x);
     });
     for (const k of doc.signingKeys) registerKey(ctx, k.keyId, k.publicKey, 'imported');
 
     for (const [ai, a] of doc.assessments.entries()) {
-      const localA = db.prepare('SELECT room_id, installation_id FROM assessment WHERE id = ?').get(a.id) as
+      const localA = ctx.sql('SELECT room_id, installation_id FROM assessment WHERE id = ?').get(a.id) as
         | { room_id: string; installation_id: string | null }
         | undefined;
       if (!localA) {
-        db.prepare('INSERT INTO assessment (id, room_id, installation_id, created_at) VALUES (?, ?, ?, ?)').run(a.id, a.roomId, a.installationId, a.createdAt);
+        ctx.sql('INSERT INTO assessment (id, room_id, installation_id, created_at) VALUES (?, ?, ?, ?)').run(a.id, a.roomId, a.installationId, a.createdAt);
         count.assessments++;
       } else if (localA.room_id !== a.roomId || localA.installation_id !== a.installationId) {
         throw invalid([{ path: `assessments[${ai}].roomId`, problem: 'this assessment exists here for a different room or installation' }]);
       }
       for (const [ri, r] of a.revisions.entries()) {
         const path = `assessments[${ai}].revisions[${ri}]`;
-        const local = db.prepare('SELECT status, revision_no FROM revision WHERE id = ?').get(r.id) as { status: string; revision_no: number } | undefined;
+        const local = ctx.sql('SELECT status, revision_no FROM revision WHERE id = ?').get(r.id) as { status: string; revision_no: number } | undefined;
         if (local) {
           const mine = getRevision(ctx, r.id);
           if (same(mine, r)) {
@@ -361,12 +361,12 @@ export function importDocument(ctx: StoreContext, input: unknown): ImportSummary
             continue;
           }
           if (local.status === 'draft' && r.status === 'draft' && mine.updatedAt < r.updatedAt) {
-            db.prepare("DELETE FROM revision WHERE id = ? AND status = 'draft'").run(r.id);
+            ctx.sql("DELETE FROM revision WHERE id = ? AND status = 'draft'").run(r.id);
           } else if (local.status === 'draft' && r.status !== 'draft') {
             // Our draft was signed elsewhere: the signed copy replaces it.
-            db.prepare("DELETE FROM revision WHERE id = ? AND status = 'draft'").run(r.id);
+            ctx.sql("DELETE FROM revision WHERE id = ? AND status = 'draft'").run(r.id);
           } else if (local.status === 'signed' && r.status === 'superseded' && same({ ...mine, status: 'superseded' }, r)) {
-            db.prepare("UPDATE revision SET status = 'superseded' WHERE id = ?").run(r.id);
+            ctx.sql("UPDATE revision SET status = 'superseded' WHERE id = ?").run(r.id);
             count.revisions++;
             continue;
           } else if (local.status !== 'draft' && r.status === 'signed' && mine.status === 'superseded' && same({ ...mine, status: 'signed' }, r)) {
@@ -382,12 +382,12 @@ export function importDocument(ctx: StoreContext, input: unknown): ImportSummary
         insertRevisionRow(ctx, revisionRow(r));
         const s = r.signature;
         if (s) {
-          db.prepare(
+          ctx.sql(
             `INSERT INTO signature (revision_id, person_id, name, role, signed_at, statement, fingerprint, algorithm, signature, key_id)
              VALUES (?, ?, ?, ?, ?, ?, ?, 'Ed25519', ?, ?)`,
           ).run(r.id, s.personId, s.name, s.role, s.signedAt, s.statement, s.fingerprint, s.signature, s.keyId);
-          if (r.status === 'signed') db.prepare("UPDATE revision SET status = 'superseded' WHERE assessment_id = ? AND status = 'signed'").run(a.id);
-          db.prepare('UPDATE revision SET status = ? WHERE id = ?').run(r.status, r.id);
+          if (r.status === 'signed') ctx.sql("UPDATE revision SET status = 'superseded' WHERE assessment_id = ? AND status = 'signed'").run(a.id);
+          ctx.sql('UPDATE revision SET status = ? WHERE id = ?').run(r.status, r.id);
         }
         count.revisions++;
       }

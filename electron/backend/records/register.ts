@@ -61,16 +61,16 @@ const siteFromRow = (r: SiteRow): Site => ({
 });
 
 export function listSites(ctx: StoreContext): Site[] {
-  return (ctx.db.prepare('SELECT * FROM site ORDER BY name, id').all() as SiteRow[]).map(siteFromRow);
+  return (ctx.sql('SELECT * FROM site ORDER BY name, id').all() as SiteRow[]).map(siteFromRow);
 }
 export function getSite(ctx: StoreContext, id: Id): Site {
-  const r = ctx.db.prepare('SELECT * FROM site WHERE id = ?').get(id) as SiteRow | undefined;
+  const r = ctx.sql('SELECT * FROM site WHERE id = ?').get(id) as SiteRow | undefined;
   if (!r) throw notFound('site', id);
   return siteFromRow(r);
 }
 export function insertSite(ctx: StoreContext, s: Site): void {
-  ctx.db
-    .prepare('INSERT INTO site (id, name, building, address, notes, created_at, updated_at) VALUES (@id, @name, @building, @address, @notes, @createdAt, @updatedAt)')
+  ctx
+    .sql('INSERT INTO site (id, name, building, address, notes, created_at, updated_at) VALUES (@id, @name, @building, @address, @notes, @createdAt, @updatedAt)')
     .run(s);
 }
 export function createSite(ctx: StoreContext, draft: SiteDraft): Site {
@@ -84,13 +84,13 @@ export function updateSite(ctx: StoreContext, id: Id, patch: Partial<SiteDraft>)
   const p = parseOrThrow(SitePatchSchema, patch, 'Site changes');
   const next: Site = { ...getSite(ctx, id), ...stripUndefined(p), updatedAt: ctx.now() };
   guard('Site', () =>
-    ctx.db.prepare('UPDATE site SET name=@name, building=@building, address=@address, notes=@notes, updated_at=@updatedAt WHERE id=@id').run(next),
+    ctx.sql('UPDATE site SET name=@name, building=@building, address=@address, notes=@notes, updated_at=@updatedAt WHERE id=@id').run(next),
   );
   return next;
 }
 export function deleteSite(ctx: StoreContext, id: Id): void {
   getSite(ctx, id);
-  guard('Site', () => ctx.db.prepare('DELETE FROM site WHERE id = ?').run(id));
+  guard('Site', () => ctx.sql('DELETE FROM site WHERE id = ?').run(id));
 }
 
 // ---------------------------------------------------------------- rooms
@@ -119,16 +119,16 @@ const roomFromRow = (r: RoomRow): Room => ({
 });
 
 export function listRooms(ctx: StoreContext, siteId: Id): Room[] {
-  return (ctx.db.prepare('SELECT * FROM room WHERE site_id = ? ORDER BY code, id').all(siteId) as RoomRow[]).map(roomFromRow);
+  return (ctx.sql('SELECT * FROM room WHERE site_id = ? ORDER BY code, id').all(siteId) as RoomRow[]).map(roomFromRow);
 }
 export function getRoom(ctx: StoreContext, id: Id): Room {
-  const r = ctx.db.prepare('SELECT * FROM room WHERE id = ?').get(id) as RoomRow | undefined;
+  const r = ctx.sql('SELECT * FROM room WHERE id = ?').get(id) as RoomRow | undefined;
   if (!r) throw notFound('room', id);
   return roomFromRow(r);
 }
 export function insertRoom(ctx: StoreContext, r: Room): void {
-  ctx.db
-    .prepare(
+  ctx
+    .sql(
       `INSERT INTO room (id, site_id, code, name, responsible_person, contact, notes, created_at, updated_at)
        VALUES (@id, @siteId, @code, @name, @responsiblePerson, @contact, @notes, @createdAt, @updatedAt)`,
     )
@@ -156,15 +156,15 @@ export function updateRoom(ctx: StoreContext, id: Id, patch: Partial<Omit<RoomDr
   const p = parseOrThrow(RoomPatchSchema, patch, 'Room changes');
   const next: Room = { ...getRoom(ctx, id), ...stripUndefined(p), updatedAt: ctx.now() };
   guard(`Room ${next.code}`, () =>
-    ctx.db
-      .prepare('UPDATE room SET code=@code, name=@name, responsible_person=@responsiblePerson, contact=@contact, notes=@notes, updated_at=@updatedAt WHERE id=@id')
+    ctx
+      .sql('UPDATE room SET code=@code, name=@name, responsible_person=@responsiblePerson, contact=@contact, notes=@notes, updated_at=@updatedAt WHERE id=@id')
       .run(next),
   );
   return next;
 }
 export function deleteRoom(ctx: StoreContext, id: Id): void {
   getRoom(ctx, id);
-  guard('Room', () => ctx.db.prepare('DELETE FROM room WHERE id = ?').run(id));
+  guard('Room', () => ctx.sql('DELETE FROM room WHERE id = ?').run(id));
 }
 
 // ---------------------------------------------------------------- laser installations
@@ -221,18 +221,18 @@ function installationParams(i: LaserInstallation) {
 }
 
 export function listInstallations(ctx: StoreContext, roomId: Id): LaserInstallation[] {
-  return (ctx.db.prepare('SELECT * FROM laser_installation WHERE room_id = ? ORDER BY created_at, id').all(roomId) as InstallationRow[]).map(
+  return (ctx.sql('SELECT * FROM laser_installation WHERE room_id = ? ORDER BY created_at, id').all(roomId) as InstallationRow[]).map(
     installationFromRow,
   );
 }
 export function getInstallation(ctx: StoreContext, id: Id): LaserInstallation {
-  const r = ctx.db.prepare('SELECT * FROM laser_installation WHERE id = ?').get(id) as InstallationRow | undefined;
+  const r = ctx.sql('SELECT * FROM laser_installation WHERE id = ?').get(id) as InstallationRow | undefined;
   if (!r) throw notFound('laser installation', id);
   return installationFromRow(r);
 }
 export function insertInstallation(ctx: StoreContext, i: LaserInstallation): void {
-  ctx.db
-    .prepare(
+  ctx
+    .sql(
       `INSERT INTO laser_installation (id, room_id, laser_type, maker, model, serial_number, registration_number, laser_json,
          class_as_labelled, status, notes, created_at, updated_at)
        VALUES (@id, @roomId, @laserType, @maker, @model, @serialNumber, @registrationNumber, @laserJson,
@@ -276,8 +276,8 @@ export function updateInstallation(
   const laser: LaserInput = { ...merged.laser, id };
   const next: LaserInstallation = { ...merged, laser, classAsLabelled: laser.classAsLabelled ?? null };
   guard(`Laser ${laser.name}`, () =>
-    ctx.db
-      .prepare(
+    ctx
+      .sql(
         `UPDATE laser_installation SET laser_type=@laserType, maker=@maker, model=@model, serial_number=@serialNumber,
            registration_number=@registrationNumber, laser_json=@laserJson, class_as_labelled=@classAsLabelled, status=@status,
            notes=@notes, updated_at=@updatedAt WHERE id=@id`,
@@ -289,7 +289,7 @@ export function updateInstallation(
 export function deleteInstallation(ctx: StoreContext, id: Id): void {
   getInstallation(ctx, id);
   guard('Laser installation (retire it instead if an assessment refers to it)', () =>
-    ctx.db.prepare('DELETE FROM laser_installation WHERE id = ?').run(id),
+    ctx.sql('DELETE FROM laser_installation WHERE id = ?').run(id),
   );
 }
 
@@ -331,16 +331,16 @@ const eyewearParams = (e: Eyewear) => ({
 });
 
 export function listEyewear(ctx: StoreContext, siteId: Id): Eyewear[] {
-  return (ctx.db.prepare('SELECT * FROM eyewear WHERE site_id = ? ORDER BY tag, id').all(siteId) as EyewearRow[]).map(eyewearFromRow);
+  return (ctx.sql('SELECT * FROM eyewear WHERE site_id = ? ORDER BY tag, id').all(siteId) as EyewearRow[]).map(eyewearFromRow);
 }
 export function getEyewear(ctx: StoreContext, id: Id): Eyewear {
-  const r = ctx.db.prepare('SELECT * FROM eyewear WHERE id = ?').get(id) as EyewearRow | undefined;
+  const r = ctx.sql('SELECT * FROM eyewear WHERE id = ?').get(id) as EyewearRow | undefined;
   if (!r) throw notFound('eyewear', id);
   return eyewearFromRow(r);
 }
 export function insertEyewear(ctx: StoreContext, e: Eyewear): void {
-  ctx.db
-    .prepare(
+  ctx
+    .sql(
       `INSERT INTO eyewear (id, site_id, tag, spec_json, location, quantity, notes, created_at, updated_at)
        VALUES (@id, @siteId, @tag, @specJson, @location, @quantity, @notes, @createdAt, @updatedAt)`,
     )
@@ -367,15 +367,15 @@ export function updateEyewear(ctx: StoreContext, id: Id, patch: Partial<Omit<Eye
   const p = parseOrThrow(EyewearPatchSchema, patch, 'Eyewear changes');
   const next: Eyewear = { ...getEyewear(ctx, id), ...stripUndefined(p), updatedAt: ctx.now() };
   guard(`Eyewear ${next.spec.id}`, () =>
-    ctx.db
-      .prepare('UPDATE eyewear SET tag=@tag, spec_json=@specJson, location=@location, quantity=@quantity, notes=@notes, updated_at=@updatedAt WHERE id=@id')
+    ctx
+      .sql('UPDATE eyewear SET tag=@tag, spec_json=@specJson, location=@location, quantity=@quantity, notes=@notes, updated_at=@updatedAt WHERE id=@id')
       .run(eyewearParams(next)),
   );
   return next;
 }
 export function deleteEyewear(ctx: StoreContext, id: Id): void {
   getEyewear(ctx, id);
-  guard('Eyewear', () => ctx.db.prepare('DELETE FROM eyewear WHERE id = ?').run(id));
+  guard('Eyewear', () => ctx.sql('DELETE FROM eyewear WHERE id = ?').run(id));
 }
 
 // ---------------------------------------------------------------- people
@@ -400,16 +400,16 @@ const personFromRow = (r: PersonRow): Person => ({
 });
 
 export function listPeople(ctx: StoreContext): Person[] {
-  return (ctx.db.prepare('SELECT * FROM person ORDER BY name, id').all() as PersonRow[]).map(personFromRow);
+  return (ctx.sql('SELECT * FROM person ORDER BY name, id').all() as PersonRow[]).map(personFromRow);
 }
 export function getPerson(ctx: StoreContext, id: Id): Person {
-  const r = ctx.db.prepare('SELECT * FROM person WHERE id = ?').get(id) as PersonRow | undefined;
+  const r = ctx.sql('SELECT * FROM person WHERE id = ?').get(id) as PersonRow | undefined;
   if (!r) throw notFound('person', id);
   return personFromRow(r);
 }
 export function insertPerson(ctx: StoreContext, p: Person): void {
-  ctx.db
-    .prepare('INSERT INTO person (id, name, role, email, phone, created_at, updated_at) VALUES (@id, @name, @role, @email, @phone, @createdAt, @updatedAt)')
+  ctx
+    .sql('INSERT INTO person (id, name, role, email, phone, created_at, updated_at) VALUES (@id, @name, @role, @email, @phone, @createdAt, @updatedAt)')
     .run(p);
 }
 export function createPerson(ctx: StoreContext, draft: PersonDraft): Person {
@@ -423,13 +423,13 @@ export function updatePerson(ctx: StoreContext, id: Id, patch: Partial<PersonDra
   const p = parseOrThrow(PersonPatchSchema, patch, 'Person changes');
   const next: Person = { ...getPerson(ctx, id), ...stripUndefined(p), updatedAt: ctx.now() };
   guard('Person', () =>
-    ctx.db.prepare('UPDATE person SET name=@name, role=@role, email=@email, phone=@phone, updated_at=@updatedAt WHERE id=@id').run(next),
+    ctx.sql('UPDATE person SET name=@name, role=@role, email=@email, phone=@phone, updated_at=@updatedAt WHERE id=@id').run(next),
   );
   return next;
 }
 export function deletePerson(ctx: StoreContext, id: Id): void {
   getPerson(ctx, id);
-  guard('Person (someone who signed records stays in the register)', () => ctx.db.prepare('DELETE FROM person WHERE id = ?').run(id));
+  guard('Person (someone who signed records stays in the register)', () => ctx.sql('DELETE FROM person WHERE id = ?').run(id));
 }
 
 // ---------------------------------------------------------------- snapshot for an assessment

@@ -38,11 +38,19 @@ afterAll(() => {
   t.cleanup();
 });
 
-/** A deep copy of the valid document, changed by `edit`. */
-function edited(edit: (d: Record<string, any>) => void): unknown {
-  const d = JSON.parse(JSON.stringify(doc)) as Record<string, any>;
-  edit(d);
-  return d;
+const REMOVE = Symbol('remove');
+type Key = string | number;
+
+/** A deep copy of the valid document with the value at `path` replaced (or removed). */
+function edited(path: readonly Key[], value: unknown): unknown {
+  const copy: unknown = JSON.parse(JSON.stringify(doc));
+  let node: unknown = copy;
+  for (const key of path.slice(0, -1)) node = (node as Record<Key, unknown>)[key];
+  const last = path[path.length - 1] ?? '';
+  const parent = node as Record<Key, unknown>;
+  if (value === REMOVE) delete parent[last];
+  else parent[last] = value;
+  return copy;
 }
 
 function importError(input: unknown): RecordError {
@@ -59,39 +67,39 @@ describe('export document import refuses bad input and changes nothing', () => {
   const cases: Array<[name: string, input: () => unknown, path: string, problem: RegExp]> = [
     ['malformed JSON', () => '{"format": "beamwarden-export", "version": 1,', '(document)', /not valid JSON/],
     ['not an object', () => '[1, 2, 3]', '(document)', /JSON object with "format"/],
-    ['another format', () => edited((d) => (d.format = 'spreadsheet-dump')), 'format', /must be "beamwarden-export"/],
-    ['newer export version', () => edited((d) => (d.version = 2)), 'version', /version 2 is not supported.*newer Beamwarden/],
-    ['version as a string', () => edited((d) => (d.version = '1')), 'version', /"1" is not supported/],
-    ['unknown top-level field', () => edited((d) => (d.comment = 'hi')), '(document)', /unknown field\(s\) "comment"/],
-    ['unknown nested field', () => edited((d) => (d.rooms[0].colour = 'blue')), 'rooms[0]', /unknown field\(s\) "colour"/],
-    ['missing field', () => edited((d) => delete d.rooms[0].code), 'rooms[0].code', /expected string/i],
-    ['wavelength below the tables', () => edited((d) => (d.installations[0].laser.beams[0].wavelength_nm = 50)), 'installations[0].laser.beams[0].wavelength_nm', /at least 180 nm/],
-    ['negative power', () => edited((d) => (d.installations[0].laser.beams[0].emission.power_W = -1)), 'installations[0].laser.beams[0].emission.power_W', /greater than 0 W/],
-    ['optical density out of range', () => edited((d) => (d.eyewear[0].spec.od[0].od = 25)), 'eyewear[0].spec.od[0].od', /at most 20/],
-    ['scale number out of range', () => edited((d) => (d.eyewear[0].spec.en207[0].scale = 11)), 'eyewear[0].spec.en207[0].scale', /whole number 1 to 10/],
-    ['review date in another format', () => edited((d) => (d.assessments[0].revisions[0].content.reviewBy = '31/12/2027')), 'assessments[0].revisions[0].content.reviewBy', /calendar date/],
+    ['another format', () => edited(['format'], 'spreadsheet-dump'), 'format', /must be "beamwarden-export"/],
+    ['newer export version', () => edited(['version'], 2), 'version', /version 2 is not supported.*newer Beamwarden/],
+    ['version as a string', () => edited(['version'], '1'), 'version', /"1" is not supported/],
+    ['unknown top-level field', () => edited(['comment'], 'hi'), '(document)', /unknown field\(s\) "comment"/],
+    ['unknown nested field', () => edited(['rooms', 0, 'colour'], 'blue'), 'rooms[0]', /unknown field\(s\) "colour"/],
+    ['missing field', () => edited(['rooms', 0, 'code'], REMOVE), 'rooms[0].code', /expected string/i],
+    ['wavelength below the tables', () => edited(['installations', 0, 'laser', 'beams', 0, 'wavelength_nm'], 50), 'installations[0].laser.beams[0].wavelength_nm', /at least 180 nm/],
+    ['negative power', () => edited(['installations', 0, 'laser', 'beams', 0, 'emission', 'power_W'], -1), 'installations[0].laser.beams[0].emission.power_W', /greater than 0 W/],
+    ['optical density out of range', () => edited(['eyewear', 0, 'spec', 'od', 0, 'od'], 25), 'eyewear[0].spec.od[0].od', /at most 20/],
+    ['scale number out of range', () => edited(['eyewear', 0, 'spec', 'en207', 0, 'scale'], 11), 'eyewear[0].spec.en207[0].scale', /whole number 1 to 10/],
+    ['review date in another format', () => edited(['assessments', 0, 'revisions', 0, 'content', 'reviewBy'], '31/12/2027'), 'assessments[0].revisions[0].content.reviewBy', /calendar date/],
     [
       'rejected control without a reason',
-      () => edited((d) => (d.assessments[0].revisions[0].content.controls[0].decision = 'rejected')),
+      () => edited(['assessments', 0, 'revisions', 0, 'content', 'controls', 0, 'decision'], 'rejected'),
       'assessments[0].revisions[0].content.controls[0].reason',
       /needs a reason/,
     ],
-    ['reference to a missing site', () => edited((d) => (d.rooms[0].siteId = 'no-such-site')), 'rooms[0].siteId', /neither in the file nor in this database/],
+    ['reference to a missing site', () => edited(['rooms', 0, 'siteId'], 'no-such-site'), 'rooms[0].siteId', /neither in the file nor in this database/],
     [
       'signed content edited in the file',
-      () => edited((d) => (d.assessments[0].revisions[0].content.notes = 'quietly changed')),
+      () => edited(['assessments', 0, 'revisions', 0, 'content', 'notes'], 'quietly changed'),
       'assessments[0].revisions[0].signature.fingerprint',
       /changed after signing/,
     ],
     [
       'signer edited in the file',
-      () => edited((d) => (d.assessments[0].revisions[0].signature.name = 'Someone Else')),
+      () => edited(['assessments', 0, 'revisions', 0, 'signature', 'name'], 'Someone Else'),
       'assessments[0].revisions[0].signature.signature',
       /signature is not valid/,
     ],
     [
       'revision numbering broken',
-      () => edited((d) => (d.assessments[0].revisions[0].revisionNo = 3)),
+      () => edited(['assessments', 0, 'revisions', 0, 'revisionNo'], 3),
       'assessments[0].revisions[0].revisionNo',
       /must be 1/,
     ],

@@ -6,11 +6,12 @@
  */
 import Database from 'better-sqlite3';
 import { join } from 'node:path';
-import { deflateRawSync, inflateRawSync } from 'node:zlib';
+import { decodeResults, encodeResults } from '../../../electron/backend/records/assessments.js';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Assessment, RecordStore } from '../../../electron/backend/records/index.js';
 import { openRecordStore } from '../../../electron/backend/records/store.js';
 import { evaluateRoom } from '../../../core/index.js';
+import type { RoomResult } from '../../../core/model/results.js';
 import { openTemp, registerRoom, snapshot, STATEMENT, tempDir } from './helpers.js';
 
 let t: ReturnType<typeof tempDir>;
@@ -140,10 +141,10 @@ describe('with the triggers dropped, verify reports tampering', () => {
     const raw = new Database(copy);
     raw.exec('DROP TRIGGER revision_signed_immutable');
     const row = raw.prepare('SELECT results_z FROM revision WHERE id = ?').get(signed.current.id) as { results_z: Buffer };
-    const results = JSON.parse(inflateRawSync(row.results_z).toString('utf8')) as { beams: Array<{ nohd_m_reported: string }> };
+    const results = decodeResults(row.results_z) as RoomResult;
     const original = results.beams[0]?.nohd_m_reported;
-    if (results.beams[0]) results.beams[0].nohd_m_reported = '0.001';
-    raw.prepare('UPDATE revision SET results_z = ? WHERE id = ?').run(deflateRawSync(JSON.stringify(results)), signed.current.id);
+    const tampered: RoomResult = { ...results, beams: results.beams.map((b, i) => (i === 0 ? { ...b, nohd_m_reported: '0.001' } : b)) };
+    raw.prepare('UPDATE revision SET results_z = ? WHERE id = ?').run(encodeResults(tampered), signed.current.id);
     raw.close();
     const s = openRecordStore({ path: copy, keyDir: join(t.dir, 'keys') });
     try {

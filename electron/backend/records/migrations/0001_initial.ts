@@ -101,8 +101,8 @@ CREATE TABLE revision (
   revision_no INTEGER NOT NULL CHECK (revision_no >= 1),
   status TEXT NOT NULL CHECK (status IN ('draft','signed','superseded')),
   content_json TEXT NOT NULL CHECK (json_valid(content_json)),
-  -- The core's RoomResult as JSON, DEFLATE-compressed (RFC 1951): results carry full derivation
-  -- traces (tens to hundreds of kB per room) and compress about tenfold; they are derived data,
+  -- The core's RoomResult as JSON, Brotli-compressed (RFC 7932): results carry full derivation
+  -- traces (tens to hundreds of kB per room) and compress ten- to thirtyfold; they are derived data,
   -- recomputable from content_json, and exports carry them as plain JSON.
   results_z BLOB NOT NULL CHECK (length(results_z) > 0),
   calculated_with TEXT NOT NULL,

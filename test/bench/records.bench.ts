@@ -1,0 +1,182 @@
+/**
+ * Benchmarks of the record store (issue: assessment records in SQLite), on a database of
+ * 10 000 assessments in 50 rooms (200 per room), each holding a full snapshot of one of the
+ * invented demo rooms with its results (traces included):
+ *  - save one assessment (an officer edits notes/controls; inputs unchanged, so the stored results
+ *    are reused) — target below 5 ms;
+ *  - list a room's assessments (200 rows) — target below 50 ms;
+ *  - open the database (integrity_check, pragmas, schema check) — target below 200 ms.
+ * Also reported without a target: a save whose inputs changed (dominated by the core's
+ * evaluation) and a sign-off (re-evaluates, signs, supersedes).
+ * The bulk of the 10 000 rows is copied with SQL from real store-made assessments (setup, not timed).
+ * Medians over repeated runs. Speed targets live here, never in timed tests.
+ * Run alone: npx tsx test/bench/records.bench.ts
+ */
+import Database from 'better-sqlite3';
+import { randomUUID } from 'node:crypto';
+import { mkdtempSync, rmSync, statSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import demo from '../../assets/demo/demo-scenario.json' with { type: 'json' };
+import { DemoScenarioSchema } from '../../electron/backend/records/demo.js';
+import { openRecordStore, type RecordStore } from '../../electron/backend/records/index.js';
+
+export interface BenchEntry {
+  readonly name: string;
+  readonly median_ms: number;
+  readonly runs: number;
+  readonly target_ms?: number;
+}
+
+const ASSESSMENTS = 10_000;
+const ROOMS = 50;
+
+function median(xs: number[]): number {
+  const s = [...xs].sort((a, b) => a - b);
+  const m = Math.floor(s.length / 2);
+  return s.length % 2 ? (s[m] as number) : ((s[m - 1] as number) + (s[m] as number)) / 2;
+}
+
+function timeRuns(runs: number, f: (i: number) => void): number {
+  const xs: number[] = [];
+  for (let i = 0; i < runs; i++) {
+    const t0 = performance.now();
+    f(i);
+    xs.push(performance.now() - t0);
+  }
+  return median(xs);
+}
+
+/** Build the 10 000-assessment database; returns its path and some ids to work on. */
+function buildDatabase(dir: string): { path: string; roomIds: string[]; sampleIds: string[] } {
+  const path = join(dir, 'bench.sqlite');
+  const scenario = DemoScenarioSchema.parse(demo);
+  const store = openRecordStore({ path, keyDir: join(dir, 'keys') });
+  const site = store.createSite({ name: scenario.site.name, building: scenario.site.building });
+  for (const spec of scenario.eyewear) store.createEyewear({ siteId: site.id, spec });
+  const roomIds: string[] = [];
+  const templates: string[] = []; // one real, store-made assessment per demo room
+  for (let i = 0; i < ROOMS; i++) {
+    const demoRoom = scenario.rooms[i % scenario.rooms.length];
+    if (!demoRoom) throw new Error('no demo rooms');
+    const room = store.createRoom({ siteId: site.id, code: `${demoRoom.code}-${i}`, name: demoRoom.name, responsiblePerson: demoRoom.responsible });
+    for (const laser of demoRoom.input.lasers) store.createInstallation({ roomId: room.id, laser });
+    roomIds.push(room.id);
+    if (i < scenario.rooms.length) {
+      const a = store.createAssessment({ roomId: room.id, content: { ...store.newAssessmentContent(room.id), notes: demoRoom.notes } });
+      templates.push(a.current.id);
+    }
+  }
+  store.close();
+
+  // Copy the templates with SQL until there are 10 000 assessments (200 per room).
+  const db = new Database(path);
+  db.pragma('foreign_keys = ON');
+  const tpl = db.prepare('SELECT content_json, results_z, calculated_with, title, review_by FROM revision WHERE id = ?');
+  const tplRows = templates.map((id) => tpl.get(id) as { content_json: string; results_z: Buffer; calculated_with: string; title: string; review_by: string | null });
+  const insA = db.prepare('INSERT INTO assessment (id, room_id, installation_id, created_at) VALUES (?, ?, NULL, ?)');
+  const insR = db.prepare(
+    `INSERT INTO revision (id, assessment_id, revision_no, status, content_json, results_z, calculated_with, based_on, created_at, updated_at, title, review_by)
+     VALUES (?, ?, 1, 'draft', ?, ?, ?, NULL, ?, ?, ?, ?)`,
+  );
+  const existing = (db.prepare('SELECT count(*) AS n FROM assessment').get() as { n: number }).n;
+  const sampleIds: string[] = [];
+  db.transaction(() => {
+    for (let i = existing; i < ASSESSMENTS; i++) {
+      const roomIndex = i % ROOMS;
+      const t = tplRows[roomIndex % tplRows.length];
+      const roomId = roomIds[roomIndex];
+      if (!t || !roomId) throw new Error('template missing');
+      const id = randomUUID();
+      const at = new Date(Date.UTC(2026, 0, 1) + i * 60_000).toISOString();
+      insA.run(id, roomId, at);
+      insR.run(randomUUID(), id, t.content_json, t.results_z, t.calculated_with, at, at, t.title, t.review_by);
+      if (roomIndex === ROOMS - 1 && sampleIds.length < 50) sampleIds.push(id); // room 49: a copy of B2.16 (3 lasers, 4 beams)
+    }
+  })();
+  db.pragma('wal_checkpoint(TRUNCATE)');
+  db.close();
+  return { path, roomIds, sampleIds };
+}
+
+export async function runRecordsBench(): Promise<BenchEntry[]> {
+  const dir = mkdtempSync(join(tmpdir(), 'bw-bench-records-'));
+  const entries: BenchEntry[] = [];
+  try {
+    const t0 = performance.now();
+    const { path, roomIds, sampleIds } = buildDatabase(dir);
+    const buildMs = performance.now() - t0;
+    const sizeMb = statSync(path).size / 1e6;
+    console.log(`records bench: ${ASSESSMENTS} assessments in ${ROOMS} rooms, ${sizeMb.toFixed(0)} MB, built in ${(buildMs / 1000).toFixed(1)} s`);
+
+    // Open (integrity_check included), a fresh connection each run.
+    entries.push({
+      name: `records: open a database of ${ASSESSMENTS} assessments (${sizeMb.toFixed(0)} MB)`,
+      median_ms: timeRuns(15, () => openRecordStore({ path, keyDir: join(dir, 'keys') }).close()),
+      runs: 15,
+      target_ms: 200,
+    });
+
+    const store: RecordStore = openRecordStore({ path, keyDir: join(dir, 'keys') });
+    try {
+      const listRoom = roomIds[0] ?? '';
+      let listed = 0;
+      entries.push({
+        name: `records: list a room's assessments (${store.listAssessments(listRoom).length} rows)`,
+        median_ms: timeRuns(50, () => (listed += store.listAssessments(listRoom).length)),
+        runs: 50,
+        target_ms: 50,
+      });
+      if (listed === 0) throw new Error('nothing listed');
+
+      // Save: notes edited, inputs unchanged (the common save while writing up an assessment).
+      const contents = sampleIds.map((id) => store.getAssessment(id).current.content);
+      entries.push({
+        name: 'records: save one assessment (notes edited, results reused)',
+        median_ms: timeRuns(sampleIds.length, (i) => {
+          const id = sampleIds[i] ?? '';
+          const c = contents[i];
+          if (!c) throw new Error('content missing');
+          store.saveAssessment(id, { ...c, notes: `edited ${i}` });
+        }),
+        runs: sampleIds.length,
+        target_ms: 5,
+      });
+
+      // Save with changed inputs: the core recomputes the room (no target here; see the core bench).
+      const n = 10;
+      entries.push({
+        name: 'records: save one assessment with changed inputs (includes evaluateRoom, 3 lasers)',
+        median_ms: timeRuns(n, (i) => {
+          const c = contents[i];
+          if (!c) throw new Error('content missing');
+          const lasers = c.input.lasers.map((l, li) =>
+            li === 0 ? { ...l, beams: l.beams.map((b) => ({ ...b, label: `${b.label ?? ''}`, exposureDuration_s: 10 + i })) } : l,
+          );
+          store.saveAssessment(sampleIds[i] ?? '', { ...c, input: { ...c.input, lasers } });
+        }),
+        runs: n,
+      });
+      entries.push({
+        name: 'records: sign one assessment (re-evaluate, fingerprint, Ed25519, supersede)',
+        median_ms: timeRuns(n, (i) => {
+          store.signAssessment(sampleIds[20 + i] ?? '', { name: 'Bench Officer', role: 'LSO', statement: 'Benchmark sign-off.' });
+        }),
+        runs: n,
+      });
+    } finally {
+      store.close();
+    }
+  } finally {
+    if (!process.env["KEEP_BENCH_DB"]) rmSync(dir, { recursive: true, force: true }); else console.log("kept", dir);
+  }
+  return entries;
+}
+
+if (process.argv[1] && import.meta.url.endsWith(process.argv[1].split('/').pop() ?? '\0')) {
+  const entries = await runRecordsBench();
+  for (const e of entries) {
+    const verdict = e.target_ms === undefined ? '' : e.median_ms <= e.target_ms ? `  (target ${e.target_ms} ms: ok)` : `  (target ${e.target_ms} ms: MISSED)`;
+    console.log(`${e.name}: median ${e.median_ms.toFixed(2)} ms over ${e.runs} runs${verdict}`);
+  }
+}
