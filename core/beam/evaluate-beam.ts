@@ -134,6 +134,10 @@ function evaluateValid(input: BeamInput, ruleSet: RuleSetId, settings: LimitSett
   const eye: TissueLimits = tissueLimits({ ...base, tissue: 'eye', exposureDuration_s: T, durationWhy });
   const skin: TissueLimits = tissueLimits({ ...base, tissue: 'skin', exposureDuration_s: skinT, durationWhy: skinWhy });
   for (const w of eye.warnings) warnings.push(w);
+  const replaced = [...new Set([...eye.summary.conservativeReplacements, ...skin.summary.conservativeReplacements])].filter((x) => x !== 'pulse-shorter-than-tables');
+  if (replaced.length) {
+    warnings.push(`Conservative mode: unverified limit-table entries were replaced by stricter values (${replaced.join(', ')}); the limits may be lower than the published ones until verified.`);
+  }
   trace.children.push(eye.trace, skin.trace);
 
   const v = input.viewing ?? {};
