@@ -4,10 +4,12 @@
  * is bad nothing is imported. CSV syntax per RFC 4180. Unit prefixes per SI (BIPM SI Brochure,
  * 9th edition): 5 mW = 0.005 W, 35 fs = 3.5e-14 s. Lasers are the invented demo ones.
  */
+import { readFileSync } from 'node:fs';
 import { join } from 'node:path';
+import { fileURLToPath } from 'node:url';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { RecordStore, Room } from '../../../electron/backend/records/index.js';
-import { parseCsv } from '../../../electron/backend/records/csv.js';
+import { CSV_COLUMNS, parseCsv } from '../../../electron/backend/records/csv.js';
 import { openTemp, snapshot, tempDir } from './helpers.js';
 
 let t: ReturnType<typeof tempDir>;
@@ -110,5 +112,27 @@ describe('laser inventory CSV', () => {
 
   it('an unclosed quote is a clear error', () => {
     expect(() => store.importLaserCsv(room.id, `${HEADER}\n"unterminated,4`)).toThrow(/quoted cell is not closed/);
+  });
+});
+
+describe('README section "CSV columns for laser inventory import"', () => {
+  const readme = readFileSync(fileURLToPath(new URL('../../../README.md', import.meta.url)), 'utf8');
+  const section = readme.slice(readme.indexOf('## CSV columns for laser inventory import'));
+
+  it('documents every column the importer knows, and no other', () => {
+    const documented = new Set<string>();
+    for (const line of section.split('\n')) {
+      if (!line.startsWith('| `')) continue;
+      const first = line.split('|')[1] ?? '';
+      for (const m of first.matchAll(/`([a-z_]+)`/g)) if (m[1]) documented.add(m[1]);
+    }
+    expect([...documented].sort()).toEqual([...CSV_COLUMNS].sort());
+  });
+
+  it('its example imports as written', () => {
+    const example = /```csv\n([\s\S]*?)```/.exec(section)?.[1] ?? '';
+    const report = store.importLaserCsv(room.id, example);
+    expect(report.errors).toEqual([]);
+    expect(report.imported).toBe(2);
   });
 });
