@@ -10,7 +10,7 @@
  * evaluation) and a sign-off (re-evaluates, signs, supersedes).
  * The bulk of the 10 000 rows is copied with SQL from real store-made assessments (setup, not timed).
  * Medians over repeated runs. Speed targets live here, never in timed tests.
- * Run alone: npx tsx test/bench/records.bench.ts
+ * Run with the others: npm run bench (or -- --only=records); alone: npx tsx test/bench/records.bench.ts
  */
 import Database from 'better-sqlite3';
 import { randomUUID } from 'node:crypto';
@@ -20,32 +20,10 @@ import { join } from 'node:path';
 import demo from '../../assets/demo/demo-scenario.json' with { type: 'json' };
 import { DemoScenarioSchema } from '../../electron/backend/records/demo.js';
 import { openRecordStore, type RecordStore } from '../../electron/backend/records/index.js';
-
-export interface BenchEntry {
-  readonly name: string;
-  readonly median_ms: number;
-  readonly runs: number;
-  readonly target_ms?: number;
-}
+import { timeMedian, type BenchEntry } from './registry.js';
 
 const ASSESSMENTS = 10_000;
 const ROOMS = 50;
-
-function median(xs: number[]): number {
-  const s = [...xs].sort((a, b) => a - b);
-  const m = Math.floor(s.length / 2);
-  return s.length % 2 ? (s[m] as number) : ((s[m - 1] as number) + (s[m] as number)) / 2;
-}
-
-function timeRuns(runs: number, f: (i: number) => void): number {
-  const xs: number[] = [];
-  for (let i = 0; i < runs; i++) {
-    const t0 = performance.now();
-    f(i);
-    xs.push(performance.now() - t0);
-  }
-  return median(xs);
-}
 
 /** Build the 10 000-assessment database; returns its path and some ids to work on. */
 function buildDatabase(dir: string): { path: string; roomIds: string[]; sampleIds: string[] } {
@@ -112,7 +90,7 @@ export async function runRecordsBench(): Promise<BenchEntry[]> {
     // Open (integrity_check included), a fresh connection each run.
     entries.push({
       name: `records: open a database of ${ASSESSMENTS} assessments (${sizeMb.toFixed(0)} MB)`,
-      median_ms: timeRuns(15, () => openRecordStore({ path, keyDir: join(dir, 'keys') }).close()),
+      median_ms: timeMedian(15, () => openRecordStore({ path, keyDir: join(dir, 'keys') }).close()),
       runs: 15,
       target_ms: 200,
     });
@@ -123,7 +101,7 @@ export async function runRecordsBench(): Promise<BenchEntry[]> {
       let listed = 0;
       entries.push({
         name: `records: list a room's assessments (${store.listAssessments(listRoom).length} rows)`,
-        median_ms: timeRuns(50, () => (listed += store.listAssessments(listRoom).length)),
+        median_ms: timeMedian(50, () => (listed += store.listAssessments(listRoom).length)),
         runs: 50,
         target_ms: 50,
       });
@@ -133,7 +111,7 @@ export async function runRecordsBench(): Promise<BenchEntry[]> {
       const contents = sampleIds.map((id) => store.getAssessment(id).current.content);
       entries.push({
         name: 'records: save one assessment (notes edited, results reused)',
-        median_ms: timeRuns(sampleIds.length, (i) => {
+        median_ms: timeMedian(sampleIds.length, (i) => {
           const id = sampleIds[i] ?? '';
           const c = contents[i];
           if (!c) throw new Error('content missing');
@@ -147,7 +125,7 @@ export async function runRecordsBench(): Promise<BenchEntry[]> {
       const n = 10;
       entries.push({
         name: 'records: save one assessment with changed inputs (includes evaluateRoom, 3 lasers)',
-        median_ms: timeRuns(n, (i) => {
+        median_ms: timeMedian(n, (i) => {
           const c = contents[i];
           if (!c) throw new Error('content missing');
           const lasers = c.input.lasers.map((l, li) =>
@@ -159,7 +137,7 @@ export async function runRecordsBench(): Promise<BenchEntry[]> {
       });
       entries.push({
         name: 'records: sign one assessment (re-evaluate, fingerprint, Ed25519, supersede)',
-        median_ms: timeRuns(n, (i) => {
+        median_ms: timeMedian(n, (i) => {
           store.signAssessment(sampleIds[20 + i] ?? '', { name: 'Bench Officer', role: 'LSO', statement: 'Benchmark sign-off.' });
         }),
         runs: n,

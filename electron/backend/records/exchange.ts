@@ -379,6 +379,10 @@ export function importDocument(ctx: StoreContext, input: unknown): ImportSummary
             throw invalid([{ path, problem: `revision ${r.revisionNo} is signed here with different content: one of the two copies was altered` }]);
           }
         }
+        const clash = ctx.sql('SELECT id FROM revision WHERE assessment_id = ? AND revision_no = ? AND id <> ?').get(a.id, r.revisionNo, r.id);
+        if (clash !== undefined) {
+          throw invalid([{ path, problem: `this database already has a different revision ${r.revisionNo} of this assessment (both copies were revised separately; export the newer one and import it elsewhere)` }]);
+        }
         insertRevisionRow(ctx, revisionRow(r));
         const s = r.signature;
         if (s) {

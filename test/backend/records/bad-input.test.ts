@@ -150,3 +150,38 @@ describe('store methods validate their arguments', () => {
     expect(() => target.signAssessment(a.id, { name: ' ', role: 'LSO', statement: 'ok' })).toThrow(/Sign-off is not valid: name: must not be empty/);
   });
 });
+
+describe('import conflicts', () => {
+  it('two databases that revised the same assessment separately: refused, nothing changed', () => {
+    const t2 = tempDir('bw-conflict-');
+    const a = openTemp(t2.dir, 'a.sqlite');
+    const b = openTemp(t2.dir, 'b.sqlite');
+    try {
+      const { site, room } = registerRoom(a, 'A0.07');
+      const made = a.createAssessment({ roomId: room.id, content: a.newAssessmentContent(room.id) });
+      a.signAssessment(made.id, { name: 'A. Officer', role: 'LSO', statement: STATEMENT });
+      b.importDocument(a.exportSite(site.id));
+      // Both sides start revision 2 of the same assessment on their own.
+      a.saveAssessment(made.id, { ...a.getAssessment(made.id).current.content, notes: 'revised in A' });
+      b.saveAssessment(made.id, { ...b.getAssessment(made.id).current.content, notes: 'revised in B' });
+      a.signAssessment(made.id, { name: 'A. Officer', role: 'LSO', statement: STATEMENT });
+      const before = snapshot(join(t2.dir, 'b.sqlite'));
+      let err: unknown;
+      try {
+        b.importDocument(a.exportAssessment(made.id));
+      } catch (e) {
+        err = e;
+      }
+      expect(err).toBeInstanceOf(RecordError);
+      expect((err as RecordError).issues).toContainEqual({
+        path: 'assessments[0].revisions[1]',
+        problem: expect.stringMatching(/already has a different revision 2/),
+      });
+      expect(snapshot(join(t2.dir, 'b.sqlite'))).toBe(before);
+    } finally {
+      a.close();
+      b.close();
+      t2.cleanup();
+    }
+  });
+});
