@@ -9,32 +9,15 @@
  * "every beam changed" - all powers change, limits memoised; "cold" - every memo emptied first
  * (the first evaluation of a new room). Medians over repeated runs. Speed targets live here,
  * never in timed tests.
- * Run alone: npx tsx test/bench/part2.bench.ts
+ * Run with every suite: npm run bench (test/bench/run.ts finds runPart2Bench); alone:
+ * npx tsx test/bench/part2.bench.ts
  */
 import { clearCoreCaches, evaluateBeam, evaluateRoom, type BeamInput, type EyewearSpec, type LaserInput, type RoomInput } from '../../core/index.js';
+import { timeMedian, type BenchEntry } from './registry.js';
 
-export interface BenchEntry {
-  readonly name: string;
-  readonly median_ms: number;
-  readonly runs: number;
-  readonly target_ms?: number;
-}
-
-function median(xs: number[]): number {
-  const s = [...xs].sort((a, b) => a - b);
-  const m = Math.floor(s.length / 2);
-  return s.length % 2 ? (s[m] as number) : ((s[m - 1] as number) + (s[m] as number)) / 2;
-}
-
+/** `time(runs, prepare, f)`: median wall time of f, prepare untimed (registry.timeMedian). */
 function time(runs: number, prepare: (i: number) => void, f: (i: number) => void): number {
-  const xs: number[] = [];
-  for (let i = 0; i < runs; i++) {
-    prepare(i);
-    const t0 = performance.now();
-    f(i);
-    xs.push(performance.now() - t0);
-  }
-  return median(xs);
+  return timeMedian(runs, f, prepare);
 }
 
 export function allReflectionsBeam(power_W: number): BeamInput {
