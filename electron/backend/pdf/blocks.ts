@@ -63,13 +63,10 @@ export function bullets(items: readonly string[], fontSize?: number): Content {
   return { ul: [...items], margin: [0, 0, 0, 4], ...(fontSize === undefined ? {} : { fontSize }) };
 }
 
-/** A yes/no cell, green or red, with an optional second line. */
+/** A yes/no cell, green or red, with the reason after the verdict. */
 export function verdictCell(ok: boolean, detail: string, fontSize = 7.5): TableCell {
   return {
-    stack: [
-      { text: ok ? 'YES' : 'NO', bold: true, color: ok ? COLOR.good : COLOR.bad },
-      ...(detail === '' ? [] : [{ text: detail, fontSize: fontSize - 0.5 }]),
-    ],
+    text: [{ text: ok ? 'YES' : 'NO', bold: true, color: ok ? COLOR.good : COLOR.bad, fontSize: fontSize + 0.5 }, ...(detail === '' ? [] : [{ text: `  ${detail}`, fontSize: fontSize - 0.5 }])],
     fillColor: ok ? COLOR.goodTint : COLOR.badTint,
     fontSize,
   };

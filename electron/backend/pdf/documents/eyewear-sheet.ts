@@ -48,14 +48,10 @@ export function eyewearSheetDefinition(doc: DocumentInput, opts: RenderOptions):
   const covering = doc.results.eyewearCoveringAll;
   const many = view.beams.length > 8;
   const eyewearCell = (e: EyewearSpec): TableCell => ({
-    stack: [
-      { text: e.id, bold: true, fontSize: 12 },
-      { text: e.label === e.id ? '' : e.label.replace(e.id, '').replace(/^\s*[(–-]\s*|\)\s*$/g, ''), fontSize: 7.5 },
-      ...(location(e.id) ? [{ text: location(e.id), fontSize: 7, color: COLOR.muted }] : []),
-    ],
+    text: [{ text: e.id, bold: true, fontSize: 12 }, { text: `  ${e.label === e.id ? '' : e.label.replace(e.id, '').replace(/^\s*[(–-]\s*|\)\s*$/g, '')}`, fontSize: 7.5 }],
   });
   const useRows: TableCell[][] = useByNumber(doc, view).map((u) => [
-    { text: u.eyewear.id, bold: true, fontSize: 11 },
+    { text: [{ text: u.eyewear.id, bold: true, fontSize: 11 }, ...(location(u.eyewear.id) ? [{ text: `\n${location(u.eyewear.id)}`, fontSize: 6.5, color: COLOR.muted }] : [])] },
     u.covers.length > 0
       ? { text: [{ text: 'USE for beams ', bold: true }, numberRanges(u.covers)], color: COLOR.good, fillColor: COLOR.goodTint }
       : { text: 'no beam in this room', color: COLOR.muted },
@@ -87,7 +83,7 @@ export function eyewearSheetDefinition(doc: DocumentInput, opts: RenderOptions):
             },
           ],
         },
-        { width: 250, stack: [fingerprintBlock(doc, 56, 8.5)] },
+        { width: 290, stack: [fingerprintBlock(doc, 56, 8.5)] },
       ],
     },
     { text: '', margin: [0, 2, 0, 0] },
@@ -104,7 +100,7 @@ export function eyewearSheetDefinition(doc: DocumentInput, opts: RenderOptions):
     },
     { text: 'Use and do not use (beam numbers as in the matrix)', bold: true, fontSize: 12, margin: [0, 0, 0, 2] },
     {
-      table: { headerRows: 0, dontBreakRows: true, widths: [36, 150, 170, '*'], body: useRows },
+      table: { headerRows: 0, dontBreakRows: true, widths: [112, 130, 150, '*'], body: useRows },
       layout: { hLineWidth: () => 0.6, vLineWidth: () => 0.6, hLineColor: () => '#999999', vLineColor: () => '#999999' },
       fontSize: 8.5,
     },

@@ -1,0 +1,148 @@
+/**
+ * Headless printing: the assessment report, door notice and eyewear sheet as PDF, without the UI.
+ *
+ *   npm run report -- --demo --out <folder> [--paper A4|Letter] [--units SI|ANSI]
+ *   npm run report -- --db <file> --assessment <id> --out <folder> [--revision <id>] [--paper ..] [--units ..]
+ *
+ * --demo loads the invented demo site into a temporary database with a signing key made for the
+ * demo, signs each room's assessment as the demo officer, renders the three documents per room
+ * and deletes the temporary database. --db opens a stored database read-only.
+ */
+import { mkdirSync, mkdtempSync, rmSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join, resolve } from 'node:path';
+import { z } from 'zod';
+import { openRecordStore, type RecordStore } from '../backend/records/index.js';
+import {
+  DOCUMENT_FILE_NAME,
+  documentInputFromAssessment,
+  renderDocument,
+  renderOptionsSchema,
+  type DocumentKind,
+  type RenderOptions,
+} from '../backend/pdf/index.js';
+
+const USAGE = `Usage:
+  npm run report -- --demo --out <folder> [--paper A4|Letter] [--units SI|ANSI]
+  npm run report -- --db <file> --assessment <id> --out <folder> [--revision <id>] [--paper A4|Letter] [--units SI|ANSI]`;
+
+const ArgsSchema = z
+  .object({
+    demo: z.boolean().default(false),
+    db: z.string().min(1).optional(),
+    assessment: z.string().min(1).optional(),
+    revision: z.string().min(1).optional(),
+    out: z.string({ error: '--out <folder> is required' }).min(1, '--out <folder> is required'),
+    paper: renderOptionsSchema.shape.paper,
+    units: renderOptionsSchema.shape.units,
+  })
+  .strict()
+  .refine((a) => a.demo !== (a.db !== undefined), { message: 'give either --demo or --db <file>', path: ['db'] })
+  .refine((a) => a.db === undefined || a.assessment !== undefined, { message: '--db needs --assessment <id>', path: ['assessment'] });
+
+export type ReportArgs = z.infer<typeof ArgsSchema>;
+
+/** "--paper Letter --demo" -> { paper: 'Letter', demo: true }; flags without a value are booleans. */
+export function parseArgs(argv: readonly string[]): ReportArgs {
+  const raw: Record<string, string | boolean> = {};
+  for (let i = 0; i < argv.length; i++) {
+    const a = argv[i] as string;
+    if (!a.startsWith('--')) throw new Error(`unexpected argument '${a}'\n${USAGE}`);
+    const [flag, inline] = a.slice(2).split('=', 2) as [string, string | undefined];
+    const next = argv[i + 1];
+    if (inline !== undefined) raw[flag] = inline;
+    else if (next !== undefined && !next.startsWith('--')) {
+      raw[flag] = next;
+      i++;
+    } else raw[flag] = true;
+  }
+  const parsed = ArgsSchema.safeParse(raw);
+  if (!parsed.success) {
+    const first = parsed.error.issues[0];
+    const field = first?.path.join('.') ?? '';
+    throw new Error(`${field ? `--${field}: ` : ''}${first?.message ?? 'invalid arguments'}\n${USAGE}`);
+  }
+  return parsed.data;
+}
+
+const KINDS: readonly DocumentKind[] = ['report', 'door-notice', 'eyewear-sheet'];
+
+function safeName(s: string): string {
+  return s.replace(/[^A-Za-z0-9._-]+/g, '_');
+}
+
+/** Render the three documents of one assessment into `outDir`; returns the files written. */
+export async function writeDocuments(store: RecordStore, assessmentId: string, outDir: string, opts: RenderOptions, revisionId?: string): Promise<string[]> {
+  const doc = documentInputFromAssessment(store, assessmentId, revisionId === undefined ? {} : { revisionId });
+  mkdirSync(outDir, { recursive: true });
+  const files: string[] = [];
+  for (const kind of KINDS) {
+    const file = join(outDir, `${safeName(doc.room.code)}-${DOCUMENT_FILE_NAME[kind]}.pdf`);
+    writeFileSync(file, await renderDocument(kind, doc, opts));
+    files.push(file);
+  }
+  return files;
+}
+
+/** The demo site in a temporary database, every room's assessment signed by the demo officer. */
+export async function writeDemoDocuments(outDir: string, opts: RenderOptions): Promise<string[]> {
+  const tmp = mkdtempSync(join(tmpdir(), 'beamwarden-demo-'));
+  const store = openRecordStore({ path: join(tmp, 'demo.sqlite'), keyDir: join(tmp, 'key') });
+  try {
+    const site = store.seedDemo();
+    const officer = store.listPeople().find((p) => p.role === 'Laser safety officer');
+    const files: string[] = [];
+    for (const room of store.listRooms(site.id)) {
+      for (const a of store.listAssessments(room.id)) {
+        if (a.status === 'draft' && officer) {
+          store.signAssessment(a.id, {
+            personId: officer.id,
+            name: officer.name,
+            role: officer.role,
+            statement: 'I have evaluated the laser hazards of this area with the inputs and assumptions recorded here and approve the controls listed. (Demo data: invented site.)',
+          });
+        }
+        files.push(...(await writeDocuments(store, a.id, outDir, opts)));
+      }
+    }
+    return files;
+  } finally {
+    store.close();
+    rmSync(tmp, { recursive: true, force: true });
+  }
+}
+
+export async function main(argv: readonly string[]): Promise<number> {
+  let args: ReportArgs;
+  try {
+    args = parseArgs(argv);
+  } catch (err) {
+    console.error(err instanceof Error ? err.message : String(err));
+    return 2;
+  }
+  const opts: RenderOptions = { paper: args.paper, units: args.units };
+  const out = resolve(args.out);
+  let files: string[];
+  if (args.demo) {
+    files = await writeDemoDocuments(out, opts);
+  } else {
+    const store = openRecordStore({ path: resolve(args.db as string), readonly: true });
+    try {
+      files = await writeDocuments(store, args.assessment as string, out, opts, args.revision);
+    } finally {
+      store.close();
+    }
+  }
+  for (const f of files) console.log(f);
+  return 0;
+}
+
+if (process.argv[1] !== undefined && resolve(process.argv[1]) === resolve(new URL(import.meta.url).pathname)) {
+  main(process.argv.slice(2)).then(
+    (code) => process.exit(code),
+    (err: unknown) => {
+      console.error(err instanceof Error ? err.message : String(err));
+      process.exit(1);
+    },
+  );
+}
