@@ -8,7 +8,7 @@ import { exposureLimit, type ExposureLimitQuery, type ExposureLimitResult } from
 import { clearTissueLimitCache } from './tissue-limits.js';
 import { pulsedExposureLimit, type PulsedLimitQuery, type PulsedLimitResult } from '../limits/pulse-rules.js';
 
-const MAX_ENTRIES = 4000;
+const MAX_ENTRIES = 1000;
 const cwCache = new Map<string, ExposureLimitResult>();
 const pulsedCache = new Map<string, PulsedLimitResult>();
 

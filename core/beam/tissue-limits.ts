@@ -76,7 +76,7 @@ function candidateCriteria(lim: ExposureLimitResult, rule: PulseRule, toL: (H: D
   }));
 }
 
-const CACHE_MAX = 4000;
+const CACHE_MAX = 1000;
 const cache = new Map<string, TissueLimits>();
 
 /**

@@ -50,7 +50,7 @@ function computeAdditiveItem(ev: BeamEvaluation, tl: TissueLimits): AdditiveItem
  * one value, only that beam is recomputed and the room result is reassembled (the UI recomputes on
  * every keystroke). Results are read-only data; the room never mutates a cached one.
  */
-const BEAM_CACHE_MAX = 2000;
+const BEAM_CACHE_MAX = 300; // a few rooms of beams; each evaluation with its trace is ~50 kB
 const beamCache = new Map<string, BeamEvaluation>();
 
 export function clearBeamCache(): void {
