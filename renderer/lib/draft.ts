@@ -114,12 +114,19 @@ export function durationChoices(d: Draft): AssessmentContent['assumptions']['exp
 
 export function contentFrom(d: Draft): AssessmentContent {
   const { input } = roomInputFrom(d);
+  // Choices may only name beams and eyewear that are still in the assessment (a removed beam or a
+  // shelf refresh must not leave a dangling reference, which the record store would refuse).
+  const beamIds = new Set(input.lasers.flatMap((l) => l.beams.map((b) => b.id ?? '')));
+  const tags = new Set((input.eyewear ?? []).map((e) => e.id));
+  const eyewearChosen = d.eyewearChosen
+    .filter((c) => tags.has(c.eyewearTag))
+    .map((c) => ({ ...c, beamIds: c.beamIds.filter((id) => beamIds.has(id)) }));
   return {
     title: d.title.trim() || 'Laser hazard assessment',
     input,
     operatingStates: d.operatingStates,
     assumptions: {
-      exposureDurations: durationChoices(d),
+      exposureDurations: durationChoices(d).filter((x) => beamIds.has(x.beamId)),
       personsPresent: d.personsPresent,
       opticalAidsPossible: d.opticalAidsPossible,
       other: d.otherAssumptions
@@ -129,7 +136,7 @@ export function contentFrom(d: Draft): AssessmentContent {
     },
     controls: d.controls,
     nonBeamHazards: d.nonBeamHazards,
-    eyewearChosen: d.eyewearChosen,
+    eyewearChosen,
     notes: d.notes,
     reviewBy: d.reviewBy.trim() === '' ? null : d.reviewBy.trim(),
   };

@@ -139,8 +139,10 @@ class Session {
     }
     return this.run(async () => {
       for (const lf of d.lasers) {
-        const { laser } = laserInputFrom(lf);
-        if (!laser) continue;
+        const { laser: full } = laserInputFrom(lf);
+        if (!full) continue;
+        // The register keeps what the laser is; the exposure duration is an assumption of the assessment.
+        const laser = { ...full, beams: full.beams.map(({ exposureDuration_s: _t, ...b }) => b) };
         if (lf.isNew) {
           const inst = await invoke('installation-create', { roomId: room.id, laser, laserType: laser.name });
           lf.id = inst.id;
