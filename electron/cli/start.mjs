@@ -77,6 +77,25 @@ function startElectron(bin) {
   child.on('exit', (code) => process.exit(code ?? 0));
 }
 
-const bin = electronBinary();
+/**
+ * Electron 42 and later fetch their binary on first use rather than at install. Try that once
+ * (it fails within seconds without internet); BEAMWARDEN_NO_ELECTRON=1 skips Electron entirely.
+ */
+function fetchElectronOnce() {
+  const installer = path.join(ROOT, 'node_modules', 'electron', 'install.js');
+  if (!existsSync(installer)) return;
+  say("fetching Electron's binary (first start only)…");
+  spawnSync(process.execPath, [installer], { stdio: 'inherit', cwd: path.dirname(installer), timeout: 600_000 });
+}
+
+let bin = null;
+if (process.env.BEAMWARDEN_NO_ELECTRON !== '1') {
+  bin = electronBinary();
+  if (!bin) {
+    fetchElectronOnce();
+    bin = electronBinary();
+  }
+}
 if (bin) startElectron(bin);
+else if (process.env.BEAMWARDEN_NO_ELECTRON === '1') startLoopbackHost('BEAMWARDEN_NO_ELECTRON=1 is set.');
 else startLoopbackHost("Electron's binary is not installed on this machine (npm's electron package downloads it from GitHub on first use).");
