@@ -1,5 +1,5 @@
 /** Display helpers. Values from the core are already rounded in the safe direction; re-rounding here keeps that direction. */
-import { dec, formatDensity, formatSI, plain, roundSig, type UnitHabit } from '../../core/index.js';
+import { dec, formatDensity, formatSI, plain, roundPlaces, roundSig, type UnitHabit } from '../../core/index.js';
 import type { LimitSummary, ScaleNumberRequirement } from '../../core/model/results.js';
 
 /** A distance in metres (decimal string), rounded UP to 3 significant figures, mm below 10 cm. */
@@ -51,4 +51,10 @@ export function dateTime(ts: string | null | undefined): string {
 
 export function shortFingerprint(fp: string): string {
   return fp.length > 16 ? `${fp.slice(0, 8)} ${fp.slice(8, 16)}…` : fp;
+}
+
+/** An optical density rounded UP to one decimal place and never below 0 (safe direction). */
+export function odUp(x: string): string {
+  const v = roundPlaces(dec(x), 1, 'up');
+  return v.isNegative() ? '0' : v.toFixed(1).replace(/\.0$/, '');
 }

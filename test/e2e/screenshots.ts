@@ -47,6 +47,8 @@ async function main(): Promise<void> {
     await page.locator('figure.plot').first().waitFor();
     await page.locator('figure.plot').first().scrollIntoViewIfNeeded();
     await shot(page, '04-workspace-plots');
+    await page.locator('figure.plot').nth(1).scrollIntoViewIfNeeded();
+    await shot(page, '04b-workspace-distance-plot');
     await page.getByRole('button', { name: 'derivation', exact: true }).first().click();
     await page.getByRole('dialog').waitFor();
     await shot(page, '05-derivation');
@@ -63,6 +65,19 @@ async function main(): Promise<void> {
     await page.keyboard.press('Alt+6');
     await page.getByRole('heading', { level: 1, name: /^Print/ }).waitFor();
     await shot(page, '09-print-export');
+    // the signed demo room (B2.14): the review screen with its signature block
+    await page.keyboard.press('Alt+1');
+    await page.getByRole('button', { name: /^B2\.14/ }).click();
+    await page.getByRole('button', { name: 'Open in workspace' }).click();
+    await page.getByRole('heading', { level: 1, name: /Workspace/ }).waitFor();
+    await page.locator('[data-testid="nohd"]').first().waitFor({ timeout: 60_000 });
+    await shot(page, '10-workspace-ultrafast');
+    await page.keyboard.press('Alt+5');
+    await page.getByTestId('review-status').waitFor();
+    await page.getByRole('button', { name: 'Verify the newest signed revision' }).click();
+    await page.getByTestId('verify-result').waitFor();
+    await page.getByTestId('verify-result').scrollIntoViewIfNeeded();
+    await shot(page, '11-review-signed');
   } finally {
     await ctx.close();
     await empty.stop();
