@@ -4,7 +4,7 @@
  * validation inside `dispatch`). The few shell-only channels (save dialog, print) get the same
  * sender check and their own schemas.
  */
-import { BrowserWindow, dialog, ipcMain, shell, type IpcMainInvokeEvent } from 'electron';
+import { dialog, ipcMain, shell, type BrowserWindow, type IpcMainInvokeEvent } from 'electron';
 import { mkdtempSync, writeFileSync } from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';

@@ -8,6 +8,9 @@ import type { Assessment, AssessmentContent, LaserInstallation, Room, Site } fro
 import { invoke, messageOf } from './api.js';
 import { contentFrom, draftFrom, roomInputFrom, saveBlockers, type Draft } from './draft.js';
 import { completeHazards } from './hazards-catalogue.js';
+import { addDays, today } from './dates.js';
+
+export { addDays, today };
 import { laserInputFrom } from './beam-form.js';
 
 const LAST_KEY = 'beamwarden.last.v1';
@@ -17,9 +20,6 @@ export interface Notice {
   readonly text: string;
 }
 
-export function today(): string {
-  return new Date().toISOString().slice(0, 10);
-}
 
 class Session {
   info = $state<AppInfo | null>(null);
@@ -192,11 +192,6 @@ class Session {
   }
 }
 
-export function addDays(date: string, days: number): string {
-  const d = new Date(date + 'T00:00:00Z');
-  d.setUTCDate(d.getUTCDate() + days);
-  return d.toISOString().slice(0, 10);
-}
 
 function readLast(): { roomId: string; assessmentId: string | null } | null {
   try {

@@ -16,7 +16,7 @@ vi.mock('electron', () => ({
   ipcMain: { handle: (channel: string, fn: Handler) => handlers.set(channel, fn), on: () => undefined },
   dialog: { showSaveDialog: async () => ({ canceled: true }) },
   shell: { openPath: async () => '' },
-  BrowserWindow: class {},
+  BrowserWindow: vi.fn(),
 }));
 
 const { registerIpc } = await import('../../electron/main/ipc.js');
