@@ -4,7 +4,6 @@
  */
 import {
   DEFAULT_RULE_SET,
-  defaultExposureDuration,
   type EyewearSpec,
   type LimitSettings,
   type RoomInput,
@@ -93,20 +92,18 @@ export function roomInputFrom(d: Draft): DraftInput {
   return { input: { ruleSet: d.ruleSet, ...settings, lasers, eyewear: d.eyewear }, incomplete };
 }
 
-/** The exposure duration and its reason recorded for each beam (officer's choice, or the default). */
+/**
+ * The exposure durations the officer chose, with the reason (recorded assumptions). Beams left at
+ * the default are not listed: the results state the default and why for every beam, and a record
+ * does not change merely because it was opened and saved again.
+ */
 export function durationChoices(d: Draft): AssessmentContent['assumptions']['exposureDurations'] {
   const out: Array<AssessmentContent['assumptions']['exposureDurations'][number]> = [];
   for (const l of d.lasers) {
     for (const b of l.beams) {
-      const wl = wavelengthNm(b.f.wavelength);
-      if (wl === undefined) continue;
       const typed = b.f.exposureDuration.value;
-      if (typed !== undefined) {
-        out.push({ beamId: b.id, duration_s: typed, why: b.durationWhy.trim() || 'chosen by the laser safety officer' });
-      } else {
-        const def = defaultExposureDuration(wl);
-        out.push({ beamId: b.id, duration_s: def.duration_s, why: `${def.why} (${def.basis})` });
-      }
+      if (typed === undefined || wavelengthNm(b.f.wavelength) === undefined) continue;
+      out.push({ beamId: b.id, duration_s: typed, why: b.durationWhy.trim() || 'chosen by the laser safety officer' });
     }
   }
   return out;

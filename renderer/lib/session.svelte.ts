@@ -80,6 +80,7 @@ class Session {
 
   /** Open a room in the workspace: its newest assessment, or a new draft from the register. */
   async openRoom(roomId: string, assessmentId?: string): Promise<void> {
+    if (!this.confirmDiscard()) return;
     await this.run(async () => {
       const [room, installations, list] = await Promise.all([
         invoke('room-get', { id: roomId }),
@@ -104,13 +105,18 @@ class Session {
   /** Start a fresh assessment for the open room (a second one, e.g. for one installation). */
   async newAssessment(): Promise<void> {
     const room = this.room;
-    if (!room) return;
+    if (!room || !this.confirmDiscard()) return;
     await this.run(async () => {
       const content = await invoke('assessment-new-content', { roomId: room.id });
       this.assessment = null;
       this.loadDraft(content, '');
       writeLast({ roomId: room.id, assessmentId: null });
     });
+  }
+
+  /** Leaving a draft with unsaved changes asks first (nothing is lost silently). */
+  private confirmDiscard(): boolean {
+    return !this.dirty || window.confirm('The open assessment has unsaved changes. Discard them?');
   }
 
   private setAssessment(a: Assessment): void {

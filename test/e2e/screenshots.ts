@@ -78,6 +78,16 @@ async function main(): Promise<void> {
     await page.getByTestId('verify-result').waitFor();
     await page.getByTestId('verify-result').scrollIntoViewIfNeeded();
     await shot(page, '11-review-signed');
+    // an edit after sign-off: a new draft revision and what changed
+    await page.keyboard.press('Alt+2');
+    await page.getByRole('button', { name: /^Beam 1: He-Ne/ }).click();
+    await page.getByLabel('Power', { exact: true }).fill('3 mW');
+    await page.keyboard.press('Control+s');
+    await page.getByTestId('record-status').filter({ hasText: 'revision 2' }).waitFor();
+    await page.keyboard.press('Alt+5');
+    await page.getByRole('heading', { name: 'Changes since the last signed revision' }).waitFor();
+    await page.getByRole('heading', { name: 'Changes since the last signed revision' }).scrollIntoViewIfNeeded();
+    await shot(page, '12-review-changes');
   } finally {
     await ctx.close();
     await empty.stop();
