@@ -135,12 +135,26 @@ export function headerFor(doc: DocumentInput, title: string, sideMargin: number)
   });
 }
 
-export function footerFor(doc: DocumentInput, sideMargin: number): DynamicContent {
+/**
+ * The caution as a tinted band drawn with a canvas rectangle under the text: it looks like the
+ * framed block but costs a fraction of a table when repeated on every page of a long report.
+ */
+export function cautionBand(width: number, fontSize: number): Content {
+  const h = fontSize * 1.15 + 8;
+  return {
+    stack: [
+      { canvas: [{ type: 'rect', x: 0, y: 0, w: width, h, color: COLOR.caution, lineColor: COLOR.cautionEdge, lineWidth: 1.2 }] },
+      { text: RESULT_CAUTION, bold: true, fontSize, color: COLOR.ink, relativePosition: { x: 6, y: -h + 4 } },
+    ],
+  };
+}
+
+export function footerFor(doc: DocumentInput, sideMargin: number, width: number): DynamicContent {
   const fp = doc.signature === null ? 'no fingerprint (draft)' : `fingerprint ${shortFingerprint(doc.signature.fingerprint)}`;
   return (currentPage: number, pageCount: number) => ({
     margin: [sideMargin, 6, sideMargin, 0],
     stack: [
-      cautionBlock(8.5),
+      cautionBand(width, 8.5),
       {
         margin: [0, 3, 0, 0],
         columns: [

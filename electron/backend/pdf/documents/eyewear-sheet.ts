@@ -7,7 +7,7 @@ import type { Content, TableCell, TDocumentDefinitions } from 'pdfmake/interface
 import type { EyewearSpec } from '../../../../core/model/inputs.js';
 import type { DocumentInput, RenderOptions } from '../document-input.js';
 import * as fmt from '../format.js';
-import { baseDocument, cautionBlock, COLOR, fingerprintBlock, footerFor, headerFor } from '../page.js';
+import { baseDocument, cautionBlock, COLOR, contentWidth, fingerprintBlock, footerFor, headerFor } from '../page.js';
 import { roomView } from '../room-view.js';
 import { coverageMatrix, eyewearMarkings, verdictOf } from './eyewear-tables.js';
 import type { RoomView } from '../room-view.js';
@@ -110,7 +110,7 @@ export function eyewearSheetDefinition(doc: DocumentInput, opts: RenderOptions):
     pageOrientation: 'landscape',
     pageMargins: [SIDE, 30, SIDE, 52],
     header: headerFor(doc, 'Laser eyewear sheet', SIDE),
-    footer: footerFor(doc, SIDE),
+    footer: footerFor(doc, SIDE, contentWidth(opts.paper, SIDE, true)),
     content,
   };
 }

@@ -49,11 +49,12 @@ export function derivationsSection(doc: DocumentInput, view: RoomView): Content[
     heading('Appendix — derivations'),
     paragraph(
       'Every figure above, step by step as the calculation core made it: inputs, table rows with their source and confidence mark, formulas with the numbers substituted, conservative replacements and rounding. ' +
-        'A sub-derivation identical to one printed earlier is referred to by its number; a step identical to one already printed for the same beam is not repeated.',
+        `Rule set of every step: ${doc.results.ruleSetName}. A sub-derivation identical to one printed earlier is referred to by its number; a step identical to one already printed for the same beam is not repeated; ` +
+        'sources and confidence marks ([S1], [S2] ...) are listed after each beam.',
       { fontSize: 8, color: COLOR.muted },
     ),
   ];
-  const printer = new TracePrinter();
+  const printer = new TracePrinter(doc.results.ruleSetName);
   view.beams.forEach((b, i) => {
     out.push(heading(`${i + 1}. ${b.result.label}`, 2));
     out.push(...printer.render(b.result.trace, `D${i + 1}`));

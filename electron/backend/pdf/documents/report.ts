@@ -29,7 +29,7 @@ export function reportDefinition(doc: DocumentInput, opts: RenderOptions): TDocu
     ...baseDocument(doc, opts.paper, 'Laser hazard assessment'),
     pageMargins: [SIDE, 42, SIDE, 66],
     header: headerFor(doc, 'Laser hazard assessment', SIDE),
-    footer: footerFor(doc, SIDE),
+    footer: footerFor(doc, SIDE, contentWidth(opts.paper, SIDE)),
     content,
   };
 }

@@ -3,11 +3,14 @@
  * table row or formula, the substituted numbers, the result, and the source with its confidence
  * mark (read / derived / from memory / common practice), indented by depth.
  *
- * Made readable (and short enough to print quickly) in two ways, both stated on the page:
+ * Made readable (and short enough to print quickly) in four ways, all stated on the page:
  *  - a sub-derivation identical to one printed earlier in the report is printed once and
  *    referred to by its number afterwards;
  *  - a step identical to one already printed for the same beam (the rule-set note, a factor
- *    such as C_A, a repeated source line) is printed once, and the count of such repeats is given.
+ *    such as C_A) is printed once, and the count of such repeats is given;
+ *  - sources and confidence marks are numbered per beam ([S1], [S2] ...) and listed once after
+ *    the beam's derivation, instead of repeating the same long citation on every line;
+ *  - the rule-set name, stated at the head of the appendix, is left out of the sub-titles.
  * Each sub-derivation is one text block (not one block per line): pdfmake lays out far fewer nodes.
  */
 import type { Content } from 'pdfmake/interfaces';
@@ -29,16 +32,17 @@ const KIND_STYLE: Readonly<Record<TraceKind, { tag: string; color: string; bold?
 
 type Run = { text: string; bold?: boolean; color?: string; fontSize?: number };
 
-function stepRuns(s: TraceStep): Run[] {
+function stepRuns(s: TraceStep, ref: string | null): Run[] {
   const k = KIND_STYLE[s.kind];
-  const tags = [s.source, s.confidence].filter((x): x is string => x !== undefined && x !== '');
   const runs: Run[] = [
     { text: `${k.tag}  `, color: k.color, bold: true, fontSize: 6.3 },
     { text: `${s.label}: `, bold: true },
     { text: s.detail, ...(k.bold ? { bold: true } : {}), ...(s.kind === 'warning' ? { color: COLOR.bad } : {}) },
   ];
-  if (s.value !== undefined) runs.push({ text: ` = ${s.value}${s.unit ? ' ' + s.unit : ''}`, bold: true });
-  if (tags.length > 0) runs.push({ text: `   [${tags.join('; ')}]`, color: COLOR.muted, fontSize: 6.6 });
+  // "Wavelength: 800 nm = 800 nm": the value is not repeated when the detail already says it.
+  const valueText = s.value === undefined ? '' : `${s.value}${s.unit ? ' ' + s.unit : ''}`;
+  if (valueText !== '' && !s.detail.endsWith(valueText)) runs.push({ text: ` = ${valueText}`, bold: true });
+  if (ref !== null) runs.push({ text: `  ${ref}`, color: COLOR.muted, fontSize: 6.6 });
   return runs;
 }
 
@@ -50,12 +54,37 @@ function stepKey(s: TraceStep): string {
 export class TracePrinter {
   private readonly printed = new Map<string, string>();
 
-  /** Lines for one beam's (or the room's) trace, numbered `prefix`. */
+  private sources = new Map<string, string>();
+
+  constructor(private readonly ruleSetName: string) {}
+
+  /** Lines for one beam's (or the room's) trace, numbered `prefix`, then its list of sources. */
   render(trace: Trace, prefix: string): Content[] {
     const seenSteps = new Set<string>();
+    this.sources = new Map<string, string>();
     const out: Content[] = [];
     this.walk(trace, prefix, 0, seenSteps, out);
+    if (this.sources.size > 0) {
+      const runs: Run[] = [{ text: 'Sources and confidence: ', bold: true }];
+      for (const [tag, ref] of this.sources) runs.push({ text: `${ref} ` , bold: true }, { text: `${tag}.  ` });
+      out.push({ text: runs, fontSize: 6.6, color: COLOR.muted, margin: [4, 3, 0, 2] });
+    }
     return out;
+  }
+
+  private refFor(s: TraceStep): string | null {
+    const tag = [s.source, s.confidence].filter((x): x is string => x !== undefined && x !== '').join('; ');
+    if (tag === '') return null;
+    let ref = this.sources.get(tag);
+    if (ref === undefined) {
+      ref = `[S${this.sources.size + 1}]`;
+      this.sources.set(tag, ref);
+    }
+    return ref;
+  }
+
+  private title(t: Trace): string {
+    return t.title.replace(` (${this.ruleSetName})`, '');
   }
 
   private walk(trace: Trace, number: string, depth: number, seen: Set<string>, out: Content[]): void {
@@ -64,14 +93,14 @@ export class TracePrinter {
     const earlier = this.printed.get(key);
     if (earlier !== undefined) {
       out.push({
-        text: [{ text: `${number}  ${trace.title}`, bold: true }, { text: ` — identical to ${earlier} above`, italics: true, color: COLOR.muted }],
+        text: [{ text: `${number}  ${this.title(trace)}`, bold: true }, { text: ` — identical to ${earlier} above`, italics: true, color: COLOR.muted }],
         fontSize: 7.6,
         margin: [indent, 2, 0, 1],
       });
       return;
     }
     this.printed.set(key, number);
-    out.push({ text: `${number}  ${trace.title}`, bold: true, fontSize: depth === 0 ? 8.8 : 8, margin: [indent, depth === 0 ? 4 : 3, 0, 1] });
+    out.push({ text: `${number}  ${this.title(trace)}`, bold: true, fontSize: depth === 0 ? 8.8 : 8, margin: [indent, depth === 0 ? 4 : 3, 0, 1] });
     const runs: Run[] = [];
     let repeated = 0;
     for (const s of trace.steps) {
@@ -82,7 +111,7 @@ export class TracePrinter {
       }
       seen.add(k);
       if (runs.length > 0) runs.push({ text: '\n' });
-      runs.push(...stepRuns(s));
+      runs.push(...stepRuns(s, this.refFor(s)));
     }
     if (repeated > 0) {
       if (runs.length > 0) runs.push({ text: '\n' });
