@@ -16,6 +16,7 @@ import { APP_ENTRY, isAppUrl } from './security.js';
 import { mainWindowOptions } from './window-options.js';
 import { loadWindowState, saveWindowState } from './window-state.js';
 import { electronNativeBinding } from './native-binding.js';
+import { packageVersion } from '../host/paths.js';
 
 // dist/electron/main.js -> repository root two levels up
 const ROOT = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..', '..');
@@ -72,7 +73,7 @@ void app.whenReady().then(() => {
   const databasePath = process.env['BEAMWARDEN_DB'] ?? defaultDatabasePath();
   const nativeBinding = electronNativeBinding(ROOT, process.versions.electron ?? '');
   const store = openRecordStore({ path: databasePath, ...(nativeBinding ? { nativeBinding } : {}) });
-  const ctx: ApiContext = { shell: 'electron', version: app.getVersion(), databasePath: store.info.path, store };
+  const ctx: ApiContext = { shell: 'electron', version: packageVersion(), databasePath: store.info.path, store };
   registerIpc(handlerTable, ctx, () => win);
   serveRenderer(RENDERER_DIR);
   Menu.setApplicationMenu(buildMenu(() => win, process.platform === 'darwin'));
