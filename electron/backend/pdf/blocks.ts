@@ -21,7 +21,7 @@ export function heading(text: string, level: 1 | 2 | 3 = 1, id?: string): Conten
     bold: true,
     fontSize: size,
     margin: [0, level === 1 ? 14 : 9, 0, 4],
-    ...(level === 1 ? { headlineLevel: 1 } : {}),
+    headlineLevel: level,
     ...(id === undefined ? {} : { id }),
   };
 }

@@ -14,7 +14,7 @@ import type { Content, TableCell, TDocumentDefinitions } from 'pdfmake/interface
 import { dec } from '../../../../core/numeric/decimal.js';
 import type { DocumentInput, RenderOptions } from '../document-input.js';
 import * as fmt from '../format.js';
-import { baseDocument, cautionBlock, COLOR, contentWidth, fingerprintStack, ruleSetLine } from '../page.js';
+import { baseDocument, cautionBlock, contentWidth, fingerprintStack, ruleSetLine } from '../page.js';
 import { roomView, type RoomView } from '../room-view.js';
 import { precautionFor, signalWordFor, type SignalChoice } from '../signal-word.js';
 import { laserWarningSymbolSvg, safetyAlertSymbolSvg } from '../symbols/laser-warning.js';

@@ -6,7 +6,6 @@
 import type { Content, TableCell, TDocumentDefinitions } from 'pdfmake/interfaces';
 import type { EyewearSpec } from '../../../../core/model/inputs.js';
 import type { DocumentInput, RenderOptions } from '../document-input.js';
-import * as fmt from '../format.js';
 import { baseDocument, cautionBlock, COLOR, contentWidth, fingerprintBlock, footerFor, headerFor } from '../page.js';
 import { roomView } from '../room-view.js';
 import { coverageMatrix, eyewearMarkings, verdictOf } from './eyewear-tables.js';

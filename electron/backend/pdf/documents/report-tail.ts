@@ -116,10 +116,10 @@ export function signOffSection(doc: DocumentInput): Content[] {
     ];
   }
   return [
-    heading('Sign-off'),
     {
       unbreakable: true,
       stack: [
+        heading('Sign-off'),
         factTable([
           ['Name', { text: s.name, bold: true }],
           ['Role', s.role],

@@ -29,6 +29,8 @@ export function reportDefinition(doc: DocumentInput, opts: RenderOptions): TDocu
     ...baseDocument(doc, opts.paper, 'Laser hazard assessment'),
     pageMargins: [SIDE, 42, SIDE, 66],
     header: headerFor(doc, 'Laser hazard assessment', SIDE),
+    // A heading never ends a page: it moves to the next page with what it introduces.
+    pageBreakBefore: (node, q) => node.headlineLevel !== undefined && q.getFollowingNodesOnPage().length === 0,
     footer: footerFor(doc, SIDE, contentWidth(opts.paper, SIDE)),
     content,
   };

@@ -58,7 +58,7 @@ function n(v: number): string {
 function decades(values: readonly number[]): [number, number] {
   const ok = values.filter((v) => Number.isFinite(v) && v > 0);
   if (ok.length === 0) return [0, 1];
-  let lo = Math.floor(Math.log10(Math.min(...ok)));
+  const lo = Math.floor(Math.log10(Math.min(...ok)));
   let hi = Math.ceil(Math.log10(Math.max(...ok)));
   if (hi <= lo) hi = lo + 1;
   return [lo, hi];
