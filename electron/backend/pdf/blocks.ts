@@ -33,7 +33,7 @@ export function th(text: string): TableCell {
 /** A table with a header row; `widths` in points or '*' / 'auto'. */
 export function gridTable(header: readonly string[], rows: TableCell[][], widths: Array<number | string>, fontSize = 8): ContentTable {
   return {
-    table: { headerRows: 1, dontBreakRows: true, widths, body: [header.map(th), ...rows] },
+    table: { headerRows: 1, keepWithHeaderRows: 1, dontBreakRows: true, widths, body: [header.map(th), ...rows] },
     layout: GRID,
     fontSize,
     margin: [0, 2, 0, 6],
