@@ -40,12 +40,26 @@ export function draftWatermark(doc: DocumentInput): Watermark | undefined {
   return isDraft(doc) ? { text: 'DRAFT', color: COLOR.draft, opacity: 0.13, bold: true, fontSize: 150 } : undefined;
 }
 
-/** The caution sentence in a framed, tinted block: visible, never fine print. */
-export function cautionBlock(fontSize: number): Content {
+/**
+ * The caution sentence in a framed, tinted block: visible, never fine print. With `doc`, the rule
+ * set and its edition follow inside the same block.
+ */
+export function cautionBlock(fontSize: number, doc?: DocumentInput): Content {
   return {
+    unbreakable: true,
     table: {
       widths: ['*'],
-      body: [[{ text: RESULT_CAUTION, bold: true, fontSize, color: COLOR.ink, margin: [6, 4, 6, 4] }]],
+      body: [
+        [
+          {
+            stack: [
+              { text: RESULT_CAUTION, bold: true, fontSize, color: COLOR.ink },
+              ...(doc === undefined ? [] : [{ ...ruleSetLine(doc, fontSize - 1.5), margin: [0, 1, 0, 0] } as Content]),
+            ],
+            margin: [6, 4, 6, 4],
+          },
+        ],
+      ],
     },
     layout: {
       fillColor: () => COLOR.caution,

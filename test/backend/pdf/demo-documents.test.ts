@@ -27,6 +27,7 @@ import {
   type RenderOptions,
 } from '../../../electron/backend/pdf/index.js';
 import { collapse, decodeQr, pageTexts, pdfInfo, siValue } from './pdf-tools.js';
+import { benchDocument, tenLaserRoom } from './ten-laser-room.js';
 
 interface Rendered {
   readonly doc: DocumentInput;
@@ -290,4 +291,14 @@ describe('DRAFT mark exactly when unsigned, QR holds the fingerprint', () => {
     expect(decodeQr(r.notice, 1)).toBe(fp);
     expect(decodeQr(r.sheet, 1)).toBe(fp);
   });
+});
+
+describe('a crowded room still gets a one-page notice and sheet', () => {
+  it.each(['A4', 'Letter'] as const)('ten lasers, %s', async (paper) => {
+    const doc = benchDocument(tenLaserRoom());
+    expect(doc.content.input.lasers).toHaveLength(10);
+    const opts: RenderOptions = { paper, units: 'SI' };
+    expect(pdfInfo(await renderDoorNotice(doc, opts)).pages).toBe(1);
+    expect(pdfInfo(await renderEyewearSheet(doc, opts)).pages).toBe(1);
+  }, 60_000);
 });

@@ -5,16 +5,17 @@
  * proportions and wording are our own.
  *
  * Legibility at 3 m: the signal word, the hazard line, the class and the eyewear requirement are
- * set with capital heights of 9 mm or more (Roboto capitals are 0.71 em: 36 pt -> 9 mm), close to
- * 25 mm of letter height per 7.5 m of reading distance (common practice, from memory). The long
- * hazard line "VISIBLE AND INVISIBLE LASER RADIATION" is set smaller so it fits one line; the
- * symbol carries the same message. Details (lasers, contact, fingerprint) are read at the door.
+ * set with capital heights of 9 mm or more (Roboto capitals are 0.71 em: 36 pt -> 9 mm; the signal
+ * word, 60-72 pt, 15-18 mm), close to 25 mm of letter height per 7.5 m of reading distance (common
+ * practice, from memory). The "VISIBLE AND INVISIBLE" prefix is set smaller; the symbol carries the
+ * same message. Details (lasers, contact, fingerprint) are read at the door; crowded rooms get
+ * smaller details so the notice stays one page.
  */
 import type { Content, TableCell, TDocumentDefinitions } from 'pdfmake/interfaces';
 import { dec } from '../../../../core/numeric/decimal.js';
 import type { DocumentInput, RenderOptions } from '../document-input.js';
 import * as fmt from '../format.js';
-import { baseDocument, cautionBlock, contentWidth, fingerprintStack, ruleSetLine } from '../page.js';
+import { baseDocument, cautionBlock, contentWidth, fingerprintStack } from '../page.js';
 import { roomView, type RoomView } from '../room-view.js';
 import { precautionFor, signalWordFor, type SignalChoice } from '../signal-word.js';
 import { laserWarningSymbolSvg, safetyAlertSymbolSvg } from '../symbols/laser-warning.js';
@@ -41,9 +42,9 @@ function hazardLines(view: RoomView): string[] {
   return ['LASER RADIATION'];
 }
 
-function signalPanel(choice: SignalChoice, width: number): Content {
+function signalPanel(choice: SignalChoice, width: number, size: number): Content {
   const s = choice.style;
-  const word: Content = { text: s.word, fontSize: NOTICE_SIZES.signalWord, bold: true, color: s.text, characterSpacing: 2, lineHeight: 1 };
+  const word: Content = { text: s.word, fontSize: size, bold: true, color: s.text, characterSpacing: 2, lineHeight: 1 };
   return {
     table: {
       widths: [width - 2],
@@ -53,7 +54,7 @@ function signalPanel(choice: SignalChoice, width: number): Content {
             fillColor: s.panel,
             margin: [0, 2, 0, 0],
             columns: s.alertSymbol
-              ? [{ width: '*', text: '' }, { svg: safetyAlertSymbolSvg(68, s.text, s.panel), width: 68, margin: [0, 9, 12, 0] }, { ...word, width: 'auto' }, { width: '*', text: '' }]
+              ? [{ width: '*', text: '' }, { svg: safetyAlertSymbolSvg(size * 0.94, s.text, s.panel), width: size * 0.94, margin: [0, size * 0.125, 12, 0] }, { ...word, width: 'auto' }, { width: '*', text: '' }]
               : [{ ...word, alignment: 'center', width: '*' }],
           },
         ],
@@ -112,7 +113,7 @@ export function eyewearRows(doc: DocumentInput): TableCell[][] {
   return [...groups.values()].map((g) => [{ text: g.wl.join(', '), bold: true }, { text: g.od, bold: true }, g.scale]);
 }
 
-/** One table, or two side by side when the room needs many rows (keeps the notice on one page). */
+/** One table, or two or three side by side when the room needs many rows (keeps one page). */
 function eyewearTables(rows: TableCell[][]): Content {
   // pdfmake annotates cell objects while laying out: each table gets its own header cells.
   const header = (): TableCell[] => [{ text: 'Wavelength', bold: true }, { text: 'OD', bold: true }, { text: 'Scale numbers', bold: true }];
@@ -122,8 +123,21 @@ function eyewearTables(rows: TableCell[][]): Content {
     fontSize,
   });
   if (rows.length <= 4) return { margin: [0, 4, 0, 0], stack: [table(rows, 15)] };
-  const half = Math.ceil(rows.length / 2);
-  return { margin: [0, 4, 0, 0], columns: [table(rows.slice(0, half), 12.5), table(rows.slice(half), 12.5)], columnGap: 10 };
+  if (rows.length <= 8) {
+    const half = Math.ceil(rows.length / 2);
+    return { margin: [0, 4, 0, 0], columns: [table(rows.slice(0, half), 12.5), table(rows.slice(half), 12.5)], columnGap: 10 };
+  }
+  // Many wavelengths: one line per wavelength ("1064 nm  OD 6.3  D LB5, R LB7"), three to a row.
+  const cells: TableCell[] = rows.map((r) => ({ text: [{ text: `${cellText(r[0])}   `, bold: true }, { text: `${cellText(r[1])}   `, bold: true }, cellText(r[2])] }));
+  const body: TableCell[][] = [];
+  for (let i = 0; i < cells.length; i += 3) body.push([cells[i] ?? '', cells[i + 1] ?? '', cells[i + 2] ?? '']);
+  return { margin: [0, 4, 0, 0], table: { widths: ['*', '*', '*'], body }, layout: { ...CELL_LAYOUT, fillColor: () => null }, fontSize: 10.5 };
+}
+
+function cellText(c: TableCell | undefined): string {
+  if (typeof c === 'string') return c;
+  if (c !== undefined && typeof c === 'object' && 'text' in c && typeof c.text === 'string') return c.text;
+  return '';
 }
 
 const CELL_LAYOUT = {
@@ -143,22 +157,27 @@ export function doorNoticeDefinition(doc: DocumentInput, opts: RenderOptions): T
   const eyewear = eyewearRows(doc);
   // The lasers table is read at the door; it shrinks for crowded rooms so the notice stays one page.
   const letter = opts.paper === 'Letter'; // 50 pt shorter than A4
-  const detail = view.lasers.length <= 4 && !letter ? 10.5 : view.lasers.length <= 7 ? 9 : 7.5;
+  // A small room leaves space: the details are then set larger, to be read from further away.
+  const roomy = view.lasers.length <= 2 && eyewear.length <= 2;
+  // A crowded room: the symbol panel gives up some height so everything stays on one page.
+  const dense = view.lasers.length > 7 || eyewear.length > 8;
+  const detail = roomy ? 12.5 : view.lasers.length <= 4 && !letter ? 10.5 : view.lasers.length <= 7 ? 9 : 7.5;
+  const listSize = roomy ? 12 : view.lasers.length <= 4 && !letter ? 10.5 : 9.5;
   const officerContact = [doc.officer.phone, doc.officer.email].filter((x) => x.trim() !== '').join(' · ');
   const suitable = doc.results.eyewearCoveringAll;
 
   const content: Content[] = [
-    signalPanel(choice, width),
+    signalPanel(choice, width, dense ? 60 : NOTICE_SIZES.signalWord),
     {
       margin: [0, 8, 0, 0],
       columns: [
-        { width: letter ? 112 : 124, svg: laserWarningSymbolSvg(letter ? 112 : 124), margin: [0, 2, 0, 0] },
+        { width: dense ? 96 : letter ? 112 : 124, svg: laserWarningSymbolSvg(dense ? 96 : letter ? 112 : 124), margin: [0, 2, 0, 0] },
         {
           width: '*',
           margin: [14, 0, 0, 0],
           stack: [
             ...hazardLines(view).map((t, i, all) => ({ text: t, fontSize: all.length > 1 && i === 0 ? 22 : all.length > 1 ? 30 : NOTICE_SIZES.hazardLine, bold: true, lineHeight: 1 })),
-            { text: [{ text: `CLASS ${view.highestClass} `, fontSize: NOTICE_SIZES.classLine }, { text: 'LASER AREA', fontSize: 24 }], bold: true, margin: [0, 2, 0, 2], lineHeight: 1 },
+            { text: [{ text: `CLASS ${view.highestClass} `, fontSize: dense ? 40 : NOTICE_SIZES.classLine }, { text: 'LASER AREA', fontSize: 24 }], bold: true, margin: [0, 2, 0, 2], lineHeight: 1 },
             { text: precautionFor(view.highestClass).toUpperCase(), fontSize: 13, bold: true, lineHeight: 1.05 },
           ],
         },
@@ -178,7 +197,7 @@ export function doorNoticeDefinition(doc: DocumentInput, opts: RenderOptions): T
           ],
         }
       : { text: 'No protective eyewear is required for the beams assessed.', fontSize: 16, bold: true, margin: [0, 10, 0, 0] },
-    { text: 'Lasers in this room', bold: true, fontSize: 11.5, margin: [0, 4, 0, 1] },
+    { text: 'Lasers in this room', bold: true, fontSize: roomy ? 14 : 11.5, margin: [0, roomy ? 10 : 4, 0, 1] },
     {
       table: {
         headerRows: 1,
@@ -195,8 +214,8 @@ export function doorNoticeDefinition(doc: DocumentInput, opts: RenderOptions): T
         {
           width: '*',
           stack: [
-            { text: 'Before you enter', bold: true, fontSize: 12, margin: [0, 0, 0, 2] },
-            { ul: entryInstructions(doc, view), fontSize: view.lasers.length <= 4 && !letter ? 10.5 : 9.5, lineHeight: 1.05 },
+            { text: 'Before you enter', bold: true, fontSize: roomy ? 14 : 12, margin: [0, 0, 0, 2] },
+            { ul: entryInstructions(doc, view), fontSize: listSize, lineHeight: 1.05 },
           ],
         },
         {
@@ -210,16 +229,15 @@ export function doorNoticeDefinition(doc: DocumentInput, opts: RenderOptions): T
             { text: [{ text: 'Valid until: ', bold: true }, { text: fmt.calendarDate(doc.content.reviewBy), bold: true }], fontSize: 13, margin: [0, 3, 0, 0] },
           ],
         },
-        { width: 92, stack: [fingerprintStack(doc, 76, 8.5)] },
+        { width: 92, stack: [fingerprintStack(doc, dense ? 64 : 76, 8.5)] },
       ],
     },
-    { text: '', margin: [0, 6, 0, 0] },
-    cautionBlock(10),
-    { ...ruleSetLine(doc, 8.5), margin: [0, 3, 0, 0] },
+    { text: '', margin: [0, dense ? 3 : 6, 0, 0] },
+    cautionBlock(10, doc),
   ];
   return {
     ...baseDocument(doc, opts.paper, 'Laser hazard notice'),
-    pageMargins: [SIDE, 22, SIDE, 16],
+    pageMargins: dense ? [SIDE, 16, SIDE, 10] : [SIDE, 22, SIDE, 16],
     content,
   };
 }

@@ -75,9 +75,14 @@ export function inputsSection(doc: DocumentInput, view: RoomView, units: UnitHab
     ];
   });
   const a = c.assumptions;
-  const additive = doc.results.additive.map(
-    (g) => `${g.tissue === 'eye' ? 'Eye' : 'Skin'}, ${g.effect}: beams ${g.beamIds.join(', ')} — sum of exposure/limit fractions ${plain(roundSig(g.sumOfFractions, 3, 'up'))}${dec(g.sumOfFractions).gt(1) ? ' (over the limit combined)' : ''}. ${g.note}`,
-  );
+  // Only groups of two or more beams: a single beam is already compared with its own limit.
+  const additive = doc.results.additive
+    .filter((g) => g.beamIds.length > 1)
+    .map((g) => {
+      const effect = g.effect.toLowerCase().startsWith(g.tissue) ? g.effect : `${g.tissue}, ${g.effect}`;
+      const over = dec(g.sumOfFractions).gt(1);
+      return `${effect[0]?.toUpperCase() ?? ''}${effect.slice(1)}: beams ${g.beamIds.map((id) => beamNumber(view, id)).join(', ')} — sum of exposure/limit fractions ${plain(roundSig(g.sumOfFractions, 3, 'up'))}${over ? ' (over the limit combined)' : ''}. ${g.note}`;
+    });
   return [
     heading('Inputs and assumptions'),
     gridTable(['Beam', 'Wave-length', 'Output', 'Beam at exit (definition)', 'Exposure duration and why', 'Viewing conditions', 'Tolerances'], beamRows, [70, 36, 66, 80, 100, 100, 50], 7.2),
@@ -107,6 +112,11 @@ export function inputsSection(doc: DocumentInput, view: RoomView, units: UnitHab
     ),
     ...(additive.length > 0 ? [heading('Beams acting on the same tissue and effect (added)', 2), bullets(additive, 8.5)] : []),
   ];
+}
+
+function beamNumber(view: RoomView, beamId: string): string {
+  const i = view.beams.findIndex((b) => b.result.beamId === beamId);
+  return i < 0 ? beamId : String(i + 1);
 }
 
 /** Bounds carry full-precision OD; print them rounded up to one decimal like the core's figure. */
