@@ -126,6 +126,7 @@ export function fingerprintStack(doc: DocumentInput, qrSize: number, fontSize: n
       { text: 'Record fingerprint', bold: true, fontSize: fontSize - 1, margin: [0, 2, 0, 0] },
       { text: shortFingerprint(doc.signature.fingerprint), bold: true, fontSize },
       { text: `rev. ${doc.assessment.revisionNo}, signed ${calendarDate(doc.signature.signedAt)}`, fontSize: fontSize - 1.5, color: COLOR.muted },
+      ...(doc.assessment.status === 'superseded' ? [{ text: 'SUPERSEDED: replace this notice', bold: true, color: COLOR.draft, fontSize } as Content] : []),
     ],
   };
 }
@@ -138,7 +139,9 @@ export function headerFor(doc: DocumentInput, title: string, sideMargin: number)
       { text: [{ text: title, bold: true }, `  ·  ${where}`], fontSize: 8.5, color: COLOR.muted },
       isDraft(doc)
         ? { text: DRAFT_HEADER, bold: true, color: COLOR.draft, fontSize: 10, alignment: 'right', width: 'auto' }
-        : {
+        : doc.assessment.status === 'superseded'
+          ? { text: `SUPERSEDED — revision ${doc.assessment.revisionNo}, signed ${calendarDate(doc.signature?.signedAt)}`, bold: true, color: COLOR.draft, fontSize: 10, alignment: 'right', width: 'auto' }
+          : {
             text: `Revision ${doc.assessment.revisionNo} · signed ${calendarDate(doc.signature?.signedAt)}`,
             fontSize: 8.5,
             color: COLOR.muted,

@@ -302,3 +302,22 @@ describe('a crowded room still gets a one-page notice and sheet', () => {
     expect(pdfInfo(await renderEyewearSheet(doc, opts)).pages).toBe(1);
   }, 60_000);
 });
+
+describe('a superseded revision says so on every page', () => {
+  it('revision 1 of A0.07 after revision 2 is signed: SUPERSEDED in the report header and on the notice', async () => {
+    const r = get('A0.07');
+    const id = r.doc.assessment.id;
+    const officer = store.listPeople().find((p) => p.role === 'Laser safety officer');
+    if (!officer) throw new Error('demo officer missing');
+    const current = store.getAssessment(id).current;
+    store.saveAssessment(id, { ...current.content, notes: `${current.content.notes} Reviewed again.` });
+    store.signAssessment(id, { personId: officer.id, name: officer.name, role: officer.role, statement: 'Approved again (test).' });
+    const first = store.listRevisions(id).find((v) => v.revisionNo === 1);
+    if (!first) throw new Error('revision 1 missing');
+    const doc = documentInputFromAssessment(store, id, { revisionId: first.id });
+    expect(doc.assessment.status).toBe('superseded');
+    const report = pageTexts(await renderReport(doc, A4_SI));
+    report.forEach((p, i) => expect(p.includes('SUPERSEDED'), `report page ${i + 1}`).toBe(true));
+    expect(pageTexts(await renderDoorNotice(doc, A4_SI))[0]).toContain('SUPERSEDED');
+  }, 120_000);
+});
