@@ -79,7 +79,7 @@ export function beamSummary(doc: DocumentInput, view: RoomView, units: UnitHabit
   const rows: TableCell[][] = view.beams.map((b, i) => {
     const f = beamFigures(b.result, units);
     return [
-      { text: [{ text: `${i + 1}. ${b.result.label}`, bold: true }, b.laser ? `\n${b.laser.name}` : ''] },
+      { text: `${i + 1}. ${b.result.label}`, bold: true },
       f.wavelength,
       b.result.emissionSummary,
       { text: [{ text: f.limit, bold: true }, `\n${f.governing}`] },

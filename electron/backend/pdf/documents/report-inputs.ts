@@ -83,8 +83,18 @@ export function inputsSection(doc: DocumentInput, view: RoomView, units: UnitHab
       const over = dec(g.sumOfFractions).gt(1);
       return `${effect[0]?.toUpperCase() ?? ''}${effect.slice(1)}: beams ${g.beamIds.map((id) => beamNumber(view, id)).join(', ')} — sum of exposure/limit fractions ${plain(roundSig(g.sumOfFractions, 3, 'up'))}${over ? ' (over the limit combined)' : ''}. ${g.note}`;
     });
+  const inventoryRows: TableCell[][] = view.lasers.map((l) => {
+    const i = l.installation;
+    const makerModel = i ? [i.maker, i.model].filter((x) => x.trim() !== '').join(' ') : '';
+    const ids = i ? [i.serialNumber && `serial ${i.serialNumber}`, i.registrationNumber && `reg. ${i.registrationNumber}`].filter((x) => x).join(', ') : '';
+    const beamNos = l.beams.map((b) => view.beams.indexOf(b) + 1).join(', ');
+    return [{ text: l.type, bold: true }, makerModel || '–', ids || '–', l.classAsLabelled === null ? 'not labelled' : `Class ${l.classAsLabelled}`, beamNos];
+  });
   return [
     heading('Inputs and assumptions'),
+    heading('Lasers (inventory)', 2),
+    gridTable(['Laser type', 'Maker and model', 'Serial / registration', 'Class as labelled', 'Beams'], inventoryRows, ['*', 110, 110, 60, 50], 8),
+    heading('Beams', 2),
     gridTable(['Beam', 'Wave-length', 'Output', 'Beam at exit (definition)', 'Exposure duration and why', 'Viewing conditions', 'Tolerances'], beamRows, [70, 36, 66, 80, 100, 100, 50], 7.2),
     heading('Rule set and conservative mode', 2),
     paragraph([{ text: 'Rule set: ', bold: true }, doc.results.ruleSetName]),
