@@ -69,7 +69,13 @@ export function eyewearVerdict(need: BeamNeed, ew: EyewearSpec): EyewearVerdict 
     const marked = markedScale(ew, need.wavelength_nm, s.mode);
     const tag = s.mode === 'RB' ? 'RB' : 'LB';
     if (marked === null) {
-      scaleChecks.push(`${s.mode}: needs ${tag}${s.scale}; not marked for ${need.wavelength_nm} nm`);
+      // EN 208 (RB) rates alignment filters, which let part of a visible beam through on purpose;
+      // full-protection eyewear without an RB marking is not short of anything, so this is a note.
+      scaleChecks.push(
+        s.mode === 'RB'
+          ? `RB: no EN 208 alignment rating (RB${s.scale} would be needed only to use it as alignment eyewear)`
+          : `${s.mode}: needs ${tag}${s.scale}; not marked for ${need.wavelength_nm} nm`,
+      );
       continue;
     }
     const ok = marked >= s.scale;
