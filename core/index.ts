@@ -12,6 +12,7 @@ export * from './limits/pulse-rules.js';
 export * from './limits/additive.js';
 export * from './model/results.js';
 export { evaluateBeam } from './beam/evaluate-beam.js';
+export { limitAgainstDuration, exposureAlongBeam, type LimitPoint, type BeamCurveQuery, type ExposureAlongBeam } from './beam/curves.js';
 export { evaluateRoom } from './room/evaluate-room.js';
 export { clearCoreCaches } from './caches.js';
 export { opticalDensity } from './eyewear/od.js';

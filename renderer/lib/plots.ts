@@ -6,29 +6,27 @@
  *  2. the direct beam's exposure at the eye against distance (core beam model and exposure
  *     function, averaged over the governing criterion's aperture), with the limit and the NOHD.
  */
-import { Dec, DURATION_RANGE_S, defaultExposureDuration, exposureLimit, type BeamInput, type LimitSettings, type RuleSetId } from '../../core/index.js';
-import type { BeamResult } from '../../core/model/results.js';
-import { beamModel, exposureAt, spreadOf } from '../../core/beam/beam-model.js';
-import { eyeLimitsOf } from '../../core/beam/core-numbers.js';
+import {
+  DURATION_RANGE_S,
+  defaultExposureDuration,
+  exposureAlongBeam,
+  limitAgainstDuration,
+  type BeamInput,
+  type BeamResult,
+  type LimitSettings,
+  type RuleSetId,
+} from '../../core/index.js';
 
 export type Points = ReadonlyArray<readonly [number, number]>;
 
 const curveCache = new Map<string, Points>();
 
 function hAt(ruleSet: RuleSetId, wl: number, t: number, alpha: number | undefined, settings: LimitSettings | undefined): number | null {
-  try {
-    const r = exposureLimit({
-      ruleSet,
-      tissue: 'eye',
-      wavelength_nm: wl,
-      duration_s: t,
-      ...(alpha === undefined ? {} : { sourceAngle_rad: alpha }),
-      ...(settings === undefined ? {} : { settings }),
-    });
-    return Number(r.H_Jm2);
-  } catch {
-    return null; // outside the tables: no point
-  }
+  const [p] = limitAgainstDuration(
+    { ruleSet, tissue: 'eye', wavelength_nm: wl, ...(alpha === undefined ? {} : { sourceAngle_rad: alpha }), ...(settings === undefined ? {} : { settings }) },
+    [t],
+  );
+  return p === undefined || p.H_Jm2 === null ? null : Number(p.H_Jm2); // null: outside the tables, no point
 }
 
 /** H(t) sampled per half decade and refined where the log-log curve bends (table breakpoints). */
@@ -93,33 +91,12 @@ export interface DistancePlotData {
 
 /** Exposure of the direct beam against distance for the criterion that sets the NOHD. */
 export function distancePlot(beam: BeamResult, input: BeamInput, settings: LimitSettings | undefined): DistancePlotData | null {
-  let eye;
-  try {
-    eye = eyeLimitsOf(input, beam.ruleSet, input.settings ?? settings);
-  } catch {
-    return null;
-  }
-  const spread = spreadOf(beamModel(input.beam));
-  const mu = input.viewing?.attenuation_per_m ? new Dec(input.viewing.attenuation_per_m) : undefined;
-  const nohd = new Dec(beam.nohd_m);
-  let gov = eye.criteria[0];
-  let best = new Dec(-1);
-  for (const c of eye.criteria) {
-    const ratio = exposureAt(eye.S, spread, c.aperture_m, nohd, mu).div(c.L);
-    if (ratio.gt(best)) {
-      best = ratio;
-      gov = c;
-    }
-  }
-  if (!gov) return null;
-  const crit = gov;
   const n = Number(beam.nohd_m_reported);
   const rMax = n > 0 ? Math.max(n * 10, 1) : 100;
   const rMin = n > 0 ? Math.min(n / 100, 0.01) : 0.01;
-  const curve: Array<readonly [number, number]> = [];
-  for (let i = 0; i <= 40; i++) {
-    const r = rMin * (rMax / rMin) ** (i / 40);
-    curve.push([r, exposureAt(eye.S, spread, crit.aperture_m, new Dec(r), mu).toNumber()] as const);
-  }
-  return { curve, limit: crit.L.toNumber(), quantity: eye.quantity, apertureMm: crit.aperture_m.mul(1000).toString(), nohd: n };
+  const distances: number[] = [];
+  for (let i = 0; i <= 40; i++) distances.push(rMin * (rMax / rMin) ** (i / 40));
+  const along = exposureAlongBeam({ input, ruleSet: beam.ruleSet, settings, nohd_m: beam.nohd_m }, distances);
+  if (along === null) return null;
+  return { curve: along.points, limit: Number(along.limit), quantity: along.quantity, apertureMm: along.aperture_mm, nohd: n };
 }

@@ -4,12 +4,17 @@
  * (the exposure duration assessed and the limit there) and, for a pulsed beam, the per-pulse limit
  * that governs after the pulse rules.
  */
-import { exposureLimit } from '../../../../core/limits/exposure-limit.js';
-import { DURATION_RANGE_S, ruleSetTable } from '../../../../core/limits/rule-sets.js';
-import type { BeamInput, LimitSettings, RuleSetId } from '../../../../core/model/inputs.js';
-import type { BeamResult } from '../../../../core/model/results.js';
-import type { UnitHabit } from '../../../../core/units/quantities.js';
-import { dec } from '../../../../core/numeric/decimal.js';
+import {
+  DURATION_RANGE_S,
+  dec,
+  limitAgainstDuration,
+  ruleSetTable,
+  type BeamInput,
+  type BeamResult,
+  type LimitSettings,
+  type RuleSetId,
+  type UnitHabit,
+} from '../../../../core/index.js';
 import { limitH, duration } from '../format.js';
 import { logPlotSvg } from './log-plot.js';
 
@@ -21,12 +26,11 @@ function hScale(units: UnitHabit): { factor: number; unit: string } {
 }
 
 function limitAt(ruleSet: RuleSetId, wavelength_nm: number, t: number, sourceAngle_rad: number | undefined, settings: LimitSettings | undefined): string | null {
-  try {
-    const r = exposureLimit({ ruleSet, tissue: 'eye', wavelength_nm, duration_s: t, ...(sourceAngle_rad === undefined ? {} : { sourceAngle_rad }), ...(settings === undefined ? {} : { settings }) });
-    return r.H_Jm2;
-  } catch {
-    return null; // outside the rule set's range: the curve simply has no point there
-  }
+  return limitsAt(ruleSet, wavelength_nm, [t], sourceAngle_rad, settings)[0]?.H_Jm2 ?? null;
+}
+
+function limitsAt(ruleSet: RuleSetId, wavelength_nm: number, ts: readonly number[], sourceAngle_rad: number | undefined, settings: LimitSettings | undefined) {
+  return limitAgainstDuration({ ruleSet, tissue: 'eye', wavelength_nm, ...(sourceAngle_rad === undefined ? {} : { sourceAngle_rad }), ...(settings === undefined ? {} : { settings }) }, ts);
 }
 
 /**
@@ -69,10 +73,8 @@ export function limitCurve(ruleSet: RuleSetId, wavelength_nm: number, sourceAngl
     ts.push(b * (1 - 1e-9));
   }
   const curve: Array<readonly [number, number]> = [];
-  for (const t of ts) {
-    const h = limitAt(ruleSet, wavelength_nm, t, sourceAngle_rad, settings);
-    if (h !== null) curve.push([t, Number(h)] as const);
-  }
+  // Outside the rule set's range the curve simply has no point.
+  for (const p of limitsAt(ruleSet, wavelength_nm, ts, sourceAngle_rad, settings)) if (p.H_Jm2 !== null) curve.push([p.t_s, Number(p.H_Jm2)] as const);
   cache?.set(key, curve);
   return curve;
 }

@@ -1,0 +1,62 @@
+// The public plot curves of the core (core/beam/curves.ts), drawn on screen and in the report.
+// Each case names its source; the curves must agree with the numbers the core reports beside them.
+import { describe, expect, it } from 'vitest';
+import { DURATION_RANGE_S, evaluateBeam, exposureAlongBeam, exposureLimit, limitAgainstDuration, type BeamInput } from '../../core/index.js';
+import vectors from '../fixtures/limit-test-vectors.json' with { type: 'json' };
+
+// Domain notes illustration 1.2.5: 532 nm, 1 W CW, 1 mm, 1 mrad (1/e), 0.25 s: NOHD 222.6 m where
+// the 7 mm-averaged irradiance falls to the 0.25 s limit 25.456 W/m² (limit specification section 9:
+// 25.46 W/m² at 633 nm 0.25 s, the same visible row).
+const base: BeamInput = { wavelength_nm: 532, emission: { kind: 'cw', power_W: 1 }, beam: { diameter_m: 0.001, divergence_rad: 0.001, definition: '1/e' } };
+const result = evaluateBeam(base);
+
+describe('exposureAlongBeam (domain notes 1.2: range equation averaged over the limiting aperture)', () => {
+  const along = exposureAlongBeam({ input: base, ruleSet: result.ruleSet, nohd_m: result.nohd_m }, [0, 222.6, Number(result.nohd_m)]);
+  it.each([
+    ['limit of the criterion drawn is the 0.25 s limit 25.456 W/m² (domain notes 1.2.5; spec section 9)', () => Number(along?.limit), 25.456, 0.0005],
+    ['exposure at the NOHD 222.6 m equals the limit (domain notes 1.2.5)', () => along?.points[1]?.[1] ?? 0, 25.456, 0.001],
+    ['exposure at the core NOHD equals the curve limit (self-consistency: the curve crosses at the NOHD)', () => (along?.points[2]?.[1] ?? 0) / Number(along?.limit), 1, 1e-9],
+    ['at the exit a 1 mm beam is spread over the 7 mm aperture: 4 W/(pi*(7 mm)^2) = 25984 W/m² (domain notes 1.2.2, derived)', () => along?.points[0]?.[1] ?? 0, 25984, 0.0005],
+    ['limiting aperture 7 mm for the visible eye limit (spec apertures table; common practice)', () => Number(along?.aperture_mm), 7, 0],
+  ] as const)('%s', (_name, f, expected, rel) => {
+    const got = f();
+    expect(Math.abs(got / expected - 1)).toBeLessThanOrEqual(rel);
+  });
+  it('gives E for a CW beam and keeps the distances in order (CW: irradiance criterion, domain notes 1.2)', () => {
+    expect(along?.quantity).toBe('E');
+    expect(along?.points.map((p) => p[0])).toEqual([0, 222.6, Number(result.nohd_m)]);
+  });
+});
+
+interface Vector {
+  rule_set: string;
+  mode: 'as_published' | 'as_remembered' | 'conservative';
+  organ: 'eye' | 'skin';
+  lambda_nm: number;
+  t_s: number;
+  alpha_mrad: number;
+  expected_H_J_m2: number;
+}
+const eyeCases = (vectors as { cases: Vector[] }).cases.filter((c) => c.organ === 'eye');
+
+describe('limitAgainstDuration matches exposureLimit at the limit specification section 9 vectors', () => {
+  it.each(eyeCases)('$rule_set $mode $lambda_nm nm $t_s s alpha $alpha_mrad mrad', (c) => {
+    const q = {
+      ruleSet: c.rule_set.startsWith('EU') ? ('eu2006' as const) : ('icnirp2013' as const),
+      tissue: 'eye' as const,
+      wavelength_nm: c.lambda_nm,
+      sourceAngle_rad: c.alpha_mrad / 1000,
+      settings: { conservative: c.mode !== 'as_remembered' },
+    };
+    const [p] = limitAgainstDuration(q, [c.t_s]);
+    expect(p?.t_s).toBe(c.t_s);
+    expect(p?.H_Jm2).toBe(exposureLimit({ ...q, duration_s: c.t_s }).H_Jm2);
+    expect(Number(p?.H_Jm2) / c.expected_H_J_m2).toBeCloseTo(1, 3);
+  });
+
+  it('a duration beyond the rule set range gives no point instead of an error (spec section 3 duration range)', () => {
+    const pts = limitAgainstDuration({ ruleSet: result.ruleSet, tissue: 'eye', wavelength_nm: 532 }, [0.25, DURATION_RANGE_S[1] * 10]);
+    expect(Number(pts[0]?.H_Jm2) / 0.25).toBeCloseTo(25.456, 2);
+    expect(pts[1]).toEqual({ t_s: DURATION_RANGE_S[1] * 10, H_Jm2: null });
+  });
+});
