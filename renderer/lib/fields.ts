@@ -4,7 +4,7 @@
  * officer would type. A field that does not parse keeps its last good value (the evaluation does
  * not change) and shows the error beside the field.
  */
-import { InputError, formatSI, parseQuantity, type Dimension } from '../../core/index.js';
+import { InputError, SI_UNIT, formatSI, parseQuantity, type Dimension } from '../../core/index.js';
 
 export interface FieldSpec {
   /** Field name used in error messages (and matched against core InputError fields). */
@@ -37,19 +37,6 @@ export interface ParseOutcome {
   readonly value: number | undefined;
   readonly error: string | null;
 }
-
-const SI_BASE: Readonly<Record<Dimension, string>> = {
-  power: 'W',
-  energy: 'J',
-  length: 'm',
-  wavelength: 'm',
-  time: 's',
-  frequency: 'Hz',
-  angle: 'rad',
-  irradiance: 'W/m²',
-  radiantExposure: 'J/m²',
-  ratio: '',
-};
 
 function rangeText(spec: FieldSpec): string {
   const f = (v: number): string => formatField(spec, v);
@@ -112,7 +99,7 @@ export function formatField(spec: FieldSpec, v: number): string {
       return num(v);
     case 'prefix':
       // formatSI with 12 significant digits only picks the prefix; it does not round an input.
-      return formatSI(String(v), SI_BASE[spec.dimension], 12, 'up');
+      return formatSI(String(v), SI_UNIT[spec.dimension], 12, 'up');
   }
 }
 

@@ -17,6 +17,7 @@ import { diffValues } from './diff.js';
 import { getInstallation, getPerson, getRoom, roomInputFromRegister } from './register.js';
 import { fingerprintOf, keyIdOf, sha256Hex, signStatement, verifyStatement, type SignedStatement } from './signing.js';
 import {
+  NON_BEAM_HAZARD_KINDS,
   RecordError,
   type Assessment,
   type AssessmentContent,
@@ -24,7 +25,6 @@ import {
   type CalendarDate,
   type FieldDifference,
   type Id,
-  type NonBeamHazardKind,
   type Revision,
   type RevisionStatus,
   type RevisionSummary,
@@ -174,21 +174,6 @@ function storedResults(z: Buffer): RoomResult {
 
 // ---------------------------------------------------------------- content
 
-const NON_BEAM_KINDS: readonly NonBeamHazardKind[] = [
-  'electrical',
-  'x-rays',
-  'collateral-optical',
-  'air-contaminants',
-  'biological',
-  'dyes-solvents',
-  'gases',
-  'cryogens',
-  'fire-explosion',
-  'photosensitisation',
-  'glare',
-  'other',
-];
-
 function addOneYear(isoTimestamp: string): CalendarDate {
   const d = new Date(isoTimestamp);
   d.setUTCFullYear(d.getUTCFullYear() + 1);
@@ -217,7 +202,7 @@ export function newAssessmentContent(ctx: StoreContext, roomId: Id, installation
     operatingStates: ['normal', 'alignment', 'maintenance'],
     assumptions: { exposureDurations: [], personsPresent: 'Authorised laser users only', opticalAidsPossible: false, other: [] },
     controls: [],
-    nonBeamHazards: NON_BEAM_KINDS.map((kind) => ({ kind, present: false, note: '', controls: [] })),
+    nonBeamHazards: NON_BEAM_HAZARD_KINDS.map((kind) => ({ kind, present: false, note: '', controls: [] })),
     eyewearChosen: [],
     notes: '',
     reviewBy: addOneYear(ctx.now()),

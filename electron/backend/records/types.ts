@@ -122,20 +122,25 @@ export interface ControlChoice {
   readonly due?: CalendarDate;
 }
 
-/** Non-beam hazards (domain reference section 7). */
-export type NonBeamHazardKind =
-  | 'electrical'
-  | 'x-rays'
-  | 'collateral-optical'
-  | 'air-contaminants'
-  | 'biological'
-  | 'dyes-solvents'
-  | 'gases'
-  | 'cryogens'
-  | 'fire-explosion'
-  | 'photosensitisation'
-  | 'glare'
-  | 'other';
+/**
+ * Non-beam hazards (domain reference section 7), in the order a new assessment lists them. The one
+ * list behind the type, the zod schema and the skeleton of a new assessment.
+ */
+export const NON_BEAM_HAZARD_KINDS = [
+  'electrical',
+  'x-rays',
+  'collateral-optical',
+  'air-contaminants',
+  'biological',
+  'dyes-solvents',
+  'gases',
+  'cryogens',
+  'fire-explosion',
+  'photosensitisation',
+  'glare',
+  'other',
+] as const;
+export type NonBeamHazardKind = (typeof NON_BEAM_HAZARD_KINDS)[number];
 
 export interface NonBeamHazard {
   readonly kind: NonBeamHazardKind;

@@ -21,6 +21,7 @@ import type {
   Site,
   SiteDraft,
 } from '../records/types.js';
+import { NON_BEAM_HAZARD_KINDS } from '../records/types.js';
 import { EyewearSpecSchema, LaserClassSchema, LaserInputSchema, RoomInputSchema } from './inputs.js';
 import { RoomResultSchema } from './results.js';
 import { assertType, type SameShape } from './type-equality.js';
@@ -159,20 +160,7 @@ export const ControlChoiceSchema = z
     path: ['reason'],
   });
 
-export const NonBeamHazardKindSchema = z.enum([
-  'electrical',
-  'x-rays',
-  'collateral-optical',
-  'air-contaminants',
-  'biological',
-  'dyes-solvents',
-  'gases',
-  'cryogens',
-  'fire-explosion',
-  'photosensitisation',
-  'glare',
-  'other',
-]);
+export const NonBeamHazardKindSchema = z.enum(NON_BEAM_HAZARD_KINDS);
 export const NonBeamHazardSchema = z.strictObject({
   kind: NonBeamHazardKindSchema,
   present: z.boolean(),
