@@ -5,7 +5,7 @@
  * criteria (domain notes 1.2.3, 2.1 item 4), and the result names the criterion that governs.
  */
 import { Dec } from '../numeric/decimal.js';
-import type { LimitSettings, RuleSetId, Tissue } from '../model/inputs.js';
+import type { Emission, LimitSettings, RuleSetId, Tissue } from '../model/inputs.js';
 import type { LimitSummary, PulseRule } from '../model/results.js';
 import type { ExposureLimitResult } from '../limits/exposure-limit.js';
 import type { PulsedLimitResult } from '../limits/pulse-rules.js';
@@ -54,9 +54,7 @@ export interface TissueQuery {
   readonly ruleSet: RuleSetId;
   readonly tissue: Tissue;
   readonly wavelength_nm: number;
-  readonly emission:
-    | { readonly kind: 'cw'; readonly power_W: number }
-    | { readonly kind: 'pulsed'; readonly pulseEnergy_J: number; readonly pulseDuration_s: number; readonly repetitionRate_Hz?: number };
+  readonly emission: Emission;
   readonly exposureDuration_s: number;
   readonly durationWhy: string;
   readonly sourceAngle_rad?: number;

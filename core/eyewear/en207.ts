@@ -26,6 +26,7 @@ import { Dec, PI } from '../numeric/decimal.js';
 import type { En207Mode, ScaleNumberRequirement } from '../model/results.js';
 import { displayLog10, fmt, fourthRoot, rec, tenTo } from '../beam/format.js';
 import type { BeamModel } from '../beam/beam-model.js';
+import type { Emission } from '../model/inputs.js';
 
 export type En207Band = '180-315' | '315-1400' | '1400-1e6';
 
@@ -91,9 +92,7 @@ export interface En207Input {
   readonly model: BeamModel;
   /** Position of the eyewear (worst reachable), m. */
   readonly position_m: number;
-  readonly emission:
-    | { readonly kind: 'cw'; readonly power_W: number }
-    | { readonly kind: 'pulsed'; readonly pulseEnergy_J: number; readonly pulseDuration_s: number; readonly repetitionRate_Hz?: number };
+  readonly emission: Emission;
   /** False when the exposure never exceeds the limit: no filter needed (scale 0). */
   readonly needed: boolean;
   readonly conservative: boolean;

@@ -13,6 +13,7 @@
 import { Dec } from '../numeric/decimal.js';
 import type { ScaleNumberRequirement } from '../model/results.js';
 import type { BeamModel } from '../beam/beam-model.js';
+import type { Emission } from '../model/inputs.js';
 import { fmt, fourthRoot, rec, tenTo } from '../beam/format.js';
 import { scaleFor } from './en207.js';
 
@@ -41,9 +42,7 @@ export interface En208Input {
   readonly wavelength_nm: number;
   readonly model: BeamModel;
   readonly position_m: number;
-  readonly emission:
-    | { readonly kind: 'cw'; readonly power_W: number }
-    | { readonly kind: 'pulsed'; readonly pulseEnergy_J: number; readonly pulseDuration_s: number; readonly repetitionRate_Hz?: number };
+  readonly emission: Emission;
 }
 
 /** RB requirement for a visible beam; null outside 400-700 nm. */

@@ -2,7 +2,7 @@
 // Each case names its source; the curves must agree with the numbers the core reports beside them.
 import { describe, expect, it } from 'vitest';
 import { DURATION_RANGE_S, evaluateBeam, exposureAlongBeam, exposureLimit, limitAgainstDuration, type BeamInput } from '../../core/index.js';
-import vectors from '../fixtures/limit-test-vectors.json' with { type: 'json' };
+import { limitVectors, queryOf } from './limit-vectors.js';
 
 // Domain notes illustration 1.2.5: 532 nm, 1 W CW, 1 mm, 1 mrad (1/e), 0.25 s: NOHD 222.6 m where
 // the 7 mm-averaged irradiance falls to the 0.25 s limit 25.456 W/m² (limit specification section 9:
@@ -28,29 +28,14 @@ describe('exposureAlongBeam (domain notes 1.2: range equation averaged over the 
   });
 });
 
-interface Vector {
-  rule_set: string;
-  mode: 'as_published' | 'as_remembered' | 'conservative';
-  organ: 'eye' | 'skin';
-  lambda_nm: number;
-  t_s: number;
-  alpha_mrad: number;
-  expected_H_J_m2: number;
-}
-const eyeCases = (vectors as { cases: Vector[] }).cases.filter((c) => c.organ === 'eye');
+const eyeCases = limitVectors.filter((c) => c.organ === 'eye');
 
 describe('limitAgainstDuration matches exposureLimit at the limit specification section 9 vectors', () => {
   it.each(eyeCases)('$rule_set $mode $lambda_nm nm $t_s s alpha $alpha_mrad mrad', (c) => {
-    const q = {
-      ruleSet: c.rule_set.startsWith('EU') ? ('eu2006' as const) : ('icnirp2013' as const),
-      tissue: 'eye' as const,
-      wavelength_nm: c.lambda_nm,
-      sourceAngle_rad: c.alpha_mrad / 1000,
-      settings: { conservative: c.mode !== 'as_remembered' },
-    };
+    const { duration_s, ...q } = queryOf(c);
     const [p] = limitAgainstDuration(q, [c.t_s]);
-    expect(p?.t_s).toBe(c.t_s);
-    expect(p?.H_Jm2).toBe(exposureLimit({ ...q, duration_s: c.t_s }).H_Jm2);
+    expect(p?.t_s).toBe(duration_s);
+    expect(p?.H_Jm2).toBe(exposureLimit({ ...q, duration_s }).H_Jm2);
     expect(Number(p?.H_Jm2) / c.expected_H_J_m2).toBeCloseTo(1, 3);
   });
 

@@ -93,23 +93,26 @@ function getSignatureRow(ctx: StoreContext, revisionId: Id): SignatureRow | unde
   return ctx.sql(SIGNATURE_SELECT).get(revisionId) as SignatureRow | undefined;
 }
 
-function revisionFromRow(ctx: StoreContext, r: RevisionRow): Revision {
-  const content = parseOrThrow(AssessmentContentSchema, JSON.parse(r.content_json), `Stored content of revision ${r.revision_no}`);
-  const results = storedResults(r.results_z);
+/** What a revision and its history-list summary share: the row's fields and its signature. */
+function revisionHeaderFromRow(ctx: StoreContext, r: RevisionRow): Omit<Revision, 'content' | 'results'> {
   const sig = getSignatureRow(ctx, r.id);
   return {
     id: r.id,
     assessmentId: r.assessment_id,
     revisionNo: r.revision_no,
     status: r.status,
-    content,
-    results,
     calculatedWith: r.calculated_with,
     basedOn: r.based_on,
     createdAt: r.created_at,
     updatedAt: r.updated_at,
     signature: sig ? signatureFromRow(sig) : null,
   };
+}
+
+function revisionFromRow(ctx: StoreContext, r: RevisionRow): Revision {
+  const content = parseOrThrow(AssessmentContentSchema, JSON.parse(r.content_json), `Stored content of revision ${r.revision_no}`);
+  const results = storedResults(r.results_z);
+  return { ...revisionHeaderFromRow(ctx, r), content, results };
 }
 
 function getAssessmentRow(ctx: StoreContext, id: Id): AssessmentRow {
@@ -320,22 +323,8 @@ export function listDueForReview(ctx: StoreContext, date: CalendarDate): Assessm
 export function listRevisions(ctx: StoreContext, assessmentId: Id): RevisionSummary[] {
   getAssessmentRow(ctx, assessmentId);
   const rows = ctx.sql('SELECT * FROM revision WHERE assessment_id = ? ORDER BY revision_no').all(assessmentId) as RevisionRow[];
-  return rows.map((r) => {
-    const sig = getSignatureRow(ctx, r.id);
-    return {
-      id: r.id,
-      assessmentId: r.assessment_id,
-      revisionNo: r.revision_no,
-      status: r.status,
-      calculatedWith: r.calculated_with,
-      basedOn: r.based_on,
-      createdAt: r.created_at,
-      updatedAt: r.updated_at,
-      signature: sig ? signatureFromRow(sig) : null,
-      title: r.title,
-      reviewBy: r.review_by,
-    };
-  });
+  // Content and results stay encoded: a history list needs neither.
+  return rows.map((r) => ({ ...revisionHeaderFromRow(ctx, r), title: r.title, reviewBy: r.review_by }));
 }
 
 export function compareRevisions(ctx: StoreContext, fromId: Id, toId: Id): FieldDifference[] {
