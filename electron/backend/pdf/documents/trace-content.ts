@@ -12,6 +12,9 @@
  *    the beam's derivation, instead of repeating the same long citation on every line;
  *  - the rule-set name, stated at the head of the appendix, is left out of the sub-titles.
  * Each sub-derivation is one text block (not one block per line): pdfmake lays out far fewer nodes.
+ * Within the block, text is handed to pdfmake in short unbreakable pieces of a few words (see
+ * `pieces`): pdfmake measures and draws every inline separately and would otherwise make one inline
+ * per word; lines still break between the pieces, so nothing runs past the margin.
  */
 import type { Content } from 'pdfmake/interfaces';
 import type { Trace, TraceKind, TraceStep } from '../../../../core/trace/trace.js';
@@ -30,19 +33,51 @@ const KIND_STYLE: Readonly<Record<TraceKind, { tag: string; color: string; bold?
   note: { tag: 'note', color: COLOR.muted },
 };
 
-type Run = { text: string; bold?: boolean; color?: string; fontSize?: number };
+type Run = { text: string; bold?: boolean; color?: string; fontSize?: number; noWrap?: boolean };
+
+/**
+ * About 40 characters at the appendix sizes (6.3-7.2 pt, about 170 pt bold) is well under half the narrowest text
+ * column (A4 or Letter, deepest indent), so a line never has to break inside a piece.
+ */
+const PIECE_CHARS = 40;
+/** A single word longer than this (a long formula without spaces) is left to pdfmake to break. */
+const LONG_WORD = 60;
+
+/** `text` cut at spaces into pieces of about PIECE_CHARS characters, each kept whole on its line. */
+function pieces(text: string, style: Omit<Run, 'text'>): Run[] {
+  const words = text.match(/[^ \n]*(?: +|\n|$)/g) ?? [text];
+  const out: Run[] = [];
+  let cur = '';
+  const flush = (): void => {
+    if (cur !== '') out.push({ text: cur, ...style, ...(cur.length <= LONG_WORD && !cur.includes('\n') ? { noWrap: true } : {}) });
+    cur = '';
+  };
+  for (const w of words) {
+    if (w === '') continue;
+    if (w.includes('\n') || w.length > LONG_WORD) {
+      flush();
+      cur = w;
+      flush();
+      continue;
+    }
+    if (cur.length + w.length > PIECE_CHARS) flush();
+    cur += w;
+  }
+  flush();
+  return out;
+}
 
 function stepRuns(s: TraceStep, ref: string | null): Run[] {
   const k = KIND_STYLE[s.kind];
   const runs: Run[] = [
-    { text: `${k.tag}  `, color: k.color, bold: true, fontSize: 6.3 },
-    { text: `${s.label}: `, bold: true },
-    { text: s.detail, ...(k.bold ? { bold: true } : {}), ...(s.kind === 'warning' ? { color: COLOR.bad } : {}) },
+    { text: `${k.tag}  `, color: k.color, bold: true, fontSize: 6.3, noWrap: true },
+    ...pieces(`${s.label}: `, { bold: true }),
+    ...pieces(s.detail, { ...(k.bold ? { bold: true } : {}), ...(s.kind === 'warning' ? { color: COLOR.bad } : {}) }),
   ];
   // "Wavelength: 800 nm = 800 nm": the value is not repeated when the detail already says it.
   const valueText = s.value === undefined ? '' : `${s.value}${s.unit ? ' ' + s.unit : ''}`;
-  if (valueText !== '' && !s.detail.endsWith(valueText)) runs.push({ text: ` = ${valueText}`, bold: true });
-  if (ref !== null) runs.push({ text: `  ${ref}`, color: COLOR.muted, fontSize: 6.6 });
+  if (valueText !== '' && !s.detail.endsWith(valueText)) runs.push(...pieces(` = ${valueText}`, { bold: true }));
+  if (ref !== null) runs.push({ text: `  ${ref}`, color: COLOR.muted, fontSize: 6.6, noWrap: true });
   return runs;
 }
 
