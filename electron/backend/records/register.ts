@@ -221,7 +221,7 @@ function installationParams(i: LaserInstallation) {
 }
 
 export function listInstallations(ctx: StoreContext, roomId: Id): LaserInstallation[] {
-  return (ctx.sql('SELECT * FROM laser_installation WHERE room_id = ? ORDER BY created_at, id').all(roomId) as InstallationRow[]).map(
+  return (ctx.sql('SELECT * FROM laser_installation WHERE room_id = ? ORDER BY created_at, rowid').all(roomId) as InstallationRow[]).map(
     installationFromRow,
   );
 }
