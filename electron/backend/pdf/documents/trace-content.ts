@@ -101,7 +101,7 @@ export class TracePrinter {
     this.walk(trace, prefix, 0, seenSteps, out);
     if (this.sources.size > 0) {
       const runs: Run[] = [{ text: 'Sources and confidence: ', bold: true }];
-      for (const [tag, ref] of this.sources) runs.push({ text: `${ref} ` , bold: true }, { text: `${tag}.  ` });
+      for (const [tag, ref] of this.sources) runs.push({ text: `${ref} `, bold: true, noWrap: true }, ...pieces(`${tag}.  `, {}));
       out.push({ text: runs, fontSize: 6.6, color: COLOR.muted, margin: [4, 3, 0, 2] });
     }
     return out;
@@ -150,7 +150,7 @@ export class TracePrinter {
     }
     if (repeated > 0) {
       if (runs.length > 0) runs.push({ text: '\n' });
-      runs.push({ text: `(${repeated} step${repeated === 1 ? '' : 's'} identical to ones printed above for this beam, not repeated)`, color: COLOR.muted, fontSize: 6.6 });
+      runs.push(...pieces(`(${repeated} step${repeated === 1 ? '' : 's'} identical to ones printed above for this beam, not repeated)`, { color: COLOR.muted, fontSize: 6.6 }));
     }
     if (runs.length > 0) out.push({ text: runs, fontSize: 7.2, margin: [indent + 4, 0, 0, 1] });
     trace.children.forEach((c, i) => this.walk(c, `${number}.${i + 1}`, depth + 1, seen, out));
