@@ -102,7 +102,8 @@ export function beamSummary(doc: DocumentInput, view: RoomView, units: UnitHabit
     gridTable(
       ['Beam', 'Wave-length', 'Emission', 'Eye limit (governing rule)', 'NOHD', 'Diffuse', 'Skin', 'OD', 'Scale numbers', 'Class est./ label'],
       rows,
-      [78, 34, 62, 108, 32, 32, 30, 30, 48, 30],
+      // The limit column takes what is left: fixed widths plus cell padding must stay inside the margins on A4.
+      [72, 32, 60, '*', 32, 32, 30, 30, 46, 30],
       7.2,
     ),
     ...(warnings.length === 0

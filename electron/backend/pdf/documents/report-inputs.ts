@@ -95,7 +95,7 @@ export function inputsSection(doc: DocumentInput, view: RoomView, units: UnitHab
     heading('Lasers (inventory)', 2),
     gridTable(['Laser type', 'Maker and model', 'Serial / registration', 'Class as labelled', 'Beams'], inventoryRows, ['*', 110, 110, 60, 50], 8),
     heading('Beams', 2),
-    gridTable(['Beam', 'Wave-length', 'Output', 'Beam at exit (definition)', 'Exposure duration and why', 'Viewing conditions', 'Tolerances'], beamRows, [70, 36, 66, 80, 100, 100, 50], 7.2),
+    gridTable(['Beam', 'Wave-length', 'Output', 'Beam at exit (definition)', 'Exposure duration and why', 'Viewing conditions', 'Tolerances'], beamRows, [66, 34, 62, 78, '*', 88, 48], 7.2), // '*': stays inside the margins on A4
     heading('Rule set and conservative mode', 2),
     paragraph([{ text: 'Rule set: ', bold: true }, doc.results.ruleSetName]),
     paragraph(
