@@ -26,6 +26,20 @@ export function heading(text: string, level: 1 | 2 | 3 = 1, id?: string): Conten
   };
 }
 
+/** A level-1 heading that starts a new page (major sections of the report). */
+export function headingOnNewPage(text: string): Content {
+  return { ...(heading(text, 1) as object), pageBreak: 'before' } as Content;
+}
+
+/**
+ * A heading kept on the same page as the (short) block that follows it: pdfmake's pageBreakBefore
+ * test does not see a following paragraph that would itself move, so a heading could end a page.
+ * Use only with small blocks; a table longer than a page must not be made unbreakable.
+ */
+export function headingWith(text: string, level: 1 | 2 | 3, first: Content): Content {
+  return { stack: [heading(text, level), first], unbreakable: true };
+}
+
 export function th(text: string): TableCell {
   return { text, bold: true, fontSize: 7.5 };
 }

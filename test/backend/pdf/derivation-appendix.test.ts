@@ -103,3 +103,18 @@ describe('no word of the report runs past the right margin', () => {
     expect(over.map((w) => `page ${w.page}: "${w.text}" ends at ${w.xMax.toFixed(1)} of ${w.pageWidth}`)).toEqual([]);
   });
 });
+
+// A heading must never be the last thing on a page (common practice in any printed record: the
+// reader turns the page and finds a section without its title). The report's inputs section has
+// short sections whose heading pdfmake's own page-break test missed.
+describe('no section heading ends a page of the ten-laser report', () => {
+  const headings = ['Lasers (inventory)', 'Rule set and conservative mode', 'Uncertainty bounds (nominal / with input tolerances)', 'Who and what was assumed'];
+  it.each(['A4', 'Letter'] as const)('%s', (paper) => {
+    const pages = pageTexts(report(paper).pdf);
+    for (const [i, page] of pages.entries()) {
+      // the page furniture (caution band and footer) follows the body on every page
+      const body = page.slice(0, Math.max(0, page.indexOf('These results support, and do not replace')));
+      for (const h of headings) expect({ page: i + 1, endsWith: body.trimEnd().endsWith(h) ? h : null }).toEqual({ page: i + 1, endsWith: null });
+    }
+  });
+});

@@ -5,7 +5,7 @@ import { dec, roundPlaces, roundSig } from '../../../../core/numeric/decimal.js'
 import { formatSI, plain } from '../../../../core/units/quantities.js';
 import type { UnitHabit } from '../../../../core/units/quantities.js';
 import type { DocumentInput } from '../document-input.js';
-import { bullets, gridTable, heading, paragraph } from '../blocks.js';
+import { bullets, gridTable, heading, headingOnNewPage, headingWith, paragraph } from '../blocks.js';
 import * as fmt from '../format.js';
 import { COLOR } from '../page.js';
 import type { RoomView } from '../room-view.js';
@@ -91,13 +91,13 @@ export function inputsSection(doc: DocumentInput, view: RoomView, units: UnitHab
     return [{ text: l.type, bold: true }, makerModel || '–', ids || '–', l.classAsLabelled === null ? 'not labelled' : `Class ${l.classAsLabelled}`, beamNos];
   });
   return [
-    heading('Inputs and assumptions'),
+    // a major section starts on a new page, so its first sub-heading cannot be stranded at a page foot
+    headingOnNewPage('Inputs and assumptions'),
     heading('Lasers (inventory)', 2),
     gridTable(['Laser type', 'Maker and model', 'Serial / registration', 'Class as labelled', 'Beams'], inventoryRows, ['*', 110, 110, 60, 50], 8),
     heading('Beams', 2),
     gridTable(['Beam', 'Wave-length', 'Output', 'Beam at exit (definition)', 'Exposure duration and why', 'Viewing conditions', 'Tolerances'], beamRows, [66, 34, 62, 78, '*', 88, 48], 7.2), // '*': stays inside the margins on A4
-    heading('Rule set and conservative mode', 2),
-    paragraph([{ text: 'Rule set: ', bold: true }, doc.results.ruleSetName]),
+    headingWith('Rule set and conservative mode', 2, paragraph([{ text: 'Rule set: ', bold: true }, doc.results.ruleSetName])),
     paragraph(
       conservative
         ? 'Conservative mode is on: where a table entry could not be checked against the published document, the stricter alternative was used.'
@@ -111,14 +111,17 @@ export function inputsSection(doc: DocumentInput, view: RoomView, units: UnitHab
       : []),
     heading('Uncertainty bounds (nominal / with input tolerances)', 2),
     gridTable(['Beam', 'NOHD', 'Required OD', 'Eye limit as irradiance', 'Input that moves the NOHD most'], boundRows, [110, 90, 90, 120, '*'], 7.5),
-    heading('Who and what was assumed', 2),
-    bullets(
-      [
-        `Persons who can be present: ${a.personsPresent || 'not stated'}.`,
-        `Optical aids (binoculars, loupes, telescopes) ${a.opticalAidsPossible ? 'may be used in the area' : 'are not used in the area'}.`,
-        ...a.other,
-      ],
-      9,
+    headingWith(
+      'Who and what was assumed',
+      2,
+      bullets(
+        [
+          `Persons who can be present: ${a.personsPresent || 'not stated'}.`,
+          `Optical aids (binoculars, loupes, telescopes) ${a.opticalAidsPossible ? 'may be used in the area' : 'are not used in the area'}.`,
+          ...a.other,
+        ],
+        9,
+      ),
     ),
     ...(additive.length > 0 ? [heading('Beams acting on the same tissue and effect (added)', 2), bullets(additive, 8.5)] : []),
   ];
