@@ -7,6 +7,7 @@ import { createRequire } from 'node:module';
 import path from 'node:path';
 import pdfmake from 'pdfmake';
 import type { TDocumentDefinitions, TFontDictionary } from 'pdfmake/interfaces';
+import { shareParsedFonts } from './shared-fonts.js';
 
 const require = createRequire(import.meta.url);
 
@@ -26,6 +27,7 @@ export const FONTS: TFontDictionary = {
 const STANDARD_FONT = /^(Courier|Helvetica|Times|Symbol|ZapfDingbats)(-[A-Za-z]+)?$/;
 
 function configure(): void {
+  shareParsedFonts(FONTS); // once per process: every document then reuses the parsed Roboto files
   pdfmake.setFonts(FONTS);
   pdfmake.setUrlAccessPolicy(() => false); // documents never load anything from the network
   pdfmake.setLocalAccessPolicy((p: string) => p.startsWith(FONT_DIR + path.sep) || STANDARD_FONT.test(p));

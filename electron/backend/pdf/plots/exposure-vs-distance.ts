@@ -5,9 +5,13 @@
  * averaging over the limiting aperture), so it crosses the limit at the core's NOHD; the reported
  * (rounded-up) NOHD is drawn as the vertical line.
  */
-import { exposureAlongBeam, type BeamInput, type BeamResult, type LimitSettings, type UnitHabit } from '../../../../core/index.js';
+import { exposureAlongBeam, type BeamInput, type BeamResult, type ExposureAlongBeam, type LimitSettings, type UnitHabit } from '../../../../core/index.js';
 import * as fmt from '../format.js';
 import { logPlotSvg } from './log-plot.js';
+import { BoundedMemo } from './curve-cache.js';
+
+/** Exposure curves across renders, keyed by everything `exposureAlongBeam` reads. */
+const ALONG = new BoundedMemo<ExposureAlongBeam | null>(64);
 
 export function exposureVsDistanceSvg(beam: BeamResult, input: BeamInput | null, units: UnitHabit, width: number, settings?: LimitSettings): string | null {
   if (input === null) return null;
@@ -19,7 +23,8 @@ export function exposureVsDistanceSvg(beam: BeamResult, input: BeamInput | null,
   const steps = 48;
   for (let i = 0; i <= steps; i++) distances.push(rMin * (rMax / rMin) ** (i / steps));
   // The criterion drawn is the one that sets the NOHD (highest exposure-to-limit ratio there).
-  const along = exposureAlongBeam({ input, ruleSet: beam.ruleSet, settings, nohd_m: beam.nohd_m }, distances);
+  const key = JSON.stringify([input, beam.ruleSet, settings ?? null, beam.nohd_m, distances]);
+  const along = ALONG.get(key, () => exposureAlongBeam({ input, ruleSet: beam.ruleSet, settings, nohd_m: beam.nohd_m }, distances));
   if (along === null) return null;
   const points = along.points.map(([r, x]) => [r, x * scale] as const);
   const unit = `${along.quantity === 'E' ? 'W' : 'J'}/${units === 'ANSI' ? 'cm²' : 'm²'}`;

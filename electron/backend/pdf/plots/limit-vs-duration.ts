@@ -17,8 +17,16 @@ import {
 } from '../../../../core/index.js';
 import { limitH, duration } from '../format.js';
 import { logPlotSvg } from './log-plot.js';
+import { BoundedMemo } from './curve-cache.js';
 
 export type CurveCache = Map<string, ReadonlyArray<readonly [number, number]>>;
+
+type Curve = ReadonlyArray<readonly [number, number]>;
+
+/** Curves across renders (a 10-laser room has at most 10 distinct ones per rule set). */
+const CURVES = new BoundedMemo<Curve>(64);
+/** The limit over the assessed duration of a pulsed beam, across renders. */
+const POINTS = new BoundedMemo<string | null>(64);
 
 /** J/m² -> the habit's unit for H (J/m² or J/cm²). */
 function hScale(units: UnitHabit): { factor: number; unit: string } {
@@ -26,7 +34,8 @@ function hScale(units: UnitHabit): { factor: number; unit: string } {
 }
 
 function limitAt(ruleSet: RuleSetId, wavelength_nm: number, t: number, sourceAngle_rad: number | undefined, settings: LimitSettings | undefined): string | null {
-  return limitsAt(ruleSet, wavelength_nm, [t], sourceAngle_rad, settings)[0]?.H_Jm2 ?? null;
+  const key = JSON.stringify([ruleSet, wavelength_nm, t, sourceAngle_rad ?? null, settings ?? null]);
+  return POINTS.get(key, () => limitsAt(ruleSet, wavelength_nm, [t], sourceAngle_rad, settings)[0]?.H_Jm2 ?? null);
 }
 
 function limitsAt(ruleSet: RuleSetId, wavelength_nm: number, ts: readonly number[], sourceAngle_rad: number | undefined, settings: LimitSettings | undefined) {
@@ -61,6 +70,12 @@ export function limitCurve(ruleSet: RuleSetId, wavelength_nm: number, sourceAngl
   const key = JSON.stringify([ruleSet, wavelength_nm, sourceAngle_rad ?? null, settings ?? null, lo]);
   const hit = cache?.get(key);
   if (hit) return hit;
+  const curve = CURVES.get(key, () => sampleCurve(ruleSet, wavelength_nm, sourceAngle_rad, settings, lo));
+  cache?.set(key, curve);
+  return curve;
+}
+
+function sampleCurve(ruleSet: RuleSetId, wavelength_nm: number, sourceAngle_rad: number | undefined, settings: LimitSettings | undefined, lo: number): Curve {
   const bps = breakpoints(ruleSet, wavelength_nm, lo);
   const ts: number[] = [];
   for (let i = 0; i < bps.length; i++) {
@@ -75,7 +90,6 @@ export function limitCurve(ruleSet: RuleSetId, wavelength_nm: number, sourceAngl
   const curve: Array<readonly [number, number]> = [];
   // Outside the rule set's range the curve simply has no point.
   for (const p of limitsAt(ruleSet, wavelength_nm, ts, sourceAngle_rad, settings)) if (p.H_Jm2 !== null) curve.push([p.t_s, Number(p.H_Jm2)] as const);
-  cache?.set(key, curve);
   return curve;
 }
 
