@@ -5,10 +5,23 @@
  * second unit habit) then skips the many limit look-ups behind each curve. Bounded so a long-running
  * host does not grow without limit: the least recently used entry goes first.
  */
+const ALL = new Set<BoundedMemo<unknown>>();
+
+/** Forget every stored curve (the benchmark times a room's first print with this). */
+export function clearPlotCurveCaches(): void {
+  for (const m of ALL) m.clear();
+}
+
 export class BoundedMemo<V> {
   private readonly entries = new Map<string, V>();
 
-  constructor(private readonly capacity: number) {}
+  constructor(private readonly capacity: number) {
+    ALL.add(this);
+  }
+
+  clear(): void {
+    this.entries.clear();
+  }
 
   /** The value stored under `key`, or `make()` stored under it (evicting the oldest when full). */
   get(key: string, make: () => V): V {
