@@ -64,7 +64,7 @@ export function computeBounds(input: BeamInput, ruleSet: RuleSetId, settings: Li
   let limitE = nominal.limitE;
   let dominant: { key: Key; moveNohd: Dec; moveOd: Dec } | null = null;
   let combined: BeamInput = input;
-  let any = false;
+  let toleranceGiven = false;
   for (const key of Object.keys(tol) as Key[]) {
     const t = tol[key];
     if (t === undefined || t === 0) continue;
@@ -74,7 +74,7 @@ export function computeBounds(input: BeamInput, ruleSet: RuleSetId, settings: Li
       addStep(trace, { kind: 'note', label: key, detail: `tolerance ±${fmt(new Dec(t * 100))} % given, but this input does not apply to the beam` });
       continue;
     }
-    any = true;
+    toleranceGiven = true;
     const nLo = safeNumbers(lo, ruleSet, settings);
     const nHi = safeNumbers(hi, ruleSet, settings);
     const outs = [nLo, nHi].filter((x): x is CoreNumbers => x !== null);
@@ -99,7 +99,7 @@ export function computeBounds(input: BeamInput, ruleSet: RuleSetId, settings: Li
     });
     if (!dominant || moveNohd.gt(dominant.moveNohd) || (moveNohd.eq(dominant.moveNohd) && moveOd.gt(dominant.moveOd))) dominant = { key, moveNohd, moveOd };
   }
-  if (any) {
+  if (toleranceGiven) {
     const c = safeNumbers(combined, ruleSet, settings);
     if (c) {
       if (c.nohd.gt(nohd)) nohd = c.nohd;
@@ -112,7 +112,7 @@ export function computeBounds(input: BeamInput, ruleSet: RuleSetId, settings: Li
   addStep(trace, {
     kind: 'result',
     label: 'Conservative bound',
-    detail: any
+    detail: toleranceGiven
       ? `NOHD ${fmt(nohd)} m, OD ${fmt(od)}, limit ${fmt(limitE)} W/m²; dominant input: ${dominantInput ?? 'none (no tolerance moves the result)'}`
       : 'no tolerances given: the conservative bound equals the nominal value',
   });
