@@ -42,8 +42,8 @@ function sqliteMessage(e: unknown): string {
 export function openDatabase(path: string, opts: OpenDatabaseOptions = {}): OpenedDatabase {
   const readonly = opts.readonly === true;
   const target = opts.targetVersion ?? LATEST_VERSION;
-  if (!Number.isInteger(target) || target < 1 || target > LATEST_VERSION) {
-    throw new RangeError(`targetVersion must be 1..${LATEST_VERSION}`);
+  if (!MIGRATIONS.some((m) => m.version === target)) {
+    throw new RangeError(`targetVersion must be one of ${MIGRATIONS.map((m) => m.version).join(', ')}`);
   }
   if (!readonly) mkdirSync(dirname(path), { recursive: true });
   const existedBefore = existsSync(path) && statSync(path).size > 0;
@@ -134,7 +134,9 @@ function checkHistory(db: Db, path: string, version: number): void {
   }
   const applied = db.prepare('SELECT version, name FROM schema_migrations ORDER BY version').all() as Array<{ version: number; name: string }>;
   const isPrefix =
-    applied.length === version && applied.every((row, i) => row.version === i + 1 && row.name === MIGRATIONS[i]?.name);
+    applied.length > 0 &&
+    applied[applied.length - 1]?.version === version &&
+    applied.every((row, i) => row.version === MIGRATIONS[i]?.version && row.name === MIGRATIONS[i]?.name);
   if (!isPrefix) {
     throw new RecordError(
       'corrupt-database',
@@ -162,13 +164,16 @@ function migrate(db: Db, path: string, target: number, readonly: boolean, existe
     db.prepare('VACUUM INTO ?').run(copy);
     backups.push(copy);
   }
+  let previous = 0;
   for (const m of MIGRATIONS) {
     if (m.version > target) break;
+    const from = previous;
+    previous = m.version;
     const apply = db.transaction(() => {
       // Re-read inside the write lock: another process may have migrated meanwhile.
       const now = userVersion(db);
       if (now >= m.version) return;
-      if (now !== m.version - 1) throw new RecordError('migration-failed', `Cannot apply migration ${m.version} to schema version ${now}`);
+      if (now !== from) throw new RecordError('migration-failed', `Cannot apply migration ${m.version} to schema version ${now}`);
       db.exec(m.sql);
       db.prepare('INSERT INTO schema_migrations (version, name, applied_at) VALUES (?, ?, ?)').run(m.version, m.name, new Date().toISOString());
       if (!Number.isInteger(m.version)) throw new Error('migration version must be an integer');

@@ -281,6 +281,7 @@ function revisionRow(r: Revision): RevisionRow {
     updated_at: r.updatedAt,
     title: r.content.title,
     review_by: r.content.reviewBy,
+    version: 1,
   };
 }
 

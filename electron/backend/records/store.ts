@@ -14,6 +14,7 @@ import { seedDemo } from './demo.js';
 import * as X from './exchange.js';
 import { defaultDatabasePath } from './paths.js';
 import * as R from './register.js';
+import { saveWork } from './save-work.js';
 import type {
   Assessment,
   AssessmentContent,
@@ -36,11 +37,14 @@ import type {
   RevisionSummary,
   Room,
   RoomDraft,
+  SaveBase,
   SignOff,
   Site,
   SiteDraft,
   StoreInfo,
   VerifyReport,
+  WorkSave,
+  WorkSaved,
 } from './types.js';
 
 class SqliteRecordStore implements RecordStore {
@@ -97,7 +101,10 @@ class SqliteRecordStore implements RecordStore {
   getAssessment(id: Id): Assessment { return A.getAssessment(this.ctx, id); }
   listAssessments(roomId: Id): AssessmentSummary[] { return A.listAssessments(this.ctx, roomId); }
   listDueForReview(date: CalendarDate): AssessmentSummary[] { return A.listDueForReview(this.ctx, date); }
-  saveAssessment(id: Id, content: AssessmentContent): Assessment { return A.saveAssessment(this.ctx, id, content); }
+  saveAssessment(id: Id, content: AssessmentContent, expected?: SaveBase): Assessment {
+    return A.saveAssessment(this.ctx, id, content, expected);
+  }
+  saveWork(save: WorkSave): WorkSaved { return saveWork(this.ctx, save); }
   discardDraft(id: Id): void { A.discardDraft(this.ctx, id); }
   listRevisions(assessmentId: Id): RevisionSummary[] { return A.listRevisions(this.ctx, assessmentId); }
   getRevision(revisionId: Id): Revision { return A.getRevision(this.ctx, revisionId); }

@@ -9,6 +9,9 @@
  */
 import type { EyewearSpec, LaserInput, RoomInput } from '../../../core/model/inputs.js';
 import type { RoomResult } from '../../../core/model/results.js';
+import type { WorkSave, WorkSaved } from './save-work.js';
+
+export type { WorkSave, WorkSaved };
 
 export type Id = string;
 /** ISO 8601 timestamp in UTC, e.g. 2026-05-01T09:30:00.000Z. */
@@ -255,6 +258,14 @@ export interface Assessment {
   readonly createdAt: Timestamp;
   /** The newest revision (draft, or signed when no draft is open). */
   readonly current: Revision;
+  /** Save counter of `current`: a save names it (SaveBase) and is refused once it is out of date. */
+  readonly version: number;
+}
+
+/** What a save started from: the revision the officer opened and its save counter then. */
+export interface SaveBase {
+  readonly revisionId: Id;
+  readonly version: number;
 }
 
 /** One line of an assessment list. */
@@ -431,7 +442,12 @@ export interface RecordStore {
    * Save content: into the open draft, or — when the newest revision is signed — into a new draft
    * revision based on it (the signed one stays unchanged). Results are recomputed.
    */
-  saveAssessment(id: Id, content: AssessmentContent): Assessment;
+  saveAssessment(id: Id, content: AssessmentContent, expected?: SaveBase): Assessment;
+  /**
+   * The workspace's save: new and edited register lasers plus the assessment, in one transaction;
+   * refused whole (code 'stale') when any part changed since it was opened.
+   */
+  saveWork(save: WorkSave): WorkSaved;
   /** Delete an assessment that has no signed revision, or discard its open draft revision. */
   discardDraft(id: Id): void;
   listRevisions(assessmentId: Id): RevisionSummary[];
@@ -467,6 +483,12 @@ export class RecordError extends Error {
       | 'invalid'
       | 'immutable'
       | 'conflict'
+      /** A save that started from an older state than the stored one (optimistic concurrency). */
+      | 'stale'
+      /** The database is open for writing in another Beamwarden process, or restore found it in use. */
+      | 'in-use'
+      /** The file system refused: read-only, immutable file, full disk, missing folder. */
+      | 'storage'
       | 'newer-database'
       | 'corrupt-database'
       | 'migration-failed'
