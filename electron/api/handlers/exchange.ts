@@ -31,8 +31,12 @@ export const exchangeTable: AreaTable<ExchangeHandlers, ApiContext> = {
     run: ({ text }, { store }) => store.importDocument(text),
   },
   'import-laser-csv': {
-    input: z.strictObject({ roomId: IdSchema, csvText: z.string().max(MAX_IMPORT_CHARS, `must be at most ${MAX_IMPORT_CHARS} characters`) }),
-    run: ({ roomId, csvText }, { store }) => store.importLaserCsv(roomId, csvText),
+    input: z.strictObject({
+      roomId: IdSchema,
+      csvText: z.string().max(MAX_IMPORT_CHARS, `must be at most ${MAX_IMPORT_CHARS} characters`),
+      existing: z.enum(['ask', 'skip', 'add']).optional(),
+    }),
+    run: ({ roomId, csvText, existing }, { store }) => store.importLaserCsv(roomId, csvText, existing ?? 'ask'),
   },
   'demo-seed': { input: EmptySchema, run: (_a, { store }) => store.seedDemo() },
 };

@@ -17,6 +17,7 @@ import {
 } from '../schemas/records.js';
 import { EyewearSpecSchema, LaserInputSchema } from '../schemas/inputs.js';
 import { notFound, parseOrThrow, translateSqliteError, type StoreContext } from './context.js';
+import { referencesToInstallation, referencesToPerson, referencesToRoom, referencesToSite, refuseIfReferenced } from './references.js';
 import type {
   Eyewear,
   EyewearDraft,
@@ -89,8 +90,9 @@ export function updateSite(ctx: StoreContext, id: Id, patch: Partial<SiteDraft>)
   return next;
 }
 export function deleteSite(ctx: StoreContext, id: Id): void {
-  getSite(ctx, id);
-  guard('Site', () => ctx.sql('DELETE FROM site WHERE id = ?').run(id));
+  const site = getSite(ctx, id);
+  refuseIfReferenced(`Site "${site.name}" cannot be deleted`, referencesToSite(ctx, id), 'Move or delete them first.');
+  guard(`Site "${site.name}"`, () => ctx.sql('DELETE FROM site WHERE id = ?').run(id));
 }
 
 // ---------------------------------------------------------------- rooms
@@ -163,8 +165,9 @@ export function updateRoom(ctx: StoreContext, id: Id, patch: Partial<Omit<RoomDr
   return next;
 }
 export function deleteRoom(ctx: StoreContext, id: Id): void {
-  getRoom(ctx, id);
-  guard('Room', () => ctx.sql('DELETE FROM room WHERE id = ?').run(id));
+  const room = getRoom(ctx, id);
+  refuseIfReferenced(`Room ${room.code} cannot be deleted`, referencesToRoom(ctx, id), 'Its records stay with it.');
+  guard(`Room ${room.code}`, () => ctx.sql('DELETE FROM room WHERE id = ?').run(id));
 }
 
 // ---------------------------------------------------------------- laser installations
@@ -286,8 +289,19 @@ export function updateInstallation(
   );
   return next;
 }
+/** Replace a laser's row in place (import of a newer copy): assessments keep referring to it. */
+export function replaceInstallation(ctx: StoreContext, i: LaserInstallation): void {
+  ctx
+    .sql(
+      `UPDATE laser_installation SET room_id=@roomId, laser_type=@laserType, maker=@maker, model=@model, serial_number=@serialNumber,
+         registration_number=@registrationNumber, laser_json=@laserJson, class_as_labelled=@classAsLabelled, status=@status,
+         notes=@notes, created_at=@createdAt, updated_at=@updatedAt WHERE id=@id`,
+    )
+    .run(installationParams(i));
+}
 export function deleteInstallation(ctx: StoreContext, id: Id): void {
-  getInstallation(ctx, id);
+  const inst = getInstallation(ctx, id);
+  refuseIfReferenced(`Laser "${inst.laser.name}" cannot be deleted`, referencesToInstallation(ctx, id), 'Retire it instead: it then leaves new assessments but stays in the records.');
   guard('Laser installation (retire it instead if an assessment refers to it)', () =>
     ctx.sql('DELETE FROM laser_installation WHERE id = ?').run(id),
   );
@@ -373,6 +387,14 @@ export function updateEyewear(ctx: StoreContext, id: Id, patch: Partial<Omit<Eye
   );
   return next;
 }
+export function replaceEyewear(ctx: StoreContext, e: Eyewear): void {
+  ctx
+    .sql(
+      `UPDATE eyewear SET site_id=@siteId, tag=@tag, spec_json=@specJson, location=@location, quantity=@quantity, notes=@notes,
+         created_at=@createdAt, updated_at=@updatedAt WHERE id=@id`,
+    )
+    .run(eyewearParams(e));
+}
 export function deleteEyewear(ctx: StoreContext, id: Id): void {
   getEyewear(ctx, id);
   guard('Eyewear', () => ctx.sql('DELETE FROM eyewear WHERE id = ?').run(id));
@@ -428,7 +450,8 @@ export function updatePerson(ctx: StoreContext, id: Id, patch: Partial<PersonDra
   return next;
 }
 export function deletePerson(ctx: StoreContext, id: Id): void {
-  getPerson(ctx, id);
+  const person = getPerson(ctx, id);
+  refuseIfReferenced(`${person.name} cannot be removed from the register`, referencesToPerson(ctx, id), 'Whoever signed records stays in the register.');
   guard('Person (someone who signed records stays in the register)', () => ctx.sql('DELETE FROM person WHERE id = ?').run(id));
 }
 

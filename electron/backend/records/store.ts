@@ -20,6 +20,7 @@ import type {
   AssessmentContent,
   AssessmentSummary,
   CalendarDate,
+  CsvExistingChoice,
   CsvImportReport,
   Eyewear,
   EyewearDraft,
@@ -118,7 +119,9 @@ class SqliteRecordStore implements RecordStore {
   exportRoom(roomId: Id): ExportDocument { return X.exportRoom(this.ctx, roomId); }
   exportAssessment(assessmentId: Id): ExportDocument { return X.exportAssessment(this.ctx, assessmentId); }
   importDocument(doc: unknown): ImportSummary { return X.importDocument(this.ctx, doc); }
-  importLaserCsv(roomId: Id, csvText: string): CsvImportReport { return importLaserCsv(this.ctx, roomId, csvText); }
+  importLaserCsv(roomId: Id, csvText: string, existing?: CsvExistingChoice): CsvImportReport {
+    return importLaserCsv(this.ctx, roomId, csvText, existing);
+  }
 
   backup(path: string): Promise<void> { return backupTo(this.ctx.db, path, this.nativeBinding); }
   seedDemo(): Site { return seedDemo(this.ctx); }

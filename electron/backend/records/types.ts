@@ -354,6 +354,20 @@ export interface ImportSummary {
   readonly revisions: number;
   /** Records already present with identical content (skipped). */
   readonly unchanged: number;
+  /** Drafts kept beside the imported version because the two differed (nothing is discarded). */
+  readonly keptDrafts: readonly KeptDraft[];
+}
+
+/** A draft kept as an assessment of its own because an import brought a different version of it. */
+export interface KeptDraft {
+  /** The assessment whose draft conflicted. */
+  readonly assessmentId: Id;
+  /** The new assessment holding the version that did not stay (same room). */
+  readonly keptAs: Id;
+  readonly title: string;
+  /** Whose version was kept aside: this database's draft, or the one in the file. */
+  readonly whose: 'yours' | 'imported';
+  readonly reason: string;
 }
 
 /** One problem in an imported file: `path` is a JSON path ("rooms[2].code") or "row 7, column wavelength_nm". */
@@ -367,7 +381,20 @@ export interface CsvImportReport {
   /** Every bad row; when non-empty nothing was imported. */
   readonly errors: ReadonlyArray<{ readonly row: number; readonly column: string; readonly problem: string }>;
   readonly installationIds: readonly Id[];
+  /**
+   * Lasers of the file that the room already has (same name, maker and serial number). With the
+   * choice 'ask' (the default) and any such laser, nothing is imported and the officer is asked
+   * whether to skip them or add them again.
+   */
+  readonly alreadyInRoom?: ReadonlyArray<{ readonly row: number; readonly name: string; readonly maker: string; readonly serialNumber: string }>;
+  /** True when nothing was imported because the officer must choose for `alreadyInRoom`. */
+  readonly decisionNeeded?: boolean;
+  /** Lasers left out because the room already has them (choice 'skip'). */
+  readonly skipped?: number;
 }
+
+/** What to do with CSV lasers the room already has (same name, maker, serial number). */
+export type CsvExistingChoice = 'ask' | 'skip' | 'add';
 
 // ---------------------------------------------------------------- the store
 
@@ -466,7 +493,7 @@ export interface RecordStore {
   /** Validate and import a document (parsed object or JSON text): all or nothing. */
   importDocument(doc: unknown): ImportSummary;
   /** CSV laser inventory for one room (columns in README); nothing imported if any row is bad. */
-  importLaserCsv(roomId: Id, csvText: string): CsvImportReport;
+  importLaserCsv(roomId: Id, csvText: string, existing?: CsvExistingChoice): CsvImportReport;
 
   // safekeeping
   /** Online backup to `path` (a consistent copy while the store stays open). */
