@@ -369,7 +369,7 @@ function write<T>(ctx: StoreContext, what: string, fn: () => T): T {
   try {
     return ctx.db.transaction(fn).immediate();
   } catch (e) {
-    throw translateSqliteError(e, what);
+    throw translateSqliteError(e, what, ctx.db.name);
   }
 }
 

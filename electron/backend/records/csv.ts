@@ -296,7 +296,7 @@ export function importLaserCsv(ctx: StoreContext, roomId: Id, csvText: string, e
       })
       .immediate();
   } catch (e) {
-    throw translateSqliteError(e, 'CSV import (nothing was imported)');
+    throw translateSqliteError(e, 'CSV import (nothing was imported)', ctx.db.name);
   }
   return {
     imported: installations.length,

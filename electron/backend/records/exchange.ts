@@ -434,7 +434,7 @@ export function importDocument(ctx: StoreContext, input: unknown): ImportSummary
     run.immediate();
   } catch (e) {
     if (e instanceof RecordError) throw e;
-    const t = translateSqliteError(e, 'Import (nothing was changed)');
+    const t = translateSqliteError(e, 'Import (nothing was changed)', ctx.db.name);
     throw t instanceof RecordError ? new RecordError(t.code, t.message, [{ path: '(document)', problem: t.message }]) : t;
   }
   return { ...count, keptDrafts };

@@ -92,7 +92,7 @@ export function saveWork(ctx: StoreContext, raw: WorkSave): WorkSaved {
   try {
     assessment = run.immediate();
   } catch (e) {
-    throw translateSqliteError(e, `Assessment of room ${room.code}`);
+    throw translateSqliteError(e, `Assessment of room ${room.code}`, ctx.db.name);
   }
   return { assessment: getAssessment(ctx, assessment.id), installations: listInstallations(ctx, room.id), laserIds };
 }

@@ -2,7 +2,10 @@
  * The record store: one object with typed methods over one SQLite file, for the API/IPC handler
  * table, the loopback host and the CLI. Synchronous (better-sqlite3) except `backup`.
  */
+import { mkdirSync } from 'node:fs';
 import { dirname, resolve } from 'node:path';
+import { checkWritableAtStart } from './storage-errors.js';
+import { acquireWriteLock } from './write-lock.js';
 import type { RoomInput } from '../../../core/model/inputs.js';
 import * as A from './assessments.js';
 import { backupTo } from './backup.js';
@@ -53,10 +56,12 @@ class SqliteRecordStore implements RecordStore {
     private readonly ctx: StoreContext,
     readonly info: StoreInfo,
     private readonly nativeBinding: string | undefined,
+    private readonly releaseLock: () => void,
   ) {}
 
   close(): void {
     if (this.ctx.db.open) this.ctx.db.close();
+    this.releaseLock();
   }
 
   listSites(): Site[] { return R.listSites(this.ctx); }
@@ -140,12 +145,23 @@ export interface InternalOpenOptions extends OpenOptions {
 export function openRecordStore(options: InternalOpenOptions = {}): RecordStore {
   const path = resolve(options.path ?? defaultDatabasePath());
   const keyDir = resolve(options.keyDir ?? dirname(path));
-  const opened = openDatabase(path, {
-    ...(options.nativeBinding !== undefined ? { nativeBinding: options.nativeBinding } : {}),
-    ...(options.readonly !== undefined ? { readonly: options.readonly } : {}),
-  });
+  const readonly = options.readonly === true;
+  // The default folder is made with its parents (first start); a folder the officer named must exist.
+  if (!readonly && options.path === undefined) mkdirSync(dirname(path), { recursive: true });
+  if (!readonly) checkWritableAtStart(path);
+  const releaseLock = readonly ? () => {} : acquireWriteLock(path);
+  let opened: ReturnType<typeof openDatabase>;
+  try {
+    opened = openDatabase(path, {
+      ...(options.nativeBinding !== undefined ? { nativeBinding: options.nativeBinding } : {}),
+      readonly,
+    });
+  } catch (e) {
+    releaseLock();
+    throw e;
+  }
   const calculatedWith = options.calculatedWith ?? CALCULATED_WITH;
   const ctx = makeContext(opened.db, keyDir, options.evaluate ?? evaluateRoom, calculatedWith);
   const info: StoreInfo = { path, keyDir, schemaVersion: opened.schemaVersion, migrationBackups: opened.migrationBackups, calculatedWith };
-  return new SqliteRecordStore(ctx, info, options.nativeBinding);
+  return new SqliteRecordStore(ctx, info, options.nativeBinding, releaseLock);
 }
