@@ -23,7 +23,13 @@ export interface StoreContext {
   audit(action: string, entity: string, entityId: string, detail?: string): void;
 }
 
-export function makeContext(db: Db, keyDir: string, evaluate: Evaluate, calculatedWith: string): StoreContext {
+export function makeContext(
+  db: Db,
+  keyDir: string,
+  evaluate: Evaluate,
+  calculatedWith: string,
+  now: () => string = () => new Date().toISOString(),
+): StoreContext {
   let key: SigningKey | undefined;
   const statements = new Map<string, Statement>();
   const sql = (text: string): Statement => {
@@ -40,7 +46,7 @@ export function makeContext(db: Db, keyDir: string, evaluate: Evaluate, calculat
     keyDir,
     evaluate,
     calculatedWith,
-    now: () => new Date().toISOString(),
+    now,
     newId: () => randomUUID(),
     signingKey() {
       key ??= loadOrCreateSigningKey(keyDir);

@@ -136,6 +136,8 @@ class SqliteRecordStore implements RecordStore {
 export interface InternalOpenOptions extends OpenOptions {
   readonly evaluate?: Evaluate;
   readonly calculatedWith?: string;
+  /** The store's clock (tests that compare two exports byte for byte). */
+  readonly now?: () => string;
 }
 
 /**
@@ -161,7 +163,7 @@ export function openRecordStore(options: InternalOpenOptions = {}): RecordStore 
     throw e;
   }
   const calculatedWith = options.calculatedWith ?? CALCULATED_WITH;
-  const ctx = makeContext(opened.db, keyDir, options.evaluate ?? evaluateRoom, calculatedWith);
+  const ctx = makeContext(opened.db, keyDir, options.evaluate ?? evaluateRoom, calculatedWith, options.now);
   const info: StoreInfo = { path, keyDir, schemaVersion: opened.schemaVersion, migrationBackups: opened.migrationBackups, calculatedWith };
   return new SqliteRecordStore(ctx, info, options.nativeBinding, releaseLock);
 }
