@@ -18,10 +18,13 @@ import * as X from './exchange.js';
 import { defaultDatabasePath } from './paths.js';
 import * as R from './register.js';
 import { saveWork } from './save-work.js';
+import { backupInto, backupStatus, defaultBackupFolder } from './safekeeping.js';
 import type {
   Assessment,
   AssessmentContent,
   AssessmentSummary,
+  BackupReport,
+  BackupStatus,
   CalendarDate,
   CsvExistingChoice,
   CsvImportReport,
@@ -129,6 +132,10 @@ class SqliteRecordStore implements RecordStore {
   }
 
   backup(path: string): Promise<void> { return backupTo(this.ctx.db, path, this.nativeBinding); }
+  backupInto(folder?: string): Promise<BackupReport> {
+    return backupInto(this.ctx.db, folder ?? defaultBackupFolder(this.info.path), this.nativeBinding);
+  }
+  backupStatus(): BackupStatus { return backupStatus(this.ctx.db, defaultBackupFolder(this.info.path)); }
   seedDemo(): Site { return seedDemo(this.ctx); }
 }
 

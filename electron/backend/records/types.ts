@@ -10,6 +10,9 @@
 import type { EyewearSpec, LaserInput, RoomInput } from '../../../core/model/inputs.js';
 import type { RoomResult } from '../../../core/model/results.js';
 import type { WorkSave, WorkSaved } from './save-work.js';
+import type { BackupFile, BackupReport, BackupStatus } from './safekeeping.js';
+
+export type { BackupFile, BackupReport, BackupStatus };
 
 export type { WorkSave, WorkSaved };
 
@@ -498,6 +501,10 @@ export interface RecordStore {
   // safekeeping
   /** Online backup to `path` (a consistent copy while the store stays open). */
   backup(path: string): Promise<void>;
+  /** "Back up now": a dated, checked copy in `folder` (default: `backups` beside the database), recorded. */
+  backupInto(folder?: string): Promise<BackupReport>;
+  /** The last recorded backup and the backups in the default folder. */
+  backupStatus(): BackupStatus;
   /** Loads the invented demo site (no-op if it is already there); returns its site. */
   seedDemo(): Site;
 }
