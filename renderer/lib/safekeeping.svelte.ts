@@ -7,20 +7,9 @@ import type { BackupStatus } from '../../electron/backend/records/types.js';
 import { invoke } from './api.js';
 import { session } from './session.svelte.js';
 import { settings } from './settings.svelte.js';
+import { backupDue } from './backup-reminder.js';
 
-/** No backup yet, or the last one older than `days` days. */
-export function backupDue(lastBackupAt: string | null, days: number, now: Date = new Date()): boolean {
-  if (lastBackupAt === null) return true;
-  const last = Date.parse(lastBackupAt);
-  return Number.isNaN(last) || now.getTime() - last > days * 86_400_000;
-}
-
-/** "today", "yesterday", "9 days ago", "never". */
-export function backupAge(lastBackupAt: string | null, now: Date = new Date()): string {
-  if (lastBackupAt === null) return 'never';
-  const days = Math.floor((now.getTime() - Date.parse(lastBackupAt)) / 86_400_000);
-  return days <= 0 ? 'today' : days === 1 ? 'yesterday' : `${days} days ago`;
-}
+export { backupAge, backupDue } from './backup-reminder.js';
 
 class Safekeeping {
   status = $state<BackupStatus | null>(null);
