@@ -7,6 +7,7 @@ import type { z } from 'zod';
 import { InputError } from '../../core/index.js';
 import { formatZodIssues } from '../backend/schemas/index.js';
 import { RecordError } from '../backend/records/types.js';
+import { storageError } from '../backend/records/storage-errors.js';
 import type { HandlerTable, OperationName } from './operation.js';
 import { ApiFailure, type ApiErrorBody, type ApiIssue, type Reply } from './reply.js';
 
@@ -22,8 +23,14 @@ export function describeIssues(issues: readonly ApiIssue[]): string {
   return issues.map((i) => `${i.path}: ${i.message}`).join('; ');
 }
 
-/** Map anything thrown by a handler to a reply body. Known errors keep their field. */
-export function errorBody(e: unknown): ApiErrorBody {
+/**
+ * Map anything thrown by a handler to a reply body. Known errors keep their field. A disk or
+ * lock error that reached here unwrapped (SQLITE_FULL, EROFS, ...) is said plainly with the
+ * database it concerns, never as "internal".
+ */
+export function errorBody(e: unknown, databasePath?: string): ApiErrorBody {
+  const storage = databasePath !== undefined ? storageError(e, databasePath, 'The last action') : null;
+  if (storage) return errorBody(storage);
   if (e instanceof ApiFailure) return e.field === undefined ? { code: e.code, message: e.message } : { code: e.code, message: e.message, field: e.field };
   if (e instanceof InputError) return { code: 'input_error', message: e.message, field: e.field };
   if (e instanceof RecordError) {
@@ -79,6 +86,7 @@ export async function dispatch<C>(table: HandlerTable<C>, ctx: C, name: string, 
     const value = await op.run(parsed.data, ctx);
     return { ok: true, value };
   } catch (e) {
-    return { ok: false, error: errorBody(e) };
+    const dbPath = typeof ctx === 'object' && ctx !== null && 'databasePath' in ctx && typeof ctx.databasePath === 'string' ? ctx.databasePath : undefined;
+    return { ok: false, error: errorBody(e, dbPath) };
   }
 }

@@ -8,9 +8,13 @@
  *   fingerprint and Ed25519 signature match its content). Any problem: nothing is written, and
  *   the error lists each path and problem.
  * - Records are matched by id. A record not present is added. A register entry (site, room,
- *   installation, eyewear, person) already present is replaced only if the imported copy is newer
- *   (updatedAt); a draft revision likewise. A signed revision already present must be identical,
- *   otherwise the import is refused: two different signed records with one id mean one was altered.
+ *   installation, eyewear, person) already present is replaced in place only if the imported copy
+ *   is newer (updatedAt, compared as instants). A signed revision already present must be
+ *   identical, otherwise the import is refused: two different signed records with one id mean one
+ *   was altered.
+ * - No draft is ever discarded: where the file and this database hold different versions of a
+ *   draft, the one that does not stay in the assessment is kept as an assessment of its own in the
+ *   same room (import-conflicts.ts) and listed in the summary.
  */
 import { z } from 'zod';
 import { ExportDocumentSchema } from '../schemas/records.js';
