@@ -4,8 +4,8 @@
  */
 import type { AppInfo } from '../../electron/api/contracts/app.js';
 import type { RegisterOverview, RoomOverview } from '../../electron/api/contracts/register.js';
-import type { Assessment, AssessmentContent, LaserInstallation, Room, Site } from '../../electron/backend/records/types.js';
-import { invoke, messageOf } from './api.js';
+import type { Assessment, AssessmentContent, LaserInstallation, Room, Site, WorkSaved } from '../../electron/backend/records/types.js';
+import { ApiError, invoke, messageOf } from './api.js';
 import { contentFrom, draftFrom, roomInputFrom, saveBlockers, type Draft } from './draft.js';
 import { completeHazards } from './hazards-catalogue.js';
 import { addDays, today } from './dates.js';
@@ -28,6 +28,8 @@ class Session {
   loadError = $state<string | null>(null);
   notice = $state<Notice | null>(null);
   busy = $state(false);
+  /** The message of a save refused because someone else saved first (null when none). */
+  stale = $state<string | null>(null);
 
   room = $state<Room | null>(null);
   site = $state<Site | null>(null);
@@ -147,29 +149,24 @@ class Session {
     return this.run(async () => {
       // One call, one transaction: new and edited register lasers together with the assessment,
       // each part naming the state it was opened at, so a stale save is refused whole.
-      const newLasers: Array<{ draftId: string; laser: LaserInput; laserType: string }> = [];
-      const changedLasers: Array<{ id: string; laser: LaserInput; expectedUpdatedAt: string }> = [];
-      for (const lf of d.lasers) {
-        const { laser: full } = laserInputFrom(lf);
-        if (!full) continue;
-        // The register keeps what the laser is; the exposure duration is an assumption of the assessment.
-        const laser = { ...full, beams: full.beams.map(({ exposureDuration_s: _t, ...b }) => b) };
-        if (lf.isNew) {
-          newLasers.push({ draftId: lf.id, laser, laserType: laser.name });
-        } else {
-          const reg = this.installations.find((i) => i.id === lf.id);
-          if (reg && JSON.stringify(reg.laser) !== JSON.stringify(laser)) changedLasers.push({ id: lf.id, laser, expectedUpdatedAt: reg.updatedAt });
-        }
-      }
+      const { newLasers, changedLasers } = this.registerChanges(d);
       const a = this.assessment;
-      const saved = await invoke('work-save', {
-        roomId: room.id,
-        assessmentId: a?.id ?? null,
-        expected: a ? { revisionId: a.current.id, version: a.version } : null,
-        content: contentFrom(d),
-        newLasers,
-        changedLasers,
-      });
+      let saved: WorkSaved;
+      try {
+        saved = await invoke('work-save', {
+          roomId: room.id,
+          assessmentId: a?.id ?? null,
+          expected: a ? { revisionId: a.current.id, version: a.version } : null,
+          content: contentFrom(d),
+          newLasers,
+          changedLasers,
+        });
+      } catch (e) {
+        // Someone else saved first: keep the officer's edits on screen and offer the two ways on.
+        if (e instanceof ApiError && e.code === 'stale') this.stale = e.message;
+        throw e;
+      }
+      this.stale = null;
       for (const lf of d.lasers) {
         const id = saved.laserIds[lf.id];
         if (lf.isNew && id !== undefined) {
@@ -182,6 +179,69 @@ class Session {
       writeLast({ roomId: room.id, assessmentId: saved.assessment.id });
       await this.refreshOverview();
       this.say('ok', `Saved: revision ${saved.assessment.current.revisionNo} (${saved.assessment.current.status}).`);
+    });
+  }
+
+  /** New and edited register lasers of the draft, each edited one with the state it was opened at. */
+  private registerChanges(d: Draft): {
+    newLasers: Array<{ draftId: string; laser: LaserInput; laserType: string }>;
+    changedLasers: Array<{ id: string; laser: LaserInput; expectedUpdatedAt: string }>;
+  } {
+    const newLasers: Array<{ draftId: string; laser: LaserInput; laserType: string }> = [];
+    const changedLasers: Array<{ id: string; laser: LaserInput; expectedUpdatedAt: string }> = [];
+    for (const lf of d.lasers) {
+      const { laser: full } = laserInputFrom(lf);
+      if (!full) continue;
+      // The register keeps what the laser is; the exposure duration is an assumption of the assessment.
+      const laser = { ...full, beams: full.beams.map(({ exposureDuration_s: _t, ...b }) => b) };
+      if (lf.isNew) {
+        newLasers.push({ draftId: lf.id, laser, laserType: laser.name });
+      } else {
+        const reg = this.installations.find((i) => i.id === lf.id);
+        if (reg && JSON.stringify(reg.laser) !== JSON.stringify(laser)) changedLasers.push({ id: lf.id, laser, expectedUpdatedAt: reg.updatedAt });
+      }
+    }
+    return { newLasers, changedLasers };
+  }
+
+  /**
+   * After a refused (stale) save: keep the officer's version as an assessment of its own in the
+   * room (new lasers go into the register with it), then open the stored version, so the two can
+   * be compared side by side and nothing typed is lost.
+   */
+  async keepMineAndReload(): Promise<void> {
+    const d = this.draft;
+    const room = this.room;
+    const a = this.assessment;
+    if (!d || !room || !a) return;
+    await this.run(async () => {
+      const { newLasers } = this.registerChanges(d);
+      const content = contentFrom(d);
+      const suffix = ' — your version, kept when your save was refused';
+      const kept = await invoke('work-save', {
+        roomId: room.id,
+        assessmentId: null,
+        expected: null,
+        content: { ...content, title: content.title.slice(0, 300 - suffix.length) + suffix },
+        newLasers,
+        changedLasers: [],
+      });
+      this.stale = null;
+      this.installations = [...kept.installations];
+      this.setAssessment(await invoke('assessment-get', { id: a.id }));
+      await this.refreshOverview();
+      this.say('ok', `Your version is kept as "${kept.assessment.current.content.title}"; the stored version is open. Compare the two in the room's list.`);
+    });
+  }
+
+  /** After a refused save: open the stored version, discarding the edits on screen (asked first). */
+  async reloadDiscardingMine(): Promise<void> {
+    if (!window.confirm('Discard your unsaved changes and open the stored version?')) return;
+    this.stale = null;
+    const a = this.assessment;
+    if (!a) return;
+    await this.run(async () => {
+      this.setAssessment(await invoke('assessment-get', { id: a.id }));
     });
   }
 

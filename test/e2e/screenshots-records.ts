@@ -1,8 +1,8 @@
 /**
  * PNGs of the record-keeping screens for a person to look at (not part of `npm test`):
  *   npm run build && tsx test/e2e/screenshots-records.ts -> test/artifacts/screens/2*.png
- * The backup reminder, the Backups panel before and after "Back up now", and the message of a
- * stale save from a second browser tab. Loopback host on a temporary database with the demo site.
+ * The backup reminder, the Backups panel before and after "Back up now", and a stale save from a
+ * second browser tab with the officer's version kept as a copy. Loopback host on a temporary database with the demo site.
  */
 import { mkdirSync } from 'node:fs';
 import path from 'node:path';
@@ -57,8 +57,14 @@ async function main(): Promise<void> {
     const nameB = b.locator('input[id$="-name"]').first();
     await nameB.fill('Telecom bench laser (renamed in tab B)');
     await b.getByRole('button', { name: 'Save', exact: true }).click();
-    await b.getByText(/changed by someone else/).waitFor();
+    await b.getByTestId('stale-save').waitFor();
     await shot(b, '23-stale-save');
+    await b.getByRole('button', { name: 'Keep my version as a copy, open the stored one' }).click();
+    await b.getByText(/Your version is kept as/).waitFor();
+    await b.keyboard.press('Alt+1');
+    await b.getByRole('heading', { name: 'Register' }).waitFor();
+    await b.getByRole('button', { name: /^A0\.07/ }).click();
+    await shot(b, '24-stale-save-kept');
   } finally {
     await ctx.close();
     await host.stop();
