@@ -46,6 +46,8 @@ export interface LimitCandidate {
   readonly fieldOfViewFactor?: string;
   /** Aperture over which exposure is averaged for this candidate. */
   readonly aperture: ApertureResult;
+  /** Set when the row's "not to exceed" irradiance cap lowered the value (W/m², source). */
+  readonly cap?: { readonly E_Wm2: string; readonly uncappedH_Jm2: string; readonly source: string; readonly confidence: string; readonly conservative: boolean };
 }
 
 export interface ExposureLimitResult {
@@ -202,6 +204,15 @@ function evaluateRow(ctx: Ctx, row: LimitRow, tableTissue: Tissue, apertureTissu
       H = H.mul(fov);
     }
   }
+  // "Not to exceed" cap on the mean irradiance (EU Table 2.3 note for 700-1400 nm extended sources).
+  let cap: LimitCandidate['cap'];
+  if (row.max_E && (!row.max_E.conservativeOnly || conservativeOn(ctx.settings, row.id))) {
+    const capH = evaluate(row.max_E.value, vars).mul(ctx.t);
+    if (capH.lt(H)) {
+      cap = { E_Wm2: row.max_E.value, uncappedH_Jm2: recordString(H), source: row.max_E.source, confidence: row.max_E.confidence, conservative: row.max_E.conservativeOnly === true };
+      H = capH;
+    }
+  }
   // Same tissue, wavelength and duration for every candidate: look the aperture up once per tissue.
   let aperture = ctx.apertures.get(apertureTissue);
   if (!aperture) {
@@ -222,6 +233,7 @@ function evaluateRow(ctx: Ctx, row: LimitRow, tableTissue: Tissue, apertureTissu
     aperture,
     ...(remembered ? { rememberedH_Jm2: recordString(remembered) } : {}),
     ...(fov ? { fieldOfViewFactor: recordString(fov) } : {}),
+    ...(cap ? { cap } : {}),
   };
   return c;
 }
@@ -260,7 +272,7 @@ export function exposureLimit(q: ExposureLimitQuery): ExposureLimitResult {
   };
 
   const conservativeReplacements = [
-    ...candidates.filter((c) => c.conservativeApplied).map((c) => c.rowId),
+    ...candidates.filter((c) => c.conservativeApplied || c.cap?.conservative === true).map((c) => c.rowId),
     ...FACTOR_ORDER.filter((n) => hasConservativePiece(table, n))
       .map((n) => f.get(n))
       .filter((v): v is FactorValue => v !== undefined && v.conservativeApplied)
@@ -298,7 +310,7 @@ export function exposureLimit(q: ExposureLimitQuery): ExposureLimitResult {
   }
   for (const c of candidates) {
     addStep(trace, {
-      kind: c.conservativeApplied ? 'conservative' : 'row',
+      kind: c.conservativeApplied || c.cap?.conservative === true ? 'conservative' : 'row',
       label: `Row ${c.rowId} (${c.effect})`,
       detail:
         `${c.quantity === 'E' ? 'E = ' : 'H = '}${c.expr} = ${c.substituted}` +
@@ -306,6 +318,9 @@ export function exposureLimit(q: ExposureLimitQuery): ExposureLimitResult {
         (c.fieldOfViewFactor ? `, times (alpha/gamma_p)^2 = ${fmt(new Dec(c.fieldOfViewFactor))} for a source larger than gamma_p (derived)` : '') +
         (c.conservativeApplied
           ? `; unverified entry: remembered value H = ${fmt(new Dec(c.rememberedH_Jm2 as string))} J/m² replaced by the stricter value (conservative mode)`
+          : '') +
+        (c.cap
+          ? `; not to exceed ${c.cap.E_Wm2} W/m²: ${fmt(new Dec(c.cap.uncappedH_Jm2).div(t))} W/m² capped to ${c.cap.E_Wm2} W/m² (H = ${fmt(new Dec(c.H_Jm2))} J/m²; ${c.cap.source})${c.cap.conservative ? ' (conservative mode)' : ''}`
           : ''),
       value: fmt(new Dec(c.H_Jm2)),
       unit: 'J/m²',
