@@ -154,7 +154,7 @@ interface Ctx {
   /** lambda and t as plain numbers, for the quick reject in rowApplies only. */
   readonly lambdaN: number;
   readonly tN: number;
-  readonly apertures: Map<Tissue, ApertureResult>;
+  readonly apertures: Map<string, ApertureResult>;
 }
 
 function candidatesFor(ctx: Ctx, tableTissue: Tissue, followRefs: boolean, onlyNonRetinal: boolean, apertureTissue: Tissue): LimitCandidate[] {
@@ -213,11 +213,14 @@ function evaluateRow(ctx: Ctx, row: LimitRow, tableTissue: Tissue, apertureTissu
       H = capH;
     }
   }
-  // Same tissue, wavelength and duration for every candidate: look the aperture up once per tissue.
-  let aperture = ctx.apertures.get(apertureTissue);
+  // Each candidate row over its own limiting aperture: at an exact band or duration edge the rows on
+  // either side can have different apertures (limit specification errata), and the hazard code takes
+  // the largest hazard over all candidates. Looked up once per tissue and row stretch.
+  const apKey = `${apertureTissue}:${row.band_nm.join('-')}:${row.t_s.join('-')}`;
+  let aperture = ctx.apertures.get(apKey);
   if (!aperture) {
-    aperture = limitingAperture(ctx.ruleSet, apertureTissue, ctx.lambda, ctx.t, ctx.settings);
-    ctx.apertures.set(apertureTissue, aperture);
+    aperture = limitingAperture(ctx.ruleSet, apertureTissue, ctx.lambda, ctx.t, ctx.settings, { band_nm: row.band_nm, t_s: row.t_s });
+    ctx.apertures.set(apKey, aperture);
   }
   const c: LimitCandidate = {
     rowId: row.id,
@@ -346,6 +349,16 @@ export function exposureLimit(q: ExposureLimitQuery): ExposureLimitResult {
     source: governing.aperture.source,
     confidence: governing.aperture.confidence,
   });
+  const apertureSizes = new Set(candidates.map((c) => c.aperture.diameter_mm));
+  if (apertureSizes.size > 1) {
+    addStep(trace, {
+      kind: 'note',
+      label: 'Apertures per row',
+      detail: `the rows apply over different limiting apertures (${candidates.map((c) => `${c.rowId}: ${c.aperture.diameter_mm} mm`).join('; ')}); each row is compared with the exposure over its own aperture and the hazard distance and optical density take the largest result`,
+      source: 'limit specification errata (apertures at an exact edge)',
+      confidence: 'read',
+    });
+  }
   const Hr = roundSig(H, 3, 'down');
   const Er = roundSig(E, 3, 'down');
   addStep(trace, { kind: 'rounding', label: 'Reported', detail: 'limits are rounded DOWN to 3 significant figures (the safe direction)', value: `${Hr.toString()} J/m²; ${Er.toString()} W/m²` });
