@@ -13,7 +13,7 @@ import { InputError, requireInRange } from '../errors.js';
 import type { LimitSettings, RuleSetId, Tissue } from '../model/inputs.js';
 import { addStep, newTrace, type Trace } from '../trace/trace.js';
 import { condition, evaluate, substitute, variablesOf } from './expression.js';
-import { conservativeOn, evaluateFactors, FACTOR_ORDER, type FactorSet, type FactorValue } from './factors.js';
+import { conservativeOn, evaluateFactors, FACTOR_ORDER, onFactorEdge, type FactorSet, type FactorValue } from './factors.js';
 import { DEFAULT_RULE_SET, DURATION_RANGE_S, RULE_SET_IDS, RULE_SET_NAME, ruleSetTable, WAVELENGTH_RANGE_NM } from './rule-sets.js';
 import type { Interval, LimitRow, RuleSetTable } from './table-types.js';
 import { limitingAperture, type ApertureResult } from './apertures.js';
@@ -46,6 +46,8 @@ export interface LimitCandidate {
   readonly fieldOfViewFactor?: string;
   /** Aperture over which exposure is averaged for this candidate. */
   readonly aperture: ApertureResult;
+  /** Set when the point is on a factor edge and the factors of the piece ending there gave this (lower) value. */
+  readonly factorsFromBelow?: true;
   /** Set when the row's "not to exceed" irradiance cap lowered the value (W/m², source). */
   readonly cap?: { readonly E_Wm2: string; readonly uncappedH_Jm2: string; readonly source: string; readonly confidence: string; readonly conservative: boolean };
 }
@@ -254,6 +256,19 @@ export function exposureLimit(q: ExposureLimitQuery): ExposureLimitResult {
   const f = evaluateFactors(table, lambda, t, alphaForFactors, settings);
   const ctx: Ctx = { table, ruleSet, lambda, t, f, settings, tissue: q.tissue, lambdaN: lambda.toNumber(), tN: t.toNumber(), apertures: new Map() };
   const candidates = candidatesFor(ctx, q.tissue, true, false, q.tissue);
+  if (onFactorEdge(table, lambda, t)) {
+    // Exactly on an edge between factor pieces (C_C at 1200 nm, T_min bands ...): the factors of the
+    // piece ending here are evaluated too, and for each row the lower value is kept (EU Table 2.2
+    // note a applied to the factors; limit specification errata on the T_min bands).
+    const fBelow = evaluateFactors(table, lambda, t, alphaForFactors, settings, 'lower');
+    const below = candidatesFor({ ...ctx, f: fBelow }, q.tissue, true, false, q.tissue);
+    for (const b of below) {
+      const i = candidates.findIndex((c) => c.rowId === b.rowId);
+      const c = candidates[i];
+      if (!c) candidates.push({ ...b, factorsFromBelow: true });
+      else if (new Dec(b.H_Jm2).lt(c.H_Jm2)) candidates[i] = { ...b, factorsFromBelow: true };
+    }
+  }
   if (candidates.length === 0) {
     throw new InputError('not_covered', 'wavelength_nm', q.wavelength_nm, `a band of rule set ${ruleSet} at ${t.toString()} s`);
   }
@@ -322,6 +337,7 @@ export function exposureLimit(q: ExposureLimitQuery): ExposureLimitResult {
         (c.conservativeApplied
           ? `; unverified entry: remembered value H = ${fmt(new Dec(c.rememberedH_Jm2 as string))} J/m² replaced by the stricter value (conservative mode)`
           : '') +
+        (c.factorsFromBelow ? '; factors taken from the piece ending at this exact edge, which gives the lower value (EU Table 2.2 note a)' : '') +
         (c.cap
           ? `; not to exceed ${c.cap.E_Wm2} W/m²: ${fmt(new Dec(c.cap.uncappedH_Jm2).div(t))} W/m² capped to ${c.cap.E_Wm2} W/m² (H = ${fmt(new Dec(c.H_Jm2))} J/m²; ${c.cap.source})${c.cap.conservative ? ' (conservative mode)' : ''}`
           : ''),

@@ -27,3 +27,15 @@ describe('apertures at an exact band edge (through evaluateBeam)', () => {
     expect(JSON.stringify(dir?.trace)).toMatch(/H-E-IR1400-long \(cornea thermal\), aperture 3\.5 mm/);
   });
 });
+
+// The same pattern in the correction factors: a factor whose pieces meet at an exact edge with
+// different values is evaluated on both sides and the lower limit is kept (EU Table 2.2 note a).
+// C_C (set (a), from memory): 10^(0.018*(lambda - 1150)) up to 1200 nm = 7.943 at 1200, then 8.
+describe('correction factors at an exact edge (through evaluateBeam)', () => {
+  it('set (a) 1200 nm, 1 ms: H = 90*t^0.75*C_C with C_C = 10^0.9 = 7.943 from below, 4.0202 J/m² (not 4.0489 with 8)', () => {
+    const r = evaluateBeam(at('icnirp2013', 1200, 1e-3, 1));
+    // derived: 90 * (1e-3)^0.75 * 10^0.9 = 90 * 5.6234e-3 * 7.9433
+    expect(Math.abs(Number(r.mpe.H_Jm2) / 4.020178 - 1)).toBeLessThan(1e-5);
+    expect(JSON.stringify(r.trace)).toMatch(/piece ending at this exact edge/);
+  });
+});
