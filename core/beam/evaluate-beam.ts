@@ -151,12 +151,40 @@ function evaluateValid(input: BeamInput, ruleSet: RuleSetId, settings: LimitSett
 
   let nhzDiffuse: Dec | null = null;
   if (v.diffuse) {
-    const d = diffuseDistance(eye, m, v.diffuse);
-    distances.push(d.result);
-    trace.children.push(d.result.trace);
-    nhzDiffuse = d.r;
-    if (d.viewer && d.viewer.ratio.gt(1)) {
-      warnings.push(`Diffuse reflection: ${fmt(d.viewer.distance_m)} m from the surface the exposure is ${fmt(d.viewer.ratio)} times the limit (OD ${fmt(d.viewer.od)} needed for diffuse viewing there).`);
+    // Two viewing cases (decision recorded in SAFETY.md): accidental viewing over the beam's exposure
+    // duration, and deliberate viewing of the spot (alignment on a card or screen) over a long
+    // duration, 600 s by default (customary for deliberate viewing of diffuse reflections, from
+    // memory). Both are shown; the officer says which governs, else the larger distance does.
+    const Td = v.diffuse.deliberateDuration_s ?? 600;
+    const deliberateWhy = v.diffuse.deliberateDuration_s !== undefined ? 'deliberate viewing of the diffuse spot, given by the caller' : 'deliberate viewing of the diffuse spot: 600 s (customary value, from memory)';
+    const eyeDeliberate = tissueLimits({ ...base, tissue: 'eye', exposureDuration_s: Td, durationWhy: deliberateWhy });
+    const acc = diffuseDistance(eye, m, v.diffuse);
+    const del = diffuseDistance(eyeDeliberate, m, v.diffuse);
+    const choice = v.diffuse.governs ?? (del.r.gt(acc.r) ? 'deliberate' : 'accidental');
+    const why = v.diffuse.governs !== undefined ? 'chosen by the officer' : 'the larger distance (no choice given)';
+    const cases = [
+      { o: acc, viewing: 'accidental' as const, T: eye.summary.exposureDuration_s, lim: eye },
+      { o: del, viewing: 'deliberate' as const, T: eyeDeliberate.summary.exposureDuration_s, lim: eyeDeliberate },
+    ];
+    for (const c of cases) {
+      const governs = c.viewing === choice;
+      const t = c.o.result.trace;
+      if (c.viewing === 'deliberate') t.children.unshift(eyeDeliberate.trace);
+      addStep(t, {
+        kind: 'assumption',
+        label: 'Viewing case',
+        detail: `${c.viewing === 'accidental' ? 'accidental viewing' : 'deliberate viewing of the spot'} over ${fmt(new Dec(c.T))} s (${c.lim.summary.durationWhy}); ${governs ? `this case governs: ${why}` : `shown for comparison; the ${choice} case governs (${why})`}`,
+        confidence: c.viewing === 'deliberate' && v.diffuse.deliberateDuration_s === undefined ? 'from memory' : 'common practice',
+      });
+      distances.push({ ...c.o.result, label: `${c.o.result.label}, ${c.viewing} viewing (${fmt(new Dec(c.T))} s)`, viewing: c.viewing, exposureDuration_s: c.T, governs });
+      trace.children.push(t);
+      if (governs) {
+        nhzDiffuse = c.o.r;
+        const d = c.o;
+        if (d.viewer && d.viewer.ratio.gt(1)) {
+          warnings.push(`Diffuse reflection (${c.viewing} viewing, ${fmt(new Dec(c.T))} s): ${fmt(d.viewer.distance_m)} m from the surface the exposure is ${fmt(d.viewer.ratio)} times the limit (OD ${fmt(d.viewer.od)} needed for diffuse viewing there).`);
+        }
+      }
     }
   }
   if (v.specular) {
@@ -224,7 +252,7 @@ function evaluateValid(input: BeamInput, ruleSet: RuleSetId, settings: LimitSett
   const { bounds, trace: bTrace } = computeBounds(input, ruleSet, settings, nominal);
   trace.children.push(bTrace);
 
-  const largest = maxOf(distances.filter((d) => d.kind !== 'skin').map((d) => new Dec(d.distance_m)));
+  const largest = maxOf(distances.filter((d) => d.kind !== 'skin' && d.governs !== false).map((d) => new Dec(d.distance_m)));
   addStep(trace, {
     kind: 'result',
     label: 'Summary',

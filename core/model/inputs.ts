@@ -66,6 +66,14 @@ export interface ViewingConditions {
     readonly targetDistance_m?: number;
     /** Distance from the reflecting surface to a viewer to assess (e.g. a person at the table), metres. */
     readonly viewerDistance_m?: number;
+    /**
+     * Viewing duration for someone deliberately looking at the diffuse spot (alignment on a card or
+     * screen), seconds; default 600 s (customary for deliberate viewing of diffuse reflections,
+     * from memory). Both cases are evaluated and shown.
+     */
+    readonly deliberateDuration_s?: number;
+    /** Which case the officer takes as governing; default: the one with the larger distance. */
+    readonly governs?: 'accidental' | 'deliberate';
   };
   readonly specular?: { readonly reflectance: number; readonly pathToSurface_m?: number };
   readonly lens?: { readonly focalLength_m: number; readonly beamDiameterAtLens_m?: number };
