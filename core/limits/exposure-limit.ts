@@ -46,6 +46,8 @@ export interface LimitCandidate {
   readonly fieldOfViewFactor?: string;
   /** Aperture over which exposure is averaged for this candidate. */
   readonly aperture: ApertureResult;
+  /** An uncertain row's less strict reading: used once the row is verified with it, else kept aside (stricter value used). */
+  readonly relaxed?: { readonly used: boolean; readonly H_Jm2: string; readonly expr: string; readonly source: string; readonly keptH_Jm2: string };
   /** Set when the point is on a factor edge and the factors of the piece ending there gave this (lower) value. */
   readonly factorsFromBelow?: true;
   /** Set when the row's "not to exceed" irradiance cap lowered the value (W/m², source). */
@@ -194,6 +196,19 @@ function evaluateRow(ctx: Ctx, row: LimitRow, tableTissue: Tissue, apertureTissu
       conservativeApplied = true;
     }
   }
+  // A less strict reading of an uncertain row: kept aside until the row is verified with it.
+  let relaxed: LimitCandidate['relaxed'];
+  if (row.relaxed_alt && condition(row.relaxed_alt.when, vars)) {
+    const alt = toH(evaluate(row.relaxed_alt.expr, vars));
+    if (alt.gt(H)) {
+      const used = (ctx.settings?.verifiedRows ?? []).includes(row.id);
+      relaxed = { used, H_Jm2: recordString(alt), expr: row.relaxed_alt.expr, source: row.relaxed_alt.source, keptH_Jm2: recordString(H) };
+      if (used) {
+        H = alt;
+        expr = row.relaxed_alt.expr;
+      }
+    }
+  }
   // Photochemical limits are measured within the field of view gamma_p: for a uniform source larger
   // than gamma_p only the fraction (gamma_p/alpha)^2 of its irradiance counts, which is the same as
   // raising the limit by (alpha/gamma_p)^2 (derived; limit specification sections 4.2 and 8).
@@ -239,6 +254,7 @@ function evaluateRow(ctx: Ctx, row: LimitRow, tableTissue: Tissue, apertureTissu
     ...(remembered ? { rememberedH_Jm2: recordString(remembered) } : {}),
     ...(fov ? { fieldOfViewFactor: recordString(fov) } : {}),
     ...(cap ? { cap } : {}),
+    ...(relaxed ? { relaxed } : {}),
   };
   return c;
 }
@@ -290,7 +306,7 @@ export function exposureLimit(q: ExposureLimitQuery): ExposureLimitResult {
   };
 
   const conservativeReplacements = [
-    ...candidates.filter((c) => c.conservativeApplied || c.cap?.conservative === true).map((c) => c.rowId),
+    ...candidates.filter((c) => c.conservativeApplied || c.cap?.conservative === true || (c.relaxed !== undefined && !c.relaxed.used && conservativeOn(settings, c.rowId))).map((c) => c.rowId),
     ...FACTOR_ORDER.filter((n) => hasConservativePiece(table, n))
       .map((n) => f.get(n))
       .filter((v): v is FactorValue => v !== undefined && v.conservativeApplied)
@@ -336,6 +352,11 @@ export function exposureLimit(q: ExposureLimitQuery): ExposureLimitResult {
         (c.fieldOfViewFactor ? `, times (alpha/gamma_p)^2 = ${fmt(new Dec(c.fieldOfViewFactor))} for a source larger than gamma_p (derived)` : '') +
         (c.conservativeApplied
           ? `; unverified entry: remembered value H = ${fmt(new Dec(c.rememberedH_Jm2 as string))} J/m² replaced by the stricter value (conservative mode)`
+          : '') +
+        (c.relaxed
+          ? c.relaxed.used
+            ? `; verified with the alternative reading ${c.relaxed.expr} (${c.relaxed.source}): H = ${fmt(new Dec(c.relaxed.H_Jm2))} J/m² used instead of ${fmt(new Dec(c.relaxed.keptH_Jm2))} J/m²`
+            : `; uncertain entry: alternative reading ${c.relaxed.expr} = ${fmt(new Dec(c.relaxed.H_Jm2))} J/m² (${c.relaxed.source}) not used, the stricter ${fmt(new Dec(c.relaxed.keptH_Jm2))} J/m² is kept until the row is verified`
           : '') +
         (c.factorsFromBelow ? '; factors taken from the piece ending at this exact edge, which gives the lower value (EU Table 2.2 note a)' : '') +
         (c.cap

@@ -49,6 +49,12 @@ export interface LimitRow {
    * row is unverified and conservative mode is on (a cap borrowed from the stricter rule set).
    */
   readonly max_E?: { readonly value: string; readonly source: string; readonly confidence: string; readonly conservativeOnly?: boolean };
+  /**
+   * A less strict reading of an uncertain row (for example an older edition), in the row's quantity,
+   * where 'when' holds. The stricter expr is kept until a named person verifies the row with this
+   * reading (settings.verifiedRows holds the row id); the trace always names it.
+   */
+  readonly relaxed_alt?: { readonly expr: string; readonly when: string; readonly source: string; readonly confidence: string };
 }
 
 export interface ApertureRow {

@@ -387,7 +387,13 @@ export const ICNIRP2013_TABLE: RuleSetTable = {
       "unit": "J/m^2",
       "effect": "UV-A lens (photochemical)",
       "source": "ICNIRP2013; IEC2014 Annex A; ANSI2014 Tab. 5a (all from memory); same as EU Tab. 2.3 (from memory)",
-      "confidence": "from memory"
+      "confidence": "from memory, uncertain",
+      "relaxed_alt": {
+        "expr": "10*t",
+        "when": "t > 1000",
+        "source": "older editions (from memory): E = 10 W/m² from 1000 s to 30 000 s (limit specification errata); used only once the row is verified with that reading",
+        "confidence": "from memory, uncertain"
+      }
     },
     {
       "id": "H-E-VIS-1",
