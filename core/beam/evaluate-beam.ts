@@ -134,6 +134,16 @@ function evaluateValid(input: BeamInput, ruleSet: RuleSetId, settings: LimitSett
   const eye: TissueLimits = tissueLimits({ ...base, tissue: 'eye', exposureDuration_s: T, durationWhy });
   const skin: TissueLimits = tissueLimits({ ...base, tissue: 'skin', exposureDuration_s: skinT, durationWhy: skinWhy });
   for (const w of eye.warnings) warnings.push(w);
+  if (input.emission.kind === 'pulsed' && input.emission.pulseDuration_s < 1e-13) {
+    // Decision (SAFETY.md): the tables stop at 100 fs; the 100 fs limit is kept and, in conservative
+    // mode, scaled by t/1e-13 (read as a peak irradiance held constant, ours). Flagged at the top of the trace.
+    addStep(trace, {
+      kind: 'warning',
+      label: 'Pulse shorter than 100 fs',
+      detail: `pulse duration ${formatSI(String(input.emission.pulseDuration_s), 's')} is below the shortest row of the limit tables (100 fs); ${eye.shortPulseFactor.lt(1) ? `the 100 fs limits are scaled by t/1e-13 = ${fmt(eye.shortPulseFactor)} (conservative mode, ours)` : 'the 100 fs limits are used unchanged (conservative mode off)'}; no standard gives limits this short, verify with the laser safety officer`,
+      confidence: 'ours',
+    });
+  }
   const replaced = [...new Set([...eye.summary.conservativeReplacements, ...skin.summary.conservativeReplacements])].filter((x) => x !== 'pulse-shorter-than-tables');
   if (replaced.length) {
     warnings.push(`Conservative mode: unverified limit-table entries were replaced by stricter values (${replaced.join(', ')}); the limits may be lower than the published ones until verified.`);
