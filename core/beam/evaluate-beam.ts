@@ -16,6 +16,7 @@ import { addStep, newTrace } from '../trace/trace.js';
 import { beamModel, describeBeam, type BeamModel } from './beam-model.js';
 import { tissueLimits, type TissueLimits } from './tissue-limits.js';
 import { validateBeamInput } from './validate-beam.js';
+import { withLargeSkinArea } from './skin-large-area.js';
 import { distanceReported, fmt, maxOf, rec } from './format.js';
 import { computeBounds } from './bounds.js';
 import { distanceOver } from '../hazard/distance.js';
@@ -132,7 +133,8 @@ function evaluateValid(input: BeamInput, ruleSet: RuleSetId, settings: LimitSett
     ...(settings !== undefined ? { settings } : {}),
   };
   const eye: TissueLimits = tissueLimits({ ...base, tissue: 'eye', exposureDuration_s: T, durationWhy });
-  const skin: TissueLimits = tissueLimits({ ...base, tissue: 'skin', exposureDuration_s: skinT, durationWhy: skinWhy });
+  const large = withLargeSkinArea(tissueLimits({ ...base, tissue: 'skin', exposureDuration_s: skinT, durationWhy: skinWhy }), lambda, skinT, input.emission, input.skinArea_m2);
+  const skin: TissueLimits = large.skin;
   for (const w of eye.warnings) warnings.push(w);
   if (input.emission.kind === 'pulsed' && input.emission.pulseDuration_s < 1e-13) {
     // Decision (SAFETY.md): the tables stop at 100 fs; the 100 fs limit is kept and, in conservative
@@ -149,6 +151,7 @@ function evaluateValid(input: BeamInput, ruleSet: RuleSetId, settings: LimitSett
     warnings.push(`Conservative mode: unverified limit-table entries were replaced by stricter values (${replaced.join(', ')}); the limits may be lower than the published ones until verified.`);
   }
   trace.children.push(eye.trace, skin.trace);
+  if (large.trace) trace.children.push(large.trace);
 
   const v = input.viewing ?? {};
   const mu = v.attenuation_per_m !== undefined && v.attenuation_per_m > 0 ? new Dec(v.attenuation_per_m) : undefined;

@@ -87,6 +87,7 @@ export function validateBeamInput(input: unknown, prefix = '', roomRuleSet?: Rul
     }
   }
   if (b['sourceAngle_rad'] !== undefined) requireInRange(p('sourceAngle_rad'), b['sourceAngle_rad'], 0, Math.PI, 'rad');
+  if (b['skinArea_m2'] !== undefined) requireInRange(p('skinArea_m2'), b['skinArea_m2'], 0, 10, 'm² (irradiated skin area)');
 
   if (b['viewing'] !== undefined) validateViewing(requireObject(p('viewing'), b['viewing']), p('viewing.'));
   if (b['tolerances'] !== undefined) {

@@ -98,6 +98,11 @@ export interface BeamInput {
   /** Angular subtense of the apparent source, radians; default point source. */
   readonly sourceAngle_rad?: number;
   readonly viewing?: ViewingConditions;
+  /**
+   * Irradiated skin area, m² (optional): above 0.01 m², for t > 10 s at 1400 nm - 1 mm, the skin
+   * limit is reduced to 10/A_s W/m² (100 W/m² from 0.1 m²).
+   */
+  readonly skinArea_m2?: number;
   readonly tolerances?: InputTolerances;
   readonly settings?: LimitSettings;
 }

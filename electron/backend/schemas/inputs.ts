@@ -113,6 +113,7 @@ export const BeamInputSchema = z.strictObject({
   exposureDuration_s: positive('s').optional(),
   sourceAngle_rad: nonNegative('rad').optional(),
   viewing: ViewingConditionsSchema.optional(),
+  skinArea_m2: nonNegative('m²').max(10, 'must be at most 10 m² (irradiated skin area)').optional(),
   tolerances: InputTolerancesSchema.optional(),
   settings: LimitSettingsSchema.optional(),
 });
