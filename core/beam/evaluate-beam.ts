@@ -25,7 +25,11 @@ import { diffuseDistance } from '../hazard/diffuse.js';
 import { requiredOd, type OdOutcome } from '../eyewear/od.js';
 import { en207Requirements } from '../eyewear/en207.js';
 import { en208Requirement } from '../eyewear/en208.js';
-import { estimateClass } from '../classes/estimate.js';
+import { classRank, estimateClass } from '../classes/estimate.js';
+import { onBandEdge } from '../limits/rule-sets.js';
+
+/** Band edges of the class estimate's own tables (core/classes/aels.ts). */
+const CLASS_BAND_EDGES_NM: readonly number[] = [302.5, 400, 700, 1050, 1400, 4000];
 
 export interface BeamContext {
   /** Path prefix for field names in errors, e.g. 'lasers[2].beams[0].'. */
@@ -258,7 +262,25 @@ function evaluateValid(input: BeamInput, ruleSet: RuleSetId, settings: LimitSett
   for (const s of scaleNumbers) addStep(snTrace, { kind: s.applies ? 'result' : 'note', label: s.mode, detail: s.note, value: s.applies ? `${s.mode === 'RB' ? 'RB' : 'LB'}${s.scale}` : 'n/a' });
   trace.children.push(snTrace);
 
-  const classEstimate = estimateClass({ ruleSet, wavelength_nm: lambda, emission: input.emission, model: m, ...(input.sourceAngle_rad !== undefined ? { sourceAngle_rad: input.sourceAngle_rad } : {}), ...(settings !== undefined ? { settings } : {}) });
+  const classQuery = { ruleSet, emission: input.emission, model: m, ...(input.sourceAngle_rad !== undefined ? { sourceAngle_rad: input.sourceAngle_rad } : {}), ...(settings !== undefined ? { settings } : {}) };
+  let classEstimate = estimateClass({ ...classQuery, wavelength_nm: lambda });
+  if (onBandEdge(ruleSet, lambda) || CLASS_BAND_EDGES_NM.includes(lambda)) {
+    // Exactly on a band edge (400 nm: ultraviolet and visible rows; 700 nm; 1400 nm ...) the class
+    // bands of both sides meet: the estimate is taken just beside the edge on either side as well,
+    // and the highest class is reported (the safe side; the same rule as for the limits).
+    for (const side of [lambda * (1 - 1e-8), lambda * (1 + 1e-8)]) {
+      let other;
+      try {
+        other = estimateClass({ ...classQuery, wavelength_nm: side });
+      } catch {
+        continue; // beside the ends of the tables
+      }
+      if (classRank(other.estimate) > classRank(classEstimate.estimate)) {
+        addStep(other.trace, { kind: 'note', label: 'Band edge', detail: `${lambda} nm is exactly on a band edge: the estimate just beside it (${side.toPrecision(10)} nm) is the higher one and is reported`, confidence: 'ours' });
+        classEstimate = { ...other, decidedBy: `${other.decidedBy} (band edge at ${lambda} nm, evaluated on both sides)` };
+      }
+    }
+  }
   trace.children.push(classEstimate.trace);
 
   const nominal = { nohd: direct.r, od: od.od, limitE: new Dec(eye.summary.E_Wm2) };

@@ -48,3 +48,26 @@ describe('EU T_min bands at an exact edge (through evaluateBeam)', () => {
     expect(JSON.stringify(r.trace)).toMatch(/T_min = 1\.8e-5 s/);
   });
 });
+
+// The class estimate had the same pattern: exactly at 400 nm only the visible class bands were used,
+// although the ultraviolet rows apply there too (limit rows H-E-UVA-long and H-E-VIS-*).
+describe('class estimate at an exact band edge (through evaluateBeam)', () => {
+  const blue = (wavelength_nm: number): BeamInput => ({ wavelength_nm, emission: { kind: 'cw', power_W: 8e-4 }, beam: { diameter_m: 0.006, divergence_rad: 5e-4, definition: '1/e' } });
+  it('400 nm, 0.8 mW: 3B as just below the edge (was 2)', () => {
+    // derived: below 400 nm the Class 1 AEL is the 30 000 s UV-A limit 1e4/3e4 W/m² over the 1 mm
+    // aperture (conservative mode) = 0.26 uW; 0.8 mW is far above 5x that (Class 3R), hence 3B
+    expect(evaluateBeam(blue(400 * (1 - 1e-8))).classEstimate.estimate).toBe('3B');
+    expect(evaluateBeam(blue(400)).classEstimate.estimate).toBe('3B');
+  });
+  it('the class at every band edge is at least the class just beside it (both rule sets, 1 mW to 1 W)', () => {
+    const rank = ['1', '1M', '2', '2M', '3R', '3B', '4'];
+    for (const ruleSet of ['icnirp2013', 'eu2006'] as const) {
+      for (const edge of [302.5, 315, 400, 700, 1050, 1400, 1500, 1800, 2600]) {
+        for (const P of [1e-3, 3e-2, 1]) {
+          const x = (l: number): number => rank.indexOf(evaluateBeam({ ...blue(l), ruleSet, emission: { kind: 'cw', power_W: P } }).classEstimate.estimate);
+          expect(x(edge), `${ruleSet} ${edge} nm ${P} W`).toBeGreaterThanOrEqual(Math.max(x(edge * (1 - 1e-8)), x(edge * (1 + 1e-8))));
+        }
+      }
+    }
+  });
+});
