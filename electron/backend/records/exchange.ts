@@ -177,7 +177,23 @@ export function parseExportDocument(input: unknown): ExportDocument {
   }
   const r = ExportDocumentSchema.safeParse(value);
   if (!r.success) throw invalid(formatZodIssues(r.error));
+  rawOf.set(r.data, value);
   return r.data;
+}
+
+/** The document as it was in the file (before the schema rebuilt its objects), by parsed document. */
+const rawOf = new WeakMap<object, unknown>();
+
+/**
+ * The results of revision `ri` of assessment `ai` as written in the file, when they are the same
+ * values as the checked ones: stored so, a re-export gives the file's bytes back (the schema's
+ * parse rebuilds objects in its own key order).
+ */
+function fileResults(doc: ExportDocument, ai: number, ri: number): unknown {
+  const raw = rawOf.get(doc) as { assessments?: Array<{ revisions?: Array<{ results?: unknown }> }> } | undefined;
+  const results = raw?.assessments?.[ai]?.revisions?.[ri]?.results;
+  const checked = doc.assessments[ai]?.revisions[ri]?.results;
+  return results !== undefined && canonicalJson(results) === canonicalJson(checked) ? results : checked;
 }
 
 function crossCheck(ctx: StoreContext, doc: ExportDocument): ImportIssue[] {
@@ -273,14 +289,14 @@ function crossCheck(ctx: StoreContext, doc: ExportDocument): ImportIssue[] {
 
 const same = (a: unknown, b: unknown) => canonicalJson(a) === canonicalJson(b);
 
-function revisionRow(r: Revision): RevisionRow {
+function revisionRow(r: Revision, results: unknown = r.results): RevisionRow {
   return {
     id: r.id,
     assessment_id: r.assessmentId,
     revision_no: r.revisionNo,
     status: 'draft',
     content_json: JSON.stringify(r.content),
-    results_z: encodeResults(r.results),
+    results_z: encodeResults(results as Revision['results']),
     calculated_with: r.calculatedWith,
     based_on: r.basedOn,
     created_at: r.createdAt,
@@ -419,7 +435,7 @@ export function importDocument(ctx: StoreContext, input: unknown): ImportSummary
         } else if (clash !== undefined) {
           throw invalid([{ path, problem: `this database already has a different revision ${r.revisionNo} of this assessment (both copies were revised separately; export the newer one and import it elsewhere)` }]);
         }
-        insertRevisionRow(ctx, revisionRow(r));
+        insertRevisionRow(ctx, revisionRow(r, fileResults(doc, ai, ri)));
         const s = r.signature;
         if (s) {
           ctx.sql(
