@@ -86,6 +86,19 @@ export const SOURCE_CITATIONS: Readonly<Record<string, string>> = {
   'IEC2014 Annex A aperture table (from memory); BGVB2 Tab. 5 (read, older IEC edition)': `${IEC_MPE}, limiting apertures; same value in BGV B2 ‘Laserstrahlung’, Table 5 (earlier edition)`,
   'IEC2014 Annex A aperture table (from memory)': `${IEC_MPE}, limiting apertures`,
   'IEC2014; ICNIRP2013; ANSI2014 (from memory); same as EU Tab. 2.2 (read)': `${IEC_MPE}; ${ICNIRP}; ANSI Z136.1-2014; same value as ${DIR}, Table 2.2`,
+  'ICNIRP2013; IEC2014 (from memory); agrees with the EU tabulated crossover times (EU-FR Tab. 2.2, read) within 6.2 %, except 304 nm (-18 %, because the EU prints 60 instead of 63 J/m^2)':
+    `${ICNIRP}; ${IEC_MPE} (ultraviolet crossover times); close to ${DIR}, Table 2.2`,
+  'ICNIRP2013; IEC2014 (from memory); equals the EU 315-400 nm expression (EU-FR Tab. 2.2, read)': `${ICNIRP}; ${IEC_MPE}; same expression as ${DIR}, Table 2.2 (315–400 nm)`,
+  'ICNIRP2013; IEC2014 (from memory); agrees with the EU tabulated 303-314 nm values (EU-FR Tab. 2.2, read) within 1 %, except 304 nm (-4.9 %)':
+    `${ICNIRP}; ${IEC_MPE} (ultraviolet 302.5–315 nm); close to ${DIR}, Table 2.2`,
+  'CORNEA2024 (read); ICNIRP2013': `Schulmeister and Stuck, corneal injury thresholds 1200–1500 nm, J. Laser Appl. 36(3), 2024; ${ICNIRP}`,
+  'ICNIRP2013; IEC2014 4.3 f); ANSI2014 (from memory)': `${ICNIRP}; ${IEC_PULSES}; ANSI Z136.1-2014, clause on repetitive pulses`,
+  'ICNIRP2013; IEC2014; ANSI2014 (from memory)': `${ICNIRP}; IEC 60825-1:2014; ANSI Z136.1-2014`,
+  'ILSC2019 (read) for the scope; factor values memory': `ILSC 2019 proceedings, paper P106 (scope of the pulse-train factor); ${ICNIRP}`,
+  'EU-FR Tableau 2.5 (symbol gamma); EU-NO Table 4.5; BGVB2': `${DIR}, Table 2.5 (limiting cone angle γ)`,
+  'EU-FR Tableau 2.5 (named T1 there); EU-NO Table 4.5': `${DIR}, Table 2.5 (break time T1)`,
+  "EU-FR Tableau 2.2 (read); formula identity 'derived'": `${DIR}, Table 2.2 (the formula rearranged)`,
+  'BGI832 (read; reflects IEC 60825-1:2001 practice, the Directive itself is silent)': 'BGI 832 (German statutory accident insurance guidance on operating lasers), after IEC 60825-1:2001; the Directive gives no value',
   // Hazard distances, eyewear and classes (formulas of the core).
   'ANSI Z136.1 App. B (domain notes 1.3)': `${ANSI_EVAL} (beam behind a lens)`,
   'ANSI Z136.1 App. B; ANSI Z136.2 (domain notes 1.6)': `${ANSI_EVAL}; ANSI Z136.2 (optical fibre systems)`,
@@ -155,6 +168,7 @@ const KEY_WORDS: ReadonlyArray<readonly [RegExp, string]> = [
   [/\bpulse-shorter-than-tables\b/g, 'pulse shorter than the tables'],
   [/;?\s*ILSC2019 \(read\)/g, ' (ILSC 2019, paper P106)'],
   [/\(published: lasersafe\.de; Seibersdorf Laboratories\)/g, '(published training material, Seibersdorf Laboratories)'],
+  [/read \(EN 208:2009 Table B\.1 via a supplier explainer\)/g, 'EN 208:2009, Table B.1 (seen in a secondary copy; not yet checked against the published text)'],
   [/\bunverified remembered\b/g, 'unchecked'],
   [/\bremembered\b/g, 'unchecked'],
   [/\(([^()]*?),? from memory\)/g, '($1; not yet checked against the published text)'],

@@ -1,0 +1,105 @@
+// @vitest-environment node
+/**
+ * Provenance on paper (issue: printed documents an auditor accepts). All three documents of every
+ * demo room (signed and draft) and of generated rooms (both rule sets, 1 to 20 lasers, long names,
+ * every control accepted) are rendered by the real pdfmake and read back with pdftotext:
+ *  - no internal source key, working-note reference, project file name or "from memory" wording;
+ *  - the report lists every limit-table row its results use, each with a readable citation and a
+ *    plain status ("checked against the published text" / "not yet checked ...").
+ * Source of the rule: derived: SAFETY.md, "Sources and their status"; the wording list is in
+ * test/support/internal-wording.ts.
+ */
+import { mkdtempSync, rmSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { openRecordStore, type RecordStore } from '../../../electron/backend/records/index.js';
+import {
+  documentInputFromAssessment,
+  renderDoorNotice,
+  renderEyewearSheet,
+  renderReport,
+  type DocumentInput,
+} from '../../../electron/backend/pdf/index.js';
+import { rowsUsed } from '../../../electron/backend/pdf/documents/report-rows.js';
+import { STATUS_TEXT } from '../../../core/provenance/citations.js';
+import { INTERNAL_WORDING } from '../../support/internal-wording.js';
+import { pageTexts } from './pdf-tools.js';
+import { generatedDocument } from './generated-rooms.js';
+
+interface Printed {
+  readonly name: string;
+  readonly doc: DocumentInput;
+  readonly report: string;
+  readonly notice: string;
+  readonly sheet: string;
+}
+
+let dir = '';
+let store: RecordStore;
+const printed: Printed[] = [];
+
+async function print(name: string, doc: DocumentInput): Promise<Printed> {
+  const opts = { paper: 'A4', units: 'SI' } as const;
+  const [report, notice, sheet] = await Promise.all([renderReport(doc, opts), renderDoorNotice(doc, opts), renderEyewearSheet(doc, opts)]);
+  return { name, doc, report: pageTexts(report).join('\n'), notice: pageTexts(notice).join('\n'), sheet: pageTexts(sheet).join('\n') };
+}
+
+beforeAll(async () => {
+  dir = mkdtempSync(join(tmpdir(), 'bw-provenance-'));
+  store = openRecordStore({ path: join(dir, 'demo.sqlite'), keyDir: join(dir, 'keys') });
+  const site = store.seedDemo();
+  for (const room of store.listRooms(site.id))
+    for (const a of store.listAssessments(room.id)) printed.push(await print(`demo ${room.code} (${a.status})`, documentInputFromAssessment(store, a.id)));
+  printed.push(await print('generated, 20 lasers, long names, every control, ICNIRP 2013', generatedDocument({ lasers: 20, longNames: true, allControls: true })));
+  printed.push(await print('generated, 12 lasers, EU Directive', generatedDocument({ lasers: 12, ruleSet: 'eu2006' })));
+}, 600_000);
+
+afterAll(() => {
+  store?.close();
+  if (dir) rmSync(dir, { recursive: true, force: true });
+});
+
+/** pdftotext joins wrapped lines with a space and drops the hyphen of a word broken at a line end. */
+function squash(s: string): string {
+  return s.replace(/[\s\u00ad-]+/g, '');
+}
+
+describe('no internal key or "from memory" wording on any document', () => {
+  it('every document of the demo and of the generated rooms', () => {
+    expect(printed.length).toBeGreaterThanOrEqual(6);
+    const hits: string[] = [];
+    for (const p of printed)
+      for (const [kind, text] of [['report', p.report], ['door notice', p.notice], ['eyewear sheet', p.sheet]] as const)
+        for (const re of INTERNAL_WORDING) {
+          const m = re.exec(text);
+          if (m) hits.push(`${p.name}, ${kind}: "${text.slice(Math.max(0, m.index - 60), m.index + 60)}"`);
+        }
+    expect(hits).toEqual([]);
+  });
+});
+
+describe('every limit-table row used is cited with its status', () => {
+  it('each report lists each row its results use, with citation and status', () => {
+    for (const p of printed) {
+      const rows = rowsUsed(p.doc);
+      expect(rows.length, p.name).toBeGreaterThan(0);
+      expect(p.report, p.name).toContain('Limit-table rows used');
+      const flat = squash(p.report);
+      for (const r of rows) {
+        const at = flat.indexOf(squash(`${r.row.id}${r.row.effect}`));
+        expect(at, `${p.name}: row ${r.row.id}`).toBeGreaterThanOrEqual(0);
+        // the row's citation and its status follow the row in the same table line
+        const line = flat.slice(at, at + squash(r.citation).length + squash(STATUS_TEXT[r.status]).length + 400);
+        expect(line, `${p.name}: citation of ${r.row.id}`).toContain(squash(r.citation));
+        expect(line, `${p.name}: status of ${r.row.id}`).toContain(squash(STATUS_TEXT[r.status]));
+      }
+    }
+  });
+  it('a Directive row is cited by table and marked checked (Directive 2006/25/EC, Annex II, Table 2.2)', () => {
+    const eu = printed.find((p) => p.doc.results.ruleSet === 'eu2006');
+    expect(eu).toBeDefined();
+    expect(squash(eu?.report ?? '')).toContain(squash('Directive 2006/25/EC, Annex II, Table 2.2'));
+    expect(eu?.report).toContain('checked against the published text');
+  });
+});
