@@ -179,8 +179,12 @@ const KEY_WORDS: ReadonlyArray<readonly [RegExp, string]> = [
   [/\s*\[[A-Z][A-Z0-9-]*\]/g, ''],
 ];
 
+/** Cheap first look: most printed strings (numbers, names) contain none of the patterns below. */
+const MAY_NEED_WORK = /memory|rule:|factor:|aperture:|pulse-shorter|ILSC|lasersafe|remembered|ours\b|domain|\[[A-Z]|EN 208:2009 Table|typed from|Tables 2\.1/;
+
 /** A sentence of the core or a note made readable: no internal keys, no working notes. */
 export function readableText(text: string): string {
+  if (!MAY_NEED_WORK.test(text)) return text;
   let out = text;
   for (const [status, ids] of Object.entries(RULE_SET_STATUS_NOTES)) if (out.includes(status)) out = out.split(status).join(ids);
   for (const [re, by] of KEY_WORDS) out = out.replace(re, by);

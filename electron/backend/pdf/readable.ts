@@ -6,18 +6,15 @@
 import type { TDocumentDefinitions } from 'pdfmake/interfaces';
 import { readableText } from '../../../core/provenance/citations.js';
 
-const SKIP = new Set(['svg', 'qr', 'image', 'watermark']);
+// Layouts, plots, QR payloads and images hold no sentences; layout callbacks run per cell and stay unwrapped.
+const SKIP = new Set(['svg', 'qr', 'image', 'watermark', 'layout', 'color', 'style', 'widths', 'fillColor', 'alignment']);
 
 function walk(node: unknown): unknown {
   if (typeof node === 'string') return readableText(node);
   if (Array.isArray(node)) return node.map(walk);
-  if (typeof node === 'function') {
-    const f = node as (...a: unknown[]) => unknown;
-    return (...a: unknown[]) => walk(f(...a));
-  }
   if (node !== null && typeof node === 'object') {
     const out: Record<string, unknown> = {};
-    for (const [k, v] of Object.entries(node)) out[k] = SKIP.has(k) || k === 'color' || k === 'style' ? v : walk(v);
+    for (const [k, v] of Object.entries(node)) out[k] = SKIP.has(k) || typeof v === 'function' ? v : walk(v);
     return out;
   }
   return node;
@@ -28,8 +25,8 @@ export function readableDefinition(dd: TDocumentDefinitions): TDocumentDefinitio
   return {
     ...rest,
     content: walk(content) as TDocumentDefinitions['content'],
-    ...(header === undefined ? {} : { header: walk(header) as TDocumentDefinitions['header'] }),
-    ...(footer === undefined ? {} : { footer: walk(footer) as TDocumentDefinitions['footer'] }),
+    ...(header === undefined ? {} : { header: typeof header === 'function' ? (...a: Parameters<typeof header>) => walk(header(...a)) as ReturnType<typeof header> : (walk(header) as typeof header) }),
+    ...(footer === undefined ? {} : { footer: typeof footer === 'function' ? (...a: Parameters<typeof footer>) => walk(footer(...a)) as ReturnType<typeof footer> : (walk(footer) as typeof footer) }),
     ...(background === undefined ? {} : { background }),
   };
 }

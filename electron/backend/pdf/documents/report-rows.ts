@@ -7,9 +7,9 @@
 import type { Content, TableCell } from 'pdfmake/interfaces';
 import { allSteps, ruleSetTable, type Trace } from '../../../../core/index.js';
 import type { LimitRow } from '../../../../core/limits/table-types.js';
-import { citationOf, STATUS_TEXT, type CheckStatus } from '../../../../core/provenance/citations.js';
+import { citationLine, citationOf, STATUS_TEXT, type CheckStatus } from '../../../../core/provenance/citations.js';
 import type { DocumentInput } from '../document-input.js';
-import { gridTable, heading, paragraph } from '../blocks.js';
+import { heading, paragraph } from '../blocks.js';
 import { COLOR } from '../page.js';
 
 export interface RowUsed {
@@ -45,29 +45,49 @@ export function rowsUsed(doc: DocumentInput): RowUsed[] {
   });
 }
 
-function range(lo: number, hi: number, unit: string): string {
+export function range(lo: number, hi: number, unit: string): string {
   const f = (x: number): string => (x >= 1e4 || (x > 0 && x < 1e-2) ? x.toExponential().replace('e+', 'e') : String(x));
   return `${f(lo)}–${f(hi)} ${unit}`;
 }
 
+/** Rows grouped under their citation and status, so each citation is printed once. */
 export function rowsUsedSection(doc: DocumentInput): Content[] {
   const rows = rowsUsed(doc);
   if (rows.length === 0) return [];
-  const body: TableCell[][] = rows.map((r) => [
-    { stack: [{ text: r.row.id, bold: true, noWrap: true }, { text: r.row.effect, color: COLOR.muted }] },
-    range(r.row.band_nm[0], r.row.band_nm[1], 'nm'),
-    range(r.row.t_s[0], r.row.t_s[1], 's'),
-    `${r.row.quantity === 'E' ? 'E' : 'H'} = ${r.row.expr} ${r.row.unit.replace('^2', '²')}`,
-    r.citation,
-    { text: STATUS_TEXT[r.status], color: r.status === 'checked' ? COLOR.good : COLOR.ink, bold: r.status !== 'checked' },
-  ]);
-  return [
+  const groups = new Map<string, RowUsed[]>();
+  for (const r of rows) {
+    const key = citationLine({ text: r.citation, status: r.status });
+    groups.set(key, [...(groups.get(key) ?? []), r]);
+  }
+  const out: Content[] = [
     heading('Limit-table rows used', 2),
     paragraph(
-      `Every row of the exposure-limit tables (${doc.results.ruleSetName}) that a result above rests on, with the published document it comes from and whether it was checked against the published text. ` +
+      `Every row of the exposure-limit tables (${doc.results.ruleSetName}) that a result above rests on, under the published document it comes from and whether it was checked against the published text. ` +
         'Where a row was not yet checked and a stricter alternative exists, the stricter value is used.',
       { fontSize: 8, color: COLOR.muted },
     ),
-    gridTable(['Row', 'Wavelengths', 'Durations', 'Formula', 'Citation', 'Status'], body, [58, 52, 52, 78, '*', 78], 6.8),
   ];
+  for (const [line, members] of groups) {
+    const first = members[0] as RowUsed;
+    const body: TableCell[][] = members.map((r) => [
+      { text: r.row.id, bold: true, noWrap: true },
+      r.row.effect,
+      range(r.row.band_nm[0], r.row.band_nm[1], 'nm'),
+      range(r.row.t_s[0], r.row.t_s[1], 's'),
+      `${r.row.quantity === 'E' ? 'E' : 'H'} = ${r.row.expr} ${r.row.unit.replace('^2', '²')}`,
+    ]);
+    out.push({
+      unbreakable: members.length <= 8,
+      stack: [
+        {
+          text: [{ text: first.citation === '' ? '' : `${first.citation} — ` }, { text: STATUS_TEXT[first.status], bold: true, color: first.status === 'checked' ? COLOR.good : COLOR.ink }],
+          fontSize: 7.6,
+          margin: [0, 4, 0, 1],
+        },
+        { table: { widths: [70, 90, 70, 70, '*'], body }, layout: 'noBorders', fontSize: 7, margin: [8, 0, 0, 0] },
+      ],
+    });
+    void line;
+  }
+  return out;
 }
