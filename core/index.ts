@@ -3,6 +3,8 @@ export * from './model/inputs.js';
 export * from './errors.js';
 export * from './trace/trace.js';
 export * from './units/quantities.js';
+export * from './units/read-back.js';
+export * from './model/input-rules.js';
 export { Dec, dec, roundSig, roundPlaces, recordString } from './numeric/decimal.js';
 export * from './limits/rule-sets.js';
 export * from './limits/exposure-limit.js';

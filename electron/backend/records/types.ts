@@ -356,6 +356,11 @@ export interface CsvImportReport {
   /** Every bad row; when non-empty nothing was imported. */
   readonly errors: ReadonlyArray<{ readonly row: number; readonly column: string; readonly problem: string }>;
   readonly installationIds: readonly Id[];
+  /**
+   * How each quantity cell that could be read was read ("= 450 mJ per pulse"), with a question
+   * where the value is allowed but unusual (e.g. more than 10 J per pulse).
+   */
+  readonly readings?: ReadonlyArray<{ readonly row: number; readonly column: string; readonly text: string; readonly readAs: string; readonly question: string | null }>;
 }
 
 // ---------------------------------------------------------------- the store
