@@ -203,6 +203,20 @@ export const RoomInputSchema = z.strictObject({
   eyewear: z.array(EyewearSpecSchema).optional(),
 });
 
+/**
+ * Reading back what the register stored before these rules were one: the shape only. A laser or
+ * eyewear stored under an older, looser rule (an RB6 marking, an empty name) must still open in
+ * the register so the officer can correct it; every write goes through the strict schemas above.
+ */
+const isRecord = (x: unknown): x is Record<string, unknown> => typeof x === 'object' && x !== null && !Array.isArray(x);
+export const StoredLaserInputSchema = z.custom<LaserInput>(
+  (x) => isRecord(x) && typeof x['id'] === 'string' && typeof x['name'] === 'string' && Array.isArray(x['beams']) && x['beams'].every(isRecord),
+  { message: 'is not a stored laser (id, name, beams)' },
+);
+export const StoredEyewearSpecSchema = z.custom<EyewearSpec>((x) => isRecord(x) && typeof x['id'] === 'string' && typeof x['label'] === 'string', {
+  message: 'is not a stored eyewear specification (id, label)',
+});
+
 // ---- compile-time proof that the schemas are the core types (fails to compile on drift)
 assertType<SameShape<z.infer<typeof RuleSetIdSchema>, RuleSetId>>(true);
 assertType<SameShape<z.infer<typeof TissueSchema>, Tissue>>(true);
