@@ -24,9 +24,13 @@ export function parseCsv(text: string, delimiter: ',' | ';'): string[][] {
   let row: string[] = [];
   let cell = '';
   let quoted = false;
+  // Where the open quote started, as a spreadsheet shows it (row from 1, column from 1).
+  let line = 1;
+  let openedAt = { row: 1, column: 1 };
   let i = text.charCodeAt(0) === 0xfeff ? 1 : 0;
   for (; i < text.length; i++) {
     const ch = text[i];
+    if (ch === '\n' || (ch === '\r' && text[i + 1] !== '\n')) line++;
     if (quoted) {
       if (ch === '"') {
         if (text[i + 1] === '"') {
@@ -34,7 +38,10 @@ export function parseCsv(text: string, delimiter: ',' | ';'): string[][] {
           i++;
         } else quoted = false;
       } else cell += ch;
-    } else if (ch === '"' && cell === '') quoted = true;
+    } else if (ch === '"' && cell === '') {
+      quoted = true;
+      openedAt = { row: records.length + 1, column: row.length + 1 };
+    }
     else if (ch === delimiter) {
       row.push(cell);
       cell = '';
@@ -46,7 +53,11 @@ export function parseCsv(text: string, delimiter: ',' | ';'): string[][] {
       cell = '';
     } else cell += ch;
   }
-  if (quoted) throw new RecordError('invalid', 'CSV: a quoted cell is not closed (missing ")');
+  void line;
+  if (quoted) {
+    const problem = 'a quoted cell is not closed (missing ")';
+    throw new RecordError('invalid', `CSV row ${openedAt.row}, column ${openedAt.column}: ${problem}`, [{ path: `row ${openedAt.row}, column ${openedAt.column}`, problem }]);
+  }
   if (cell !== '' || row.length > 0) {
     row.push(cell);
     records.push(row);
@@ -129,7 +140,18 @@ export function importLaserCsv(ctx: StoreContext, roomId: Id, csvText: string): 
   getRoom(ctx, roomId);
   const firstLine = csvText.replace(/^\uFEFF/, '').split(/\r?\n/, 1)[0] ?? '';
   const delimiter = detectDelimiter(firstLine);
-  const records = parseCsv(csvText, delimiter).filter((r) => r.some((c) => c.trim() !== ''));
+  let parsed: string[][];
+  try {
+    parsed = parseCsv(csvText, delimiter);
+  } catch (e) {
+    if (!(e instanceof RecordError)) throw e;
+    const m = /row (\d+), column (\d+): (.*)$/.exec(e.message);
+    return { imported: 0, errors: [{ row: Number(m?.[1] ?? 1), column: `(column ${m?.[2] ?? 1})`, problem: m?.[3] ?? e.message }], installationIds: [] };
+  }
+  // Blank lines are skipped but keep their place: every row number is the one the spreadsheet shows.
+  const numbered = parsed.map((cells, i) => ({ cells, row: i + 1 })).filter((r) => r.cells.some((c) => c.trim() !== ''));
+  const records = numbered.map((r) => r.cells);
+  const headerRow = numbered[0]?.row ?? 1;
   const errors: CsvError[] = [];
   const readings: CsvReading[] = [];
   const header = (records[0] ?? []).map((h) => h.trim().toLowerCase());
@@ -138,16 +160,16 @@ export function importLaserCsv(ctx: StoreContext, roomId: Id, csvText: string): 
     return { imported: 0, errors: [{ row: MAX_ROWS + 2, column: '(file)', problem: `more than ${MAX_ROWS} rows; split the file` }], installationIds: [] };
   }
   header.forEach((h, i) => {
-    if (!CSV_COLUMNS.includes(h)) errors.push({ row: 1, column: h || `(column ${i + 1})`, problem: `unknown column; known columns: ${CSV_COLUMNS.join(', ')}` });
-    if (header.indexOf(h) !== i) errors.push({ row: 1, column: h, problem: 'column appears twice' });
+    if (!CSV_COLUMNS.includes(h)) errors.push({ row: headerRow, column: h || `(column ${i + 1})`, problem: `unknown column; known columns: ${CSV_COLUMNS.join(', ')}` });
+    if (header.indexOf(h) !== i) errors.push({ row: headerRow, column: h, problem: 'column appears twice' });
   });
-  for (const req of REQUIRED) if (!header.includes(req)) errors.push({ row: 1, column: req, problem: 'required column is missing' });
+  for (const req of REQUIRED) if (!header.includes(req)) errors.push({ row: headerRow, column: req, problem: 'required column is missing' });
   if (errors.length) return { imported: 0, errors, installationIds: [] };
-  if (records.length < 2) return { imported: 0, errors: [{ row: 2, column: '(file)', problem: 'no data rows after the header' }], installationIds: [] };
+  if (records.length < 2) return { imported: 0, errors: [{ row: headerRow + 1, column: '(file)', problem: 'no data rows after the header' }], installationIds: [] };
 
   const groups = new Map<string, LaserGroup>();
   records.slice(1).forEach((cells, idx) => {
-    const row = idx + 2;
+    const row = numbered[idx + 1]?.row ?? idx + 2;
     const cell = (col: string): string => {
       const i = header.indexOf(col);
       return i < 0 ? '' : (cells[i] ?? '').trim();

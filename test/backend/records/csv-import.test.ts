@@ -110,8 +110,15 @@ describe('laser inventory CSV', () => {
     expect(snapshot(dbPath)).toBe(before);
   });
 
-  it('an unclosed quote is a clear error', () => {
-    expect(() => store.importLaserCsv(room.id, `${HEADER}\n"unterminated,4`)).toThrow(/quoted cell is not closed/);
+  it('an unclosed quote is reported with the row and column where it opens', () => {
+    const report = store.importLaserCsv(room.id, `${HEADER}\n${GOOD}\n"unterminated,4`);
+    expect(report.imported).toBe(0);
+    expect(report.errors).toEqual([{ row: 3, column: '(column 1)', problem: expect.stringMatching(/quoted cell is not closed/) }]);
+  });
+
+  it('row numbers stay those the spreadsheet shows when blank lines are in between', () => {
+    const report = store.importLaserCsv(room.id, [HEADER, '', GOOD, '', GOOD.replace('Good', 'Bad').replace(',532,', ',green,')].join('\n'));
+    expect(report.errors).toEqual([{ row: 5, column: 'wavelength', problem: expect.stringMatching(/"green" is not a wavelength/) }]);
   });
 });
 
