@@ -143,7 +143,7 @@ function numberWords(x: number): string {
 export function plausibilityQuestion(rule: NumberRule, x: number): string | null {
   const p = rule.plausible;
   if (!p || !Number.isFinite(x)) return null;
-  if ((p.above !== undefined && x > p.above) || (p.below !== undefined && x < p.below)) return `Is this right? ${p.note}.`;
+  if ((p.above !== undefined && x > p.above) || (p.below !== undefined && x < p.below)) return `Is this right? ${p.note.charAt(0).toUpperCase()}${p.note.slice(1)}.`;
   return null;
 }
 

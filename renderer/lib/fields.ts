@@ -157,8 +157,8 @@ export const F = {
   attenuation: s('attenuation_per_m', { key: 'attenuation_per_m', label: 'Atmospheric attenuation', unitNote: 'per metre', dimension: 'ratio', display: 'x', optional: true, placeholder: 'none', hint: 'long outdoor paths only' }),
   // viewing conditions
   diffuseReflectance: s('diffuseReflectance', { key: 'reflectance', unitNote: '% or fraction', dimension: 'ratio', display: '%', placeholder: 'e.g. 15 %' }),
-  diffuseAngle: s('viewingAngle_rad', { key: 'viewingAngle_rad', dimension: 'angle', defaultUnit: 'deg', unitNote: 'deg', display: 'deg', optional: true, placeholder: 'along the normal (worst case)' }),
-  diffuseTarget: s('targetDistance_m', { key: 'targetDistance_m', dimension: 'length', defaultUnit: 'm', unitNote: 'm', display: 'm', optional: true, placeholder: 'at the aperture' }),
+  diffuseAngle: s('viewingAngle_rad', { key: 'viewingAngle_rad', dimension: 'angle', defaultUnit: 'deg', unitNote: 'deg', display: 'deg', optional: true, placeholder: 'worst case' }),
+  diffuseTarget: s('targetDistance_m', { key: 'targetDistance_m', dimension: 'length', defaultUnit: 'm', unitNote: 'm', display: 'm', optional: true, placeholder: 'at aperture' }),
   diffuseViewer: s('viewerDistance_m', { key: 'viewerDistance_m', dimension: 'length', defaultUnit: 'm', unitNote: 'm', display: 'm', optional: true, placeholder: 'none' }),
   specularReflectance: s('specularReflectance', { key: 'reflectance', unitNote: '% or fraction', dimension: 'ratio', display: '%', placeholder: 'e.g. 100 %' }),
   specularPath: s('pathToSurface_m', { key: 'pathToSurface_m', dimension: 'length', defaultUnit: 'm', unitNote: 'm', display: 'm', optional: true, placeholder: 'at the aperture' }),

@@ -67,7 +67,7 @@ describe('read and shown as read', () => {
     const byColumn = new Map((report.readings ?? []).map((r) => [r.column, r]));
     // A bare 200 in pulse_energy is read in J (README column table): shown, and questioned.
     expect(byColumn.get('pulse_energy')).toMatchObject({ row: 2, text: '200', readAs: '200 J per pulse' });
-    expect(byColumn.get('pulse_energy')?.question).toMatch(/Is this right\? more than 10 J per pulse/);
+    expect(byColumn.get('pulse_energy')?.question).toMatch(/Is this right\? More than 10 J per pulse/);
     expect(byColumn.get('wavelength')?.readAs).toBe('1064 nm');
     expect(byColumn.get('pulse_duration')).toMatchObject({ readAs: '6 ns per pulse', question: null });
     expect(byColumn.get('beam_diameter')?.readAs).toBe('9 mm at the exit');
