@@ -5,7 +5,7 @@ export * from './trace/trace.js';
 export * from './units/quantities.js';
 export * from './units/read-back.js';
 export * from './model/input-rules.js';
-export { officerWords, whereInRoom, type WhereInRoom } from './model/input-words.js';
+export { officerPath, officerWords, placeInRoom, whereInRoom, type WhereInRoom } from './model/input-words.js';
 export { Dec, dec, roundSig, roundPlaces, recordString } from './numeric/decimal.js';
 export * from './limits/rule-sets.js';
 export * from './limits/exposure-limit.js';

@@ -246,7 +246,7 @@ describe('the loopback host refuses what it must', () => {
     const body = (await res.json()) as { ok: boolean; error: { code: string; message: string } };
     expect(res.status).toBe(400);
     expect(body.error.code).toBe('invalid_input');
-    expect(body.error.message).toMatch(/code: must not be empty/);
+    expect(body.error.message).toMatch(/Code: must not be empty/);
     const again = await fetch(`${host.origin}/api/app-info`, { method: 'POST', headers: { 'content-type': 'application/json', 'x-beamwarden-token': host.token }, body: '{}' });
     expect(again.status).toBe(200);
   });

@@ -147,7 +147,7 @@ describe('store methods validate their arguments', () => {
   it('empty sign-off fields', () => {
     const { room } = registerRoom(target, 'A0.07');
     const a = target.createAssessment({ roomId: room.id, content: target.newAssessmentContent(room.id) });
-    expect(() => target.signAssessment(a.id, { name: ' ', role: 'LSO', statement: 'ok' })).toThrow(/Sign-off is not valid: name: must not be empty/);
+    expect(() => target.signAssessment(a.id, { name: ' ', role: 'LSO', statement: 'ok' })).toThrow(/Sign-off is not valid: Name: must not be empty/);
   });
 });
 

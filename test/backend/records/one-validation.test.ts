@@ -99,3 +99,27 @@ describe('beam ids: the register refuses what the calculation would refuse later
     expect(store.createAssessment({ roomId: room2.id, content: store.newAssessmentContent(room2.id) }).current.status).toBe('draft');
   });
 });
+
+describe('refusals name the record in officer words, never a path', () => {
+  it('an assessment with an RB6 marking: eyewear, marking and scale number in words', () => {
+    const content = store.newAssessmentContent(room.id);
+    const bad = { ...content, input: { ...content.input, eyewear: [{ id: 'AL-6', label: 'alignment glasses', en208: [{ from_nm: 633, to_nm: 633, scale: 6 }] }] } };
+    let message = '';
+    try {
+      store.createAssessment({ roomId: room.id, content: bad });
+    } catch (e) {
+      message = (e as Error).message;
+    }
+    expect(message).toMatch(/Eyewear 1, EN 208 marking 1, scale number: must be a whole number from RB1 to RB5 \(EN 208:2009\)/);
+    expect(message).not.toMatch(/\[\d+\]|en208\./);
+  });
+
+  it('a rule only the calculation checks (one beam id per room): which laser and beam, in words', () => {
+    const content = store.newAssessmentContent(room.id);
+    const first = content.input.lasers[0];
+    if (!first) throw new Error('the room has a laser');
+    const twin = { ...first, id: 'twin', name: 'Second green laser', beams: first.beams.map((b) => ({ ...b, label: 'twin beam' })) };
+    const bad = { ...content, input: { ...content.input, lasers: [first, twin] } };
+    expect(() => store.createAssessment({ roomId: room.id, content: bad })).toThrow(/The calculation refused the input\. Laser "Second green laser", beam "twin beam": Beam id must be an id not used by another beam of the room/);
+  });
+});
