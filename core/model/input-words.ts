@@ -166,13 +166,14 @@ export function placeInRoom(
   field: string,
 ): string {
   const at = whereInRoom(field);
+  const named = (kind: string, name: string | undefined, n: number): string => (name ? `${kind} "${name}"` : `${kind} ${n}`);
   if (at.eyewear !== undefined) return `Eyewear ${input.eyewear?.[at.eyewear]?.id ?? at.eyewear + 1}`;
   if (at.laser !== undefined) {
     const l = input.lasers?.[at.laser];
-    const laser = `Laser "${l?.name || at.laser + 1}"`;
+    const laser = named('Laser', l?.name, at.laser + 1);
     if (at.beam === undefined) return laser;
     const b = l?.beams?.[at.beam];
-    return `${laser}, beam "${b?.label || b?.id || at.beam + 1}"`;
+    return `${laser}, ${named('beam', b?.label || b?.id, at.beam + 1)}`;
   }
   return 'The room';
 }
