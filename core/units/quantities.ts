@@ -182,7 +182,8 @@ export function parseQuantity(
 function thousandsHint(n: DecT, unitTyped: string, expect: Dimension): string {
   const plainText = `${n.toString()}${unitTyped ? ` ${unitTyped}` : ''}`;
   const def = UNIT_TABLE.get(normaliseUnit(unitTyped));
-  if (!def || expect === 'ratio' || def.dim === 'angle' || def.dim === 'irradiance' || def.dim === 'radiantExposure') return plainText;
+  const want = expect === 'wavelength' ? 'length' : expect;
+  if (!def || def.dim !== want || expect === 'ratio' || def.dim === 'angle' || def.dim === 'irradiance' || def.dim === 'radiantExposure') return plainText;
   const si = n.mul(def.factor);
   const pretty = formatSI(si, SI_UNIT[expect], 12);
   return pretty.replace(/\s+/g, ' ') === plainText ? plainText : `${plainText} or ${pretty}`;

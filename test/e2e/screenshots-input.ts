@@ -2,7 +2,8 @@
  * Screenshots of how input is read (issue 11), for a person to look at (not part of `npm test`):
  *   npm run build && tsx test/e2e/screenshots-input.ts   -> test/artifacts/screens/2x-*.png
  * The workspace with each field's echo ("= 450 mJ per pulse"), a plausibility question, a bare
- * number refused, a ticked viewing condition still to be completed, and an empty room.
+ * number refused, a ticked viewing condition still to be completed, a CSV inventory as read (and a
+ * thousands comma refused), and an empty room.
  * Loopback host on a temporary database with the invented demo site.
  */
 import { mkdirSync } from 'node:fs';
@@ -44,6 +45,18 @@ async function main(): Promise<void> {
     await page.getByLabel('Diffuse reflection').first().check();
     await page.getByLabel('Diffuse reflectance (% or fraction)').first().scrollIntoViewIfNeeded();
     await shot(page, '22-input-diffuse-incomplete');
+    // a CSV inventory: how each quantity cell was read, and a question for an unusual one
+    await page.keyboard.press('Alt+6');
+    await page.getByRole('heading', { level: 1, name: /^Print/ }).waitFor();
+    const csv = 'laser,wavelength,emission,power,pulse_energy,pulse_duration,repetition_rate,beam_diameter,divergence,beam_definition\nBench Nd:YAG (invented),1064,pulsed,,200,6 ns,10,9,0.5,1/e2\nAlignment diode (invented),635 nm,cw,1 mW,,,,3,1.2,1/e2\n';
+    await page.locator('#import-csv').setInputFiles({ name: 'inventory.csv', mimeType: 'text/csv', buffer: Buffer.from(csv) });
+    await page.getByTestId('csv-readings').waitFor();
+    await page.getByTestId('csv-readings').scrollIntoViewIfNeeded();
+    await shot(page, '24-csv-readings');
+    await page.locator('#import-csv').setInputFiles({ name: 'inventory.csv', mimeType: 'text/csv', buffer: Buffer.from(csv.replace('1 mW', '"1,500 mW"').replace(/\(invented\)/g, '(invented 2)')) });
+    await page.getByRole('cell', { name: /comma/ }).waitFor();
+    await page.getByRole('cell', { name: /comma/ }).scrollIntoViewIfNeeded();
+    await shot(page, '25-csv-comma-refused');
     // an empty room: a friendly start, not an error
     const overview = await fetch(`${host.origin}/api/register-overview`, { method: 'POST', headers: { 'content-type': 'application/json', 'x-beamwarden-token': host.token }, body: JSON.stringify({ dueBy: '2099-01-01' }) });
     const siteId = ((await overview.json()) as { value: { sites: Array<{ site: { id: string } }> } }).value.sites[0]?.site.id ?? '';

@@ -35,6 +35,7 @@ describe('refused, with row and column, and nothing imported', () => {
     ['decimal comma in a comma-separated file', row({ wl: '"632,8 nm"' }), 'wavelength', /comma/, 'README: decimal commas only in semicolon files'],
     ['a power unit in the energy column', row({ em: 'pulsed', e: '200 mW', tp: '10 ns' }), 'pulse_energy', /'mW' is not an energy unit/, 'SI: W is a power unit, J an energy unit'],
     ['an energy unit in the power column', row({ p: '5 J' }), 'power', /'J' is not a power unit/, 'SI: J is not a power unit'],
+    ['a thousands comma with a unit of another kind', row({ em: 'pulsed', e: '"1,500 mW"', tp: '10 ns' }), 'pulse_energy', /write 1500 mW"?$|write 1500 mW$/, 'derived: the hint never turns mW into J'],
     ['a divergence of 0', row({ p: '5 W', div: '0' }), 'divergence', /more than 0/, 'derived: 0 divergence makes every hazard distance infinite; the core refuses it'],
     ['overlapping pulses', row({ em: 'pulsed', e: '2 mJ', tp: '1 ms', f: '5 kHz' }), 'repetition_rate', /pulses would overlap/, 'derived: repetition rate × pulse duration must not exceed 1'],
     ['a 100 000-character laser name', row({ laser: 'N'.repeat(100_000), p: '5 W' }), 'laser', /at most 200 characters/, "the register's own limit (schemas/records.ts)"],
