@@ -107,6 +107,7 @@ export function validateBeamInput(input: unknown, prefix = '', roomRuleSet?: Rul
     if (tp !== undefined && T < tp) throw new InputError('out_of_range', p('exposureDuration_s'), T, `at least the pulse duration (${tp} s)`);
   }
   if (b['sourceAngle_rad'] !== undefined) requireRule(p('sourceAngle_rad'), b['sourceAngle_rad'], R.sourceAngle_rad);
+  if (b['skinArea_m2'] !== undefined) requireRule(p('skinArea_m2'), b['skinArea_m2'], R.skinArea_m2);
 
   if (b['viewing'] !== undefined) validateViewing(requireObject(p('viewing'), b['viewing']), p('viewing.'));
   if (b['tolerances'] !== undefined) {
@@ -134,6 +135,8 @@ function validateViewing(v: Record<string, unknown>, prefix: string): void {
     if (d['viewingAngle_rad'] !== undefined) requireRule(p('diffuse.viewingAngle_rad'), d['viewingAngle_rad'], R.viewingAngle_rad);
     if (d['targetDistance_m'] !== undefined) requireRule(p('diffuse.targetDistance_m'), d['targetDistance_m'], R.targetDistance_m);
     if (d['viewerDistance_m'] !== undefined) requireRule(p('diffuse.viewerDistance_m'), d['viewerDistance_m'], R.viewerDistance_m);
+    if (d['deliberateDuration_s'] !== undefined) requireRule(p('diffuse.deliberateDuration_s'), d['deliberateDuration_s'], R.deliberateDuration_s);
+    if (d['governs'] !== undefined && d['governs'] !== 'accidental' && d['governs'] !== 'deliberate') throw new InputError('invalid_choice', p('diffuse.governs'), d['governs'], "'accidental' | 'deliberate'");
   }
   if (v['specular'] !== undefined) {
     const s = requireObject(p('specular'), v['specular']);

@@ -93,12 +93,16 @@ export const INPUT_RULES = {
     plausible: { above: 0.1, note: 'more than 100 mrad is a bare diode or fibre output; check mrad against rad and degrees' },
   }),
   exposureDuration_s: r({ label: 'Exposure duration', unit: 's', min: 1e-13, minInclusive: true, max: 3e4, why: 'the limit tables cover 1e-13 s to 30 000 s' }),
+  /** Irradiated skin area for the large-area skin limit (limit specification 4.3); 0 = not applied. */
+  skinArea_m2: r({ label: 'Irradiated skin area', unit: 'm²', min: 0, minInclusive: true, max: 10 }),
   sourceAngle_rad: r({ label: 'Apparent source (angular subtense)', unit: 'rad', min: 0, minInclusive: true, max: Math.PI }),
   closestApproach_m: r({ label: 'Closest approach to the aperture', unit: 'm', min: 0, minInclusive: true }),
   attenuation_per_m: r({ label: 'Atmospheric attenuation', unit: '1/m', min: 0, minInclusive: true, max: 1 }),
   diffuseReflectance: r({ label: 'Diffuse reflectance', unit: '', min: 0, minInclusive: true, max: 1 }),
   viewingAngle_rad: r({ label: 'Viewing angle from the normal', unit: 'rad', min: 0, minInclusive: true, max: Math.PI / 2 }),
   targetDistance_m: r({ label: 'Laser to surface', unit: 'm', min: 0, minInclusive: true }),
+  /** Deliberate viewing of a diffuse spot: up to a working day (30 000 s, where the limit tables end). */
+  deliberateDuration_s: r({ label: 'Deliberate viewing duration', unit: 's', min: 1e-3, minInclusive: true, max: 3e4 }),
   viewerDistance_m: r({ label: 'Surface to viewer', unit: 'm', min: 0, minInclusive: false }),
   specularReflectance: r({ label: 'Specular reflectance', unit: '', min: 0, minInclusive: true, max: 1 }),
   pathToSurface_m: r({ label: 'Laser to mirror', unit: 'm', min: 0, minInclusive: true }),

@@ -106,6 +106,8 @@ export const ViewingConditionsSchema = z.strictObject({
       viewingAngle_rad: num(R.viewingAngle_rad).optional(),
       targetDistance_m: num(R.targetDistance_m).optional(),
       viewerDistance_m: num(R.viewerDistance_m).optional(),
+      deliberateDuration_s: num(R.deliberateDuration_s).optional(),
+      governs: z.enum(['accidental', 'deliberate'], { error: "must be 'accidental' or 'deliberate'" }).optional(),
     })
     .optional(),
   specular: z.strictObject({ reflectance: num(R.specularReflectance), pathToSurface_m: num(R.pathToSurface_m).optional() }).optional(),
@@ -142,6 +144,7 @@ export const BeamInputSchema = z
     exposureDuration_s: num(R.exposureDuration_s).optional(),
     sourceAngle_rad: num(R.sourceAngle_rad).optional(),
     viewing: ViewingConditionsSchema.optional(),
+    skinArea_m2: num(R.skinArea_m2).optional(),
     tolerances: InputTolerancesSchema.optional(),
     settings: LimitSettingsSchema.optional(),
   })

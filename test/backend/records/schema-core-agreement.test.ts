@@ -46,7 +46,16 @@ const emission = fc.oneof(
 );
 
 const viewing = fc.record({
-  diffuse: maybe(fc.record({ reflectance: around(R.diffuseReflectance), viewingAngle_rad: maybe(around(R.viewingAngle_rad)), targetDistance_m: maybe(around(R.targetDistance_m)), viewerDistance_m: maybe(around(R.viewerDistance_m)) })),
+  diffuse: maybe(
+    fc.record({
+      reflectance: around(R.diffuseReflectance),
+      viewingAngle_rad: maybe(around(R.viewingAngle_rad)),
+      targetDistance_m: maybe(around(R.targetDistance_m)),
+      viewerDistance_m: maybe(around(R.viewerDistance_m)),
+      deliberateDuration_s: maybe(around(R.deliberateDuration_s)),
+      governs: maybe(fc.constantFrom('accidental', 'deliberate', 'both')),
+    }),
+  ),
   specular: maybe(fc.record({ reflectance: around(R.specularReflectance), pathToSurface_m: maybe(around(R.pathToSurface_m)) })),
   lens: maybe(fc.record({ focalLength_m: around(R.focalLength_m), beamDiameterAtLens_m: maybe(around(R.beamDiameterAtLens_m)) })),
   fiber: maybe(fc.record({ kind: fc.constantFrom('multimode', 'singlemode'), numericalAperture: around(R.numericalAperture), modeFieldDiameter_m: maybe(around(R.modeFieldDiameter_m)) })),
@@ -69,6 +78,7 @@ const beam = fc.record({
   }),
   exposureDuration_s: maybe(fc.oneof(around(R.exposureDuration_s), fc.constantFrom(1e-9, 1e-8, 0.25, 10))),
   sourceAngle_rad: maybe(around(R.sourceAngle_rad)),
+  skinArea_m2: maybe(around(R.skinArea_m2)),
   viewing: maybe(viewing),
   tolerances: maybe(fc.record({ power: maybe(around(R.tolerance)), diameter: maybe(around(R.tolerance)) })),
 });
