@@ -8,7 +8,8 @@
  *  4. E rows converted to H = E * t; conservative alternatives applied;
  *  5. the minimum over all candidates governs (dual limits), and the result names it.
  */
-import { Dec, recordString, roundSig } from '../numeric/decimal.js';
+import { Dec, recordString } from '../numeric/decimal.js';
+import { limitReported } from '../numeric/safe-rounding.js';
 import { InputError, requireInRange } from '../errors.js';
 import type { LimitSettings, RuleSetId, Tissue } from '../model/inputs.js';
 import { addStep, newTrace, type Trace } from '../trace/trace.js';
@@ -331,9 +332,9 @@ export function exposureLimit(q: ExposureLimitQuery): ExposureLimitResult {
     source: governing.aperture.source,
     confidence: governing.aperture.confidence,
   });
-  const Hr = roundSig(H, 3, 'down');
-  const Er = roundSig(E, 3, 'down');
-  addStep(trace, { kind: 'rounding', label: 'Reported', detail: 'limits are rounded DOWN to 3 significant figures (the safe direction)', value: `${Hr.toString()} J/m²; ${Er.toString()} W/m²` });
+  const Hr = limitReported(H);
+  const Er = limitReported(E);
+  addStep(trace, { kind: 'rounding', label: 'Reported', detail: 'limits are rounded DOWN to 3 significant figures (the safe direction)', value: `${Hr} J/m²; ${Er} W/m²` });
   if (conservativeReplacements.length) {
     addStep(trace, {
       kind: 'warning',
@@ -351,8 +352,8 @@ export function exposureLimit(q: ExposureLimitQuery): ExposureLimitResult {
     sourceAngle_rad: q.sourceAngle_rad ?? 0,
     H_Jm2: recordString(H),
     E_Wm2: recordString(E),
-    H_Jm2_reported: Hr.toString(),
-    E_Wm2_reported: Er.toString(),
+    H_Jm2_reported: Hr,
+    E_Wm2_reported: Er,
     governing,
     candidates,
     get factors(): Record<string, string> {
