@@ -9,6 +9,7 @@ import type { LimitSettings, RuleSetId, Tissue } from '../model/inputs.js';
 import { evaluate } from './expression.js';
 import { conservativeOn } from './factors.js';
 import { ruleSetTable } from './rule-sets.js';
+import { atTop, inInterval } from './intervals.js';
 import type { ApertureRow } from './table-types.js';
 
 export interface ApertureResult {
@@ -38,9 +39,9 @@ export function limitingAperture(
   const rows = table.apertures[tissue];
   const lambda = new Dec(wavelength_nm);
   const t = new Dec(duration_s);
+  // The one boundary convention (core/limits/intervals.ts): [lo, hi), the top edge of the last row.
   const inside = (r: ApertureRow, edge: boolean): boolean =>
-    (lambda.gte(r.band_nm[0]) && (lambda.lt(r.band_nm[1]) || (edge && lambda.eq(r.band_nm[1])))) &&
-    (t.gte(r.t_s[0]) && (t.lt(r.t_s[1]) || (edge && t.eq(r.t_s[1]))));
+    (inInterval(lambda, r.band_nm) || (edge && atTop(lambda, r.band_nm))) && (inInterval(t, r.t_s) || (edge && atTop(t, r.t_s)));
   const row = rows.find((r) => inside(r, false)) ?? rows.find((r) => inside(r, true));
   if (!row) throw new Error(`no aperture row for ${tissue} at ${lambda.toString()} nm, ${t.toString()} s`);
   const key = apertureKey(tissue, row);

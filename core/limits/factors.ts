@@ -1,11 +1,13 @@
 /**
  * Correction factors and parameters (C_A, C_B, C_C, C_E, T1, T2, alpha_max, gamma_p, C1, C2, T_i /
  * T_min), defined ONCE per rule set in the tables and evaluated here at (lambda, t, alpha).
- * Pieces are half-open [lo, hi); at the top edge of the last piece the piece ending there is used.
+ * Pieces are half-open [lo, hi); at the top edge of the last piece the piece ending there is used
+ * (the one boundary convention, core/limits/intervals.ts).
  */
 import { Dec } from '../numeric/decimal.js';
 import { condition, evaluate, type Vars } from './expression.js';
-import type { FactorDef, FactorPiece, Interval, RuleSetTable } from './table-types.js';
+import { atTop, inInterval } from './intervals.js';
+import type { FactorDef, FactorPiece, RuleSetTable } from './table-types.js';
 import type { LimitSettings } from '../model/inputs.js';
 
 export interface FactorValue {
@@ -17,14 +19,6 @@ export interface FactorValue {
   /** True where conservative mode replaced a remembered value by its stricter alternative. */
   readonly conservativeApplied: boolean;
   readonly remembered?: Dec;
-}
-
-function inInterval(x: Dec, iv: Interval): boolean {
-  return x.gte(iv[0]) && x.lt(iv[1]);
-}
-
-function atTop(x: Dec, iv: Interval): boolean {
-  return x.eq(iv[1]);
 }
 
 function pickPiece(def: FactorDef, vars: Vars): FactorPiece | undefined {
