@@ -5,7 +5,7 @@
  * required (domain notes 1.1, rule 1).
  */
 import { InputError, requireInRange, requireNonNegative, requirePositive } from '../errors.js';
-import type { BeamInput, RuleSetId } from '../model/inputs.js';
+import type { RuleSetId } from '../model/inputs.js';
 import { DURATION_RANGE_S, RULE_SET_IDS, WAVELENGTH_RANGE_NM } from '../limits/rule-sets.js';
 
 function isObject(x: unknown): x is Record<string, unknown> {
@@ -142,9 +142,4 @@ function validateViewing(v: Record<string, unknown>, prefix: string): void {
   }
   if (v['attenuation_per_m'] !== undefined) requireInRange(p('attenuation_per_m'), v['attenuation_per_m'], 0, 1, '1/m');
   if (v['closestApproach_m'] !== undefined) requireNonNegative(p('closestApproach_m'), v['closestApproach_m'], 'm');
-}
-
-/** Narrowing helper for callers that validated first. */
-export function asBeamInput(x: unknown): BeamInput {
-  return x as BeamInput;
 }

@@ -4,7 +4,7 @@
  * naming the field.
  */
 import { InputError, requireInRange } from '../errors.js';
-import type { EyewearSpec, RoomInput, RuleSetId } from '../model/inputs.js';
+import type { EyewearSpec, RuleSetId } from '../model/inputs.js';
 import { RULE_SET_IDS, WAVELENGTH_RANGE_NM } from '../limits/rule-sets.js';
 
 const CLASSES = ['1', '1M', '2', '2M', '3R', '3B', '4'] as const;
@@ -109,8 +109,4 @@ export function validateRoomShape(input: unknown): RuleSetId {
     });
   }
   return ruleSet ?? 'icnirp2013';
-}
-
-export function isRoomInput(x: unknown): x is RoomInput {
-  return isObject(x) && Array.isArray(x['lasers']);
 }
