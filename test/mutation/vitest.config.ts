@@ -1,0 +1,16 @@
+// The tests Stryker runs against each mutant of the core engine: the core's own tables of published
+// and derived cases, nothing that needs a browser, a database or a PDF. The two randomised property
+// files (hundreds of evaluations each) stay in `npm test` only: run per mutant they would make a
+// mutation run take hours on this machine, and every case they cover is also in a table.
+import { defineConfig } from 'vitest/config';
+import { fileURLToPath } from 'node:url';
+
+export default defineConfig({
+  root: fileURLToPath(new URL('../..', import.meta.url)),
+  test: {
+    include: ['test/core/**/*.test.ts'],
+    exclude: ['test/core/part2/properties.test.ts', 'test/core/limit-continuity.test.ts'],
+    environment: 'node',
+    testTimeout: 60_000,
+  },
+});
