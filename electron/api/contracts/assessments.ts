@@ -10,7 +10,7 @@ import type {
   RevisionSummary,
   SignOff,
   VerifyReport,
-} from '../../backend/records/types.js';
+} from './records.js';
 
 export type AssessmentHandlers = {
   'room-input-from-register': (args: { readonly roomId: Id }) => Promise<RoomInput>;
