@@ -50,13 +50,14 @@ describe('EN 207 D requirement of a pulse train: mean power density Q*f over the
 });
 
 describe('diffuse reflection (domain notes 1.4, ANSI Z136.1 App. B from memory)', () => {
+  // accidental viewing over the beam's 0.25 s (main also evaluates deliberate viewing over 600 s)
   it('zero rule compares the spot exitance rho*4S/(pi d²) with the limit: 4 mW on a 10 mm spot (51 W/m² > 25.5 W/m²) is NOT zero', () => {
-    const r = evaluateBeam({ ...green, emission: { kind: 'cw', power_W: 0.004 }, beam: { diameter_m: 0.01, divergence_rad: 0.001, definition: '1/e' }, viewing: { diffuse: { reflectance: 1 } } });
+    const r = evaluateBeam({ ...green, emission: { kind: 'cw', power_W: 0.004 }, beam: { diameter_m: 0.01, divergence_rad: 0.001, definition: '1/e' }, viewing: { diffuse: { reflectance: 1, governs: 'accidental' } } });
     // derived: exitance 4*0.004/(pi*0.01²) = 50.9 W/m² > E; r = sqrt(rho S cos / (pi E))
     expect(rel(Number(r.nhzDiffuse_m), Math.sqrt(0.004 / (Math.PI * E_VIS_025)))).toBeLessThan(1e-9);
   });
   it('1 mW on the same spot (exitance 12.7 W/m² < limit) is zero everywhere (derived)', () => {
-    const r = evaluateBeam({ ...green, emission: { kind: 'cw', power_W: 0.001 }, beam: { diameter_m: 0.01, divergence_rad: 0.001, definition: '1/e' }, viewing: { diffuse: { reflectance: 1 } } });
+    const r = evaluateBeam({ ...green, emission: { kind: 'cw', power_W: 0.001 }, beam: { diameter_m: 0.01, divergence_rad: 0.001, definition: '1/e' }, viewing: { diffuse: { reflectance: 1, governs: 'accidental' } } });
     expect(Number(r.nhzDiffuse_m)).toBe(0);
   });
   it('exposure at a stated viewer: 10 W at 1064 nm, rho 1, 0.1 m: rho S/(pi r²) = 318.3 W/m² = 6.3662 x the 50 W/m² limit (warning text)', () => {
