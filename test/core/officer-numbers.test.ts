@@ -61,13 +61,33 @@ describe('diffuse reflection (domain notes 1.4, ANSI Z136.1 App. B from memory)'
     expect(Number(r.nhzDiffuse_m)).toBe(0);
   });
   it('exposure at a stated viewer: 10 W at 1064 nm, rho 1, 0.1 m: rho S/(pi r²) = 318.3 W/m² = 6.3662 x the 50 W/m² limit (warning text)', () => {
-    const r = evaluateBeam({ ...green, wavelength_nm: 1064, exposureDuration_s: 10, emission: { kind: 'cw', power_W: 10 }, beam: { diameter_m: 0.003, divergence_rad: 0.001, definition: '1/e' }, viewing: { diffuse: { reflectance: 1, viewerDistance_m: 0.1 } } });
+    const r = evaluateBeam({ ...green, wavelength_nm: 1064, exposureDuration_s: 10, emission: { kind: 'cw', power_W: 10 }, beam: { diameter_m: 0.003, divergence_rad: 0.001, definition: '1/e' }, viewing: { diffuse: { reflectance: 1, governs: 'accidental', viewerDistance_m: 0.1 } } });
     // limit: 10 C_A W/m² with C_A = 5 at 1064 nm for t >= T2 = 10 s (limit spec, ICNIRP 2013 row)
     const ratio = 10 / (Math.PI * 0.1 ** 2) / 50;
-    const w = r.warnings.find((x) => x.startsWith('Diffuse reflection'));
+    const w = r.warnings.find((x) => x.startsWith('Diffuse reflection (accidental viewing'));
     const shown = Number(/exposure is ([0-9.e+-]+) times the limit/.exec(w ?? '')?.[1]);
     expect(rel(shown, ratio)).toBeLessThan(1e-5);
     expect(w).toMatch(/OD 0\.80388/); // log10(6.3662) = 0.80388
+  });
+});
+
+describe('diffuse reflection: the worst case over every limit criterion (domain notes 1.2.3 and 1.4, derived)', () => {
+  it('a viewer 1 mm from a 10 mm spot of 1 W at 532 nm gets at most the spot exitance 4S/(pi d²) = 12 732 W/m² = 500 x the 0.25 s limit', () => {
+    const r = evaluateBeam({ ...green, beam: { diameter_m: 0.01, divergence_rad: 0.001, definition: '1/e' }, viewing: { diffuse: { reflectance: 1, governs: 'accidental', viewerDistance_m: 0.001 } } });
+    const w = r.warnings.find((x) => x.startsWith('Diffuse reflection (accidental viewing'));
+    const shown = Number(/exposure is ([0-9.e+-]+) times the limit/.exec(w ?? '')?.[1]);
+    expect(rel(shown, 4 / (Math.PI * 0.01 ** 2) / E_VIS_025)).toBeLessThan(1e-5);
+  });
+  it.each([
+    ['450 nm', 450],
+    ['532 nm', 532],
+    ['600 nm', 600],
+  ] as const)('%s CW over 100 s (thermal and photochemical rows both apply): r = sqrt(rho S/(pi E_min)), E_min the reported limit', (_n, lambda) => {
+    const r = evaluateBeam({ ...green, wavelength_nm: lambda, exposureDuration_s: 100, viewing: { diffuse: { reflectance: 1, governs: 'accidental', viewerDistance_m: 0.01 } } });
+    expect(rel(Number(r.nhzDiffuse_m), Math.sqrt(1 / (Math.PI * Number(r.mpe.E_Wm2))))).toBeLessThan(1e-9);
+    const w = r.warnings.find((x) => x.startsWith('Diffuse reflection (accidental viewing'));
+    const shown = Number(/exposure is ([0-9.e+-]+) times the limit/.exec(w ?? '')?.[1]);
+    expect(rel(shown, 1 / (Math.PI * 0.01 ** 2) / Number(r.mpe.E_Wm2))).toBeLessThan(1e-5);
   });
 });
 
