@@ -2,7 +2,7 @@
  * Record types shared by the renderer and the back end: the register (sites, rooms, laser
  * installations, eyewear, people), assessments with revisions and sign-off, verification reports
  * and export documents. The contract both sides see (the store interface and the error class stay
- * in electron/backend/records/types.ts).
+ * in electron/backend/records/types.ts, which re-exports this file).
  *
  * Plain JSON-compatible data so the same objects cross IPC / HTTP unchanged. Dates are ISO 8601
  * strings (UTC timestamps `2026-05-01T09:30:00.000Z`, calendar dates `2026-05-01`). Ids are
@@ -10,6 +10,11 @@
  */
 import type { EyewearSpec, LaserInput, RoomInput } from '../../../core/model/inputs.js';
 import type { RoomResult } from '../../../core/model/results.js';
+
+// Declared beside the store code that makes them (type-only: nothing of the back end runs here).
+export type { WorkSave, WorkSaved } from '../../backend/records/save-work.js';
+export type { BackupFile, BackupReport, BackupStatus } from '../../backend/records/safekeeping.js';
+
 export type Id = string;
 /** ISO 8601 timestamp in UTC, e.g. 2026-05-01T09:30:00.000Z. */
 export type Timestamp = string;
@@ -255,6 +260,14 @@ export interface Assessment {
   readonly createdAt: Timestamp;
   /** The newest revision (draft, or signed when no draft is open). */
   readonly current: Revision;
+  /** Save counter of `current`: a save names it (SaveBase) and is refused once it is out of date. */
+  readonly version: number;
+}
+
+/** What a save started from: the revision the officer opened and its save counter then. */
+export interface SaveBase {
+  readonly revisionId: Id;
+  readonly version: number;
 }
 
 /** One line of an assessment list. */
@@ -343,6 +356,20 @@ export interface ImportSummary {
   readonly revisions: number;
   /** Records already present with identical content (skipped). */
   readonly unchanged: number;
+  /** Drafts kept beside the imported version because the two differed (nothing is discarded). */
+  readonly keptDrafts: readonly KeptDraft[];
+}
+
+/** A draft kept as an assessment of its own because an import brought a different version of it. */
+export interface KeptDraft {
+  /** The assessment whose draft conflicted. */
+  readonly assessmentId: Id;
+  /** The new assessment holding the version that did not stay (same room). */
+  readonly keptAs: Id;
+  readonly title: string;
+  /** Whose version was kept aside: this database's draft, or the one in the file. */
+  readonly whose: 'yours' | 'imported';
+  readonly reason: string;
 }
 
 /** One problem in an imported file: `path` is a JSON path ("rooms[2].code") or "row 7, column wavelength_nm". */
@@ -356,4 +383,17 @@ export interface CsvImportReport {
   /** Every bad row; when non-empty nothing was imported. */
   readonly errors: ReadonlyArray<{ readonly row: number; readonly column: string; readonly problem: string }>;
   readonly installationIds: readonly Id[];
+  /**
+   * Lasers of the file that the room already has (same name, maker and serial number). With the
+   * choice 'ask' (the default) and any such laser, nothing is imported and the officer is asked
+   * whether to skip them or add them again.
+   */
+  readonly alreadyInRoom?: ReadonlyArray<{ readonly row: number; readonly name: string; readonly maker: string; readonly serialNumber: string }>;
+  /** True when nothing was imported because the officer must choose for `alreadyInRoom`. */
+  readonly decisionNeeded?: boolean;
+  /** Lasers left out because the room already has them (choice 'skip'). */
+  readonly skipped?: number;
 }
+
+/** What to do with CSV lasers the room already has (same name, maker, serial number). */
+export type CsvExistingChoice = 'ask' | 'skip' | 'add';

@@ -8,11 +8,14 @@ import type {
   Assessment,
   AssessmentContent,
   AssessmentSummary,
+  BackupReport,
+  BackupStatus,
   CalendarDate,
+  CsvExistingChoice,
   CsvImportReport,
+  ExportDocument,
   Eyewear,
   EyewearDraft,
-  ExportDocument,
   FieldDifference,
   Id,
   ImportIssue,
@@ -25,10 +28,13 @@ import type {
   RevisionSummary,
   Room,
   RoomDraft,
+  SaveBase,
   SignOff,
   Site,
   SiteDraft,
   VerifyReport,
+  WorkSave,
+  WorkSaved,
 } from '../../api/contracts/records.js';
 import type { RoomInput } from '../../../core/model/inputs.js';
 
@@ -107,7 +113,12 @@ export interface RecordStore {
    * Save content: into the open draft, or — when the newest revision is signed — into a new draft
    * revision based on it (the signed one stays unchanged). Results are recomputed.
    */
-  saveAssessment(id: Id, content: AssessmentContent): Assessment;
+  saveAssessment(id: Id, content: AssessmentContent, expected?: SaveBase): Assessment;
+  /**
+   * The workspace's save: new and edited register lasers plus the assessment, in one transaction;
+   * refused whole (code 'stale') when any part changed since it was opened.
+   */
+  saveWork(save: WorkSave): WorkSaved;
   /** Delete an assessment that has no signed revision, or discard its open draft revision. */
   discardDraft(id: Id): void;
   listRevisions(assessmentId: Id): RevisionSummary[];
@@ -126,11 +137,15 @@ export interface RecordStore {
   /** Validate and import a document (parsed object or JSON text): all or nothing. */
   importDocument(doc: unknown): ImportSummary;
   /** CSV laser inventory for one room (columns in README); nothing imported if any row is bad. */
-  importLaserCsv(roomId: Id, csvText: string): CsvImportReport;
+  importLaserCsv(roomId: Id, csvText: string, existing?: CsvExistingChoice): CsvImportReport;
 
   // safekeeping
   /** Online backup to `path` (a consistent copy while the store stays open). */
   backup(path: string): Promise<void>;
+  /** "Back up now": a dated, checked copy in `folder` (default: `backups` beside the database), recorded. */
+  backupInto(folder?: string): Promise<BackupReport>;
+  /** The last recorded backup and the backups in the default folder. */
+  backupStatus(): BackupStatus;
   /** Loads the invented demo site (no-op if it is already there); returns its site. */
   seedDemo(): Site;
 }
@@ -143,6 +158,12 @@ export class RecordError extends Error {
       | 'invalid'
       | 'immutable'
       | 'conflict'
+      /** A save that started from an older state than the stored one (optimistic concurrency). */
+      | 'stale'
+      /** The database is open for writing in another Beamwarden process, or restore found it in use. */
+      | 'in-use'
+      /** The file system refused: read-only, immutable file, full disk, missing folder. */
+      | 'storage'
       | 'newer-database'
       | 'corrupt-database'
       | 'migration-failed'
