@@ -1,8 +1,10 @@
 /** Every memo of the calculation core, emptied at once (benchmarks of a cold evaluation; tests). */
 import { clearLimitCache } from './beam/limit-cache.js';
+import { clearTissueLimitCache } from './beam/tissue-limits.js';
 import { clearBeamCache } from './room/evaluate-room.js';
 
 export function clearCoreCaches(): void {
   clearLimitCache();
+  clearTissueLimitCache();
   clearBeamCache();
 }

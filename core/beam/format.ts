@@ -3,7 +3,9 @@
  * text, and the safe-direction rounding of reported values (distances, optical densities and scale
  * numbers UP; limits DOWN), as the result contract (core/model/results.ts) requires.
  */
-import { Dec, recordString, roundSig } from '../numeric/decimal.js';
+import { Dec, recordString } from '../numeric/decimal.js';
+
+export { distanceReported, odReported } from '../numeric/safe-rounding.js';
 
 /** Six significant figures for the trace; e-notation for very small or large magnitudes. */
 export function fmt(d: Dec): string {
@@ -15,18 +17,6 @@ export function fmt(d: Dec): string {
 /** Full-precision decimal string (20 significant digits) for records. */
 export function rec(d: Dec): string {
   return recordString(d);
-}
-
-/** A distance rounded UP to 3 significant figures; "0" stays "0". */
-export function distanceReported(d: Dec): string {
-  if (d.isZero()) return '0';
-  return roundSig(d, 3, 'up').toString();
-}
-
-/** An optical density rounded UP to one decimal place, never below 0. */
-export function odReported(od: Dec): string {
-  if (od.lte(0)) return '0';
-  return od.toDecimalPlaces(1, Dec.ROUND_UP).toString();
 }
 
 /** Largest of a non-empty list. */

@@ -5,7 +5,6 @@
  * Results are treated as read-only by every caller in the core.
  */
 import { exposureLimit, type ExposureLimitQuery, type ExposureLimitResult } from '../limits/exposure-limit.js';
-import { clearTissueLimitCache } from './tissue-limits.js';
 import { pulsedExposureLimit, type PulsedLimitQuery, type PulsedLimitResult } from '../limits/pulse-rules.js';
 
 const MAX_ENTRIES = 1000;
@@ -36,9 +35,8 @@ export function cachedPulsedLimit(q: PulsedLimitQuery): PulsedLimitResult {
   return r;
 }
 
-/** Empty the limit caches (the benchmark uses it to time a cold evaluation). */
+/** Empty the limit caches (core/caches.ts empties every memo of the core at once). */
 export function clearLimitCache(): void {
   cwCache.clear();
   pulsedCache.clear();
-  clearTissueLimitCache();
 }

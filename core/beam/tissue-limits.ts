@@ -13,7 +13,7 @@ import { DURATION_RANGE_S } from '../limits/rule-sets.js';
 import { addStep, newTrace, type Trace } from '../trace/trace.js';
 import { cachedExposureLimit, cachedPulsedLimit } from './limit-cache.js';
 import { fmt, rec } from './format.js';
-import { roundSig } from '../numeric/decimal.js';
+import { limitReported } from '../numeric/safe-rounding.js';
 
 export interface Criterion {
   readonly rule: PulseRule;
@@ -219,9 +219,9 @@ function computeTissueLimits(q: TissueQuery): TissueLimits {
     exposureDuration_s: Tq,
     durationWhy: q.durationWhy,
     H_Jm2: rec(H),
-    H_Jm2_reported: roundSig(H, 3, 'down').toString(),
+    H_Jm2_reported: limitReported(H),
     E_Wm2: rec(E),
-    E_Wm2_reported: roundSig(E, 3, 'down').toString(),
+    E_Wm2_reported: limitReported(E),
     governingRule,
     governingRow: govLimit.governing.rowId,
     governingEffect: govLimit.governing.effect,

@@ -138,9 +138,6 @@ function hFn(C: DecCtor, K: Dec, D: Dec, s: Spread, mu: Dec): H {
   };
 }
 
-/** Iteration counter (diagnostics). */
-export let newtonSteps = 0;
-
 /**
  * Safeguarded Newton on [lo, up] for a decreasing h. `safe` tells whether h(r) <= 0 was seen at
  * the returned r (upKnown: the caller knows h(up) <= 0 already).
@@ -152,7 +149,6 @@ function newton(h: H, lo0: Dec, up0: Dec, upKnown: boolean, tol: string): { r: D
   let r = up;
   const tolD = new Dec(tol);
   for (let i = 0; i < 200; i++) {
-    newtonSteps += 1;
     const { v, dv } = h(r);
     if (v.lte(0)) {
       up = r;

@@ -17,7 +17,8 @@
  * limit of one wavelength). A pulsed exposure is compared with its governing per-pulse limit in
  * every group it touches, which is never less strict than a group's own row.
  */
-import { Dec, recordString, roundSig } from '../numeric/decimal.js';
+import { Dec, recordString } from '../numeric/decimal.js';
+import { ratioReported } from '../numeric/safe-rounding.js';
 import { InputError } from '../errors.js';
 import type { Tissue } from '../model/inputs.js';
 import { addStep, newTrace, type Trace } from '../trace/trace.js';
@@ -198,7 +199,7 @@ export function additiveFractions(items: readonly AdditiveItem[]): AdditiveResul
       label: HAZARD_GROUP_LABEL[g],
       terms: list,
       sum: recordString(sum),
-      sum_reported: roundSig(sum, 3, 'up').toString(),
+      sum_reported: ratioReported(sum),
       exceeds: sum.gt(1),
     };
     groups.push(group);
@@ -218,14 +219,14 @@ export function additiveFractions(items: readonly AdditiveItem[]): AdditiveResul
   addStep(trace, {
     kind: 'result',
     label: 'Largest sum',
-    detail: `${governing.label}: ${withinLimits ? 'at most 1, within the limits' : 'above 1, the combined exposure exceeds the limit'} (rounded up: ${roundSig(max, 3, 'up').toString()})`,
+    detail: `${governing.label}: ${withinLimits ? 'at most 1, within the limits' : 'above 1, the combined exposure exceeds the limit'} (rounded up: ${ratioReported(max)})`,
     value: fmt(max),
   });
   return {
     groups,
     governing,
     maxSum: recordString(max),
-    maxSum_reported: roundSig(max, 3, 'up').toString(),
+    maxSum_reported: ratioReported(max),
     withinLimits,
     trace,
   };

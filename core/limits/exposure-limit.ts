@@ -8,7 +8,9 @@
  *  4. E rows converted to H = E * t; conservative alternatives applied;
  *  5. the minimum over all candidates governs (dual limits), and the result names it.
  */
-import { Dec, recordString, roundSig } from '../numeric/decimal.js';
+import { Dec, recordString } from '../numeric/decimal.js';
+import { limitReported } from '../numeric/safe-rounding.js';
+import { intervalPosition } from './intervals.js';
 import { InputError, requireInRange } from '../errors.js';
 import type { LimitSettings, RuleSetId, Tissue } from '../model/inputs.js';
 import { addStep, newTrace, type Trace } from '../trace/trace.js';
@@ -80,29 +82,6 @@ export interface ExposureLimitResult {
   readonly trace: Trace;
 }
 
-const REL_EDGE = new Dec('1e-9');
-
-/** Is x inside [lo, hi), or on an edge (within a relative tolerance, spec convention 'boundary_values')? */
-/** The interval edges as decimals, built once per table interval (the tables are fixed). */
-const edgeCache = new WeakMap<Interval, readonly [Dec, Dec]>();
-function edges(iv: Interval): readonly [Dec, Dec] {
-  let e = edgeCache.get(iv);
-  if (!e) {
-    e = [new Dec(iv[0]), new Dec(iv[1])];
-    edgeCache.set(iv, e);
-  }
-  return e;
-}
-
-function position(x: Dec, iv: Interval, topInclusive: boolean): 'inside' | 'edge' | 'outside' {
-  const [lo, hi] = edges(iv);
-  const near = (a: Dec, b: Dec): boolean => a.minus(b).abs().lte(Dec.max(a.abs(), b.abs()).mul(REL_EDGE));
-  if (near(x, hi)) return topInclusive ? 'inside' : 'edge';
-  if (near(x, lo)) return 'inside';
-  if (x.gt(lo) && x.lt(hi)) return 'inside';
-  return 'outside';
-}
-
 /**
  * Quick reject in plain numbers before the exact decimal test: a value more than 1e-6 (relative)
  * outside [lo, hi] can never be inside or on an edge (the exact test's tolerance is 1e-9). This only
@@ -114,8 +93,8 @@ function clearlyOutside(x: number, iv: Interval): boolean {
 
 function rowApplies(row: LimitRow, lambda: Dec, t: Dec, lambdaN: number, tN: number): boolean {
   if (clearlyOutside(lambdaN, row.band_nm) || clearlyOutside(tN, row.t_s)) return false;
-  const pl = position(lambda, row.band_nm, row.band_nm[1] === WAVELENGTH_RANGE_NM[1]);
-  const pt = position(t, row.t_s, row.t_s[1] === DURATION_RANGE_S[1]);
+  const pl = intervalPosition(lambda, row.band_nm, row.band_nm[1] === WAVELENGTH_RANGE_NM[1]);
+  const pt = intervalPosition(t, row.t_s, row.t_s[1] === DURATION_RANGE_S[1]);
   return pl !== 'outside' && pt !== 'outside';
 }
 
@@ -396,9 +375,9 @@ export function exposureLimit(q: ExposureLimitQuery): ExposureLimitResult {
       confidence: 'read',
     });
   }
-  const Hr = roundSig(H, 3, 'down');
-  const Er = roundSig(E, 3, 'down');
-  addStep(trace, { kind: 'rounding', label: 'Reported', detail: 'limits are rounded DOWN to 3 significant figures (the safe direction)', value: `${Hr.toString()} J/m²; ${Er.toString()} W/m²` });
+  const Hr = limitReported(H);
+  const Er = limitReported(E);
+  addStep(trace, { kind: 'rounding', label: 'Reported', detail: 'limits are rounded DOWN to 3 significant figures (the safe direction)', value: `${Hr} J/m²; ${Er} W/m²` });
   if (conservativeReplacements.length) {
     addStep(trace, {
       kind: 'warning',
@@ -416,8 +395,8 @@ export function exposureLimit(q: ExposureLimitQuery): ExposureLimitResult {
     sourceAngle_rad: q.sourceAngle_rad ?? 0,
     H_Jm2: recordString(H),
     E_Wm2: recordString(E),
-    H_Jm2_reported: Hr.toString(),
-    E_Wm2_reported: Er.toString(),
+    H_Jm2_reported: Hr,
+    E_Wm2_reported: Er,
     governing,
     candidates,
     get factors(): Record<string, string> {

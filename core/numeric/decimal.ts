@@ -23,14 +23,6 @@ export function dec(x: DecInput): Dec {
   return x instanceof Dec ? x : new Dec(x);
 }
 
-export function decMin(...xs: Dec[]): Dec {
-  return Dec.min(...xs);
-}
-
-export function decMax(...xs: Dec[]): Dec {
-  return Dec.max(...xs);
-}
-
 /** x^y with exact handling of integer and negative exponents via decimal.js. */
 export function pow(x: DecInput, y: DecInput): Dec {
   return dec(x).pow(dec(y));
@@ -38,12 +30,6 @@ export function pow(x: DecInput, y: DecInput): Dec {
 
 export function log10(x: DecInput): Dec {
   return dec(x).log(10);
-}
-
-/** Circle area from diameter (m -> m²). */
-export function circleArea(diameter: DecInput): Dec {
-  const d = dec(diameter);
-  return PI.mul(d).mul(d).div(4);
 }
 
 /**
@@ -63,13 +49,4 @@ export function roundPlaces(x: DecInput, places: number, direction: 'up' | 'down
 /** Full-precision decimal string for records (20 significant digits, plain notation where short). */
 export function recordString(x: Dec): string {
   return x.toSignificantDigits(20).toString();
-}
-
-/** Relative closeness, used for published breakpoints such as 1.8e-5 that are not exact in binary. */
-export function nearlyEqual(a: DecInput, b: DecInput, rel = 1e-9): boolean {
-  const x = dec(a);
-  const y = dec(b);
-  if (x.eq(y)) return true;
-  const scale = Dec.max(x.abs(), y.abs());
-  return x.minus(y).abs().lte(scale.mul(rel));
 }

@@ -3,7 +3,7 @@
  * becomes a Reply with a message naming the field, so neither the main process nor the host crashes
  * on bad input (issue 'The desktop app': "bad input returns a clear error, never a crash").
  */
-import type { z } from 'zod';
+import { ZodError, type z } from 'zod';
 import { InputError, officerPath, officerWords, placeInRoom } from '../../core/index.js';
 import { formatZodIssues } from '../backend/schemas/index.js';
 import { RecordError } from '../backend/records/types.js';
@@ -25,9 +25,17 @@ export function describeIssues(issues: readonly ApiIssue[]): string {
 }
 
 /**
- * Map anything thrown by a handler to a reply body. Known errors keep their field. A disk or
- * lock error that reached here unwrapped (SQLITE_FULL, EROFS, ...) is said plainly with the
- * database it concerns, never as "internal".
+ * What an officer reads when something went wrong inside the program: no developer message, file
+ * path or stack (those go to the log of the process that ran the handler).
+ */
+export const INTERNAL_MESSAGE = 'The program could not complete this request because of an internal error. Nothing you entered was refused; please report it with the application log.';
+
+/**
+ * Map anything thrown by a handler to a reply body, by its class: the caller's errors keep their
+ * field and message (ApiFailure, the core's InputError, the records' RecordError, a schema's
+ * ZodError); everything else is internal and answered with INTERNAL_MESSAGE only. A disk or lock
+ * error that reached here unwrapped (SQLITE_FULL, EROFS, ...) is said plainly with the database it
+ * concerns, never as "internal".
  */
 export function errorBody(e: unknown, databasePath?: string): ApiErrorBody {
   const storage = databasePath !== undefined ? storageError(e, databasePath, 'The last action') : null;
@@ -35,27 +43,17 @@ export function errorBody(e: unknown, databasePath?: string): ApiErrorBody {
   if (e instanceof ApiFailure) return e.field === undefined ? { code: e.code, message: e.message } : { code: e.code, message: e.message, field: e.field };
   if (e instanceof InputError) return { code: 'input_error', message: `${placeInRoom({}, e.field)}: ${officerWords(e)}`, field: e.field };
   if (e instanceof RecordError) {
-    const issues = e.issues.map((i) => ({ path: i.path, message: i.problem }));
     const code = RECORD_CODE[e.code];
+    if (code === 'internal') return { code, message: e.message };
+    const issues = e.issues.map((i) => ({ path: i.path, message: i.problem }));
     return issues.length > 0 ? { code, message: e.message, issues } : { code, message: e.message };
   }
-  if (e instanceof Error) {
-    // Errors from the records store and the PDF module carry their own clear messages and, where
-    // they name a field, a `field` or `path` property; keep them, classify by the `code` they carry.
-    const rec = e as Error & { code?: unknown; field?: unknown; path?: unknown };
-    const field = typeof rec.field === 'string' ? rec.field : typeof rec.path === 'string' ? rec.path : undefined;
-    const code = classify(rec.code, e.name);
-    return field === undefined ? { code, message: e.message } : { code, message: e.message, field };
+  if (e instanceof ZodError) {
+    const issues = issuesOf(e);
+    return { code: 'invalid_input', message: describeIssues(issues), issues };
   }
-  return { code: 'internal', message: String(e) };
-}
-
-function classify(code: unknown, name: string): ApiErrorBody['code'] {
-  const c = typeof code === 'string' ? code.toLowerCase() : '';
-  if (c.includes('not_found') || c.includes('notfound') || name === 'NotFoundError') return 'not_found';
-  if (c.includes('signed') || c.includes('immutable') || c.includes('conflict') || c.includes('constraint')) return 'conflict';
-  if (c.includes('invalid') || c.includes('schema') || c.includes('validation') || name === 'ValidationError') return 'invalid_input';
-  return 'internal';
+  console.error('internal error in a handler:', e);
+  return { code: 'internal', message: INTERNAL_MESSAGE };
 }
 
 const RECORD_CODE: Readonly<Record<RecordError['code'], ApiErrorBody['code']>> = {

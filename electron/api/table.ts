@@ -4,7 +4,7 @@
  * answers the renderer.
  */
 import type { ApiContext } from './context.js';
-import type { HandlerTable, OperationName } from './operation.js';
+import type { HandlerTable } from './operation.js';
 import { appTable } from './handlers/app.js';
 import { assessmentTable } from './handlers/assessments.js';
 import { documentTable } from './handlers/documents.js';
@@ -20,5 +20,3 @@ export const handlerTable: HandlerTable<ApiContext> = {
   ...documentTable,
   ...safekeepingTable,
 };
-
-export const OPERATION_NAMES = Object.keys(handlerTable) as readonly OperationName[];

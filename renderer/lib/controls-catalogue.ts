@@ -7,7 +7,7 @@
  * standard does not demand all of them (domain 4.1, [SUP-SIGN2]): the list is a prompt for the
  * officer's decision, not a verdict.
  */
-import type { ControlCategory, ControlChoice } from '../../electron/backend/records/types.js';
+import type { ControlCategory, ControlChoice } from '../../electron/api/contracts/records.js';
 import type { LaserClass } from '../../core/model/results.js';
 
 /** S shall, s should, MPE shall if the MPE can be exceeded, NHZ shall with an NHZ analysis, LSO decides, E embedded 3B/4, '-' none. */

@@ -3,7 +3,7 @@
  * headline results that moved (limits, distances, OD, scale numbers, class), and the rest (the
  * derivation steps that follow from them) only counted. Paths name lasers and beams by name.
  */
-import type { AssessmentContent, FieldDifference } from '../../electron/backend/records/types.js';
+import type { AssessmentContent, FieldDifference } from '../../electron/api/contracts/records.js';
 
 const HEADLINE = /\.(nohd_m_reported|odRequired|odRequired_reported|H_Jm2_reported|E_Wm2_reported|distance_m_reported|skinHazardDistance_m|nhzDiffuse_m|estimate|scale|largestHazardDistance_m|highestClass|eyewearCoveringAll|purchaseAdvice|adequate)(\[\d+\])?$/;
 

@@ -15,7 +15,7 @@ import type {
   EyewearChoice,
   NonBeamHazard,
   OperatingState,
-} from '../../electron/backend/records/types.js';
+} from '../../electron/api/contracts/records.js';
 import { laserFormFrom, laserInputFrom, beamErrors, missingValues, sectionGaps, type BeamForm, type LaserForm } from './beam-form.js';
 import { wavelengthNm } from './fields.js';
 

@@ -2,7 +2,7 @@
  * Non-beam hazards an assessment should list, with what to note (domain reference section 7, each
  * line's sources there: [REED], [UCB], [SL-16], [ISU-34], [CTO], [WIS], [UCHI], [EU-AOR]).
  */
-import type { NonBeamHazard, NonBeamHazardKind } from '../../electron/backend/records/types.js';
+import type { NonBeamHazard, NonBeamHazardKind } from '../../electron/api/contracts/records.js';
 
 export interface HazardInfo {
   readonly kind: NonBeamHazardKind;

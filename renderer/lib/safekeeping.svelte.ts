@@ -3,7 +3,7 @@
  * "Restore from backup". The reminder appears when the last backup is older than the officer's
  * setting (default 7 days) or there is none.
  */
-import type { BackupStatus } from '../../electron/backend/records/types.js';
+import type { BackupStatus } from '../../electron/api/contracts/records.js';
 import { invoke } from './api.js';
 import { session } from './session.svelte.js';
 import { settings } from './settings.svelte.js';

@@ -4,7 +4,7 @@
  */
 import type { AppInfo } from '../../electron/api/contracts/app.js';
 import type { RegisterOverview, RoomOverview } from '../../electron/api/contracts/register.js';
-import type { Assessment, AssessmentContent, LaserInstallation, Room, Site, WorkSaved } from '../../electron/backend/records/types.js';
+import type { Assessment, AssessmentContent, LaserInstallation, Room, Site, WorkSaved } from '../../electron/api/contracts/records.js';
 import { ApiError, invoke, messageOf } from './api.js';
 import { contentFrom, draftFrom, roomInputFrom, saveBlockers, type Draft } from './draft.js';
 import { completeHazards } from './hazards-catalogue.js';

@@ -124,11 +124,15 @@ describe('continuity at duration breakpoints (limit specification section 8)', (
 
 describe('aperture step named in section 8 (not a limit value, but worth a test)', () => {
   it('eu2006 eye aperture at 0.3 s: 1 mm below, 1.5*0.3^0.375 = 0.95 mm above (-5 %; EU limiting apertures, spec 5.5)', () => {
-    const below = Number(limitingAperture('eu2006', 'eye', 1550, 0.3 * (1 - 1e-9)).diameter_mm);
-    const above = Number(limitingAperture('eu2006', 'eye', 1550, 0.3 * (1 + 1e-9)).diameter_mm);
+    // 1e-6 either side: clear of the edge (values within 1e-9 ARE the edge, core/limits/intervals.ts)
+    const below = Number(limitingAperture('eu2006', 'eye', 1550, 0.3 * (1 - 1e-6)).diameter_mm);
+    const above = Number(limitingAperture('eu2006', 'eye', 1550, 0.3 * (1 + 1e-6)).diameter_mm);
+    const on = Number(limitingAperture('eu2006', 'eye', 1550, 0.3).diameter_mm);
     expect(below).toBe(1);
-    expect(above / (1.5 * 0.3 ** 0.375)).toBeCloseTo(1, 6);
+    expect(above / (1.5 * 0.3 ** 0.375)).toBeCloseTo(1, 5);
     expect(above / below).toBeCloseTo(0.955, 3);
+    // on the edge: the interval that starts there, [0.3 s, 10 s) (the one boundary convention)
+    expect(on / (1.5 * 0.3 ** 0.375)).toBeCloseTo(1, 5); // diameter_mm carries 6 figures
   });
 });
 

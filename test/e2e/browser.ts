@@ -3,13 +3,14 @@ import { chromium, type BrowserContext } from 'playwright-core';
 import { mkdtempSync } from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
+import { requireTool } from '../support/required-tool.js';
 
 export const CHROMIUM = process.env['BEAMWARDEN_CHROMIUM'] ?? '/usr/bin/chromium';
 
 export async function launch(viewport = { width: 1280, height: 800 }, downloadsPath?: string): Promise<BrowserContext> {
   const profile = mkdtempSync(path.join(os.tmpdir(), 'beamwarden-chromium-'));
   return chromium.launchPersistentContext(profile, {
-    executablePath: CHROMIUM,
+    executablePath: requireTool(CHROMIUM, 'chromium', 'to drive the interface (set BEAMWARDEN_CHROMIUM to use another build)'),
     headless: true,
     viewport,
     acceptDownloads: true,

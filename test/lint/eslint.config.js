@@ -63,6 +63,14 @@ export default tseslint.config(
     files: ['renderer/**/*.ts', 'renderer/**/*.js'],
     languageOptions: { globals: { ...globals.browser } },
   },
+  {
+    // The renderer sees the back end only through the contracts (electron/api/contracts): never the
+    // record store, SQLite or the PDF code (issue 13).
+    files: ['renderer/**/*.ts', 'renderer/**/*.js', 'renderer/**/*.svelte'],
+    rules: {
+      'no-restricted-imports': ['error', { patterns: [{ regex: '(^|/)electron/backend(/|$)', message: 'renderer/ must not import the back end: use the shared types in electron/api/contracts.' }] }],
+    },
+  },
   ...svelte.configs['flat/recommended'].map((c) => ({ ...c, files: c.files ?? ['**/*.svelte', '**/*.svelte.ts', '**/*.svelte.js'] })),
   {
     files: ['**/*.svelte', '**/*.svelte.ts', '**/*.svelte.js'],

@@ -13,7 +13,7 @@ import type {
   VerifyReport,
   WorkSave,
   WorkSaved,
-} from '../../backend/records/types.js';
+} from './records.js';
 
 export type AssessmentHandlers = {
   'room-input-from-register': (args: { readonly roomId: Id }) => Promise<RoomInput>;

@@ -1,5 +1,5 @@
 /** Contract of the 'documents' area: the three printed documents as PDF bytes. */
-import type { Id } from '../../backend/records/types.js';
+import type { Id } from './records.js';
 
 export type DocumentKind = 'report' | 'door-notice' | 'eyewear-sheet';
 

@@ -1,5 +1,5 @@
 /** Contract of the 'exchange' area: JSON export/import, CSV inventory import, demo data. */
-import type { CsvExistingChoice, CsvImportReport, Id, ImportSummary, Site } from '../../backend/records/types.js';
+import type { CsvExistingChoice, CsvImportReport, Id, ImportSummary, Site } from './records.js';
 
 export interface TextFile {
   /** Suggested file name, e.g. "beamwarden-room-B2.14-2026-12-01.json". */

@@ -12,7 +12,7 @@ import type {
   RoomDraft,
   Site,
   SiteDraft,
-} from '../../backend/records/types.js';
+} from './records.js';
 
 type Patch<T> = { readonly id: Id; readonly patch: T };
 

@@ -1,5 +1,5 @@
 /** Maps a stored assessment revision (record store) to the documents' input. */
-import type { Person, RecordStore, Revision } from '../records/types.js';
+import { RecordError, type Person, type RecordStore, type Revision } from '../records/types.js';
 import type { DocumentInput } from './document-input.js';
 import { emergencyContactFor } from '../records/emergency-contact.js';
 
@@ -24,7 +24,7 @@ export function documentInputFromAssessment(store: RecordStore, assessmentId: st
   const assessment = store.getAssessment(assessmentId);
   const revision = options.revisionId === undefined ? assessment.current : store.getRevision(options.revisionId);
   if (revision.assessmentId !== assessment.id) {
-    throw new Error(`revisionId: revision ${options.revisionId ?? ''} belongs to another assessment`);
+    throw new RecordError('invalid', `revision ${options.revisionId ?? ''} belongs to another assessment`, [{ path: 'revisionId', problem: 'belongs to another assessment' }]);
   }
   const room = store.getRoom(assessment.roomId);
   const site = store.getSite(room.siteId);

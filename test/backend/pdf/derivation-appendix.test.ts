@@ -11,6 +11,7 @@
  * ANSI/ASME Y14.1 (Letter, 612 x 792 pt).
  */
 import { execFileSync } from 'node:child_process';
+import { requireTool } from '../../support/required-tool.js';
 import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
@@ -36,7 +37,7 @@ function words(pdf: Buffer): Word[] {
   try {
     const file = join(dir, 'doc.pdf');
     writeFileSync(file, pdf);
-    const html = execFileSync('pdftotext', ['-bbox', '-enc', 'UTF-8', file, '-'], { encoding: 'utf8', maxBuffer: 64 * 1024 * 1024 });
+    const html = execFileSync(requireTool('pdftotext', 'poppler-utils', 'to read word boxes from the PDF'), ['-bbox', '-enc', 'UTF-8', file, '-'], { encoding: 'utf8', maxBuffer: 64 * 1024 * 1024 });
     const out: Word[] = [];
     let page = 0;
     let pageWidth = 0;

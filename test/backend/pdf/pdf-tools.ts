@@ -4,6 +4,7 @@
  * image with jsQR. No mocks: the real pdfmake output is inspected.
  */
 import { execFileSync } from 'node:child_process';
+import { requireTool } from '../../support/required-tool.js';
 import { mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
@@ -23,7 +24,7 @@ function withFile<T>(pdf: Buffer, f: (file: string, dir: string) => T): T {
 
 /** Text of each page (reading order, not layout), whitespace collapsed so wrapped lines still match. */
 export function pageTexts(pdf: Buffer): string[] {
-  const raw = withFile(pdf, (file) => execFileSync('pdftotext', ['-enc', 'UTF-8', file, '-'], { encoding: 'utf8' }));
+  const raw = withFile(pdf, (file) => execFileSync(requireTool('pdftotext', 'poppler-utils', 'to read the PDF text back'), ['-enc', 'UTF-8', file, '-'], { encoding: 'utf8' }));
   const pages = raw.split('\f');
   if (pages.length > 1 && pages[pages.length - 1]?.trim() === '') pages.pop();
   return pages.map(collapse);
@@ -50,7 +51,7 @@ export function pdfInfo(pdf: Buffer): PdfInfo {
 export function decodeQr(pdf: Buffer, page: number): string | null {
   return withFile(pdf, (file, dir) => {
     const base = join(dir, 'page');
-    execFileSync('pdftoppm', ['-png', '-r', '150', '-f', String(page), '-l', String(page), '-singlefile', file, base]);
+    execFileSync(requireTool('pdftoppm', 'poppler-utils', 'to render the PDF pages'), ['-png', '-r', '150', '-f', String(page), '-l', String(page), '-singlefile', file, base]);
     const png = PNG.sync.read(readFileSync(`${base}.png`));
     const code = jsQR(new Uint8ClampedArray(png.data), png.width, png.height);
     return code === null ? null : code.data;

@@ -40,10 +40,6 @@ const RULE_NAME: Readonly<Record<BeamResult['mpe']['governingRule'], string>> = 
   'pulse-train': 'reduced single-pulse rule (pulse train)',
 };
 
-export function ruleName(rule: BeamResult['mpe']['governingRule']): string {
-  return RULE_NAME[rule];
-}
-
 export function beamFigures(beam: BeamResult, units: UnitHabit): BeamFigures {
   const pulsed = beam.mpe.governingRule !== 'cw';
   const limit = pulsed

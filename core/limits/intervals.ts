@@ -1,0 +1,52 @@
+/**
+ * The one boundary convention of the tables (limit specification, convention 'boundary_values'):
+ * every band and duration interval is half-open [lo, hi), and a value within 1e-9 (relative) of an
+ * edge is ON that edge (published breakpoints such as 1.8e-5 s, and durations computed from them,
+ * are not exact in binary). What "on an edge" means for each table:
+ *  - limit rows: the rows on both sides apply and the lower limit governs (EU 2006/25/EC Table 2.2
+ *    note a; core/limits/exposure-limit.ts);
+ *  - factors and apertures: the interval that starts there; at the top edge of the last interval,
+ *    the interval that ends there.
+ */
+import { Dec } from '../numeric/decimal.js';
+import type { Interval } from './table-types.js';
+
+const REL_EDGE = new Dec('1e-9');
+
+/** The interval edges as decimals, built once per table interval (the tables are fixed). */
+const edgeCache = new WeakMap<Interval, readonly [Dec, Dec]>();
+function edges(iv: Interval): readonly [Dec, Dec] {
+  let e = edgeCache.get(iv);
+  if (!e) {
+    e = [new Dec(iv[0]), new Dec(iv[1])];
+    edgeCache.set(iv, e);
+  }
+  return e;
+}
+
+/** Is x on the edge e (within 1e-9 relative)? */
+export function onEdge(x: Dec, e: Dec): boolean {
+  return x.minus(e).abs().lte(Dec.max(x.abs(), e.abs()).mul(REL_EDGE));
+}
+
+/**
+ * Where x lies against [lo, hi): 'inside' (on lo counts as inside), 'edge' (on hi), or 'outside'.
+ * topInclusive: hi is the end of the tables' whole range, so a value on it is inside.
+ */
+export function intervalPosition(x: Dec, iv: Interval, topInclusive = false): 'inside' | 'edge' | 'outside' {
+  const [lo, hi] = edges(iv);
+  if (onEdge(x, hi)) return topInclusive ? 'inside' : 'edge';
+  if (onEdge(x, lo)) return 'inside';
+  if (x.gt(lo) && x.lt(hi)) return 'inside';
+  return 'outside';
+}
+
+/** x in [lo, hi) under the convention. */
+export function inInterval(x: Dec, iv: Interval): boolean {
+  return intervalPosition(x, iv) === 'inside';
+}
+
+/** x on the top edge hi of the interval. */
+export function atTop(x: Dec, iv: Interval): boolean {
+  return intervalPosition(x, iv) === 'edge';
+}

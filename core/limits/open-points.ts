@@ -1,0 +1,60 @@
+/**
+ * The open-points list: every table entry not read in a published source (confidence 'from memory',
+ * 'from memory, uncertain' or 'ours'), generated from the tables' own confidence marks so that the
+ * list in OPEN-POINTS.md cannot drift from the data (test/core/open-points.test.ts compares them).
+ */
+import { RULE_SET_IDS, RULE_SET_NAME, ruleSetTable } from './rule-sets.js';
+import type { Interval } from './table-types.js';
+
+export interface OpenPoint {
+  readonly what: string;
+  readonly confidence: string;
+  readonly source: string;
+}
+
+const isOpen = (confidence: string | undefined): confidence is string => confidence !== undefined && (confidence.startsWith('from memory') || confidence === 'ours');
+const span = (iv: Interval | undefined, unit: string): string => (iv ? `${iv[0]}–${iv[1]} ${unit}` : '');
+
+export function openPoints(ruleSet: (typeof RULE_SET_IDS)[number]): OpenPoint[] {
+  const t = ruleSetTable(ruleSet);
+  const out: OpenPoint[] = [];
+  for (const tissue of ['eye', 'skin'] as const) {
+    for (const r of t[tissue]) {
+      if (isOpen(r.confidence)) out.push({ what: `limit row ${r.id} (${tissue}, ${span(r.band_nm, 'nm')}, ${span(r.t_s, 's')}, ${r.effect})`, confidence: r.confidence, source: r.source });
+    }
+    for (const a of t.apertures[tissue]) {
+      if (isOpen(a.confidence)) out.push({ what: `${tissue} aperture ${a.diameter_mm} mm (${span(a.band_nm, 'nm')}, ${span(a.t_s, 's')})`, confidence: a.confidence, source: a.source });
+    }
+  }
+  for (const [name, def] of Object.entries(t.factors)) {
+    if (def.pieces) {
+      for (const p of def.pieces) {
+        const c = p.confidence ?? def.confidence;
+        if (isOpen(c)) out.push({ what: `factor ${name}${p.band_nm ? `, ${span(p.band_nm, 'nm')}` : ''}${p.t_s ? `, ${span(p.t_s, 's')}` : ''}${p.alpha_mrad ? `, ${p.alpha_mrad}` : ''}: ${p.expr}`, confidence: c, source: p.source ?? def.source ?? '' });
+      }
+    } else if (isOpen(def.confidence)) {
+      out.push({ what: `factor ${name}: ${def.expr ?? String(def.value)}`, confidence: def.confidence, source: def.source ?? '' });
+    }
+  }
+  return out;
+}
+
+/** The whole list as Markdown (OPEN-POINTS.md). */
+export function openPointsMarkdown(): string {
+  const lines = [
+    '# Open points: table entries not yet read in a published source',
+    '',
+    'Generated from the confidence marks of the limit tables (core/limits/tables) by `npm run open-points`;',
+    'test/core/open-points.test.ts fails when this file and the tables disagree. Every entry below must be',
+    'checked against the published document before it is marked `read` (or listed in settings.verifiedRows).',
+    'In conservative mode (the default) entries with a stricter alternative use it until then.',
+    '',
+  ];
+  for (const id of RULE_SET_IDS) {
+    const points = openPoints(id);
+    lines.push(`## ${RULE_SET_NAME[id]} (\`${id}\`): ${points.length} entries`, '');
+    for (const p of points) lines.push(`- ${p.what} — ${p.confidence}; ${p.source}`);
+    lines.push('');
+  }
+  return lines.join('\n');
+}
