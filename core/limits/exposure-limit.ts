@@ -334,18 +334,22 @@ export function exposureLimit(q: ExposureLimitQuery): ExposureLimitResult {
           : '') +
         (c.relaxed
           ? c.relaxed.used
-            ? `; verified with the alternative reading ${c.relaxed.expr} (${c.relaxed.source}): H = ${fmt(new Dec(c.relaxed.H_Jm2))} J/m² used instead of ${fmt(new Dec(c.relaxed.keptH_Jm2))} J/m²`
-            : `; uncertain entry: alternative reading ${c.relaxed.expr} = ${fmt(new Dec(c.relaxed.H_Jm2))} J/m² (${c.relaxed.source}) not used, the stricter ${fmt(new Dec(c.relaxed.keptH_Jm2))} J/m² is kept until the row is verified`
+            ? `; checked with the alternative reading ${c.relaxed.expr}: H = ${fmt(new Dec(c.relaxed.H_Jm2))} J/m² used instead of ${fmt(new Dec(c.relaxed.keptH_Jm2))} J/m²`
+            : `; unchecked entry: alternative reading ${c.relaxed.expr} = ${fmt(new Dec(c.relaxed.H_Jm2))} J/m² not used, the stricter ${fmt(new Dec(c.relaxed.keptH_Jm2))} J/m² is kept until the row is checked`
           : '') +
         (c.factorsFromBelow ? '; factors taken from the piece ending at this exact edge, which gives the lower value (EU Table 2.2 note a)' : '') +
         (c.cap
-          ? `; not to exceed ${c.cap.E_Wm2} W/m²: ${fmt(new Dec(c.cap.uncappedH_Jm2).div(t))} W/m² capped to ${c.cap.E_Wm2} W/m² (H = ${fmt(new Dec(c.H_Jm2))} J/m²; ${c.cap.source})${c.cap.conservative ? ' (conservative mode)' : ''}`
+          ? `; not to exceed ${c.cap.E_Wm2} W/m²: ${fmt(new Dec(c.cap.uncappedH_Jm2).div(t))} W/m² capped to ${c.cap.E_Wm2} W/m² (H = ${fmt(new Dec(c.H_Jm2))} J/m²)${c.cap.conservative ? ' (conservative mode)' : ''}`
           : ''),
       value: fmt(new Dec(c.H_Jm2)),
       unit: 'J/m²',
       source: c.source,
       confidence: c.confidence,
     });
+  }
+  for (const c of candidates) {
+    if (c.cap) addStep(trace, { kind: c.cap.conservative ? 'conservative' : 'row', label: `Cap on row ${c.rowId}`, detail: `the limit is not to exceed ${c.cap.E_Wm2} W/m² (Table 2.3 note)`, source: c.cap.source, confidence: c.cap.confidence });
+    if (c.relaxed) addStep(trace, { kind: 'note', label: `Alternative reading of row ${c.rowId}`, detail: `older editions give ${c.relaxed.expr} J/m² here (10 W/m²); ${c.relaxed.used ? 'used: the row was checked with that reading' : 'not used until the row is checked with that reading'}`, source: c.relaxed.source, confidence: 'from memory, uncertain' });
   }
   if (candidates.length > 1) {
     addStep(trace, {

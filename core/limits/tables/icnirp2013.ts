@@ -391,7 +391,7 @@ export const ICNIRP2013_TABLE: RuleSetTable = {
       "relaxed_alt": {
         "expr": "10*t",
         "when": "t > 1000",
-        "source": "older editions (from memory): E = 10 W/m² from 1000 s to 30 000 s (limit specification errata); used only once the row is verified with that reading",
+        "source": "older ICNIRP / IEC 60825-1 editions: E = 10 W/m^2 from 1000 s (from memory)",
         "confidence": "from memory, uncertain"
       }
     },
@@ -652,7 +652,7 @@ export const ICNIRP2013_TABLE: RuleSetTable = {
       "when": "alpha > 1.5 and t > T2",
       "max_E": {
         "value": "1000",
-        "source": "EU Directive 2006/25/EC Annex II Table 2.3 note (from memory), applied to set (a) while unverified (limit specification errata)",
+        "source": "EU 2006/25/EC Annex II Table 2.3 note: not to exceed 1000 W/m^2 (from memory), applied while unverified",
         "confidence": "from memory, uncertain",
         "conservativeOnly": true
       }
@@ -784,7 +784,7 @@ export const ICNIRP2013_TABLE: RuleSetTable = {
       "when": "alpha > 1.5 and t > T2",
       "max_E": {
         "value": "1000",
-        "source": "EU Directive 2006/25/EC Annex II Table 2.3 note (from memory), applied to set (a) while unverified (limit specification errata)",
+        "source": "EU 2006/25/EC Annex II Table 2.3 note: not to exceed 1000 W/m^2 (from memory), applied while unverified",
         "confidence": "from memory, uncertain",
         "conservativeOnly": true
       }

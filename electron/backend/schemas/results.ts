@@ -76,10 +76,12 @@ export const DistanceResultSchema = z.strictObject({
   zero: z.boolean(),
   governingRule: PulseRuleSchema,
   measuredFrom: z.string(),
+  trace: TraceSchema,
+  // Diffuse viewing cases, after the trace: the core writes them in this order, and a record must
+  // re-export byte for byte (zod returns the keys in the schema's order).
   viewing: z.enum(['accidental', 'deliberate']).optional(),
   exposureDuration_s: z.number().optional(),
   governs: z.boolean().optional(),
-  trace: TraceSchema,
 });
 
 export const OdRequirementSchema = z.strictObject({
