@@ -4,6 +4,7 @@
  */
 import type { DocumentInput, RenderOptions } from './document-input.js';
 import { renderPdf } from './runtime.js';
+import { pdfPageCount } from './page-count.js';
 import { reportDefinition } from './documents/report.js';
 import { doorNoticeDefinition, NOTICE_FIT_LEVELS } from './documents/door-notice.js';
 import { eyewearSheetDefinition, SHEET_FIT_LEVELS } from './documents/eyewear-sheet.js';
@@ -16,10 +17,8 @@ export function renderReport(doc: DocumentInput, opts: RenderOptions): Promise<B
   return renderPdf(reportDefinition(doc, opts));
 }
 
-/** Pages of a PDF written by pdfkit (its page objects are plain text in the file). */
-export function pdfPageCount(pdf: Buffer): number {
-  return pdf.toString('latin1').match(/\/Type \/Page\b(?!s)/g)?.length ?? 0;
-}
+export { pdfPageCount } from './page-count.js';
+export { renderSiteDoorNotices, type SiteBatch } from './site-batch.js';
 
 /**
  * The door notice is one page, whatever the room: when the content does not fit, it is set again

@@ -71,3 +71,21 @@ describe('a signed revision reprints exactly as signed after a new draft exists'
     expect(newDraft.pages.join(' ')).toMatch(/\bDRAFT\b/);
   }, 180_000);
 });
+
+describe('door notices of every room of a site in one PDF', () => {
+  it('one page per room, each room on its own page, DRAFT only where the room is a draft', async () => {
+    const site = store.listSites()[0];
+    if (!site) throw new Error('demo site missing');
+    const req = documentTable['document-render-site'].input.parse({ kind: 'door-notice', siteId: site.id, paper: 'Letter', units: 'SI' });
+    const file = await documentTable['document-render-site'].run(req, ctx);
+    const pages = pageTexts(Buffer.from(file.base64, 'base64'));
+    const rooms = store.listRooms(site.id).filter((r) => store.listAssessments(r.id).length > 0);
+    expect(pages).toHaveLength(rooms.length);
+    rooms.forEach((r, i) => {
+      expect(pages[i], r.code).toContain(`${r.code} —`);
+      const a = store.listAssessments(r.id)[0];
+      const draft = a !== undefined && store.getAssessment(a.id).current.status === 'draft';
+      expect(/\bDRAFT\b/.test(pages[i] ?? ''), `${r.code} draft mark`).toBe(draft);
+    });
+  }, 180_000);
+});
