@@ -50,7 +50,6 @@ export function generatedLasers(shape: RoomShape): LaserInput[] {
 }
 
 export function generatedDocument(shape: RoomShape): DocumentInput {
-  const scenario = DemoScenarioSchema.parse(demo);
   const input: RoomInput = { ruleSet: shape.ruleSet ?? 'icnirp2013', lasers: generatedLasers(shape), eyewear: shelf(shape.eyewear) };
   const base = benchDocument(input);
   const controls: readonly ControlChoice[] = shape.allControls
