@@ -99,6 +99,13 @@ export const SOURCE_CITATIONS: Readonly<Record<string, string>> = {
   'EU-FR Tableau 2.5 (named T1 there); EU-NO Table 4.5': `${DIR}, Table 2.5 (break time T1)`,
   "EU-FR Tableau 2.2 (read); formula identity 'derived'": `${DIR}, Table 2.2 (the formula rearranged)`,
   'BGI832 (read; reflects IEC 60825-1:2001 practice, the Directive itself is silent)': 'BGI 832 (German statutory accident insurance guidance on operating lasers), after IEC 60825-1:2001; the Directive gives no value',
+  'older editions (from memory): E = 10 W/m² from 1000 s to 30 000 s (limit specification errata); used only once the row is verified with that reading':
+    `earlier editions of the ICNIRP and IEC limits (E = 10 W/m² from 1000 s to 30 000 s); used only once the row is checked with that reading`,
+  'EU Directive 2006/25/EC Annex II Table 2.3 note (from memory), applied to set (a) while unverified (limit specification errata)':
+    `${DIR}, note to the limits for the eye at 10 s and longer, applied while the row is not yet checked`,
+  'EU Directive 2006/25/EC Annex II Table 2.3, note beside the 700-1400 nm entry: not to exceed 1000 W/m^2 (from memory; limit specification errata)':
+    `${DIR}, note to the limits for the eye at 10 s and longer (700–1400 nm): not to exceed 1000 W/m²`,
+  'limit specification errata (apertures at an exact edge)': 'Beamwarden’s rule for a duration or wavelength exactly at a table edge (limiting apertures)',
   // Hazard distances, eyewear and classes (formulas of the core).
   'ANSI Z136.1 App. B (domain notes 1.3)': `${ANSI_EVAL} (beam behind a lens)`,
   'ANSI Z136.1 App. B; ANSI Z136.2 (domain notes 1.6)': `${ANSI_EVAL}; ANSI Z136.2 (optical fibre systems)`,
@@ -115,6 +122,7 @@ export const SOURCE_CITATIONS: Readonly<Record<string, string>> = {
   'domain notes 1.5 (derived); specular reflections treated as intrabeam in ANSI Z136.1 section 3': `${ANSI_EVAL}: a specular reflection is treated as the direct beam`,
   'domain notes 1.6 (derived from Gaussian optics)': 'Gaussian beam optics: far field of a single-mode fibre from its mode-field diameter',
   'domain notes 1.7 (derived from first-order optics; IEC TR 60825-14 and ANSI Z136.6 approach)': `first-order optics for viewing aids, after the approach of ${TR14} and ANSI Z136.6`,
+  'domain notes 1.7 (derived from first-order optics; gain K as in IEC TR 60825-14 and ANSI Z136.6, from memory)': `first-order optics for viewing aids; gain as in ${TR14} and ANSI Z136.6`,
   'ours, pending the additivity table of IEC 60825-1 (limit specification sections 3 and 10)':
     'exposures acting on the same tissue and effect are added (fractions of the limit), pending the additivity table of IEC 60825-1:2014',
   // Issue 9: edge rules, caps and alternative readings.

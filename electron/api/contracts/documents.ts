@@ -21,6 +21,15 @@ export interface DocumentRequest {
   readonly signalWord?: 'DANGER';
 }
 
+export interface SiteDocumentRequest {
+  readonly kind: 'door-notice';
+  readonly siteId: Id;
+  readonly paper: 'A4' | 'Letter';
+  readonly units: 'SI' | 'ANSI';
+}
+
 export type DocumentHandlers = {
   'document-render': (args: DocumentRequest) => Promise<BinaryFile>;
+  /** The door notices of every room of a site (current revisions) in one PDF, one page per room. */
+  'document-render-site': (args: SiteDocumentRequest) => Promise<BinaryFile>;
 };

@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import { IdSchema } from '../../backend/schemas/index.js';
-import { DOCUMENT_FILE_NAME, documentInputFromAssessment, renderDocument } from '../../backend/pdf/index.js';
+import { DOCUMENT_FILE_NAME, documentInputFromAssessment, renderDocument, renderSiteDoorNotices } from '../../backend/pdf/index.js';
 import type { DocumentHandlers } from '../contracts/documents.js';
 import type { ApiContext } from '../context.js';
 import type { AreaTable } from '../operation.js';
@@ -12,6 +12,13 @@ export const DocumentRequestSchema = z.strictObject({
   paper: z.enum(['A4', 'Letter']),
   units: z.enum(['SI', 'ANSI']),
   signalWord: z.literal('DANGER').optional(),
+});
+
+export const SiteDocumentRequestSchema = z.strictObject({
+  kind: z.literal('door-notice'),
+  siteId: IdSchema,
+  paper: z.enum(['A4', 'Letter']),
+  units: z.enum(['SI', 'ANSI']),
 });
 
 function fileSafe(s: string): string {
@@ -31,6 +38,14 @@ export const documentTable: AreaTable<DocumentHandlers, ApiContext> = {
       const state = doc.signature ? 'signed' : 'DRAFT';
       const fileName = `${DOCUMENT_FILE_NAME[req.kind]}-${fileSafe(doc.room.code)}-rev${doc.assessment.revisionNo}-${state}.pdf`;
       return { fileName, mime: 'application/pdf', base64: pdf.toString('base64') };
+    },
+  },
+  'document-render-site': {
+    input: SiteDocumentRequestSchema,
+    run: async (req, { store }) => {
+      const site = store.getSite(req.siteId);
+      const batch = await renderSiteDoorNotices(store, site.id, { paper: req.paper, units: req.units });
+      return { fileName: `door-notices-${fileSafe(site.name)}-${batch.rooms.length}-rooms.pdf`, mime: 'application/pdf', base64: batch.pdf.toString('base64') };
     },
   },
 };

@@ -4,9 +4,10 @@
  */
 import type { DocumentInput, RenderOptions } from './document-input.js';
 import { renderPdf } from './runtime.js';
+import { pdfPageCount } from './page-count.js';
 import { reportDefinition } from './documents/report.js';
 import { doorNoticeDefinition, NOTICE_FIT_LEVELS } from './documents/door-notice.js';
-import { eyewearSheetDefinition } from './documents/eyewear-sheet.js';
+import { eyewearSheetDefinition, SHEET_FIT_LEVELS } from './documents/eyewear-sheet.js';
 
 export type { DocumentInput, RenderOptions, Paper, InstallationInfo, SignatureInfo } from './document-input.js';
 export { renderOptionsSchema, DEFAULT_RENDER_OPTIONS } from './document-input.js';
@@ -16,10 +17,8 @@ export function renderReport(doc: DocumentInput, opts: RenderOptions): Promise<B
   return renderPdf(reportDefinition(doc, opts));
 }
 
-/** Pages of a PDF written by pdfkit (its page objects are plain text in the file). */
-export function pdfPageCount(pdf: Buffer): number {
-  return pdf.toString('latin1').match(/\/Type \/Page\b(?!s)/g)?.length ?? 0;
-}
+export { pdfPageCount } from './page-count.js';
+export { renderSiteDoorNotices, type SiteBatch } from './site-batch.js';
 
 /**
  * The door notice is one page, whatever the room: when the content does not fit, it is set again
@@ -31,8 +30,11 @@ export async function renderDoorNotice(doc: DocumentInput, opts: RenderOptions):
   return pdf;
 }
 
-export function renderEyewearSheet(doc: DocumentInput, opts: RenderOptions): Promise<Buffer> {
-  return renderPdf(eyewearSheetDefinition(doc, opts));
+/** The eyewear sheet is one page for rooms up to 10 lasers and 10 eyewear items: set again tighter when it would spill. */
+export async function renderEyewearSheet(doc: DocumentInput, opts: RenderOptions): Promise<Buffer> {
+  let pdf = await renderPdf(eyewearSheetDefinition(doc, opts, 0));
+  for (let fit = 1; fit < SHEET_FIT_LEVELS && pdfPageCount(pdf) > 1; fit++) pdf = await renderPdf(eyewearSheetDefinition(doc, opts, fit));
+  return pdf;
 }
 
 export type DocumentKind = 'report' | 'door-notice' | 'eyewear-sheet';

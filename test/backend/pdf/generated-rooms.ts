@@ -6,7 +6,7 @@
  */
 import demo from '../../../assets/demo/demo-scenario.json' with { type: 'json' };
 import { evaluateRoom } from '../../../core/index.js';
-import type { LaserInput, RoomInput, RuleSetId } from '../../../core/model/inputs.js';
+import type { EyewearSpec, LaserInput, RoomInput, RuleSetId } from '../../../core/model/inputs.js';
 import { DemoScenarioSchema } from '../../../electron/backend/records/demo.js';
 import type { DocumentInput } from '../../../electron/backend/pdf/index.js';
 import type { ControlChoice } from '../../../electron/backend/records/types.js';
@@ -18,6 +18,19 @@ export interface RoomShape {
   readonly longNames?: boolean;
   readonly allControls?: boolean;
   readonly ruleSet?: RuleSetId;
+  /** Eyewear items on the shelf (the demo's, then invented copies with other tags); default the demo's. */
+  readonly eyewear?: number;
+}
+
+function shelf(count: number | undefined): EyewearSpec[] {
+  const demoShelf = DemoScenarioSchema.parse(demo).eyewear;
+  if (count === undefined) return demoShelf;
+  return Array.from({ length: count }, (_, i) => {
+    const e = demoShelf[i % demoShelf.length] as EyewearSpec;
+    if (i < demoShelf.length) return e;
+    const id = `EW-${String.fromCharCode(65 + i)}`;
+    return { ...e, id, label: `${id} (${e.label.replace(/^.*\(|\)$/g, '')}, second pair)` };
+  });
 }
 
 const WAVELENGTHS = [266, 355, 405, 445, 488, 515, 532, 561, 589, 633, 660, 785, 808, 905, 980, 1030, 1064, 1320, 1550, 2940, 10600];
@@ -37,8 +50,7 @@ export function generatedLasers(shape: RoomShape): LaserInput[] {
 }
 
 export function generatedDocument(shape: RoomShape): DocumentInput {
-  const scenario = DemoScenarioSchema.parse(demo);
-  const input: RoomInput = { ruleSet: shape.ruleSet ?? 'icnirp2013', lasers: generatedLasers(shape), eyewear: scenario.eyewear };
+  const input: RoomInput = { ruleSet: shape.ruleSet ?? 'icnirp2013', lasers: generatedLasers(shape), eyewear: shelf(shape.eyewear) };
   const base = benchDocument(input);
   const controls: readonly ControlChoice[] = shape.allControls
     ? CONTROL_CATALOGUE.map((c) => ({ category: c.category, measure: c.measure, decision: 'accepted', implementation: 'in-place' }))

@@ -62,7 +62,7 @@ export function shortReason(v: EyewearVerdict, wavelength_nm: number): string {
 }
 
 /** Rows: eyewear; columns: beams. YES (green) / NO (red) with the OD margin. */
-export function coverageMatrix(doc: DocumentInput, view: RoomView, fontSize: number, firstColumn?: (e: EyewearSpec) => TableCell, withNeeds = false): Content {
+export function coverageMatrix(doc: DocumentInput, view: RoomView, fontSize: number, firstColumn?: (e: EyewearSpec) => TableCell, withNeeds = false, firstWidth = 92, reasons = true, tight = false): Content {
   const eyewear = doc.content.input.eyewear ?? [];
   if (eyewear.length === 0) return { text: 'No eyewear is listed for this room.', bold: true, color: COLOR.bad };
   const beamCols = view.beams.map(
@@ -72,10 +72,12 @@ export function coverageMatrix(doc: DocumentInput, view: RoomView, fontSize: num
     firstColumn ? firstColumn(e) : { text: e.label, bold: true },
     ...view.beams.map((b) => {
       const v = verdictOf(doc, b.result.beamId, e.id);
-      return v === null ? ({ text: 'not checked', color: COLOR.muted } as TableCell) : verdictCell(v.adequate, shortReason(v, b.result.wavelength_nm), fontSize);
+      return v === null ? ({ text: 'not checked', color: COLOR.muted } as TableCell) : verdictCell(v.adequate, reasons ? shortReason(v, b.result.wavelength_nm) : '', fontSize);
     }),
   ]);
-  return gridTable(['Eyewear', ...beamCols], rows, [firstColumn ? 92 : 80, ...view.beams.map(() => '*')], fontSize);
+  const table = gridTable(['Eyewear', ...beamCols], rows, [firstColumn ? firstWidth : 80, ...view.beams.map(() => '*')], fontSize);
+  // A crowded sheet: rows only as tall as their one line of YES / NO.
+  return tight ? { ...table, layout: { ...(table.layout as object), paddingTop: () => 0.5, paddingBottom: () => 0.5 } } : table;
 }
 
 /** Per eyewear: the beams it covers and the beams it must not be used for, with a short reason. */

@@ -1,0 +1,91 @@
+// @vitest-environment node
+/**
+ * Reprinting any revision (issue: printed documents an auditor accepts). Through the API's
+ * 'document-render' handler on a real record store: a signed revision printed again after a new
+ * draft exists gives the same text as its first print, with its fingerprint and no DRAFT mark; the
+ * new draft prints DRAFT. derived: a signed record is fixed; its paper must not change.
+ */
+import { mkdtempSync, rmSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { documentTable } from '../../../electron/api/handlers/documents.js';
+import type { ApiContext } from '../../../electron/api/context.js';
+import { openRecordStore, type RecordStore } from '../../../electron/backend/records/index.js';
+import { pageTexts } from './pdf-tools.js';
+
+let dir = '';
+let store: RecordStore;
+let ctx: ApiContext;
+
+beforeAll(() => {
+  dir = mkdtempSync(join(tmpdir(), 'bw-reprint-'));
+  store = openRecordStore({ path: join(dir, 'demo.sqlite'), keyDir: join(dir, 'keys') });
+  store.seedDemo();
+  ctx = { shell: 'loopback', version: 'test', databasePath: join(dir, 'demo.sqlite'), store };
+});
+
+afterAll(() => {
+  store?.close();
+  if (dir) rmSync(dir, { recursive: true, force: true });
+});
+
+async function print(kind: 'report' | 'door-notice' | 'eyewear-sheet', assessmentId: string, revisionId?: string): Promise<{ fileName: string; pages: string[] }> {
+  const req = { kind, assessmentId, ...(revisionId === undefined ? {} : { revisionId }), paper: 'A4' as const, units: 'SI' as const };
+  const file = await documentTable['document-render'].run(documentTable['document-render'].input.parse(req), ctx);
+  return { fileName: file.fileName, pages: pageTexts(Buffer.from(file.base64, 'base64')) };
+}
+
+describe('a signed revision reprints exactly as signed after a new draft exists', () => {
+  it('report, door notice and eyewear sheet: same text as the first print; the new draft prints DRAFT', async () => {
+    const site = store.listSites()[0];
+    if (!site) throw new Error('demo site missing');
+    const room = store.listRooms(site.id).find((r) => r.code === 'C1.03');
+    const id = room ? store.listAssessments(room.id)[0]?.id : undefined;
+    if (!id) throw new Error('demo assessment C1.03 missing');
+    const officer = store.listPeople().find((p) => p.role === 'Laser safety officer');
+    if (!officer) throw new Error('demo officer missing');
+    if (store.getAssessment(id).current.status === 'draft') store.signAssessment(id, { personId: officer.id, name: officer.name, role: officer.role, statement: 'Approved (reprint test).' });
+    const signed = store.getAssessment(id).current;
+    expect(signed.status).toBe('signed');
+    const fingerprint = signed.signature?.fingerprint ?? '';
+
+    const kinds = ['report', 'door-notice', 'eyewear-sheet'] as const;
+    const first = await Promise.all(kinds.map((k) => print(k, id)));
+
+    store.saveAssessment(id, { ...signed.content, notes: `${signed.content.notes} Changed after signing.` });
+    const draft = store.getAssessment(id).current;
+    expect(draft.status).toBe('draft');
+    expect(draft.id).not.toBe(signed.id);
+
+    const again = await Promise.all(kinds.map((k) => print(k, id, signed.id)));
+    kinds.forEach((k, i) => {
+      expect(again[i]?.pages, k).toEqual(first[i]?.pages);
+      expect(again[i]?.fileName, k).toMatch(/-signed\.pdf$/);
+      const text = (again[i]?.pages ?? []).join(' ');
+      expect(text, k).not.toMatch(/\bDRAFT\b/);
+      expect(text.replace(/\s/g, ''), k).toContain(fingerprint.slice(0, 4));
+    });
+    const newDraft = await print('door-notice', id);
+    expect(newDraft.fileName).toMatch(/-DRAFT\.pdf$/);
+    expect(newDraft.pages.join(' ')).toMatch(/\bDRAFT\b/);
+  }, 180_000);
+});
+
+describe('door notices of every room of a site in one PDF', () => {
+  it('one page per room, each room on its own page, DRAFT only where the room is a draft', async () => {
+    const site = store.listSites()[0];
+    if (!site) throw new Error('demo site missing');
+    const req = documentTable['document-render-site'].input.parse({ kind: 'door-notice', siteId: site.id, paper: 'Letter', units: 'SI' });
+    const file = await documentTable['document-render-site'].run(req, ctx);
+    const pages = pageTexts(Buffer.from(file.base64, 'base64'));
+    const rooms = store.listRooms(site.id).filter((r) => store.listAssessments(r.id).length > 0);
+    expect(pages).toHaveLength(rooms.length);
+    rooms.forEach((r, i) => {
+      expect(pages[i], r.code).toContain(`${r.code} —`);
+      const a = store.listAssessments(r.id)[0];
+      const draft = a !== undefined && store.getAssessment(a.id).current.status === 'draft';
+      expect(/\bDRAFT\b/.test(pages[i] ?? ''), `${r.code} draft mark`).toBe(draft);
+    });
+  }, 180_000);
+});
