@@ -8,6 +8,7 @@ import type { AppHandlers } from './contracts/app.js';
 import type { AssessmentHandlers } from './contracts/assessments.js';
 import type { DocumentHandlers } from './contracts/documents.js';
 import type { ExchangeHandlers } from './contracts/exchange.js';
+import type { KeyHandlers } from './contracts/keys.js';
 import type { RegisterHandlers } from './contracts/register.js';
 
-export type Handlers = AppHandlers & RegisterHandlers & AssessmentHandlers & ExchangeHandlers & DocumentHandlers;
+export type Handlers = AppHandlers & RegisterHandlers & AssessmentHandlers & ExchangeHandlers & KeyHandlers & DocumentHandlers;

@@ -4,6 +4,7 @@ import type { ExchangeHandlers } from '../contracts/exchange.js';
 import type { ApiContext } from '../context.js';
 import type { AreaTable } from '../operation.js';
 import { EmptySchema } from '../schemas/common.js';
+import { ImportAdmissionSchema } from '../../backend/records/personal-keys.js';
 
 /** A whole-site export of hundreds of lasers is a few MB; 30 MB leaves room and bounds memory. */
 const MAX_IMPORT_CHARS = 30_000_000;
@@ -27,8 +28,12 @@ export const exchangeTable: AreaTable<ExchangeHandlers, ApiContext> = {
     },
   },
   'import-json': {
+    input: z.strictObject({ text: z.string().max(MAX_IMPORT_CHARS, `must be at most ${MAX_IMPORT_CHARS} characters`), admit: ImportAdmissionSchema.optional() }),
+    run: ({ text, admit }, { store }) => store.importDocument(text, admit),
+  },
+  'import-json-untrusted-keys': {
     input: z.strictObject({ text: z.string().max(MAX_IMPORT_CHARS, `must be at most ${MAX_IMPORT_CHARS} characters`) }),
-    run: ({ text }, { store }) => store.importDocument(text),
+    run: ({ text }, { store }) => store.untrustedKeysIn(text),
   },
   'import-laser-csv': {
     input: z.strictObject({ roomId: IdSchema, csvText: z.string().max(MAX_IMPORT_CHARS, `must be at most ${MAX_IMPORT_CHARS} characters`) }),

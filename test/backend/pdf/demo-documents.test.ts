@@ -11,6 +11,7 @@
  * published sources). The rounding rules checked are the project's conservative policy (SAFETY.md:
  * limits down, distances and optical densities up, 3 significant figures; OD to 0.1).
  */
+import { PASSPHRASE } from '../records/helpers.js';
 import { mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
@@ -74,6 +75,8 @@ beforeAll(async () => {
   const site = store.seedDemo();
   const officer = store.listPeople().find((p) => p.role === 'Laser safety officer');
   if (!officer) throw new Error('demo officer missing');
+  // The temporary installation's first key (its trust anchor) for the invented demo officer.
+  store.createPersonKey({ personId: officer.id, passphrase: PASSPHRASE, passphraseAgain: PASSPHRASE });
   const rooms = store.listRooms(site.id);
   const a007 = rooms.find((r) => r.code === 'A0.07');
   const draftId = a007 ? store.listAssessments(a007.id)[0]?.id : undefined;
@@ -81,7 +84,7 @@ beforeAll(async () => {
   draft = await render(draftId); // seeded as a draft
   for (const room of rooms) {
     for (const a of store.listAssessments(room.id)) {
-      if (a.status === 'draft') store.signAssessment(a.id, { personId: officer.id, name: officer.name, role: officer.role, statement: 'Approved (test of printed output).' });
+      if (a.status === 'draft') store.signAssessment(a.id, { personId: officer.id, passphrase: PASSPHRASE, statement: 'Approved (test of printed output).' });
       signed.set(room.code, await render(a.id));
     }
   }
@@ -311,7 +314,7 @@ describe('a superseded revision says so on every page', () => {
     if (!officer) throw new Error('demo officer missing');
     const current = store.getAssessment(id).current;
     store.saveAssessment(id, { ...current.content, notes: `${current.content.notes} Reviewed again.` });
-    store.signAssessment(id, { personId: officer.id, name: officer.name, role: officer.role, statement: 'Approved again (test).' });
+    store.signAssessment(id, { personId: officer.id, passphrase: PASSPHRASE, statement: 'Approved again (test).' });
     const first = store.listRevisions(id).find((v) => v.revisionNo === 1);
     if (!first) throw new Error('revision 1 missing');
     const doc = documentInputFromAssessment(store, id, { revisionId: first.id });
