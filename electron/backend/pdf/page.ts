@@ -151,7 +151,9 @@ export function headerFor(doc: DocumentInput, title: string, sideMargin: number)
         ? { text: DRAFT_HEADER, bold: true, color: COLOR.draft, fontSize: 10, alignment: 'right', width: 'auto' }
         : doc.assessment.status === 'superseded'
           ? { text: `SUPERSEDED — revision ${doc.assessment.revisionNo}, signed ${calendarDate(doc.signature?.signedAt)}`, bold: true, color: COLOR.draft, fontSize: 10, alignment: 'right', width: 'auto' }
-          : {
+          : doc.signature?.keyTrusted === false
+            ? { text: `Revision ${doc.assessment.revisionNo} · UNVERIFIED SIGNATURE`, bold: true, color: COLOR.draft, fontSize: 10, alignment: 'right', width: 'auto' }
+            : {
             text: `Revision ${doc.assessment.revisionNo} · signed ${calendarDate(doc.signature?.signedAt)}`,
             fontSize: 8.5,
             color: COLOR.muted,
@@ -189,7 +191,7 @@ export function footerFor(doc: DocumentInput, sideMargin: number, width: number)
         margin: [0, 3, 0, 0],
         columns: [
           { ...ruleSetLine(doc, 7), width: '*' },
-          { text: `${fp} · page ${currentPage} of ${pageCount}`, fontSize: 7, alignment: 'right', width: 270 },
+          { text: `${fp} · page ${currentPage} of ${pageCount}`, fontSize: 7, alignment: 'right', width: 300 },
         ],
         columnGap: 8,
       },
