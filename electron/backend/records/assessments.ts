@@ -324,6 +324,11 @@ export function listAssessments(ctx: StoreContext, roomId: Id): AssessmentSummar
   return (ctx.sql(`${SUMMARY_SELECT} WHERE a.room_id = ? ORDER BY r.updated_at DESC, a.id`).all(roomId) as SummaryRow[]).map(summaryFromRow);
 }
 
+/** Every assessment of the database (oldest first), for a whole-database check. */
+export function listAllAssessments(ctx: StoreContext): AssessmentSummary[] {
+  return (ctx.sql(`${SUMMARY_SELECT} ORDER BY a.created_at, a.id`).all() as SummaryRow[]).map(summaryFromRow);
+}
+
 export function listDueForReview(ctx: StoreContext, date: CalendarDate): AssessmentSummary[] {
   if (!/^\d{4}-\d{2}-\d{2}$/.test(date)) throw new RecordError('invalid', `date: must be a calendar date YYYY-MM-DD (got "${date}")`);
   return (

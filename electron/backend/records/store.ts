@@ -103,6 +103,7 @@ class SqliteRecordStore implements RecordStore {
   getAssessment(id: Id): Assessment { return A.getAssessment(this.ctx, id); }
   listAssessments(roomId: Id): AssessmentSummary[] { return A.listAssessments(this.ctx, roomId); }
   listDueForReview(date: CalendarDate): AssessmentSummary[] { return A.listDueForReview(this.ctx, date); }
+  listAllAssessments(): AssessmentSummary[] { return A.listAllAssessments(this.ctx); }
   saveAssessment(id: Id, content: AssessmentContent): Assessment { return A.saveAssessment(this.ctx, id, content); }
   discardDraft(id: Id): void { A.discardDraft(this.ctx, id); }
   listRevisions(assessmentId: Id): RevisionSummary[] { return A.listRevisions(this.ctx, assessmentId); }

@@ -495,6 +495,8 @@ export interface RecordStore {
   listAssessments(roomId: Id): AssessmentSummary[];
   /** Assessments whose current revision is due for review on or before `date`. */
   listDueForReview(date: CalendarDate): AssessmentSummary[];
+  /** Every assessment in the database, oldest first (whole-database verification). */
+  listAllAssessments(): AssessmentSummary[];
   /**
    * Save content: into the open draft, or — when the newest revision is signed — into a new draft
    * revision based on it (the signed one stays unchanged). Results are recomputed.
