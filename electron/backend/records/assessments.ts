@@ -697,8 +697,10 @@ export function verifyAssessment(ctx: StoreContext, assessmentId: Id, revisionId
   // 1. Stored content and results readable?
   let content: AssessmentContent | null = null;
   let storedResults: unknown = null;
+  let storedText = '';
   try {
-    storedResults = decodeResults(r.results_z);
+    storedText = brotliDecompressSync(r.results_z).toString('utf8');
+    storedResults = JSON.parse(storedText);
     const c = AssessmentContentSchema.safeParse(JSON.parse(r.content_json));
     if (c.success) content = c.data;
     else findings.push(`The stored content is not a valid assessment (${c.error.issues[0]?.message ?? 'schema'}): it was changed outside Beamwarden.`);
@@ -712,7 +714,8 @@ export function verifyAssessment(ctx: StoreContext, assessmentId: Id, revisionId
   if (content !== null) {
     try {
       const recomputed = ctx.evaluate(content.input);
-      resultsMatchCore = canonicalJson(recomputed) === canonicalJson(storedResults);
+      // Byte-equal JSON means equal values (the quick test); otherwise compare canonical forms.
+      resultsMatchCore = JSON.stringify(recomputed) === storedText || canonicalJson(recomputed) === canonicalJson(storedResults);
       if (!resultsMatchCore) {
         differences = diffValues(storedResults, recomputed, 'results');
         findings.push(

@@ -9,8 +9,12 @@ import { MIGRATIONS } from './migrations/index.js';
 const normalise = (sql: string): string => sql.replace(/\s+/g, ' ').replace(/;\s*$/, '').trim();
 
 /** Trigger name -> normalised CREATE TRIGGER text, as the migrations up to `version` leave them. */
+const expectedCache = new Map<number, Map<string, string>>();
 function expectedTriggers(version: number): Map<string, string> {
+  const hit = expectedCache.get(version);
+  if (hit) return hit;
   const out = new Map<string, string>();
+  expectedCache.set(version, out);
   for (const m of MIGRATIONS) {
     if (m.version > version) break;
     const re = /CREATE TRIGGER (\w+)[\s\S]*?\bEND;|DROP TRIGGER (?:IF EXISTS )?(\w+);/g;

@@ -121,8 +121,20 @@ function who(e: TrustEntry): string {
   return `key ${shortKeyFingerprint(e.keyId)} of ${e.personName || 'an unnamed holder'}`;
 }
 
+const verdicts = new WeakMap<TrustList, Map<string, TrustVerdict>>();
+
 /** Is `keyId` trusted by `list`: on it, endorsed by a trusted key, back to the self-endorsed anchor? */
 export function trustOf(list: TrustList | null, keyId: string): TrustVerdict {
+  if (list === null) return judge(null, keyId);
+  // A read list is never changed in place (writes make a new object), so its verdicts can be kept.
+  let known = verdicts.get(list);
+  if (!known) verdicts.set(list, (known = new Map()));
+  let v = known.get(keyId);
+  if (!v) known.set(keyId, (v = judge(list, keyId)));
+  return v;
+}
+
+function judge(list: TrustList | null, keyId: string): TrustVerdict {
   if (list === null) return { trusted: false, chain: ['This installation has no trust list yet, so no key is trusted.'], entry: null };
   const byId = new Map(list.entries.map((e) => [e.keyId, e]));
   const chain: string[] = [];

@@ -125,7 +125,7 @@ describe('required fields (issue: Printed output; domain reference 5.1 and 6.2)'
     const status = sig.keyTrusted ? `Signed, revision ${d.assessment.revisionNo}` : `UNVERIFIED SIGNATURE, revision ${d.assessment.revisionNo}`;
     expect(sig.keyTrusted).toBe(code !== 'B2.14');
     expect(has(r.text.report, `trust anchor ${sig.trustAnchor ?? '?'}`), 'trust anchor in the footer').toBe(true);
-    for (const field of [d.site.name, d.room.code, d.room.name, d.room.responsiblePerson, d.officer.name, status, d.content.reviewBy ?? 'not set']) {
+    for (const field of [d.site.name, d.room.code, d.room.name, d.room.responsiblePerson, d.officer.name, status, ...(sig.keyTrusted ? [sig.signedAt.slice(0, 10)] : []), d.content.reviewBy ?? 'not set']) {
       expect(has(first, field), `page 1 lacks '${field}'`).toBe(true);
     }
     for (const heading of ['Summary per beam', 'Inputs and assumptions', 'Plots', 'Controls chosen', 'Protective eyewear', 'Coverage matrix', 'Non-beam hazards', 'Sign-off', 'Appendix — derivations']) {
