@@ -291,7 +291,9 @@ export function getAssessment(ctx: StoreContext, id: Id): Assessment {
 const SUMMARY_SELECT = `
   SELECT a.id, a.room_id, a.installation_id, r.title, r.revision_no, r.status, r.review_by, r.updated_at,
     (SELECT s.signed_at FROM revision r3 JOIN signature s ON s.revision_id = r3.id
-      WHERE r3.assessment_id = a.id AND r3.status = 'signed') AS signed_at
+      WHERE r3.assessment_id = a.id AND r3.status = 'signed') AS signed_at,
+    (SELECT s.key_id FROM revision r3 JOIN signature s ON s.revision_id = r3.id
+      WHERE r3.assessment_id = a.id AND r3.status = 'signed') AS signed_key
   FROM assessment a
   JOIN revision r ON r.assessment_id = a.id
    AND r.revision_no = (SELECT max(r2.revision_no) FROM revision r2 WHERE r2.assessment_id = a.id)`;
@@ -306,8 +308,9 @@ interface SummaryRow {
   review_by: string | null;
   updated_at: string;
   signed_at: string | null;
+  signed_key: string | null;
 }
-const summaryFromRow = (r: SummaryRow): AssessmentSummary => ({
+const summaryFromRow = (ctx: StoreContext, r: SummaryRow): AssessmentSummary => ({
   id: r.id,
   roomId: r.room_id,
   installationId: r.installation_id,
@@ -316,24 +319,25 @@ const summaryFromRow = (r: SummaryRow): AssessmentSummary => ({
   status: r.status,
   reviewBy: r.review_by,
   signedAt: r.signed_at,
+  signatureUnverified: r.signed_key !== null && !trustOf(readTrustList(ctx.keyDir).list, r.signed_key).trusted,
   updatedAt: r.updated_at,
 });
 
 export function listAssessments(ctx: StoreContext, roomId: Id): AssessmentSummary[] {
   getRoom(ctx, roomId);
-  return (ctx.sql(`${SUMMARY_SELECT} WHERE a.room_id = ? ORDER BY r.updated_at DESC, a.id`).all(roomId) as SummaryRow[]).map(summaryFromRow);
+  return (ctx.sql(`${SUMMARY_SELECT} WHERE a.room_id = ? ORDER BY r.updated_at DESC, a.id`).all(roomId) as SummaryRow[]).map((row) => summaryFromRow(ctx, row));
 }
 
 /** Every assessment of the database (oldest first), for a whole-database check. */
 export function listAllAssessments(ctx: StoreContext): AssessmentSummary[] {
-  return (ctx.sql(`${SUMMARY_SELECT} ORDER BY a.created_at, a.id`).all() as SummaryRow[]).map(summaryFromRow);
+  return (ctx.sql(`${SUMMARY_SELECT} ORDER BY a.created_at, a.id`).all() as SummaryRow[]).map((row) => summaryFromRow(ctx, row));
 }
 
 export function listDueForReview(ctx: StoreContext, date: CalendarDate): AssessmentSummary[] {
   if (!/^\d{4}-\d{2}-\d{2}$/.test(date)) throw new RecordError('invalid', `date: must be a calendar date YYYY-MM-DD (got "${date}")`);
   return (
     ctx.sql(`${SUMMARY_SELECT} WHERE r.review_by IS NOT NULL AND r.review_by <= ? ORDER BY r.review_by, a.id`).all(date) as SummaryRow[]
-  ).map(summaryFromRow);
+  ).map((row) => summaryFromRow(ctx, row));
 }
 
 export function listRevisions(ctx: StoreContext, assessmentId: Id): RevisionSummary[] {

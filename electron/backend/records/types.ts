@@ -314,6 +314,8 @@ export interface AssessmentSummary {
   readonly status: RevisionStatus;
   readonly reviewBy: CalendarDate | null;
   readonly signedAt: Timestamp | null;
+  /** The signed revision's key is not on this installation's trust list: show "unverified signature", never "signed". */
+  readonly signatureUnverified: boolean;
   readonly updatedAt: Timestamp;
 }
 
