@@ -8,7 +8,7 @@ import { existsSync, mkdirSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { openRecordStore, restoreBackup, type RecordStore } from '../../../electron/backend/records/index.js';
-import { makeSigner, openTemp, PASSPHRASE, registerRoom, STATEMENT, tempDir } from './helpers.js';
+import { makeSigner, openTemp, registerRoom, tempDir } from './helpers.js';
 
 let t: ReturnType<typeof tempDir>;
 let store: RecordStore;

@@ -8,7 +8,7 @@
 import { join } from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { RecordError, type ExportDocument, type RecordStore } from '../../../electron/backend/records/index.js';
-import { makeSigner, openTemp, PASSPHRASE, registerRoom, snapshot, STATEMENT, tempDir } from './helpers.js';
+import { makeSigner, openTemp, PASSPHRASE, registerRoom, snapshot, tempDir } from './helpers.js';
 
 let t: ReturnType<typeof tempDir>;
 let source: RecordStore;

@@ -12,7 +12,7 @@ import type { Assessment, RecordStore } from '../../../electron/backend/records/
 import { openRecordStore } from '../../../electron/backend/records/store.js';
 import { evaluateRoom } from '../../../core/index.js';
 import type { RoomResult } from '../../../core/model/results.js';
-import { makeSigner, openTemp, PASSPHRASE, registerRoom, snapshot, STATEMENT, tempDir } from './helpers.js';
+import { makeSigner, openTemp, registerRoom, snapshot, tempDir } from './helpers.js';
 
 let t: ReturnType<typeof tempDir>;
 let store: RecordStore;

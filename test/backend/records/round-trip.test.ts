@@ -4,11 +4,11 @@
  * Sign-off model: SHA-256 (FIPS 180-4) fingerprint of the canonical serialisation, Ed25519
  * (RFC 8032) signature; record contents per the domain reference section 6.2 (common practice).
  */
-import { existsSync, statSync } from 'node:fs';
+import { existsSync } from 'node:fs';
 import { join } from 'node:path';
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import type { RecordStore } from '../../../electron/backend/records/index.js';
-import { makeSigner, openTemp, PASSPHRASE, registerRoom, STATEMENT, tempDir } from './helpers.js';
+import { makeSigner, openTemp, PASSPHRASE, registerRoom, tempDir } from './helpers.js';
 
 let t: ReturnType<typeof tempDir>;
 let store: RecordStore;
