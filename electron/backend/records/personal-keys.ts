@@ -5,7 +5,7 @@
  * signed record — `signAsPerson`, which checks the passphrase and trust, takes the time from this
  * back end's clock and the identity from the key's owner, and signs a canonical payload.
  */
-import { createPublicKey, generateKeyPairSync, sign, type KeyObject } from 'node:crypto';
+import { createPublicKey, generateKeyPairSync, sign, verify, type KeyObject } from 'node:crypto';
 import { z } from 'zod';
 import { canonicalJson } from './canonical.js';
 import { parseOrThrow, translateSqliteError, type StoreContext } from './context.js';
@@ -188,6 +188,32 @@ export function signerFromKey(ctx: StoreContext, person: Person, privateKey: Key
     const signer: Signer = { personId: person.id, name: person.name, role: person.role, keyId: keyIdOf(publicKey), publicKey, signedAt: ctx.now(), trustAnchor: anchor };
     const payload = build(signer);
     return { signer, payload, signature: sign(null, Buffer.from(canonicalJson(payload), 'utf8'), privateKey).toString('base64') };
+  };
+}
+
+/** The check that goes with `signAsPerson`, for any signed payload: valid signature, trusted key, and its owner. */
+export function checkPersonSignature(
+  ctx: StoreContext,
+  payload: unknown,
+  signatureB64: string,
+  keyId: string,
+): { readonly valid: boolean; readonly trusted: boolean; readonly trustChain: readonly string[]; readonly ownerPersonId: string | null; readonly ownerName: string | null } {
+  const read = readTrustList(ctx.keyDir);
+  const verdict = trustOf(read.list, keyId);
+  const publicKey = verdict.entry?.publicKey ?? (ctx.sql('SELECT public_key FROM signing_key WHERE key_id = ?').get(keyId) as { public_key: string } | undefined)?.public_key;
+  let valid = false;
+  try {
+    valid = publicKey !== undefined && keyIdOf(publicKey) === keyId && verify(null, Buffer.from(canonicalJson(payload), 'utf8'), createPublicKey(publicKey), Buffer.from(signatureB64, 'base64'));
+  } catch {
+    valid = false;
+  }
+  const problems = trustListInfo(ctx).problems;
+  return {
+    valid,
+    trusted: verdict.trusted && problems.length === 0,
+    trustChain: [...verdict.chain, ...problems],
+    ownerPersonId: verdict.entry?.personId ?? null,
+    ownerName: verdict.entry?.personName ?? null,
   };
 }
 

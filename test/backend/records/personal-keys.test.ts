@@ -153,3 +153,28 @@ describe('time and identity come from the back end', () => {
     expect(signedAt >= before && signedAt <= after).toBe(true);
   });
 });
+
+describe('signing any record with a personal key (reusable beyond assessments)', () => {
+  it('signAsPerson signs a canonical payload with the back end time; checkPersonSignature finds it valid and trusted, and a changed payload not', async () => {
+    const officer = makeSigner(store);
+    const { makeContext } = await import('../../../electron/backend/records/context.js');
+    const { openDatabase } = await import('../../../electron/backend/records/database.js');
+    const { evaluateRoom, CALCULATED_WITH } = await import('../../../electron/backend/records/core-link.js');
+    const { signAsPerson, checkPersonSignature } = await import('../../../electron/backend/records/personal-keys.js');
+    const { db } = openDatabase(dbPath);
+    try {
+      const ctx = makeContext(db, join(t.dir, 'keys'), evaluateRoom, CALCULATED_WITH);
+      // An invented limit-table row check as the payload (the shape is the caller's).
+      const row = { table: 'example-table', row: 'R-1', checkedAgainst: 'derived: invented for this test' };
+      expect(() => signAsPerson(ctx, officer.person.id, 'wrong passphrase', (s) => ({ row, checkedAt: s.signedAt }))).toThrow(/passphrase is not correct/);
+      const before = new Date().toISOString();
+      const signed = signAsPerson(ctx, officer.person.id, PASSPHRASE, (s) => ({ row, by: s.personId, checkedAt: s.signedAt }));
+      expect(signed.signer).toMatchObject({ personId: officer.person.id, name: 'Dr. Imre Calloway-Senn', keyId: officer.key.keyId });
+      expect(signed.signer.signedAt >= before).toBe(true);
+      expect(checkPersonSignature(ctx, signed.payload, signed.signature, signed.signer.keyId)).toMatchObject({ valid: true, trusted: true, ownerPersonId: officer.person.id });
+      expect(checkPersonSignature(ctx, { ...signed.payload, row: { ...row, row: 'R-2' } }, signed.signature, signed.signer.keyId).valid).toBe(false);
+    } finally {
+      db.close();
+    }
+  });
+});
