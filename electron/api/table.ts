@@ -11,6 +11,7 @@ import { documentTable } from './handlers/documents.js';
 import { exchangeTable } from './handlers/exchange.js';
 import { keyTable } from './handlers/keys.js';
 import { registerTable } from './handlers/register.js';
+import { safekeepingTable } from './handlers/safekeeping.js';
 
 export const handlerTable: HandlerTable<ApiContext> = {
   ...appTable,
@@ -19,6 +20,7 @@ export const handlerTable: HandlerTable<ApiContext> = {
   ...exchangeTable,
   ...keyTable,
   ...documentTable,
+  ...safekeepingTable,
 };
 
 export const OPERATION_NAMES = Object.keys(handlerTable) as readonly OperationName[];

@@ -7,6 +7,7 @@
 import { appendFileSync, existsSync, mkdirSync, readFileSync, statSync } from 'node:fs';
 import { join } from 'node:path';
 import { z } from 'zod';
+import { storageError } from './storage-errors.js';
 
 export const SIGNING_LOG_FILE = 'beamwarden-signing-log.jsonl';
 
@@ -24,8 +25,13 @@ export type SigningLogLine = z.infer<typeof LogLineSchema>;
 const cache = new Map<string, { size: number; mtimeMs: number; byAssessment: Map<string, SigningLogLine[]> }>();
 
 export function appendSigningLog(dir: string, line: SigningLogLine): void {
-  mkdirSync(dir, { recursive: true });
-  appendFileSync(join(dir, SIGNING_LOG_FILE), `${JSON.stringify(LogLineSchema.parse(line))}\n`, { mode: 0o644 });
+  const path = join(dir, SIGNING_LOG_FILE);
+  try {
+    mkdirSync(dir, { recursive: true });
+    appendFileSync(path, `${JSON.stringify(LogLineSchema.parse(line))}\n`, { mode: 0o644 });
+  } catch (e) {
+    throw storageError(e, path, 'The signing log') ?? e;
+  }
 }
 
 /** Entries for one assessment (lines that are not readable are skipped: the log is a witness, not a store). */

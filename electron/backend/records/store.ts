@@ -2,7 +2,10 @@
  * The record store: one object with typed methods over one SQLite file, for the API/IPC handler
  * table, the loopback host and the CLI. Synchronous (better-sqlite3) except `backup`.
  */
+import { mkdirSync } from 'node:fs';
 import { dirname, resolve } from 'node:path';
+import { checkWritableAtStart } from './storage-errors.js';
+import { acquireWriteLock } from './write-lock.js';
 import type { RoomInput } from '../../../core/model/inputs.js';
 import * as A from './assessments.js';
 import { backupTo } from './backup.js';
@@ -17,11 +20,16 @@ import { adoptInstallationKey } from './legacy-signatures.js';
 import { missingProtections } from './protections.js';
 import { defaultDatabasePath } from './paths.js';
 import * as R from './register.js';
+import { saveWork } from './save-work.js';
+import { backupInto, backupStatus, defaultBackupFolder } from './safekeeping.js';
 import type {
   Assessment,
   AssessmentContent,
   AssessmentSummary,
+  BackupReport,
+  BackupStatus,
   CalendarDate,
+  CsvExistingChoice,
   CsvImportReport,
   Eyewear,
   EyewearDraft,
@@ -41,12 +49,15 @@ import type {
   RevisionSummary,
   Room,
   RoomDraft,
+  SaveBase,
   SignOff,
   Site,
   SiteDraft,
   StoreInfo,
   TrustListInfo,
   VerifyReport,
+  WorkSave,
+  WorkSaved,
 } from './types.js';
 
 class SqliteRecordStore implements RecordStore {
@@ -54,10 +65,12 @@ class SqliteRecordStore implements RecordStore {
     private readonly ctx: StoreContext,
     readonly info: StoreInfo,
     private readonly nativeBinding: string | undefined,
+    private readonly releaseLock: () => void,
   ) {}
 
   close(): void {
     if (this.ctx.db.open) this.ctx.db.close();
+    this.releaseLock();
   }
 
   listSites(): Site[] { return R.listSites(this.ctx); }
@@ -104,7 +117,10 @@ class SqliteRecordStore implements RecordStore {
   listAssessments(roomId: Id): AssessmentSummary[] { return A.listAssessments(this.ctx, roomId); }
   listDueForReview(date: CalendarDate): AssessmentSummary[] { return A.listDueForReview(this.ctx, date); }
   listAllAssessments(): AssessmentSummary[] { return A.listAllAssessments(this.ctx); }
-  saveAssessment(id: Id, content: AssessmentContent): Assessment { return A.saveAssessment(this.ctx, id, content); }
+  saveAssessment(id: Id, content: AssessmentContent, expected?: SaveBase): Assessment {
+    return A.saveAssessment(this.ctx, id, content, expected);
+  }
+  saveWork(save: WorkSave): WorkSaved { return saveWork(this.ctx, save); }
   discardDraft(id: Id): void { A.discardDraft(this.ctx, id); }
   listRevisions(assessmentId: Id): RevisionSummary[] { return A.listRevisions(this.ctx, assessmentId); }
   getRevision(revisionId: Id): Revision { return A.getRevision(this.ctx, revisionId); }
@@ -126,9 +142,15 @@ class SqliteRecordStore implements RecordStore {
   exportAssessment(assessmentId: Id): ExportDocument { return X.exportAssessment(this.ctx, assessmentId); }
   importDocument(doc: unknown, admit?: ImportAdmission): ImportSummary { return X.importDocument(this.ctx, doc, admit); }
   untrustedKeysIn(doc: unknown): ImportSummary['untrustedKeys'] { return X.untrustedKeysOf(this.ctx, doc); }
-  importLaserCsv(roomId: Id, csvText: string): CsvImportReport { return importLaserCsv(this.ctx, roomId, csvText); }
+  importLaserCsv(roomId: Id, csvText: string, existing?: CsvExistingChoice): CsvImportReport {
+    return importLaserCsv(this.ctx, roomId, csvText, existing);
+  }
 
   backup(path: string): Promise<void> { return backupTo(this.ctx.db, path, this.nativeBinding); }
+  backupInto(folder?: string): Promise<BackupReport> {
+    return backupInto(this.ctx.db, folder ?? defaultBackupFolder(this.info.path), this.nativeBinding);
+  }
+  backupStatus(): BackupStatus { return backupStatus(this.ctx.db, defaultBackupFolder(this.info.path)); }
   seedDemo(): Site { return seedDemo(this.ctx); }
 }
 
@@ -136,6 +158,8 @@ class SqliteRecordStore implements RecordStore {
 export interface InternalOpenOptions extends OpenOptions {
   readonly evaluate?: Evaluate;
   readonly calculatedWith?: string;
+  /** The store's clock (tests that compare two exports byte for byte). */
+  readonly now?: () => string;
 }
 
 /**
@@ -145,24 +169,36 @@ export interface InternalOpenOptions extends OpenOptions {
 export function openRecordStore(options: InternalOpenOptions = {}): RecordStore {
   const path = resolve(options.path ?? defaultDatabasePath());
   const keyDir = resolve(options.keyDir ?? dirname(path));
-  const opened = openDatabase(path, {
-    ...(options.nativeBinding !== undefined ? { nativeBinding: options.nativeBinding } : {}),
-    ...(options.readonly !== undefined ? { readonly: options.readonly } : {}),
-  });
+  const readonly = options.readonly === true;
+  // The default folder is made with its parents (first start); a folder the officer named must exist.
+  if (!readonly && options.path === undefined) mkdirSync(dirname(path), { recursive: true });
+  if (!readonly) checkWritableAtStart(path);
+  const releaseLock = readonly ? () => {} : acquireWriteLock(path);
+  let opened: ReturnType<typeof openDatabase>;
+  try {
+    opened = openDatabase(path, {
+      ...(options.nativeBinding !== undefined ? { nativeBinding: options.nativeBinding } : {}),
+      readonly,
+    });
+  } catch (e) {
+    releaseLock();
+    throw e;
+  }
   const calculatedWith = options.calculatedWith ?? CALCULATED_WITH;
-  const ctx = makeContext(opened.db, keyDir, options.evaluate ?? evaluateRoom, calculatedWith);
+  const ctx = makeContext(opened.db, keyDir, options.evaluate ?? evaluateRoom, calculatedWith, options.now);
   const warnings: string[] = [];
   try {
     const missing = missingProtections(opened.db);
     if (missing.length) {
       warnings.push(`The database's protections against changing signed records were removed (${missing.join(', ')}): it was changed with another tool. Run verify on every assessment.`);
     }
-    if (options.readonly !== true) warnings.push(...adoptInstallationKey(ctx));
+    if (!readonly) warnings.push(...adoptInstallationKey(ctx));
     warnings.push(...K.trustListInfo(ctx).problems);
   } catch (e) {
     opened.db.close();
+    releaseLock();
     throw e;
   }
   const info: StoreInfo = { path, keyDir, schemaVersion: opened.schemaVersion, migrationBackups: opened.migrationBackups, calculatedWith, warnings };
-  return new SqliteRecordStore(ctx, info, options.nativeBinding);
+  return new SqliteRecordStore(ctx, info, options.nativeBinding, releaseLock);
 }

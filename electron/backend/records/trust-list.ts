@@ -8,7 +8,8 @@
  * set up; its fingerprint is shown to the officer to write down and printed on every signed
  * document, so a replaced list shows a different anchor on paper and on screen.
  */
-import { existsSync, mkdirSync, readFileSync, renameSync, statSync, writeFileSync } from 'node:fs';
+import { existsSync, mkdirSync, readFileSync, renameSync, rmSync, statSync, writeFileSync } from 'node:fs';
+import { storageError } from './storage-errors.js';
 import { join } from 'node:path';
 import { createPublicKey, sign, verify, type KeyObject } from 'node:crypto';
 import { z } from 'zod';
@@ -105,8 +106,13 @@ export function writeTrustList(dir: string, list: TrustList): void {
   mkdirSync(dir, { recursive: true });
   const path = trustListPath(dir);
   const tmp = `${path}.${process.pid}.tmp`;
-  writeFileSync(tmp, `${JSON.stringify(TrustListSchema.parse(list), null, 2)}\n`, { mode: 0o644 });
-  renameSync(tmp, path);
+  try {
+    writeFileSync(tmp, `${JSON.stringify(TrustListSchema.parse(list), null, 2)}\n`, { mode: 0o644 });
+    renameSync(tmp, path);
+  } catch (e) {
+    rmSync(tmp, { force: true });
+    throw storageError(e, path, 'The trust list') ?? e;
+  }
   cache.delete(path);
 }
 

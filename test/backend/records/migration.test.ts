@@ -81,6 +81,7 @@ describe('migrating the version-1 fixture', () => {
       { version: 1, name: 'initial' },
       { version: 2, name: 'list_columns_and_audit_log' },
       { version: 3, name: 'personal_keys_and_chain' },
+      { version: 4, name: 'revision_version' },
     ]);
     expect(raw.prepare("SELECT action FROM audit_event WHERE action = 'revised'").all()).toHaveLength(1);
     raw.close();
