@@ -130,8 +130,6 @@ export const SOURCE_CITATIONS: Readonly<Record<string, string>> = {
   'EU 2006/25/EC Annex II Table 2.3 note: not to exceed 1000 W/m^2 (from memory), applied while unverified':
     `${DIR}, note to the limits for the eye at 10 s and longer (not to exceed 1000 W/m²), applied to the ${ICNIRP} until checked`,
   'older ICNIRP / IEC 60825-1 editions: E = 10 W/m^2 from 1000 s (from memory)': 'earlier editions of the ICNIRP guidelines and IEC 60825-1: 10 W/m² for the eye at 315–400 nm from 1000 s',
-  'limit specification errata (apertures at an exact edge)': `${DIR}, Table 2.2, note a, with each limit over its own limiting aperture`,
-  'domain notes 1.7 (derived from first-order optics; gain K as in IEC TR 60825-14 and ANSI Z136.6, from memory)': `first-order optics for viewing aids, after the approach of ${TR14} and ANSI Z136.6`,
   'IEC 60825-1 and ANSI Z136.1 large-area skin note (from memory; limit specification 4.3)': `${IEC_MPE} (skin) and ${ANSI_MPE_SKIN}: reduced limit for large irradiated areas`,
   ours: 'Beamwarden’s rule',
 };

@@ -8,7 +8,8 @@ import type { AppHandlers } from './contracts/app.js';
 import type { AssessmentHandlers } from './contracts/assessments.js';
 import type { DocumentHandlers } from './contracts/documents.js';
 import type { ExchangeHandlers } from './contracts/exchange.js';
+import type { KeyHandlers } from './contracts/keys.js';
 import type { RegisterHandlers } from './contracts/register.js';
 import type { SafekeepingHandlers } from './contracts/safekeeping.js';
 
-export type Handlers = AppHandlers & RegisterHandlers & AssessmentHandlers & ExchangeHandlers & DocumentHandlers & SafekeepingHandlers;
+export type Handlers = AppHandlers & RegisterHandlers & AssessmentHandlers & ExchangeHandlers & KeyHandlers & DocumentHandlers & SafekeepingHandlers;

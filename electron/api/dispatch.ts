@@ -67,7 +67,7 @@ const RECORD_CODE: Readonly<Record<RecordError['code'], ApiErrorBody['code']>> =
   'newer-database': 'internal',
   'corrupt-database': 'internal',
   'migration-failed': 'internal',
-  'signing-key': 'internal',
+  'signing-key': 'invalid_input',
 };
 
 export async function dispatch<C>(table: HandlerTable<C>, ctx: C, name: string, payload: unknown): Promise<Reply<unknown>> {

@@ -9,6 +9,7 @@ import { appTable } from './handlers/app.js';
 import { assessmentTable } from './handlers/assessments.js';
 import { documentTable } from './handlers/documents.js';
 import { exchangeTable } from './handlers/exchange.js';
+import { keyTable } from './handlers/keys.js';
 import { registerTable } from './handlers/register.js';
 import { safekeepingTable } from './handlers/safekeeping.js';
 
@@ -17,6 +18,7 @@ export const handlerTable: HandlerTable<ApiContext> = {
   ...registerTable,
   ...assessmentTable,
   ...exchangeTable,
+  ...keyTable,
   ...documentTable,
   ...safekeepingTable,
 };

@@ -92,13 +92,15 @@ export async function writeDemoDocuments(outDir: string, opts: RenderOptions): P
     const site = store.seedDemo();
     const officer = store.listPeople().find((p) => p.role === 'Laser safety officer');
     const files: string[] = [];
+    // The temporary installation's first key (its trust anchor), for the invented demo officer only.
+    const passphrase = 'demo passphrase, invented site';
+    if (officer) store.createPersonKey({ personId: officer.id, passphrase, passphraseAgain: passphrase });
     for (const room of store.listRooms(site.id)) {
       for (const a of store.listAssessments(room.id)) {
         if (a.status === 'draft' && officer) {
           store.signAssessment(a.id, {
             personId: officer.id,
-            name: officer.name,
-            role: officer.role,
+            passphrase,
             statement: 'I have evaluated the laser hazards of this area with the inputs and assumptions recorded here and approve the controls listed. (Demo data: invented site.)',
           });
         }

@@ -135,10 +135,13 @@ export async function runRecordsBench(): Promise<BenchEntry[]> {
         }),
         runs: n,
       });
+      const passphrase = 'bench passphrase (invented)';
+      const officer = store.createPerson({ name: 'Bench Officer', role: 'LSO' });
+      store.createPersonKey({ personId: officer.id, passphrase, passphraseAgain: passphrase });
       entries.push({
-        name: 'records: sign one assessment (re-evaluate, fingerprint, Ed25519, supersede)',
+        name: 'records: sign one assessment (passphrase check with scrypt, re-evaluate, fingerprint, Ed25519, supersede, signing log)',
         median_ms: timeMedian(n, (i) => {
-          store.signAssessment(sampleIds[20 + i] ?? '', { name: 'Bench Officer', role: 'LSO', statement: 'Benchmark sign-off.' });
+          store.signAssessment(sampleIds[20 + i] ?? '', { personId: officer.id, passphrase, statement: 'Benchmark sign-off.' });
         }),
         runs: n,
       });

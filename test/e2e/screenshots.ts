@@ -88,6 +88,32 @@ async function main(): Promise<void> {
     await page.getByRole('heading', { name: 'Changes since the last signed revision' }).waitFor();
     await page.getByRole('heading', { name: 'Changes since the last signed revision' }).scrollIntoViewIfNeeded();
     await shot(page, '12-review-changes');
+    // signing keys in the register (the demo officer's key becomes this temporary installation's anchor)
+    const passphrase = 'screenshot passphrase (invented)';
+    await page.keyboard.press('Alt+1');
+    await page.getByRole('tab', { name: 'People' }).click();
+    await page.getByLabel('Person', { exact: true }).selectOption({ index: 1 });
+    await page.getByLabel('Passphrase', { exact: true }).fill(passphrase);
+    await page.getByLabel('Passphrase again', { exact: true }).fill(passphrase);
+    await page.getByRole('button', { name: 'Create key' }).click();
+    await page.getByTestId('new-key').waitFor();
+    await page.getByTestId('signing-keys').scrollIntoViewIfNeeded();
+    await shot(page, '13-people-signing-keys');
+    // the sign dialog: passphrase, then exactly what is signed before confirming
+    await page.keyboard.press('Alt+5');
+    await page.getByTestId('review-status').filter({ hasText: 'draft' }).waitFor();
+    await page.getByLabel('Signer').selectOption({ index: 1 });
+    await page.getByLabel('Passphrase of the signing key').fill(passphrase);
+    await page.getByRole('button', { name: 'Review what is signed…' }).click();
+    await page.getByTestId('sign-confirm').waitFor();
+    await page.getByTestId('sign-confirm').scrollIntoViewIfNeeded();
+    await shot(page, '14-sign-confirm');
+    await page.getByRole('button', { name: /^Sign revision/ }).click();
+    await page.getByTestId('review-status').filter({ hasText: 'signed' }).waitFor();
+    await page.getByRole('button', { name: 'Verify the newest signed revision' }).click();
+    await page.getByTestId('verify-result').waitFor();
+    await page.getByTestId('verify-result').scrollIntoViewIfNeeded();
+    await shot(page, '15-review-verified-chain');
   } finally {
     await ctx.close();
     await empty.stop();

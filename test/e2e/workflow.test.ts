@@ -18,6 +18,8 @@ import { requireTool } from '../support/required-tool.js';
 import { LISTEN_PREFIX, removeDir, startHost, type HostHandle } from './host-process.js';
 
 let host: HostHandle;
+/** Invented for the test. */
+const PASSPHRASE = 'quill and feather 2026';
 let ctx: BrowserContext;
 let page: Page;
 const pageErrors: string[] = [];
@@ -86,6 +88,18 @@ describe('an officer assesses a new room', () => {
     await fill('Name *', 'Ada Quillfeather');
     await page.getByRole('button', { name: 'Add person' }).click();
     await page.getByRole('cell', { name: 'Ada Quillfeather', exact: true }).waitFor();
+
+    // Her own signing key: the installation's first, so its fingerprint becomes the trust anchor.
+    await page.getByLabel('Person', { exact: true }).selectOption({ label: 'Ada Quillfeather (Laser safety officer)' });
+    await page.getByLabel('Passphrase', { exact: true }).fill(PASSPHRASE);
+    await page.getByLabel('Passphrase again', { exact: true }).fill(PASSPHRASE);
+    await page.getByRole('button', { name: 'Create key' }).click();
+    const made = page.getByTestId('new-key');
+    await made.waitFor();
+    const fingerprint = /([0-9a-f]{4}(?: [0-9a-f]{4}){4})/.exec((await made.textContent()) ?? '')?.[1] ?? '';
+    expect(fingerprint).not.toBe('');
+    expect(await made.textContent()).toContain('this is the trust anchor; write it down');
+    await expect.poll(() => page.getByTestId('nav-anchor').textContent()).toContain(fingerprint);
   });
 
   it('creates a room and opens it in the workspace', async () => {
@@ -171,10 +185,26 @@ describe('an officer assesses a new room', () => {
     await page.getByRole('heading', { level: 1, name: /^Review & sign/ }).waitFor();
     await page.getByRole('button', { name: 'Save', exact: true }).first().click();
     await page.getByTestId('review-status').filter({ hasText: 'draft' }).waitFor();
-    await page.getByLabel('Person').selectOption({ label: 'Ada Quillfeather (Laser safety officer)' });
-    await expect.poll(() => page.getByLabel('Name', { exact: true }).inputValue()).toBe('Ada Quillfeather');
+    await page.getByLabel('Signer').selectOption({ label: 'Ada Quillfeather (Laser safety officer)' });
+    // A wrong passphrase is refused and nothing is signed.
+    await page.getByLabel('Passphrase of the signing key').fill('not her passphrase');
+    await page.getByRole('button', { name: 'Review what is signed…' }).click();
+    const confirm = page.getByTestId('sign-confirm');
+    await confirm.waitFor();
+    // The confirmation shows exactly what is signed: room, revision, headline results, statement.
+    const shown = (await confirm.textContent()) ?? '';
+    expect(shown).toContain('T1.01');
+    expect(shown).toMatch(/Revision\s*1, calculated with/);
+    expect(shown).toMatch(/NOHD .* m, eyewear OD/);
+    expect(shown).toContain('I have assessed the laser hazards of room T1.01');
+    await page.getByRole('button', { name: 'Sign revision 1' }).click();
+    await page.getByRole('alert').filter({ hasText: 'The passphrase is not correct' }).waitFor();
+    expect(await page.getByTestId('review-status').textContent()).toContain('draft');
+    await page.getByLabel('Passphrase of the signing key').fill(PASSPHRASE);
+    await page.getByRole('button', { name: 'Review what is signed…' }).click();
     await page.getByRole('button', { name: 'Sign revision 1' }).click();
     await page.getByTestId('review-status').filter({ hasText: 'signed' }).waitFor();
+    expect(await page.getByTestId('signed-by').textContent()).toContain('Ada Quillfeather');
     const fp = (await page.getByTestId('fingerprint').textContent()) ?? '';
     expect(fp).toMatch(/^[0-9a-f]{64}$/);
     await page.getByRole('button', { name: 'Verify the newest signed revision' }).click();

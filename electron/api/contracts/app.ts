@@ -8,6 +8,10 @@ export interface AppInfo {
   readonly shell: ShellKind;
   readonly databasePath: string;
   readonly ruleSets: ReadonlyArray<{ readonly id: RuleSetId; readonly name: string }>;
+  /** Short fingerprint of the trust list's anchor key (null before the first signing key exists). */
+  readonly trustAnchorFingerprint: string | null;
+  /** Found when the database was opened, plus trust list problems: shown to the officer. */
+  readonly warnings: readonly string[];
 }
 
 export type AppHandlers = {

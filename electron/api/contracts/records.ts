@@ -217,15 +217,62 @@ export interface Signature {
   readonly keyId: string;
   /** SPKI PEM of the public key. */
   readonly publicKey: string;
+  /** 2 = signed with a personal key, covering the previous revision's link and the trust anchor; absent = 1 (before personal keys). */
+  readonly statementVersion?: 2;
+  /** Chain link (SHA-256 of the signed statement) of the previous signed revision; null for the first. */
+  readonly previousLink?: string | null;
+  /** Key id of the trust anchor the signer's key was trusted under when signing. */
+  readonly trustAnchor?: string;
+  /**
+   * Whether the signing key is on THIS installation's trust list (computed when read, never taken
+   * from a file; left out of exports). False = shown as "unverified signature", never as signed.
+   */
+  readonly keyTrusted?: boolean;
 }
 
+/**
+ * What the officer submits to sign: who (their person record, whose key signs), their passphrase
+ * and the statement. Name, role and time are NOT accepted: they come from the key's owner and the
+ * back end's clock.
+ */
 export interface SignOff {
-  readonly personId?: Id;
-  readonly name: string;
-  readonly role: string;
+  readonly personId: Id;
+  readonly passphrase: string;
   readonly statement: string;
-  /** Defaults to now. */
-  readonly signedAt?: Timestamp;
+}
+
+/** A person's signing key as the register shows it (the private key never leaves the back end). */
+export interface PersonKey {
+  readonly keyId: string;
+  /** First 20 hex digits of the key id in groups of four, for reading aloud and writing down. */
+  readonly fingerprint: string;
+  readonly personId: Id;
+  readonly createdAt: Timestamp;
+  readonly retiredAt: Timestamp | null;
+  readonly retiredReason: string;
+  /** On this installation's trust list by an unbroken endorsement chain. */
+  readonly trusted: boolean;
+  readonly isAnchor: boolean;
+  /** The endorsement chain (or why it is broken), one sentence per link. */
+  readonly trustChain: readonly string[];
+}
+
+/** The trust list outside the database, as the app and printed documents show it. */
+export interface TrustListInfo {
+  readonly path: string;
+  readonly anchor: string | null;
+  /** Short form of the anchor key id (what the officer wrote down at set-up). */
+  readonly anchorFingerprint: string | null;
+  readonly keys: number;
+  /** Missing, unreadable or replaced list. */
+  readonly problems: readonly string[];
+}
+
+/** One check of a verification, in words an officer can read. */
+export interface VerifyCheck {
+  readonly check: 'signature' | 'key-trusted' | 'fingerprint' | 'results' | 'chain' | 'protections';
+  readonly ok: boolean;
+  readonly finding: string;
 }
 
 export interface Revision {
@@ -280,6 +327,8 @@ export interface AssessmentSummary {
   readonly status: RevisionStatus;
   readonly reviewBy: CalendarDate | null;
   readonly signedAt: Timestamp | null;
+  /** The signed revision's key is not on this installation's trust list: show "unverified signature", never "signed". */
+  readonly signatureUnverified: boolean;
   readonly updatedAt: Timestamp;
 }
 
@@ -304,8 +353,16 @@ export interface VerifyReport {
   readonly fingerprintMatches: boolean;
   /** The Ed25519 signature is valid for the recorded public key and statement. */
   readonly signatureValid: boolean;
-  /** The signing key is one this database knows (its own, or one brought in by an import). */
-  readonly keyKnown: boolean;
+  /** The signing key is on this installation's trust list (outside the database) by a valid endorsement chain. */
+  readonly keyTrusted: boolean;
+  /** The endorsement chain from the signing key to the trust anchor (or why it is broken). */
+  readonly trustChain: readonly string[];
+  /** The revision chain is whole: no revision removed, reordered or re-marked; list columns match the content. */
+  readonly chainIntact: boolean;
+  /** Who signed (the key's owner as recorded), or null. */
+  readonly signer: { readonly name: string; readonly role: string; readonly signedAt: Timestamp; readonly keyFingerprint: string } | null;
+  /** Each check with its finding. */
+  readonly checks: readonly VerifyCheck[];
   /** Recomputing the stored inputs with this core gives the stored results. */
   readonly resultsMatchCore: boolean;
   /** Core that made the stored results vs the core used now. */
@@ -346,6 +403,13 @@ export interface ExportDocument {
   readonly signingKeys: ReadonlyArray<{ readonly keyId: string; readonly publicKey: string }>;
 }
 
+/** The officer's explicit admission of exporting sites' keys, after seeing their fingerprints. */
+export interface ImportAdmission {
+  readonly keyIds: readonly string[];
+  readonly endorserPersonId: Id;
+  readonly endorserPassphrase: string;
+}
+
 export interface ImportSummary {
   readonly sites: number;
   readonly rooms: number;
@@ -356,6 +420,10 @@ export interface ImportSummary {
   readonly revisions: number;
   /** Records already present with identical content (skipped). */
   readonly unchanged: number;
+  /** Signed revisions whose key is not on this installation's trust list: imported, shown as unverified. */
+  readonly unverified: number;
+  /** Keys in the file that this installation does not trust (fingerprint and claimed owner). */
+  readonly untrustedKeys: ReadonlyArray<{ readonly keyId: string; readonly fingerprint: string; readonly claimedSigner: string }>;
   /** Drafts kept beside the imported version because the two differed (nothing is discarded). */
   readonly keptDrafts: readonly KeptDraft[];
 }

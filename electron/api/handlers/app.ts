@@ -7,12 +7,17 @@ import { EmptySchema } from '../schemas/common.js';
 export const appTable: AreaTable<AppHandlers, ApiContext> = {
   'app-info': {
     input: EmptySchema,
-    run: (_args, ctx) => ({
+    run: (_args, ctx) => {
+      const trust = ctx.store.trustList();
+      return {
       name: 'Beamwarden',
       version: ctx.version,
       shell: ctx.shell,
       databasePath: ctx.databasePath,
       ruleSets: RULE_SET_IDS.map((id) => ({ id, name: RULE_SET_NAME[id] })),
-    }),
+        trustAnchorFingerprint: trust.anchorFingerprint,
+        warnings: [...new Set([...ctx.store.info.warnings, ...trust.problems])],
+      };
+    },
   },
 };

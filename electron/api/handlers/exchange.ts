@@ -4,6 +4,7 @@ import type { ExchangeHandlers } from '../contracts/exchange.js';
 import type { ApiContext } from '../context.js';
 import type { AreaTable } from '../operation.js';
 import { EmptySchema } from '../schemas/common.js';
+import { ImportAdmissionSchema } from '../../backend/records/personal-keys.js';
 import { exportFileBytes, exportFileText } from '../../backend/records/export-file.js';
 
 /**
@@ -40,9 +41,19 @@ export const exchangeTable: AreaTable<ExchangeHandlers, ApiContext> = {
       .strictObject({
         text: z.string().max(MAX_IMPORT_CHARS, `must be at most ${MAX_IMPORT_CHARS} characters`).optional(),
         base64: z.base64('must be the file as base64').max(MAX_IMPORT_BASE64, 'the file is too large to send at once; export one room instead').optional(),
+        admit: ImportAdmissionSchema.optional(),
       })
       .refine((a) => (a.text === undefined) !== (a.base64 === undefined), 'give either the file (base64) or its text, not both'),
-    run: ({ text, base64 }, { store }) => store.importDocument(text ?? exportFileText(Buffer.from(base64 ?? '', 'base64'))),
+    run: ({ text, base64, admit }, { store }) => store.importDocument(text ?? exportFileText(Buffer.from(base64 ?? '', 'base64')), admit),
+  },
+  'import-json-untrusted-keys': {
+    input: z
+      .strictObject({
+        text: z.string().max(MAX_IMPORT_CHARS, `must be at most ${MAX_IMPORT_CHARS} characters`).optional(),
+        base64: z.base64('must be the file as base64').max(MAX_IMPORT_BASE64, 'the file is too large to send at once; export one room instead').optional(),
+      })
+      .refine((a) => (a.text === undefined) !== (a.base64 === undefined), 'give either the file (base64) or its text, not both'),
+    run: ({ text, base64 }, { store }) => store.untrustedKeysIn(text ?? exportFileText(Buffer.from(base64 ?? '', 'base64'))),
   },
   'import-laser-csv': {
     input: z.strictObject({

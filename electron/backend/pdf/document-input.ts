@@ -21,7 +21,12 @@ export type InstallationInfo = Pick<
   'id' | 'laserType' | 'maker' | 'model' | 'serialNumber' | 'registrationNumber' | 'classAsLabelled'
 >;
 
-export type SignatureInfo = Pick<Signature, 'name' | 'role' | 'signedAt' | 'statement' | 'fingerprint' | 'keyId'>;
+export type SignatureInfo = Pick<Signature, 'name' | 'role' | 'signedAt' | 'statement' | 'fingerprint' | 'keyId'> & {
+  /** False: the signing key is not on this installation's trust list; the paper says UNVERIFIED SIGNATURE. */
+  readonly keyTrusted: boolean;
+  /** Short fingerprint of the trust list's anchor key, printed so a replaced trust list shows on paper. */
+  readonly trustAnchor: string | null;
+};
 
 export interface DocumentInput {
   readonly site: Pick<Site, 'name' | 'building' | 'address'>;

@@ -58,6 +58,15 @@ export function documentInputFromAssessment(store: RecordStore, assessmentId: st
     signature:
       sig === null
         ? null
-        : { name: sig.name, role: sig.role, signedAt: sig.signedAt, statement: sig.statement, fingerprint: sig.fingerprint, keyId: sig.keyId },
+        : {
+            name: sig.name,
+            role: sig.role,
+            signedAt: sig.signedAt,
+            statement: sig.statement,
+            fingerprint: sig.fingerprint,
+            keyId: sig.keyId,
+            keyTrusted: sig.keyTrusted !== false,
+            trustAnchor: store.trustList().anchorFingerprint,
+          },
   };
 }

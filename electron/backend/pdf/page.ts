@@ -87,6 +87,11 @@ export function ruleSetLine(doc: DocumentInput, fontSize: number): ContentText {
  * The record fingerprint in short form with a QR code holding the full SHA-256, or the statement
  * that a draft has none.
  */
+/** A key id as officers read it: the first 20 hex digits in groups of four (as the app shows it). */
+function keyFingerprint(keyId: string): string {
+  return (keyId.slice(0, 20).match(/.{4}/g) ?? []).join(' ');
+}
+
 export function fingerprintBlock(doc: DocumentInput, qrSize: number, fontSize: number): Content {
   if (doc.signature === null) {
     return {
@@ -107,7 +112,10 @@ export function fingerprintBlock(doc: DocumentInput, qrSize: number, fontSize: n
         stack: [
           { text: 'Record fingerprint', bold: true, fontSize },
           { text: shortFingerprint(s.fingerprint), fontSize: fontSize + 2, bold: true, characterSpacing: 0.5 },
-          { text: `Signed by ${s.name} (${s.role}) on ${calendarDate(s.signedAt)}`, fontSize: fontSize - 1 },
+          s.keyTrusted
+            ? { text: `Signed by ${s.name} (${s.role}) on ${calendarDate(s.signedAt)}`, fontSize: fontSize - 1 }
+            : { text: `UNVERIFIED SIGNATURE in the name of ${s.name}: the signing key is not on this installation's trust list`, bold: true, color: COLOR.draft, fontSize: fontSize - 1 },
+          { text: `Signing key ${keyFingerprint(s.keyId)} · trust anchor ${s.trustAnchor ?? 'none'}`, fontSize: fontSize - 1, color: COLOR.muted },
           { text: `Assessment revision ${doc.assessment.revisionNo} · the QR code holds the full SHA-256 fingerprint`, fontSize: fontSize - 1, color: COLOR.muted },
         ],
       },
@@ -126,6 +134,8 @@ export function fingerprintStack(doc: DocumentInput, qrSize: number, fontSize: n
       { text: 'Record fingerprint', bold: true, fontSize: fontSize - 1, margin: [0, 2, 0, 0] },
       { text: shortFingerprint(doc.signature.fingerprint), bold: true, fontSize },
       { text: `rev. ${doc.assessment.revisionNo}, signed ${calendarDate(doc.signature.signedAt)}`, fontSize: fontSize - 1.5, color: COLOR.muted },
+      { text: `trust anchor ${doc.signature.trustAnchor ?? 'none'}`, fontSize: fontSize - 1.5, color: COLOR.muted },
+      ...(doc.signature.keyTrusted ? [] : [{ text: 'UNVERIFIED SIGNATURE', bold: true, color: COLOR.draft, fontSize } as Content]),
       ...(doc.assessment.status === 'superseded' ? [{ text: 'SUPERSEDED: replace this notice', bold: true, color: COLOR.draft, fontSize } as Content] : []),
     ],
   };
@@ -141,7 +151,9 @@ export function headerFor(doc: DocumentInput, title: string, sideMargin: number)
         ? { text: DRAFT_HEADER, bold: true, color: COLOR.draft, fontSize: 10, alignment: 'right', width: 'auto' }
         : doc.assessment.status === 'superseded'
           ? { text: `SUPERSEDED — revision ${doc.assessment.revisionNo}, signed ${calendarDate(doc.signature?.signedAt)}`, bold: true, color: COLOR.draft, fontSize: 10, alignment: 'right', width: 'auto' }
-          : {
+          : doc.signature?.keyTrusted === false
+            ? { text: `Revision ${doc.assessment.revisionNo} · UNVERIFIED SIGNATURE`, bold: true, color: COLOR.draft, fontSize: 10, alignment: 'right', width: 'auto' }
+            : {
             text: `Revision ${doc.assessment.revisionNo} · signed ${calendarDate(doc.signature?.signedAt)}`,
             fontSize: 8.5,
             color: COLOR.muted,
@@ -167,7 +179,10 @@ export function cautionBand(width: number, fontSize: number): Content {
 }
 
 export function footerFor(doc: DocumentInput, sideMargin: number, width: number): DynamicContent {
-  const fp = doc.signature === null ? 'no fingerprint (draft)' : `fingerprint ${shortFingerprint(doc.signature.fingerprint)}`;
+  const fp =
+    doc.signature === null
+      ? 'no fingerprint (draft)'
+      : `fingerprint ${shortFingerprint(doc.signature.fingerprint)} · trust anchor ${doc.signature.trustAnchor ?? 'none'}${doc.signature.keyTrusted ? '' : ' · UNVERIFIED SIGNATURE'}`;
   return (currentPage: number, pageCount: number) => ({
     margin: [sideMargin, 6, sideMargin, 0],
     stack: [
@@ -176,7 +191,7 @@ export function footerFor(doc: DocumentInput, sideMargin: number, width: number)
         margin: [0, 3, 0, 0],
         columns: [
           { ...ruleSetLine(doc, 7), width: '*' },
-          { text: `${fp} · page ${currentPage} of ${pageCount}`, fontSize: 7, alignment: 'right', width: 150 },
+          { text: `${fp} · page ${currentPage} of ${pageCount}`, fontSize: 7, alignment: 'right', width: 300 },
         ],
         columnGap: 8,
       },

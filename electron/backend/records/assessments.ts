@@ -17,7 +17,11 @@ import { canonicalJson } from './canonical.js';
 import { notFound, parseOrThrow, translateSqliteError, type StoreContext } from './context.js';
 import { diffValues } from './diff.js';
 import { getInstallation, getPerson, getRoom, roomInputFromRegister } from './register.js';
-import { fingerprintOf, keyIdOf, sha256Hex, signStatement, verifyStatement, type SignedStatement } from './signing.js';
+import { fingerprintOf, keyIdOf, linkOf, sha256Hex, verifyStatement, type SignedStatement } from './signing.js';
+import { signAsPerson, type Signer } from './personal-keys.js';
+import { readTrustList, shortKeyFingerprint, trustOf } from './trust-list.js';
+import { appendSigningLog, signingLogFor } from './signing-log.js';
+import { missingProtections } from './protections.js';
 import {
   NON_BEAM_HAZARD_KINDS,
   RecordError,
@@ -33,6 +37,7 @@ import {
   type SaveBase,
   type Signature,
   type SignOff,
+  type VerifyCheck,
   type VerifyReport,
 } from './types.js';
 
@@ -72,13 +77,17 @@ export interface SignatureRow {
   algorithm: string;
   signature: string;
   key_id: string;
+  statement_version: number;
+  previous_link: string | null;
+  trust_anchor: string | null;
   /** Joined from signing_key (null if the key row is missing, e.g. after tampering). */
   public_key: string | null;
 }
 
 const SIGNATURE_SELECT = `SELECT s.*, k.public_key FROM signature s LEFT JOIN signing_key k ON k.key_id = s.key_id WHERE s.revision_id = ?`;
 
-function signatureFromRow(r: SignatureRow): Signature {
+function signatureFromRow(ctx: StoreContext, r: SignatureRow): Signature {
+  const v2 = r.statement_version === 2;
   return {
     revisionId: r.revision_id,
     personId: r.person_id,
@@ -91,6 +100,8 @@ function signatureFromRow(r: SignatureRow): Signature {
     signature: r.signature,
     keyId: r.key_id,
     publicKey: r.public_key ?? '',
+    ...(v2 ? { statementVersion: 2 as const, previousLink: r.previous_link, ...(r.trust_anchor ? { trustAnchor: r.trust_anchor } : {}) } : {}),
+    keyTrusted: trustOf(readTrustList(ctx.keyDir).list, r.key_id).trusted,
   };
 }
 
@@ -110,7 +121,7 @@ function revisionHeaderFromRow(ctx: StoreContext, r: RevisionRow): Omit<Revision
     basedOn: r.based_on,
     createdAt: r.created_at,
     updatedAt: r.updated_at,
-    signature: sig ? signatureFromRow(sig) : null,
+    signature: sig ? signatureFromRow(ctx, sig) : null,
   };
 }
 
@@ -301,7 +312,9 @@ function currentWithVersion(ctx: StoreContext, id: Id): { current: Revision; ver
 const SUMMARY_SELECT = `
   SELECT a.id, a.room_id, a.installation_id, r.title, r.revision_no, r.status, r.review_by, r.updated_at,
     (SELECT s.signed_at FROM revision r3 JOIN signature s ON s.revision_id = r3.id
-      WHERE r3.assessment_id = a.id AND r3.status = 'signed') AS signed_at
+      WHERE r3.assessment_id = a.id AND r3.status = 'signed') AS signed_at,
+    (SELECT s.key_id FROM revision r3 JOIN signature s ON s.revision_id = r3.id
+      WHERE r3.assessment_id = a.id AND r3.status = 'signed') AS signed_key
   FROM assessment a
   JOIN revision r ON r.assessment_id = a.id
    AND r.revision_no = (SELECT max(r2.revision_no) FROM revision r2 WHERE r2.assessment_id = a.id)`;
@@ -316,8 +329,9 @@ interface SummaryRow {
   review_by: string | null;
   updated_at: string;
   signed_at: string | null;
+  signed_key: string | null;
 }
-const summaryFromRow = (r: SummaryRow): AssessmentSummary => ({
+const summaryFromRow = (ctx: StoreContext, r: SummaryRow): AssessmentSummary => ({
   id: r.id,
   roomId: r.room_id,
   installationId: r.installation_id,
@@ -326,19 +340,25 @@ const summaryFromRow = (r: SummaryRow): AssessmentSummary => ({
   status: r.status,
   reviewBy: r.review_by,
   signedAt: r.signed_at,
+  signatureUnverified: r.signed_key !== null && !trustOf(readTrustList(ctx.keyDir).list, r.signed_key).trusted,
   updatedAt: r.updated_at,
 });
 
 export function listAssessments(ctx: StoreContext, roomId: Id): AssessmentSummary[] {
   getRoom(ctx, roomId);
-  return (ctx.sql(`${SUMMARY_SELECT} WHERE a.room_id = ? ORDER BY r.updated_at DESC, a.id`).all(roomId) as SummaryRow[]).map(summaryFromRow);
+  return (ctx.sql(`${SUMMARY_SELECT} WHERE a.room_id = ? ORDER BY r.updated_at DESC, a.id`).all(roomId) as SummaryRow[]).map((row) => summaryFromRow(ctx, row));
+}
+
+/** Every assessment of the database (oldest first), for a whole-database check. */
+export function listAllAssessments(ctx: StoreContext): AssessmentSummary[] {
+  return (ctx.sql(`${SUMMARY_SELECT} ORDER BY a.created_at, a.id`).all() as SummaryRow[]).map((row) => summaryFromRow(ctx, row));
 }
 
 export function listDueForReview(ctx: StoreContext, date: CalendarDate): AssessmentSummary[] {
   if (!/^\d{4}-\d{2}-\d{2}$/.test(date)) throw new RecordError('invalid', `date: must be a calendar date YYYY-MM-DD (got "${date}")`);
   return (
     ctx.sql(`${SUMMARY_SELECT} WHERE r.review_by IS NOT NULL AND r.review_by <= ? ORDER BY r.review_by, a.id`).all(date) as SummaryRow[]
-  ).map(summaryFromRow);
+  ).map((row) => summaryFromRow(ctx, row));
 }
 
 export function listRevisions(ctx: StoreContext, assessmentId: Id): RevisionSummary[] {
@@ -495,13 +515,15 @@ export function discardDraft(ctx: StoreContext, id: Id): void {
   });
 }
 
-export function statementFor(
-  a: AssessmentRow,
-  r: Pick<RevisionRow, 'id' | 'revision_no'>,
-  s: Omit<SignatureRow, 'public_key' | 'signature' | 'algorithm' | 'key_id' | 'revision_id'>): SignedStatement {
-  return {
-    format: 'beamwarden-signed-statement',
-    version: 1,
+/** The fields of a signature row that its statement covers. */
+export type StatementFields = Pick<
+  SignatureRow,
+  'person_id' | 'name' | 'role' | 'signed_at' | 'statement' | 'fingerprint' | 'statement_version' | 'previous_link' | 'trust_anchor' | 'key_id'
+>;
+
+export function statementFor(a: AssessmentRow, r: Pick<RevisionRow, 'id' | 'revision_no'>, s: StatementFields): SignedStatement {
+  const common = {
+    format: 'beamwarden-signed-statement' as const,
     assessmentId: a.id,
     roomId: a.room_id,
     installationId: a.installation_id,
@@ -514,6 +536,8 @@ export function statementFor(
     signedAt: s.signed_at,
     statement: s.statement,
   };
+  if (s.statement_version !== 2) return { ...common, version: 1 };
+  return { ...common, version: 2, keyId: s.key_id, previousLink: s.previous_link, trustAnchor: s.trust_anchor ?? '' };
 }
 
 export function registerKey(ctx: StoreContext, keyId: string, publicKey: string, origin: 'this-database' | 'imported'): void {
@@ -522,45 +546,98 @@ export function registerKey(ctx: StoreContext, keyId: string, publicKey: string,
     .run(keyId, publicKey, origin, ctx.now());
 }
 
+/** Chain link of the newest signed (not superseded) revision of an assessment, or null. */
+function newestSignedLink(ctx: StoreContext, a: AssessmentRow): string | null {
+  const prev = ctx.sql("SELECT * FROM revision WHERE assessment_id = ? AND status = 'signed' ORDER BY revision_no DESC LIMIT 1").get(a.id) as
+    | RevisionRow
+    | undefined;
+  if (!prev) return null;
+  const sig = getSignatureRow(ctx, prev.id);
+  return sig ? linkOf(statementFor(a, prev, sig)) : null;
+}
+
+export const INSERT_SIGNATURE = `INSERT INTO signature (revision_id, person_id, name, role, signed_at, statement, fingerprint, algorithm, signature, key_id,
+  statement_version, previous_link, trust_anchor)
+  VALUES (@revision_id, @person_id, @name, @role, @signed_at, @statement, @fingerprint, 'Ed25519', @signature, @key_id,
+  @statement_version, @previous_link, @trust_anchor)`;
+
+/**
+ * Sign the current draft with the signer's personal key. The passphrase opens the key (wrong: refused,
+ * nothing changes); the signer's name and role are those of the key's owner and the time is this
+ * back end's clock. The statement covers the fingerprint, the previous signed revision's link and the
+ * trust anchor, and is recorded in the signing log outside the database.
+ */
 export function signAssessment(ctx: StoreContext, id: Id, rawSignOff: SignOff): Assessment {
   const signOff = parseOrThrow(SignOffSchema, rawSignOff, 'Sign-off');
-  if (signOff.personId !== undefined) getPerson(ctx, signOff.personId);
+  const person = getPerson(ctx, signOff.personId);
+  if (!person.role.trim()) throw new RecordError('invalid', `Enter ${person.name}'s role in the register (People) before signing: the signature records it.`, [{ path: 'personId', problem: 'the person has no role' }]);
+  return signDraftWith(ctx, id, signOff.statement, (build) => signAsPerson(ctx, signOff.personId, signOff.passphrase, build));
+}
+
+/** Produces the signature: identity and time decided by the signer function (signAsPerson in the app). */
+export type DraftSigner = (build: (signer: Signer) => SignedStatement) => { signer: Signer; payload: SignedStatement; signature: string };
+
+/** Sign the current draft with `signWith` (the app passes signAsPerson; the demo and benchmark an unlocked key). */
+export function signDraftWith(ctx: StoreContext, id: Id, statementText: string, signWith: DraftSigner): Assessment {
   const a = getAssessmentRow(ctx, id);
   const draft = newestRevisionRow(ctx, id);
   if (draft.status !== 'draft') throw new RecordError('conflict', `Nothing to sign: revision ${draft.revision_no} is already ${draft.status}`);
   const content = parseOrThrow(AssessmentContentSchema, JSON.parse(draft.content_json), 'Draft content');
   // Sign what this core computes now, so the signed results are never stale.
   const results = evaluate(ctx, content.input);
-  const key = ctx.signingKey();
-  const signedAt = signOff.signedAt ?? ctx.now();
+  const fingerprint = fingerprintOf(content, results, ctx.calculatedWith);
+  const previousLink = newestSignedLink(ctx, a);
+  const signed = signWith((signer) =>
+    statementFor(a, draft, {
+      person_id: signer.personId,
+      name: signer.name,
+      role: signer.role,
+      signed_at: signer.signedAt,
+      statement: statementText,
+      fingerprint,
+      statement_version: 2,
+      previous_link: previousLink,
+      trust_anchor: signer.trustAnchor,
+      key_id: signer.keyId,
+    }),
+  );
+  const st = signed.payload;
   write(ctx, 'Sign-off', () => {
     const again = newestRevisionRow(ctx, id);
     if (again.id !== draft.id || again.status !== 'draft') throw new RecordError('conflict', 'The assessment changed while signing; try again');
+    if (newestSignedLink(ctx, a) !== previousLink) throw new RecordError('conflict', 'Another revision was signed meanwhile; try again');
     const resultsZ = encodeResults(results);
     if (!resultsZ.equals(draft.results_z) || draft.calculated_with !== ctx.calculatedWith) {
       ctx.sql("UPDATE revision SET results_z = ?, calculated_with = ? WHERE id = ? AND status = 'draft'").run(resultsZ, ctx.calculatedWith, draft.id);
     }
-    registerKey(ctx, key.keyId, key.publicKeyPem, 'this-database');
-    const fingerprint = fingerprintOf(content, results, ctx.calculatedWith);
-    const fields = {
-      person_id: signOff.personId ?? null,
-      name: signOff.name,
-      role: signOff.role,
-      signed_at: signedAt,
-      statement: signOff.statement,
+    registerKey(ctx, signed.signer.keyId, signed.signer.publicKey, 'this-database');
+    ctx.sql(INSERT_SIGNATURE).run({
+      revision_id: draft.id,
+      person_id: st.personId,
+      name: st.name,
+      role: st.role,
+      signed_at: st.signedAt,
+      statement: st.statement,
       fingerprint,
-    };
-    const signature = signStatement(key, statementFor(a, draft, fields));
-    ctx
-      .sql(
-        `INSERT INTO signature (revision_id, person_id, name, role, signed_at, statement, fingerprint, algorithm, signature, key_id)
-         VALUES (?, ?, ?, ?, ?, ?, ?, 'Ed25519', ?, ?)`,
-      )
-      .run(draft.id, fields.person_id, fields.name, fields.role, fields.signed_at, fields.statement, fingerprint, signature, key.keyId);
+      signature: signed.signature,
+      key_id: signed.signer.keyId,
+      statement_version: 2,
+      previous_link: previousLink,
+      trust_anchor: signed.signer.trustAnchor,
+    });
     ctx.sql("UPDATE revision SET status = 'superseded' WHERE assessment_id = ? AND status = 'signed'").run(id);
     // The save counter moves on: a save started before the sign-off is stale.
     ctx.sql("UPDATE revision SET status = 'signed', version = version + 1 WHERE id = ?").run(draft.id);
-    ctx.audit('signed', 'revision', draft.id, `revision ${draft.revision_no} by ${signOff.name} (${signOff.role})`);
+    ctx.audit('signed', 'revision', draft.id, `revision ${draft.revision_no} by ${st.name} (${st.role}), key ${shortKeyFingerprint(signed.signer.keyId)}`);
+    // Last step before the commit: if the witness outside the database cannot be written, nothing is signed.
+    appendSigningLog(ctx.keyDir, {
+      assessmentId: a.id,
+      revisionId: draft.id,
+      revisionNo: draft.revision_no,
+      link: linkOf(st),
+      signedAt: st.signedAt,
+      keyId: signed.signer.keyId,
+    });
   });
   return getAssessment(ctx, id);
 }
@@ -568,6 +645,85 @@ export function signAssessment(ctx: StoreContext, id: Id, rawSignOff: SignOff): 
 // ---------------------------------------------------------------- verify
 
 const MAX_DIFFERENCES = 200;
+
+/**
+ * The revision chain of one assessment: numbering without gaps, each signed statement naming the
+ * link of the signed revision stored before it, statuses consistent with the order of signing,
+ * list columns equal to the signed content, and every signature the signing log (outside the
+ * database) remembers still present and unchanged. One plain sentence per problem.
+ */
+export function chainFindings(ctx: StoreContext, a: AssessmentRow): string[] {
+  const out: string[] = [];
+  const rows = ctx.sql('SELECT * FROM revision WHERE assessment_id = ? ORDER BY revision_no').all(a.id) as RevisionRow[];
+  rows.forEach((r, i) => {
+    const prevNo = i === 0 ? 0 : (rows[i - 1]?.revision_no ?? 0);
+    if (r.revision_no !== prevNo + 1) {
+      out.push(
+        r.revision_no > prevNo + 1
+          ? `Revision ${prevNo + 1}${r.revision_no > prevNo + 2 ? `–${r.revision_no - 1}` : ''} is missing (the numbers jump from ${prevNo} to ${r.revision_no}): a revision was deleted outside Beamwarden.`
+          : `Revision numbers are out of order at ${r.revision_no}: revisions were renumbered outside Beamwarden.`,
+      );
+    }
+  });
+  const links = new Map<string, string>();
+  const signedRows = rows.filter((r) => r.status !== 'draft');
+  let prevLink: string | null = null;
+  let prevNo: number | null = null;
+  for (const r of signedRows) {
+    const sig = getSignatureRow(ctx, r.id);
+    if (!sig) continue;
+    const link = linkOf(statementFor(a, r, sig));
+    links.set(r.id, link);
+    if (sig.statement_version === 2 && (sig.previous_link ?? null) !== prevLink) {
+      out.push(
+        prevLink === null
+          ? `Revision ${r.revision_no} was signed as following an earlier signed revision, but none is stored before it: a signed revision was deleted outside Beamwarden.`
+          : sig.previous_link === null
+            ? `Revision ${r.revision_no} was signed as the first signed revision, but revision ${prevNo} is stored before it as signed: revisions were inserted or reordered outside Beamwarden.`
+            : `Revision ${r.revision_no} was signed following a different revision than revision ${prevNo} stored before it: a revision was removed, reordered or replaced outside Beamwarden.`,
+      );
+    }
+    prevLink = link;
+    prevNo = r.revision_no;
+  }
+  const last = signedRows.at(-1);
+  for (const r of signedRows) {
+    if (r === last && r.status !== 'signed') {
+      out.push(`Revision ${r.revision_no} is marked ${r.status}, but no later signed revision replaces it: its status was changed from signed to ${r.status} outside Beamwarden.`);
+    }
+    if (r !== last && r.status === 'signed') {
+      out.push(`Revision ${r.revision_no} is still marked signed although revision ${last?.revision_no ?? ''} was signed after it: its status was changed outside Beamwarden.`);
+    }
+  }
+  for (const r of rows) {
+    let c: { title?: unknown; reviewBy?: unknown } = {};
+    try {
+      c = JSON.parse(r.content_json) as { title?: unknown; reviewBy?: unknown };
+    } catch {
+      continue; // reported with the content
+    }
+    if (typeof c.title === 'string' && r.title !== c.title) {
+      out.push(`The register lists revision ${r.revision_no} with the title "${r.title}", but its recorded content says "${c.title}": the list column was changed outside Beamwarden.`);
+    }
+    if ((c.reviewBy ?? null) !== (r.review_by ?? null)) {
+      out.push(
+        `The register lists revision ${r.revision_no} for review by ${r.review_by ?? '(no date)'}, but its recorded content says ${String(c.reviewBy ?? '(no date)')}: the list column was changed outside Beamwarden.`,
+      );
+    }
+  }
+  for (const entry of signingLogFor(ctx.keyDir, a.id)) {
+    const row = rows.find((r) => r.id === entry.revisionId);
+    if (!row || row.status === 'draft') {
+      out.push(
+        `The signing log outside the database records revision ${entry.revisionNo}, signed on ${entry.signedAt.slice(0, 10)} with key ${shortKeyFingerprint(entry.keyId)}, ` +
+          'but this database does not have it as signed: it was deleted outside Beamwarden (or the database was restored from an older copy).',
+      );
+    } else if (links.get(row.id) !== entry.link) {
+      out.push(`Revision ${row.revision_no} is not the one the signing log recorded when it was signed: its signature record was replaced outside Beamwarden.`);
+    }
+  }
+  return out;
+}
 
 export function verifyAssessment(ctx: StoreContext, assessmentId: Id, revisionId?: Id): VerifyReport {
   const a = getAssessmentRow(ctx, assessmentId);
@@ -582,13 +738,16 @@ export function verifyAssessment(ctx: StoreContext, assessmentId: Id, revisionId
         .get(assessmentId) as RevisionRow | undefined) ?? newestRevisionRow(ctx, assessmentId);
   }
   const findings: string[] = [];
+  const checks: VerifyCheck[] = [];
   const sig = getSignatureRow(ctx, r.id);
 
   // 1. Stored content and results readable?
   let content: AssessmentContent | null = null;
   let storedResults: unknown = null;
+  let storedText = '';
   try {
-    storedResults = decodeResults(r.results_z);
+    storedText = brotliDecompressSync(r.results_z).toString('utf8');
+    storedResults = JSON.parse(storedText);
     const c = AssessmentContentSchema.safeParse(JSON.parse(r.content_json));
     if (c.success) content = c.data;
     else findings.push(`The stored content is not a valid assessment (${c.error.issues[0]?.message ?? 'schema'}): it was changed outside Beamwarden.`);
@@ -602,7 +761,8 @@ export function verifyAssessment(ctx: StoreContext, assessmentId: Id, revisionId
   if (content !== null) {
     try {
       const recomputed = ctx.evaluate(content.input);
-      resultsMatchCore = canonicalJson(recomputed) === canonicalJson(storedResults);
+      // Byte-equal JSON means equal values (the quick test); otherwise compare canonical forms.
+      resultsMatchCore = JSON.stringify(recomputed) === storedText || canonicalJson(recomputed) === canonicalJson(storedResults);
       if (!resultsMatchCore) {
         differences = diffValues(storedResults, recomputed, 'results');
         findings.push(
@@ -615,15 +775,18 @@ export function verifyAssessment(ctx: StoreContext, assessmentId: Id, revisionId
       findings.push(`The stored inputs cannot be recomputed with ${ctx.calculatedWith}: ${(e as Error).message}`);
     }
   }
+  checks.push({ check: 'results', ok: resultsMatchCore, finding: resultsMatchCore ? `The results recompute identically with ${ctx.calculatedWith}.` : (findings.at(-1) ?? 'The results could not be recomputed.') });
   if (differences.length > MAX_DIFFERENCES) {
     findings.push(`Only the first ${MAX_DIFFERENCES} of ${differences.length} differences are listed.`);
     differences = differences.slice(0, MAX_DIFFERENCES);
   }
 
-  // 3. Fingerprint and signature.
+  // 3. Fingerprint, signature and the key's trust (the trust list outside the database).
   let fingerprintMatches = false;
   let signatureValid = false;
-  let keyKnown = false;
+  let keyTrusted = false;
+  let trustChain: readonly string[] = [];
+  const trust = readTrustList(ctx.keyDir);
   if (!sig) {
     findings.push(
       r.status === 'draft'
@@ -634,16 +797,72 @@ export function verifyAssessment(ctx: StoreContext, assessmentId: Id, revisionId
     if (content !== null && RoomResultSchema.safeParse(storedResults).success) {
       fingerprintMatches = fingerprintOf(content, storedResults as RoomResult, r.calculated_with) === sig.fingerprint;
     }
-    if (!fingerprintMatches) findings.push('The fingerprint does not match the stored content and results: they were changed after signing.');
-    keyKnown = sig.public_key !== null && keyIdOf(sig.public_key) === sig.key_id;
-    if (!keyKnown) findings.push('The signing key of this signature is missing from the database or does not match its key id.');
-    signatureValid = keyKnown && sig.public_key !== null && verifyStatement(sig.public_key, statementFor(a, r, sig), sig.signature);
-    if (!signatureValid) findings.push('The signature is not valid for the signer, date, statement and fingerprint recorded: the sign-off was changed.');
+    const fpText = fingerprintMatches
+      ? `The fingerprint ${sig.fingerprint.slice(0, 16)}… matches the stored content and results.`
+      : 'The fingerprint does not match the stored content and results: they were changed after signing.';
+    if (!fingerprintMatches) findings.push(fpText);
+    checks.push({ check: 'fingerprint', ok: fingerprintMatches, finding: fpText });
+
+    const verdict = trustOf(trust.list, sig.key_id);
+    trustChain = verdict.chain;
+    // The public key comes from the trust list when the key is on it: the database copy is not relied on.
+    const publicKey = verdict.entry?.publicKey ?? sig.public_key;
+    let keyMatches = false;
+    try {
+      keyMatches = publicKey !== null && keyIdOf(publicKey) === sig.key_id;
+    } catch {
+      keyMatches = false;
+    }
+    signatureValid = keyMatches && publicKey !== null && verifyStatement(publicKey, statementFor(a, r, sig), sig.signature);
+    let sigText = signatureValid
+      ? `The Ed25519 signature by ${sig.name} (${sig.role}) of ${sig.signed_at.slice(0, 10)} is valid for the statement, fingerprint and chain recorded.`
+      : 'The signature is not valid for the signer, date, statement and fingerprint recorded: the sign-off was changed.';
+    if (signatureValid && verdict.entry?.personId && sig.person_id !== verdict.entry.personId) {
+      signatureValid = false;
+      sigText = `The signature names ${sig.name} as the signer, but key ${shortKeyFingerprint(sig.key_id)} belongs to ${verdict.entry.personName}: the sign-off was made in someone else's name.`;
+    }
+    if (signatureValid && verdict.entry?.retiredAt && sig.signed_at > verdict.entry.retiredAt) {
+      signatureValid = false;
+      sigText = `The signature is dated ${sig.signed_at.slice(0, 10)}, after key ${shortKeyFingerprint(sig.key_id)} was retired on ${verdict.entry.retiredAt.slice(0, 10)}.`;
+    }
+    if (!signatureValid) findings.push(sigText);
+    checks.push({ check: 'signature', ok: signatureValid, finding: sigText });
+
+    keyTrusted = verdict.trusted && trust.problem === null;
+    let trustText = keyTrusted
+      ? `Key ${shortKeyFingerprint(sig.key_id)} is on this installation's trust list: ${verdict.chain.join(' ')}`
+      : `Key ${shortKeyFingerprint(sig.key_id)} is NOT trusted here — a key that only the database lists proves nothing. ${verdict.chain.join(' ')}`;
+    const listProblems = trustProblems(ctx, trust.list?.anchor ?? null, trust.problem);
+    if (listProblems.length) {
+      keyTrusted = false;
+      trustText = `${trustText} ${listProblems.join(' ')}`;
+    }
+    if (keyTrusted && sig.statement_version === 2 && sig.trust_anchor !== trust.list?.anchor) {
+      // Signed at another installation (an import whose key was admitted here): worth saying, not a failure.
+      trustText += ` It was signed at another installation (trust anchor ${shortKeyFingerprint(sig.trust_anchor ?? '')}).`;
+    }
+    if (sig.statement_version !== 2) trustText += ' (Signed with the installation key, before personal keys.)';
+    if (!keyTrusted) findings.push(trustText);
+    checks.push({ check: 'key-trusted', ok: keyTrusted, finding: trustText });
     if (r.status === 'draft') findings.push('A signature exists but the revision is marked as a draft: the status was changed outside Beamwarden.');
   }
+
+  // 4. The revision chain and 5. the database's own protections.
+  const chain = chainFindings(ctx, a);
+  const chainIntact = chain.length === 0;
+  findings.push(...chain);
+  checks.push({ check: 'chain', ok: chainIntact, finding: chainIntact ? 'The revision chain is whole: no signed revision removed, reordered or re-marked, and the list matches the content.' : chain.join(' ') });
+  const missing = missingProtections(ctx.db);
+  const protectionsOk = missing.length === 0;
+  const protText = protectionsOk
+    ? 'The database protections against changing signed records are in place.'
+    : `The database protections against changing signed records were removed (${missing.join(', ')}): someone changed the database with another tool.`;
+  if (!protectionsOk) findings.push(protText);
+  checks.push({ check: 'protections', ok: protectionsOk, finding: protText });
+
   const signed = sig !== undefined && r.status !== 'draft';
-  const ok = signed && fingerprintMatches && signatureValid && keyKnown && resultsMatchCore;
-  if (ok) findings.push(`Revision ${r.revision_no} is intact: fingerprint, signature and recomputed results all match.`);
+  const ok = signed && fingerprintMatches && signatureValid && keyTrusted && resultsMatchCore && chainIntact && protectionsOk;
+  if (ok) findings.push(`Revision ${r.revision_no} is intact: signature valid, key trusted, fingerprint matches, results recompute, chain whole.`);
   return {
     ok,
     assessmentId,
@@ -653,11 +872,29 @@ export function verifyAssessment(ctx: StoreContext, assessmentId: Id, revisionId
     signed,
     fingerprintMatches,
     signatureValid,
-    keyKnown,
+    keyTrusted,
+    trustChain,
+    chainIntact,
+    signer: sig ? { name: sig.name, role: sig.role, signedAt: sig.signed_at, keyFingerprint: shortKeyFingerprint(sig.key_id) } : null,
+    checks,
     resultsMatchCore,
     calculatedWith: r.calculated_with,
     verifiedWith: ctx.calculatedWith,
     differences,
     findings,
   };
+}
+
+/** A missing, unreadable or replaced trust list, in plain words. */
+function trustProblems(ctx: StoreContext, anchor: string | null, problem: string | null): string[] {
+  const out: string[] = [];
+  if (problem) out.push(problem);
+  const pins = (ctx.sql('SELECT anchor FROM trust_anchor_pin').all() as Array<{ anchor: string }>).map((p) => p.anchor);
+  if (anchor === null && problem === null && pins.length > 0) out.push('The trust list file beside the database is missing: restore it from a backup.');
+  if (anchor !== null && pins.length > 0 && !pins.includes(anchor)) {
+    out.push(
+      `The trust list beside the database has the anchor ${shortKeyFingerprint(anchor)}, but this database was set up with ${pins.map(shortKeyFingerprint).join(', ')}: the trust list file was replaced.`,
+    );
+  }
+  return out;
 }

@@ -1,4 +1,4 @@
-/** What every part of the store shares: the connection, the clock, ids, the core and the signing key. */
+/** What every part of the store shares: the connection, the clock, ids, the core and the key folder (trust list, signing log). */
 import { randomUUID } from 'node:crypto';
 import type { z } from 'zod';
 import { formatZodIssues } from '../schemas/issues.js';
@@ -6,12 +6,12 @@ import { officerPath } from '../../../core/model/input-words.js';
 import type { Evaluate } from './core-link.js';
 import type { Statement } from 'better-sqlite3';
 import type { Db } from './database.js';
-import { loadOrCreateSigningKey, type SigningKey } from './signing.js';
 import { storageError } from './storage-errors.js';
 import { RecordError } from './types.js';
 
 export interface StoreContext {
   readonly db: Db;
+  /** The user-data folder beside the database: trust list and signing log (outside the database). */
   readonly keyDir: string;
   readonly evaluate: Evaluate;
   readonly calculatedWith: string;
@@ -19,8 +19,6 @@ export interface StoreContext {
   sql(sql: string): Statement;
   now(): string;
   newId(): string;
-  /** Loaded (or created) on first use: a database that never signs needs no key. */
-  signingKey(): SigningKey;
   audit(action: string, entity: string, entityId: string, detail?: string): void;
 }
 
@@ -31,7 +29,6 @@ export function makeContext(
   calculatedWith: string,
   now: () => string = () => new Date().toISOString(),
 ): StoreContext {
-  let key: SigningKey | undefined;
   const statements = new Map<string, Statement>();
   const sql = (text: string): Statement => {
     let st = statements.get(text);
@@ -49,10 +46,6 @@ export function makeContext(
     calculatedWith,
     now,
     newId: () => randomUUID(),
-    signingKey() {
-      key ??= loadOrCreateSigningKey(keyDir);
-      return key;
-    },
     audit(action, entity, entityId, detail = '') {
       sql('INSERT INTO audit_event (at, action, entity, entity_id, detail) VALUES (?, ?, ?, ?, ?)').run(new Date().toISOString(), action, entity, entityId, detail);
     },

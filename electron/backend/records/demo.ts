@@ -7,7 +7,9 @@ import { z } from 'zod';
 import demoScenario from '../../../assets/demo/demo-scenario.json' with { type: 'json' };
 import { EyewearSpecSchema, RoomInputSchema } from '../schemas/inputs.js';
 import { parseOrThrow, type StoreContext } from './context.js';
-import { createAssessment, newAssessmentContent, signAssessment } from './assessments.js';
+import { generateKeyPairSync } from 'node:crypto';
+import { createAssessment, newAssessmentContent, signDraftWith } from './assessments.js';
+import { signerFromKey } from './personal-keys.js';
 import { createEyewear, createInstallation, createPerson, createRoom, createSite, listSites } from './register.js';
 import type { AssessmentContent, ControlChoice, Site } from './types.js';
 import { withEmergencyContact } from './emergency-contact.js';
@@ -68,12 +70,14 @@ export function seedDemo(ctx: StoreContext, raw: unknown = demoScenario): Site {
       };
       const assessment = createAssessment(ctx, { roomId: room.id, content });
       if (index === 0) {
-        signAssessment(ctx, assessment.id, {
-          personId: officer.id,
-          name: officer.name,
-          role: officer.role,
-          statement: 'I have evaluated the laser hazards of this area with the inputs and assumptions recorded here and approve the controls listed.',
-        });
+        // A throwaway key on no trust list: the invented record shows as an unverified signature,
+        // and the demo never becomes (or needs) a key this installation trusts.
+        signDraftWith(
+          ctx,
+          assessment.id,
+          'I have evaluated the laser hazards of this area with the inputs and assumptions recorded here and approve the controls listed.',
+          signerFromKey(ctx, officer, generateKeyPairSync('ed25519').privateKey),
+        );
       }
     });
     ctx.audit('seeded-demo', 'site', site.id, scenario.site.name);

@@ -22,7 +22,11 @@ import { formatZodIssues } from '../schemas/issues.js';
 import { canonicalJson } from './canonical.js';
 import type { StoreContext } from './context.js';
 import { translateSqliteError } from './context.js';
-import { encodeResults, insertRevisionRow, registerKey, statementFor, type RevisionRow } from './assessments.js';
+import { encodeResults, INSERT_SIGNATURE, insertRevisionRow, registerKey, statementFor, type RevisionRow, type StatementFields } from './assessments.js';
+import { parseOrThrow } from './context.js';
+import { admitKeys, ImportAdmissionSchema, unlockPersonalKey } from './personal-keys.js';
+import { appendSigningLog, type SigningLogLine } from './signing-log.js';
+import { readTrustList, shortKeyFingerprint, trustOf } from './trust-list.js';
 import { getAssessment, getRevision, listRevisions } from './assessments.js';
 import {
   getInstallation,
@@ -40,7 +44,7 @@ import {
 } from './register.js';
 import { getEyewear, getPerson, replaceEyewear, replaceInstallation } from './register.js';
 import { keepDraftAsCopy } from './import-conflicts.js';
-import { fingerprintOf, keyIdOf, verifyStatement } from './signing.js';
+import { fingerprintOf, keyIdOf, linkOf, verifyStatement } from './signing.js';
 import {
   EXPORT_FORMAT,
   EXPORT_VERSION,
@@ -48,12 +52,14 @@ import {
   type ExportDocument,
   type ExportedAssessment,
   type Id,
+  type ImportAdmission,
   type ImportIssue,
   type ImportSummary,
   type KeptDraft,
   type Person,
   type Revision,
   type Room,
+  type Signature,
   type Site,
 } from './types.js';
 
@@ -64,9 +70,16 @@ function assessmentIdsOfRooms(ctx: StoreContext, roomIds: readonly Id[]): Id[] {
   return roomIds.flatMap((rid) => (stmt.all(rid) as Array<{ id: string }>).map((r) => r.id));
 }
 
+/** Whether a key is trusted is this installation's judgement: never written to a file, nor compared. */
+function withoutTrust(r: Revision): Revision {
+  if (!r.signature) return r;
+  const { keyTrusted: _drop, ...signature } = r.signature;
+  return { ...r, signature };
+}
+
 function exportedAssessment(ctx: StoreContext, id: Id): ExportedAssessment {
   const a = getAssessment(ctx, id);
-  const revisions = listRevisions(ctx, id).map((s) => getRevision(ctx, s.id));
+  const revisions = listRevisions(ctx, id).map((s) => withoutTrust(getRevision(ctx, s.id)));
   return { id: a.id, roomId: a.roomId, installationId: a.installationId, createdAt: a.createdAt, revisions };
 }
 
@@ -267,14 +280,7 @@ function crossCheck(ctx: StoreContext, doc: ExportDocument): ImportIssue[] {
       }
       const row = { id: a.id, room_id: a.roomId, installation_id: a.installationId, created_at: a.createdAt };
       const rev = { id: r.id, revision_no: r.revisionNo };
-      const stmt = statementFor(row, rev, {
-        person_id: s.personId,
-        name: s.name,
-        role: s.role,
-        signed_at: s.signedAt,
-        statement: s.statement,
-        fingerprint: s.fingerprint,
-      });
+      const stmt = statementFor(row, rev, signatureFields(s));
       if (!verifyStatement(publicKey, stmt, s.signature)) {
         issues.push({ path: `${p}.signature.signature`, problem: 'the Ed25519 signature is not valid for this sign-off: the file was changed after signing' });
       }
@@ -286,6 +292,22 @@ function crossCheck(ctx: StoreContext, doc: ExportDocument): ImportIssue[] {
 }
 
 // ---------------------------------------------------------------- import: writing
+
+function signatureFields(s: Signature): StatementFields & { signature: string } {
+  return {
+    person_id: s.personId,
+    name: s.name,
+    role: s.role,
+    signed_at: s.signedAt,
+    statement: s.statement,
+    fingerprint: s.fingerprint,
+    statement_version: s.statementVersion ?? 1,
+    previous_link: s.previousLink ?? null,
+    trust_anchor: s.trustAnchor ?? null,
+    key_id: s.keyId,
+    signature: s.signature,
+  };
+}
 
 const same = (a: unknown, b: unknown) => canonicalJson(a) === canonicalJson(b);
 
@@ -312,12 +334,31 @@ export function isNotOlder(local: string, imported: string): boolean {
   return Date.parse(local) >= Date.parse(imported);
 }
 
-export function importDocument(ctx: StoreContext, input: unknown): ImportSummary {
+/**
+ * Signed revisions are accepted as signed only when their key is on this installation's trust
+ * list, or when the officer explicitly admits the exporting site's key (`admit`: key ids shown with
+ * their fingerprints, endorsed with a trusted signer's passphrase). Otherwise they are imported and
+ * shown as unverified signatures everywhere — never as signed.
+ */
+export function importDocument(ctx: StoreContext, input: unknown, rawAdmit?: ImportAdmission): ImportSummary {
   const doc = parseExportDocument(input);
   const issues = crossCheck(ctx, doc);
   if (issues.length) throw invalid(issues);
-  const count = { sites: 0, rooms: 0, installations: 0, eyewear: 0, people: 0, assessments: 0, revisions: 0, unchanged: 0 };
+  const list = readTrustList(ctx.keyDir).list;
+  const signerOf = new Map<string, string>();
+  for (const a of doc.assessments) for (const r of a.revisions) if (r.signature) signerOf.set(r.signature.keyId, r.signature.name);
+  const untrusted = doc.signingKeys.filter((k) => signerOf.has(k.keyId) && !trustOf(list, k.keyId).trusted);
+  let endorser: ReturnType<typeof unlockPersonalKey> | null = null;
+  const admit = rawAdmit ? parseOrThrow(ImportAdmissionSchema, rawAdmit, 'Key admission') : null;
+  if (admit && admit.keyIds.length > 0) {
+    const unknown = admit.keyIds.filter((id) => !untrusted.some((k) => k.keyId === id));
+    if (unknown.length) throw new RecordError('invalid', `Key ${shortKeyFingerprint(unknown[0] ?? '')} is not an untrusted signing key of this file; nothing was imported.`);
+    // The passphrase is checked before anything is written.
+    endorser = unlockPersonalKey(ctx, admit.endorserPersonId, admit.endorserPassphrase);
+  }
+  const count = { sites: 0, rooms: 0, installations: 0, eyewear: 0, people: 0, assessments: 0, revisions: 0, unchanged: 0, unverified: 0 };
   const keptDrafts: KeptDraft[] = [];
+  const logLines: SigningLogLine[] = [];
   const db = ctx.db;
 
   const run = db.transaction(() => {
@@ -387,7 +428,7 @@ export function importDocument(ctx: StoreContext, input: unknown): ImportSummary
         const path = `assessments[${ai}].revisions[${ri}]`;
         const local = ctx.sql('SELECT * FROM revision WHERE id = ?').get(r.id) as RevisionRow | undefined;
         if (local) {
-          const mine = getRevision(ctx, r.id);
+          const mine = withoutTrust(getRevision(ctx, r.id));
           if (same(mine, r)) {
             count.unchanged++;
             continue;
@@ -438,10 +479,9 @@ export function importDocument(ctx: StoreContext, input: unknown): ImportSummary
         insertRevisionRow(ctx, revisionRow(r, fileResults(doc, ai, ri)));
         const s = r.signature;
         if (s) {
-          ctx.sql(
-            `INSERT INTO signature (revision_id, person_id, name, role, signed_at, statement, fingerprint, algorithm, signature, key_id)
-             VALUES (?, ?, ?, ?, ?, ?, ?, 'Ed25519', ?, ?)`,
-          ).run(r.id, s.personId, s.name, s.role, s.signedAt, s.statement, s.fingerprint, s.signature, s.keyId);
+          ctx.sql(INSERT_SIGNATURE).run({ revision_id: r.id, ...signatureFields(s) });
+          const aRow = { id: a.id, room_id: a.roomId, installation_id: a.installationId, created_at: a.createdAt };
+          logLines.push({ assessmentId: a.id, revisionId: r.id, revisionNo: r.revisionNo, link: linkOf(statementFor(aRow, { id: r.id, revision_no: r.revisionNo }, signatureFields(s))), signedAt: s.signedAt, keyId: s.keyId });
           if (r.status === 'signed') ctx.sql("UPDATE revision SET status = 'superseded' WHERE assessment_id = ? AND status = 'signed'").run(a.id);
           ctx.sql('UPDATE revision SET status = ? WHERE id = ?').run(r.status, r.id);
         }
@@ -457,5 +497,30 @@ export function importDocument(ctx: StoreContext, input: unknown): ImportSummary
     const t = translateSqliteError(e, 'Import (nothing was changed)', ctx.db.name);
     throw t instanceof RecordError ? new RecordError(t.code, t.message, [{ path: '(document)', problem: t.message }]) : t;
   }
-  return { ...count, keptDrafts };
+  if (endorser !== null && admit !== null) {
+    admitKeys(ctx, untrusted.filter((k) => admit.keyIds.includes(k.keyId)).map((k) => ({ ...k, personId: null, personName: `${signerOf.get(k.keyId) ?? ''} (exporting site)` })), endorser);
+  }
+  const after = readTrustList(ctx.keyDir).list;
+  // Only signatures this installation trusts enter its signing log; the others stay unverified.
+  for (const line of logLines) {
+    if (trustOf(after, line.keyId).trusted) appendSigningLog(ctx.keyDir, line);
+    else count.unverified++;
+  }
+  const stillUntrusted = untrusted.filter((k) => !trustOf(after, k.keyId).trusted);
+  return {
+    ...count,
+    keptDrafts,
+    untrustedKeys: stillUntrusted.map((k) => ({ keyId: k.keyId, fingerprint: shortKeyFingerprint(k.keyId), claimedSigner: signerOf.get(k.keyId) ?? '' })),
+  };
+}
+
+/** Which keys of a file this installation does not trust (for the confirmation before admitting them). */
+export function untrustedKeysOf(ctx: StoreContext, input: unknown): ImportSummary['untrustedKeys'] {
+  const doc = parseExportDocument(input);
+  const list = readTrustList(ctx.keyDir).list;
+  const signerOf = new Map<string, string>();
+  for (const a of doc.assessments) for (const r of a.revisions) if (r.signature) signerOf.set(r.signature.keyId, r.signature.name);
+  return doc.signingKeys
+    .filter((k) => signerOf.has(k.keyId) && !trustOf(list, k.keyId).trusted)
+    .map((k) => ({ keyId: k.keyId, fingerprint: shortKeyFingerprint(k.keyId), claimedSigner: signerOf.get(k.keyId) ?? '' }));
 }

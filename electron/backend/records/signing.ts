@@ -5,9 +5,10 @@
  *   Any change to what was assessed or to what the core computed changes it.
  * - Signature: Ed25519 (RFC 8032, node:crypto) over the canonical serialisation of the signed
  *   statement, which binds the fingerprint to the assessment, the revision, the signer and the time.
- * - Keys: one Ed25519 key pair per database, kept as PEM files beside it and created on first use.
- *   The private key file is written with mode 0600. Its public key (and every imported one) is also
- *   stored in the database, so a signature can be checked even if the key files are lost.
+ * - Keys: personal keys (personal-keys.ts), trusted only through the trust list outside the
+ *   database (trust-list.ts). Schema 2 had one installation key pair per database in PEM files
+ *   beside it; `loadOrCreateSigningKey` remains for test fixtures of that schema, and
+ *   `readInstallationKey` for migrating its signatures (legacy-signatures.ts).
  */
 import { createHash, createPrivateKey, createPublicKey, generateKeyPairSync, sign, verify, type KeyObject } from 'node:crypto';
 import { existsSync, linkSync, mkdirSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
@@ -31,7 +32,8 @@ export function fingerprintOf(content: AssessmentContent, results: RoomResult, c
 /** What the signer's key signs (canonical JSON of this object). */
 export interface SignedStatement {
   readonly format: 'beamwarden-signed-statement';
-  readonly version: 1;
+  /** 1: installation key (before personal keys); 2: personal key, chained, with the trust anchor. */
+  readonly version: 1 | 2;
   readonly assessmentId: Id;
   readonly roomId: Id;
   readonly installationId: Id | null;
@@ -43,6 +45,30 @@ export interface SignedStatement {
   readonly role: string;
   readonly signedAt: string;
   readonly statement: string;
+  /** Version 2 only (absent fields are left out of the canonical form, so version 1 bytes are unchanged). */
+  readonly keyId?: string;
+  readonly previousLink?: string | null;
+  readonly trustAnchor?: string;
+}
+
+/** A signed revision's chain link: SHA-256 of its canonical signed statement. */
+export function linkOf(statement: SignedStatement): string {
+  return sha256Hex(canonicalJson(statement));
+}
+
+/** The installation key file of schema 2 (one key per database), read for migration only; null if absent. */
+export function readInstallationKey(keyDir: string): SigningKey | null {
+  const privPath = join(keyDir, PRIVATE_KEY_FILE);
+  if (!existsSync(privPath)) return null;
+  let privateKey: KeyObject;
+  try {
+    privateKey = createPrivateKey(readFileSync(privPath, 'utf8'));
+  } catch {
+    return null;
+  }
+  if (privateKey.asymmetricKeyType !== 'ed25519') return null;
+  const publicKeyPem = createPublicKey(privateKey).export({ type: 'spki', format: 'pem' }).toString();
+  return { privateKey, publicKeyPem, keyId: keyIdOf(publicKeyPem) };
 }
 
 /** Key id: SHA-256 (hex) of the raw 32-byte Ed25519 public key. */

@@ -15,6 +15,9 @@ import { importLaserCsv } from './csv.js';
 import { openDatabase } from './database.js';
 import { seedDemo } from './demo.js';
 import * as X from './exchange.js';
+import * as K from './personal-keys.js';
+import { adoptInstallationKey } from './legacy-signatures.js';
+import { missingProtections } from './protections.js';
 import { defaultDatabasePath } from './paths.js';
 import * as R from './register.js';
 import { saveWork } from './save-work.js';
@@ -33,12 +36,14 @@ import type {
   ExportDocument,
   FieldDifference,
   Id,
+  ImportAdmission,
   ImportSummary,
   LaserInstallation,
   LaserInstallationDraft,
   OpenOptions,
   Person,
   PersonDraft,
+  PersonKey,
   RecordStore,
   Revision,
   RevisionSummary,
@@ -49,6 +54,7 @@ import type {
   Site,
   SiteDraft,
   StoreInfo,
+  TrustListInfo,
   VerifyReport,
   WorkSave,
   WorkSaved,
@@ -110,6 +116,7 @@ class SqliteRecordStore implements RecordStore {
   getAssessment(id: Id): Assessment { return A.getAssessment(this.ctx, id); }
   listAssessments(roomId: Id): AssessmentSummary[] { return A.listAssessments(this.ctx, roomId); }
   listDueForReview(date: CalendarDate): AssessmentSummary[] { return A.listDueForReview(this.ctx, date); }
+  listAllAssessments(): AssessmentSummary[] { return A.listAllAssessments(this.ctx); }
   saveAssessment(id: Id, content: AssessmentContent, expected?: SaveBase): Assessment {
     return A.saveAssessment(this.ctx, id, content, expected);
   }
@@ -123,10 +130,18 @@ class SqliteRecordStore implements RecordStore {
   signAssessment(id: Id, signOff: SignOff): Assessment { return A.signAssessment(this.ctx, id, signOff); }
   verify(assessmentId: Id, revisionId?: Id): VerifyReport { return A.verifyAssessment(this.ctx, assessmentId, revisionId); }
 
+  listPersonKeys(): PersonKey[] { return K.listPersonKeys(this.ctx); }
+  createPersonKey(args: Parameters<RecordStore['createPersonKey']>[0]): PersonKey { return K.createPersonalKey(this.ctx, args); }
+  changeKeyPassphrase(args: Parameters<RecordStore['changeKeyPassphrase']>[0]): PersonKey { return K.changePassphrase(this.ctx, args); }
+  retirePersonKey(args: Parameters<RecordStore['retirePersonKey']>[0]): PersonKey { return K.retireKey(this.ctx, args); }
+  endorseKey(args: Parameters<RecordStore['endorseKey']>[0]): PersonKey | null { return K.endorseKey(this.ctx, args); }
+  trustList(): TrustListInfo { return K.trustListInfo(this.ctx); }
+
   exportSite(siteId: Id): ExportDocument { return X.exportSite(this.ctx, siteId); }
   exportRoom(roomId: Id): ExportDocument { return X.exportRoom(this.ctx, roomId); }
   exportAssessment(assessmentId: Id): ExportDocument { return X.exportAssessment(this.ctx, assessmentId); }
-  importDocument(doc: unknown): ImportSummary { return X.importDocument(this.ctx, doc); }
+  importDocument(doc: unknown, admit?: ImportAdmission): ImportSummary { return X.importDocument(this.ctx, doc, admit); }
+  untrustedKeysIn(doc: unknown): ImportSummary['untrustedKeys'] { return X.untrustedKeysOf(this.ctx, doc); }
   importLaserCsv(roomId: Id, csvText: string, existing?: CsvExistingChoice): CsvImportReport {
     return importLaserCsv(this.ctx, roomId, csvText, existing);
   }
@@ -149,7 +164,7 @@ export interface InternalOpenOptions extends OpenOptions {
 
 /**
  * Open (creating on first start) the record store. Default location: the platform user-data
- * folder (paths.ts); the signing key pair lives beside the database unless `keyDir` is given.
+ * folder (paths.ts); the trust list and signing log live beside the database unless `keyDir` is given.
  */
 export function openRecordStore(options: InternalOpenOptions = {}): RecordStore {
   const path = resolve(options.path ?? defaultDatabasePath());
@@ -171,6 +186,19 @@ export function openRecordStore(options: InternalOpenOptions = {}): RecordStore 
   }
   const calculatedWith = options.calculatedWith ?? CALCULATED_WITH;
   const ctx = makeContext(opened.db, keyDir, options.evaluate ?? evaluateRoom, calculatedWith, options.now);
-  const info: StoreInfo = { path, keyDir, schemaVersion: opened.schemaVersion, migrationBackups: opened.migrationBackups, calculatedWith };
+  const warnings: string[] = [];
+  try {
+    const missing = missingProtections(opened.db);
+    if (missing.length) {
+      warnings.push(`The database's protections against changing signed records were removed (${missing.join(', ')}): it was changed with another tool. Run verify on every assessment.`);
+    }
+    if (!readonly) warnings.push(...adoptInstallationKey(ctx));
+    warnings.push(...K.trustListInfo(ctx).problems);
+  } catch (e) {
+    opened.db.close();
+    releaseLock();
+    throw e;
+  }
+  const info: StoreInfo = { path, keyDir, schemaVersion: opened.schemaVersion, migrationBackups: opened.migrationBackups, calculatedWith, warnings };
   return new SqliteRecordStore(ctx, info, options.nativeBinding, releaseLock);
 }

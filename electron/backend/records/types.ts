@@ -18,12 +18,14 @@ import type {
   EyewearDraft,
   FieldDifference,
   Id,
+  ImportAdmission,
   ImportIssue,
   ImportSummary,
   LaserInstallation,
   LaserInstallationDraft,
   Person,
   PersonDraft,
+  PersonKey,
   Revision,
   RevisionSummary,
   Room,
@@ -32,6 +34,7 @@ import type {
   SignOff,
   Site,
   SiteDraft,
+  TrustListInfo,
   VerifyReport,
   WorkSave,
   WorkSaved,
@@ -60,6 +63,8 @@ export interface StoreInfo {
   /** Backup copies written before migrations during this open. */
   readonly migrationBackups: readonly string[];
   readonly calculatedWith: string;
+  /** Found at open: missing protections (triggers), signatures from before personal keys that did not re-check. */
+  readonly warnings: readonly string[];
 }
 
 export interface RecordStore {
@@ -109,6 +114,8 @@ export interface RecordStore {
   listAssessments(roomId: Id): AssessmentSummary[];
   /** Assessments whose current revision is due for review on or before `date`. */
   listDueForReview(date: CalendarDate): AssessmentSummary[];
+  /** Every assessment in the database, oldest first (whole-database verification). */
+  listAllAssessments(): AssessmentSummary[];
   /**
    * Save content: into the open draft, or — when the newest revision is signed — into a new draft
    * revision based on it (the signed one stays unchanged). Results are recomputed.
@@ -130,12 +137,24 @@ export interface RecordStore {
   /** Check the newest signed revision (or `revisionId`). */
   verify(assessmentId: Id, revisionId?: Id): VerifyReport;
 
+  // personal keys and the trust list (outside the database)
+  listPersonKeys(): PersonKey[];
+  /** First key of the installation becomes the trust anchor; later keys need an endorser's passphrase. */
+  createPersonKey(args: { personId: Id; passphrase: string; passphraseAgain: string; endorserPersonId?: Id; endorserPassphrase?: string }): PersonKey;
+  changeKeyPassphrase(args: { personId: Id; passphrase: string; newPassphrase: string; newPassphraseAgain: string }): PersonKey;
+  retirePersonKey(args: { personId: Id; reason: string }): PersonKey;
+  /** Admit a key (a person's, or an exporting site's) on the endorsement of a trusted signer. */
+  endorseKey(args: { keyId: string; endorserPersonId: Id; endorserPassphrase: string }): PersonKey | null;
+  trustList(): TrustListInfo;
+
   // exchange
   exportSite(siteId: Id): ExportDocument;
   exportRoom(roomId: Id): ExportDocument;
   exportAssessment(assessmentId: Id): ExportDocument;
   /** Validate and import a document (parsed object or JSON text): all or nothing. */
-  importDocument(doc: unknown): ImportSummary;
+  importDocument(doc: unknown, admit?: ImportAdmission): ImportSummary;
+  /** Signing keys of a document that this installation does not trust (fingerprint and claimed signer). */
+  untrustedKeysIn(doc: unknown): ImportSummary['untrustedKeys'];
   /** CSV laser inventory for one room (columns in README); nothing imported if any row is bad. */
   importLaserCsv(roomId: Id, csvText: string, existing?: CsvExistingChoice): CsvImportReport;
 

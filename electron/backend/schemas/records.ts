@@ -201,12 +201,12 @@ export const AssessmentContentSchema = z.strictObject({
 
 // ---------------------------------------------------------------- sign-off, revisions
 
+// Name, role and signing time are deliberately absent: the signer is the owner of the key that the
+// passphrase opens, and the time is the back end's clock. A client sending them is refused (strict).
 export const SignOffSchema = z.strictObject({
-  personId: IdSchema.optional(),
-  name: requiredText(),
-  role: requiredText(),
+  personId: IdSchema,
+  passphrase: z.string().min(1, 'must not be empty').max(1000, 'must be at most 1000 characters'),
   statement: requiredText(5000),
-  signedAt: TimestampSchema.optional(),
 });
 
 const hex64 = z.string().regex(/^[0-9a-f]{64}$/, 'must be 64 lower-case hex digits (SHA-256)');
@@ -222,6 +222,10 @@ export const SignatureSchema = z.strictObject({
   signature: z.string().regex(/^[A-Za-z0-9+/]{86}==$/, 'must be a base64 Ed25519 signature (64 bytes)'),
   keyId: hex64,
   publicKey: z.string().regex(/^-----BEGIN PUBLIC KEY-----\n[A-Za-z0-9+/=\n]+-----END PUBLIC KEY-----\n?$/, 'must be a PEM public key'),
+  statementVersion: z.literal(2).optional(),
+  previousLink: hex64.nullable().optional(),
+  trustAnchor: hex64.optional(),
+  keyTrusted: z.boolean().optional(),
 });
 
 export const RevisionStatusSchema = z.enum(['draft', 'signed', 'superseded']);

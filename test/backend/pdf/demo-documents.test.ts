@@ -11,6 +11,7 @@
  * published sources). The rounding rules checked are the project's conservative policy (SAFETY.md:
  * limits down, distances and optical densities up, 3 significant figures; OD to 0.1).
  */
+import { PASSPHRASE } from '../records/helpers.js';
 import { mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
@@ -74,6 +75,8 @@ beforeAll(async () => {
   const site = store.seedDemo();
   const officer = store.listPeople().find((p) => p.role === 'Laser safety officer');
   if (!officer) throw new Error('demo officer missing');
+  // The temporary installation's first key (its trust anchor) for the invented demo officer.
+  store.createPersonKey({ personId: officer.id, passphrase: PASSPHRASE, passphraseAgain: PASSPHRASE });
   const rooms = store.listRooms(site.id);
   const a007 = rooms.find((r) => r.code === 'A0.07');
   const draftId = a007 ? store.listAssessments(a007.id)[0]?.id : undefined;
@@ -81,7 +84,7 @@ beforeAll(async () => {
   draft = await render(draftId); // seeded as a draft
   for (const room of rooms) {
     for (const a of store.listAssessments(room.id)) {
-      if (a.status === 'draft') store.signAssessment(a.id, { personId: officer.id, name: officer.name, role: officer.role, statement: 'Approved (test of printed output).' });
+      if (a.status === 'draft') store.signAssessment(a.id, { personId: officer.id, passphrase: PASSPHRASE, statement: 'Approved (test of printed output).' });
       signed.set(room.code, await render(a.id));
     }
   }
@@ -117,7 +120,12 @@ describe('required fields (issue: Printed output; domain reference 5.1 and 6.2)'
     const sig = d.signature;
     if (!sig) throw new Error('expected signed');
     const first = [r.text.report[0] ?? ''];
-    for (const field of [d.site.name, d.room.code, d.room.name, d.room.responsiblePerson, d.officer.name, `Signed, revision ${d.assessment.revisionNo}`, sig.signedAt.slice(0, 10), d.content.reviewBy ?? 'not set']) {
+    // The demo seeds B2.14 signed with a throwaway key on no trust list: paper must call it unverified.
+    // The others were signed here with the officer's key, the temporary installation's trust anchor.
+    const status = sig.keyTrusted ? `Signed, revision ${d.assessment.revisionNo}` : `UNVERIFIED SIGNATURE, revision ${d.assessment.revisionNo}`;
+    expect(sig.keyTrusted).toBe(code !== 'B2.14');
+    expect(has(r.text.report, `trust anchor ${sig.trustAnchor ?? '?'}`), 'trust anchor in the footer').toBe(true);
+    for (const field of [d.site.name, d.room.code, d.room.name, d.room.responsiblePerson, d.officer.name, status, ...(sig.keyTrusted ? [sig.signedAt.slice(0, 10)] : []), d.content.reviewBy ?? 'not set']) {
       expect(has(first, field), `page 1 lacks '${field}'`).toBe(true);
     }
     for (const heading of ['Summary per beam', 'Inputs and assumptions', 'Plots', 'Controls chosen', 'Protective eyewear', 'Coverage matrix', 'Non-beam hazards', 'Sign-off', 'Appendix — derivations']) {
@@ -314,7 +322,7 @@ describe('a superseded revision says so on every page', () => {
     if (!officer) throw new Error('demo officer missing');
     const current = store.getAssessment(id).current;
     store.saveAssessment(id, { ...current.content, notes: `${current.content.notes} Reviewed again.` });
-    store.signAssessment(id, { personId: officer.id, name: officer.name, role: officer.role, statement: 'Approved again (test).' });
+    store.signAssessment(id, { personId: officer.id, passphrase: PASSPHRASE, statement: 'Approved again (test).' });
     const first = store.listRevisions(id).find((v) => v.revisionNo === 1);
     if (!first) throw new Error('revision 1 missing');
     const doc = documentInputFromAssessment(store, id, { revisionId: first.id });

@@ -13,6 +13,7 @@ import { documentTable } from '../../../electron/api/handlers/documents.js';
 import type { ApiContext } from '../../../electron/api/context.js';
 import { openRecordStore, type RecordStore } from '../../../electron/backend/records/index.js';
 import { pageTexts } from './pdf-tools.js';
+import { makeSigner } from '../records/helpers.js';
 
 let dir = '';
 let store: RecordStore;
@@ -43,9 +44,9 @@ describe('a signed revision reprints exactly as signed after a new draft exists'
     const room = store.listRooms(site.id).find((r) => r.code === 'C1.03');
     const id = room ? store.listAssessments(room.id)[0]?.id : undefined;
     if (!id) throw new Error('demo assessment C1.03 missing');
-    const officer = store.listPeople().find((p) => p.role === 'Laser safety officer');
-    if (!officer) throw new Error('demo officer missing');
-    if (store.getAssessment(id).current.status === 'draft') store.signAssessment(id, { personId: officer.id, name: officer.name, role: officer.role, statement: 'Approved (reprint test).' });
+    // The signer holds their own key (personal keys, sealed with their passphrase).
+    const signer = makeSigner(store, 'Dr. Reprint Tester');
+    if (store.getAssessment(id).current.status === 'draft') store.signAssessment(id, signer.signOff('Approved (reprint test).'));
     const signed = store.getAssessment(id).current;
     expect(signed.status).toBe('signed');
     const fingerprint = signed.signature?.fingerprint ?? '';

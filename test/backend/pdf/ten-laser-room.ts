@@ -48,6 +48,8 @@ export function benchDocument(input: RoomInput): DocumentInput {
       statement: 'Benchmark statement.',
       fingerprint: '0f'.repeat(32),
       keyId: 'a1'.repeat(32),
+      keyTrusted: true,
+      trustAnchor: 'a1a1 a1a1 a1a1 a1a1 a1a1',
     },
   };
 }

@@ -8,7 +8,7 @@ import { existsSync, mkdirSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { openRecordStore, restoreBackup, type RecordStore } from '../../../electron/backend/records/index.js';
-import { openTemp, registerRoom, STATEMENT, tempDir } from './helpers.js';
+import { makeSigner, openTemp, registerRoom, tempDir } from './helpers.js';
 
 let t: ReturnType<typeof tempDir>;
 let store: RecordStore;
@@ -25,7 +25,7 @@ describe('backup and restore', () => {
   it('backs up while open, restores over later changes, and the signed record still verifies', async () => {
     const { room } = registerRoom(store);
     const a = store.createAssessment({ roomId: room.id, content: store.newAssessmentContent(room.id) });
-    store.signAssessment(a.id, { name: 'Dr. Imre Calloway-Senn', role: 'Laser safety officer', statement: STATEMENT });
+    store.signAssessment(a.id, makeSigner(store).signOff());
     const backupPath = join(t.dir, 'backups', 'records-backup.sqlite');
     mkdirSync(join(t.dir, 'backups'));
     await store.backup(backupPath);

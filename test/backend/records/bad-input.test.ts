@@ -8,7 +8,7 @@
 import { join } from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { RecordError, type ExportDocument, type RecordStore } from '../../../electron/backend/records/index.js';
-import { openTemp, registerRoom, snapshot, STATEMENT, tempDir } from './helpers.js';
+import { makeSigner, openTemp, registerRoom, snapshot, tempDir } from './helpers.js';
 
 let t: ReturnType<typeof tempDir>;
 let source: RecordStore;
@@ -25,7 +25,7 @@ beforeAll(() => {
     roomId: room.id,
     content: { ...c, controls: [{ category: 'engineering', measure: 'Fibre connector shutters', decision: 'accepted', implementation: 'in-place' }] },
   });
-  source.signAssessment(a.id, { name: 'Dr. Imre Calloway-Senn', role: 'Laser safety officer', statement: STATEMENT });
+  source.signAssessment(a.id, makeSigner(source).signOff());
   doc = source.exportSite(site.id);
   // The target already holds other records, which must survive every failed import untouched.
   targetPath = join(t.dir, 'target.sqlite');
@@ -147,7 +147,8 @@ describe('store methods validate their arguments', () => {
   it('empty sign-off fields', () => {
     const { room } = registerRoom(target, 'A0.07');
     const a = target.createAssessment({ roomId: room.id, content: target.newAssessmentContent(room.id) });
-    expect(() => target.signAssessment(a.id, { name: ' ', role: 'LSO', statement: 'ok' })).toThrow(/Sign-off is not valid: Name: must not be empty/);
+    const signer = makeSigner(target, 'A. Officer');
+    expect(() => target.signAssessment(a.id, { ...signer.signOff(), statement: ' ' })).toThrow(/Sign-off is not valid: [Ss]tatement: must not be empty/);
   });
 });
 
@@ -159,12 +160,13 @@ describe('import conflicts', () => {
     try {
       const { site, room } = registerRoom(a, 'A0.07');
       const made = a.createAssessment({ roomId: room.id, content: a.newAssessmentContent(room.id) });
-      a.signAssessment(made.id, { name: 'A. Officer', role: 'LSO', statement: STATEMENT });
+      const officer = makeSigner(a, 'A. Officer');
+      a.signAssessment(made.id, officer.signOff());
       b.importDocument(a.exportSite(site.id));
       // Both sides start revision 2 of the same assessment on their own.
       a.saveAssessment(made.id, { ...a.getAssessment(made.id).current.content, notes: 'revised in A' });
       b.saveAssessment(made.id, { ...b.getAssessment(made.id).current.content, notes: 'revised in B' });
-      a.signAssessment(made.id, { name: 'A. Officer', role: 'LSO', statement: STATEMENT });
+      a.signAssessment(made.id, officer.signOff());
       const summary = b.importDocument(a.exportAssessment(made.id));
       expect(b.getAssessment(made.id).current).toMatchObject({ revisionNo: 2, status: 'signed' });
       expect(summary.keptDrafts).toHaveLength(1);

@@ -8,7 +8,7 @@
 import { join } from 'node:path';
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { RecordError, type Assessment, type RecordStore, type WorkSaved } from '../../../electron/backend/records/index.js';
-import { openTemp, registerRoom, snapshot, STATEMENT, tempDir } from './helpers.js';
+import { makeSigner, openTemp, registerRoom, snapshot, STATEMENT, tempDir } from './helpers.js';
 import { startTestHost } from './http-host.js';
 
 let t: ReturnType<typeof tempDir>;
@@ -42,7 +42,7 @@ const base = (x: Assessment) => ({ revisionId: x.current.id, version: x.version 
 describe('a stale save is refused and nothing is overwritten (two stores on one file)', () => {
   it.each([
     ['the other officer saved the draft', (s: RecordStore, id: string) => void s.saveAssessment(id, { ...s.getAssessment(id).current.content, notes: 'saved by A' }, base(s.getAssessment(id)))],
-    ['the other officer signed the draft', (s: RecordStore, id: string) => void s.signAssessment(id, { name: 'Dr. Imre Calloway-Senn', role: 'LSO', statement: STATEMENT })],
+    ['the other officer signed the draft', (s: RecordStore, id: string) => void s.signAssessment(id, makeSigner(s).signOff(STATEMENT))],
   ])('%s', (_case, otherChange) => {
     const { room } = registerRoom(a);
     const made = a.createAssessment({ roomId: room.id, content: a.newAssessmentContent(room.id) });

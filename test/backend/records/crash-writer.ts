@@ -24,6 +24,13 @@ if (!room) {
   for (const laser of r.input.lasers) store.createInstallation({ roomId: room.id, laser });
 }
 const base = store.newAssessmentContent(room.id);
+const passphrase = 'crash test passphrase';
+let officer = store.listPeople().find((p) => p.name === 'Crash Test Officer');
+if (!officer) {
+  officer = store.createPerson({ name: 'Crash Test Officer', role: 'LSO' });
+  store.createPersonKey({ personId: officer.id, passphrase, passphraseAgain: passphrase });
+}
+const officerId = officer.id;
 const say = (line: string) => process.stdout.write(`${line}\n`);
 say(`ready ${join(dbPath)}`);
 
@@ -36,7 +43,7 @@ for (;;) {
     const saved = store.saveAssessment(a.id, { ...cur.content, notes: `n${++counter}` });
     say(`committed ${a.id} ${saved.current.revisionNo} ${saved.current.status} ${counter}`);
     if (i % 3 === 2) {
-      const s = store.signAssessment(a.id, { name: 'Crash Test Officer', role: 'LSO', statement: 'Signed in a loop.' });
+      const s = store.signAssessment(a.id, { personId: officerId, passphrase, statement: 'Signed in a loop.' });
       say(`committed ${a.id} ${s.current.revisionNo} ${s.current.status} ${counter}`);
     }
   }

@@ -18,8 +18,9 @@ export function tempDir(prefix = 'bw-records-'): { dir: string; cleanup: () => v
   return { dir, cleanup: () => rmSync(dir, { recursive: true, force: true }) };
 }
 
+/** A database in `dir`; each database name is its own installation (own trust list and signing log). */
 export function openTemp(dir: string, name = 'records.sqlite'): RecordStore {
-  return openRecordStore({ path: join(dir, name), keyDir: join(dir, 'keys') });
+  return openRecordStore({ path: join(dir, name), keyDir: join(dir, name === 'records.sqlite' ? 'keys' : `keys-${name}`) });
 }
 
 /** Demo room by code (invented), e.g. A0.07 telecom bench: two lasers, fast to evaluate. */
@@ -58,3 +59,29 @@ export function snapshot(path: string): string {
 }
 
 export const STATEMENT = 'I have evaluated the laser hazards of this area with the inputs and assumptions recorded here and approve the controls listed.';
+
+/** A test passphrase (invented); real keys, sealed with scrypt + AES-256-GCM like the officer's. */
+export const PASSPHRASE = 'correct horse battery staple';
+
+/**
+ * A person with their own signing key in `store`. The first key of an installation becomes its
+ * trust anchor; later ones are endorsed by `endorser` (a signer made before).
+ */
+const firstSigner = new WeakMap<RecordStore, { person: { id: string }; passphrase: string }>();
+export function makeSigner(
+  store: RecordStore,
+  name = 'Dr. Imre Calloway-Senn',
+  endorserGiven?: { person: { id: string }; passphrase: string },
+  passphrase = PASSPHRASE,
+) {
+  const endorser = endorserGiven ?? firstSigner.get(store);
+  const person = store.createPerson({ name, role: 'Laser safety officer' });
+  const key = store.createPersonKey({
+    personId: person.id,
+    passphrase,
+    passphraseAgain: passphrase,
+    ...(endorser ? { endorserPersonId: endorser.person.id, endorserPassphrase: endorser.passphrase } : {}),
+  });
+  if (!firstSigner.has(store)) firstSigner.set(store, { person, passphrase });
+  return { person, key, passphrase, signOff: (statement = STATEMENT) => ({ personId: person.id, passphrase, statement }) };
+}

@@ -12,11 +12,12 @@ import type { Assessment, RecordStore } from '../../../electron/backend/records/
 import { openRecordStore } from '../../../electron/backend/records/store.js';
 import { evaluateRoom } from '../../../core/index.js';
 import type { RoomResult } from '../../../core/model/results.js';
-import { openTemp, registerRoom, snapshot, STATEMENT, tempDir } from './helpers.js';
+import { makeSigner, openTemp, registerRoom, snapshot, tempDir } from './helpers.js';
 
 let t: ReturnType<typeof tempDir>;
 let store: RecordStore;
 let signed: Assessment;
+let signer: ReturnType<typeof makeSigner>;
 let dbPath: string;
 
 beforeAll(() => {
@@ -25,7 +26,8 @@ beforeAll(() => {
   dbPath = join(t.dir, 'records.sqlite');
   const { room } = registerRoom(store);
   const a = store.createAssessment({ roomId: room.id, content: store.newAssessmentContent(room.id) });
-  signed = store.signAssessment(a.id, { name: 'Dr. Imre Calloway-Senn', role: 'Laser safety officer', statement: STATEMENT });
+  signer = makeSigner(store);
+  signed = store.signAssessment(a.id, signer.signOff());
 });
 afterAll(() => {
   store.close();
@@ -78,7 +80,7 @@ describe('the database refuses changes to signed content (raw SQL, triggers of m
   });
 
   it('the store itself answers an attempt with a clear error', () => {
-    expect(() => store.signAssessment(signed.id, { name: 'x', role: 'y', statement: 'z' })).toThrow(/already signed/);
+    expect(() => store.signAssessment(signed.id, signer.signOff('z'))).toThrow(/already signed/);
   });
 });
 

@@ -61,9 +61,13 @@ describe('migrating the version-1 fixture', () => {
       );
       expect(list.find((a) => a.id === SIGNED)?.title).toMatch(/^Laser hazard evaluation, room A0.07/);
 
-      // The signed record made by the version-1 build still verifies (fingerprint and signature).
+      // The signed record made by the version-1 build keeps its fingerprint and signature, but the
+      // installation key file that made it was not kept with this fixture: nothing outside the
+      // database vouches for the key, so it is reported as not trusted (never "known" from the database alone).
       const report = store.verify(SIGNED);
-      expect(report).toMatchObject({ signed: true, fingerprintMatches: true, signatureValid: true, keyKnown: true });
+      expect(report).toMatchObject({ ok: false, signed: true, fingerprintMatches: true, signatureValid: true, keyTrusted: false, chainIntact: true });
+      expect(store.info.warnings.join(' ')).toMatch(/1 signature\(s\) were made before personal keys with the installation key, but its key file \(beamwarden-signing-key.pem\) is not in/);
+      expect(store.getAssessment(SIGNED).current.signature?.keyTrusted).toBe(false);
 
       // And it can be revised as usual; the new audit log records it.
       const a = store.getAssessment(SIGNED);
@@ -76,6 +80,7 @@ describe('migrating the version-1 fixture', () => {
     expect(raw.prepare('SELECT version, name FROM schema_migrations ORDER BY version').all()).toEqual([
       { version: 1, name: 'initial' },
       { version: 2, name: 'list_columns_and_audit_log' },
+      { version: 3, name: 'personal_keys_and_chain' },
       { version: 4, name: 'revision_version' },
     ]);
     expect(raw.prepare("SELECT action FROM audit_event WHERE action = 'revised'").all()).toHaveLength(1);

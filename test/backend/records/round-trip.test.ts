@@ -4,11 +4,11 @@
  * Sign-off model: SHA-256 (FIPS 180-4) fingerprint of the canonical serialisation, Ed25519
  * (RFC 8032) signature; record contents per the domain reference section 6.2 (common practice).
  */
-import { existsSync, statSync } from 'node:fs';
+import { existsSync } from 'node:fs';
 import { join } from 'node:path';
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import type { RecordStore } from '../../../electron/backend/records/index.js';
-import { openTemp, registerRoom, STATEMENT, tempDir } from './helpers.js';
+import { makeSigner, openTemp, PASSPHRASE, registerRoom, tempDir } from './helpers.js';
 
 let t: ReturnType<typeof tempDir>;
 let store: RecordStore;
@@ -24,7 +24,8 @@ afterEach(() => {
 describe('record round trip', () => {
   it('register, assess, revise, sign, verify, export, import elsewhere, verify again', () => {
     const { site, room } = registerRoom(store, 'A0.07');
-    const officer = store.createPerson({ name: 'Dr. Imre Calloway-Senn', role: 'Laser safety officer' });
+    const signer = makeSigner(store);
+    const officer = signer.person;
 
     // Assessment with the register snapshot; results come from the core.
     const content = store.newAssessmentContent(room.id);
@@ -40,11 +41,13 @@ describe('record round trip', () => {
     expect(draftReport).toMatchObject({ ok: false, signed: false, resultsMatchCore: true });
 
     // Sign revision 1.
-    const signed1 = store.signAssessment(a.id, { personId: officer.id, name: officer.name, role: officer.role, statement: STATEMENT });
+    const signed1 = store.signAssessment(a.id, signer.signOff());
     expect(signed1.current.status).toBe('signed');
     expect(signed1.current.signature?.fingerprint).toMatch(/^[0-9a-f]{64}$/);
-    expect(existsSync(join(t.dir, 'keys', 'beamwarden-signing-key.pem'))).toBe(true);
-    if (process.platform !== 'win32') expect(statSync(join(t.dir, 'keys', 'beamwarden-signing-key.pem')).mode & 0o777).toBe(0o600);
+    expect(signed1.current.signature).toMatchObject({ personId: officer.id, name: officer.name, keyId: signer.key.keyId, keyTrusted: true });
+    // The trust list lives beside the database, outside it; no installation key file any more.
+    expect(existsSync(join(t.dir, 'keys', 'beamwarden-trust-list.json'))).toBe(true);
+    expect(existsSync(join(t.dir, 'keys', 'beamwarden-signing-key.pem'))).toBe(false);
 
     // Editing a signed assessment makes revision 2 as a draft; revision 1 stays signed.
     const edited = {
@@ -75,10 +78,10 @@ describe('record round trip', () => {
     expect(diff).toHaveLength(3);
 
     // Sign revision 2: revision 1 becomes superseded; both still verify.
-    store.signAssessment(a.id, { personId: officer.id, name: officer.name, role: officer.role, statement: STATEMENT });
+    store.signAssessment(a.id, signer.signOff());
     expect(store.listRevisions(a.id).map((r) => r.status)).toEqual(['superseded', 'signed']);
     const report = store.verify(a.id);
-    expect(report).toMatchObject({ ok: true, revisionNo: 2, fingerprintMatches: true, signatureValid: true, keyKnown: true, resultsMatchCore: true });
+    expect(report).toMatchObject({ ok: true, revisionNo: 2, fingerprintMatches: true, signatureValid: true, keyTrusted: true, chainIntact: true, resultsMatchCore: true });
     expect(report.differences).toEqual([]);
     expect(store.verify(a.id, signed1.current.id)).toMatchObject({ ok: true, status: 'superseded' });
 
@@ -87,10 +90,19 @@ describe('record round trip', () => {
     expect(doc).toMatchObject({ format: 'beamwarden-export', version: 1, scope: { kind: 'site', id: site.id } });
     const other = openTemp(t.dir, 'other.sqlite');
     try {
+      // Another installation does not trust this one's key: imported, but shown as unverified.
       const summary = other.importDocument(JSON.stringify(doc));
-      expect(summary).toMatchObject({ sites: 1, rooms: 1, installations: 2, eyewear: 5, people: 1, assessments: 1, revisions: 2, unchanged: 0 });
+      expect(summary).toMatchObject({ sites: 1, rooms: 1, installations: 2, eyewear: 5, people: 1, assessments: 1, revisions: 2, unchanged: 0, unverified: 2 });
+      expect(summary.untrustedKeys).toEqual([{ keyId: signer.key.keyId, fingerprint: signer.key.fingerprint, claimedSigner: officer.name }]);
+      expect(other.getAssessment(a.id).current.signature?.keyTrusted).toBe(false);
+      expect(other.verify(a.id)).toMatchObject({ ok: false, fingerprintMatches: true, signatureValid: true, keyTrusted: false, resultsMatchCore: true });
+      // Its officer admits the exporting key explicitly, with their own passphrase, after seeing the fingerprint.
+      const there = makeSigner(other, 'Ona Brightwater');
+      expect(other.untrustedKeysIn(doc).map((k) => k.fingerprint)).toEqual([signer.key.fingerprint]);
+      other.importDocument(doc, { keyIds: [signer.key.keyId], endorserPersonId: there.person.id, endorserPassphrase: PASSPHRASE });
       const again = other.verify(a.id);
-      expect(again).toMatchObject({ ok: true, fingerprintMatches: true, signatureValid: true, resultsMatchCore: true });
+      expect(again).toMatchObject({ ok: true, fingerprintMatches: true, signatureValid: true, keyTrusted: true, resultsMatchCore: true });
+      expect(again.trustChain.join(' ')).toMatch(/endorsed by key .* of Ona Brightwater/);
       expect(other.verify(a.id, signed1.current.id).ok).toBe(true);
       // The imported record is the same record.
       // (The save counter is this database's own concurrency token, not part of the record.)
@@ -109,7 +121,7 @@ describe('record round trip', () => {
   it('a draft can be discarded; a signed revision cannot', () => {
     const { room } = registerRoom(store);
     const a = store.createAssessment({ roomId: room.id, content: store.newAssessmentContent(room.id) });
-    store.signAssessment(a.id, { name: 'A. Officer', role: 'LSO', statement: STATEMENT });
+    store.signAssessment(a.id, makeSigner(store, 'A. Officer').signOff());
     expect(() => store.discardDraft(a.id)).toThrow(/no open draft/);
     store.saveAssessment(a.id, { ...store.getAssessment(a.id).current.content, notes: 'x' });
     store.discardDraft(a.id);

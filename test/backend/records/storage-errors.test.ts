@@ -14,7 +14,7 @@ import { existsSync, mkdirSync, readdirSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { openRecordStore, RecordError, type RecordStore } from '../../../electron/backend/records/index.js';
-import { registerRoom, STATEMENT, tempDir } from './helpers.js';
+import { registerRoom, tempDir } from './helpers.js';
 import { startTestHost } from './http-host.js';
 
 function can(cmd: string, args: string[]): boolean {
@@ -168,18 +168,18 @@ describe('at the failing action', () => {
     }
   });
 
-  it.skipIf(!CAN_MOUNT)('a full disk while the signing key is made: plain message and no stray temporary key file', () => {
+  it.skipIf(!CAN_MOUNT)('a full disk while the signing key is made: plain message, no stray temporary file, no key half made', () => {
     const keys = smallDisk('keys', '64k');
     const s = open(join(t.dir, 'records.sqlite'), keys);
     try {
-      const { room } = registerRoom(s);
-      const a = s.createAssessment({ roomId: room.id, content: s.newAssessmentContent(room.id) });
+      const person = s.createPerson({ name: 'Dr. Imre Calloway-Senn', role: 'LSO' });
       fill(keys);
-      const err = errorOf(() => s.signAssessment(a.id, { name: 'Dr. Imre Calloway-Senn', role: 'LSO', statement: STATEMENT }));
+      const pass = 'a passphrase for the test';
+      const err = errorOf(() => s.createPersonKey({ personId: person.id, passphrase: pass, passphraseAgain: pass }));
       expect(err.code).toBe('storage');
-      expect(err.message).toMatch(/is full: Creating the signing key could not be saved/);
+      expect(err.message).toMatch(/is full: The trust list could not be saved/);
       expect(readdirSync(keys).filter((f) => f.endsWith('.tmp'))).toEqual([]);
-      expect(s.getAssessment(a.id).current.status).toBe('draft');
+      expect(s.listPersonKeys()).toEqual([]);
     } finally {
       s.close();
     }

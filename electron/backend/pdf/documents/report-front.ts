@@ -21,6 +21,9 @@ export function statusText(doc: DocumentInput): Content {
     return { text: `${DRAFT_HEADER} (revision ${doc.assessment.revisionNo})`, bold: true, color: COLOR.draft };
   }
   const superseded = doc.assessment.status === 'superseded' ? ' — SUPERSEDED by a later revision' : '';
+  if (!doc.signature.keyTrusted) {
+    return { text: `UNVERIFIED SIGNATURE, revision ${doc.assessment.revisionNo}, in the name of ${doc.signature.name}: the key is not on this installation's trust list${superseded}`, bold: true, color: COLOR.bad };
+  }
   return {
     text: `Signed, revision ${doc.assessment.revisionNo}, on ${fmt.calendarDate(doc.signature.signedAt)} by ${doc.signature.name}${superseded}`,
     bold: true,

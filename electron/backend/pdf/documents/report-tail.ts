@@ -128,7 +128,17 @@ export function signOffSection(doc: DocumentInput): Content[] {
           ['Review by', { text: fmt.calendarDate(doc.content.reviewBy), bold: true }],
           ['Record fingerprint', { text: fmt.shortFingerprint(s.fingerprint), bold: true, fontSize: 12 }],
           ['Full fingerprint (SHA-256)', { text: s.fingerprint, fontSize: 7.5 }],
-          ['Signing key', { text: fmt.shortFingerprint(s.keyId), fontSize: 8.5 }],
+          ['Signing key', { text: (s.keyId.slice(0, 20).match(/.{4}/g) ?? []).join(' '), fontSize: 8.5 }],
+          [
+            'Trust anchor',
+            {
+              text: `${s.trustAnchor ?? 'none'} — the installation's trust list fingerprint; compare it with the one written down when the first signing key was made.`,
+              fontSize: 8.5,
+            },
+          ],
+          ...(s.keyTrusted
+            ? []
+            : ([['Status', { text: "UNVERIFIED SIGNATURE: the signing key is not on this installation's trust list. Do not rely on this as a signed assessment.", bold: true, color: COLOR.draft }]] as const)),
         ]),
         {
           margin: [0, 8, 0, 0],

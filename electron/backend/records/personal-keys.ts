@@ -1,0 +1,373 @@
+/**
+ * Personal signing keys: each signer holds an Ed25519 key pair whose private key is sealed with the
+ * signer's passphrase (key-encryption.ts). Creating a key, changing its passphrase, retiring it,
+ * admitting it to the trust list (endorsement by an already trusted key), and — for every kind of
+ * signed record — `signAsPerson`, which checks the passphrase and trust, takes the time from this
+ * back end's clock and the identity from the key's owner, and signs a canonical payload.
+ */
+import { createPublicKey, generateKeyPairSync, sign, verify, type KeyObject } from 'node:crypto';
+import { z } from 'zod';
+import { canonicalJson } from './canonical.js';
+import { parseOrThrow, translateSqliteError, type StoreContext } from './context.js';
+import { openSealedKey, sealPrivateKey, SealedKeySchema } from './key-encryption.js';
+import { getPerson } from './register.js';
+import { keyIdOf, PRIVATE_KEY_FILE, readInstallationKey } from './signing.js';
+import { rmSync } from 'node:fs';
+import { join } from 'node:path';
+import { INSTALLATION_KEY_HOLDER, makeEndorsedEntry, readTrustList, shortKeyFingerprint, trustOf, writeTrustList, type TrustList } from './trust-list.js';
+import { RecordError, type Id, type Person, type PersonKey, type TrustListInfo } from './types.js';
+
+const passphrase = z
+  .string()
+  .min(10, 'must be at least 10 characters')
+  .max(1000, 'must be at most 1000 characters');
+const IdText = z.string().min(1, 'must not be empty').max(200);
+
+export const CreateKeySchema = z.strictObject({
+  personId: IdText,
+  passphrase,
+  passphraseAgain: z.string(),
+  endorserPersonId: IdText.optional(),
+  endorserPassphrase: z.string().max(1000).optional(),
+});
+export const EndorseKeySchema = z.strictObject({ keyId: z.string().regex(/^[0-9a-f]{64}$/, 'must be a key fingerprint'), endorserPersonId: IdText, endorserPassphrase: z.string().max(1000) });
+export const ChangePassphraseSchema = z.strictObject({ personId: IdText, passphrase: z.string().max(1000), newPassphrase: passphrase, newPassphraseAgain: z.string() });
+export const ImportAdmissionSchema = z.strictObject({
+  keyIds: z.array(z.string().regex(/^[0-9a-f]{64}$/, 'must be a key fingerprint')).max(100),
+  endorserPersonId: IdText,
+  endorserPassphrase: z.string().max(1000),
+});
+export const RetireKeySchema = z.strictObject({ personId: IdText, reason: z.string().trim().min(1, 'must say why the key is retired').max(500) });
+
+interface PersonKeyRow {
+  key_id: string;
+  person_id: string;
+  sealed_private_key: string;
+  created_at: string;
+  retired_at: string | null;
+  retired_reason: string;
+  public_key: string;
+}
+const KEY_SELECT = 'SELECT pk.*, k.public_key FROM person_key pk JOIN signing_key k ON k.key_id = pk.key_id';
+
+function activeKeyRow(ctx: StoreContext, personId: Id): PersonKeyRow | undefined {
+  return ctx.sql(`${KEY_SELECT} WHERE pk.person_id = ? AND pk.retired_at IS NULL`).get(personId) as PersonKeyRow | undefined;
+}
+
+
+export function trustListInfo(ctx: StoreContext): TrustListInfo {
+  const read = readTrustList(ctx.keyDir);
+  const pins = (ctx.sql('SELECT anchor FROM trust_anchor_pin ORDER BY pinned_at').all() as Array<{ anchor: string }>).map((r) => r.anchor);
+  const problems: string[] = [];
+  if (read.problem) problems.push(read.problem);
+  if (read.list === null && !read.problem && pins.length > 0) {
+    problems.push(`The trust list file ${read.path} is missing: no signature can be trusted until it is restored from a backup.`);
+  }
+  if (read.list !== null && pins.length > 0 && !pins.includes(read.list.anchor)) {
+    problems.push(
+      `The trust list beside the database has the anchor ${shortKeyFingerprint(read.list.anchor)}, but this database was set up with ` +
+        `${pins.map(shortKeyFingerprint).join(', ')}: the trust list file was replaced.`,
+    );
+  }
+  return {
+    path: read.path,
+    anchor: read.list?.anchor ?? null,
+    anchorFingerprint: read.list ? shortKeyFingerprint(read.list.anchor) : null,
+    keys: read.list?.entries.length ?? 0,
+    problems,
+  };
+}
+
+export function listPersonKeys(ctx: StoreContext): PersonKey[] {
+  const list = readTrustList(ctx.keyDir).list;
+  const rows = ctx.sql(`${KEY_SELECT} ORDER BY pk.created_at, pk.key_id`).all() as PersonKeyRow[];
+  return rows.map((r) => {
+    const t = trustOf(list, r.key_id);
+    return {
+      keyId: r.key_id,
+      fingerprint: shortKeyFingerprint(r.key_id),
+      personId: r.person_id,
+      createdAt: r.created_at,
+      retiredAt: r.retired_at,
+      retiredReason: r.retired_reason,
+      trusted: t.trusted,
+      isAnchor: list?.anchor === r.key_id,
+      trustChain: t.chain,
+    };
+  });
+}
+
+/** Unlock `personId`'s active key with the passphrase; refuses (and changes nothing) otherwise. */
+export function unlockPersonalKey(ctx: StoreContext, personId: Id, pass: string, opts: { requireTrusted?: boolean } = {}): {
+  person: Person;
+  keyId: string;
+  privateKey: KeyObject;
+  publicKeyPem: string;
+} {
+  const person = getPerson(ctx, personId);
+  const row = activeKeyRow(ctx, personId);
+  if (!row) {
+    const retired = ctx.sql('SELECT 1 FROM person_key WHERE person_id = ?').get(personId) !== undefined;
+    throw new RecordError(
+      'signing-key',
+      retired
+        ? `${person.name}'s signing key is retired; a retired key cannot sign. Create a new key in the register (People).`
+        : `${person.name} has no signing key yet. Create one in the register (People).`,
+    );
+  }
+  const sealed = SealedKeySchema.safeParse(JSON.parse(row.sealed_private_key));
+  if (!sealed.success) throw new RecordError('signing-key', `${person.name}'s sealed signing key is damaged; retire it and create a new one.`);
+  const privateKey = openSealedKey(sealed.data, row.key_id, pass);
+  if (privateKey === null) throw new RecordError('signing-key', `The passphrase is not correct for ${person.name}'s signing key. Nothing was signed or changed.`);
+  const publicKeyPem = createPublicKey(privateKey).export({ type: 'spki', format: 'pem' }).toString();
+  if (keyIdOf(publicKeyPem) !== row.key_id || keyIdOf(row.public_key) !== row.key_id) {
+    throw new RecordError('signing-key', `${person.name}'s stored signing key does not match its public key: the key was replaced. Retire it and create a new one.`);
+  }
+  if (opts.requireTrusted !== false) {
+    const read = readTrustList(ctx.keyDir);
+    const t = trustOf(read.list, row.key_id);
+    if (!t.trusted) {
+      throw new RecordError(
+        'signing-key',
+        `${person.name}'s key ${shortKeyFingerprint(row.key_id)} is not admitted to this installation's trust list (${t.chain.at(-1) ?? ''}). ` +
+          'A person whose key is trusted must endorse it first (register, People).',
+      );
+    }
+    const entry = t.entry;
+    if (entry?.retiredAt) throw new RecordError('signing-key', `${person.name}'s key is retired on the trust list; a retired key cannot sign.`);
+    const problems = trustListInfo(ctx).problems;
+    if (problems.length) throw new RecordError('signing-key', `Signing is refused: ${problems.join(' ')}`);
+  }
+  return { person, keyId: row.key_id, privateKey, publicKeyPem };
+}
+
+/** Who signed and when, decided here — never by the caller. */
+export interface Signer {
+  readonly personId: Id;
+  readonly name: string;
+  readonly role: string;
+  readonly keyId: string;
+  readonly publicKey: string;
+  /** This back end's clock. */
+  readonly signedAt: string;
+  /** Anchor of the trust list the key is trusted under. */
+  readonly trustAnchor: string;
+}
+
+/**
+ * Sign a payload as `personId` after checking the passphrase and that the key is trusted. `build`
+ * receives the signer (identity from the key's owner, time from this clock) and returns the object
+ * whose canonical JSON is signed. Reusable for any signed record (assessments, checked table rows).
+ */
+export function signAsPerson<P>(ctx: StoreContext, personId: Id, pass: string, build: (signer: Signer) => P): { signer: Signer; payload: P; signature: string } {
+  const key = unlockPersonalKey(ctx, personId, pass);
+  const anchor = readTrustList(ctx.keyDir).list?.anchor ?? '';
+  const signer: Signer = {
+    personId: key.person.id,
+    name: key.person.name,
+    role: key.person.role,
+    keyId: key.keyId,
+    publicKey: key.publicKeyPem,
+    signedAt: ctx.now(),
+    trustAnchor: anchor,
+  };
+  const payload = build(signer);
+  const signature = sign(null, Buffer.from(canonicalJson(payload), 'utf8'), key.privateKey).toString('base64');
+  return { signer, payload, signature };
+}
+
+/**
+ * A signer from a key already in hand, for the invented demo record (a throwaway key that is on no
+ * trust list, so the demo shows as an unverified signature) and for benchmark set-up. The app's
+ * sign-off always goes through `signAsPerson`.
+ */
+export function signerFromKey(ctx: StoreContext, person: Person, privateKey: KeyObject) {
+  const publicKey = createPublicKey(privateKey).export({ type: 'spki', format: 'pem' }).toString();
+  const anchor = readTrustList(ctx.keyDir).list?.anchor ?? '';
+  return <P>(build: (signer: Signer) => P): { signer: Signer; payload: P; signature: string } => {
+    const signer: Signer = { personId: person.id, name: person.name, role: person.role, keyId: keyIdOf(publicKey), publicKey, signedAt: ctx.now(), trustAnchor: anchor };
+    const payload = build(signer);
+    return { signer, payload, signature: sign(null, Buffer.from(canonicalJson(payload), 'utf8'), privateKey).toString('base64') };
+  };
+}
+
+/** The check that goes with `signAsPerson`, for any signed payload: valid signature, trusted key, and its owner. */
+export function checkPersonSignature(
+  ctx: StoreContext,
+  payload: unknown,
+  signatureB64: string,
+  keyId: string,
+): { readonly valid: boolean; readonly trusted: boolean; readonly trustChain: readonly string[]; readonly ownerPersonId: string | null; readonly ownerName: string | null } {
+  const read = readTrustList(ctx.keyDir);
+  const verdict = trustOf(read.list, keyId);
+  const publicKey = verdict.entry?.publicKey ?? (ctx.sql('SELECT public_key FROM signing_key WHERE key_id = ?').get(keyId) as { public_key: string } | undefined)?.public_key;
+  let valid = false;
+  try {
+    valid = publicKey !== undefined && keyIdOf(publicKey) === keyId && verify(null, Buffer.from(canonicalJson(payload), 'utf8'), createPublicKey(publicKey), Buffer.from(signatureB64, 'base64'));
+  } catch {
+    valid = false;
+  }
+  const problems = trustListInfo(ctx).problems;
+  return {
+    valid,
+    trusted: verdict.trusted && problems.length === 0,
+    trustChain: [...verdict.chain, ...problems],
+    ownerPersonId: verdict.entry?.personId ?? null,
+    ownerName: verdict.entry?.personName ?? null,
+  };
+}
+
+function admitToTrustList(
+  ctx: StoreContext,
+  list: TrustList,
+  entry: { keyId: string; publicKey: string; personId: string | null; personName: string },
+  endorser: { keyId: string; privateKey: KeyObject },
+): TrustList {
+  const admittedAt = ctx.now();
+  const e = makeEndorsedEntry({ ...entry, admittedAt, endorsedBy: endorser.keyId }, endorser.privateKey);
+  return { ...list, entries: [...list.entries.filter((x) => x.keyId !== entry.keyId), e] };
+}
+
+/** Admit several keys on one endorser's authority (import: the exporting site's keys, after confirmation). */
+export function admitKeys(
+  ctx: StoreContext,
+  keys: ReadonlyArray<{ keyId: string; publicKey: string; personId: string | null; personName: string }>,
+  endorser: { keyId: string; privateKey: KeyObject; person: Person },
+): void {
+  const read = readTrustList(ctx.keyDir);
+  if (read.list === null) throw new RecordError('signing-key', 'There is no trust list yet.');
+  let list = read.list;
+  for (const k of keys) {
+    list = admitToTrustList(ctx, list, k, endorser);
+    ctx.audit('key-endorsed', 'signing_key', k.keyId, `by ${endorser.person.name} (${k.personName})`);
+  }
+  writeTrustList(ctx.keyDir, list);
+}
+
+/** Start the trust list with `key` as its anchor (self-endorsed) and pin the anchor in the database. */
+export function setUpTrustList(ctx: StoreContext, key: { keyId: string; publicKey: string; personId: string | null; personName: string; privateKey: KeyObject }): TrustList {
+  const admittedAt = ctx.now();
+  const entry = makeEndorsedEntry(
+    { keyId: key.keyId, publicKey: key.publicKey, personId: key.personId, personName: key.personName, admittedAt, endorsedBy: key.keyId },
+    key.privateKey,
+  );
+  const list: TrustList = { format: 'beamwarden-trust-list', version: 1, anchor: key.keyId, entries: [entry] };
+  writeTrustList(ctx.keyDir, list);
+  ctx.sql('INSERT INTO trust_anchor_pin (anchor, pinned_at) VALUES (?, ?) ON CONFLICT(anchor) DO NOTHING').run(key.keyId, admittedAt);
+  ctx.audit('trust-anchor-set', 'signing_key', key.keyId, `${key.personName}; fingerprint ${shortKeyFingerprint(key.keyId)}`);
+  return list;
+}
+
+export function createPersonalKey(ctx: StoreContext, raw: z.input<typeof CreateKeySchema>): PersonKey {
+  const args = parseOrThrow(CreateKeySchema, raw, 'New signing key');
+  if (args.passphrase !== args.passphraseAgain) throw new RecordError('invalid', 'The two passphrases are not the same; nothing was created.', [{ path: 'passphraseAgain', problem: 'must repeat the passphrase exactly' }]);
+  const person = getPerson(ctx, args.personId);
+  if (activeKeyRow(ctx, person.id)) throw new RecordError('conflict', `${person.name} already has an active signing key; retire it before creating a new one.`);
+  const read = readTrustList(ctx.keyDir);
+  if (read.problem) throw new RecordError('signing-key', read.problem);
+  const problems = trustListInfo(ctx).problems;
+  if (problems.length) throw new RecordError('signing-key', problems.join(' '));
+  // The endorser's passphrase is checked before anything is written.
+  let endorser: { keyId: string; privateKey: KeyObject; name: string } | null = null;
+  let installationKeyToRetire: string | null = null;
+  if (read.list !== null && args.endorserPersonId !== undefined) {
+    const k = unlockPersonalKey(ctx, args.endorserPersonId, args.endorserPassphrase ?? '');
+    endorser = { keyId: k.keyId, privateKey: k.privateKey, name: k.person.name };
+  } else if (read.list !== null) {
+    // After migrating from schema 2 the installation key is the anchor: it endorses the first personal key, once.
+    const anchor = read.list.entries.find((e) => e.keyId === read.list?.anchor);
+    const inst = readInstallationKey(ctx.keyDir);
+    if (anchor && anchor.personName === INSTALLATION_KEY_HOLDER && !anchor.retiredAt && inst?.keyId === anchor.keyId) {
+      endorser = { keyId: inst.keyId, privateKey: inst.privateKey, name: INSTALLATION_KEY_HOLDER };
+      installationKeyToRetire = inst.keyId;
+    }
+  }
+  const { privateKey, publicKey } = generateKeyPairSync('ed25519');
+  const publicKeyPem = publicKey.export({ type: 'spki', format: 'pem' }).toString();
+  const keyId = keyIdOf(publicKeyPem);
+  const sealed = sealPrivateKey(privateKey, keyId, args.passphrase);
+  const now = ctx.now();
+  guardTx(ctx, 'Signing key', () => {
+    ctx.sql("INSERT INTO signing_key (key_id, public_key, origin, added_at) VALUES (?, ?, 'this-database', ?)").run(keyId, publicKeyPem, now);
+    ctx.sql('INSERT INTO person_key (key_id, person_id, sealed_private_key, created_at) VALUES (?, ?, ?, ?)').run(keyId, person.id, JSON.stringify(sealed), now);
+    ctx.audit('key-created', 'person', person.id, `key ${shortKeyFingerprint(keyId)}`);
+    // The trust list is written inside the transaction's scope: if it fails, the key rows roll back.
+    const entry = { keyId, publicKey: publicKeyPem, personId: person.id, personName: person.name };
+    if (read.list === null) setUpTrustList(ctx, { ...entry, privateKey });
+    else if (endorser !== null) {
+      let list = admitToTrustList(ctx, read.list, entry, endorser);
+      ctx.audit('key-endorsed', 'signing_key', keyId, `by ${endorser.name}`);
+      if (installationKeyToRetire !== null) {
+        const at = ctx.now();
+        list = { ...list, entries: list.entries.map((e) => (e.keyId === installationKeyToRetire ? { ...e, retiredAt: at, retiredReason: 'Replaced by personal keys' } : e)) };
+        ctx.audit('key-retired', 'signing_key', installationKeyToRetire, 'installation key replaced by personal keys; key file removed');
+      }
+      writeTrustList(ctx.keyDir, list);
+    }
+  });
+  // The installation key file is removed once it has endorsed: a copy of it could otherwise endorse again.
+  if (installationKeyToRetire !== null) rmSync(join(ctx.keyDir, PRIVATE_KEY_FILE), { force: true });
+  const made = listPersonKeys(ctx).find((k) => k.keyId === keyId);
+  if (!made) throw new Error('key not stored');
+  return made;
+}
+
+function guardTx(ctx: StoreContext, what: string, fn: () => void): void {
+  try {
+    ctx.db.transaction(fn).immediate();
+  } catch (e) {
+    throw translateSqliteError(e, what);
+  }
+}
+
+/** Admit a key (a person's new key, or an exporting site's key) on the endorsement of a trusted signer. */
+export function endorseKey(ctx: StoreContext, raw: z.input<typeof EndorseKeySchema>): PersonKey | null {
+  const args = parseOrThrow(EndorseKeySchema, raw, 'Endorsement');
+  const endorser = unlockPersonalKey(ctx, args.endorserPersonId, args.endorserPassphrase);
+  const read = readTrustList(ctx.keyDir);
+  if (read.list === null) throw new RecordError('signing-key', 'There is no trust list yet.');
+  const k = ctx.sql('SELECT public_key FROM signing_key WHERE key_id = ?').get(args.keyId) as { public_key: string } | undefined;
+  if (!k) throw new RecordError('not-found', `No key ${shortKeyFingerprint(args.keyId)} in this database.`);
+  const owner = ctx.sql('SELECT person_id FROM person_key WHERE key_id = ?').get(args.keyId) as { person_id: string } | undefined;
+  const personName = owner ? getPerson(ctx, owner.person_id).name : (ctx.sql('SELECT name FROM signature WHERE key_id = ? LIMIT 1').get(args.keyId) as { name: string } | undefined)?.name ?? '';
+  writeTrustList(ctx.keyDir, admitToTrustList(ctx, read.list, { keyId: args.keyId, publicKey: k.public_key, personId: owner?.person_id ?? null, personName }, endorser));
+  ctx.audit('key-endorsed', 'signing_key', args.keyId, `by ${endorser.person.name}`);
+  return listPersonKeys(ctx).find((x) => x.keyId === args.keyId) ?? null;
+}
+
+export function changePassphrase(ctx: StoreContext, raw: z.input<typeof ChangePassphraseSchema>): PersonKey {
+  const args = parseOrThrow(ChangePassphraseSchema, raw, 'Passphrase change');
+  if (args.newPassphrase !== args.newPassphraseAgain) throw new RecordError('invalid', 'The two new passphrases are not the same; nothing was changed.', [{ path: 'newPassphraseAgain', problem: 'must repeat the new passphrase exactly' }]);
+  const key = unlockPersonalKey(ctx, args.personId, args.passphrase, { requireTrusted: false });
+  const sealed = sealPrivateKey(key.privateKey, key.keyId, args.newPassphrase);
+  guardTx(ctx, 'Passphrase', () => {
+    ctx.sql('UPDATE person_key SET sealed_private_key = ? WHERE key_id = ? AND retired_at IS NULL').run(JSON.stringify(sealed), key.keyId);
+    ctx.audit('passphrase-changed', 'person', args.personId, `key ${shortKeyFingerprint(key.keyId)}`);
+  });
+  const k = listPersonKeys(ctx).find((x) => x.keyId === key.keyId);
+  if (!k) throw new Error('key vanished');
+  return k;
+}
+
+/** Retire a person's key (lost passphrase, person leaving): it can no longer sign; what it signed stays valid. */
+export function retireKey(ctx: StoreContext, raw: z.input<typeof RetireKeySchema>): PersonKey {
+  const args = parseOrThrow(RetireKeySchema, raw, 'Key retirement');
+  const person = getPerson(ctx, args.personId);
+  const row = activeKeyRow(ctx, person.id);
+  if (!row) throw new RecordError('not-found', `${person.name} has no active signing key.`);
+  const now = ctx.now();
+  guardTx(ctx, 'Key retirement', () => {
+    ctx.sql('UPDATE person_key SET retired_at = ?, retired_reason = ? WHERE key_id = ?').run(now, args.reason, row.key_id);
+    ctx.audit('key-retired', 'person', person.id, `key ${shortKeyFingerprint(row.key_id)}: ${args.reason}`);
+    const read = readTrustList(ctx.keyDir);
+    if (read.list !== null && read.list.entries.some((e) => e.keyId === row.key_id)) {
+      writeTrustList(ctx.keyDir, {
+        ...read.list,
+        entries: read.list.entries.map((e) => (e.keyId === row.key_id ? { ...e, retiredAt: now, retiredReason: args.reason } : e)),
+      });
+    }
+  });
+  const k = listPersonKeys(ctx).find((x) => x.keyId === row.key_id);
+  if (!k) throw new Error('key vanished');
+  return k;
+}

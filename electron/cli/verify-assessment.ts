@@ -1,0 +1,54 @@
+/**
+ * One assessment checked for an auditor: every signed (and superseded) revision verified — signature,
+ * key trust, fingerprint, recomputed results, chain, database protections — summed up in one line.
+ */
+import type { Id, RecordStore, VerifyReport } from '../backend/records/types.js';
+
+export interface AssessmentVerdict {
+  readonly assessmentId: Id;
+  readonly title: string;
+  /** ok: every signed revision verified; draft: nothing signed yet (not a failure); failed: anything else. */
+  readonly outcome: 'ok' | 'draft' | 'failed';
+  readonly line: string;
+  readonly reports: readonly VerifyReport[];
+}
+
+export function verifyOneAssessment(store: RecordStore, assessmentId: Id, title: string): AssessmentVerdict {
+  try {
+    return check(store, assessmentId, title);
+  } catch (e) {
+    // A record so damaged that it cannot even be read is a failed check, not a crash of the audit.
+    return { assessmentId, title, outcome: 'failed', line: `FAILED  ${assessmentId}  ${title}: cannot be read: ${(e as Error).message}`, reports: [] };
+  }
+}
+
+function check(store: RecordStore, assessmentId: Id, title: string): AssessmentVerdict {
+  const revisions = store.listRevisions(assessmentId);
+  const signed = revisions.filter((r) => r.status !== 'draft' || r.signature !== null);
+  if (signed.length === 0) {
+    const report = store.verify(assessmentId);
+    const clean = report.chainIntact && report.checks.every((c) => c.check !== 'protections' || c.ok);
+    return {
+      assessmentId,
+      title,
+      outcome: clean ? 'draft' : 'failed',
+      line: clean ? `draft   ${assessmentId}  ${title}: nothing signed yet` : `FAILED  ${assessmentId}  ${title}: ${report.findings.find((f) => !/is a draft/.test(f)) ?? report.findings[0] ?? ''}`,
+      reports: [report],
+    };
+  }
+  const reports = signed.map((r) => store.verify(assessmentId, r.id));
+  const bad = reports.find((r) => !r.ok);
+  const newest = reports.at(-1);
+  if (bad) {
+    const finding = bad.checks.find((c) => !c.ok)?.finding ?? bad.findings[0] ?? 'verification failed';
+    return { assessmentId, title, outcome: 'failed', line: `FAILED  ${assessmentId}  ${title}: revision ${bad.revisionNo}: ${finding}`, reports };
+  }
+  const who = newest?.signer ? `, signed by ${newest.signer.name} on ${newest.signer.signedAt.slice(0, 10)}, key ${newest.signer.keyFingerprint}` : '';
+  return {
+    assessmentId,
+    title,
+    outcome: 'ok',
+    line: `ok      ${assessmentId}  ${title}: revision ${newest?.revisionNo ?? ''}${who}${reports.length > 1 ? ` (${reports.length} signed revisions checked)` : ''}`,
+    reports,
+  };
+}

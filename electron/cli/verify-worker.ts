@@ -1,0 +1,23 @@
+/** Worker thread of `npm run verify -- --all`: verifies its share of assessments and posts each verdict. */
+import { parentPort, workerData } from 'node:worker_threads';
+import { openRecordStore } from '../backend/records/index.js';
+import { verifyOneAssessment } from './verify-assessment.js';
+
+interface Job {
+  readonly module: string;
+  readonly db: string;
+  readonly keyDir: string;
+  readonly items: ReadonlyArray<{ readonly id: string; readonly title: string }>;
+  readonly keepReports: boolean;
+}
+
+const job = workerData as Job;
+const store = openRecordStore({ path: job.db, keyDir: job.keyDir, readonly: true });
+try {
+  for (const item of job.items) {
+    const v = verifyOneAssessment(store, item.id, item.title);
+    parentPort?.postMessage(job.keepReports ? v : { ...v, reports: [] });
+  }
+} finally {
+  store.close();
+}

@@ -1,0 +1,148 @@
+/**
+ * Headless check for auditors: every signed revision of one assessment, or of all, verified against
+ * this installation's trust list (outside the database), recomputed with this core, and checked for
+ * a whole revision chain and intact database protections.
+ *
+ *   npm run verify -- --db <file> [--assessment <id> | --all] [--json] [--key-dir <folder>] [--workers <n>]
+ *
+ * One line per assessment ("ok", "draft" or "FAILED" with the finding); exit status 1 if any fails,
+ * 2 on a usage or open error. A progress bar goes to stderr on a terminal. --all runs on worker
+ * threads (one per core, at most 8): recomputing is the costly part. The database is opened read-only.
+ */
+import { availableParallelism } from 'node:os';
+import { dirname, resolve } from 'node:path';
+import { fileURLToPath, pathToFileURL } from 'node:url';
+import { Worker } from 'node:worker_threads';
+import { z } from 'zod';
+import { openRecordStore } from '../backend/records/index.js';
+import { verifyOneAssessment, type AssessmentVerdict } from './verify-assessment.js';
+
+const USAGE = 'Usage: npm run verify -- --db <file> [--assessment <id> | --all] [--json] [--key-dir <folder>] [--workers <n>]';
+
+const ArgsSchema = z
+  .strictObject({
+    db: z.string({ error: '--db <file> is required' }).min(1, '--db <file> is required'),
+    assessment: z.string().min(1).optional(),
+    all: z.boolean().optional(),
+    json: z.boolean().optional(),
+    'key-dir': z.string().min(1).optional(),
+    workers: z.coerce.number().int().min(1).max(64).optional(),
+  })
+  .refine((a) => !(a.all === true && a.assessment !== undefined), { message: 'give either --assessment <id> or --all, not both', path: ['all'] });
+export type VerifyArgs = z.infer<typeof ArgsSchema>;
+
+export function parseVerifyArgs(argv: readonly string[]): VerifyArgs {
+  const raw: Record<string, string | boolean> = {};
+  for (let i = 0; i < argv.length; i++) {
+    const a = argv[i] as string;
+    if (!a.startsWith('--')) throw new Error(`unexpected argument '${a}'\n${USAGE}`);
+    const [flag, inline] = a.slice(2).split('=', 2) as [string, string | undefined];
+    const next = argv[i + 1];
+    if (inline !== undefined) raw[flag] = inline;
+    else if (next !== undefined && !next.startsWith('--') && flag !== 'all' && flag !== 'json') {
+      raw[flag] = next;
+      i++;
+    } else raw[flag] = true;
+  }
+  const parsed = ArgsSchema.safeParse(raw);
+  if (!parsed.success) {
+    const first = parsed.error.issues[0];
+    throw new Error(`${first?.path.length ? `--${String(first.path[0])}: ` : ''}${first?.message ?? 'invalid arguments'}\n${USAGE}`);
+  }
+  return parsed.data;
+}
+
+function progress(done: number, total: number): void {
+  if (!process.stderr.isTTY || total < 2) return;
+  const width = 30;
+  const filled = Math.round((done / total) * width);
+  process.stderr.write(`\r[${'#'.repeat(filled)}${'.'.repeat(width - filled)}] ${done}/${total} assessments`);
+  if (done === total) process.stderr.write('\n');
+}
+
+async function inWorkers(db: string, keyDir: string, items: Array<{ id: string; title: string }>, workers: number, keepReports: boolean): Promise<AssessmentVerdict[]> {
+  const here = dirname(fileURLToPath(import.meta.url));
+  const boot = pathToFileURL(resolve(here, 'ts-worker.mjs'));
+  const module = pathToFileURL(resolve(here, 'verify-worker.ts')).href;
+  const byId = new Map<string, AssessmentVerdict>();
+  // Interleaved shares: neighbouring assessments (often similar rooms) spread over the workers.
+  const shares = Array.from({ length: workers }, (_, w) => items.filter((_x, i) => i % workers === w));
+  await Promise.all(
+    shares.map(
+      (share) =>
+        new Promise<void>((done, fail) => {
+          if (share.length === 0) return done();
+          const worker = new Worker(boot, { workerData: { module, db, keyDir, items: share, keepReports } });
+          worker.on('message', (v: AssessmentVerdict) => {
+            byId.set(v.assessmentId, v);
+            progress(byId.size, items.length);
+          });
+          worker.on('error', fail);
+          worker.on('exit', (code) => (code === 0 ? done() : fail(new Error(`a verification worker stopped with code ${code}`))));
+        }),
+    ),
+  );
+  return items.map((x) => byId.get(x.id) ?? { assessmentId: x.id, title: x.title, outcome: 'failed', line: `FAILED  ${x.id}  ${x.title}: not checked`, reports: [] });
+}
+
+export async function runVerify(argv: readonly string[], out: (line: string) => void = (l) => process.stdout.write(`${l}\n`)): Promise<number> {
+  let args: VerifyArgs;
+  try {
+    args = parseVerifyArgs(argv);
+  } catch (e) {
+    process.stderr.write(`${(e as Error).message}\n`);
+    return 2;
+  }
+  const db = resolve(args.db);
+  const keyDir = resolve(args['key-dir'] ?? dirname(db));
+  let store;
+  try {
+    store = openRecordStore({ path: db, keyDir, readonly: true });
+  } catch (e) {
+    process.stderr.write(`Cannot open ${db}: ${(e as Error).message}\n`);
+    return 2;
+  }
+  let verdicts: AssessmentVerdict[];
+  let header: string[];
+  try {
+    const trust = store.trustList();
+    header = [
+      `Database ${db}`,
+      `Trust list ${trust.path}: anchor ${trust.anchorFingerprint ?? 'none'}${trust.problems.length ? ` — ${trust.problems.join(' ')}` : ''}`,
+      ...store.info.warnings.map((w) => `Warning: ${w}`),
+    ];
+    const all = store.listAllAssessments();
+    const items = (args.assessment !== undefined ? all.filter((a) => a.id === args.assessment) : all).map((a) => ({ id: a.id, title: a.title }));
+    if (args.assessment !== undefined && items.length === 0) {
+      process.stderr.write(`No assessment with id ${args.assessment} in ${db}\n`);
+      return 2;
+    }
+    const workers = Math.min(args.workers ?? Math.min(availableParallelism(), 8), items.length);
+    // Small jobs are quicker in one thread than with workers starting up, unless asked for.
+    if (workers > 1 && (items.length >= 20 || args.workers !== undefined)) {
+      store.close();
+      verdicts = await inWorkers(db, keyDir, items, workers, args.json === true);
+    } else {
+      verdicts = [];
+      for (const x of items) {
+        verdicts.push(verifyOneAssessment(store, x.id, x.title));
+        progress(verdicts.length, items.length);
+      }
+    }
+  } finally {
+    store.close(); // a no-op when already closed for the workers
+  }
+  const failed = verdicts.filter((v) => v.outcome === 'failed').length;
+  if (args.json) {
+    out(JSON.stringify({ database: db, header, failed, assessments: verdicts }, null, 2));
+  } else {
+    for (const h of header) out(h);
+    for (const v of verdicts) out(v.line);
+    out(`${verdicts.length} assessment(s): ${verdicts.filter((v) => v.outcome === 'ok').length} ok, ${verdicts.filter((v) => v.outcome === 'draft').length} not signed yet, ${failed} failed.`);
+  }
+  return failed > 0 ? 1 : 0;
+}
+
+if (process.argv[1] && resolve(process.argv[1]) === fileURLToPath(import.meta.url)) {
+  process.exitCode = await runVerify(process.argv.slice(2));
+}

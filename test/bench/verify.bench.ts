@@ -1,0 +1,100 @@
+/**
+ * Benchmark of the auditor's check: `npm run verify -- --all` over 10 000 signed assessments (the
+ * invented demo room A0.07, two lasers), each recomputed with the core, its signature checked against
+ * the trust list, its chain and the database protections checked — on worker threads, one per core.
+ * Target: under 60 s on this machine. Setup (not timed): one real store-made signed assessment's
+ * rows copied with SQL, each copy signed with the officer's real personal key (unsealed once with
+ * the passphrase) and entered in the signing log, as signing in the app would leave them.
+ * Run with the others: npm run bench (or -- --only=verify). BENCH_VERIFY_N=<n> sets the count.
+ */
+import Database from 'better-sqlite3';
+import { randomUUID, sign } from 'node:crypto';
+import { mkdtempSync, rmSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import demo from '../../assets/demo/demo-scenario.json' with { type: 'json' };
+import { statementFor, type AssessmentRow, type RevisionRow, type SignatureRow } from '../../electron/backend/records/assessments.js';
+import { canonicalJson } from '../../electron/backend/records/canonical.js';
+import { DemoScenarioSchema } from '../../electron/backend/records/demo.js';
+import { openRecordStore } from '../../electron/backend/records/index.js';
+import { openSealedKey, SealedKeySchema } from '../../electron/backend/records/key-encryption.js';
+import { appendSigningLog } from '../../electron/backend/records/signing-log.js';
+import { linkOf } from '../../electron/backend/records/signing.js';
+import { runVerify } from '../../electron/cli/verify.js';
+import type { BenchEntry } from './registry.js';
+
+const COUNT = Number(process.env['BENCH_VERIFY_N'] ?? 10_000);
+const PASSPHRASE = 'bench passphrase (invented)';
+
+function build(dir: string): { db: string; keyDir: string } {
+  const db = join(dir, 'verify.sqlite');
+  const keyDir = join(dir, 'keys');
+  const scenario = DemoScenarioSchema.parse(demo);
+  const r = scenario.rooms.find((x) => x.code === 'A0.07');
+  if (!r) throw new Error('demo room A0.07 missing');
+  const store = openRecordStore({ path: db, keyDir });
+  const site = store.createSite({ name: scenario.site.name });
+  const room = store.createRoom({ siteId: site.id, code: r.code, name: r.name });
+  for (const laser of r.input.lasers) store.createInstallation({ roomId: room.id, laser, laserType: laser.name });
+  for (const spec of scenario.eyewear) store.createEyewear({ siteId: site.id, spec });
+  const officer = store.createPerson({ name: 'Bench Officer (invented)', role: 'Laser safety officer' });
+  const key = store.createPersonKey({ personId: officer.id, passphrase: PASSPHRASE, passphraseAgain: PASSPHRASE });
+  const template = store.createAssessment({ roomId: room.id, content: store.newAssessmentContent(room.id) });
+  store.signAssessment(template.id, { personId: officer.id, passphrase: PASSPHRASE, statement: 'Benchmark sign-off.' });
+  store.close();
+
+  const raw = new Database(db);
+  const sealed = raw.prepare('SELECT sealed_private_key FROM person_key WHERE key_id = ?').get(key.keyId) as { sealed_private_key: string };
+  const privateKey = openSealedKey(SealedKeySchema.parse(JSON.parse(sealed.sealed_private_key)), key.keyId, PASSPHRASE);
+  if (!privateKey) throw new Error('cannot open the bench key');
+  const rev = raw.prepare('SELECT * FROM revision WHERE assessment_id = ?').get(template.id) as RevisionRow;
+  const sig = raw.prepare('SELECT * FROM signature WHERE revision_id = ?').get(rev.id) as SignatureRow;
+  const insA = raw.prepare('INSERT INTO assessment (id, room_id, installation_id, created_at) VALUES (?, ?, NULL, ?)');
+  const insR = raw.prepare(
+    `INSERT INTO revision (id, assessment_id, revision_no, status, content_json, results_z, calculated_with, based_on, created_at, updated_at, title, review_by)
+     VALUES (?, ?, 1, 'draft', ?, ?, ?, NULL, ?, ?, ?, ?)`,
+  );
+  const insS = raw.prepare(
+    `INSERT INTO signature (revision_id, person_id, name, role, signed_at, statement, fingerprint, algorithm, signature, key_id, statement_version, previous_link, trust_anchor)
+     VALUES (@revision_id, @person_id, @name, @role, @signed_at, @statement, @fingerprint, 'Ed25519', @signature, @key_id, 2, NULL, @trust_anchor)`,
+  );
+  const setSigned = raw.prepare("UPDATE revision SET status = 'signed' WHERE id = ?");
+  const log: Array<Parameters<typeof appendSigningLog>[1]> = [];
+  raw.transaction(() => {
+    for (let i = 1; i < COUNT; i++) {
+      const a: AssessmentRow = { id: randomUUID(), room_id: room.id, installation_id: null, created_at: rev.created_at };
+      const revId = randomUUID();
+      insA.run(a.id, a.room_id, a.created_at);
+      insR.run(revId, a.id, rev.content_json, rev.results_z, rev.calculated_with, rev.created_at, rev.updated_at, rev.title, rev.review_by);
+      const st = statementFor(a, { id: revId, revision_no: 1 }, sig);
+      insS.run({ ...sig, revision_id: revId, signature: sign(null, Buffer.from(canonicalJson(st), 'utf8'), privateKey).toString('base64') });
+      setSigned.run(revId);
+      log.push({ assessmentId: a.id, revisionId: revId, revisionNo: 1, link: linkOf(st), signedAt: sig.signed_at, keyId: sig.key_id });
+    }
+  })();
+  raw.close();
+  for (const line of log) appendSigningLog(keyDir, line);
+  return { db, keyDir };
+}
+
+export async function runVerifyBench(): Promise<BenchEntry[]> {
+  const dir = mkdtempSync(join(tmpdir(), 'bw-bench-verify-'));
+  try {
+    const { db, keyDir } = build(dir);
+    const lines: string[] = [];
+    const t0 = performance.now();
+    const cpu0 = process.cpuUsage(); // worker threads run in this process: their CPU time counts here
+    const status = await runVerify(['--db', db, '--key-dir', keyDir, '--all'], (l) => lines.push(l));
+    const ms = performance.now() - t0;
+    const cpu = process.cpuUsage(cpu0);
+    const summary = lines.at(-1) ?? '';
+    if (status !== 0 || !summary.startsWith(`${COUNT} assessment(s): ${COUNT} ok`)) throw new Error(`verify did not pass: ${summary}`);
+    return [
+      { name: `verify --all: ${COUNT} signed assessments recomputed and checked (worker threads)`, median_ms: ms, runs: 1, target_ms: 60_000 },
+      // Wall time depends on what else the machine runs; CPU time per assessment does much less.
+      { name: 'verify --all: CPU time per signed assessment (all threads)', median_ms: (cpu.user + cpu.system) / 1000 / COUNT, runs: 1 },
+    ];
+  } finally {
+    rmSync(dir, { recursive: true, force: true });
+  }
+}
