@@ -20,6 +20,7 @@ import type {
   ViewingConditions,
 } from '../../../core/model/inputs.js';
 import { assertType, type SameShape } from './type-equality.js';
+import { RoomPlanSchema } from './plan.js';
 
 const positive = (unit: string) => z.number({ error: `must be a number (${unit})` }).positive(`must be greater than 0 ${unit}`);
 const nonNegative = (unit: string) => z.number({ error: `must be a number (${unit})` }).nonnegative(`must be 0 or more ${unit}`);
@@ -164,6 +165,7 @@ export const RoomInputSchema = z.strictObject({
   settings: LimitSettingsSchema.optional(),
   lasers: z.array(LaserInputSchema),
   eyewear: z.array(EyewearSpecSchema).optional(),
+  plan: RoomPlanSchema.optional(),
 });
 
 // ---- compile-time proof that the schemas are the core types (fails to compile on drift)
