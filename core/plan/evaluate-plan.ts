@@ -6,7 +6,7 @@
 import { Dec } from '../numeric/decimal.js';
 import type { RoomInput } from '../model/inputs.js';
 import type { BeamResult } from '../model/results.js';
-import { distanceToPolygon, polygonInside, segmentTouchesPolygon, type P } from './geometry.js';
+import { distanceToPolygon, insideWithin, segmentTouchesPolygon, type P } from './geometry.js';
 import type { PlanBeamRun, PlanFinding, PlanResult, RoomPlan } from './plan-model.js';
 import { tracePath, toP, type Leg } from './trace-path.js';
 import { CIRCLE_CORNERS, PATH_MARGIN_M, diffuseRadius, directLength, directZones, diffuseZones, insideEnclosure, roundPoint, type BeamOnPlan, type ZoneWithShape } from './plan-zones.js';
@@ -32,6 +32,7 @@ export const PLAN_METHOD: readonly string[] = [
   `Direct-beam zones follow the drawn beam path up to the NOHD (rounded up, or the upper bound from the input tolerances where larger), stopped by beam dumps, targets, walls and barriers; doors and windows are taken as open.`,
   `Their width is where the exposure of a Gaussian beam exceeds the limit (derived from the beam diameter, divergence and NOHD), plus ${PATH_MARGIN_M.mul(1000).toString()} mm on each side for the accuracy of the drawing.`,
   `Diffuse-reflection zones are drawn around a circle of the diffuse NHZ (rounded up) about every mirror and target the beam reaches, every point where it ends on a wall or barrier, and every reflection point marked on the plan (a ${CIRCLE_CORNERS}-sided polygon outside the circle).`,
+  'Walls are taken as opaque to scattered light: a diffuse-reflection zone is cut at the walls of a convex room outline, and at the enclosure a reflection point lies in; a door or window the zone reaches is reported.',
   'Every zone is widened by 1 mm before its corners are rounded to the millimetre, so no zone is drawn smaller than computed. Heights are not modelled except for the eye-level check of a stated beam height.',
 ];
 
@@ -113,7 +114,7 @@ function beamFindings(plan: RoomPlan, b: BeamOnPlan, legs: readonly Leg[], dz: r
         severity: 'hazard',
         subjectId: o.id,
         zoneIds: ids,
-        text: `The direct beam of ${label} passes ${name} ${metres(o.at)} along its path, still above the limit (hazard distance ${metres(H)}).`,
+        text: `The direct beam of ${label} passes ${name} ${metres(o.at)} along its path, still above the limit (hazard distance ${metres(H)}${H.gt(b.result.nohd_m_reported) ? ', the upper bound from the input tolerances' : ''}).`,
         suggestion: `End the beam of ${label} in a beam dump before it reaches ${name}.`,
       });
     }
@@ -152,13 +153,13 @@ function beamFindings(plan: RoomPlan, b: BeamOnPlan, legs: readonly Leg[], dz: r
       });
     }
   }
-  if (height_m !== undefined && height_m >= EYE_LEVEL_M[0] && height_m <= EYE_LEVEL_M[1] && dz.some((z) => !z.enclosed)) {
+  if (height_m !== undefined && height_m >= EYE_LEVEL_M[0] && height_m <= EYE_LEVEL_M[1] && dz.some((z) => !z.enclosed) && !out.some((f) => f.kind === 'beam-at-eye-level' && f.subjectId === b.laserId)) {
     out.push({
       kind: 'beam-at-eye-level',
       severity: 'check',
       subjectId: b.laserId,
       zoneIds: ids,
-      text: `The open beam of ${label} runs ${height_m} m above the floor, within eye level of standing and seated people (about ${EYE_LEVEL_M[0]} m to ${EYE_LEVEL_M[1]} m).`,
+      text: `The open beam path of ${b.laserName} runs ${height_m} m above the floor, within eye level of standing and seated people (about ${EYE_LEVEL_M[0]} m to ${EYE_LEVEL_M[1]} m).`,
       suggestion: `Raise or lower the beam path of ${b.laserName} out of eye level, or enclose it.`,
     });
   }
@@ -234,13 +235,16 @@ function controlledAreaFindings(plan: RoomPlan, zones: readonly ZoneWithShape[],
     return;
   }
   const outline = ca.outline.map(toP);
-  const outside = firstPerBeamKind(zones.filter((z) => !z.enclosed && !polygonInside(z.shape, outline)));
+  // A zone cut at a wall may overlap the wall line by its 1 mm pad: 5 mm is taken as on the boundary (ours).
+  const tol = new Dec('0.005');
+  const out_ = (x: ZoneWithShape) => !x.enclosed && !insideWithin(x.shape, outline, tol);
+  const outside = firstPerBeamKind(zones.filter(out_));
   for (const z of outside) {
     out.push({
       kind: 'outside-controlled-area',
       severity: 'hazard',
       subjectId: z.beamId,
-      zoneIds: zones.filter((x) => x.beamId === z.beamId && x.kind === z.kind && !polygonInside(x.shape, outline)).map((x) => x.id),
+      zoneIds: zones.filter((x) => x.beamId === z.beamId && x.kind === z.kind && out_(x)).map((x) => x.id),
       text: `${capital(zoneWords(z))} reaches outside the accepted laser controlled area.`,
       suggestion: z.kind === 'direct' ? `Stop the beam of ${beamName(z)} inside the laser controlled area (beam dump or rated barrier), or enlarge the area.` : `Enlarge the laser controlled area to take in the diffuse-reflection zones of ${beamName(z)}, or screen them.`,
     });

@@ -169,3 +169,66 @@ export function corridor(a: P, b: P, w: Dec, e: Dec): P[] {
 export function box(min: P, max: P): P[] {
   return [min, { x: max.x, y: min.y }, max, { x: min.x, y: max.y }];
 }
+
+/** Twice the signed area (positive when the corners run counter-clockwise). */
+function signedArea2(poly: readonly P[]): Dec {
+  let s = new Dec(0);
+  for (const [a, b] of edges(poly)) s = s.add(cross(a, b));
+  return s;
+}
+
+/** Is the polygon convex (no turn against the others)? */
+export function isConvex(poly: readonly P[]): boolean {
+  let sign = 0;
+  const es = edges(poly);
+  for (let i = 0; i < es.length; i++) {
+    const e1 = es[i];
+    const e2 = es[(i + 1) % es.length];
+    if (!e1 || !e2) continue;
+    const c = cross(sub(e1[1], e1[0]), sub(e2[1], e2[0]));
+    if (c.isZero()) continue;
+    const s = c.gt(0) ? 1 : -1;
+    if (sign !== 0 && s !== sign) return false;
+    sign = s;
+  }
+  return true;
+}
+
+/**
+ * The part of `subject` inside the convex polygon `clip` widened by `pad` on every side
+ * (Sutherland–Hodgman clipping against each side's half-plane). Empty when nothing is inside.
+ */
+export function clipToConvex(subject: readonly P[], clip: readonly P[], pad: Dec): P[] {
+  const ccw = signedArea2(clip).gte(0) ? [...clip] : [...clip].reverse();
+  let out: P[] = [...subject];
+  for (const [a, b] of edges(ccw)) {
+    if (out.length === 0) break;
+    const d = sub(b, a);
+    const len = length(d);
+    if (len.isZero()) continue;
+    const n = { x: d.y.div(len), y: d.x.neg().div(len) }; // outward normal of a counter-clockwise side
+    const f = (p: P) => dot(n, sub(p, a)).sub(pad); // <= 0 inside
+    const input = out;
+    out = [];
+    let s = input[input.length - 1];
+    for (const e of input) {
+      if (!s) break;
+      const fs = f(s);
+      const fe = f(e);
+      if (fe.lte(0)) {
+        if (fs.gt(0)) out.push(add(s, scale(sub(e, s), fs.div(fs.sub(fe)))));
+        out.push(e);
+      } else if (fs.lte(0)) {
+        out.push(add(s, scale(sub(e, s), fs.div(fs.sub(fe)))));
+      }
+      s = e;
+    }
+  }
+  return out;
+}
+
+/** Is every corner and side midpoint of `inner` within `tol` of the polygon `outer`? */
+export function insideWithin(inner: readonly P[], outer: readonly P[], tol: Dec): boolean {
+  const probes = [...inner, ...edges(inner).map(([a, b]) => scale(add(a, b), new Dec('0.5')))];
+  return probes.every((v) => distanceToPolygon(v, outer).lte(tol));
+}

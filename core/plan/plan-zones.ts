@@ -13,7 +13,7 @@ import { Dec } from '../numeric/decimal.js';
 import { distanceReported } from '../beam/format.js';
 import type { BeamInput } from '../model/inputs.js';
 import type { BeamResult } from '../model/results.js';
-import { add, box, circleOutside, corridor, edges, pointInPolygon, rayHitsSegment, scale, unit, type P } from './geometry.js';
+import { add, box, circleOutside, clipToConvex, corridor, edges, insideWithin, isConvex, pointInPolygon, rayHitsSegment, scale, unit, type P } from './geometry.js';
 import type { PlanPointResult, PlanZone, RoomPlan } from './plan-model.js';
 import { toP, type Leg } from './trace-path.js';
 
@@ -103,10 +103,7 @@ export function insideEnclosure(plan: RoomPlan, p: P): string | null {
 }
 
 function wholeInsideEnclosure(plan: RoomPlan, shape: readonly P[]): boolean {
-  return plan.enclosures.some((e) => {
-    const bx = box(toP(e.min), toP(e.max));
-    return shape.every((p) => pointInPolygon(p, bx));
-  });
+  return plan.enclosures.some((e) => insideWithin(shape, box(toP(e.min), toP(e.max)), ROUNDING_PAD_M.mul(2)));
 }
 
 function zone(base: Omit<ZoneWithShape, 'polygon' | 'enclosed'>, plan: RoomPlan): ZoneWithShape {
@@ -173,6 +170,19 @@ export function reflectionPointsOf(plan: RoomPlan, laserId: string, legs: readon
   return out;
 }
 
+/**
+ * Walls are opaque to scattered light: a diffuse zone is cut at the room's walls (a convex outline
+ * only; otherwise it is left whole) and, for a reflection point inside an enclosure, at the
+ * enclosure. Doors and windows in the walls are reported when a zone reaches them.
+ */
+function clipDiffuse(plan: RoomPlan, centre: P, shape: P[]): P[] {
+  const encl = plan.enclosures.find((e) => pointInPolygon(centre, box(toP(e.min), toP(e.max))));
+  const bounds = encl ? box(toP(encl.min), toP(encl.max)) : plan.outline.map(toP);
+  if (!encl && (!isConvex(bounds) || !pointInPolygon(centre, bounds))) return shape;
+  const clipped = clipToConvex(shape, bounds, ROUNDING_PAD_M);
+  return clipped.length >= 3 ? clipped : shape;
+}
+
 export function diffuseZones(plan: RoomPlan, beam: BeamOnPlan, legs: readonly Leg[]): ZoneWithShape[] {
   const R = diffuseRadius(beam.result);
   if (R === null || R.isZero()) return [];
@@ -184,7 +194,7 @@ export function diffuseZones(plan: RoomPlan, beam: BeamOnPlan, legs: readonly Le
         beamId: beam.result.beamId,
         laserId: beam.laserId,
         label: `Diffuse reflection of ${beam.result.label} at ${p.what}`,
-        shape: circleOutside(p.at, R.add(ROUNDING_PAD_M), CIRCLE_CORNERS),
+        shape: clipDiffuse(plan, p.at, circleOutside(p.at, R.add(ROUNDING_PAD_M), CIRCLE_CORNERS)),
         radius_m: R.toString(),
       },
       plan,

@@ -187,3 +187,25 @@ describe('plan input errors name the field (core validation)', () => {
     });
   }
 });
+
+describe('walls and enclosures stop scattered light (common practice: walls are opaque)', () => {
+  it('a diffuse zone at a mirror 0.1 m from the south wall is cut at the wall (plus the 1 mm pad)', () => {
+    // derived: the circle of 0.251 m about (2, 0.1) reaches y = −0.151 uncut; the wall is y = 0.
+    const plan = evaluateRoom(room(beamB, { paths: [{ laserId: 'L1', exit: p(0.5, 0.1), elements: [{ kind: 'mirror', at: p(2, 0.1) }], onward_deg: 90 }] })).plan!;
+    const z = plan.zones.find((q) => q.id === 'b:diffuse:p1')!;
+    expect(Math.min(...ys(z.polygon))).toBeCloseTo(-0.001, 3);
+    expect(Math.max(...ys(z.polygon))).toBeGreaterThan(0.1 + 0.25);
+  });
+  it('a reflection point inside an enclosure gives an enclosed zone, and no finding for a desk just outside', () => {
+    // derived: the box spans x 1.8–2.6 m, y 0.8–1.15 m; desk P1 at (2.2, 1.2) is 0.05 m outside it and 0.2 m from the mirror (< 0.25 m).
+    const plan = evaluateRoom(
+      room(beamB, {
+        enclosures: [{ id: 'E1', label: 'E1', min: p(1.8, 0.8), max: p(2.6, 1.15) }],
+        workPositions: [{ id: 'P1', label: 'P1', at: p(2.2, 1.2) }],
+        paths: [{ laserId: 'L1', exit: p(1.9, 1), elements: [{ kind: 'mirror', at: p(2.2, 1) }, { kind: 'dump', at: p(2.2, 0.9) }] }],
+      }),
+    ).plan!;
+    expect(plan.zones.filter((q) => q.kind === 'diffuse').every((q) => q.enclosed)).toBe(true);
+    expect(plan.findings.filter((f) => f.kind === 'work-position-in-zone')).toEqual([]);
+  });
+});
