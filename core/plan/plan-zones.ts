@@ -110,6 +110,20 @@ function zone(base: Omit<ZoneWithShape, 'polygon' | 'enclosed'>, plan: RoomPlan)
   return { ...base, polygon: base.shape.map(roundPoint), enclosed: wholeInsideEnclosure(plan, base.shape) };
 }
 
+/**
+ * Cuts at path distances 1, 2, 4, 8 ... m so the zone widens in steps with the beam instead of
+ * taking its widest point along the whole leg (each step still takes the widest point of its own
+ * stretch, so no step is narrower than the over-limit region).
+ */
+function taperCuts(legStart: Dec, pieceLen: Dec): Dec[] {
+  const out: Dec[] = [];
+  for (let d = new Dec(1); d.lt(legStart.add(pieceLen)); d = d.mul(2)) {
+    const t = d.sub(legStart);
+    if (t.gt(0)) out.push(t);
+  }
+  return out;
+}
+
 export interface DirectRun {
   readonly points: P[];
   /** Where the drawn direct zone ends along the path, m. */
@@ -132,7 +146,7 @@ export function directZones(plan: RoomPlan, beam: BeamOnPlan, legs: readonly Leg
     const end = add(leg.from, scale(u, pieceLen));
     if (points.length === 0) points.push(leg.from);
     points.push(end);
-    const cuts = [new Dec(0), ...enclosureCuts(plan, leg.from, end, pieceLen), pieceLen];
+    const cuts = [new Dec(0), ...enclosureCuts(plan, leg.from, end, pieceLen), ...taperCuts(leg.start, pieceLen), pieceLen].sort((x, y) => x.cmp(y));
     for (let i = 0; i + 1 < cuts.length; i++) {
       const t1 = cuts[i];
       const t2 = cuts[i + 1];
