@@ -156,12 +156,12 @@ export function circleOutside(c: P, r: Dec, n: number): P[] {
   return out;
 }
 
-/** The rectangle around the segment a–b: half-width w to each side, extended by e past both ends. */
-export function corridor(a: P, b: P, w: Dec, e: Dec): P[] {
+/** The rectangle around the segment a–b: half-width w to each side, extended by eA before a and eB past b. */
+export function corridor(a: P, b: P, w: Dec, eA: Dec, eB: Dec = eA): P[] {
   const u = unit(a, b);
   const n = scale(normal(u), w);
-  const a0 = sub(a, scale(u, e));
-  const b0 = add(b, scale(u, e));
+  const a0 = sub(a, scale(u, eA));
+  const b0 = add(b, scale(u, eB));
   return [add(a0, n), add(b0, n), sub(b0, n), sub(a0, n)];
 }
 

@@ -146,13 +146,17 @@ export function directZones(plan: RoomPlan, beam: BeamOnPlan, legs: readonly Leg
     const end = add(leg.from, scale(u, pieceLen));
     if (points.length === 0) points.push(leg.from);
     points.push(end);
-    const cuts = [new Dec(0), ...enclosureCuts(plan, leg.from, end, pieceLen), ...taperCuts(leg.start, pieceLen), pieceLen].sort((x, y) => x.cmp(y));
+    const cuts = [new Dec(0), ...enclosureCuts(plan, leg.from, end, pieceLen), ...taperCuts(leg.start, pieceLen), pieceLen]
+      .sort((x, y) => x.cmp(y))
+      .filter((c, k, all) => k === 0 || !c.eq(all[k - 1] ?? c));
     for (let i = 0; i + 1 < cuts.length; i++) {
       const t1 = cuts[i];
       const t2 = cuts[i + 1];
       if (!t1 || !t2 || t2.sub(t1).lte(0)) continue;
       const w = halfWidth(d0, phi, H, leg.start.add(t1), leg.start.add(t2)).add(PATH_MARGIN_M).add(ROUNDING_PAD_M);
-      const shape = corridor(add(leg.from, scale(u, t1)), add(leg.from, scale(u, t2)), w, PATH_MARGIN_M.add(ROUNDING_PAD_M));
+      // Pieces meet edge to edge inside a leg; only the leg's own ends get the placement margin.
+      const ext = PATH_MARGIN_M.add(ROUNDING_PAD_M);
+      const shape = corridor(add(leg.from, scale(u, t1)), add(leg.from, scale(u, t2)), w, i === 0 ? ext : new Dec(0), i + 2 === cuts.length ? ext : new Dec(0));
       n += 1;
       zones.push(
         zone(
