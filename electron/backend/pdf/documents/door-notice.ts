@@ -16,6 +16,7 @@ import { dec } from '../../../../core/numeric/decimal.js';
 import type { DocumentInput, RenderOptions } from '../document-input.js';
 import * as fmt from '../format.js';
 import { baseDocument, cautionBlock, contentWidth, fingerprintStack } from '../page.js';
+import { noticePlan } from '../plan/notice-plan.js';
 import { roomView, type RoomView } from '../room-view.js';
 import { precautionFor, signalWordFor, type SignalChoice } from '../signal-word.js';
 import { laserWarningSymbolSvg, safetyAlertSymbolSvg } from '../symbols/laser-warning.js';
@@ -165,22 +166,27 @@ export function doorNoticeDefinition(doc: DocumentInput, opts: RenderOptions): T
   const listSize = roomy ? 12 : view.lasers.length <= 4 && !letter ? 10.5 : 9.5;
   const officerContact = [doc.officer.phone, doc.officer.email].filter((x) => x.trim() !== '').join(' · ');
   const suitable = doc.results.eyewearCoveringAll;
+  // The room plan, small, beside the hazard lines (only when the assessment has a plan).
+  const smallPlan = noticePlan(doc, view, 108, dense ? 100 : 128, opts.entranceId);
+  // With the plan beside it, the symbol and the class line take the crowded-room sizes.
+  const symbol = dense || smallPlan ? 96 : letter ? 112 : 124;
 
   const content: Content[] = [
     signalPanel(choice, width, dense ? 60 : NOTICE_SIZES.signalWord),
     {
       margin: [0, 8, 0, 0],
       columns: [
-        { width: dense ? 96 : letter ? 112 : 124, svg: laserWarningSymbolSvg(dense ? 96 : letter ? 112 : 124), margin: [0, 2, 0, 0] },
+        { width: symbol, svg: laserWarningSymbolSvg(symbol), margin: [0, 2, 0, 0] },
         {
           width: '*',
           margin: [14, 0, 0, 0],
           stack: [
             ...hazardLines(view).map((t, i, all) => ({ text: t, fontSize: all.length > 1 && i === 0 ? 22 : all.length > 1 ? 30 : NOTICE_SIZES.hazardLine, bold: true, lineHeight: 1 })),
-            { text: [{ text: `CLASS ${view.highestClass} `, fontSize: dense ? 40 : NOTICE_SIZES.classLine }, { text: 'LASER AREA', fontSize: 24 }], bold: true, margin: [0, 2, 0, 2], lineHeight: 1 },
+            { text: [{ text: `CLASS ${view.highestClass} `, fontSize: dense || smallPlan ? 40 : NOTICE_SIZES.classLine }, { text: 'LASER AREA', fontSize: 24 }], bold: true, margin: [0, 2, 0, 2], lineHeight: 1 },
             { text: precautionFor(view.highestClass).toUpperCase(), fontSize: 13, bold: true, lineHeight: 1.05 },
           ],
         },
+        ...(smallPlan ? [smallPlan] : []),
       ],
     },
     eyewear.length > 0

@@ -37,7 +37,7 @@ export interface PlanSvg {
   readonly svg: string;
   readonly width: number;
   readonly height: number;
-  /** e.g. 50 for 1:50. */
+  /** e.g. 50 for 1:50; 0 for the small plan (drawn to fit, with a scale bar). */
   readonly ratio: number;
 }
 
@@ -109,13 +109,15 @@ export function planSvg(plan: RoomPlan, result: PlanResult | undefined, o: PlanS
   const y1 = Math.max(...ys) + margin;
   const legendRows = (cols: number) => Math.ceil(9 / cols);
   // Largest drawing at a standard ratio that fits.
-  const fit = Math.min(o.maxWidth / (x1 - x0), (o.maxHeight - (o.compact ? 0 : 56)) / (y1 - y0)); // pt per metre
-  const ratio = RATIOS.find((r) => 1000 / r * PT_PER_MM <= fit) ?? RATIOS[RATIOS.length - 1] ?? 5000;
-  const s = (1000 / ratio) * PT_PER_MM;
+  const fit = Math.min(o.maxWidth / (x1 - x0), (o.maxHeight - (o.compact ? 12 : 56)) / (y1 - y0)); // pt per metre
+  // The report uses a standard ratio; the small plan on the notice takes all the room it has.
+  const ratio = o.compact ? 0 : (RATIOS.find((r) => (1000 / r) * PT_PER_MM <= fit) ?? RATIOS[RATIOS.length - 1] ?? 5000);
+  const s = o.compact ? fit : (1000 / ratio) * PT_PER_MM;
   const W = (x1 - x0) * s;
   const Hd = (y1 - y0) * s;
   const legendCols = W >= 420 ? 3 : 2;
-  const legendH = o.compact ? 0 : legendRows(legendCols) * 10 + 6;
+  // The small plan has its scale bar in a band below the drawing instead of a legend.
+  const legendH = o.compact ? 12 : legendRows(legendCols) * 10 + 6;
   const X = (x: number) => (x - x0) * s;
   const Y = (y: number) => (y1 - y) * s;
   const P = (p: { x_m: number | string; y_m: number | string }): Pt => [Number(p.x_m), Number(p.y_m)];
@@ -127,7 +129,7 @@ export function planSvg(plan: RoomPlan, result: PlanResult | undefined, o: PlanS
   const grid: string[] = [];
   for (let gx = Math.ceil(x0); gx <= x1; gx++) grid.push(`M${n(X(gx))} 0V${n(Hd)}`);
   for (let gy = Math.ceil(y0); gy <= y1; gy++) grid.push(`M0 ${n(Y(gy))}H${n(W)}`);
-  out.push(`<path d="${grid.join('')}" stroke="#E4E4E4" stroke-width="0.4" fill="none"/>`);
+  if (!o.compact) out.push(`<path d="${grid.join('')}" stroke="#E4E4E4" stroke-width="0.4" fill="none"/>`);
   const poly = (ps: readonly PlanPointResult[], attrs: string) => {
     const c = clipRect(ps.map(P), x0, y0, x1, y1);
     if (c.length >= 3) out.push(`<polygon points="${c.map((q) => `${n(X(q[0]))},${n(Y(q[1]))}`).join(' ')}" ${attrs}/>`);
@@ -177,7 +179,8 @@ export function planSvg(plan: RoomPlan, result: PlanResult | undefined, o: PlanS
     const here = o.entranceId === d.id;
     seg(P(d.a), P(d.b), `stroke="#FFFFFF" stroke-width="${o.compact ? 2.4 : 3.2}"`);
     seg(P(d.a), P(d.b), `stroke="${here ? '#000000' : PLAN_INK.door}" stroke-width="${here ? 3 : o.compact ? 1.6 : 2.2}" stroke-dasharray="${here ? '0' : '1.5 1.5'}"`);
-    const label = here ? `${d.label}: THIS ENTRANCE` : `${d.label}${d.interlocked ? ' (interlocked)' : ''}`;
+    if (o.compact && !here) continue;
+    const label = here ? (o.compact ? 'THIS DOOR' : `${d.label}: this door`) : `${d.label}${d.interlocked ? ' (interlocked)' : ''}`;
     inwardLabel(P(d.a), P(d.b), label, here ? '#000000' : flagged.has(d.id) ? '#B3261E' : PLAN_INK.door, here || flagged.has(d.id));
   }
   for (const b of plan.barriers) {
@@ -228,14 +231,16 @@ export function planSvg(plan: RoomPlan, result: PlanResult | undefined, o: PlanS
   // scale bar (1 m or more) and north arrow
   const barM = [0.5, 1, 2, 5, 10, 20, 50].find((m) => m * s >= W / 8) ?? 1;
   const bx = 6;
-  const by = Hd - 7;
+  const by = o.compact ? Hd + 10 : Hd - 7;
   out.push(`<rect x="${bx}" y="${n(by - 3)}" width="${n((barM * s) / 2)}" height="3" fill="#222222"/>`);
   out.push(`<rect x="${n(bx + (barM * s) / 2)}" y="${n(by - 3)}" width="${n((barM * s) / 2)}" height="3" fill="#FFFFFF" stroke="#222222" stroke-width="0.5"/>`);
   text(bx, by - 5, '0');
   text(bx + barM * s, by - 5, `${barM} m`, 'middle');
-  text(bx + barM * s + 14, by, `scale 1:${ratio}`, 'start', '#444444');
-  out.push(`<path d="M${n(W - 10)} 5l3 8h-6z" fill="#222222"/>`);
-  text(W - 10, 21, 'N', 'middle');
+  if (ratio > 0) text(bx + barM * s + 14, by, `scale 1:${ratio}`, 'start', '#444444');
+  if (!o.compact) {
+    out.push(`<path d="M${n(W - 10)} 5l3 8h-6z" fill="#222222"/>`);
+    text(W - 10, 21, 'N', 'middle');
+  }
   if (!o.compact) {
     const items: Array<[string, string]> = [
       ['zone-direct', 'Direct-beam zone (to the NOHD)'],
