@@ -6,7 +6,7 @@
 import { Dec } from '../numeric/decimal.js';
 import type { RoomInput } from '../model/inputs.js';
 import type { BeamResult } from '../model/results.js';
-import { distanceToPolygon, insideWithin, segmentTouchesPolygon, type P } from './geometry.js';
+import { asRectangle, boxesApart, boxOf, insideBox, insideWithin, segmentTouchesPolygon, withinOfPolygon, type P } from './geometry.js';
 import type { PlanBeamRun, PlanFinding, PlanResult, RoomPlan } from './plan-model.js';
 import { tracePath, toP, type Leg } from './trace-path.js';
 import { CIRCLE_CORNERS, PATH_MARGIN_M, diffuseRadius, directLength, directZones, diffuseZones, insideEnclosure, roundPoint, type BeamOnPlan, type ZoneWithShape } from './plan-zones.js';
@@ -166,9 +166,10 @@ function beamFindings(plan: RoomPlan, b: BeamOnPlan, legs: readonly Leg[], dz: r
 }
 
 function placeFindings(plan: RoomPlan, zones: readonly ZoneWithShape[], out: PlanFinding[]): void {
-  const open = zones.filter((z) => !z.enclosed);
+  const open = zones.filter((z) => !z.enclosed).map((z) => ({ z, box: boxOf(z.shape) }));
   const seg = (kind: 'door' | 'window', id: string, label: string, a: P, b: P, interlocked?: boolean) => {
-    const inZones = open.filter((z) => segmentTouchesPolygon(a, b, z.shape));
+    const box = boxOf([a, b]);
+    const inZones = open.filter((o) => !boxesApart(box, o.box, 0) && segmentTouchesPolygon(a, b, o.z.shape)).map((o) => o.z);
     for (const z of firstPerBeamKind(inZones)) {
       const Name = `${kind === 'door' ? 'Door' : 'Window'} ${label}`;
       out.push({
@@ -191,7 +192,8 @@ function placeFindings(plan: RoomPlan, zones: readonly ZoneWithShape[], out: Pla
   for (const w of plan.workPositions) {
     const at = toP(w.at);
     const reach = new Dec(w.reach_m ?? 0);
-    const inZones = open.filter((z) => distanceToPolygon(at, z.shape).lte(reach));
+    const box = boxOf([at]);
+    const inZones = open.filter((o) => !boxesApart(box, o.box, reach.toNumber()) && withinOfPolygon(at, o.z.shape, reach)).map((o) => o.z);
     for (const z of firstPerBeamKind(inZones)) {
       out.push({
         kind: 'work-position-in-zone',
@@ -237,7 +239,9 @@ function controlledAreaFindings(plan: RoomPlan, zones: readonly ZoneWithShape[],
   const outline = ca.outline.map(toP);
   // A zone cut at a wall may overlap the wall line by its 1 mm pad: 5 mm is taken as on the boundary (ours).
   const tol = new Dec('0.005');
-  const out_ = (x: ZoneWithShape) => !x.enclosed && !insideWithin(x.shape, outline, tol);
+  const rect = asRectangle(outline);
+  const inside = (x: ZoneWithShape) => (rect ? insideBox(x.shape, rect.min, rect.max, tol) : insideWithin(x.shape, outline, tol));
+  const out_ = (x: ZoneWithShape) => !x.enclosed && !inside(x);
   const outside = firstPerBeamKind(zones.filter(out_));
   for (const z of outside) {
     out.push({

@@ -5,6 +5,12 @@
  */
 import { Dec, PI } from '../numeric/decimal.js';
 
+/**
+ * A 20-digit decimal for the slow functions of the plan geometry (ln, cos, sin): deterministic like
+ * the 40-digit one, and far more precise than the millimetre the zones are drawn to.
+ */
+export const DecGeo = Dec.clone({ precision: 20 });
+
 export interface P {
   readonly x: Dec;
   readonly y: Dec;
@@ -68,13 +74,20 @@ function onSegment(a: P, b: P, p: P): boolean {
   return Dec.min(a.x, b.x).lte(p.x) && p.x.lte(Dec.max(a.x, b.x)) && Dec.min(a.y, b.y).lte(p.y) && p.y.lte(Dec.max(a.y, b.y));
 }
 
-/** Distance from p to the closed segment a–b. */
-export function distanceToSegment(p: P, a: P, b: P): Dec {
+/** Squared distance from p to the closed segment a–b (no square root: comparisons use it squared). */
+export function distanceSqToSegment(p: P, a: P, b: P): Dec {
   const ab = sub(b, a);
   const L2 = dot(ab, ab);
-  if (L2.isZero()) return distance(p, a);
-  const t = Dec.min(1, Dec.max(0, dot(sub(p, a), ab).div(L2)));
-  return distance(p, add(a, scale(ab, t)));
+  const ap = sub(p, a);
+  if (L2.isZero()) return dot(ap, ap);
+  const t = Dec.min(1, Dec.max(0, dot(ap, ab).div(L2)));
+  const d = sub(p, add(a, scale(ab, t)));
+  return dot(d, d);
+}
+
+/** Distance from p to the closed segment a–b. */
+export function distanceToSegment(p: P, a: P, b: P): Dec {
+  return distanceSqToSegment(p, a, b).sqrt();
 }
 
 /** The closing edges of a polygon, each as [start, end]. */
@@ -92,7 +105,7 @@ export function edges(poly: readonly P[]): Array<readonly [P, P]> {
 export function pointInPolygon(p: P, poly: readonly P[]): boolean {
   let inside = false;
   for (const [b, a] of edges(poly)) {
-    if (distanceToSegment(p, a, b).isZero()) return true;
+    if (cross(sub(b, a), sub(p, a)).isZero() && onSegment(a, b, p)) return true;
     if (a.y.gt(p.y) !== b.y.gt(p.y)) {
       const xCross = b.x.sub(a.x).mul(p.y.sub(a.y)).div(b.y.sub(a.y)).add(a.x);
       if (p.x.lt(xCross)) inside = !inside;
@@ -101,15 +114,12 @@ export function pointInPolygon(p: P, poly: readonly P[]): boolean {
   return inside;
 }
 
-/** Distance from p to the polygon's area: 0 inside or on the boundary. */
-export function distanceToPolygon(p: P, poly: readonly P[]): Dec {
-  if (pointInPolygon(p, poly)) return new Dec(0);
-  let best: Dec | null = null;
-  for (const [a, b] of edges(poly)) {
-    const d = distanceToSegment(p, a, b);
-    if (best === null || d.lt(best)) best = d;
-  }
-  return best ?? new Dec(0);
+/** Is p within distance r of the polygon's area (inside, on the boundary, or at most r away)? */
+export function withinOfPolygon(p: P, poly: readonly P[], r: Dec): boolean {
+  if (pointInPolygon(p, poly)) return true;
+  const r2 = r.mul(r);
+  for (const [a, b] of edges(poly)) if (distanceSqToSegment(p, a, b).lte(r2)) return true;
+  return false;
 }
 
 /** Does the closed segment a–b touch the polygon's area? */
@@ -147,13 +157,26 @@ function properCross(a: P, a2: P, b: P, b2: P): boolean {
  * R·cos(π/n)); the polygon is never smaller than the circle.
  */
 export function circleOutside(c: P, r: Dec, n: number): P[] {
-  const R = r.div(Dec.cos(PI.div(n)));
-  const out: P[] = [];
+  const t = ringOf(n);
+  const R = r.div(t.apothem);
+  return t.corners.map((q) => ({ x: c.x.add(R.mul(q.x)), y: c.y.add(R.mul(q.y)) }));
+}
+
+/** Unit-circle corners and cos(π/n) of an n-gon, computed once per n (decimal trigonometry is slow). */
+const rings = new Map<number, { corners: P[]; apothem: Dec }>();
+function ringOf(n: number): { corners: P[]; apothem: Dec } {
+  const hit = rings.get(n);
+  if (hit) return hit;
+  const corners: P[] = [];
+  // 20 significant digits are plenty for corners rounded to the millimetre and are much faster;
+  // the apothem is rounded down so the polygon can only grow (derived).
   for (let k = 0; k < n; k++) {
-    const a = PI.mul(2 * k).div(n);
-    out.push({ x: c.x.add(R.mul(Dec.cos(a))), y: c.y.add(R.mul(Dec.sin(a))) });
+    const a = new DecGeo(PI.mul(2 * k).div(n));
+    corners.push({ x: new Dec(DecGeo.cos(a)), y: new Dec(DecGeo.sin(a)) });
   }
-  return out;
+  const ring = { corners, apothem: new Dec(DecGeo.cos(new DecGeo(PI.div(n)))).toSignificantDigits(18, Dec.ROUND_DOWN) };
+  rings.set(n, ring);
+  return ring;
 }
 
 /** The rectangle around the segment a–b: half-width w to each side, extended by eA before a and eB past b. */
@@ -209,6 +232,13 @@ export function clipToConvex(subject: readonly P[], clip: readonly P[], pad: Dec
     const n = { x: d.y.div(len), y: d.x.neg().div(len) }; // outward normal of a counter-clockwise side
     const f = (p: P) => dot(n, sub(p, a)).sub(pad); // <= 0 inside
     const input = out;
+    // Quick pass in ordinary numbers: a side that no point comes within 1 µm of cannot cut.
+    const nx = n.x.toNumber();
+    const ny = n.y.toNumber();
+    const ax = a.x.toNumber();
+    const ay = a.y.toNumber();
+    const padN = pad.toNumber();
+    if (input.every((p) => nx * (p.x.toNumber() - ax) + ny * (p.y.toNumber() - ay) - padN < -1e-6)) continue;
     out = [];
     let s = input[input.length - 1];
     for (const e of input) {
@@ -229,6 +259,60 @@ export function clipToConvex(subject: readonly P[], clip: readonly P[], pad: Dec
 
 /** Is every corner and side midpoint of `inner` within `tol` of the polygon `outer`? */
 export function insideWithin(inner: readonly P[], outer: readonly P[], tol: Dec): boolean {
-  const probes = [...inner, ...edges(inner).map(([a, b]) => scale(add(a, b), new Dec('0.5')))];
-  return probes.every((v) => distanceToPolygon(v, outer).lte(tol));
+  const probes = [...inner, ...edges(inner).map(([a, b]) => scale(add(a, b), HALF))];
+  return probes.every((v) => withinOfPolygon(v, outer, tol));
+}
+const HALF = new Dec('0.5');
+
+/** Bounding box in ordinary numbers, for a quick test before the exact one (never decides alone). */
+export interface Box {
+  readonly x0: number;
+  readonly y0: number;
+  readonly x1: number;
+  readonly y1: number;
+}
+
+export function boxOf(ps: readonly P[]): Box {
+  const xs = ps.map((p) => p.x.toNumber());
+  const ys = ps.map((p) => p.y.toNumber());
+  return { x0: Math.min(...xs), y0: Math.min(...ys), x1: Math.max(...xs), y1: Math.max(...ys) };
+}
+
+/**
+ * Boxes that are more than `gap` m apart (plus 1 µm for the rounding of ordinary numbers) cannot
+ * touch: the exact decimal test is skipped for them. Anything closer goes to the exact test.
+ */
+export function boxesApart(a: Box, b: Box, gap: number): boolean {
+  const g = gap + 1e-6;
+  return a.x1 + g < b.x0 || b.x1 + g < a.x0 || a.y1 + g < b.y0 || b.y1 + g < a.y0;
+}
+
+/**
+ * Is the polygon inside the axis-aligned box widened by `tol`? Decided in ordinary numbers where the
+ * answer is clear by more than 1 µm, exactly otherwise (a polygon is inside a box when its corners are).
+ */
+export function insideBox(poly: readonly P[], min: P, max: P, tol: Dec): boolean {
+  const b = boxOf(poly);
+  const t = tol.toNumber();
+  const lo = { x: min.x.toNumber() - t, y: min.y.toNumber() - t };
+  const hi = { x: max.x.toNumber() + t, y: max.y.toNumber() + t };
+  const m = 1e-6;
+  if (b.x0 > lo.x + m && b.y0 > lo.y + m && b.x1 < hi.x - m && b.y1 < hi.y - m) return true;
+  if (b.x0 < lo.x - m || b.y0 < lo.y - m || b.x1 > hi.x + m || b.y1 > hi.y + m) return false;
+  const x0 = min.x.sub(tol);
+  const y0 = min.y.sub(tol);
+  const x1 = max.x.add(tol);
+  const y1 = max.y.add(tol);
+  return poly.every((p) => p.x.gte(x0) && p.x.lte(x1) && p.y.gte(y0) && p.y.lte(y1));
+}
+
+/** The box of an axis-aligned rectangle given as a polygon, or null when it is not one. */
+export function asRectangle(poly: readonly P[]): { min: P; max: P } | null {
+  if (poly.length !== 4) return null;
+  const b = boxOf(poly);
+  const ok = poly.every((p) => (p.x.toNumber() === b.x0 || p.x.toNumber() === b.x1) && (p.y.toNumber() === b.y0 || p.y.toNumber() === b.y1));
+  if (!ok) return null;
+  const xs = poly.map((p) => p.x);
+  const ys = poly.map((p) => p.y);
+  return { min: { x: Dec.min(...xs), y: Dec.min(...ys) }, max: { x: Dec.max(...xs), y: Dec.max(...ys) } };
 }

@@ -13,7 +13,7 @@ import { Dec } from '../numeric/decimal.js';
 import { distanceReported } from '../beam/format.js';
 import type { BeamInput } from '../model/inputs.js';
 import type { BeamResult } from '../model/results.js';
-import { add, box, circleOutside, clipToConvex, corridor, edges, insideWithin, isConvex, pointInPolygon, rayHitsSegment, scale, unit, type P } from './geometry.js';
+import { DecGeo, add, box, circleOutside, clipToConvex, corridor, edges, insideBox, isConvex, pointInPolygon, rayHitsSegment, scale, unit, type P } from './geometry.js';
 import type { PlanPointResult, PlanZone, RoomPlan } from './plan-model.js';
 import { toP, type Leg } from './trace-path.js';
 
@@ -64,7 +64,8 @@ function oneOverE(beam: BeamInput): { d0: Dec; phi: Dec } {
 function halfWidth(d0: Dec, phi: Dec, nohd: Dec, z1: Dec, z2: Dec): Dec {
   if (phi.isZero()) return d0.mul(3);
   const DL = d0.add(phi.mul(nohd));
-  const r = (D: Dec) => (D.gte(DL) ? new Dec(0) : D.div(2).mul(DL.div(D).ln().mul(2).sqrt()));
+  // ln and √ at 20 digits (DecGeo), rounded up: the width is then never below the 40-digit value.
+  const r = (D: Dec) => (D.gte(DL) ? new Dec(0) : new Dec(new DecGeo(DL.div(D)).ln().mul(2).sqrt()).mul(D.div(2)).toSignificantDigits(15, Dec.ROUND_UP));
   const D1 = d0.add(phi.mul(z1));
   const D2 = d0.add(phi.mul(z2));
   const Dstar = DL.div(SQRT_E);
@@ -103,7 +104,7 @@ export function insideEnclosure(plan: RoomPlan, p: P): string | null {
 }
 
 function wholeInsideEnclosure(plan: RoomPlan, shape: readonly P[]): boolean {
-  return plan.enclosures.some((e) => insideWithin(shape, box(toP(e.min), toP(e.max)), ROUNDING_PAD_M.mul(2)));
+  return plan.enclosures.some((e) => insideBox(shape, toP(e.min), toP(e.max), ROUNDING_PAD_M.mul(2)));
 }
 
 function zone(base: Omit<ZoneWithShape, 'polygon' | 'enclosed'>, plan: RoomPlan): ZoneWithShape {
