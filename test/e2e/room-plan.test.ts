@@ -50,6 +50,13 @@ describe('the room plan in the workspace', () => {
     await page.waitForTimeout(300);
     await page.screenshot({ path: path.join(SHOTS, 'plan-ultrafast.png') });
     await panel.getByRole('group', { name: /Room plan, top view/ }).screenshot({ path: path.join(SHOTS, 'plan-ultrafast-drawing.png') });
+    // The plan's suggestions reach the Controls screen.
+    await page.keyboard.press('Alt+4');
+    const sugg = page.getByRole('region', { name: 'Suggested by the room plan' });
+    await sugg.getByText('Interlock door D2 to B2.16 so the beam stops or is blocked when it opens, or put a rated curtain or barrier inside it.').waitFor();
+    await sugg.scrollIntoViewIfNeeded();
+    await page.screenshot({ path: path.join(SHOTS, 'plan-controls.png') });
+    await page.keyboard.press('Alt+2');
   });
 
   it('draws a plan for a room, places the demo laser and finds the door inside the zone', async () => {
