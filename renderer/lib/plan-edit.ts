@@ -250,3 +250,58 @@ export function dropControlledArea(plan: RoomPlan): RoomPlan {
   const { controlledArea: _c, ...rest } = plan;
   return rest;
 }
+
+const GROUP_WORDS: Readonly<Record<string, string>> = {
+  doors: 'Door',
+  windows: 'Window',
+  walls: 'Wall',
+  barriers: 'Curtain or barrier',
+  workPositions: 'Work position',
+  enclosures: 'Enclosure',
+  reflectionPoints: 'Reflection point',
+};
+const PART_WORDS: Readonly<Record<string, string>> = {
+  a: 'one side',
+  b: 'other side',
+  at: 'place',
+  min: 'lower left corner',
+  max: 'upper right corner',
+  exit: 'beam exit',
+  x_m: 'x',
+  y_m: 'y',
+  onward_deg: 'direction of the open beam',
+  height_m: 'beam height',
+  laserId: 'laser',
+  label: 'name',
+  id: 'name',
+  rating: 'rating',
+  acceptedBy: 'accepted by',
+};
+
+/**
+ * A core error about the plan in officer words: "plan.doors[1].b: ..." becomes "Door D2, other
+ * side: ..." (the item's own name, never the field path).
+ */
+export function planErrorWords(message: string, field: string, plan: RoomPlan, lasers: readonly LaserRef[]): string {
+  // "(got {...}; valid: ...)" shows raw data: keep only what is valid.
+  const rest = (message.startsWith(field) ? message.slice(field.length) : `: ${message}`).replace(/\s*\(got .*; valid: (.*)\)$/, ' (expected $1)');
+  const m = /^plan\.(\w+)(?:\[(\d+)\])?(.*)$/.exec(field);
+  if (!m) return `Room plan${rest}`;
+  const [, group = '', idx, tail = ''] = m;
+  const i = idx === undefined ? -1 : Number(idx);
+  let what = 'Room plan';
+  if (group === 'outline') what = i >= 0 ? `Room corner ${i + 1}` : 'Room outline';
+  else if (group === 'controlledArea') what = 'Laser controlled area';
+  else if (group === 'paths') {
+    const id = plan.paths[i]?.laserId ?? '';
+    what = `Beam path of ${lasers.find((l) => l.id === id)?.name ?? 'a laser'}`;
+  } else if (GROUP_WORDS[group]) {
+    const item = (plan[group as Group] as ReadonlyArray<{ label?: string }>)[i];
+    what = `${GROUP_WORDS[group]} ${item?.label ?? i + 1}`;
+  }
+  const parts = tail
+    .split(/[.[\]]/)
+    .filter((x) => x !== '')
+    .map((x) => (/^\d+$/.test(x) ? `point ${Number(x) + 1}` : (PART_WORDS[x] ?? x)));
+  return `${[what, ...parts].join(', ')}${rest}`;
+}

@@ -59,3 +59,21 @@ describe('plan editor', () => {
     expect(screen.getByText(/Laser controlled area accepted by/)).toBeTruthy();
   });
 });
+
+describe('plan errors in officer words (never a field path on screen)', () => {
+  it('a door typed with both sides at one point is named by its own name', async () => {
+    const { evaluateRoom, InputError } = await import('../../core/index.js');
+    const { newPlan, planErrorWords } = await import('../../renderer/lib/plan-edit.js');
+    const base = newPlan([{ id: 'L1', name: 'Green laser' }]);
+    const bad: RoomPlan = { ...base, doors: [...base.doors, { id: 'D2', label: 'D2 store', a: { x_m: 1, y_m: 4 }, b: { x_m: 1, y_m: 4 } }] };
+    let words = '';
+    try {
+      evaluateRoom({ lasers, plan: bad });
+    } catch (e) {
+      if (!(e instanceof InputError)) throw e;
+      words = planErrorWords(e.message, e.field, bad, [{ id: 'L1', name: 'Green laser' }]);
+    }
+    expect(words).toMatch(/^Door D2 store, other side: /);
+    expect(words).not.toMatch(/plan\.|\[\d\]|_m\b/);
+  });
+});
