@@ -6,6 +6,7 @@
  */
 import * as m0001 from './0001_initial.js';
 import * as m0002 from './0002_list_columns_and_audit_log.js';
+import * as m0004 from './0004_revision_version.js';
 
 export interface Migration {
   readonly version: number;
@@ -16,6 +17,9 @@ export interface Migration {
 export const MIGRATIONS: readonly Migration[] = [
   { version: 1, name: m0001.name, sql: m0001.sql },
   { version: 2, name: m0002.name, sql: m0002.sql },
+  // Version 3 is reserved for another branch's migration; the runner applies the list in order and
+  // tolerates the gap until it lands (each entry names the version it brings the database to).
+  { version: 4, name: m0004.name, sql: m0004.sql },
 ];
 
-export const LATEST_VERSION = MIGRATIONS.length;
+export const LATEST_VERSION = MIGRATIONS[MIGRATIONS.length - 1]?.version ?? 0;
