@@ -25,3 +25,6 @@ export { eyewearVerdict, providedOd, type BeamNeed } from './eyewear/adequacy.js
 export { validateEyewear } from './room/validate-room.js';
 export { CLASS_CAVEAT } from './classes/estimate.js';
 export { nohdWithLimit, diffuseWithLimit, lensWithLimit, fiberWithLimit, type GivenLimit } from './hazard/with-limit.js';
+export * from './plan/plan-model.js';
+export { evaluatePlan, EYE_LEVEL_M } from './plan/evaluate-plan.js';
+export { validatePlan, PLAN_COORDINATE_RANGE_M } from './plan/validate-plan.js';

@@ -5,6 +5,8 @@
  * `verify`. Field names of `BeamInput` are the public API of issue 'Calculation core, part 2'.
  */
 
+import type { RoomPlan } from '../plan/plan-model.js';
+
 export type RuleSetId = 'icnirp2013' | 'eu2006';
 export type Tissue = 'eye' | 'skin';
 
@@ -135,4 +137,6 @@ export interface RoomInput {
   readonly settings?: LimitSettings;
   readonly lasers: readonly LaserInput[];
   readonly eyewear?: readonly EyewearSpec[];
+  /** The room plan (top view) with the beam paths; zones and findings come back in RoomResult.plan. */
+  readonly plan?: RoomPlan;
 }

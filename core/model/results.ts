@@ -6,6 +6,7 @@
  */
 import type { Trace } from '../trace/trace.js';
 import type { RuleSetId, Tissue } from './inputs.js';
+import type { PlanResult } from '../plan/plan-model.js';
 
 export type LaserClass = '1' | '1M' | '2' | '2M' | '3R' | '3B' | '4';
 export type PulseRule = 'cw' | 'single-pulse' | 'average-power' | 'pulse-train';
@@ -162,6 +163,8 @@ export interface RoomResult {
   readonly highestClass: LaserClass;
   readonly caution: string;
   readonly trace: Trace;
+  /** Hazard zones and findings on the room plan; present only when the input has a plan. */
+  readonly plan?: PlanResult;
 }
 
 /** Printed on every result and document (SAFETY.md). */

@@ -16,6 +16,7 @@ import type { TissueLimits } from '../beam/tissue-limits.js';
 import { distanceReported, fmt, rec } from '../beam/format.js';
 import { classRank } from '../classes/estimate.js';
 import { validateRoomShape } from './validate-room.js';
+import { planOfRoom } from '../plan/room-hook.js';
 import { coverageMatrix, coveringAll, purchaseAdvice, requiredByWavelength } from './coverage.js';
 
 const itemMemo = new WeakMap<TissueLimits, AdditiveItem>();
@@ -170,6 +171,7 @@ export function evaluateRoom(input: RoomInput): RoomResult {
   addStep(trace, { kind: 'result', label: 'Largest hazard distance', detail: `${distanceReported(largest)} m (${largestWhat}); compare with the room's walls, doors and windows`, value: fmt(largest), unit: 'm' });
   addStep(trace, { kind: 'result', label: 'Highest class', detail: `${highest} (labelled class, or the estimate where higher)` });
 
+  const plan = planOfRoom(input, beams, trace);
   return {
     ruleSet,
     ruleSetName: RULE_SET_NAME[ruleSet],
@@ -183,5 +185,6 @@ export function evaluateRoom(input: RoomInput): RoomResult {
     highestClass: highest,
     caution: RESULT_CAUTION,
     trace,
+    ...(plan ? { plan } : {}),
   };
 }

@@ -7,8 +7,10 @@ import {
   type EyewearSpec,
   type LimitSettings,
   type RoomInput,
+  type RoomPlan,
   type RuleSetId,
 } from '../../core/index.js';
+import { planForLasers } from './plan-edit.js';
 import type {
   AssessmentContent,
   ControlChoice,
@@ -36,6 +38,8 @@ export interface Draft {
   notes: string;
   /** '' = no review date. */
   reviewBy: string;
+  /** The room plan (replaced whole on every edit, see plan-edit.ts); null = no plan drawn. */
+  plan?: RoomPlan | null;
 }
 
 /** Deep, mutable copy of plain JSON data (records arrive frozen-shaped as readonly types). */
@@ -60,6 +64,7 @@ export function draftFrom(content: AssessmentContent, registeredLaserIds: Readon
     eyewearChosen: plainCopy([...content.eyewearChosen]),
     notes: content.notes,
     reviewBy: content.reviewBy ?? '',
+    plan: content.input.plan ? plainCopy(content.input.plan) : null,
   };
 }
 
@@ -99,7 +104,8 @@ export function roomInputFrom(d: Draft): DraftInput {
     }
   }
   const settings = Object.keys(d.settings).length > 0 ? { settings: d.settings } : {};
-  return { input: { ruleSet: d.ruleSet, ...settings, lasers, eyewear: d.eyewear }, incomplete, partial };
+  const plan = d.plan ? { plan: planForLasers(d.plan, lasers) } : {};
+  return { input: { ruleSet: d.ruleSet, ...settings, lasers, eyewear: d.eyewear, ...plan }, incomplete, partial };
 }
 
 /**

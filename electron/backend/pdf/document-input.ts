@@ -61,6 +61,8 @@ export interface RenderOptions {
   readonly units: UnitHabit;
   /** The door notice's signal word is chosen by class; an officer may raise it to DANGER (domain 5.1). */
   readonly signalWord?: 'DANGER';
+  /** Door of the room plan the notice is for (its small plan marks it); default the plan's first door. */
+  readonly entranceId?: string;
 }
 
 /** Options arriving from the UI or the command line are checked before use. */
@@ -69,6 +71,7 @@ export const renderOptionsSchema = z
     paper: z.enum(['A4', 'Letter']).default('A4'),
     units: z.enum(['SI', 'ANSI']).default('SI'),
     signalWord: z.literal('DANGER').optional(),
+    entranceId: z.string().min(1, 'must name a door of the room plan').optional(),
   })
   .strict();
 

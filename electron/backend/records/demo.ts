@@ -12,6 +12,7 @@ import { createAssessment, newAssessmentContent, signDraftWith } from './assessm
 import { signerFromKey } from './personal-keys.js';
 import { createEyewear, createInstallation, createPerson, createRoom, createSite, listSites } from './register.js';
 import type { AssessmentContent, ControlChoice, Site } from './types.js';
+import type { RoomPlan } from '../../../core/plan/plan-model.js';
 import { withEmergencyContact } from './emergency-contact.js';
 
 /** Our own asset: validated, but extra fields are ignored so the scenario can grow. */
@@ -53,8 +54,9 @@ export function seedDemo(ctx: StoreContext, raw: unknown = demoScenario): Site {
     for (const spec of scenario.eyewear) createEyewear(ctx, { siteId: site.id, spec, location: 'Eyewear cabinet, corridor B2' });
     scenario.rooms.forEach((r, index) => {
       const room = createRoom(ctx, { siteId: site.id, code: r.code, name: r.name, responsiblePerson: r.responsible, notes: r.notes });
+      const laserIds = new Map<string, string>();
       for (const laser of r.input.lasers) {
-        createInstallation(ctx, { roomId: room.id, laser, laserType: laser.name });
+        laserIds.set(laser.id, createInstallation(ctx, { roomId: room.id, laser, laserType: laser.name }).id);
       }
       const skeleton = newAssessmentContent(ctx, room.id);
       const content: AssessmentContent = {
@@ -63,6 +65,7 @@ export function seedDemo(ctx: StoreContext, raw: unknown = demoScenario): Site {
           ...skeleton.input,
           ...(r.input.ruleSet ? { ruleSet: r.input.ruleSet } : {}),
           ...(r.input.settings ? { settings: r.input.settings } : {}),
+          ...(r.input.plan ? { plan: planForRegister(r.input.plan, laserIds) } : {}),
         },
         controls: DEMO_CONTROLS,
         notes: r.notes,
@@ -83,4 +86,14 @@ export function seedDemo(ctx: StoreContext, raw: unknown = demoScenario): Site {
     ctx.audit('seeded-demo', 'site', site.id, scenario.site.name);
     return site;
   })();
+}
+
+/** The demo plan names lasers by their scenario ids; the register gives each installation its own id. */
+function planForRegister(plan: RoomPlan, ids: ReadonlyMap<string, string>): RoomPlan {
+  const to = (id: string) => ids.get(id) ?? id;
+  return {
+    ...plan,
+    paths: plan.paths.map((x) => ({ ...x, laserId: to(x.laserId) })),
+    reflectionPoints: plan.reflectionPoints.map((x) => ({ ...x, laserId: to(x.laserId) })),
+  };
 }

@@ -34,6 +34,7 @@ import {
 } from '../../../core/model/input-rules.js';
 import { SINGLE_MODE_NEEDS_MFD, exposureVsPulseProblem, pulseTrainProblem } from '../../../core/beam/validate-beam.js';
 import { assertType, type SameShape } from './type-equality.js';
+import { RoomPlanSchema } from './plan.js';
 
 /** A number checked against its rule in the one table (core/model/input-rules.ts). */
 const num = (rule: NumberRule) => {
@@ -204,6 +205,7 @@ export const RoomInputSchema = z.strictObject({
   settings: LimitSettingsSchema.optional(),
   lasers: z.array(LaserInputSchema),
   eyewear: z.array(EyewearSpecSchema).optional(),
+  plan: RoomPlanSchema.optional(),
 });
 
 /**

@@ -20,6 +20,7 @@ import type {
 import type { Trace, TraceStep } from '../../../core/trace/trace.js';
 import { LaserClassSchema, RuleSetIdSchema, TissueSchema } from './inputs.js';
 import { assertType, type SameShape } from './type-equality.js';
+import { PlanResultSchema } from './plan.js';
 
 /** A decimal string as the core writes it ("0.0125", "1.2e-7", "-3"). */
 export const DecimalStringSchema = z
@@ -175,6 +176,7 @@ export const RoomResultSchema = z.strictObject({
   highestClass: LaserClassSchema,
   caution: z.string(),
   trace: TraceSchema,
+  plan: PlanResultSchema.optional(),
 });
 
 // ---- compile-time proof that the schemas are the core types (fails to compile on drift)

@@ -16,6 +16,7 @@ import { dec } from '../../../../core/numeric/decimal.js';
 import type { DocumentInput, RenderOptions } from '../document-input.js';
 import * as fmt from '../format.js';
 import { baseDocument, cautionBlock, contentWidth, fingerprintStack } from '../page.js';
+import { noticePlan } from '../plan/notice-plan.js';
 import { roomView, type RoomView } from '../room-view.js';
 import { precautionFor, signalWordFor, type SignalChoice } from '../signal-word.js';
 import { laserWarningSymbolSvg, safetyAlertSymbolSvg } from '../symbols/laser-warning.js';
@@ -199,10 +200,14 @@ export function doorNoticeDefinition(doc: DocumentInput, opts: RenderOptions, fi
   const base = roomy ? 12.5 : view.lasers.length <= 4 && !letter ? 10.5 : view.lasers.length <= 7 ? 9 : 7.5;
   const detail = Math.max(base * shrink, 5.8); // 5.8 pt: still read at arm's length
   const listSize = (roomy ? 11.5 : view.lasers.length <= 4 && !letter ? 10.5 : 9.5) * near;
-  const symbol = (dense ? 96 : letter ? 112 : 124) * (fit >= 4 ? 0.62 : fit >= 3 ? 0.8 : 1);
+  // With the room plan beside the hazard lines, the symbol takes the crowded-room size.
+  const withPlan = doc.content.input.plan !== undefined;
+  const symbol = (dense || withPlan ? 96 : letter ? 112 : 124) * (fit >= 4 ? 0.62 : fit >= 3 ? 0.8 : 1);
   // From level 3 on, the hazard and class lines give up some size too (still far above 9 mm capitals at the lowest).
   const big = fit >= 4 ? 0.68 : fit >= 3 ? 0.82 : 1;
   const officerContact = [doc.officer.phone, doc.officer.email].filter((x) => x.trim() !== '').join(' · ');
+  // The room plan, small, beside the hazard lines (only when the assessment has a plan).
+  const smallPlan = noticePlan(doc, view, 108 * (fit >= 3 ? 0.85 : 1), dense ? 100 : 128, opts.entranceId);
   const covering = coveringEyewear(doc);
   const twoColumns = view.lasers.length > 10;
 
@@ -228,10 +233,11 @@ export function doorNoticeDefinition(doc: DocumentInput, opts: RenderOptions, fi
           margin: [14, 0, 0, 0],
           stack: [
             ...hazardLines(view).map((t, i, all) => ({ text: t, fontSize: (all.length > 1 && i === 0 ? 22 : all.length > 1 ? 30 : NOTICE_SIZES.hazardLine) * big, bold: true, lineHeight: 1 })),
-            { text: [{ text: `CLASS ${view.highestClass} `, fontSize: (dense ? 40 : NOTICE_SIZES.classLine) * big }, { text: 'LASER AREA', fontSize: 24 * big }], bold: true, margin: [0, 2, 0, 2], lineHeight: 1 },
+            { text: [{ text: `CLASS ${view.highestClass} `, fontSize: (dense || smallPlan ? 40 : NOTICE_SIZES.classLine) * big }, { text: 'LASER AREA', fontSize: 24 * big }], bold: true, margin: [0, 2, 0, 2], lineHeight: 1 },
             { text: precautionFor(view.highestClass).toUpperCase(), fontSize: 13 * Math.max(big, 0.8), bold: true, lineHeight: 1.05 },
           ],
         },
+        ...(smallPlan ? [smallPlan] : []),
       ],
     },
     eyewear.length > 0

@@ -6,6 +6,7 @@ import { roomView } from '../room-view.js';
 import { beamSummary, frontPage } from './report-front.js';
 import { inputsSection } from './report-inputs.js';
 import { derivationsSection, plotsSection } from './report-derivations.js';
+import { planSection } from '../plan/report-plan.js';
 import { controlsSection, eyewearSection, nonBeamSection, notesSection, signOffSection } from './report-tail.js';
 
 const SIDE = 40;
@@ -17,6 +18,7 @@ export function reportDefinition(doc: DocumentInput, opts: RenderOptions): TDocu
     ...frontPage(doc, view),
     ...beamSummary(doc, view, opts.units),
     ...inputsSection(doc, view, opts.units),
+    ...planSection(doc, view, width),
     ...plotsSection(doc, view, opts.units, width),
     ...controlsSection(doc),
     ...eyewearSection(doc, view),

@@ -1,0 +1,260 @@
+/**
+ * evaluatePlan: the room plan against the room's evaluation. Zones (core/plan/plan-zones.ts),
+ * the beam runs, and findings in officer words with the control each suggests. Results support,
+ * and do not replace, the judgement of the site laser safety officer and the local regulations.
+ */
+import { Dec } from '../numeric/decimal.js';
+import type { RoomInput } from '../model/inputs.js';
+import type { BeamResult } from '../model/results.js';
+import { asRectangle, boxesApart, boxOf, insideBox, insideWithin, segmentTouchesPolygon, withinOfPolygon, type P } from './geometry.js';
+import type { PlanBeamRun, PlanFinding, PlanResult, RoomPlan } from './plan-model.js';
+import { tracePath, toP, type Leg } from './trace-path.js';
+import { CIRCLE_CORNERS, PATH_MARGIN_M, diffuseRadius, directLength, directZones, diffuseZones, insideEnclosure, roundPoint, type BeamOnPlan, type ZoneWithShape } from './plan-zones.js';
+
+/** Eye level of standing and seated people, about 1.2 m to 1.8 m above the floor (domain.md 4.3, [STAN-OLD]). */
+export const EYE_LEVEL_M: readonly [number, number] = [1.2, 1.8];
+
+/** A distance for a sentence: metres, or kilometres from 1 km, 3 significant figures (already rounded up). */
+function metres(d: Dec): string {
+  return d.gte(1000) ? `${d.div(1000).toSignificantDigits(3, Dec.ROUND_UP).toString()} km` : `${d.toSignificantDigits(3, Dec.ROUND_UP).toString()} m`;
+}
+
+function zoneWords(z: ZoneWithShape): string {
+  return z.kind === 'direct' ? `the direct-beam zone of ${beamName(z)}` : `the diffuse-reflection zone of ${beamName(z)}`;
+}
+
+const names = new WeakMap<ZoneWithShape, string>();
+function beamName(z: ZoneWithShape): string {
+  return names.get(z) ?? z.beamId;
+}
+
+export const PLAN_METHOD: readonly string[] = [
+  `Direct-beam zones follow the drawn beam path up to the NOHD (rounded up, or the upper bound from the input tolerances where larger), stopped by beam dumps, targets, walls and barriers; doors and windows are taken as open.`,
+  `Their width is where the exposure of a Gaussian beam exceeds the limit (derived from the beam diameter, divergence and NOHD), plus ${PATH_MARGIN_M.mul(1000).toString()} mm on each side for the accuracy of the drawing.`,
+  `Diffuse-reflection zones are drawn around a circle of the diffuse NHZ (rounded up) about every mirror and target the beam reaches, every point where it ends on a wall or barrier, and every reflection point marked on the plan (a ${CIRCLE_CORNERS}-sided polygon outside the circle).`,
+  'Walls are taken as opaque to scattered light: a diffuse-reflection zone is cut at the walls of a convex room outline, and at the enclosure a reflection point lies in; a door or window the zone reaches is reported.',
+  'Every zone is widened by 1 mm before its corners are rounded to the millimetre, so no zone is drawn smaller than computed. Heights are not modelled except for the eye-level check of a stated beam height.',
+];
+
+export function evaluatePlan(plan: RoomPlan, input: RoomInput, beams: readonly BeamResult[]): PlanResult {
+  // Beams in evaluation order, with their inputs (evaluateRoom keeps the lasers × beams order).
+  const onPlan: BeamOnPlan[] = [];
+  let k = 0;
+  for (const laser of input.lasers) {
+    for (const b of laser.beams) {
+      const result = beams[k++];
+      if (result) onPlan.push({ laserId: laser.id, laserName: laser.name, input: b, result });
+    }
+  }
+  const findings: PlanFinding[] = [];
+  const zones: ZoneWithShape[] = [];
+  const runs: PlanBeamRun[] = [];
+
+  for (const laser of input.lasers) {
+    const path = plan.paths.find((p) => p.laserId === laser.id);
+    if (!path) {
+      findings.push({ kind: 'path-not-placed', severity: 'check', subjectId: laser.id, zoneIds: [], text: `${laser.name} is not placed on the plan, so its hazard zones are not drawn.`, suggestion: `Place ${laser.name} and its beam path on the plan.` });
+      continue;
+    }
+    const mine = onPlan.filter((b) => b.laserId === laser.id);
+    const far = mine.reduce((m, b) => Dec.max(m, directLength(b.result)), new Dec(1)).add(1);
+    const legs = tracePath(plan, path, far);
+    for (const b of mine) {
+      const { zones: dz, run } = directZones(plan, b, legs);
+      const fz = diffuseZones(plan, b, legs);
+      for (const z of [...dz, ...fz]) names.set(z, b.result.label);
+      zones.push(...dz, ...fz);
+      const last = legs[legs.length - 1];
+      if (last && run.points.length > 1) runs.push(runOf(b, last, run.points, run.length));
+      beamFindings(plan, b, legs, dz, findings, path.height_m);
+      if (diffuseRadius(b.result) === null) {
+        findings.push({ kind: 'no-diffuse-distance', severity: 'check', subjectId: b.result.beamId, zoneIds: [], text: `No diffuse reflection was assessed for ${b.result.label}, so no diffuse-reflection zone is drawn for it.`, suggestion: `Add a diffuse reflection to the viewing conditions of ${b.result.label} (reflectance of the surfaces the beam can meet).` });
+      }
+    }
+  }
+
+  placeFindings(plan, zones, findings);
+  controlledAreaFindings(plan, zones, findings);
+
+  const suggestions: string[] = [];
+  for (const f of findings) if (f.suggestion && !suggestions.includes(f.suggestion)) suggestions.push(f.suggestion);
+  return {
+    zones: zones.map(({ shape: _shape, ...z }) => z),
+    runs,
+    findings,
+    suggestions,
+    method: PLAN_METHOD,
+  };
+}
+
+function runOf(b: BeamOnPlan, last: Leg, points: P[], length: Dec): PlanBeamRun {
+  const physicalEnd = last.end;
+  const endsAt: PlanBeamRun['endsAt'] = length.lt(physicalEnd) || last.endsWith === 'open' || last.endsWith === 'mirror' ? 'nohd' : (last.endsWith as 'dump' | 'target' | 'wall' | 'barrier');
+  const endDetail =
+    endsAt === 'nohd'
+      ? `The direct beam is above the limit for ${metres(length)} along its path.`
+      : `The direct beam ends at ${last.endId} ${metres(last.end)} along its path.`;
+  return { beamId: b.result.beamId, laserId: b.laserId, points: points.map(roundPoint), endsAt, endDetail };
+}
+
+function beamFindings(plan: RoomPlan, b: BeamOnPlan, legs: readonly Leg[], dz: readonly ZoneWithShape[], out: PlanFinding[], height_m: number | undefined): void {
+  const H = directLength(b.result);
+  const label = b.result.label;
+  const ids = dz.map((z) => z.id);
+  if (dz.length === 0) return;
+  for (const leg of legs) {
+    if (leg.start.gte(H)) break;
+    // Leaving through a door or window while still above the limit.
+    for (const o of leg.openings) {
+      if (o.at.gt(H)) continue;
+      const item = o.kind === 'door' ? plan.doors.find((d) => d.id === o.id) : plan.windows.find((w) => w.id === o.id);
+      const name = `${o.kind === 'door' ? 'door' : 'window'} ${item?.label ?? o.id}`;
+      out.push({
+        kind: 'leaves-room',
+        severity: 'hazard',
+        subjectId: o.id,
+        zoneIds: ids,
+        text: `The direct beam of ${label} passes ${name} ${metres(o.at)} along its path, still above the limit (hazard distance ${metres(H)}${H.gt(b.result.nohd_m_reported) ? ', the upper bound from the input tolerances' : ''}).`,
+        suggestion: `End the beam of ${label} in a beam dump before it reaches ${name}.`,
+      });
+    }
+    // Stopped by a barrier or curtain within the NOHD: the rating must hold.
+    if (leg.endsWith === 'barrier' && leg.end.lte(H)) {
+      const bar = plan.barriers.find((x) => x.id === leg.endId);
+      const what = `${bar?.kind === 'curtain' ? 'curtain' : 'barrier'} ${bar?.label ?? leg.endId}`;
+      out.push({
+        kind: 'stopped-by-barrier',
+        severity: 'check',
+        subjectId: leg.endId,
+        zoneIds: ids,
+        text: `The direct beam of ${label} (${b.result.emissionSummary}) is stopped by ${what}${bar?.rating ? ` (rating: ${bar.rating})` : ' (no rating recorded)'}.`,
+        suggestion: `Check that the rating of ${what} covers the beam of ${label} for the exposure time, or end the beam in a beam dump before it.`,
+      });
+    }
+  }
+  // Leaving an enclosure while above the limit: walk the run pieces by enclosure.
+  for (const leg of legs) {
+    if (leg.start.gte(H)) break;
+    const fromIn = insideEnclosure(plan, leg.from);
+    const endAlong = Dec.min(leg.end, H);
+    const len = leg.end.sub(leg.start);
+    const frac = len.isZero() ? new Dec(0) : endAlong.sub(leg.start).div(len);
+    const endPt: P = { x: leg.from.x.add(leg.to.x.sub(leg.from.x).mul(frac)), y: leg.from.y.add(leg.to.y.sub(leg.from.y).mul(frac)) };
+    const toIn = insideEnclosure(plan, endPt);
+    if (fromIn !== null && toIn !== fromIn) {
+      const enc = plan.enclosures.find((e) => e.id === fromIn);
+      out.push({
+        kind: 'leaves-enclosure',
+        severity: 'hazard',
+        subjectId: fromIn,
+        zoneIds: ids,
+        text: `The direct beam of ${label} leaves enclosure ${enc?.label ?? fromIn} while still above the limit.`,
+        suggestion: `Close the opening of enclosure ${enc?.label ?? fromIn} or end the beam of ${label} inside it with a beam dump.`,
+      });
+    }
+  }
+  if (height_m !== undefined && height_m >= EYE_LEVEL_M[0] && height_m <= EYE_LEVEL_M[1] && dz.some((z) => !z.enclosed) && !out.some((f) => f.kind === 'beam-at-eye-level' && f.subjectId === b.laserId)) {
+    out.push({
+      kind: 'beam-at-eye-level',
+      severity: 'check',
+      subjectId: b.laserId,
+      zoneIds: ids,
+      text: `The open beam path of ${b.laserName} runs ${height_m} m above the floor, within eye level of standing and seated people (about ${EYE_LEVEL_M[0]} m to ${EYE_LEVEL_M[1]} m).`,
+      suggestion: `Raise or lower the beam path of ${b.laserName} out of eye level, or enclose it.`,
+    });
+  }
+}
+
+function placeFindings(plan: RoomPlan, zones: readonly ZoneWithShape[], out: PlanFinding[]): void {
+  const open = zones.filter((z) => !z.enclosed).map((z) => ({ z, box: boxOf(z.shape) }));
+  const seg = (kind: 'door' | 'window', id: string, label: string, a: P, b: P, interlocked?: boolean) => {
+    const box = boxOf([a, b]);
+    const inZones = open.filter((o) => !boxesApart(box, o.box, 0) && segmentTouchesPolygon(a, b, o.z.shape)).map((o) => o.z);
+    for (const z of firstPerBeamKind(inZones)) {
+      const Name = `${kind === 'door' ? 'Door' : 'Window'} ${label}`;
+      out.push({
+        kind: kind === 'door' ? 'door-in-zone' : 'window-in-zone',
+        severity: 'hazard',
+        subjectId: id,
+        zoneIds: inZones.filter((x) => x.beamId === z.beamId && x.kind === z.kind).map((x) => x.id),
+        text: `${Name} is inside ${zoneWords(z)}${kind === 'door' && interlocked ? ' (the door is interlocked)' : ''}.`,
+        suggestion:
+          kind === 'door'
+            ? interlocked
+              ? `Check that the interlock of door ${label} stops or blocks the beam before anyone in the doorway can be exposed.`
+              : `Interlock door ${label} so the beam stops or is blocked when it opens, or put a rated curtain or barrier inside it.`
+            : `Cover window ${label} with a rated blind or barrier, or stop the beam before it can reach the window.`,
+      });
+    }
+  };
+  for (const d of plan.doors) seg('door', d.id, d.label, toP(d.a), toP(d.b), d.interlocked);
+  for (const w of plan.windows) seg('window', w.id, w.label, toP(w.a), toP(w.b));
+  for (const w of plan.workPositions) {
+    const at = toP(w.at);
+    const reach = new Dec(w.reach_m ?? 0);
+    const box = boxOf([at]);
+    const inZones = open.filter((o) => !boxesApart(box, o.box, reach.toNumber()) && withinOfPolygon(at, o.z.shape, reach)).map((o) => o.z);
+    for (const z of firstPerBeamKind(inZones)) {
+      out.push({
+        kind: 'work-position-in-zone',
+        severity: 'hazard',
+        subjectId: w.id,
+        zoneIds: inZones.filter((x) => x.beamId === z.beamId && x.kind === z.kind).map((x) => x.id),
+        text: `Work position ${w.label} is inside ${zoneWords(z)}.`,
+        suggestion:
+          z.kind === 'direct'
+            ? `Move work position ${w.label} out of the beam path, or raise the beam height above eye level (about ${EYE_LEVEL_M[1]} m) or enclose the beam there.`
+            : `Move work position ${w.label} away from the reflection point, or screen the reflection with a rated barrier; otherwise the eyewear chosen must be worn there.`,
+      });
+    }
+  }
+}
+
+/** One finding per beam and zone kind (a long beam has several pieces). */
+function firstPerBeamKind(zs: readonly ZoneWithShape[]): ZoneWithShape[] {
+  const seen = new Set<string>();
+  const out: ZoneWithShape[] = [];
+  for (const z of zs) {
+    const key = `${z.beamId}|${z.kind}`;
+    if (seen.has(key)) continue;
+    seen.add(key);
+    out.push(z);
+  }
+  return out;
+}
+
+function controlledAreaFindings(plan: RoomPlan, zones: readonly ZoneWithShape[], out: PlanFinding[]): void {
+  const ca = plan.controlledArea;
+  if (!ca) {
+    out.push({
+      kind: 'no-controlled-area',
+      severity: 'check',
+      subjectId: 'plan',
+      zoneIds: [],
+      text: 'No laser controlled area boundary has been accepted on the plan.',
+      suggestion: 'Draw the laser controlled area boundary around every hazard zone (often the whole room) and record who accepted it.',
+    });
+    return;
+  }
+  const outline = ca.outline.map(toP);
+  // A zone cut at a wall may overlap the wall line by its 1 mm pad: 5 mm is taken as on the boundary (ours).
+  const tol = new Dec('0.005');
+  const rect = asRectangle(outline);
+  const inside = (x: ZoneWithShape) => (rect ? insideBox(x.shape, rect.min, rect.max, tol) : insideWithin(x.shape, outline, tol));
+  const out_ = (x: ZoneWithShape) => !x.enclosed && !inside(x);
+  const outside = firstPerBeamKind(zones.filter(out_));
+  for (const z of outside) {
+    out.push({
+      kind: 'outside-controlled-area',
+      severity: 'hazard',
+      subjectId: z.beamId,
+      zoneIds: zones.filter((x) => x.beamId === z.beamId && x.kind === z.kind && out_(x)).map((x) => x.id),
+      text: `${capital(zoneWords(z))} reaches outside the accepted laser controlled area.`,
+      suggestion: z.kind === 'direct' ? `Stop the beam of ${beamName(z)} inside the laser controlled area (beam dump or rated barrier), or enlarge the area.` : `Enlarge the laser controlled area to take in the diffuse-reflection zones of ${beamName(z)}, or screen them.`,
+    });
+  }
+}
+
+function capital(s: string): string {
+  return s.charAt(0).toUpperCase() + s.slice(1);
+}

@@ -1,0 +1,222 @@
+/**
+ * Hazard zones on the plan, from the same evaluation as the numbers (never re-derived in the UI):
+ * - direct beam: along the traced path up to the NOHD (rounded up; the upper bound from the input
+ *   tolerances where larger), as wide as the region where the exposure exceeds the limit, plus a
+ *   placement margin;
+ * - diffuse reflection: a polygon around the circle of the diffuse NHZ (rounded up) about every
+ *   mirror and target the beam reaches, every point where it ends on a wall or barrier, and every
+ *   reflection point the officer marked.
+ * Every zone is widened by 1 mm and its corners rounded to the millimetre, so no zone is drawn
+ * smaller than computed (derived: rounding a corner to 1 mm moves it by at most 0.71 mm).
+ */
+import { Dec } from '../numeric/decimal.js';
+import { distanceReported } from '../beam/format.js';
+import type { BeamInput } from '../model/inputs.js';
+import type { BeamResult } from '../model/results.js';
+import { DecGeo, add, box, circleOutside, clipToConvex, corridor, edges, insideBox, isConvex, pointInPolygon, rayHitsSegment, scale, unit, type P } from './geometry.js';
+import type { PlanPointResult, PlanZone, RoomPlan } from './plan-model.js';
+import { toP, type Leg } from './trace-path.js';
+
+/** Placement margin on each side of a drawn beam path, m (ours: a drawn plan is good to a few centimetres). */
+export const PATH_MARGIN_M = new Dec('0.05');
+/** Widening before rounding corners to the millimetre (derived: covers the 0.71 mm a corner can move). */
+const ROUNDING_PAD_M = new Dec('0.001');
+/** Corners of the polygon drawn around a circle. */
+export const CIRCLE_CORNERS = 24;
+
+const SQRT_E = new Dec(1).exp().sqrt();
+
+export function roundPoint(p: P): PlanPointResult {
+  return { x_m: p.x.toDecimalPlaces(3).toString(), y_m: p.y.toDecimalPlaces(3).toString() };
+}
+
+/** The direct-beam distance to draw: the NOHD rounded up, or the tolerance upper bound where larger. */
+export function directLength(b: BeamResult): Dec {
+  const nominal = new Dec(b.nohd_m_reported);
+  const upper = new Dec(distanceReported(new Dec(b.bounds.nohd_m.conservative)));
+  return Dec.max(nominal, upper);
+}
+
+/** Diffuse NHZ radius rounded up, or null when no diffuse reflection was assessed. */
+export function diffuseRadius(b: BeamResult): Dec | null {
+  return b.nhzDiffuse_m === null ? null : new Dec(distanceReported(new Dec(b.nhzDiffuse_m)));
+}
+
+/**
+ * Beam diameter at the 1/e irradiance points, at the exit and its growth per metre (larger axis for
+ * elliptical beams). A 1/e² diameter is 1/e diameter × √2 for a Gaussian beam (derived); 'd63' is
+ * taken as the 1/e diameter (IEC 60825-1 d63 equals it for a Gaussian beam).
+ */
+function oneOverE(beam: BeamInput): { d0: Dec; phi: Dec } {
+  const d = Dec.max(beam.beam.diameter_m, beam.beam.diameterY_m ?? 0);
+  const f = Dec.max(beam.beam.divergence_rad, beam.beam.divergenceY_rad ?? 0);
+  const k = beam.beam.definition === '1/e2' ? new Dec(2).sqrt() : new Dec(1);
+  return { d0: d.div(k), phi: f.div(k) };
+}
+
+/**
+ * Largest half-width of the over-limit region between path distances z1 and z2. For a Gaussian
+ * beam of 1/e diameter D whose on-axis exposure reaches the limit at diameter D_L = D0 + φ·NOHD,
+ * the exposure exceeds the limit out to r = (D/2)·√(2·ln(D_L/D)) (derived from
+ * E(r) = E0·exp(−4r²/D²) and E0 ∝ 1/D²); r is largest, D_L/(2√e), where D = D_L/√e.
+ * With no divergence D_L is unknown and three beam diameters are used (ours).
+ */
+function halfWidth(d0: Dec, phi: Dec, nohd: Dec, z1: Dec, z2: Dec): Dec {
+  if (phi.isZero()) return d0.mul(3);
+  const DL = d0.add(phi.mul(nohd));
+  // ln and √ at 20 digits (DecGeo), rounded up: the width is then never below the 40-digit value.
+  const r = (D: Dec) => (D.gte(DL) ? new Dec(0) : new Dec(new DecGeo(DL.div(D)).ln().mul(2).sqrt()).mul(D.div(2)).toSignificantDigits(15, Dec.ROUND_UP));
+  const D1 = d0.add(phi.mul(z1));
+  const D2 = d0.add(phi.mul(z2));
+  const Dstar = DL.div(SQRT_E);
+  if (D2.lte(Dstar)) return r(D2);
+  if (D1.gte(Dstar)) return r(D1);
+  return DL.div(SQRT_E.mul(2));
+}
+
+export interface BeamOnPlan {
+  readonly laserId: string;
+  readonly laserName: string;
+  readonly input: BeamInput;
+  readonly result: BeamResult;
+}
+
+export interface ZoneWithShape extends PlanZone {
+  readonly shape: readonly P[];
+}
+
+/** Split points along a leg where it crosses an enclosure wall (fractions 0..1 of the leg). */
+function enclosureCuts(plan: RoomPlan, a: P, b: P, len: Dec): Dec[] {
+  const cuts: Dec[] = [];
+  const u = unit(a, b);
+  for (const e of plan.enclosures) {
+    for (const [p, q] of edges(box(toP(e.min), toP(e.max)))) {
+      const t = rayHitsSegment(a, u, p, q);
+      if (t !== null && t.gt(0) && t.lt(len)) cuts.push(t);
+    }
+  }
+  return cuts.sort((x, y) => x.cmp(y));
+}
+
+export function insideEnclosure(plan: RoomPlan, p: P): string | null {
+  for (const e of plan.enclosures) if (pointInPolygon(p, box(toP(e.min), toP(e.max)))) return e.id;
+  return null;
+}
+
+function wholeInsideEnclosure(plan: RoomPlan, shape: readonly P[]): boolean {
+  return plan.enclosures.some((e) => insideBox(shape, toP(e.min), toP(e.max), ROUNDING_PAD_M.mul(2)));
+}
+
+function zone(base: Omit<ZoneWithShape, 'polygon' | 'enclosed'>, plan: RoomPlan): ZoneWithShape {
+  return { ...base, polygon: base.shape.map(roundPoint), enclosed: wholeInsideEnclosure(plan, base.shape) };
+}
+
+/**
+ * Cuts at path distances 1, 2, 4, 8 ... m so the zone widens in steps with the beam instead of
+ * taking its widest point along the whole leg (each step still takes the widest point of its own
+ * stretch, so no step is narrower than the over-limit region).
+ */
+function taperCuts(legStart: Dec, pieceLen: Dec): Dec[] {
+  const out: Dec[] = [];
+  for (let d = new Dec(1); d.lt(legStart.add(pieceLen)); d = d.mul(2)) {
+    const t = d.sub(legStart);
+    if (t.gt(0)) out.push(t);
+  }
+  return out;
+}
+
+export interface DirectRun {
+  readonly points: P[];
+  /** Where the drawn direct zone ends along the path, m. */
+  readonly length: Dec;
+}
+
+/** Direct-beam zone pieces of one beam along its traced legs. */
+export function directZones(plan: RoomPlan, beam: BeamOnPlan, legs: readonly Leg[]): { zones: ZoneWithShape[]; run: DirectRun } {
+  const H = directLength(beam.result);
+  const { d0, phi } = oneOverE(beam.input);
+  const zones: ZoneWithShape[] = [];
+  const points: P[] = [];
+  let n = 0;
+  for (const leg of legs) {
+    if (leg.start.gte(H)) break;
+    const legLen = leg.end.sub(leg.start);
+    const pieceLen = Dec.min(legLen, H.sub(leg.start));
+    if (pieceLen.lte(0)) break;
+    const u = unit(leg.from, leg.to);
+    const end = add(leg.from, scale(u, pieceLen));
+    if (points.length === 0) points.push(leg.from);
+    points.push(end);
+    const cuts = [new Dec(0), ...enclosureCuts(plan, leg.from, end, pieceLen), ...taperCuts(leg.start, pieceLen), pieceLen]
+      .sort((x, y) => x.cmp(y))
+      .filter((c, k, all) => k === 0 || !c.eq(all[k - 1] ?? c));
+    for (let i = 0; i + 1 < cuts.length; i++) {
+      const t1 = cuts[i];
+      const t2 = cuts[i + 1];
+      if (!t1 || !t2 || t2.sub(t1).lte(0)) continue;
+      const w = halfWidth(d0, phi, H, leg.start.add(t1), leg.start.add(t2)).add(PATH_MARGIN_M).add(ROUNDING_PAD_M);
+      // Pieces meet edge to edge inside a leg; only the leg's own ends get the placement margin.
+      const ext = PATH_MARGIN_M.add(ROUNDING_PAD_M);
+      const shape = corridor(add(leg.from, scale(u, t1)), add(leg.from, scale(u, t2)), w, i === 0 ? ext : new Dec(0), i + 2 === cuts.length ? ext : new Dec(0));
+      n += 1;
+      zones.push(
+        zone(
+          {
+            id: `${beam.result.beamId}:direct:${n}`,
+            kind: 'direct',
+            beamId: beam.result.beamId,
+            laserId: beam.laserId,
+            label: `Direct beam of ${beam.result.label}`,
+            shape,
+          },
+          plan,
+        ),
+      );
+    }
+  }
+  const last = legs[legs.length - 1];
+  return { zones, run: { points, length: Dec.min(H, last ? last.end : new Dec(0)) } };
+}
+
+/** Reflection points a beam reaches: mirrors and targets on its path, where it ends on a wall or barrier, and marked points. */
+export function reflectionPointsOf(plan: RoomPlan, laserId: string, legs: readonly Leg[]): Array<{ key: string; at: P; what: string }> {
+  const out: Array<{ key: string; at: P; what: string }> = [];
+  legs.forEach((leg, i) => {
+    if (leg.endsWith === 'mirror' || leg.endsWith === 'target') out.push({ key: `p${i + 1}`, at: leg.to, what: leg.endId });
+    if (leg.endsWith === 'wall' || leg.endsWith === 'barrier') out.push({ key: `p${i + 1}`, at: leg.to, what: `where the beam meets ${leg.endsWith === 'wall' ? 'the wall' : 'the barrier'}` });
+  });
+  for (const r of plan.reflectionPoints) if (r.laserId === laserId) out.push({ key: r.id, at: toP(r.at), what: r.label });
+  return out;
+}
+
+/**
+ * Walls are opaque to scattered light: a diffuse zone is cut at the room's walls (a convex outline
+ * only; otherwise it is left whole) and, for a reflection point inside an enclosure, at the
+ * enclosure. Doors and windows in the walls are reported when a zone reaches them.
+ */
+function clipDiffuse(plan: RoomPlan, centre: P, shape: P[]): P[] {
+  const encl = plan.enclosures.find((e) => pointInPolygon(centre, box(toP(e.min), toP(e.max))));
+  const bounds = encl ? box(toP(encl.min), toP(encl.max)) : plan.outline.map(toP);
+  if (!encl && (!isConvex(bounds) || !pointInPolygon(centre, bounds))) return shape;
+  const clipped = clipToConvex(shape, bounds, ROUNDING_PAD_M);
+  return clipped.length >= 3 ? clipped : shape;
+}
+
+export function diffuseZones(plan: RoomPlan, beam: BeamOnPlan, legs: readonly Leg[]): ZoneWithShape[] {
+  const R = diffuseRadius(beam.result);
+  if (R === null || R.isZero()) return [];
+  return reflectionPointsOf(plan, beam.laserId, legs).map((p) =>
+    zone(
+      {
+        id: `${beam.result.beamId}:diffuse:${p.key}`,
+        kind: 'diffuse',
+        beamId: beam.result.beamId,
+        laserId: beam.laserId,
+        label: `Diffuse reflection of ${beam.result.label} at ${p.what}`,
+        shape: clipDiffuse(plan, p.at, circleOutside(p.at, R.add(ROUNDING_PAD_M), CIRCLE_CORNERS)),
+        radius_m: R.toString(),
+      },
+      plan,
+    ),
+  );
+}

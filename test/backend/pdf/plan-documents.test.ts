@@ -1,0 +1,75 @@
+// @vitest-environment node
+/**
+ * The room plan on paper: the demo room B2.14 (invented; assets/demo/demo-scenario.json) has a
+ * plan. Its report carries the plan section with every finding the core gives, word for word, the
+ * accepted controlled area and the scale; the door notice stays one page and marks the entrance it
+ * is for; a room without a plan prints no plan section. Rendered by the real pdfmake from a real
+ * record store, read back with poppler (pdftotext). The findings are the core's own (evaluateRoom
+ * on the stored inputs); test/core/plan checks their geometry by hand.
+ */
+import { execFileSync } from 'node:child_process';
+import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { evaluateRoom } from '../../../core/index.js';
+import { openRecordStore, type RecordStore } from '../../../electron/backend/records/index.js';
+import { documentInputFromAssessment, renderDoorNotice, renderReport, type DocumentInput } from '../../../electron/backend/pdf/index.js';
+import { pageTexts, pdfInfo } from './pdf-tools.js';
+
+let dir = '';
+let store: RecordStore;
+const docs = new Map<string, DocumentInput>();
+const squash = (s: string): string => s.replace(/[\s\u00ad-]+/g, '');
+/** Text in the order it was drawn (pdftotext -raw): table cells stay whole instead of interleaving side by side. */
+function drawnText(pdf: Buffer): string {
+  const file = join(dir, 'out.pdf');
+  writeFileSync(file, pdf);
+  return execFileSync('pdftotext', ['-raw', '-enc', 'UTF-8', file, '-'], { encoding: 'utf8' });
+}
+
+beforeAll(() => {
+  dir = mkdtempSync(join(tmpdir(), 'bw-plan-docs-'));
+  store = openRecordStore({ path: join(dir, 'demo.sqlite'), keyDir: join(dir, 'keys') });
+  const site = store.seedDemo();
+  for (const room of store.listRooms(site.id)) {
+    const a = store.listAssessments(room.id)[0];
+    if (a) docs.set(room.code, documentInputFromAssessment(store, a.id));
+  }
+}, 120_000);
+
+afterAll(() => {
+  store?.close();
+  if (dir) rmSync(dir, { recursive: true, force: true });
+});
+
+describe('the room plan on paper (demo room B2.14)', () => {
+  it('the report prints every finding of the plan as the core words it, and the accepted boundary and scale', async () => {
+    const doc = docs.get('B2.14')!;
+    const core = evaluateRoom(doc.content.input).plan!;
+    expect(core.findings.length).toBeGreaterThan(3);
+    const text = squash(drawnText(await renderReport(doc, { paper: 'A4', units: 'SI' })));
+    expect(text).toContain(squash('Room plan and hazard zones'));
+    for (const f of core.findings) {
+      expect(text, f.text).toContain(squash(f.text));
+      expect(text, f.suggestion).toContain(squash(f.suggestion));
+    }
+    expect(text).toContain(squash('accepted by Dr. Imre Calloway-Senn'));
+    expect(text).toMatch(/drawntoscale1:\d+whenprintedat100%/);
+  });
+
+  it('the door notice stays one page and marks the entrance it is for (first door, or the one chosen)', async () => {
+    const doc = docs.get('B2.14')!;
+    const first = await renderDoorNotice(doc, { paper: 'A4', units: 'SI' });
+    expect(pdfInfo(first).pages).toBe(1);
+    expect(squash(pageTexts(first).join(' '))).toContain(squash('this door (D1 corridor) solid black'));
+    const other = await renderDoorNotice(doc, { paper: 'Letter', units: 'SI', entranceId: 'D2' });
+    expect(pdfInfo(other).pages).toBe(1);
+    expect(squash(pageTexts(other).join(' '))).toContain(squash('this door (D2 to B2.16) solid black'));
+  });
+
+  it('a room without a plan prints no plan section', async () => {
+    const text = pageTexts(await renderReport(docs.get('B2.16')!, { paper: 'A4', units: 'SI' })).join(' ');
+    expect(text).not.toContain('Room plan and hazard zones');
+  });
+});

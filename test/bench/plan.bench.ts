@@ -1,0 +1,21 @@
+/**
+ * The room plan: evaluating the invented demo room B2.14 (4 lasers, 9 beams) with and without its
+ * plan, beams already cached as in the live workspace, so the figure is the plan's own cost.
+ * Target (ours): the plan adds no more than 100 ms to a live re-evaluation.
+ */
+import demo from '../../assets/demo/demo-scenario.json' with { type: 'json' };
+import { evaluateRoom, type RoomInput } from '../../core/index.js';
+import { registerBench, timeMedian, type BenchEntry } from './registry.js';
+
+function runPlanBench(): BenchEntry[] {
+  const withPlan = demo.rooms[0]?.input as unknown as RoomInput;
+  const { plan: _plan, ...without } = withPlan;
+  evaluateRoom(withPlan); // beams and the polygon corners of circles cached, as after the first keystroke
+  const runs = 9;
+  return [
+    { name: 'room B2.14 re-evaluation without plan', median_ms: timeMedian(runs, () => evaluateRoom(without)), runs },
+    { name: 'room B2.14 re-evaluation with plan (zones, findings)', median_ms: timeMedian(runs, () => evaluateRoom(withPlan)), runs, target_ms: 100 },
+  ];
+}
+
+registerBench({ name: 'plan', run: runPlanBench });

@@ -1,0 +1,97 @@
+/**
+ * End to end, in Debian's chromium against the loopback host: the officer opens a demo room, starts
+ * a room plan, lets the DPSS beam run open toward the east wall, types the door's place so the beam
+ * meets it, and finds the door inside the direct-beam zone; the plan is saved with the revision.
+ * Also saves screenshots of the plan panel (test/artifacts/screens/plan-*.png) to look at.
+ * Geometry of the check (derived): the default plan puts the first laser's exit at (1, 1.5) m,
+ * the room's east wall at x = 6 m; a door typed from y = 1.2 m to 2.1 m on that wall lies across
+ * the beam line y = 1.5 m, 5 m from the exit, well inside the NOHD of a 5 W CW beam.
+ */
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { mkdirSync } from 'node:fs';
+import path from 'node:path';
+import type { BrowserContext, Page } from 'playwright-core';
+import { launch } from './browser.js';
+import { REPO, removeDir, startHost, type HostHandle } from './host-process.js';
+
+let host: HostHandle;
+let ctx: BrowserContext;
+let page: Page;
+const pageErrors: string[] = [];
+const SHOTS = path.join(REPO, 'test', 'artifacts', 'screens');
+
+beforeAll(async () => {
+  mkdirSync(SHOTS, { recursive: true });
+  host = await startHost();
+  ctx = await launch({ width: 1400, height: 1000 });
+  page = ctx.pages()[0] ?? (await ctx.newPage());
+  page.on('pageerror', (e) => pageErrors.push(e.message));
+  await page.goto(host.url);
+});
+
+afterAll(async () => {
+  await ctx?.close();
+  await host?.stop();
+  if (host) removeDir(host.dir);
+});
+
+describe('the room plan in the workspace', () => {
+  it('opens the signed demo room with its plan and shows its findings', async () => {
+    await page.getByRole('button', { name: 'Load the demo site' }).click();
+    await page.getByRole('heading', { name: 'Register' }).waitFor();
+    await page.getByRole('button', { name: /^B2\.14/ }).click();
+    await page.getByRole('button', { name: 'Open in workspace' }).click();
+    await page.getByRole('heading', { level: 1, name: /Workspace/ }).waitFor();
+    const panel = page.getByRole('region', { name: 'Room plan' });
+    await panel.getByRole('group', { name: /Room plan, top view/ }).waitFor();
+    const findings = panel.getByRole('region', { name: 'Findings from the plan' });
+    await findings.getByText(/Door D2 to B2\.16 is inside the direct-beam zone of He-Ne/).waitFor({ timeout: 60_000 });
+    await panel.getByRole('group', { name: /Room plan, top view/ }).scrollIntoViewIfNeeded();
+    await page.waitForTimeout(300);
+    await page.screenshot({ path: path.join(SHOTS, 'plan-ultrafast.png') });
+    await panel.getByRole('group', { name: /Room plan, top view/ }).screenshot({ path: path.join(SHOTS, 'plan-ultrafast-drawing.png') });
+    // The plan's suggestions reach the Controls screen.
+    await page.keyboard.press('Alt+4');
+    const sugg = page.getByRole('region', { name: 'Suggested by the room plan' });
+    await sugg.getByText('Interlock door D2 to B2.16 so the beam stops or is blocked when it opens, or put a rated curtain or barrier inside it.').waitFor();
+    await sugg.scrollIntoViewIfNeeded();
+    await page.screenshot({ path: path.join(SHOTS, 'plan-controls.png') });
+    await page.keyboard.press('Alt+2');
+  });
+
+  it('draws a plan for a room, places the demo laser and finds the door inside the zone', async () => {
+    await page.keyboard.press('Alt+1');
+    await page.getByRole('button', { name: /^B2\.16/ }).click();
+    await page.getByRole('button', { name: 'Open in workspace' }).click();
+    await page.getByRole('heading', { level: 1, name: /Workspace · B2\.16/ }).waitFor();
+    const panel = page.getByRole('region', { name: 'Room plan' });
+    await panel.getByRole('button', { name: 'Start a room plan' }).click();
+    await panel.getByText('Coordinates and details (typed)').click();
+    await panel.getByLabel('Diode-pumped solid-state laser: how the beam path ends').selectOption('open');
+    await panel.getByLabel('Door D1, one side, y in metres').fill('1.2');
+    await panel.getByLabel('Door D1, one side, y in metres').press('Enter');
+    await panel.getByLabel('Door D1, other side, y in metres').fill('2.1');
+    await panel.getByLabel('Door D1, other side, y in metres').press('Enter');
+    const findings = panel.getByRole('region', { name: 'Findings from the plan' });
+    await findings.getByText('Door D1 is inside the direct-beam zone of DPSS 532 nm.').waitFor({ timeout: 60_000 });
+    // Keyboard: move the work position added from the toolbar with the arrow keys.
+    await panel.getByRole('button', { name: '+ Work position' }).click();
+    const handle = panel.getByRole('button', { name: /^Work position P1: x 3\.00 m, y 3\.00 m/ });
+    await handle.focus();
+    await page.keyboard.press('ArrowDown');
+    await panel.getByRole('button', { name: /^Work position P1: x 3\.00 m, y 2\.90 m/ }).waitFor();
+    await panel.getByRole('group', { name: /Room plan, top view/ }).scrollIntoViewIfNeeded();
+    await page.waitForTimeout(300);
+    await page.screenshot({ path: path.join(SHOTS, 'plan-new-room.png') });
+    // Saved with the revision: after saving and reopening the room the door finding is still there.
+    await page.keyboard.press('Control+s');
+    await page.getByText(/saved/i).first().waitFor({ timeout: 30_000 });
+    await page.reload();
+    await page.keyboard.press('Alt+2');
+    await page.getByRole('region', { name: 'Room plan' }).getByText('Door D1 is inside the direct-beam zone of DPSS 532 nm.').waitFor({ timeout: 60_000 });
+  });
+
+  it('no script errors on the page', () => {
+    expect(pageErrors).toEqual([]);
+  });
+});

@@ -1,0 +1,79 @@
+/**
+ * The plan editor in the Workspace: start a plan, add a door, move a laser's exit with the keyboard,
+ * type coordinates, and see the finding the core gives. The beam (invented): 5 W CW at 532 nm, 2.3 mm,
+ * 0.4 mrad (1/e²): its NOHD is far beyond the room (ICNIRP 2013 visible 0.25 s limit 25.4 W/m²,
+ * derived), so a door across its path is inside the direct-beam zone.
+ * Geometry (derived): the new plan is 6 m × 4 m; the laser's exit is at (1, 1.5), its beam dump at
+ * (4.5, 1.5); the added door D2 is put on the north wall, and typed onto the beam line at x = 3 m.
+ */
+import { describe, expect, it } from 'vitest';
+import { fireEvent, render, screen, within } from '@testing-library/svelte';
+import type { LaserInput, RoomPlan } from '../../core/index.js';
+import PlanHarness from './PlanHarness.svelte';
+
+const lasers: LaserInput[] = [
+  { id: 'L1', name: 'Green laser', beams: [{ id: 'g', label: 'green 532 nm', wavelength_nm: 532, emission: { kind: 'cw', power_W: 5 }, beam: { diameter_m: 0.0023, divergence_rad: 0.0004, definition: '1/e2' } }] },
+];
+const plan = (): RoomPlan => JSON.parse(screen.getByTestId('plan-json').textContent ?? 'null') as RoomPlan;
+
+describe('plan editor', () => {
+  it('starts a plan, adds a door, types its place across the beam and shows the finding', async () => {
+    render(PlanHarness, { lasers });
+    await fireEvent.click(screen.getByRole('button', { name: 'Start a room plan' }));
+    expect(plan().paths[0]?.exit).toEqual({ x_m: 1, y_m: 1.5 });
+    await fireEvent.click(screen.getByRole('button', { name: '+ Door' }));
+    expect(plan().doors.map((d) => d.id)).toEqual(['D1', 'D2']);
+    // A door across the bench: typed coordinates, one field at a time.
+    for (const [label, value] of [
+      ['Door D2, one side, x in metres', '3'],
+      ['Door D2, one side, y in metres', '1'],
+      ['Door D2, other side, x in metres', '3'],
+      ['Door D2, other side, y in metres', '2'],
+    ] as const) {
+      const box = screen.getByLabelText(label);
+      await fireEvent.input(box, { target: { value } });
+      await fireEvent.change(box, { target: { value } });
+    }
+    expect(plan().doors[1]).toMatchObject({ a: { x_m: 3, y_m: 1 }, b: { x_m: 3, y_m: 2 } });
+    const findings = screen.getByRole('region', { name: 'Findings from the plan' });
+    expect(within(findings).getByText(/Door D2 is inside the direct-beam zone of green 532 nm\./)).toBeTruthy();
+  });
+
+  it('moves the laser exit with the arrow keys (0.1 m; with Shift 0.01 m) and keeps the new place', async () => {
+    render(PlanHarness, { lasers });
+    await fireEvent.click(screen.getByRole('button', { name: 'Start a room plan' }));
+    const handle = screen.getByRole('button', { name: /^Green laser, beam exit: x 1\.00 m, y 1\.50 m/ });
+    await fireEvent.keyDown(handle, { key: 'ArrowRight' });
+    await fireEvent.keyDown(screen.getByRole('button', { name: /^Green laser, beam exit: x 1\.10 m/ }), { key: 'ArrowUp', shiftKey: true });
+    expect(plan().paths[0]?.exit).toEqual({ x_m: 1.1, y_m: 1.51 });
+  });
+
+  it('records the laser controlled area the officer accepts, by name', async () => {
+    render(PlanHarness, { lasers });
+    await fireEvent.click(screen.getByRole('button', { name: 'Start a room plan' }));
+    const accept = screen.getByRole('button', { name: 'Accept boundary' }) as HTMLButtonElement;
+    expect(accept.disabled).toBe(true);
+    await fireEvent.input(screen.getByLabelText('Accept the room as the laser controlled area, by'), { target: { value: 'I. Calloway-Senn' } });
+    await fireEvent.click(accept);
+    expect(plan().controlledArea).toEqual({ outline: plan().outline, acceptedBy: 'I. Calloway-Senn' });
+    expect(screen.getByText(/Laser controlled area accepted by/)).toBeTruthy();
+  });
+});
+
+describe('plan errors in officer words (never a field path on screen)', () => {
+  it('a door typed with both sides at one point is named by its own name', async () => {
+    const { evaluateRoom, InputError } = await import('../../core/index.js');
+    const { newPlan, planErrorWords } = await import('../../renderer/lib/plan-edit.js');
+    const base = newPlan([{ id: 'L1', name: 'Green laser' }]);
+    const bad: RoomPlan = { ...base, doors: [...base.doors, { id: 'D2', label: 'D2 store', a: { x_m: 1, y_m: 4 }, b: { x_m: 1, y_m: 4 } }] };
+    let words = '';
+    try {
+      evaluateRoom({ lasers, plan: bad });
+    } catch (e) {
+      if (!(e instanceof InputError)) throw e;
+      words = planErrorWords(e.message, e.field, bad, [{ id: 'L1', name: 'Green laser' }]);
+    }
+    expect(words).toMatch(/^Door D2 store, other side: /);
+    expect(words).not.toMatch(/plan\.|\[\d\]|_m\b/);
+  });
+});
