@@ -3,6 +3,7 @@ export * from './model/inputs.js';
 export * from './errors.js';
 export * from './trace/trace.js';
 export * from './units/quantities.js';
+export { quantityText, numberText, odText, angleText, plainDigits, type DisplayUnit, type DisplayOptions, type Rounding } from './units/display.js';
 export { Dec, dec, roundSig, roundPlaces, recordString } from './numeric/decimal.js';
 export * from './limits/rule-sets.js';
 export * from './limits/exposure-limit.js';

@@ -12,6 +12,7 @@ import { RESULT_CAUTION, type BeamResult, type DistanceResult } from '../model/r
 import { RULE_SET_NAME } from '../limits/rule-sets.js';
 import { defaultExposureDuration } from '../limits/durations.js';
 import { formatSI } from '../units/quantities.js';
+import { numberText, odText, quantityText } from '../units/display.js';
 import { addStep, newTrace } from '../trace/trace.js';
 import { beamModel, describeBeam, type BeamModel } from './beam-model.js';
 import { tissueLimits, type TissueLimits } from './tissue-limits.js';
@@ -156,7 +157,8 @@ function evaluateValid(input: BeamInput, ruleSet: RuleSetId, settings: LimitSett
     trace.children.push(d.result.trace);
     nhzDiffuse = d.r;
     if (d.viewer && d.viewer.ratio.gt(1)) {
-      warnings.push(`Diffuse reflection: ${fmt(d.viewer.distance_m)} m from the surface the exposure is ${fmt(d.viewer.ratio)} times the limit (OD ${fmt(d.viewer.od)} needed for diffuse viewing there).`);
+      // readable figures in the sentence (3 significant figures; ratio and OD rounded UP); the full values are in the trace
+      warnings.push(`Diffuse reflection: ${quantityText(d.viewer.distance_m, 'm', { round: 'nearest' })} from the surface the exposure is ${numberText(d.viewer.ratio, { round: 'up' })} times the limit (OD ${odText(d.viewer.od)} needed for diffuse viewing there).`);
     }
   }
   if (v.specular) {

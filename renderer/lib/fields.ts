@@ -4,7 +4,7 @@
  * officer would type. A field that does not parse keeps its last good value (the evaluation does
  * not change) and shows the error beside the field.
  */
-import { InputError, SI_UNIT, formatSI, parseQuantity, type Dimension } from '../../core/index.js';
+import { InputError, SI_UNIT, angleText, formatSI, parseQuantity, type Dimension } from '../../core/index.js';
 
 export interface FieldSpec {
   /** Field name used in error messages (and matched against core InputError fields). */
@@ -39,7 +39,9 @@ export interface ParseOutcome {
 }
 
 function rangeText(spec: FieldSpec): string {
-  const f = (v: number): string => formatField(spec, v);
+  // bounds read like the officer would say them: "up to π rad", not "0 mrad to 3141.59265359 mrad"
+  const f = (v: number): string => (spec.dimension === 'angle' ? angleText(v) : formatField(spec, v));
+  if (spec.min === 0 && spec.minInclusive && spec.max !== undefined) return `up to ${f(spec.max)}`;
   if (spec.min !== undefined && spec.max !== undefined) return `${f(spec.min)} to ${f(spec.max)}`;
   if (spec.min !== undefined) return `${spec.minInclusive ? 'at least' : 'more than'} ${f(spec.min)}`;
   if (spec.max !== undefined) return `at most ${f(spec.max)}`;
@@ -99,7 +101,7 @@ export function formatField(spec: FieldSpec, v: number): string {
       return num(v);
     case 'prefix':
       // formatSI with 12 significant digits only picks the prefix; it does not round an input.
-      return formatSI(String(v), SI_UNIT[spec.dimension], 12, 'up');
+      return formatSI(String(v), SI_UNIT[spec.dimension], 12, 'up', false);
   }
 }
 
