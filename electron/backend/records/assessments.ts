@@ -280,7 +280,9 @@ export function getAssessment(ctx: StoreContext, id: Id): Assessment {
 const SUMMARY_SELECT = `
   SELECT a.id, a.room_id, a.installation_id, r.title, r.revision_no, r.status, r.review_by, r.updated_at,
     (SELECT s.signed_at FROM revision r3 JOIN signature s ON s.revision_id = r3.id
-      WHERE r3.assessment_id = a.id AND r3.status = 'signed') AS signed_at
+      WHERE r3.assessment_id = a.id AND r3.status = 'signed') AS signed_at,
+    (SELECT r4.revision_no FROM revision r4 WHERE r4.assessment_id = a.id AND r4.status = 'signed') AS in_force_no,
+    (SELECT r5.review_by FROM revision r5 WHERE r5.assessment_id = a.id AND r5.status = 'signed') AS in_force_review_by
   FROM assessment a
   JOIN revision r ON r.assessment_id = a.id
    AND r.revision_no = (SELECT max(r2.revision_no) FROM revision r2 WHERE r2.assessment_id = a.id)`;
@@ -295,6 +297,8 @@ interface SummaryRow {
   review_by: string | null;
   updated_at: string;
   signed_at: string | null;
+  in_force_no: number | null;
+  in_force_review_by: string | null;
 }
 const summaryFromRow = (r: SummaryRow): AssessmentSummary => ({
   id: r.id,
@@ -306,6 +310,7 @@ const summaryFromRow = (r: SummaryRow): AssessmentSummary => ({
   reviewBy: r.review_by,
   signedAt: r.signed_at,
   updatedAt: r.updated_at,
+  inForce: r.in_force_no === null ? null : { revisionNo: r.in_force_no, signedAt: r.signed_at ?? '', reviewBy: r.in_force_review_by },
 });
 
 export function listAssessments(ctx: StoreContext, roomId: Id): AssessmentSummary[] {

@@ -268,6 +268,8 @@ export interface AssessmentSummary {
   readonly reviewBy: CalendarDate | null;
   readonly signedAt: Timestamp | null;
   readonly updatedAt: Timestamp;
+  /** The signed revision in force (null when none has been signed); the newest revision may be a draft after it. */
+  readonly inForce: { readonly revisionNo: number; readonly signedAt: Timestamp; readonly reviewBy: CalendarDate | null } | null;
 }
 
 /** One changed value between two revisions; `path` like "input.lasers[0].beams[1].wavelength_nm". */
