@@ -14,6 +14,7 @@ import { seedDemo } from './demo.js';
 import * as X from './exchange.js';
 import { defaultDatabasePath } from './paths.js';
 import * as R from './register.js';
+import { laserHistory } from './laser-history.js';
 import type {
   Assessment,
   AssessmentContent,
@@ -28,6 +29,7 @@ import type {
   ImportSummary,
   LaserInstallation,
   LaserInstallationDraft,
+  LaserUse,
   OpenOptions,
   Person,
   PersonDraft,
@@ -85,6 +87,7 @@ class SqliteRecordStore implements RecordStore {
   createPerson(draft: PersonDraft): Person { return R.createPerson(this.ctx, draft); }
   updatePerson(id: Id, patch: Partial<PersonDraft>): Person { return R.updatePerson(this.ctx, id, patch); }
   deletePerson(id: Id): void { R.deletePerson(this.ctx, id); }
+  laserHistory(installationId: Id): LaserUse[] { return laserHistory(this.ctx, installationId); }
 
   roomInputFromRegister(roomId: Id): RoomInput { return R.roomInputFromRegister(this.ctx, roomId); }
   newAssessmentContent(roomId: Id, installationId: Id | null = null): AssessmentContent {

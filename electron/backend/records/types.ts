@@ -382,6 +382,18 @@ export interface StoreInfo {
   readonly calculatedWith: string;
 }
 
+/** One revision that evaluated a laser, with the values it used (a laser's history on the Register). */
+export interface LaserUse {
+  readonly assessmentId: Id;
+  readonly revisionId: Id;
+  readonly title: string;
+  readonly revisionNo: number;
+  readonly status: RevisionStatus;
+  readonly signedAt: Timestamp | null;
+  readonly updatedAt: Timestamp;
+  readonly laser: LaserInput;
+}
+
 export interface RecordStore {
   readonly info: StoreInfo;
   close(): void;
@@ -416,6 +428,8 @@ export interface RecordStore {
   createPerson(draft: PersonDraft): Person;
   updatePerson(id: Id, patch: Partial<PersonDraft>): Person;
   deletePerson(id: Id): void;
+  /** Every revision in the laser's room that evaluated it, newest first. */
+  laserHistory(installationId: Id): LaserUse[];
 
   /** Snapshot of the room's register as core input (in-service lasers, the site's eyewear). */
   roomInputFromRegister(roomId: Id): RoomInput;
