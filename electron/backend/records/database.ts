@@ -15,7 +15,7 @@
 import Database from 'better-sqlite3';
 import { existsSync, mkdirSync, statSync } from 'node:fs';
 import { dirname } from 'node:path';
-import { LATEST_VERSION, MIGRATIONS } from './migrations/index.js';
+import { isKnownVersion, LATEST_VERSION, MIGRATIONS, previousVersion } from './migrations/index.js';
 import { RecordError } from './types.js';
 
 export type Db = Database.Database;
@@ -42,8 +42,8 @@ function sqliteMessage(e: unknown): string {
 export function openDatabase(path: string, opts: OpenDatabaseOptions = {}): OpenedDatabase {
   const readonly = opts.readonly === true;
   const target = opts.targetVersion ?? LATEST_VERSION;
-  if (!Number.isInteger(target) || target < 1 || target > LATEST_VERSION) {
-    throw new RangeError(`targetVersion must be 1..${LATEST_VERSION}`);
+  if (!Number.isInteger(target) || target < 1 || target > LATEST_VERSION || !isKnownVersion(target)) {
+    throw new RangeError(`targetVersion must be one of ${MIGRATIONS.map((m) => m.version).join(', ')}`);
   }
   if (!readonly) mkdirSync(dirname(path), { recursive: true });
   const existedBefore = existsSync(path) && statSync(path).size > 0;
@@ -133,8 +133,9 @@ function checkHistory(db: Db, path: string, version: number): void {
     throw new RecordError('corrupt-database', `${path} has schema version ${version} but no migration history: not a Beamwarden database.`);
   }
   const applied = db.prepare('SELECT version, name FROM schema_migrations ORDER BY version').all() as Array<{ version: number; name: string }>;
+  const known = MIGRATIONS.findIndex((m) => m.version === version) + 1; // entries up to and including `version`
   const isPrefix =
-    applied.length === version && applied.every((row, i) => row.version === i + 1 && row.name === MIGRATIONS[i]?.name);
+    known > 0 && applied.length === known && applied.every((row, i) => row.version === MIGRATIONS[i]?.version && row.name === MIGRATIONS[i]?.name);
   if (!isPrefix) {
     throw new RecordError(
       'corrupt-database',
@@ -168,7 +169,7 @@ function migrate(db: Db, path: string, target: number, readonly: boolean, existe
       // Re-read inside the write lock: another process may have migrated meanwhile.
       const now = userVersion(db);
       if (now >= m.version) return;
-      if (now !== m.version - 1) throw new RecordError('migration-failed', `Cannot apply migration ${m.version} to schema version ${now}`);
+      if (now !== previousVersion(m.version)) throw new RecordError('migration-failed', `Cannot apply migration ${m.version} to schema version ${now}`);
       db.exec(m.sql);
       db.prepare('INSERT INTO schema_migrations (version, name, applied_at) VALUES (?, ?, ?)').run(m.version, m.name, new Date().toISOString());
       if (!Number.isInteger(m.version)) throw new Error('migration version must be an integer');

@@ -19,6 +19,7 @@ import { EyewearSpecSchema, LaserInputSchema } from '../schemas/inputs.js';
 import { notFound, parseOrThrow, translateSqliteError, type StoreContext } from './context.js';
 import type {
   Eyewear,
+  EyewearCondition,
   EyewearDraft,
   Id,
   LaserInstallation,
@@ -303,6 +304,9 @@ interface EyewearRow {
   location: string;
   quantity: number;
   notes: string;
+  inspected_on: string | null;
+  condition: EyewearCondition;
+  next_inspection: string | null;
   created_at: string;
   updated_at: string;
 }
@@ -314,6 +318,9 @@ function eyewearFromRow(r: EyewearRow): Eyewear {
     location: r.location,
     quantity: r.quantity,
     notes: r.notes,
+    inspectedOn: r.inspected_on,
+    condition: r.condition,
+    nextInspection: r.next_inspection,
     createdAt: r.created_at,
     updatedAt: r.updated_at,
   };
@@ -326,6 +333,9 @@ const eyewearParams = (e: Eyewear) => ({
   location: e.location,
   quantity: e.quantity,
   notes: e.notes,
+  inspectedOn: e.inspectedOn,
+  condition: e.condition,
+  nextInspection: e.nextInspection,
   createdAt: e.createdAt,
   updatedAt: e.updatedAt,
 });
@@ -341,8 +351,8 @@ export function getEyewear(ctx: StoreContext, id: Id): Eyewear {
 export function insertEyewear(ctx: StoreContext, e: Eyewear): void {
   ctx
     .sql(
-      `INSERT INTO eyewear (id, site_id, tag, spec_json, location, quantity, notes, created_at, updated_at)
-       VALUES (@id, @siteId, @tag, @specJson, @location, @quantity, @notes, @createdAt, @updatedAt)`,
+      `INSERT INTO eyewear (id, site_id, tag, spec_json, location, quantity, notes, inspected_on, condition, next_inspection, created_at, updated_at)
+       VALUES (@id, @siteId, @tag, @specJson, @location, @quantity, @notes, @inspectedOn, @condition, @nextInspection, @createdAt, @updatedAt)`,
     )
     .run(eyewearParams(e));
 }
@@ -357,6 +367,9 @@ export function createEyewear(ctx: StoreContext, draft: EyewearDraft): Eyewear {
     location: d.location ?? '',
     quantity: d.quantity ?? 1,
     notes: d.notes ?? '',
+    inspectedOn: d.inspectedOn ?? null,
+    condition: d.condition ?? 'not recorded',
+    nextInspection: d.nextInspection ?? null,
     createdAt: now,
     updatedAt: now,
   };
@@ -368,7 +381,7 @@ export function updateEyewear(ctx: StoreContext, id: Id, patch: Partial<Omit<Eye
   const next: Eyewear = { ...getEyewear(ctx, id), ...stripUndefined(p), updatedAt: ctx.now() };
   guard(`Eyewear ${next.spec.id}`, () =>
     ctx
-      .sql('UPDATE eyewear SET tag=@tag, spec_json=@specJson, location=@location, quantity=@quantity, notes=@notes, updated_at=@updatedAt WHERE id=@id')
+      .sql('UPDATE eyewear SET tag=@tag, spec_json=@specJson, location=@location, quantity=@quantity, notes=@notes, inspected_on=@inspectedOn, condition=@condition, next_inspection=@nextInspection, updated_at=@updatedAt WHERE id=@id')
       .run(eyewearParams(next)),
   );
   return next;
@@ -440,7 +453,10 @@ export function roomInputFromRegister(ctx: StoreContext, roomId: Id): RoomInput 
   const lasers = listInstallations(ctx, roomId)
     .filter((i) => i.status === 'in-service')
     .map((i) => i.laser);
-  const eyewear = listEyewear(ctx, room.siteId).map((e) => e.spec);
+  // damaged or withdrawn eyewear is never offered as protection (EN 207: damaged filters must not be used)
+  const eyewear = listEyewear(ctx, room.siteId)
+    .filter((e) => e.condition !== 'damaged' && e.condition !== 'withdrawn')
+    .map((e) => e.spec);
   return { lasers, eyewear };
 }
 

@@ -82,10 +82,18 @@ export interface Eyewear {
   readonly location: string;
   readonly quantity: number;
   readonly notes: string;
+  /** Upkeep (schema version 5): last inspection, what it found, when the next one is due. */
+  readonly inspectedOn: CalendarDate | null;
+  readonly condition: EyewearCondition;
+  readonly nextInspection: CalendarDate | null;
   readonly createdAt: Timestamp;
   readonly updatedAt: Timestamp;
 }
-export type EyewearDraft = Pick<Eyewear, 'siteId' | 'spec'> & Partial<Pick<Eyewear, 'location' | 'quantity' | 'notes'>>;
+/** What the last inspection found; 'withdrawn' = taken out of use (kept on record, not offered). */
+export type EyewearCondition = 'not recorded' | 'good' | 'worn' | 'damaged' | 'withdrawn';
+export const EYEWEAR_CONDITIONS: readonly EyewearCondition[] = ['not recorded', 'good', 'worn', 'damaged', 'withdrawn'];
+export type EyewearDraft = Pick<Eyewear, 'siteId' | 'spec'> &
+  Partial<Pick<Eyewear, 'location' | 'quantity' | 'notes' | 'inspectedOn' | 'condition' | 'nextInspection'>>;
 
 /** A person who signs off assessments (officer, deputy, assessor). */
 export interface Person {
