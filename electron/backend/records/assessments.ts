@@ -199,17 +199,34 @@ export function newAssessmentContent(ctx: StoreContext, roomId: Id, installation
     input = { ...registerInput, lasers: [inst.laser] };
     title = `Laser hazard evaluation, ${inst.laser.name}, room ${room.code}`;
   }
+  // The officer's decisions carry over: the room's last signed assessment (else its newest) gives
+  // the control decisions, non-beam hazards and operating states; the officer reviews them again.
+  const previous = previousContentOfRoom(ctx, roomId, installationId);
   return {
     title,
     input,
-    operatingStates: ['normal', 'alignment', 'maintenance'],
-    assumptions: { exposureDurations: [], personsPresent: 'Authorised laser users only', opticalAidsPossible: false, other: [] },
-    controls: [],
-    nonBeamHazards: NON_BEAM_HAZARD_KINDS.map((kind) => ({ kind, present: false, note: '', controls: [] })),
+    operatingStates: previous?.operatingStates ? [...previous.operatingStates] : ['normal', 'alignment', 'maintenance'],
+    assumptions: { exposureDurations: [], personsPresent: previous?.assumptions.personsPresent ?? 'Authorised laser users only', opticalAidsPossible: previous?.assumptions.opticalAidsPossible ?? false, other: [] },
+    controls: previous ? previous.controls.map((c) => ({ ...c })) : [],
+    nonBeamHazards: NON_BEAM_HAZARD_KINDS.map((kind) => previous?.nonBeamHazards.find((h) => h.kind === kind) ?? { kind, present: false, note: '', controls: [] }),
     eyewearChosen: [],
     notes: '',
     reviewBy: addOneYear(ctx.now()),
   };
+}
+
+/** Content of the room's last signed revision (or newest revision) of the same scope, if any. */
+function previousContentOfRoom(ctx: StoreContext, roomId: Id, installationId: Id | null): AssessmentContent | null {
+  const row = ctx
+    .sql(
+      `SELECT r.content_json FROM revision r JOIN assessment a ON a.id = r.assessment_id
+        WHERE a.room_id = ? AND a.installation_id IS ?
+        ORDER BY (r.status = 'signed') DESC, r.updated_at DESC, r.revision_no DESC LIMIT 1`,
+    )
+    .get(roomId, installationId) as { content_json: string } | undefined;
+  if (!row) return null;
+  const parsed = AssessmentContentSchema.safeParse(JSON.parse(row.content_json));
+  return parsed.success ? parsed.data : null;
 }
 
 /** Validate content and cross-check references; write chosen exposure durations into the input. */
