@@ -117,9 +117,22 @@ export interface LaserInput {
   readonly beams: readonly BeamInput[];
 }
 
+/**
+ * Beams that can reach the same place (a person's eye or skin there can meet them together): the
+ * additive rule sums exposures within a place only. Default when none is given: the beams of one
+ * laser, on their common path.
+ */
+export interface ExposurePlace {
+  /** Where, in the officer's words, e.g. "table 1, compressor line". */
+  readonly place: string;
+  readonly beamIds: readonly string[];
+}
+
 export interface RoomInput {
   readonly ruleSet?: RuleSetId;
   readonly settings?: LimitSettings;
   readonly lasers: readonly LaserInput[];
   readonly eyewear?: readonly EyewearSpec[];
+  /** The officer's grouping of beams by the place they can reach together; see ExposurePlace. */
+  readonly exposurePlaces?: readonly ExposurePlace[];
 }

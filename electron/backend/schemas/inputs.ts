@@ -159,11 +159,17 @@ export const LaserInputSchema = z.strictObject({
   beams: z.array(BeamInputSchema).min(1, 'a laser needs at least one beam (wavelength / mode)'),
 });
 
+export const ExposurePlaceSchema = z.strictObject({
+  place: z.string().trim().min(1, { message: 'name the place' }).max(200),
+  beamIds: z.array(z.string().min(1).max(100)).max(500),
+});
+
 export const RoomInputSchema = z.strictObject({
   ruleSet: RuleSetIdSchema.optional(),
   settings: LimitSettingsSchema.optional(),
   lasers: z.array(LaserInputSchema),
   eyewear: z.array(EyewearSpecSchema).optional(),
+  exposurePlaces: z.array(ExposurePlaceSchema).max(500).optional(),
 });
 
 // ---- compile-time proof that the schemas are the core types (fails to compile on drift)
