@@ -16,7 +16,7 @@ export interface StatusParts {
 
 export function statusParts(a: AssessmentSummary, today: string, dueBy: string): StatusParts {
   const inForce = a.inForce ? `signed rev ${a.inForce.revisionNo} in force (${a.inForce.signedAt.slice(0, 10)})` : null;
-  const open = a.status === 'draft' ? `draft rev ${a.revisionNo} open${a.inForce ? '' : ', not signed'}` : null;
+  const open = a.status === 'draft' ? `draft rev ${a.revisionNo}${a.inForce ? ' open' : ', not signed'}` : null;
   const reviewBy = a.inForce?.reviewBy ?? a.reviewBy ?? null;
   const reviewState = reviewBy === null ? 'none' : reviewBy < today ? 'overdue' : reviewBy <= dueBy ? 'due' : 'ok';
   return { inForce, open, reviewBy, reviewState };

@@ -32,7 +32,7 @@ describe('status line of an assessment on the Register', () => {
   it('a draft never signed', () => {
     const a = store.listAssessments(roomId)[0];
     if (!a) throw new Error('no assessment');
-    expect(statusLine(a, TODAY, DUE_BY)).toBe('draft rev 1 open, not signed · review by 2027-06-30');
+    expect(statusLine(a, TODAY, DUE_BY)).toBe('draft rev 1, not signed · review by 2027-06-30');
   });
 
   it('signed, then edited: the signed revision stays in force and the draft is open', () => {
