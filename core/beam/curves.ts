@@ -82,7 +82,8 @@ export function exposureAlongBeam(q: BeamCurveQuery, distances_m: readonly numbe
     quantity: eye.quantity,
     limit: crit.L.toString(),
     rule: crit.rule,
-    aperture_mm: crit.aperture_m.mul(1000).toString(),
+    // 4 significant figures: a label on a plot (1.5*t^0.375 apertures have 40 digits)
+    aperture_mm: crit.aperture_m.mul(1000).toSignificantDigits(4).toString(),
     points: distances_m.map((r) => [r, exposureAt(eye.S, spread, crit.aperture_m, new Dec(r), mu).toNumber()] as const),
   };
 }

@@ -17,6 +17,7 @@ import { addStep, newTrace } from '../trace/trace.js';
 import { beamModel, describeBeam, type BeamModel } from './beam-model.js';
 import { tissueLimits, type TissueLimits } from './tissue-limits.js';
 import { validateBeamInput } from './validate-beam.js';
+import { withLargeSkinArea } from './skin-large-area.js';
 import { distanceReported, fmt, maxOf, rec } from './format.js';
 import { computeBounds } from './bounds.js';
 import { distanceOver } from '../hazard/distance.js';
@@ -25,7 +26,11 @@ import { diffuseDistance } from '../hazard/diffuse.js';
 import { requiredOd, type OdOutcome } from '../eyewear/od.js';
 import { en207Requirements } from '../eyewear/en207.js';
 import { en208Requirement } from '../eyewear/en208.js';
-import { estimateClass } from '../classes/estimate.js';
+import { classRank, estimateClass } from '../classes/estimate.js';
+import { onBandEdge } from '../limits/rule-sets.js';
+
+/** Band edges of the class estimate's own tables (core/classes/aels.ts). */
+const CLASS_BAND_EDGES_NM: readonly number[] = [302.5, 400, 700, 1050, 1400, 4000];
 
 export interface BeamContext {
   /** Path prefix for field names in errors, e.g. 'lasers[2].beams[0].'. */
@@ -133,13 +138,25 @@ function evaluateValid(input: BeamInput, ruleSet: RuleSetId, settings: LimitSett
     ...(settings !== undefined ? { settings } : {}),
   };
   const eye: TissueLimits = tissueLimits({ ...base, tissue: 'eye', exposureDuration_s: T, durationWhy });
-  const skin: TissueLimits = tissueLimits({ ...base, tissue: 'skin', exposureDuration_s: skinT, durationWhy: skinWhy });
+  const large = withLargeSkinArea(tissueLimits({ ...base, tissue: 'skin', exposureDuration_s: skinT, durationWhy: skinWhy }), lambda, skinT, input.emission, input.skinArea_m2);
+  const skin: TissueLimits = large.skin;
   for (const w of eye.warnings) warnings.push(w);
+  if (input.emission.kind === 'pulsed' && input.emission.pulseDuration_s < 1e-13) {
+    // Decision (SAFETY.md): the tables stop at 100 fs; the 100 fs limit is kept and, in conservative
+    // mode, scaled by t/1e-13 (read as a peak irradiance held constant, ours). Flagged at the top of the trace.
+    addStep(trace, {
+      kind: 'warning',
+      label: 'Pulse shorter than 100 fs',
+      detail: `pulse duration ${formatSI(String(input.emission.pulseDuration_s), 's')} is below the shortest row of the limit tables (100 fs); ${eye.shortPulseFactor.lt(1) ? `the 100 fs limits are scaled by t/1e-13 = ${fmt(eye.shortPulseFactor)} (conservative mode, ours)` : 'the 100 fs limits are used unchanged (conservative mode off)'}; no standard gives limits this short, verify with the laser safety officer`,
+      confidence: 'ours',
+    });
+  }
   const replaced = [...new Set([...eye.summary.conservativeReplacements, ...skin.summary.conservativeReplacements])].filter((x) => x !== 'pulse-shorter-than-tables');
   if (replaced.length) {
     warnings.push(`Conservative mode: unverified limit-table entries were replaced by stricter values (${replaced.join(', ')}); the limits may be lower than the published ones until verified.`);
   }
   trace.children.push(eye.trace, skin.trace);
+  if (large.trace) trace.children.push(large.trace);
 
   const v = input.viewing ?? {};
   const mu = v.attenuation_per_m !== undefined && v.attenuation_per_m > 0 ? new Dec(v.attenuation_per_m) : undefined;
@@ -152,13 +169,41 @@ function evaluateValid(input: BeamInput, ruleSet: RuleSetId, settings: LimitSett
 
   let nhzDiffuse: Dec | null = null;
   if (v.diffuse) {
-    const d = diffuseDistance(eye, m, v.diffuse);
-    distances.push(d.result);
-    trace.children.push(d.result.trace);
-    nhzDiffuse = d.r;
-    if (d.viewer && d.viewer.ratio.gt(1)) {
-      // readable figures in the sentence (3 significant figures; ratio and OD rounded UP); the full values are in the trace
-      warnings.push(`Diffuse reflection: ${quantityText(d.viewer.distance_m, 'm', { round: 'nearest' })} from the surface the exposure is ${numberText(d.viewer.ratio, { round: 'up' })} times the limit (OD ${odText(d.viewer.od)} needed for diffuse viewing there).`);
+    // Two viewing cases (decision recorded in SAFETY.md): accidental viewing over the beam's exposure
+    // duration, and deliberate viewing of the spot (alignment on a card or screen) over a long
+    // duration, 600 s by default (customary for deliberate viewing of diffuse reflections, from
+    // memory). Both are shown; the officer says which governs, else the larger distance does.
+    const Td = v.diffuse.deliberateDuration_s ?? 600;
+    const deliberateWhy = v.diffuse.deliberateDuration_s !== undefined ? 'deliberate viewing of the diffuse spot, given by the caller' : 'deliberate viewing of the diffuse spot: 600 s (customary value, from memory)';
+    const eyeDeliberate = tissueLimits({ ...base, tissue: 'eye', exposureDuration_s: Td, durationWhy: deliberateWhy });
+    const acc = diffuseDistance(eye, m, v.diffuse);
+    const del = diffuseDistance(eyeDeliberate, m, v.diffuse);
+    const choice = v.diffuse.governs ?? (del.r.gt(acc.r) ? 'deliberate' : 'accidental');
+    const why = v.diffuse.governs !== undefined ? 'chosen by the officer' : 'the larger distance (no choice given)';
+    const cases = [
+      { o: acc, viewing: 'accidental' as const, T: eye.summary.exposureDuration_s, lim: eye },
+      { o: del, viewing: 'deliberate' as const, T: eyeDeliberate.summary.exposureDuration_s, lim: eyeDeliberate },
+    ];
+    for (const c of cases) {
+      const governs = c.viewing === choice;
+      const t = c.o.result.trace;
+      if (c.viewing === 'deliberate') t.children.unshift(eyeDeliberate.trace);
+      addStep(t, {
+        kind: 'assumption',
+        label: 'Viewing case',
+        detail: `${c.viewing === 'accidental' ? 'accidental viewing' : 'deliberate viewing of the spot'} over ${fmt(new Dec(c.T))} s (${c.lim.summary.durationWhy}); ${governs ? `this case governs: ${why}` : `shown for comparison; the ${choice} case governs (${why})`}`,
+        confidence: c.viewing === 'deliberate' && v.diffuse.deliberateDuration_s === undefined ? 'from memory' : 'common practice',
+      });
+      distances.push({ ...c.o.result, label: `${c.o.result.label}, ${c.viewing} viewing (${fmt(new Dec(c.T))} s)`, viewing: c.viewing, exposureDuration_s: c.T, governs });
+      trace.children.push(t);
+      if (governs) {
+        nhzDiffuse = c.o.r;
+        const d = c.o;
+        if (d.viewer && d.viewer.ratio.gt(1)) {
+          // readable figures in the sentence (3 significant figures; ratio and OD rounded UP); the full values are in the trace
+          warnings.push(`Diffuse reflection (${c.viewing} viewing, ${quantityText(new Dec(c.T), 's')}): ${quantityText(d.viewer.distance_m, 'm', { round: 'nearest' })} from the surface the exposure is ${numberText(d.viewer.ratio, { round: 'up' })} times the limit (OD ${odText(d.viewer.od)} needed for diffuse viewing there).`);
+        }
+      }
     }
   }
   if (v.specular) {
@@ -219,14 +264,32 @@ function evaluateValid(input: BeamInput, ruleSet: RuleSetId, settings: LimitSett
   for (const s of scaleNumbers) addStep(snTrace, { kind: s.applies ? 'result' : 'note', label: s.mode, detail: s.note, value: s.applies ? `${s.mode === 'RB' ? 'RB' : 'LB'}${s.scale}` : 'n/a' });
   trace.children.push(snTrace);
 
-  const classEstimate = estimateClass({ ruleSet, wavelength_nm: lambda, emission: input.emission, model: m, ...(input.sourceAngle_rad !== undefined ? { sourceAngle_rad: input.sourceAngle_rad } : {}), ...(settings !== undefined ? { settings } : {}) });
+  const classQuery = { ruleSet, emission: input.emission, model: m, ...(input.sourceAngle_rad !== undefined ? { sourceAngle_rad: input.sourceAngle_rad } : {}), ...(settings !== undefined ? { settings } : {}) };
+  let classEstimate = estimateClass({ ...classQuery, wavelength_nm: lambda });
+  if (onBandEdge(ruleSet, lambda) || CLASS_BAND_EDGES_NM.includes(lambda)) {
+    // Exactly on a band edge (400 nm: ultraviolet and visible rows; 700 nm; 1400 nm ...) the class
+    // bands of both sides meet: the estimate is taken just beside the edge on either side as well,
+    // and the highest class is reported (the safe side; the same rule as for the limits).
+    for (const side of [lambda * (1 - 1e-8), lambda * (1 + 1e-8)]) {
+      let other;
+      try {
+        other = estimateClass({ ...classQuery, wavelength_nm: side });
+      } catch {
+        continue; // beside the ends of the tables
+      }
+      if (classRank(other.estimate) > classRank(classEstimate.estimate)) {
+        addStep(other.trace, { kind: 'note', label: 'Band edge', detail: `${lambda} nm is exactly on a band edge: the estimate just beside it (${side.toPrecision(10)} nm) is the higher one and is reported`, confidence: 'ours' });
+        classEstimate = { ...other, decidedBy: `${other.decidedBy} (band edge at ${lambda} nm, evaluated on both sides)` };
+      }
+    }
+  }
   trace.children.push(classEstimate.trace);
 
   const nominal = { nohd: direct.r, od: od.od, limitE: new Dec(eye.summary.E_Wm2) };
   const { bounds, trace: bTrace } = computeBounds(input, ruleSet, settings, nominal);
   trace.children.push(bTrace);
 
-  const largest = maxOf(distances.filter((d) => d.kind !== 'skin').map((d) => new Dec(d.distance_m)));
+  const largest = maxOf(distances.filter((d) => d.kind !== 'skin' && d.governs !== false).map((d) => new Dec(d.distance_m)));
   addStep(trace, {
     kind: 'result',
     label: 'Summary',

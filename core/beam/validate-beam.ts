@@ -87,6 +87,7 @@ export function validateBeamInput(input: unknown, prefix = '', roomRuleSet?: Rul
     }
   }
   if (b['sourceAngle_rad'] !== undefined) requireInRange(p('sourceAngle_rad'), b['sourceAngle_rad'], 0, Math.PI, 'rad');
+  if (b['skinArea_m2'] !== undefined) requireInRange(p('skinArea_m2'), b['skinArea_m2'], 0, 10, 'm² (irradiated skin area)');
 
   if (b['viewing'] !== undefined) validateViewing(requireObject(p('viewing'), b['viewing']), p('viewing.'));
   if (b['tolerances'] !== undefined) {
@@ -110,6 +111,8 @@ function validateViewing(v: Record<string, unknown>, prefix: string): void {
     if (d['viewingAngle_rad'] !== undefined) requireInRange(p('diffuse.viewingAngle_rad'), d['viewingAngle_rad'], 0, Math.PI / 2, 'rad (0 = along the normal)');
     if (d['targetDistance_m'] !== undefined) requireNonNegative(p('diffuse.targetDistance_m'), d['targetDistance_m'], 'm');
     if (d['viewerDistance_m'] !== undefined) requirePositive(p('diffuse.viewerDistance_m'), d['viewerDistance_m'], 'm');
+    if (d['deliberateDuration_s'] !== undefined) requireInRange(p('diffuse.deliberateDuration_s'), d['deliberateDuration_s'], 1e-3, 30000, 's (deliberate viewing of the diffuse spot)');
+    if (d['governs'] !== undefined && d['governs'] !== 'accidental' && d['governs'] !== 'deliberate') throw new InputError('invalid_choice', p('diffuse.governs'), d['governs'], "'accidental' | 'deliberate'");
   }
   if (v['specular'] !== undefined) {
     const s = requireObject(p('specular'), v['specular']);

@@ -119,31 +119,46 @@ export function singlemodeFiberSpec(S: Dec, lambda_m: Dec, mfd: Dec, NA: Dec): D
 
 /**
  * Optically aided viewing (binoculars, telescope, loupe) with magnification M, objective D0 and
- * transmission tau. The instrument collects the beam over D0; the exposure gain over the naked eye
- * is K*tau with K = min((D0/D_f)^2, M^2) (when the exit pupil D0/M exceeds the aperture only the
- * fraction (D_f*M/D0)^2 enters). ENOHD = (1/phi)(sqrt(K*tau*4S/(pi L)) - a). DERIVED from
- * first-order optics; the exact form and default tau of IEC TR 60825-14 / ANSI Z136.6 were not read
- * (domain notes section 10 item 3). Range set-up: S_eff = S*tau*min(1,(D_f*M/D0)^2)*(D0/D_f)^2 over
- * the cap D0, which equals K*tau times the naked-eye exposure once the beam is wider than D0.
+ * transmission tau. Model (derived from first-order optics, stated in the trace):
+ *  - the instrument collects the part of the beam inside the objective: all of it while the beam
+ *    (1/e diameter d) is narrower than D0, else the share (D0/d)^2 (peak convention, conservative);
+ *  - it sends that power out compressed by M: a beam of diameter d/M, or the exit pupil D0/M once the
+ *    beam fills the objective;
+ *  - the eye averages it over its limiting aperture D_f, times the transmission tau.
+ * Exposure at the eye: tau * 4S * min(1, (D0/d)^2) / (pi * max(min(d, D0)/M, D_f)^2), which is the
+ * range-equation set-up S_eff = K*tau*S over the cap D_c = D_f*sqrt(K), K = min(M^2, (D0/D_f)^2),
+ * i.e. D_c = min(M*D_f, D0) (derived). Far from the laser this is the usual gain K*tau over the naked
+ * eye (IEC TR 60825-14 / ANSI Z136.6 approach, from memory; domain notes 1.7 and section 10 item 3).
+ * A beam narrower than the objective reaches the eye whole once d/M < D_f: spreading it over the
+ * exit pupil (cap D0) under-estimates the hazard.
  */
 export function aidedSpec(m: BeamModel, S: Dec, M: Dec, D0: Dec, tau: Dec, mu: Dec | undefined): DistanceSpec {
   return {
     kind: 'aided',
     label: `Optically aided viewing (${fmt(M)}x, objective ${fmt(D0.mul(1000))} mm)`,
     measuredFrom: 'the laser exit aperture',
-    formula: 'ENOHD = (1/phi) * (sqrt(K*tau*4*S/(pi*L)) - a), K = min((D0/D_f)^2, M^2); the beam is collected over the objective D0',
-    source: 'domain notes 1.7 (derived from first-order optics; IEC TR 60825-14 and ANSI Z136.6 approach)',
+    formula:
+      'collected power = the part of the beam inside the objective D0 (all of it while d < D0, else (D0/d)^2); it leaves the eyepiece compressed to d/M ' +
+      '(at most the exit pupil D0/M) and is averaged over the limiting aperture D_f of the eye, times the transmission tau: ' +
+      'X = tau*4S*min(1,(D0/d)^2)/(pi*max(min(d,D0)/M, D_f)^2), solved as ENOHD = (1/phi)*(sqrt(K*tau*4*S/(pi*L)) - a) ' +
+      'with K = min(M^2, (D0/D_f)^2) and the beam held at no less than D_c = min(M*D_f, D0)',
+    source: 'domain notes 1.7 (derived from first-order optics; gain K as in IEC TR 60825-14 and ANSI Z136.6, from memory)',
     confidence: 'derived (gain model not read in the standards; domain notes section 10 item 3)',
-    notes: [{ label: 'Instrument', detail: `M = ${fmt(M)}, D0 = ${fmt(D0.mul(1000))} mm, tau = ${fmt(tau)}` }],
+    notes: [{ label: 'Instrument', detail: `M = ${fmt(M)}, D0 = ${fmt(D0.mul(1000))} mm, exit pupil D0/M = ${fmt(D0.div(M).mul(1000))} mm, transmission tau = ${fmt(tau)}` }],
     setup: (c: Criterion) => {
       const Df = c.aperture_m;
-      const pupilShare = Dec.min(new Dec(1), Df.mul(M).div(D0).pow(2));
-      return { S: S.mul(tau).mul(pupilShare).mul(D0.div(Df).pow(2)), cap: D0, spread: spreadOf(m), ...(mu ? { mu } : {}) };
+      const K = aidedK(M, D0, Df);
+      return { S: S.mul(tau).mul(K), cap: Dec.min(M.mul(Df), D0), spread: spreadOf(m), ...(mu ? { mu } : {}) };
     },
   };
 }
 
+/** K = min(M^2, (D0/D_f)^2): the area gain of the instrument over the eye's limiting aperture. */
+function aidedK(M: Dec, D0: Dec, Df: Dec): Dec {
+  return Dec.min(D0.div(Df).pow(2), M.pow(2));
+}
+
 /** K*tau for the trace and warnings (largest over the criteria's apertures). */
 export function aidedGain(M: Dec, D0: Dec, tau: Dec, Df: Dec): Dec {
-  return Dec.min(D0.div(Df).pow(2), M.pow(2)).mul(tau);
+  return aidedK(M, D0, Df).mul(tau);
 }

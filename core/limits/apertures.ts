@@ -26,23 +26,62 @@ export function apertureKey(tissue: Tissue, row: ApertureRow): string {
   return `aperture:${tissue}:${row.band_nm[0]}-${row.band_nm[1]}:${row.t_s[0]}-${row.t_s[1]}`;
 }
 
-/** The limiting aperture for tissue at wavelength (nm) and duration (s). */
+/** The stretch of a limit row the aperture must belong to (its band and duration range). */
+export interface ApertureScope {
+  readonly band_nm: readonly [number, number];
+  readonly t_s: readonly [number, number];
+}
+
+const closedHas = (iv: readonly [number, number], x: Dec): boolean => x.gte(iv[0]) && x.lte(iv[1]);
+const clamp = (iv: readonly [number, number], x: Dec): Dec => Dec.min(Dec.max(x, new Dec(iv[0])), new Dec(iv[1]));
+/** Do the two intervals share a stretch of positive length whose closure holds x? */
+function sharesStretchAt(a: readonly [number, number], b: readonly [number, number], x: Dec): boolean {
+  const lo = Math.max(a[0], b[0]);
+  const hi = Math.min(a[1], b[1]);
+  return lo < hi && x.gte(lo) && x.lte(hi);
+}
+
+/**
+ * The limiting aperture for tissue at wavelength (nm) and duration (s).
+ * With a scope (the band and duration range of the limit row being evaluated), the aperture is the
+ * one of that row's side of any edge: at exactly 1400 nm the 1400-1500 nm row is averaged over the
+ * 1400 nm-and-above aperture, the 1050-1400 nm row over 7 mm (limit specification errata: each
+ * candidate row over its own aperture). Where the point still touches two aperture rows inside the
+ * scope (an aperture edge inside the row, e.g. 0.35 s in the ultraviolet), the smaller aperture is
+ * used: a smaller aperture never lowers the averaged exposure (ours, the safe side).
+ * Without a scope: the row holding the point (closed-open); on the top edge of the tables the
+ * smallest of the rows touching the point.
+ */
 export function limitingAperture(
   ruleSet: RuleSetId,
   tissue: Tissue,
   wavelength_nm: number | Dec,
   duration_s: number | Dec,
   settings?: LimitSettings,
+  scope?: ApertureScope,
 ): ApertureResult {
   const table = ruleSetTable(ruleSet);
   const rows = table.apertures[tissue];
-  const lambda = new Dec(wavelength_nm);
-  const t = new Dec(duration_s);
-  const inside = (r: ApertureRow, edge: boolean): boolean =>
-    (lambda.gte(r.band_nm[0]) && (lambda.lt(r.band_nm[1]) || (edge && lambda.eq(r.band_nm[1])))) &&
-    (t.gte(r.t_s[0]) && (t.lt(r.t_s[1]) || (edge && t.eq(r.t_s[1]))));
-  const row = rows.find((r) => inside(r, false)) ?? rows.find((r) => inside(r, true));
-  if (!row) throw new Error(`no aperture row for ${tissue} at ${lambda.toString()} nm, ${t.toString()} s`);
+  let lambda = new Dec(wavelength_nm);
+  let t = new Dec(duration_s);
+  let pool: readonly ApertureRow[];
+  if (scope) {
+    // the limit row applies within a relative 1e-9 of its edges: take the point inside it
+    lambda = clamp(scope.band_nm, lambda);
+    t = clamp(scope.t_s, t);
+    pool = rows.filter((r) => sharesStretchAt(r.band_nm, scope.band_nm, lambda) && sharesStretchAt(r.t_s, scope.t_s, t));
+  } else {
+    const inside = rows.find((r) => lambda.gte(r.band_nm[0]) && lambda.lt(r.band_nm[1]) && t.gte(r.t_s[0]) && t.lt(r.t_s[1]));
+    pool = inside ? [inside] : rows.filter((r) => closedHas(r.band_nm, lambda) && closedHas(r.t_s, t));
+  }
+  if (pool.length === 0) throw new Error(`no aperture row for ${tissue} at ${lambda.toString()} nm, ${t.toString()} s`);
+  const sized = pool.map((r) => apertureOf(r, tissue, t, settings));
+  let best = sized[0] as ApertureResult;
+  for (const a of sized) if (new Dec(a.diameter_m).lt(best.diameter_m)) best = a;
+  return best;
+}
+
+function apertureOf(row: ApertureRow, tissue: Tissue, t: Dec, settings: LimitSettings | undefined): ApertureResult {
   const key = apertureKey(tissue, row);
   let mm = evaluate(row.diameter_mm, { t });
   let expr = row.diameter_mm;

@@ -13,7 +13,7 @@ import { InputError, requireInRange } from '../errors.js';
 import type { LimitSettings, RuleSetId, Tissue } from '../model/inputs.js';
 import { addStep, newTrace, type Trace } from '../trace/trace.js';
 import { condition, evaluate, substitute, variablesOf } from './expression.js';
-import { conservativeOn, evaluateFactors, FACTOR_ORDER, type FactorSet, type FactorValue } from './factors.js';
+import { conservativeOn, evaluateFactors, FACTOR_ORDER, onFactorEdge, type FactorSet, type FactorValue } from './factors.js';
 import { DEFAULT_RULE_SET, DURATION_RANGE_S, RULE_SET_IDS, RULE_SET_NAME, ruleSetTable, WAVELENGTH_RANGE_NM } from './rule-sets.js';
 import type { Interval, LimitRow, RuleSetTable } from './table-types.js';
 import { limitingAperture, type ApertureResult } from './apertures.js';
@@ -46,6 +46,12 @@ export interface LimitCandidate {
   readonly fieldOfViewFactor?: string;
   /** Aperture over which exposure is averaged for this candidate. */
   readonly aperture: ApertureResult;
+  /** An uncertain row's less strict reading: used once the row is verified with it, else kept aside (stricter value used). */
+  readonly relaxed?: { readonly used: boolean; readonly H_Jm2: string; readonly expr: string; readonly source: string; readonly keptH_Jm2: string };
+  /** Set when the point is on a factor edge and the factors of the piece ending there gave this (lower) value. */
+  readonly factorsFromBelow?: true;
+  /** Set when the row's "not to exceed" irradiance cap lowered the value (W/m², source). */
+  readonly cap?: { readonly E_Wm2: string; readonly uncappedH_Jm2: string; readonly source: string; readonly confidence: string; readonly conservative: boolean };
 }
 
 export interface ExposureLimitResult {
@@ -152,7 +158,7 @@ interface Ctx {
   /** lambda and t as plain numbers, for the quick reject in rowApplies only. */
   readonly lambdaN: number;
   readonly tN: number;
-  readonly apertures: Map<Tissue, ApertureResult>;
+  readonly apertures: Map<string, ApertureResult>;
 }
 
 function candidatesFor(ctx: Ctx, tableTissue: Tissue, followRefs: boolean, onlyNonRetinal: boolean, apertureTissue: Tissue): LimitCandidate[] {
@@ -190,6 +196,19 @@ function evaluateRow(ctx: Ctx, row: LimitRow, tableTissue: Tissue, apertureTissu
       conservativeApplied = true;
     }
   }
+  // A less strict reading of an uncertain row: kept aside until the row is verified with it.
+  let relaxed: LimitCandidate['relaxed'];
+  if (row.relaxed_alt && condition(row.relaxed_alt.when, vars)) {
+    const alt = toH(evaluate(row.relaxed_alt.expr, vars));
+    if (alt.gt(H)) {
+      const used = (ctx.settings?.verifiedRows ?? []).includes(row.id);
+      relaxed = { used, H_Jm2: recordString(alt), expr: row.relaxed_alt.expr, source: row.relaxed_alt.source, keptH_Jm2: recordString(H) };
+      if (used) {
+        H = alt;
+        expr = row.relaxed_alt.expr;
+      }
+    }
+  }
   // Photochemical limits are measured within the field of view gamma_p: for a uniform source larger
   // than gamma_p only the fraction (gamma_p/alpha)^2 of its irradiance counts, which is the same as
   // raising the limit by (alpha/gamma_p)^2 (derived; limit specification sections 4.2 and 8).
@@ -202,11 +221,23 @@ function evaluateRow(ctx: Ctx, row: LimitRow, tableTissue: Tissue, apertureTissu
       H = H.mul(fov);
     }
   }
-  // Same tissue, wavelength and duration for every candidate: look the aperture up once per tissue.
-  let aperture = ctx.apertures.get(apertureTissue);
+  // "Not to exceed" cap on the mean irradiance (EU Table 2.3 note for 700-1400 nm extended sources).
+  let cap: LimitCandidate['cap'];
+  if (row.max_E && (!row.max_E.conservativeOnly || conservativeOn(ctx.settings, row.id))) {
+    const capH = evaluate(row.max_E.value, vars).mul(ctx.t);
+    if (capH.lt(H)) {
+      cap = { E_Wm2: row.max_E.value, uncappedH_Jm2: recordString(H), source: row.max_E.source, confidence: row.max_E.confidence, conservative: row.max_E.conservativeOnly === true };
+      H = capH;
+    }
+  }
+  // Each candidate row over its own limiting aperture: at an exact band or duration edge the rows on
+  // either side can have different apertures (limit specification errata), and the hazard code takes
+  // the largest hazard over all candidates. Looked up once per tissue and row stretch.
+  const apKey = `${apertureTissue}:${row.band_nm.join('-')}:${row.t_s.join('-')}`;
+  let aperture = ctx.apertures.get(apKey);
   if (!aperture) {
-    aperture = limitingAperture(ctx.ruleSet, apertureTissue, ctx.lambda, ctx.t, ctx.settings);
-    ctx.apertures.set(apertureTissue, aperture);
+    aperture = limitingAperture(ctx.ruleSet, apertureTissue, ctx.lambda, ctx.t, ctx.settings, { band_nm: row.band_nm, t_s: row.t_s });
+    ctx.apertures.set(apKey, aperture);
   }
   const c: LimitCandidate = {
     rowId: row.id,
@@ -222,6 +253,8 @@ function evaluateRow(ctx: Ctx, row: LimitRow, tableTissue: Tissue, apertureTissu
     aperture,
     ...(remembered ? { rememberedH_Jm2: recordString(remembered) } : {}),
     ...(fov ? { fieldOfViewFactor: recordString(fov) } : {}),
+    ...(cap ? { cap } : {}),
+    ...(relaxed ? { relaxed } : {}),
   };
   return c;
 }
@@ -239,6 +272,19 @@ export function exposureLimit(q: ExposureLimitQuery): ExposureLimitResult {
   const f = evaluateFactors(table, lambda, t, alphaForFactors, settings);
   const ctx: Ctx = { table, ruleSet, lambda, t, f, settings, tissue: q.tissue, lambdaN: lambda.toNumber(), tN: t.toNumber(), apertures: new Map() };
   const candidates = candidatesFor(ctx, q.tissue, true, false, q.tissue);
+  if (onFactorEdge(table, lambda, t)) {
+    // Exactly on an edge between factor pieces (C_C at 1200 nm, T_min bands ...): the factors of the
+    // piece ending here are evaluated too, and for each row the lower value is kept (EU Table 2.2
+    // note a applied to the factors; limit specification errata on the T_min bands).
+    const fBelow = evaluateFactors(table, lambda, t, alphaForFactors, settings, 'lower');
+    const below = candidatesFor({ ...ctx, f: fBelow }, q.tissue, true, false, q.tissue);
+    for (const b of below) {
+      const i = candidates.findIndex((c) => c.rowId === b.rowId);
+      const c = candidates[i];
+      if (!c) candidates.push({ ...b, factorsFromBelow: true });
+      else if (new Dec(b.H_Jm2).lt(c.H_Jm2)) candidates[i] = { ...b, factorsFromBelow: true };
+    }
+  }
   if (candidates.length === 0) {
     throw new InputError('not_covered', 'wavelength_nm', q.wavelength_nm, `a band of rule set ${ruleSet} at ${t.toString()} s`);
   }
@@ -260,7 +306,7 @@ export function exposureLimit(q: ExposureLimitQuery): ExposureLimitResult {
   };
 
   const conservativeReplacements = [
-    ...candidates.filter((c) => c.conservativeApplied).map((c) => c.rowId),
+    ...candidates.filter((c) => c.conservativeApplied || c.cap?.conservative === true || (c.relaxed !== undefined && !c.relaxed.used && conservativeOn(settings, c.rowId))).map((c) => c.rowId),
     ...FACTOR_ORDER.filter((n) => hasConservativePiece(table, n))
       .map((n) => f.get(n))
       .filter((v): v is FactorValue => v !== undefined && v.conservativeApplied)
@@ -298,7 +344,7 @@ export function exposureLimit(q: ExposureLimitQuery): ExposureLimitResult {
   }
   for (const c of candidates) {
     addStep(trace, {
-      kind: c.conservativeApplied ? 'conservative' : 'row',
+      kind: c.conservativeApplied || c.cap?.conservative === true ? 'conservative' : 'row',
       label: `Row ${c.rowId} (${c.effect})`,
       detail:
         `${c.quantity === 'E' ? 'E = ' : 'H = '}${c.expr} = ${c.substituted}` +
@@ -306,6 +352,15 @@ export function exposureLimit(q: ExposureLimitQuery): ExposureLimitResult {
         (c.fieldOfViewFactor ? `, times (alpha/gamma_p)^2 = ${fmt(new Dec(c.fieldOfViewFactor))} for a source larger than gamma_p (derived)` : '') +
         (c.conservativeApplied
           ? `; unverified entry: remembered value H = ${fmt(new Dec(c.rememberedH_Jm2 as string))} J/m² replaced by the stricter value (conservative mode)`
+          : '') +
+        (c.relaxed
+          ? c.relaxed.used
+            ? `; verified with the alternative reading ${c.relaxed.expr} (${c.relaxed.source}): H = ${fmt(new Dec(c.relaxed.H_Jm2))} J/m² used instead of ${fmt(new Dec(c.relaxed.keptH_Jm2))} J/m²`
+            : `; uncertain entry: alternative reading ${c.relaxed.expr} = ${fmt(new Dec(c.relaxed.H_Jm2))} J/m² (${c.relaxed.source}) not used, the stricter ${fmt(new Dec(c.relaxed.keptH_Jm2))} J/m² is kept until the row is verified`
+          : '') +
+        (c.factorsFromBelow ? '; factors taken from the piece ending at this exact edge, which gives the lower value (EU Table 2.2 note a)' : '') +
+        (c.cap
+          ? `; not to exceed ${c.cap.E_Wm2} W/m²: ${fmt(new Dec(c.cap.uncappedH_Jm2).div(t))} W/m² capped to ${c.cap.E_Wm2} W/m² (H = ${fmt(new Dec(c.H_Jm2))} J/m²; ${c.cap.source})${c.cap.conservative ? ' (conservative mode)' : ''}`
           : ''),
       value: fmt(new Dec(c.H_Jm2)),
       unit: 'J/m²',
@@ -331,6 +386,16 @@ export function exposureLimit(q: ExposureLimitQuery): ExposureLimitResult {
     source: governing.aperture.source,
     confidence: governing.aperture.confidence,
   });
+  const apertureSizes = new Set(candidates.map((c) => c.aperture.diameter_mm));
+  if (apertureSizes.size > 1) {
+    addStep(trace, {
+      kind: 'note',
+      label: 'Apertures per row',
+      detail: `the rows apply over different limiting apertures (${candidates.map((c) => `${c.rowId}: ${c.aperture.diameter_mm} mm`).join('; ')}); each row is compared with the exposure over its own aperture and the hazard distance and optical density take the largest result`,
+      source: 'limit specification errata (apertures at an exact edge)',
+      confidence: 'read',
+    });
+  }
   const Hr = roundSig(H, 3, 'down');
   const Er = roundSig(E, 3, 'down');
   addStep(trace, { kind: 'rounding', label: 'Reported', detail: 'limits are rounded DOWN to 3 significant figures (the safe direction)', value: `${Hr.toString()} J/m²; ${Er.toString()} W/m²` });

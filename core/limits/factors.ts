@@ -27,13 +27,26 @@ function atTop(x: Dec, iv: Interval): boolean {
   return x.eq(iv[1]);
 }
 
-function pickPiece(def: FactorDef, vars: Vars): FactorPiece | undefined {
+/** (lo, hi]: the piece that ends at x, for the lower side of an exact edge. */
+function inIntervalFromBelow(x: Dec, iv: Interval): boolean {
+  return x.gt(iv[0]) && x.lte(iv[1]);
+}
+
+/**
+ * Which piece to use where the point sits exactly on the edge between two pieces: 'upper' (the
+ * piece starting there, the tables' closed-open convention) or 'lower' (the piece ending there).
+ * The limit engine evaluates both at an exact edge and keeps the lower limit (EU Table 2.2 note a).
+ */
+export type EdgeSide = 'upper' | 'lower';
+
+function pickPiece(def: FactorDef, vars: Vars, side: EdgeSide = 'upper'): FactorPiece | undefined {
   const pieces = def.pieces ?? [];
   const lambda = vars['lambda'] as Dec;
   const t = vars['t'] as Dec;
+  const within = side === 'upper' ? inInterval : inIntervalFromBelow;
   const ok = (p: FactorPiece, edge: boolean): boolean => {
-    if (p.band_nm && !(inInterval(lambda, p.band_nm) || (edge && atTop(lambda, p.band_nm)))) return false;
-    if (p.t_s && !(inInterval(t, p.t_s) || (edge && atTop(t, p.t_s)))) return false;
+    if (p.band_nm && !(within(lambda, p.band_nm) || (edge && (inInterval(lambda, p.band_nm) || atTop(lambda, p.band_nm))))) return false;
+    if (p.t_s && !(within(t, p.t_s) || (edge && (inInterval(t, p.t_s) || atTop(t, p.t_s))))) return false;
     if (p.alpha_mrad && !condition(p.alpha_mrad, vars)) return false;
     if (p.when && !condition(p.when, vars)) return false;
     return true;
@@ -52,6 +65,7 @@ export function evalFactor(
   name: string,
   vars: Vars,
   settings: LimitSettings | undefined,
+  side: EdgeSide = 'upper',
 ): FactorValue | undefined {
   const def = table.factors[name];
   if (!def) return undefined;
@@ -60,7 +74,7 @@ export function evalFactor(
     return { name, value: new Dec(def.value), expr: String(def.value), source, confidence: def.confidence ?? '', conservativeApplied: false };
   }
   if (def.pieces) {
-    const p = pickPiece(def, vars);
+    const p = pickPiece(def, vars, side);
     if (!p) return undefined;
     const v = evaluate(p.expr, vars);
     if (p.conservative_alt && conservativeOn(settings, `factor:${name}`)) {
@@ -104,13 +118,14 @@ export function evaluateFactors(
   t: Dec,
   alpha: Dec,
   settings: LimitSettings | undefined,
+  side: EdgeSide = 'upper',
 ): FactorSet {
   const vars: Record<string, Dec | undefined> = { lambda, t, alpha };
   const cache = new Map<string, FactorValue | null>();
   const get = (name: string): FactorValue | undefined => {
     let f = cache.get(name);
     if (f === undefined) {
-      f = evalFactor(table, name, vars, settings) ?? null;
+      f = evalFactor(table, name, vars, settings, side) ?? null;
       cache.set(name, f);
     }
     return f ?? undefined;
@@ -130,4 +145,25 @@ export function evaluateFactors(
       return all;
     },
   };
+}
+
+const edgeCache = new WeakMap<RuleSetTable, { lambda: Set<number>; t: Set<number> }>();
+
+/**
+ * Is (lambda, t) exactly on an inner edge between factor pieces (where the two sides can give
+ * different values, e.g. C_C at 1200 nm: 10^0.9 = 7.94 below, 8 above)?
+ */
+export function onFactorEdge(table: RuleSetTable, lambda: Dec, t: Dec): boolean {
+  let e = edgeCache.get(table);
+  if (!e) {
+    e = { lambda: new Set(), t: new Set() };
+    for (const def of Object.values(table.factors)) {
+      for (const p of def.pieces ?? []) {
+        if (p.band_nm) p.band_nm.forEach((x) => e?.lambda.add(x));
+        if (p.t_s) p.t_s.forEach((x) => e?.t.add(x));
+      }
+    }
+    edgeCache.set(table, e);
+  }
+  return e.lambda.has(lambda.toNumber()) || e.t.has(t.toNumber());
 }

@@ -24,7 +24,7 @@ import { InputError, requireInRange, requirePositive } from '../errors.js';
 import type { LimitSettings, RuleSetId, Tissue } from '../model/inputs.js';
 import { addStep, newTrace, type Trace } from '../trace/trace.js';
 import { condition, evaluate } from './expression.js';
-import { conservativeOn, evaluateFactors, type FactorSet } from './factors.js';
+import { conservativeOn, evaluateFactors, type EdgeSide, type FactorSet } from './factors.js';
 import { exposureLimit, type ExposureLimitResult, type LimitCandidate } from './exposure-limit.js';
 import { DEFAULT_RULE_SET, DURATION_RANGE_S, RULE_SET_NAME, ruleSetTable } from './rule-sets.js';
 import { groupsAmong, groupWithin, pulsesIn, type Grouping } from './pulse-counting.js';
@@ -146,9 +146,9 @@ interface GroupingTime {
  * Factors the pulse rules need (T_i / T_min, T2, alpha_max), evaluated on their own at the pulse
  * duration: reading ExposureLimitResult.factors would evaluate all twelve factors.
  */
-function pulseFactors(q: PulsedLimitQuery, ruleSet: RuleSetId, tp: Dec): FactorSet {
+function pulseFactors(q: PulsedLimitQuery, ruleSet: RuleSetId, tp: Dec, side: EdgeSide = 'upper'): FactorSet {
   const alpha = q.tissue === 'eye' ? new Dec(q.sourceAngle_rad ?? 0).mul(1000) : new Dec(0);
-  return evaluateFactors(ruleSetTable(ruleSet), new Dec(q.wavelength_nm), tp, alpha, q.settings);
+  return evaluateFactors(ruleSetTable(ruleSet), new Dec(q.wavelength_nm), tp, alpha, q.settings, side);
 }
 
 function groupingTime(ruleSet: RuleSetId, pf: FactorSet, lambda: number): GroupingTime | null {
@@ -239,7 +239,9 @@ export function pulsedExposureLimit(q: PulsedLimitQuery): PulsedLimitResult {
 
   // Grouping inside T_i / T_min: the summed energy against the limit for the group duration.
   const pf = pulseFactors(q, ruleSet, tp);
-  const gt = groupingTime(ruleSet, pf, q.wavelength_nm);
+  // EU Table 2.6 writes its T_min bands lo < lambda <= hi: on an exact band edge (1050, 1400, 1500,
+  // 1800, 2600 nm) the lower band's T_min applies (limit specification errata).
+  const gt = groupingTime(ruleSet, ruleSet === 'eu2006' ? pulseFactors(q, ruleSet, tp, 'lower') : pf, q.wavelength_nm);
   const g: Grouping | null = gt ? groupWithin(f, gt.T_g, T, NT) : null;
   let grouping: PulsedLimitResult['grouping'] = null;
   let groupLimit: ExposureLimitResult | null = null;

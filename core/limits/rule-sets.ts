@@ -25,3 +25,18 @@ export function ruleSetTable(id: RuleSetId): RuleSetTable {
 /** Coverage of both rule sets (limit specification, section 0). */
 export const WAVELENGTH_RANGE_NM = [180, 1e6] as const;
 export const DURATION_RANGE_S = [1e-13, 3e4] as const;
+
+const bandEdgeCache = new Map<RuleSetId, Set<number>>();
+
+/** Is the wavelength exactly on an inner edge between limit-table bands of the rule set (either tissue)? */
+export function onBandEdge(ruleSet: RuleSetId, wavelength_nm: number): boolean {
+  let edges = bandEdgeCache.get(ruleSet);
+  if (!edges) {
+    edges = new Set<number>();
+    const t = ruleSetTable(ruleSet);
+    for (const row of [...t.eye, ...t.skin]) for (const e of row.band_nm) edges.add(e);
+    for (const e of WAVELENGTH_RANGE_NM) edges.delete(e);
+    bandEdgeCache.set(ruleSet, edges);
+  }
+  return edges.has(wavelength_nm);
+}

@@ -43,6 +43,18 @@ export interface LimitRow {
   readonly when?: string;
   readonly conservative_alt?: string;
   readonly note?: string;
+  /**
+   * "Not to exceed" cap on the mean irradiance over the exposure duration, W/m² (for example EU
+   * Table 2.3, 700-1400 nm extended sources: 1000 W/m²). conservativeOnly: applied only while the
+   * row is unverified and conservative mode is on (a cap borrowed from the stricter rule set).
+   */
+  readonly max_E?: { readonly value: string; readonly source: string; readonly confidence: string; readonly conservativeOnly?: boolean };
+  /**
+   * A less strict reading of an uncertain row (for example an older edition), in the row's quantity,
+   * where 'when' holds. The stricter expr is kept until a named person verifies the row with this
+   * reading (settings.verifiedRows holds the row id); the trace always names it.
+   */
+  readonly relaxed_alt?: { readonly expr: string; readonly when: string; readonly source: string; readonly confidence: string };
 }
 
 export interface ApertureRow {

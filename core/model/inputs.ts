@@ -66,6 +66,14 @@ export interface ViewingConditions {
     readonly targetDistance_m?: number;
     /** Distance from the reflecting surface to a viewer to assess (e.g. a person at the table), metres. */
     readonly viewerDistance_m?: number;
+    /**
+     * Viewing duration for someone deliberately looking at the diffuse spot (alignment on a card or
+     * screen), seconds; default 600 s (customary for deliberate viewing of diffuse reflections,
+     * from memory). Both cases are evaluated and shown.
+     */
+    readonly deliberateDuration_s?: number;
+    /** Which case the officer takes as governing; default: the one with the larger distance. */
+    readonly governs?: 'accidental' | 'deliberate';
   };
   readonly specular?: { readonly reflectance: number; readonly pathToSurface_m?: number };
   readonly lens?: { readonly focalLength_m: number; readonly beamDiameterAtLens_m?: number };
@@ -90,6 +98,11 @@ export interface BeamInput {
   /** Angular subtense of the apparent source, radians; default point source. */
   readonly sourceAngle_rad?: number;
   readonly viewing?: ViewingConditions;
+  /**
+   * Irradiated skin area, m² (optional): above 0.01 m², for t > 10 s at 1400 nm - 1 mm, the skin
+   * limit is reduced to 10/A_s W/m² (100 W/m² from 0.1 m²).
+   */
+  readonly skinArea_m2?: number;
   readonly tolerances?: InputTolerances;
   readonly settings?: LimitSettings;
 }

@@ -46,6 +46,12 @@ export interface DistanceResult {
   readonly governingRule: PulseRule;
   /** Where the distance is measured from (exit aperture, focal point, fibre end, reflecting surface). */
   readonly measuredFrom: string;
+  /** Diffuse reflections: which viewing case this is (both are evaluated). */
+  readonly viewing?: 'accidental' | 'deliberate';
+  /** Diffuse reflections: the viewing duration the limit was taken for, s. */
+  readonly exposureDuration_s?: number;
+  /** Diffuse reflections: whether this case governs (the officer's choice, or the larger distance). */
+  readonly governs?: boolean;
   readonly trace: Trace;
 }
 

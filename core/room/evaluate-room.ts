@@ -165,7 +165,7 @@ export function evaluateRoom(input: RoomInput): RoomResult {
   let largestWhat = 'none';
   for (const b of beams) {
     for (const d of b.distances) {
-      if (d.kind === 'skin') continue;
+      if (d.kind === 'skin' || d.governs === false) continue; // a diffuse case the officer did not take as governing
       const x = new Dec(d.distance_m);
       if (x.gt(largest)) {
         largest = x;

@@ -1229,6 +1229,11 @@ export const EU2006_TABLE: RuleSetTable = {
       "source": "EU-2.3-MEM",
       "confidence": "from memory",
       "when": "alpha > 1.5 and t > T2",
+      "max_E": {
+        "value": "1000",
+        "source": "EU Directive 2006/25/EC Annex II Table 2.3, note beside the 700-1400 nm entry: not to exceed 1000 W/m^2 (from memory; limit specification errata)",
+        "confidence": "from memory"
+      },
       "note": "For 700-1400 nm Table 2.3 adds 'not to exceed 1000 W/m^2' (memory)."
     },
     {
@@ -1354,6 +1359,11 @@ export const EU2006_TABLE: RuleSetTable = {
       "source": "EU-2.3-MEM",
       "confidence": "from memory",
       "when": "alpha > 1.5 and t > T2",
+      "max_E": {
+        "value": "1000",
+        "source": "EU Directive 2006/25/EC Annex II Table 2.3, note beside the 700-1400 nm entry: not to exceed 1000 W/m^2 (from memory; limit specification errata)",
+        "confidence": "from memory"
+      },
       "note": "Table 2.3 adds 'not to exceed 1000 W/m^2' (memory)."
     },
     {

@@ -387,7 +387,13 @@ export const ICNIRP2013_TABLE: RuleSetTable = {
       "unit": "J/m^2",
       "effect": "UV-A lens (photochemical)",
       "source": "ICNIRP2013; IEC2014 Annex A; ANSI2014 Tab. 5a (all from memory); same as EU Tab. 2.3 (from memory)",
-      "confidence": "from memory"
+      "confidence": "from memory, uncertain",
+      "relaxed_alt": {
+        "expr": "10*t",
+        "when": "t > 1000",
+        "source": "older editions (from memory): E = 10 W/m² from 1000 s to 30 000 s (limit specification errata); used only once the row is verified with that reading",
+        "confidence": "from memory, uncertain"
+      }
     },
     {
       "id": "H-E-VIS-1",
@@ -643,7 +649,13 @@ export const ICNIRP2013_TABLE: RuleSetTable = {
       "effect": "retinal thermal",
       "source": "ICNIRP2013; IEC2014 Annex A; ANSI2014 Tab. 5a (all from memory); same as EU Tab. 2.3 (from memory)",
       "confidence": "from memory",
-      "when": "alpha > 1.5 and t > T2"
+      "when": "alpha > 1.5 and t > T2",
+      "max_E": {
+        "value": "1000",
+        "source": "EU Directive 2006/25/EC Annex II Table 2.3 note (from memory), applied to set (a) while unverified (limit specification errata)",
+        "confidence": "from memory, uncertain",
+        "conservativeOnly": true
+      }
     },
     {
       "id": "H-E-NIR2-1",
@@ -769,7 +781,13 @@ export const ICNIRP2013_TABLE: RuleSetTable = {
       "effect": "retinal thermal",
       "source": "ICNIRP2013; IEC2014 Annex A; ANSI2014 Tab. 5a (all from memory); same as EU Tab. 2.3 (from memory)",
       "confidence": "from memory",
-      "when": "alpha > 1.5 and t > T2"
+      "when": "alpha > 1.5 and t > T2",
+      "max_E": {
+        "value": "1000",
+        "source": "EU Directive 2006/25/EC Annex II Table 2.3 note (from memory), applied to set (a) while unverified (limit specification errata)",
+        "confidence": "from memory, uncertain",
+        "conservativeOnly": true
+      }
     },
     {
       "id": "H-E-CORNEA-1200",

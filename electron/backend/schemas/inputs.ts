@@ -79,6 +79,8 @@ export const ViewingConditionsSchema = z.strictObject({
       viewingAngle_rad: nonNegative('rad').max(Math.PI / 2, 'must be at most π/2 rad (90° from the normal)').optional(),
       targetDistance_m: nonNegative('m').optional(),
       viewerDistance_m: nonNegative('m').optional(),
+      deliberateDuration_s: positive('s').max(30000, 'must be at most 30 000 s (a working day)').optional(),
+      governs: z.enum(['accidental', 'deliberate'], { error: "must be 'accidental' or 'deliberate'" }).optional(),
     })
     .optional(),
   specular: z.strictObject({ reflectance: fraction('reflectance'), pathToSurface_m: nonNegative('m').optional() }).optional(),
@@ -111,6 +113,7 @@ export const BeamInputSchema = z.strictObject({
   exposureDuration_s: positive('s').optional(),
   sourceAngle_rad: nonNegative('rad').optional(),
   viewing: ViewingConditionsSchema.optional(),
+  skinArea_m2: nonNegative('m²').max(10, 'must be at most 10 m² (irradiated skin area)').optional(),
   tolerances: InputTolerancesSchema.optional(),
   settings: LimitSettingsSchema.optional(),
 });

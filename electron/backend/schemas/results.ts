@@ -76,6 +76,9 @@ export const DistanceResultSchema = z.strictObject({
   zero: z.boolean(),
   governingRule: PulseRuleSchema,
   measuredFrom: z.string(),
+  viewing: z.enum(['accidental', 'deliberate']).optional(),
+  exposureDuration_s: z.number().optional(),
+  governs: z.boolean().optional(),
   trace: TraceSchema,
 });
 

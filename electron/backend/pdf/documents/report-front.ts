@@ -6,7 +6,7 @@ import { factTable, gridTable, heading, paragraph } from '../blocks.js';
 import * as fmt from '../format.js';
 import { COLOR, cautionBlock, DRAFT_HEADER } from '../page.js';
 import type { RoomView } from '../room-view.js';
-import { beamFigures } from './beam-figures.js';
+import { beamFigures, diffuseCases } from './beam-figures.js';
 
 const OPERATING_STATE: Readonly<Record<string, string>> = {
   normal: 'normal operation',
@@ -96,7 +96,7 @@ export function beamSummary(doc: DocumentInput, view: RoomView, units: UnitHabit
     heading('Summary per beam'),
     paragraph(
       `Limits are rounded down, distances, optical densities and scale numbers up (${units === 'ANSI' ? 'W/cm², J/cm²' : 'W/m², J/m²'}; distances in metres). ` +
-        'Diffuse: hazard zone radius for diffuse reflection. Class: estimate / as labelled — the manufacturer\'s class governs.',
+        'Diffuse: hazard zone radius for diffuse reflection (the governing viewing case; both cases are listed below the table). Class: estimate / as labelled — the manufacturer\'s class governs.',
       { fontSize: 8, color: COLOR.muted },
     ),
     gridTable(
@@ -106,6 +106,7 @@ export function beamSummary(doc: DocumentInput, view: RoomView, units: UnitHabit
       [72, 32, 60, '*', 32, 32, 30, 30, 46, 30],
       7.2,
     ),
+    ...diffuseLines(view),
     ...(warnings.length === 0
       ? []
       : [
@@ -113,4 +114,13 @@ export function beamSummary(doc: DocumentInput, view: RoomView, units: UnitHabit
           { ul: warnings.map((w) => ({ text: w, color: COLOR.bad })), fontSize: 8.5, margin: [0, 0, 0, 4] } as Content,
         ]),
   ];
+}
+
+/** One line per beam with diffuse viewing: the accidental and the deliberate case, and which governs. */
+function diffuseLines(view: RoomView): Content[] {
+  const lines = view.beams.flatMap((b, i) => {
+    const cases = diffuseCases(b.result);
+    return cases === null ? [] : [`Beam ${i + 1} (${b.result.label}), diffuse reflection: ${cases}.`];
+  });
+  return lines.length === 0 ? [] : [paragraph(lines.join('\n'), { fontSize: 8, color: COLOR.muted })];
 }
