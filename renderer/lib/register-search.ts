@@ -115,7 +115,8 @@ export function searchRegister(o: RegisterOverview, text: string, today: string)
       if (!onlyRecords) {
         for (const i of r.installations) {
           const wls = i.laser.beams.map((b) => b.wavelength_nm);
-          if (q.band && !wls.some((w) => w >= q.band!.from && w <= q.band!.to)) continue;
+          const band = q.band;
+          if (band && !wls.some((w) => w >= band.from && w <= band.to)) continue;
           if (q.laserClass && i.classAsLabelled !== q.laserClass) continue;
           if (!hasWords(q, [i.laser.name, i.laserType, i.maker, i.model, i.serialNumber, i.registrationNumber, r.room.code, ...wls.map((w) => `${w} nm`)].join(' '))) continue;
           const wlText = [...new Set(wls)].map((w) => quantityText(w, 'nm')).join(', ');
@@ -156,7 +157,8 @@ export function searchRegister(o: RegisterOverview, text: string, today: string)
     }
     if (!q.laserClass && !onlyRecords) {
       for (const e of s.eyewear) {
-        if (q.band && !eyewearBands(e).some((b) => b.from <= q.band!.to && b.to >= q.band!.from)) continue;
+        const band = q.band;
+        if (band && !eyewearBands(e).some((b) => b.from <= band.to && b.to >= band.from)) continue;
         if (!hasWords(q, [e.spec.id, e.spec.label, e.location, e.notes].join(' '))) continue;
         const bands = eyewearBands(e).map((b) => `${b.from}–${b.to} nm`);
         eyewear.push({ kind: 'eyewear', id: e.id, title: `${e.spec.id} ${e.spec.label}`, detail: [[...new Set(bands)].join(', '), e.location ? `kept at ${e.location}` : null].filter(Boolean).join(' · ') });
