@@ -11,5 +11,10 @@ export interface ApiContext {
   readonly version: string;
   /** Absolute path of the SQLite database in use. */
   readonly databasePath: string;
-  readonly store: RecordStore;
+  /** The open record store. Replaced (closed and opened again) by "Restore from backup". */
+  store: RecordStore;
+  /** Opens this shell's database again; without it the app cannot restore a backup itself. */
+  readonly openStore?: () => RecordStore;
+  /** better-sqlite3 build for this runtime (Electron), when not the default. */
+  readonly nativeBinding?: string;
 }

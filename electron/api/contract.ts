@@ -9,5 +9,6 @@ import type { AssessmentHandlers } from './contracts/assessments.js';
 import type { DocumentHandlers } from './contracts/documents.js';
 import type { ExchangeHandlers } from './contracts/exchange.js';
 import type { RegisterHandlers } from './contracts/register.js';
+import type { SafekeepingHandlers } from './contracts/safekeeping.js';
 
-export type Handlers = AppHandlers & RegisterHandlers & AssessmentHandlers & ExchangeHandlers & DocumentHandlers;
+export type Handlers = AppHandlers & RegisterHandlers & AssessmentHandlers & ExchangeHandlers & DocumentHandlers & SafekeepingHandlers;

@@ -18,6 +18,8 @@ export const MENU_COMMANDS = [
   'print-screen',
   'export-json',
   'import-json',
+  'backup-now',
+  'restore-backup',
 ] as const;
 export type MenuCommand = (typeof MENU_COMMANDS)[number];
 

@@ -8,6 +8,9 @@ export type ApiErrorCode =
   | 'input_error' // the core refused a value (InputError): field, value and valid range
   | 'not_found'
   | 'conflict' // e.g. a signed record cannot be changed
+  | 'stale' // someone else saved meanwhile: reload and compare (nothing was overwritten)
+  | 'in-use' // the database is open for writing in another Beamwarden
+  | 'storage' // the disk or folder refused: read-only, full, missing, immutable file
   | 'forbidden' // sender or token check failed
   | 'internal';
 

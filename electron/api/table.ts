@@ -10,6 +10,7 @@ import { assessmentTable } from './handlers/assessments.js';
 import { documentTable } from './handlers/documents.js';
 import { exchangeTable } from './handlers/exchange.js';
 import { registerTable } from './handlers/register.js';
+import { safekeepingTable } from './handlers/safekeeping.js';
 
 export const handlerTable: HandlerTable<ApiContext> = {
   ...appTable,
@@ -17,6 +18,7 @@ export const handlerTable: HandlerTable<ApiContext> = {
   ...assessmentTable,
   ...exchangeTable,
   ...documentTable,
+  ...safekeepingTable,
 };
 
 export const OPERATION_NAMES = Object.keys(handlerTable) as readonly OperationName[];

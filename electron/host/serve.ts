@@ -19,9 +19,11 @@ async function main(): Promise<void> {
   if (!existsSync(path.join(RENDERER_DIST, 'index.html'))) {
     throw new Error(`the renderer is not built (${RENDERER_DIST}); run "npm run build" first (npm run serve does it for you)`);
   }
-  const store = openRecordStore({ path: path.resolve(opts.db ?? defaultDatabasePath()) });
+  const dbPath = path.resolve(opts.db ?? defaultDatabasePath());
+  const open = () => openRecordStore(opts.db === undefined ? {} : { path: dbPath });
+  const store = open();
   if (opts.demo) store.seedDemo();
-  const ctx: ApiContext = { shell: 'loopback', version: packageVersion(), databasePath: store.info.path, store };
+  const ctx: ApiContext = { shell: 'loopback', version: packageVersion(), databasePath: store.info.path, store, openStore: open };
   // 24 random bytes: a new token on every start, so an old address stops working.
   const token = randomBytes(24).toString('base64url');
   const host = await startLoopbackHost({ table: handlerTable, ctx, token, rendererDir: RENDERER_DIST, port: opts.port });
@@ -32,7 +34,7 @@ async function main(): Promise<void> {
     if (stopping) return;
     stopping = true;
     void host.close().then(() => {
-      store.close();
+      ctx.store.close();
       process.exit(0);
     });
   };

@@ -9,9 +9,22 @@ import { timingSafeEqual } from 'node:crypto';
 import type { AddressInfo } from 'node:net';
 import { dispatch } from '../api/dispatch.js';
 import type { HandlerTable } from '../api/operation.js';
-import type { Reply } from '../api/reply.js';
+import type { ApiErrorCode, Reply } from '../api/reply.js';
 import { SECURITY_HEADERS } from '../api/content-security.js';
 import { loadStatic } from './static-files.js';
+
+const STATUS_OF: Readonly<Record<ApiErrorCode, number>> = {
+  invalid_input: 400,
+  unknown_operation: 404,
+  input_error: 400,
+  not_found: 400,
+  conflict: 400,
+  stale: 409,
+  'in-use': 423,
+  storage: 507,
+  forbidden: 403,
+  internal: 500,
+};
 
 export const TOKEN_HEADER = 'x-beamwarden-token';
 /** Large enough for a whole-site JSON import; anything bigger is refused before parsing. */
@@ -103,7 +116,7 @@ export function startLoopbackHost<C>(opts: LoopbackHostOptions<C>): Promise<Runn
       }
       const name = url.pathname.slice('/api/'.length);
       const reply = await dispatch(opts.table, opts.ctx, name, payload);
-      const status = reply.ok ? 200 : reply.error.code === 'unknown_operation' ? 404 : reply.error.code === 'internal' ? 500 : 400;
+      const status = reply.ok ? 200 : STATUS_OF[reply.error.code];
       return sendReply(res, status, reply);
     }
     if (req.method !== 'GET' && req.method !== 'HEAD') return refuse(res, 405, 'only GET for files');

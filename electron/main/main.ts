@@ -72,8 +72,17 @@ void app.whenReady().then(() => {
   harden();
   const databasePath = process.env['BEAMWARDEN_DB'] ?? defaultDatabasePath();
   const nativeBinding = electronNativeBinding(ROOT, process.versions.electron ?? '');
-  const store = openRecordStore({ path: databasePath, ...(nativeBinding ? { nativeBinding } : {}) });
-  const ctx: ApiContext = { shell: 'electron', version: packageVersion(), databasePath: store.info.path, store };
+  // The default folder is made with its parents on first start; a folder named in BEAMWARDEN_DB must exist.
+  const open = () => openRecordStore({ ...(process.env['BEAMWARDEN_DB'] ? { path: databasePath } : {}), ...(nativeBinding ? { nativeBinding } : {}) });
+  const store = open();
+  const ctx: ApiContext = {
+    shell: 'electron',
+    version: packageVersion(),
+    databasePath: store.info.path,
+    store,
+    openStore: open,
+    ...(nativeBinding ? { nativeBinding } : {}),
+  };
   registerIpc(handlerTable, ctx, () => win);
   serveRenderer(RENDERER_DIR);
   Menu.setApplicationMenu(buildMenu(() => win, process.platform === 'darwin'));
@@ -87,7 +96,7 @@ void app.whenReady().then(() => {
   app.on('activate', () => {
     if (BrowserWindow.getAllWindows().length === 0) createWindow();
   });
-  app.on('will-quit', () => store.close());
+  app.on('will-quit', () => ctx.store.close());
 });
 
 app.on('window-all-closed', () => {

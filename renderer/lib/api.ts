@@ -72,7 +72,10 @@ function bytesFromBase64(base64: string): Uint8Array<ArrayBuffer> {
 }
 
 export function base64FromText(text: string): string {
-  const bytes = new TextEncoder().encode(text);
+  return base64FromBytes(new TextEncoder().encode(text));
+}
+
+export function base64FromBytes(bytes: Uint8Array): string {
   let bin = '';
   for (let i = 0; i < bytes.length; i += 0x8000) bin += String.fromCharCode(...bytes.subarray(i, i + 0x8000));
   return btoa(bin);
@@ -116,6 +119,17 @@ export async function printScreen(): Promise<void> {
 
 export function onMenuCommand(listener: (c: MenuCommand) => void): () => void {
   return window.beamwarden ? window.beamwarden.onMenuCommand(listener) : () => {};
+}
+
+/**
+ * A file's bytes for an import: gzip-compressed as they are, plain JSON compressed here first, so
+ * a large export from an older Beamwarden still fits in one request.
+ */
+export async function importFileBase64(file: Blob): Promise<string> {
+  const bytes = new Uint8Array(await file.arrayBuffer());
+  if (bytes.length >= 2 && bytes[0] === 0x1f && bytes[1] === 0x8b) return base64FromBytes(bytes);
+  const gz = await new Response(new Blob([bytes]).stream().pipeThrough(new CompressionStream('gzip'))).arrayBuffer();
+  return base64FromBytes(new Uint8Array(gz));
 }
 
 /** Plain message of anything thrown, for an alert line. */

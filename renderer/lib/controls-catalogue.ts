@@ -25,7 +25,11 @@ export interface CatalogueItem {
   readonly help?: string;
 }
 
-const T10 = 'Z136.1-2000 Table 10';
+// Printed basis: the edition family of the rule sets (ANSI Z136.1-2014) and the clause topic; the
+// clause numbers were read in the 2000 edition's table and are not repeated for 2014 (not re-read).
+const ENG = 'ANSI Z136.1-2014, engineering control measures';
+const ADM = 'ANSI Z136.1-2014, administrative and procedural control measures';
+const PPE = 'ANSI Z136.1-2014, protective equipment';
 const r = (c1: Requirement, c2: Requirement, c3a: Requirement, c3b: Requirement, c4: Requirement): Record<Column, Requirement> => ({
   '1': c1,
   '2': c2,
@@ -36,46 +40,46 @@ const r = (c1: Requirement, c2: Requirement, c3a: Requirement, c3b: Requirement,
 
 export const CONTROL_CATALOGUE: readonly CatalogueItem[] = [
   // engineering
-  { id: 'housing', category: 'engineering', measure: 'Protective housing', basis: `${T10}, 4.3.1`, req: r('S', 'S', 'S', 'S', 'S') },
-  { id: 'housing-interlocks', category: 'engineering', measure: 'Interlocks on the protective housing', basis: `${T10}, 4.3.2`, req: r('E', 'E', 'E', 'S', 'S') },
-  { id: 'service-panel', category: 'engineering', measure: 'Service access panels interlocked or needing a tool', basis: `${T10}, 4.3.3`, req: r('E', 'E', 'E', 'S', 'S') },
-  { id: 'key-control', category: 'engineering', measure: 'Key switch or master control', basis: `${T10}, 4.3.4`, req: r('-', '-', '-', 's', 'S') },
-  { id: 'viewing-portals', category: 'engineering', measure: 'Viewing windows and portals filtered below the MPE', basis: `${T10}, 4.3.5.1`, req: r('-', 'MPE', 'MPE', 'MPE', 'MPE') },
-  { id: 'collecting-optics', category: 'engineering', measure: 'Filters or interlocks on collecting optics (microscopes, viewers)', basis: `${T10}, 4.3.5.2`, req: r('MPE', 'MPE', 'MPE', 'MPE', 'MPE') },
-  { id: 'open-beam', category: 'engineering', measure: 'Open beam path: beam enclosed where practical, NHZ set and controlled', basis: `${T10}, 4.3.6.1-4.3.6.2`, req: r('-', '-', '-', 'NHZ', 'NHZ') },
-  { id: 'remote-interlock', category: 'engineering', measure: 'Remote interlock connector wired to the door or area interlock', basis: `${T10}, 4.3.7`, req: r('-', '-', '-', 's', 'S') },
-  { id: 'beam-stop', category: 'engineering', measure: 'Beam stop or attenuator on the laser; beams end in suitable beam stops', basis: `${T10}, 4.3.8; domain 4.3`, req: r('-', '-', '-', 's', 'S') },
-  { id: 'activation-warning', category: 'engineering', measure: 'Activation warning (laser-on light or sound) at the entrance', basis: `${T10}, 4.3.9; domain 4.3`, req: r('-', '-', '-', 's', 'S') },
-  { id: 'emission-delay', category: 'engineering', measure: 'Emission delay after switch-on', basis: `${T10}, 4.3.9`, req: r('-', '-', '-', '-', 'S') },
-  { id: 'lca', category: 'engineering', measure: 'Laser controlled area with controlled entry', basis: `${T10}, 4.3.10`, req: r('-', '-', '-', 'NHZ', 'NHZ') },
+  { id: 'housing', category: 'engineering', measure: 'Protective housing', basis: ENG, req: r('S', 'S', 'S', 'S', 'S') },
+  { id: 'housing-interlocks', category: 'engineering', measure: 'Interlocks on the protective housing', basis: ENG, req: r('E', 'E', 'E', 'S', 'S') },
+  { id: 'service-panel', category: 'engineering', measure: 'Service access panels interlocked or needing a tool', basis: ENG, req: r('E', 'E', 'E', 'S', 'S') },
+  { id: 'key-control', category: 'engineering', measure: 'Key switch or master control', basis: ENG, req: r('-', '-', '-', 's', 'S') },
+  { id: 'viewing-portals', category: 'engineering', measure: 'Viewing windows and portals filtered below the MPE', basis: ENG, req: r('-', 'MPE', 'MPE', 'MPE', 'MPE') },
+  { id: 'collecting-optics', category: 'engineering', measure: 'Filters or interlocks on collecting optics (microscopes, viewers)', basis: ENG, req: r('MPE', 'MPE', 'MPE', 'MPE', 'MPE') },
+  { id: 'open-beam', category: 'engineering', measure: 'Open beam path: beam enclosed where practical, NHZ set and controlled', basis: ENG, req: r('-', '-', '-', 'NHZ', 'NHZ') },
+  { id: 'remote-interlock', category: 'engineering', measure: 'Remote interlock connector wired to the door or area interlock', basis: ENG, req: r('-', '-', '-', 's', 'S') },
+  { id: 'beam-stop', category: 'engineering', measure: 'Beam stop or attenuator on the laser; beams end in suitable beam stops', basis: ENG, req: r('-', '-', '-', 's', 'S') },
+  { id: 'activation-warning', category: 'engineering', measure: 'Activation warning (laser-on light or sound) at the entrance', basis: ENG, req: r('-', '-', '-', 's', 'S') },
+  { id: 'emission-delay', category: 'engineering', measure: 'Emission delay after switch-on', basis: ENG, req: r('-', '-', '-', '-', 'S') },
+  { id: 'lca', category: 'engineering', measure: 'Laser controlled area with controlled entry', basis: ENG, req: r('-', '-', '-', 'NHZ', 'NHZ') },
   {
     id: 'entryway',
     category: 'engineering',
     measure: 'Entryway control: non-defeatable interlock, defeatable interlock, or procedural entry',
-    basis: 'Z136.1 4.3.10.2; domain 4.3 [MTU-CL4], [PH-ACCESS]',
+    basis: 'ANSI Z136.1-2014, laser controlled area: entryway controls',
     req: r('-', '-', '-', 's', 'S'),
     help: 'Class 4: one of the three options, chosen by the LSO; procedural entry is not suitable where the public can open the door.',
   },
-  { id: 'emergency-stop', category: 'engineering', measure: 'Emergency beam-off button, easy to see and reach', basis: 'domain 4.3 [MTU-CL4], [PITT]', req: r('-', '-', '-', '-', 'S') },
-  { id: 'barriers', category: 'engineering', measure: 'Laser barrier or curtain where the NHZ extends beyond the work area (rated for the exposure time)', basis: 'domain 4.3-4.4 [CEMAR-PPE] (common practice)', req: r('-', '-', '-', 'NHZ', 'NHZ') },
-  { id: 'beam-height', category: 'engineering', measure: 'Beam paths kept below or above eye level (about 1.2-1.8 m)', basis: 'domain 4.3 [MTU-CL4], [STAN-OLD]', req: r('-', '-', '-', 's', 'S') },
-  { id: 'windows', category: 'engineering', measure: 'Windows and openings covered so transmitted beams stay below the MPE', basis: 'domain 4.3 [MTU-CL4]', req: r('-', '-', '-', 'NHZ', 'NHZ') },
-  { id: 'fibre-systems', category: 'engineering', measure: 'Optical fibre connections secured; disconnection only by trained staff', basis: `${T10}, 4.5.2`, req: r('MPE', 'MPE', 'MPE', 'S', 'S') },
+  { id: 'emergency-stop', category: 'engineering', measure: 'Emergency beam-off button, easy to see and reach', basis: 'common practice for Class 4 laser controlled areas', req: r('-', '-', '-', '-', 'S') },
+  { id: 'barriers', category: 'engineering', measure: 'Laser barrier or curtain where the NHZ extends beyond the work area (rated for the exposure time)', basis: 'common practice (barriers rated for the exposure time)', req: r('-', '-', '-', 'NHZ', 'NHZ') },
+  { id: 'beam-height', category: 'engineering', measure: 'Beam paths kept below or above eye level (about 1.2-1.8 m)', basis: 'common practice', req: r('-', '-', '-', 's', 'S') },
+  { id: 'windows', category: 'engineering', measure: 'Windows and openings covered so transmitted beams stay below the MPE', basis: 'ANSI Z136.1-2014, laser controlled area', req: r('-', '-', '-', 'NHZ', 'NHZ') },
+  { id: 'fibre-systems', category: 'engineering', measure: 'Optical fibre connections secured; disconnection only by trained staff', basis: ENG, req: r('MPE', 'MPE', 'MPE', 'S', 'S') },
   // administrative
-  { id: 'labels', category: 'administrative', measure: 'Class labels and aperture labels on every laser, checked', basis: `${T10}, 4.3.14, 4.7`, req: r('S', 'S', 'S', 'S', 'S') },
-  { id: 'area-posting', category: 'administrative', measure: 'Door notice at every entrance (generated from this assessment)', basis: `${T10}, 4.3.15`, req: r('-', '-', 's', 'NHZ', 'NHZ') },
-  { id: 'sop', category: 'administrative', measure: 'Standard operating procedure, approved by the LSO', basis: `${T10}, 4.4.1`, req: r('-', '-', '-', 's', 'S') },
-  { id: 'alignment-sop', category: 'administrative', measure: 'Written alignment procedure (most injuries happen during alignment)', basis: `${T10}, 4.4.5; domain 8 #6`, req: r('-', 'S', 'S', 'S', 'S') },
-  { id: 'output-limit', category: 'administrative', measure: 'Lowest output that does the job; attenuate for alignment', basis: `${T10}, 4.4.2; domain 4.1 [MTU-CTRL]`, req: r('-', '-', 'LSO', 'LSO', 'LSO') },
-  { id: 'training', category: 'administrative', measure: 'Laser safety training of every user, recorded', basis: `${T10}, 4.4.3`, req: r('-', 's', 's', 'S', 'S') },
-  { id: 'authorised', category: 'administrative', measure: 'Only authorised persons operate the laser', basis: `${T10}, 4.4.4`, req: r('-', '-', '-', 'S', 'S') },
-  { id: 'spectators', category: 'administrative', measure: 'Spectators and visitors kept out or supervised and protected', basis: `${T10}, 4.4.7`, req: r('-', '-', '-', 's', 'S') },
-  { id: 'service-personnel', category: 'administrative', measure: 'Service staff trained and briefed; temporary controlled area during service', basis: `${T10}, 4.4.8, 4.3.12`, req: r('E,MPE', 'E,MPE', 'E,MPE', 'S', 'S') },
-  { id: 'lso', category: 'administrative', measure: 'Laser safety officer designated for the area', basis: 'domain 4.5 [CEMAR-LSO]', req: r('-', '-', '-', 'S', 'S') },
+  { id: 'labels', category: 'administrative', measure: 'Class labels and aperture labels on every laser, checked', basis: ADM, req: r('S', 'S', 'S', 'S', 'S') },
+  { id: 'area-posting', category: 'administrative', measure: 'Door notice at every entrance (generated from this assessment)', basis: ADM, req: r('-', '-', 's', 'NHZ', 'NHZ') },
+  { id: 'sop', category: 'administrative', measure: 'Standard operating procedure, approved by the LSO', basis: ADM, req: r('-', '-', '-', 's', 'S') },
+  { id: 'alignment-sop', category: 'administrative', measure: 'Written alignment procedure (most injuries happen during alignment)', basis: ADM, req: r('-', 'S', 'S', 'S', 'S') },
+  { id: 'output-limit', category: 'administrative', measure: 'Lowest output that does the job; attenuate for alignment', basis: ADM, req: r('-', '-', 'LSO', 'LSO', 'LSO') },
+  { id: 'training', category: 'administrative', measure: 'Laser safety training of every user, recorded', basis: ADM, req: r('-', 's', 's', 'S', 'S') },
+  { id: 'authorised', category: 'administrative', measure: 'Only authorised persons operate the laser', basis: ADM, req: r('-', '-', '-', 'S', 'S') },
+  { id: 'spectators', category: 'administrative', measure: 'Spectators and visitors kept out or supervised and protected', basis: ADM, req: r('-', '-', '-', 's', 'S') },
+  { id: 'service-personnel', category: 'administrative', measure: 'Service staff trained and briefed; temporary controlled area during service', basis: ADM, req: r('E,MPE', 'E,MPE', 'E,MPE', 'S', 'S') },
+  { id: 'lso', category: 'administrative', measure: 'Laser safety officer designated for the area', basis: 'ANSI Z136.1-2014, laser safety officer', req: r('-', '-', '-', 'S', 'S') },
   // personal protection
-  { id: 'eyewear', category: 'ppe', measure: 'Protective eyewear with the required OD and scale numbers, at the entrance', basis: `${T10}, 4.4.6; domain 2`, req: r('-', '-', '-', 's', 'S') },
-  { id: 'alignment-eyewear', category: 'ppe', measure: 'Alignment eyewear (EN 208) for visible beams, where the beam must be seen', basis: 'domain 2.3, 8 #5 (common practice)', req: r('-', '-', 'LSO', 'LSO', 'LSO') },
-  { id: 'skin', category: 'ppe', measure: 'Skin protection (gloves, sleeves, screens) where the skin limit is exceeded', basis: 'domain 1.9 (common practice)', req: r('-', '-', '-', 'MPE', 'MPE') },
+  { id: 'eyewear', category: 'ppe', measure: 'Protective eyewear with the required OD and scale numbers, at the entrance', basis: PPE, req: r('-', '-', '-', 's', 'S') },
+  { id: 'alignment-eyewear', category: 'ppe', measure: 'Alignment eyewear (EN 208) for visible beams, where the beam must be seen', basis: 'EN 208:2009 (alignment eyewear); common practice', req: r('-', '-', 'LSO', 'LSO', 'LSO') },
+  { id: 'skin', category: 'ppe', measure: 'Skin protection (gloves, sleeves, screens) where the skin limit is exceeded', basis: 'common practice', req: r('-', '-', '-', 'MPE', 'MPE') },
 ];
 
 const COLUMN: Readonly<Record<LaserClass, Column>> = { '1': '1', '1M': '1', '2': '2', '2M': '2', '3R': '3a', '3B': '3b', '4': '4' };

@@ -29,7 +29,7 @@ export async function bringLaserIntoAssessments(roomId: string, laser: LaserInpu
     const merged = mergeLaser(used, laser);
     if (JSON.stringify(merged) === JSON.stringify(used)) continue;
     const lasers = content.input.lasers.map((l, k) => (k === i ? merged : l));
-    await invoke('assessment-save', { id: a.id, content: { ...content, input: { ...content.input, lasers } } });
+    await invoke('assessment-save', { id: a.id, content: { ...content, input: { ...content.input, lasers } }, expected: { revisionId: a.current.id, version: a.version } });
     saved++;
   }
   return saved;

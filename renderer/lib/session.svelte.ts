@@ -12,6 +12,7 @@ import { addDays, today } from './dates.js';
 
 export { addDays, today };
 import { laserInputFrom } from './beam-form.js';
+import type { LaserInput } from '../../core/index.js';
 
 const LAST_KEY = 'beamwarden.last.v1';
 
@@ -144,29 +145,43 @@ class Session {
       return false;
     }
     return this.run(async () => {
+      // One call, one transaction: new and edited register lasers together with the assessment,
+      // each part naming the state it was opened at, so a stale save is refused whole.
+      const newLasers: Array<{ draftId: string; laser: LaserInput; laserType: string }> = [];
+      const changedLasers: Array<{ id: string; laser: LaserInput; expectedUpdatedAt: string }> = [];
       for (const lf of d.lasers) {
         const { laser: full } = laserInputFrom(lf);
         if (!full) continue;
         // The register keeps what the laser is; the exposure duration is an assumption of the assessment.
         const laser = { ...full, beams: full.beams.map(({ exposureDuration_s: _t, ...b }) => b) };
         if (lf.isNew) {
-          const inst = await invoke('installation-create', { roomId: room.id, laser, laserType: laser.name });
-          lf.id = inst.id;
-          lf.isNew = false;
+          newLasers.push({ draftId: lf.id, laser, laserType: laser.name });
         } else {
           const reg = this.installations.find((i) => i.id === lf.id);
-          if (reg && JSON.stringify(reg.laser) !== JSON.stringify(laser)) await invoke('installation-update', { id: lf.id, patch: { laser } });
+          if (reg && JSON.stringify(reg.laser) !== JSON.stringify(laser)) changedLasers.push({ id: lf.id, laser, expectedUpdatedAt: reg.updatedAt });
         }
       }
-      const content = contentFrom(d);
-      const saved = this.assessment
-        ? await invoke('assessment-save', { id: this.assessment.id, content })
-        : await invoke('assessment-create', { roomId: room.id, content });
-      this.installations = await invoke('installations-list', { roomId: room.id });
-      this.setAssessment(saved);
-      writeLast({ roomId: room.id, assessmentId: saved.id });
+      const a = this.assessment;
+      const saved = await invoke('work-save', {
+        roomId: room.id,
+        assessmentId: a?.id ?? null,
+        expected: a ? { revisionId: a.current.id, version: a.version } : null,
+        content: contentFrom(d),
+        newLasers,
+        changedLasers,
+      });
+      for (const lf of d.lasers) {
+        const id = saved.laserIds[lf.id];
+        if (lf.isNew && id !== undefined) {
+          lf.id = id;
+          lf.isNew = false;
+        }
+      }
+      this.installations = [...saved.installations];
+      this.setAssessment(saved.assessment);
+      writeLast({ roomId: room.id, assessmentId: saved.assessment.id });
       await this.refreshOverview();
-      this.say('ok', `Saved: revision ${saved.current.revisionNo} (${saved.current.status}).`);
+      this.say('ok', `Saved: revision ${saved.assessment.current.revisionNo} (${saved.assessment.current.status}).`);
     });
   }
 

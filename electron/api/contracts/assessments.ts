@@ -8,8 +8,11 @@ import type {
   Id,
   Revision,
   RevisionSummary,
+  SaveBase,
   SignOff,
   VerifyReport,
+  WorkSave,
+  WorkSaved,
 } from '../../backend/records/types.js';
 
 export type AssessmentHandlers = {
@@ -19,7 +22,9 @@ export type AssessmentHandlers = {
   'assessment-get': (args: { readonly id: Id }) => Promise<Assessment>;
   'assessments-list': (args: { readonly roomId: Id }) => Promise<AssessmentSummary[]>;
   /** Saves into the open draft, or opens a new draft revision when the newest one is signed. */
-  'assessment-save': (args: { readonly id: Id; readonly content: AssessmentContent }) => Promise<Assessment>;
+  'assessment-save': (args: { readonly id: Id; readonly content: AssessmentContent; readonly expected: SaveBase }) => Promise<Assessment>;
+  /** The workspace's save: new/edited register lasers and the assessment in one transaction. */
+  'work-save': (args: WorkSave) => Promise<WorkSaved>;
   'assessment-discard-draft': (args: { readonly id: Id }) => Promise<void>;
   'revisions-list': (args: { readonly assessmentId: Id }) => Promise<RevisionSummary[]>;
   'revision-get': (args: { readonly revisionId: Id }) => Promise<Revision>;

@@ -4,6 +4,7 @@ import type { AssessmentHandlers } from '../contracts/assessments.js';
 import type { ApiContext } from '../context.js';
 import type { AreaTable } from '../operation.js';
 import { ByIdSchema } from '../schemas/common.js';
+import { SaveBaseSchema, WorkSaveSchema } from '../../backend/records/save-work.js';
 
 const RoomRef = z.strictObject({ roomId: IdSchema });
 
@@ -20,9 +21,10 @@ export const assessmentTable: AreaTable<AssessmentHandlers, ApiContext> = {
   'assessment-get': { input: ByIdSchema, run: (a, { store }) => store.getAssessment(a.id) },
   'assessments-list': { input: RoomRef, run: (a, { store }) => store.listAssessments(a.roomId) },
   'assessment-save': {
-    input: z.strictObject({ id: IdSchema, content: AssessmentContentSchema }),
-    run: (a, { store }) => store.saveAssessment(a.id, a.content),
+    input: z.strictObject({ id: IdSchema, content: AssessmentContentSchema, expected: SaveBaseSchema }),
+    run: (a, { store }) => store.saveAssessment(a.id, a.content, a.expected),
   },
+  'work-save': { input: WorkSaveSchema, run: (a, { store }) => store.saveWork(a) },
   'assessment-discard-draft': { input: ByIdSchema, run: (a, { store }) => store.discardDraft(a.id) },
   'revisions-list': { input: z.strictObject({ assessmentId: IdSchema }), run: (a, { store }) => store.listRevisions(a.assessmentId) },
   'revision-get': { input: z.strictObject({ revisionId: IdSchema }), run: (a, { store }) => store.getRevision(a.revisionId) },

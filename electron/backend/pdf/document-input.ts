@@ -42,6 +42,8 @@ export interface DocumentInput {
   };
   readonly content: AssessmentContent;
   readonly results: RoomResult;
+  /** Whom to call in an emergency (room, else site; register notes line "Emergency contact: ..."); null = not recorded. */
+  readonly emergencyContact?: string | null;
   /** null = not signed: every page carries the DRAFT mark and there is no fingerprint. */
   readonly signature: SignatureInfo | null;
 }

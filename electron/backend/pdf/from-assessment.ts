@@ -1,6 +1,7 @@
 /** Maps a stored assessment revision (record store) to the documents' input. */
 import type { Person, RecordStore, Revision } from '../records/types.js';
 import type { DocumentInput } from './document-input.js';
+import { emergencyContactFor } from '../records/emergency-contact.js';
 
 /** The officer named on the documents: the signer when signed, else the site's LSO in the register. */
 function officerFor(store: RecordStore, revision: Revision): Pick<Person, 'name' | 'role' | 'email' | 'phone'> {
@@ -33,6 +34,7 @@ export function documentInputFromAssessment(store: RecordStore, assessmentId: st
     site: { name: site.name, building: site.building, address: site.address },
     room: { code: room.code, name: room.name, responsiblePerson: room.responsiblePerson, contact: room.contact },
     officer: officerFor(store, revision),
+    emergencyContact: emergencyContactFor(room.notes, site.notes),
     installations: store.listInstallations(room.id).map((i) => ({
       id: i.id,
       laserType: i.laserType,

@@ -5,7 +5,7 @@
 import type { DocumentInput, RenderOptions } from './document-input.js';
 import { renderPdf } from './runtime.js';
 import { reportDefinition } from './documents/report.js';
-import { doorNoticeDefinition } from './documents/door-notice.js';
+import { doorNoticeDefinition, NOTICE_FIT_LEVELS } from './documents/door-notice.js';
 import { eyewearSheetDefinition } from './documents/eyewear-sheet.js';
 
 export type { DocumentInput, RenderOptions, Paper, InstallationInfo, SignatureInfo } from './document-input.js';
@@ -16,8 +16,19 @@ export function renderReport(doc: DocumentInput, opts: RenderOptions): Promise<B
   return renderPdf(reportDefinition(doc, opts));
 }
 
-export function renderDoorNotice(doc: DocumentInput, opts: RenderOptions): Promise<Buffer> {
-  return renderPdf(doorNoticeDefinition(doc, opts));
+/** Pages of a PDF written by pdfkit (its page objects are plain text in the file). */
+export function pdfPageCount(pdf: Buffer): number {
+  return pdf.toString('latin1').match(/\/Type \/Page\b(?!s)/g)?.length ?? 0;
+}
+
+/**
+ * The door notice is one page, whatever the room: when the content does not fit, it is set again
+ * with the details given less room (the signal word, symbol and eyewear line keep their size first).
+ */
+export async function renderDoorNotice(doc: DocumentInput, opts: RenderOptions): Promise<Buffer> {
+  let pdf = await renderPdf(doorNoticeDefinition(doc, opts, 0));
+  for (let fit = 1; fit < NOTICE_FIT_LEVELS && pdfPageCount(pdf) > 1; fit++) pdf = await renderPdf(doorNoticeDefinition(doc, opts, fit));
+  return pdf;
 }
 
 export function renderEyewearSheet(doc: DocumentInput, opts: RenderOptions): Promise<Buffer> {

@@ -8,6 +8,7 @@ import path from 'node:path';
 import pdfmake from 'pdfmake';
 import type { TDocumentDefinitions, TFontDictionary } from 'pdfmake/interfaces';
 import { shareParsedFonts } from './shared-fonts.js';
+import { readableDefinition } from './readable.js';
 
 const require = createRequire(import.meta.url);
 
@@ -36,7 +37,7 @@ function configure(): void {
 /** Lay out and render a document definition to PDF bytes. */
 export async function renderPdf(dd: TDocumentDefinitions): Promise<Buffer> {
   configure();
-  const doc = pdfmake.createPdf(dd);
+  const doc = pdfmake.createPdf(readableDefinition(dd));
   const out: unknown = await doc.getBuffer();
   if (!Buffer.isBuffer(out)) throw new Error('pdfmake did not return a Buffer');
   return out;

@@ -28,6 +28,7 @@ import {
   type Revision,
   type RevisionStatus,
   type RevisionSummary,
+  type SaveBase,
   type Signature,
   type SignOff,
   type VerifyReport,
@@ -55,6 +56,8 @@ export interface RevisionRow {
   updated_at: string;
   title: string;
   review_by: string | null;
+  /** Save counter of the revision (migration 0004): optimistic concurrency. */
+  version: number;
 }
 export interface SignatureRow {
   revision_id: string;
@@ -177,6 +180,15 @@ function storedResults(z: Buffer): RoomResult {
 
 // ---------------------------------------------------------------- content
 
+/** HH:MM on this machine's clock, for messages ("changed by someone else at 14:05"). */
+export function clockTime(isoTimestamp: string): string {
+  const d = new Date(isoTimestamp);
+  if (Number.isNaN(d.getTime())) return isoTimestamp;
+  const pad = (n: number) => String(n).padStart(2, '0');
+  const today = new Date().toDateString() === d.toDateString();
+  return `${pad(d.getHours())}:${pad(d.getMinutes())}${today ? '' : ` on ${d.getFullYear()}-${pad(d.getMonth() + 1)}-${pad(d.getDate())}`}`;
+}
+
 function addOneYear(isoTimestamp: string): CalendarDate {
   const d = new Date(isoTimestamp);
   d.setUTCFullYear(d.getUTCFullYear() + 1);
@@ -290,8 +302,13 @@ export function getAssessment(ctx: StoreContext, id: Id): Assessment {
     roomId: a.room_id,
     installationId: a.installation_id,
     createdAt: a.created_at,
-    current: revisionFromRow(ctx, newestRevisionRow(ctx, id)),
+    ...currentWithVersion(ctx, id),
   };
+}
+
+function currentWithVersion(ctx: StoreContext, id: Id): { current: Revision; version: number } {
+  const row = newestRevisionRow(ctx, id);
+  return { current: revisionFromRow(ctx, row), version: row.version };
 }
 
 const SUMMARY_SELECT = `
@@ -362,9 +379,9 @@ export function compareRevisions(ctx: StoreContext, fromId: Id, toId: Id): Field
 // ---------------------------------------------------------------- writes
 
 const INSERT_REVISION = `INSERT INTO revision (id, assessment_id, revision_no, status, content_json, results_z, calculated_with, based_on,
-  created_at, updated_at, title, review_by)
+  created_at, updated_at, title, review_by, version)
   VALUES (@id, @assessment_id, @revision_no, @status, @content_json, @results_z, @calculated_with, @based_on,
-  @created_at, @updated_at, @title, @review_by)`;
+  @created_at, @updated_at, @title, @review_by, @version)`;
 
 export function insertRevisionRow(ctx: StoreContext, row: RevisionRow): void {
   ctx.sql(INSERT_REVISION).run(row);
@@ -374,7 +391,7 @@ function write<T>(ctx: StoreContext, what: string, fn: () => T): T {
   try {
     return ctx.db.transaction(fn).immediate();
   } catch (e) {
-    throw translateSqliteError(e, what);
+    throw translateSqliteError(e, what, ctx.db.name);
   }
 }
 
@@ -406,6 +423,7 @@ export function createAssessment(
       updated_at: now,
       title: content.title,
       review_by: content.reviewBy,
+      version: 1,
     });
     ctx.audit('created', 'assessment', id, content.title);
   });
@@ -424,22 +442,40 @@ function resultsFor(ctx: StoreContext, content: AssessmentContent, previous: Rev
   return encodeResults(evaluate(ctx, content.input));
 }
 
-export function saveAssessment(ctx: StoreContext, id: Id, rawContent: AssessmentContent): Assessment {
+/**
+ * Refuse a save that started from an older state than the newest revision (another window, host
+ * or officer saved or signed meanwhile): nothing is overwritten, and the officer is told when.
+ */
+export function assertNotStale(ctx: StoreContext, id: Id, expected: SaveBase | undefined): void {
+  if (expected === undefined) return;
+  const current = newestRevisionRow(ctx, id);
+  if (current.id === expected.revisionId && current.version === expected.version) return;
+  const signed = current.status !== 'draft' ? getSignatureRow(ctx, current.id) : undefined;
+  const at = signed?.signed_at ?? current.updated_at;
+  const what = signed ? `signed by ${signed.name}` : `saved as revision ${current.revision_no}`;
+  throw new RecordError(
+    'stale',
+    `"${current.title}" was changed by someone else at ${clockTime(at)} (${what}) — reload and compare before saving again. Nothing was overwritten.`,
+  );
+}
+
+export function saveAssessment(ctx: StoreContext, id: Id, rawContent: AssessmentContent, expected?: SaveBase): Assessment {
   const content = normaliseContent(rawContent);
   getAssessmentRow(ctx, id);
+  assertNotStale(ctx, id, expected);
   const before = newestRevisionRow(ctx, id);
   const resultsZ = resultsFor(ctx, content, before);
   // Same bytes as stored in the draft: leave the column alone rather than rewrite the blob.
   const draftResults = before.status === 'draft' && resultsZ === before.results_z ? null : resultsZ;
   const now = ctx.now();
   write(ctx, 'Assessment', () => {
+    assertNotStale(ctx, id, expected ?? { revisionId: before.id, version: before.version });
     const current = newestRevisionRow(ctx, id);
-    if (current.id !== before.id || current.status !== before.status) throw new RecordError('conflict', 'The assessment changed while saving; reload and try again');
     if (current.status === 'draft') {
       ctx
         .sql(
-          `UPDATE revision SET content_json = ?, results_z = coalesce(?, results_z), calculated_with = ?, updated_at = ?, title = ?, review_by = ?
-           WHERE id = ? AND status = 'draft'`,
+          `UPDATE revision SET content_json = ?, results_z = coalesce(?, results_z), calculated_with = ?, updated_at = ?, title = ?, review_by = ?,
+           version = version + 1 WHERE id = ? AND status = 'draft'`,
         )
         .run(JSON.stringify(content), draftResults, ctx.calculatedWith, now, content.title, content.reviewBy, current.id);
       ctx.audit('saved', 'revision', current.id, `revision ${current.revision_no}`);
@@ -458,6 +494,7 @@ export function saveAssessment(ctx: StoreContext, id: Id, rawContent: Assessment
         updated_at: now,
         title: content.title,
         review_by: content.reviewBy,
+        version: 1,
       });
       ctx.audit('revised', 'revision', revId, `revision ${current.revision_no + 1} based on ${current.revision_no}`);
     }
@@ -539,7 +576,8 @@ export function signAssessment(ctx: StoreContext, id: Id, rawSignOff: SignOff): 
       )
       .run(draft.id, fields.person_id, fields.name, fields.role, fields.signed_at, fields.statement, fingerprint, signature, key.keyId);
     ctx.sql("UPDATE revision SET status = 'superseded' WHERE assessment_id = ? AND status = 'signed'").run(id);
-    ctx.sql("UPDATE revision SET status = 'signed' WHERE id = ?").run(draft.id);
+    // The save counter moves on: a save started before the sign-off is stale.
+    ctx.sql("UPDATE revision SET status = 'signed', version = version + 1 WHERE id = ?").run(draft.id);
     ctx.audit('signed', 'revision', draft.id, `revision ${draft.revision_no} by ${signOff.name} (${signOff.role})`);
   });
   return getAssessment(ctx, id);

@@ -9,6 +9,7 @@ import { resolve } from 'node:path';
 import { openDatabase, type Db } from './database.js';
 import { LATEST_VERSION } from './migrations/index.js';
 import { RecordError, type RestoreReport } from './types.js';
+import { acquireWriteLock, inUseMessage, lockHolder } from './write-lock.js';
 
 function checkCopy(path: string, nativeBinding: string | undefined): number {
   let db: Db;
@@ -57,6 +58,25 @@ export async function restoreBackup(args: { from: string; to: string; nativeBind
   const to = resolve(args.to);
   if (from === to) throw new RecordError('invalid', 'Restore needs a backup file other than the database itself');
   checkCopy(from, args.nativeBinding);
+  // Never under a running Beamwarden: it would go on writing into the replaced file, and work it
+  // had already confirmed to the officer would be lost.
+  const holder = lockHolder(to);
+  if (holder !== null) {
+    throw new RecordError(
+      'in-use',
+      `Not restored: ${inUseMessage(to, holder)} Or use "Restore from backup" inside that Beamwarden, which closes the database first. Nothing was changed.`,
+    );
+  }
+  const release = acquireWriteLock(to);
+  try {
+    return await replaceWith(from, to, args.nativeBinding);
+  } finally {
+    release();
+  }
+}
+
+async function replaceWith(from: string, to: string, nativeBinding: string | undefined): Promise<RestoreReport> {
+  const args = { nativeBinding };
   let previousCopy: string | null = null;
   if (existsSync(to)) {
     previousCopy = `${to}.replaced-${new Date().toISOString().replace(/[:.]/g, '-')}.sqlite`;

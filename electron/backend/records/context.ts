@@ -6,6 +6,7 @@ import type { Evaluate } from './core-link.js';
 import type { Statement } from 'better-sqlite3';
 import type { Db } from './database.js';
 import { loadOrCreateSigningKey, type SigningKey } from './signing.js';
+import { storageError } from './storage-errors.js';
 import { RecordError } from './types.js';
 
 export interface StoreContext {
@@ -22,7 +23,13 @@ export interface StoreContext {
   audit(action: string, entity: string, entityId: string, detail?: string): void;
 }
 
-export function makeContext(db: Db, keyDir: string, evaluate: Evaluate, calculatedWith: string): StoreContext {
+export function makeContext(
+  db: Db,
+  keyDir: string,
+  evaluate: Evaluate,
+  calculatedWith: string,
+  now: () => string = () => new Date().toISOString(),
+): StoreContext {
   let key: SigningKey | undefined;
   const statements = new Map<string, Statement>();
   const sql = (text: string): Statement => {
@@ -39,7 +46,7 @@ export function makeContext(db: Db, keyDir: string, evaluate: Evaluate, calculat
     keyDir,
     evaluate,
     calculatedWith,
-    now: () => new Date().toISOString(),
+    now,
     newId: () => randomUUID(),
     signingKey() {
       key ??= loadOrCreateSigningKey(keyDir);
@@ -65,11 +72,15 @@ export function notFound(kind: string, id: string): RecordError {
 }
 
 /** Map SQLite constraint errors (raised by our triggers and keys) to RecordError with plain words. */
-export function translateSqliteError(e: unknown, what: string): unknown {
+export function translateSqliteError(e: unknown, what: string, dbPath?: string): unknown {
   if (!(e instanceof Error) || !('code' in e)) return e;
   const code = String((e as { code: unknown }).code);
+  const storage = dbPath !== undefined ? storageError(e, dbPath, what) : null;
+  if (storage) return storage;
   if (e.message.startsWith('beamwarden: ')) return new RecordError('immutable', e.message.slice('beamwarden: '.length));
-  if (code === 'SQLITE_CONSTRAINT_FOREIGNKEY') return new RecordError('conflict', `${what}: other records still refer to it (or it refers to a record that does not exist)`);
+  if (code === 'SQLITE_CONSTRAINT_FOREIGNKEY') {
+    return new RecordError('conflict', `${what} cannot be saved as it is: it refers to a record that is not in the register, or other records still refer to it. Nothing was changed.`);
+  }
   if (code === 'SQLITE_CONSTRAINT_UNIQUE' || code === 'SQLITE_CONSTRAINT_PRIMARYKEY') return new RecordError('conflict', `${what}: ${e.message.replace(/^UNIQUE constraint failed: /, 'already exists: ')}`);
   return e;
 }

@@ -13,7 +13,7 @@ import { parseQuantity, type Dimension } from '../../../core/units/quantities.js
 import { BeamInputSchema, LaserClassSchema } from '../schemas/inputs.js';
 import { translateSqliteError, type StoreContext } from './context.js';
 import { getRoom, insertInstallation } from './register.js';
-import { RecordError, type CsvImportReport, type Id, type LaserInstallation } from './types.js';
+import { RecordError, type CsvExistingChoice, type CsvImportReport, type Id, type LaserInstallation } from './types.js';
 
 // ---------------------------------------------------------------- RFC 4180 parsing
 
@@ -123,7 +123,7 @@ interface LaserGroup {
   beams: Array<{ row: number; beam: BeamInput; givenId: string | null }>;
 }
 
-export function importLaserCsv(ctx: StoreContext, roomId: Id, csvText: string): CsvImportReport {
+export function importLaserCsv(ctx: StoreContext, roomId: Id, csvText: string, existing: CsvExistingChoice = 'ask'): CsvImportReport {
   getRoom(ctx, roomId);
   const firstLine = csvText.replace(/^\uFEFF/, '').split(/\r?\n/, 1)[0] ?? '';
   const records = parseCsv(csvText, detectDelimiter(firstLine)).filter((r) => r.some((c) => c.trim() !== ''));
@@ -230,6 +230,12 @@ export function importLaserCsv(ctx: StoreContext, roomId: Id, csvText: string): 
     errors.push(...rowErrors);
   });
 
+  // Lasers the room already has (same name, maker, serial number): importing a file twice must
+  // not double the register, so the officer chooses to skip them or to add them again.
+  const present = alreadyInRoom(ctx, roomId, groups);
+  const leaveOut = existing === 'add' ? new Set<LaserGroup>() : new Set(present.map((p) => p.group));
+  for (const g of leaveOut) groups.delete(g.name);
+
   // Beam ids must be unique within the room (assessments refer to beams by id).
   const existingBeamIds = new Set<string>();
   for (const r of ctx.sql('SELECT laser_json FROM laser_installation WHERE room_id = ?').all(roomId) as Array<{ laser_json: string }>) {
@@ -247,9 +253,13 @@ export function importLaserCsv(ctx: StoreContext, roomId: Id, csvText: string): 
     }
   }
 
+  const presentRows = present.map(({ group: _g, ...p }) => p);
   if (errors.length) {
     errors.sort((a, b) => a.row - b.row);
     return { imported: 0, errors, installationIds: [] };
+  }
+  if (existing === 'ask' && present.length > 0) {
+    return { imported: 0, errors: [], installationIds: [], alreadyInRoom: presentRows, decisionNeeded: true };
   }
 
   const now = ctx.now();
@@ -286,9 +296,39 @@ export function importLaserCsv(ctx: StoreContext, roomId: Id, csvText: string): 
       })
       .immediate();
   } catch (e) {
-    throw translateSqliteError(e, 'CSV import (nothing was imported)');
+    throw translateSqliteError(e, 'CSV import (nothing was imported)', ctx.db.name);
   }
-  return { imported: installations.length, errors: [], installationIds: installations.map((i) => i.id) };
+  return {
+    imported: installations.length,
+    errors: [],
+    installationIds: installations.map((i) => i.id),
+    alreadyInRoom: presentRows,
+    skipped: leaveOut.size,
+  };
+}
+
+const sameText = (a: string, b: string) => a.trim().toLowerCase() === b.trim().toLowerCase();
+
+function alreadyInRoom(
+  ctx: StoreContext,
+  roomId: Id,
+  groups: ReadonlyMap<string, LaserGroup>,
+): Array<{ group: LaserGroup; row: number; name: string; maker: string; serialNumber: string }> {
+  const rows = ctx.sql('SELECT laser_json, maker, serial_number FROM laser_installation WHERE room_id = ?').all(roomId) as Array<{
+    laser_json: string;
+    maker: string;
+    serial_number: string;
+  }>;
+  const known = rows.map((r) => ({ name: (JSON.parse(r.laser_json) as LaserInput).name, maker: r.maker, serial: r.serial_number }));
+  const out: Array<{ group: LaserGroup; row: number; name: string; maker: string; serialNumber: string }> = [];
+  for (const g of groups.values()) {
+    const maker = g.fields.maker ?? '';
+    const serial = g.fields.serial_number ?? '';
+    if (known.some((k) => sameText(k.name, g.name) && sameText(k.maker, maker) && sameText(k.serial, serial))) {
+      out.push({ group: g, row: g.firstRow, name: g.name, maker, serialNumber: serial });
+    }
+  }
+  return out;
 }
 
 function normaliseDefinition(text: string): string {

@@ -13,10 +13,16 @@
  *   is refused: an old build must never write to a newer schema.
  */
 import Database from 'better-sqlite3';
-import { existsSync, mkdirSync, statSync } from 'node:fs';
-import { dirname } from 'node:path';
-import { isKnownVersion, LATEST_VERSION, MIGRATIONS, previousVersion } from './migrations/index.js';
+import { existsSync, statSync } from 'node:fs';
+import { LATEST_VERSION, MIGRATIONS } from './migrations/index.js';
+import { checkWritableAtStart, storageError } from './storage-errors.js';
 import { RecordError } from './types.js';
+
+/** SQLite says the file itself is damaged or not a database; anything else is not damage. */
+function isDamage(e: unknown): boolean {
+  const code = e instanceof Error && 'code' in e ? String((e as { code: unknown }).code) : '';
+  return code === 'SQLITE_NOTADB' || code.startsWith('SQLITE_CORRUPT');
+}
 
 export type Db = Database.Database;
 
@@ -42,10 +48,10 @@ function sqliteMessage(e: unknown): string {
 export function openDatabase(path: string, opts: OpenDatabaseOptions = {}): OpenedDatabase {
   const readonly = opts.readonly === true;
   const target = opts.targetVersion ?? LATEST_VERSION;
-  if (!Number.isInteger(target) || target < 1 || target > LATEST_VERSION || !isKnownVersion(target)) {
+  if (!MIGRATIONS.some((m) => m.version === target)) {
     throw new RangeError(`targetVersion must be one of ${MIGRATIONS.map((m) => m.version).join(', ')}`);
   }
-  if (!readonly) mkdirSync(dirname(path), { recursive: true });
+  if (!readonly) checkWritableAtStart(path);
   const existedBefore = existsSync(path) && statSync(path).size > 0;
 
   let db: Db;
@@ -56,6 +62,7 @@ export function openDatabase(path: string, opts: OpenDatabaseOptions = {}): Open
       ...(opts.nativeBinding !== undefined ? { nativeBinding: opts.nativeBinding } : {}),
     });
   } catch (e) {
+    if (!isDamage(e)) throw storageError(e, path, 'Opening the database') ?? new RecordError('storage', `Cannot open the database ${path}: ${sqliteMessage(e)}`);
     throw new RecordError('corrupt-database', `Cannot open the database ${path}: ${sqliteMessage(e)}`);
   }
   try {
@@ -78,7 +85,8 @@ export function openDatabase(path: string, opts: OpenDatabaseOptions = {}): Open
     return { db, schemaVersion, migrationBackups };
   } catch (e) {
     db.close();
-    throw e;
+    if (e instanceof RecordError) throw e;
+    throw storageError(e, path, 'Opening the database') ?? e;
   }
 }
 
@@ -88,6 +96,9 @@ function checkIntegrity(db: Db, path: string): void {
     const result = db.pragma('integrity_check') as Array<{ integrity_check: string }>;
     rows = result.map((r) => r.integrity_check);
   } catch (e) {
+    // A healthy file on a read-only disk, locked by another program or on a share that went away
+    // is not damaged: say what it is instead.
+    if (!isDamage(e)) throw storageError(e, path, 'Checking the database') ?? e;
     const code = e instanceof Error && 'code' in e ? String((e as { code: unknown }).code) : '';
     const what = code === 'SQLITE_NOTADB' ? 'is not a database file' : code.startsWith('SQLITE_CORRUPT') ? 'is damaged' : 'cannot be checked';
     throw new RecordError(
@@ -133,9 +144,10 @@ function checkHistory(db: Db, path: string, version: number): void {
     throw new RecordError('corrupt-database', `${path} has schema version ${version} but no migration history: not a Beamwarden database.`);
   }
   const applied = db.prepare('SELECT version, name FROM schema_migrations ORDER BY version').all() as Array<{ version: number; name: string }>;
-  const known = MIGRATIONS.findIndex((m) => m.version === version) + 1; // entries up to and including `version`
   const isPrefix =
-    known > 0 && applied.length === known && applied.every((row, i) => row.version === MIGRATIONS[i]?.version && row.name === MIGRATIONS[i]?.name);
+    applied.length > 0 &&
+    applied[applied.length - 1]?.version === version &&
+    applied.every((row, i) => row.version === MIGRATIONS[i]?.version && row.name === MIGRATIONS[i]?.name);
   if (!isPrefix) {
     throw new RecordError(
       'corrupt-database',
@@ -163,13 +175,16 @@ function migrate(db: Db, path: string, target: number, readonly: boolean, existe
     db.prepare('VACUUM INTO ?').run(copy);
     backups.push(copy);
   }
+  let previous = 0;
   for (const m of MIGRATIONS) {
     if (m.version > target) break;
+    const from = previous;
+    previous = m.version;
     const apply = db.transaction(() => {
       // Re-read inside the write lock: another process may have migrated meanwhile.
       const now = userVersion(db);
       if (now >= m.version) return;
-      if (now !== previousVersion(m.version)) throw new RecordError('migration-failed', `Cannot apply migration ${m.version} to schema version ${now}`);
+      if (now !== from) throw new RecordError('migration-failed', `Cannot apply migration ${m.version} to schema version ${now}`);
       db.exec(m.sql);
       db.prepare('INSERT INTO schema_migrations (version, name, applied_at) VALUES (?, ?, ?)').run(m.version, m.name, new Date().toISOString());
       if (!Number.isInteger(m.version)) throw new Error('migration version must be an integer');

@@ -10,11 +10,12 @@ import { parseOrThrow, type StoreContext } from './context.js';
 import { createAssessment, newAssessmentContent, signAssessment } from './assessments.js';
 import { createEyewear, createInstallation, createPerson, createRoom, createSite, listSites } from './register.js';
 import type { AssessmentContent, ControlChoice, Site } from './types.js';
+import { withEmergencyContact } from './emergency-contact.js';
 
 /** Our own asset: validated, but extra fields are ignored so the scenario can grow. */
 export const DemoScenarioSchema = z.object({
   about: z.string(),
-  site: z.object({ name: z.string().min(1), building: z.string(), kind: z.string() }),
+  site: z.object({ name: z.string().min(1), building: z.string(), kind: z.string(), emergencyContact: z.string().optional() }),
   officer: z.object({ name: z.string().min(1), phone: z.string().optional(), email: z.string().optional() }),
   deputy: z.object({ name: z.string().min(1) }).optional(),
   eyewear: z.array(EyewearSpecSchema),
@@ -39,7 +40,7 @@ export function seedDemo(ctx: StoreContext, raw: unknown = demoScenario): Site {
   const existing = listSites(ctx).find((s) => s.name === scenario.site.name && s.building === scenario.site.building);
   if (existing) return existing;
   return ctx.db.transaction(() => {
-    const site = createSite(ctx, { name: scenario.site.name, building: scenario.site.building, notes: `${scenario.site.kind}. ${scenario.about}` });
+    const site = createSite(ctx, { name: scenario.site.name, building: scenario.site.building, notes: withEmergencyContact(`${scenario.site.kind}. ${scenario.about}`, scenario.site.emergencyContact ?? '') });
     const officer = createPerson(ctx, {
       name: scenario.officer.name,
       role: 'Laser safety officer',

@@ -34,7 +34,8 @@ import {
   listPeople,
   listRooms,
 } from './register.js';
-import { getEyewear, getPerson } from './register.js';
+import { getEyewear, getPerson, replaceEyewear, replaceInstallation } from './register.js';
+import { keepDraftAsCopy } from './import-conflicts.js';
 import { fingerprintOf, keyIdOf, verifyStatement } from './signing.js';
 import {
   EXPORT_FORMAT,
@@ -45,6 +46,7 @@ import {
   type Id,
   type ImportIssue,
   type ImportSummary,
+  type KeptDraft,
   type Person,
   type Revision,
   type Room,
@@ -281,7 +283,13 @@ function revisionRow(r: Revision): RevisionRow {
     updated_at: r.updatedAt,
     title: r.content.title,
     review_by: r.content.reviewBy,
+    version: 1,
   };
+}
+
+/** Timestamps compared as instants: "2026-05-01T10:00:00-05:00" is later than "2026-05-01T14:00:00Z". */
+export function isNotOlder(local: string, imported: string): boolean {
+  return Date.parse(local) >= Date.parse(imported);
 }
 
 export function importDocument(ctx: StoreContext, input: unknown): ImportSummary {
@@ -289,6 +297,7 @@ export function importDocument(ctx: StoreContext, input: unknown): ImportSummary
   const issues = crossCheck(ctx, doc);
   if (issues.length) throw invalid(issues);
   const count = { sites: 0, rooms: 0, installations: 0, eyewear: 0, people: 0, assessments: 0, revisions: 0, unchanged: 0 };
+  const keptDrafts: KeptDraft[] = [];
   const db = ctx.db;
 
   const run = db.transaction(() => {
@@ -304,7 +313,7 @@ export function importDocument(ctx: StoreContext, input: unknown): ImportSummary
         if (local === null) {
           insert(x);
           count[key]++;
-        } else if (same(local, x) || local.updatedAt >= x.updatedAt) {
+        } else if (same(local, x) || isNotOlder(local.updatedAt, x.updatedAt)) {
           count.unchanged++;
         } else {
           replace(x);
@@ -331,14 +340,12 @@ export function importDocument(ctx: StoreContext, input: unknown): ImportSummary
         .sql('UPDATE room SET code=@code, name=@name, responsible_person=@responsiblePerson, contact=@contact, notes=@notes, updated_at=@updatedAt WHERE id=@id')
         .run(x),
     );
-    upsert(doc.installations, 'installations', (id) => tryGet(() => getInstallation(ctx, id)), (x) => insertInstallation(ctx, x), (x) => {
-      ctx.sql('DELETE FROM laser_installation WHERE id = ?').run(x.id);
-      insertInstallation(ctx, x);
-    });
-    upsert(doc.eyewear, 'eyewear', (id) => tryGet(() => getEyewear(ctx, id)), (x) => insertEyewear(ctx, x), (x) => {
-      ctx.sql('DELETE FROM eyewear WHERE id = ?').run(x.id);
-      insertEyewear(ctx, x);
-    });
+    // Replaced in place (UPDATE), never deleted and re-inserted: assessments refer to a laser by
+    // its id, and the database refuses to delete a laser an assessment refers to.
+    upsert(doc.installations, 'installations', (id) => tryGet(() => getInstallation(ctx, id)), (x) => insertInstallation(ctx, x), (x) =>
+      replaceInstallation(ctx, x),
+    );
+    upsert(doc.eyewear, 'eyewear', (id) => tryGet(() => getEyewear(ctx, id)), (x) => insertEyewear(ctx, x), (x) => replaceEyewear(ctx, x));
     for (const k of doc.signingKeys) registerKey(ctx, k.keyId, k.publicKey, 'imported');
 
     for (const [ai, a] of doc.assessments.entries()) {
@@ -351,19 +358,37 @@ export function importDocument(ctx: StoreContext, input: unknown): ImportSummary
       } else if (localA.room_id !== a.roomId || localA.installation_id !== a.installationId) {
         throw invalid([{ path: `assessments[${ai}].roomId`, problem: 'this assessment exists here for a different room or installation' }]);
       }
+      const of = { assessmentId: a.id, roomId: a.roomId, installationId: a.installationId };
+      const keep = (row: RevisionRow, whose: 'yours' | 'imported', reason: string) => {
+        const kept = keepDraftAsCopy(ctx, row, of, whose, reason);
+        if (kept) keptDrafts.push(kept);
+      };
       for (const [ri, r] of a.revisions.entries()) {
         const path = `assessments[${ai}].revisions[${ri}]`;
-        const local = ctx.sql('SELECT status, revision_no FROM revision WHERE id = ?').get(r.id) as { status: string; revision_no: number } | undefined;
+        const local = ctx.sql('SELECT * FROM revision WHERE id = ?').get(r.id) as RevisionRow | undefined;
         if (local) {
           const mine = getRevision(ctx, r.id);
           if (same(mine, r)) {
             count.unchanged++;
             continue;
           }
-          if (local.status === 'draft' && r.status === 'draft' && mine.updatedAt < r.updatedAt) {
+          if (local.status === 'draft' && r.status === 'draft') {
+            if (same(mine.content, r.content)) {
+              count.unchanged++;
+              continue;
+            }
+            if (isNotOlder(mine.updatedAt, r.updatedAt)) {
+              // Ours stays in the assessment; theirs is kept beside it.
+              keep(revisionRow(r), 'imported', `the file has another version of draft revision ${r.revisionNo}, saved ${r.updatedAt}`);
+              count.unchanged++;
+              continue;
+            }
+            keep(local, 'yours', `the file has a newer version of draft revision ${r.revisionNo}, saved ${r.updatedAt}`);
             ctx.sql("DELETE FROM revision WHERE id = ? AND status = 'draft'").run(r.id);
           } else if (local.status === 'draft' && r.status !== 'draft') {
-            // Our draft was signed elsewhere: the signed copy replaces it.
+            // Our draft was signed elsewhere: the signed copy takes its place; edits made here
+            // after it was copied are kept as a draft of their own.
+            if (!same(mine.content, r.content)) keep(local, 'yours', `revision ${r.revisionNo} was signed elsewhere with other content`);
             ctx.sql("DELETE FROM revision WHERE id = ? AND status = 'draft'").run(r.id);
           } else if (local.status === 'signed' && r.status === 'superseded' && same({ ...mine, status: 'superseded' }, r)) {
             ctx.sql("UPDATE revision SET status = 'superseded' WHERE id = ?").run(r.id);
@@ -372,15 +397,22 @@ export function importDocument(ctx: StoreContext, input: unknown): ImportSummary
           } else if (local.status !== 'draft' && r.status === 'signed' && mine.status === 'superseded' && same({ ...mine, status: 'signed' }, r)) {
             count.unchanged++; // we already know a newer signed revision
             continue;
-          } else if (local.status === 'draft') {
-            count.unchanged++; // our draft is newer
+          } else if (r.status === 'draft') {
+            count.unchanged++; // the file's draft was signed here meanwhile
+            if (!same(mine.content, r.content)) keep(revisionRow(r), 'imported', `revision ${r.revisionNo} is signed here; the file has a draft of it with other content`);
             continue;
           } else {
             throw invalid([{ path, problem: `revision ${r.revisionNo} is signed here with different content: one of the two copies was altered` }]);
           }
         }
-        const clash = ctx.sql('SELECT id FROM revision WHERE assessment_id = ? AND revision_no = ? AND id <> ?').get(a.id, r.revisionNo, r.id);
-        if (clash !== undefined) {
+        const clash = ctx.sql('SELECT * FROM revision WHERE assessment_id = ? AND revision_no = ? AND id <> ?').get(a.id, r.revisionNo, r.id) as
+          | RevisionRow
+          | undefined;
+        if (clash !== undefined && clash.status === 'draft') {
+          // Both sides started this revision on their own: ours is kept as a draft of its own.
+          keep(clash, 'yours', `revision ${r.revisionNo} was also started elsewhere`);
+          ctx.sql("DELETE FROM revision WHERE id = ? AND status = 'draft'").run(clash.id);
+        } else if (clash !== undefined) {
           throw invalid([{ path, problem: `this database already has a different revision ${r.revisionNo} of this assessment (both copies were revised separately; export the newer one and import it elsewhere)` }]);
         }
         insertRevisionRow(ctx, revisionRow(r));
@@ -402,8 +434,8 @@ export function importDocument(ctx: StoreContext, input: unknown): ImportSummary
     run.immediate();
   } catch (e) {
     if (e instanceof RecordError) throw e;
-    const t = translateSqliteError(e, 'Import (nothing was changed)');
+    const t = translateSqliteError(e, 'Import (nothing was changed)', ctx.db.name);
     throw t instanceof RecordError ? new RecordError(t.code, t.message, [{ path: '(document)', problem: t.message }]) : t;
   }
-  return count;
+  return { ...count, keptDrafts };
 }

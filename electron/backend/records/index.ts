@@ -6,6 +6,7 @@
 export * from './types.js';
 export { openRecordStore } from './store.js';
 export { restoreBackup } from './backup.js';
+export { backupDatabaseFile, defaultBackupFolder, listBackups } from './safekeeping.js';
 export { defaultDataDir, defaultDatabasePath, APP_FOLDER, DATABASE_FILE } from './paths.js';
 export { canonicalJson } from './canonical.js';
 export { diffValues } from './diff.js';

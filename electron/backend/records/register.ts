@@ -17,6 +17,7 @@ import {
 } from '../schemas/records.js';
 import { EyewearSpecSchema, LaserInputSchema } from '../schemas/inputs.js';
 import { notFound, parseOrThrow, translateSqliteError, type StoreContext } from './context.js';
+import { referencesToInstallation, referencesToPerson, referencesToRoom, referencesToSite, refuseIfReferenced } from './references.js';
 import type {
   Eyewear,
   EyewearCondition,
@@ -32,11 +33,11 @@ import type {
   SiteDraft,
 } from './types.js';
 
-function guard<T>(what: string, fn: () => T): T {
+function guard<T>(ctx: StoreContext, what: string, fn: () => T): T {
   try {
     return fn();
   } catch (e) {
-    throw translateSqliteError(e, what);
+    throw translateSqliteError(e, what, ctx.db.name);
   }
 }
 
@@ -78,20 +79,21 @@ export function createSite(ctx: StoreContext, draft: SiteDraft): Site {
   const d = parseOrThrow(SiteDraftSchema, draft, 'Site');
   const now = ctx.now();
   const site: Site = { id: ctx.newId(), name: d.name, building: d.building ?? '', address: d.address ?? '', notes: d.notes ?? '', createdAt: now, updatedAt: now };
-  guard(`Site "${d.name}"`, () => insertSite(ctx, site));
+  guard(ctx, `Site "${d.name}"`, () => insertSite(ctx, site));
   return site;
 }
 export function updateSite(ctx: StoreContext, id: Id, patch: Partial<SiteDraft>): Site {
   const p = parseOrThrow(SitePatchSchema, patch, 'Site changes');
   const next: Site = { ...getSite(ctx, id), ...stripUndefined(p), updatedAt: ctx.now() };
-  guard('Site', () =>
+  guard(ctx, 'Site', () =>
     ctx.sql('UPDATE site SET name=@name, building=@building, address=@address, notes=@notes, updated_at=@updatedAt WHERE id=@id').run(next),
   );
   return next;
 }
 export function deleteSite(ctx: StoreContext, id: Id): void {
-  getSite(ctx, id);
-  guard('Site', () => ctx.sql('DELETE FROM site WHERE id = ?').run(id));
+  const site = getSite(ctx, id);
+  refuseIfReferenced(`Site "${site.name}" cannot be deleted`, referencesToSite(ctx, id), 'Move or delete them first.');
+  guard(ctx, `Site "${site.name}"`, () => ctx.sql('DELETE FROM site WHERE id = ?').run(id));
 }
 
 // ---------------------------------------------------------------- rooms
@@ -150,13 +152,13 @@ export function createRoom(ctx: StoreContext, draft: RoomDraft): Room {
     createdAt: now,
     updatedAt: now,
   };
-  guard(`Room ${d.code}`, () => insertRoom(ctx, room));
+  guard(ctx, `Room ${d.code}`, () => insertRoom(ctx, room));
   return room;
 }
 export function updateRoom(ctx: StoreContext, id: Id, patch: Partial<Omit<RoomDraft, 'siteId'>>): Room {
   const p = parseOrThrow(RoomPatchSchema, patch, 'Room changes');
   const next: Room = { ...getRoom(ctx, id), ...stripUndefined(p), updatedAt: ctx.now() };
-  guard(`Room ${next.code}`, () =>
+  guard(ctx, `Room ${next.code}`, () =>
     ctx
       .sql('UPDATE room SET code=@code, name=@name, responsible_person=@responsiblePerson, contact=@contact, notes=@notes, updated_at=@updatedAt WHERE id=@id')
       .run(next),
@@ -164,8 +166,9 @@ export function updateRoom(ctx: StoreContext, id: Id, patch: Partial<Omit<RoomDr
   return next;
 }
 export function deleteRoom(ctx: StoreContext, id: Id): void {
-  getRoom(ctx, id);
-  guard('Room', () => ctx.sql('DELETE FROM room WHERE id = ?').run(id));
+  const room = getRoom(ctx, id);
+  refuseIfReferenced(`Room ${room.code} cannot be deleted`, referencesToRoom(ctx, id), 'Its records stay with it.');
+  guard(ctx, `Room ${room.code}`, () => ctx.sql('DELETE FROM room WHERE id = ?').run(id));
 }
 
 // ---------------------------------------------------------------- laser installations
@@ -263,7 +266,7 @@ export function createInstallation(ctx: StoreContext, draft: LaserInstallationDr
     createdAt: now,
     updatedAt: now,
   };
-  guard(`Laser ${laser.name}`, () => insertInstallation(ctx, inst));
+  guard(ctx, `Laser ${laser.name}`, () => insertInstallation(ctx, inst));
   return inst;
 }
 export function updateInstallation(
@@ -276,7 +279,7 @@ export function updateInstallation(
   const merged = { ...prev, ...stripUndefined(p), updatedAt: ctx.now() };
   const laser: LaserInput = { ...merged.laser, id };
   const next: LaserInstallation = { ...merged, laser, classAsLabelled: laser.classAsLabelled ?? null };
-  guard(`Laser ${laser.name}`, () =>
+  guard(ctx, `Laser ${laser.name}`, () =>
     ctx
       .sql(
         `UPDATE laser_installation SET laser_type=@laserType, maker=@maker, model=@model, serial_number=@serialNumber,
@@ -287,9 +290,20 @@ export function updateInstallation(
   );
   return next;
 }
+/** Replace a laser's row in place (import of a newer copy): assessments keep referring to it. */
+export function replaceInstallation(ctx: StoreContext, i: LaserInstallation): void {
+  ctx
+    .sql(
+      `UPDATE laser_installation SET room_id=@roomId, laser_type=@laserType, maker=@maker, model=@model, serial_number=@serialNumber,
+         registration_number=@registrationNumber, laser_json=@laserJson, class_as_labelled=@classAsLabelled, status=@status,
+         notes=@notes, created_at=@createdAt, updated_at=@updatedAt WHERE id=@id`,
+    )
+    .run(installationParams(i));
+}
 export function deleteInstallation(ctx: StoreContext, id: Id): void {
-  getInstallation(ctx, id);
-  guard('Laser installation (retire it instead if an assessment refers to it)', () =>
+  const inst = getInstallation(ctx, id);
+  refuseIfReferenced(`Laser "${inst.laser.name}" cannot be deleted`, referencesToInstallation(ctx, id), 'Retire it instead: it then leaves new assessments but stays in the records.');
+  guard(ctx, 'Laser installation (retire it instead if an assessment refers to it)', () =>
     ctx.sql('DELETE FROM laser_installation WHERE id = ?').run(id),
   );
 }
@@ -373,22 +387,30 @@ export function createEyewear(ctx: StoreContext, draft: EyewearDraft): Eyewear {
     createdAt: now,
     updatedAt: now,
   };
-  guard(`Eyewear ${d.spec.id}`, () => insertEyewear(ctx, e));
+  guard(ctx, `Eyewear ${d.spec.id}`, () => insertEyewear(ctx, e));
   return e;
 }
 export function updateEyewear(ctx: StoreContext, id: Id, patch: Partial<Omit<EyewearDraft, 'siteId'>>): Eyewear {
   const p = parseOrThrow(EyewearPatchSchema, patch, 'Eyewear changes');
   const next: Eyewear = { ...getEyewear(ctx, id), ...stripUndefined(p), updatedAt: ctx.now() };
-  guard(`Eyewear ${next.spec.id}`, () =>
+  guard(ctx, `Eyewear ${next.spec.id}`, () =>
     ctx
       .sql('UPDATE eyewear SET tag=@tag, spec_json=@specJson, location=@location, quantity=@quantity, notes=@notes, inspected_on=@inspectedOn, condition=@condition, next_inspection=@nextInspection, updated_at=@updatedAt WHERE id=@id')
       .run(eyewearParams(next)),
   );
   return next;
 }
+export function replaceEyewear(ctx: StoreContext, e: Eyewear): void {
+  ctx
+    .sql(
+      `UPDATE eyewear SET site_id=@siteId, tag=@tag, spec_json=@specJson, location=@location, quantity=@quantity, notes=@notes,
+         created_at=@createdAt, updated_at=@updatedAt WHERE id=@id`,
+    )
+    .run(eyewearParams(e));
+}
 export function deleteEyewear(ctx: StoreContext, id: Id): void {
   getEyewear(ctx, id);
-  guard('Eyewear', () => ctx.sql('DELETE FROM eyewear WHERE id = ?').run(id));
+  guard(ctx, 'Eyewear', () => ctx.sql('DELETE FROM eyewear WHERE id = ?').run(id));
 }
 
 // ---------------------------------------------------------------- people
@@ -429,20 +451,21 @@ export function createPerson(ctx: StoreContext, draft: PersonDraft): Person {
   const d = parseOrThrow(PersonDraftSchema, draft, 'Person');
   const now = ctx.now();
   const p: Person = { id: ctx.newId(), name: d.name, role: d.role ?? '', email: d.email ?? '', phone: d.phone ?? '', createdAt: now, updatedAt: now };
-  guard(`Person ${d.name}`, () => insertPerson(ctx, p));
+  guard(ctx, `Person ${d.name}`, () => insertPerson(ctx, p));
   return p;
 }
 export function updatePerson(ctx: StoreContext, id: Id, patch: Partial<PersonDraft>): Person {
   const p = parseOrThrow(PersonPatchSchema, patch, 'Person changes');
   const next: Person = { ...getPerson(ctx, id), ...stripUndefined(p), updatedAt: ctx.now() };
-  guard('Person', () =>
+  guard(ctx, 'Person', () =>
     ctx.sql('UPDATE person SET name=@name, role=@role, email=@email, phone=@phone, updated_at=@updatedAt WHERE id=@id').run(next),
   );
   return next;
 }
 export function deletePerson(ctx: StoreContext, id: Id): void {
-  getPerson(ctx, id);
-  guard('Person (someone who signed records stays in the register)', () => ctx.sql('DELETE FROM person WHERE id = ?').run(id));
+  const person = getPerson(ctx, id);
+  refuseIfReferenced(`${person.name} cannot be removed from the register`, referencesToPerson(ctx, id), 'Whoever signed records stays in the register.');
+  guard(ctx, 'Person (someone who signed records stays in the register)', () => ctx.sql('DELETE FROM person WHERE id = ?').run(id));
 }
 
 // ---------------------------------------------------------------- snapshot for an assessment

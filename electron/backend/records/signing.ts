@@ -10,7 +10,8 @@
  *   stored in the database, so a signature can be checked even if the key files are lost.
  */
 import { createHash, createPrivateKey, createPublicKey, generateKeyPairSync, sign, verify, type KeyObject } from 'node:crypto';
-import { existsSync, linkSync, mkdirSync, readFileSync, unlinkSync, writeFileSync } from 'node:fs';
+import { existsSync, linkSync, mkdirSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
+import { storageError } from './storage-errors.js';
 import { join } from 'node:path';
 import { canonicalJson } from './canonical.js';
 import { RecordError, type AssessmentContent, type Id } from './types.js';
@@ -70,14 +71,15 @@ export function loadOrCreateSigningKey(keyDir: string): SigningKey {
     // Write under a temporary name, then hard-link into place: a crash never leaves half a key
     // file, and if another process created the key meanwhile, link fails (EEXIST) and theirs is kept.
     const tmp = `${privPath}.${process.pid}.tmp`;
-    writeFileSync(tmp, privPem, { mode: 0o600 });
     try {
+      // Inside the try: a disk that fills up while writing must not leave the temporary file behind.
+      writeFileSync(tmp, privPem, { mode: 0o600 });
       linkSync(tmp, privPath);
       writeFileSync(pubPath, pubPem, { mode: 0o644 });
     } catch (e) {
-      if ((e as NodeJS.ErrnoException).code !== 'EEXIST') throw e;
+      if ((e as NodeJS.ErrnoException).code !== 'EEXIST') throw storageError(e, privPath, 'Creating the signing key') ?? e;
     } finally {
-      unlinkSync(tmp);
+      rmSync(tmp, { force: true });
     }
   }
   let privateKey: KeyObject;

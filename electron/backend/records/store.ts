@@ -2,7 +2,10 @@
  * The record store: one object with typed methods over one SQLite file, for the API/IPC handler
  * table, the loopback host and the CLI. Synchronous (better-sqlite3) except `backup`.
  */
+import { mkdirSync } from 'node:fs';
 import { dirname, resolve } from 'node:path';
+import { checkWritableAtStart } from './storage-errors.js';
+import { acquireWriteLock } from './write-lock.js';
 import type { RoomInput } from '../../../core/model/inputs.js';
 import * as A from './assessments.js';
 import { backupTo } from './backup.js';
@@ -15,11 +18,16 @@ import * as X from './exchange.js';
 import { defaultDatabasePath } from './paths.js';
 import * as R from './register.js';
 import { laserHistory } from './laser-history.js';
+import { saveWork } from './save-work.js';
+import { backupInto, backupStatus, defaultBackupFolder } from './safekeeping.js';
 import type {
   Assessment,
   AssessmentContent,
   AssessmentSummary,
+  BackupReport,
+  BackupStatus,
   CalendarDate,
+  CsvExistingChoice,
   CsvImportReport,
   Eyewear,
   EyewearDraft,
@@ -38,11 +46,14 @@ import type {
   RevisionSummary,
   Room,
   RoomDraft,
+  SaveBase,
   SignOff,
   Site,
   SiteDraft,
   StoreInfo,
   VerifyReport,
+  WorkSave,
+  WorkSaved,
 } from './types.js';
 
 class SqliteRecordStore implements RecordStore {
@@ -50,10 +61,12 @@ class SqliteRecordStore implements RecordStore {
     private readonly ctx: StoreContext,
     readonly info: StoreInfo,
     private readonly nativeBinding: string | undefined,
+    private readonly releaseLock: () => void,
   ) {}
 
   close(): void {
     if (this.ctx.db.open) this.ctx.db.close();
+    this.releaseLock();
   }
 
   listSites(): Site[] { return R.listSites(this.ctx); }
@@ -100,7 +113,10 @@ class SqliteRecordStore implements RecordStore {
   getAssessment(id: Id): Assessment { return A.getAssessment(this.ctx, id); }
   listAssessments(roomId: Id): AssessmentSummary[] { return A.listAssessments(this.ctx, roomId); }
   listDueForReview(date: CalendarDate): AssessmentSummary[] { return A.listDueForReview(this.ctx, date); }
-  saveAssessment(id: Id, content: AssessmentContent): Assessment { return A.saveAssessment(this.ctx, id, content); }
+  saveAssessment(id: Id, content: AssessmentContent, expected?: SaveBase): Assessment {
+    return A.saveAssessment(this.ctx, id, content, expected);
+  }
+  saveWork(save: WorkSave): WorkSaved { return saveWork(this.ctx, save); }
   discardDraft(id: Id): void { A.discardDraft(this.ctx, id); }
   listRevisions(assessmentId: Id): RevisionSummary[] { return A.listRevisions(this.ctx, assessmentId); }
   getRevision(revisionId: Id): Revision { return A.getRevision(this.ctx, revisionId); }
@@ -114,9 +130,15 @@ class SqliteRecordStore implements RecordStore {
   exportRoom(roomId: Id): ExportDocument { return X.exportRoom(this.ctx, roomId); }
   exportAssessment(assessmentId: Id): ExportDocument { return X.exportAssessment(this.ctx, assessmentId); }
   importDocument(doc: unknown): ImportSummary { return X.importDocument(this.ctx, doc); }
-  importLaserCsv(roomId: Id, csvText: string): CsvImportReport { return importLaserCsv(this.ctx, roomId, csvText); }
+  importLaserCsv(roomId: Id, csvText: string, existing?: CsvExistingChoice): CsvImportReport {
+    return importLaserCsv(this.ctx, roomId, csvText, existing);
+  }
 
   backup(path: string): Promise<void> { return backupTo(this.ctx.db, path, this.nativeBinding); }
+  backupInto(folder?: string): Promise<BackupReport> {
+    return backupInto(this.ctx.db, folder ?? defaultBackupFolder(this.info.path), this.nativeBinding);
+  }
+  backupStatus(): BackupStatus { return backupStatus(this.ctx.db, defaultBackupFolder(this.info.path)); }
   seedDemo(): Site { return seedDemo(this.ctx); }
 }
 
@@ -124,6 +146,8 @@ class SqliteRecordStore implements RecordStore {
 export interface InternalOpenOptions extends OpenOptions {
   readonly evaluate?: Evaluate;
   readonly calculatedWith?: string;
+  /** The store's clock (tests that compare two exports byte for byte). */
+  readonly now?: () => string;
 }
 
 /**
@@ -133,12 +157,23 @@ export interface InternalOpenOptions extends OpenOptions {
 export function openRecordStore(options: InternalOpenOptions = {}): RecordStore {
   const path = resolve(options.path ?? defaultDatabasePath());
   const keyDir = resolve(options.keyDir ?? dirname(path));
-  const opened = openDatabase(path, {
-    ...(options.nativeBinding !== undefined ? { nativeBinding: options.nativeBinding } : {}),
-    ...(options.readonly !== undefined ? { readonly: options.readonly } : {}),
-  });
+  const readonly = options.readonly === true;
+  // The default folder is made with its parents (first start); a folder the officer named must exist.
+  if (!readonly && options.path === undefined) mkdirSync(dirname(path), { recursive: true });
+  if (!readonly) checkWritableAtStart(path);
+  const releaseLock = readonly ? () => {} : acquireWriteLock(path);
+  let opened: ReturnType<typeof openDatabase>;
+  try {
+    opened = openDatabase(path, {
+      ...(options.nativeBinding !== undefined ? { nativeBinding: options.nativeBinding } : {}),
+      readonly,
+    });
+  } catch (e) {
+    releaseLock();
+    throw e;
+  }
   const calculatedWith = options.calculatedWith ?? CALCULATED_WITH;
-  const ctx = makeContext(opened.db, keyDir, options.evaluate ?? evaluateRoom, calculatedWith);
+  const ctx = makeContext(opened.db, keyDir, options.evaluate ?? evaluateRoom, calculatedWith, options.now);
   const info: StoreInfo = { path, keyDir, schemaVersion: opened.schemaVersion, migrationBackups: opened.migrationBackups, calculatedWith };
-  return new SqliteRecordStore(ctx, info, options.nativeBinding);
+  return new SqliteRecordStore(ctx, info, options.nativeBinding, releaseLock);
 }

@@ -9,6 +9,12 @@
  */
 import type { EyewearSpec, LaserInput, RoomInput } from '../../../core/model/inputs.js';
 import type { RoomResult } from '../../../core/model/results.js';
+import type { WorkSave, WorkSaved } from './save-work.js';
+import type { BackupFile, BackupReport, BackupStatus } from './safekeeping.js';
+
+export type { BackupFile, BackupReport, BackupStatus };
+
+export type { WorkSave, WorkSaved };
 
 export type Id = string;
 /** ISO 8601 timestamp in UTC, e.g. 2026-05-01T09:30:00.000Z. */
@@ -263,6 +269,14 @@ export interface Assessment {
   readonly createdAt: Timestamp;
   /** The newest revision (draft, or signed when no draft is open). */
   readonly current: Revision;
+  /** Save counter of `current`: a save names it (SaveBase) and is refused once it is out of date. */
+  readonly version: number;
+}
+
+/** What a save started from: the revision the officer opened and its save counter then. */
+export interface SaveBase {
+  readonly revisionId: Id;
+  readonly version: number;
 }
 
 /** One line of an assessment list. */
@@ -353,6 +367,20 @@ export interface ImportSummary {
   readonly revisions: number;
   /** Records already present with identical content (skipped). */
   readonly unchanged: number;
+  /** Drafts kept beside the imported version because the two differed (nothing is discarded). */
+  readonly keptDrafts: readonly KeptDraft[];
+}
+
+/** A draft kept as an assessment of its own because an import brought a different version of it. */
+export interface KeptDraft {
+  /** The assessment whose draft conflicted. */
+  readonly assessmentId: Id;
+  /** The new assessment holding the version that did not stay (same room). */
+  readonly keptAs: Id;
+  readonly title: string;
+  /** Whose version was kept aside: this database's draft, or the one in the file. */
+  readonly whose: 'yours' | 'imported';
+  readonly reason: string;
 }
 
 /** One problem in an imported file: `path` is a JSON path ("rooms[2].code") or "row 7, column wavelength_nm". */
@@ -366,7 +394,20 @@ export interface CsvImportReport {
   /** Every bad row; when non-empty nothing was imported. */
   readonly errors: ReadonlyArray<{ readonly row: number; readonly column: string; readonly problem: string }>;
   readonly installationIds: readonly Id[];
+  /**
+   * Lasers of the file that the room already has (same name, maker and serial number). With the
+   * choice 'ask' (the default) and any such laser, nothing is imported and the officer is asked
+   * whether to skip them or add them again.
+   */
+  readonly alreadyInRoom?: ReadonlyArray<{ readonly row: number; readonly name: string; readonly maker: string; readonly serialNumber: string }>;
+  /** True when nothing was imported because the officer must choose for `alreadyInRoom`. */
+  readonly decisionNeeded?: boolean;
+  /** Lasers left out because the room already has them (choice 'skip'). */
+  readonly skipped?: number;
 }
+
+/** What to do with CSV lasers the room already has (same name, maker, serial number). */
+export type CsvExistingChoice = 'ask' | 'skip' | 'add';
 
 // ---------------------------------------------------------------- the store
 
@@ -455,7 +496,12 @@ export interface RecordStore {
    * Save content: into the open draft, or — when the newest revision is signed — into a new draft
    * revision based on it (the signed one stays unchanged). Results are recomputed.
    */
-  saveAssessment(id: Id, content: AssessmentContent): Assessment;
+  saveAssessment(id: Id, content: AssessmentContent, expected?: SaveBase): Assessment;
+  /**
+   * The workspace's save: new and edited register lasers plus the assessment, in one transaction;
+   * refused whole (code 'stale') when any part changed since it was opened.
+   */
+  saveWork(save: WorkSave): WorkSaved;
   /** Delete an assessment that has no signed revision, or discard its open draft revision. */
   discardDraft(id: Id): void;
   listRevisions(assessmentId: Id): RevisionSummary[];
@@ -474,11 +520,15 @@ export interface RecordStore {
   /** Validate and import a document (parsed object or JSON text): all or nothing. */
   importDocument(doc: unknown): ImportSummary;
   /** CSV laser inventory for one room (columns in README); nothing imported if any row is bad. */
-  importLaserCsv(roomId: Id, csvText: string): CsvImportReport;
+  importLaserCsv(roomId: Id, csvText: string, existing?: CsvExistingChoice): CsvImportReport;
 
   // safekeeping
   /** Online backup to `path` (a consistent copy while the store stays open). */
   backup(path: string): Promise<void>;
+  /** "Back up now": a dated, checked copy in `folder` (default: `backups` beside the database), recorded. */
+  backupInto(folder?: string): Promise<BackupReport>;
+  /** The last recorded backup and the backups in the default folder. */
+  backupStatus(): BackupStatus;
   /** Loads the invented demo site (no-op if it is already there); returns its site. */
   seedDemo(): Site;
 }
@@ -491,6 +541,12 @@ export class RecordError extends Error {
       | 'invalid'
       | 'immutable'
       | 'conflict'
+      /** A save that started from an older state than the stored one (optimistic concurrency). */
+      | 'stale'
+      /** The database is open for writing in another Beamwarden process, or restore found it in use. */
+      | 'in-use'
+      /** The file system refused: read-only, immutable file, full disk, missing folder. */
+      | 'storage'
       | 'newer-database'
       | 'corrupt-database'
       | 'migration-failed'

@@ -67,3 +67,8 @@ export function siValue(number: string, unit: string): number {
   const area = base.endsWith('/cm²') ? 1e4 : 1;
   return Number(number) * p * area;
 }
+
+/** Text of the whole document in poppler's layout mode (columns kept side by side, reading order by position). */
+export function layoutText(pdf: Buffer): string {
+  return withFile(pdf, (file) => execFileSync('pdftotext', ['-layout', '-enc', 'UTF-8', file, '-'], { encoding: 'utf8' }));
+}

@@ -152,7 +152,7 @@ describe('store methods validate their arguments', () => {
 });
 
 describe('import conflicts', () => {
-  it('two databases that revised the same assessment separately: refused, nothing changed', () => {
+  it('two databases that revised the same assessment separately: the signed revision comes in, our draft is kept beside it', () => {
     const t2 = tempDir('bw-conflict-');
     const a = openTemp(t2.dir, 'a.sqlite');
     const b = openTemp(t2.dir, 'b.sqlite');
@@ -165,19 +165,11 @@ describe('import conflicts', () => {
       a.saveAssessment(made.id, { ...a.getAssessment(made.id).current.content, notes: 'revised in A' });
       b.saveAssessment(made.id, { ...b.getAssessment(made.id).current.content, notes: 'revised in B' });
       a.signAssessment(made.id, { name: 'A. Officer', role: 'LSO', statement: STATEMENT });
-      const before = snapshot(join(t2.dir, 'b.sqlite'));
-      let err: unknown;
-      try {
-        b.importDocument(a.exportAssessment(made.id));
-      } catch (e) {
-        err = e;
-      }
-      expect(err).toBeInstanceOf(RecordError);
-      expect((err as RecordError).issues).toContainEqual({
-        path: 'assessments[0].revisions[1]',
-        problem: expect.stringMatching(/already has a different revision 2/),
-      });
-      expect(snapshot(join(t2.dir, 'b.sqlite'))).toBe(before);
+      const summary = b.importDocument(a.exportAssessment(made.id));
+      expect(b.getAssessment(made.id).current).toMatchObject({ revisionNo: 2, status: 'signed' });
+      expect(summary.keptDrafts).toHaveLength(1);
+      expect(b.getAssessment(summary.keptDrafts[0]?.keptAs ?? '').current.content.notes).toBe('revised in B');
+      expect(b.listAssessments(room.id)).toHaveLength(2);
     } finally {
       a.close();
       b.close();

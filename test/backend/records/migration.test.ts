@@ -76,6 +76,7 @@ describe('migrating the version-1 fixture', () => {
     expect(raw.prepare('SELECT version, name FROM schema_migrations ORDER BY version').all()).toEqual([
       { version: 1, name: 'initial' },
       { version: 2, name: 'list_columns_and_audit_log' },
+      { version: 4, name: 'revision_version' },
       { version: 5, name: 'eyewear_upkeep' },
     ]);
     // eyewear of the version-1 fixture: upkeep columns added, nothing recorded yet

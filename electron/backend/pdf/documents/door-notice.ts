@@ -64,17 +64,46 @@ function signalPanel(choice: SignalChoice, width: number, size: number): Content
   };
 }
 
-function entryInstructions(doc: DocumentInput, view: RoomView): string[] {
+/**
+ * What a person at the door must know before opening it: who may enter, which eyewear, what to do
+ * in an emergency and whom to call. The officer's administrative controls stay in the report.
+ */
+export function entryInstructions(doc: DocumentInput, view: RoomView): string[] {
   const needEyewear = doc.results.requiredEyewear.some((r) => dec(r.odRequired).gt(0));
-  const items = ['Authorised personnel only.'];
-  if (needEyewear) items.push('Put on the laser eyewear listed here BEFORE entering; check it matches the wavelengths in use.');
+  const who = [doc.room.responsiblePerson, doc.officer.name].filter((x) => x.trim() !== '' && !/not named/.test(x));
+  const items = [`Authorised persons only.${who.length > 0 ? ` Others: ask ${who.join(' or ')} first.` : ''}`];
+  if (needEyewear) {
+    const covering = coveringEyewear(doc);
+    items.push(
+      covering.length > 0
+        ? `Put on the laser eyewear BEFORE entering: ${covering.map((e) => e.label).join(' or ')}.`
+        : 'Put on the laser eyewear named for your task on the eyewear sheet BEFORE entering; no single pair covers every beam here.',
+    );
+  }
   items.push(`${precautionFor(view.highestClass)}.`);
   if (view.anyInvisible) items.push('Part of the radiation is invisible: a beam can be present without being seen.');
-  // Administrative controls the officer accepted are the room's own entry rules.
-  for (const c of doc.content.controls) {
-    if (c.category === 'administrative' && c.decision === 'accepted' && items.length < 7) items.push(c.measure.endsWith('.') ? c.measure : `${c.measure}.`);
-  }
+  const stop = doc.content.controls.some((c) => c.decision === 'accepted' && /emergency (beam-off|stop|off)/i.test(c.measure));
+  const call = doc.emergencyContact ?? 'the emergency number below';
+  items.push(`Emergency: ${stop ? 'press the emergency beam-off button or ' : ''}switch the lasers off if you can do so safely, leave the area and call ${call}.`);
+  // Common practice after a suspected eye exposure: prompt examination by an eye specialist.
+  items.push('Suspected eye injury: call the emergency contact, then the laser safety officer; the eye must be examined without delay.');
   return items;
+}
+
+/** The eyewear that covers every beam, named by its label and the marking on its frame (EN 207 style). */
+export function coveringEyewear(doc: DocumentInput): Array<{ readonly label: string; readonly marking: string }> {
+  const specs = doc.content.input.eyewear ?? [];
+  return doc.results.eyewearCoveringAll.map((tag) => {
+    const spec = specs.find((e) => e.id === tag);
+    if (spec === undefined) return { label: tag, marking: '' };
+    const nm = (a: number, b: number): string => (a === b ? `${a}` : `${a}–${b}`);
+    const en207 = (spec.en207 ?? []).map((m) => `${m.modes} ${nm(m.from_nm, m.to_nm)} LB${m.scale}`);
+    const en208 = (spec.en208 ?? []).map((m) => `${nm(m.from_nm, m.to_nm)} RB${m.scale}`);
+    const od = (spec.od ?? []).map((m) => `OD ${m.od} ${nm(m.from_nm, m.to_nm)} nm`);
+    const marking = [...en207, ...en208].join(' + ') || od.join(', ');
+    const label = spec.label.includes(spec.id) ? spec.label : `${spec.id} (${spec.label})`;
+    return { label, marking };
+  });
 }
 
 function laserRows(view: RoomView): TableCell[][] {
@@ -114,7 +143,7 @@ export function eyewearRows(doc: DocumentInput): TableCell[][] {
 }
 
 /** One table, or two or three side by side when the room needs many rows (keeps one page). */
-function eyewearTables(rows: TableCell[][]): Content {
+function eyewearTables(rows: TableCell[][], shrink = 1): Content {
   // pdfmake annotates cell objects while laying out: each table gets its own header cells.
   const header = (): TableCell[] => [{ text: 'Wavelength', bold: true }, { text: 'OD', bold: true }, { text: 'Scale numbers', bold: true }];
   const table = (body: TableCell[][], fontSize: number): Content => ({
@@ -122,16 +151,16 @@ function eyewearTables(rows: TableCell[][]): Content {
     layout: CELL_LAYOUT,
     fontSize,
   });
-  if (rows.length <= 4) return { margin: [0, 4, 0, 0], stack: [table(rows, 15)] };
+  if (rows.length <= 4) return { margin: [0, 4, 0, 0], stack: [table(rows, 15 * shrink)] };
   if (rows.length <= 8) {
     const half = Math.ceil(rows.length / 2);
-    return { margin: [0, 4, 0, 0], columns: [table(rows.slice(0, half), 12.5), table(rows.slice(half), 12.5)], columnGap: 10 };
+    return { margin: [0, 4, 0, 0], columns: [table(rows.slice(0, half), 12.5 * shrink), table(rows.slice(half), 12.5 * shrink)], columnGap: 10 };
   }
   // Many wavelengths: one line per wavelength ("1064 nm  OD 6.3  D LB5, R LB7"), three to a row.
   const cells: TableCell[] = rows.map((r) => ({ text: [{ text: `${cellText(r[0])}   `, bold: true }, { text: `${cellText(r[1])}   `, bold: true }, cellText(r[2])] }));
   const body: TableCell[][] = [];
   for (let i = 0; i < cells.length; i += 3) body.push([cells[i] ?? '', cells[i + 1] ?? '', cells[i + 2] ?? '']);
-  return { margin: [0, 4, 0, 0], table: { widths: ['*', '*', '*'], body }, layout: { ...CELL_LAYOUT, fillColor: () => null }, fontSize: 10.5 };
+  return { margin: [0, 4, 0, 0], table: { widths: ['*', '*', '*'], body }, layout: { ...CELL_LAYOUT, fillColor: () => null }, fontSize: 10.5 * shrink };
 }
 
 function cellText(c: TableCell | undefined): string {
@@ -150,7 +179,10 @@ const CELL_LAYOUT = {
   fillColor: (row: number) => (row === 0 ? '#E6E6E6' : null),
 };
 
-export function doorNoticeDefinition(doc: DocumentInput, opts: RenderOptions): TDocumentDefinitions {
+/** How tightly the notice is set: 0 as designed; each further level gives the details less room (see renderDoorNotice). */
+export const NOTICE_FIT_LEVELS = 8;
+
+export function doorNoticeDefinition(doc: DocumentInput, opts: RenderOptions, fit = 0): TDocumentDefinitions {
   const view = roomView(doc);
   const width = contentWidth(opts.paper, SIDE);
   const choice = noticeSignal(doc, view, opts.signalWord);
@@ -158,82 +190,102 @@ export function doorNoticeDefinition(doc: DocumentInput, opts: RenderOptions): T
   // The lasers table is read at the door; it shrinks for crowded rooms so the notice stays one page.
   const letter = opts.paper === 'Letter'; // 50 pt shorter than A4
   // A small room leaves space: the details are then set larger, to be read from further away.
-  const roomy = view.lasers.length <= 2 && eyewear.length <= 2;
+  const roomy = fit === 0 && view.lasers.length <= 2 && eyewear.length <= 2;
   // A crowded room: the symbol panel gives up some height so everything stays on one page.
-  const dense = view.lasers.length > 7 || eyewear.length > 8;
-  const detail = roomy ? 12.5 : view.lasers.length <= 4 && !letter ? 10.5 : view.lasers.length <= 7 ? 9 : 7.5;
-  const listSize = roomy ? 12 : view.lasers.length <= 4 && !letter ? 10.5 : 9.5;
+  const dense = fit > 0 || view.lasers.length > 7 || eyewear.length > 8;
+  const shrink = [1, 0.92, 0.84, 0.76, 0.7, 0.66, 0.62, 0.58][Math.min(fit, NOTICE_FIT_LEVELS - 1)] as number;
+  // The texts read close up (instructions, contacts) shrink less than the table, and not below about 7.5 pt.
+  const near = Math.max(shrink, 0.78);
+  const base = roomy ? 12.5 : view.lasers.length <= 4 && !letter ? 10.5 : view.lasers.length <= 7 ? 9 : 7.5;
+  const detail = Math.max(base * shrink, 5.8); // 5.8 pt: still read at arm's length
+  const listSize = (roomy ? 11.5 : view.lasers.length <= 4 && !letter ? 10.5 : 9.5) * near;
+  const symbol = (dense ? 96 : letter ? 112 : 124) * (fit >= 4 ? 0.62 : fit >= 3 ? 0.8 : 1);
+  // From level 3 on, the hazard and class lines give up some size too (still far above 9 mm capitals at the lowest).
+  const big = fit >= 4 ? 0.68 : fit >= 3 ? 0.82 : 1;
   const officerContact = [doc.officer.phone, doc.officer.email].filter((x) => x.trim() !== '').join(' · ');
-  const suitable = doc.results.eyewearCoveringAll;
+  const covering = coveringEyewear(doc);
+  const twoColumns = view.lasers.length > 10;
+
+  const laserHeader = (): TableCell[] => [{ text: 'Laser type', bold: true }, { text: 'Wavelength', bold: true }, { text: 'Max. output', bold: true }, { text: 'Pulse', bold: true }, { text: 'Class', bold: true }];
+  const laserTable = (rows: TableCell[][], widths: Array<number | string>): Content => ({ table: { headerRows: 1, widths, body: [laserHeader(), ...rows] }, layout: CELL_LAYOUT, fontSize: detail });
+  const rows = laserRows(view);
+  const half = Math.ceil(rows.length / 2);
+  // Many lasers: one entry per laser ("name · wavelength · output, pulse · class"), two lists side by side.
+  const entry = (r: TableCell[]): TableCell => ({
+    text: [{ text: `${cellText(r[0])}`, bold: true }, ` · ${cellText(r[1])} · ${cellText(r[2])}${cellText(r[3]) === '–' || cellText(r[3]) === '' ? '' : `, ${cellText(r[3])}`} · `, { text: cellText(r[4]), bold: true }],
+  });
+  const list = (part: TableCell[][]): Content => ({ table: { widths: ['*'], body: part.map((r) => [entry(r)]) }, layout: { ...CELL_LAYOUT, fillColor: () => null }, fontSize: detail });
+  const lasersBlock: Content = twoColumns ? { columns: [list(rows.slice(0, half)), list(rows.slice(half))], columnGap: 8 } : laserTable(rows, ['*', 120, 80, 64, 44]);
 
   const content: Content[] = [
-    signalPanel(choice, width, dense ? 60 : NOTICE_SIZES.signalWord),
+    signalPanel(choice, width, dense ? (fit >= 4 ? 44 : fit >= 3 ? 52 : 60) : NOTICE_SIZES.signalWord),
     {
-      margin: [0, 8, 0, 0],
+      margin: [0, 8 * shrink, 0, 0],
       columns: [
-        { width: dense ? 96 : letter ? 112 : 124, svg: laserWarningSymbolSvg(dense ? 96 : letter ? 112 : 124), margin: [0, 2, 0, 0] },
+        { width: symbol, svg: laserWarningSymbolSvg(symbol), margin: [0, 2, 0, 0] },
         {
           width: '*',
           margin: [14, 0, 0, 0],
           stack: [
-            ...hazardLines(view).map((t, i, all) => ({ text: t, fontSize: all.length > 1 && i === 0 ? 22 : all.length > 1 ? 30 : NOTICE_SIZES.hazardLine, bold: true, lineHeight: 1 })),
-            { text: [{ text: `CLASS ${view.highestClass} `, fontSize: dense ? 40 : NOTICE_SIZES.classLine }, { text: 'LASER AREA', fontSize: 24 }], bold: true, margin: [0, 2, 0, 2], lineHeight: 1 },
-            { text: precautionFor(view.highestClass).toUpperCase(), fontSize: 13, bold: true, lineHeight: 1.05 },
+            ...hazardLines(view).map((t, i, all) => ({ text: t, fontSize: (all.length > 1 && i === 0 ? 22 : all.length > 1 ? 30 : NOTICE_SIZES.hazardLine) * big, bold: true, lineHeight: 1 })),
+            { text: [{ text: `CLASS ${view.highestClass} `, fontSize: (dense ? 40 : NOTICE_SIZES.classLine) * big }, { text: 'LASER AREA', fontSize: 24 * big }], bold: true, margin: [0, 2, 0, 2], lineHeight: 1 },
+            { text: precautionFor(view.highestClass).toUpperCase(), fontSize: 13 * Math.max(big, 0.8), bold: true, lineHeight: 1.05 },
           ],
         },
       ],
     },
     eyewear.length > 0
       ? {
-          margin: [0, 10, 0, 0],
+          margin: [0, 10 * shrink, 0, 0],
           stack: [
-            { text: 'LASER EYEWEAR REQUIRED', fontSize: NOTICE_SIZES.eyewearLine, bold: true, color: '#000000', background: '#FFD100', lineHeight: 1 },
-            eyewearTables(eyewear),
-            {
-              text: suitable.length > 0 ? [{ text: 'Eyewear here that covers every beam: ', bold: true }, suitable.join(', ')] : [{ text: 'No single eyewear covers every beam: see the eyewear sheet by the rack.', bold: true }],
-              fontSize: 11,
-              margin: [0, 2, 0, 0],
-            },
+            { text: 'LASER EYEWEAR REQUIRED', fontSize: NOTICE_SIZES.eyewearLine * big, bold: true, color: '#000000', background: '#FFD100', lineHeight: 1 },
+            eyewearTables(eyewear, Math.max(shrink, 0.75)),
+            covering.length > 0
+              ? {
+                  text: [
+                    { text: 'Eyewear here that covers every beam: ', bold: true },
+                    ...covering.flatMap((e, i) => [{ text: `${i > 0 ? '; ' : ''}${e.label}`, bold: true }, { text: e.marking === '' ? '' : `, marked ${e.marking}` }]),
+                  ],
+                  fontSize: 11 * near,
+                  margin: [0, 2, 0, 0],
+                }
+              : { text: 'No single eyewear covers every beam: see the eyewear sheet by the rack.', bold: true, fontSize: 11, margin: [0, 2, 0, 0] },
           ],
         }
       : { text: 'No protective eyewear is required for the beams assessed.', fontSize: 16, bold: true, margin: [0, 10, 0, 0] },
-    { text: 'Lasers in this room', bold: true, fontSize: roomy ? 14 : 11.5, margin: [0, roomy ? 10 : 4, 0, 1] },
+    { text: 'Lasers in this room', bold: true, fontSize: roomy ? 14 : 11.5 * near, margin: [0, roomy ? 10 : 4 * shrink, 0, 1] },
+    lasersBlock,
     {
-      table: {
-        headerRows: 1,
-        widths: ['*', 120, 80, 64, 44],
-        body: [[{ text: 'Laser type', bold: true }, { text: 'Wavelength', bold: true }, { text: 'Max. output', bold: true }, { text: 'Pulse', bold: true }, { text: 'Class', bold: true }], ...laserRows(view)],
-      },
-      layout: CELL_LAYOUT,
-      fontSize: detail,
-    },
-    {
-      margin: [0, 8, 0, 0],
+      margin: [0, 8 * shrink, 0, 0],
       columnGap: 12,
       columns: [
         {
           width: '*',
           stack: [
-            { text: 'Before you enter', bold: true, fontSize: roomy ? 14 : 12, margin: [0, 0, 0, 2] },
+            { text: 'Before you enter', bold: true, fontSize: roomy ? 14 : 12 * big, margin: [0, 0, 0, 2] },
             { ul: entryInstructions(doc, view), fontSize: listSize, lineHeight: 1.05 },
           ],
         },
         {
           width: 170,
           stack: [
-            { text: 'Laser safety officer', bold: true, fontSize: 9.5 },
-            { text: doc.officer.name, fontSize: 12.5, bold: true },
-            { text: officerContact, fontSize: 11 },
-            { text: [{ text: 'Responsible person: ', bold: true }, `${doc.room.responsiblePerson}${doc.room.contact ? ' · ' + doc.room.contact : ''}`], fontSize: 9, margin: [0, 3, 0, 0] },
-            { text: [{ text: 'Room: ', bold: true }, `${doc.room.code}${doc.room.name ? ' — ' + doc.room.name : ''}, ${doc.site.name}`], fontSize: 9 },
-            { text: [{ text: 'Valid until: ', bold: true }, { text: fmt.calendarDate(doc.content.reviewBy), bold: true }], fontSize: 13, margin: [0, 3, 0, 0] },
+            { text: 'In an emergency call', bold: true, fontSize: 9.5, color: '#B00020' },
+            doc.emergencyContact
+              ? { text: doc.emergencyContact, fontSize: 13 * near, bold: true }
+              : { text: 'Emergency number: ____________________', fontSize: 11, bold: true, margin: [0, 4, 0, 0] },
+            { text: 'Laser safety officer', bold: true, fontSize: 9.5, margin: [0, 4, 0, 0] },
+            { text: doc.officer.name, fontSize: 12 * near, bold: true },
+            { text: officerContact, fontSize: 10.5 * near },
+            { text: [{ text: 'Responsible person: ', bold: true }, `${doc.room.responsiblePerson}${doc.room.contact ? ' · ' + doc.room.contact : ''}`], fontSize: 9 * near, margin: [0, 3, 0, 0] },
+            { text: [{ text: 'Room: ', bold: true }, `${doc.room.code}${doc.room.name ? ' — ' + doc.room.name : ''}, ${doc.site.name}`], fontSize: 9 * near },
+            { text: [{ text: 'Valid until: ', bold: true }, { text: fmt.calendarDate(doc.content.reviewBy), bold: true }], fontSize: 13 * near, margin: [0, 3, 0, 0] },
           ],
         },
         { width: 92, stack: [fingerprintStack(doc, dense ? 64 : 76, 8.5)] },
       ],
     },
     { text: '', margin: [0, dense ? 3 : 6, 0, 0] },
-    cautionBlock(10, doc),
+    cautionBlock(fit >= 6 ? 8.5 : 10, doc),
   ];
   return {
     ...baseDocument(doc, opts.paper, 'Laser hazard notice'),

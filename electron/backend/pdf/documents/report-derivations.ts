@@ -9,6 +9,7 @@ import type { RoomView } from '../room-view.js';
 import { limitVsDurationSvg, type CurveCache } from '../plots/limit-vs-duration.js';
 import { exposureVsDistanceSvg } from '../plots/exposure-vs-distance.js';
 import { TracePrinter } from './trace-content.js';
+import { rowsUsedSection } from './report-rows.js';
 
 export function plotsSection(doc: DocumentInput, view: RoomView, units: UnitHabit, width: number): Content[] {
   const cache: CurveCache = new Map();
@@ -48,12 +49,13 @@ export function derivationsSection(doc: DocumentInput, view: RoomView): Content[
   const out: Content[] = [
     heading('Appendix — derivations'),
     paragraph(
-      'Every figure above, step by step as the calculation core made it: inputs, table rows with their source and confidence mark, formulas with the numbers substituted, conservative replacements and rounding. ' +
-        `Rule set of every step: ${doc.results.ruleSetName}. A sub-derivation identical to one printed earlier is referred to by its number; a step identical to one already printed for the same beam is not repeated; ` +
-        'sources and confidence marks ([S1], [S2] ...) are listed after each beam.',
+      'Every figure above, step by step as the calculation core made it: inputs, table rows, formulas with the numbers substituted, stricter values used in place of unchecked ones, and rounding. ' +
+        `Rule set of every step: ${doc.results.ruleSetName}. A sub-derivation or step identical to one printed earlier is referred to by its number ("as in D1.2"); ` +
+        'the numbers in brackets ([1], [2] ...) refer to the list of sources at the end of this appendix, each with whether it was checked against the published text.',
       { fontSize: 8, color: COLOR.muted },
     ),
   ];
+  out.push(...rowsUsedSection(doc));
   const printer = new TracePrinter(doc.results.ruleSetName);
   view.beams.forEach((b, i) => {
     out.push(heading(`${i + 1}. ${b.result.label}`, 2));
@@ -61,5 +63,6 @@ export function derivationsSection(doc: DocumentInput, view: RoomView): Content[
   });
   out.push(heading('Room', 2));
   out.push(...printer.render(doc.results.trace, 'R'));
+  out.push(heading('Sources of the derivations', 2), ...printer.sourceList());
   return out;
 }

@@ -6,10 +6,10 @@
  * Made readable (and short enough to print quickly) in four ways, all stated on the page:
  *  - a sub-derivation identical to one printed earlier in the report is printed once and
  *    referred to by its number afterwards;
- *  - a step identical to one already printed for the same beam (the rule-set note, a factor
- *    such as C_A) is printed once, and the count of such repeats is given;
- *  - sources and confidence marks are numbered per beam ([S1], [S2] ...) and listed once after
- *    the beam's derivation, instead of repeating the same long citation on every line;
+ *  - a step identical to one already printed anywhere in the report (the rule-set note, a factor
+ *    such as C_A) is printed once and referred to by the number where it stands ("as in D1.2");
+ *  - sources are numbered for the whole report ([1], [2] ...) and listed once, each as a readable
+ *    citation with its check status, instead of repeating the same long citation on every line;
  *  - the rule-set name, stated at the head of the appendix, is left out of the sub-titles.
  * Each sub-derivation is one text block (not one block per line): pdfmake lays out far fewer nodes.
  * Within the block, text is handed to pdfmake in short unbreakable pieces of a few words (see
@@ -18,6 +18,7 @@
  */
 import type { Content } from 'pdfmake/interfaces';
 import type { Trace, TraceKind, TraceStep } from '../../../../core/trace/trace.js';
+import { citationLine, citationOf, readableText } from '../../../../core/provenance/citations.js';
 import { COLOR } from '../page.js';
 
 const KIND_STYLE: Readonly<Record<TraceKind, { tag: string; color: string; bold?: boolean }>> = {
@@ -71,8 +72,8 @@ function stepRuns(s: TraceStep, ref: string | null): Run[] {
   const k = KIND_STYLE[s.kind];
   const runs: Run[] = [
     { text: `${k.tag}  `, color: k.color, bold: true, fontSize: 6.3, noWrap: true },
-    ...pieces(`${s.label}: `, { bold: true }),
-    ...pieces(s.detail, { ...(k.bold ? { bold: true } : {}), ...(s.kind === 'warning' ? { color: COLOR.bad } : {}) }),
+    ...pieces(`${readableText(s.label)}: `, { bold: true }),
+    ...pieces(readableText(s.detail), { ...(k.bold ? { bold: true } : {}), ...(s.kind === 'warning' ? { color: COLOR.bad } : {}) }),
   ];
   // "Wavelength: 800 nm = 800 nm": the value is not repeated when the detail already says it.
   const valueText = s.value === undefined ? '' : `${s.value}${s.unit ? ' ' + s.unit : ''}`;
@@ -85,35 +86,43 @@ function stepKey(s: TraceStep): string {
   return `${s.kind}\u0000${s.label}\u0000${s.detail}\u0000${s.value ?? ''}\u0000${s.unit ?? ''}\u0000${s.source ?? ''}`;
 }
 
-/** Shared state across the whole report: which sub-derivations were printed, under which number. */
+/** Shared state across the whole report: which sub-derivations and steps were printed, under which number. */
 export class TracePrinter {
   private readonly printed = new Map<string, string>();
 
-  private sources = new Map<string, string>();
+  /** Step key -> number of the sub-derivation where it was first printed. */
+  private readonly printedSteps = new Map<string, string>();
+
+  /** Readable citation line -> its number, for the whole report (listed once, at the end). */
+  private readonly sources = new Map<string, string>();
 
   constructor(private readonly ruleSetName: string) {}
 
-  /** Lines for one beam's (or the room's) trace, numbered `prefix`, then its list of sources. */
+  /** Lines for one beam's (or the room's) trace, numbered `prefix`. */
   render(trace: Trace, prefix: string): Content[] {
-    const seenSteps = new Set<string>();
-    this.sources = new Map<string, string>();
     const out: Content[] = [];
-    this.walk(trace, prefix, 0, seenSteps, out);
-    if (this.sources.size > 0) {
-      const runs: Run[] = [{ text: 'Sources and confidence: ', bold: true }];
-      for (const [tag, ref] of this.sources) runs.push({ text: `${ref} `, bold: true, noWrap: true }, ...pieces(`${tag}.  `, {}));
-      out.push({ text: runs, fontSize: 6.6, color: COLOR.muted, margin: [4, 3, 0, 2] });
-    }
+    this.walk(trace, prefix, 0, out);
     return out;
   }
 
+  /** The numbered list of every citation used above, each with its check status. */
+  sourceList(): Content[] {
+    if (this.sources.size === 0) return [];
+    const runs: Run[] = [];
+    for (const [line, ref] of this.sources) {
+      if (runs.length > 0) runs.push({ text: '\n' });
+      runs.push({ text: `${ref} `, bold: true, noWrap: true }, ...pieces(line, {}));
+    }
+    return [{ text: runs, fontSize: 7, color: COLOR.ink, margin: [0, 2, 0, 2] }];
+  }
+
   private refFor(s: TraceStep): string | null {
-    const tag = [s.source, s.confidence].filter((x): x is string => x !== undefined && x !== '').join('; ');
-    if (tag === '') return null;
-    let ref = this.sources.get(tag);
+    if ((s.source ?? '') === '' && (s.confidence ?? '') === '') return null;
+    const line = citationLine(citationOf(s.source, s.confidence, s.kind === 'conservative'));
+    let ref = this.sources.get(line);
     if (ref === undefined) {
-      ref = `[S${this.sources.size + 1}]`;
-      this.sources.set(tag, ref);
+      ref = `[${this.sources.size + 1}]`;
+      this.sources.set(line, ref);
     }
     return ref;
   }
@@ -122,13 +131,13 @@ export class TracePrinter {
     return t.title.replace(` (${this.ruleSetName})`, '');
   }
 
-  private walk(trace: Trace, number: string, depth: number, seen: Set<string>, out: Content[]): void {
+  private walk(trace: Trace, number: string, depth: number, out: Content[]): void {
     const indent = depth * 9;
     const key = JSON.stringify(trace);
     const earlier = this.printed.get(key);
     if (earlier !== undefined) {
       out.push({
-        text: [{ text: `${number}  ${this.title(trace)}`, bold: true }, { text: ` — identical to ${earlier} above`, italics: true, color: COLOR.muted }],
+        text: [{ text: `${number}  ${this.title(trace)}`, bold: true }, { text: ` — as in ${earlier}`, italics: true, color: COLOR.muted }],
         fontSize: 7.6,
         margin: [indent, 2, 0, 1],
       });
@@ -137,22 +146,24 @@ export class TracePrinter {
     this.printed.set(key, number);
     out.push({ text: `${number}  ${this.title(trace)}`, bold: true, fontSize: depth === 0 ? 8.8 : 8, margin: [indent, depth === 0 ? 4 : 3, 0, 1] });
     const runs: Run[] = [];
-    let repeated = 0;
+    const asIn = new Map<string, number>();
     for (const s of trace.steps) {
       const k = stepKey(s);
-      if (seen.has(k)) {
-        repeated++;
+      const where = this.printedSteps.get(k);
+      if (where !== undefined) {
+        asIn.set(where, (asIn.get(where) ?? 0) + 1);
         continue;
       }
-      seen.add(k);
+      this.printedSteps.set(k, number);
       if (runs.length > 0) runs.push({ text: '\n' });
       runs.push(...stepRuns(s, this.refFor(s)));
     }
-    if (repeated > 0) {
+    if (asIn.size > 0) {
+      const n = [...asIn.values()].reduce((a, b) => a + b, 0);
       if (runs.length > 0) runs.push({ text: '\n' });
-      runs.push(...pieces(`(${repeated} step${repeated === 1 ? '' : 's'} identical to ones printed above for this beam, not repeated)`, { color: COLOR.muted, fontSize: 6.6 }));
+      runs.push(...pieces(`(${n} further step${n === 1 ? '' : 's'} as in ${[...asIn.keys()].join(', ')})`, { color: COLOR.muted, fontSize: 6.6 }));
     }
     if (runs.length > 0) out.push({ text: runs, fontSize: 7.2, margin: [indent + 4, 0, 0, 1] });
-    trace.children.forEach((c, i) => this.walk(c, `${number}.${i + 1}`, depth + 1, seen, out));
+    trace.children.forEach((c, i) => this.walk(c, `${number}.${i + 1}`, depth + 1, out));
   }
 }

@@ -8,6 +8,7 @@
  */
 import * as m0001 from './0001_initial.js';
 import * as m0002 from './0002_list_columns_and_audit_log.js';
+import * as m0004 from './0004_revision_version.js';
 import * as m0005 from './0005_eyewear_upkeep.js';
 
 export interface Migration {
@@ -19,18 +20,10 @@ export interface Migration {
 export const MIGRATIONS: readonly Migration[] = [
   { version: 1, name: m0001.name, sql: m0001.sql },
   { version: 2, name: m0002.name, sql: m0002.sql },
+  // Version 3 is reserved for another branch's migration; the runner applies the list in order and
+  // tolerates the gap until it lands (each entry names the version it brings the database to).
+  { version: 4, name: m0004.name, sql: m0004.sql },
   { version: 5, name: m0005.name, sql: m0005.sql },
 ];
 
 export const LATEST_VERSION = MIGRATIONS[MIGRATIONS.length - 1]?.version ?? 0;
-
-/** The version a migration applies on top of (the previous entry's, 0 for the first). */
-export function previousVersion(version: number): number {
-  const i = MIGRATIONS.findIndex((m) => m.version === version);
-  return i <= 0 ? 0 : (MIGRATIONS[i - 1]?.version ?? 0);
-}
-
-/** Versions a database may hold: 0 (new) or one of the list. */
-export function isKnownVersion(version: number): boolean {
-  return version === 0 || MIGRATIONS.some((m) => m.version === version);
-}

@@ -1,0 +1,93 @@
+/**
+ * Report: every limit-table row the results rest on, with its band, duration range and formula, the
+ * readable citation and whether it was checked against the published text. The machine key of the
+ * row (its id in the rule set) is printed as the row's name so the officer can find it in the
+ * verification screen; the source key behind the citation never is.
+ */
+import type { Content, TableCell } from 'pdfmake/interfaces';
+import { allSteps, ruleSetTable, type Trace } from '../../../../core/index.js';
+import type { LimitRow } from '../../../../core/limits/table-types.js';
+import { citationLine, citationOf, STATUS_TEXT, type CheckStatus } from '../../../../core/provenance/citations.js';
+import type { DocumentInput } from '../document-input.js';
+import { heading, paragraph } from '../blocks.js';
+import { COLOR } from '../page.js';
+
+export interface RowUsed {
+  readonly row: LimitRow;
+  readonly tissue: 'eye' | 'skin';
+  readonly citation: string;
+  readonly status: CheckStatus;
+}
+
+const ROW_LABEL = /^Row (\S+)/;
+
+/** Rows named by the traces of the results, in the order they first appear, with their citation and status. */
+export function rowsUsed(doc: DocumentInput): RowUsed[] {
+  const table = ruleSetTable(doc.results.ruleSet);
+  const byId = new Map<string, { row: LimitRow; tissue: 'eye' | 'skin' }>();
+  for (const row of table.eye) byId.set(row.id, { row, tissue: 'eye' });
+  for (const row of table.skin) byId.set(row.id, { row, tissue: 'skin' });
+  const order: string[] = [];
+  const stricter = new Set<string>();
+  const traces: Trace[] = [...doc.results.beams.map((b) => b.trace), doc.results.trace];
+  for (const t of traces) {
+    for (const s of allSteps(t)) {
+      const id = ROW_LABEL.exec(s.label)?.[1];
+      if (id === undefined || !byId.has(id)) continue;
+      if (!order.includes(id)) order.push(id);
+      if (s.kind === 'conservative') stricter.add(id);
+    }
+  }
+  return order.map((id) => {
+    const { row, tissue } = byId.get(id) as { row: LimitRow; tissue: 'eye' | 'skin' };
+    const c = citationOf(row.source, row.confidence, stricter.has(id));
+    return { row, tissue, citation: c.text, status: c.status };
+  });
+}
+
+export function range(lo: number, hi: number, unit: string): string {
+  const f = (x: number): string => (x >= 1e4 || (x > 0 && x < 1e-2) ? x.toExponential().replace('e+', 'e') : String(x));
+  return `${f(lo)}–${f(hi)} ${unit}`;
+}
+
+/** Rows grouped under their citation and status, so each citation is printed once. */
+export function rowsUsedSection(doc: DocumentInput): Content[] {
+  const rows = rowsUsed(doc);
+  if (rows.length === 0) return [];
+  const groups = new Map<string, RowUsed[]>();
+  for (const r of rows) {
+    const key = citationLine({ text: r.citation, status: r.status });
+    groups.set(key, [...(groups.get(key) ?? []), r]);
+  }
+  const out: Content[] = [
+    heading('Limit-table rows used', 2),
+    paragraph(
+      `Every row of the exposure-limit tables (${doc.results.ruleSetName}) that a result above rests on, under the published document it comes from and whether it was checked against the published text. ` +
+        'Where a row was not yet checked and a stricter alternative exists, the stricter value is used.',
+      { fontSize: 8, color: COLOR.muted },
+    ),
+  ];
+  for (const [line, members] of groups) {
+    const first = members[0] as RowUsed;
+    const body: TableCell[][] = members.map((r) => [
+      { text: r.row.id, bold: true, noWrap: true },
+      r.row.effect,
+      range(r.row.band_nm[0], r.row.band_nm[1], 'nm'),
+      range(r.row.t_s[0], r.row.t_s[1], 's'),
+      `${r.row.quantity === 'E' ? 'E' : 'H'} = ${r.row.expr} ${r.row.unit.replace('^2', '²')}`,
+    ]);
+    out.push({
+      unbreakable: members.length <= 8,
+      stack: [
+        {
+          text: [{ text: first.citation === '' ? '' : `${first.citation} — ` }, { text: STATUS_TEXT[first.status], bold: true, color: first.status === 'checked' ? COLOR.good : COLOR.ink }],
+          fontSize: 7.6,
+          margin: [0, 4, 0, 1],
+        },
+        { table: { widths: [70, 90, 70, 70, '*'], body }, layout: 'noBorders', fontSize: 7, margin: [8, 0, 0, 0] },
+      ],
+    });
+    void line;
+  }
+  return out;
+}

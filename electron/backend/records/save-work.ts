@@ -1,0 +1,98 @@
+/**
+ * Saving the workspace: the assessment together with the register changes it makes (lasers added
+ * or edited in the workspace) as ONE back-end operation in ONE transaction. Before this, the
+ * window made several calls (create laser, update laser, save assessment) and a failure half-way
+ * left new lasers in the register without the assessment that used them, or the reverse.
+ *
+ * Every part carries what it started from: the assessment its revision id and save counter, each
+ * edited laser its `updatedAt`. If anything changed underneath, the whole save is refused with
+ * the time and nothing is written (optimistic concurrency).
+ */
+import { z } from 'zod';
+import type { LaserInput } from '../../../core/model/inputs.js';
+import { AssessmentContentSchema, IdSchema, TimestampSchema, LaserInstallationDraftSchema } from '../schemas/records.js';
+import { LaserInputSchema } from '../schemas/inputs.js';
+import { assertNotStale, clockTime, createAssessment, getAssessment, saveAssessment } from './assessments.js';
+import { parseOrThrow, translateSqliteError, type StoreContext } from './context.js';
+import { createInstallation, getInstallation, getRoom, listInstallations, updateInstallation } from './register.js';
+import { RecordError, type Assessment, type AssessmentContent, type Id, type LaserInstallation, type SaveBase, type Timestamp } from './types.js';
+
+export interface WorkSave {
+  readonly roomId: Id;
+  /** null: the first save of a new assessment. */
+  readonly assessmentId: Id | null;
+  /** Required with `assessmentId`: the revision and save counter the officer opened. */
+  readonly expected: SaveBase | null;
+  readonly content: AssessmentContent;
+  /** Lasers added in the workspace; `draftId` is the id the content uses for it until saved. */
+  readonly newLasers: ReadonlyArray<{ readonly draftId: string; readonly laser: LaserInput; readonly laserType?: string }>;
+  /** Register lasers edited in the workspace, each with the `updatedAt` it was opened at. */
+  readonly changedLasers: ReadonlyArray<{ readonly id: Id; readonly laser: LaserInput; readonly expectedUpdatedAt: Timestamp }>;
+}
+
+export interface WorkSaved {
+  readonly assessment: Assessment;
+  /** The room's register after the save. */
+  readonly installations: readonly LaserInstallation[];
+  /** Register id given to each new laser, by its draft id. */
+  readonly laserIds: Readonly<Record<string, Id>>;
+}
+
+export const SaveBaseSchema = z.strictObject({ revisionId: IdSchema, version: z.number().int().min(1) });
+
+export const WorkSaveSchema = z.strictObject({
+  roomId: IdSchema,
+  assessmentId: IdSchema.nullable(),
+  expected: SaveBaseSchema.nullable(),
+  content: AssessmentContentSchema,
+  newLasers: z.array(z.strictObject({ draftId: IdSchema, laser: LaserInputSchema, laserType: LaserInstallationDraftSchema.shape.laserType })).max(1000),
+  changedLasers: z.array(z.strictObject({ id: IdSchema, laser: LaserInputSchema, expectedUpdatedAt: TimestampSchema })).max(1000),
+});
+
+/** Times compared as instants: "10:00-05:00" is later than "14:00Z" (not as text). */
+export function sameInstant(a: Timestamp, b: Timestamp): boolean {
+  return Date.parse(a) === Date.parse(b);
+}
+
+export function saveWork(ctx: StoreContext, raw: WorkSave): WorkSaved {
+  const w = parseOrThrow(WorkSaveSchema, raw, 'Save');
+  if (w.assessmentId !== null && w.expected === null) {
+    throw new RecordError('invalid', 'Save: the version of the assessment you opened is missing (reload it and save again)');
+  }
+  const room = getRoom(ctx, w.roomId);
+  const laserIds: Record<string, Id> = {};
+  const run = ctx.db.transaction((): Assessment => {
+    // 1. Nothing is written unless every part is still as the officer opened it.
+    if (w.assessmentId !== null) assertNotStale(ctx, w.assessmentId, w.expected ?? undefined);
+    for (const c of w.changedLasers) {
+      const now = getInstallation(ctx, c.id);
+      if (now.roomId !== room.id) throw new RecordError('invalid', `Laser "${now.laser.name}" is not in room ${room.code}`);
+      if (!sameInstant(now.updatedAt, c.expectedUpdatedAt)) {
+        throw new RecordError(
+          'stale',
+          `Laser "${now.laser.name}" in the register was changed by someone else at ${clockTime(now.updatedAt)} — reload and compare before saving again. Nothing was overwritten.`,
+        );
+      }
+    }
+    // 2. Register changes, then the assessment that refers to them.
+    for (const n of w.newLasers) {
+      const made = createInstallation(ctx, { roomId: room.id, laser: n.laser, laserType: n.laserType ?? n.laser.name });
+      laserIds[n.draftId] = made.id;
+    }
+    for (const c of w.changedLasers) updateInstallation(ctx, c.id, { laser: c.laser });
+    const content: AssessmentContent = {
+      ...w.content,
+      input: { ...w.content.input, lasers: w.content.input.lasers.map((l) => (laserIds[l.id] ? { ...l, id: laserIds[l.id] ?? l.id } : l)) },
+    };
+    return w.assessmentId === null
+      ? createAssessment(ctx, { roomId: room.id, content })
+      : saveAssessment(ctx, w.assessmentId, content, w.expected ?? undefined);
+  });
+  let assessment: Assessment;
+  try {
+    assessment = run.immediate();
+  } catch (e) {
+    throw translateSqliteError(e, `Assessment of room ${room.code}`, ctx.db.name);
+  }
+  return { assessment: getAssessment(ctx, assessment.id), installations: listInstallations(ctx, room.id), laserIds };
+}
