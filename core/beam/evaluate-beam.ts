@@ -194,7 +194,9 @@ function evaluateValid(input: BeamInput, ruleSet: RuleSetId, settings: LimitSett
         detail: `${c.viewing === 'accidental' ? 'accidental viewing' : 'deliberate viewing of the spot'} over ${fmt(new Dec(c.T))} s (${c.lim.summary.durationWhy}); ${governs ? `this case governs: ${why}` : `shown for comparison; the ${choice} case governs (${why})`}`,
         confidence: c.viewing === 'deliberate' && v.diffuse.deliberateDuration_s === undefined ? 'from memory' : 'common practice',
       });
-      distances.push({ ...c.o.result, label: `${c.o.result.label}, ${c.viewing} viewing (${fmt(new Dec(c.T))} s)`, viewing: c.viewing, exposureDuration_s: c.T, governs });
+      // keys in the order of the result schema (trace last), so an export imported and exported again is byte-identical
+      const { trace: caseTrace, ...head } = c.o.result;
+      distances.push({ ...head, label: `${c.o.result.label}, ${c.viewing} viewing (${fmt(new Dec(c.T))} s)`, viewing: c.viewing, exposureDuration_s: c.T, governs, trace: caseTrace });
       trace.children.push(t);
       if (governs) {
         nhzDiffuse = c.o.r;
