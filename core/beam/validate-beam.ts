@@ -4,9 +4,10 @@
  * the CLI can all point at what to fix. Nothing is guessed: the beam-diameter definition is
  * required (domain notes 1.1, rule 1).
  */
-import { InputError, requireInRange, requireNonNegative, requirePositive } from '../errors.js';
+import { InputError } from '../errors.js';
 import type { BeamInput, RuleSetId } from '../model/inputs.js';
-import { DURATION_RANGE_S, RULE_SET_IDS, WAVELENGTH_RANGE_NM } from '../limits/rule-sets.js';
+import { INPUT_RULES, TEXT_RULES, inRange, rangeWords, textProblem, type NumberRule, type TextRule } from '../model/input-rules.js';
+import { RULE_SET_IDS } from '../limits/rule-sets.js';
 
 function isObject(x: unknown): x is Record<string, unknown> {
   return typeof x === 'object' && x !== null && !Array.isArray(x);
@@ -28,14 +29,37 @@ function choice<T extends string>(field: string, x: unknown, allowed: readonly T
   return x as T;
 }
 
-function fraction(field: string, x: unknown, lowInclusive: boolean): number {
-  const v = requireInRange(field, x, 0, 1, '(fraction)');
-  if (!lowInclusive && v === 0) throw new InputError('not_positive', field, x, 'more than 0, at most 1');
-  return v;
+const R = INPUT_RULES;
+
+/** Throw unless x satisfies its rule in the one table (core/model/input-rules.ts). */
+export function requireRule(field: string, x: unknown, rule: NumberRule): number {
+  const range = `${rangeWords(rule)}${rule.why ? ` (${rule.why})` : ''}`;
+  if (typeof x !== 'number') throw new InputError('missing', field, x, range);
+  if (!Number.isFinite(x)) throw new InputError('not_finite', field, x, range);
+  if (!inRange(rule, x)) throw new InputError(!rule.minInclusive && x <= rule.min ? 'not_positive' : 'out_of_range', field, x, range);
+  return x;
 }
 
-/** Longest pulse accepted; the shortest is any positive value (below 1e-13 s a warning follows). */
-const MAX_PULSE_S = DURATION_RANGE_S[1];
+/** Pulses that would overlap (f × t > 1) are not a pulse train; null when consistent. */
+export function pulseTrainProblem(e: { readonly pulseDuration_s: number; readonly repetitionRate_Hz?: number | undefined }): string | null {
+  const f = e.repetitionRate_Hz;
+  if (f === undefined || !(f > 0) || !(e.pulseDuration_s > 0)) return null;
+  return f * e.pulseDuration_s > 1 ? `must be at most 1 / pulse duration = ${1 / e.pulseDuration_s} Hz (pulses would overlap)` : null;
+}
+
+/** A pulsed beam's exposure lasts at least one pulse; null when consistent. */
+export function exposureVsPulseProblem(b: { readonly emission: { readonly kind: string; readonly pulseDuration_s?: number }; readonly exposureDuration_s?: number | undefined }): string | null {
+  const T = b.exposureDuration_s;
+  const tp = b.emission.kind === 'pulsed' ? b.emission.pulseDuration_s : undefined;
+  if (T === undefined || tp === undefined) return null;
+  return T < tp ? `must be at least the pulse duration (${tp} s)` : null;
+}
+
+/**
+ * The nominal NA overstates a single-mode fibre's spread (a shorter, unsafe distance): the
+ * mode-field diameter is required (domain notes 1.6).
+ */
+export const SINGLE_MODE_NEEDS_MFD = 'the mode-field diameter is needed for a single-mode fibre (e.g. 10.4 µm for a standard fibre at 1550 nm); the nominal NA is not used';
 
 /**
  * Check a beam input; throws InputError with `prefix` + field path. Returns the rule set to use.
@@ -51,100 +75,94 @@ export function validateBeamInput(input: unknown, prefix = '', roomRuleSet?: Rul
       throw new InputError('invalid_choice', p('ruleSet'), b['ruleSet'], `the room's rule set '${roomRuleSet}' (one rule set per room)`);
     }
   }
-  requireInRange(p('wavelength_nm'), b['wavelength_nm'], WAVELENGTH_RANGE_NM[0], WAVELENGTH_RANGE_NM[1], 'nm (180 nm to 1 mm)');
+  if (b['id'] !== undefined) requireText(p('id'), b['id'], TEXT_RULES.beamId);
+  if (b['label'] !== undefined) requireText(p('label'), b['label'], TEXT_RULES.beamLabel);
+  requireRule(p('wavelength_nm'), b['wavelength_nm'], R.wavelength_nm);
 
   const e = requireObject(p('emission'), b['emission']);
   const kind = choice(p('emission.kind'), e['kind'], ['cw', 'pulsed'] as const);
+  let tp: number | undefined;
   if (kind === 'cw') {
-    requirePositive(p('emission.power_W'), e['power_W'], 'W');
+    requireRule(p('emission.power_W'), e['power_W'], R.power_W);
   } else {
-    requirePositive(p('emission.pulseEnergy_J'), e['pulseEnergy_J'], 'J');
-    const tp = requirePositive(p('emission.pulseDuration_s'), e['pulseDuration_s'], 's');
-    if (tp > MAX_PULSE_S) throw new InputError('out_of_range', p('emission.pulseDuration_s'), tp, `more than 0, at most ${MAX_PULSE_S} s`);
+    requireRule(p('emission.pulseEnergy_J'), e['pulseEnergy_J'], R.pulseEnergy_J);
+    tp = requireRule(p('emission.pulseDuration_s'), e['pulseDuration_s'], R.pulseDuration_s);
     if (e['repetitionRate_Hz'] !== undefined) {
-      const f = requirePositive(p('emission.repetitionRate_Hz'), e['repetitionRate_Hz'], 'Hz');
-      if (f * tp > 1) throw new InputError('out_of_range', p('emission.repetitionRate_Hz'), f, `at most 1 / pulse duration = ${1 / tp} Hz (pulses would overlap)`);
+      const f = requireRule(p('emission.repetitionRate_Hz'), e['repetitionRate_Hz'], R.repetitionRate_Hz);
+      const problem = pulseTrainProblem({ pulseDuration_s: tp, repetitionRate_Hz: f });
+      if (problem) throw new InputError('out_of_range', p('emission.repetitionRate_Hz'), f, problem.replace(/^must be /, ''));
     }
   }
 
   const g = requireObject(p('beam'), b['beam']);
-  requireNonNegative(p('beam.diameter_m'), g['diameter_m'], 'm');
-  requireInRange(p('beam.diameter_m'), g['diameter_m'], 0, 100, 'm');
-  requirePositive(p('beam.divergence_rad'), g['divergence_rad'], 'rad');
-  requireInRange(p('beam.divergence_rad'), g['divergence_rad'], 0, Math.PI, 'rad (full angle)');
+  requireRule(p('beam.diameter_m'), g['diameter_m'], R.diameter_m);
+  requireRule(p('beam.divergence_rad'), g['divergence_rad'], R.divergence_rad);
   choice(p('beam.definition'), g['definition'], ['1/e', '1/e2', 'd63'] as const);
   if (g['profile'] !== undefined) choice(p('beam.profile'), g['profile'], ['gaussian', 'tophat'] as const);
-  if (g['diameterY_m'] !== undefined) requireInRange(p('beam.diameterY_m'), g['diameterY_m'], 0, 100, 'm');
-  if (g['divergenceY_rad'] !== undefined) {
-    requirePositive(p('beam.divergenceY_rad'), g['divergenceY_rad'], 'rad');
-    requireInRange(p('beam.divergenceY_rad'), g['divergenceY_rad'], 0, Math.PI, 'rad (full angle)');
-  }
+  if (g['diameterY_m'] !== undefined) requireRule(p('beam.diameterY_m'), g['diameterY_m'], R.diameterY_m);
+  if (g['divergenceY_rad'] !== undefined) requireRule(p('beam.divergenceY_rad'), g['divergenceY_rad'], R.divergenceY_rad);
 
   if (b['exposureDuration_s'] !== undefined) {
-    const T = requireInRange(p('exposureDuration_s'), b['exposureDuration_s'], DURATION_RANGE_S[0], DURATION_RANGE_S[1], 's');
-    if (kind === 'pulsed' && T < (e['pulseDuration_s'] as number)) {
-      throw new InputError('out_of_range', p('exposureDuration_s'), T, `at least the pulse duration (${String(e['pulseDuration_s'])} s)`);
-    }
+    const T = requireRule(p('exposureDuration_s'), b['exposureDuration_s'], R.exposureDuration_s);
+    if (tp !== undefined && T < tp) throw new InputError('out_of_range', p('exposureDuration_s'), T, `at least the pulse duration (${tp} s)`);
   }
-  if (b['sourceAngle_rad'] !== undefined) requireInRange(p('sourceAngle_rad'), b['sourceAngle_rad'], 0, Math.PI, 'rad');
-  if (b['skinArea_m2'] !== undefined) requireInRange(p('skinArea_m2'), b['skinArea_m2'], 0, 10, 'm² (irradiated skin area)');
+  if (b['sourceAngle_rad'] !== undefined) requireRule(p('sourceAngle_rad'), b['sourceAngle_rad'], R.sourceAngle_rad);
+  if (b['skinArea_m2'] !== undefined) requireRule(p('skinArea_m2'), b['skinArea_m2'], R.skinArea_m2);
 
   if (b['viewing'] !== undefined) validateViewing(requireObject(p('viewing'), b['viewing']), p('viewing.'));
   if (b['tolerances'] !== undefined) {
     const t = requireObject(p('tolerances'), b['tolerances']);
     for (const k of ['power', 'energy', 'divergence', 'diameter', 'pulseDuration', 'repetitionRate'] as const) {
-      if (t[k] !== undefined) {
-        const v = requireInRange(p(`tolerances.${k}`), t[k], 0, 0.99, '(relative, 0.1 = ±10 %)');
-        void v;
-      }
+      if (t[k] !== undefined) requireRule(p(`tolerances.${k}`), t[k], R.tolerance);
     }
   }
   if (b['settings'] !== undefined) requireObject(p('settings'), b['settings']);
   return ruleSet;
 }
 
+function requireText(field: string, x: unknown, rule: TextRule): string {
+  const problem = textProblem(rule, x);
+  if (problem) throw new InputError('missing', field, typeof x === 'string' && x.length > 60 ? `${x.slice(0, 60)}…` : x, `text of at most ${rule.max} characters${rule.required ? ', not empty' : ''}`);
+  return x as string;
+}
+export { requireText };
+
 function validateViewing(v: Record<string, unknown>, prefix: string): void {
   const p = (f: string): string => `${prefix}${f}`;
   if (optional(v, 'diffuse') !== undefined) {
     const d = requireObject(p('diffuse'), v['diffuse']);
-    fraction(p('diffuse.reflectance'), d['reflectance'], true);
-    if (d['viewingAngle_rad'] !== undefined) requireInRange(p('diffuse.viewingAngle_rad'), d['viewingAngle_rad'], 0, Math.PI / 2, 'rad (0 = along the normal)');
-    if (d['targetDistance_m'] !== undefined) requireNonNegative(p('diffuse.targetDistance_m'), d['targetDistance_m'], 'm');
-    if (d['viewerDistance_m'] !== undefined) requirePositive(p('diffuse.viewerDistance_m'), d['viewerDistance_m'], 'm');
-    if (d['deliberateDuration_s'] !== undefined) requireInRange(p('diffuse.deliberateDuration_s'), d['deliberateDuration_s'], 1e-3, 30000, 's (deliberate viewing of the diffuse spot)');
+    requireRule(p('diffuse.reflectance'), d['reflectance'], R.diffuseReflectance);
+    if (d['viewingAngle_rad'] !== undefined) requireRule(p('diffuse.viewingAngle_rad'), d['viewingAngle_rad'], R.viewingAngle_rad);
+    if (d['targetDistance_m'] !== undefined) requireRule(p('diffuse.targetDistance_m'), d['targetDistance_m'], R.targetDistance_m);
+    if (d['viewerDistance_m'] !== undefined) requireRule(p('diffuse.viewerDistance_m'), d['viewerDistance_m'], R.viewerDistance_m);
+    if (d['deliberateDuration_s'] !== undefined) requireRule(p('diffuse.deliberateDuration_s'), d['deliberateDuration_s'], R.deliberateDuration_s);
     if (d['governs'] !== undefined && d['governs'] !== 'accidental' && d['governs'] !== 'deliberate') throw new InputError('invalid_choice', p('diffuse.governs'), d['governs'], "'accidental' | 'deliberate'");
   }
   if (v['specular'] !== undefined) {
     const s = requireObject(p('specular'), v['specular']);
-    fraction(p('specular.reflectance'), s['reflectance'], true);
-    if (s['pathToSurface_m'] !== undefined) requireNonNegative(p('specular.pathToSurface_m'), s['pathToSurface_m'], 'm');
+    requireRule(p('specular.reflectance'), s['reflectance'], R.specularReflectance);
+    if (s['pathToSurface_m'] !== undefined) requireRule(p('specular.pathToSurface_m'), s['pathToSurface_m'], R.pathToSurface_m);
   }
   if (v['lens'] !== undefined) {
     const l = requireObject(p('lens'), v['lens']);
-    requirePositive(p('lens.focalLength_m'), l['focalLength_m'], 'm');
-    if (l['beamDiameterAtLens_m'] !== undefined) requirePositive(p('lens.beamDiameterAtLens_m'), l['beamDiameterAtLens_m'], 'm');
+    requireRule(p('lens.focalLength_m'), l['focalLength_m'], R.focalLength_m);
+    if (l['beamDiameterAtLens_m'] !== undefined) requireRule(p('lens.beamDiameterAtLens_m'), l['beamDiameterAtLens_m'], R.beamDiameterAtLens_m);
   }
   if (v['fiber'] !== undefined) {
     const f = requireObject(p('fiber'), v['fiber']);
     const kind = choice(p('fiber.kind'), f['kind'], ['multimode', 'singlemode'] as const);
-    requireInRange(p('fiber.numericalAperture'), f['numericalAperture'], 0, 1, '');
-    if (f['numericalAperture'] === 0) throw new InputError('not_positive', p('fiber.numericalAperture'), 0, 'more than 0, at most 1');
-    if (kind === 'singlemode') {
-      // The nominal NA overstates a single-mode fibre's spread (a shorter, unsafe distance): the
-      // mode-field diameter is required (domain notes 1.6).
-      if (f['modeFieldDiameter_m'] === undefined) throw new InputError('missing', p('fiber.modeFieldDiameter_m'), undefined, 'the mode-field diameter in m (e.g. 10.4e-6 for a standard fibre at 1550 nm); the nominal NA is not used for single-mode fibres');
-    }
-    if (f['modeFieldDiameter_m'] !== undefined) requireInRange(p('fiber.modeFieldDiameter_m'), f['modeFieldDiameter_m'], 1e-7, 1e-3, 'm');
+    requireRule(p('fiber.numericalAperture'), f['numericalAperture'], R.numericalAperture);
+    if (kind === 'singlemode' && f['modeFieldDiameter_m'] === undefined) throw new InputError('missing', p('fiber.modeFieldDiameter_m'), undefined, SINGLE_MODE_NEEDS_MFD);
+    if (f['modeFieldDiameter_m'] !== undefined) requireRule(p('fiber.modeFieldDiameter_m'), f['modeFieldDiameter_m'], R.modeFieldDiameter_m);
   }
   if (v['aided'] !== undefined) {
     const a = requireObject(p('aided'), v['aided']);
-    requireInRange(p('aided.magnification'), a['magnification'], 1, 1000, '');
-    requirePositive(p('aided.objectiveDiameter_m'), a['objectiveDiameter_m'], 'm');
-    requireInRange(p('aided.objectiveDiameter_m'), a['objectiveDiameter_m'], 0, 2, 'm');
-    if (a['transmission'] !== undefined) fraction(p('aided.transmission'), a['transmission'], false);
+    requireRule(p('aided.magnification'), a['magnification'], R.magnification);
+    requireRule(p('aided.objectiveDiameter_m'), a['objectiveDiameter_m'], R.objectiveDiameter_m);
+    if (a['transmission'] !== undefined) requireRule(p('aided.transmission'), a['transmission'], R.transmission);
   }
-  if (v['attenuation_per_m'] !== undefined) requireInRange(p('attenuation_per_m'), v['attenuation_per_m'], 0, 1, '1/m');
-  if (v['closestApproach_m'] !== undefined) requireNonNegative(p('closestApproach_m'), v['closestApproach_m'], 'm');
+  if (v['attenuation_per_m'] !== undefined) requireRule(p('attenuation_per_m'), v['attenuation_per_m'], R.attenuation_per_m);
+  if (v['closestApproach_m'] !== undefined) requireRule(p('closestApproach_m'), v['closestApproach_m'], R.closestApproach_m);
 }
 
 /** Narrowing helper for callers that validated first. */

@@ -35,7 +35,7 @@ export const HAZARD_GROUP_LABEL: Readonly<Record<HazardGroup, string>> = {
 
 const GROUPING_SOURCE = 'ours, pending the additivity table of IEC 60825-1 (limit specification sections 3 and 10)';
 
-export type AdditiveItem =
+export type AdditiveItem = (
   | {
       readonly label: string;
       /** Radiant exposure at the tissue over the limit's duration, averaged over its limiting aperture, J/m². */
@@ -47,7 +47,15 @@ export type AdditiveItem =
       /** Radiant exposure per pulse at the tissue, averaged over the limiting aperture, J/m². */
       readonly H_Jm2: number | string;
       readonly pulsed: PulsedLimitResult;
-    };
+    }
+) & {
+  /**
+   * Optional: the same exposure averaged over another aperture (diameter in m). Given, each row is
+   * compared with the exposure over its own aperture and the row with the largest fraction stands
+   * for its group (at an exact band edge the rows of one group can have different apertures).
+   */
+  readonly exposureOver?: (aperture_m: string) => Dec;
+};
 
 export interface AdditiveTerm {
   readonly label: string;
@@ -110,15 +118,20 @@ function readExposure(i: number, x: unknown): Dec {
   return d;
 }
 
-/** Per group: the lowest applicable row of that group for one limit result. */
-function lowestPerGroup(limit: ExposureLimitResult): Map<HazardGroup, LimitCandidate> {
-  const out = new Map<HazardGroup, LimitCandidate>();
+/**
+ * Per group: the most restrictive applicable row of that group for one limit result: the lowest
+ * limit, or, with the exposure per aperture, the largest exposure/limit fraction.
+ */
+function lowestPerGroup(limit: ExposureLimitResult, exposureOver?: (aperture_m: string) => Dec): Map<HazardGroup, LimitCandidate> {
+  const out = new Map<HazardGroup, { c: LimitCandidate; key: Dec }>();
   for (const c of limit.candidates) {
     const g = hazardGroupOf(limit.tissue, c);
     const prev = out.get(g);
-    if (!prev || new Dec(c.H_Jm2).lt(prev.H_Jm2)) out.set(g, c);
+    // key: the fraction per unit exposure (1/H) or the fraction itself; larger is more restrictive
+    const key = exposureOver ? exposureOver(c.aperture.diameter_m).div(c.H_Jm2) : new Dec(1).div(c.H_Jm2);
+    if (!prev || key.gt(prev.key)) out.set(g, { c, key });
   }
-  return out;
+  return new Map([...out].map(([g, v]) => [g, v.c]));
 }
 
 /**
@@ -143,18 +156,20 @@ export function additiveFractions(items: readonly AdditiveItem[]): AdditiveResul
     const d = durations.get(single.tissue) ?? new Set<number>();
     d.add('limit' in item ? single.duration_s : (item.pulsed.averagePower?.limit.duration_s ?? single.duration_s));
     durations.set(single.tissue, d);
-    const perGroup = lowestPerGroup(single);
+    const perGroup = lowestPerGroup(single, item.exposureOver);
     if ('pulsed' in item && item.pulsed.averagePower) {
       // rule 2 rows may belong to a group the single pulse does not reach (e.g. photochemical at T)
-      for (const [g, c] of lowestPerGroup(item.pulsed.averagePower.limit)) if (!perGroup.has(g)) perGroup.set(g, c);
+      for (const [g, c] of lowestPerGroup(item.pulsed.averagePower.limit, item.exposureOver)) if (!perGroup.has(g)) perGroup.set(g, c);
     }
     for (const [g, c] of perGroup) {
       const limitH = 'limit' in item ? new Dec(c.H_Jm2) : new Dec(item.pulsed.perPulse_H_Jm2);
-      const fraction = H.div(limitH);
+      // never below the exposure given for the item (the governing aperture's): safe side
+      const Hrow = item.exposureOver ? Dec.max(H, item.exposureOver(c.aperture.diameter_m)) : H;
+      const fraction = Hrow.div(limitH);
       const term: AdditiveTerm = {
         label: item.label,
         wavelength_nm: single.wavelength_nm,
-        H_Jm2: recordString(H),
+        H_Jm2: recordString(Hrow),
         limit_H_Jm2: recordString(limitH),
         rowId: 'limit' in item ? c.rowId : `${c.rowId} (governing per-pulse limit, ${item.pulsed.governingRule})`,
         effect: c.effect,

@@ -37,12 +37,29 @@ function computeAdditiveItem(ev: BeamEvaluation, tl: TissueLimits): AdditiveItem
     X = Dec.max(X, tl.S.mul(4).div(PI.mul(D).mul(D)));
   }
   const label = ev.result.beamId;
+  // The same exposure over any row's own aperture (rows of one group can differ at an exact edge).
+  // Memoised per aperture: the item is kept per beam (itemMemo), and the room's additive rule is
+  // reassembled on every keystroke (speed, see npm run bench).
+  const overMemo = new Map<string, Dec>();
+  const over = (aperture_m: string): Dec => {
+    const hit = overMemo.get(aperture_m);
+    if (hit) return hit;
+    const v = overUncached(aperture_m);
+    overMemo.set(aperture_m, v);
+    return v;
+  };
+  const overUncached = (aperture_m: string): Dec => {
+    const Da = new Dec(aperture_m);
+    let Xa = exposureAt(tl.S, spreadOf(ev.model), Da, r0);
+    if (tl.tissue === 'eye' && ev.lensPresent) Xa = Dec.max(Xa, tl.S.mul(4).div(PI.mul(Da).mul(Da)));
+    return tl.pulsed ? Xa.div(tl.shortPulseFactor) : Xa.mul(tl.governingLimit.duration_s);
+  };
   if (tl.pulsed) {
     // Per-pulse exposure; for pulses shorter than the tables the limit was scaled by k in this
     // module, so the exposure is divided by k to keep the fraction the same (ours).
-    return { label, H_Jm2: rec(X.div(tl.shortPulseFactor)), pulsed: tl.pulsed };
+    return { label, H_Jm2: rec(X.div(tl.shortPulseFactor)), pulsed: tl.pulsed, exposureOver: over };
   }
-  return { label, H_Jm2: rec(X.mul(tl.governingLimit.duration_s)), limit: tl.governingLimit };
+  return { label, H_Jm2: rec(X.mul(tl.governingLimit.duration_s)), limit: tl.governingLimit, exposureOver: over };
 }
 
 /**

@@ -3,19 +3,18 @@
  * their path prefix, e.g. 'lasers[2].beams[0].wavelength_nm'). Every problem is an InputError
  * naming the field.
  */
-import { InputError, requireInRange } from '../errors.js';
+import { InputError } from '../errors.js';
 import type { EyewearSpec, RoomInput, RuleSetId } from '../model/inputs.js';
-import { RULE_SET_IDS, WAVELENGTH_RANGE_NM } from '../limits/rule-sets.js';
-
-const CLASSES = ['1', '1M', '2', '2M', '3R', '3B', '4'] as const;
+import { RULE_SET_IDS } from '../limits/rule-sets.js';
+import { EN207_MODES, INPUT_RULES, LASER_CLASS_LABELS as CLASSES, SCALE_NUMBERS, TEXT_RULES, type TextRule } from '../model/input-rules.js';
+import { requireRule, requireText } from '../beam/validate-beam.js';
 
 function isObject(x: unknown): x is Record<string, unknown> {
   return typeof x === 'object' && x !== null && !Array.isArray(x);
 }
 
-function requireString(field: string, x: unknown): string {
-  if (typeof x !== 'string' || x.trim() === '') throw new InputError('missing', field, x, 'a non-empty text');
-  return x;
+function requireString(field: string, x: unknown, rule: TextRule): string {
+  return requireText(field, x, rule);
 }
 
 function requireArray(field: string, x: unknown, nonEmpty: boolean): unknown[] {
@@ -25,25 +24,25 @@ function requireArray(field: string, x: unknown, nonEmpty: boolean): unknown[] {
 }
 
 function band(field: string, o: Record<string, unknown>): void {
-  requireInRange(`${field}.from_nm`, o['from_nm'], WAVELENGTH_RANGE_NM[0], WAVELENGTH_RANGE_NM[1], 'nm');
-  requireInRange(`${field}.to_nm`, o['to_nm'], WAVELENGTH_RANGE_NM[0], WAVELENGTH_RANGE_NM[1], 'nm');
+  const from = requireRule(`${field}.from_nm`, o['from_nm'], INPUT_RULES.wavelength_nm);
+  const to = requireRule(`${field}.to_nm`, o['to_nm'], INPUT_RULES.wavelength_nm);
+  if (from > to) throw new InputError('out_of_range', `${field}.to_nm`, to, `at least ${from} nm (the band goes from the shorter to the longer wavelength)`);
 }
 
 function integerIn(field: string, x: unknown, lo: number, hi: number): void {
-  requireInRange(field, x, lo, hi, '');
-  if (!Number.isInteger(x)) throw new InputError('out_of_range', field, x, `a whole number from ${lo} to ${hi}`);
+  if (typeof x !== 'number' || !Number.isInteger(x) || x < lo || x > hi) throw new InputError('out_of_range', field, x, `a whole number from ${lo} to ${hi}`);
 }
 
 export function validateEyewear(x: unknown, field: string): EyewearSpec {
   if (!isObject(x)) throw new InputError('missing', field, x, 'an eyewear specification');
-  requireString(`${field}.id`, x['id']);
-  requireString(`${field}.label`, x['label']);
+  requireString(`${field}.id`, x['id'], TEXT_RULES.eyewearTag);
+  requireString(`${field}.label`, x['label'], TEXT_RULES.eyewearLabel);
   if (x['od'] !== undefined) {
     requireArray(`${field}.od`, x['od'], false).forEach((b, i) => {
       const f = `${field}.od[${i}]`;
       if (!isObject(b)) throw new InputError('missing', f, b, 'an object {from_nm, to_nm, od}');
       band(f, b);
-      requireInRange(`${f}.od`, b['od'], 0, 20, '(optical density)');
+      requireRule(`${f}.od`, b['od'], INPUT_RULES.opticalDensity);
     });
   }
   if (x['en207'] !== undefined) {
@@ -51,9 +50,9 @@ export function validateEyewear(x: unknown, field: string): EyewearSpec {
       const f = `${field}.en207[${i}]`;
       if (!isObject(b)) throw new InputError('missing', f, b, 'an object {from_nm, to_nm, modes, scale}');
       band(f, b);
-      const modes = requireString(`${f}.modes`, b['modes']);
-      if (!/^[DIRMdirm]+$/.test(modes)) throw new InputError('invalid_choice', `${f}.modes`, modes, "letters of 'DIRM', e.g. 'DIR'");
-      integerIn(`${f}.scale`, b['scale'], 1, 10);
+      const modes = b['modes'];
+      if (typeof modes !== 'string' || !EN207_MODES.test(modes)) throw new InputError('invalid_choice', `${f}.modes`, modes, "letters of 'DIRM', e.g. 'DIR'");
+      integerIn(`${f}.scale`, b['scale'], SCALE_NUMBERS.en207.min, SCALE_NUMBERS.en207.max);
     });
   }
   if (x['en208'] !== undefined) {
@@ -61,10 +60,10 @@ export function validateEyewear(x: unknown, field: string): EyewearSpec {
       const f = `${field}.en208[${i}]`;
       if (!isObject(b)) throw new InputError('missing', f, b, 'an object {from_nm, to_nm, scale}');
       band(f, b);
-      integerIn(`${f}.scale`, b['scale'], 1, 5);
+      integerIn(`${f}.scale`, b['scale'], SCALE_NUMBERS.en208.min, SCALE_NUMBERS.en208.max);
     });
   }
-  if (x['visibleTransmission'] !== undefined) requireInRange(`${field}.visibleTransmission`, x['visibleTransmission'], 0, 1, '(fraction)');
+  if (x['visibleTransmission'] !== undefined) requireRule(`${field}.visibleTransmission`, x['visibleTransmission'], INPUT_RULES.visibleTransmission);
   return x as unknown as EyewearSpec;
 }
 
@@ -85,16 +84,16 @@ export function validateRoomShape(input: unknown): RuleSetId {
   lasers.forEach((l, i) => {
     const f = `lasers[${i}]`;
     if (!isObject(l)) throw new InputError('missing', f, l, 'a laser {id, name, beams}');
-    const id = requireString(`${f}.id`, l['id']);
+    const id = requireString(`${f}.id`, l['id'], TEXT_RULES.laserId);
     if (laserIds.has(id)) throw new InputError('invalid_choice', `${f}.id`, id, 'an id not used by another laser of the room');
     laserIds.add(id);
-    requireString(`${f}.name`, l['name']);
+    requireString(`${f}.name`, l['name'], TEXT_RULES.laserName);
     if (l['classAsLabelled'] !== undefined && !CLASSES.includes(l['classAsLabelled'] as (typeof CLASSES)[number])) {
       throw new InputError('invalid_choice', `${f}.classAsLabelled`, l['classAsLabelled'], CLASSES.map((c) => `'${c}'`).join(' | '));
     }
     requireArray(`${f}.beams`, l['beams'], true).forEach((b, j) => {
       if (!isObject(b)) throw new InputError('missing', `${f}.beams[${j}]`, b, 'a beam');
-      const bid = b['id'] === undefined ? `${id}-b${j}` : requireString(`${f}.beams[${j}].id`, b['id']);
+      const bid = b['id'] === undefined ? `${id}-b${j}` : requireString(`${f}.beams[${j}].id`, b['id'], TEXT_RULES.beamId);
       if (beamIds.has(bid)) throw new InputError('invalid_choice', `${f}.beams[${j}].id`, bid, 'an id not used by another beam of the room');
       beamIds.add(bid);
       if (ruleSet === undefined && typeof b['ruleSet'] === 'string' && RULE_SET_IDS.includes(b['ruleSet'] as RuleSetId)) ruleSet = b['ruleSet'] as RuleSetId;
@@ -113,9 +112,9 @@ export function validateRoomShape(input: unknown): RuleSetId {
     requireArray('exposurePlaces', input['exposurePlaces'], false).forEach((p, k) => {
       const f = `exposurePlaces[${k}]`;
       if (!isObject(p)) throw new InputError('missing', f, p, 'a place {place, beamIds}');
-      requireString(`${f}.place`, p['place']);
+      requireString(`${f}.place`, p['place'], TEXT_RULES.placeName);
       requireArray(`${f}.beamIds`, p['beamIds'], false).forEach((id, n) => {
-        const bid = requireString(`${f}.beamIds[${n}]`, id);
+        const bid = requireString(`${f}.beamIds[${n}]`, id, TEXT_RULES.beamId);
         if (!beamIds.has(bid)) throw new InputError('invalid_choice', `${f}.beamIds[${n}]`, bid, 'the id of a beam of this room');
         // a beam reaching two places would be counted in two sums; it belongs to one place
         if (placed.has(bid)) throw new InputError('invalid_choice', `${f}.beamIds[${n}]`, bid, 'a beam named in one place only');

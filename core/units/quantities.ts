@@ -110,28 +110,85 @@ export interface ParsedQuantity {
 const NUMBER = /^\s*([+-]?(?:\d+(?:[.,]\d*)?|[.,]\d+)(?:[eE][+-]?\d+)?)\s*(.*?)\s*$/;
 
 /**
+ * What a comma inside a number means.
+ * - 'decimal': a decimal mark ("632,8 nm"), as in semicolon-separated files of decimal-comma locales.
+ * - 'refuse': never part of a number (comma-separated files, where "1,500 mW" is a thousands
+ *   separator that a reader would otherwise take as 1.5 mW, a 1000-fold under-estimate).
+ * - 'guard' (typed fields): a decimal mark, except where it looks like a thousands group
+ *   ("1,500": exactly three digits after it), which is refused as ambiguous.
+ */
+export type CommaRule = 'decimal' | 'refuse' | 'guard';
+
+/** Officer words for each dimension ("is not an energy unit"). */
+export const DIMENSION_WORDS: Readonly<Record<Dimension, string>> = {
+  power: 'a power',
+  energy: 'an energy',
+  length: 'a length',
+  wavelength: 'a wavelength',
+  time: 'a time',
+  frequency: 'a frequency',
+  angle: 'an angle',
+  irradiance: 'an irradiance',
+  radiantExposure: 'a radiant exposure',
+  ratio: 'a ratio',
+};
+
+/**
  * Parse "5 mW" into { value: 0.005, dimension: 'power' }. When `expect` is given, the unit must
- * be of that dimension (a wavelength may be typed in nm or µm; a bare number takes `defaultUnit`).
+ * be of that dimension (a wavelength may be typed in nm or µm; a bare number takes `defaultUnit`,
+ * and without one a bare number is refused: the unit must be typed).
  */
 export function parseQuantity(
   field: string,
   text: string,
   expect: Dimension,
   defaultUnit?: string,
+  comma: CommaRule = 'guard',
 ): ParsedQuantity {
   const m = NUMBER.exec(text);
   if (!m || m[1] === undefined) throw new InputError('unparseable', field, text, `a number with a unit, e.g. ${example(expect)}`);
-  const num = new Dec(m[1].replace(',', '.'));
+  const numText = m[1];
+  const ci = numText.indexOf(',');
+  if (ci >= 0 && comma !== 'decimal') {
+    const thousands = /^[+-]?\d{1,3},\d{3}(?:[eE][+-]?\d+)?$/.test(numText);
+    if (comma === 'refuse' || thousands) {
+      const unitTyped = (m[2] ?? '').trim();
+      const asThousands = new Dec(numText.replace(',', ''));
+      const hint = thousandsHint(asThousands, unitTyped || defaultUnit || '', expect);
+      throw new InputError(
+        'unparseable',
+        field,
+        text,
+        `a number without a comma, e.g. ${hint}`,
+        comma === 'refuse' ? `a comma inside a number is not read in a comma-separated file: write ${hint}` : `"${numText}" could be read two ways: write ${hint}`,
+      );
+    }
+  }
+  const num = new Dec(numText.replace(',', '.'));
   let unitText = m[2] ?? '';
+  if (unitText === '' && defaultUnit === undefined && expect !== 'ratio') {
+    throw new InputError('unknown_unit', field, text, `a number with ${DIMENSION_WORDS[expect]} unit, e.g. ${example(expect)}`, `type the unit, e.g. ${example(expect)}`);
+  }
   if (unitText === '' && defaultUnit !== undefined) unitText = defaultUnit;
   const unit = normaliseUnit(unitText);
   const want = expect === 'wavelength' ? 'length' : expect;
   const def = unit === '' && want === 'ratio' ? { dim: 'ratio' as const, factor: '1' } : UNIT_TABLE.get(unit);
-  if (!def) throw new InputError('unknown_unit', field, text, `a ${expect} unit, e.g. ${example(expect)}`);
-  if (def.dim !== want) throw new InputError('unknown_unit', field, text, `a ${expect} unit, e.g. ${example(expect)}`, `'${unitText}' is not a ${expect} unit`);
+  if (!def) throw new InputError('unknown_unit', field, text, `${DIMENSION_WORDS[expect]} unit, e.g. ${example(expect)}`, `'${unitText}' is not ${DIMENSION_WORDS[expect]} unit`);
+  if (def.dim !== want) throw new InputError('unknown_unit', field, text, `${DIMENSION_WORDS[expect]} unit, e.g. ${example(expect)}`, `'${unitText}' is not ${DIMENSION_WORDS[expect]} unit`);
   const value = num.mul(def.factor);
   if (!value.isFinite()) throw new InputError('not_finite', field, text, 'a finite number');
   return { value, dimension: expect };
+}
+
+/** "1500 mW or 1.5 W": the thousands reading, typed plainly and with a prefix. */
+function thousandsHint(n: DecT, unitTyped: string, expect: Dimension): string {
+  const plainText = `${n.toString()}${unitTyped ? ` ${unitTyped}` : ''}`;
+  const def = UNIT_TABLE.get(normaliseUnit(unitTyped));
+  const want = expect === 'wavelength' ? 'length' : expect;
+  if (!def || def.dim !== want || expect === 'ratio' || def.dim === 'angle' || def.dim === 'irradiance' || def.dim === 'radiantExposure') return plainText;
+  const si = n.mul(def.factor);
+  const pretty = formatSI(si, SI_UNIT[expect], 12);
+  return pretty.replace(/\s+/g, ' ') === plainText ? plainText : `${plainText} or ${pretty}`;
 }
 
 function example(d: Dimension): string {

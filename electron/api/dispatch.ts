@@ -4,7 +4,7 @@
  * on bad input (issue 'The desktop app': "bad input returns a clear error, never a crash").
  */
 import type { z } from 'zod';
-import { InputError } from '../../core/index.js';
+import { InputError, officerPath, officerWords, placeInRoom } from '../../core/index.js';
 import { formatZodIssues } from '../backend/schemas/index.js';
 import { RecordError } from '../backend/records/types.js';
 import type { HandlerTable, OperationName } from './operation.js';
@@ -19,13 +19,14 @@ export function issuesOf(error: z.ZodError): ApiIssue[] {
 }
 
 export function describeIssues(issues: readonly ApiIssue[]): string {
-  return issues.map((i) => `${i.path}: ${i.message}`).join('; ');
+  // Officer words on screen ("Laser 1, beam 1, wavelength"); the paths stay in `issues`.
+  return issues.map((i) => `${officerPath(i.path)}: ${i.message}`).join('; ');
 }
 
 /** Map anything thrown by a handler to a reply body. Known errors keep their field. */
 export function errorBody(e: unknown): ApiErrorBody {
   if (e instanceof ApiFailure) return e.field === undefined ? { code: e.code, message: e.message } : { code: e.code, message: e.message, field: e.field };
-  if (e instanceof InputError) return { code: 'input_error', message: e.message, field: e.field };
+  if (e instanceof InputError) return { code: 'input_error', message: `${placeInRoom({}, e.field)}: ${officerWords(e)}`, field: e.field };
   if (e instanceof RecordError) {
     const issues = e.issues.map((i) => ({ path: i.path, message: i.problem }));
     const code = RECORD_CODE[e.code];

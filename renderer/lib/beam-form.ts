@@ -207,11 +207,42 @@ export function activeFields(form: BeamForm): BeamFieldName[] {
   return on;
 }
 
-/** Names of required values that are still missing, e.g. ["Power"]. */
+/** The fields every beam needs, whatever is ticked: without them there is no result at all. */
+function coreFields(form: BeamForm): BeamFieldName[] {
+  return ['wavelength', 'diameter', 'divergence', ...(form.emissionKind === 'cw' ? (['power'] as const) : (['energy', 'pulseDuration'] as const))];
+}
+
+/** Names of required values that are still missing, e.g. ["Power"] (the beam cannot be evaluated). */
 export function missingValues(form: BeamForm): string[] {
-  return activeFields(form)
-    .filter((k) => !F[k].optional && form.f[k].value === undefined)
+  return coreFields(form)
+    .filter((k) => form.f[k].value === undefined)
     .map((k) => F[k].label);
+}
+
+/** A ticked viewing condition that cannot be assessed yet; the rest of the beam still is. */
+export interface SectionGap {
+  readonly section: string;
+  readonly problem: string;
+}
+
+const SECTIONS: ReadonlyArray<{ on: (f: BeamForm) => boolean; section: string; required: BeamFieldName[] }> = [
+  { on: (f) => f.diffuseOn, section: 'Diffuse reflection', required: ['diffuseReflectance'] },
+  { on: (f) => f.specularOn, section: 'Specular reflection', required: ['specularReflectance'] },
+  { on: (f) => f.lensOn, section: 'Focusing optics', required: ['lensFocal'] },
+  { on: (f) => f.fiberOn, section: 'Fibre output', required: ['fiberNa'] },
+  { on: (f) => f.aidedOn, section: 'Magnifying optics', required: ['aidedMagnification', 'aidedObjective'] },
+];
+
+/** Ticked sections with a required value missing: each is left out of the evaluation, and named. */
+export function sectionGaps(form: BeamForm): SectionGap[] {
+  const out: SectionGap[] = [];
+  for (const s of SECTIONS) {
+    if (!s.on(form)) continue;
+    const missing = s.required.filter((k) => form.f[k].value === undefined).map((k) => F[k].label);
+    if (s.section === 'Fibre output' && form.fiberKind === 'singlemode' && form.f.fiberMfd.value === undefined) missing.push(`${F.fiberMfd.label} (for a single-mode fibre)`);
+    if (missing.length > 0) out.push({ section: s.section, problem: `${s.section} not assessed until ${missing.join(' and ')} ${missing.length === 1 ? 'is' : 'are'} given` });
+  }
+  return out;
 }
 
 function opt<K extends string, V>(key: K, v: V | undefined): { [P in K]?: V } {
@@ -237,7 +268,8 @@ export function beamInputFrom(form: BeamForm): BeamInput | null {
     ...opt('closestApproach_m', val('closestApproach')),
     ...opt('attenuation_per_m', val('attenuation')),
   };
-  if (form.diffuseOn) {
+  const gaps = new Set(sectionGaps(form).map((g) => g.section));
+  if (form.diffuseOn && !gaps.has('Diffuse reflection')) {
     viewing['diffuse'] = {
       reflectance: need('diffuseReflectance'),
       ...opt('viewingAngle_rad', val('diffuseAngle')),
@@ -245,10 +277,10 @@ export function beamInputFrom(form: BeamForm): BeamInput | null {
       ...opt('viewerDistance_m', val('diffuseViewer')),
     };
   }
-  if (form.specularOn) viewing['specular'] = { reflectance: need('specularReflectance'), ...opt('pathToSurface_m', val('specularPath')) };
-  if (form.lensOn) viewing['lens'] = { focalLength_m: need('lensFocal'), ...opt('beamDiameterAtLens_m', val('lensBeam')) };
-  if (form.fiberOn) viewing['fiber'] = { kind: form.fiberKind, numericalAperture: need('fiberNa'), ...opt('modeFieldDiameter_m', val('fiberMfd')) };
-  if (form.aidedOn) {
+  if (form.specularOn && !gaps.has('Specular reflection')) viewing['specular'] = { reflectance: need('specularReflectance'), ...opt('pathToSurface_m', val('specularPath')) };
+  if (form.lensOn && !gaps.has('Focusing optics')) viewing['lens'] = { focalLength_m: need('lensFocal'), ...opt('beamDiameterAtLens_m', val('lensBeam')) };
+  if (form.fiberOn && !gaps.has('Fibre output')) viewing['fiber'] = { kind: form.fiberKind, numericalAperture: need('fiberNa'), ...opt('modeFieldDiameter_m', val('fiberMfd')) };
+  if (form.aidedOn && !gaps.has('Magnifying optics')) {
     viewing['aided'] = { magnification: need('aidedMagnification'), objectiveDiameter_m: need('aidedObjective'), ...opt('transmission', val('aidedTransmission')) };
   }
   const tol = form.showTolerances

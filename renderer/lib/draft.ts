@@ -17,7 +17,7 @@ import type {
   NonBeamHazard,
   OperatingState,
 } from '../../electron/backend/records/types.js';
-import { laserFormFrom, laserInputFrom, beamErrors, missingValues, type BeamForm, type LaserForm } from './beam-form.js';
+import { laserFormFrom, laserInputFrom, beamErrors, missingValues, sectionGaps, type BeamForm, type LaserForm } from './beam-form.js';
 import { wavelengthNm } from './fields.js';
 
 export interface Draft {
@@ -72,6 +72,8 @@ export interface DraftInput {
   readonly input: RoomInput;
   /** Beams left out because a required value is missing or a field shows an error. */
   readonly incomplete: ReadonlyArray<{ readonly laser: LaserForm; readonly beam: BeamForm; readonly problems: readonly string[] }>;
+  /** Beams evaluated without a ticked viewing condition whose values are not all given yet. */
+  readonly partial: ReadonlyArray<{ readonly laser: LaserForm; readonly beam: BeamForm; readonly problems: readonly string[] }>;
 }
 
 export function roomInputFrom(d: Draft): DraftInput {
@@ -92,13 +94,21 @@ export function roomInputFrom(d: Draft): DraftInput {
       }
     }
   }
+  const partial: Array<{ laser: LaserForm; beam: BeamForm; problems: string[] }> = [];
+  for (const lf of d.lasers) {
+    for (const b of lf.beams) {
+      if (incomplete.some((x) => x.beam === b)) continue;
+      const gaps = sectionGaps(b);
+      if (gaps.length > 0) partial.push({ laser: lf, beam: b, problems: gaps.map((g) => g.problem) });
+    }
+  }
   const settings = Object.keys(d.settings).length > 0 ? { settings: d.settings } : {};
   // places name only beams still evaluated; an emptied place is dropped (its beams go back to their laser's path)
   const ids = new Set(lasers.flatMap((l) => l.beams.map((b) => b.id ?? '')));
   const places: ExposurePlace[] = (d.exposurePlaces ?? [])
     .map((p) => ({ place: p.place.trim() || 'unnamed place', beamIds: p.beamIds.filter((id) => ids.has(id)) }))
     .filter((p) => p.beamIds.length > 0);
-  return { input: { ruleSet: d.ruleSet, ...settings, lasers, eyewear: d.eyewear, ...(places.length > 0 ? { exposurePlaces: places } : {}) }, incomplete };
+  return { input: { ruleSet: d.ruleSet, ...settings, lasers, eyewear: d.eyewear, ...(places.length > 0 ? { exposurePlaces: places } : {}) }, incomplete, partial };
 }
 
 /**
@@ -150,8 +160,9 @@ export function contentFrom(d: Draft): AssessmentContent {
 
 /** Why the draft cannot be saved yet (empty = it can). */
 export function saveBlockers(d: Draft): string[] {
-  const { incomplete } = roomInputFrom(d);
-  const out = incomplete.map((x) => `${x.laser.name || 'Unnamed laser'} / ${x.beam.label || 'beam'}: ${x.problems.join('; ')}`);
+  const { incomplete, partial } = roomInputFrom(d);
+  // A ticked viewing condition left incomplete would be saved without it: say so before saving.
+  const out = [...incomplete, ...partial].map((x) => `${x.laser.name || 'Unnamed laser'} / ${x.beam.label || 'beam'}: ${x.problems.join('; ')}`);
   for (const c of d.controls) {
     if (c.decision !== 'accepted' && !(c.reason ?? '').trim()) out.push(`Control "${c.measure}": give the reason it is ${c.decision === 'rejected' ? 'rejected' : 'not applicable'}`);
   }

@@ -5,7 +5,7 @@
  *   EN 208:    "633 nm RB2"
  * Each entry is separated by ';' or a new line. Errors name the entry that could not be read.
  */
-import type { EyewearSpec } from '../../core/index.js';
+import { EN207_MODES, INPUT_RULES, SCALE_NUMBERS, inRange, type EyewearSpec } from '../../core/index.js';
 
 type Od = NonNullable<EyewearSpec['od']>[number];
 type En207 = NonNullable<EyewearSpec['en207']>[number];
@@ -28,8 +28,9 @@ function band(m: RegExpExecArray): { from_nm: number; to_nm: number } {
   return { from_nm: from, to_nm: to };
 }
 
+// Ranges, scale numbers and test letters come from the one table of input rules (core/model/input-rules.ts).
 function checkBand(b: { from_nm: number; to_nm: number }, entry: string): string | null {
-  if (b.from_nm < 180 || b.to_nm > 1e6) return `"${entry}": wavelengths must lie between 180 nm and 1 mm`;
+  if (!inRange(INPUT_RULES.wavelength_nm, b.from_nm) || !inRange(INPUT_RULES.wavelength_nm, b.to_nm)) return `"${entry}": wavelengths must lie between 180 nm and 1 mm`;
   if (b.from_nm > b.to_nm) return `"${entry}": the band must go from the shorter to the longer wavelength`;
   return null;
 }
@@ -43,7 +44,9 @@ export function parseOdBands(text: string): Parsed<Od> {
     const b = band(m);
     const err = checkBand(b, e);
     if (err) return { ok: false, error: err };
-    out.push({ ...b, od: Number((m[3] ?? '').replace(',', '.')) });
+    const od = Number((m[3] ?? '').replace(',', '.'));
+    if (!inRange(INPUT_RULES.opticalDensity, od)) return { ok: false, error: `"${e}": an optical density runs from 0 to ${INPUT_RULES.opticalDensity.max}` };
+    out.push({ ...b, od });
   }
   return { ok: true, value: out };
 }
@@ -58,8 +61,11 @@ export function parseEn207(text: string): Parsed<En207> {
     const err = checkBand(b, e);
     if (err) return { ok: false, error: err };
     const scale = Number(m[4]);
-    if (scale < 1 || scale > 10) return { ok: false, error: `"${e}": scale numbers run from LB1 to LB10` };
-    out.push({ ...b, modes: (m[3] ?? '').toUpperCase(), scale });
+    const s7 = SCALE_NUMBERS.en207;
+    if (scale < s7.min || scale > s7.max) return { ok: false, error: `"${e}": ${s7.standard} scale numbers run from LB${s7.min} to LB${s7.max}` };
+    const modes = (m[3] ?? '').toUpperCase();
+    if (!EN207_MODES.test(modes)) return { ok: false, error: `"${e}": test conditions are letters from D, I, R, M` };
+    out.push({ ...b, modes, scale });
   }
   return { ok: true, value: out };
 }
@@ -74,7 +80,8 @@ export function parseEn208(text: string): Parsed<En208> {
     const err = checkBand(b, e);
     if (err) return { ok: false, error: err };
     const scale = Number(m[3]);
-    if (scale < 1 || scale > 10) return { ok: false, error: `"${e}": scale numbers run from RB1 to RB10` };
+    const s8 = SCALE_NUMBERS.en208;
+    if (scale < s8.min || scale > s8.max) return { ok: false, error: `"${e}": ${s8.standard} scale numbers run from RB${s8.min} to RB${s8.max}` };
     out.push({ ...b, scale });
   }
   return { ok: true, value: out };

@@ -4,25 +4,47 @@
  * officer would type. A field that does not parse keeps its last good value (the evaluation does
  * not change) and shows the error beside the field.
  */
-import { InputError, SI_UNIT, angleText, formatSI, parseQuantity, type Dimension } from '../../core/index.js';
+import {
+  DIMENSION_WORDS,
+  INPUT_RULES,
+  InputError,
+  inRange,
+  parseQuantity,
+  plausibilityQuestion,
+  readBack,
+  type Dimension,
+  type NumberRule,
+  type ReadBackStyle,
+  type RuleName,
+} from '../../core/index.js';
 
 export interface FieldSpec {
   /** Field name used in error messages (and matched against core InputError fields). */
   readonly key: string;
+  /** The quantity in officer words ("Energy per pulse"), used in every message about it. */
   readonly label: string;
-  readonly dimension: Dimension;
-  /** Unit assumed for a bare number ("1064" in a wavelength field means nm). */
+  /**
+   * The unit a bare number is read in ("1064" in a wavelength field means nm). Only a field whose
+   * label states this unit has one (`unitNote`): elsewhere a bare number is refused, because an
+   * unseen default once turned "200" in an energy field into 200 J per pulse.
+   */
   readonly defaultUnit?: string;
+  /** Shown in the label after the quantity, stating what a bare number means: "(nm)". */
+  readonly unitNote?: string;
+  readonly dimension: Dimension;
   /** Unit used when writing a value back: 'nm', 'mm', 'mrad', '%' or an SI base for prefixes. */
-  readonly display: 'nm' | 'mm' | 'm' | 'mrad' | 'deg' | '%' | 'x' | 'prefix';
+  readonly display: ReadBackStyle;
   /** Empty text is allowed (the value is then undefined: a default applies or the option is off). */
   readonly optional?: boolean;
-  /** Plausible range in SI (checked here so the error appears at the field, not in the results). */
-  readonly min?: number;
-  readonly minInclusive?: boolean;
-  readonly max?: number;
+  /** Range and plausibility, from the one table of input rules (core/model/input-rules.ts). */
+  readonly rule: NumberRule;
+  /** The core stores this field as SI × storedPerSI (wavelengths in nm). */
+  readonly storedPerSI?: number;
+  /** Words after the read-back value: "= 200 J per pulse". */
+  readonly phrase?: string;
   /** Shown under the field. */
   readonly hint?: string;
+  /** Words, never a number that could be taken for a value ("e.g. 15 %", "single pulse"). */
   readonly placeholder?: string;
 }
 
@@ -38,14 +60,20 @@ export interface ParseOutcome {
   readonly error: string | null;
 }
 
+/** The full label as shown: quantity and, where a bare number is read in a unit, that unit. */
+export function fieldLabel(spec: FieldSpec): string {
+  return spec.unitNote ? `${spec.label} (${spec.unitNote})` : spec.label;
+}
+
 function rangeText(spec: FieldSpec): string {
-  // bounds read like the officer would say them: "up to π rad", not "0 mrad to 3141.59265359 mrad"
-  const f = (v: number): string => (spec.dimension === 'angle' ? angleText(v) : formatField(spec, v));
-  if (spec.min === 0 && spec.minInclusive && spec.max !== undefined) return `up to ${f(spec.max)}`;
-  if (spec.min !== undefined && spec.max !== undefined) return `${f(spec.min)} to ${f(spec.max)}`;
-  if (spec.min !== undefined) return `${spec.minInclusive ? 'at least' : 'more than'} ${f(spec.min)}`;
-  if (spec.max !== undefined) return `at most ${f(spec.max)}`;
-  return '';
+  const rule = spec.rule;
+  const per = spec.storedPerSI ?? 1;
+  const f = (v: number): string => formatField(spec, v / per);
+  const pi = (v: number): boolean => Math.abs(v - Math.PI) < 1e-12 || Math.abs(v - Math.PI / 2) < 1e-12;
+  if (rule.max !== undefined && !pi(rule.max)) {
+    return rule.minInclusive ? `${f(rule.min)} to ${f(rule.max)}` : `more than ${f(rule.min)}, at most ${f(rule.max)}`;
+  }
+  return rule.minInclusive ? `at least ${f(rule.min)}` : `more than ${f(rule.min)}`;
 }
 
 /** Read a field's text. Never throws: errors come back as a sentence naming what is expected. */
@@ -54,18 +82,35 @@ export function parseField(spec: FieldSpec, text: string): ParseOutcome {
   if (t === '') return spec.optional ? { value: undefined, error: null } : { value: undefined, error: `${spec.label} is required` };
   let v: number;
   try {
-    v = parseQuantity(spec.key, t, spec.dimension, spec.defaultUnit).value.toNumber();
+    v = parseQuantity(spec.key, t, spec.dimension, spec.defaultUnit, 'guard').value.toNumber();
   } catch (e) {
     if (e instanceof InputError) {
-      if (e.code === 'unknown_unit') return { value: undefined, error: `${spec.label}: "${t}" is not ${e.validRange}` };
+      const what = DIMENSION_WORDS[spec.dimension];
+      if (e.code === 'unknown_unit' && /^\s*[+-]?[\d.,]+(?:[eE][+-]?\d+)?\s*$/.test(t)) {
+        return { value: undefined, error: `${spec.label}: type the unit, e.g. ${spec.placeholder?.replace(/^e\.g\. /, '') ?? e.validRange}` };
+      }
+      if (e.code === 'unknown_unit') return { value: undefined, error: `${spec.label}: "${t}" is not ${what} unit` };
+      if (e.code === 'unparseable' && t.includes(',')) return { value: undefined, error: `${spec.label}: ${e.message.slice(e.message.indexOf(': ') + 2).replace(/ \(got .*$/, '')}` };
       return { value: undefined, error: `${spec.label}: cannot read "${t}"; type ${e.validRange}` };
     }
     return { value: undefined, error: `${spec.label}: cannot read "${t}"` };
   }
-  const lowOk = spec.min === undefined || (spec.minInclusive ? v >= spec.min : v > spec.min);
-  const highOk = spec.max === undefined || v <= spec.max;
-  if (!Number.isFinite(v) || !lowOk || !highOk) return { value: undefined, error: `${spec.label} must be ${rangeText(spec)}` };
+  const per = spec.storedPerSI ?? 1;
+  if (!Number.isFinite(v) || !inRange(spec.rule, Number((v * per).toPrecision(15)))) {
+    const why = spec.rule.why ? ` (${spec.rule.why})` : '';
+    return { value: undefined, error: `${spec.label} must be ${rangeText(spec)}${why}` };
+  }
   return { value: v, error: null };
+}
+
+/** How a good value was read, in full: "= 200 J per pulse". */
+export function fieldEcho(spec: FieldSpec, v: number): string {
+  return `= ${formatField(spec, v)}${spec.phrase ? ` ${spec.phrase}` : ''}`;
+}
+
+/** "Is this right? …" for an allowed but unusual value; null otherwise. */
+export function fieldQuestion(spec: FieldSpec, v: number): string | null {
+  return plausibilityQuestion(spec.rule, v * (spec.storedPerSI ?? 1));
 }
 
 /** Update a field from typed text: a bad text keeps the last good value. */
@@ -76,33 +121,9 @@ export function applyText(spec: FieldSpec, field: FieldState, text: string): voi
   if (r.error === null) field.value = r.value;
 }
 
-/** Round-trip-safe number text (no rounding of inputs: they are the officer's own numbers). */
-function num(v: number): string {
-  const s = String(Number(v.toPrecision(12)));
-  return s.includes('e') ? s.replace('e+', 'e') : s;
-}
-
 /** Write an SI value in the unit an officer would type for this field. */
 export function formatField(spec: FieldSpec, v: number): string {
-  switch (spec.display) {
-    case 'nm':
-      return v >= 1e-5 ? `${num(v * 1e6)} µm` : `${num(v * 1e9)} nm`;
-    case 'mm':
-      return `${num(v * 1e3)} mm`;
-    case 'm':
-      return `${num(v)} m`;
-    case 'mrad':
-      return `${num(v * 1e3)} mrad`;
-    case 'deg':
-      return `${num((v * 180) / Math.PI)} deg`;
-    case '%':
-      return `${num(v * 100)} %`;
-    case 'x':
-      return num(v);
-    case 'prefix':
-      // formatSI with 12 significant digits only picks the prefix; it does not round an input.
-      return formatSI(String(v), SI_UNIT[spec.dimension], 12, 'up', false);
-  }
+  return readBack(v, spec.dimension, spec.display);
 }
 
 export function fieldFrom(spec: FieldSpec, v: number | undefined): FieldState {
@@ -116,42 +137,44 @@ export function wavelengthNm(field: FieldState): number | undefined {
 
 // ------------------------------------------------------------------ the fields of a beam
 
-const s = (x: FieldSpec): FieldSpec => x;
+const R = INPUT_RULES;
+const s = (rule: RuleName, x: Omit<FieldSpec, 'rule' | 'label'> & { label?: string }): FieldSpec => ({ ...x, label: x.label ?? R[rule].label, rule: R[rule] });
 
+// Placeholders are words or "e.g. …": an empty field must never look as if it held a value.
 export const F = {
-  wavelength: s({ key: 'wavelength_nm', label: 'Wavelength', dimension: 'wavelength', defaultUnit: 'nm', display: 'nm', min: 180e-9, max: 1e-3, minInclusive: true, placeholder: '1064 nm' }),
-  power: s({ key: 'power_W', label: 'Power', dimension: 'power', defaultUnit: 'W', display: 'prefix', min: 0, placeholder: '5 mW' }),
-  energy: s({ key: 'pulseEnergy_J', label: 'Energy per pulse', dimension: 'energy', defaultUnit: 'J', display: 'prefix', min: 0, placeholder: '2 mJ' }),
-  pulseDuration: s({ key: 'pulseDuration_s', label: 'Pulse duration', dimension: 'time', defaultUnit: 's', display: 'prefix', min: 0, placeholder: '10 ns' }),
-  repetitionRate: s({ key: 'repetitionRate_Hz', label: 'Repetition rate', dimension: 'frequency', defaultUnit: 'Hz', display: 'prefix', min: 0, optional: true, placeholder: 'single pulse', hint: 'empty = a single pulse' }),
-  diameter: s({ key: 'diameter_m', label: 'Beam diameter', dimension: 'length', defaultUnit: 'mm', display: 'mm', min: 0, placeholder: '2 mm' }),
-  divergence: s({ key: 'divergence_rad', label: 'Divergence (full angle)', dimension: 'angle', defaultUnit: 'mrad', display: 'mrad', min: 0, minInclusive: true, max: Math.PI, placeholder: '1 mrad' }),
-  diameterY: s({ key: 'diameterY_m', label: 'Diameter, second axis', dimension: 'length', defaultUnit: 'mm', display: 'mm', min: 0, optional: true, placeholder: 'round beam' }),
-  divergenceY: s({ key: 'divergenceY_rad', label: 'Divergence, second axis', dimension: 'angle', defaultUnit: 'mrad', display: 'mrad', min: 0, minInclusive: true, max: Math.PI, optional: true, placeholder: 'same' }),
-  exposureDuration: s({ key: 'exposureDuration_s', label: 'Exposure duration', dimension: 'time', defaultUnit: 's', display: 'prefix', min: 1e-13, max: 3e4, minInclusive: true, optional: true, placeholder: 'default' }),
-  sourceAngle: s({ key: 'sourceAngle_rad', label: 'Apparent source (angular subtense)', dimension: 'angle', defaultUnit: 'mrad', display: 'mrad', min: 0, minInclusive: true, optional: true, placeholder: 'point source', hint: 'empty = point source (the safe assumption)' }),
-  closestApproach: s({ key: 'closestApproach_m', label: 'Closest approach to the aperture', dimension: 'length', defaultUnit: 'm', display: 'm', min: 0, minInclusive: true, optional: true, placeholder: '0 m' }),
-  attenuation: s({ key: 'attenuation_per_m', label: 'Atmospheric attenuation (1/m)', dimension: 'ratio', display: 'x', min: 0, minInclusive: true, optional: true, placeholder: 'none', hint: 'long outdoor paths only' }),
+  wavelength: s('wavelength_nm', { key: 'wavelength_nm', dimension: 'wavelength', defaultUnit: 'nm', unitNote: 'nm', display: 'nm', storedPerSI: 1e9, placeholder: 'e.g. 1064 nm' }),
+  power: s('power_W', { key: 'power_W', dimension: 'power', display: 'prefix', phrase: 'output power', placeholder: 'e.g. 5 mW' }),
+  energy: s('pulseEnergy_J', { key: 'pulseEnergy_J', dimension: 'energy', display: 'prefix', phrase: 'per pulse', placeholder: 'e.g. 2 mJ' }),
+  pulseDuration: s('pulseDuration_s', { key: 'pulseDuration_s', dimension: 'time', display: 'prefix', phrase: 'per pulse', placeholder: 'e.g. 10 ns' }),
+  repetitionRate: s('repetitionRate_Hz', { key: 'repetitionRate_Hz', dimension: 'frequency', defaultUnit: 'Hz', unitNote: 'Hz', display: 'prefix', phrase: 'pulses per second', optional: true, placeholder: 'single pulse', hint: 'empty = a single pulse' }),
+  diameter: s('diameter_m', { key: 'diameter_m', dimension: 'length', defaultUnit: 'mm', unitNote: 'mm', display: 'mm', phrase: 'at the exit', placeholder: 'e.g. 2 mm' }),
+  divergence: s('divergence_rad', { key: 'divergence_rad', label: 'Divergence, full angle', dimension: 'angle', defaultUnit: 'mrad', unitNote: 'mrad', display: 'mrad', phrase: 'full angle', placeholder: 'e.g. 1 mrad' }),
+  diameterY: s('diameterY_m', { key: 'diameterY_m', dimension: 'length', defaultUnit: 'mm', unitNote: 'mm', display: 'mm', optional: true, placeholder: 'round beam' }),
+  divergenceY: s('divergenceY_rad', { key: 'divergenceY_rad', dimension: 'angle', defaultUnit: 'mrad', unitNote: 'mrad', display: 'mrad', phrase: 'full angle', optional: true, placeholder: 'same as the first axis' }),
+  exposureDuration: s('exposureDuration_s', { key: 'exposureDuration_s', dimension: 'time', defaultUnit: 's', unitNote: 's', display: 'prefix', optional: true, placeholder: 'default for the band' }),
+  sourceAngle: s('sourceAngle_rad', { key: 'sourceAngle_rad', dimension: 'angle', defaultUnit: 'mrad', unitNote: 'mrad', display: 'mrad', optional: true, placeholder: 'point source', hint: 'empty = point source (the safe assumption)' }),
+  closestApproach: s('closestApproach_m', { key: 'closestApproach_m', dimension: 'length', defaultUnit: 'm', unitNote: 'm', display: 'm', optional: true, placeholder: 'at the aperture' }),
+  attenuation: s('attenuation_per_m', { key: 'attenuation_per_m', label: 'Atmospheric attenuation', unitNote: 'per metre', dimension: 'ratio', display: 'x', optional: true, placeholder: 'none', hint: 'long outdoor paths only' }),
   // viewing conditions
-  diffuseReflectance: s({ key: 'reflectance', label: 'Diffuse reflectance', dimension: 'ratio', display: '%', min: 0, max: 1, placeholder: '15 %' }),
-  diffuseAngle: s({ key: 'viewingAngle_rad', label: 'Viewing angle from the normal', dimension: 'angle', defaultUnit: 'deg', display: 'deg', min: 0, minInclusive: true, max: Math.PI / 2, optional: true, placeholder: '0 (worst case)' }),
-  diffuseTarget: s({ key: 'targetDistance_m', label: 'Laser to surface', dimension: 'length', defaultUnit: 'm', display: 'm', min: 0, minInclusive: true, optional: true, placeholder: 'at the aperture' }),
-  diffuseViewer: s({ key: 'viewerDistance_m', label: 'Surface to viewer', dimension: 'length', defaultUnit: 'm', display: 'm', min: 0, minInclusive: true, optional: true, placeholder: 'none' }),
-  specularReflectance: s({ key: 'reflectance', label: 'Specular reflectance', dimension: 'ratio', display: '%', min: 0, max: 1, placeholder: '100 %' }),
-  specularPath: s({ key: 'pathToSurface_m', label: 'Laser to mirror', dimension: 'length', defaultUnit: 'm', display: 'm', min: 0, minInclusive: true, optional: true, placeholder: '0 m' }),
-  lensFocal: s({ key: 'focalLength_m', label: 'Focal length', dimension: 'length', defaultUnit: 'mm', display: 'mm', min: 0, placeholder: '300 mm' }),
-  lensBeam: s({ key: 'beamDiameterAtLens_m', label: 'Beam diameter at the lens', dimension: 'length', defaultUnit: 'mm', display: 'mm', min: 0, optional: true, placeholder: 'as at exit' }),
-  fiberNa: s({ key: 'numericalAperture', label: 'Numerical aperture', dimension: 'ratio', display: 'x', min: 0, max: 1, placeholder: '0.14' }),
-  fiberMfd: s({ key: 'modeFieldDiameter_m', label: 'Mode-field / core diameter', dimension: 'length', defaultUnit: 'µm', display: 'mm', min: 0, optional: true, placeholder: '10 µm' }),
-  aidedMagnification: s({ key: 'magnification', label: 'Magnification', dimension: 'ratio', display: 'x', min: 1, minInclusive: true, placeholder: '7' }),
-  aidedObjective: s({ key: 'objectiveDiameter_m', label: 'Objective diameter', dimension: 'length', defaultUnit: 'mm', display: 'mm', min: 0, placeholder: '50 mm' }),
-  aidedTransmission: s({ key: 'transmission', label: 'Optics transmission', dimension: 'ratio', display: '%', min: 0, max: 1, optional: true, placeholder: '100 %' }),
+  diffuseReflectance: s('diffuseReflectance', { key: 'reflectance', unitNote: '% or fraction', dimension: 'ratio', display: '%', placeholder: 'e.g. 15 %' }),
+  diffuseAngle: s('viewingAngle_rad', { key: 'viewingAngle_rad', dimension: 'angle', defaultUnit: 'deg', unitNote: 'deg', display: 'deg', optional: true, placeholder: 'worst case' }),
+  diffuseTarget: s('targetDistance_m', { key: 'targetDistance_m', dimension: 'length', defaultUnit: 'm', unitNote: 'm', display: 'm', optional: true, placeholder: 'at aperture' }),
+  diffuseViewer: s('viewerDistance_m', { key: 'viewerDistance_m', dimension: 'length', defaultUnit: 'm', unitNote: 'm', display: 'm', optional: true, placeholder: 'none' }),
+  specularReflectance: s('specularReflectance', { key: 'reflectance', unitNote: '% or fraction', dimension: 'ratio', display: '%', placeholder: 'e.g. 100 %' }),
+  specularPath: s('pathToSurface_m', { key: 'pathToSurface_m', dimension: 'length', defaultUnit: 'm', unitNote: 'm', display: 'm', optional: true, placeholder: 'at the aperture' }),
+  lensFocal: s('focalLength_m', { key: 'focalLength_m', dimension: 'length', defaultUnit: 'mm', unitNote: 'mm', display: 'mm', placeholder: 'e.g. 300 mm' }),
+  lensBeam: s('beamDiameterAtLens_m', { key: 'beamDiameterAtLens_m', dimension: 'length', defaultUnit: 'mm', unitNote: 'mm', display: 'mm', optional: true, placeholder: 'as at the exit' }),
+  fiberNa: s('numericalAperture', { key: 'numericalAperture', dimension: 'ratio', display: 'x', placeholder: 'e.g. 0.14' }),
+  fiberMfd: s('modeFieldDiameter_m', { key: 'modeFieldDiameter_m', dimension: 'length', defaultUnit: 'µm', unitNote: 'µm', display: 'mm', optional: true, placeholder: 'e.g. 10 µm' }),
+  aidedMagnification: s('magnification', { key: 'magnification', unitNote: '×', dimension: 'ratio', display: 'x', placeholder: 'e.g. 7' }),
+  aidedObjective: s('objectiveDiameter_m', { key: 'objectiveDiameter_m', dimension: 'length', defaultUnit: 'mm', unitNote: 'mm', display: 'mm', placeholder: 'e.g. 50 mm' }),
+  aidedTransmission: s('transmission', { key: 'transmission', unitNote: '% or fraction', dimension: 'ratio', display: '%', optional: true, placeholder: 'full (100 %)' }),
   // tolerances (relative, 0.1 = ±10 %)
-  tolPower: s({ key: 'tolerances.power', label: 'Power / energy tolerance', dimension: 'ratio', display: '%', min: 0, minInclusive: true, max: 0.99, optional: true, placeholder: '±0 %' }),
-  tolDiameter: s({ key: 'tolerances.diameter', label: 'Diameter tolerance', dimension: 'ratio', display: '%', min: 0, minInclusive: true, max: 0.99, optional: true, placeholder: '±0 %' }),
-  tolDivergence: s({ key: 'tolerances.divergence', label: 'Divergence tolerance', dimension: 'ratio', display: '%', min: 0, minInclusive: true, max: 0.99, optional: true, placeholder: '±0 %' }),
-  tolPulseDuration: s({ key: 'tolerances.pulseDuration', label: 'Pulse duration tolerance', dimension: 'ratio', display: '%', min: 0, minInclusive: true, max: 0.99, optional: true, placeholder: '±0 %' }),
-  tolRepetitionRate: s({ key: 'tolerances.repetitionRate', label: 'Repetition rate tolerance', dimension: 'ratio', display: '%', min: 0, minInclusive: true, max: 0.99, optional: true, placeholder: '±0 %' }),
+  tolPower: s('tolerance', { key: 'tolerances.power', label: 'Power / energy tolerance', unitNote: '±%', dimension: 'ratio', display: '%', optional: true, placeholder: 'none' }),
+  tolDiameter: s('tolerance', { key: 'tolerances.diameter', label: 'Diameter tolerance', unitNote: '±%', dimension: 'ratio', display: '%', optional: true, placeholder: 'none' }),
+  tolDivergence: s('tolerance', { key: 'tolerances.divergence', label: 'Divergence tolerance', unitNote: '±%', dimension: 'ratio', display: '%', optional: true, placeholder: 'none' }),
+  tolPulseDuration: s('tolerance', { key: 'tolerances.pulseDuration', label: 'Pulse duration tolerance', unitNote: '±%', dimension: 'ratio', display: '%', optional: true, placeholder: 'none' }),
+  tolRepetitionRate: s('tolerance', { key: 'tolerances.repetitionRate', label: 'Repetition rate tolerance', unitNote: '±%', dimension: 'ratio', display: '%', optional: true, placeholder: 'none' }),
 } as const;
 
 export type FieldKey = keyof typeof F;

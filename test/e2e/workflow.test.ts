@@ -100,19 +100,19 @@ describe('an officer assesses a new room', () => {
   it('adds a pulsed and a CW laser and sees the NOHD and OD the core computes', async () => {
     await page.getByRole('button', { name: '+ Pulsed laser' }).click();
     await page.getByRole('textbox', { name: /^Laser 1/ }).fill(PULSED.name);
-    await fill('Wavelength', PULSED.wavelength);
+    await fill('Wavelength (nm)', PULSED.wavelength);
     await fill('Energy per pulse', PULSED.energy);
     await fill('Pulse duration', PULSED.tau);
-    await fill('Repetition rate', PULSED.prf);
-    await fill('Beam diameter', PULSED.d);
-    await fill('Divergence (full angle)', PULSED.div);
+    await fill('Repetition rate (Hz)', PULSED.prf);
+    await fill('Beam diameter (mm)', PULSED.d);
+    await fill('Divergence, full angle (mrad)', PULSED.div);
 
     await page.getByRole('button', { name: '+ CW laser' }).click();
     await page.getByRole('textbox', { name: /^Laser 2/ }).fill(CW.name);
-    await fill('Wavelength', CW.wavelength);
+    await fill('Wavelength (nm)', CW.wavelength);
     await fill('Power', CW.power);
-    await fill('Beam diameter', CW.d);
-    await fill('Divergence (full angle)', CW.div);
+    await fill('Beam diameter (mm)', CW.d);
+    await fill('Divergence, full angle (mrad)', CW.div);
 
     const core = evaluateRoom(coreInput(0.05));
     const [p, c] = core.beams;
@@ -249,7 +249,7 @@ describe('the loopback host refuses what it must', () => {
     const body = (await res.json()) as { ok: boolean; error: { code: string; message: string } };
     expect(res.status).toBe(400);
     expect(body.error.code).toBe('invalid_input');
-    expect(body.error.message).toMatch(/code: must not be empty/);
+    expect(body.error.message).toMatch(/Code: must not be empty/);
     const again = await fetch(`${host.origin}/api/app-info`, { method: 'POST', headers: { 'content-type': 'application/json', 'x-beamwarden-token': host.token }, body: '{}' });
     expect(again.status).toBe(200);
   });

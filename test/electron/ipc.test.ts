@@ -72,7 +72,7 @@ describe('IPC', () => {
 
   it.each([
     ['an unknown operation', 'drop-tables', {}, 'unknown_operation', /unknown operation "drop-tables"/],
-    ['a missing field', 'room-create', { siteId: 'x' }, 'invalid_input', /code/],
+    ['a missing field', 'room-create', { siteId: 'x' }, 'invalid_input', /Code/],
     ['an unknown field', 'site-create', { name: 'A', colour: 'red' }, 'invalid_input', /unknown field|colour/],
     ['a record that does not exist', 'room-get', { id: 'nope' }, 'not_found', /nope|not found/i],
   ])('answers %s with a clear error, not a crash', async (_name, op, args, code, message) => {

@@ -60,7 +60,7 @@ describe('QuantityField: bad input shows its error and changes nothing', () => {
     const alert = screen.getByRole('alert');
     expect(alert.textContent).toMatch(message);
     expect(input().getAttribute('aria-invalid')).toBe('true');
-    expect(input().getAttribute('aria-describedby')).toBe(alert.id);
+    expect(document.getElementById(input().getAttribute('aria-describedby') ?? '')?.contains(alert)).toBe(true);
     // the last good value is kept: the evaluation does not move
     expect(Number(screen.getByTestId('value').textContent)).toBe(initial);
   });

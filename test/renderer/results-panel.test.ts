@@ -94,13 +94,15 @@ describe('ResultsPanel shows the core values', () => {
     expect(screen.getByTestId('mpe').textContent).toMatch(/^2\.5\d mW\/cm²$/);
   });
 
-  it('lists beams left out with what to fix, and shows a core refusal as an error', () => {
+  it('lists beams left out with what to fix, and a core refusal in officer words beside them', () => {
     const bad = evaluateDraftInput(room({ id: 'x', wavelength_nm: 100, emission: { kind: 'cw', power_W: 1 }, beam: { diameter_m: 0.001, divergence_rad: 0.001, definition: '1/e' } }, 'Too short'));
     render(ResultsPanel, {
       props: { evaluation: bad, lasers: [], habit: 'SI', incomplete: [{ name: 'Laser 2 / beam 1', problems: ['Power is required'] }] },
     });
-    expect(screen.getByRole('status').textContent).toContain('Laser 2 / beam 1: Power is required');
-    expect(bad.ok).toBe(false);
-    expect(screen.getByRole('alert').textContent).toMatch(/wavelength/i);
+    const box = screen.getByTestId('not-evaluated').textContent ?? '';
+    expect(box).toContain('Laser 2 / beam 1: Power is required');
+    // ICNIRP 2013 / EU 2006 limit tables start at 180 nm (limit specification, section 0)
+    expect(box).toContain('Too short / beam 1: Wavelength must be from 180 nm to 1000000 nm (the limit tables cover 180 nm to 1 mm) (got 100)');
+    expect(screen.queryByRole('alert')).toBeNull();
   });
 });

@@ -8,6 +8,8 @@
  */
 import { brotliCompressSync, brotliDecompressSync, constants as zlibConstants } from 'node:zlib';
 import type { RoomInput } from '../../../core/model/inputs.js';
+import type { InputError } from '../../../core/errors.js';
+import { officerWords, placeInRoom } from '../../../core/model/input-words.js';
 import type { RoomResult } from '../../../core/model/results.js';
 import { AssessmentContentSchema, SignOffSchema } from '../schemas/records.js';
 import { RoomResultSchema } from '../schemas/results.js';
@@ -280,10 +282,12 @@ function evaluate(ctx: StoreContext, input: RoomInput): RoomResult {
   try {
     return ctx.evaluate(input);
   } catch (e) {
+    // By name: the core may be loaded as another module instance (worker or bundle).
     if (e instanceof Error && e.name === 'InputError') {
-      const field = (e as Error & { field?: unknown }).field;
-      const path = `input.${typeof field === 'string' ? field : '?'}`;
-      throw new RecordError('invalid', `The calculation refused the input: ${e.message}`, [{ path, problem: e.message }]);
+      const ie = e as InputError;
+      // In officer words: which laser, beam or eyewear, which quantity, what it must be (never the path).
+      const problem = `${placeInRoom(input, ie.field)}: ${officerWords(ie)}`;
+      throw new RecordError('invalid', `The calculation refused the input. ${problem}`, [{ path: `input.${ie.field}`, problem }]);
     }
     throw e;
   }

@@ -2,6 +2,7 @@
 import { randomUUID } from 'node:crypto';
 import type { z } from 'zod';
 import { formatZodIssues } from '../schemas/issues.js';
+import { officerPath } from '../../../core/model/input-words.js';
 import type { Evaluate } from './core-link.js';
 import type { Statement } from 'better-sqlite3';
 import type { Db } from './database.js';
@@ -63,7 +64,8 @@ export function parseOrThrow<S extends z.ZodType>(schema: S, value: unknown, wha
   const r = schema.safeParse(value);
   if (r.success) return r.data;
   const issues = formatZodIssues(r.error);
-  const shown = issues.slice(0, 10).map((i) => `${i.path}: ${i.problem}`).join('; ');
+  // Shown in officer words ("Laser 1, beam 1, wavelength"); the paths stay in `issues` for tools.
+  const shown = issues.slice(0, 10).map((i) => `${officerPath(i.path)}: ${i.problem}`).join('; ');
   throw new RecordError('invalid', `${what} is not valid: ${shown}${issues.length > 10 ? ` (and ${issues.length - 10} more)` : ''}`, issues);
 }
 

@@ -9,8 +9,9 @@
  * Otherwise all lasers are added in one transaction.
  */
 import type { BeamInput, LaserInput } from '../../../core/model/inputs.js';
-import { parseQuantity, type Dimension } from '../../../core/units/quantities.js';
+import { TEXT_RULES, textProblem, type TextRule } from '../../../core/model/input-rules.js';
 import { BeamInputSchema, LaserClassSchema } from '../schemas/inputs.js';
+import { QUANTITY_COLUMNS, readQuantityCell } from './csv-cells.js';
 import { translateSqliteError, type StoreContext } from './context.js';
 import { getRoom, insertInstallation } from './register.js';
 import { RecordError, type CsvExistingChoice, type CsvImportReport, type Id, type LaserInstallation } from './types.js';
@@ -23,9 +24,13 @@ export function parseCsv(text: string, delimiter: ',' | ';'): string[][] {
   let row: string[] = [];
   let cell = '';
   let quoted = false;
+  // Where the open quote started, as a spreadsheet shows it (row from 1, column from 1).
+  let line = 1;
+  let openedAt = { row: 1, column: 1 };
   let i = text.charCodeAt(0) === 0xfeff ? 1 : 0;
   for (; i < text.length; i++) {
     const ch = text[i];
+    if (ch === '\n' || (ch === '\r' && text[i + 1] !== '\n')) line++;
     if (quoted) {
       if (ch === '"') {
         if (text[i + 1] === '"') {
@@ -33,7 +38,10 @@ export function parseCsv(text: string, delimiter: ',' | ';'): string[][] {
           i++;
         } else quoted = false;
       } else cell += ch;
-    } else if (ch === '"' && cell === '') quoted = true;
+    } else if (ch === '"' && cell === '') {
+      quoted = true;
+      openedAt = { row: records.length + 1, column: row.length + 1 };
+    }
     else if (ch === delimiter) {
       row.push(cell);
       cell = '';
@@ -45,7 +53,11 @@ export function parseCsv(text: string, delimiter: ',' | ';'): string[][] {
       cell = '';
     } else cell += ch;
   }
-  if (quoted) throw new RecordError('invalid', 'CSV: a quoted cell is not closed (missing ")');
+  void line;
+  if (quoted) {
+    const problem = 'a quoted cell is not closed (missing ")';
+    throw new RecordError('invalid', `CSV row ${openedAt.row}, column ${openedAt.column}: ${problem}`, [{ path: `row ${openedAt.row}, column ${openedAt.column}`, problem }]);
+  }
   if (cell !== '' || row.length > 0) {
     row.push(cell);
     records.push(row);
@@ -62,21 +74,6 @@ function detectDelimiter(headerLine: string): ',' | ';' {
 
 // ---------------------------------------------------------------- columns
 
-interface QuantityColumn {
-  readonly dim: Dimension;
-  readonly unit: string;
-}
-/** Quantity columns and the unit a bare number is read in (what datasheets usually print). */
-export const QUANTITY_COLUMNS: Readonly<Record<string, QuantityColumn>> = {
-  wavelength: { dim: 'wavelength', unit: 'nm' },
-  power: { dim: 'power', unit: 'W' },
-  pulse_energy: { dim: 'energy', unit: 'J' },
-  pulse_duration: { dim: 'time', unit: 's' },
-  repetition_rate: { dim: 'frequency', unit: 'Hz' },
-  beam_diameter: { dim: 'length', unit: 'mm' },
-  divergence: { dim: 'angle', unit: 'mrad' },
-  exposure_duration: { dim: 'time', unit: 's' },
-};
 const TEXT_COLUMNS = [
   'laser',
   'laser_type',
@@ -97,6 +94,21 @@ const REQUIRED = ['laser', 'wavelength', 'emission', 'beam_diameter', 'divergenc
 /** Columns describing the laser, not the beam: rows of one laser must agree on them. */
 const LASER_LEVEL = ['laser_type', 'maker', 'model', 'serial_number', 'registration_number', 'class', 'status', 'laser_notes'] as const;
 
+export { QUANTITY_COLUMNS };
+
+/** Length limits of the text columns: the register's own (schemas/records.ts), so nothing imported is refused later. */
+const TEXT_LIMITS: Readonly<Partial<Record<(typeof TEXT_COLUMNS)[number], TextRule>>> = {
+  laser: TEXT_RULES.laserName,
+  laser_type: { label: 'Laser type', required: false, max: 200 },
+  maker: { label: 'Maker', required: false, max: 200 },
+  model: { label: 'Model', required: false, max: 200 },
+  serial_number: { label: 'Serial number', required: false, max: 200 },
+  registration_number: { label: 'Registration number', required: false, max: 200 },
+  laser_notes: { label: 'Notes', required: false, max: 10_000 },
+  beam_id: TEXT_RULES.beamId,
+  beam_label: TEXT_RULES.beamLabel,
+};
+
 /** Where a BeamInput schema problem is shown: the CSV column it came from. */
 const COLUMN_OF_PATH: Readonly<Record<string, string>> = {
   wavelength_nm: 'wavelength',
@@ -113,6 +125,7 @@ const COLUMN_OF_PATH: Readonly<Record<string, string>> = {
 };
 
 type CsvError = { row: number; column: string; problem: string };
+type CsvReading = { row: number; column: string; text: string; readAs: string; question: string | null };
 
 const MAX_ROWS = 10_000;
 
@@ -126,24 +139,37 @@ interface LaserGroup {
 export function importLaserCsv(ctx: StoreContext, roomId: Id, csvText: string, existing: CsvExistingChoice = 'ask'): CsvImportReport {
   getRoom(ctx, roomId);
   const firstLine = csvText.replace(/^\uFEFF/, '').split(/\r?\n/, 1)[0] ?? '';
-  const records = parseCsv(csvText, detectDelimiter(firstLine)).filter((r) => r.some((c) => c.trim() !== ''));
+  const delimiter = detectDelimiter(firstLine);
+  let parsed: string[][];
+  try {
+    parsed = parseCsv(csvText, delimiter);
+  } catch (e) {
+    if (!(e instanceof RecordError)) throw e;
+    const m = /row (\d+), column (\d+): (.*)$/.exec(e.message);
+    return { imported: 0, errors: [{ row: Number(m?.[1] ?? 1), column: `(column ${m?.[2] ?? 1})`, problem: m?.[3] ?? e.message }], installationIds: [] };
+  }
+  // Blank lines are skipped but keep their place: every row number is the one the spreadsheet shows.
+  const numbered = parsed.map((cells, i) => ({ cells, row: i + 1 })).filter((r) => r.cells.some((c) => c.trim() !== ''));
+  const records = numbered.map((r) => r.cells);
+  const headerRow = numbered[0]?.row ?? 1;
   const errors: CsvError[] = [];
+  const readings: CsvReading[] = [];
   const header = (records[0] ?? []).map((h) => h.trim().toLowerCase());
   if (header.length === 0) return { imported: 0, errors: [{ row: 1, column: '(header)', problem: 'the file is empty: a header row is needed' }], installationIds: [] };
   if (records.length - 1 > MAX_ROWS) {
     return { imported: 0, errors: [{ row: MAX_ROWS + 2, column: '(file)', problem: `more than ${MAX_ROWS} rows; split the file` }], installationIds: [] };
   }
   header.forEach((h, i) => {
-    if (!CSV_COLUMNS.includes(h)) errors.push({ row: 1, column: h || `(column ${i + 1})`, problem: `unknown column; known columns: ${CSV_COLUMNS.join(', ')}` });
-    if (header.indexOf(h) !== i) errors.push({ row: 1, column: h, problem: 'column appears twice' });
+    if (!CSV_COLUMNS.includes(h)) errors.push({ row: headerRow, column: h || `(column ${i + 1})`, problem: `unknown column; known columns: ${CSV_COLUMNS.join(', ')}` });
+    if (header.indexOf(h) !== i) errors.push({ row: headerRow, column: h, problem: 'column appears twice' });
   });
-  for (const req of REQUIRED) if (!header.includes(req)) errors.push({ row: 1, column: req, problem: 'required column is missing' });
+  for (const req of REQUIRED) if (!header.includes(req)) errors.push({ row: headerRow, column: req, problem: 'required column is missing' });
   if (errors.length) return { imported: 0, errors, installationIds: [] };
-  if (records.length < 2) return { imported: 0, errors: [{ row: 2, column: '(file)', problem: 'no data rows after the header' }], installationIds: [] };
+  if (records.length < 2) return { imported: 0, errors: [{ row: headerRow + 1, column: '(file)', problem: 'no data rows after the header' }], installationIds: [] };
 
   const groups = new Map<string, LaserGroup>();
   records.slice(1).forEach((cells, idx) => {
-    const row = idx + 2;
+    const row = numbered[idx + 1]?.row ?? idx + 2;
     const cell = (col: string): string => {
       const i = header.indexOf(col);
       return i < 0 ? '' : (cells[i] ?? '').trim();
@@ -152,19 +178,23 @@ export function importLaserCsv(ctx: StoreContext, roomId: Id, csvText: string, e
     const rowErrors: CsvError[] = [];
     for (const req of REQUIRED) if (cell(req) === '') rowErrors.push({ row, column: req, problem: 'required, but empty' });
 
-    const q = (col: keyof typeof QUANTITY_COLUMNS): number | undefined => {
+    for (const [col, rule] of Object.entries(TEXT_LIMITS)) {
+      const text = cell(col);
+      if (text === '') continue; // required columns are reported as empty above
+      const problem = textProblem(rule, text);
+      if (problem) rowErrors.push({ row, column: col, problem });
+    }
+
+    const q = (col: string): number | undefined => {
       const text = cell(col);
       if (text === '') return undefined;
-      const spec = QUANTITY_COLUMNS[col];
-      if (!spec) return undefined;
-      try {
-        const si = parseQuantity(col, text, spec.dim, spec.unit).value;
-        // The parser gives metres; wavelengths are carried in nm (decimal arithmetic, so 1064 stays 1064).
-        return Number((spec.dim === 'wavelength' ? si.mul(1e9) : si).toString());
-      } catch {
-        rowErrors.push({ row, column: col, problem: `"${text}" is not a ${spec.dim} (e.g. "${exampleFor(col)}"; a bare number is read in ${spec.unit})` });
+      const r = readQuantityCell(col, text, delimiter);
+      if (!r.ok) {
+        rowErrors.push({ row, column: col, problem: r.problem });
         return undefined;
       }
+      readings.push({ row, column: col, text, readAs: r.readAs, question: r.question });
+      return r.stored;
     };
     const wavelength_nm = q('wavelength');
     const emissionKind = cell('emission').toLowerCase();
@@ -206,7 +236,8 @@ export function importLaserCsv(ctx: StoreContext, roomId: Id, csvText: string, e
       if (!parsed.success) {
         for (const issue of parsed.error.issues) {
           const path = issue.path.map(String).join('.');
-          rowErrors.push({ row, column: COLUMN_OF_PATH[path] ?? path, problem: issue.message });
+          // Never a developer path on screen: a problem no column explains is shown for the row.
+          rowErrors.push({ row, column: COLUMN_OF_PATH[path] ?? '(row)', problem: issue.message });
         }
       } else {
         const name = cell('laser');
@@ -256,10 +287,10 @@ export function importLaserCsv(ctx: StoreContext, roomId: Id, csvText: string, e
   const presentRows = present.map(({ group: _g, ...p }) => p);
   if (errors.length) {
     errors.sort((a, b) => a.row - b.row);
-    return { imported: 0, errors, installationIds: [] };
+    return { imported: 0, errors, installationIds: [], readings };
   }
   if (existing === 'ask' && present.length > 0) {
-    return { imported: 0, errors: [], installationIds: [], alreadyInRoom: presentRows, decisionNeeded: true };
+    return { imported: 0, errors: [], installationIds: [], alreadyInRoom: presentRows, decisionNeeded: true, readings };
   }
 
   const now = ctx.now();
@@ -304,6 +335,7 @@ export function importLaserCsv(ctx: StoreContext, roomId: Id, csvText: string, e
     installationIds: installations.map((i) => i.id),
     alreadyInRoom: presentRows,
     skipped: leaveOut.size,
+    readings,
   };
 }
 
@@ -334,25 +366,4 @@ function alreadyInRoom(
 function normaliseDefinition(text: string): string {
   const t = text.replace(/\s+/g, '').replace('²', '2').replace('^2', '2').toLowerCase();
   return t === '1/e' || t === '1/e2' || t === 'd63' ? t : text;
-}
-
-function exampleFor(col: string): string {
-  switch (col) {
-    case 'wavelength':
-      return '1064 nm';
-    case 'power':
-      return '5 mW';
-    case 'pulse_energy':
-      return '4 mJ';
-    case 'pulse_duration':
-      return '10 ns';
-    case 'repetition_rate':
-      return '1 kHz';
-    case 'beam_diameter':
-      return '2 mm';
-    case 'divergence':
-      return '0.5 mrad';
-    default:
-      return '0.25 s';
-  }
 }

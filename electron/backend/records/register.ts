@@ -15,7 +15,7 @@ import {
   SiteDraftSchema,
   SitePatchSchema,
 } from '../schemas/records.js';
-import { EyewearSpecSchema, LaserInputSchema } from '../schemas/inputs.js';
+import { EyewearSpecSchema, StoredEyewearSpecSchema, StoredLaserInputSchema } from '../schemas/inputs.js';
 import { notFound, parseOrThrow, translateSqliteError, type StoreContext } from './context.js';
 import { referencesToInstallation, referencesToPerson, referencesToRoom, referencesToSite, refuseIfReferenced } from './references.js';
 import type {
@@ -32,6 +32,7 @@ import type {
   Site,
   SiteDraft,
 } from './types.js';
+import { RecordError } from './types.js';
 
 function guard<T>(ctx: StoreContext, what: string, fn: () => T): T {
   try {
@@ -189,7 +190,7 @@ interface InstallationRow {
   updated_at: string;
 }
 function installationFromRow(r: InstallationRow): LaserInstallation {
-  const laser = parseOrThrow(LaserInputSchema, JSON.parse(r.laser_json), `Stored laser ${r.id}`) as LaserInput;
+  const laser = parseOrThrow(StoredLaserInputSchema, JSON.parse(r.laser_json), `Stored laser ${r.id}`) as LaserInput;
   return {
     id: r.id,
     roomId: r.room_id,
@@ -244,6 +245,25 @@ export function insertInstallation(ctx: StoreContext, i: LaserInstallation): voi
     )
     .run(installationParams(i));
 }
+/**
+ * Assessments refer to beams by id, and the calculation refuses a room where two beams share one:
+ * the register refuses it when the laser is stored, not when the next assessment is made.
+ */
+function refuseBeamIdClash(ctx: StoreContext, roomId: Id, laser: LaserInput, exceptId: Id | null): void {
+  const ours = laser.beams.map((b) => b.id).filter((x): x is string => x !== undefined);
+  if (ours.length === 0) return;
+  const rows = ctx.sql('SELECT id, laser_json FROM laser_installation WHERE room_id = ?').all(roomId) as Array<{ id: string; laser_json: string }>;
+  for (const r of rows) {
+    if (r.id === exceptId) continue;
+    const other = JSON.parse(r.laser_json) as { name?: string; beams?: Array<{ id?: string }> };
+    const clash = (other.beams ?? []).find((b) => b.id !== undefined && ours.includes(b.id));
+    if (clash?.id !== undefined) {
+      const problem = `beam id "${clash.id}" is already used by "${other.name ?? r.id}" in this room; give this beam another id`;
+      throw new RecordError('invalid', `Laser ${laser.name}: ${problem}`, [{ path: 'laser.beams', problem }]);
+    }
+  }
+}
+
 /** The laser's id is the installation's id, so that beams in an assessment trace back to the register. */
 export function createInstallation(ctx: StoreContext, draft: LaserInstallationDraft): LaserInstallation {
   const d = parseOrThrow(LaserInstallationDraftSchema, draft, 'Laser installation');
@@ -251,6 +271,7 @@ export function createInstallation(ctx: StoreContext, draft: LaserInstallationDr
   const now = ctx.now();
   const id = ctx.newId();
   const laser: LaserInput = { ...d.laser, id };
+  refuseBeamIdClash(ctx, d.roomId, laser, null);
   const inst: LaserInstallation = {
     id,
     roomId: d.roomId,
@@ -279,6 +300,7 @@ export function updateInstallation(
   const merged = { ...prev, ...stripUndefined(p), updatedAt: ctx.now() };
   const laser: LaserInput = { ...merged.laser, id };
   const next: LaserInstallation = { ...merged, laser, classAsLabelled: laser.classAsLabelled ?? null };
+  if (p.laser !== undefined) refuseBeamIdClash(ctx, prev.roomId, laser, id);
   guard(ctx, `Laser ${laser.name}`, () =>
     ctx
       .sql(
@@ -328,7 +350,7 @@ function eyewearFromRow(r: EyewearRow): Eyewear {
   return {
     id: r.id,
     siteId: r.site_id,
-    spec: parseOrThrow(EyewearSpecSchema, JSON.parse(r.spec_json), `Stored eyewear ${r.tag}`) as EyewearSpec,
+    spec: parseOrThrow(StoredEyewearSpecSchema, JSON.parse(r.spec_json), `Stored eyewear ${r.tag}`) as EyewearSpec,
     location: r.location,
     quantity: r.quantity,
     notes: r.notes,
@@ -476,10 +498,15 @@ export function roomInputFromRegister(ctx: StoreContext, roomId: Id): RoomInput 
   const lasers = listInstallations(ctx, roomId)
     .filter((i) => i.status === 'in-service')
     .map((i) => i.laser);
-  // damaged or withdrawn eyewear is never offered as protection (EN 207: damaged filters must not be used)
+  // Eyewear stored under an older, looser rule (e.g. an RB6 marking; EN 208 ends at RB5) would make
+  // the calculation refuse every new assessment of the site: it is left out (no protection is
+  // claimed for it) and stays on the shelf for correction. Lasers are all kept: a laser left out
+  // silently could hide a hazard; the workspace names what to fix. Damaged or withdrawn eyewear is
+  // never offered as protection (EN 207: damaged filters must not be used).
   const eyewear = listEyewear(ctx, room.siteId)
     .filter((e) => e.condition !== 'damaged' && e.condition !== 'withdrawn')
-    .map((e) => e.spec);
+    .map((e) => e.spec)
+    .filter((spec) => EyewearSpecSchema.safeParse(spec).success);
   return { lasers, eyewear };
 }
 

@@ -395,6 +395,11 @@ export interface CsvImportReport {
   readonly errors: ReadonlyArray<{ readonly row: number; readonly column: string; readonly problem: string }>;
   readonly installationIds: readonly Id[];
   /**
+   * How each quantity cell that could be read was read ("= 450 mJ per pulse"), with a question
+   * where the value is allowed but unusual (e.g. more than 10 J per pulse).
+   */
+  readonly readings?: ReadonlyArray<{ readonly row: number; readonly column: string; readonly text: string; readonly readAs: string; readonly question: string | null }>;
+  /**
    * Lasers of the file that the room already has (same name, maker and serial number). With the
    * choice 'ask' (the default) and any such laser, nothing is imported and the officer is asked
    * whether to skip them or add them again.

@@ -2,7 +2,9 @@
  * Zod schemas for the core's input types (core/model/inputs.ts), used wherever inputs arrive from
  * outside: IPC and HTTP payloads, export files, CSV rows, stored records. Objects are strict
  * (unknown fields are rejected: a misspelt field must not be silently ignored in a safety record).
- * Ranges are the physical ones; the core still applies the rule-set ranges and says which row.
+ * Every range, length and cross-field rule comes from the core's one table (core/model/input-rules.ts)
+ * and the core's own checks, so a value accepted here is accepted by the calculation and the reverse
+ * (property test: test/backend/records/schema-core-agreement.test.ts).
  * The assertions at the end fail to compile if a schema drifts from the core type.
  */
 import { z } from 'zod';
@@ -19,18 +21,38 @@ import type {
   Tissue,
   ViewingConditions,
 } from '../../../core/model/inputs.js';
+import {
+  EN207_MODES,
+  INPUT_RULES,
+  LASER_CLASS_LABELS,
+  SCALE_NUMBERS,
+  TEXT_RULES,
+  rangeWords,
+  textProblem,
+  type NumberRule,
+  type TextRule,
+} from '../../../core/model/input-rules.js';
+import { SINGLE_MODE_NEEDS_MFD, exposureVsPulseProblem, pulseTrainProblem } from '../../../core/beam/validate-beam.js';
 import { assertType, type SameShape } from './type-equality.js';
 
-const positive = (unit: string) => z.number({ error: `must be a number (${unit})` }).positive(`must be greater than 0 ${unit}`);
-const nonNegative = (unit: string) => z.number({ error: `must be a number (${unit})` }).nonnegative(`must be 0 or more ${unit}`);
-const fraction = (what: string) =>
-  z.number({ error: `must be a number (${what})` }).min(0, `must be between 0 and 1 (${what})`).max(1, `must be between 0 and 1 (${what})`);
+/** A number checked against its rule in the one table (core/model/input-rules.ts). */
+const num = (rule: NumberRule) => {
+  const u = rule.unit ? ` ${rule.unit}` : '';
+  let n = z.number({ error: `must be a number${u ? ` (${rule.unit})` : ''}` });
+  const range = `must be ${rangeWords(rule)}${rule.why ? ` (${rule.why})` : ''}`;
+  n = rule.minInclusive ? n.min(rule.min, range) : n.gt(rule.min, range);
+  if (rule.max !== undefined) n = n.max(rule.max, range);
+  return n;
+};
+const text = (rule: TextRule) =>
+  z.string({ error: `${rule.label} must be text` }).superRefine((x, c) => {
+    const problem = textProblem(rule, x);
+    if (problem) c.addIssue({ code: 'custom', message: problem });
+  });
+const R = INPUT_RULES;
 
 /** 180 nm to 1 mm: the span of the ICNIRP 2013 / EU 2006 limit tables. */
-export const WavelengthNmSchema = z
-  .number({ error: 'must be a number (nm)' })
-  .min(180, 'must be at least 180 nm (the limit tables start at 180 nm)')
-  .max(1_000_000, 'must be at most 1 000 000 nm (1 mm, where the limit tables end)');
+export const WavelengthNmSchema = num(R.wavelength_nm);
 
 export const RuleSetIdSchema = z.enum(['icnirp2013', 'eu2006']);
 export const TissueSchema = z.enum(['eye', 'skin']);
@@ -41,28 +63,33 @@ export const LimitSettingsSchema = z.strictObject({
 });
 
 export const EmissionSchema = z.discriminatedUnion('kind', [
-  z.strictObject({ kind: z.literal('cw'), power_W: positive('W') }),
-  z.strictObject({
-    kind: z.literal('pulsed'),
-    pulseEnergy_J: positive('J'),
-    pulseDuration_s: positive('s'),
-    repetitionRate_Hz: positive('Hz').optional(),
-  }),
+  z.strictObject({ kind: z.literal('cw'), power_W: num(R.power_W) }),
+  z
+    .strictObject({
+      kind: z.literal('pulsed'),
+      pulseEnergy_J: num(R.pulseEnergy_J),
+      pulseDuration_s: num(R.pulseDuration_s),
+      repetitionRate_Hz: num(R.repetitionRate_Hz).optional(),
+    })
+    .superRefine((e, c) => {
+      const problem = pulseTrainProblem(e);
+      if (problem) c.addIssue({ code: 'custom', message: problem, path: ['repetitionRate_Hz'] });
+    }),
 ]);
 
 export const BeamDefinitionSchema = z.enum(['1/e', '1/e2', 'd63'], { error: 'must be "1/e", "1/e2" or "d63" (points where the beam diameter is measured)' });
 
 export const BeamGeometrySchema = z.strictObject({
-  diameter_m: positive('m'),
-  divergence_rad: nonNegative('rad').max(Math.PI, 'must be at most π rad (full angle)'),
+  diameter_m: num(R.diameter_m),
+  divergence_rad: num(R.divergence_rad),
   definition: BeamDefinitionSchema,
   profile: z.enum(['gaussian', 'tophat']).optional(),
-  diameterY_m: positive('m').optional(),
-  divergenceY_rad: nonNegative('rad').max(Math.PI, 'must be at most π rad (full angle)').optional(),
+  diameterY_m: num(R.diameterY_m).optional(),
+  divergenceY_rad: num(R.divergenceY_rad).optional(),
 });
 
 /** Relative tolerances: 0.1 = ±10 %; below 1 so the lower bound stays positive. */
-const tolerance = z.number({ error: 'must be a number (relative, 0.1 = ±10 %)' }).min(0, 'must be 0 or more').lt(1, 'must be below 1 (1 = ±100 %)');
+const tolerance = num(R.tolerance);
 export const InputTolerancesSchema = z.strictObject({
   power: tolerance.optional(),
   energy: tolerance.optional(),
@@ -75,92 +102,102 @@ export const InputTolerancesSchema = z.strictObject({
 export const ViewingConditionsSchema = z.strictObject({
   diffuse: z
     .strictObject({
-      reflectance: fraction('reflectance'),
-      viewingAngle_rad: nonNegative('rad').max(Math.PI / 2, 'must be at most π/2 rad (90° from the normal)').optional(),
-      targetDistance_m: nonNegative('m').optional(),
-      viewerDistance_m: nonNegative('m').optional(),
-      deliberateDuration_s: positive('s').max(30000, 'must be at most 30 000 s (a working day)').optional(),
+      reflectance: num(R.diffuseReflectance),
+      viewingAngle_rad: num(R.viewingAngle_rad).optional(),
+      targetDistance_m: num(R.targetDistance_m).optional(),
+      viewerDistance_m: num(R.viewerDistance_m).optional(),
+      deliberateDuration_s: num(R.deliberateDuration_s).optional(),
       governs: z.enum(['accidental', 'deliberate'], { error: "must be 'accidental' or 'deliberate'" }).optional(),
     })
     .optional(),
-  specular: z.strictObject({ reflectance: fraction('reflectance'), pathToSurface_m: nonNegative('m').optional() }).optional(),
-  lens: z.strictObject({ focalLength_m: positive('m'), beamDiameterAtLens_m: positive('m').optional() }).optional(),
+  specular: z.strictObject({ reflectance: num(R.specularReflectance), pathToSurface_m: num(R.pathToSurface_m).optional() }).optional(),
+  lens: z.strictObject({ focalLength_m: num(R.focalLength_m), beamDiameterAtLens_m: num(R.beamDiameterAtLens_m).optional() }).optional(),
   fiber: z
     .strictObject({
       kind: z.enum(['multimode', 'singlemode']),
-      numericalAperture: positive('NA').max(1, 'must be at most 1 (numerical aperture in air)'),
-      modeFieldDiameter_m: positive('m').optional(),
+      numericalAperture: num(R.numericalAperture),
+      modeFieldDiameter_m: num(R.modeFieldDiameter_m).optional(),
+    })
+    .superRefine((f, c) => {
+      if (f.kind === 'singlemode' && f.modeFieldDiameter_m === undefined) c.addIssue({ code: 'custom', message: SINGLE_MODE_NEEDS_MFD, path: ['modeFieldDiameter_m'] });
     })
     .optional(),
   aided: z
     .strictObject({
-      magnification: z.number({ error: 'must be a number (×)' }).min(1, 'must be at least 1 (×)'),
-      objectiveDiameter_m: positive('m'),
-      transmission: fraction('transmission').optional(),
+      magnification: num(R.magnification),
+      objectiveDiameter_m: num(R.objectiveDiameter_m),
+      transmission: num(R.transmission).optional(),
     })
     .optional(),
-  attenuation_per_m: nonNegative('1/m').optional(),
-  closestApproach_m: nonNegative('m').optional(),
+  attenuation_per_m: num(R.attenuation_per_m).optional(),
+  closestApproach_m: num(R.closestApproach_m).optional(),
 });
 
-export const BeamInputSchema = z.strictObject({
-  id: z.string().min(1).optional(),
-  label: z.string().optional(),
-  ruleSet: RuleSetIdSchema.optional(),
-  wavelength_nm: WavelengthNmSchema,
-  emission: EmissionSchema,
-  beam: BeamGeometrySchema,
-  exposureDuration_s: positive('s').optional(),
-  sourceAngle_rad: nonNegative('rad').optional(),
-  viewing: ViewingConditionsSchema.optional(),
-  skinArea_m2: nonNegative('m²').max(10, 'must be at most 10 m² (irradiated skin area)').optional(),
-  tolerances: InputTolerancesSchema.optional(),
-  settings: LimitSettingsSchema.optional(),
-});
+export const BeamInputSchema = z
+  .strictObject({
+    id: text(TEXT_RULES.beamId).optional(),
+    label: text(TEXT_RULES.beamLabel).optional(),
+    ruleSet: RuleSetIdSchema.optional(),
+    wavelength_nm: WavelengthNmSchema,
+    emission: EmissionSchema,
+    beam: BeamGeometrySchema,
+    exposureDuration_s: num(R.exposureDuration_s).optional(),
+    sourceAngle_rad: num(R.sourceAngle_rad).optional(),
+    viewing: ViewingConditionsSchema.optional(),
+    skinArea_m2: num(R.skinArea_m2).optional(),
+    tolerances: InputTolerancesSchema.optional(),
+    settings: LimitSettingsSchema.optional(),
+  })
+  .superRefine((b, c) => {
+    const problem = exposureVsPulseProblem(b);
+    if (problem) c.addIssue({ code: 'custom', message: problem, path: ['exposureDuration_s'] });
+  });
 
 const band = { from_nm: WavelengthNmSchema, to_nm: WavelengthNmSchema };
 const bandOrdered = (b: { from_nm: number; to_nm: number }) => b.from_nm <= b.to_nm;
-const bandMessage = { message: 'from_nm must not be above to_nm', path: ['to_nm'] };
+const bandMessage = { message: 'the band must go from the shorter to the longer wavelength', path: ['to_nm'] };
 
-/** EN 207 scale numbers LB1..LB10, EN 208 RB1..RB10 (EN 207:2017 / EN 208:2009 tables). */
-const scaleNumber = z
-  .number({ error: 'must be a whole number 1 to 10' })
-  .int('must be a whole number 1 to 10')
-  .min(1, 'must be a whole number 1 to 10')
-  .max(10, 'must be a whole number 1 to 10');
+const scaleNumber = (s: { readonly min: number; readonly max: number; readonly prefix: string; readonly standard: string }) => {
+  const m = `must be a whole number from ${s.prefix}${s.min} to ${s.prefix}${s.max} (${s.standard})`;
+  return z.number({ error: m }).int(m).min(s.min, m).max(s.max, m);
+};
 
 export const EyewearSpecSchema = z.strictObject({
-  id: z.string().min(1, 'must not be empty (the tag on the frame)'),
-  label: z.string(),
-  od: z
-    .array(
-      z.strictObject({ ...band, od: nonNegative('OD').max(20, 'must be at most 20 (OD)') }).refine(bandOrdered, bandMessage),
-    )
-    .optional(),
+  id: text(TEXT_RULES.eyewearTag),
+  label: text(TEXT_RULES.eyewearLabel),
+  od: z.array(z.strictObject({ ...band, od: num(R.opticalDensity) }).refine(bandOrdered, bandMessage)).optional(),
   en207: z
     .array(
       z
         .strictObject({
           ...band,
-          // EN 207 test conditions: D (continuous), I (pulsed), R (Q-switched), M (mode-locked); "IR" = I and R.
-          modes: z.string().regex(/^[DIRM]+$/, 'must be letters from D, I, R, M (e.g. "D" or "IR")'),
-          scale: scaleNumber,
+          modes: z.string().regex(EN207_MODES, 'must be letters from D, I, R, M (e.g. "D" or "IR")'),
+          scale: scaleNumber(SCALE_NUMBERS.en207),
         })
         .refine(bandOrdered, bandMessage),
     )
     .optional(),
-  en208: z.array(z.strictObject({ ...band, scale: scaleNumber }).refine(bandOrdered, bandMessage)).optional(),
-  visibleTransmission: fraction('visible transmission').optional(),
+  en208: z.array(z.strictObject({ ...band, scale: scaleNumber(SCALE_NUMBERS.en208) }).refine(bandOrdered, bandMessage)).optional(),
+  visibleTransmission: num(R.visibleTransmission).optional(),
 });
 
-export const LaserClassSchema = z.enum(['1', '1M', '2', '2M', '3R', '3B', '4']);
+export const LaserClassSchema = z.enum(LASER_CLASS_LABELS);
 
-export const LaserInputSchema = z.strictObject({
-  id: z.string().min(1, 'must not be empty'),
-  name: z.string(),
-  classAsLabelled: LaserClassSchema.optional(),
-  beams: z.array(BeamInputSchema).min(1, 'a laser needs at least one beam (wavelength / mode)'),
-});
+export const LaserInputSchema = z
+  .strictObject({
+    id: text(TEXT_RULES.laserId),
+    name: text(TEXT_RULES.laserName),
+    classAsLabelled: LaserClassSchema.optional(),
+    beams: z.array(BeamInputSchema).min(1, 'a laser needs at least one beam (wavelength / mode)'),
+  })
+  .superRefine((l, c) => {
+    const seen = new Set<string>();
+    l.beams.forEach((b, i) => {
+      if (b.id === undefined) return;
+      if (seen.has(b.id)) c.addIssue({ code: 'custom', message: `beam id "${b.id}" is used twice in this laser`, path: ['beams', i, 'id'] });
+      seen.add(b.id);
+    });
+  });
 
 export const ExposurePlaceSchema = z.strictObject({
   place: z.string().trim().min(1, { message: 'name the place' }).max(200),
@@ -173,6 +210,20 @@ export const RoomInputSchema = z.strictObject({
   lasers: z.array(LaserInputSchema),
   eyewear: z.array(EyewearSpecSchema).optional(),
   exposurePlaces: z.array(ExposurePlaceSchema).max(500).optional(),
+});
+
+/**
+ * Reading back what the register stored before these rules were one: the shape only. A laser or
+ * eyewear stored under an older, looser rule (an RB6 marking, an empty name) must still open in
+ * the register so the officer can correct it; every write goes through the strict schemas above.
+ */
+const isRecord = (x: unknown): x is Record<string, unknown> => typeof x === 'object' && x !== null && !Array.isArray(x);
+export const StoredLaserInputSchema = z.custom<LaserInput>(
+  (x) => isRecord(x) && typeof x['id'] === 'string' && typeof x['name'] === 'string' && Array.isArray(x['beams']) && x['beams'].every(isRecord),
+  { message: 'is not a stored laser (id, name, beams)' },
+);
+export const StoredEyewearSpecSchema = z.custom<EyewearSpec>((x) => isRecord(x) && typeof x['id'] === 'string' && typeof x['label'] === 'string', {
+  message: 'is not a stored eyewear specification (id, label)',
 });
 
 // ---- compile-time proof that the schemas are the core types (fails to compile on drift)

@@ -81,9 +81,9 @@ describe('laser inventory CSV', () => {
     ['unknown column', ['laser,wavelength,emission,power,beam_diameter,divergence,beam_definition,colour', 'x,532,cw,1,1,1,1/e2,red'], [{ row: 1, column: 'colour', problem: /unknown column/ }]],
     ['missing required column', ['laser,wavelength,emission,power,beam_diameter,beam_definition', 'x,532,cw,1,1,1/e2'], [{ row: 1, column: 'divergence', problem: /required column is missing/ }]],
     ['unreadable number', [HEADER, GOOD, 'Bad,4,,,,green,cw,5 W,,,,2.3,0.4,1/e2'], [{ row: 3, column: 'wavelength', problem: /"green" is not a wavelength/ }]],
-    ['wrong unit', [HEADER, 'Bad,4,,,,532,cw,5 J,,,,2.3,0.4,1/e2'], [{ row: 2, column: 'power', problem: /"5 J" is not a power/ }]],
-    ['wavelength out of range', [HEADER, GOOD, GOOD.replace('Good', 'Short').replace(',532,', ',50,')], [{ row: 3, column: 'wavelength', problem: /at least 180 nm/ }]],
-    ['zero power', [HEADER, GOOD.replace('5 W', '0')], [{ row: 2, column: 'power', problem: /greater than 0/ }]],
+    ['wrong unit', [HEADER, 'Bad,4,,,,532,cw,5 J,,,,2.3,0.4,1/e2'], [{ row: 2, column: 'power', problem: /"5 J": 'J' is not a power unit/ }]],
+    ['wavelength out of range', [HEADER, GOOD, GOOD.replace('Good', 'Short').replace(',532,', ',50,')], [{ row: 3, column: 'wavelength', problem: /read as 50 nm; wavelength must be from 180 nm/ }]],
+    ['zero power', [HEADER, GOOD.replace('5 W', '0')], [{ row: 2, column: 'power', problem: /must be more than 0 W/ }]],
     ['cw without power', [HEADER, GOOD.replace('5 W', '')], [{ row: 2, column: 'power', problem: /required for a cw beam/ }]],
     ['pulsed with power only', [HEADER, 'P,4,,,,1064,pulsed,5 W,,,,9,0.5,1/e2'], [
       { row: 2, column: 'pulse_energy', problem: /required for a pulsed beam/ },
@@ -110,8 +110,15 @@ describe('laser inventory CSV', () => {
     expect(snapshot(dbPath)).toBe(before);
   });
 
-  it('an unclosed quote is a clear error', () => {
-    expect(() => store.importLaserCsv(room.id, `${HEADER}\n"unterminated,4`)).toThrow(/quoted cell is not closed/);
+  it('an unclosed quote is reported with the row and column where it opens', () => {
+    const report = store.importLaserCsv(room.id, `${HEADER}\n${GOOD}\n"unterminated,4`);
+    expect(report.imported).toBe(0);
+    expect(report.errors).toEqual([{ row: 3, column: '(column 1)', problem: expect.stringMatching(/quoted cell is not closed/) }]);
+  });
+
+  it('row numbers stay those the spreadsheet shows when blank lines are in between', () => {
+    const report = store.importLaserCsv(room.id, [HEADER, '', GOOD, '', GOOD.replace('Good', 'Bad').replace(',532,', ',green,')].join('\n'));
+    expect(report.errors).toEqual([{ row: 5, column: 'wavelength', problem: expect.stringMatching(/"green" is not a wavelength/) }]);
   });
 });
 

@@ -3,7 +3,7 @@
 // Directive Table 2.2 note a: on a boundary the lower value applies). The hazard is then never
 // below the hazard just beside the edge.
 import { describe, expect, it } from 'vitest';
-import { evaluateBeam, type BeamInput, type RuleSetId } from '../../../core/index.js';
+import { evaluateBeam, evaluateRoom, type BeamInput, type RuleSetId } from '../../../core/index.js';
 
 const beam = { diameter_m: 0.001, divergence_rad: 0.001, definition: '1/e' as const };
 const at = (ruleSet: RuleSetId, wavelength_nm: number, exposureDuration_s: number, power_W: number): BeamInput => ({ ruleSet, wavelength_nm, emission: { kind: 'cw', power_W }, beam, exposureDuration_s });
@@ -69,5 +69,20 @@ describe('class estimate at an exact band edge (through evaluateBeam)', () => {
         }
       }
     }
+  });
+});
+
+// The additive rule had the same pattern: each beam's exposure was averaged over the governing
+// row's aperture (7 mm at exactly 1400 nm), also for the cornea group whose row (1400-1500 nm) is
+// averaged over 3.5 mm.
+describe('additive rule at an exact band edge (through evaluateRoom)', () => {
+  it('two 12 mW beams at exactly 1400 nm, 30 000 s: cornea group 2.4945 (was 0.624), retina group 1.559', () => {
+    const b = (id: string): BeamInput => ({ id, ...at('icnirp2013', 1400, 30000, 0.012) });
+    const room = evaluateRoom({ lasers: [{ id: 'A', name: 'A', beams: [b('a')] }, { id: 'B', name: 'B', beams: [b('b')] }] });
+    const sum = (effect: string): number => Number(room.additive.find((g) => g.effect === effect)?.sumOfFractions);
+    // derived: 2 * (4*0.012 W/(pi*(3.5 mm)^2)) / 1000 W/m² (row H-E-IR1400-long over 3.5 mm)
+    expect(sum('eye, cornea and lens') / ((2 * (4 * 0.012)) / (Math.PI * 0.0035 ** 2) / 1000)).toBeCloseTo(1, 9);
+    // derived: 2 * (4*0.012 W/(pi*(7 mm)^2)) / 400 W/m² (row H-E-NIR2-5p, 10*C_A*C_C = 400 W/m², over 7 mm)
+    expect(sum('eye, retina, thermal') / ((2 * (4 * 0.012)) / (Math.PI * 0.007 ** 2) / 400)).toBeCloseTo(1, 9);
   });
 });
