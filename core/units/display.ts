@@ -85,6 +85,7 @@ export function quantityText(value: DecT | string | number, unit: DisplayUnit, o
   let shownUnit: string = unit;
   if (unit === 'nm') {
     // wavelengths are the officer's own numbers: nm below 10 µm, µm above (far infrared)
+    if (!v.isFinite()) return '∞ nm';
     const r = roundTo(v, Math.max(sig, 6), round);
     return r.gte(10000) ? `${plainDigits(r.div(1000), g)} µm` : `${plainDigits(r, g)} nm`;
   }
@@ -93,6 +94,8 @@ export function quantityText(value: DecT | string | number, unit: DisplayUnit, o
     shownUnit = unit.replace('m²', 'cm²');
   }
   if (v.isZero()) return `0 ${shownUnit}`;
+  // a value beyond any prefix (e.g. "1e400" read from a file) is shown as it is, never thrown on
+  if (!v.isFinite()) return `${v.isNegative() ? '−' : ''}∞ ${shownUnit}`;
   const r = roundTo(v, sig, round);
   const a = r.abs();
   switch (unit) {

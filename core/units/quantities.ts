@@ -254,7 +254,7 @@ const DISPLAY_UNITS: ReadonlySet<string> = new Set<DisplayUnit>(['W', 'J', 's', 
  * Format a value with an SI prefix, e.g. 0.005 W -> "5 mW", through the one display formatter
  * (quantityText). `group: false` where the text goes back into an input field.
  */
-export function formatSI(valueSI: DecT | string, unit: string, sig = 3, direction: 'up' | 'down' = 'up', group = true): string {
+export function formatSI(valueSI: DecT | string, unit: string, sig = 3, direction: 'up' | 'down' = 'up', group = false): string {
   if (DISPLAY_UNITS.has(unit)) return quantityText(valueSI, unit as DisplayUnit, { sig, round: direction, group });
   return `${plain(roundSig(dec(valueSI), sig, direction))} ${unit}`.trim();
 }
