@@ -3,6 +3,7 @@ export * from './model/inputs.js';
 export * from './errors.js';
 export * from './trace/trace.js';
 export * from './units/quantities.js';
+export { quantityText, numberText, odText, angleText, plainDigits, type DisplayUnit, type DisplayOptions, type Rounding } from './units/display.js';
 export * from './units/read-back.js';
 export * from './model/input-rules.js';
 export { officerPath, officerWords, placeInRoom, whereInRoom, type WhereInRoom } from './model/input-words.js';

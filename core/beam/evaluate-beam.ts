@@ -12,6 +12,7 @@ import { RESULT_CAUTION, type BeamResult, type DistanceResult } from '../model/r
 import { RULE_SET_NAME } from '../limits/rule-sets.js';
 import { defaultExposureDuration } from '../limits/durations.js';
 import { formatSI } from '../units/quantities.js';
+import { numberText, odText, quantityText } from '../units/display.js';
 import { addStep, newTrace } from '../trace/trace.js';
 import { beamModel, describeBeam, type BeamModel } from './beam-model.js';
 import { tissueLimits, type TissueLimits } from './tissue-limits.js';
@@ -193,13 +194,16 @@ function evaluateValid(input: BeamInput, ruleSet: RuleSetId, settings: LimitSett
         detail: `${c.viewing === 'accidental' ? 'accidental viewing' : 'deliberate viewing of the spot'} over ${fmt(new Dec(c.T))} s (${c.lim.summary.durationWhy}); ${governs ? `this case governs: ${why}` : `shown for comparison; the ${choice} case governs (${why})`}`,
         confidence: c.viewing === 'deliberate' && v.diffuse.deliberateDuration_s === undefined ? 'from memory' : 'common practice',
       });
-      distances.push({ ...c.o.result, label: `${c.o.result.label}, ${c.viewing} viewing (${fmt(new Dec(c.T))} s)`, viewing: c.viewing, exposureDuration_s: c.T, governs });
+      // keys in the order of the result schema (trace last), so an export imported and exported again is byte-identical
+      const { trace: caseTrace, ...head } = c.o.result;
+      distances.push({ ...head, label: `${c.o.result.label}, ${c.viewing} viewing (${fmt(new Dec(c.T))} s)`, viewing: c.viewing, exposureDuration_s: c.T, governs, trace: caseTrace });
       trace.children.push(t);
       if (governs) {
         nhzDiffuse = c.o.r;
         const d = c.o;
         if (d.viewer && d.viewer.ratio.gt(1)) {
-          warnings.push(`Diffuse reflection (${c.viewing} viewing, ${fmt(new Dec(c.T))} s): ${fmt(d.viewer.distance_m)} m from the surface the exposure is ${fmt(d.viewer.ratio)} times the limit (OD ${fmt(d.viewer.od)} needed for diffuse viewing there).`);
+          // readable figures in the sentence (3 significant figures; ratio and OD rounded UP); the full values are in the trace
+          warnings.push(`Diffuse reflection (${c.viewing} viewing, ${quantityText(new Dec(c.T), 's')}): ${quantityText(d.viewer.distance_m, 'm', { round: 'nearest' })} from the surface the exposure is ${numberText(d.viewer.ratio, { round: 'up' })} times the limit (OD ${odText(d.viewer.od)} needed for diffuse viewing there).`);
         }
       }
     }

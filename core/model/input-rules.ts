@@ -168,6 +168,7 @@ export const TEXT_RULES = {
   beamLabel: { label: 'Beam label', required: false, max: 200 },
   eyewearTag: { label: 'Eyewear tag', required: true, max: 200 },
   eyewearLabel: { label: 'Eyewear description', required: true, max: 200 },
+  placeName: { label: 'Name of the place', required: true, max: 200 },
 } as const satisfies Record<string, TextRule>;
 
 export function textProblem(rule: TextRule, x: unknown): string | null {

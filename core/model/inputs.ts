@@ -132,6 +132,17 @@ export interface LaserInput {
   readonly beams: readonly BeamInput[];
 }
 
+/**
+ * Beams that can reach the same place (a person's eye or skin there can meet them together): the
+ * additive rule sums exposures within a place only. Default when none is given: the beams of one
+ * laser, on their common path.
+ */
+export interface ExposurePlace {
+  /** Where, in the officer's words, e.g. "table 1, compressor line". */
+  readonly place: string;
+  readonly beamIds: readonly string[];
+}
+
 export interface RoomInput {
   readonly ruleSet?: RuleSetId;
   readonly settings?: LimitSettings;
@@ -139,4 +150,6 @@ export interface RoomInput {
   readonly eyewear?: readonly EyewearSpec[];
   /** The room plan (top view) with the beam paths; zones and findings come back in RoomResult.plan. */
   readonly plan?: RoomPlan;
+  /** The officer's grouping of beams by the place they can reach together; see ExposurePlace. */
+  readonly exposurePlaces?: readonly ExposurePlace[];
 }

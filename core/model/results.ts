@@ -139,6 +139,8 @@ export interface EyewearVerdict {
 }
 
 export interface AdditiveGroup {
+  /** The place whose beams are summed (absent in results computed before places were asked for). */
+  readonly place?: string;
   readonly tissue: Tissue;
   readonly effect: string;
   readonly beamIds: readonly string[];

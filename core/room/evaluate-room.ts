@@ -5,7 +5,7 @@
  * the judgement of the site laser safety officer and the local regulations.
  */
 import { Dec, PI } from '../numeric/decimal.js';
-import type { BeamInput, RoomInput } from '../model/inputs.js';
+import type { BeamInput, ExposurePlace, RoomInput } from '../model/inputs.js';
 import { RESULT_CAUTION, type AdditiveGroup, type BeamResult, type LaserClass, type RoomResult } from '../model/results.js';
 import { RULE_SET_NAME } from '../limits/rule-sets.js';
 import { additiveFractions, type AdditiveItem } from '../limits/additive.js';
@@ -99,6 +99,25 @@ function maxClass(a: LaserClass, b: LaserClass): LaserClass {
   return classRank(a) >= classRank(b) ? a : b;
 }
 
+/**
+ * The places the officer named, with beams not named anywhere each in their laser's own place;
+ * without any, one place per laser ("path of <laser>": its beams share a path, the default).
+ */
+function exposurePlaces(input: RoomInput, evaluations: readonly BeamEvaluation[]): ExposurePlace[] {
+  const given = (input.exposurePlaces ?? []).map((p) => ({ place: p.place, beamIds: [...p.beamIds] }));
+  const named = new Set(given.flatMap((p) => p.beamIds));
+  const byLaser = new Map<string, ExposurePlace & { beamIds: string[] }>();
+  for (const ev of evaluations) {
+    if (named.has(ev.result.beamId)) continue;
+    const laserId = ev.result.laserId ?? '';
+    const name = input.lasers.find((l) => l.id === laserId)?.name ?? laserId;
+    const p = byLaser.get(laserId) ?? { place: `the path of ${name}`, beamIds: [] };
+    p.beamIds.push(ev.result.beamId);
+    byLaser.set(laserId, p);
+  }
+  return [...given, ...byLaser.values()];
+}
+
 export function evaluateRoom(input: RoomInput): RoomResult {
   const ruleSet = validateRoomShape(input);
   const trace = newTrace(`Room evaluation (${RULE_SET_NAME[ruleSet]})`);
@@ -128,24 +147,28 @@ export function evaluateRoom(input: RoomInput): RoomResult {
   });
   addStep(trace, { kind: 'input', label: 'Beams', detail: `${beams.length} beams from ${input.lasers.length} lasers` });
 
-  // Additive rule per tissue and hazard group (grouping by core/limits/additive.ts).
+  // Additive rule per place, tissue and hazard group (grouping by core/limits/additive.ts): only
+  // beams that can reach the same place add; a place with one beam has nothing to add.
   const additive: AdditiveGroup[] = [];
-  for (const tissue of ['eye', 'skin'] as const) {
-    const items = evaluations.map((ev) => additiveItem(ev, tissue === 'eye' ? ev.eye : ev.skin));
-    const res = additiveFractions(items);
-    trace.children.push(res.trace);
-    for (const g of res.groups) {
-      const ids = [...new Set(g.terms.map((t) => t.label))];
-      additive.push({
-        tissue: g.tissue,
-        effect: g.label,
-        beamIds: ids,
-        sumOfFractions: g.sum,
-        note:
-          ids.length < 2
-            ? `one beam only (sum ${g.sum_reported})`
-            : `${ids.length} beams, each at its worst reachable position: sum of fractions ${g.sum_reported}${g.exceeds ? ' > 1: combined exposure above the limit' : ' <= 1'}`,
-      });
+  for (const place of exposurePlaces(input, evaluations)) {
+    const members = evaluations.filter((ev) => place.beamIds.includes(ev.result.beamId));
+    if (members.length < 2) continue;
+    for (const tissue of ['eye', 'skin'] as const) {
+      const items = members.map((ev) => additiveItem(ev, tissue === 'eye' ? ev.eye : ev.skin));
+      const res = additiveFractions(items);
+      trace.children.push({ ...res.trace, title: `${res.trace.title}, at ${place.place}` });
+      for (const g of res.groups) {
+        const ids = [...new Set(g.terms.map((t) => t.label))];
+        if (ids.length < 2) continue; // one beam in this effect group: compared with its own limit already
+        additive.push({
+          place: place.place,
+          tissue: g.tissue,
+          effect: g.label,
+          beamIds: ids,
+          sumOfFractions: g.sum,
+          note: `${ids.length} beams at ${place.place}, each at its worst reachable position: sum of fractions ${g.sum_reported}${g.exceeds ? ' > 1: combined exposure above the limit' : ' <= 1'}`,
+        });
+      }
     }
   }
 

@@ -107,6 +107,21 @@ export function validateRoomShape(input: unknown): RuleSetId {
       ids.add(ew.id);
     });
   }
+  if (input['exposurePlaces'] !== undefined) {
+    const placed = new Set<string>();
+    requireArray('exposurePlaces', input['exposurePlaces'], false).forEach((p, k) => {
+      const f = `exposurePlaces[${k}]`;
+      if (!isObject(p)) throw new InputError('missing', f, p, 'a place {place, beamIds}');
+      requireString(`${f}.place`, p['place'], TEXT_RULES.placeName);
+      requireArray(`${f}.beamIds`, p['beamIds'], false).forEach((id, n) => {
+        const bid = requireString(`${f}.beamIds[${n}]`, id, TEXT_RULES.beamId);
+        if (!beamIds.has(bid)) throw new InputError('invalid_choice', `${f}.beamIds[${n}]`, bid, 'the id of a beam of this room');
+        // a beam reaching two places would be counted in two sums; it belongs to one place
+        if (placed.has(bid)) throw new InputError('invalid_choice', `${f}.beamIds[${n}]`, bid, 'a beam named in one place only');
+        placed.add(bid);
+      });
+    });
+  }
   return ruleSet ?? 'icnirp2013';
 }
 

@@ -5,6 +5,7 @@
  */
 import { Dec, dec, type Dec as DecT, roundSig } from '../numeric/decimal.js';
 import { InputError } from '../errors.js';
+import { quantityText, type DisplayUnit, type UnitHabit } from './display.js';
 
 export type Dimension =
   | 'power'
@@ -79,6 +80,7 @@ function normaliseUnit(u: string): string {
     .replace(/\^2/g, '2')
     .replace(/·/g, '')
     .replace(/μ/g, 'µ')
+    .replace(/^(°|degrees?)$/, 'deg')
     .replace(/^um$/, 'µm');
 }
 
@@ -214,8 +216,7 @@ function example(d: Dimension): string {
   }
 }
 
-/** The officer's unit habit for irradiance and radiant exposure. */
-export type UnitHabit = 'SI' | 'ANSI';
+export type { UnitHabit } from './display.js';
 
 export interface FormattedQuantity {
   readonly text: string;
@@ -226,6 +227,7 @@ export interface FormattedQuantity {
 /**
  * Format an irradiance (W/m²) or radiant exposure (J/m²) in the chosen habit, rounded to `sig`
  * significant figures in the stated direction (limits: 'down'; exposures and distances: 'up').
+ * Engineering notation with the prefix on the numerator ("125 GW/m²", "636 µJ/cm²").
  */
 export function formatDensity(
   valueSI: DecT | string,
@@ -234,27 +236,9 @@ export function formatDensity(
   direction: 'up' | 'down',
   sig = 3,
 ): FormattedQuantity {
-  const base = kind === 'irradiance' ? 'W' : 'J';
-  let v = dec(valueSI);
-  let unit = `${base}/m²`;
-  if (habit === 'ANSI') {
-    v = v.div(1e4);
-    unit = `${base}/cm²`;
-    // choose a readable prefix for ANSI figures (mW/cm², µJ/cm²)
-    const pre = pickPrefix(v);
-    v = v.div(pre.factor);
-    unit = `${pre.sym}${base}/cm²`;
-  }
-  const r = roundSig(v, sig, direction);
-  return { text: `${plain(r)} ${unit}`, value: plain(r), unit };
-}
-
-function pickPrefix(v: DecT): { sym: string; factor: string } {
-  const a = v.abs();
-  if (a.isZero() || a.gte(1)) return { sym: '', factor: '1' };
-  if (a.gte('1e-3')) return { sym: 'm', factor: '1e-3' };
-  if (a.gte('1e-6')) return { sym: 'µ', factor: '1e-6' };
-  return { sym: 'n', factor: '1e-9' };
+  const text = quantityText(valueSI, kind === 'irradiance' ? 'W/m²' : 'J/m²', { habit, round: direction, sig });
+  const cut = text.lastIndexOf(' ');
+  return { text, value: text.slice(0, cut), unit: text.slice(cut + 1) };
 }
 
 /** Plain decimal text without exponent for moderate magnitudes, engineering exponent otherwise. */
@@ -264,24 +248,13 @@ export function plain(v: DecT): string {
   return v.toString();
 }
 
-/** Format a value with an SI prefix, e.g. 0.005 W -> "5 mW". */
-export function formatSI(valueSI: DecT | string, unit: string, sig = 3, direction: 'up' | 'down' = 'up'): string {
-  const v = dec(valueSI);
-  const a = v.abs();
-  const steps: Array<[string, string]> = [
-    ['G', '1e9'],
-    ['M', '1e6'],
-    ['k', '1e3'],
-    ['', '1'],
-    ['m', '1e-3'],
-    ['µ', '1e-6'],
-    ['n', '1e-9'],
-    ['p', '1e-12'],
-    ['f', '1e-15'],
-  ];
-  if (a.isZero()) return `0 ${unit}`;
-  for (const [sym, f] of steps) {
-    if (a.gte(f)) return `${plain(roundSig(v.div(f), sig, direction))} ${sym}${unit}`;
-  }
-  return `${plain(roundSig(v, sig, direction))} ${unit}`;
+const DISPLAY_UNITS: ReadonlySet<string> = new Set<DisplayUnit>(['W', 'J', 's', 'Hz', 'm', 'rad', 'W/m²', 'J/m²']);
+
+/**
+ * Format a value with an SI prefix, e.g. 0.005 W -> "5 mW", through the one display formatter
+ * (quantityText). `group: false` where the text goes back into an input field.
+ */
+export function formatSI(valueSI: DecT | string, unit: string, sig = 3, direction: 'up' | 'down' = 'up', group = false): string {
+  if (DISPLAY_UNITS.has(unit)) return quantityText(valueSI, unit as DisplayUnit, { sig, round: direction, group });
+  return `${plain(roundSig(dec(valueSI), sig, direction))} ${unit}`.trim();
 }

@@ -41,6 +41,8 @@ export interface DesktopApi {
   openForPrint(request: { readonly suggestedName: string; readonly base64: string }): Promise<void>;
   /** Print the current screen with the system dialog. */
   printScreen(): Promise<void>;
+  /** Show the folder holding the records database in the system file manager. */
+  openDataFolder(): Promise<void>;
   /** Subscribe to native menu commands; returns the unsubscribe function. */
   onMenuCommand(listener: (command: MenuCommand) => void): () => void;
 }
@@ -51,5 +53,6 @@ export const IPC = {
   saveFile: 'bw:save-file',
   openForPrint: 'bw:open-for-print',
   printScreen: 'bw:print-screen',
+  openDataFolder: 'bw:open-data-folder',
   menu: 'bw:menu',
 } as const;

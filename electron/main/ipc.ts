@@ -30,7 +30,7 @@ function baseName(name: string): string {
   return path.basename(name).replace(/[^A-Za-z0-9._ -]+/g, '-') || 'document';
 }
 
-export function registerIpc<C>(table: HandlerTable<C>, ctx: C, window: () => BrowserWindow | null): void {
+export function registerIpc<C extends { readonly databasePath: string }>(table: HandlerTable<C>, ctx: C, window: () => BrowserWindow | null): void {
   const trusted = (e: IpcMainInvokeEvent): boolean => trustedSender(e, window()?.webContents.id ?? null);
 
   ipcMain.handle(IPC.invoke, async (e, name: unknown, args: unknown): Promise<Reply<unknown>> => {
@@ -61,6 +61,12 @@ export function registerIpc<C>(table: HandlerTable<C>, ctx: C, window: () => Bro
     writeFileSync(file, Buffer.from(p.data.base64, 'base64'), { mode: 0o600 });
     const err = await shell.openPath(file);
     if (err) throw new Error(`cannot open the PDF viewer: ${err}`);
+  });
+
+  // The database path comes from the main process's own context, never from the renderer.
+  ipcMain.handle(IPC.openDataFolder, async (e): Promise<void> => {
+    if (!trusted(e)) throw new Error(FORBIDDEN_MESSAGE);
+    shell.showItemInFolder(ctx.databasePath);
   });
 
   ipcMain.handle(IPC.printScreen, async (e): Promise<void> => {

@@ -11,6 +11,7 @@ const api = {
   saveFile: (request) => ipcRenderer.invoke(IPC.saveFile, request),
   openForPrint: (request) => ipcRenderer.invoke(IPC.openForPrint, request),
   printScreen: () => ipcRenderer.invoke(IPC.printScreen),
+  openDataFolder: () => ipcRenderer.invoke(IPC.openDataFolder),
   onMenuCommand: (listener) => {
     const wrapped = (_e: IpcRendererEvent, command: unknown): void => {
       if (typeof command === 'string' && (MENU_COMMANDS as readonly string[]).includes(command)) listener(command as MenuCommand);

@@ -105,6 +105,13 @@ export async function openPdfForPrint(suggestedName: string, base64: string): Pr
   setTimeout(() => URL.revokeObjectURL(url), 300_000);
 }
 
+/** Show the records folder in the file manager (desktop only; the loopback host has no file manager). */
+export async function openDataFolder(): Promise<boolean> {
+  if (!window.beamwarden) return false;
+  await window.beamwarden.openDataFolder();
+  return true;
+}
+
 export async function printScreen(): Promise<void> {
   if (window.beamwarden) return window.beamwarden.printScreen();
   window.print();

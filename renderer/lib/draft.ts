@@ -4,6 +4,7 @@
  */
 import {
   DEFAULT_RULE_SET,
+  type ExposurePlace,
   type EyewearSpec,
   type LimitSettings,
   type RoomInput,
@@ -27,6 +28,8 @@ export interface Draft {
   settings: LimitSettings;
   lasers: LaserForm[];
   eyewear: EyewearSpec[];
+  /** Places the officer named where several beams can meet (the additive rule sums within a place). */
+  exposurePlaces: Array<{ place: string; beamIds: string[] }>;
   operatingStates: OperatingState[];
   personsPresent: string;
   opticalAidsPossible: boolean;
@@ -55,6 +58,7 @@ export function draftFrom(content: AssessmentContent, registeredLaserIds: Readon
     settings: plainCopy(content.input.settings ?? {}),
     lasers: content.input.lasers.map((l) => laserFormFrom(l, !registeredLaserIds.has(l.id), why)),
     eyewear: plainCopy([...(content.input.eyewear ?? [])]),
+    exposurePlaces: plainCopy([...(content.input.exposurePlaces ?? [])]) as Array<{ place: string; beamIds: string[] }>,
     operatingStates: [...content.operatingStates],
     personsPresent: content.assumptions.personsPresent,
     opticalAidsPossible: content.assumptions.opticalAidsPossible,
@@ -104,8 +108,13 @@ export function roomInputFrom(d: Draft): DraftInput {
     }
   }
   const settings = Object.keys(d.settings).length > 0 ? { settings: d.settings } : {};
+  // places name only beams still evaluated; an emptied place is dropped (its beams go back to their laser's path)
+  const ids = new Set(lasers.flatMap((l) => l.beams.map((b) => b.id ?? '')));
+  const places: ExposurePlace[] = (d.exposurePlaces ?? [])
+    .map((p) => ({ place: p.place.trim() || 'unnamed place', beamIds: p.beamIds.filter((id) => ids.has(id)) }))
+    .filter((p) => p.beamIds.length > 0);
   const plan = d.plan ? { plan: planForLasers(d.plan, lasers) } : {};
-  return { input: { ruleSet: d.ruleSet, ...settings, lasers, eyewear: d.eyewear, ...plan }, incomplete, partial };
+  return { input: { ruleSet: d.ruleSet, ...settings, lasers, eyewear: d.eyewear, ...(places.length > 0 ? { exposurePlaces: places } : {}), ...plan }, incomplete, partial };
 }
 
 /**

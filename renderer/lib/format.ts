@@ -1,15 +1,11 @@
 /** Display helpers. Values from the core are already rounded in the safe direction; re-rounding here keeps that direction. */
-import { dec, formatDensity, formatSI, plain, roundPlaces, roundSig, type UnitHabit } from '../../core/index.js';
+import { formatDensity, odText, quantityText, type DisplayUnit, type UnitHabit } from '../../core/index.js';
 import type { LimitSummary, ScaleNumberRequirement } from '../../core/model/results.js';
 
 /** A distance in metres (decimal string), rounded UP to 3 significant figures, mm below 10 cm. */
 export function distance(m: string | null | undefined): string {
   if (m === null || m === undefined) return '—';
-  const v = dec(m);
-  if (v.isZero()) return '0 m';
-  if (v.lt('0.1')) return formatSI(m, 'm', 3, 'up');
-  if (v.gte(10000)) return `${plain(roundSig(v.div(1000), 3, 'up'))} km`;
-  return `${plain(roundSig(v, 3, 'up'))} m`;
+  return quantityText(m, 'm', { round: 'up' });
 }
 
 /** The governing eye limit in the officer's unit habit, rounded DOWN. */
@@ -25,8 +21,9 @@ export function limitBoth(l: LimitSummary, habit: UnitHabit): { H: string; E: st
   };
 }
 
-export function seconds(s: number): string {
-  return formatSI(String(s), 's', 4, 'up');
+/** A duration: prefixes below 1 s ("250 ms"), plain seconds above ("30 000 s"). */
+export function seconds(s: number | string): string {
+  return quantityText(String(s), 's', { round: 'nearest' });
 }
 
 export const RULE_NAME: Readonly<Record<string, string>> = {
@@ -55,6 +52,20 @@ export function shortFingerprint(fp: string): string {
 
 /** An optical density rounded UP to one decimal place and never below 0 (safe direction). */
 export function odUp(x: string): string {
-  const v = roundPlaces(dec(x), 1, 'up');
-  return v.isNegative() ? '0' : v.toFixed(1).replace(/\.0$/, '');
+  return odText(x);
+}
+
+const TRACE_UNITS: Readonly<Record<string, DisplayUnit>> = { J: 'J', W: 'W', m: 'm', s: 's', 'W/m²': 'W/m²', 'J/m²': 'J/m²' };
+
+/**
+ * A derivation step's value: the full figures kept (6 significant, nearest) but in engineering
+ * notation with an SI prefix, so "125000000000 W/m²" reads "125 GW/m²". Unknown units as given.
+ */
+export function traceValue(value: string | undefined, unit: string | undefined): string {
+  if (value === undefined || value === '') return '';
+  const base = unit === undefined ? undefined : unit.replace(/ per pulse$/, '');
+  const du = base === undefined ? undefined : TRACE_UNITS[base];
+  if (du === undefined || !/^-?[\d.]+(e[-+]?\d+)?$/i.test(value)) return unit ? `${value} ${unit}` : value;
+  const text = quantityText(value, du, { sig: 6, round: 'nearest' });
+  return unit !== base ? `${text} per pulse` : text;
 }

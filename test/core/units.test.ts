@@ -24,6 +24,8 @@ const PARSE: ReadonlyArray<{ text: string; dim: Dimension; si: string; source: s
   { text: '25 W/m^2', dim: 'irradiance', si: '25', source: 'caret notation for the square' },
   { text: '5uW', dim: 'power', si: '0.000005', source: "no space, 'u' for µ" },
   { text: '1,5 mrad', dim: 'angle', si: '0.0015', source: 'decimal comma, common in EU practice' },
+  { text: '0.5 deg', dim: 'angle', si: '0.0087266462599716475', source: 'derived: 0.5 × π/180; degree = π/180 rad (BIPM SI brochure Table 8)' },
+  { text: '0.5°', dim: 'angle', si: '0.0087266462599716475', source: 'degree sign, same unit' },
   { text: '2 min', dim: 'time', si: '120', source: 'minute, SI brochure Table 8 (non-SI unit accepted for use)' },
 ];
 
@@ -73,11 +75,11 @@ const FORMAT = [
   { v: '25.455844', kind: 'irradiance', habit: 'ANSI', dir: 'down', text: '2.54 mW/cm²', why: 'limit rounded down, ANSI habit' },
   { v: '25.455844', kind: 'irradiance', habit: 'ANSI', dir: 'up', text: '2.55 mW/cm²', why: 'an exposure rounds up' },
   { v: '6.3640', kind: 'radiantExposure', habit: 'ANSI', dir: 'down', text: '636 µJ/cm²', why: '0.6364 mJ/cm² shown with a readable prefix' },
-  { v: '10000', kind: 'radiantExposure', habit: 'SI', dir: 'down', text: '10000 J/m²', why: 'plain figures for moderate values' },
-  { v: '30000000000', kind: 'irradiance', habit: 'SI', dir: 'down', text: '3e10 W/m²', why: 'exponent for large values (UV cap 3e10 W/m²)' },
+  { v: '10000', kind: 'radiantExposure', habit: 'SI', dir: 'down', text: '10 kJ/m²', why: 'engineering notation, prefix on the numerator (BIPM Table 7)' },
+  { v: '30000000000', kind: 'irradiance', habit: 'SI', dir: 'down', text: '30 GW/m²', why: 'UV cap 3e10 W/m² with the prefix G, never an exponent' },
   { v: '0.002', kind: 'radiantExposure', habit: 'ANSI', dir: 'down', text: '200 nJ/cm²', why: '2e-3 J/m² = 0.2 µJ/cm² (section 9, 532 nm 10 ns)' },
-  { v: '0.0012574334', kind: 'radiantExposure', habit: 'SI', dir: 'down', text: '0.00125 J/m²', why: 'rule 3 value of the worked pulse example, down' },
-  { v: '0.0012574334', kind: 'radiantExposure', habit: 'SI', dir: 'up', text: '0.00126 J/m²', why: 'same value as an exposure, up' },
+  { v: '0.0012574334', kind: 'radiantExposure', habit: 'SI', dir: 'down', text: '1.25 mJ/m²', why: 'rule 3 value of the worked pulse example, down' },
+  { v: '0.0012574334', kind: 'radiantExposure', habit: 'SI', dir: 'up', text: '1.26 mJ/m²', why: 'same value as an exposure, up' },
 ] as const;
 
 describe('formatDensity: W/m² (IEC habit) or W/cm² (ANSI habit), rounded in the safe direction', () => {
@@ -90,9 +92,11 @@ describe('formatDensity: W/m² (IEC habit) or W/cm² (ANSI habit), rounded in th
       for (const habit of ['SI', 'ANSI'] as const) {
         const down = formatDensity(v, 'irradiance', habit, 'down');
         const up = formatDensity(v, 'irradiance', habit, 'up');
-        const scale = habit === 'SI' ? 1 : 1e-4 / ({ '': 1, m: 1e-3, 'µ': 1e-6, n: 1e-9 }[down.unit.replace('W/cm²', '')] ?? 1);
+        const prefix = (u: string): number => ({ k: 1e3, m: 1e-3, 'µ': 1e-6, n: 1e-9 } as Record<string, number>)[u.replace(/W\/c?m²/, '')] ?? 1;
+        const scale = (habit === 'SI' ? 1 : 1e-4) / prefix(down.unit);
+        const scaleUp = (habit === 'SI' ? 1 : 1e-4) / prefix(up.unit);
         expect(Number(down.value)).toBeLessThanOrEqual(Number(v) * scale * (1 + 1e-12));
-        expect(Number(up.value)).toBeGreaterThanOrEqual(Number(v) * scale * (1 - 1e-12));
+        expect(Number(up.value)).toBeGreaterThanOrEqual(Number(v) * scaleUp * (1 - 1e-12));
       }
     }
   });

@@ -1,6 +1,6 @@
 /**
- * Saves a PNG of each main screen at 1280x800 for a person to look at (not part of `npm test`):
- *   npm run screenshots            -> test/artifacts/screens/*.png
+ * Saves a PNG of each main screen at 1280x800 and 1920x1080 for a person to look at (not part of `npm test`):
+ *   npm run screenshots            -> test/artifacts/screens/1280x800/*.png, .../1920x1080/*.png
  * Uses the loopback host on a temporary database with the invented demo site.
  */
 import { mkdirSync } from 'node:fs';
@@ -9,18 +9,24 @@ import type { Page } from 'playwright-core';
 import { launch } from './browser.js';
 import { REPO, removeDir, startHost } from './host-process.js';
 
-const OUT = path.join(REPO, 'test', 'artifacts', 'screens');
+const ROOT = path.join(REPO, 'test', 'artifacts', 'screens');
+let OUT = ROOT;
 
 async function shot(page: Page, name: string): Promise<void> {
   await page.waitForTimeout(400);
   await page.screenshot({ path: path.join(OUT, `${name}.png`) });
-  process.stdout.write(`${name}.png\n`);
+  process.stdout.write(`${path.relative(REPO, OUT)}/${name}.png\n`);
 }
 
 async function main(): Promise<void> {
+  for (const viewport of [{ width: 1280, height: 800 }, { width: 1920, height: 1080 }]) await run(viewport);
+}
+
+async function run(viewport: { width: number; height: number }): Promise<void> {
+  OUT = path.join(ROOT, `${viewport.width}x${viewport.height}`);
   mkdirSync(OUT, { recursive: true });
   const empty = await startHost();
-  const ctx = await launch();
+  const ctx = await launch(viewport);
   const page = ctx.pages()[0] ?? (await ctx.newPage());
   page.on('pageerror', (e) => process.stderr.write(`page error: ${e.message}\n`));
   page.on('console', (m) => {
@@ -32,6 +38,7 @@ async function main(): Promise<void> {
     await shot(page, '00-first-start');
     await page.getByRole('button', { name: 'Load the demo site' }).click();
     await page.getByRole('heading', { name: 'Register' }).waitFor();
+    await page.getByRole('button', { name: 'Dismiss message' }).click();
     await page.getByRole('button', { name: /^B2\.14/ }).click();
     await shot(page, '01-register');
     await page.getByRole('tab', { name: 'Eyewear shelf' }).click();
@@ -52,6 +59,14 @@ async function main(): Promise<void> {
     await page.getByRole('button', { name: 'derivation', exact: true }).first().click();
     await page.getByRole('dialog').waitFor();
     await shot(page, '05-derivation');
+    await page.getByTestId('derivation-body').evaluate((el) => el.scrollTo(0, el.scrollHeight));
+    await page.keyboard.press('Escape');
+    await page.getByRole('button', { name: 'Full derivation' }).first().click();
+    await page.getByRole('dialog').waitFor();
+    await shot(page, '05b-derivation-full');
+    await page.keyboard.press('Escape');
+    await page.getByRole('button', { name: 'Settings & about' }).click();
+    await shot(page, '05c-settings-about');
     await page.keyboard.press('Escape');
     await page.keyboard.press('Alt+3');
     await page.getByRole('heading', { level: 1, name: /^Eyewear/ }).waitFor();

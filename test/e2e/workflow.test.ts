@@ -169,7 +169,8 @@ describe('an officer assesses a new room', () => {
     await page.getByRole('heading', { level: 1, name: /^Eyewear/ }).waitFor();
     const row = (label: string): Locator => page.getByRole('row').filter({ has: page.getByRole('rowheader', { name: new RegExp(label) }) });
     await expect.poll(() => row('Beam 1|1064|test').count()).toBeGreaterThan(0);
-    expect(await page.getByLabel('protects').count()).toBe(2);
+    // each coverage cell is a button that names the verdict and its reason in place
+    expect(await page.getByRole('button', { name: /^✔ protects/ }).count()).toBe(2);
     // the gap is shown first (so its disappearance below means something), then closed by the choice
     const gap = page.getByRole('status').filter({ hasText: 'No chosen eyewear protects against' });
     await expect.poll(() => gap.count(), { timeout: 30_000 }).toBe(1);
@@ -248,8 +249,10 @@ describe('an officer assesses a new room', () => {
     await page.getByTestId('record-status').filter({ hasText: 'revision 2 · draft' }).waitFor();
     await page.keyboard.press('Alt+5');
     await page.getByRole('heading', { name: 'Changes since the last signed revision' }).waitFor();
-    await page.getByRole('cell', { name: /power_W/ }).first().waitFor();
-    expect(await page.getByRole('cell', { name: '0.06', exact: true }).count()).toBeGreaterThan(0);
+    // the change reads as on the form: the field label and the value with its unit, never a stored path
+    await page.getByRole('cell', { name: 'Power', exact: true }).first().waitFor();
+    expect(await page.getByRole('cell', { name: '60 mW', exact: true }).count()).toBeGreaterThan(0);
+    expect(await page.getByRole('cell', { name: /power_W/ }).count()).toBe(0);
   });
 
   it('no script errors on the page', () => {

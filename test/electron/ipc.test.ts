@@ -11,11 +11,12 @@ import path from 'node:path';
 
 type Handler = (event: unknown, ...args: unknown[]) => Promise<unknown>;
 const handlers = new Map<string, Handler>();
+const shown: string[] = [];
 
 vi.mock('electron', () => ({
   ipcMain: { handle: (channel: string, fn: Handler) => handlers.set(channel, fn), on: () => undefined },
   dialog: { showSaveDialog: async () => ({ canceled: true }) },
-  shell: { openPath: async () => '' },
+  shell: { openPath: async () => '', showItemInFolder: (p: string) => shown.push(p) },
   BrowserWindow: vi.fn(),
 }));
 
@@ -43,7 +44,14 @@ afterAll(() => {
 
 describe('IPC', () => {
   it('registers the invoke channel and the shell channels, nothing else', () => {
-    expect([...handlers.keys()].sort()).toEqual([IPC.invoke, IPC.openForPrint, IPC.printScreen, IPC.saveFile].sort());
+    expect([...handlers.keys()].sort()).toEqual([IPC.invoke, IPC.openDataFolder, IPC.openForPrint, IPC.printScreen, IPC.saveFile].sort());
+  });
+
+  it('shows the database folder from the main process context only, and only to the app frame', async () => {
+    await handlers.get(IPC.openDataFolder)?.(event(appFrame));
+    expect(shown).toEqual([store.info.path]);
+    await expect(handlers.get(IPC.openDataFolder)?.(event({ url: 'https://example.invalid/' }))).rejects.toThrow(/unexpected sender/);
+    expect(shown).toHaveLength(1);
   });
 
   it('answers the app page with the handler table', async () => {

@@ -23,6 +23,7 @@ function draftWith(lasers: LaserForm[]): Draft {
     settings: {},
     lasers,
     eyewear: [],
+    exposurePlaces: [],
     operatingStates: [],
     personsPresent: '',
     opticalAidsPossible: false,

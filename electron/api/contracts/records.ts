@@ -87,10 +87,18 @@ export interface Eyewear {
   readonly location: string;
   readonly quantity: number;
   readonly notes: string;
+  /** Upkeep (schema version 5): last inspection, what it found, when the next one is due. */
+  readonly inspectedOn: CalendarDate | null;
+  readonly condition: EyewearCondition;
+  readonly nextInspection: CalendarDate | null;
   readonly createdAt: Timestamp;
   readonly updatedAt: Timestamp;
 }
-export type EyewearDraft = Pick<Eyewear, 'siteId' | 'spec'> & Partial<Pick<Eyewear, 'location' | 'quantity' | 'notes'>>;
+/** What the last inspection found; 'withdrawn' = taken out of use (kept on record, not offered). */
+export type EyewearCondition = 'not recorded' | 'good' | 'worn' | 'damaged' | 'withdrawn';
+export const EYEWEAR_CONDITIONS: readonly EyewearCondition[] = ['not recorded', 'good', 'worn', 'damaged', 'withdrawn'];
+export type EyewearDraft = Pick<Eyewear, 'siteId' | 'spec'> &
+  Partial<Pick<Eyewear, 'location' | 'quantity' | 'notes' | 'inspectedOn' | 'condition' | 'nextInspection'>>;
 
 /** A person who signs off assessments (officer, deputy, assessor). */
 export interface Person {
@@ -330,6 +338,8 @@ export interface AssessmentSummary {
   /** The signed revision's key is not on this installation's trust list: show "unverified signature", never "signed". */
   readonly signatureUnverified: boolean;
   readonly updatedAt: Timestamp;
+  /** The signed revision in force (null when none has been signed); the newest revision may be a draft after it. */
+  readonly inForce: { readonly revisionNo: number; readonly signedAt: Timestamp; readonly reviewBy: CalendarDate | null } | null;
 }
 
 /** One changed value between two revisions; `path` like "input.lasers[0].beams[1].wavelength_nm". */
@@ -470,3 +480,15 @@ export interface CsvImportReport {
 
 /** What to do with CSV lasers the room already has (same name, maker, serial number). */
 export type CsvExistingChoice = 'ask' | 'skip' | 'add';
+
+/** One revision that evaluated a laser, with the values it used (a laser's history on the Register). */
+export interface LaserUse {
+  readonly assessmentId: Id;
+  readonly revisionId: Id;
+  readonly title: string;
+  readonly revisionNo: number;
+  readonly status: RevisionStatus;
+  readonly signedAt: Timestamp | null;
+  readonly updatedAt: Timestamp;
+  readonly laser: LaserInput;
+}

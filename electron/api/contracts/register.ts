@@ -6,6 +6,7 @@ import type {
   Id,
   LaserInstallation,
   LaserInstallationDraft,
+  LaserUse,
   Person,
   PersonDraft,
   Room,
@@ -54,6 +55,7 @@ export type RegisterHandlers = {
   'installation-create': (args: LaserInstallationDraft) => Promise<LaserInstallation>;
   'installation-update': (args: Patch<Partial<Omit<LaserInstallationDraft, 'roomId'>>>) => Promise<LaserInstallation>;
   'installation-delete': (args: { readonly id: Id }) => Promise<void>;
+  'installation-history': (args: { readonly id: Id }) => Promise<LaserUse[]>;
 
   'eyewear-list': (args: { readonly siteId: Id }) => Promise<Eyewear[]>;
   'eyewear-create': (args: EyewearDraft) => Promise<Eyewear>;

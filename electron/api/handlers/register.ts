@@ -50,6 +50,7 @@ export const registerTable: AreaTable<RegisterHandlers, ApiContext> = {
   'installation-create': { input: LaserInstallationDraftSchema, run: (a, { store }) => store.createInstallation(a) },
   'installation-update': { input: patchOf(LaserInstallationPatchSchema), run: (a, { store }) => store.updateInstallation(a.id, a.patch) },
   'installation-delete': { input: ByIdSchema, run: (a, { store }) => store.deleteInstallation(a.id) },
+  'installation-history': { input: ByIdSchema, run: (a, { store }) => store.laserHistory(a.id) },
 
   'eyewear-list': { input: z.strictObject({ siteId: IdSchema }), run: (a, { store }) => store.listEyewear(a.siteId) },
   'eyewear-create': { input: EyewearDraftSchema, run: (a, { store }) => store.createEyewear(a) },

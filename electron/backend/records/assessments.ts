@@ -224,17 +224,34 @@ export function newAssessmentContent(ctx: StoreContext, roomId: Id, installation
     input = { ...registerInput, lasers: [inst.laser] };
     title = `Laser hazard evaluation, ${inst.laser.name}, room ${room.code}`;
   }
+  // The officer's decisions carry over: the room's last signed assessment (else its newest) gives
+  // the control decisions, non-beam hazards and operating states; the officer reviews them again.
+  const previous = previousContentOfRoom(ctx, roomId, installationId);
   return {
     title,
     input,
-    operatingStates: ['normal', 'alignment', 'maintenance'],
-    assumptions: { exposureDurations: [], personsPresent: 'Authorised laser users only', opticalAidsPossible: false, other: [] },
-    controls: [],
-    nonBeamHazards: NON_BEAM_HAZARD_KINDS.map((kind) => ({ kind, present: false, note: '', controls: [] })),
+    operatingStates: previous?.operatingStates ? [...previous.operatingStates] : ['normal', 'alignment', 'maintenance'],
+    assumptions: { exposureDurations: [], personsPresent: previous?.assumptions.personsPresent ?? 'Authorised laser users only', opticalAidsPossible: previous?.assumptions.opticalAidsPossible ?? false, other: [] },
+    controls: previous ? previous.controls.map((c) => ({ ...c })) : [],
+    nonBeamHazards: NON_BEAM_HAZARD_KINDS.map((kind) => previous?.nonBeamHazards.find((h) => h.kind === kind) ?? { kind, present: false, note: '', controls: [] }),
     eyewearChosen: [],
     notes: '',
     reviewBy: addOneYear(ctx.now()),
   };
+}
+
+/** Content of the room's last signed revision (or newest revision) of the same scope, if any. */
+function previousContentOfRoom(ctx: StoreContext, roomId: Id, installationId: Id | null): AssessmentContent | null {
+  const row = ctx
+    .sql(
+      `SELECT r.content_json FROM revision r JOIN assessment a ON a.id = r.assessment_id
+        WHERE a.room_id = ? AND a.installation_id IS ?
+        ORDER BY (r.status = 'signed') DESC, r.updated_at DESC, r.revision_no DESC LIMIT 1`,
+    )
+    .get(roomId, installationId) as { content_json: string } | undefined;
+  if (!row) return null;
+  const parsed = AssessmentContentSchema.safeParse(JSON.parse(row.content_json));
+  return parsed.success ? parsed.data : null;
 }
 
 /** Validate content and cross-check references; write chosen exposure durations into the input. */
@@ -314,7 +331,9 @@ const SUMMARY_SELECT = `
     (SELECT s.signed_at FROM revision r3 JOIN signature s ON s.revision_id = r3.id
       WHERE r3.assessment_id = a.id AND r3.status = 'signed') AS signed_at,
     (SELECT s.key_id FROM revision r3 JOIN signature s ON s.revision_id = r3.id
-      WHERE r3.assessment_id = a.id AND r3.status = 'signed') AS signed_key
+      WHERE r3.assessment_id = a.id AND r3.status = 'signed') AS signed_key,
+    (SELECT r4.revision_no FROM revision r4 WHERE r4.assessment_id = a.id AND r4.status = 'signed') AS in_force_no,
+    (SELECT r5.review_by FROM revision r5 WHERE r5.assessment_id = a.id AND r5.status = 'signed') AS in_force_review_by
   FROM assessment a
   JOIN revision r ON r.assessment_id = a.id
    AND r.revision_no = (SELECT max(r2.revision_no) FROM revision r2 WHERE r2.assessment_id = a.id)`;
@@ -330,6 +349,8 @@ interface SummaryRow {
   updated_at: string;
   signed_at: string | null;
   signed_key: string | null;
+  in_force_no: number | null;
+  in_force_review_by: string | null;
 }
 const summaryFromRow = (ctx: StoreContext, r: SummaryRow): AssessmentSummary => ({
   id: r.id,
@@ -342,6 +363,7 @@ const summaryFromRow = (ctx: StoreContext, r: SummaryRow): AssessmentSummary => 
   signedAt: r.signed_at,
   signatureUnverified: r.signed_key !== null && !trustOf(readTrustList(ctx.keyDir).list, r.signed_key).trusted,
   updatedAt: r.updated_at,
+  inForce: r.in_force_no === null ? null : { revisionNo: r.in_force_no, signedAt: r.signed_at ?? '', reviewBy: r.in_force_review_by },
 });
 
 export function listAssessments(ctx: StoreContext, roomId: Id): AssessmentSummary[] {

@@ -20,6 +20,7 @@ import { notFound, parseOrThrow, translateSqliteError, type StoreContext } from 
 import { referencesToInstallation, referencesToPerson, referencesToRoom, referencesToSite, refuseIfReferenced } from './references.js';
 import type {
   Eyewear,
+  EyewearCondition,
   EyewearDraft,
   Id,
   LaserInstallation,
@@ -339,6 +340,9 @@ interface EyewearRow {
   location: string;
   quantity: number;
   notes: string;
+  inspected_on: string | null;
+  condition: EyewearCondition;
+  next_inspection: string | null;
   created_at: string;
   updated_at: string;
 }
@@ -350,6 +354,9 @@ function eyewearFromRow(r: EyewearRow): Eyewear {
     location: r.location,
     quantity: r.quantity,
     notes: r.notes,
+    inspectedOn: r.inspected_on,
+    condition: r.condition,
+    nextInspection: r.next_inspection,
     createdAt: r.created_at,
     updatedAt: r.updated_at,
   };
@@ -362,6 +369,9 @@ const eyewearParams = (e: Eyewear) => ({
   location: e.location,
   quantity: e.quantity,
   notes: e.notes,
+  inspectedOn: e.inspectedOn,
+  condition: e.condition,
+  nextInspection: e.nextInspection,
   createdAt: e.createdAt,
   updatedAt: e.updatedAt,
 });
@@ -377,8 +387,8 @@ export function getEyewear(ctx: StoreContext, id: Id): Eyewear {
 export function insertEyewear(ctx: StoreContext, e: Eyewear): void {
   ctx
     .sql(
-      `INSERT INTO eyewear (id, site_id, tag, spec_json, location, quantity, notes, created_at, updated_at)
-       VALUES (@id, @siteId, @tag, @specJson, @location, @quantity, @notes, @createdAt, @updatedAt)`,
+      `INSERT INTO eyewear (id, site_id, tag, spec_json, location, quantity, notes, inspected_on, condition, next_inspection, created_at, updated_at)
+       VALUES (@id, @siteId, @tag, @specJson, @location, @quantity, @notes, @inspectedOn, @condition, @nextInspection, @createdAt, @updatedAt)`,
     )
     .run(eyewearParams(e));
 }
@@ -393,6 +403,9 @@ export function createEyewear(ctx: StoreContext, draft: EyewearDraft): Eyewear {
     location: d.location ?? '',
     quantity: d.quantity ?? 1,
     notes: d.notes ?? '',
+    inspectedOn: d.inspectedOn ?? null,
+    condition: d.condition ?? 'not recorded',
+    nextInspection: d.nextInspection ?? null,
     createdAt: now,
     updatedAt: now,
   };
@@ -404,7 +417,7 @@ export function updateEyewear(ctx: StoreContext, id: Id, patch: Partial<Omit<Eye
   const next: Eyewear = { ...getEyewear(ctx, id), ...stripUndefined(p), updatedAt: ctx.now() };
   guard(ctx, `Eyewear ${next.spec.id}`, () =>
     ctx
-      .sql('UPDATE eyewear SET tag=@tag, spec_json=@specJson, location=@location, quantity=@quantity, notes=@notes, updated_at=@updatedAt WHERE id=@id')
+      .sql('UPDATE eyewear SET tag=@tag, spec_json=@specJson, location=@location, quantity=@quantity, notes=@notes, inspected_on=@inspectedOn, condition=@condition, next_inspection=@nextInspection, updated_at=@updatedAt WHERE id=@id')
       .run(eyewearParams(next)),
   );
   return next;
@@ -488,8 +501,10 @@ export function roomInputFromRegister(ctx: StoreContext, roomId: Id): RoomInput 
   // Eyewear stored under an older, looser rule (e.g. an RB6 marking; EN 208 ends at RB5) would make
   // the calculation refuse every new assessment of the site: it is left out (no protection is
   // claimed for it) and stays on the shelf for correction. Lasers are all kept: a laser left out
-  // silently could hide a hazard; the workspace names what to fix.
+  // silently could hide a hazard; the workspace names what to fix. Damaged or withdrawn eyewear is
+  // never offered as protection (EN 207: damaged filters must not be used).
   const eyewear = listEyewear(ctx, room.siteId)
+    .filter((e) => e.condition !== 'damaged' && e.condition !== 'withdrawn')
     .map((e) => e.spec)
     .filter((spec) => EyewearSpecSchema.safeParse(spec).success);
   return { lasers, eyewear };

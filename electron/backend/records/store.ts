@@ -20,6 +20,7 @@ import { adoptInstallationKey } from './legacy-signatures.js';
 import { missingProtections } from './protections.js';
 import { defaultDatabasePath } from './paths.js';
 import * as R from './register.js';
+import { laserHistory } from './laser-history.js';
 import { saveWork } from './save-work.js';
 import { backupInto, backupStatus, defaultBackupFolder } from './safekeeping.js';
 import type {
@@ -40,6 +41,7 @@ import type {
   ImportSummary,
   LaserInstallation,
   LaserInstallationDraft,
+  LaserUse,
   OpenOptions,
   Person,
   PersonDraft,
@@ -104,6 +106,7 @@ class SqliteRecordStore implements RecordStore {
   createPerson(draft: PersonDraft): Person { return R.createPerson(this.ctx, draft); }
   updatePerson(id: Id, patch: Partial<PersonDraft>): Person { return R.updatePerson(this.ctx, id, patch); }
   deletePerson(id: Id): void { R.deletePerson(this.ctx, id); }
+  laserHistory(installationId: Id): LaserUse[] { return laserHistory(this.ctx, installationId); }
 
   roomInputFromRegister(roomId: Id): RoomInput { return R.roomInputFromRegister(this.ctx, roomId); }
   newAssessmentContent(roomId: Id, installationId: Id | null = null): AssessmentContent {

@@ -23,6 +23,7 @@ import type {
   ImportSummary,
   LaserInstallation,
   LaserInstallationDraft,
+  LaserUse,
   Person,
   PersonDraft,
   PersonKey,
@@ -67,6 +68,7 @@ export interface StoreInfo {
   readonly warnings: readonly string[];
 }
 
+
 export interface RecordStore {
   readonly info: StoreInfo;
   close(): void;
@@ -101,6 +103,8 @@ export interface RecordStore {
   createPerson(draft: PersonDraft): Person;
   updatePerson(id: Id, patch: Partial<PersonDraft>): Person;
   deletePerson(id: Id): void;
+  /** Every revision in the laser's room that evaluated it, newest first. */
+  laserHistory(installationId: Id): LaserUse[];
 
   /** Snapshot of the room's register as core input (in-service lasers, the site's eyewear). */
   roomInputFromRegister(roomId: Id): RoomInput;

@@ -200,12 +200,18 @@ export const LaserInputSchema = z
     });
   });
 
+export const ExposurePlaceSchema = z.strictObject({
+  place: z.string().trim().min(1, { message: 'name the place' }).max(200),
+  beamIds: z.array(z.string().min(1).max(100)).max(500),
+});
+
 export const RoomInputSchema = z.strictObject({
   ruleSet: RuleSetIdSchema.optional(),
   settings: LimitSettingsSchema.optional(),
   lasers: z.array(LaserInputSchema),
   eyewear: z.array(EyewearSpecSchema).optional(),
   plan: RoomPlanSchema.optional(),
+  exposurePlaces: z.array(ExposurePlaceSchema).max(500).optional(),
 });
 
 /**

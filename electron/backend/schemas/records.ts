@@ -102,12 +102,18 @@ export const LaserInstallationSchema = z.strictObject({
 });
 
 const quantity = z.number().int('must be a whole number').min(0, 'must be 0 or more').max(100_000, 'must be at most 100 000');
+export const EyewearConditionSchema = z.enum(['not recorded', 'good', 'worn', 'damaged', 'withdrawn'], {
+  message: 'must be one of: not recorded, good, worn, damaged, withdrawn',
+});
 export const EyewearDraftSchema = z.strictObject({
   siteId: IdSchema,
   spec: EyewearSpecSchema,
   location: text(200).optional(),
   quantity: quantity.optional(),
   notes: text(10_000).optional(),
+  inspectedOn: CalendarDateSchema.nullable().optional(),
+  condition: EyewearConditionSchema.optional(),
+  nextInspection: CalendarDateSchema.nullable().optional(),
 });
 export const EyewearPatchSchema = EyewearDraftSchema.omit({ siteId: true }).partial();
 export const EyewearSchema = z.strictObject({
@@ -117,6 +123,10 @@ export const EyewearSchema = z.strictObject({
   location: text(200),
   quantity,
   notes: text(10_000),
+  // exports written before schema version 5 have no upkeep fields: nothing recorded
+  inspectedOn: CalendarDateSchema.nullable().default(null),
+  condition: EyewearConditionSchema.default('not recorded'),
+  nextInspection: CalendarDateSchema.nullable().default(null),
   createdAt: TimestampSchema,
   updatedAt: TimestampSchema,
 });

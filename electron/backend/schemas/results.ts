@@ -154,6 +154,7 @@ export const EyewearVerdictSchema = z.strictObject({
 });
 
 export const AdditiveGroupSchema = z.strictObject({
+  place: z.string().optional(),
   tissue: TissueSchema,
   effect: z.string(),
   beamIds: z.array(z.string()),

@@ -12,7 +12,7 @@ describe('limits are printed rounded down, in the chosen habit', () => {
     ['25.4647908947', 'SI', '25.4 W/m²', 'down to 3 figures'],
     ['25.4647908947', 'ANSI', '2.54 mW/cm²', '25.46 W/m² = 2.546 mW/cm², down'],
     ['10', 'SI', '10 W/m²', 'exact stays exact'],
-    ['0.0199999', 'SI', '0.0199 W/m²', 'never rounded up to 0.02'],
+    ['0.0199999', 'SI', '19.9 mW/m²', 'never rounded up to 20 mW/m²; engineering prefix (BIPM SI brochure Table 7)'],
   ];
   it.each(cases)('E = %s W/m² (%s) -> %s (%s)', (value, units, printed) => {
     expect(fmt.limitE(value, units)).toBe(printed);

@@ -82,7 +82,11 @@ describe('migrating the version-1 fixture', () => {
       { version: 2, name: 'list_columns_and_audit_log' },
       { version: 3, name: 'personal_keys_and_chain' },
       { version: 4, name: 'revision_version' },
+      { version: 5, name: 'eyewear_upkeep' },
     ]);
+    // eyewear of the version-1 fixture: upkeep columns added, nothing recorded yet
+    const ew = raw.prepare('SELECT condition, inspected_on, next_inspection FROM eyewear').all() as Array<Record<string, unknown>>;
+    for (const e of ew) expect(e).toEqual({ condition: 'not recorded', inspected_on: null, next_inspection: null });
     expect(raw.prepare("SELECT action FROM audit_event WHERE action = 'revised'").all()).toHaveLength(1);
     raw.close();
   });

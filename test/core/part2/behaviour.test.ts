@@ -175,12 +175,13 @@ describe('room', () => {
       expect((e as InputError).field).toBe(field);
     }
   });
-  it('two equal beams on the same tissue and effect add: the sum is twice one fraction (additive rule, domain notes 2.4)', () => {
-    const one = evaluateRoom({ lasers: [{ id: 'A', name: 'a', beams: [beam(532, 0.0001, 'x')] }] });
+  it('equal beams on the same tissue and effect add: three give 1.5 times the sum of two (additive rule, domain notes 2.4)', () => {
+    // a single beam has no additive group (nothing to add); derived: n equal fractions sum to n times one
     const two = evaluateRoom({ lasers: [{ id: 'A', name: 'a', beams: [beam(532, 0.0001, 'x'), beam(532, 0.0001, 'y')] }] });
-    const g1 = one.additive.find((g) => g.tissue === 'eye' && g.effect.includes('retina, thermal'));
+    const three = evaluateRoom({ lasers: [{ id: 'A', name: 'a', beams: [beam(532, 0.0001, 'x'), beam(532, 0.0001, 'y'), beam(532, 0.0001, 'z')] }] });
     const g2 = two.additive.find((g) => g.tissue === 'eye' && g.effect.includes('retina, thermal'));
-    expect(Number(g2?.sumOfFractions)).toBeCloseTo(2 * Number(g1?.sumOfFractions), 9);
+    const g3 = three.additive.find((g) => g.tissue === 'eye' && g.effect.includes('retina, thermal'));
+    expect(Number(g3?.sumOfFractions)).toBeCloseTo(1.5 * Number(g2?.sumOfFractions), 9);
     expect(g2?.beamIds).toEqual(['x', 'y']);
   });
   it('largest hazard distance and required eyewear per wavelength', () => {

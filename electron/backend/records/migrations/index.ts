@@ -1,13 +1,16 @@
 /**
- * The numbered, forward-only migrations. Version N is the N-th entry; `PRAGMA user_version` holds
+ * The numbered, forward-only migrations, in increasing version order; `PRAGMA user_version` holds
  * the version applied, and `schema_migrations` lists each applied migration by number and name so
  * that a database whose history is not a prefix of this list is refused (it came from another
- * build). Never edit or reorder an entry once released: add a new one.
+ * build). Numbers are reserved per change while branches are worked on in parallel, so the list may
+ * skip a number until the branches meet; a database's history must still be a prefix of the list.
+ * Never edit or reorder an entry once released: add a new one.
  */
 import * as m0001 from './0001_initial.js';
 import * as m0002 from './0002_list_columns_and_audit_log.js';
 import * as m0003 from './0003_personal_keys_and_chain.js';
 import * as m0004 from './0004_revision_version.js';
+import * as m0005 from './0005_eyewear_upkeep.js';
 
 export interface Migration {
   readonly version: number;
@@ -20,6 +23,7 @@ export const MIGRATIONS: readonly Migration[] = [
   { version: 2, name: m0002.name, sql: m0002.sql },
   { version: 3, name: m0003.name, sql: m0003.sql },
   { version: 4, name: m0004.name, sql: m0004.sql },
+  { version: 5, name: m0005.name, sql: m0005.sql },
 ];
 
 export const LATEST_VERSION = MIGRATIONS[MIGRATIONS.length - 1]?.version ?? 0;
