@@ -13,7 +13,7 @@ import type { RecordStore } from '../../electron/backend/records/index.js';
 import ControlsScreen from '../../renderer/screens/ControlsScreen.svelte';
 import { session } from '../../renderer/lib/session.svelte.js';
 import { contentFrom } from '../../renderer/lib/draft.js';
-import { openTemp, registerRoom, STATEMENT, tempDir } from '../backend/records/helpers.js';
+import { makeSigner, openTemp, registerRoom, STATEMENT, tempDir } from '../backend/records/helpers.js';
 
 let t: ReturnType<typeof tempDir>;
 let store: RecordStore;
@@ -61,7 +61,7 @@ describe('accept all suggested, then exceptions', () => {
     if (!d) throw new Error('no draft');
     d.controls[0] = { ...d.controls[0]!, decision: 'not-applicable', reason: 'no such door in this room' };
     const created = store.createAssessment({ roomId, content: contentFrom(d) });
-    store.signAssessment(created.id, { name: 'Dr. Imre Calloway-Senn', role: 'Laser safety officer', statement: STATEMENT });
+    store.signAssessment(created.id, makeSigner(store).signOff(STATEMENT));
     const next = store.newAssessmentContent(roomId);
     expect(next.controls).toEqual(created.current.content.controls);
     expect(next.controls[0]).toMatchObject({ decision: 'not-applicable', reason: 'no such door in this room' });

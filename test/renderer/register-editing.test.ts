@@ -16,7 +16,7 @@ import type { RecordStore } from '../../electron/backend/records/index.js';
 import RoomDetail from '../../renderer/components/register/RoomDetail.svelte';
 import PeoplePanel from '../../renderer/components/register/PeoplePanel.svelte';
 import { session } from '../../renderer/lib/session.svelte.js';
-import { openTemp, registerRoom, STATEMENT, tempDir } from '../backend/records/helpers.js';
+import { makeSigner, openTemp, registerRoom, STATEMENT, tempDir } from '../backend/records/helpers.js';
 
 let t: ReturnType<typeof tempDir>;
 let store: RecordStore;
@@ -39,7 +39,7 @@ beforeAll(async () => {
   roomId = room.id;
   const a = store.createAssessment({ roomId, content: store.newAssessmentContent(roomId) });
   assessmentId = a.id;
-  store.signAssessment(a.id, { name: 'Dr. Imre Calloway-Senn', role: 'Laser safety officer', statement: STATEMENT });
+  store.signAssessment(a.id, makeSigner(store).signOff(STATEMENT));
   store.createPerson({ name: 'Ada Quillfeather', role: 'Deputy LSO' });
   const ctx: ApiContext = { shell: 'electron', version: '0.0.0-test', databasePath: store.info.path, store };
   const bridge: DesktopApi = {

@@ -7,7 +7,7 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { RecordStore } from '../../../electron/backend/records/index.js';
 import { describeChange, diffView, type ChangeRow } from '../../../renderer/lib/diff-view.js';
-import { openTemp, registerRoom, STATEMENT, tempDir } from './helpers.js';
+import { makeSigner, openTemp, registerRoom, STATEMENT, tempDir } from './helpers.js';
 
 let t: ReturnType<typeof tempDir>;
 let store: RecordStore;
@@ -18,7 +18,7 @@ beforeAll(() => {
   store = openTemp(t.dir);
   const { room } = registerRoom(store);
   const a = store.createAssessment({ roomId: room.id, content: store.newAssessmentContent(room.id) });
-  const signed = store.signAssessment(a.id, { name: 'Dr. Imre Calloway-Senn', role: 'Laser safety officer', statement: STATEMENT });
+  const signed = store.signAssessment(a.id, makeSigner(store).signOff(STATEMENT));
   const c = signed.current.content;
   const l0 = c.input.lasers[0];
   const b0 = l0?.beams[0];

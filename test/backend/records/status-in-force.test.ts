@@ -6,7 +6,7 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { RecordStore } from '../../../electron/backend/records/index.js';
 import { statusLine } from '../../../renderer/lib/record-status.js';
-import { openTemp, registerRoom, STATEMENT, tempDir } from './helpers.js';
+import { makeSigner, openTemp, registerRoom, STATEMENT, tempDir } from './helpers.js';
 
 let t: ReturnType<typeof tempDir>;
 let store: RecordStore;
@@ -36,7 +36,7 @@ describe('status line of an assessment on the Register', () => {
   });
 
   it('signed, then edited: the signed revision stays in force and the draft is open', () => {
-    const signed = store.signAssessment(assessmentId, { name: 'Dr. Imre Calloway-Senn', role: 'Laser safety officer', statement: STATEMENT });
+    const signed = store.signAssessment(assessmentId, makeSigner(store).signOff(STATEMENT));
     const date = signed.current.signature?.signedAt.slice(0, 10) ?? '';
     const s1 = store.listAssessments(roomId)[0];
     if (!s1) throw new Error('no assessment');
