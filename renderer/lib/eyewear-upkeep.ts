@@ -4,7 +4,7 @@
  * items are listed for replacement instead (never offered as protection).
  */
 import type { RegisterOverview } from '../../electron/api/contracts/register.js';
-import type { Eyewear } from '../../electron/backend/records/types.js';
+import type { Eyewear } from '../../electron/api/contracts/records.js';
 import { addDays } from './dates.js';
 
 export type InspectionState = 'overdue' | 'due' | 'ok' | 'no date' | 'out of use';

@@ -2,7 +2,7 @@
  * What is in force and what is open for an assessment, in the officer's words: "signed rev 1 in
  * force (2026-12-02)", "draft rev 2 open", and the review date with whether it is due.
  */
-import type { AssessmentSummary } from '../../electron/backend/records/types.js';
+import type { AssessmentSummary } from '../../electron/api/contracts/records.js';
 
 export interface StatusParts {
   /** "signed rev 1 in force (2026-12-02)", or null when nothing has been signed. */

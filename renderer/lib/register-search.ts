@@ -6,7 +6,7 @@
  */
 import { quantityText } from '../../core/index.js';
 import type { RegisterOverview } from '../../electron/api/contracts/register.js';
-import type { AssessmentSummary, Eyewear } from '../../electron/backend/records/types.js';
+import type { AssessmentSummary, Eyewear } from '../../electron/api/contracts/records.js';
 
 export type HitKind = 'room' | 'laser' | 'assessment' | 'eyewear' | 'person';
 
