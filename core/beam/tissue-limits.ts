@@ -13,6 +13,7 @@ import { DURATION_RANGE_S } from '../limits/rule-sets.js';
 import { addStep, newTrace, type Trace } from '../trace/trace.js';
 import { cachedExposureLimit, cachedPulsedLimit } from './limit-cache.js';
 import { fmt, rec } from './format.js';
+import { numberText, quantityText } from '../units/display.js';
 import { limitReported } from '../numeric/safe-rounding.js';
 
 export interface Criterion {
@@ -148,8 +149,8 @@ function computeTissueLimits(q: TissueQuery): TissueLimits {
     const conservative = q.settings?.conservative !== false;
     k = conservative ? tp.div(SHORTEST) : new Dec(1);
     const msg =
-      `Pulse duration ${fmt(tp)} s is shorter than the limit tables (${DURATION_RANGE_S[0]} s). The ${DURATION_RANGE_S[0]} s limit was used` +
-      (conservative ? `, scaled by t/1e-13 = ${fmt(k)} (conservative: the 100 fs limit read as a peak irradiance).` : ' unchanged (conservative mode off).') +
+      `Pulse duration ${quantityText(tp, 's')} is shorter than the limit tables (${quantityText(DURATION_RANGE_S[0], 's')}). The ${quantityText(DURATION_RANGE_S[0], 's')} limit was used` +
+      (conservative ? `, scaled by t/(100 fs) = ${numberText(k)} (conservative: the 100 fs limit read as a peak irradiance).` : ' unchanged (conservative mode off).') +
       ' Verify with the standard for ultrashort pulses.';
     warnings.push(msg);
     addStep(trace, { kind: 'conservative', label: 'Pulse shorter than the tables', detail: msg, confidence: 'ours' });

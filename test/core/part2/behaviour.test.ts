@@ -109,6 +109,8 @@ describe('warnings for unusual inputs', () => {
   it('pulse shorter than the limit tables (35 fs)', () => {
     const r = evaluateBeam({ wavelength_nm: 800, emission: { kind: 'pulsed', pulseEnergy_J: 1e-3, pulseDuration_s: 35e-15, repetitionRate_Hz: 1000 }, beam: { diameter_m: 0.007, divergence_rad: 5e-4, definition: '1/e2' } });
     expect(r.warnings.join(' ')).toMatch(/shorter than the limit tables/);
+    // Officer's words: durations in engineering notation, never 3.5e-14 s (issue: readable numbers).
+    expect(r.warnings.join(' ')).toMatch(/Pulse duration 35 fs is shorter than the limit tables \(100 fs\)\. The 100 fs limit was used, scaled by t\/\(100 fs\) = 0\.35 /);
     expect(r.mpe.conservativeReplacements).toContain('pulse-shorter-than-tables');
   });
   it('invisible beam with 0.25 s (trade fact aversion-response-time applies to visible light only)', () => {
