@@ -1,7 +1,7 @@
 // Numbers the officer sees (through evaluateBeam), one case per slip that a review once made by
 // hand in the core and that no earlier test noticed. Each case names its source or derivation;
 // the expected values are computed here from the published formula, never read back from the core.
-// Sources: domain notes = /work/shared/reference/domain.md (copied into the project's notes);
+// Sources: domain notes = the project's hazard-distance and eyewear reference notes (domain.md);
 // limit spec = the project's exposure-limit specification (exposure-limits.md).
 import { describe, expect, it } from 'vitest';
 import { evaluateBeam, type BeamInput } from '../../core/index.js';
