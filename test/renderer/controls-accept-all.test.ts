@@ -6,9 +6,7 @@
  */
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { fireEvent, render, screen } from '@testing-library/svelte';
-import { dispatch } from '../../electron/api/dispatch.js';
-import { handlerTable } from '../../electron/api/table.js';
-import type { ApiContext } from '../../electron/api/context.js';
+import { installStoreBridge } from './store-bridge.js';
 import type { RecordStore } from '../../electron/backend/records/index.js';
 import ControlsScreen from '../../renderer/screens/ControlsScreen.svelte';
 import { session } from '../../renderer/lib/session.svelte.js';
@@ -23,15 +21,7 @@ beforeAll(async () => {
   t = tempDir();
   store = openTemp(t.dir);
   roomId = registerRoom(store).room.id;
-  const ctx: ApiContext = { shell: 'electron', version: '0.0.0-test', databasePath: store.info.path, store };
-  window.beamwarden = {
-    invoke: (name, args) => dispatch(handlerTable, ctx, name, args) as never,
-    saveFile: async () => ({ saved: false }),
-    openForPrint: async () => undefined,
-    printScreen: async () => undefined,
-    openDataFolder: async () => undefined,
-    onMenuCommand: () => () => undefined,
-  };
+  installStoreBridge(store);
   await session.refreshOverview();
   await session.openRoom(roomId);
 });

@@ -7,9 +7,7 @@
  */
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { fireEvent, render, screen, within } from '@testing-library/svelte';
-import { dispatch } from '../../electron/api/dispatch.js';
-import { handlerTable } from '../../electron/api/table.js';
-import type { ApiContext } from '../../electron/api/context.js';
+import { installStoreBridge } from './store-bridge.js';
 import type { RecordStore } from '../../electron/backend/records/index.js';
 import RegisterScreen from '../../renderer/screens/RegisterScreen.svelte';
 import { addDays, today } from '../../renderer/lib/dates.js';
@@ -30,15 +28,7 @@ beforeAll(async () => {
   store.updateEyewear(a.id, { inspectedOn: addDays(today(), -400), condition: 'good', nextInspection: addDays(today(), -35) });
   store.updateEyewear(b.id, { inspectedOn: addDays(today(), -350), condition: 'worn', nextInspection: addDays(today(), 10) });
   store.updateEyewear(c.id, { inspectedOn: today(), condition: 'damaged', nextInspection: null });
-  const ctx: ApiContext = { shell: 'electron', version: '0.0.0-test', databasePath: store.info.path, store };
-  window.beamwarden = {
-    invoke: (name, args) => dispatch(handlerTable, ctx, name, args) as never,
-    saveFile: async () => ({ saved: false }),
-    openForPrint: async () => undefined,
-    printScreen: async () => undefined,
-    openDataFolder: async () => undefined,
-    onMenuCommand: () => () => undefined,
-  };
+  installStoreBridge(store);
   await session.refreshOverview();
 });
 afterAll(() => {

@@ -5,9 +5,7 @@
  */
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { fireEvent, render, screen, within } from '@testing-library/svelte';
-import { dispatch } from '../../electron/api/dispatch.js';
-import { handlerTable } from '../../electron/api/table.js';
-import type { ApiContext } from '../../electron/api/context.js';
+import { installStoreBridge } from './store-bridge.js';
 import type { RecordStore } from '../../electron/backend/records/index.js';
 import type { RegisterOverview } from '../../electron/api/contracts/register.js';
 import RegisterScreen from '../../renderer/screens/RegisterScreen.svelte';
@@ -24,15 +22,7 @@ beforeAll(async () => {
   t = tempDir();
   store = openTemp(t.dir);
   store.seedDemo();
-  const ctx: ApiContext = { shell: 'electron', version: '0.0.0-test', databasePath: store.info.path, store };
-  window.beamwarden = {
-    invoke: (name, args) => dispatch(handlerTable, ctx, name, args) as never,
-    saveFile: async () => ({ saved: false }),
-    openForPrint: async () => undefined,
-    printScreen: async () => undefined,
-    openDataFolder: async () => undefined,
-    onMenuCommand: () => () => undefined,
-  };
+  installStoreBridge(store);
   await session.refreshOverview();
   if (!session.overview) throw new Error('no overview');
   overview = session.overview;
