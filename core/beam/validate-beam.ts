@@ -7,7 +7,7 @@
 import { InputError } from '../errors.js';
 import type { BeamInput, RuleSetId } from '../model/inputs.js';
 import { INPUT_RULES, TEXT_RULES, inRange, rangeWords, textProblem, type NumberRule, type TextRule } from '../model/input-rules.js';
-import { RULE_SET_IDS } from '../limits/rule-sets.js';
+import { DEFAULT_RULE_SET, RULE_SET_IDS } from '../limits/rule-sets.js';
 
 function isObject(x: unknown): x is Record<string, unknown> {
   return typeof x === 'object' && x !== null && !Array.isArray(x);
@@ -68,7 +68,7 @@ export const SINGLE_MODE_NEEDS_MFD = 'the mode-field diameter is needed for a si
 export function validateBeamInput(input: unknown, prefix = '', roomRuleSet?: RuleSetId): RuleSetId {
   const p = (f: string): string => `${prefix}${f}`;
   const b = requireObject(prefix ? prefix.replace(/\.$/, '') : '(beam input)', input);
-  let ruleSet: RuleSetId = roomRuleSet ?? 'icnirp2013';
+  let ruleSet: RuleSetId = roomRuleSet ?? DEFAULT_RULE_SET;
   if (b['ruleSet'] !== undefined) {
     ruleSet = choice(p('ruleSet'), b['ruleSet'], RULE_SET_IDS);
     if (roomRuleSet && ruleSet !== roomRuleSet) {

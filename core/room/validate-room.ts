@@ -5,7 +5,7 @@
  */
 import { InputError } from '../errors.js';
 import type { EyewearSpec, RoomInput, RuleSetId } from '../model/inputs.js';
-import { RULE_SET_IDS } from '../limits/rule-sets.js';
+import { DEFAULT_RULE_SET, RULE_SET_IDS } from '../limits/rule-sets.js';
 import { EN207_MODES, INPUT_RULES, LASER_CLASS_LABELS as CLASSES, SCALE_NUMBERS, TEXT_RULES, type TextRule } from '../model/input-rules.js';
 import { requireRule, requireText } from '../beam/validate-beam.js';
 
@@ -122,7 +122,7 @@ export function validateRoomShape(input: unknown): RuleSetId {
       });
     });
   }
-  return ruleSet ?? 'icnirp2013';
+  return ruleSet ?? DEFAULT_RULE_SET;
 }
 
 export function isRoomInput(x: unknown): x is RoomInput {
