@@ -75,6 +75,8 @@ export interface PulsedLimitResult {
   } | null;
   /** Pulses inside T_i / T_min counted as one (null when none arrive that close). */
   readonly grouping: {
+    /** The rule set's name for the grouping time (T_i in icnirp2013, T_min in eu2006). */
+    readonly time: 'T_i' | 'T_min';
     readonly groupedPulses: string;
     readonly groupDuration_s: string;
     readonly why: string;
@@ -275,7 +277,7 @@ export function pulsedExposureLimit(q: PulsedLimitQuery): PulsedLimitResult {
     const why =
       `pulse period ${fmt(new Dec(1).div(f))} s is shorter than ${gt.name} = ${fmt(gt.T_g)} s: ` +
       `${g.groupedPulses.toString()} pulses inside ${fmt(g.groupDuration_s)} s are one pulse; their summed energy is compared with the limit for ${fmt(g.groupDuration_s)} s`;
-    grouping = { groupedPulses: g.groupedPulses.toString(), groupDuration_s: recordString(g.groupDuration_s), why, perPulse_H_Jm2: recordString(perPulse), limit: groupLimit };
+    grouping = { time: gt.name, groupedPulses: g.groupedPulses.toString(), groupDuration_s: recordString(g.groupDuration_s), why, perPulse_H_Jm2: recordString(perPulse), limit: groupLimit };
     addStep(trace, { kind: 'row', label: `Grouping inside ${gt.name}`, detail: `${why}: ${fmt(new Dec(groupLimit.H_Jm2))} / ${g.groupedPulses.toString()}`, value: fmt(perPulse), unit: 'J/m² per pulse', source: gt.source, confidence: gt.confidence });
     // The merged pulse is a pulse for rule 1: the lower of the two per-pulse values counts.
     if (perPulse.lt(rule1)) rule1 = perPulse;
