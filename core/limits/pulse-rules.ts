@@ -33,6 +33,7 @@ import { conservativeOn, evaluateFactors, type EdgeSide, type FactorSet } from '
 import { exposureLimit, type ExposureLimitResult, type LimitCandidate } from './exposure-limit.js';
 import { DEFAULT_RULE_SET, DURATION_RANGE_S, RULE_SET_NAME, ruleSetTable } from './rule-sets.js';
 import { groupsAmong, groupWithin, pulsesIn, type Grouping } from './pulse-counting.js';
+import { intervalPosition } from './intervals.js';
 
 export interface PulsedLimitQuery {
   readonly ruleSet?: RuleSetId;
@@ -177,8 +178,9 @@ function groupingTime(table: RuleSetTable, pf: FactorSet, lambda: number): Group
 
 /** The counting-window row whose band holds the wavelength: [lo, hi), the top of the last band included. */
 function windowAt(windows: readonly CountingWindow[], lambda: number): CountingWindow | undefined {
+  const x = new Dec(lambda);
   const last = windows[windows.length - 1];
-  return windows.find((w) => lambda >= w.band_nm[0] && (lambda < w.band_nm[1] || (w === last && lambda === w.band_nm[1])));
+  return windows.find((w) => intervalPosition(x, w.band_nm, w === last) === 'inside');
 }
 
 /** Window in which N is counted for rule 3: min(T, cap) of the rule set's window for this band. */
