@@ -5,7 +5,7 @@
  * required (domain notes 1.1, rule 1).
  */
 import { InputError } from '../errors.js';
-import type { BeamInput, RuleSetId } from '../model/inputs.js';
+import type { RuleSetId } from '../model/inputs.js';
 import { INPUT_RULES, TEXT_RULES, inRange, rangeWords, textProblem, type NumberRule, type TextRule } from '../model/input-rules.js';
 import { DEFAULT_RULE_SET, RULE_SET_IDS } from '../limits/rule-sets.js';
 
@@ -163,9 +163,4 @@ function validateViewing(v: Record<string, unknown>, prefix: string): void {
   }
   if (v['attenuation_per_m'] !== undefined) requireRule(p('attenuation_per_m'), v['attenuation_per_m'], R.attenuation_per_m);
   if (v['closestApproach_m'] !== undefined) requireRule(p('closestApproach_m'), v['closestApproach_m'], R.closestApproach_m);
-}
-
-/** Narrowing helper for callers that validated first. */
-export function asBeamInput(x: unknown): BeamInput {
-  return x as BeamInput;
 }
