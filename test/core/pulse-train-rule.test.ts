@@ -71,6 +71,14 @@ const CASES: Case[] = [
     rule3: 1.5e-4 * 50000 ** -0.25,
     applies: true,
   },
+  {
+    why: 'ICNIRP 1300 nm, 500 mrad source, 10 ns at 200 kHz over 0.25 s: 3 pulses inside T_i = 13 µs are one; C_P multiplies the RETINAL thermal group limit 90 (13 µs)^0.75 C_C C_E / 3, not the lower corneal (skin-row) group limit',
+    source: 'ILSC2019 (read): C_P for retinal thermal limits only; ICNIRP 2013 90 t^0.75 C_C C_E, C_C = 8 (stricter alternative), C_E = alpha²/(alpha_min alpha_max), skin 200 C_A (from memory; = EU Table 2.4, read)',
+    input: { ruleSet: 'icnirp2013', wavelength_nm: 1300, sourceAngle_rad: 0.5, exposureDuration_s: 0.25, emission: train(1e-9, 1e-8, 2e5), beam },
+    rule1: 200 * 5,
+    rule3: ((90 * 13e-6 ** 0.75 * 8 * (500 ** 2 / (1.5 * 5))) / 3) * 16667 ** -0.25,
+    applies: true,
+  },
 ];
 
 describe('rule 3 (C_P) as the report prints it (evaluateBeam, eye)', () => {
