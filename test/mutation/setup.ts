@@ -1,6 +1,7 @@
-// Each test starts from empty core memos. Stryker switches mutants inside one test process, and a
-// result memoised while another mutant (or none) was active would be returned unchanged: the mutant
-// would "survive" a test that plainly kills it when run alone (seen on core/limits/pulse-rules.ts).
+// Each test starts from empty core memos, so that a result memoised in an earlier run (another
+// mutant, or none) can never stand in for the mutated code: a mutant behind a memo must be tested,
+// not remembered. (Vitest's per-file module isolation already resets them between files; this also
+// covers the tests inside one file.)
 import { beforeEach } from 'vitest';
 import { clearCoreCaches } from '../../core/index.js';
 
