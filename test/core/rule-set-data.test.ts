@@ -84,6 +84,18 @@ const CASES: Case[] = [
     trainApplies: true,
   },
   {
+    field: 'countingWindows: the top of the last window (1 mm) belongs to it',
+    why: 'the same train at 1 mm, the end of the tables: N still counted within 10 s',
+    source: 'BGI 832 (read); EU Table 2.2 2600 nm - 1 mm rows (read); the tables run to 1 mm inclusive (limit specification section 0)',
+    ruleSet: 'eu2006',
+    wavelength_nm: 1e6,
+    exposureDuration_s: 100,
+    emission: pulses(1e-3, 1e-6, 10),
+    governing: 'pulse-train',
+    H: farIr(1e-6) * 100 ** -0.25,
+    trainApplies: true,
+  },
+  {
     field: 'cp.appliesTo (eu2006 excludes cornea-lens-photochemical)',
     why: '250 nm pulses: the photochemical limit 30 J/m² is not reduced by C_P; the dose over 100 s (1000 pulses) governs',
     source: 'EU Table 2.6 rule 3 (read): thermal limits only; EU Table 2.2 180-302.5 nm 30 J/m² (read)',
@@ -163,6 +175,21 @@ describe('each rule-set data field changes the per-pulse eye limit the officer s
     expect(m.governingRule).toBe(c.governing);
     expect(rel(m.H_Jm2, c.H)).toBeLessThan(1e-9);
     expect(m.rules.find((r) => r.rule === 'pulse-train')?.applies).toBe(c.trainApplies);
+  });
+});
+
+describe('fields read for the skin and below the T_min table (evaluateBeam)', () => {
+  it('skin: T2 is taken for a point (alpha = 0 for skin), so N is counted within 10 s even for a 100 mrad source: EU skin 1064 nm, 0.2 s pulses at 1 Hz over 100 s', () => {
+    // EU Table 2.4 skin 1.1e4 C_A t^0.25 (read), C_A = 5; Table 2.6 rule 3 (read); BGI 832: N within T2 (read); T2 = 10 s at alpha < 1.5 mrad (Table 2.5, read)
+    const r = evaluateBeam({ ruleSet: 'eu2006', wavelength_nm: 1064, sourceAngle_rad: 0.1, exposureDuration_s: 100, emission: pulses(1e-3, 0.2, 1), beam });
+    const train = r.skinMpe.rules.find((x) => x.rule === 'pulse-train');
+    expect(train?.applies).toBe(true);
+    expect(rel(train?.H_Jm2, 1.1e4 * 5 * 0.2 ** 0.25 * 10 ** -0.25)).toBeLessThan(1e-9);
+  });
+  it('EU below 315 nm: 0.1 ns pulses at 2 GHz are grouped inside 1 ns (the 315-400 nm T_min, the table gives none below), said in rule 1', () => {
+    // EU Table 2.2 note d sums UV pulses inside T_min (read); limit specification 5.6 (ours: the 1 ns value below 315 nm)
+    const r = evaluateBeam({ ruleSet: 'eu2006', wavelength_nm: 250, exposureDuration_s: 1, emission: pulses(1e-12, 1e-10, 2e9), beam });
+    expect(r.mpe.rules.find((x) => x.rule === 'single-pulse')?.detail).toMatch(/pulse groups inside T_min counted as one pulse/);
   });
 });
 
