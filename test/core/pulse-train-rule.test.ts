@@ -91,3 +91,25 @@ describe('rule 3 (C_P) as the report prints it (evaluateBeam, eye)', () => {
     expect(rel(r3?.H_Jm2, c.rule3)).toBeLessThan(1e-9);
   });
 });
+
+describe('the officer settings reach every limit the pulse rules look up', () => {
+  // ICNIRP 2013 400-700 nm, 1e-13 to 1e-11 s: 1e-3 C_E J/m² (from memory, uncertain); its stricter
+  // alternative 1.5e-4 C_E (the EU value, Table 2.2, read) is used in conservative mode only.
+  const single100fs = (settings?: BeamInput['settings']): BeamInput => ({
+    ruleSet: 'icnirp2013',
+    wavelength_nm: 532,
+    emission: { kind: 'pulsed', pulseEnergy_J: 1e-12, pulseDuration_s: 1e-13 },
+    beam,
+    ...(settings ? { settings } : {}),
+  });
+  it('conservative mode (default): 1.5e-4 J/m², the replaced row named', () => {
+    const m = evaluateBeam(single100fs()).mpe;
+    expect(rel(m.H_Jm2, 1.5e-4)).toBeLessThan(1e-9);
+    expect(m.conservativeReplacements).toContain('H-E-VIS-1');
+  });
+  it('conservative mode off: 1e-3 J/m², nothing replaced', () => {
+    const m = evaluateBeam(single100fs({ conservative: false })).mpe;
+    expect(rel(m.H_Jm2, 1e-3)).toBeLessThan(1e-9);
+    expect(m.conservativeReplacements).toEqual([]);
+  });
+});
