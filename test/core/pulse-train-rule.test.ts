@@ -14,7 +14,7 @@
 //    400-700 nm rows 1.5e-4 C_E (stricter alternative of the uncertain 1e-13 to 1e-11 s row),
 //    2e-3 C_E for 1e-9 to 5e-6 s, 18 t^0.75 C_E above.
 import { describe, expect, it } from 'vitest';
-import { evaluateBeam, type BeamInput } from '../../core/index.js';
+import { evaluateBeam, pulsedExposureLimit, type BeamInput } from '../../core/index.js';
 
 const rel = (got: string | number | undefined, want: number): number => Math.abs(Number(got) / want - 1);
 const beam: BeamInput['beam'] = { diameter_m: 0.002, divergence_rad: 0.001, definition: '1/e' };
@@ -111,5 +111,18 @@ describe('the officer settings reach every limit the pulse rules look up', () =>
     const m = evaluateBeam(single100fs({ conservative: false })).mpe;
     expect(rel(m.H_Jm2, 1e-3)).toBeLessThan(1e-9);
     expect(m.conservativeReplacements).toEqual([]);
+  });
+});
+
+describe('a pulse group counts for rule 1 only where it is the lower per-pulse limit (pulsedExposureLimit, used by the additive evaluation)', () => {
+  it('ICNIRP 10.6 µm, 100 fs pulses at 20 MHz over 1 µs: 2 pulses inside T_i = 100 ns give 5600 (1e-7)^0.25 / 2 = 49.8 J/m² per pulse, above the 0.01 J/m² single-pulse limit, which governs', () => {
+    // ICNIRP 2013 / IEC 60825-1:2014 far-IR rows (from memory): below 1 ns E = 1e11 W/m² (the stricter
+    // alternative, = EU Table 2.2, read), 5600 t^0.25 J/m² from 1e-7 s; T_i = 1e-7 s (= EU T_min, read).
+    // Rule 2: 5600 (1e-6)^0.25 / 20 pulses = 8.85 J/m²; rule 3 does not apply (not retinal; ILSC2019, read).
+    const r = pulsedExposureLimit({ ruleSet: 'icnirp2013', tissue: 'eye', wavelength_nm: 10600, pulseDuration_s: 1e-13, repetitionRate_Hz: 2e7, exposureDuration_s: 1e-6 });
+    expect(rel(r.grouping?.perPulse_H_Jm2, (5600 * 1e-7 ** 0.25) / 2)).toBeLessThan(1e-9);
+    expect(rel(r.averagePower?.H_Jm2, (5600 * 1e-6 ** 0.25) / 20)).toBeLessThan(1e-9);
+    expect(r.governingRule).toBe('single-pulse');
+    expect(rel(r.perPulse_H_Jm2, 1e11 * 1e-13)).toBeLessThan(1e-9);
   });
 });
