@@ -126,3 +126,13 @@ describe('a pulse group counts for rule 1 only where it is the lower per-pulse l
     expect(rel(r.perPulse_H_Jm2, 1e11 * 1e-13)).toBeLessThan(1e-9);
   });
 });
+
+describe('entries replaced by their stricter value in any rule are named to the officer', () => {
+  it('ICNIRP skin 350 nm, 10 Hz over 30 000 s: the average-power limit uses the stricter UV-A skin value (1e4 J/m² in total, not 10 W/m²), and says so', () => {
+    // ICNIRP 2013 / IEC 60825-1:2014 skin UV-A 1e3-3e4 s: 10 W/m² (from memory, uncertain); stricter
+    // alternative 1e4 J/m² in total (the eye's UV-A limit, EU Table 2.2, read) used until verified.
+    const m = evaluateBeam({ ruleSet: 'icnirp2013', wavelength_nm: 350, exposureDuration_s: 30000, emission: train(1e-9, 1e-8, 10), beam }).skinMpe;
+    expect(rel(m.rules.find((r) => r.rule === 'average-power')?.H_Jm2, 1e4 / 3e5)).toBeLessThan(1e-9);
+    expect(m.conservativeReplacements).toContain('H-S-UVA-long');
+  });
+});
