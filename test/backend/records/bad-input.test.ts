@@ -131,24 +131,24 @@ describe('store methods validate their arguments', () => {
     const { room } = registerRoom(target, 'B2.16');
     const c = target.newAssessmentContent(room.id);
     const before = snapshot(targetPath);
-    expect(() => target.createAssessment({ roomId: room.id, content: { ...c, colour: 'red' } as typeof c })).toThrow(/Assessment content is not valid: \(document\): unknown field\(s\) "colour"/);
-    expect(() =>
+    await expect(target.createAssessment({ roomId: room.id, content: { ...c, colour: 'red' } as typeof c })).rejects.toThrow(/Assessment content is not valid: \(document\): unknown field\(s\) "colour"/);
+    await expect(
       target.createAssessment({ roomId: room.id, content: { ...c, eyewearChosen: [{ eyewearTag: 'EW-Z', beamIds: [], note: '' }] } }),
-    ).toThrow(/eyewearChosen\[0\]\.eyewearTag: no eyewear "EW-Z"/);
+    ).rejects.toThrow(/eyewearChosen\[0\]\.eyewearTag: no eyewear "EW-Z"/);
     expect(snapshot(targetPath)).toBe(before);
   });
 
   it('duplicate room code in a site', () => {
     const site = target.createSite({ name: 'Invented Annex' });
     target.createRoom({ siteId: site.id, code: 'X1' });
-    expect(() => target.createRoom({ siteId: site.id, code: 'X1' })).toThrow(/Room X1: already exists/);
+    await expect(target.createRoom({ siteId: site.id, code: 'X1' })).rejects.toThrow(/Room X1: already exists/);
   });
 
   it('empty sign-off fields', () => {
     const { room } = registerRoom(target, 'A0.07');
     const a = target.createAssessment({ roomId: room.id, content: target.newAssessmentContent(room.id) });
     const signer = makeSigner(target, 'A. Officer');
-    expect(() => target.signAssessment(a.id, { ...signer.signOff(), statement: ' ' })).toThrow(/Sign-off is not valid: [Ss]tatement: must not be empty/);
+    await expect(target.signAssessment(a.id, { ...signer.signOff(), statement: ' ' })).rejects.toThrow(/Sign-off is not valid: [Ss]tatement: must not be empty/);
   });
 });
 

@@ -80,7 +80,7 @@ describe('the database refuses changes to signed content (raw SQL, triggers of m
   });
 
   it('the store itself answers an attempt with a clear error', () => {
-    expect(() => store.signAssessment(signed.id, signer.signOff('z'))).toThrow(/already signed/);
+    await expect(store.signAssessment(signed.id, signer.signOff('z'))).rejects.toThrow(/already signed/);
   });
 });
 

@@ -94,7 +94,7 @@ describe('beam ids: the register refuses what the calculation would refuse later
     const site2 = store.createSite({ name: 'Harwick Vale annexe' });
     const room2 = store.createRoom({ siteId: site2.id, code: 'E1.01', name: 'Optics workshop' });
     store.createInstallation({ roomId: room2.id, laser: laser({ name: 'First laser' }) });
-    expect(() => store.createInstallation({ roomId: room2.id, laser: laser({ name: 'Second laser' }) })).toThrow(/beam id "b1" is already used by "First laser"/);
+    await expect(store.createInstallation({ roomId: room2.id, laser: laser({ name: 'Second laser' }) })).rejects.toThrow(/beam id "b1" is already used by "First laser"/);
     // the room's next assessment still evaluates
     expect(store.createAssessment({ roomId: room2.id, content: store.newAssessmentContent(room2.id) }).current.status).toBe('draft');
   });
@@ -120,6 +120,6 @@ describe('refusals name the record in officer words, never a path', () => {
     if (!first) throw new Error('the room has a laser');
     const twin = { ...first, id: 'twin', name: 'Second green laser', beams: first.beams.map((b) => ({ ...b, label: 'twin beam' })) };
     const bad = { ...content, input: { ...content.input, lasers: [first, twin] } };
-    expect(() => store.createAssessment({ roomId: room.id, content: bad })).toThrow(/The calculation refused the input\. Laser "Second green laser", beam "twin beam": Beam id must be an id not used by another beam of the room/);
+    await expect(store.createAssessment({ roomId: room.id, content: bad })).rejects.toThrow(/The calculation refused the input\. Laser "Second green laser", beam "twin beam": Beam id must be an id not used by another beam of the room/);
   });
 });

@@ -122,7 +122,7 @@ describe('record round trip', () => {
     const { room } = registerRoom(store);
     const a = store.createAssessment({ roomId: room.id, content: store.newAssessmentContent(room.id) });
     store.signAssessment(a.id, makeSigner(store, 'A. Officer').signOff());
-    expect(() => store.discardDraft(a.id)).toThrow(/no open draft/);
+    await expect(store.discardDraft(a.id)).rejects.toThrow(/no open draft/);
     store.saveAssessment(a.id, { ...store.getAssessment(a.id).current.content, notes: 'x' });
     store.discardDraft(a.id);
     expect(store.listRevisions(a.id).map((r) => r.status)).toEqual(['signed']);

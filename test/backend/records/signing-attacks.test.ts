@@ -328,7 +328,7 @@ describe('attacks on signed records fail verification with a readable finding', 
     raw.close();
     env.store.saveAssessment(env.assessmentId, weakened(env.store.getAssessment(env.assessmentId).current.content));
     // The sealed blob is bound to its own key id (authenticated data): it does not even open.
-    expect(() => env.store.signAssessment(env.assessmentId, { personId: env.officer.person.id, passphrase: 'forger passphrase 123', statement: STATEMENT })).toThrow(
+    await expect(env.store.signAssessment(env.assessmentId, { personId: env.officer.person.id, passphrase: 'forger passphrase 123', statement: STATEMENT })).rejects.toThrow(
       /The passphrase is not correct for Dr\. Imre Calloway-Senn's signing key\. Nothing was signed or changed\./,
     );
     env.store.close();
