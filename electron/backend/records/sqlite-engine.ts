@@ -30,6 +30,16 @@ export function translateSqliteError(e: unknown, what: string, dbPath?: string):
   return e;
 }
 
+/** What the records logic needs from SQLite besides the port (context.ts EngineSeam). */
+export function sqliteSeam(port: SqliteSqlPort, path: string): EngineSeam {
+  return {
+    location: path,
+    insertionOrder: 'rowid',
+    translateError: (e, what, storage) => translateSqliteError(e, what, storage ? path : undefined),
+    missingProtections: () => port.exclusive((db) => missingProtections(db)),
+  };
+}
+
 export interface SqliteEngineOptions {
   readonly nativeBinding?: string;
   readonly readonly?: boolean;
@@ -48,12 +58,8 @@ export function openSqliteEngine(path: string, options: SqliteEngineOptions = {}
     throw e;
   }
   const port = new SqliteSqlPort(opened.db);
-  const seam: EngineSeam = {
-    location: path,
-    insertionOrder: 'rowid',
-    translateError: (e, what, storage) => translateSqliteError(e, what, storage ? path : undefined),
-    missingProtections: () => port.exclusive((db) => missingProtections(db)),
-  };
+  let closing: Promise<void> | null = null;
+  const seam = sqliteSeam(port, path);
   return {
     port,
     seam,
@@ -64,12 +70,10 @@ export function openSqliteEngine(path: string, options: SqliteEngineOptions = {}
     backup: (dest) => port.exclusive((db) => backupTo(db, dest, nativeBinding)),
     backupInto: (folder) => port.exclusive((db) => backupInto(db, folder, nativeBinding)),
     backupStatus: (folder) => port.exclusive((db) => backupStatus(db, folder)),
-    async close() {
-      try {
-        await port.close();
-      } finally {
+    // Closing twice is a no-op (the verify command closes before handing the file to its workers).
+    close: () =>
+      (closing ??= port.close().finally(() => {
         releaseLock();
-      }
-    },
+      })),
   };
 }
