@@ -108,7 +108,7 @@ describe('migrating the version-1 fixture', () => {
     await again.close();
   });
 
-  it('a failing migration is rolled back whole and names the backup', () => {
+  it('a failing migration is rolled back whole and names the backup', async () => {
     // Sabotage: a table that migration 0002 wants to create already exists.
     const raw = new Database(dbPath);
     raw.exec('CREATE TABLE audit_event (x INTEGER)');
@@ -135,14 +135,14 @@ describe('opening refuses what it must not touch', () => {
     expect(err.message).toMatch(new RegExp(`schema version ${SCHEMA_VERSION + 1}, newer than this Beamwarden build understands \\(${SCHEMA_VERSION}\\)`));
   });
 
-  it('a migration history that is not a prefix of ours', () => {
+  it('a migration history that is not a prefix of ours', async () => {
     const raw = new Database(dbPath);
     raw.prepare("UPDATE schema_migrations SET name = 'something_else' WHERE version = 1").run();
     raw.close();
-    expect(await errorOf(() => openRecordStore({ path: dbPath })).message).toMatch(/does not match this build's/);
+    expect((await errorOf(() => openRecordStore({ path: dbPath }))).message).toMatch(/does not match this build's/);
   });
 
-  it('a file that is not a database', () => {
+  it('a file that is not a database', async () => {
     const p = join(t.dir, 'notes.sqlite');
     writeFileSync(p, 'these are not the records you are looking for'.repeat(200));
     const err = await errorOf(() => openRecordStore({ path: p }));
@@ -150,15 +150,15 @@ describe('opening refuses what it must not touch', () => {
     expect(err.message).toMatch(/is not a database file .*restore it from a backup/);
   });
 
-  it('an SQLite database of another program', () => {
+  it('an SQLite database of another program', async () => {
     const p = join(t.dir, 'other.sqlite');
     const raw = new Database(p);
     raw.exec('CREATE TABLE things (id INTEGER)');
     raw.close();
-    expect(await errorOf(() => openRecordStore({ path: p })).message).toMatch(/not a Beamwarden one/);
+    expect((await errorOf(() => openRecordStore({ path: p }))).message).toMatch(/not a Beamwarden one/);
   });
 
-  it('a damaged database fails the integrity check at open with a clear error', () => {
+  it('a damaged database fails the integrity check at open with a clear error', async () => {
     // Overwrite one page in the middle of the file (page size 4096) with garbage.
     const fd = openSync(dbPath, 'r+');
     writeSync(fd, Buffer.alloc(4096, 0x5a), 0, 4096, 4096 * 8);
@@ -169,7 +169,7 @@ describe('opening refuses what it must not touch', () => {
     expect(err.message).toMatch(/backup/);
   });
 
-  it('read-only open of an old database does not migrate it', () => {
+  it('read-only open of an old database does not migrate it', async () => {
     const err = await errorOf(() => openRecordStore({ path: dbPath, readonly: true }));
     expect(err.code).toBe('migration-failed');
     const raw = new Database(dbPath, { readonly: true });

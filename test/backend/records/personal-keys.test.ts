@@ -78,7 +78,7 @@ describe('personal signing keys', () => {
     const officer = await makeSigner(store);
     const head = await makeSigner(store, 'Prof. Lena Vossberg');
     expect(head.key).toMatchObject({ trusted: true, isAnchor: false });
-    expect(await refusal(() => store.signAssessment(assessmentId, { personId: head.person.id, passphrase: 'wrong for the lab head', statement: STATEMENT })).message).toMatch(
+    expect((await refusal(() => store.signAssessment(assessmentId, { personId: head.person.id, passphrase: 'wrong for the lab head', statement: STATEMENT }))).message).toMatch(
       /not correct for Prof\. Lena Vossberg's signing key/,
     );
     const signed = await store.signAssessment(assessmentId, head.signOff());
@@ -93,18 +93,18 @@ describe('personal signing keys', () => {
     const newcomer = await store.createPerson({ name: 'Tomas Reyl', role: 'Deputy laser safety officer' });
     const key = await store.createPersonKey({ personId: newcomer.id, passphrase: 'newcomer passphrase', passphraseAgain: 'newcomer passphrase' });
     expect(key.trusted).toBe(false);
-    expect(await refusal(() => store.signAssessment(assessmentId, { personId: newcomer.id, passphrase: 'newcomer passphrase', statement: STATEMENT })).message).toMatch(
+    expect((await refusal(() => store.signAssessment(assessmentId, { personId: newcomer.id, passphrase: 'newcomer passphrase', statement: STATEMENT }))).message).toMatch(
       /Tomas Reyl's key [0-9a-f ]+ is not admitted to this installation's trust list .*A person whose key is trusted must endorse it first/,
     );
-    expect(await refusal(() => store.endorseKey({ keyId: key.keyId, endorserPersonId: officer.person.id, endorserPassphrase: 'wrong' })).message).toMatch(/passphrase is not correct/);
+    expect((await refusal(() => store.endorseKey({ keyId: key.keyId, endorserPersonId: officer.person.id, endorserPassphrase: 'wrong' }))).message).toMatch(/passphrase is not correct/);
     expect(await store.endorseKey({ keyId: key.keyId, endorserPersonId: officer.person.id, endorserPassphrase: PASSPHRASE })).toMatchObject({ trusted: true });
     expect((await store.signAssessment(assessmentId, { personId: newcomer.id, passphrase: 'newcomer passphrase', statement: STATEMENT })).current.signature?.name).toBe('Tomas Reyl');
   });
 
   it('the passphrase twice must agree; a short one is refused with the field named', async () => {
     const p = await store.createPerson({ name: 'Ada Quillfeather', role: 'Laser safety officer' });
-    expect(await refusal(() => store.createPersonKey({ personId: p.id, passphrase: 'long enough one', passphraseAgain: 'long enough two' })).message).toMatch(/The two passphrases are not the same/);
-    expect(await refusal(() => store.createPersonKey({ personId: p.id, passphrase: 'short', passphraseAgain: 'short' })).message).toMatch(/[Pp]assphrase: must be at least 10 characters/);
+    expect((await refusal(() => store.createPersonKey({ personId: p.id, passphrase: 'long enough one', passphraseAgain: 'long enough two' }))).message).toMatch(/The two passphrases are not the same/);
+    expect((await refusal(() => store.createPersonKey({ personId: p.id, passphrase: 'short', passphraseAgain: 'short' }))).message).toMatch(/[Pp]assphrase: must be at least 10 characters/);
     expect(await store.listPersonKeys()).toEqual([]);
   });
 
@@ -112,7 +112,7 @@ describe('personal signing keys', () => {
     const officer = await makeSigner(store);
     const next = 'a new passphrase for the key';
     await store.changeKeyPassphrase({ personId: officer.person.id, passphrase: PASSPHRASE, newPassphrase: next, newPassphraseAgain: next });
-    expect(await refusal(() => store.signAssessment(assessmentId, officer.signOff())).message).toMatch(/passphrase is not correct/);
+    expect((await refusal(() => store.signAssessment(assessmentId, officer.signOff()))).message).toMatch(/passphrase is not correct/);
     expect((await store.signAssessment(assessmentId, { ...officer.signOff(), passphrase: next })).current.status).toBe('signed');
   });
 
@@ -123,7 +123,7 @@ describe('personal signing keys', () => {
     expect(retired).toMatchObject({ retiredReason: 'Passphrase may have been seen by a visitor' });
     expect(retired.retiredAt).not.toBeNull();
     await store.saveAssessment(assessmentId, { ...(await store.getAssessment(assessmentId)).current.content, notes: 'after retirement' });
-    expect(await refusal(() => store.signAssessment(assessmentId, officer.signOff())).message).toBe(
+    expect((await refusal(() => store.signAssessment(assessmentId, officer.signOff()))).message).toBe(
       "Dr. Imre Calloway-Senn's signing key is retired; a retired key cannot sign. Create a new key in the register (People).",
     );
     expect(await store.verify(assessmentId)).toMatchObject({ ok: true, revisionNo: 1 });
@@ -169,7 +169,7 @@ describe('signing any record with a personal key (reusable beyond assessments)',
       const ctx = makeContext({ q, engine: sqliteSeam(q, dbPath), keyDir: join(t.dir, 'keys'), evaluate: evaluateRoom, calculatedWith: CALCULATED_WITH });
       // An invented limit-table row check as the payload (the shape is the caller's).
       const row = { table: 'example-table', row: 'R-1', checkedAgainst: 'derived: invented for this test' };
-      await expect(signAsPerson(ctx, officer.person.id, 'wrong passphrase', (s) => ({ row, checkedAt: s.signedAt }))).rejects.toThrow(/passphrase is not correct/);
+      (await expect(await signAsPerson(ctx, officer.person.id, 'wrong passphrase', (s) => ({ row, checkedAt: s.signedAt })))).rejects.toThrow(/passphrase is not correct/);
       const before = new Date().toISOString();
       const signed = await signAsPerson(ctx, officer.person.id, PASSPHRASE, (s) => ({ row, by: s.personId, checkedAt: s.signedAt }));
       expect(signed.signer).toMatchObject({ personId: officer.person.id, name: 'Dr. Imre Calloway-Senn', keyId: officer.key.keyId });

@@ -121,7 +121,7 @@ describe('at start', () => {
     expect(err.message).toMatch(/chattr -i/);
   });
 
-  it('a folder that does not exist (drive not connected): said so, and not created elsewhere', () => {
+  it('a folder that does not exist (drive not connected): said so, and not created elsewhere', async () => {
     const path = join(t.dir, 'usb-stick-not-mounted', 'Beamwarden', 'records.sqlite');
     const err = await errorOf(() => open(path));
     expect(err.code).toBe('storage');
