@@ -67,7 +67,7 @@ describe('drafts that differ are both kept', () => {
     const doc = await there.exportSite(site.id);
     const first = await here.importDocument(doc);
     expect((await here.getAssessment(made.id)).current.content.notes).toBe('there (saved later)');
-    expect(first.keptDrafts.map(async (k) => [k.whose, (await here.getAssessment(k.keptAs)).current.content.notes])).toEqual([['yours', 'here']]);
+    expect(await Promise.all(first.keptDrafts.map(async (k) => [k.whose, (await here.getAssessment(k.keptAs)).current.content.notes]))).toEqual([['yours', 'here']]);
     const before = (await here.listAssessments(room.id)).length;
     const second = await here.importDocument(doc);
     expect(second.keptDrafts).toEqual([]);
@@ -83,7 +83,7 @@ describe('drafts that differ are both kept', () => {
     await edit(here, made.id, 'here (saved later)');
     const first = await here.importDocument(doc);
     expect((await here.getAssessment(made.id)).current.content.notes).toBe('here (saved later)');
-    expect(first.keptDrafts.map(async (k) => [k.whose, (await here.getAssessment(k.keptAs)).current.content.notes])).toEqual([['imported', 'there']]);
+    expect(await Promise.all(first.keptDrafts.map(async (k) => [k.whose, (await here.getAssessment(k.keptAs)).current.content.notes]))).toEqual([['imported', 'there']]);
     expect((await here.importDocument(doc)).keptDrafts).toEqual([]);
     expect(await here.listAssessments(room.id)).toHaveLength(2);
   });
@@ -100,7 +100,7 @@ describe('drafts that differ are both kept', () => {
     expect((await here.getAssessment(made.id)).current).toMatchObject({ revisionNo: 2, status: 'signed' });
     // Arrives intact; "there" is another installation whose key "here" has not admitted: unverified, not signed.
     expect(await here.verify(made.id)).toMatchObject({ signatureValid: true, fingerprintMatches: true, resultsMatchCore: true, chainIntact: true, keyTrusted: false });
-    expect(summary.keptDrafts.map(async (k) => (await here.getAssessment(k.keptAs)).current.content.notes)).toEqual(['revised here']);
+    expect(await Promise.all(summary.keptDrafts.map(async (k) => (await here.getAssessment(k.keptAs)).current.content.notes))).toEqual(['revised here']);
     expect(room.id).toBeTruthy();
   });
 });

@@ -169,7 +169,7 @@ describe('signing any record with a personal key (reusable beyond assessments)',
       const ctx = makeContext({ q, engine: sqliteSeam(q, dbPath), keyDir: join(t.dir, 'keys'), evaluate: evaluateRoom, calculatedWith: CALCULATED_WITH });
       // An invented limit-table row check as the payload (the shape is the caller's).
       const row = { table: 'example-table', row: 'R-1', checkedAgainst: 'derived: invented for this test' };
-      (await expect(await signAsPerson(ctx, officer.person.id, 'wrong passphrase', (s) => ({ row, checkedAt: s.signedAt })))).rejects.toThrow(/passphrase is not correct/);
+      await expect(signAsPerson(ctx, officer.person.id, 'wrong passphrase', (s) => ({ row, checkedAt: s.signedAt }))).rejects.toThrow(/passphrase is not correct/);
       const before = new Date().toISOString();
       const signed = await signAsPerson(ctx, officer.person.id, PASSPHRASE, (s) => ({ row, by: s.personId, checkedAt: s.signedAt }));
       expect(signed.signer).toMatchObject({ personId: officer.person.id, name: 'Dr. Imre Calloway-Senn', keyId: officer.key.keyId });

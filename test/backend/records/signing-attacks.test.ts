@@ -312,7 +312,7 @@ describe('attacks on signed records fail verification with a readable finding', 
     const env = await installation();
     const raw = new Database(env.dbPath);
     // The forger seals their own key under the officer's key id (knowing their own passphrase).
-    const sealed = (async () => {
+    const sealed = await (async () => {
       const dir = tempDir('bw-sealed-');
       cleanups.push(() => dir.cleanup());
       const s = await openTemp(dir.dir);

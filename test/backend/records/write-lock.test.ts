@@ -106,7 +106,7 @@ describe('restore while the database is in use', () => {
 
     const other = await startOther();
     await other.save('Saved after the backup');
-    (await expect(await restoreBackup({ from: backup, to: dbPath }))).rejects.toMatchObject({ code: 'in-use', message: expect.stringMatching(/^Not restored: .*Nothing was changed\.$/) });
+    await expect(restoreBackup({ from: backup, to: dbPath })).rejects.toMatchObject({ code: 'in-use', message: expect.stringMatching(/^Not restored: .*Nothing was changed\.$/) });
     await other.save('Saved after the refused restore');
     const reader = await openRecordStore({ path: dbPath, readonly: true });
     expect((await reader.listSites()).map((s) => s.name).sort()).toEqual(['In the backup', 'Saved after the backup', 'Saved after the refused restore']);
@@ -117,8 +117,8 @@ describe('restore while the database is in use', () => {
     const store = await openRecordStore({ path: dbPath, keyDir: join(t.dir, 'keys') });
     const backup = join(t.dir, 'copy.sqlite');
     await store.backup(backup);
-    (await expect(await restoreBackup({ from: backup, to: dbPath }))).rejects.toMatchObject({ code: 'in-use' });
+    await expect(restoreBackup({ from: backup, to: dbPath })).rejects.toMatchObject({ code: 'in-use' });
     await store.close();
-    (await expect(await restoreBackup({ from: backup, to: dbPath }))).resolves.toMatchObject({ path: dbPath });
+    await expect(restoreBackup({ from: backup, to: dbPath })).resolves.toMatchObject({ path: dbPath });
   });
 });
