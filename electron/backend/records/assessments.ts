@@ -620,7 +620,9 @@ export async function signDraftWith(ctx: StoreContext, id: Id, statementText: st
   const st = signed.payload;
   await write(ctx, 'Sign-off', async (ctx) => {
     const again = await newestRevisionRow(ctx, id);
-    if (again.id !== draft.id || again.status !== 'draft') throw new RecordError('conflict', 'The assessment changed while signing; try again');
+    // The save counter too: a save that landed between reading the draft and this transaction
+    // changed the content the signature covers (requests of one host now interleave at awaits).
+    if (again.id !== draft.id || again.status !== 'draft' || again.version !== draft.version) throw new RecordError('conflict', 'The assessment changed while signing; try again');
     if (await newestSignedLink(ctx, a) !== previousLink) throw new RecordError('conflict', 'Another revision was signed meanwhile; try again');
     const resultsZ = encodeResults(results);
     if (!resultsZ.equals(draft.results_z) || draft.calculated_with !== ctx.calculatedWith) {
