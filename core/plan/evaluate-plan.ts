@@ -32,7 +32,7 @@ export const PLAN_METHOD: readonly string[] = [
   `Direct-beam zones follow the drawn beam path up to the NOHD (rounded up, or the upper bound from the input tolerances where larger), stopped by beam dumps, targets, walls and barriers; doors and windows are taken as open.`,
   `Their width is where the exposure of a Gaussian beam exceeds the limit (derived from the beam diameter, divergence and NOHD), plus ${PATH_MARGIN_M.mul(1000).toString()} mm on each side for the accuracy of the drawing.`,
   `Diffuse-reflection zones are drawn around a circle of the diffuse NHZ (rounded up) about every mirror and target the beam reaches, every point where it ends on a wall or barrier, and every reflection point marked on the plan (a ${CIRCLE_CORNERS}-sided polygon outside the circle).`,
-  'Walls are taken as opaque to scattered light: a diffuse-reflection zone is cut at the walls of a convex room outline, and at the enclosure a reflection point lies in; a door or window the zone reaches is reported.',
+  'Walls, curtains and barriers are taken as opaque to scattered light: a diffuse-reflection zone covers only what its reflection point can see in a straight line, cut at the room outline (of any shape), interior walls, curtains, barriers and the enclosure the point lies in, 1 mm beyond the surface along the line of sight; a spot on a wall or barrier is seen from the side the beam comes from; a door or window the zone reaches is reported.',
   'Every zone is widened by 1 mm before its corners are rounded to the millimetre, so no zone is drawn smaller than computed. Heights are not modelled except for the eye-level check of a stated beam height.',
 ];
 

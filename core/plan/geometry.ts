@@ -200,6 +200,33 @@ function signedArea2(poly: readonly P[]): Dec {
   return s;
 }
 
+/**
+ * Is the outline a simple polygon: no two sides cross or touch, except neighbours at their shared
+ * corner? (Zones, sight lines and the inside test all assume one; a bow-tie outline is refused.)
+ */
+export function isSimpleOutline(poly: readonly P[]): boolean {
+  const es = edges(poly);
+  const n = es.length;
+  for (let i = 0; i < n; i++) {
+    for (let j = i + 1; j < n; j++) {
+      const a = es[i];
+      const b = es[j];
+      if (!a || !b) continue;
+      const neighbours = j === i + 1 || (i === 0 && j === n - 1);
+      if (neighbours) {
+        // Neighbours share one corner; they must not fold back over each other.
+        const shared = j === i + 1 ? a[1] : a[0];
+        const other = j === i + 1 ? b[1] : b[0];
+        const own = j === i + 1 ? a[0] : a[1];
+        if (cross(sub(own, shared), sub(other, shared)).isZero() && dot(sub(own, shared), sub(other, shared)).gt(0)) return false;
+        continue;
+      }
+      if (segmentsMeet(a[0], a[1], b[0], b[1])) return false;
+    }
+  }
+  return true;
+}
+
 /** Is the polygon convex (no turn against the others)? */
 export function isConvex(poly: readonly P[]): boolean {
   let sign = 0;

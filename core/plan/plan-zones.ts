@@ -13,7 +13,8 @@ import { Dec } from '../numeric/decimal.js';
 import { distanceReported } from '../beam/format.js';
 import type { BeamInput } from '../model/inputs.js';
 import type { BeamResult } from '../model/results.js';
-import { DecGeo, add, box, circleOutside, clipToConvex, corridor, edges, insideBox, isConvex, pointInPolygon, rayHitsSegment, scale, unit, type P } from './geometry.js';
+import { DecGeo, add, box, circleOutside, corridor, edges, insideBox, pointInPolygon, rayHitsSegment, scale, sub, unit, type P } from './geometry.js';
+import { visibleRegion } from './visibility.js';
 import type { PlanPointResult, PlanZone, RoomPlan } from './plan-model.js';
 import { toP, type Leg } from './trace-path.js';
 
@@ -178,28 +179,39 @@ export function directZones(plan: RoomPlan, beam: BeamOnPlan, legs: readonly Leg
   return { zones, run: { points, length: Dec.min(H, last ? last.end : new Dec(0)) } };
 }
 
-/** Reflection points a beam reaches: mirrors and targets on its path, where it ends on a wall or barrier, and marked points. */
-export function reflectionPointsOf(plan: RoomPlan, laserId: string, legs: readonly Leg[]): Array<{ key: string; at: P; what: string }> {
-  const out: Array<{ key: string; at: P; what: string }> = [];
-  legs.forEach((leg, i) => {
-    if (leg.endsWith === 'mirror' || leg.endsWith === 'target') out.push({ key: `p${i + 1}`, at: leg.to, what: leg.endId });
-    if (leg.endsWith === 'wall' || leg.endsWith === 'barrier') out.push({ key: `p${i + 1}`, at: leg.to, what: `where the beam meets ${leg.endsWith === 'wall' ? 'the wall' : 'the barrier'}` });
-  });
-  for (const r of plan.reflectionPoints) if (r.laserId === laserId) out.push({ key: r.id, at: toP(r.at), what: r.label });
-  return out;
-}
+/** How far in front of a wall or barrier a spot on it is seen from, m (ours). */
+const SURFACE_STANDOFF_M = new Dec('0.001');
 
 /**
- * Walls are opaque to scattered light: a diffuse zone is cut at the room's walls (a convex outline
- * only; otherwise it is left whole) and, for a reflection point inside an enclosure, at the
- * enclosure. Doors and windows in the walls are reported when a zone reaches them.
+ * Reflection points a beam reaches: mirrors and targets on its path, where it ends on a wall or
+ * barrier, and marked points. A spot on a wall or barrier is seen from 1 mm in front of it, on the
+ * side the beam comes from (ours: the surface scatters back into the room, not through itself).
  */
-function clipDiffuse(plan: RoomPlan, centre: P, shape: P[]): P[] {
+export function reflectionPointsOf(plan: RoomPlan, laserId: string, legs: readonly Leg[]): Array<{ key: string; at: P; seenFrom: P; what: string }> {
+  const out: Array<{ key: string; at: P; seenFrom: P; what: string }> = [];
+  legs.forEach((leg, i) => {
+    if (leg.endsWith === 'mirror' || leg.endsWith === 'target') out.push({ key: `p${i + 1}`, at: leg.to, seenFrom: leg.to, what: leg.endId });
+    if (leg.endsWith === 'wall' || leg.endsWith === 'barrier') {
+      const front = sub(leg.to, scale(unit(leg.from, leg.to), Dec.min(SURFACE_STANDOFF_M, leg.end.sub(leg.start).div(2))));
+      out.push({ key: `p${i + 1}`, at: leg.to, seenFrom: front, what: `where the beam meets ${leg.endsWith === 'wall' ? 'the wall' : 'the barrier'}` });
+    }
+  });
+  for (const r of plan.reflectionPoints) if (r.laserId === laserId) out.push({ key: r.id, at: toP(r.at), seenFrom: toP(r.at), what: r.label });
+  return out;
+}
+/**
+ * Walls, curtains and barriers are opaque to scattered light: a diffuse zone is what the reflection
+ * point sees of its circle past the room outline (of any shape), the interior walls, the curtains and
+ * barriers, and the walls of the enclosure it lies in (core/plan/visibility.ts). Doors and windows in
+ * the walls are reported when a zone reaches them.
+ */
+function screensFor(plan: RoomPlan, centre: P): Array<readonly [P, P]> {
+  const screens: Array<readonly [P, P]> = [...edges(plan.outline.map(toP))];
+  for (const w of plan.walls) screens.push([toP(w.a), toP(w.b)]);
+  for (const b of plan.barriers) screens.push([toP(b.a), toP(b.b)]);
   const encl = plan.enclosures.find((e) => pointInPolygon(centre, box(toP(e.min), toP(e.max))));
-  const bounds = encl ? box(toP(encl.min), toP(encl.max)) : plan.outline.map(toP);
-  if (!encl && (!isConvex(bounds) || !pointInPolygon(centre, bounds))) return shape;
-  const clipped = clipToConvex(shape, bounds, ROUNDING_PAD_M);
-  return clipped.length >= 3 ? clipped : shape;
+  if (encl) screens.push(...edges(box(toP(encl.min), toP(encl.max))));
+  return screens;
 }
 
 export function diffuseZones(plan: RoomPlan, beam: BeamOnPlan, legs: readonly Leg[]): ZoneWithShape[] {
@@ -213,7 +225,7 @@ export function diffuseZones(plan: RoomPlan, beam: BeamOnPlan, legs: readonly Le
         beamId: beam.result.beamId,
         laserId: beam.laserId,
         label: `Diffuse reflection of ${beam.result.label} at ${p.what}`,
-        shape: clipDiffuse(plan, p.at, circleOutside(p.at, R.add(ROUNDING_PAD_M), CIRCLE_CORNERS)),
+        shape: visibleRegion(p.seenFrom, circleOutside(p.at, R.add(ROUNDING_PAD_M), CIRCLE_CORNERS), screensFor(plan, p.seenFrom), ROUNDING_PAD_M),
         radius_m: R.toString(),
       },
       plan,
