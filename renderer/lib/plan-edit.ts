@@ -105,6 +105,40 @@ export function movePoint(plan: RoomPlan, key: string, to: PlanPoint): RoomPlan 
   return next as unknown as RoomPlan;
 }
 
+export type OutlineOwner = 'outline' | 'controlledArea';
+
+function outlineOf(plan: RoomPlan, owner: OutlineOwner): readonly PlanPoint[] {
+  return owner === 'outline' ? plan.outline : (plan.controlledArea?.outline ?? []);
+}
+
+function withOutline(plan: RoomPlan, owner: OutlineOwner, outline: PlanPoint[]): RoomPlan {
+  if (owner === 'outline') return { ...plan, outline };
+  return plan.controlledArea ? { ...plan, controlledArea: { ...plan.controlledArea, outline } } : plan;
+}
+
+/** A new corner halfway along the side from corner `index` to the next one (an L-shaped room starts here). */
+export function addCorner(plan: RoomPlan, owner: OutlineOwner, index: number): RoomPlan {
+  const pts = [...outlineOf(plan, owner)];
+  const a = pts[index];
+  const b = pts[(index + 1) % pts.length];
+  if (!a || !b) return plan;
+  pts.splice(index + 1, 0, p(toCm((a.x_m + b.x_m) / 2), toCm((a.y_m + b.y_m) / 2)));
+  return withOutline(plan, owner, pts);
+}
+
+/** The outline without corner `index`; an outline keeps at least 3 corners. */
+export function removeCorner(plan: RoomPlan, owner: OutlineOwner, index: number): RoomPlan {
+  const pts = outlineOf(plan, owner);
+  if (pts.length <= 3 || index < 0 || index >= pts.length) return plan;
+  return withOutline(plan, owner, pts.filter((_, i) => i !== index));
+}
+
+/** "outline.3" → the owner and index of a corner handle, or null for any other point. */
+export function cornerOf(key: string): { owner: OutlineOwner; index: number } | null {
+  const m = /^(outline|controlledArea\.outline)\.(\d+)$/.exec(key);
+  return m ? { owner: m[1] === 'outline' ? 'outline' : 'controlledArea', index: Number(m[2]) } : null;
+}
+
 function nextId(plan: RoomPlan, prefix: string): string {
   const used = new Set<string>([
     ...plan.doors.map((x) => x.id),
