@@ -169,6 +169,39 @@ export function planSvg(plan: RoomPlan, result: PlanResult | undefined, o: PlanS
     if (Math.abs(a[0] - b[0]) < Math.abs(a[1] - b[1])) text(X(mx) + (mx > midX ? -fs * 0.6 : fs * 0.6), Y(my) + fs * 0.35, t, mx > midX ? 'end' : 'start', colour, bold);
     else text(X(mx), Y(my) + (my > midY ? fs * 1.4 : -fs * 0.6), t, 'middle', colour, bold);
   };
+  // The reader of a door notice stands outside the door: a black dot there, on the side away from the
+  // middle of the room, and "You are here" beside it, outside where it fits in the drawing, else inside.
+  const youAreHere = (a: Pt, b: Pt) => {
+    const mx = (a[0] + b[0]) / 2;
+    const my = (a[1] + b[1]) / 2;
+    const vertical = Math.abs(a[0] - b[0]) < Math.abs(a[1] - b[1]);
+    const [ox, oy]: Pt = vertical ? [mx >= midX ? 1 : -1, 0] : [0, my >= midY ? 1 : -1];
+    const off = Math.min(fs * 0.9, margin * s * 0.55);
+    const cx = X(mx) + ox * off;
+    const cy = Y(my) - oy * off;
+    out.push(`<circle cx="${n(cx)}" cy="${n(cy)}" r="${n(Math.min(fs * 0.45, off * 0.8))}" fill="#000000"/>`);
+    const words = 'You are here';
+    const w = words.length * fs * 0.53;
+    let x: number;
+    let y: number;
+    let anchor: 'start' | 'middle' | 'end';
+    if (vertical) {
+      const outX = cx + ox * fs * 0.7;
+      const fits = ox > 0 ? outX + w <= W - 2 : outX - w >= 2;
+      x = fits ? outX : X(mx) - ox * fs * 0.7;
+      anchor = (fits ? ox > 0 : ox < 0) ? 'start' : 'end';
+      y = Y(my) + fs * 0.35;
+    } else {
+      const outY = oy > 0 ? cy - fs * 0.7 : cy + fs * 1.2;
+      const fits = outY - fs >= 1 && outY <= Hd - 2;
+      y = fits ? outY : oy > 0 ? Y(my) + fs * 1.5 : Y(my) - fs * 0.7;
+      x = Math.min(Math.max(X(mx), w / 2 + 2), W - w / 2 - 2);
+      anchor = 'middle';
+    }
+    const left = anchor === 'start' ? x : anchor === 'end' ? x - w : x - w / 2;
+    out.push(`<rect x="${n(left - 1)}" y="${n(y - fs * 0.85)}" width="${n(w + 2)}" height="${n(fs * 1.1)}" fill="#FFFFFF" fill-opacity="0.85"/>`);
+    text(x, y, words, anchor, '#000000', true);
+  };
   for (const w of plan.windows) {
     seg(P(w.a), P(w.b), `stroke="#FFFFFF" stroke-width="${o.compact ? 2.4 : 3.2}"`);
     seg(P(w.a), P(w.b), `stroke="${PLAN_INK.window}" stroke-width="${o.compact ? 1.6 : 2.2}" stroke-dasharray="4 1.5"`);
@@ -179,9 +212,12 @@ export function planSvg(plan: RoomPlan, result: PlanResult | undefined, o: PlanS
     const here = o.entranceId === d.id;
     seg(P(d.a), P(d.b), `stroke="#FFFFFF" stroke-width="${o.compact ? 2.4 : 3.2}"`);
     seg(P(d.a), P(d.b), `stroke="${here ? '#000000' : PLAN_INK.door}" stroke-width="${here ? 3 : o.compact ? 1.6 : 2.2}" stroke-dasharray="${here ? '0' : '1.5 1.5'}"`);
-    if (o.compact && !here) continue;
-    const label = here ? (o.compact ? 'THIS DOOR' : `${d.label}: this door`) : `${d.label}${d.interlocked ? ' (interlocked)' : ''}`;
-    inwardLabel(P(d.a), P(d.b), label, here ? '#000000' : flagged.has(d.id) ? '#B3261E' : PLAN_INK.door, here || flagged.has(d.id));
+    if (here) {
+      youAreHere(P(d.a), P(d.b));
+      continue;
+    }
+    if (o.compact) continue;
+    inwardLabel(P(d.a), P(d.b), `${d.label}${d.interlocked ? ' (interlocked)' : ''}`, flagged.has(d.id) ? '#B3261E' : PLAN_INK.door, flagged.has(d.id));
   }
   for (const b of plan.barriers) {
     seg(P(b.a), P(b.b), `stroke="${PLAN_INK.barrier}" stroke-width="1.6" stroke-dasharray="3 2"`);
