@@ -79,7 +79,7 @@ export function evaluatePlan(plan: RoomPlan, input: RoomInput, beams: readonly B
   const suggestions: string[] = [];
   for (const f of findings) if (f.suggestion && !suggestions.includes(f.suggestion)) suggestions.push(f.suggestion);
   return {
-    zones: zones.map(({ shape: _shape, ...z }) => z),
+    zones: zones.map(({ shape: _shape, box: _box, ...z }) => z),
     runs,
     findings,
     suggestions,
@@ -166,7 +166,7 @@ function beamFindings(plan: RoomPlan, b: BeamOnPlan, legs: readonly Leg[], dz: r
 }
 
 function placeFindings(plan: RoomPlan, zones: readonly ZoneWithShape[], out: PlanFinding[]): void {
-  const open = zones.filter((z) => !z.enclosed).map((z) => ({ z, box: boxOf(z.shape) }));
+  const open = zones.filter((z) => !z.enclosed).map((z) => ({ z, box: z.box }));
   const seg = (kind: 'door' | 'window', id: string, label: string, a: P, b: P, interlocked?: boolean) => {
     const box = boxOf([a, b]);
     const inZones = open.filter((o) => !boxesApart(box, o.box, 0) && segmentTouchesPolygon(a, b, o.z.shape)).map((o) => o.z);
@@ -240,7 +240,7 @@ function controlledAreaFindings(plan: RoomPlan, zones: readonly ZoneWithShape[],
   // A zone cut at a wall may overlap the wall line by its 1 mm pad: 5 mm is taken as on the boundary (ours).
   const tol = new Dec('0.005');
   const rect = asRectangle(outline);
-  const inside = (x: ZoneWithShape) => (rect ? insideBox(x.shape, rect.min, rect.max, tol) : insideWithin(x.shape, outline, tol));
+  const inside = (x: ZoneWithShape) => (rect ? insideBox(x.shape, rect.min, rect.max, tol, x.box) : insideWithin(x.shape, outline, tol));
   const out_ = (x: ZoneWithShape) => !x.enclosed && !inside(x);
   const outside = firstPerBeamKind(zones.filter(out_));
   for (const z of outside) {

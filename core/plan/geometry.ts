@@ -318,8 +318,8 @@ export function boxesApart(a: Box, b: Box, gap: number): boolean {
  * Is the polygon inside the axis-aligned box widened by `tol`? Decided in ordinary numbers where the
  * answer is clear by more than 1 µm, exactly otherwise (a polygon is inside a box when its corners are).
  */
-export function insideBox(poly: readonly P[], min: P, max: P, tol: Dec): boolean {
-  const b = boxOf(poly);
+export function insideBox(poly: readonly P[], min: P, max: P, tol: Dec, polyBox?: Box): boolean {
+  const b = polyBox ?? boxOf(poly);
   const t = tol.toNumber();
   const lo = { x: min.x.toNumber() - t, y: min.y.toNumber() - t };
   const hi = { x: max.x.toNumber() + t, y: max.y.toNumber() + t };

@@ -13,7 +13,7 @@
  * any other non-convex room.
  */
 import { Dec } from '../numeric/decimal.js';
-import { DecGeo, add, boxOf, boxesApart, cross, distanceSqToSegment, dot, scale, sub, type P } from './geometry.js';
+import { DecGeo, add, boxOf, boxesApart, cross, distanceSqToSegment, dot, scale, sub, type Box, type P } from './geometry.js';
 
 /** A screen closer than this to the point is the surface the point lies on; it hides nothing (ours: the safe side). */
 const ON_SURFACE_M2 = new Dec('1e-12');
@@ -22,33 +22,83 @@ const JOINED_M = 1e-6;
 
 type Seg = readonly [P, P];
 
+/** An opaque segment ready for the sweep: its free ends already taken in (see `screensOf`), with its box. */
+export interface ScreenSeg {
+  readonly a: P;
+  readonly b: P;
+  readonly box: Box;
+  /** The ends in ordinary numbers, for the quick tests (never deciding alone). */
+  readonly f: Floats;
+}
+
+interface Floats {
+  readonly ax: number;
+  readonly ay: number;
+  readonly bx: number;
+  readonly by: number;
+  readonly box: Box;
+}
+
 interface Screen {
   readonly a: P;
   readonly b: P;
   /** Zone polygon edges bound the region; screen hits are moved `pad` beyond the surface. */
   readonly screen: boolean;
+  readonly f: Floats;
+}
+
+function floatsOf(a: P, b: P): Floats {
+  const ax = a.x.toNumber();
+  const ay = a.y.toNumber();
+  const bx = b.x.toNumber();
+  const by = b.y.toNumber();
+  return { ax, ay, bx, by, box: { x0: Math.min(ax, bx), y0: Math.min(ay, by), x1: Math.max(ax, bx), y1: Math.max(ay, by) } };
+}
+
+/**
+ * Opaque segments for `visibleRegion`: the free end of a segment (one not joined to another) is
+ * taken `pad` shorter, so its shadow is never drawn too wide; a segment no longer than that is dropped.
+ */
+export function screensOf(segs: readonly Seg[], pad: Dec): ScreenSeg[] {
+  const out: ScreenSeg[] = [];
+  for (const s of segs) {
+    const t = trimFreeEnds(s, segs, pad);
+    if (t) {
+      const f = floatsOf(t[0], t[1]);
+      out.push({ a: t[0], b: t[1], box: f.box, f });
+    }
+  }
+  return out;
 }
 
 /**
  * The region of `zone` (a polygon convex about `c` with corners under 180° apart as seen from `c`)
  * seen from `c` past the opaque `screens`. Where the line of sight meets a screen, the region is
  * carried `pad` further along it, so a door or window in that wall is reached and rounding the
- * drawn corners cannot pull the region back inside the visible part. The free end of a screen
- * (one not joined to another screen) is taken `pad` shorter, so its shadow is never drawn too wide.
+ * drawn corners cannot pull the region back inside the visible part.
  */
-export function visibleRegion(c: P, zone: readonly P[], screens: readonly Seg[], pad: Dec): P[] {
+export function visibleRegion(c: P, zone: readonly P[], screens: readonly ScreenSeg[], pad: Dec): P[] {
   const zoneBox = boxOf(zone);
-  const near = screens.filter(([a, b]) => !boxesApart(boxOf([a, b]), zoneBox, 0) && distanceSqToSegment(c, a, b).gt(ON_SURFACE_M2));
+  const near = screens.filter((s) => !boxesApart(s.box, zoneBox, 0) && distanceSqToSegment(c, s.a, s.b).gt(ON_SURFACE_M2));
   if (near.length === 0) return [...zone];
-  const trimmed = near.map((s) => trimFreeEnds(s, near, pad)).filter((s): s is Seg => s !== null);
-  if (trimmed.length === 0) return [...zone];
 
-  const all: Screen[] = [...zoneEdges(zone).map(([a, b]) => ({ a, b, screen: false })), ...trimmed.map(([a, b]) => ({ a, b, screen: true }))];
-  const floats = all.map((s) => ({ ax: s.a.x.toNumber(), ay: s.a.y.toNumber(), bx: s.b.x.toNumber(), by: s.b.y.toNumber(), box: boxOf([s.a, s.b]) }));
+  const zf = zone.map((q) => [q.x.toNumber(), q.y.toNumber()] as const);
+  const zoneSides: Screen[] = zone.map((a, i) => {
+    const k = (i + 1) % zone.length;
+    const b = zone[k] as P;
+    const [ax, ay] = zf[i] as readonly [number, number];
+    const [bx, by] = zf[k] as readonly [number, number];
+    return { a, b, screen: false, f: { ax, ay, bx, by, box: { x0: Math.min(ax, bx), y0: Math.min(ay, by), x1: Math.max(ax, bx), y1: Math.max(ay, by) } } };
+  });
+  const all: Screen[] = [...zoneSides, ...near.map((s) => ({ a: s.a, b: s.b, screen: true, f: s.f }))];
+  const floats = all.map((s) => s.f);
 
   // Directions that start or end a sector.
   const marks: P[] = [...zone];
-  for (const s of trimmed) for (const q of s) if (!boxesApart(boxOf([q]), zoneBox, 0)) marks.push(q);
+  for (const s of near) {
+    if (!boxesApart({ x0: s.f.ax, y0: s.f.ay, x1: s.f.ax, y1: s.f.ay }, zoneBox, 0)) marks.push(s.a);
+    if (!boxesApart({ x0: s.f.bx, y0: s.f.by, x1: s.f.bx, y1: s.f.by }, zoneBox, 0)) marks.push(s.b);
+  }
   for (let i = 0; i < all.length; i++) {
     for (let j = Math.max(i + 1, zone.length); j < all.length; j++) {
       const fi = floats[i];
@@ -59,53 +109,78 @@ export function visibleRegion(c: P, zone: readonly P[], screens: readonly Seg[],
     }
   }
   const dirs = sortedDirections(c, marks);
+  const lengths = new Map<number, Dec>();
+  const padAlong = (i: number): Dec => {
+    let k = lengths.get(i);
+    if (!k) {
+      const d = dirs[i] as P;
+      k = pad.div(new Dec(new DecGeo(dot(d, d)).sqrt()));
+      lengths.set(i, k);
+    }
+    return k;
+  };
 
-  // Hit of every segment on every direction, where the sight line meets it.
+  // Where each sight line may meet each segment, first in ordinary numbers; exact decimals are
+  // worked out only for the segments that can be the nearest in a sector.
   const cx = c.x.toNumber();
   const cy = c.y.toNumber();
-  const hitsOn = dirs.map((d) => {
+  const roughHits = dirs.map((d) => {
     const dx = d.x.toNumber();
     const dy = d.y.toNumber();
-    const out = new Map<number, Dec>();
-    all.forEach((s, k) => {
-      const f = floats[k];
-      if (!f || !mayHit(cx, cy, dx, dy, f.ax, f.ay, f.bx, f.by)) return;
-      const t = rayParam(c, d, s.a, s.b);
+    const out = new Map<number, number>();
+    floats.forEach((f, k) => {
+      const t = roughHit(cx, cy, dx, dy, f.ax, f.ay, f.bx, f.by);
       if (t !== null) out.set(k, t);
     });
     return out;
   });
+  const exact = dirs.map(() => new Map<number, Dec | null>());
+  const exactT = (i: number, k: number): Dec | null => {
+    const m = exact[i] as Map<number, Dec | null>;
+    if (m.has(k)) return m.get(k) ?? null;
+    const s = all[k] as Screen;
+    const t = rayParam(c, dirs[i] as P, s.a, s.b);
+    m.set(k, t);
+    return t;
+  };
 
   const polygon: P[] = [];
   for (let i = 0; i < dirs.length; i++) {
     const j = (i + 1) % dirs.length;
     const d1 = dirs[i] as P;
     const d2 = dirs[j] as P;
-    const h1 = hitsOn[i] as Map<number, Dec>;
-    const h2 = hitsOn[j] as Map<number, Dec>;
-    let best = -1;
-    let bestSum: Dec | null = null;
+    const h1 = roughHits[i] as Map<number, number>;
+    const h2 = roughHits[j] as Map<number, number>;
+    const candidates: Array<{ k: number; s: number }> = [];
     for (const [k, t1] of h1) {
       const t2 = h2.get(k);
-      if (t2 === undefined) continue;
-      // Segments spanning the sector do not cross inside it: the nearest at both edges is nearest throughout.
+      if (t2 !== undefined) candidates.push({ k, s: t1 + t2 });
+    }
+    candidates.sort((x, y) => x.s - y.s);
+    // Segments spanning the sector do not cross inside it: the nearest at both edges is nearest
+    // throughout. Exact sums decide among those the ordinary numbers cannot tell apart.
+    let best = -1;
+    let bestSum: Dec | null = null;
+    let bestRough = 0;
+    for (const cand of candidates) {
+      if (bestSum !== null && cand.s > bestRough * (1 + 1e-9) + 1e-12) break;
+      const t1 = exactT(i, cand.k);
+      const t2 = exactT(j, cand.k);
+      if (t1 === null || t2 === null) continue;
       const sum = t1.add(t2);
       if (bestSum === null || sum.lt(bestSum)) {
-        best = k;
+        best = cand.k;
         bestSum = sum;
+        bestRough = cand.s;
       }
     }
     const seg = all[best];
     if (!seg) return [...zone]; // cannot happen for a zone polygon around c; the whole zone is the safe answer
-    const t1 = h1.get(best) as Dec;
-    const t2 = h2.get(best) as Dec;
-    polygon.push(beyond(c, d1, t1, seg.screen ? pad : null), beyond(c, d2, t2, seg.screen ? pad : null));
+    const t1 = exactT(i, best) as Dec;
+    const t2 = exactT(j, best) as Dec;
+    polygon.push(add(c, scale(d1, seg.screen ? t1.add(padAlong(i)) : t1)), add(c, scale(d2, seg.screen ? t2.add(padAlong(j)) : t2)));
   }
   return tidy(polygon);
-}
-
-function zoneEdges(zone: readonly P[]): Seg[] {
-  return zone.map((q, i) => [q, zone[(i + 1) % zone.length] as P] as const);
 }
 
 /** A screen end not joined to another screen is moved `pad` towards the other end (none left: dropped). */
@@ -153,18 +228,21 @@ function sortedDirections(c: P, marks: readonly P[]): P[] {
   return out;
 }
 
-/** Quick test in ordinary numbers: can the ray c + t·d (t > 0) meet the segment? Never decides "yes" alone. */
-function mayHit(cx: number, cy: number, dx: number, dy: number, ax: number, ay: number, bx: number, by: number): boolean {
+/**
+ * Quick test in ordinary numbers: where the ray c + t·d may meet the segment (t), or null when it
+ * clearly cannot. Generous at the segment's ends; the exact test decides.
+ */
+function roughHit(cx: number, cy: number, dx: number, dy: number, ax: number, ay: number, bx: number, by: number): number | null {
   const sx = bx - ax;
   const sy = by - ay;
   const den = dx * sy - dy * sx;
   const scaleN = Math.hypot(dx, dy) * Math.hypot(sx, sy);
-  if (Math.abs(den) <= 1e-12 * scaleN) return false;
+  if (Math.abs(den) <= 1e-12 * scaleN) return null;
   const qx = ax - cx;
   const qy = ay - cy;
   const t = (qx * sy - qy * sx) / den;
   const w = (qx * dy - qy * dx) / den;
-  return t > -1e-9 && w > -1e-6 && w < 1 + 1e-6;
+  return t > -1e-9 && w > -1e-6 && w < 1 + 1e-6 ? t : null;
 }
 
 /** The ray c + t·d (t > 0) against the closed segment a–b: t, or null (parallel lines do not meet). */
@@ -177,13 +255,6 @@ function rayParam(c: P, d: P, a: P, b: P): Dec | null {
   const w = cross(q, d).div(den);
   if (t.lte(0) || w.lt(0) || w.gt(1)) return null;
   return t;
-}
-
-/** c + t·d, carried `pad` further along d when given. */
-function beyond(c: P, d: P, t: Dec, pad: Dec | null): P {
-  if (pad === null) return add(c, scale(d, t));
-  const len = new Dec(new DecGeo(dot(d, d)).sqrt());
-  return add(c, scale(d, t.add(pad.div(len))));
 }
 
 /** Drops repeated corners (closer than 1 nm) and corners on a straight line between their neighbours. */
