@@ -3,7 +3,7 @@
  * data, so every edit is one assignment and the live evaluation sees it). Points are addressed by
  * a key such as "doors.1.a" or "paths.0.elements.2.at"; each has a label in officer words.
  */
-import type { PathElementKind, PlanPoint, RoomPlan } from '../../core/index.js';
+import { planMiddle, type PathElementKind, type PlanPoint, type RoomPlan } from '../../core/index.js';
 
 type Json = Record<string, unknown>;
 const copy = <T>(x: T): T => JSON.parse(JSON.stringify(x)) as T;
@@ -153,9 +153,8 @@ function nextId(plan: RoomPlan, prefix: string): string {
 }
 
 function centre(plan: RoomPlan): PlanPoint {
-  const xs = plan.outline.map((q) => q.x_m);
-  const ys = plan.outline.map((q) => q.y_m);
-  return p(toCm((Math.min(...xs) + Math.max(...xs)) / 2), toCm((Math.min(...ys) + Math.max(...ys)) / 2));
+  const m = planMiddle(plan.outline);
+  return p(toCm(m.x), toCm(m.y));
 }
 
 export type AddKind = 'door' | 'window' | 'wall' | 'curtain' | 'barrier' | 'workPosition' | 'enclosure';
