@@ -6,7 +6,7 @@
 import { Dec } from '../numeric/decimal.js';
 import type { RoomInput } from '../model/inputs.js';
 import type { BeamResult } from '../model/results.js';
-import { asRectangle, boxesApart, boxOf, insideBox, insideWithin, segmentTouchesPolygon, withinOfPolygon, type P } from './geometry.js';
+import { asRectangle, boxesApart, boxOf, insideBox, insideOutline, segmentTouchesPolygon, withinOfPolygon, type P } from './geometry.js';
 import type { PlanBeamRun, PlanFinding, PlanResult, RoomPlan } from './plan-model.js';
 import { tracePath, toP, type Leg } from './trace-path.js';
 import { CIRCLE_CORNERS, PATH_MARGIN_M, diffuseRadius, directLength, directZones, diffuseZones, insideEnclosure, roundPoint, type BeamOnPlan, type ZoneWithShape } from './plan-zones.js';
@@ -240,7 +240,7 @@ function controlledAreaFindings(plan: RoomPlan, zones: readonly ZoneWithShape[],
   // A zone cut at a wall may overlap the wall line by its 1 mm pad: 5 mm is taken as on the boundary (ours).
   const tol = new Dec('0.005');
   const rect = asRectangle(outline);
-  const inside = (x: ZoneWithShape) => (rect ? insideBox(x.shape, rect.min, rect.max, tol, x.box) : insideWithin(x.shape, outline, tol));
+  const inside = (x: ZoneWithShape) => (rect ? insideBox(x.shape, rect.min, rect.max, tol, x.box) : insideOutline(x.shape, outline, tol));
   const out_ = (x: ZoneWithShape) => !x.enclosed && !inside(x);
   const outside = firstPerBeamKind(zones.filter(out_));
   for (const z of outside) {

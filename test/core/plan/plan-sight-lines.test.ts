@@ -138,3 +138,26 @@ describe('an L-shaped room: beams and zones stop at its own walls (derived geome
     }
   });
 });
+
+describe('an accepted controlled area of any shape (derived geometry)', () => {
+  // The room is 8 m × 5 m; the officer's controlled area leaves out a 0.4 m recess from the north wall
+  // down to y = 1.6 m at x 3.1–3.5 m (a cupboard opening onto the corridor).
+  const room8x5 = [p(0, 0), p(8, 0), p(8, 5), p(0, 5)];
+  const withRecess = [p(0, 0), p(8, 0), p(8, 5), p(3.5, 5), p(3.5, 1.6), p(3.1, 1.6), p(3.1, 5), p(0, 5)];
+  const along = (y: number) => [{ laserId: 'L1', exit: p(1, y), elements: [{ kind: 'dump' as const, at: p(7, y) }] }];
+  const cases: Array<{ name: string; source: string; y: number; outside: boolean }> = [
+    {
+      name: 'a beam along y = 1.57 m: its zone reaches 22 mm into the recess, though no corner of the zone does',
+      source: 'derived: half-width ≥ 50 mm + 1 mm + the beam, so the zone edge is at y ≥ 1.621 m over x 3.1–3.5 m; the zone piece from x = 3 m to 5 m has its corners and middle outside the recess',
+      y: 1.57,
+      outside: true,
+    },
+    { name: 'the same beam along y = 1.4 m stays clear of it', source: 'derived: the zone edge is at most 1.4 + 0.06 = 1.46 m < 1.6 m', y: 1.4, outside: false },
+  ];
+  for (const c of cases) {
+    it(`${c.name} (${c.source})`, () => {
+      const plan = evaluateRoom(room({ outline: room8x5, controlledArea: { outline: withRecess, acceptedBy: 'I. Calloway-Senn' }, paths: along(c.y) })).plan!;
+      expect(kinds(plan.findings).includes('outside-controlled-area:c')).toBe(c.outside);
+    });
+  }
+});
