@@ -85,11 +85,6 @@ export function distanceSqToSegment(p: P, a: P, b: P): Dec {
   return dot(d, d);
 }
 
-/** Distance from p to the closed segment a–b. */
-export function distanceToSegment(p: P, a: P, b: P): Dec {
-  return distanceSqToSegment(p, a, b).sqrt();
-}
-
 /** The closing edges of a polygon, each as [start, end]. */
 export function edges(poly: readonly P[]): Array<readonly [P, P]> {
   const out: Array<readonly [P, P]> = [];
@@ -129,26 +124,6 @@ export function segmentTouchesPolygon(a: P, b: P, poly: readonly P[]): boolean {
     if (segmentsMeet(a, b, c, d)) return true;
   }
   return false;
-}
-
-/** Is every point of polygon `inner` inside polygon `outer` (vertices inside, no edges crossing)? */
-export function polygonInside(inner: readonly P[], outer: readonly P[]): boolean {
-  if (!inner.every((v) => pointInPolygon(v, outer))) return false;
-  const outerEdges = edges(outer);
-  for (const [a, b] of edges(inner)) {
-    for (const [c, d] of outerEdges) {
-      if (properCross(a, b, c, d)) return false;
-    }
-  }
-  return true;
-}
-
-function properCross(a: P, a2: P, b: P, b2: P): boolean {
-  const d1 = cross(sub(b2, b), sub(a, b));
-  const d2 = cross(sub(b2, b), sub(a2, b));
-  const d3 = cross(sub(a2, a), sub(b, a));
-  const d4 = cross(sub(a2, a), sub(b2, a));
-  return ((d1.gt(0) && d2.lt(0)) || (d1.lt(0) && d2.gt(0))) && ((d3.gt(0) && d4.lt(0)) || (d3.lt(0) && d4.gt(0)));
 }
 
 /**
