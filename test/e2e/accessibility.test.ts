@@ -48,6 +48,18 @@ describe('WCAG 2.1 AA, zero violations (axe-core)', () => {
     }
   });
 
+  it('the room plan: its drawing with corner and side handles, undo, the plan at a glance, and the entrance choice for the door notice', async () => {
+    await page.keyboard.press('Alt+1');
+    await page.getByRole('button', { name: /^B2\.14/ }).click();
+    await page.getByRole('button', { name: 'Open in workspace' }).click();
+    await page.getByRole('heading', { level: 1, name: /Workspace · B2\.14/ }).waitFor();
+    await page.getByRole('region', { name: 'Room plan at a glance' }).waitFor({ timeout: 60_000 });
+    expect(await wcagViolations(page), 'workspace with a room plan').toEqual([]);
+    await page.keyboard.press('Alt+6');
+    await page.getByLabel('For the entrance').waitFor();
+    expect(await wcagViolations(page), 'print screen with the entrance choice').toEqual([]);
+  });
+
   it('Settings & about', async () => {
     await page.getByRole('button', { name: 'Settings & about' }).click();
     await page.getByRole('dialog', { name: 'Settings & about' }).waitFor();
