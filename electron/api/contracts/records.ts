@@ -325,6 +325,16 @@ export interface SaveBase {
   readonly version: number;
 }
 
+/**
+ * What an edit or deletion of a register entry started from: the entry's `updatedAt` when the
+ * officer opened it (its version), and the fields as they were shown then, so that a refusal can
+ * say what someone else changed meanwhile. The version alone decides; `seen` only words the answer.
+ */
+export interface RegisterBase<Seen> {
+  readonly updatedAt: Timestamp;
+  readonly seen?: Seen;
+}
+
 /** One line of an assessment list. */
 export interface AssessmentSummary {
   readonly id: Id;

@@ -470,13 +470,19 @@ function resultsFor(ctx: StoreContext, content: AssessmentContent, previous: Rev
  * Refuse a save that started from an older state than the newest revision (another window, host
  * or officer saved or signed meanwhile): nothing is overwritten, and the officer is told when.
  */
-export function assertNotStale(ctx: StoreContext, id: Id, expected: SaveBase | undefined): void {
+export function assertNotStale(ctx: StoreContext, id: Id, expected: SaveBase | undefined, doing: 'save' | 'sign' = 'save'): void {
   if (expected === undefined) return;
   const current = newestRevisionRow(ctx, id);
   if (current.id === expected.revisionId && current.version === expected.version) return;
   const signed = current.status !== 'draft' ? getSignatureRow(ctx, current.id) : undefined;
   const at = signed?.signed_at ?? current.updated_at;
   const what = signed ? `signed by ${signed.name}` : `saved as revision ${current.revision_no}`;
+  if (doing === 'sign') {
+    throw new RecordError(
+      'stale',
+      `"${current.title}" was changed by someone else since you opened it: ${what} at ${clockTime(at)}. Nothing was signed — reload, review the revision again, then sign.`,
+    );
+  }
   throw new RecordError(
     'stale',
     `"${current.title}" was changed by someone else at ${clockTime(at)} (${what}) — reload and compare before saving again. Nothing was overwritten.`,
@@ -589,18 +595,20 @@ export const INSERT_SIGNATURE = `INSERT INTO signature (revision_id, person_id, 
  * back end's clock. The statement covers the fingerprint, the previous signed revision's link and the
  * trust anchor, and is recorded in the signing log outside the database.
  */
-export function signAssessment(ctx: StoreContext, id: Id, rawSignOff: SignOff): Assessment {
+export function signAssessment(ctx: StoreContext, id: Id, rawSignOff: SignOff, reviewed?: SaveBase): Assessment {
   const signOff = parseOrThrow(SignOffSchema, rawSignOff, 'Sign-off');
+  // What the officer reviewed in the confirm step must still be the draft that is signed.
+  assertNotStale(ctx, id, reviewed, 'sign');
   const person = getPerson(ctx, signOff.personId);
   if (!person.role.trim()) throw new RecordError('invalid', `Enter ${person.name}'s role in the register (People) before signing: the signature records it.`, [{ path: 'personId', problem: 'the person has no role' }]);
-  return signDraftWith(ctx, id, signOff.statement, (build) => signAsPerson(ctx, signOff.personId, signOff.passphrase, build));
+  return signDraftWith(ctx, id, signOff.statement, (build) => signAsPerson(ctx, signOff.personId, signOff.passphrase, build), reviewed);
 }
 
 /** Produces the signature: identity and time decided by the signer function (signAsPerson in the app). */
 export type DraftSigner = (build: (signer: Signer) => SignedStatement) => { signer: Signer; payload: SignedStatement; signature: string };
 
 /** Sign the current draft with `signWith` (the app passes signAsPerson; the demo and benchmark an unlocked key). */
-export function signDraftWith(ctx: StoreContext, id: Id, statementText: string, signWith: DraftSigner): Assessment {
+export function signDraftWith(ctx: StoreContext, id: Id, statementText: string, signWith: DraftSigner, reviewed?: SaveBase): Assessment {
   const a = getAssessmentRow(ctx, id);
   const draft = newestRevisionRow(ctx, id);
   if (draft.status !== 'draft') throw new RecordError('conflict', `Nothing to sign: revision ${draft.revision_no} is already ${draft.status}`);
@@ -625,6 +633,7 @@ export function signDraftWith(ctx: StoreContext, id: Id, statementText: string, 
   );
   const st = signed.payload;
   write(ctx, 'Sign-off', () => {
+    assertNotStale(ctx, id, reviewed, 'sign');
     const again = newestRevisionRow(ctx, id);
     if (again.id !== draft.id || again.status !== 'draft') throw new RecordError('conflict', 'The assessment changed while signing; try again');
     if (newestSignedLink(ctx, a) !== previousLink) throw new RecordError('conflict', 'Another revision was signed meanwhile; try again');

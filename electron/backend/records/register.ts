@@ -33,6 +33,7 @@ import type {
   SiteDraft,
 } from './types.js';
 import { RecordError } from './types.js';
+import { laterStamp } from './stamps.js';
 
 function guard<T>(ctx: StoreContext, what: string, fn: () => T): T {
   try {
@@ -85,7 +86,8 @@ export function createSite(ctx: StoreContext, draft: SiteDraft): Site {
 }
 export function updateSite(ctx: StoreContext, id: Id, patch: Partial<SiteDraft>): Site {
   const p = parseOrThrow(SitePatchSchema, patch, 'Site changes');
-  const next: Site = { ...getSite(ctx, id), ...stripUndefined(p), updatedAt: ctx.now() };
+  const prev = getSite(ctx, id);
+  const next: Site = { ...prev, ...stripUndefined(p), updatedAt: laterStamp(ctx.now(), prev.updatedAt) };
   guard(ctx, 'Site', () =>
     ctx.sql('UPDATE site SET name=@name, building=@building, address=@address, notes=@notes, updated_at=@updatedAt WHERE id=@id').run(next),
   );
@@ -158,7 +160,8 @@ export function createRoom(ctx: StoreContext, draft: RoomDraft): Room {
 }
 export function updateRoom(ctx: StoreContext, id: Id, patch: Partial<Omit<RoomDraft, 'siteId'>>): Room {
   const p = parseOrThrow(RoomPatchSchema, patch, 'Room changes');
-  const next: Room = { ...getRoom(ctx, id), ...stripUndefined(p), updatedAt: ctx.now() };
+  const prev = getRoom(ctx, id);
+  const next: Room = { ...prev, ...stripUndefined(p), updatedAt: laterStamp(ctx.now(), prev.updatedAt) };
   guard(ctx, `Room ${next.code}`, () =>
     ctx
       .sql('UPDATE room SET code=@code, name=@name, responsible_person=@responsiblePerson, contact=@contact, notes=@notes, updated_at=@updatedAt WHERE id=@id')
@@ -297,7 +300,7 @@ export function updateInstallation(
 ): LaserInstallation {
   const p = parseOrThrow(LaserInstallationPatchSchema, patch, 'Laser installation changes');
   const prev = getInstallation(ctx, id);
-  const merged = { ...prev, ...stripUndefined(p), updatedAt: ctx.now() };
+  const merged = { ...prev, ...stripUndefined(p), updatedAt: laterStamp(ctx.now(), prev.updatedAt) };
   const laser: LaserInput = { ...merged.laser, id };
   const next: LaserInstallation = { ...merged, laser, classAsLabelled: laser.classAsLabelled ?? null };
   if (p.laser !== undefined) refuseBeamIdClash(ctx, prev.roomId, laser, id);
@@ -414,7 +417,8 @@ export function createEyewear(ctx: StoreContext, draft: EyewearDraft): Eyewear {
 }
 export function updateEyewear(ctx: StoreContext, id: Id, patch: Partial<Omit<EyewearDraft, 'siteId'>>): Eyewear {
   const p = parseOrThrow(EyewearPatchSchema, patch, 'Eyewear changes');
-  const next: Eyewear = { ...getEyewear(ctx, id), ...stripUndefined(p), updatedAt: ctx.now() };
+  const prev = getEyewear(ctx, id);
+  const next: Eyewear = { ...prev, ...stripUndefined(p), updatedAt: laterStamp(ctx.now(), prev.updatedAt) };
   guard(ctx, `Eyewear ${next.spec.id}`, () =>
     ctx
       .sql('UPDATE eyewear SET tag=@tag, spec_json=@specJson, location=@location, quantity=@quantity, notes=@notes, inspected_on=@inspectedOn, condition=@condition, next_inspection=@nextInspection, updated_at=@updatedAt WHERE id=@id')
@@ -478,7 +482,8 @@ export function createPerson(ctx: StoreContext, draft: PersonDraft): Person {
 }
 export function updatePerson(ctx: StoreContext, id: Id, patch: Partial<PersonDraft>): Person {
   const p = parseOrThrow(PersonPatchSchema, patch, 'Person changes');
-  const next: Person = { ...getPerson(ctx, id), ...stripUndefined(p), updatedAt: ctx.now() };
+  const prev = getPerson(ctx, id);
+  const next: Person = { ...prev, ...stripUndefined(p), updatedAt: laterStamp(ctx.now(), prev.updatedAt) };
   guard(ctx, 'Person', () =>
     ctx.sql('UPDATE person SET name=@name, role=@role, email=@email, phone=@phone, updated_at=@updatedAt WHERE id=@id').run(next),
   );

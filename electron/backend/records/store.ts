@@ -20,6 +20,7 @@ import { adoptInstallationKey } from './legacy-signatures.js';
 import { missingProtections } from './protections.js';
 import { defaultDatabasePath } from './paths.js';
 import * as R from './register.js';
+import * as C from './register-checked.js';
 import { laserHistory } from './laser-history.js';
 import { saveWork } from './save-work.js';
 import { backupInto, backupStatus, defaultBackupFolder } from './safekeeping.js';
@@ -47,6 +48,7 @@ import type {
   PersonDraft,
   PersonKey,
   RecordStore,
+  RegisterBase,
   Revision,
   RevisionSummary,
   Room,
@@ -78,34 +80,44 @@ class SqliteRecordStore implements RecordStore {
   listSites(): Site[] { return R.listSites(this.ctx); }
   getSite(id: Id): Site { return R.getSite(this.ctx, id); }
   createSite(draft: SiteDraft): Site { return R.createSite(this.ctx, draft); }
-  updateSite(id: Id, patch: Partial<SiteDraft>): Site { return R.updateSite(this.ctx, id, patch); }
-  deleteSite(id: Id): void { R.deleteSite(this.ctx, id); }
+  updateSite(id: Id, patch: Partial<SiteDraft>, expected?: RegisterBase<Partial<SiteDraft>>): Site { return C.updateSite(this.ctx, id, patch, expected); }
+  deleteSite(id: Id, expected?: RegisterBase<Partial<SiteDraft>>): void { C.deleteSite(this.ctx, id, expected); }
 
   listRooms(siteId: Id): Room[] { return R.listRooms(this.ctx, siteId); }
   getRoom(id: Id): Room { return R.getRoom(this.ctx, id); }
   createRoom(draft: RoomDraft): Room { return R.createRoom(this.ctx, draft); }
-  updateRoom(id: Id, patch: Partial<Omit<RoomDraft, 'siteId'>>): Room { return R.updateRoom(this.ctx, id, patch); }
-  deleteRoom(id: Id): void { R.deleteRoom(this.ctx, id); }
+  updateRoom(id: Id, patch: Partial<Omit<RoomDraft, 'siteId'>>, expected?: RegisterBase<Partial<Omit<RoomDraft, 'siteId'>>>): Room {
+    return C.updateRoom(this.ctx, id, patch, expected);
+  }
+  deleteRoom(id: Id, expected?: RegisterBase<Partial<Omit<RoomDraft, 'siteId'>>>): void { C.deleteRoom(this.ctx, id, expected); }
 
   listInstallations(roomId: Id): LaserInstallation[] { return R.listInstallations(this.ctx, roomId); }
   getInstallation(id: Id): LaserInstallation { return R.getInstallation(this.ctx, id); }
   createInstallation(draft: LaserInstallationDraft): LaserInstallation { return R.createInstallation(this.ctx, draft); }
-  updateInstallation(id: Id, patch: Partial<Omit<LaserInstallationDraft, 'roomId'>>): LaserInstallation {
-    return R.updateInstallation(this.ctx, id, patch);
+  updateInstallation(
+    id: Id,
+    patch: Partial<Omit<LaserInstallationDraft, 'roomId'>>,
+    expected?: RegisterBase<Partial<Omit<LaserInstallationDraft, 'roomId'>>>,
+  ): LaserInstallation {
+    return C.updateInstallation(this.ctx, id, patch, expected);
   }
-  deleteInstallation(id: Id): void { R.deleteInstallation(this.ctx, id); }
+  deleteInstallation(id: Id, expected?: RegisterBase<Partial<Omit<LaserInstallationDraft, 'roomId'>>>): void {
+    C.deleteInstallation(this.ctx, id, expected);
+  }
 
   listEyewear(siteId: Id): Eyewear[] { return R.listEyewear(this.ctx, siteId); }
   getEyewear(id: Id): Eyewear { return R.getEyewear(this.ctx, id); }
   createEyewear(draft: EyewearDraft): Eyewear { return R.createEyewear(this.ctx, draft); }
-  updateEyewear(id: Id, patch: Partial<Omit<EyewearDraft, 'siteId'>>): Eyewear { return R.updateEyewear(this.ctx, id, patch); }
-  deleteEyewear(id: Id): void { R.deleteEyewear(this.ctx, id); }
+  updateEyewear(id: Id, patch: Partial<Omit<EyewearDraft, 'siteId'>>, expected?: RegisterBase<Partial<Omit<EyewearDraft, 'siteId'>>>): Eyewear {
+    return C.updateEyewear(this.ctx, id, patch, expected);
+  }
+  deleteEyewear(id: Id, expected?: RegisterBase<Partial<Omit<EyewearDraft, 'siteId'>>>): void { C.deleteEyewear(this.ctx, id, expected); }
 
   listPeople(): Person[] { return R.listPeople(this.ctx); }
   getPerson(id: Id): Person { return R.getPerson(this.ctx, id); }
   createPerson(draft: PersonDraft): Person { return R.createPerson(this.ctx, draft); }
-  updatePerson(id: Id, patch: Partial<PersonDraft>): Person { return R.updatePerson(this.ctx, id, patch); }
-  deletePerson(id: Id): void { R.deletePerson(this.ctx, id); }
+  updatePerson(id: Id, patch: Partial<PersonDraft>, expected?: RegisterBase<Partial<PersonDraft>>): Person { return C.updatePerson(this.ctx, id, patch, expected); }
+  deletePerson(id: Id, expected?: RegisterBase<Partial<PersonDraft>>): void { C.deletePerson(this.ctx, id, expected); }
   laserHistory(installationId: Id): LaserUse[] { return laserHistory(this.ctx, installationId); }
 
   roomInputFromRegister(roomId: Id): RoomInput { return R.roomInputFromRegister(this.ctx, roomId); }
@@ -130,7 +142,7 @@ class SqliteRecordStore implements RecordStore {
   compareRevisions(fromRevisionId: Id, toRevisionId: Id): FieldDifference[] {
     return A.compareRevisions(this.ctx, fromRevisionId, toRevisionId);
   }
-  signAssessment(id: Id, signOff: SignOff): Assessment { return A.signAssessment(this.ctx, id, signOff); }
+  signAssessment(id: Id, signOff: SignOff, reviewed?: SaveBase): Assessment { return A.signAssessment(this.ctx, id, signOff, reviewed); }
   verify(assessmentId: Id, revisionId?: Id): VerifyReport { return A.verifyAssessment(this.ctx, assessmentId, revisionId); }
 
   listPersonKeys(): PersonKey[] { return K.listPersonKeys(this.ctx); }

@@ -27,6 +27,7 @@ import type {
   Person,
   PersonDraft,
   PersonKey,
+  RegisterBase,
   Revision,
   RevisionSummary,
   Room,
@@ -77,32 +78,37 @@ export interface RecordStore {
   listSites(): Site[];
   getSite(id: Id): Site;
   createSite(draft: SiteDraft): Site;
-  updateSite(id: Id, patch: Partial<SiteDraft>): Site;
-  deleteSite(id: Id): void;
+  /** `expected`: the version the officer opened; refused with code 'stale' (saying what changed) when the entry moved on. */
+  updateSite(id: Id, patch: Partial<SiteDraft>, expected?: RegisterBase<Partial<SiteDraft>>): Site;
+  deleteSite(id: Id, expected?: RegisterBase<Partial<SiteDraft>>): void;
 
   listRooms(siteId: Id): Room[];
   getRoom(id: Id): Room;
   createRoom(draft: RoomDraft): Room;
-  updateRoom(id: Id, patch: Partial<Omit<RoomDraft, 'siteId'>>): Room;
-  deleteRoom(id: Id): void;
+  updateRoom(id: Id, patch: Partial<Omit<RoomDraft, 'siteId'>>, expected?: RegisterBase<Partial<Omit<RoomDraft, 'siteId'>>>): Room;
+  deleteRoom(id: Id, expected?: RegisterBase<Partial<Omit<RoomDraft, 'siteId'>>>): void;
 
   listInstallations(roomId: Id): LaserInstallation[];
   getInstallation(id: Id): LaserInstallation;
   createInstallation(draft: LaserInstallationDraft): LaserInstallation;
-  updateInstallation(id: Id, patch: Partial<Omit<LaserInstallationDraft, 'roomId'>>): LaserInstallation;
-  deleteInstallation(id: Id): void;
+  updateInstallation(
+    id: Id,
+    patch: Partial<Omit<LaserInstallationDraft, 'roomId'>>,
+    expected?: RegisterBase<Partial<Omit<LaserInstallationDraft, 'roomId'>>>,
+  ): LaserInstallation;
+  deleteInstallation(id: Id, expected?: RegisterBase<Partial<Omit<LaserInstallationDraft, 'roomId'>>>): void;
 
   listEyewear(siteId: Id): Eyewear[];
   getEyewear(id: Id): Eyewear;
   createEyewear(draft: EyewearDraft): Eyewear;
-  updateEyewear(id: Id, patch: Partial<Omit<EyewearDraft, 'siteId'>>): Eyewear;
-  deleteEyewear(id: Id): void;
+  updateEyewear(id: Id, patch: Partial<Omit<EyewearDraft, 'siteId'>>, expected?: RegisterBase<Partial<Omit<EyewearDraft, 'siteId'>>>): Eyewear;
+  deleteEyewear(id: Id, expected?: RegisterBase<Partial<Omit<EyewearDraft, 'siteId'>>>): void;
 
   listPeople(): Person[];
   getPerson(id: Id): Person;
   createPerson(draft: PersonDraft): Person;
-  updatePerson(id: Id, patch: Partial<PersonDraft>): Person;
-  deletePerson(id: Id): void;
+  updatePerson(id: Id, patch: Partial<PersonDraft>, expected?: RegisterBase<Partial<PersonDraft>>): Person;
+  deletePerson(id: Id, expected?: RegisterBase<Partial<PersonDraft>>): void;
   /** Every revision in the laser's room that evaluated it, newest first. */
   laserHistory(installationId: Id): LaserUse[];
 
@@ -136,8 +142,11 @@ export interface RecordStore {
   getRevision(revisionId: Id): Revision;
   /** Field-by-field differences between two revisions (content and results). */
   compareRevisions(fromRevisionId: Id, toRevisionId: Id): FieldDifference[];
-  /** Sign the current draft: it becomes signed, the previous signed revision superseded. */
-  signAssessment(id: Id, signOff: SignOff): Assessment;
+  /**
+   * Sign the current draft: it becomes signed, the previous signed revision superseded. `reviewed`:
+   * the revision and save counter shown in the confirm step; refused (code 'stale') when the draft moved on.
+   */
+  signAssessment(id: Id, signOff: SignOff, reviewed?: SaveBase): Assessment;
   /** Check the newest signed revision (or `revisionId`). */
   verify(assessmentId: Id, revisionId?: Id): VerifyReport;
 
