@@ -30,6 +30,10 @@ class Session {
   busy = $state(false);
   /** The message of a save refused because someone else saved first (null when none). */
   stale = $state<string | null>(null);
+  /** The message of a register edit refused because someone else changed the entry first (null when none). */
+  registerStale = $state<string | null>(null);
+  /** Counts reloads of the register after such a refusal: open register forms take the stored values again. */
+  registerEpoch = $state(0);
 
   room = $state<Room | null>(null);
   site = $state<Site | null>(null);
@@ -256,6 +260,34 @@ class Session {
   /** Replace the open assessment after an operation returned a newer copy (sign-off). */
   adopt(a: Assessment): void {
     this.setAssessment(a);
+  }
+
+  /**
+   * A register edit or deletion: like `run`, but a refusal because someone else changed the entry
+   * first is shown as its own warning with a way to reload (the form keeps what was typed until then).
+   */
+  async runRegisterEdit(fn: () => Promise<void>): Promise<boolean> {
+    this.busy = true;
+    try {
+      await fn();
+      this.registerStale = null;
+      return true;
+    } catch (e) {
+      if (e instanceof ApiError && e.code === 'stale') this.registerStale = e.message;
+      else this.say('error', messageOf(e));
+      return false;
+    } finally {
+      this.busy = false;
+    }
+  }
+
+  /** After a refused register edit: read the register again; open forms show the stored values. */
+  async reloadRegister(): Promise<void> {
+    await this.run(async () => {
+      await this.refreshOverview();
+      this.registerStale = null;
+      this.registerEpoch++;
+    });
   }
 
   /** Run an operation with the busy flag; errors become a notice. */
