@@ -393,7 +393,11 @@ export function listRevisions(ctx: StoreContext, assessmentId: Id): RevisionSumm
 export function compareRevisions(ctx: StoreContext, fromId: Id, toId: Id): FieldDifference[] {
   const a = getRevision(ctx, fromId);
   const b = getRevision(ctx, toId);
-  if (a.assessmentId !== b.assessmentId) throw new RecordError('invalid', 'Both revisions must belong to the same assessment');
+  // Revisions of one assessment, or of assessments of one room (a draft kept as a copy at import or
+  // after a refused save is an assessment of its own in the same room).
+  if (a.assessmentId !== b.assessmentId && getAssessmentRow(ctx, a.assessmentId).room_id !== getAssessmentRow(ctx, b.assessmentId).room_id) {
+    throw new RecordError('invalid', 'Only revisions of assessments of the same room can be compared');
+  }
   return diffValues(
     { content: a.content, results: a.results, calculatedWith: a.calculatedWith },
     { content: b.content, results: b.results, calculatedWith: b.calculatedWith },

@@ -140,7 +140,7 @@ export interface RecordStore {
   discardDraft(id: Id): void;
   listRevisions(assessmentId: Id): RevisionSummary[];
   getRevision(revisionId: Id): Revision;
-  /** Field-by-field differences between two revisions (content and results). */
+  /** Field-by-field differences between two revisions (content and results) of one room's assessments. */
   compareRevisions(fromRevisionId: Id, toRevisionId: Id): FieldDifference[];
   /**
    * Sign the current draft: it becomes signed, the previous signed revision superseded. `reviewed`:
