@@ -109,4 +109,13 @@ describe('two revisions side by side', () => {
     await fireEvent.click(view.getByRole('button', { name: 'Compare side by side' }));
     expect(view.getByRole('alert').textContent).toBe('Choose two different revisions to compare.');
   });
+
+  it('revisions of assessments of two different rooms are not compared', async () => {
+    const otherRoom = registerRoom(store, 'B2.16').room;
+    const there = store.createAssessment({ roomId: otherRoom.id, content: store.newAssessmentContent(otherRoom.id) });
+    const here = store.getAssessment(assessmentId);
+    const reply = await window.beamwarden!.invoke('revisions-compare', { fromRevisionId: here.current.id, toRevisionId: there.current.id });
+    expect(reply.ok).toBe(false);
+    if (!reply.ok) expect(reply.error.message).toBe('Only revisions of assessments of the same room can be compared');
+  });
 });
