@@ -16,6 +16,7 @@ import { RoomResultSchema } from '../schemas/results.js';
 import { canonicalJson } from './canonical.js';
 import { notFound, parseOrThrow, translateSqliteError, type StoreContext } from './context.js';
 import { diffValues } from './diff.js';
+import { assumedDefaults } from './older-content.js';
 import { getInstallation, getPerson, getRoom, roomInputFromRegister } from './register.js';
 import { fingerprintOf, keyIdOf, linkOf, sha256Hex, verifyStatement, type SignedStatement } from './signing.js';
 import { signAsPerson, type Signer } from './personal-keys.js';
@@ -312,12 +313,14 @@ export function getRevision(ctx: StoreContext, revisionId: Id): Revision {
 
 export function getAssessment(ctx: StoreContext, id: Id): Assessment {
   const a = getAssessmentRow(ctx, id);
+  const cur = currentWithVersion(ctx, id);
   return {
     id: a.id,
     roomId: a.room_id,
     installationId: a.installation_id,
     createdAt: a.created_at,
-    ...currentWithVersion(ctx, id),
+    ...cur,
+    assumedDefaults: assumedDefaults(cur.current.content, cur.current.calculatedWith),
   };
 }
 
