@@ -107,15 +107,18 @@ export async function runRecordsBench(): Promise<BenchEntry[]> {
       });
       if (listed === 0) throw new Error('nothing listed');
 
-      // Save: notes edited, inputs unchanged (the common save while writing up an assessment).
-      const contents = sampleIds.map((id) => store.getAssessment(id).current.content);
+      // Save: notes edited, inputs unchanged (the common save while writing up an assessment), naming
+      // the version it started from as the app does (optimistic concurrency).
+      const opened = sampleIds.map((id) => store.getAssessment(id));
+      const contents = opened.map((a) => a.current.content);
       entries.push({
-        name: 'records: save one assessment (notes edited, results reused)',
+        name: 'records: save one assessment (notes edited, results reused, version checked)',
         median_ms: timeMedian(sampleIds.length, (i) => {
           const id = sampleIds[i] ?? '';
           const c = contents[i];
-          if (!c) throw new Error('content missing');
-          store.saveAssessment(id, { ...c, notes: `edited ${i}` });
+          const a = opened[i];
+          if (!c || !a) throw new Error('content missing');
+          store.saveAssessment(id, { ...c, notes: `edited ${i}` }, { revisionId: a.current.id, version: a.version });
         }),
         runs: sampleIds.length,
         target_ms: 5,
@@ -138,12 +141,34 @@ export async function runRecordsBench(): Promise<BenchEntry[]> {
       const passphrase = 'bench passphrase (invented)';
       const officer = store.createPerson({ name: 'Bench Officer', role: 'LSO' });
       store.createPersonKey({ personId: officer.id, passphrase, passphraseAgain: passphrase });
+      let reviewed = { revisionId: '', version: 0 };
       entries.push({
         name: 'records: sign one assessment (passphrase check with scrypt, re-evaluate, fingerprint, Ed25519, supersede, signing log)',
-        median_ms: timeMedian(n, (i) => {
-          store.signAssessment(sampleIds[20 + i] ?? '', { personId: officer.id, passphrase, statement: 'Benchmark sign-off.' });
-        }),
+        median_ms: timeMedian(
+          n,
+          (i) => store.signAssessment(sampleIds[20 + i] ?? '', { personId: officer.id, passphrase, statement: 'Benchmark sign-off.' }, reviewed),
+          (i) => {
+            // the revision shown in the confirm step (untimed: the window already holds it)
+            const a = store.getAssessment(sampleIds[20 + i] ?? '');
+            reviewed = { revisionId: a.current.id, version: a.version };
+          },
+        ),
         runs: n,
+      });
+
+      // A Register edit as the window sends it: the version opened and the fields seen, checked and
+      // written in one write transaction.
+      const roomsToEdit = roomIds.slice(0, 40).map((id) => store.getRoom(id));
+      entries.push({
+        name: 'records: edit one register entry (version check and write in one transaction)',
+        median_ms: timeMedian(roomsToEdit.length, (i) => {
+          const r = roomsToEdit[i];
+          if (!r) throw new Error('room missing');
+          store.updateRoom(r.id, { contact: `ext. ${4000 + i}` }, { updatedAt: r.updatedAt, seen: { code: r.code, name: r.name, contact: r.contact } });
+        }),
+        runs: roomsToEdit.length,
+        // one committed write, like the notes-only save above
+        target_ms: 10,
       });
     } finally {
       store.close();
