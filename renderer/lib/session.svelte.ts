@@ -189,10 +189,10 @@ class Session {
   /** New and edited register lasers of the draft, each edited one with the state it was opened at. */
   private registerChanges(d: Draft): {
     newLasers: Array<{ draftId: string; laser: LaserInput; laserType: string }>;
-    changedLasers: Array<{ id: string; laser: LaserInput; expectedUpdatedAt: string }>;
+    changedLasers: Array<{ id: string; laser: LaserInput; expectedUpdatedAt: string; seenLaser: LaserInput }>;
   } {
     const newLasers: Array<{ draftId: string; laser: LaserInput; laserType: string }> = [];
-    const changedLasers: Array<{ id: string; laser: LaserInput; expectedUpdatedAt: string }> = [];
+    const changedLasers: Array<{ id: string; laser: LaserInput; expectedUpdatedAt: string; seenLaser: LaserInput }> = [];
     for (const lf of d.lasers) {
       const { laser: full } = laserInputFrom(lf);
       if (!full) continue;
@@ -202,7 +202,7 @@ class Session {
         newLasers.push({ draftId: lf.id, laser, laserType: laser.name });
       } else {
         const reg = this.installations.find((i) => i.id === lf.id);
-        if (reg && JSON.stringify(reg.laser) !== JSON.stringify(laser)) changedLasers.push({ id: lf.id, laser, expectedUpdatedAt: reg.updatedAt });
+        if (reg && JSON.stringify(reg.laser) !== JSON.stringify(laser)) changedLasers.push({ id: lf.id, laser, expectedUpdatedAt: reg.updatedAt, seenLaser: reg.laser });
       }
     }
     return { newLasers, changedLasers };
