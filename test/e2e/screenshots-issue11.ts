@@ -3,10 +3,13 @@
  *   npm run build && tsx test/e2e/screenshots-issue11.ts -> test/artifacts/screens/3*.png
  * A Register edit refused because a second tab changed the room first; the beam form's skin-area
  * and diffuse-viewing fields with their echoes; two revisions side by side on the Review screen
- * (the assessment against the copy kept after a refused save). Loopback host, demo site.
+ * (the assessment against the copy kept after a refused save); the defaults named for records
+ * written by an older version. Loopback host, demo site.
  */
-import { mkdirSync } from 'node:fs';
+import { mkdirSync, mkdtempSync, rmSync } from 'node:fs';
+import os from 'node:os';
 import path from 'node:path';
+import { openRecordStore } from '../../electron/backend/records/store.js';
 import type { Page } from 'playwright-core';
 import { launch } from './browser.js';
 import { REPO, startHost } from './host-process.js';
@@ -106,6 +109,31 @@ async function main(): Promise<void> {
   } finally {
     await ctx.close();
     await host.stop();
+  }
+  await olderRecords();
+}
+
+/** 4. Records written as an older version writes them: the workspace names the defaults assumed. */
+async function olderRecords(): Promise<void> {
+  const dir = mkdtempSync(path.join(os.tmpdir(), 'beamwarden-older-'));
+  const older = openRecordStore({ path: path.join(dir, 'records.sqlite'), keyDir: dir, calculatedWith: 'beamwarden-core 0.1.0' });
+  older.seedDemo();
+  older.close();
+  const host = await startHost({ dir });
+  const ctx = await launch();
+  const page = ctx.pages()[0] ?? (await ctx.newPage());
+  try {
+    await page.setViewportSize({ width: 1280, height: 900 });
+    await page.goto(host.url);
+    await page.getByRole('heading', { name: 'Register' }).waitFor();
+    await page.getByRole('button', { name: /^B2\.16/ }).click();
+    await page.getByRole('button', { name: 'Open in workspace' }).click();
+    await page.getByTestId('assumed-defaults').waitFor();
+    await shot(page, '35-older-record-defaults');
+  } finally {
+    await ctx.close();
+    await host.stop();
+    rmSync(dir, { recursive: true, force: true });
   }
 }
 
