@@ -19,33 +19,33 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import demo from '../../assets/demo/demo-scenario.json' with { type: 'json' };
 import { DemoScenarioSchema } from '../../electron/backend/records/demo.js';
-import { openRecordStore, type RecordStore } from '../../electron/backend/records/index.js';
-import { timeMedian, type BenchEntry } from './registry.js';
+import { openRecordStore, type AssessmentContent, type RecordStore, type Room, type SaveBase } from '../../electron/backend/records/index.js';
+import { timeMedianAsync, type BenchEntry } from './registry.js';
 
 const ASSESSMENTS = 10_000;
 const ROOMS = 50;
 
 /** Build the 10 000-assessment database; returns its path and some ids to work on. */
-function buildDatabase(dir: string): { path: string; roomIds: string[]; sampleIds: string[] } {
+async function buildDatabase(dir: string): Promise<{ path: string; roomIds: string[]; sampleIds: string[] }> {
   const path = join(dir, 'bench.sqlite');
   const scenario = DemoScenarioSchema.parse(demo);
-  const store = openRecordStore({ path, keyDir: join(dir, 'keys') });
-  const site = store.createSite({ name: scenario.site.name, building: scenario.site.building });
-  for (const spec of scenario.eyewear) store.createEyewear({ siteId: site.id, spec });
+  const store = await openRecordStore({ path, keyDir: join(dir, 'keys') });
+  const site = await store.createSite({ name: scenario.site.name, building: scenario.site.building });
+  for (const spec of scenario.eyewear) await store.createEyewear({ siteId: site.id, spec });
   const roomIds: string[] = [];
   const templates: string[] = []; // one real, store-made assessment per demo room
   for (let i = 0; i < ROOMS; i++) {
     const demoRoom = scenario.rooms[i % scenario.rooms.length];
     if (!demoRoom) throw new Error('no demo rooms');
-    const room = store.createRoom({ siteId: site.id, code: `${demoRoom.code}-${i}`, name: demoRoom.name, responsiblePerson: demoRoom.responsible });
-    for (const laser of demoRoom.input.lasers) store.createInstallation({ roomId: room.id, laser });
+    const room = await store.createRoom({ siteId: site.id, code: `${demoRoom.code}-${i}`, name: demoRoom.name, responsiblePerson: demoRoom.responsible });
+    for (const laser of demoRoom.input.lasers) await store.createInstallation({ roomId: room.id, laser });
     roomIds.push(room.id);
     if (i < scenario.rooms.length) {
-      const a = store.createAssessment({ roomId: room.id, content: { ...store.newAssessmentContent(room.id), notes: demoRoom.notes } });
+      const a = await store.createAssessment({ roomId: room.id, content: { ...await store.newAssessmentContent(room.id), notes: demoRoom.notes } });
       templates.push(a.current.id);
     }
   }
-  store.close();
+  await store.close();
 
   // Copy the templates with SQL until there are 10 000 assessments (200 per room).
   const db = new Database(path);
@@ -82,7 +82,7 @@ export async function runRecordsBench(): Promise<BenchEntry[]> {
   const entries: BenchEntry[] = [];
   try {
     const t0 = performance.now();
-    const { path, roomIds, sampleIds } = buildDatabase(dir);
+    const { path, roomIds, sampleIds } = await buildDatabase(dir);
     const buildMs = performance.now() - t0;
     const sizeMb = statSync(path).size / 1e6;
     console.log(`records bench: ${ASSESSMENTS} assessments in ${ROOMS} rooms, ${sizeMb.toFixed(0)} MB, built in ${(buildMs / 1000).toFixed(1)} s`);
@@ -90,18 +90,18 @@ export async function runRecordsBench(): Promise<BenchEntry[]> {
     // Open (integrity_check included), a fresh connection each run.
     entries.push({
       name: `records: open a database of ${ASSESSMENTS} assessments (${sizeMb.toFixed(0)} MB)`,
-      median_ms: timeMedian(15, () => openRecordStore({ path, keyDir: join(dir, 'keys') }).close()),
+      median_ms: await timeMedianAsync(15, async () => (await openRecordStore({ path, keyDir: join(dir, 'keys') })).close()),
       runs: 15,
       target_ms: 200,
     });
 
-    const store: RecordStore = openRecordStore({ path, keyDir: join(dir, 'keys') });
+    const store: RecordStore = await openRecordStore({ path, keyDir: join(dir, 'keys') });
     try {
       const listRoom = roomIds[0] ?? '';
       let listed = 0;
       entries.push({
-        name: `records: list a room's assessments (${store.listAssessments(listRoom).length} rows)`,
-        median_ms: timeMedian(50, () => (listed += store.listAssessments(listRoom).length)),
+        name: `records: list a room's assessments (${(await store.listAssessments(listRoom)).length} rows)`,
+        median_ms: await timeMedianAsync(50, async () => (listed += (await store.listAssessments(listRoom)).length)),
         runs: 50,
         target_ms: 50,
       });
@@ -109,16 +109,20 @@ export async function runRecordsBench(): Promise<BenchEntry[]> {
 
       // Save: notes edited, inputs unchanged (the common save while writing up an assessment), naming
       // the version it started from as the app does (optimistic concurrency).
-      const opened = sampleIds.map((id) => store.getAssessment(id));
-      const contents = opened.map((a) => a.current.content);
+      const contents: AssessmentContent[] = [];
+      const bases: SaveBase[] = [];
+      for (const id of sampleIds) {
+        const a = await store.getAssessment(id);
+        contents.push(a.current.content);
+        bases.push({ revisionId: a.current.id, version: a.version });
+      }
       entries.push({
         name: 'records: save one assessment (notes edited, results reused, version checked)',
-        median_ms: timeMedian(sampleIds.length, (i) => {
+        median_ms: await timeMedianAsync(sampleIds.length, async (i) => {
           const id = sampleIds[i] ?? '';
           const c = contents[i];
-          const a = opened[i];
-          if (!c || !a) throw new Error('content missing');
-          store.saveAssessment(id, { ...c, notes: `edited ${i}` }, { revisionId: a.current.id, version: a.version });
+          if (!c) throw new Error('content missing');
+          await store.saveAssessment(id, { ...c, notes: `edited ${i}` }, bases[i]);
         }),
         runs: sampleIds.length,
         target_ms: 5,
@@ -128,28 +132,30 @@ export async function runRecordsBench(): Promise<BenchEntry[]> {
       const n = 10;
       entries.push({
         name: 'records: save one assessment with changed inputs (includes evaluateRoom, 3 lasers)',
-        median_ms: timeMedian(n, (i) => {
+        median_ms: await timeMedianAsync(n, async (i) => {
           const c = contents[i];
           if (!c) throw new Error('content missing');
           const lasers = c.input.lasers.map((l, li) =>
             li === 0 ? { ...l, beams: l.beams.map((b) => ({ ...b, label: `${b.label ?? ''}`, exposureDuration_s: 10 + i })) } : l,
           );
-          store.saveAssessment(sampleIds[i] ?? '', { ...c, input: { ...c.input, lasers } });
+          await store.saveAssessment(sampleIds[i] ?? '', { ...c, input: { ...c.input, lasers } });
         }),
         runs: n,
       });
       const passphrase = 'bench passphrase (invented)';
-      const officer = store.createPerson({ name: 'Bench Officer', role: 'LSO' });
-      store.createPersonKey({ personId: officer.id, passphrase, passphraseAgain: passphrase });
-      let reviewed = { revisionId: '', version: 0 };
+      const officer = await store.createPerson({ name: 'Bench Officer', role: 'LSO' });
+      await store.createPersonKey({ personId: officer.id, passphrase, passphraseAgain: passphrase });
+      let reviewed: SaveBase = { revisionId: '', version: 0 };
       entries.push({
         name: 'records: sign one assessment (passphrase check with scrypt, re-evaluate, fingerprint, Ed25519, supersede, signing log)',
-        median_ms: timeMedian(
+        median_ms: await timeMedianAsync(
           n,
-          (i) => store.signAssessment(sampleIds[20 + i] ?? '', { personId: officer.id, passphrase, statement: 'Benchmark sign-off.' }, reviewed),
-          (i) => {
+          async (i) => {
+            await store.signAssessment(sampleIds[20 + i] ?? '', { personId: officer.id, passphrase, statement: 'Benchmark sign-off.' }, reviewed);
+          },
+          async (i) => {
             // the revision shown in the confirm step (untimed: the window already holds it)
-            const a = store.getAssessment(sampleIds[20 + i] ?? '');
+            const a = await store.getAssessment(sampleIds[20 + i] ?? '');
             reviewed = { revisionId: a.current.id, version: a.version };
           },
         ),
@@ -158,20 +164,21 @@ export async function runRecordsBench(): Promise<BenchEntry[]> {
 
       // A Register edit as the window sends it: the version opened and the fields seen, checked and
       // written in one write transaction.
-      const roomsToEdit = roomIds.slice(0, 40).map((id) => store.getRoom(id));
+      const roomsToEdit: Room[] = [];
+      for (const id of roomIds.slice(0, 40)) roomsToEdit.push(await store.getRoom(id));
       entries.push({
         name: 'records: edit one register entry (version check and write in one transaction)',
-        median_ms: timeMedian(roomsToEdit.length, (i) => {
+        median_ms: await timeMedianAsync(roomsToEdit.length, async (i) => {
           const r = roomsToEdit[i];
           if (!r) throw new Error('room missing');
-          store.updateRoom(r.id, { contact: `ext. ${4000 + i}` }, { updatedAt: r.updatedAt, seen: { code: r.code, name: r.name, contact: r.contact } });
+          await store.updateRoom(r.id, { contact: `ext. ${4000 + i}` }, { updatedAt: r.updatedAt, seen: { code: r.code, name: r.name, contact: r.contact } });
         }),
         runs: roomsToEdit.length,
         // one committed write, like the notes-only save above
         target_ms: 10,
       });
     } finally {
-      store.close();
+      await store.close();
     }
   } finally {
     if (!process.env["KEEP_BENCH_DB"]) rmSync(dir, { recursive: true, force: true }); else console.log("kept", dir);

@@ -116,9 +116,9 @@ async function main(): Promise<void> {
 /** 4. Records written as an older version writes them: the workspace names the defaults assumed. */
 async function olderRecords(): Promise<void> {
   const dir = mkdtempSync(path.join(os.tmpdir(), 'beamwarden-older-'));
-  const older = openRecordStore({ path: path.join(dir, 'records.sqlite'), keyDir: dir, calculatedWith: 'beamwarden-core 0.1.0' });
-  older.seedDemo();
-  older.close();
+  const older = await openRecordStore({ path: path.join(dir, 'records.sqlite'), keyDir: dir, calculatedWith: 'beamwarden-core 0.1.0' });
+  await older.seedDemo();
+  await older.close();
   const host = await startHost({ dir });
   const ctx = await launch();
   const page = ctx.pages()[0] ?? (await ctx.newPage());

@@ -23,17 +23,17 @@ let roomId = '';
 beforeAll(async () => {
   t = tempDir();
   const path = join(t.dir, 'records.sqlite');
-  older = openRecordStore({ path, keyDir: join(t.dir, 'keys'), calculatedWith: 'beamwarden-core 0.1.0' });
-  roomId = registerRoom(older).room.id;
-  older.createAssessment({ roomId, content: older.newAssessmentContent(roomId) });
-  older.close();
-  current = openRecordStore({ path, keyDir: join(t.dir, 'keys') });
+  older = await openRecordStore({ path, keyDir: join(t.dir, 'keys'), calculatedWith: 'beamwarden-core 0.1.0' });
+  roomId = (await registerRoom(older)).room.id;
+  await older.createAssessment({ roomId, content: await older.newAssessmentContent(roomId) });
+  await older.close();
+  current = await openRecordStore({ path, keyDir: join(t.dir, 'keys') });
   installStoreBridge(current);
   await session.refreshOverview();
 });
-afterAll(() => {
+afterAll(async () => {
   delete window.beamwarden;
-  current.close();
+  await current.close();
   t.cleanup();
 });
 

@@ -65,14 +65,14 @@ let roomId = '';
 
 beforeAll(async () => {
   t = tempDir();
-  store = openTemp(t.dir);
-  roomId = registerRoom(store).room.id;
+  store = await openTemp(t.dir);
+  roomId = (await registerRoom(store)).room.id;
   installStoreBridge(store);
   await session.refreshOverview();
 });
-afterAll(() => {
+afterAll(async () => {
   delete window.beamwarden;
-  store.close();
+  await store.close();
   t.cleanup();
 });
 
@@ -93,9 +93,9 @@ describe('in the workspace, through the real handler table', () => {
     );
     expect(await session.save()).toBe(true);
 
-    const saved = store.listAssessments(roomId)[0];
+    const saved = (await store.listAssessments(roomId))[0];
     if (!saved) throw new Error('not saved');
-    const a = store.getAssessment(saved.id);
+    const a = await store.getAssessment(saved.id);
     const stored = a.current.content.input.lasers[0]?.beams[0];
     expect(stored?.skinArea_m2).toBeCloseTo(0.03, 12);
     expect(stored?.viewing?.diffuse).toMatchObject({ reflectance: 0.9, deliberateDuration_s: 60, governs: 'deliberate' });

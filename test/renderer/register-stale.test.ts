@@ -23,9 +23,9 @@ let other: RecordStore;
 let roomId = '';
 
 const tick = (ms = 0): Promise<void> => new Promise((r) => setTimeout(r, ms));
-async function until(check: () => boolean, ms = 5000): Promise<void> {
+async function until(check: () => boolean | Promise<boolean>, ms = 5000): Promise<void> {
   const end = Date.now() + ms;
-  while (!check()) {
+  while (!(await check())) {
     if (Date.now() > end) throw new Error('timed out');
     await tick(20);
   }
@@ -33,19 +33,19 @@ async function until(check: () => boolean, ms = 5000): Promise<void> {
 
 beforeAll(async () => {
   t = tempDir();
-  mine = openTemp(t.dir);
-  other = openTemp(t.dir); // the other window, same file
+  mine = await openTemp(t.dir);
+  other = await openTemp(t.dir); // the other window, same file
   expect(other.info.path).toBe(join(t.dir, 'records.sqlite'));
-  const { room } = registerRoom(mine);
+  const { room } = await registerRoom(mine);
   roomId = room.id;
-  mine.createPerson({ name: 'Ada Quillfeather', role: 'Deputy LSO' });
+  await mine.createPerson({ name: 'Ada Quillfeather', role: 'Deputy LSO' });
   installStoreBridge(mine);
   await session.refreshOverview();
 });
-afterAll(() => {
+afterAll(async () => {
   delete window.beamwarden;
-  mine.close();
-  other.close();
+  await mine.close();
+  await other.close();
   t.cleanup();
 });
 
@@ -55,7 +55,7 @@ describe('a Register form opened before someone else saved the same entry', () =
     await fireEvent.click(screen.getByRole('button', { name: /A0\.07/ }));
     const contact = screen.getByLabelText('Contact') as HTMLInputElement;
     // the other window changes the room's responsible person meanwhile
-    other.updateRoom(roomId, { responsiblePerson: 'Dr. Imre Calloway-Senn' });
+    await other.updateRoom(roomId, { responsiblePerson: 'Dr. Imre Calloway-Senn' });
     await fireEvent.input(contact, { target: { value: 'ext. 4471' } });
     await fireEvent.click(screen.getByRole('button', { name: 'Save room' }));
     await until(() => screen.queryByTestId('register-stale') !== null);
@@ -63,18 +63,18 @@ describe('a Register form opened before someone else saved the same entry', () =
     expect(said).toMatch(/Not saved\. Room A0\.07 was changed by someone else since you opened it: responsible person .* → "Dr\. Imre Calloway-Senn"/);
     expect(said).toContain('nothing was overwritten');
     expect(said).not.toMatch(/responsiblePerson|updated_at|\bstale\b/);
-    expect(mine.getRoom(roomId).contact).toBe('');
+    expect((await mine.getRoom(roomId)).contact).toBe('');
     await fireEvent.click(screen.getByRole('button', { name: 'Reload the register' }));
     await until(() => screen.queryByTestId('register-stale') === null);
     expect((screen.getByLabelText('Responsible person') as HTMLInputElement).value).toBe('Dr. Imre Calloway-Senn');
     await fireEvent.input(screen.getByLabelText('Contact'), { target: { value: 'ext. 4471' } });
     await fireEvent.click(screen.getByRole('button', { name: 'Save room' }));
-    await until(() => mine.getRoom(roomId).contact === 'ext. 4471' && !session.busy);
-    expect(mine.getRoom(roomId).responsiblePerson).toBe('Dr. Imre Calloway-Senn');
+    await until(async () => (await mine.getRoom(roomId)).contact === 'ext. 4471' && !session.busy);
+    expect((await mine.getRoom(roomId)).responsiblePerson).toBe('Dr. Imre Calloway-Senn');
     // a second save from the same form names the version its own first save made
     await fireEvent.input(screen.getByLabelText('Contact'), { target: { value: 'ext. 4472' } });
     await fireEvent.click(screen.getByRole('button', { name: 'Save room' }));
-    await until(() => mine.getRoom(roomId).contact === 'ext. 4472');
+    await until(async () => (await mine.getRoom(roomId)).contact === 'ext. 4472');
     expect(screen.queryByTestId('register-stale')).toBeNull();
   });
 
@@ -83,22 +83,22 @@ describe('a Register form opened before someone else saved the same entry', () =
     const view = within(container);
     await fireEvent.click(view.getByRole('tab', { name: 'People' }));
     await fireEvent.click(view.getByRole('button', { name: 'Edit Ada Quillfeather' }));
-    const person = mine.listPeople().find((p) => p.name === 'Ada Quillfeather');
+    const person = (await mine.listPeople()).find((p) => p.name === 'Ada Quillfeather');
     if (!person) throw new Error('person');
-    other.updatePerson(person.id, { role: 'Laser safety officer' });
+    await other.updatePerson(person.id, { role: 'Laser safety officer' });
     const phone = container.querySelector(`#pe-${person.id}-phone`) as HTMLInputElement;
     await fireEvent.input(phone, { target: { value: '0123 4567' } });
     await fireEvent.submit(phone.closest('form')!);
     await until(() => view.queryByTestId('register-stale') !== null);
     expect(view.getByTestId('register-stale').textContent).toMatch(/Ada Quillfeather was changed by someone else since you opened it: role "Deputy LSO" → "Laser safety officer"/);
-    expect(mine.getPerson(person.id).phone).toBe('');
+    expect((await mine.getPerson(person.id)).phone).toBe('');
   });
 });
 
 describe('signing what was reviewed', () => {
   it('a draft saved by the other window after the confirm step is not signed; reloading leads back to review', async () => {
-    makeSigner(mine);
-    const made = mine.createAssessment({ roomId, content: mine.newAssessmentContent(roomId) });
+    await makeSigner(mine);
+    const made = await mine.createAssessment({ roomId, content: await mine.newAssessmentContent(roomId) });
     await session.refreshOverview();
     await session.openRoom(roomId, made.id);
     render(ReviewScreen);
@@ -109,12 +109,12 @@ describe('signing what was reviewed', () => {
     await fireEvent.click(screen.getByRole('button', { name: 'Review what is signed…' }));
     const confirm = screen.getByTestId('sign-confirm');
     // the other officer saves the draft while this one reads the confirm step
-    const inOther = other.getAssessment(made.id);
-    other.saveAssessment(made.id, { ...inOther.current.content, notes: 'curtain replaced' }, { revisionId: inOther.current.id, version: inOther.version });
+    const inOther = await other.getAssessment(made.id);
+    await other.saveAssessment(made.id, { ...inOther.current.content, notes: 'curtain replaced' }, { revisionId: inOther.current.id, version: inOther.version });
     await fireEvent.click(within(confirm).getByRole('button', { name: /^Sign revision 1/ }));
     await until(() => screen.queryByTestId('sign-stale') !== null);
     expect(screen.getByTestId('sign-stale').textContent).toMatch(/Not signed\..*changed by someone else since you opened it: saved as revision 1 at \d\d:\d\d\. Nothing was signed/);
-    expect(mine.getAssessment(made.id).current.status).toBe('draft');
+    expect((await mine.getAssessment(made.id)).current.status).toBe('draft');
     await fireEvent.click(screen.getByRole('button', { name: 'Reload and review again' }));
     await until(() => session.assessment?.current.content.notes === 'curtain replaced');
     expect(screen.queryByTestId('sign-stale')).toBeNull();

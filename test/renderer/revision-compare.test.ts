@@ -19,9 +19,9 @@ let roomId = '';
 let assessmentId = '';
 
 const tick = (ms = 0): Promise<void> => new Promise((r) => setTimeout(r, ms));
-async function until(check: () => boolean, ms = 5000): Promise<void> {
+async function until(check: () => boolean | Promise<boolean>, ms = 5000): Promise<void> {
   const end = Date.now() + ms;
-  while (!check()) {
+  while (!(await check())) {
     if (Date.now() > end) throw new Error('timed out');
     await tick(20);
   }
@@ -36,31 +36,31 @@ function edited(c: AssessmentContent, power_W: number, skinArea_m2?: number): As
   return { ...c, input: { ...c.input, lasers: [{ ...l0, beams: [beam, ...l0.beams.slice(1)] }, ...c.input.lasers.slice(1)] } };
 }
 
-beforeAll(() => {
+beforeAll(async () => {
   t = tempDir();
-  store = openTemp(t.dir);
-  roomId = registerRoom(store).room.id;
-  const made = store.createAssessment({ roomId, content: store.newAssessmentContent(roomId) });
+  store = await openTemp(t.dir);
+  roomId = (await registerRoom(store)).room.id;
+  const made = await store.createAssessment({ roomId, content: await store.newAssessmentContent(roomId) });
   assessmentId = made.id;
-  const signed = store.signAssessment(made.id, makeSigner(store).signOff(STATEMENT));
-  store.saveAssessment(made.id, edited(signed.current.content, 0.16, 0.02));
+  const signed = await store.signAssessment(made.id, (await makeSigner(store)).signOff(STATEMENT));
+  await store.saveAssessment(made.id, edited(signed.current.content, 0.16, 0.02));
   // a draft kept as a copy in the same room (as after a refused save)
-  const c = store.newAssessmentContent(roomId);
-  store.createAssessment({ roomId, content: { ...edited(c, 0.12), title: `${c.title} — your version, kept when your save was refused` } });
+  const c = await store.newAssessmentContent(roomId);
+  await store.createAssessment({ roomId, content: { ...edited(c, 0.12), title: `${c.title} — your version, kept when your save was refused` } });
   installStoreBridge(store);
 });
-afterAll(() => {
+afterAll(async () => {
   delete window.beamwarden;
-  store.close();
+  await store.close();
   t.cleanup();
 });
 
-function mount() {
-  const others = store.listAssessments(roomId).filter((a) => a.id !== assessmentId);
-  return within(render(RevisionCompare, { props: { assessmentId, revisions: store.listRevisions(assessmentId), others } }).container);
+async function mount() {
+  const others = (await store.listAssessments(roomId)).filter((a) => a.id !== assessmentId);
+  return within(render(RevisionCompare, { props: { assessmentId, revisions: await store.listRevisions(assessmentId), others } }).container);
 }
 
-function rowsOf(view: ReturnType<typeof mount>): string[][] {
+function rowsOf(view: Awaited<ReturnType<typeof mount>>): string[][] {
   return view
     .getAllByRole('row')
     .slice(1)
@@ -69,7 +69,7 @@ function rowsOf(view: ReturnType<typeof mount>): string[][] {
 
 describe('two revisions side by side', () => {
   it('the draft against the signed revision it was made from (the default pair)', async () => {
-    const view = mount();
+    const view = await mount();
     await fireEvent.click(view.getByRole('button', { name: 'Compare side by side' }));
     await until(() => view.queryByTestId('compare-table') !== null);
     const heads = view.getAllByRole('columnheader').map((h) => h.textContent ?? '');
@@ -85,7 +85,7 @@ describe('two revisions side by side', () => {
   });
 
   it('a kept copy in the same room against the assessment', async () => {
-    const view = mount();
+    const view = await mount();
     const right = view.getByLabelText('with') as HTMLSelectElement;
     await until(() => right.options.length === 3);
     const kept = [...right.options].find((o) => /kept when your save was refused — revision 1/.test(o.textContent ?? ''));
@@ -102,7 +102,7 @@ describe('two revisions side by side', () => {
   });
 
   it('the same revision on both sides is refused in words', async () => {
-    const view = mount();
+    const view = await mount();
     const left = view.getByLabelText('Compare') as HTMLSelectElement;
     const right = view.getByLabelText('with') as HTMLSelectElement;
     await fireEvent.change(left, { target: { value: right.value } });
@@ -111,9 +111,9 @@ describe('two revisions side by side', () => {
   });
 
   it('revisions of assessments of two different rooms are not compared', async () => {
-    const otherRoom = registerRoom(store, 'B2.16').room;
-    const there = store.createAssessment({ roomId: otherRoom.id, content: store.newAssessmentContent(otherRoom.id) });
-    const here = store.getAssessment(assessmentId);
+    const otherRoom = (await registerRoom(store, 'B2.16')).room;
+    const there = await store.createAssessment({ roomId: otherRoom.id, content: await store.newAssessmentContent(otherRoom.id) });
+    const here = await store.getAssessment(assessmentId);
     const reply = await window.beamwarden!.invoke('revisions-compare', { fromRevisionId: here.current.id, toRevisionId: there.current.id });
     expect(reply.ok).toBe(false);
     if (!reply.ok) expect(reply.error.message).toBe('Only revisions of assessments of the same room can be compared');

@@ -29,7 +29,7 @@ export const documentTable: AreaTable<DocumentHandlers, ApiContext> = {
   'document-render': {
     input: DocumentRequestSchema,
     run: async (req, { store }) => {
-      const doc = documentInputFromAssessment(store, req.assessmentId, req.revisionId !== undefined ? { revisionId: req.revisionId } : {});
+      const doc = await documentInputFromAssessment(store, req.assessmentId, req.revisionId !== undefined ? { revisionId: req.revisionId } : {});
       const pdf = await renderDocument(req.kind, doc, {
         paper: req.paper,
         units: req.units,
@@ -43,7 +43,7 @@ export const documentTable: AreaTable<DocumentHandlers, ApiContext> = {
   'document-render-site': {
     input: SiteDocumentRequestSchema,
     run: async (req, { store }) => {
-      const site = store.getSite(req.siteId);
+      const site = await store.getSite(req.siteId);
       const batch = await renderSiteDoorNotices(store, site.id, { paper: req.paper, units: req.units });
       return { fileName: `door-notices-${fileSafe(site.name)}-${batch.rooms.length}-rooms.pdf`, mime: 'application/pdf', base64: batch.pdf.toString('base64') };
     },

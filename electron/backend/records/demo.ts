@@ -6,7 +6,7 @@
 import { z } from 'zod';
 import demoScenario from '../../../assets/demo/demo-scenario.json' with { type: 'json' };
 import { EyewearSpecSchema, RoomInputSchema } from '../schemas/inputs.js';
-import { parseOrThrow, type StoreContext } from './context.js';
+import { parseOrThrow, transact, type StoreContext } from './context.js';
 import { generateKeyPairSync } from 'node:crypto';
 import { createAssessment, newAssessmentContent, signDraftWith } from './assessments.js';
 import { signerFromKey } from './personal-keys.js';
@@ -38,27 +38,27 @@ const DEMO_CONTROLS: readonly ControlChoice[] = [
   { category: 'engineering', measure: 'Remote viewing by camera', decision: 'rejected', reason: 'Experiments need direct access to the optics; enclosures and eyewear used instead.' },
 ];
 
-export function seedDemo(ctx: StoreContext, raw: unknown = demoScenario): Site {
+export async function seedDemo(ctx: StoreContext, raw: unknown = demoScenario): Promise<Site> {
   const scenario = parseOrThrow(DemoScenarioSchema, raw, 'Demo scenario');
-  const existing = listSites(ctx).find((s) => s.name === scenario.site.name && s.building === scenario.site.building);
+  const existing = (await listSites(ctx)).find((s) => s.name === scenario.site.name && s.building === scenario.site.building);
   if (existing) return existing;
-  return ctx.db.transaction(() => {
-    const site = createSite(ctx, { name: scenario.site.name, building: scenario.site.building, notes: withEmergencyContact(`${scenario.site.kind}. ${scenario.about}`, scenario.site.emergencyContact ?? '') });
-    const officer = createPerson(ctx, {
+  return await transact(ctx, async (ctx) => {
+    const site = await createSite(ctx, { name: scenario.site.name, building: scenario.site.building, notes: withEmergencyContact(`${scenario.site.kind}. ${scenario.about}`, scenario.site.emergencyContact ?? '') });
+    const officer = await createPerson(ctx, {
       name: scenario.officer.name,
       role: 'Laser safety officer',
       ...(scenario.officer.email ? { email: scenario.officer.email } : {}),
       ...(scenario.officer.phone ? { phone: scenario.officer.phone } : {}),
     });
-    if (scenario.deputy) createPerson(ctx, { name: scenario.deputy.name, role: 'Deputy laser safety officer' });
-    for (const spec of scenario.eyewear) createEyewear(ctx, { siteId: site.id, spec, location: 'Eyewear cabinet, corridor B2' });
-    scenario.rooms.forEach((r, index) => {
-      const room = createRoom(ctx, { siteId: site.id, code: r.code, name: r.name, responsiblePerson: r.responsible, notes: r.notes });
+    if (scenario.deputy) await createPerson(ctx, { name: scenario.deputy.name, role: 'Deputy laser safety officer' });
+    for (const spec of scenario.eyewear) await createEyewear(ctx, { siteId: site.id, spec, location: 'Eyewear cabinet, corridor B2' });
+    for (const [index, r] of scenario.rooms.entries()) {
+      const room = await createRoom(ctx, { siteId: site.id, code: r.code, name: r.name, responsiblePerson: r.responsible, notes: r.notes });
       const laserIds = new Map<string, string>();
       for (const laser of r.input.lasers) {
-        laserIds.set(laser.id, createInstallation(ctx, { roomId: room.id, laser, laserType: laser.name }).id);
+        laserIds.set(laser.id, (await createInstallation(ctx, { roomId: room.id, laser, laserType: laser.name })).id);
       }
-      const skeleton = newAssessmentContent(ctx, room.id);
+      const skeleton = await newAssessmentContent(ctx, room.id);
       const content: AssessmentContent = {
         ...skeleton,
         input: {
@@ -71,21 +71,21 @@ export function seedDemo(ctx: StoreContext, raw: unknown = demoScenario): Site {
         notes: r.notes,
         reviewBy: '2027-06-30',
       };
-      const assessment = createAssessment(ctx, { roomId: room.id, content });
+      const assessment = await createAssessment(ctx, { roomId: room.id, content });
       if (index === 0) {
         // A throwaway key on no trust list: the invented record shows as an unverified signature,
         // and the demo never becomes (or needs) a key this installation trusts.
-        signDraftWith(
+        await signDraftWith(
           ctx,
           assessment.id,
           'I have evaluated the laser hazards of this area with the inputs and assumptions recorded here and approve the controls listed.',
           signerFromKey(ctx, officer, generateKeyPairSync('ed25519').privateKey),
         );
       }
-    });
-    ctx.audit('seeded-demo', 'site', site.id, scenario.site.name);
+    }
+    await ctx.audit('seeded-demo', 'site', site.id, scenario.site.name);
     return site;
-  })();
+  });
 }
 
 /** The demo plan names lasers by their scenario ids; the register gives each installation its own id. */

@@ -1,9 +1,10 @@
 /**
  * Register edits and deletions that name the version the officer opened (register-versions.ts):
- * the check and the write happen in one write transaction, so no other writer can slip between.
+ * the check and the write happen in one write transaction (inTransaction: joined when the caller
+ * already holds one), so no other writer can slip between.
  * Without `expected` (the store's own callers: demo, tests) they behave as before.
  */
-import { translateSqliteError, type StoreContext } from './context.js';
+import { inTransaction, type StoreContext } from './context.js';
 import * as R from './register.js';
 import { assertEntryCurrent } from './register-versions.js';
 import {
@@ -22,18 +23,10 @@ import {
   type SiteDraft,
 } from './types.js';
 
-function inWrite<T>(ctx: StoreContext, what: string, fn: () => T): T {
-  try {
-    return ctx.db.transaction(fn).immediate();
-  } catch (e) {
-    throw translateSqliteError(e, what, ctx.db.name);
-  }
-}
-
 /** The entry, or null when it is not in the register (any more). */
-function orGone<T>(get: () => T): T | null {
+async function orGone<T>(get: () => Promise<T>): Promise<T | null> {
   try {
-    return get();
+    return await get();
   } catch (e) {
     if (e instanceof RecordError && e.code === 'not-found') return null;
     throw e;
@@ -52,77 +45,77 @@ const laserTitle = (i: LaserInstallation | null, seen?: InstallationSeen) => `La
 const eyewearTitle = (e: Eyewear | null, seen?: EyewearSeen) => `Eyewear ${e?.spec.id ?? seen?.spec?.id ?? ''}`.trim();
 const personTitle = (p: Person | null, seen?: PersonSeen) => p?.name ?? seen?.name ?? 'This person';
 
-export function updateSite(ctx: StoreContext, id: Id, patch: SiteSeen, expected?: RegisterBase<SiteSeen>): Site {
-  return inWrite(ctx, 'Site', () => {
-    const now = orGone(() => R.getSite(ctx, id));
+export function updateSite(ctx: StoreContext, id: Id, patch: SiteSeen, expected?: RegisterBase<SiteSeen>): Promise<Site> {
+  return inTransaction(ctx, 'Site', async (tx) => {
+    const now = await orGone(() => R.getSite(tx, id));
     assertEntryCurrent(siteTitle(now, expected?.seen), 'edit', now, expected);
-    return R.updateSite(ctx, id, patch);
+    return await R.updateSite(tx, id, patch);
   });
 }
-export function deleteSite(ctx: StoreContext, id: Id, expected?: RegisterBase<SiteSeen>): void {
-  inWrite(ctx, 'Site', () => {
-    const now = orGone(() => R.getSite(ctx, id));
+export function deleteSite(ctx: StoreContext, id: Id, expected?: RegisterBase<SiteSeen>): Promise<void> {
+  return inTransaction(ctx, 'Site', async (tx) => {
+    const now = await orGone(() => R.getSite(tx, id));
     assertEntryCurrent(siteTitle(now, expected?.seen), 'delete', now, expected);
-    R.deleteSite(ctx, id);
+    await R.deleteSite(tx, id);
   });
 }
 
-export function updateRoom(ctx: StoreContext, id: Id, patch: RoomSeen, expected?: RegisterBase<RoomSeen>): Room {
-  return inWrite(ctx, 'Room', () => {
-    const now = orGone(() => R.getRoom(ctx, id));
+export function updateRoom(ctx: StoreContext, id: Id, patch: RoomSeen, expected?: RegisterBase<RoomSeen>): Promise<Room> {
+  return inTransaction(ctx, 'Room', async (tx) => {
+    const now = await orGone(() => R.getRoom(tx, id));
     assertEntryCurrent(roomTitle(now, expected?.seen), 'edit', now, expected);
-    return R.updateRoom(ctx, id, patch);
+    return await R.updateRoom(tx, id, patch);
   });
 }
-export function deleteRoom(ctx: StoreContext, id: Id, expected?: RegisterBase<RoomSeen>): void {
-  inWrite(ctx, 'Room', () => {
-    const now = orGone(() => R.getRoom(ctx, id));
+export function deleteRoom(ctx: StoreContext, id: Id, expected?: RegisterBase<RoomSeen>): Promise<void> {
+  return inTransaction(ctx, 'Room', async (tx) => {
+    const now = await orGone(() => R.getRoom(tx, id));
     assertEntryCurrent(roomTitle(now, expected?.seen), 'delete', now, expected);
-    R.deleteRoom(ctx, id);
+    await R.deleteRoom(tx, id);
   });
 }
 
-export function updateInstallation(ctx: StoreContext, id: Id, patch: InstallationSeen, expected?: RegisterBase<InstallationSeen>): LaserInstallation {
-  return inWrite(ctx, 'Laser installation', () => {
-    const now = orGone(() => R.getInstallation(ctx, id));
+export function updateInstallation(ctx: StoreContext, id: Id, patch: InstallationSeen, expected?: RegisterBase<InstallationSeen>): Promise<LaserInstallation> {
+  return inTransaction(ctx, 'Laser installation', async (tx) => {
+    const now = await orGone(() => R.getInstallation(tx, id));
     assertEntryCurrent(laserTitle(now, expected?.seen), 'edit', now, expected);
-    return R.updateInstallation(ctx, id, patch);
+    return await R.updateInstallation(tx, id, patch);
   });
 }
-export function deleteInstallation(ctx: StoreContext, id: Id, expected?: RegisterBase<InstallationSeen>): void {
-  inWrite(ctx, 'Laser installation', () => {
-    const now = orGone(() => R.getInstallation(ctx, id));
+export function deleteInstallation(ctx: StoreContext, id: Id, expected?: RegisterBase<InstallationSeen>): Promise<void> {
+  return inTransaction(ctx, 'Laser installation', async (tx) => {
+    const now = await orGone(() => R.getInstallation(tx, id));
     assertEntryCurrent(laserTitle(now, expected?.seen), 'delete', now, expected);
-    R.deleteInstallation(ctx, id);
+    await R.deleteInstallation(tx, id);
   });
 }
 
-export function updateEyewear(ctx: StoreContext, id: Id, patch: EyewearSeen, expected?: RegisterBase<EyewearSeen>): Eyewear {
-  return inWrite(ctx, 'Eyewear', () => {
-    const now = orGone(() => R.getEyewear(ctx, id));
+export function updateEyewear(ctx: StoreContext, id: Id, patch: EyewearSeen, expected?: RegisterBase<EyewearSeen>): Promise<Eyewear> {
+  return inTransaction(ctx, 'Eyewear', async (tx) => {
+    const now = await orGone(() => R.getEyewear(tx, id));
     assertEntryCurrent(eyewearTitle(now, expected?.seen), 'edit', now, expected);
-    return R.updateEyewear(ctx, id, patch);
+    return await R.updateEyewear(tx, id, patch);
   });
 }
-export function deleteEyewear(ctx: StoreContext, id: Id, expected?: RegisterBase<EyewearSeen>): void {
-  inWrite(ctx, 'Eyewear', () => {
-    const now = orGone(() => R.getEyewear(ctx, id));
+export function deleteEyewear(ctx: StoreContext, id: Id, expected?: RegisterBase<EyewearSeen>): Promise<void> {
+  return inTransaction(ctx, 'Eyewear', async (tx) => {
+    const now = await orGone(() => R.getEyewear(tx, id));
     assertEntryCurrent(eyewearTitle(now, expected?.seen), 'delete', now, expected);
-    R.deleteEyewear(ctx, id);
+    await R.deleteEyewear(tx, id);
   });
 }
 
-export function updatePerson(ctx: StoreContext, id: Id, patch: PersonSeen, expected?: RegisterBase<PersonSeen>): Person {
-  return inWrite(ctx, 'Person', () => {
-    const now = orGone(() => R.getPerson(ctx, id));
+export function updatePerson(ctx: StoreContext, id: Id, patch: PersonSeen, expected?: RegisterBase<PersonSeen>): Promise<Person> {
+  return inTransaction(ctx, 'Person', async (tx) => {
+    const now = await orGone(() => R.getPerson(tx, id));
     assertEntryCurrent(personTitle(now, expected?.seen), 'edit', now, expected);
-    return R.updatePerson(ctx, id, patch);
+    return await R.updatePerson(tx, id, patch);
   });
 }
-export function deletePerson(ctx: StoreContext, id: Id, expected?: RegisterBase<PersonSeen>): void {
-  inWrite(ctx, 'Person', () => {
-    const now = orGone(() => R.getPerson(ctx, id));
+export function deletePerson(ctx: StoreContext, id: Id, expected?: RegisterBase<PersonSeen>): Promise<void> {
+  return inTransaction(ctx, 'Person', async (tx) => {
+    const now = await orGone(() => R.getPerson(tx, id));
     assertEntryCurrent(personTitle(now, expected?.seen), 'delete', now, expected);
-    R.deletePerson(ctx, id);
+    await R.deletePerson(tx, id);
   });
 }

@@ -28,18 +28,18 @@ function drawnText(pdf: Buffer): string {
   return execFileSync('pdftotext', ['-raw', '-enc', 'UTF-8', file, '-'], { encoding: 'utf8' });
 }
 
-beforeAll(() => {
+beforeAll(async () => {
   dir = mkdtempSync(join(tmpdir(), 'bw-plan-docs-'));
-  store = openRecordStore({ path: join(dir, 'demo.sqlite'), keyDir: join(dir, 'keys') });
-  const site = store.seedDemo();
-  for (const room of store.listRooms(site.id)) {
-    const a = store.listAssessments(room.id)[0];
-    if (a) docs.set(room.code, documentInputFromAssessment(store, a.id));
+  store = await openRecordStore({ path: join(dir, 'demo.sqlite'), keyDir: join(dir, 'keys') });
+  const site = await store.seedDemo();
+  for (const room of await store.listRooms(site.id)) {
+    const a = (await store.listAssessments(room.id))[0];
+    if (a) docs.set(room.code, await documentInputFromAssessment(store, a.id));
   }
 }, 120_000);
 
-afterAll(() => {
-  store?.close();
+afterAll(async () => {
+  await store?.close();
   if (dir) rmSync(dir, { recursive: true, force: true });
 });
 

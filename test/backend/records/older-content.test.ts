@@ -26,11 +26,15 @@ const open: RecordStore[] = [];
 beforeEach(() => {
   t = tempDir('bw-older-content-');
 });
-afterEach(() => {
-  for (const s of open.splice(0)) s.close();
+afterEach(async () => {
+  for (const s of open.splice(0)) await s.close();
   t.cleanup();
 });
-const keep = (s: RecordStore): RecordStore => (open.push(s), s);
+const keep = async (made: Promise<RecordStore>): Promise<RecordStore> => {
+  const s = await made;
+  open.push(s);
+  return s;
+};
 
 const SKIN = /^Irradiated skin area: not given, so the large-area skin limit is not applied \(limit specification 4\.3\) — saved with beamwarden-core 0\.1\.0, before this input existed \(/;
 
@@ -43,30 +47,31 @@ function withDiffuse(c: AssessmentContent): AssessmentContent {
 }
 
 describe('stored content from an older calculation', () => {
-  it('the schema-1 fixture: the defaults assumed are named, with the lasers and beams', () => {
+  it('the schema-1 fixture: the defaults assumed are named, with the lasers and beams', async () => {
     const path = join(t.dir, 'old.sqlite');
     copyFileSync(fixture, path);
-    const store = keep(openRecordStore({ path, keyDir: join(t.dir, 'keys') }));
-    const room = store.listSites().flatMap((s) => store.listRooms(s.id))[0];
+    const store = await keep(openRecordStore({ path, keyDir: join(t.dir, 'keys') }));
+    const site = (await store.listSites())[0];
+    const room = site ? (await store.listRooms(site.id))[0] : undefined;
     if (!room) throw new Error('fixture has a room');
-    const draft = store.listAssessments(room.id).find((a) => a.status === 'draft');
+    const draft = (await store.listAssessments(room.id)).find((a) => a.status === 'draft');
     if (!draft) throw new Error('fixture has a draft');
-    const a = store.getAssessment(draft.id);
+    const a = await store.getAssessment(draft.id);
     expect(a.current.calculatedWith).toBe(OLD);
     expect(a.assumedDefaults).toHaveLength(1);
     expect(a.assumedDefaults[0]).toMatch(SKIN);
     expect(a.assumedDefaults[0]).toContain('Erbium fibre amplifier, Erbium fibre amplifier 1550 nm; DFB source, DFB source 1310 nm');
     // saved with this version, the absent value is the officer's choice: nothing is reported
-    const saved = store.saveAssessment(a.id, a.current.content, { revisionId: a.current.id, version: a.version });
+    const saved = await store.saveAssessment(a.id, a.current.content, { revisionId: a.current.id, version: a.version });
     expect(saved.current.calculatedWith).not.toBe(OLD);
     expect(saved.assumedDefaults).toEqual([]);
   });
 
-  it('a diffuse reflection saved before the deliberate case existed: its two defaults are named', () => {
-    const older = keep(openRecordStore({ path: join(t.dir, 'older.sqlite'), keyDir: join(t.dir, 'keys-older'), calculatedWith: OLD }));
-    const { room } = registerRoom(older);
-    const made = older.createAssessment({ roomId: room.id, content: withDiffuse(older.newAssessmentContent(room.id)) });
-    const said = older.getAssessment(made.id).assumedDefaults;
+  it('a diffuse reflection saved before the deliberate case existed: its two defaults are named', async () => {
+    const older = await keep(openRecordStore({ path: join(t.dir, 'older.sqlite'), keyDir: join(t.dir, 'keys-older'), calculatedWith: OLD }));
+    const { room } = await registerRoom(older);
+    const made = await older.createAssessment({ roomId: room.id, content: withDiffuse(await older.newAssessmentContent(room.id)) });
+    const said = (await older.getAssessment(made.id)).assumedDefaults;
     expect(said).toHaveLength(3);
     expect(said[1]).toBe(
       `Deliberate viewing duration: 600 s (customary for looking at a diffuse spot on purpose; from memory) — saved with ${OLD}, before this input existed (Erbium fibre amplifier, Erbium fibre amplifier 1550 nm).`,
@@ -75,28 +80,28 @@ describe('stored content from an older calculation', () => {
       `Case that sets the diffuse hazard distance: the larger of the accidental and the deliberate viewing distances — saved with ${OLD}, before this input existed (Erbium fibre amplifier, Erbium fibre amplifier 1550 nm).`,
     );
     // the same content saved by this version: nothing assumed
-    const now = keep(openTemp(t.dir, 'now.sqlite'));
-    const r2 = registerRoom(now).room;
-    expect(now.createAssessment({ roomId: r2.id, content: withDiffuse(now.newAssessmentContent(r2.id)) }).assumedDefaults).toEqual([]);
+    const now = await keep(openTemp(t.dir, 'now.sqlite'));
+    const r2 = (await registerRoom(now)).room;
+    expect((await now.createAssessment({ roomId: r2.id, content: withDiffuse(await now.newAssessmentContent(r2.id)) })).assumedDefaults).toEqual([]);
   });
 });
 
 describe('older export files', () => {
-  it('imports, and the summary names the defaults assumed for the content and for eyewear without upkeep', () => {
-    const older = keep(openRecordStore({ path: join(t.dir, 'older.sqlite'), keyDir: join(t.dir, 'keys-older'), calculatedWith: OLD }));
-    const { room } = registerRoom(older);
-    older.createAssessment({ roomId: room.id, content: withDiffuse(older.newAssessmentContent(room.id)) });
-    const doc = JSON.parse(JSON.stringify(older.exportRoom(room.id))) as { eyewear: Array<Record<string, unknown>> };
+  it('imports, and the summary names the defaults assumed for the content and for eyewear without upkeep', async () => {
+    const older = await keep(openRecordStore({ path: join(t.dir, 'older.sqlite'), keyDir: join(t.dir, 'keys-older'), calculatedWith: OLD }));
+    const { room } = await registerRoom(older);
+    await older.createAssessment({ roomId: room.id, content: withDiffuse(await older.newAssessmentContent(room.id)) });
+    const doc = JSON.parse(JSON.stringify(await older.exportRoom(room.id))) as { eyewear: Array<Record<string, unknown>> };
     // written before eyewear upkeep existed (schema 5): no inspection fields
     for (const e of doc.eyewear) {
       delete e['inspectedOn'];
       delete e['condition'];
       delete e['nextInspection'];
     }
-    const fresh = keep(openTemp(t.dir, 'fresh.sqlite'));
-    const summary = fresh.importDocument(JSON.stringify(doc));
+    const fresh = await keep(openTemp(t.dir, 'fresh.sqlite'));
+    const summary = await fresh.importDocument(JSON.stringify(doc));
     expect(summary.assessments).toBe(1);
-    const tag = fresh.listEyewear(fresh.listSites()[0]?.id ?? '')[0]?.spec.id ?? '';
+    const tag = (await fresh.listEyewear((await fresh.listSites())[0]?.id ?? ''))[0]?.spec.id ?? '';
     expect(summary.assumedDefaults).toContain(
       `Eyewear ${tag}: the file has no inspection record (written before eyewear upkeep existed); condition "not recorded" and no inspection dates assumed.`,
     );
@@ -104,11 +109,11 @@ describe('older export files', () => {
     expect(summary.assumedDefaults.some((s) => /revision 1: Irradiated skin area/.test(s))).toBe(true);
   });
 
-  it('an export of this version assumes nothing', () => {
-    const now = keep(openTemp(t.dir, 'now.sqlite'));
-    const { room } = registerRoom(now);
-    now.createAssessment({ roomId: room.id, content: now.newAssessmentContent(room.id) });
-    const fresh = keep(openTemp(t.dir, 'fresh.sqlite'));
-    expect(fresh.importDocument(JSON.stringify(now.exportRoom(room.id))).assumedDefaults).toEqual([]);
+  it('an export of this version assumes nothing', async () => {
+    const now = await keep(openTemp(t.dir, 'now.sqlite'));
+    const { room } = await registerRoom(now);
+    await now.createAssessment({ roomId: room.id, content: await now.newAssessmentContent(room.id) });
+    const fresh = await keep(openTemp(t.dir, 'fresh.sqlite'));
+    expect((await fresh.importDocument(JSON.stringify(await now.exportRoom(room.id)))).assumedDefaults).toEqual([]);
   });
 });

@@ -21,15 +21,15 @@ let t: ReturnType<typeof tempDir>;
 let a: RecordStore;
 let b: RecordStore;
 let dbPath: string;
-beforeEach(() => {
+beforeEach(async () => {
   t = tempDir('bw-register-versions-');
   dbPath = join(t.dir, 'records.sqlite');
-  a = openTemp(t.dir);
-  b = openTemp(t.dir); // a second window on the same file
+  a = await openTemp(t.dir);
+  b = await openTemp(t.dir); // a second window on the same file
 });
-afterEach(() => {
-  a.close();
-  b.close();
+afterEach(async () => {
+  await a.close();
+  await b.close();
   t.cleanup();
 });
 
@@ -42,9 +42,9 @@ function windowOn(store: RecordStore) {
 interface Case {
   readonly kind: string;
   /** The entry as window A opened it, with the fields its form shows. */
-  readonly open: (s: RecordStore, ids: Ids) => { id: string; updatedAt: string; seen: Record<string, unknown> };
+  readonly open: (s: RecordStore, ids: Ids) => Promise<{ id: string; updatedAt: string; seen: Record<string, unknown> }>;
   /** Window B's change through the store (another officer). */
-  readonly otherChange: (s: RecordStore, ids: Ids) => void;
+  readonly otherChange: (s: RecordStore, ids: Ids) => Promise<unknown>;
   /** Window A's edit. */
   readonly patch: Record<string, unknown>;
   readonly update: string;
@@ -60,23 +60,23 @@ interface Ids {
   person: Person;
 }
 
-function setUp(s: RecordStore): Ids {
-  const { site, room } = registerRoom(s);
-  const laser = s.listInstallations(room.id)[0];
-  const eyewear = s.listEyewear(site.id)[0];
+async function setUp(s: RecordStore): Promise<Ids> {
+  const { site, room } = await registerRoom(s);
+  const laser = (await s.listInstallations(room.id))[0];
+  const eyewear = (await s.listEyewear(site.id))[0];
   if (!laser || !eyewear) throw new Error('demo room has lasers and eyewear');
-  const person = s.createPerson({ name: 'Ada Quillfeather', role: 'Deputy LSO', phone: '1234' });
+  const person = await s.createPerson({ name: 'Ada Quillfeather', role: 'Deputy LSO', phone: '1234' });
   return { site, room, laser, eyewear, person };
 }
 
 const CASES: readonly Case[] = [
   {
     kind: 'site',
-    open: (s, x) => {
-      const e = s.getSite(x.site.id);
+    open: async (s, x) => {
+      const e = await s.getSite(x.site.id);
       return { id: e.id, updatedAt: e.updatedAt, seen: { name: e.name, building: e.building, address: e.address, notes: e.notes } };
     },
-    otherChange: (s, x) => void s.updateSite(x.site.id, { name: 'Calloway Optics Wing' }),
+    otherChange: (s, x) => s.updateSite(x.site.id, { name: 'Calloway Optics Wing' }),
     patch: { building: 'Block C' },
     update: 'site-update',
     remove: 'site-delete',
@@ -84,11 +84,11 @@ const CASES: readonly Case[] = [
   },
   {
     kind: 'room',
-    open: (s, x) => {
-      const e = s.getRoom(x.room.id);
+    open: async (s, x) => {
+      const e = await s.getRoom(x.room.id);
       return { id: e.id, updatedAt: e.updatedAt, seen: { code: e.code, name: e.name, responsiblePerson: e.responsiblePerson, contact: e.contact, notes: e.notes } };
     },
-    otherChange: (s, x) => void s.updateRoom(x.room.id, { contact: 'ext. 4471' }),
+    otherChange: (s, x) => s.updateRoom(x.room.id, { contact: 'ext. 4471' }),
     patch: { name: 'Telecom bench (renamed)' },
     update: 'room-update',
     remove: 'room-delete',
@@ -96,15 +96,15 @@ const CASES: readonly Case[] = [
   },
   {
     kind: 'laser',
-    open: (s, x) => {
-      const e = s.getInstallation(x.laser.id);
+    open: async (s, x) => {
+      const e = await s.getInstallation(x.laser.id);
       return { id: e.id, updatedAt: e.updatedAt, seen: { laser: e.laser, maker: e.maker, serialNumber: e.serialNumber, status: e.status, notes: e.notes } };
     },
-    otherChange: (s, x) => {
-      const l = s.getInstallation(x.laser.id).laser;
+    otherChange: async (s, x) => {
+      const l = (await s.getInstallation(x.laser.id)).laser;
       const b0 = l.beams[0];
       if (!b0) throw new Error('beam');
-      s.updateInstallation(x.laser.id, { serialNumber: 'SN-7', laser: { ...l, beams: [{ ...b0, wavelength_nm: b0.wavelength_nm + 1 }, ...l.beams.slice(1)] } });
+      await s.updateInstallation(x.laser.id, { serialNumber: 'SN-7', laser: { ...l, beams: [{ ...b0, wavelength_nm: b0.wavelength_nm + 1 }, ...l.beams.slice(1)] } });
     },
     patch: { notes: 'serviced' },
     update: 'installation-update',
@@ -114,11 +114,11 @@ const CASES: readonly Case[] = [
   },
   {
     kind: 'eyewear',
-    open: (s, x) => {
-      const e = s.getEyewear(x.eyewear.id);
+    open: async (s, x) => {
+      const e = await s.getEyewear(x.eyewear.id);
       return { id: e.id, updatedAt: e.updatedAt, seen: { spec: e.spec, location: e.location, quantity: e.quantity, notes: e.notes, condition: e.condition } };
     },
-    otherChange: (s, x) => void s.updateEyewear(x.eyewear.id, { quantity: 7, condition: 'damaged' }),
+    otherChange: (s, x) => s.updateEyewear(x.eyewear.id, { quantity: 7, condition: 'damaged' }),
     patch: { location: 'Cabinet 2' },
     update: 'eyewear-update',
     remove: 'eyewear-delete',
@@ -126,11 +126,11 @@ const CASES: readonly Case[] = [
   },
   {
     kind: 'person',
-    open: (s, x) => {
-      const e = s.getPerson(x.person.id);
+    open: async (s, x) => {
+      const e = await s.getPerson(x.person.id);
       return { id: e.id, updatedAt: e.updatedAt, seen: { name: e.name, role: e.role, email: e.email, phone: e.phone } };
     },
-    otherChange: (s, x) => void s.updatePerson(x.person.id, { role: 'Laser safety officer' }),
+    otherChange: (s, x) => s.updatePerson(x.person.id, { role: 'Laser safety officer' }),
     patch: { email: 'ada@example.org' },
     update: 'person-update',
     remove: 'person-delete',
@@ -140,10 +140,10 @@ const CASES: readonly Case[] = [
 
 describe('a register edit from an older version is refused with what changed; nothing is overwritten', () => {
   it.each(CASES)('$kind: edit', async (c) => {
-    const ids = setUp(a);
+    const ids = await setUp(a);
     const inA = windowOn(a);
-    const opened = c.open(a, ids);
-    c.otherChange(b, ids);
+    const opened = await c.open(a, ids);
+    await c.otherChange(b, ids);
     const before = snapshot(dbPath);
     const reply = await inA(c.update, { id: opened.id, patch: c.patch, expected: { updatedAt: opened.updatedAt, seen: opened.seen } });
     expect(reply.ok).toBe(false);
@@ -155,15 +155,15 @@ describe('a register edit from an older version is refused with what changed; no
     expect(reply.error.message).not.toMatch(/\[\d\]|_nm|_W\b|beams\./);
     expect(snapshot(dbPath)).toBe(before);
     // Reloaded, the same edit goes through on top of the other officer's change.
-    const again = c.open(a, ids);
+    const again = await c.open(a, ids);
     const ok = await inA(c.update, { id: again.id, patch: c.patch, expected: { updatedAt: again.updatedAt, seen: again.seen } });
     expect(ok.ok).toBe(true);
   });
 
   it.each(CASES)('$kind: delete', async (c) => {
-    const ids = setUp(a);
-    const opened = c.open(a, ids);
-    c.otherChange(b, ids);
+    const ids = await setUp(a);
+    const opened = await c.open(a, ids);
+    await c.otherChange(b, ids);
     const before = snapshot(dbPath);
     const reply = await windowOn(a)(c.remove, { id: opened.id, expected: { updatedAt: opened.updatedAt, seen: opened.seen } });
     expect(reply.ok).toBe(false);
@@ -174,8 +174,8 @@ describe('a register edit from an older version is refused with what changed; no
   });
 
   it.each(CASES)('$kind: an edit without the version it started from is refused at the door', async (c) => {
-    const ids = setUp(a);
-    const opened = c.open(a, ids);
+    const ids = await setUp(a);
+    const opened = await c.open(a, ids);
     const reply = await windowOn(a)(c.update, { id: opened.id, patch: c.patch });
     expect(reply.ok).toBe(false);
     if (!reply.ok) expect(reply.error.code).toBe('invalid_input');
@@ -184,9 +184,9 @@ describe('a register edit from an older version is refused with what changed; no
 
 describe('an entry deleted by someone else', () => {
   it('an edit of a person another window removed says so, in words', async () => {
-    const ids = setUp(a);
+    const ids = await setUp(a);
     const seen = { name: ids.person.name, role: ids.person.role };
-    b.deletePerson(ids.person.id);
+    await b.deletePerson(ids.person.id);
     const reply = await windowOn(a)('person-update', { id: ids.person.id, patch: { phone: '99' }, expected: { updatedAt: ids.person.updatedAt, seen } });
     expect(reply.ok).toBe(false);
     if (!reply.ok) {
@@ -197,18 +197,18 @@ describe('an entry deleted by someone else', () => {
 });
 
 describe('versions never repeat', () => {
-  it('two saves in the same millisecond leave two different versions (a stopped clock)', () => {
+  it('two saves in the same millisecond leave two different versions (a stopped clock)', async () => {
     const frozen = '2026-05-01T09:30:00.000Z';
-    const s = openRecordStore({ path: join(t.dir, 'frozen.sqlite'), keyDir: join(t.dir, 'keys-frozen'), now: () => frozen });
+    const s = await openRecordStore({ path: join(t.dir, 'frozen.sqlite'), keyDir: join(t.dir, 'keys-frozen'), now: () => frozen });
     try {
-      const site = s.createSite({ name: 'Frozen clock site' });
-      const v1 = s.updateSite(site.id, { building: 'A' }, { updatedAt: site.updatedAt });
-      const v2 = s.updateSite(site.id, { building: 'B' }, { updatedAt: v1.updatedAt });
+      const site = await s.createSite({ name: 'Frozen clock site' });
+      const v1 = await s.updateSite(site.id, { building: 'A' }, { updatedAt: site.updatedAt });
+      const v2 = await s.updateSite(site.id, { building: 'B' }, { updatedAt: v1.updatedAt });
       expect([site.updatedAt, v1.updatedAt, v2.updatedAt]).toEqual([frozen, '2026-05-01T09:30:00.001Z', '2026-05-01T09:30:00.002Z']);
       // the first version is now out of date although the clock has not moved
-      expect(() => s.updateSite(site.id, { building: 'C' }, { updatedAt: v1.updatedAt })).toThrow(/changed by someone else/);
+      await expect(s.updateSite(site.id, { building: 'C' }, { updatedAt: v1.updatedAt })).rejects.toThrow(/changed by someone else/);
     } finally {
-      s.close();
+      await s.close();
     }
   });
 });
@@ -217,12 +217,12 @@ describe('signing checks the revision the officer reviewed', () => {
   const base = (x: Assessment) => ({ revisionId: x.current.id, version: x.version });
 
   it('a draft saved by someone else after the confirm step is not signed', async () => {
-    const { room } = registerRoom(a);
-    const signer = makeSigner(a);
-    const made = a.createAssessment({ roomId: room.id, content: a.newAssessmentContent(room.id) });
-    const reviewedInA = a.getAssessment(made.id);
-    const inB = b.getAssessment(made.id);
-    b.saveAssessment(made.id, { ...inB.current.content, notes: 'B changed the controls after A reviewed' }, base(inB));
+    const { room } = await registerRoom(a);
+    const signer = await makeSigner(a);
+    const made = await a.createAssessment({ roomId: room.id, content: await a.newAssessmentContent(room.id) });
+    const reviewedInA = await a.getAssessment(made.id);
+    const inB = await b.getAssessment(made.id);
+    await b.saveAssessment(made.id, { ...inB.current.content, notes: 'B changed the controls after A reviewed' }, base(inB));
     const before = snapshot(dbPath);
     const reply = await windowOn(a)('assessment-sign', { id: made.id, signOff: signer.signOff(STATEMENT), reviewed: base(reviewedInA) });
     expect(reply.ok).toBe(false);
@@ -232,19 +232,19 @@ describe('signing checks the revision the officer reviewed', () => {
     }
     expect(snapshot(dbPath)).toBe(before);
     // reviewed again, it signs
-    const reviewedAgain = a.getAssessment(made.id);
+    const reviewedAgain = await a.getAssessment(made.id);
     const ok = await windowOn(a)('assessment-sign', { id: made.id, signOff: signer.signOff(STATEMENT), reviewed: base(reviewedAgain) });
     expect(ok.ok).toBe(true);
-    expect(a.getAssessment(made.id).current.status).toBe('signed');
+    expect((await a.getAssessment(made.id)).current.status).toBe('signed');
   });
 
   it('signing without naming the reviewed revision is refused at the door', async () => {
-    const { room } = registerRoom(a);
-    const signer = makeSigner(a);
-    const made = a.createAssessment({ roomId: room.id, content: a.newAssessmentContent(room.id) });
+    const { room } = await registerRoom(a);
+    const signer = await makeSigner(a);
+    const made = await a.createAssessment({ roomId: room.id, content: await a.newAssessmentContent(room.id) });
     const reply = await windowOn(a)('assessment-sign', { id: made.id, signOff: signer.signOff(STATEMENT) });
     expect(reply.ok).toBe(false);
     if (!reply.ok) expect(reply.error.code).toBe('invalid_input');
-    expect(a.getAssessment(made.id).current.status).toBe('draft');
+    expect((await a.getAssessment(made.id)).current.status).toBe('draft');
   });
 });
