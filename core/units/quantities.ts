@@ -17,6 +17,7 @@ export type Dimension =
   | 'angle'
   | 'irradiance'
   | 'radiantExposure'
+  | 'area'
   | 'ratio';
 
 /** SI base unit of each dimension. */
@@ -30,6 +31,7 @@ export const SI_UNIT: Readonly<Record<Dimension, string>> = {
   angle: 'rad',
   irradiance: 'W/m²',
   radiantExposure: 'J/m²',
+  area: 'm²',
   ratio: '',
 };
 
@@ -71,6 +73,12 @@ const BASES: ReadonlyArray<{ sym: string; dim: Dimension; factor: string; prefix
   { sym: 'min', dim: 'time', factor: '60', prefixed: false },
   { sym: 'h', dim: 'time', factor: '3600', prefixed: false },
   { sym: '%', dim: 'ratio', factor: '0.01', prefixed: false },
+  // Areas take their own factor: a prefix applies to the metre before squaring (1 cm² = 1e-4 m²,
+  // BIPM SI brochure 9th ed. 3: "cm²" means (0.01 m)²), so they are listed, never prefixed.
+  { sym: 'm2', dim: 'area', factor: '1', prefixed: false },
+  { sym: 'dm2', dim: 'area', factor: '1e-2', prefixed: false },
+  { sym: 'cm2', dim: 'area', factor: '1e-4', prefixed: false },
+  { sym: 'mm2', dim: 'area', factor: '1e-6', prefixed: false },
 ];
 
 function normaliseUnit(u: string): string {
@@ -130,6 +138,7 @@ export const DIMENSION_WORDS: Readonly<Record<Dimension, string>> = {
   angle: 'an angle',
   irradiance: 'an irradiance',
   radiantExposure: 'a radiant exposure',
+  area: 'an area',
   ratio: 'a ratio',
 };
 
@@ -185,7 +194,7 @@ function thousandsHint(n: DecT, unitTyped: string, expect: Dimension): string {
   const plainText = `${n.toString()}${unitTyped ? ` ${unitTyped}` : ''}`;
   const def = UNIT_TABLE.get(normaliseUnit(unitTyped));
   const want = expect === 'wavelength' ? 'length' : expect;
-  if (!def || def.dim !== want || expect === 'ratio' || def.dim === 'angle' || def.dim === 'irradiance' || def.dim === 'radiantExposure') return plainText;
+  if (!def || def.dim !== want || expect === 'ratio' || def.dim === 'angle' || def.dim === 'irradiance' || def.dim === 'radiantExposure' || def.dim === 'area') return plainText;
   const si = n.mul(def.factor);
   const pretty = formatSI(si, SI_UNIT[expect], 12);
   return pretty.replace(/\s+/g, ' ') === plainText ? plainText : `${plainText} or ${pretty}`;
@@ -211,6 +220,8 @@ function example(d: Dimension): string {
       return '25 W/m²';
     case 'radiantExposure':
       return '0.5 J/cm²';
+    case 'area':
+      return '200 cm²';
     case 'ratio':
       return '0.15 or 15 %';
   }

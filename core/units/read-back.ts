@@ -6,7 +6,7 @@
 import { SI_UNIT, formatSI, type Dimension } from './quantities.js';
 
 /** The unit a value is written back in: a fixed one, or an SI prefix picked for the value. */
-export type ReadBackStyle = 'nm' | 'mm' | 'm' | 'mrad' | 'deg' | '%' | 'x' | 'prefix';
+export type ReadBackStyle = 'nm' | 'mm' | 'm' | 'mrad' | 'deg' | '%' | 'x' | 'cm2' | 'prefix';
 
 /** Round-trip-safe number text (12 significant digits drop binary noise such as 1064.0000000001). */
 function num(v: number): string {
@@ -31,6 +31,9 @@ export function readBack(si: number, dimension: Dimension, style: ReadBackStyle)
       return `${num(si * 100)} %`;
     case 'x':
       return num(si);
+    case 'cm2':
+      // skin areas: square centimetres, the size an officer pictures (1 cm² = 1e-4 m²)
+      return `${num(si * 1e4)} cm²`;
     case 'prefix':
       // 12 significant digits only pick the prefix; they do not round an input.
       return formatSI(String(si), SI_UNIT[dimension], 12, 'up');

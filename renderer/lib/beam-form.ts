@@ -19,6 +19,8 @@ export interface BeamForm {
   /** Why the officer chose this exposure duration (recorded as an assumption). */
   durationWhy: string;
   diffuseOn: boolean;
+  /** Which diffuse viewing case governs; '' = the one with the larger distance (the core's default). */
+  diffuseGoverns: '' | 'accidental' | 'deliberate';
   specularOn: boolean;
   lensOn: boolean;
   fiberOn: boolean;
@@ -42,11 +44,13 @@ export const BEAM_FIELDS = [
   'exposureDuration',
   'sourceAngle',
   'closestApproach',
+  'skinArea',
   'attenuation',
   'diffuseReflectance',
   'diffuseAngle',
   'diffuseTarget',
   'diffuseViewer',
+  'diffuseDeliberate',
   'specularReflectance',
   'specularPath',
   'lensFocal',
@@ -109,6 +113,8 @@ export function beamFormFrom(b: BeamInput | undefined, why = ''): BeamForm {
         return b?.sourceAngle_rad;
       case 'closestApproach':
         return v?.closestApproach_m;
+      case 'skinArea':
+        return b?.skinArea_m2;
       case 'attenuation':
         return v?.attenuation_per_m;
       case 'diffuseReflectance':
@@ -119,6 +125,8 @@ export function beamFormFrom(b: BeamInput | undefined, why = ''): BeamForm {
         return v?.diffuse?.targetDistance_m;
       case 'diffuseViewer':
         return v?.diffuse?.viewerDistance_m;
+      case 'diffuseDeliberate':
+        return v?.diffuse?.deliberateDuration_s;
       case 'specularReflectance':
         return v?.specular?.reflectance;
       case 'specularPath':
@@ -173,6 +181,7 @@ export function beamFormFrom(b: BeamInput | undefined, why = ''): BeamForm {
     f,
     durationWhy: why,
     diffuseOn: v?.diffuse !== undefined,
+    diffuseGoverns: v?.diffuse?.governs ?? '',
     specularOn: v?.specular !== undefined,
     lensOn: v?.lens !== undefined,
     fiberOn: v?.fiber !== undefined,
@@ -195,10 +204,10 @@ export function beamErrors(form: BeamForm): string[] {
 
 /** The fields that take part in the input, given the toggles. */
 export function activeFields(form: BeamForm): BeamFieldName[] {
-  const on: BeamFieldName[] = ['wavelength', 'diameter', 'divergence', 'exposureDuration', 'sourceAngle', 'closestApproach', 'attenuation'];
+  const on: BeamFieldName[] = ['wavelength', 'diameter', 'divergence', 'exposureDuration', 'sourceAngle', 'closestApproach', 'skinArea', 'attenuation'];
   on.push(...(form.emissionKind === 'cw' ? (['power'] as const) : (['energy', 'pulseDuration', 'repetitionRate'] as const)));
   if (form.elliptical) on.push('diameterY', 'divergenceY');
-  if (form.diffuseOn) on.push('diffuseReflectance', 'diffuseAngle', 'diffuseTarget', 'diffuseViewer');
+  if (form.diffuseOn) on.push('diffuseReflectance', 'diffuseAngle', 'diffuseTarget', 'diffuseViewer', 'diffuseDeliberate');
   if (form.specularOn) on.push('specularReflectance', 'specularPath');
   if (form.lensOn) on.push('lensFocal', 'lensBeam');
   if (form.fiberOn) on.push('fiberNa', 'fiberMfd');
@@ -275,6 +284,8 @@ export function beamInputFrom(form: BeamForm): BeamInput | null {
       ...opt('viewingAngle_rad', val('diffuseAngle')),
       ...opt('targetDistance_m', val('diffuseTarget')),
       ...opt('viewerDistance_m', val('diffuseViewer')),
+      ...opt('deliberateDuration_s', val('diffuseDeliberate')),
+      ...(form.diffuseGoverns !== '' ? { governs: form.diffuseGoverns } : {}),
     };
   }
   if (form.specularOn && !gaps.has('Specular reflection')) viewing['specular'] = { reflectance: need('specularReflectance'), ...opt('pathToSurface_m', val('specularPath')) };
@@ -306,6 +317,7 @@ export function beamInputFrom(form: BeamForm): BeamInput | null {
     },
     ...opt('exposureDuration_s', val('exposureDuration')),
     ...opt('sourceAngle_rad', val('sourceAngle')),
+    ...opt('skinArea_m2', val('skinArea')),
     ...(Object.keys(viewing).length > 0 ? { viewing: viewing as BeamInput['viewing'] } : {}),
     ...(Object.keys(tol).length > 0 ? { tolerances: tol } : {}),
     ...(form.keep.settings !== undefined ? { settings: form.keep.settings } : {}),

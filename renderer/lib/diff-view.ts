@@ -29,6 +29,7 @@ type Shown =
   | { readonly unit: DisplayUnit; readonly round?: 'up' | 'down' }
   | { readonly percent: true }
   | { readonly degrees: true }
+  | { readonly cm2: true }
   | { readonly choices: Readonly<Record<string, string>> }
   | { readonly text: true };
 
@@ -68,6 +69,13 @@ const BEAM_FIELDS: Readonly<Record<string, FieldInfo>> = {
   'viewing.diffuse.viewingAngle_rad': { label: 'Viewing angle from the normal', shown: { degrees: true }, empty: '0 (worst case)' },
   'viewing.diffuse.targetDistance_m': { label: 'Laser to surface', shown: q('m'), empty: 'at the aperture' },
   'viewing.diffuse.viewerDistance_m': { label: 'Surface to viewer', shown: q('m'), empty: 'none' },
+  'viewing.diffuse.deliberateDuration_s': { label: 'Deliberate viewing duration', shown: q('s'), empty: '600 s (customary)' },
+  'viewing.diffuse.governs': {
+    label: 'Case that sets the hazard distance',
+    shown: { choices: { accidental: 'accidental viewing', deliberate: 'deliberate viewing of the spot' } },
+    empty: 'the larger distance',
+  },
+  skinArea_m2: { label: 'Irradiated skin area', shown: { cm2: true }, empty: 'not applied' },
   'viewing.specular': { label: 'Specular reflection', shown: T, empty: 'not assessed' },
   'viewing.specular.reflectance': { label: 'Specular reflectance', shown: PCT },
   'viewing.specular.pathToSurface_m': { label: 'Laser to mirror', shown: q('m'), empty: '0 m' },
@@ -164,6 +172,7 @@ export function showValue(v: unknown, info: FieldInfo | undefined, habit: UnitHa
     if ('unit' in s) return quantityText(String(v), s.unit, { sig: s.round ? 3 : 6, round: s.round ?? 'nearest', habit });
     if ('percent' in s) return `${Number((Number(v) * 100).toPrecision(6))} %`;
     if ('degrees' in s) return `${Number(((Number(v) * 180) / Math.PI).toPrecision(4))}°`;
+    if ('cm2' in s) return `${Number((Number(v) * 1e4).toPrecision(6))} cm²`;
   }
   if (typeof v === 'object') {
     // a whole group added or removed (e.g. the diffuse viewing condition)

@@ -30,6 +30,10 @@ class Session {
   busy = $state(false);
   /** The message of a save refused because someone else saved first (null when none). */
   stale = $state<string | null>(null);
+  /** The message of a register edit refused because someone else changed the entry first (null when none). */
+  registerStale = $state<string | null>(null);
+  /** Counts reloads of the register after such a refusal: open register forms take the stored values again. */
+  registerEpoch = $state(0);
 
   room = $state<Room | null>(null);
   site = $state<Site | null>(null);
@@ -185,10 +189,10 @@ class Session {
   /** New and edited register lasers of the draft, each edited one with the state it was opened at. */
   private registerChanges(d: Draft): {
     newLasers: Array<{ draftId: string; laser: LaserInput; laserType: string }>;
-    changedLasers: Array<{ id: string; laser: LaserInput; expectedUpdatedAt: string }>;
+    changedLasers: Array<{ id: string; laser: LaserInput; expectedUpdatedAt: string; seenLaser: LaserInput }>;
   } {
     const newLasers: Array<{ draftId: string; laser: LaserInput; laserType: string }> = [];
-    const changedLasers: Array<{ id: string; laser: LaserInput; expectedUpdatedAt: string }> = [];
+    const changedLasers: Array<{ id: string; laser: LaserInput; expectedUpdatedAt: string; seenLaser: LaserInput }> = [];
     for (const lf of d.lasers) {
       const { laser: full } = laserInputFrom(lf);
       if (!full) continue;
@@ -198,7 +202,7 @@ class Session {
         newLasers.push({ draftId: lf.id, laser, laserType: laser.name });
       } else {
         const reg = this.installations.find((i) => i.id === lf.id);
-        if (reg && JSON.stringify(reg.laser) !== JSON.stringify(laser)) changedLasers.push({ id: lf.id, laser, expectedUpdatedAt: reg.updatedAt });
+        if (reg && JSON.stringify(reg.laser) !== JSON.stringify(laser)) changedLasers.push({ id: lf.id, laser, expectedUpdatedAt: reg.updatedAt, seenLaser: reg.laser });
       }
     }
     return { newLasers, changedLasers };
@@ -256,6 +260,34 @@ class Session {
   /** Replace the open assessment after an operation returned a newer copy (sign-off). */
   adopt(a: Assessment): void {
     this.setAssessment(a);
+  }
+
+  /**
+   * A register edit or deletion: like `run`, but a refusal because someone else changed the entry
+   * first is shown as its own warning with a way to reload (the form keeps what was typed until then).
+   */
+  async runRegisterEdit(fn: () => Promise<void>): Promise<boolean> {
+    this.busy = true;
+    try {
+      await fn();
+      this.registerStale = null;
+      return true;
+    } catch (e) {
+      if (e instanceof ApiError && e.code === 'stale') this.registerStale = e.message;
+      else this.say('error', messageOf(e));
+      return false;
+    } finally {
+      this.busy = false;
+    }
+  }
+
+  /** After a refused register edit: read the register again; open forms show the stored values. */
+  async reloadRegister(): Promise<void> {
+    await this.run(async () => {
+      await this.refreshOverview();
+      this.registerStale = null;
+      this.registerEpoch++;
+    });
   }
 
   /** Run an operation with the busy flag; errors become a notice. */

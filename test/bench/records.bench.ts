@@ -19,7 +19,7 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import demo from '../../assets/demo/demo-scenario.json' with { type: 'json' };
 import { DemoScenarioSchema } from '../../electron/backend/records/demo.js';
-import { openRecordStore, type AssessmentContent, type RecordStore } from '../../electron/backend/records/index.js';
+import { openRecordStore, type AssessmentContent, type RecordStore, type Room, type SaveBase } from '../../electron/backend/records/index.js';
 import { timeMedianAsync, type BenchEntry } from './registry.js';
 
 const ASSESSMENTS = 10_000;
@@ -107,16 +107,22 @@ export async function runRecordsBench(): Promise<BenchEntry[]> {
       });
       if (listed === 0) throw new Error('nothing listed');
 
-      // Save: notes edited, inputs unchanged (the common save while writing up an assessment).
+      // Save: notes edited, inputs unchanged (the common save while writing up an assessment), naming
+      // the version it started from as the app does (optimistic concurrency).
       const contents: AssessmentContent[] = [];
-      for (const id of sampleIds) contents.push((await store.getAssessment(id)).current.content);
+      const bases: SaveBase[] = [];
+      for (const id of sampleIds) {
+        const a = await store.getAssessment(id);
+        contents.push(a.current.content);
+        bases.push({ revisionId: a.current.id, version: a.version });
+      }
       entries.push({
-        name: 'records: save one assessment (notes edited, results reused)',
+        name: 'records: save one assessment (notes edited, results reused, version checked)',
         median_ms: await timeMedianAsync(sampleIds.length, async (i) => {
           const id = sampleIds[i] ?? '';
           const c = contents[i];
           if (!c) throw new Error('content missing');
-          await store.saveAssessment(id, { ...c, notes: `edited ${i}` });
+          await store.saveAssessment(id, { ...c, notes: `edited ${i}` }, bases[i]);
         }),
         runs: sampleIds.length,
         target_ms: 5,
@@ -139,12 +145,37 @@ export async function runRecordsBench(): Promise<BenchEntry[]> {
       const passphrase = 'bench passphrase (invented)';
       const officer = await store.createPerson({ name: 'Bench Officer', role: 'LSO' });
       await store.createPersonKey({ personId: officer.id, passphrase, passphraseAgain: passphrase });
+      let reviewed: SaveBase = { revisionId: '', version: 0 };
       entries.push({
         name: 'records: sign one assessment (passphrase check with scrypt, re-evaluate, fingerprint, Ed25519, supersede, signing log)',
-        median_ms: await timeMedianAsync(n, async (i) => {
-          await store.signAssessment(sampleIds[20 + i] ?? '', { personId: officer.id, passphrase, statement: 'Benchmark sign-off.' });
-        }),
+        median_ms: await timeMedianAsync(
+          n,
+          async (i) => {
+            await store.signAssessment(sampleIds[20 + i] ?? '', { personId: officer.id, passphrase, statement: 'Benchmark sign-off.' }, reviewed);
+          },
+          async (i) => {
+            // the revision shown in the confirm step (untimed: the window already holds it)
+            const a = await store.getAssessment(sampleIds[20 + i] ?? '');
+            reviewed = { revisionId: a.current.id, version: a.version };
+          },
+        ),
         runs: n,
+      });
+
+      // A Register edit as the window sends it: the version opened and the fields seen, checked and
+      // written in one write transaction.
+      const roomsToEdit: Room[] = [];
+      for (const id of roomIds.slice(0, 40)) roomsToEdit.push(await store.getRoom(id));
+      entries.push({
+        name: 'records: edit one register entry (version check and write in one transaction)',
+        median_ms: await timeMedianAsync(roomsToEdit.length, async (i) => {
+          const r = roomsToEdit[i];
+          if (!r) throw new Error('room missing');
+          await store.updateRoom(r.id, { contact: `ext. ${4000 + i}` }, { updatedAt: r.updatedAt, seen: { code: r.code, name: r.name, contact: r.contact } });
+        }),
+        runs: roomsToEdit.length,
+        // one committed write, like the notes-only save above
+        target_ms: 10,
       });
     } finally {
       await store.close();

@@ -29,6 +29,7 @@ export type AssessmentHandlers = {
   'revisions-list': (args: { readonly assessmentId: Id }) => Promise<RevisionSummary[]>;
   'revision-get': (args: { readonly revisionId: Id }) => Promise<Revision>;
   'revisions-compare': (args: { readonly fromRevisionId: Id; readonly toRevisionId: Id }) => Promise<FieldDifference[]>;
-  'assessment-sign': (args: { readonly id: Id; readonly signOff: SignOff }) => Promise<Assessment>;
+  /** `reviewed`: the revision and save counter shown in the confirm step; a draft that moved on is refused (code 'stale'). */
+  'assessment-sign': (args: { readonly id: Id; readonly signOff: SignOff; readonly reviewed: SaveBase }) => Promise<Assessment>;
   'assessment-verify': (args: { readonly assessmentId: Id; readonly revisionId?: Id }) => Promise<VerifyReport>;
 };

@@ -317,12 +317,27 @@ export interface Assessment {
   readonly current: Revision;
   /** Save counter of `current`: a save names it (SaveBase) and is refused once it is out of date. */
   readonly version: number;
+  /**
+   * `current` was saved by an older calculation, before some optional inputs existed: the defaults
+   * the calculation assumed for them, one sentence each (empty when none).
+   */
+  readonly assumedDefaults: readonly string[];
 }
 
 /** What a save started from: the revision the officer opened and its save counter then. */
 export interface SaveBase {
   readonly revisionId: Id;
   readonly version: number;
+}
+
+/**
+ * What an edit or deletion of a register entry started from: the entry's `updatedAt` when the
+ * officer opened it (its version), and the fields as they were shown then, so that a refusal can
+ * say what someone else changed meanwhile. The version alone decides; `seen` only words the answer.
+ */
+export interface RegisterBase<Seen> {
+  readonly updatedAt: Timestamp;
+  readonly seen?: Seen;
 }
 
 /** One line of an assessment list. */
@@ -436,6 +451,8 @@ export interface ImportSummary {
   readonly untrustedKeys: ReadonlyArray<{ readonly keyId: string; readonly fingerprint: string; readonly claimedSigner: string }>;
   /** Drafts kept beside the imported version because the two differed (nothing is discarded). */
   readonly keptDrafts: readonly KeptDraft[];
+  /** The file was written by an older Beamwarden: the defaults assumed for what it lacks, one sentence each. */
+  readonly assumedDefaults: readonly string[];
 }
 
 /** A draft kept as an assessment of its own because an import brought a different version of it. */

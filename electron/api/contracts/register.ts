@@ -9,13 +9,16 @@ import type {
   LaserUse,
   Person,
   PersonDraft,
+  RegisterBase,
   Room,
   RoomDraft,
   Site,
   SiteDraft,
 } from './records.js';
 
-type Patch<T> = { readonly id: Id; readonly patch: T };
+/** An edit names the version the officer opened; a stale one is refused with code 'stale'. */
+type Patch<T> = { readonly id: Id; readonly patch: T; readonly expected: RegisterBase<T> };
+type Removal<T> = { readonly id: Id; readonly expected: RegisterBase<T> };
 
 /** One room with what the register screen shows beside it. */
 export interface RoomOverview {
@@ -44,25 +47,25 @@ export type RegisterHandlers = {
 
   'site-create': (args: SiteDraft) => Promise<Site>;
   'site-update': (args: Patch<Partial<SiteDraft>>) => Promise<Site>;
-  'site-delete': (args: { readonly id: Id }) => Promise<void>;
+  'site-delete': (args: Removal<Partial<SiteDraft>>) => Promise<void>;
 
   'room-get': (args: { readonly id: Id }) => Promise<Room>;
   'room-create': (args: RoomDraft) => Promise<Room>;
   'room-update': (args: Patch<Partial<Omit<RoomDraft, 'siteId'>>>) => Promise<Room>;
-  'room-delete': (args: { readonly id: Id }) => Promise<void>;
+  'room-delete': (args: Removal<Partial<Omit<RoomDraft, 'siteId'>>>) => Promise<void>;
 
   'installations-list': (args: { readonly roomId: Id }) => Promise<LaserInstallation[]>;
   'installation-create': (args: LaserInstallationDraft) => Promise<LaserInstallation>;
   'installation-update': (args: Patch<Partial<Omit<LaserInstallationDraft, 'roomId'>>>) => Promise<LaserInstallation>;
-  'installation-delete': (args: { readonly id: Id }) => Promise<void>;
+  'installation-delete': (args: Removal<Partial<Omit<LaserInstallationDraft, 'roomId'>>>) => Promise<void>;
   'installation-history': (args: { readonly id: Id }) => Promise<LaserUse[]>;
 
   'eyewear-list': (args: { readonly siteId: Id }) => Promise<Eyewear[]>;
   'eyewear-create': (args: EyewearDraft) => Promise<Eyewear>;
   'eyewear-update': (args: Patch<Partial<Omit<EyewearDraft, 'siteId'>>>) => Promise<Eyewear>;
-  'eyewear-delete': (args: { readonly id: Id }) => Promise<void>;
+  'eyewear-delete': (args: Removal<Partial<Omit<EyewearDraft, 'siteId'>>>) => Promise<void>;
 
   'person-create': (args: PersonDraft) => Promise<Person>;
   'person-update': (args: Patch<Partial<PersonDraft>>) => Promise<Person>;
-  'person-delete': (args: { readonly id: Id }) => Promise<void>;
+  'person-delete': (args: Removal<Partial<PersonDraft>>) => Promise<void>;
 };

@@ -33,8 +33,8 @@ export const assessmentTable: AreaTable<AssessmentHandlers, ApiContext> = {
     run: (a, { store }) => store.compareRevisions(a.fromRevisionId, a.toRevisionId),
   },
   'assessment-sign': {
-    input: z.strictObject({ id: IdSchema, signOff: SignOffSchema }),
-    run: (a, { store }) => store.signAssessment(a.id, a.signOff),
+    input: z.strictObject({ id: IdSchema, signOff: SignOffSchema, reviewed: SaveBaseSchema }),
+    run: (a, { store }) => store.signAssessment(a.id, a.signOff, a.reviewed),
   },
   'assessment-verify': {
     input: z.strictObject({ assessmentId: IdSchema, revisionId: IdSchema.optional() }),

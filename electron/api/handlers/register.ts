@@ -16,7 +16,14 @@ import {
 import type { RegisterHandlers } from '../contracts/register.js';
 import type { ApiContext } from '../context.js';
 import type { AreaTable } from '../operation.js';
-import { ByIdSchema, patchOf } from '../schemas/common.js';
+import { ByIdSchema, checkedDeleteOf, checkedPatchOf } from '../schemas/common.js';
+import {
+  EyewearBaseSchema,
+  InstallationBaseSchema,
+  PersonBaseSchema,
+  RoomBaseSchema,
+  SiteBaseSchema,
+} from '../../backend/records/register-versions.js';
 
 export const registerTable: AreaTable<RegisterHandlers, ApiContext> = {
   'register-overview': {
@@ -35,26 +42,29 @@ export const registerTable: AreaTable<RegisterHandlers, ApiContext> = {
   },
 
   'site-create': { input: SiteDraftSchema, run: (a, { store }) => store.createSite(a) },
-  'site-update': { input: patchOf(SitePatchSchema), run: (a, { store }) => store.updateSite(a.id, a.patch) },
-  'site-delete': { input: ByIdSchema, run: (a, { store }) => store.deleteSite(a.id) },
+  'site-update': { input: checkedPatchOf(SitePatchSchema, SiteBaseSchema), run: (a, { store }) => store.updateSite(a.id, a.patch, a.expected) },
+  'site-delete': { input: checkedDeleteOf(SiteBaseSchema), run: (a, { store }) => store.deleteSite(a.id, a.expected) },
 
   'room-get': { input: ByIdSchema, run: (a, { store }) => store.getRoom(a.id) },
   'room-create': { input: RoomDraftSchema, run: (a, { store }) => store.createRoom(a) },
-  'room-update': { input: patchOf(RoomPatchSchema), run: (a, { store }) => store.updateRoom(a.id, a.patch) },
-  'room-delete': { input: ByIdSchema, run: (a, { store }) => store.deleteRoom(a.id) },
+  'room-update': { input: checkedPatchOf(RoomPatchSchema, RoomBaseSchema), run: (a, { store }) => store.updateRoom(a.id, a.patch, a.expected) },
+  'room-delete': { input: checkedDeleteOf(RoomBaseSchema), run: (a, { store }) => store.deleteRoom(a.id, a.expected) },
 
   'installations-list': { input: z.strictObject({ roomId: IdSchema }), run: (a, { store }) => store.listInstallations(a.roomId) },
   'installation-create': { input: LaserInstallationDraftSchema, run: (a, { store }) => store.createInstallation(a) },
-  'installation-update': { input: patchOf(LaserInstallationPatchSchema), run: (a, { store }) => store.updateInstallation(a.id, a.patch) },
-  'installation-delete': { input: ByIdSchema, run: (a, { store }) => store.deleteInstallation(a.id) },
+  'installation-update': {
+    input: checkedPatchOf(LaserInstallationPatchSchema, InstallationBaseSchema),
+    run: (a, { store }) => store.updateInstallation(a.id, a.patch, a.expected),
+  },
+  'installation-delete': { input: checkedDeleteOf(InstallationBaseSchema), run: (a, { store }) => store.deleteInstallation(a.id, a.expected) },
   'installation-history': { input: ByIdSchema, run: (a, { store }) => store.laserHistory(a.id) },
 
   'eyewear-list': { input: z.strictObject({ siteId: IdSchema }), run: (a, { store }) => store.listEyewear(a.siteId) },
   'eyewear-create': { input: EyewearDraftSchema, run: (a, { store }) => store.createEyewear(a) },
-  'eyewear-update': { input: patchOf(EyewearPatchSchema), run: (a, { store }) => store.updateEyewear(a.id, a.patch) },
-  'eyewear-delete': { input: ByIdSchema, run: (a, { store }) => store.deleteEyewear(a.id) },
+  'eyewear-update': { input: checkedPatchOf(EyewearPatchSchema, EyewearBaseSchema), run: (a, { store }) => store.updateEyewear(a.id, a.patch, a.expected) },
+  'eyewear-delete': { input: checkedDeleteOf(EyewearBaseSchema), run: (a, { store }) => store.deleteEyewear(a.id, a.expected) },
 
   'person-create': { input: PersonDraftSchema, run: (a, { store }) => store.createPerson(a) },
-  'person-update': { input: patchOf(PersonPatchSchema), run: (a, { store }) => store.updatePerson(a.id, a.patch) },
-  'person-delete': { input: ByIdSchema, run: (a, { store }) => store.deletePerson(a.id) },
+  'person-update': { input: checkedPatchOf(PersonPatchSchema, PersonBaseSchema), run: (a, { store }) => store.updatePerson(a.id, a.patch, a.expected) },
+  'person-delete': { input: checkedDeleteOf(PersonBaseSchema), run: (a, { store }) => store.deletePerson(a.id, a.expected) },
 };

@@ -17,6 +17,7 @@ import { canonicalJson } from './canonical.js';
 import { inTransaction, notFound, parseOrThrow, type StoreContext } from './context.js';
 import { named } from './named-params.js';
 import { diffValues } from './diff.js';
+import { assumedDefaults } from './older-content.js';
 import { getInstallation, getPerson, getRoom, roomInputFromRegister } from './register.js';
 import { fingerprintOf, keyIdOf, linkOf, sha256Hex, verifyStatement, type SignedStatement } from './signing.js';
 import { signAsPerson, type Signer } from './personal-keys.js';
@@ -313,12 +314,14 @@ export async function getRevision(ctx: StoreContext, revisionId: Id): Promise<Re
 
 export async function getAssessment(ctx: StoreContext, id: Id): Promise<Assessment> {
   const a = await getAssessmentRow(ctx, id);
+  const cur = await currentWithVersion(ctx, id);
   return {
     id: a.id,
     roomId: a.room_id,
     installationId: a.installation_id,
     createdAt: a.created_at,
-    ...await currentWithVersion(ctx, id),
+    ...cur,
+    assumedDefaults: assumedDefaults(cur.current.content, cur.current.calculatedWith),
   };
 }
 
@@ -396,7 +399,11 @@ export async function listRevisions(ctx: StoreContext, assessmentId: Id): Promis
 export async function compareRevisions(ctx: StoreContext, fromId: Id, toId: Id): Promise<FieldDifference[]> {
   const a = await getRevision(ctx, fromId);
   const b = await getRevision(ctx, toId);
-  if (a.assessmentId !== b.assessmentId) throw new RecordError('invalid', 'Both revisions must belong to the same assessment');
+  // Revisions of one assessment, or of assessments of one room (a draft kept as a copy at import or
+  // after a refused save is an assessment of its own in the same room).
+  if (a.assessmentId !== b.assessmentId && (await getAssessmentRow(ctx, a.assessmentId)).room_id !== (await getAssessmentRow(ctx, b.assessmentId)).room_id) {
+    throw new RecordError('invalid', 'Only revisions of assessments of the same room can be compared');
+  }
   return diffValues(
     { content: a.content, results: a.results, calculatedWith: a.calculatedWith },
     { content: b.content, results: b.results, calculatedWith: b.calculatedWith },
@@ -470,13 +477,19 @@ function resultsFor(ctx: StoreContext, content: AssessmentContent, previous: Rev
  * Refuse a save that started from an older state than the newest revision (another window, host
  * or officer saved or signed meanwhile): nothing is overwritten, and the officer is told when.
  */
-export async function assertNotStale(ctx: StoreContext, id: Id, expected: SaveBase | undefined): Promise<void> {
+export async function assertNotStale(ctx: StoreContext, id: Id, expected: SaveBase | undefined, doing: 'save' | 'sign' = 'save'): Promise<void> {
   if (expected === undefined) return;
   const current = await newestRevisionRow(ctx, id);
   if (current.id === expected.revisionId && current.version === expected.version) return;
   const signed = current.status !== 'draft' ? await getSignatureRow(ctx, current.id) : undefined;
   const at = signed?.signed_at ?? current.updated_at;
   const what = signed ? `signed by ${signed.name}` : `saved as revision ${current.revision_no}`;
+  if (doing === 'sign') {
+    throw new RecordError(
+      'stale',
+      `"${current.title}" was changed by someone else since you opened it: ${what} at ${clockTime(at)}. Nothing was signed — reload, review the revision again, then sign.`,
+    );
+  }
   throw new RecordError(
     'stale',
     `"${current.title}" was changed by someone else at ${clockTime(at)} (${what}) — reload and compare before saving again. Nothing was overwritten.`,
@@ -583,18 +596,20 @@ export const INSERT_SIGNATURE = `INSERT INTO signature (revision_id, person_id, 
  * back end's clock. The statement covers the fingerprint, the previous signed revision's link and the
  * trust anchor, and is recorded in the signing log outside the database.
  */
-export async function signAssessment(ctx: StoreContext, id: Id, rawSignOff: SignOff): Promise<Assessment> {
+export async function signAssessment(ctx: StoreContext, id: Id, rawSignOff: SignOff, reviewed?: SaveBase): Promise<Assessment> {
   const signOff = parseOrThrow(SignOffSchema, rawSignOff, 'Sign-off');
+  // What the officer reviewed in the confirm step must still be the draft that is signed.
+  await assertNotStale(ctx, id, reviewed, 'sign');
   const person = await getPerson(ctx, signOff.personId);
   if (!person.role.trim()) throw new RecordError('invalid', `Enter ${person.name}'s role in the register (People) before signing: the signature records it.`, [{ path: 'personId', problem: 'the person has no role' }]);
-  return await signDraftWith(ctx, id, signOff.statement, (build) => signAsPerson(ctx, signOff.personId, signOff.passphrase, build));
+  return await signDraftWith(ctx, id, signOff.statement, (build) => signAsPerson(ctx, signOff.personId, signOff.passphrase, build), reviewed);
 }
 
 /** Produces the signature: identity and time decided by the signer function (signAsPerson in the app). */
 export type DraftSigner = (build: (signer: Signer) => SignedStatement) => Promise<{ signer: Signer; payload: SignedStatement; signature: string }>;
 
 /** Sign the current draft with `signWith` (the app passes signAsPerson; the demo and benchmark an unlocked key). */
-export async function signDraftWith(ctx: StoreContext, id: Id, statementText: string, signWith: DraftSigner): Promise<Assessment> {
+export async function signDraftWith(ctx: StoreContext, id: Id, statementText: string, signWith: DraftSigner, reviewed?: SaveBase): Promise<Assessment> {
   const a = await getAssessmentRow(ctx, id);
   const draft = await newestRevisionRow(ctx, id);
   if (draft.status !== 'draft') throw new RecordError('conflict', `Nothing to sign: revision ${draft.revision_no} is already ${draft.status}`);
@@ -619,6 +634,7 @@ export async function signDraftWith(ctx: StoreContext, id: Id, statementText: st
   );
   const st = signed.payload;
   await write(ctx, 'Sign-off', async (ctx) => {
+    await assertNotStale(ctx, id, reviewed, 'sign');
     const again = await newestRevisionRow(ctx, id);
     // The save counter too: a save that landed between reading the draft and this transaction
     // changed the content the signature covers (requests of one host now interleave at awaits).

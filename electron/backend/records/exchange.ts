@@ -43,6 +43,7 @@ import {
   listRooms,
 } from './register.js';
 import { getEyewear, getPerson, replaceEyewear, replaceInstallation } from './register.js';
+import { assumedDefaults, eyewearDefaultsAssumed } from './older-content.js';
 import { keepDraftAsCopy } from './import-conflicts.js';
 import { fingerprintOf, keyIdOf, linkOf, verifyStatement } from './signing.js';
 import {
@@ -166,6 +167,24 @@ function invalid(issues: ImportIssue[]): RecordError {
   return new RecordError('invalid', `The file cannot be imported, nothing was changed: ${shown}${issues.length > 10 ? ` (and ${issues.length - 10} more)` : ''}`, issues);
 }
 
+/**
+ * An export format version this Beamwarden does not read, in plain words naming it. Format version 1
+ * is the first; files of it written before later optional fields existed import with their
+ * documented defaults (older-content.ts), so a different number is a newer format or not ours.
+ */
+function versionProblem(version: unknown): string {
+  const reads = `this Beamwarden reads export format version ${EXPORT_VERSION}`;
+  if (version === undefined) return `The export file does not say which format version it is; ${reads}.`;
+  if (typeof version === 'number' && Number.isInteger(version) && version > EXPORT_VERSION) {
+    return `The export file is format version ${version}, written by a newer Beamwarden; ${reads}. Update Beamwarden to import it.`;
+  }
+  if (typeof version === 'number' && Number.isInteger(version) && version >= 0) {
+    return `The export file is format version ${version}, older than any Beamwarden release wrote; ${reads}.`;
+  }
+  const shown = typeof version === 'string' ? `"${version.slice(0, 40)}"` : JSON.stringify(version)?.slice(0, 40) ?? String(version);
+  return `The export file gives its format version as ${shown}, which is not a version number Beamwarden writes; ${reads}.`;
+}
+
 /** Parse JSON text (or take an object), check the format header first for a precise message. */
 export function parseExportDocument(input: unknown): ExportDocument {
   let value: unknown = input;
@@ -176,20 +195,14 @@ export function parseExportDocument(input: unknown): ExportDocument {
       throw invalid([{ path: '(document)', problem: `not valid JSON: ${(e as Error).message}` }]);
     }
   }
-  const header = z.object({ format: z.unknown(), version: z.unknown() }).safeParse(value);
+  const header = z.object({ format: z.unknown(), version: z.unknown().optional() }).safeParse(value);
   if (!header.success) throw invalid([{ path: '(document)', problem: 'must be a JSON object with "format": "beamwarden-export"' }]);
   if (header.data.format !== EXPORT_FORMAT) {
     throw invalid([{ path: 'format', problem: `must be "${EXPORT_FORMAT}" (this is not a Beamwarden export file)` }]);
   }
   if (header.data.version !== EXPORT_VERSION) {
-    const v = JSON.stringify(header.data.version);
-    const newer = typeof header.data.version === 'number' && header.data.version > EXPORT_VERSION;
-    throw invalid([
-      {
-        path: 'version',
-        problem: `export version ${v} is not supported; this Beamwarden reads version ${EXPORT_VERSION}${newer ? ' (the file was written by a newer Beamwarden: update this one)' : ''}`,
-      },
-    ]);
+    const problem = versionProblem(header.data.version);
+    throw new RecordError('invalid', `${problem} Nothing was changed.`, [{ path: 'version', problem }]);
   }
   const r = ExportDocumentSchema.safeParse(value);
   if (!r.success) throw invalid(formatZodIssues(r.error));
@@ -525,8 +538,24 @@ export async function importDocument(ctx: StoreContext, input: unknown, rawAdmit
   return {
     ...count,
     keptDrafts,
+    assumedDefaults: defaultsAssumedIn(doc),
     untrustedKeys: stillUntrusted.map((k) => ({ keyId: k.keyId, fingerprint: shortKeyFingerprint(k.keyId), claimedSigner: signerOf.get(k.keyId) ?? '' })),
   };
+}
+
+/** What a file from an older Beamwarden lacks and the defaults taken for it (older-content.ts). */
+function defaultsAssumedIn(doc: ExportDocument): string[] {
+  const raw = rawOf.get(doc) as { eyewear?: unknown[] } | undefined;
+  const out: string[] = [];
+  doc.eyewear.forEach((e, i) => {
+    const said = eyewearDefaultsAssumed(raw?.eyewear?.[i], e);
+    if (said !== null) out.push(said);
+  });
+  for (const a of doc.assessments) {
+    const newest = a.revisions.at(-1);
+    if (newest) for (const s of assumedDefaults(newest.content, newest.calculatedWith)) out.push(`"${newest.content.title}", revision ${newest.revisionNo}: ${s}`);
+  }
+  return out;
 }
 
 /** Which keys of a file this installation does not trust (for the confirmation before admitting them). */

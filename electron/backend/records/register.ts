@@ -34,6 +34,7 @@ import type {
   SiteDraft,
 } from './types.js';
 import { RecordError } from './types.js';
+import { laterStamp } from './stamps.js';
 
 async function guard<T>(ctx: StoreContext, what: string, fn: () => Promise<T>): Promise<T> {
   try {
@@ -84,7 +85,8 @@ export async function createSite(ctx: StoreContext, draft: SiteDraft): Promise<S
 }
 export async function updateSite(ctx: StoreContext, id: Id, patch: Partial<SiteDraft>): Promise<Site> {
   const p = parseOrThrow(SitePatchSchema, patch, 'Site changes');
-  const next: Site = { ...await getSite(ctx, id), ...stripUndefined(p), updatedAt: ctx.now() };
+  const prev = await getSite(ctx, id);
+  const next: Site = { ...prev, ...stripUndefined(p), updatedAt: laterStamp(ctx.now(), prev.updatedAt) };
   await guard(ctx, 'Site', async () =>
     await ctx.q.run(...named('UPDATE site SET name=@name, building=@building, address=@address, notes=@notes, updated_at=@updatedAt WHERE id=@id', next)),
   );
@@ -153,7 +155,8 @@ export async function createRoom(ctx: StoreContext, draft: RoomDraft): Promise<R
 }
 export async function updateRoom(ctx: StoreContext, id: Id, patch: Partial<Omit<RoomDraft, 'siteId'>>): Promise<Room> {
   const p = parseOrThrow(RoomPatchSchema, patch, 'Room changes');
-  const next: Room = { ...await getRoom(ctx, id), ...stripUndefined(p), updatedAt: ctx.now() };
+  const prev = await getRoom(ctx, id);
+  const next: Room = { ...prev, ...stripUndefined(p), updatedAt: laterStamp(ctx.now(), prev.updatedAt) };
   await guard(ctx, `Room ${next.code}`, async () =>
     await ctx.q.run(...named('UPDATE room SET code=@code, name=@name, responsible_person=@responsiblePerson, contact=@contact, notes=@notes, updated_at=@updatedAt WHERE id=@id', next)),
   );
@@ -286,7 +289,7 @@ export async function updateInstallation(
 ): Promise<LaserInstallation> {
   const p = parseOrThrow(LaserInstallationPatchSchema, patch, 'Laser installation changes');
   const prev = await getInstallation(ctx, id);
-  const merged = { ...prev, ...stripUndefined(p), updatedAt: ctx.now() };
+  const merged = { ...prev, ...stripUndefined(p), updatedAt: laterStamp(ctx.now(), prev.updatedAt) };
   const laser: LaserInput = { ...merged.laser, id };
   const next: LaserInstallation = { ...merged, laser, classAsLabelled: laser.classAsLabelled ?? null };
   if (p.laser !== undefined) await refuseBeamIdClash(ctx, prev.roomId, laser, id);
@@ -391,7 +394,8 @@ export async function createEyewear(ctx: StoreContext, draft: EyewearDraft): Pro
 }
 export async function updateEyewear(ctx: StoreContext, id: Id, patch: Partial<Omit<EyewearDraft, 'siteId'>>): Promise<Eyewear> {
   const p = parseOrThrow(EyewearPatchSchema, patch, 'Eyewear changes');
-  const next: Eyewear = { ...await getEyewear(ctx, id), ...stripUndefined(p), updatedAt: ctx.now() };
+  const prev = await getEyewear(ctx, id);
+  const next: Eyewear = { ...prev, ...stripUndefined(p), updatedAt: laterStamp(ctx.now(), prev.updatedAt) };
   await guard(ctx, `Eyewear ${next.spec.id}`, async () =>
     await ctx.q.run(...named('UPDATE eyewear SET tag=@tag, spec_json=@specJson, location=@location, quantity=@quantity, notes=@notes, inspected_on=@inspectedOn, condition=@condition, next_inspection=@nextInspection, updated_at=@updatedAt WHERE id=@id', eyewearParams(next))),
   );
@@ -447,7 +451,8 @@ export async function createPerson(ctx: StoreContext, draft: PersonDraft): Promi
 }
 export async function updatePerson(ctx: StoreContext, id: Id, patch: Partial<PersonDraft>): Promise<Person> {
   const p = parseOrThrow(PersonPatchSchema, patch, 'Person changes');
-  const next: Person = { ...await getPerson(ctx, id), ...stripUndefined(p), updatedAt: ctx.now() };
+  const prev = await getPerson(ctx, id);
+  const next: Person = { ...prev, ...stripUndefined(p), updatedAt: laterStamp(ctx.now(), prev.updatedAt) };
   await guard(ctx, 'Person', async () =>
     await ctx.q.run(...named('UPDATE person SET name=@name, role=@role, email=@email, phone=@phone, updated_at=@updatedAt WHERE id=@id', next)),
   );

@@ -11,7 +11,8 @@
 import { z } from 'zod';
 import type { LaserInput } from '../../../core/model/inputs.js';
 import { AssessmentContentSchema, IdSchema, TimestampSchema, LaserInstallationDraftSchema } from '../schemas/records.js';
-import { LaserInputSchema } from '../schemas/inputs.js';
+import { LaserInputSchema, StoredLaserInputSchema } from '../schemas/inputs.js';
+import { whatChanged } from './register-versions.js';
 import { assertNotStale, clockTime, createAssessment, getAssessment, saveAssessment } from './assessments.js';
 import { inTransaction, parseOrThrow, type StoreContext } from './context.js';
 import { createInstallation, getInstallation, getRoom, listInstallations, updateInstallation } from './register.js';
@@ -26,8 +27,11 @@ export interface WorkSave {
   readonly content: AssessmentContent;
   /** Lasers added in the workspace; `draftId` is the id the content uses for it until saved. */
   readonly newLasers: ReadonlyArray<{ readonly draftId: string; readonly laser: LaserInput; readonly laserType?: string }>;
-  /** Register lasers edited in the workspace, each with the `updatedAt` it was opened at. */
-  readonly changedLasers: ReadonlyArray<{ readonly id: Id; readonly laser: LaserInput; readonly expectedUpdatedAt: Timestamp }>;
+  /**
+   * Register lasers edited in the workspace, each with the `updatedAt` it was opened at and, to say
+   * what someone else changed when that is out of date, the laser as it was opened (`seenLaser`).
+   */
+  readonly changedLasers: ReadonlyArray<{ readonly id: Id; readonly laser: LaserInput; readonly expectedUpdatedAt: Timestamp; readonly seenLaser?: LaserInput }>;
 }
 
 export interface WorkSaved {
@@ -46,7 +50,9 @@ export const WorkSaveSchema = z.strictObject({
   expected: SaveBaseSchema.nullable(),
   content: AssessmentContentSchema,
   newLasers: z.array(z.strictObject({ draftId: IdSchema, laser: LaserInputSchema, laserType: LaserInstallationDraftSchema.shape.laserType })).max(1000),
-  changedLasers: z.array(z.strictObject({ id: IdSchema, laser: LaserInputSchema, expectedUpdatedAt: TimestampSchema })).max(1000),
+  changedLasers: z
+    .array(z.strictObject({ id: IdSchema, laser: LaserInputSchema, expectedUpdatedAt: TimestampSchema, seenLaser: StoredLaserInputSchema.optional() }))
+    .max(1000),
 });
 
 /** Times compared as instants: "10:00-05:00" is later than "14:00Z" (not as text). */
@@ -68,9 +74,10 @@ export async function saveWork(ctx: StoreContext, raw: WorkSave): Promise<WorkSa
       const now = await getInstallation(ctx, c.id);
       if (now.roomId !== room.id) throw new RecordError('invalid', `Laser "${now.laser.name}" is not in room ${room.code}`);
       if (!sameInstant(now.updatedAt, c.expectedUpdatedAt)) {
+        const changed = c.seenLaser !== undefined ? whatChanged({ laser: c.seenLaser }, { laser: now.laser }) : [];
         throw new RecordError(
           'stale',
-          `Laser "${now.laser.name}" in the register was changed by someone else at ${clockTime(now.updatedAt)} — reload and compare before saving again. Nothing was overwritten.`,
+          `Laser "${now.laser.name}" in the register was changed by someone else at ${clockTime(now.updatedAt)}${changed.length > 0 ? ` (${changed.join('; ')})` : ''} — reload and compare before saving again. Nothing was overwritten.`,
         );
       }
     }

@@ -19,6 +19,7 @@ import * as K from './personal-keys.js';
 import { adoptInstallationKey } from './legacy-signatures.js';
 import { defaultDatabasePath } from './paths.js';
 import * as R from './register.js';
+import * as C from './register-checked.js';
 import { laserHistory } from './laser-history.js';
 import { saveWork } from './save-work.js';
 import { defaultBackupFolder } from './safekeeping.js';
@@ -34,32 +35,32 @@ function storeOver(ctx: StoreContext, engine: RecordEngine, info: StoreInfo): Re
     listSites: () => R.listSites(ctx),
     getSite: (id) => R.getSite(ctx, id),
     createSite: (draft) => R.createSite(ctx, draft),
-    updateSite: (id, patch) => R.updateSite(ctx, id, patch),
-    deleteSite: (id) => R.deleteSite(ctx, id),
+    updateSite: (id, patch, expected) => C.updateSite(ctx, id, patch, expected),
+    deleteSite: (id, expected) => C.deleteSite(ctx, id, expected),
 
     listRooms: (siteId) => R.listRooms(ctx, siteId),
     getRoom: (id) => R.getRoom(ctx, id),
     createRoom: (draft) => R.createRoom(ctx, draft),
-    updateRoom: (id, patch) => R.updateRoom(ctx, id, patch),
-    deleteRoom: (id) => R.deleteRoom(ctx, id),
+    updateRoom: (id, patch, expected) => C.updateRoom(ctx, id, patch, expected),
+    deleteRoom: (id, expected) => C.deleteRoom(ctx, id, expected),
 
     listInstallations: (roomId) => R.listInstallations(ctx, roomId),
     getInstallation: (id) => R.getInstallation(ctx, id),
     createInstallation: (draft) => R.createInstallation(ctx, draft),
-    updateInstallation: (id, patch) => R.updateInstallation(ctx, id, patch),
-    deleteInstallation: (id) => R.deleteInstallation(ctx, id),
+    updateInstallation: (id, patch, expected) => C.updateInstallation(ctx, id, patch, expected),
+    deleteInstallation: (id, expected) => C.deleteInstallation(ctx, id, expected),
 
     listEyewear: (siteId) => R.listEyewear(ctx, siteId),
     getEyewear: (id) => R.getEyewear(ctx, id),
     createEyewear: (draft) => R.createEyewear(ctx, draft),
-    updateEyewear: (id, patch) => R.updateEyewear(ctx, id, patch),
-    deleteEyewear: (id) => R.deleteEyewear(ctx, id),
+    updateEyewear: (id, patch, expected) => C.updateEyewear(ctx, id, patch, expected),
+    deleteEyewear: (id, expected) => C.deleteEyewear(ctx, id, expected),
 
     listPeople: () => R.listPeople(ctx),
     getPerson: (id) => R.getPerson(ctx, id),
     createPerson: (draft) => R.createPerson(ctx, draft),
-    updatePerson: (id, patch) => R.updatePerson(ctx, id, patch),
-    deletePerson: (id) => R.deletePerson(ctx, id),
+    updatePerson: (id, patch, expected) => C.updatePerson(ctx, id, patch, expected),
+    deletePerson: (id, expected) => C.deletePerson(ctx, id, expected),
     laserHistory: (installationId) => laserHistory(ctx, installationId),
 
     roomInputFromRegister: (roomId) => R.roomInputFromRegister(ctx, roomId),
@@ -76,7 +77,7 @@ function storeOver(ctx: StoreContext, engine: RecordEngine, info: StoreInfo): Re
     listRevisions: (assessmentId) => A.listRevisions(ctx, assessmentId),
     getRevision: (revisionId) => A.getRevision(ctx, revisionId),
     compareRevisions: (fromRevisionId, toRevisionId) => A.compareRevisions(ctx, fromRevisionId, toRevisionId),
-    signAssessment: (id, signOff) => A.signAssessment(ctx, id, signOff),
+    signAssessment: (id, signOff, reviewed) => A.signAssessment(ctx, id, signOff, reviewed),
     verify: (assessmentId, revisionId) => A.verifyAssessment(ctx, assessmentId, revisionId),
 
     listPersonKeys: () => K.listPersonKeys(ctx),

@@ -27,6 +27,7 @@ import type {
   Person,
   PersonDraft,
   PersonKey,
+  RegisterBase,
   Revision,
   RevisionSummary,
   Room,
@@ -76,32 +77,37 @@ export interface RecordStore {
   listSites(): Promise<Site[]>;
   getSite(id: Id): Promise<Site>;
   createSite(draft: SiteDraft): Promise<Site>;
-  updateSite(id: Id, patch: Partial<SiteDraft>): Promise<Site>;
-  deleteSite(id: Id): Promise<void>;
+  /** `expected`: the version the officer opened; refused with code 'stale' (saying what changed) when the entry moved on. */
+  updateSite(id: Id, patch: Partial<SiteDraft>, expected?: RegisterBase<Partial<SiteDraft>>): Promise<Site>;
+  deleteSite(id: Id, expected?: RegisterBase<Partial<SiteDraft>>): Promise<void>;
 
   listRooms(siteId: Id): Promise<Room[]>;
   getRoom(id: Id): Promise<Room>;
   createRoom(draft: RoomDraft): Promise<Room>;
-  updateRoom(id: Id, patch: Partial<Omit<RoomDraft, 'siteId'>>): Promise<Room>;
-  deleteRoom(id: Id): Promise<void>;
+  updateRoom(id: Id, patch: Partial<Omit<RoomDraft, 'siteId'>>, expected?: RegisterBase<Partial<Omit<RoomDraft, 'siteId'>>>): Promise<Room>;
+  deleteRoom(id: Id, expected?: RegisterBase<Partial<Omit<RoomDraft, 'siteId'>>>): Promise<void>;
 
   listInstallations(roomId: Id): Promise<LaserInstallation[]>;
   getInstallation(id: Id): Promise<LaserInstallation>;
   createInstallation(draft: LaserInstallationDraft): Promise<LaserInstallation>;
-  updateInstallation(id: Id, patch: Partial<Omit<LaserInstallationDraft, 'roomId'>>): Promise<LaserInstallation>;
-  deleteInstallation(id: Id): Promise<void>;
+  updateInstallation(
+    id: Id,
+    patch: Partial<Omit<LaserInstallationDraft, 'roomId'>>,
+    expected?: RegisterBase<Partial<Omit<LaserInstallationDraft, 'roomId'>>>,
+  ): Promise<LaserInstallation>;
+  deleteInstallation(id: Id, expected?: RegisterBase<Partial<Omit<LaserInstallationDraft, 'roomId'>>>): Promise<void>;
 
   listEyewear(siteId: Id): Promise<Eyewear[]>;
   getEyewear(id: Id): Promise<Eyewear>;
   createEyewear(draft: EyewearDraft): Promise<Eyewear>;
-  updateEyewear(id: Id, patch: Partial<Omit<EyewearDraft, 'siteId'>>): Promise<Eyewear>;
-  deleteEyewear(id: Id): Promise<void>;
+  updateEyewear(id: Id, patch: Partial<Omit<EyewearDraft, 'siteId'>>, expected?: RegisterBase<Partial<Omit<EyewearDraft, 'siteId'>>>): Promise<Eyewear>;
+  deleteEyewear(id: Id, expected?: RegisterBase<Partial<Omit<EyewearDraft, 'siteId'>>>): Promise<void>;
 
   listPeople(): Promise<Person[]>;
   getPerson(id: Id): Promise<Person>;
   createPerson(draft: PersonDraft): Promise<Person>;
-  updatePerson(id: Id, patch: Partial<PersonDraft>): Promise<Person>;
-  deletePerson(id: Id): Promise<void>;
+  updatePerson(id: Id, patch: Partial<PersonDraft>, expected?: RegisterBase<Partial<PersonDraft>>): Promise<Person>;
+  deletePerson(id: Id, expected?: RegisterBase<Partial<PersonDraft>>): Promise<void>;
   /** Every revision in the laser's room that evaluated it, newest first. */
   laserHistory(installationId: Id): Promise<LaserUse[]>;
 
@@ -133,10 +139,12 @@ export interface RecordStore {
   discardDraft(id: Id): Promise<void>;
   listRevisions(assessmentId: Id): Promise<RevisionSummary[]>;
   getRevision(revisionId: Id): Promise<Revision>;
-  /** Field-by-field differences between two revisions (content and results). */
+  /** Field-by-field differences between two revisions (content and results) of one room's assessments. */
   compareRevisions(fromRevisionId: Id, toRevisionId: Id): Promise<FieldDifference[]>;
-  /** Sign the current draft: it becomes signed, the previous signed revision superseded. */
-  signAssessment(id: Id, signOff: SignOff): Promise<Assessment>;
+  /**
+   * Sign the current draft: it becomes signed, the previous signed revision superseded. `reviewed`: the revision and save counter shown in the confirm step; refused (code 'stale') when the draft moved on.
+   */
+  signAssessment(id: Id, signOff: SignOff, reviewed?: SaveBase): Promise<Assessment>;
   /** Check the newest signed revision (or `revisionId`). */
   verify(assessmentId: Id, revisionId?: Id): Promise<VerifyReport>;
 

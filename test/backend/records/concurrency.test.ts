@@ -142,6 +142,32 @@ describe('saving the workspace is one transaction', () => {
   });
 });
 
+describe('what the other officer changed is named', () => {
+  it('a register laser whose power someone else changed: the refusal says from what to what', async () => {
+    const { room } = await registerRoom(a);
+    const made = await a.createAssessment({ roomId: room.id, content: await a.newAssessmentContent(room.id) });
+    const inst = (await b.listInstallations(room.id))[0];
+    const b0 = inst?.laser.beams[0];
+    if (!inst || !b0 || b0.emission.kind !== 'cw') throw new Error('demo room starts with a CW laser');
+    await a.updateInstallation(inst.id, { laser: { ...inst.laser, beams: [{ ...b0, emission: { kind: 'cw', power_W: 0.09 } }, ...inst.laser.beams.slice(1)] } });
+    const before = snapshot(dbPath);
+    const err = await errorOf(() =>
+      b.saveWork({
+        roomId: room.id,
+        assessmentId: made.id,
+        expected: base(made),
+        content: made.current.content,
+        newLasers: [],
+        changedLasers: [{ id: inst.id, laser: { ...inst.laser, name: `${inst.laser.name} (renamed by B)` }, expectedUpdatedAt: inst.updatedAt, seenLaser: inst.laser }],
+      }),
+    );
+    expect(err.code).toBe('stale');
+    // derived: 0.08 W and 0.09 W in engineering notation (BIPM SI brochure Table 7: m = 1e-3)
+    expect(err.message).toMatch(/was changed by someone else at \d\d:\d\d \(laser: beam 1, power 80 mW → 90 mW\) — reload and compare/);
+    expect(snapshot(dbPath)).toBe(before);
+  });
+});
+
 describe('two loopback hosts on one database file, over HTTP', () => {
   it('the second officer is told to reload and compare; the first one keeps their save', async () => {
     const { room } = await registerRoom(a);

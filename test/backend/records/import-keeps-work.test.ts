@@ -142,7 +142,7 @@ describe('deleting what others refer to is refused in officer words, naming the 
     const a = await here.createAssessment({ roomId: room.id, installationId: inst.id, content: await here.newAssessmentContent(room.id, inst.id) });
     const host = await startTestHost(here);
     try {
-      const { reply } = await host.call('installation-delete', { id: inst.id });
+      const { reply } = await host.call('installation-delete', { id: inst.id, expected: { updatedAt: inst.updatedAt } });
       expect(reply.ok).toBe(false);
       if (!reply.ok) {
         expect(reply.error.code).toBe('conflict');

@@ -132,11 +132,16 @@ describe('personal signing keys', () => {
 
 describe('time and identity come from the back end', () => {
   const ctx = () => ({ shell: 'loopback' as const, version: 'test', databasePath: dbPath, store });
+  /** The revision shown in the confirm step. */
+  const reviewed = async () => {
+    const a = await store.getAssessment(assessmentId);
+    return { revisionId: a.current.id, version: a.version };
+  };
 
   it('a client-chosen signing time or signer name is refused by the API, naming the field', async () => {
     const officer = await makeSigner(store);
     for (const extra of [{ signedAt: '2025-01-01T00:00:00.000Z' }, { name: 'Someone Else' }, { role: 'Director' }]) {
-      const reply = await dispatch(handlerTable, ctx(), 'assessment-sign', { id: assessmentId, signOff: { ...officer.signOff(), ...extra } });
+      const reply = await dispatch(handlerTable, ctx(), 'assessment-sign', { id: assessmentId, signOff: { ...officer.signOff(), ...extra }, reviewed: await reviewed() });
       expect(reply.ok).toBe(false);
       if (!reply.ok) expect(reply.error.message).toMatch(new RegExp(`Sign ?[oO]ff: .*${Object.keys(extra)[0] ?? ''}`));
     }
@@ -146,7 +151,7 @@ describe('time and identity come from the back end', () => {
   it('the recorded signing time is the back end clock at signing', async () => {
     const officer = await makeSigner(store);
     const before = new Date().toISOString();
-    const reply = await dispatch(handlerTable, ctx(), 'assessment-sign', { id: assessmentId, signOff: officer.signOff() });
+    const reply = await dispatch(handlerTable, ctx(), 'assessment-sign', { id: assessmentId, signOff: officer.signOff(), reviewed: await reviewed() });
     const after = new Date().toISOString();
     expect(reply.ok).toBe(true);
     const signedAt = (await store.getAssessment(assessmentId)).current.signature?.signedAt ?? '';
