@@ -105,8 +105,8 @@ function signatureFromRow(ctx: StoreContext, r: SignatureRow): Signature {
   };
 }
 
-async function getSignatureRow(ctx: StoreContext, revisionId: Id): Promise<SignatureRow | undefined> {
-  return await ctx.q.get(SIGNATURE_SELECT, revisionId) as SignatureRow | undefined;
+function getSignatureRow(ctx: StoreContext, revisionId: Id): SignatureRow | undefined {
+  return ctx.sql(SIGNATURE_SELECT).get(revisionId) as SignatureRow | undefined;
 }
 
 /** What a revision and its history-list summary share: the row's fields and its signature. */
@@ -131,22 +131,22 @@ function revisionFromRow(ctx: StoreContext, r: RevisionRow): Revision {
   return { ...revisionHeaderFromRow(ctx, r), content, results };
 }
 
-async function getAssessmentRow(ctx: StoreContext, id: Id): Promise<AssessmentRow> {
-  const row = await ctx.q.get('SELECT * FROM assessment WHERE id = ?', id) as AssessmentRow | undefined;
+function getAssessmentRow(ctx: StoreContext, id: Id): AssessmentRow {
+  const row = ctx.sql('SELECT * FROM assessment WHERE id = ?').get(id) as AssessmentRow | undefined;
   if (!row) throw notFound('assessment', id);
   return row;
 }
 
-async function newestRevisionRow(ctx: StoreContext, assessmentId: Id): Promise<RevisionRow> {
-  const r = await ctx.q.get('SELECT * FROM revision WHERE assessment_id = ? ORDER BY revision_no DESC LIMIT 1', assessmentId) as
+function newestRevisionRow(ctx: StoreContext, assessmentId: Id): RevisionRow {
+  const r = ctx.sql('SELECT * FROM revision WHERE assessment_id = ? ORDER BY revision_no DESC LIMIT 1').get(assessmentId) as
     | RevisionRow
     | undefined;
   if (!r) throw new RecordError('corrupt-database', `Assessment ${assessmentId} has no revision`);
   return r;
 }
 
-async function getRevisionRow(ctx: StoreContext, revisionId: Id): Promise<RevisionRow> {
-  const r = await ctx.q.get('SELECT * FROM revision WHERE id = ?', revisionId) as RevisionRow | undefined;
+function getRevisionRow(ctx: StoreContext, revisionId: Id): RevisionRow {
+  const r = ctx.sql('SELECT * FROM revision WHERE id = ?').get(revisionId) as RevisionRow | undefined;
   if (!r) throw notFound('revision', revisionId);
   return r;
 }
@@ -241,10 +241,14 @@ export function newAssessmentContent(ctx: StoreContext, roomId: Id, installation
 }
 
 /** Content of the room's last signed revision (or newest revision) of the same scope, if any. */
-async function previousContentOfRoom(ctx: StoreContext, roomId: Id, installationId: Id | null): Promise<AssessmentContent | null> {
-  const row = await ctx.q.get(`SELECT r.content_json FROM revision r JOIN assessment a ON a.id = r.assessment_id
+function previousContentOfRoom(ctx: StoreContext, roomId: Id, installationId: Id | null): AssessmentContent | null {
+  const row = ctx
+    .sql(
+      `SELECT r.content_json FROM revision r JOIN assessment a ON a.id = r.assessment_id
         WHERE a.room_id = ? AND a.installation_id IS ?
-        ORDER BY (r.status = 'signed') DESC, r.updated_at DESC, r.revision_no DESC LIMIT 1`, roomId, installationId) as { content_json: string } | undefined;
+        ORDER BY (r.status = 'signed') DESC, r.updated_at DESC, r.revision_no DESC LIMIT 1`,
+    )
+    .get(roomId, installationId) as { content_json: string } | undefined;
   if (!row) return null;
   const parsed = AssessmentContentSchema.safeParse(JSON.parse(row.content_json));
   return parsed.success ? parsed.data : null;
@@ -362,26 +366,26 @@ const summaryFromRow = (ctx: StoreContext, r: SummaryRow): AssessmentSummary => 
   inForce: r.in_force_no === null ? null : { revisionNo: r.in_force_no, signedAt: r.signed_at ?? '', reviewBy: r.in_force_review_by },
 });
 
-export async function listAssessments(ctx: StoreContext, roomId: Id): Promise<AssessmentSummary[]> {
+export function listAssessments(ctx: StoreContext, roomId: Id): AssessmentSummary[] {
   getRoom(ctx, roomId);
-  return (await ctx.q.all(`${SUMMARY_SELECT} WHERE a.room_id = ? ORDER BY r.updated_at DESC, a.id`, roomId) as SummaryRow[]).map((row) => summaryFromRow(ctx, row));
+  return (ctx.sql(`${SUMMARY_SELECT} WHERE a.room_id = ? ORDER BY r.updated_at DESC, a.id`).all(roomId) as SummaryRow[]).map((row) => summaryFromRow(ctx, row));
 }
 
 /** Every assessment of the database (oldest first), for a whole-database check. */
-export async function listAllAssessments(ctx: StoreContext): Promise<AssessmentSummary[]> {
-  return (await ctx.q.all(`${SUMMARY_SELECT} ORDER BY a.created_at, a.id`) as SummaryRow[]).map((row) => summaryFromRow(ctx, row));
+export function listAllAssessments(ctx: StoreContext): AssessmentSummary[] {
+  return (ctx.sql(`${SUMMARY_SELECT} ORDER BY a.created_at, a.id`).all() as SummaryRow[]).map((row) => summaryFromRow(ctx, row));
 }
 
-export async function listDueForReview(ctx: StoreContext, date: CalendarDate): Promise<AssessmentSummary[]> {
+export function listDueForReview(ctx: StoreContext, date: CalendarDate): AssessmentSummary[] {
   if (!/^\d{4}-\d{2}-\d{2}$/.test(date)) throw new RecordError('invalid', `date: must be a calendar date YYYY-MM-DD (got "${date}")`);
   return (
-    await ctx.q.all(`${SUMMARY_SELECT} WHERE r.review_by IS NOT NULL AND r.review_by <= ? ORDER BY r.review_by, a.id`, date) as SummaryRow[]
+    ctx.sql(`${SUMMARY_SELECT} WHERE r.review_by IS NOT NULL AND r.review_by <= ? ORDER BY r.review_by, a.id`).all(date) as SummaryRow[]
   ).map((row) => summaryFromRow(ctx, row));
 }
 
-export async function listRevisions(ctx: StoreContext, assessmentId: Id): Promise<RevisionSummary[]> {
+export function listRevisions(ctx: StoreContext, assessmentId: Id): RevisionSummary[] {
   getAssessmentRow(ctx, assessmentId);
-  const rows = await ctx.q.all('SELECT * FROM revision WHERE assessment_id = ? ORDER BY revision_no', assessmentId) as RevisionRow[];
+  const rows = ctx.sql('SELECT * FROM revision WHERE assessment_id = ? ORDER BY revision_no').all(assessmentId) as RevisionRow[];
   // Content and results stay encoded: a history list needs neither.
   return rows.map((r) => ({ ...revisionHeaderFromRow(ctx, r), title: r.title, reviewBy: r.review_by }));
 }
@@ -403,8 +407,8 @@ const INSERT_REVISION = `INSERT INTO revision (id, assessment_id, revision_no, s
   VALUES (@id, @assessment_id, @revision_no, @status, @content_json, @results_z, @calculated_with, @based_on,
   @created_at, @updated_at, @title, @review_by, @version)`;
 
-export async function insertRevisionRow(ctx: StoreContext, row: RevisionRow): Promise<void> {
-  await ctx.q.run(...named(INSERT_REVISION, row));
+export function insertRevisionRow(ctx: StoreContext, row: RevisionRow): void {
+  ctx.sql(INSERT_REVISION).run(row);
 }
 
 function write<T>(ctx: StoreContext, what: string, fn: () => T): T {
@@ -415,10 +419,10 @@ function write<T>(ctx: StoreContext, what: string, fn: () => T): T {
   }
 }
 
-export async function createAssessment(
+export function createAssessment(
   ctx: StoreContext,
   args: { roomId: Id; installationId?: Id | null; content: AssessmentContent },
-): Promise<Assessment> {
+): Assessment {
   const content = normaliseContent(args.content);
   const room = getRoom(ctx, args.roomId);
   const installationId = args.installationId ?? null;
@@ -429,7 +433,7 @@ export async function createAssessment(
   const now = ctx.now();
   const id = ctx.newId();
   write(ctx, 'Assessment', () => {
-    await ctx.q.run('INSERT INTO assessment (id, room_id, installation_id, created_at) VALUES (?, ?, ?, ?)', id, room.id, installationId, now);
+    ctx.sql('INSERT INTO assessment (id, room_id, installation_id, created_at) VALUES (?, ?, ?, ?)').run(id, room.id, installationId, now);
     insertRevisionRow(ctx, {
       id: ctx.newId(),
       assessment_id: id,
@@ -479,7 +483,7 @@ export function assertNotStale(ctx: StoreContext, id: Id, expected: SaveBase | u
   );
 }
 
-export async function saveAssessment(ctx: StoreContext, id: Id, rawContent: AssessmentContent, expected?: SaveBase): Promise<Assessment> {
+export function saveAssessment(ctx: StoreContext, id: Id, rawContent: AssessmentContent, expected?: SaveBase): Assessment {
   const content = normaliseContent(rawContent);
   getAssessmentRow(ctx, id);
   assertNotStale(ctx, id, expected);
@@ -492,8 +496,12 @@ export async function saveAssessment(ctx: StoreContext, id: Id, rawContent: Asse
     assertNotStale(ctx, id, expected ?? { revisionId: before.id, version: before.version });
     const current = newestRevisionRow(ctx, id);
     if (current.status === 'draft') {
-      await ctx.q.run(`UPDATE revision SET content_json = ?, results_z = coalesce(?, results_z), calculated_with = ?, updated_at = ?, title = ?, review_by = ?,
-           version = version + 1 WHERE id = ? AND status = 'draft'`, JSON.stringify(content), draftResults, ctx.calculatedWith, now, content.title, content.reviewBy, current.id);
+      ctx
+        .sql(
+          `UPDATE revision SET content_json = ?, results_z = coalesce(?, results_z), calculated_with = ?, updated_at = ?, title = ?, review_by = ?,
+           version = version + 1 WHERE id = ? AND status = 'draft'`,
+        )
+        .run(JSON.stringify(content), draftResults, ctx.calculatedWith, now, content.title, content.reviewBy, current.id);
       ctx.audit('saved', 'revision', current.id, `revision ${current.revision_no}`);
     } else {
       const revId = ctx.newId();
@@ -518,13 +526,13 @@ export async function saveAssessment(ctx: StoreContext, id: Id, rawContent: Asse
   return getAssessment(ctx, id);
 }
 
-export async function discardDraft(ctx: StoreContext, id: Id): Promise<void> {
+export function discardDraft(ctx: StoreContext, id: Id): void {
   getAssessmentRow(ctx, id);
   write(ctx, 'Draft', () => {
     const current = newestRevisionRow(ctx, id);
     if (current.status !== 'draft') throw new RecordError('conflict', `Assessment ${id} has no open draft (revision ${current.revision_no} is ${current.status})`);
-    await ctx.q.run("DELETE FROM revision WHERE id = ? AND status = 'draft'", current.id);
-    if (current.revision_no === 1) await ctx.q.run('DELETE FROM assessment WHERE id = ?', id);
+    ctx.sql("DELETE FROM revision WHERE id = ? AND status = 'draft'").run(current.id);
+    if (current.revision_no === 1) ctx.sql('DELETE FROM assessment WHERE id = ?').run(id);
     ctx.audit('discarded', 'revision', current.id, `revision ${current.revision_no}`);
   });
 }
@@ -554,13 +562,15 @@ export function statementFor(a: AssessmentRow, r: Pick<RevisionRow, 'id' | 'revi
   return { ...common, version: 2, keyId: s.key_id, previousLink: s.previous_link, trustAnchor: s.trust_anchor ?? '' };
 }
 
-export async function registerKey(ctx: StoreContext, keyId: string, publicKey: string, origin: 'this-database' | 'imported'): Promise<void> {
-  await ctx.q.run('INSERT INTO signing_key (key_id, public_key, origin, added_at) VALUES (?, ?, ?, ?) ON CONFLICT(key_id) DO NOTHING', keyId, publicKey, origin, ctx.now());
+export function registerKey(ctx: StoreContext, keyId: string, publicKey: string, origin: 'this-database' | 'imported'): void {
+  ctx
+    .sql('INSERT INTO signing_key (key_id, public_key, origin, added_at) VALUES (?, ?, ?, ?) ON CONFLICT(key_id) DO NOTHING')
+    .run(keyId, publicKey, origin, ctx.now());
 }
 
 /** Chain link of the newest signed (not superseded) revision of an assessment, or null. */
-async function newestSignedLink(ctx: StoreContext, a: AssessmentRow): Promise<string | null> {
-  const prev = await ctx.q.get("SELECT * FROM revision WHERE assessment_id = ? AND status = 'signed' ORDER BY revision_no DESC LIMIT 1", a.id) as
+function newestSignedLink(ctx: StoreContext, a: AssessmentRow): string | null {
+  const prev = ctx.sql("SELECT * FROM revision WHERE assessment_id = ? AND status = 'signed' ORDER BY revision_no DESC LIMIT 1").get(a.id) as
     | RevisionRow
     | undefined;
   if (!prev) return null;
@@ -590,7 +600,7 @@ export function signAssessment(ctx: StoreContext, id: Id, rawSignOff: SignOff): 
 export type DraftSigner = (build: (signer: Signer) => SignedStatement) => { signer: Signer; payload: SignedStatement; signature: string };
 
 /** Sign the current draft with `signWith` (the app passes signAsPerson; the demo and benchmark an unlocked key). */
-export async function signDraftWith(ctx: StoreContext, id: Id, statementText: string, signWith: DraftSigner): Promise<Assessment> {
+export function signDraftWith(ctx: StoreContext, id: Id, statementText: string, signWith: DraftSigner): Assessment {
   const a = getAssessmentRow(ctx, id);
   const draft = newestRevisionRow(ctx, id);
   if (draft.status !== 'draft') throw new RecordError('conflict', `Nothing to sign: revision ${draft.revision_no} is already ${draft.status}`);
@@ -620,10 +630,10 @@ export async function signDraftWith(ctx: StoreContext, id: Id, statementText: st
     if (newestSignedLink(ctx, a) !== previousLink) throw new RecordError('conflict', 'Another revision was signed meanwhile; try again');
     const resultsZ = encodeResults(results);
     if (!resultsZ.equals(draft.results_z) || draft.calculated_with !== ctx.calculatedWith) {
-      await ctx.q.run("UPDATE revision SET results_z = ?, calculated_with = ? WHERE id = ? AND status = 'draft'", resultsZ, ctx.calculatedWith, draft.id);
+      ctx.sql("UPDATE revision SET results_z = ?, calculated_with = ? WHERE id = ? AND status = 'draft'").run(resultsZ, ctx.calculatedWith, draft.id);
     }
     registerKey(ctx, signed.signer.keyId, signed.signer.publicKey, 'this-database');
-    await ctx.q.run(...named(INSERT_SIGNATURE, {
+    ctx.sql(INSERT_SIGNATURE).run({
       revision_id: draft.id,
       person_id: st.personId,
       name: st.name,
@@ -636,10 +646,10 @@ export async function signDraftWith(ctx: StoreContext, id: Id, statementText: st
       statement_version: 2,
       previous_link: previousLink,
       trust_anchor: signed.signer.trustAnchor,
-    }));
-    await ctx.q.run("UPDATE revision SET status = 'superseded' WHERE assessment_id = ? AND status = 'signed'", id);
+    });
+    ctx.sql("UPDATE revision SET status = 'superseded' WHERE assessment_id = ? AND status = 'signed'").run(id);
     // The save counter moves on: a save started before the sign-off is stale.
-    await ctx.q.run("UPDATE revision SET status = 'signed', version = version + 1 WHERE id = ?", draft.id);
+    ctx.sql("UPDATE revision SET status = 'signed', version = version + 1 WHERE id = ?").run(draft.id);
     ctx.audit('signed', 'revision', draft.id, `revision ${draft.revision_no} by ${st.name} (${st.role}), key ${shortKeyFingerprint(signed.signer.keyId)}`);
     // Last step before the commit: if the witness outside the database cannot be written, nothing is signed.
     appendSigningLog(ctx.keyDir, {
@@ -664,9 +674,9 @@ const MAX_DIFFERENCES = 200;
  * list columns equal to the signed content, and every signature the signing log (outside the
  * database) remembers still present and unchanged. One plain sentence per problem.
  */
-export async function chainFindings(ctx: StoreContext, a: AssessmentRow): Promise<string[]> {
+export function chainFindings(ctx: StoreContext, a: AssessmentRow): string[] {
   const out: string[] = [];
-  const rows = await ctx.q.all('SELECT * FROM revision WHERE assessment_id = ? ORDER BY revision_no', a.id) as RevisionRow[];
+  const rows = ctx.sql('SELECT * FROM revision WHERE assessment_id = ? ORDER BY revision_no').all(a.id) as RevisionRow[];
   rows.forEach((r, i) => {
     const prevNo = i === 0 ? 0 : (rows[i - 1]?.revision_no ?? 0);
     if (r.revision_no !== prevNo + 1) {
@@ -737,7 +747,7 @@ export async function chainFindings(ctx: StoreContext, a: AssessmentRow): Promis
   return out;
 }
 
-export async function verifyAssessment(ctx: StoreContext, assessmentId: Id, revisionId?: Id): Promise<VerifyReport> {
+export function verifyAssessment(ctx: StoreContext, assessmentId: Id, revisionId?: Id): VerifyReport {
   const a = getAssessmentRow(ctx, assessmentId);
   let r: RevisionRow;
   if (revisionId !== undefined) {
@@ -745,7 +755,9 @@ export async function verifyAssessment(ctx: StoreContext, assessmentId: Id, revi
     if (r.assessment_id !== assessmentId) throw new RecordError('invalid', `Revision ${revisionId} does not belong to assessment ${assessmentId}`);
   } else {
     r =
-      (await ctx.q.get("SELECT * FROM revision WHERE assessment_id = ? AND status <> 'draft' ORDER BY revision_no DESC LIMIT 1", assessmentId) as RevisionRow | undefined) ?? newestRevisionRow(ctx, assessmentId);
+      (ctx
+        .sql("SELECT * FROM revision WHERE assessment_id = ? AND status <> 'draft' ORDER BY revision_no DESC LIMIT 1")
+        .get(assessmentId) as RevisionRow | undefined) ?? newestRevisionRow(ctx, assessmentId);
   }
   const findings: string[] = [];
   const checks: VerifyCheck[] = [];
@@ -896,10 +908,10 @@ export async function verifyAssessment(ctx: StoreContext, assessmentId: Id, revi
 }
 
 /** A missing, unreadable or replaced trust list, in plain words. */
-async function trustProblems(ctx: StoreContext, anchor: string | null, problem: string | null): Promise<string[]> {
+function trustProblems(ctx: StoreContext, anchor: string | null, problem: string | null): string[] {
   const out: string[] = [];
   if (problem) out.push(problem);
-  const pins = (await ctx.q.all('SELECT anchor FROM trust_anchor_pin') as Array<{ anchor: string }>).map((p) => p.anchor);
+  const pins = (ctx.sql('SELECT anchor FROM trust_anchor_pin').all() as Array<{ anchor: string }>).map((p) => p.anchor);
   if (anchor === null && problem === null && pins.length > 0) out.push('The trust list file beside the database is missing: restore it from a backup.');
   if (anchor !== null && pins.length > 0 && !pins.includes(anchor)) {
     out.push(

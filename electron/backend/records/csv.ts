@@ -136,7 +136,7 @@ interface LaserGroup {
   beams: Array<{ row: number; beam: BeamInput; givenId: string | null }>;
 }
 
-export async function importLaserCsv(ctx: StoreContext, roomId: Id, csvText: string, existing: CsvExistingChoice = 'ask'): Promise<CsvImportReport> {
+export function importLaserCsv(ctx: StoreContext, roomId: Id, csvText: string, existing: CsvExistingChoice = 'ask'): CsvImportReport {
   getRoom(ctx, roomId);
   const firstLine = csvText.replace(/^\uFEFF/, '').split(/\r?\n/, 1)[0] ?? '';
   const delimiter = detectDelimiter(firstLine);
@@ -269,7 +269,7 @@ export async function importLaserCsv(ctx: StoreContext, roomId: Id, csvText: str
 
   // Beam ids must be unique within the room (assessments refer to beams by id).
   const existingBeamIds = new Set<string>();
-  for (const r of await ctx.q.all('SELECT laser_json FROM laser_installation WHERE room_id = ?', roomId) as Array<{ laser_json: string }>) {
+  for (const r of ctx.sql('SELECT laser_json FROM laser_installation WHERE room_id = ?').all(roomId) as Array<{ laser_json: string }>) {
     const l = JSON.parse(r.laser_json) as LaserInput;
     l.beams.forEach((b) => b.id !== undefined && existingBeamIds.add(b.id));
   }
@@ -341,12 +341,12 @@ export async function importLaserCsv(ctx: StoreContext, roomId: Id, csvText: str
 
 const sameText = (a: string, b: string) => a.trim().toLowerCase() === b.trim().toLowerCase();
 
-async function alreadyInRoom(
+function alreadyInRoom(
   ctx: StoreContext,
   roomId: Id,
   groups: ReadonlyMap<string, LaserGroup>,
-): Promise<Array<{ group: LaserGroup; row: number; name: string; maker: string; serialNumber: string }>> {
-  const rows = await ctx.q.all('SELECT laser_json, maker, serial_number FROM laser_installation WHERE room_id = ?', roomId) as Array<{
+): Array<{ group: LaserGroup; row: number; name: string; maker: string; serialNumber: string }> {
+  const rows = ctx.sql('SELECT laser_json, maker, serial_number FROM laser_installation WHERE room_id = ?').all(roomId) as Array<{
     laser_json: string;
     maker: string;
     serial_number: string;

@@ -66,11 +66,8 @@ import {
 // ---------------------------------------------------------------- export
 
 function assessmentIdsOfRooms(ctx: StoreContext, roomIds: readonly Id[]): Id[] {
-  const out: Id[] = [];
-  for (const rid of roomIds) {
-    for (const r of await ctx.q.all<{ id: string }>('SELECT id FROM assessment WHERE room_id = ? ORDER BY created_at, id', rid)) out.push(r.id);
-  }
-  return out;
+  const stmt = ctx.sql('SELECT id FROM assessment WHERE room_id = ? ORDER BY created_at, id');
+  return roomIds.flatMap((rid) => (stmt.all(rid) as Array<{ id: string }>).map((r) => r.id));
 }
 
 /** Whether a key is trusted is this installation's judgement: never written to a file, nor compared. */
@@ -215,7 +212,7 @@ function fileResults(doc: ExportDocument, ai: number, ri: number): unknown {
 function crossCheck(ctx: StoreContext, doc: ExportDocument): ImportIssue[] {
   const issues: ImportIssue[] = [];
   const exists = (table: 'site' | 'room' | 'laser_installation' | 'person', id: string) =>
-    await ctx.q.get(`SELECT 1 FROM ${table} WHERE id = ?`, id) !== undefined;
+    ctx.sql(`SELECT 1 FROM ${table} WHERE id = ?`).get(id) !== undefined;
   const unique = (list: ReadonlyArray<{ id: string }>, name: string) => {
     const seen = new Set<string>();
     list.forEach((x, i) => {
@@ -394,13 +391,15 @@ export function importDocument(ctx: StoreContext, input: unknown, rawAdmit?: Imp
       }
     };
     upsert(doc.sites, 'sites', (id) => tryGet(() => getSite(ctx, id)), (x) => insertSite(ctx, x), (x: Site) =>
-      await ctx.q.run(...named('UPDATE site SET name=@name, building=@building, address=@address, notes=@notes, updated_at=@updatedAt WHERE id=@id', x)),
+      ctx.sql('UPDATE site SET name=@name, building=@building, address=@address, notes=@notes, updated_at=@updatedAt WHERE id=@id').run(x),
     );
     upsert(doc.people, 'people', (id) => tryGet(() => getPerson(ctx, id)), (x) => insertPerson(ctx, x), (x) =>
-      await ctx.q.run(...named('UPDATE person SET name=@name, role=@role, email=@email, phone=@phone, updated_at=@updatedAt WHERE id=@id', x)),
+      ctx.sql('UPDATE person SET name=@name, role=@role, email=@email, phone=@phone, updated_at=@updatedAt WHERE id=@id').run(x),
     );
     upsert(doc.rooms, 'rooms', (id) => tryGet(() => getRoom(ctx, id)), (x) => insertRoom(ctx, x), (x: Room) =>
-      await ctx.q.run(...named('UPDATE room SET code=@code, name=@name, responsible_person=@responsiblePerson, contact=@contact, notes=@notes, updated_at=@updatedAt WHERE id=@id', x)),
+      ctx
+        .sql('UPDATE room SET code=@code, name=@name, responsible_person=@responsiblePerson, contact=@contact, notes=@notes, updated_at=@updatedAt WHERE id=@id')
+        .run(x),
     );
     // Replaced in place (UPDATE), never deleted and re-inserted: assessments refer to a laser by
     // its id, and the database refuses to delete a laser an assessment refers to.
@@ -411,11 +410,11 @@ export function importDocument(ctx: StoreContext, input: unknown, rawAdmit?: Imp
     for (const k of doc.signingKeys) registerKey(ctx, k.keyId, k.publicKey, 'imported');
 
     for (const [ai, a] of doc.assessments.entries()) {
-      const localA = await ctx.q.get('SELECT room_id, installation_id FROM assessment WHERE id = ?', a.id) as
+      const localA = ctx.sql('SELECT room_id, installation_id FROM assessment WHERE id = ?').get(a.id) as
         | { room_id: string; installation_id: string | null }
         | undefined;
       if (!localA) {
-        await ctx.q.run('INSERT INTO assessment (id, room_id, installation_id, created_at) VALUES (?, ?, ?, ?)', a.id, a.roomId, a.installationId, a.createdAt);
+        ctx.sql('INSERT INTO assessment (id, room_id, installation_id, created_at) VALUES (?, ?, ?, ?)').run(a.id, a.roomId, a.installationId, a.createdAt);
         count.assessments++;
       } else if (localA.room_id !== a.roomId || localA.installation_id !== a.installationId) {
         throw invalid([{ path: `assessments[${ai}].roomId`, problem: 'this assessment exists here for a different room or installation' }]);
@@ -427,7 +426,7 @@ export function importDocument(ctx: StoreContext, input: unknown, rawAdmit?: Imp
       };
       for (const [ri, r] of a.revisions.entries()) {
         const path = `assessments[${ai}].revisions[${ri}]`;
-        const local = await ctx.q.get('SELECT * FROM revision WHERE id = ?', r.id) as RevisionRow | undefined;
+        const local = ctx.sql('SELECT * FROM revision WHERE id = ?').get(r.id) as RevisionRow | undefined;
         if (local) {
           const mine = withoutTrust(getRevision(ctx, r.id));
           if (same(mine, r)) {
@@ -446,14 +445,14 @@ export function importDocument(ctx: StoreContext, input: unknown, rawAdmit?: Imp
               continue;
             }
             keep(local, 'yours', `the file has a newer version of draft revision ${r.revisionNo}, saved ${r.updatedAt}`);
-            await ctx.q.run("DELETE FROM revision WHERE id = ? AND status = 'draft'", r.id);
+            ctx.sql("DELETE FROM revision WHERE id = ? AND status = 'draft'").run(r.id);
           } else if (local.status === 'draft' && r.status !== 'draft') {
             // Our draft was signed elsewhere: the signed copy takes its place; edits made here
             // after it was copied are kept as a draft of their own.
             if (!same(mine.content, r.content)) keep(local, 'yours', `revision ${r.revisionNo} was signed elsewhere with other content`);
-            await ctx.q.run("DELETE FROM revision WHERE id = ? AND status = 'draft'", r.id);
+            ctx.sql("DELETE FROM revision WHERE id = ? AND status = 'draft'").run(r.id);
           } else if (local.status === 'signed' && r.status === 'superseded' && same({ ...mine, status: 'superseded' }, r)) {
-            await ctx.q.run("UPDATE revision SET status = 'superseded' WHERE id = ?", r.id);
+            ctx.sql("UPDATE revision SET status = 'superseded' WHERE id = ?").run(r.id);
             count.revisions++;
             continue;
           } else if (local.status !== 'draft' && r.status === 'signed' && mine.status === 'superseded' && same({ ...mine, status: 'signed' }, r)) {
@@ -467,24 +466,24 @@ export function importDocument(ctx: StoreContext, input: unknown, rawAdmit?: Imp
             throw invalid([{ path, problem: `revision ${r.revisionNo} is signed here with different content: one of the two copies was altered` }]);
           }
         }
-        const clash = await ctx.q.get('SELECT * FROM revision WHERE assessment_id = ? AND revision_no = ? AND id <> ?', a.id, r.revisionNo, r.id) as
+        const clash = ctx.sql('SELECT * FROM revision WHERE assessment_id = ? AND revision_no = ? AND id <> ?').get(a.id, r.revisionNo, r.id) as
           | RevisionRow
           | undefined;
         if (clash !== undefined && clash.status === 'draft') {
           // Both sides started this revision on their own: ours is kept as a draft of its own.
           keep(clash, 'yours', `revision ${r.revisionNo} was also started elsewhere`);
-          await ctx.q.run("DELETE FROM revision WHERE id = ? AND status = 'draft'", clash.id);
+          ctx.sql("DELETE FROM revision WHERE id = ? AND status = 'draft'").run(clash.id);
         } else if (clash !== undefined) {
           throw invalid([{ path, problem: `this database already has a different revision ${r.revisionNo} of this assessment (both copies were revised separately; export the newer one and import it elsewhere)` }]);
         }
         insertRevisionRow(ctx, revisionRow(r, fileResults(doc, ai, ri)));
         const s = r.signature;
         if (s) {
-          await ctx.q.run(...named(INSERT_SIGNATURE, { revision_id: r.id, ...signatureFields(s) }));
+          ctx.sql(INSERT_SIGNATURE).run({ revision_id: r.id, ...signatureFields(s) });
           const aRow = { id: a.id, room_id: a.roomId, installation_id: a.installationId, created_at: a.createdAt };
           logLines.push({ assessmentId: a.id, revisionId: r.id, revisionNo: r.revisionNo, link: linkOf(statementFor(aRow, { id: r.id, revision_no: r.revisionNo }, signatureFields(s))), signedAt: s.signedAt, keyId: s.keyId });
-          if (r.status === 'signed') await ctx.q.run("UPDATE revision SET status = 'superseded' WHERE assessment_id = ? AND status = 'signed'", a.id);
-          await ctx.q.run('UPDATE revision SET status = ? WHERE id = ?', r.status, r.id);
+          if (r.status === 'signed') ctx.sql("UPDATE revision SET status = 'superseded' WHERE assessment_id = ? AND status = 'signed'").run(a.id);
+          ctx.sql('UPDATE revision SET status = ? WHERE id = ?').run(r.status, r.id);
         }
         count.revisions++;
       }

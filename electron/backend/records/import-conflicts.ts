@@ -30,13 +30,15 @@ export function keepDraftAsCopy(
 ): KeptDraft | null {
   const content = JSON.parse(row.content_json) as { title: string; reviewBy: string | null };
   const marker = `${whose === 'yours' ? 'local' : 'imported'} draft of assessment ${of.assessmentId}, last saved ${row.updated_at}`;
-  const already = await ctx.q.get("SELECT a.id FROM audit_event e JOIN assessment a ON a.id = e.entity_id WHERE e.action = 'kept-draft' AND e.detail = ?", marker) as { id: string } | undefined;
+  const already = ctx
+    .sql("SELECT a.id FROM audit_event e JOIN assessment a ON a.id = e.entity_id WHERE e.action = 'kept-draft' AND e.detail = ?")
+    .get(marker) as { id: string } | undefined;
   if (already) return null;
   const now = ctx.now();
   const title = copyTitle(content.title, whose, now);
   const copyContent = { ...content, title };
   const id = ctx.newId();
-  await ctx.q.run('INSERT INTO assessment (id, room_id, installation_id, created_at) VALUES (?, ?, ?, ?)', id, of.roomId, of.installationId, now);
+  ctx.sql('INSERT INTO assessment (id, room_id, installation_id, created_at) VALUES (?, ?, ?, ?)').run(id, of.roomId, of.installationId, now);
   insertRevisionRow(ctx, {
     id: ctx.newId(),
     assessment_id: id,

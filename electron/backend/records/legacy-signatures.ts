@@ -17,10 +17,14 @@ import { INSTALLATION_KEY_HOLDER, readTrustList, shortKeyFingerprint } from './t
 
 /** Run at open (read-write only). Returns warnings for the officer; empty when there is nothing to do. */
 export function adoptInstallationKey(ctx: StoreContext): string[] {
-  const legacy = await ctx.q.all(`SELECT s.*, k.public_key, r.revision_no, r.assessment_id, a.room_id, a.installation_id, a.created_at AS a_created
+  const legacy = ctx
+    .sql(
+      `SELECT s.*, k.public_key, r.revision_no, r.assessment_id, a.room_id, a.installation_id, a.created_at AS a_created
        FROM signature s JOIN revision r ON r.id = s.revision_id JOIN assessment a ON a.id = r.assessment_id
        LEFT JOIN signing_key k ON k.key_id = s.key_id
-       WHERE s.statement_version = 1 ORDER BY r.assessment_id, r.revision_no`) as Array<SignatureRow & Pick<RevisionRow, 'revision_no' | 'assessment_id'> & { room_id: string; installation_id: string | null; a_created: string }>;
+       WHERE s.statement_version = 1 ORDER BY r.assessment_id, r.revision_no`,
+    )
+    .all() as Array<SignatureRow & Pick<RevisionRow, 'revision_no' | 'assessment_id'> & { room_id: string; installation_id: string | null; a_created: string }>;
   if (legacy.length === 0) return [];
   const read = readTrustList(ctx.keyDir);
   if (read.list !== null || read.problem !== null) return []; // already set up (or reported as a trust list problem)

@@ -51,13 +51,13 @@ interface PersonKeyRow {
 const KEY_SELECT = 'SELECT pk.*, k.public_key FROM person_key pk JOIN signing_key k ON k.key_id = pk.key_id';
 
 function activeKeyRow(ctx: StoreContext, personId: Id): PersonKeyRow | undefined {
-  return await ctx.q.get(`${KEY_SELECT} WHERE pk.person_id = ? AND pk.retired_at IS NULL`, personId) as PersonKeyRow | undefined;
+  return ctx.sql(`${KEY_SELECT} WHERE pk.person_id = ? AND pk.retired_at IS NULL`).get(personId) as PersonKeyRow | undefined;
 }
 
 
 export function trustListInfo(ctx: StoreContext): TrustListInfo {
   const read = readTrustList(ctx.keyDir);
-  const pins = (await ctx.q.all('SELECT anchor FROM trust_anchor_pin ORDER BY pinned_at') as Array<{ anchor: string }>).map((r) => r.anchor);
+  const pins = (ctx.sql('SELECT anchor FROM trust_anchor_pin ORDER BY pinned_at').all() as Array<{ anchor: string }>).map((r) => r.anchor);
   const problems: string[] = [];
   if (read.problem) problems.push(read.problem);
   if (read.list === null && !read.problem && pins.length > 0) {
@@ -80,7 +80,7 @@ export function trustListInfo(ctx: StoreContext): TrustListInfo {
 
 export function listPersonKeys(ctx: StoreContext): PersonKey[] {
   const list = readTrustList(ctx.keyDir).list;
-  const rows = await ctx.q.all(`${KEY_SELECT} ORDER BY pk.created_at, pk.key_id`) as PersonKeyRow[];
+  const rows = ctx.sql(`${KEY_SELECT} ORDER BY pk.created_at, pk.key_id`).all() as PersonKeyRow[];
   return rows.map((r) => {
     const t = trustOf(list, r.key_id);
     return {
@@ -107,7 +107,7 @@ export function unlockPersonalKey(ctx: StoreContext, personId: Id, pass: string,
   const person = getPerson(ctx, personId);
   const row = activeKeyRow(ctx, personId);
   if (!row) {
-    const retired = await ctx.q.get('SELECT 1 FROM person_key WHERE person_id = ?', personId) !== undefined;
+    const retired = ctx.sql('SELECT 1 FROM person_key WHERE person_id = ?').get(personId) !== undefined;
     throw new RecordError(
       'signing-key',
       retired
@@ -200,7 +200,7 @@ export function checkPersonSignature(
 ): { readonly valid: boolean; readonly trusted: boolean; readonly trustChain: readonly string[]; readonly ownerPersonId: string | null; readonly ownerName: string | null } {
   const read = readTrustList(ctx.keyDir);
   const verdict = trustOf(read.list, keyId);
-  const publicKey = verdict.entry?.publicKey ?? (await ctx.q.get('SELECT public_key FROM signing_key WHERE key_id = ?', keyId) as { public_key: string } | undefined)?.public_key;
+  const publicKey = verdict.entry?.publicKey ?? (ctx.sql('SELECT public_key FROM signing_key WHERE key_id = ?').get(keyId) as { public_key: string } | undefined)?.public_key;
   let valid = false;
   try {
     valid = publicKey !== undefined && keyIdOf(publicKey) === keyId && verify(null, Buffer.from(canonicalJson(payload), 'utf8'), createPublicKey(publicKey), Buffer.from(signatureB64, 'base64'));
@@ -253,7 +253,7 @@ export function setUpTrustList(ctx: StoreContext, key: { keyId: string; publicKe
   );
   const list: TrustList = { format: 'beamwarden-trust-list', version: 1, anchor: key.keyId, entries: [entry] };
   writeTrustList(ctx.keyDir, list);
-  await ctx.q.run('INSERT INTO trust_anchor_pin (anchor, pinned_at) VALUES (?, ?) ON CONFLICT(anchor) DO NOTHING', key.keyId, admittedAt);
+  ctx.sql('INSERT INTO trust_anchor_pin (anchor, pinned_at) VALUES (?, ?) ON CONFLICT(anchor) DO NOTHING').run(key.keyId, admittedAt);
   ctx.audit('trust-anchor-set', 'signing_key', key.keyId, `${key.personName}; fingerprint ${shortKeyFingerprint(key.keyId)}`);
   return list;
 }
@@ -288,8 +288,8 @@ export function createPersonalKey(ctx: StoreContext, raw: z.input<typeof CreateK
   const sealed = sealPrivateKey(privateKey, keyId, args.passphrase);
   const now = ctx.now();
   guardTx(ctx, 'Signing key', () => {
-    await ctx.q.run("INSERT INTO signing_key (key_id, public_key, origin, added_at) VALUES (?, ?, 'this-database', ?)", keyId, publicKeyPem, now);
-    await ctx.q.run('INSERT INTO person_key (key_id, person_id, sealed_private_key, created_at) VALUES (?, ?, ?, ?)', keyId, person.id, JSON.stringify(sealed), now);
+    ctx.sql("INSERT INTO signing_key (key_id, public_key, origin, added_at) VALUES (?, ?, 'this-database', ?)").run(keyId, publicKeyPem, now);
+    ctx.sql('INSERT INTO person_key (key_id, person_id, sealed_private_key, created_at) VALUES (?, ?, ?, ?)').run(keyId, person.id, JSON.stringify(sealed), now);
     ctx.audit('key-created', 'person', person.id, `key ${shortKeyFingerprint(keyId)}`);
     // The trust list is written inside the transaction's scope: if it fails, the key rows roll back.
     const entry = { keyId, publicKey: publicKeyPem, personId: person.id, personName: person.name };
@@ -326,10 +326,10 @@ export function endorseKey(ctx: StoreContext, raw: z.input<typeof EndorseKeySche
   const endorser = unlockPersonalKey(ctx, args.endorserPersonId, args.endorserPassphrase);
   const read = readTrustList(ctx.keyDir);
   if (read.list === null) throw new RecordError('signing-key', 'There is no trust list yet.');
-  const k = await ctx.q.get('SELECT public_key FROM signing_key WHERE key_id = ?', args.keyId) as { public_key: string } | undefined;
+  const k = ctx.sql('SELECT public_key FROM signing_key WHERE key_id = ?').get(args.keyId) as { public_key: string } | undefined;
   if (!k) throw new RecordError('not-found', `No key ${shortKeyFingerprint(args.keyId)} in this database.`);
-  const owner = await ctx.q.get('SELECT person_id FROM person_key WHERE key_id = ?', args.keyId) as { person_id: string } | undefined;
-  const personName = owner ? getPerson(ctx, owner.person_id).name : (await ctx.q.get('SELECT name FROM signature WHERE key_id = ? LIMIT 1', args.keyId) as { name: string } | undefined)?.name ?? '';
+  const owner = ctx.sql('SELECT person_id FROM person_key WHERE key_id = ?').get(args.keyId) as { person_id: string } | undefined;
+  const personName = owner ? getPerson(ctx, owner.person_id).name : (ctx.sql('SELECT name FROM signature WHERE key_id = ? LIMIT 1').get(args.keyId) as { name: string } | undefined)?.name ?? '';
   writeTrustList(ctx.keyDir, admitToTrustList(ctx, read.list, { keyId: args.keyId, publicKey: k.public_key, personId: owner?.person_id ?? null, personName }, endorser));
   ctx.audit('key-endorsed', 'signing_key', args.keyId, `by ${endorser.person.name}`);
   return listPersonKeys(ctx).find((x) => x.keyId === args.keyId) ?? null;
@@ -341,7 +341,7 @@ export function changePassphrase(ctx: StoreContext, raw: z.input<typeof ChangePa
   const key = unlockPersonalKey(ctx, args.personId, args.passphrase, { requireTrusted: false });
   const sealed = sealPrivateKey(key.privateKey, key.keyId, args.newPassphrase);
   guardTx(ctx, 'Passphrase', () => {
-    await ctx.q.run('UPDATE person_key SET sealed_private_key = ? WHERE key_id = ? AND retired_at IS NULL', JSON.stringify(sealed), key.keyId);
+    ctx.sql('UPDATE person_key SET sealed_private_key = ? WHERE key_id = ? AND retired_at IS NULL').run(JSON.stringify(sealed), key.keyId);
     ctx.audit('passphrase-changed', 'person', args.personId, `key ${shortKeyFingerprint(key.keyId)}`);
   });
   const k = listPersonKeys(ctx).find((x) => x.keyId === key.keyId);
@@ -357,7 +357,7 @@ export function retireKey(ctx: StoreContext, raw: z.input<typeof RetireKeySchema
   if (!row) throw new RecordError('not-found', `${person.name} has no active signing key.`);
   const now = ctx.now();
   guardTx(ctx, 'Key retirement', () => {
-    await ctx.q.run('UPDATE person_key SET retired_at = ?, retired_reason = ? WHERE key_id = ?', now, args.reason, row.key_id);
+    ctx.sql('UPDATE person_key SET retired_at = ?, retired_reason = ? WHERE key_id = ?').run(now, args.reason, row.key_id);
     ctx.audit('key-retired', 'person', person.id, `key ${shortKeyFingerprint(row.key_id)}: ${args.reason}`);
     const read = readTrustList(ctx.keyDir);
     if (read.list !== null && read.list.entries.some((e) => e.keyId === row.key_id)) {

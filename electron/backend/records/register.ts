@@ -63,16 +63,18 @@ const siteFromRow = (r: SiteRow): Site => ({
   updatedAt: r.updated_at,
 });
 
-export async function listSites(ctx: StoreContext): Promise<Site[]> {
-  return (await ctx.q.all('SELECT * FROM site ORDER BY name, id') as SiteRow[]).map(siteFromRow);
+export function listSites(ctx: StoreContext): Site[] {
+  return (ctx.sql('SELECT * FROM site ORDER BY name, id').all() as SiteRow[]).map(siteFromRow);
 }
-export async function getSite(ctx: StoreContext, id: Id): Promise<Site> {
-  const r = await ctx.q.get('SELECT * FROM site WHERE id = ?', id) as SiteRow | undefined;
+export function getSite(ctx: StoreContext, id: Id): Site {
+  const r = ctx.sql('SELECT * FROM site WHERE id = ?').get(id) as SiteRow | undefined;
   if (!r) throw notFound('site', id);
   return siteFromRow(r);
 }
-export async function insertSite(ctx: StoreContext, s: Site): Promise<void> {
-  await ctx.q.run(...named('INSERT INTO site (id, name, building, address, notes, created_at, updated_at) VALUES (@id, @name, @building, @address, @notes, @createdAt, @updatedAt)', s));
+export function insertSite(ctx: StoreContext, s: Site): void {
+  ctx
+    .sql('INSERT INTO site (id, name, building, address, notes, created_at, updated_at) VALUES (@id, @name, @building, @address, @notes, @createdAt, @updatedAt)')
+    .run(s);
 }
 export function createSite(ctx: StoreContext, draft: SiteDraft): Site {
   const d = parseOrThrow(SiteDraftSchema, draft, 'Site');
@@ -81,18 +83,18 @@ export function createSite(ctx: StoreContext, draft: SiteDraft): Site {
   guard(ctx, `Site "${d.name}"`, () => insertSite(ctx, site));
   return site;
 }
-export async function updateSite(ctx: StoreContext, id: Id, patch: Partial<SiteDraft>): Promise<Site> {
+export function updateSite(ctx: StoreContext, id: Id, patch: Partial<SiteDraft>): Site {
   const p = parseOrThrow(SitePatchSchema, patch, 'Site changes');
   const next: Site = { ...getSite(ctx, id), ...stripUndefined(p), updatedAt: ctx.now() };
   guard(ctx, 'Site', () =>
-    await ctx.q.run(...named('UPDATE site SET name=@name, building=@building, address=@address, notes=@notes, updated_at=@updatedAt WHERE id=@id', next)),
+    ctx.sql('UPDATE site SET name=@name, building=@building, address=@address, notes=@notes, updated_at=@updatedAt WHERE id=@id').run(next),
   );
   return next;
 }
-export async function deleteSite(ctx: StoreContext, id: Id): Promise<void> {
+export function deleteSite(ctx: StoreContext, id: Id): void {
   const site = getSite(ctx, id);
   refuseIfReferenced(`Site "${site.name}" cannot be deleted`, referencesToSite(ctx, id), 'Move or delete them first.');
-  guard(ctx, `Site "${site.name}"`, () => await ctx.q.run('DELETE FROM site WHERE id = ?', id));
+  guard(ctx, `Site "${site.name}"`, () => ctx.sql('DELETE FROM site WHERE id = ?').run(id));
 }
 
 // ---------------------------------------------------------------- rooms
@@ -120,17 +122,21 @@ const roomFromRow = (r: RoomRow): Room => ({
   updatedAt: r.updated_at,
 });
 
-export async function listRooms(ctx: StoreContext, siteId: Id): Promise<Room[]> {
-  return (await ctx.q.all('SELECT * FROM room WHERE site_id = ? ORDER BY code, id', siteId) as RoomRow[]).map(roomFromRow);
+export function listRooms(ctx: StoreContext, siteId: Id): Room[] {
+  return (ctx.sql('SELECT * FROM room WHERE site_id = ? ORDER BY code, id').all(siteId) as RoomRow[]).map(roomFromRow);
 }
-export async function getRoom(ctx: StoreContext, id: Id): Promise<Room> {
-  const r = await ctx.q.get('SELECT * FROM room WHERE id = ?', id) as RoomRow | undefined;
+export function getRoom(ctx: StoreContext, id: Id): Room {
+  const r = ctx.sql('SELECT * FROM room WHERE id = ?').get(id) as RoomRow | undefined;
   if (!r) throw notFound('room', id);
   return roomFromRow(r);
 }
-export async function insertRoom(ctx: StoreContext, r: Room): Promise<void> {
-  await ctx.q.run(...named(`INSERT INTO room (id, site_id, code, name, responsible_person, contact, notes, created_at, updated_at)
-       VALUES (@id, @siteId, @code, @name, @responsiblePerson, @contact, @notes, @createdAt, @updatedAt)`, r));
+export function insertRoom(ctx: StoreContext, r: Room): void {
+  ctx
+    .sql(
+      `INSERT INTO room (id, site_id, code, name, responsible_person, contact, notes, created_at, updated_at)
+       VALUES (@id, @siteId, @code, @name, @responsiblePerson, @contact, @notes, @createdAt, @updatedAt)`,
+    )
+    .run(r);
 }
 export function createRoom(ctx: StoreContext, draft: RoomDraft): Room {
   const d = parseOrThrow(RoomDraftSchema, draft, 'Room');
@@ -150,18 +156,20 @@ export function createRoom(ctx: StoreContext, draft: RoomDraft): Room {
   guard(ctx, `Room ${d.code}`, () => insertRoom(ctx, room));
   return room;
 }
-export async function updateRoom(ctx: StoreContext, id: Id, patch: Partial<Omit<RoomDraft, 'siteId'>>): Promise<Room> {
+export function updateRoom(ctx: StoreContext, id: Id, patch: Partial<Omit<RoomDraft, 'siteId'>>): Room {
   const p = parseOrThrow(RoomPatchSchema, patch, 'Room changes');
   const next: Room = { ...getRoom(ctx, id), ...stripUndefined(p), updatedAt: ctx.now() };
   guard(ctx, `Room ${next.code}`, () =>
-    await ctx.q.run(...named('UPDATE room SET code=@code, name=@name, responsible_person=@responsiblePerson, contact=@contact, notes=@notes, updated_at=@updatedAt WHERE id=@id', next)),
+    ctx
+      .sql('UPDATE room SET code=@code, name=@name, responsible_person=@responsiblePerson, contact=@contact, notes=@notes, updated_at=@updatedAt WHERE id=@id')
+      .run(next),
   );
   return next;
 }
-export async function deleteRoom(ctx: StoreContext, id: Id): Promise<void> {
+export function deleteRoom(ctx: StoreContext, id: Id): void {
   const room = getRoom(ctx, id);
   refuseIfReferenced(`Room ${room.code} cannot be deleted`, referencesToRoom(ctx, id), 'Its records stay with it.');
-  guard(ctx, `Room ${room.code}`, () => await ctx.q.run('DELETE FROM room WHERE id = ?', id));
+  guard(ctx, `Room ${room.code}`, () => ctx.sql('DELETE FROM room WHERE id = ?').run(id));
 }
 
 // ---------------------------------------------------------------- laser installations
@@ -217,30 +225,34 @@ function installationParams(i: LaserInstallation) {
   };
 }
 
-export async function listInstallations(ctx: StoreContext, roomId: Id): Promise<LaserInstallation[]> {
-  return (await ctx.q.all('SELECT * FROM laser_installation WHERE room_id = ? ORDER BY created_at, rowid', roomId) as InstallationRow[]).map(
+export function listInstallations(ctx: StoreContext, roomId: Id): LaserInstallation[] {
+  return (ctx.sql('SELECT * FROM laser_installation WHERE room_id = ? ORDER BY created_at, rowid').all(roomId) as InstallationRow[]).map(
     installationFromRow,
   );
 }
-export async function getInstallation(ctx: StoreContext, id: Id): Promise<LaserInstallation> {
-  const r = await ctx.q.get('SELECT * FROM laser_installation WHERE id = ?', id) as InstallationRow | undefined;
+export function getInstallation(ctx: StoreContext, id: Id): LaserInstallation {
+  const r = ctx.sql('SELECT * FROM laser_installation WHERE id = ?').get(id) as InstallationRow | undefined;
   if (!r) throw notFound('laser installation', id);
   return installationFromRow(r);
 }
-export async function insertInstallation(ctx: StoreContext, i: LaserInstallation): Promise<void> {
-  await ctx.q.run(...named(`INSERT INTO laser_installation (id, room_id, laser_type, maker, model, serial_number, registration_number, laser_json,
+export function insertInstallation(ctx: StoreContext, i: LaserInstallation): void {
+  ctx
+    .sql(
+      `INSERT INTO laser_installation (id, room_id, laser_type, maker, model, serial_number, registration_number, laser_json,
          class_as_labelled, status, notes, created_at, updated_at)
        VALUES (@id, @roomId, @laserType, @maker, @model, @serialNumber, @registrationNumber, @laserJson,
-         @classAsLabelled, @status, @notes, @createdAt, @updatedAt)`, installationParams(i)));
+         @classAsLabelled, @status, @notes, @createdAt, @updatedAt)`,
+    )
+    .run(installationParams(i));
 }
 /**
  * Assessments refer to beams by id, and the calculation refuses a room where two beams share one:
  * the register refuses it when the laser is stored, not when the next assessment is made.
  */
-async function refuseBeamIdClash(ctx: StoreContext, roomId: Id, laser: LaserInput, exceptId: Id | null): Promise<void> {
+function refuseBeamIdClash(ctx: StoreContext, roomId: Id, laser: LaserInput, exceptId: Id | null): void {
   const ours = laser.beams.map((b) => b.id).filter((x): x is string => x !== undefined);
   if (ours.length === 0) return;
-  const rows = await ctx.q.all('SELECT id, laser_json FROM laser_installation WHERE room_id = ?', roomId) as Array<{ id: string; laser_json: string }>;
+  const rows = ctx.sql('SELECT id, laser_json FROM laser_installation WHERE room_id = ?').all(roomId) as Array<{ id: string; laser_json: string }>;
   for (const r of rows) {
     if (r.id === exceptId) continue;
     const other = JSON.parse(r.laser_json) as { name?: string; beams?: Array<{ id?: string }> };
@@ -278,11 +290,11 @@ export function createInstallation(ctx: StoreContext, draft: LaserInstallationDr
   guard(ctx, `Laser ${laser.name}`, () => insertInstallation(ctx, inst));
   return inst;
 }
-export async function updateInstallation(
+export function updateInstallation(
   ctx: StoreContext,
   id: Id,
   patch: Partial<Omit<LaserInstallationDraft, 'roomId'>>,
-): Promise<LaserInstallation> {
+): LaserInstallation {
   const p = parseOrThrow(LaserInstallationPatchSchema, patch, 'Laser installation changes');
   const prev = getInstallation(ctx, id);
   const merged = { ...prev, ...stripUndefined(p), updatedAt: ctx.now() };
@@ -290,23 +302,31 @@ export async function updateInstallation(
   const next: LaserInstallation = { ...merged, laser, classAsLabelled: laser.classAsLabelled ?? null };
   if (p.laser !== undefined) refuseBeamIdClash(ctx, prev.roomId, laser, id);
   guard(ctx, `Laser ${laser.name}`, () =>
-    await ctx.q.run(...named(`UPDATE laser_installation SET laser_type=@laserType, maker=@maker, model=@model, serial_number=@serialNumber,
+    ctx
+      .sql(
+        `UPDATE laser_installation SET laser_type=@laserType, maker=@maker, model=@model, serial_number=@serialNumber,
            registration_number=@registrationNumber, laser_json=@laserJson, class_as_labelled=@classAsLabelled, status=@status,
-           notes=@notes, updated_at=@updatedAt WHERE id=@id`, installationParams(next))),
+           notes=@notes, updated_at=@updatedAt WHERE id=@id`,
+      )
+      .run(installationParams(next)),
   );
   return next;
 }
 /** Replace a laser's row in place (import of a newer copy): assessments keep referring to it. */
-export async function replaceInstallation(ctx: StoreContext, i: LaserInstallation): Promise<void> {
-  await ctx.q.run(...named(`UPDATE laser_installation SET room_id=@roomId, laser_type=@laserType, maker=@maker, model=@model, serial_number=@serialNumber,
+export function replaceInstallation(ctx: StoreContext, i: LaserInstallation): void {
+  ctx
+    .sql(
+      `UPDATE laser_installation SET room_id=@roomId, laser_type=@laserType, maker=@maker, model=@model, serial_number=@serialNumber,
          registration_number=@registrationNumber, laser_json=@laserJson, class_as_labelled=@classAsLabelled, status=@status,
-         notes=@notes, created_at=@createdAt, updated_at=@updatedAt WHERE id=@id`, installationParams(i)));
+         notes=@notes, created_at=@createdAt, updated_at=@updatedAt WHERE id=@id`,
+    )
+    .run(installationParams(i));
 }
-export async function deleteInstallation(ctx: StoreContext, id: Id): Promise<void> {
+export function deleteInstallation(ctx: StoreContext, id: Id): void {
   const inst = getInstallation(ctx, id);
   refuseIfReferenced(`Laser "${inst.laser.name}" cannot be deleted`, referencesToInstallation(ctx, id), 'Retire it instead: it then leaves new assessments but stays in the records.');
   guard(ctx, 'Laser installation (retire it instead if an assessment refers to it)', () =>
-    await ctx.q.run('DELETE FROM laser_installation WHERE id = ?', id),
+    ctx.sql('DELETE FROM laser_installation WHERE id = ?').run(id),
   );
 }
 
@@ -356,17 +376,21 @@ const eyewearParams = (e: Eyewear) => ({
   updatedAt: e.updatedAt,
 });
 
-export async function listEyewear(ctx: StoreContext, siteId: Id): Promise<Eyewear[]> {
-  return (await ctx.q.all('SELECT * FROM eyewear WHERE site_id = ? ORDER BY tag, id', siteId) as EyewearRow[]).map(eyewearFromRow);
+export function listEyewear(ctx: StoreContext, siteId: Id): Eyewear[] {
+  return (ctx.sql('SELECT * FROM eyewear WHERE site_id = ? ORDER BY tag, id').all(siteId) as EyewearRow[]).map(eyewearFromRow);
 }
-export async function getEyewear(ctx: StoreContext, id: Id): Promise<Eyewear> {
-  const r = await ctx.q.get('SELECT * FROM eyewear WHERE id = ?', id) as EyewearRow | undefined;
+export function getEyewear(ctx: StoreContext, id: Id): Eyewear {
+  const r = ctx.sql('SELECT * FROM eyewear WHERE id = ?').get(id) as EyewearRow | undefined;
   if (!r) throw notFound('eyewear', id);
   return eyewearFromRow(r);
 }
-export async function insertEyewear(ctx: StoreContext, e: Eyewear): Promise<void> {
-  await ctx.q.run(...named(`INSERT INTO eyewear (id, site_id, tag, spec_json, location, quantity, notes, inspected_on, condition, next_inspection, created_at, updated_at)
-       VALUES (@id, @siteId, @tag, @specJson, @location, @quantity, @notes, @inspectedOn, @condition, @nextInspection, @createdAt, @updatedAt)`, eyewearParams(e)));
+export function insertEyewear(ctx: StoreContext, e: Eyewear): void {
+  ctx
+    .sql(
+      `INSERT INTO eyewear (id, site_id, tag, spec_json, location, quantity, notes, inspected_on, condition, next_inspection, created_at, updated_at)
+       VALUES (@id, @siteId, @tag, @specJson, @location, @quantity, @notes, @inspectedOn, @condition, @nextInspection, @createdAt, @updatedAt)`,
+    )
+    .run(eyewearParams(e));
 }
 export function createEyewear(ctx: StoreContext, draft: EyewearDraft): Eyewear {
   const d = parseOrThrow(EyewearDraftSchema, draft, 'Eyewear');
@@ -388,21 +412,27 @@ export function createEyewear(ctx: StoreContext, draft: EyewearDraft): Eyewear {
   guard(ctx, `Eyewear ${d.spec.id}`, () => insertEyewear(ctx, e));
   return e;
 }
-export async function updateEyewear(ctx: StoreContext, id: Id, patch: Partial<Omit<EyewearDraft, 'siteId'>>): Promise<Eyewear> {
+export function updateEyewear(ctx: StoreContext, id: Id, patch: Partial<Omit<EyewearDraft, 'siteId'>>): Eyewear {
   const p = parseOrThrow(EyewearPatchSchema, patch, 'Eyewear changes');
   const next: Eyewear = { ...getEyewear(ctx, id), ...stripUndefined(p), updatedAt: ctx.now() };
   guard(ctx, `Eyewear ${next.spec.id}`, () =>
-    await ctx.q.run(...named('UPDATE eyewear SET tag=@tag, spec_json=@specJson, location=@location, quantity=@quantity, notes=@notes, inspected_on=@inspectedOn, condition=@condition, next_inspection=@nextInspection, updated_at=@updatedAt WHERE id=@id', eyewearParams(next))),
+    ctx
+      .sql('UPDATE eyewear SET tag=@tag, spec_json=@specJson, location=@location, quantity=@quantity, notes=@notes, inspected_on=@inspectedOn, condition=@condition, next_inspection=@nextInspection, updated_at=@updatedAt WHERE id=@id')
+      .run(eyewearParams(next)),
   );
   return next;
 }
-export async function replaceEyewear(ctx: StoreContext, e: Eyewear): Promise<void> {
-  await ctx.q.run(...named(`UPDATE eyewear SET site_id=@siteId, tag=@tag, spec_json=@specJson, location=@location, quantity=@quantity, notes=@notes,
-         created_at=@createdAt, updated_at=@updatedAt WHERE id=@id`, eyewearParams(e)));
+export function replaceEyewear(ctx: StoreContext, e: Eyewear): void {
+  ctx
+    .sql(
+      `UPDATE eyewear SET site_id=@siteId, tag=@tag, spec_json=@specJson, location=@location, quantity=@quantity, notes=@notes,
+         created_at=@createdAt, updated_at=@updatedAt WHERE id=@id`,
+    )
+    .run(eyewearParams(e));
 }
-export async function deleteEyewear(ctx: StoreContext, id: Id): Promise<void> {
+export function deleteEyewear(ctx: StoreContext, id: Id): void {
   getEyewear(ctx, id);
-  guard(ctx, 'Eyewear', () => await ctx.q.run('DELETE FROM eyewear WHERE id = ?', id));
+  guard(ctx, 'Eyewear', () => ctx.sql('DELETE FROM eyewear WHERE id = ?').run(id));
 }
 
 // ---------------------------------------------------------------- people
@@ -426,16 +456,18 @@ const personFromRow = (r: PersonRow): Person => ({
   updatedAt: r.updated_at,
 });
 
-export async function listPeople(ctx: StoreContext): Promise<Person[]> {
-  return (await ctx.q.all('SELECT * FROM person ORDER BY name, id') as PersonRow[]).map(personFromRow);
+export function listPeople(ctx: StoreContext): Person[] {
+  return (ctx.sql('SELECT * FROM person ORDER BY name, id').all() as PersonRow[]).map(personFromRow);
 }
-export async function getPerson(ctx: StoreContext, id: Id): Promise<Person> {
-  const r = await ctx.q.get('SELECT * FROM person WHERE id = ?', id) as PersonRow | undefined;
+export function getPerson(ctx: StoreContext, id: Id): Person {
+  const r = ctx.sql('SELECT * FROM person WHERE id = ?').get(id) as PersonRow | undefined;
   if (!r) throw notFound('person', id);
   return personFromRow(r);
 }
-export async function insertPerson(ctx: StoreContext, p: Person): Promise<void> {
-  await ctx.q.run(...named('INSERT INTO person (id, name, role, email, phone, created_at, updated_at) VALUES (@id, @name, @role, @email, @phone, @createdAt, @updatedAt)', p));
+export function insertPerson(ctx: StoreContext, p: Person): void {
+  ctx
+    .sql('INSERT INTO person (id, name, role, email, phone, created_at, updated_at) VALUES (@id, @name, @role, @email, @phone, @createdAt, @updatedAt)')
+    .run(p);
 }
 export function createPerson(ctx: StoreContext, draft: PersonDraft): Person {
   const d = parseOrThrow(PersonDraftSchema, draft, 'Person');
@@ -444,18 +476,18 @@ export function createPerson(ctx: StoreContext, draft: PersonDraft): Person {
   guard(ctx, `Person ${d.name}`, () => insertPerson(ctx, p));
   return p;
 }
-export async function updatePerson(ctx: StoreContext, id: Id, patch: Partial<PersonDraft>): Promise<Person> {
+export function updatePerson(ctx: StoreContext, id: Id, patch: Partial<PersonDraft>): Person {
   const p = parseOrThrow(PersonPatchSchema, patch, 'Person changes');
   const next: Person = { ...getPerson(ctx, id), ...stripUndefined(p), updatedAt: ctx.now() };
   guard(ctx, 'Person', () =>
-    await ctx.q.run(...named('UPDATE person SET name=@name, role=@role, email=@email, phone=@phone, updated_at=@updatedAt WHERE id=@id', next)),
+    ctx.sql('UPDATE person SET name=@name, role=@role, email=@email, phone=@phone, updated_at=@updatedAt WHERE id=@id').run(next),
   );
   return next;
 }
-export async function deletePerson(ctx: StoreContext, id: Id): Promise<void> {
+export function deletePerson(ctx: StoreContext, id: Id): void {
   const person = getPerson(ctx, id);
   refuseIfReferenced(`${person.name} cannot be removed from the register`, referencesToPerson(ctx, id), 'Whoever signed records stays in the register.');
-  guard(ctx, 'Person (someone who signed records stays in the register)', () => await ctx.q.run('DELETE FROM person WHERE id = ?', id));
+  guard(ctx, 'Person (someone who signed records stays in the register)', () => ctx.sql('DELETE FROM person WHERE id = ?').run(id));
 }
 
 // ---------------------------------------------------------------- snapshot for an assessment
