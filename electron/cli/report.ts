@@ -13,6 +13,7 @@ import { tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
 import { z } from 'zod';
 import { openRecordStore, type RecordStore } from '../backend/records/index.js';
+import { DEMO_PASSPHRASE } from '../backend/records/demo.js';
 import {
   DOCUMENT_FILE_NAME,
   documentInputFromAssessment,
@@ -92,9 +93,9 @@ export async function writeDemoDocuments(outDir: string, opts: RenderOptions): P
     const site = store.seedDemo();
     const officer = store.listPeople().find((p) => p.role === 'Laser safety officer');
     const files: string[] = [];
-    // The temporary installation's first key (its trust anchor), for the invented demo officer only.
-    const passphrase = 'demo passphrase, invented site';
-    if (officer) store.createPersonKey({ personId: officer.id, passphrase, passphraseAgain: passphrase });
+    // The temporary database is fresh: the demo seed gave the demo officer the installation's first
+    // key (its trust anchor), sealed with the published demo passphrase.
+    const passphrase = DEMO_PASSPHRASE;
     for (const room of store.listRooms(site.id)) {
       for (const a of store.listAssessments(room.id)) {
         if (a.status === 'draft' && officer) {
