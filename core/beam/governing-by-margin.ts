@@ -7,7 +7,7 @@
  * 1000 W/m² cornea row over 3.5 mm. The summary's limit, row, rule and aperture then all belong to
  * the governing criterion.
  */
-import { Dec } from '../numeric/decimal.js';
+import type { Dec } from '../numeric/decimal.js';
 import { limitReported } from '../numeric/safe-rounding.js';
 import type { Emission } from '../model/inputs.js';
 import type { LimitSummary } from '../model/results.js';

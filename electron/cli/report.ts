@@ -14,6 +14,7 @@ import { join, resolve } from 'node:path';
 import { z } from 'zod';
 import { openRecordStore, type RecordStore } from '../backend/records/index.js';
 import { DEMO_PASSPHRASE } from '../backend/records/demo.js';
+import { parseCommandArgs } from './command-args.js';
 import {
   DOCUMENT_FILE_NAME,
   documentInputFromAssessment,
@@ -43,27 +44,9 @@ const ArgsSchema = z
 
 export type ReportArgs = z.infer<typeof ArgsSchema>;
 
-/** "--paper Letter --demo" -> { paper: 'Letter', demo: true }; flags without a value are booleans. */
+/** "--paper Letter --demo" -> { paper: 'Letter', demo: true } (electron/cli/command-args.ts). */
 export function parseArgs(argv: readonly string[]): ReportArgs {
-  const raw: Record<string, string | boolean> = {};
-  for (let i = 0; i < argv.length; i++) {
-    const a = argv[i] as string;
-    if (!a.startsWith('--')) throw new Error(`unexpected argument '${a}'\n${USAGE}`);
-    const [flag, inline] = a.slice(2).split('=', 2) as [string, string | undefined];
-    const next = argv[i + 1];
-    if (inline !== undefined) raw[flag] = inline;
-    else if (next !== undefined && !next.startsWith('--')) {
-      raw[flag] = next;
-      i++;
-    } else raw[flag] = true;
-  }
-  const parsed = ArgsSchema.safeParse(raw);
-  if (!parsed.success) {
-    const first = parsed.error.issues[0];
-    const field = first?.path.join('.') ?? '';
-    throw new Error(`${field ? `--${field}: ` : ''}${first?.message ?? 'invalid arguments'}\n${USAGE}`);
-  }
-  return parsed.data;
+  return parseCommandArgs(ArgsSchema, argv, USAGE, ['demo']);
 }
 
 const KINDS: readonly DocumentKind[] = ['report', 'door-notice', 'eyewear-sheet'];
