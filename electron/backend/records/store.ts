@@ -14,6 +14,7 @@ import { CALCULATED_WITH, evaluateRoom, type Evaluate } from './core-link.js';
 import { importLaserCsv } from './csv.js';
 import { openDatabase } from './database.js';
 import { seedDemo } from './demo.js';
+import { countersign, listCoSignatures, type CoSignature } from './co-signatures.js';
 import * as X from './exchange.js';
 import * as K from './personal-keys.js';
 import { adoptInstallationKey } from './legacy-signatures.js';
@@ -155,6 +156,8 @@ class SqliteRecordStore implements RecordStore {
   }
   backupStatus(): BackupStatus { return backupStatus(this.ctx.db, defaultBackupFolder(this.info.path)); }
   seedDemo(): Site { return seedDemo(this.ctx); }
+  countersign(args: Parameters<RecordStore['countersign']>[0]): CoSignature { return countersign(this.ctx, args); }
+  listCoSignatures(revisionId: Id): CoSignature[] { return listCoSignatures(this.ctx, revisionId); }
 }
 
 /** Internal options on top of OpenOptions (tests of a different core version). */
