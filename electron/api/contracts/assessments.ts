@@ -4,6 +4,7 @@ import type {
   Assessment,
   AssessmentContent,
   AssessmentSummary,
+  CoSignature,
   FieldDifference,
   Id,
   Revision,
@@ -31,4 +32,7 @@ export type AssessmentHandlers = {
   'revisions-compare': (args: { readonly fromRevisionId: Id; readonly toRevisionId: Id }) => Promise<FieldDifference[]>;
   'assessment-sign': (args: { readonly id: Id; readonly signOff: SignOff }) => Promise<Assessment>;
   'assessment-verify': (args: { readonly assessmentId: Id; readonly revisionId?: Id }) => Promise<VerifyReport>;
+  /** A second person countersigns a signed revision with their own key (schema 7). */
+  'revision-countersign': (args: { readonly revisionId: Id; readonly personId: Id; readonly passphrase: string; readonly statement: string }) => Promise<CoSignature>;
+  'revision-co-signatures': (args: { readonly revisionId: Id }) => Promise<CoSignature[]>;
 };

@@ -67,6 +67,7 @@ export function documentInputFromAssessment(store: RecordStore, assessmentId: st
             keyId: sig.keyId,
             keyTrusted: sig.keyTrusted !== false,
             trustAnchor: store.trustList().anchorFingerprint,
+            coSigners: store.listCoSignatures(revision.id).map((c) => ({ name: c.name, role: c.role, signedAt: c.signedAt, statement: c.statement, keyFingerprint: c.keyFingerprint, keyTrusted: c.keyTrusted })),
           },
   };
 }

@@ -6,7 +6,7 @@
  */
 import type { StoreContext } from './context.js';
 import { checkPersonSignature } from './personal-keys.js';
-import { shortKeyFingerprint } from './trust-list.js';
+import { readTrustList, shortKeyFingerprint, trustOf } from './trust-list.js';
 import type { AssessmentRow, RevisionRow } from './assessments.js';
 import type { Id } from './types.js';
 
@@ -39,6 +39,8 @@ export interface CoSignature {
   readonly statement: string;
   readonly keyId: string;
   readonly keyFingerprint: string;
+  /** The co-signer's key is on this installation's trust list (otherwise shown as an unverified co-signature). */
+  readonly keyTrusted: boolean;
 }
 
 /** One co-signature as verify sees it. */
@@ -64,8 +66,8 @@ export interface CoSignatureRow {
   signature: string;
 }
 
-export function rowToCoSignature(x: CoSignatureRow): CoSignature {
-  return { revisionId: x.revision_id, personId: x.person_id, name: x.name, role: x.role, signedAt: x.signed_at, statement: x.statement, keyId: x.key_id, keyFingerprint: shortKeyFingerprint(x.key_id) };
+export function rowToCoSignature(x: CoSignatureRow, keyTrusted: boolean): CoSignature {
+  return { keyTrusted, revisionId: x.revision_id, personId: x.person_id, name: x.name, role: x.role, signedAt: x.signed_at, statement: x.statement, keyId: x.key_id, keyFingerprint: shortKeyFingerprint(x.key_id) };
 }
 
 export function payloadOf(row: CoSignatureRow, a: AssessmentRow, r: RevisionRow): CoSignedStatement {
@@ -88,7 +90,7 @@ export function payloadOf(row: CoSignatureRow, a: AssessmentRow, r: RevisionRow)
 }
 
 export function listCoSignatures(ctx: StoreContext, revisionId: Id): CoSignature[] {
-  return (ctx.sql('SELECT * FROM co_signature WHERE revision_id = ? ORDER BY signed_at, person_id').all(revisionId) as CoSignatureRow[]).map(rowToCoSignature);
+  return (ctx.sql('SELECT * FROM co_signature WHERE revision_id = ? ORDER BY signed_at, person_id').all(revisionId) as CoSignatureRow[]).map((x) => rowToCoSignature(x, trustOf(readTrustList(ctx.keyDir).list, x.key_id).trusted));
 }
 
 /** The main signature as verify computed it: its link and fingerprint (null when the revision has none). */
@@ -114,7 +116,7 @@ export function checkCoSignatures(ctx: StoreContext, a: AssessmentRow, r: Revisi
         : !c.trusted
           ? `Co-signature by ${who}: the key is NOT on this installation's trust list. ${c.trustChain.join(' ')}`
           : `Co-signature by ${who} countersigned a different main signature or fingerprint: the main sign-off was changed or replaced after it.`;
-    return { ...rowToCoSignature(row), ok, signatureValid, keyTrusted: c.trusted, coversThisSignature: covers, finding };
+    return { ...rowToCoSignature(row, c.trusted), ok, signatureValid, coversThisSignature: covers, finding };
   });
 }
 

@@ -70,6 +70,6 @@ export function countersign(ctx: StoreContext, raw: z.input<typeof CountersignSc
   } catch (e) {
     throw translateSqliteError(e, 'Co-signature', ctx.db.name);
   }
-  return rowToCoSignature(row);
+  return rowToCoSignature(row, true); // signAsPerson refused an untrusted key
 }
 
