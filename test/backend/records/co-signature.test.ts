@@ -150,3 +150,17 @@ describe('attacks on a co-signature are reported by verify', () => {
     expect(report.findings.join(' ')).toMatch(/Co-signature by Prof\. Oona Brightwater-Hale .* not valid for what it records/);
   });
 });
+
+describe('npm run verify names the co-signer', () => {
+  it('one line per assessment: signed by the officer; co-signed by the lab head', async () => {
+    const x = setUp();
+    x.s.countersign({ revisionId: x.revisionId, personId: x.head.person.id, passphrase: x.head.passphrase, statement: CO_STATEMENT });
+    x.s.close();
+    store = null;
+    const { runVerify } = await import('../../../electron/cli/verify.js');
+    const lines: string[] = [];
+    const status = await runVerify(['--db', x.dbPath, '--key-dir', join(t?.dir ?? '', 'keys'), '--all'], (l) => lines.push(l));
+    expect(status).toBe(0);
+    expect(lines.find((l) => l.startsWith('ok'))).toMatch(/signed by Dr\. Imre Calloway-Senn on .*; co-signed by Prof\. Oona Brightwater-Hale on \d{4}-\d{2}-\d{2}, key /);
+  });
+});
