@@ -110,7 +110,7 @@ export function checkCoSignatures(ctx: StoreContext, a: AssessmentRow, r: Revisi
     const ok = signatureValid && c.trusted && covers;
     const who = `${row.name} (${row.role}) on ${row.signed_at.slice(0, 10)}, key ${shortKeyFingerprint(row.key_id)}`;
     const finding = ok
-      ? `Co-signature by ${who}: valid, key trusted (${c.trustChain.join(' ')}), covers the main signature and fingerprint.`
+      ? `Co-signature by ${who}: valid; it covers this revision's main signature and record fingerprint; key trusted: ${c.trustChain.join(' ')}`
       : !signatureValid
         ? `Co-signature by ${who} is not valid for what it records${owner ? '' : ` (the key belongs to ${c.ownerName ?? 'someone else'})`}: it was changed after countersigning.`
         : !c.trusted
