@@ -36,8 +36,6 @@ interface Listed {
 const near = (a: number, b: number): boolean => Math.abs(a / b - 1) < 1e-6;
 const retinal = (l: number): boolean => l >= 400 && l < 1400;
 
-/** T2 (s) of the limit tables for a source of alpha rad: 10*10^((alpha_mrad - 1.5)/98.5), 100 s above 100 mrad. */
-const T2 = (alpha: number): number => 10 * 10 ** ((Math.min(alpha * 1000, 100) - 1.5) / 98.5);
 /** 700-1400 nm extended-source limit at t (10 s <= t <= T2), 18*C_A*C_C*C_E*t^-0.25 W/m² (with set (a)'s corneal 2e3*C_A dual limit above 1200 nm). */
 function uncappedAt(s: Step, t: number): number {
   const CA = s.lambda < 1050 ? 10 ** (0.002 * (s.lambda - 700)) : 5;
