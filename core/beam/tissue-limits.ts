@@ -211,7 +211,7 @@ function computeTissueLimits(q: TissueQuery): TissueLimits {
   const f = e.repetitionRate_Hz !== undefined ? new Dec(e.repetitionRate_Hz) : null;
   const E = f ? H.mul(f) : H.div(tp);
   const rules: Array<LimitSummary['rules'][number]> = [
-    { rule: 'single-pulse', H_Jm2: rec(rule1), applies: true, detail: `rule 1: every pulse against the limit for its own duration (row ${pl.singlePulse.limit.governing.rowId})${pl.grouping ? '; pulse groups inside T_i counted as one pulse' : ''}` },
+    { rule: 'single-pulse', H_Jm2: rec(rule1), applies: true, detail: `rule 1: every pulse against the limit for its own duration (row ${pl.singlePulse.limit.governing.rowId})${pl.grouping ? `; pulse groups inside ${pl.grouping.time} counted as one pulse` : ''}` },
   ];
   if (pl.averagePower) rules.push({ rule: 'average-power', H_Jm2: pl.averagePower.H_Jm2, applies: true, detail: `rule 2: the train over ${fmt(new Dec(Tq))} s, per pulse H_T / N with N = ${pl.averagePower.N}` });
   if (pl.pulseTrain) rules.push({ rule: 'pulse-train', H_Jm2: rec(new Dec(pl.pulseTrain.H_Jm2).mul(k)), applies: pl.pulseTrain.applies, detail: `rule 3: ${pl.pulseTrain.why}` });

@@ -5,9 +5,9 @@
  * required (domain notes 1.1, rule 1).
  */
 import { InputError } from '../errors.js';
-import type { BeamInput, RuleSetId } from '../model/inputs.js';
+import type { RuleSetId } from '../model/inputs.js';
 import { INPUT_RULES, TEXT_RULES, inRange, rangeWords, textProblem, type NumberRule, type TextRule } from '../model/input-rules.js';
-import { RULE_SET_IDS } from '../limits/rule-sets.js';
+import { DEFAULT_RULE_SET, RULE_SET_IDS } from '../limits/rule-sets.js';
 
 function isObject(x: unknown): x is Record<string, unknown> {
   return typeof x === 'object' && x !== null && !Array.isArray(x);
@@ -68,7 +68,7 @@ export const SINGLE_MODE_NEEDS_MFD = 'the mode-field diameter is needed for a si
 export function validateBeamInput(input: unknown, prefix = '', roomRuleSet?: RuleSetId): RuleSetId {
   const p = (f: string): string => `${prefix}${f}`;
   const b = requireObject(prefix ? prefix.replace(/\.$/, '') : '(beam input)', input);
-  let ruleSet: RuleSetId = roomRuleSet ?? 'icnirp2013';
+  let ruleSet: RuleSetId = roomRuleSet ?? DEFAULT_RULE_SET;
   if (b['ruleSet'] !== undefined) {
     ruleSet = choice(p('ruleSet'), b['ruleSet'], RULE_SET_IDS);
     if (roomRuleSet && ruleSet !== roomRuleSet) {
@@ -163,9 +163,4 @@ function validateViewing(v: Record<string, unknown>, prefix: string): void {
   }
   if (v['attenuation_per_m'] !== undefined) requireRule(p('attenuation_per_m'), v['attenuation_per_m'], R.attenuation_per_m);
   if (v['closestApproach_m'] !== undefined) requireRule(p('closestApproach_m'), v['closestApproach_m'], R.closestApproach_m);
-}
-
-/** Narrowing helper for callers that validated first. */
-export function asBeamInput(x: unknown): BeamInput {
-  return x as BeamInput;
 }

@@ -11,6 +11,8 @@
  * 10.6 um, quoted 10 mW [SUP-EN207], read).
  */
 import { Dec } from '../numeric/decimal.js';
+import { evalFactor } from '../limits/factors.js';
+import { ruleSetTable } from '../limits/rule-sets.js';
 
 export interface FixedAel {
   readonly value: Dec;
@@ -30,11 +32,21 @@ export function classTimeBase(wavelength_nm: number): { T: number; why: string }
   return { T: 100, why: 'time base 100 s above 400 nm (IEC 60825-1:2014 4.3, from memory)' };
 }
 
-/** C4 (ICNIRP C_A): 10^(0.002(lambda-700)) in 700-1050 nm, 5 in 1050-1400 nm, 1 below. */
+/**
+ * The limit tables whose correction factors the AELs use: IEC 60825-1:2014 builds its AELs on the
+ * ICNIRP 2013 exposure limits, whatever rule set the room uses for the limits themselves.
+ */
+const AEL_FACTOR_TABLE = ruleSetTable('icnirp2013');
+
+/**
+ * C4 of IEC 60825-1:2014 is the limit tables' C_A (10^(0.002(lambda-700)) in 700-1050 nm, 5 in
+ * 1050-1400 nm, 1 below 700 nm): read from the table's factor, never computed here a second time.
+ */
 function c4(wavelength_nm: number): Dec {
-  if (wavelength_nm < 700) return new Dec(1);
-  if (wavelength_nm < 1050) return new Dec(10).pow(new Dec(wavelength_nm).minus(700).mul('0.002'));
-  return new Dec(5);
+  const lambda = new Dec(wavelength_nm);
+  const ca = evalFactor(AEL_FACTOR_TABLE, 'CA', { lambda, t: new Dec(1), alpha: new Dec(0) }, undefined);
+  if (!ca) throw new Error(`internal: no C4 (C_A) at ${wavelength_nm} nm`);
+  return ca.value;
 }
 
 /** Class 3B AEL for CW (and for the mean power of a train). */

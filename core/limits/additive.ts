@@ -96,8 +96,8 @@ export interface AdditiveResult {
 /** The hazard group of one applicable row (see the header for why the groups are this broad). */
 export function hazardGroupOf(tissue: Tissue, c: LimitCandidate): HazardGroup {
   if (tissue === 'skin') return 'skin';
-  if (c.tissueTable === 'eye' && c.effect.startsWith('retinal thermal')) return 'eye:retina-thermal';
-  if (c.tissueTable === 'eye' && c.effect.startsWith('retinal photochemical')) return 'eye:retina-photochemical';
+  if (c.tissueTable === 'eye' && c.effectClass === 'retina-thermal') return 'eye:retina-thermal';
+  if (c.tissueTable === 'eye' && c.effectClass === 'retina-photochemical') return 'eye:retina-photochemical';
   return 'eye:cornea-lens';
 }
 

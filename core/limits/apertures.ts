@@ -9,6 +9,7 @@ import type { LimitSettings, RuleSetId, Tissue } from '../model/inputs.js';
 import { evaluate } from './expression.js';
 import { conservativeOn } from './factors.js';
 import { ruleSetTable } from './rule-sets.js';
+import { inClosedInterval, inInterval } from './intervals.js';
 import type { ApertureRow } from './table-types.js';
 
 export interface ApertureResult {
@@ -32,13 +33,12 @@ export interface ApertureScope {
   readonly t_s: readonly [number, number];
 }
 
-const closedHas = (iv: readonly [number, number], x: Dec): boolean => x.gte(iv[0]) && x.lte(iv[1]);
 const clamp = (iv: readonly [number, number], x: Dec): Dec => Dec.min(Dec.max(x, new Dec(iv[0])), new Dec(iv[1]));
 /** Do the two intervals share a stretch of positive length whose closure holds x? */
 function sharesStretchAt(a: readonly [number, number], b: readonly [number, number], x: Dec): boolean {
   const lo = Math.max(a[0], b[0]);
   const hi = Math.min(a[1], b[1]);
-  return lo < hi && x.gte(lo) && x.lte(hi);
+  return lo < hi && inClosedInterval(x, [lo, hi]);
 }
 
 /**
@@ -49,8 +49,8 @@ function sharesStretchAt(a: readonly [number, number], b: readonly [number, numb
  * candidate row over its own aperture). Where the point still touches two aperture rows inside the
  * scope (an aperture edge inside the row, e.g. 0.35 s in the ultraviolet), the smaller aperture is
  * used: a smaller aperture never lowers the averaged exposure (ours, the safe side).
- * Without a scope: the row holding the point (closed-open); on the top edge of the tables the
- * smallest of the rows touching the point.
+ * Without a scope: the row holding the point (closed-open, ./intervals.ts); on the top edge of the
+ * tables the smallest of the rows touching the point.
  */
 export function limitingAperture(
   ruleSet: RuleSetId,
@@ -71,8 +71,8 @@ export function limitingAperture(
     t = clamp(scope.t_s, t);
     pool = rows.filter((r) => sharesStretchAt(r.band_nm, scope.band_nm, lambda) && sharesStretchAt(r.t_s, scope.t_s, t));
   } else {
-    const inside = rows.find((r) => lambda.gte(r.band_nm[0]) && lambda.lt(r.band_nm[1]) && t.gte(r.t_s[0]) && t.lt(r.t_s[1]));
-    pool = inside ? [inside] : rows.filter((r) => closedHas(r.band_nm, lambda) && closedHas(r.t_s, t));
+    const inside = rows.find((r) => inInterval(lambda, r.band_nm) && inInterval(t, r.t_s));
+    pool = inside ? [inside] : rows.filter((r) => inClosedInterval(lambda, r.band_nm) && inClosedInterval(t, r.t_s));
   }
   if (pool.length === 0) throw new Error(`no aperture row for ${tissue} at ${lambda.toString()} nm, ${t.toString()} s`);
   const sized = pool.map((r) => apertureOf(r, tissue, t, settings));

@@ -17,7 +17,7 @@ import { addStep, newTrace, type Trace } from '../trace/trace.js';
 import { condition, evaluate, substitute, variablesOf } from './expression.js';
 import { conservativeOn, evaluateFactors, FACTOR_ORDER, onFactorEdge, type FactorSet, type FactorValue } from './factors.js';
 import { DEFAULT_RULE_SET, DURATION_RANGE_S, RULE_SET_IDS, RULE_SET_NAME, ruleSetTable, WAVELENGTH_RANGE_NM } from './rule-sets.js';
-import type { Interval, LimitRow, RuleSetTable } from './table-types.js';
+import type { EffectClass, Interval, LimitRow, RuleSetTable } from './table-types.js';
 import { limitingAperture, type ApertureResult } from './apertures.js';
 
 export interface ExposureLimitQuery {
@@ -34,6 +34,8 @@ export interface LimitCandidate {
   readonly rowId: string;
   readonly tissueTable: Tissue;
   readonly effect: string;
+  /** The row's typed effect class (what the pulse-train scope and the hazard groups read). */
+  readonly effectClass: EffectClass;
   readonly quantity: 'H' | 'E';
   readonly expr: string;
   readonly substituted: string;
@@ -104,7 +106,7 @@ function hasConservativePiece(table: RuleSetTable, name: string): boolean {
 }
 
 function isRetinal(row: LimitRow): boolean {
-  return row.effect.startsWith('retinal');
+  return row.effectClass === 'retina-thermal' || row.effectClass === 'retina-photochemical';
 }
 
 function fmt(d: Dec): string {
@@ -192,7 +194,7 @@ function evaluateRow(ctx: Ctx, row: LimitRow, tableTissue: Tissue, apertureTissu
   // than gamma_p only the fraction (gamma_p/alpha)^2 of its irradiance counts, which is the same as
   // raising the limit by (alpha/gamma_p)^2 (derived; limit specification sections 4.2 and 8).
   let fov: Dec | undefined;
-  if (row.effect.includes('photochemical') && row.effect.startsWith('retinal')) {
+  if (row.effectClass === 'retina-photochemical') {
     const gamma = vars['gamma_p'];
     const alpha = vars['alpha'] as Dec;
     if (gamma && alpha.gt(gamma)) {
@@ -222,6 +224,7 @@ function evaluateRow(ctx: Ctx, row: LimitRow, tableTissue: Tissue, apertureTissu
     rowId: row.id,
     tissueTable: tableTissue,
     effect: row.effect,
+    effectClass: row.effectClass,
     quantity: row.quantity === 'E' ? 'E' : 'H',
     expr,
     substituted: substitute(expr, vars, fmt),

@@ -1,11 +1,13 @@
 /**
  * Correction factors and parameters (C_A, C_B, C_C, C_E, T1, T2, alpha_max, gamma_p, C1, C2, T_i /
  * T_min), defined ONCE per rule set in the tables and evaluated here at (lambda, t, alpha).
- * Pieces are half-open [lo, hi); at the top edge of the last piece the piece ending there is used.
+ * Pieces are half-open [lo, hi); at the top edge of the last piece the piece ending there is used
+ * (the one boundary convention of the tables, ./intervals.ts).
  */
 import { Dec } from '../numeric/decimal.js';
 import { condition, evaluate, type Vars } from './expression.js';
-import type { FactorDef, FactorPiece, Interval, RuleSetTable } from './table-types.js';
+import type { FactorDef, FactorPiece, RuleSetTable } from './table-types.js';
+import { atTop, inInterval, inIntervalFromBelow, onAnyEdge } from './intervals.js';
 import type { LimitSettings } from '../model/inputs.js';
 
 export interface FactorValue {
@@ -19,18 +21,6 @@ export interface FactorValue {
   readonly remembered?: Dec;
 }
 
-function inInterval(x: Dec, iv: Interval): boolean {
-  return x.gte(iv[0]) && x.lt(iv[1]);
-}
-
-function atTop(x: Dec, iv: Interval): boolean {
-  return x.eq(iv[1]);
-}
-
-/** (lo, hi]: the piece that ends at x, for the lower side of an exact edge. */
-function inIntervalFromBelow(x: Dec, iv: Interval): boolean {
-  return x.gt(iv[0]) && x.lte(iv[1]);
-}
 
 /**
  * Which piece to use where the point sits exactly on the edge between two pieces: 'upper' (the
@@ -150,7 +140,7 @@ export function evaluateFactors(
 const edgeCache = new WeakMap<RuleSetTable, { lambda: Set<number>; t: Set<number> }>();
 
 /**
- * Is (lambda, t) exactly on an inner edge between factor pieces (where the two sides can give
+ * Is (lambda, t) on an inner edge between factor pieces (within 1e-9 relative, ./intervals.ts) (where the two sides can give
  * different values, e.g. C_C at 1200 nm: 10^0.9 = 7.94 below, 8 above)?
  */
 export function onFactorEdge(table: RuleSetTable, lambda: Dec, t: Dec): boolean {
@@ -165,5 +155,5 @@ export function onFactorEdge(table: RuleSetTable, lambda: Dec, t: Dec): boolean 
     }
     edgeCache.set(table, e);
   }
-  return e.lambda.has(lambda.toNumber()) || e.t.has(t.toNumber());
+  return onAnyEdge(lambda, e.lambda) || onAnyEdge(t, e.t);
 }

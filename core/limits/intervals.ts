@@ -6,7 +6,11 @@
  *  - limit rows: the rows on both sides apply and the lower limit governs (EU 2006/25/EC Table 2.2
  *    note a; core/limits/exposure-limit.ts);
  *  - factors and apertures: the interval that starts there; at the top edge of the last interval,
- *    the interval that ends there.
+ *    the interval that ends there;
+ *  - factor pieces on an exact edge are ALSO evaluated from below ((lo, hi], inIntervalFromBelow)
+ *    and the lower limit kept (the same note a, applied to the factors);
+ *  - the pulse rules' counting windows: the window that starts there (the last one holds its top).
+ * Every file of core/limits places a value against a table interval through these functions only.
  */
 import { Dec } from '../numeric/decimal.js';
 import type { Interval } from './table-types.js';
@@ -49,4 +53,27 @@ export function inInterval(x: Dec, iv: Interval): boolean {
 /** x on the top edge hi of the interval. */
 export function atTop(x: Dec, iv: Interval): boolean {
   return intervalPosition(x, iv) === 'edge';
+}
+
+/** x in (lo, hi] under the convention: the interval that ENDS at an edge x sits on (the lower side). */
+export function inIntervalFromBelow(x: Dec, iv: Interval): boolean {
+  const [lo, hi] = edges(iv);
+  if (onEdge(x, hi)) return true;
+  if (onEdge(x, lo)) return false;
+  return x.gt(lo) && x.lt(hi);
+}
+
+/** x in the closed [lo, hi] under the convention (inside, or on either edge). */
+export function inClosedInterval(x: Dec, iv: Interval): boolean {
+  return intervalPosition(x, iv, true) === 'inside';
+}
+
+/** Is x on one of the given edges (within 1e-9 relative)? */
+export function onAnyEdge(x: Dec, edgeValues: Iterable<number>): boolean {
+  const xn = x.toNumber();
+  for (const e of edgeValues) {
+    // plain-number quick reject first; the decimal test decides (speed, see npm run bench)
+    if (Math.abs(xn - e) <= Math.max(Math.abs(xn), Math.abs(e)) * 1e-6 && onEdge(x, new Dec(e))) return true;
+  }
+  return false;
 }

@@ -36,6 +36,17 @@ export function openPoints(ruleSet: (typeof RULE_SET_IDS)[number]): OpenPoint[] 
       out.push({ what: `factor ${name}: ${def.expr ?? String(def.value)}`, confidence: def.confidence, source: def.source ?? '' });
     }
   }
+  const rp = t.repetitivePulses;
+  for (const r of rp.rules) if (isOpen(r.confidence)) out.push({ what: `repetitive pulses, rule ${r.n}: ${r.text}`, confidence: r.confidence, source: r.source });
+  if (isOpen(rp.cp.confidence)) out.push({ what: `pulse-train factor C_P: ${rp.cp.pieces ? 'piecewise form' : rp.cp.expr} (applies to ${rp.cp.appliesTo.join(', ')})`, confidence: rp.cp.confidence, source: rp.cp.source });
+  if (isOpen(rp.grouping.confidence)) out.push({ what: `pulse grouping inside ${rp.grouping.factor}`, confidence: rp.grouping.confidence, source: rp.grouping.source });
+  const below = rp.grouping.belowTable;
+  if (below && isOpen(below.confidence)) out.push({ what: `pulse grouping below ${below.below_nm} nm: ${below.value_s} s`, confidence: below.confidence, source: below.source });
+  for (const w of rp.countingWindows) {
+    if (!isOpen(w.confidence)) continue;
+    const cap = w.cap === undefined ? 'whole exposure' : 'factor' in w.cap ? `at most ${w.cap.factor}` : `at most ${w.cap.seconds} s`;
+    out.push({ what: `pulses counted for C_P, ${span(w.band_nm, 'nm')}: ${cap}`, confidence: w.confidence, source: w.source });
+  }
   return out;
 }
 

@@ -27,7 +27,7 @@ export interface Grouping {
  * The group never holds more pulses than the whole exposure (N_T) nor lasts longer than it.
  */
 export function groupWithin(rate_Hz: Dec, groupTime_s: Dec, exposure_s: Dec, pulsesInExposure: Dec): Grouping | null {
-  if (rate_Hz.mul(groupTime_s).lte(1)) return null;
+  // f * T_g <= 1 (period not shorter than T_g) gives ceil(f * T_g) <= 1: no group, by the test below.
   const n = Dec.min(rate_Hz.mul(groupTime_s).ceil(), pulsesInExposure);
   if (n.lte(1)) return null;
   return { groupedPulses: n, groupDuration_s: Dec.min(groupTime_s, exposure_s) };

@@ -18,17 +18,22 @@
  *  applied to the sub-group inside T_i ("any group of pulses", Table 2.6 rule 2), so it is made
  *  whenever pulses arrive that close; counting them as ONE pulse for C_P additionally requires, in
  *  eu2006, pulses longer than 1 ns (BGI 832, read).
+ *
+ * Every difference between the rule sets (C_P and its scope, the grouping time and its edge side,
+ * the counting windows, the citations) is data in the table's `repetitivePulses` block
+ * (table-types.ts, RepetitivePulseRules): this file never asks which rule set it is evaluating.
  */
 import { Dec, recordString } from '../numeric/decimal.js';
 import { InputError, requireInRange, requirePositive } from '../errors.js';
 import type { LimitSettings, RuleSetId, Tissue } from '../model/inputs.js';
+import type { CountingWindow, CpRuleData, PulseRuleText, RepetitivePulseRules, RuleSetTable } from './table-types.js';
 import { addStep, newTrace, type Trace } from '../trace/trace.js';
 import { condition, evaluate } from './expression.js';
 import { conservativeOn, evaluateFactors, type EdgeSide, type FactorSet } from './factors.js';
 import { exposureLimit, type ExposureLimitResult, type LimitCandidate } from './exposure-limit.js';
 import { DEFAULT_RULE_SET, DURATION_RANGE_S, RULE_SET_NAME, ruleSetTable } from './rule-sets.js';
 import { groupsAmong, groupWithin, pulsesIn, type Grouping } from './pulse-counting.js';
-import { readCpRule } from './pulse-cp.js';
+import { intervalPosition } from './intervals.js';
 
 export interface PulsedLimitQuery {
   readonly ruleSet?: RuleSetId;
@@ -71,6 +76,8 @@ export interface PulsedLimitResult {
   } | null;
   /** Pulses inside T_i / T_min counted as one (null when none arrive that close). */
   readonly grouping: {
+    /** The rule set's name for the grouping time (T_i in icnirp2013, T_min in eu2006). */
+    readonly time: 'T_i' | 'T_min';
     readonly groupedPulses: string;
     readonly groupDuration_s: string;
     readonly why: string;
@@ -87,8 +94,6 @@ export interface PulsedLimitResult {
   readonly trace: Trace;
 }
 
-const QUARTER_SECOND = new Dec('0.25');
-const ONE_NS = new Dec('1e-9');
 
 /** Six significant figures for the trace; e-notation for very small or large values. */
 function fmt(d: Dec): string {
@@ -118,12 +123,16 @@ function validatePulsed(q: PulsedLimitQuery): { tp: Dec; T: Dec; f: Dec | null }
   return { tp: new Dec(q.pulseDuration_s), T: new Dec(q.exposureDuration_s), f };
 }
 
-/** Is this candidate one that rule 3 reduces? */
-function reducedByCp(ruleSet: RuleSetId, c: LimitCandidate): boolean {
-  if (ruleSet === 'icnirp2013') return c.effect.startsWith('retinal thermal');
-  // EU Table 2.6: all limits protecting against thermal injury. Rows whose effect is not named
-  // purely photochemical are treated as thermal (the stricter reading, ours).
-  return c.effect.includes('thermal') || !c.effect.includes('photochemical');
+/** Is this candidate one that rule 3 reduces? (the rule set's C_P scope, by effect class) */
+function reducedByCp(cp: CpRuleData, c: LimitCandidate): boolean {
+  return cp.appliesTo.includes(c.effectClass);
+}
+
+/** Rule n as the rule set states it; rules 1 and 2 must carry the citation the trace prints. */
+function ruleText(rp: RepetitivePulseRules, n: 1 | 2): PulseRuleText & { readonly cite: string } {
+  const r = rp.rules.find((x) => x.n === n);
+  if (!r?.cite) throw new Error(`limit table: repetitive-pulse rule ${n} has no citation`);
+  return { ...r, cite: r.cite };
 }
 
 function minH(cands: readonly LimitCandidate[]): { H: Dec; row: LimitCandidate } | null {
@@ -151,34 +160,47 @@ function pulseFactors(q: PulsedLimitQuery, ruleSet: RuleSetId, tp: Dec, side: Ed
   return evaluateFactors(ruleSetTable(ruleSet), new Dec(q.wavelength_nm), tp, alpha, q.settings, side);
 }
 
-function groupingTime(ruleSet: RuleSetId, pf: FactorSet, lambda: number): GroupingTime | null {
-  const table = ruleSetTable(ruleSet);
-  const name = ruleSet === 'icnirp2013' ? 'T_i' : 'T_min';
+/**
+ * The grouping time at this wavelength: the rule set's factor (T_i or T_min), or its stated value
+ * below the factor's table (eu2006 below 315 nm); null where the rule set groups nothing (icnirp2013
+ * gives no T_i below 400 nm: UV doses simply add, rule 2).
+ */
+function groupingTime(table: RuleSetTable, pf: FactorSet, lambda: number): GroupingTime | null {
+  const rule = table.repetitivePulses.grouping;
+  const name = rule.factor;
   const def = table.factors[name];
   const v = pf.get(name);
   if (v !== undefined) return { T_g: v.value, name, source: def?.source ?? '', confidence: def?.confidence ?? '' };
-  if (ruleSet === 'eu2006' && lambda < 315) {
-    // Table 2.2 note d sums UV pulses inside T_min, but Table 2.6 lists no T_min below 315 nm:
-    // use 1 ns, the 315-400 nm value, until clarified (limit specification 5.6, ours).
-    return { T_g: ONE_NS, name, source: 'limit specification 5.6: gap in the Directive, 315-400 nm value used', confidence: 'ours' };
-  }
-  return null; // icnirp2013 gives no T_i below 400 nm: UV doses simply add (rule 2)
+  const below = rule.belowTable;
+  if (below && lambda < below.below_nm) return { T_g: new Dec(below.value_s), name, source: below.source, confidence: below.confidence };
+  return null;
 }
 
-/** Window in which N is counted for rule 3. */
-function countingWindow(ruleSet: RuleSetId, lambda: number, T: Dec, T2: Dec | undefined): { span: Dec; why: string } {
-  if (lambda >= 400 && lambda < 1400 && T2) {
-    return T.gt(T2)
-      ? { span: T2, why: `N counted within T2 = ${fmt(T2)} s (shorter than T)` }
-      : { span: T, why: `N counted within T = ${fmt(T)} s (not longer than T2 = ${fmt(T2)} s)` };
-  }
-  if (lambda >= 1400) {
-    const ten = new Dec(10);
-    return T.gt(ten) ? { span: ten, why: 'N counted within 10 s (above 1400 nm)' } : { span: T, why: `N counted within T = ${fmt(T)} s` };
+/** The counting-window row whose band holds the wavelength: [lo, hi), the top of the last band included. */
+function windowAt(windows: readonly CountingWindow[], lambda: number): CountingWindow | undefined {
+  const x = new Dec(lambda);
+  const last = windows[windows.length - 1];
+  return windows.find((w) => intervalPosition(x, w.band_nm, w === last) === 'inside');
+}
+
+/** Window in which N is counted for rule 3: min(T, cap) of the rule set's window for this band. */
+function countingWindow(windows: readonly CountingWindow[], lambda: number, T: Dec, pf: FactorSet): { span: Dec; why: string } {
+  const w = windowAt(windows, lambda);
+  const cap = w?.cap;
+  if (cap && 'factor' in cap) {
+    const T2 = pf.get(cap.factor)?.value;
+    if (T2) {
+      return T.gt(T2)
+        ? { span: T2, why: `N counted within ${cap.factor} = ${fmt(T2)} s (shorter than T)` }
+        : { span: T, why: `N counted within T = ${fmt(T)} s (not longer than ${cap.factor} = ${fmt(T2)} s)` };
+    }
+  } else if (cap) {
+    const s = new Dec(cap.seconds);
+    return T.gt(s) ? { span: s, why: `N counted within ${fmt(s)} s (${cap.label})` } : { span: T, why: `N counted within T = ${fmt(T)} s` };
   }
   return {
     span: T,
-    why: ruleSet === 'eu2006' ? `N counted over the whole exposure T = ${fmt(T)} s (no cap below 400 nm; the stricter reading, ours)` : `N counted within T = ${fmt(T)} s`,
+    why: w?.uncappedNote ? `N counted over the whole exposure T = ${fmt(T)} s (${w.uncappedNote})` : `N counted within T = ${fmt(T)} s`,
   };
 }
 
@@ -196,6 +218,8 @@ export function pulsedExposureLimit(q: PulsedLimitQuery): PulsedLimitResult {
     ...(q.sourceAngle_rad !== undefined ? { sourceAngle_rad: q.sourceAngle_rad } : {}),
     ...(q.settings !== undefined ? { settings: q.settings } : {}),
   };
+  const table = ruleSetTable(ruleSet);
+  const rp = table.repetitivePulses;
   const single = exposureLimit({ ...base, duration_s: q.pulseDuration_s });
   const H1 = new Dec(single.H_Jm2);
   const trace = newTrace(
@@ -210,8 +234,8 @@ export function pulsedExposureLimit(q: PulsedLimitQuery): PulsedLimitResult {
     detail: `limit for one pulse of ${fmt(tp)} s, governing row ${single.governing.rowId} (${single.governing.effect})`,
     value: fmt(H1),
     unit: 'J/m² per pulse',
-    source: ruleSet === 'eu2006' ? 'EU 2006/25/EC Annex II Table 2.6 rule 1 (read)' : 'ICNIRP2013; IEC2014 4.3 f) rule 1 (from memory)',
-    confidence: ruleSet === 'eu2006' ? 'read' : 'from memory',
+    source: ruleText(rp, 1).cite,
+    confidence: ruleText(rp, 1).confidence,
   });
   const replacements = new Set<string>(single.conservativeReplacements);
 
@@ -233,15 +257,16 @@ export function pulsedExposureLimit(q: PulsedLimitQuery): PulsedLimitResult {
     detail: `N_T = ceil(f * T) = ceil(${fmt(f)} * ${fmt(T)}) = ${NT.toString()} pulses; per pulse H_T / N_T = ${fmt(new Dec(avg.H_Jm2))} / ${NT.toString()} (row ${avg.governing.rowId}; mean irradiance limit ${fmt(new Dec(avg.E_Wm2))} W/m²)`,
     value: fmt(H2),
     unit: 'J/m² per pulse',
-    source: ruleSet === 'eu2006' ? 'EU 2006/25/EC Annex II Table 2.6 rule 2 (read)' : 'ICNIRP2013; IEC2014 4.3 f) rule 2 (from memory)',
-    confidence: ruleSet === 'eu2006' ? 'read' : 'from memory',
+    source: ruleText(rp, 2).cite,
+    confidence: ruleText(rp, 2).confidence,
   });
 
   // Grouping inside T_i / T_min: the summed energy against the limit for the group duration.
   const pf = pulseFactors(q, ruleSet, tp);
-  // EU Table 2.6 writes its T_min bands lo < lambda <= hi: on an exact band edge (1050, 1400, 1500,
-  // 1800, 2600 nm) the lower band's T_min applies (limit specification errata).
-  const gt = groupingTime(ruleSet, ruleSet === 'eu2006' ? pulseFactors(q, ruleSet, tp, 'lower') : pf, q.wavelength_nm);
+  // A table written lo < lambda <= hi (EU Table 2.6 T_min) gives the lower band's value on an exact
+  // band edge (1050, 1400, 1500, 1800, 2600 nm; limit specification errata): grouping.edgeSide.
+  const edgeSide = rp.grouping.edgeSide;
+  const gt = groupingTime(table, edgeSide === 'upper' ? pf : pulseFactors(q, ruleSet, tp, edgeSide), q.wavelength_nm);
   const g: Grouping | null = gt ? groupWithin(f, gt.T_g, T, NT) : null;
   let grouping: PulsedLimitResult['grouping'] = null;
   let groupLimit: ExposureLimitResult | null = null;
@@ -254,7 +279,7 @@ export function pulsedExposureLimit(q: PulsedLimitQuery): PulsedLimitResult {
     const why =
       `pulse period ${fmt(new Dec(1).div(f))} s is shorter than ${gt.name} = ${fmt(gt.T_g)} s: ` +
       `${g.groupedPulses.toString()} pulses inside ${fmt(g.groupDuration_s)} s are one pulse; their summed energy is compared with the limit for ${fmt(g.groupDuration_s)} s`;
-    grouping = { groupedPulses: g.groupedPulses.toString(), groupDuration_s: recordString(g.groupDuration_s), why, perPulse_H_Jm2: recordString(perPulse), limit: groupLimit };
+    grouping = { time: gt.name, groupedPulses: g.groupedPulses.toString(), groupDuration_s: recordString(g.groupDuration_s), why, perPulse_H_Jm2: recordString(perPulse), limit: groupLimit };
     addStep(trace, { kind: 'row', label: `Grouping inside ${gt.name}`, detail: `${why}: ${fmt(new Dec(groupLimit.H_Jm2))} / ${g.groupedPulses.toString()}`, value: fmt(perPulse), unit: 'J/m² per pulse', source: gt.source, confidence: gt.confidence });
     // The merged pulse is a pulse for rule 1: the lower of the two per-pulse values counts.
     if (perPulse.lt(rule1)) rule1 = perPulse;
@@ -263,7 +288,7 @@ export function pulsedExposureLimit(q: PulsedLimitQuery): PulsedLimitResult {
   }
 
   // Rule 3: C_P on the thermal (icnirp2013: retinal thermal) part of the single-pulse limit.
-  const train = pulseTrainRule({ q, ruleSet, single, pf, groupLimit, g, tp, T, f, NT, replacements });
+  const train = pulseTrainRule({ q, rp, single, pf, groupLimit, g, tp, T, f, NT, replacements });
   addStep(trace, {
     kind: train.cpReplaced ? 'conservative' : 'row',
     label: 'Rule 3: pulse train',
@@ -310,7 +335,7 @@ export function pulsedExposureLimit(q: PulsedLimitQuery): PulsedLimitResult {
 
 interface TrainInput {
   readonly q: PulsedLimitQuery;
-  readonly ruleSet: RuleSetId;
+  readonly rp: RepetitivePulseRules;
   readonly single: ExposureLimitResult;
   readonly pf: FactorSet;
   readonly groupLimit: ExposureLimitResult | null;
@@ -335,8 +360,8 @@ interface TrainOutcome {
 }
 
 function pulseTrainRule(x: TrainInput): TrainOutcome {
-  const { q, ruleSet, single, pf, groupLimit, g, tp, T, f, NT } = x;
-  const cp = readCpRule(ruleSet);
+  const { q, rp, single, pf, groupLimit, g, tp, T, f, NT } = x;
+  const cp = rp.cp;
   const notApplying = (why: string): TrainOutcome => ({
     H: new Dec(single.H_Jm2),
     CP: new Dec(1),
@@ -348,21 +373,17 @@ function pulseTrainRule(x: TrainInput): TrainOutcome {
     confidence: cp.confidence,
     cpReplaced: false,
   });
-  const thermal = minH(single.candidates.filter((c) => reducedByCp(ruleSet, c)));
-  if (!thermal) {
-    return notApplying(
-      ruleSet === 'icnirp2013'
-        ? 'C_P applies only to retinal thermal limits (400-1400 nm, eye); ILSC2019 (read)'
-        : 'C_P applies only to limits protecting against thermal injury (EU Table 2.6 rule 3); the limits here are photochemical',
-    );
-  }
-  // Counting as one pulse (for N) needs, in eu2006, pulses longer than 1 ns (BGI 832, read).
-  const countAsOne = g !== null && (ruleSet === 'icnirp2013' || tp.gt(ONE_NS));
+  const thermal = minH(single.candidates.filter((c) => reducedByCp(cp, c)));
+  if (!thermal) return notApplying(cp.scopeNote);
+  // Counting as one pulse (for N) may need pulses longer than a minimum (eu2006: 1 ns, BGI 832, read).
+  const minPulse = rp.grouping.countAsOneIfPulseLongerThan_s;
+  const countAsOne = g !== null && (minPulse === undefined || tp.gt(minPulse));
   const effectiveDuration = countAsOne && g ? g.groupDuration_s : tp;
-  if (effectiveDuration.gte(QUARTER_SECOND)) {
-    return notApplying(`C_P applies only to pulses shorter than 0.25 s (pulse${countAsOne ? ' group' : ''} lasts ${fmt(effectiveDuration)} s)`);
+  const cpMax = new Dec(cp.pulsesShorterThan_s);
+  if (effectiveDuration.gte(cpMax)) {
+    return notApplying(`C_P applies only to pulses shorter than ${fmt(cpMax)} s (pulse${countAsOne ? ' group' : ''} lasts ${fmt(effectiveDuration)} s)`);
   }
-  const win = countingWindow(ruleSet, q.wavelength_nm, T, pf.get('T2')?.value);
+  const win = countingWindow(rp.countingWindows, q.wavelength_nm, T, pf);
   const inWindow = Dec.min(NT, pulsesIn(f, win.span));
   const N = countAsOne && g ? groupsAmong(inWindow, g.groupedPulses) : inWindow;
   const alpha = new Dec(q.sourceAngle_rad ?? 0).mul(1000);
@@ -392,7 +413,7 @@ function pulseTrainRule(x: TrainInput): TrainOutcome {
   let baseH = thermal.H;
   let baseWhy = `thermal single-pulse limit ${fmt(thermal.H)} J/m² (row ${thermal.row.rowId})`;
   if (countAsOne && g && groupLimit) {
-    const gThermal = minH(groupLimit.candidates.filter((c) => reducedByCp(ruleSet, c)));
+    const gThermal = minH(groupLimit.candidates.filter((c) => reducedByCp(cp, c)));
     if (gThermal) {
       const perPulse = gThermal.H.div(g.groupedPulses);
       if (perPulse.lt(baseH)) {

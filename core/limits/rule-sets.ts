@@ -1,6 +1,8 @@
 /** The two rule sets and their citations. */
 import type { RuleSetId } from '../model/inputs.js';
 import type { RuleSetTable } from './table-types.js';
+import { Dec } from '../numeric/decimal.js';
+import { onAnyEdge } from './intervals.js';
 import { ICNIRP2013_TABLE } from './tables/icnirp2013.js';
 import { EU2006_TABLE } from './tables/eu2006.js';
 
@@ -28,7 +30,7 @@ export const DURATION_RANGE_S = [1e-13, 3e4] as const;
 
 const bandEdgeCache = new Map<RuleSetId, Set<number>>();
 
-/** Is the wavelength exactly on an inner edge between limit-table bands of the rule set (either tissue)? */
+/** Is the wavelength on an inner edge between limit-table bands of the rule set (either tissue; within 1e-9 relative, ./intervals.ts)? */
 export function onBandEdge(ruleSet: RuleSetId, wavelength_nm: number): boolean {
   let edges = bandEdgeCache.get(ruleSet);
   if (!edges) {
@@ -38,5 +40,5 @@ export function onBandEdge(ruleSet: RuleSetId, wavelength_nm: number): boolean {
     for (const e of WAVELENGTH_RANGE_NM) edges.delete(e);
     bandEdgeCache.set(ruleSet, edges);
   }
-  return edges.has(wavelength_nm);
+  return onAnyEdge(new Dec(wavelength_nm), edges);
 }

@@ -6,7 +6,7 @@
 import { Dec } from '../numeric/decimal.js';
 import type { RoomInput } from '../model/inputs.js';
 import type { BeamResult } from '../model/results.js';
-import { asRectangle, boxesApart, boxOf, insideBox, insideWithin, segmentTouchesPolygon, withinOfPolygon, type P } from './geometry.js';
+import { asRectangle, boxesApart, boxOf, insideBox, insideOutline, segmentTouchesPolygon, withinOfPolygon, type P } from './geometry.js';
 import type { PlanBeamRun, PlanFinding, PlanResult, RoomPlan } from './plan-model.js';
 import { tracePath, toP, type Leg } from './trace-path.js';
 import { CIRCLE_CORNERS, PATH_MARGIN_M, diffuseRadius, directLength, directZones, diffuseZones, insideEnclosure, roundPoint, type BeamOnPlan, type ZoneWithShape } from './plan-zones.js';
@@ -32,7 +32,7 @@ export const PLAN_METHOD: readonly string[] = [
   `Direct-beam zones follow the drawn beam path up to the NOHD (rounded up, or the upper bound from the input tolerances where larger), stopped by beam dumps, targets, walls and barriers; doors and windows are taken as open.`,
   `Their width is where the exposure of a Gaussian beam exceeds the limit (derived from the beam diameter, divergence and NOHD), plus ${PATH_MARGIN_M.mul(1000).toString()} mm on each side for the accuracy of the drawing.`,
   `Diffuse-reflection zones are drawn around a circle of the diffuse NHZ (rounded up) about every mirror and target the beam reaches, every point where it ends on a wall or barrier, and every reflection point marked on the plan (a ${CIRCLE_CORNERS}-sided polygon outside the circle).`,
-  'Walls are taken as opaque to scattered light: a diffuse-reflection zone is cut at the walls of a convex room outline, and at the enclosure a reflection point lies in; a door or window the zone reaches is reported.',
+  'Walls, curtains and barriers are taken as opaque to scattered light: a diffuse-reflection zone covers only what its reflection point can see in a straight line, cut at the room outline (of any shape), interior walls, curtains, barriers and the enclosure the point lies in, 1 mm beyond the surface along the line of sight; a spot on a wall or barrier is seen from the side the beam comes from; a door or window the zone reaches is reported.',
   'Every zone is widened by 1 mm before its corners are rounded to the millimetre, so no zone is drawn smaller than computed. Heights are not modelled except for the eye-level check of a stated beam height.',
 ];
 
@@ -79,7 +79,7 @@ export function evaluatePlan(plan: RoomPlan, input: RoomInput, beams: readonly B
   const suggestions: string[] = [];
   for (const f of findings) if (f.suggestion && !suggestions.includes(f.suggestion)) suggestions.push(f.suggestion);
   return {
-    zones: zones.map(({ shape: _shape, ...z }) => z),
+    zones: zones.map(({ shape: _shape, box: _box, ...z }) => z),
     runs,
     findings,
     suggestions,
@@ -166,7 +166,7 @@ function beamFindings(plan: RoomPlan, b: BeamOnPlan, legs: readonly Leg[], dz: r
 }
 
 function placeFindings(plan: RoomPlan, zones: readonly ZoneWithShape[], out: PlanFinding[]): void {
-  const open = zones.filter((z) => !z.enclosed).map((z) => ({ z, box: boxOf(z.shape) }));
+  const open = zones.filter((z) => !z.enclosed).map((z) => ({ z, box: z.box }));
   const seg = (kind: 'door' | 'window', id: string, label: string, a: P, b: P, interlocked?: boolean) => {
     const box = boxOf([a, b]);
     const inZones = open.filter((o) => !boxesApart(box, o.box, 0) && segmentTouchesPolygon(a, b, o.z.shape)).map((o) => o.z);
@@ -240,7 +240,7 @@ function controlledAreaFindings(plan: RoomPlan, zones: readonly ZoneWithShape[],
   // A zone cut at a wall may overlap the wall line by its 1 mm pad: 5 mm is taken as on the boundary (ours).
   const tol = new Dec('0.005');
   const rect = asRectangle(outline);
-  const inside = (x: ZoneWithShape) => (rect ? insideBox(x.shape, rect.min, rect.max, tol) : insideWithin(x.shape, outline, tol));
+  const inside = (x: ZoneWithShape) => (rect ? insideBox(x.shape, rect.min, rect.max, tol, x.box) : insideOutline(x.shape, outline, tol));
   const out_ = (x: ZoneWithShape) => !x.enclosed && !inside(x);
   const outside = firstPerBeamKind(zones.filter(out_));
   for (const z of outside) {

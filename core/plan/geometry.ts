@@ -85,11 +85,6 @@ export function distanceSqToSegment(p: P, a: P, b: P): Dec {
   return dot(d, d);
 }
 
-/** Distance from p to the closed segment a–b. */
-export function distanceToSegment(p: P, a: P, b: P): Dec {
-  return distanceSqToSegment(p, a, b).sqrt();
-}
-
 /** The closing edges of a polygon, each as [start, end]. */
 export function edges(poly: readonly P[]): Array<readonly [P, P]> {
   const out: Array<readonly [P, P]> = [];
@@ -129,26 +124,6 @@ export function segmentTouchesPolygon(a: P, b: P, poly: readonly P[]): boolean {
     if (segmentsMeet(a, b, c, d)) return true;
   }
   return false;
-}
-
-/** Is every point of polygon `inner` inside polygon `outer` (vertices inside, no edges crossing)? */
-export function polygonInside(inner: readonly P[], outer: readonly P[]): boolean {
-  if (!inner.every((v) => pointInPolygon(v, outer))) return false;
-  const outerEdges = edges(outer);
-  for (const [a, b] of edges(inner)) {
-    for (const [c, d] of outerEdges) {
-      if (properCross(a, b, c, d)) return false;
-    }
-  }
-  return true;
-}
-
-function properCross(a: P, a2: P, b: P, b2: P): boolean {
-  const d1 = cross(sub(b2, b), sub(a, b));
-  const d2 = cross(sub(b2, b), sub(a2, b));
-  const d3 = cross(sub(a2, a), sub(b, a));
-  const d4 = cross(sub(a2, a), sub(b2, a));
-  return ((d1.gt(0) && d2.lt(0)) || (d1.lt(0) && d2.gt(0))) && ((d3.gt(0) && d4.lt(0)) || (d3.lt(0) && d4.gt(0)));
 }
 
 /**
@@ -198,6 +173,33 @@ function signedArea2(poly: readonly P[]): Dec {
   let s = new Dec(0);
   for (const [a, b] of edges(poly)) s = s.add(cross(a, b));
   return s;
+}
+
+/**
+ * Is the outline a simple polygon: no two sides cross or touch, except neighbours at their shared
+ * corner? (Zones, sight lines and the inside test all assume one; a bow-tie outline is refused.)
+ */
+export function isSimpleOutline(poly: readonly P[]): boolean {
+  const es = edges(poly);
+  const n = es.length;
+  for (let i = 0; i < n; i++) {
+    for (let j = i + 1; j < n; j++) {
+      const a = es[i];
+      const b = es[j];
+      if (!a || !b) continue;
+      const neighbours = j === i + 1 || (i === 0 && j === n - 1);
+      if (neighbours) {
+        // Neighbours share one corner; they must not fold back over each other.
+        const shared = j === i + 1 ? a[1] : a[0];
+        const other = j === i + 1 ? b[1] : b[0];
+        const own = j === i + 1 ? a[0] : a[1];
+        if (cross(sub(own, shared), sub(other, shared)).isZero() && dot(sub(own, shared), sub(other, shared)).gt(0)) return false;
+        continue;
+      }
+      if (segmentsMeet(a[0], a[1], b[0], b[1])) return false;
+    }
+  }
+  return true;
 }
 
 /** Is the polygon convex (no turn against the others)? */
@@ -257,12 +259,50 @@ export function clipToConvex(subject: readonly P[], clip: readonly P[], pad: Dec
   return out;
 }
 
-/** Is every corner and side midpoint of `inner` within `tol` of the polygon `outer`? */
-export function insideWithin(inner: readonly P[], outer: readonly P[], tol: Dec): boolean {
-  const probes = [...inner, ...edges(inner).map(([a, b]) => scale(add(a, b), HALF))];
-  return probes.every((v) => withinOfPolygon(v, outer, tol));
-}
 const HALF = new Dec('0.5');
+
+/**
+ * Does polygon `inner` lie inside the simple polygon `outer` widened by `tol` (any shape, L-shaped
+ * or with notches)? Every side of `inner` is cut where it meets a side of `outer`; each piece then
+ * lies wholly inside or wholly outside. A piece outside passes only when both its ends are within
+ * `tol` of one side of `outer` (the distance to a segment is convex along a line, so the whole piece
+ * is then within `tol`); otherwise it is halved a few times before it is called outside (the safe side).
+ */
+export function insideOutline(inner: readonly P[], outer: readonly P[], tol: Dec): boolean {
+  if (!inner.every((v) => withinOfPolygon(v, outer, tol))) return false;
+  const outerEdges = edges(outer).map(([c, d]) => ({ c, d, box: boxOf([c, d]) }));
+  const tol2 = tol.mul(tol);
+  const t = tol.toNumber();
+  const nearOneSide = (p0: P, p1: P): boolean => outerEdges.some(({ c, d }) => distanceSqToSegment(p0, c, d).lte(tol2) && distanceSqToSegment(p1, c, d).lte(tol2));
+  const pieceInside = (p0: P, p1: P, depth: number): boolean => {
+    const mid = scale(add(p0, p1), HALF);
+    if (pointInPolygon(mid, outer) || nearOneSide(p0, p1)) return true;
+    return depth < 6 && pieceInside(p0, mid, depth + 1) && pieceInside(mid, p1, depth + 1);
+  };
+  for (const [a, b] of edges(inner)) {
+    const ab = sub(b, a);
+    const sideBox = boxOf([a, b]);
+    const cuts: Dec[] = [new Dec(0), new Dec(1)];
+    for (const { c, d, box: ob } of outerEdges) {
+      if (boxesApart(sideBox, ob, t)) continue;
+      const cd = sub(d, c);
+      const den = cross(ab, cd);
+      if (den.isZero()) continue; // parallel: a piece along a side has its middle on the boundary (inside)
+      const ac = sub(c, a);
+      const u = cross(ac, cd).div(den);
+      const w = cross(ac, ab).div(den);
+      if (u.gt(0) && u.lt(1) && w.gte(0) && w.lte(1)) cuts.push(u);
+    }
+    cuts.sort((x, y) => x.cmp(y));
+    for (let i = 0; i + 1 < cuts.length; i++) {
+      const u0 = cuts[i] as Dec;
+      const u1 = cuts[i + 1] as Dec;
+      if (u1.sub(u0).isZero()) continue;
+      if (!pieceInside(add(a, scale(ab, u0)), add(a, scale(ab, u1)), 0)) return false;
+    }
+  }
+  return true;
+}
 
 /** Bounding box in ordinary numbers, for a quick test before the exact one (never decides alone). */
 export interface Box {
@@ -291,8 +331,8 @@ export function boxesApart(a: Box, b: Box, gap: number): boolean {
  * Is the polygon inside the axis-aligned box widened by `tol`? Decided in ordinary numbers where the
  * answer is clear by more than 1 µm, exactly otherwise (a polygon is inside a box when its corners are).
  */
-export function insideBox(poly: readonly P[], min: P, max: P, tol: Dec): boolean {
-  const b = boxOf(poly);
+export function insideBox(poly: readonly P[], min: P, max: P, tol: Dec, polyBox?: Box): boolean {
+  const b = polyBox ?? boxOf(poly);
   const t = tol.toNumber();
   const lo = { x: min.x.toNumber() - t, y: min.y.toNumber() - t };
   const hi = { x: max.x.toNumber() + t, y: max.y.toNumber() + t };

@@ -13,7 +13,8 @@ import { Dec } from '../numeric/decimal.js';
 import { distanceReported } from '../beam/format.js';
 import type { BeamInput } from '../model/inputs.js';
 import type { BeamResult } from '../model/results.js';
-import { DecGeo, add, box, circleOutside, clipToConvex, corridor, edges, insideBox, isConvex, pointInPolygon, rayHitsSegment, scale, unit, type P } from './geometry.js';
+import { DecGeo, add, box, boxOf, circleOutside, corridor, edges, insideBox, pointInPolygon, rayHitsSegment, scale, sub, unit, type Box, type P } from './geometry.js';
+import { screensOf, visibleRegion, type ScreenSeg } from './visibility.js';
 import type { PlanPointResult, PlanZone, RoomPlan } from './plan-model.js';
 import { toP, type Leg } from './trace-path.js';
 
@@ -62,6 +63,20 @@ function oneOverE(beam: BeamInput): { d0: Dec; phi: Dec } {
  * With no divergence D_L is unknown and three beam diameters are used (ours).
  */
 function halfWidth(d0: Dec, phi: Dec, nohd: Dec, z1: Dec, z2: Dec): Dec {
+  // The same beam over the same stretch gives the same width: kept, because a live edit of the plan
+  // (a door dragged) re-evaluates every beam with unchanged inputs, and ln at 20 digits is slow.
+  const key = `${d0.toString()}|${phi.toString()}|${nohd.toString()}|${z1.toString()}|${z2.toString()}`;
+  const hit = widths.get(key);
+  if (hit) return hit;
+  const w = computeHalfWidth(d0, phi, nohd, z1, z2);
+  if (widths.size >= WIDTHS_KEPT) widths.clear();
+  widths.set(key, w);
+  return w;
+}
+const widths = new Map<string, Dec>();
+const WIDTHS_KEPT = 5000;
+
+function computeHalfWidth(d0: Dec, phi: Dec, nohd: Dec, z1: Dec, z2: Dec): Dec {
   if (phi.isZero()) return d0.mul(3);
   const DL = d0.add(phi.mul(nohd));
   // ln and √ at 20 digits (DecGeo), rounded up: the width is then never below the 40-digit value.
@@ -83,6 +98,8 @@ export interface BeamOnPlan {
 
 export interface ZoneWithShape extends PlanZone {
   readonly shape: readonly P[];
+  /** Its bounding box in ordinary numbers, worked out once (quick tests only). */
+  readonly box: Box;
 }
 
 /** Split points along a leg where it crosses an enclosure wall (fractions 0..1 of the leg). */
@@ -103,12 +120,13 @@ export function insideEnclosure(plan: RoomPlan, p: P): string | null {
   return null;
 }
 
-function wholeInsideEnclosure(plan: RoomPlan, shape: readonly P[]): boolean {
-  return plan.enclosures.some((e) => insideBox(shape, toP(e.min), toP(e.max), ROUNDING_PAD_M.mul(2)));
+function wholeInsideEnclosure(plan: RoomPlan, shape: readonly P[], b: Box): boolean {
+  return plan.enclosures.some((e) => insideBox(shape, toP(e.min), toP(e.max), ROUNDING_PAD_M.mul(2), b));
 }
 
-function zone(base: Omit<ZoneWithShape, 'polygon' | 'enclosed'>, plan: RoomPlan): ZoneWithShape {
-  return { ...base, polygon: base.shape.map(roundPoint), enclosed: wholeInsideEnclosure(plan, base.shape) };
+function zone(base: Omit<ZoneWithShape, 'polygon' | 'enclosed' | 'box'>, plan: RoomPlan): ZoneWithShape {
+  const b = boxOf(base.shape);
+  return { ...base, box: b, polygon: base.shape.map(roundPoint), enclosed: wholeInsideEnclosure(plan, base.shape, b) };
 }
 
 /**
@@ -178,28 +196,72 @@ export function directZones(plan: RoomPlan, beam: BeamOnPlan, legs: readonly Leg
   return { zones, run: { points, length: Dec.min(H, last ? last.end : new Dec(0)) } };
 }
 
-/** Reflection points a beam reaches: mirrors and targets on its path, where it ends on a wall or barrier, and marked points. */
-export function reflectionPointsOf(plan: RoomPlan, laserId: string, legs: readonly Leg[]): Array<{ key: string; at: P; what: string }> {
-  const out: Array<{ key: string; at: P; what: string }> = [];
-  legs.forEach((leg, i) => {
-    if (leg.endsWith === 'mirror' || leg.endsWith === 'target') out.push({ key: `p${i + 1}`, at: leg.to, what: leg.endId });
-    if (leg.endsWith === 'wall' || leg.endsWith === 'barrier') out.push({ key: `p${i + 1}`, at: leg.to, what: `where the beam meets ${leg.endsWith === 'wall' ? 'the wall' : 'the barrier'}` });
-  });
-  for (const r of plan.reflectionPoints) if (r.laserId === laserId) out.push({ key: r.id, at: toP(r.at), what: r.label });
-  return out;
-}
+/** How far in front of a wall or barrier a spot on it is seen from, m (ours). */
+const SURFACE_STANDOFF_M = new Dec('0.001');
 
 /**
- * Walls are opaque to scattered light: a diffuse zone is cut at the room's walls (a convex outline
- * only; otherwise it is left whole) and, for a reflection point inside an enclosure, at the
- * enclosure. Doors and windows in the walls are reported when a zone reaches them.
+ * Reflection points a beam reaches: mirrors and targets on its path, where it ends on a wall or
+ * barrier, and marked points. A spot on a wall or barrier is seen from 1 mm in front of it, on the
+ * side the beam comes from (ours: the surface scatters back into the room, not through itself).
  */
-function clipDiffuse(plan: RoomPlan, centre: P, shape: P[]): P[] {
+export function reflectionPointsOf(plan: RoomPlan, laserId: string, legs: readonly Leg[]): Array<{ key: string; at: P; seenFrom: P; what: string }> {
+  const out: Array<{ key: string; at: P; seenFrom: P; what: string }> = [];
+  legs.forEach((leg, i) => {
+    if (leg.endsWith === 'mirror' || leg.endsWith === 'target') out.push({ key: `p${i + 1}`, at: leg.to, seenFrom: leg.to, what: leg.endId });
+    if (leg.endsWith === 'wall' || leg.endsWith === 'barrier') {
+      const front = sub(leg.to, scale(unit(leg.from, leg.to), Dec.min(SURFACE_STANDOFF_M, leg.end.sub(leg.start).div(2))));
+      out.push({ key: `p${i + 1}`, at: leg.to, seenFrom: front, what: `where the beam meets ${leg.endsWith === 'wall' ? 'the wall' : 'the barrier'}` });
+    }
+  });
+  for (const r of plan.reflectionPoints) if (r.laserId === laserId) out.push({ key: r.id, at: toP(r.at), seenFrom: toP(r.at), what: r.label });
+  return out;
+}
+/**
+ * Walls, curtains and barriers are opaque to scattered light: a diffuse zone is what the reflection
+ * point sees of its circle past the room outline (of any shape), the interior walls, the curtains and
+ * barriers, and the walls of the enclosure it lies in (core/plan/visibility.ts). Doors and windows in
+ * the walls are reported when a zone reaches them.
+ */
+function screensFor(plan: RoomPlan, centre: P): ScreenSeg[] {
+  let fixed = planScreens.get(plan);
+  if (!fixed) {
+    const segs: Array<readonly [P, P]> = [...edges(plan.outline.map(toP))];
+    for (const w of plan.walls) segs.push([toP(w.a), toP(w.b)]);
+    for (const b of plan.barriers) segs.push([toP(b.a), toP(b.b)]);
+    fixed = screensOf(segs, ROUNDING_PAD_M);
+    planScreens.set(plan, fixed);
+  }
   const encl = plan.enclosures.find((e) => pointInPolygon(centre, box(toP(e.min), toP(e.max))));
-  const bounds = encl ? box(toP(encl.min), toP(encl.max)) : plan.outline.map(toP);
-  if (!encl && (!isConvex(bounds) || !pointInPolygon(centre, bounds))) return shape;
-  const clipped = clipToConvex(shape, bounds, ROUNDING_PAD_M);
-  return clipped.length >= 3 ? clipped : shape;
+  return encl ? [...fixed, ...screensOf(edges(box(toP(encl.min), toP(encl.max))), ROUNDING_PAD_M)] : fixed;
+}
+/** The screens of a plan, worked out once per evaluation (every diffuse zone of the plan uses them). */
+const planScreens = new WeakMap<RoomPlan, ScreenSeg[]>();
+
+/**
+ * The diffuse zone's polygon: what `seenFrom` sees of the polygon around the circle of radius R
+ * about `at`. Kept by its inputs (the point, the radius and every screen), because a live edit that
+ * moves a door or a desk leaves every diffuse zone as it was, and the sweep is the plan's largest cost.
+ */
+function diffuseShape(plan: RoomPlan, at: P, seenFrom: P, R: Dec): P[] {
+  const screens = screensFor(plan, seenFrom);
+  const key = `${at.x.toString()},${at.y.toString()}|${seenFrom.x.toString()},${seenFrom.y.toString()}|${R.toString()}|${screensKey(screens)}`;
+  const hit = shapes.get(key);
+  if (hit) return hit;
+  const shape = visibleRegion(seenFrom, circleOutside(at, R.add(ROUNDING_PAD_M), CIRCLE_CORNERS), screens, ROUNDING_PAD_M);
+  if (shapes.size >= SHAPES_KEPT) shapes.clear();
+  shapes.set(key, shape);
+  return shape;
+}
+const shapes = new Map<string, P[]>();
+const SHAPES_KEPT = 2000;
+const screenKeys = new WeakMap<readonly ScreenSeg[], string>();
+function screensKey(screens: readonly ScreenSeg[]): string {
+  let k = screenKeys.get(screens);
+  if (k === undefined) {
+    k = screens.map((s) => `${s.a.x.toString()},${s.a.y.toString()},${s.b.x.toString()},${s.b.y.toString()}`).join(';');
+    screenKeys.set(screens, k);
+  }
+  return k;
 }
 
 export function diffuseZones(plan: RoomPlan, beam: BeamOnPlan, legs: readonly Leg[]): ZoneWithShape[] {
@@ -213,7 +275,7 @@ export function diffuseZones(plan: RoomPlan, beam: BeamOnPlan, legs: readonly Le
         beamId: beam.result.beamId,
         laserId: beam.laserId,
         label: `Diffuse reflection of ${beam.result.label} at ${p.what}`,
-        shape: clipDiffuse(plan, p.at, circleOutside(p.at, R.add(ROUNDING_PAD_M), CIRCLE_CORNERS)),
+        shape: diffuseShape(plan, p.at, p.seenFrom, R),
         radius_m: R.toString(),
       },
       plan,

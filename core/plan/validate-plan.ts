@@ -3,7 +3,9 @@
  * (e.g. 'plan.doors[1].a.x_m'). Ranges are ours: a room plan spans at most a kilometre each way.
  */
 import { InputError, requireInRange } from '../errors.js';
-import type { RoomPlan } from './plan-model.js';
+import { isSimpleOutline } from './geometry.js';
+import type { PlanPoint, RoomPlan } from './plan-model.js';
+import { toP } from './trace-path.js';
 
 export const PLAN_COORDINATE_RANGE_M: readonly [number, number] = [-1000, 1000];
 export const PLAN_HEIGHT_RANGE_M: readonly [number, number] = [0, 20];
@@ -41,6 +43,7 @@ function outline(field: string, x: unknown): void {
   const pts = list(field, x);
   if (pts.length < 3) throw new InputError('missing', field, pts.length, 'at least 3 corners');
   pts.forEach((p, i) => point(`${field}[${i}]`, p));
+  if (!isSimpleOutline(pts.map((p) => toP(p as PlanPoint)))) throw new InputError('invalid_choice', field, pts.length, 'an outline whose sides do not cross one another');
 }
 
 /** Ids must be unique across the whole plan (a finding names its subject by id). */

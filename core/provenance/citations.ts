@@ -95,6 +95,17 @@ export const SOURCE_CITATIONS: Readonly<Record<string, string>> = {
   'CORNEA2024 (read); ICNIRP2013': `Schulmeister and Stuck, corneal injury thresholds 1200–1500 nm, J. Laser Appl. 36(3), 2024; ${ICNIRP}`,
   'ICNIRP2013; IEC2014 4.3 f); ANSI2014 (from memory)': `${ICNIRP}; ${IEC_PULSES}; ANSI Z136.1-2014, clause on repetitive pulses`,
   'ICNIRP2013; IEC2014; ANSI2014 (from memory)': `${ICNIRP}; IEC 60825-1:2014; ANSI Z136.1-2014`,
+  // Pulse-rule data of the tables (grouping time, counting windows).
+  'ICNIRP2013; IEC2014 4.3 f) (from memory): pulses inside T_i are summed and counted as one; no T_i below 400 nm (UV doses simply add, rule 2)':
+    `${ICNIRP}; ${IEC_PULSES} (pulse-grouping time T_i; none below 400 nm)`,
+  'ICNIRP2013; IEC2014 4.3 f) (from memory): no T2 below 400 nm': `${ICNIRP}; ${IEC_PULSES} (pulses counted over the whole exposure below 400 nm)`,
+  'ICNIRP2013; IEC2014 4.3 f) (from memory): N within min(T, T2)': `${ICNIRP}; ${IEC_PULSES} (pulses counted within T2, 400–1400 nm)`,
+  'ICNIRP2013; IEC2014 4.3 f) (from memory): beyond 1400 nm 10 s': `${ICNIRP}; ${IEC_PULSES} (pulses counted within 10 s above 1400 nm)`,
+  'ANSI2014 (from memory)': 'ANSI Z136.1-2014, clause on repetitive pulses',
+  "EU-FR Tableau 2.6 (T_min bands written lo < lambda <= hi: on an exact band edge the lower band's T_min applies, limit specification errata); BGI832 (read): pulses inside T_min count as one only if every pulse is longer than 1 ns; Table 2.2 note d sums UV pulses inside T_min but Table 2.6 lists no T_min below 315 nm":
+    `${DIR}, Table 2.6 (grouping time T_min; on a band edge the lower band’s value) and Table 2.2, note d; BGI 832 (German statutory accident insurance guidance on operating lasers): pulses counted as one only when each is longer than 1 ns`,
+  'BGI832 (read) gives caps only from 400 nm; ours below':
+    'BGI 832 (German statutory accident insurance guidance on operating lasers) from 400 nm; below 400 nm Beamwarden’s own choice, on the safe side',
   'ILSC2019 (read) for the scope; factor values memory': `ILSC 2019 proceedings, paper P106 (scope of the pulse-train factor); ${ICNIRP}`,
   'EU-FR Tableau 2.5 (symbol gamma); EU-NO Table 4.5; BGVB2': `${DIR}, Table 2.5 (limiting cone angle γ)`,
   'EU-FR Tableau 2.5 (named T1 there); EU-NO Table 4.5': `${DIR}, Table 2.5 (break time T1)`,

@@ -4,8 +4,8 @@
  * naming the field.
  */
 import { InputError } from '../errors.js';
-import type { EyewearSpec, RoomInput, RuleSetId } from '../model/inputs.js';
-import { RULE_SET_IDS } from '../limits/rule-sets.js';
+import type { EyewearSpec, RuleSetId } from '../model/inputs.js';
+import { DEFAULT_RULE_SET, RULE_SET_IDS } from '../limits/rule-sets.js';
 import { EN207_MODES, INPUT_RULES, LASER_CLASS_LABELS as CLASSES, SCALE_NUMBERS, TEXT_RULES, type TextRule } from '../model/input-rules.js';
 import { requireRule, requireText } from '../beam/validate-beam.js';
 
@@ -122,9 +122,5 @@ export function validateRoomShape(input: unknown): RuleSetId {
       });
     });
   }
-  return ruleSet ?? 'icnirp2013';
-}
-
-export function isRoomInput(x: unknown): x is RoomInput {
-  return isObject(x) && Array.isArray(x['lasers']);
+  return ruleSet ?? DEFAULT_RULE_SET;
 }

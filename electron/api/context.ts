@@ -14,7 +14,7 @@ export interface ApiContext {
   /** The open record store. Replaced (closed and opened again) by "Restore from backup". */
   store: RecordStore;
   /** Opens this shell's database again; without it the app cannot restore a backup itself. */
-  readonly openStore?: () => RecordStore;
+  readonly openStore?: () => Promise<RecordStore>;
   /** better-sqlite3 build for this runtime (Electron), when not the default. */
   readonly nativeBinding?: string;
 }

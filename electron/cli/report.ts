@@ -57,7 +57,7 @@ function safeName(s: string): string {
 
 /** Render the three documents of one assessment into `outDir`; returns the files written. */
 export async function writeDocuments(store: RecordStore, assessmentId: string, outDir: string, opts: RenderOptions, revisionId?: string): Promise<string[]> {
-  const doc = documentInputFromAssessment(store, assessmentId, revisionId === undefined ? {} : { revisionId });
+  const doc = await documentInputFromAssessment(store, assessmentId, revisionId === undefined ? {} : { revisionId });
   mkdirSync(outDir, { recursive: true });
   const files: string[] = [];
   for (const kind of KINDS) {
@@ -71,18 +71,18 @@ export async function writeDocuments(store: RecordStore, assessmentId: string, o
 /** The demo site in a temporary database, every room's assessment signed by the demo officer. */
 export async function writeDemoDocuments(outDir: string, opts: RenderOptions): Promise<string[]> {
   const tmp = mkdtempSync(join(tmpdir(), 'beamwarden-demo-'));
-  const store = openRecordStore({ path: join(tmp, 'demo.sqlite'), keyDir: join(tmp, 'key') });
+  const store = await openRecordStore({ path: join(tmp, 'demo.sqlite'), keyDir: join(tmp, 'key') });
   try {
-    const site = store.seedDemo();
-    const officer = store.listPeople().find((p) => p.role === 'Laser safety officer');
+    const site = await store.seedDemo();
+    const officer = (await store.listPeople()).find((p) => p.role === 'Laser safety officer');
     const files: string[] = [];
     // The temporary database is fresh: the demo seed gave the demo officer the installation's first
     // key (its trust anchor), sealed with the published demo passphrase.
     const passphrase = DEMO_PASSPHRASE;
-    for (const room of store.listRooms(site.id)) {
-      for (const a of store.listAssessments(room.id)) {
+    for (const room of await store.listRooms(site.id)) {
+      for (const a of await store.listAssessments(room.id)) {
         if (a.status === 'draft' && officer) {
-          store.signAssessment(a.id, {
+          await store.signAssessment(a.id, {
             personId: officer.id,
             passphrase,
             statement: 'I have evaluated the laser hazards of this area with the inputs and assumptions recorded here and approve the controls listed. (Demo data: invented site.)',
@@ -93,7 +93,7 @@ export async function writeDemoDocuments(outDir: string, opts: RenderOptions): P
     }
     return files;
   } finally {
-    store.close();
+    await store.close();
     rmSync(tmp, { recursive: true, force: true });
   }
 }
@@ -112,11 +112,11 @@ export async function main(argv: readonly string[]): Promise<number> {
   if (args.demo) {
     files = await writeDemoDocuments(out, opts);
   } else {
-    const store = openRecordStore({ path: resolve(args.db as string), readonly: true });
+    const store = await openRecordStore({ path: resolve(args.db as string), readonly: true });
     try {
       files = await writeDocuments(store, args.assessment as string, out, opts, args.revision);
     } finally {
-      store.close();
+      await store.close();
     }
   }
   for (const f of files) console.log(f);

@@ -13,20 +13,20 @@ export interface AssessmentVerdict {
   readonly reports: readonly VerifyReport[];
 }
 
-export function verifyOneAssessment(store: RecordStore, assessmentId: Id, title: string): AssessmentVerdict {
+export async function verifyOneAssessment(store: RecordStore, assessmentId: Id, title: string): Promise<AssessmentVerdict> {
   try {
-    return check(store, assessmentId, title);
+    return await check(store, assessmentId, title);
   } catch (e) {
     // A record so damaged that it cannot even be read is a failed check, not a crash of the audit.
     return { assessmentId, title, outcome: 'failed', line: `FAILED  ${assessmentId}  ${title}: cannot be read: ${(e as Error).message}`, reports: [] };
   }
 }
 
-function check(store: RecordStore, assessmentId: Id, title: string): AssessmentVerdict {
-  const revisions = store.listRevisions(assessmentId);
+async function check(store: RecordStore, assessmentId: Id, title: string): Promise<AssessmentVerdict> {
+  const revisions = await store.listRevisions(assessmentId);
   const signed = revisions.filter((r) => r.status !== 'draft' || r.signature !== null);
   if (signed.length === 0) {
-    const report = store.verify(assessmentId);
+    const report = await store.verify(assessmentId);
     const clean = report.chainIntact && report.checks.every((c) => c.check !== 'protections' || c.ok);
     return {
       assessmentId,
@@ -36,7 +36,8 @@ function check(store: RecordStore, assessmentId: Id, title: string): AssessmentV
       reports: [report],
     };
   }
-  const reports = signed.map((r) => store.verify(assessmentId, r.id));
+  const reports: VerifyReport[] = [];
+  for (const r of signed) reports.push(await store.verify(assessmentId, r.id));
   const bad = reports.find((r) => !r.ok);
   const newest = reports.at(-1);
   if (bad) {

@@ -12,12 +12,12 @@ interface Job {
 }
 
 const job = workerData as Job;
-const store = openRecordStore({ path: job.db, keyDir: job.keyDir, readonly: true });
+const store = await openRecordStore({ path: job.db, keyDir: job.keyDir, readonly: true });
 try {
   for (const item of job.items) {
-    const v = verifyOneAssessment(store, item.id, item.title);
+    const v = await verifyOneAssessment(store, item.id, item.title);
     parentPort?.postMessage(job.keepReports ? v : { ...v, reports: [] });
   }
 } finally {
-  store.close();
+  await store.close();
 }

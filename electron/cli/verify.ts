@@ -81,7 +81,7 @@ export async function runVerify(argv: readonly string[], out: (line: string) => 
   const keyDir = resolve(args['key-dir'] ?? dirname(db));
   let store;
   try {
-    store = openRecordStore({ path: db, keyDir, readonly: true });
+    store = await openRecordStore({ path: db, keyDir, readonly: true });
   } catch (e) {
     process.stderr.write(`Cannot open ${db}: ${(e as Error).message}\n`);
     return 2;
@@ -89,13 +89,13 @@ export async function runVerify(argv: readonly string[], out: (line: string) => 
   let verdicts: AssessmentVerdict[];
   let header: string[];
   try {
-    const trust = store.trustList();
+    const trust = await store.trustList();
     header = [
       `Database ${db}`,
       `Trust list ${trust.path}: anchor ${trust.anchorFingerprint ?? 'none'}${trust.problems.length ? ` — ${trust.problems.join(' ')}` : ''}`,
       ...store.info.warnings.map((w) => `Warning: ${w}`),
     ];
-    const all = store.listAllAssessments();
+    const all = await store.listAllAssessments();
     const items = (args.assessment !== undefined ? all.filter((a) => a.id === args.assessment) : all).map((a) => ({ id: a.id, title: a.title }));
     if (args.assessment !== undefined && items.length === 0) {
       process.stderr.write(`No assessment with id ${args.assessment} in ${db}\n`);
@@ -104,17 +104,17 @@ export async function runVerify(argv: readonly string[], out: (line: string) => 
     const workers = Math.min(args.workers ?? Math.min(availableParallelism(), 8), items.length);
     // Small jobs are quicker in one thread than with workers starting up, unless asked for.
     if (workers > 1 && (items.length >= 20 || args.workers !== undefined)) {
-      store.close();
+      await store.close();
       verdicts = await inWorkers(db, keyDir, items, workers, args.json === true);
     } else {
       verdicts = [];
       for (const x of items) {
-        verdicts.push(verifyOneAssessment(store, x.id, x.title));
+        verdicts.push(await verifyOneAssessment(store, x.id, x.title));
         progress(verdicts.length, items.length);
       }
     }
   } finally {
-    store.close(); // a no-op when already closed for the workers
+    await store.close(); // a no-op when already closed for the workers
   }
   const failed = verdicts.filter((v) => v.outcome === 'failed').length;
   if (args.json) {

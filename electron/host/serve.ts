@@ -21,8 +21,8 @@ async function main(): Promise<void> {
   }
   const dbPath = path.resolve(opts.db ?? defaultDatabasePath());
   const open = () => openRecordStore(opts.db === undefined ? {} : { path: dbPath });
-  const store = open();
-  if (opts.demo) store.seedDemo();
+  const store = await open();
+  if (opts.demo) await store.seedDemo();
   const ctx: ApiContext = { shell: 'loopback', version: packageVersion(), databasePath: store.info.path, store, openStore: open };
   // 24 random bytes: a new token on every start, so an old address stops working.
   const token = randomBytes(24).toString('base64url');
@@ -33,10 +33,10 @@ async function main(): Promise<void> {
   const stop = (): void => {
     if (stopping) return;
     stopping = true;
-    void host.close().then(() => {
-      ctx.store.close();
-      process.exit(0);
-    });
+    void host
+      .close()
+      .then(() => ctx.store.close())
+      .then(() => process.exit(0));
   };
   process.on('SIGINT', stop);
   process.on('SIGTERM', stop);

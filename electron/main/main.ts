@@ -68,13 +68,13 @@ function createWindow(): void {
   void win.loadURL(APP_ENTRY);
 }
 
-void app.whenReady().then(() => {
+void app.whenReady().then(async () => {
   harden();
   const databasePath = process.env['BEAMWARDEN_DB'] ?? defaultDatabasePath();
   const nativeBinding = electronNativeBinding(ROOT, process.versions.electron ?? '');
   // The default folder is made with its parents on first start; a folder named in BEAMWARDEN_DB must exist.
   const open = () => openRecordStore({ ...(process.env['BEAMWARDEN_DB'] ? { path: databasePath } : {}), ...(nativeBinding ? { nativeBinding } : {}) });
-  const store = open();
+  const store = await open();
   const ctx: ApiContext = {
     shell: 'electron',
     version: packageVersion(),
@@ -96,7 +96,16 @@ void app.whenReady().then(() => {
   app.on('activate', () => {
     if (BrowserWindow.getAllWindows().length === 0) createWindow();
   });
-  app.on('will-quit', () => ctx.store.close());
+  // The store closes asynchronously (it waits for running work): quit again once it is closed.
+  let closed = false;
+  app.on('will-quit', (event) => {
+    if (closed) return;
+    event.preventDefault();
+    void ctx.store.close().finally(() => {
+      closed = true;
+      app.quit();
+    });
+  });
 });
 
 app.on('window-all-closed', () => {

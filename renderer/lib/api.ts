@@ -71,10 +71,6 @@ function bytesFromBase64(base64: string): Uint8Array<ArrayBuffer> {
   return out;
 }
 
-export function base64FromText(text: string): string {
-  return base64FromBytes(new TextEncoder().encode(text));
-}
-
 export function base64FromBytes(bytes: Uint8Array): string {
   let bin = '';
   for (let i = 0; i < bytes.length; i += 0x8000) bin += String.fromCharCode(...bytes.subarray(i, i + 0x8000));

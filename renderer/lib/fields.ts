@@ -179,4 +179,3 @@ export const F = {
   tolRepetitionRate: s('tolerance', { key: 'tolerances.repetitionRate', label: 'Repetition rate tolerance', unitNote: '±%', dimension: 'ratio', display: '%', optional: true, placeholder: 'none' }),
 } as const;
 
-export type FieldKey = keyof typeof F;

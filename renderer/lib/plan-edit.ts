@@ -3,7 +3,7 @@
  * data, so every edit is one assignment and the live evaluation sees it). Points are addressed by
  * a key such as "doors.1.a" or "paths.0.elements.2.at"; each has a label in officer words.
  */
-import type { PathElementKind, PlanPoint, RoomPlan } from '../../core/index.js';
+import { planMiddle, type PathElementKind, type PlanPoint, type RoomPlan } from '../../core/index.js';
 
 type Json = Record<string, unknown>;
 const copy = <T>(x: T): T => JSON.parse(JSON.stringify(x)) as T;
@@ -105,6 +105,40 @@ export function movePoint(plan: RoomPlan, key: string, to: PlanPoint): RoomPlan 
   return next as unknown as RoomPlan;
 }
 
+export type OutlineOwner = 'outline' | 'controlledArea';
+
+function outlineOf(plan: RoomPlan, owner: OutlineOwner): readonly PlanPoint[] {
+  return owner === 'outline' ? plan.outline : (plan.controlledArea?.outline ?? []);
+}
+
+function withOutline(plan: RoomPlan, owner: OutlineOwner, outline: PlanPoint[]): RoomPlan {
+  if (owner === 'outline') return { ...plan, outline };
+  return plan.controlledArea ? { ...plan, controlledArea: { ...plan.controlledArea, outline } } : plan;
+}
+
+/** A new corner halfway along the side from corner `index` to the next one (an L-shaped room starts here). */
+export function addCorner(plan: RoomPlan, owner: OutlineOwner, index: number): RoomPlan {
+  const pts = [...outlineOf(plan, owner)];
+  const a = pts[index];
+  const b = pts[(index + 1) % pts.length];
+  if (!a || !b) return plan;
+  pts.splice(index + 1, 0, p(toCm((a.x_m + b.x_m) / 2), toCm((a.y_m + b.y_m) / 2)));
+  return withOutline(plan, owner, pts);
+}
+
+/** The outline without corner `index`; an outline keeps at least 3 corners. */
+export function removeCorner(plan: RoomPlan, owner: OutlineOwner, index: number): RoomPlan {
+  const pts = outlineOf(plan, owner);
+  if (pts.length <= 3 || index < 0 || index >= pts.length) return plan;
+  return withOutline(plan, owner, pts.filter((_, i) => i !== index));
+}
+
+/** "outline.3" → the owner and index of a corner handle, or null for any other point. */
+export function cornerOf(key: string): { owner: OutlineOwner; index: number } | null {
+  const m = /^(outline|controlledArea\.outline)\.(\d+)$/.exec(key);
+  return m ? { owner: m[1] === 'outline' ? 'outline' : 'controlledArea', index: Number(m[2]) } : null;
+}
+
 function nextId(plan: RoomPlan, prefix: string): string {
   const used = new Set<string>([
     ...plan.doors.map((x) => x.id),
@@ -119,9 +153,8 @@ function nextId(plan: RoomPlan, prefix: string): string {
 }
 
 function centre(plan: RoomPlan): PlanPoint {
-  const xs = plan.outline.map((q) => q.x_m);
-  const ys = plan.outline.map((q) => q.y_m);
-  return p(toCm((Math.min(...xs) + Math.max(...xs)) / 2), toCm((Math.min(...ys) + Math.max(...ys)) / 2));
+  const m = planMiddle(plan.outline);
+  return p(toCm(m.x), toCm(m.y));
 }
 
 export type AddKind = 'door' | 'window' | 'wall' | 'curtain' | 'barrier' | 'workPosition' | 'enclosure';

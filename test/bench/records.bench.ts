@@ -19,33 +19,33 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import demo from '../../assets/demo/demo-scenario.json' with { type: 'json' };
 import { DemoScenarioSchema } from '../../electron/backend/records/demo.js';
-import { openRecordStore, type RecordStore } from '../../electron/backend/records/index.js';
-import { timeMedian, type BenchEntry } from './registry.js';
+import { openRecordStore, type AssessmentContent, type RecordStore } from '../../electron/backend/records/index.js';
+import { timeMedianAsync, type BenchEntry } from './registry.js';
 
 const ASSESSMENTS = 10_000;
 const ROOMS = 50;
 
 /** Build the 10 000-assessment database; returns its path and some ids to work on. */
-function buildDatabase(dir: string): { path: string; roomIds: string[]; sampleIds: string[] } {
+async function buildDatabase(dir: string): Promise<{ path: string; roomIds: string[]; sampleIds: string[] }> {
   const path = join(dir, 'bench.sqlite');
   const scenario = DemoScenarioSchema.parse(demo);
-  const store = openRecordStore({ path, keyDir: join(dir, 'keys') });
-  const site = store.createSite({ name: scenario.site.name, building: scenario.site.building });
-  for (const spec of scenario.eyewear) store.createEyewear({ siteId: site.id, spec });
+  const store = await openRecordStore({ path, keyDir: join(dir, 'keys') });
+  const site = await store.createSite({ name: scenario.site.name, building: scenario.site.building });
+  for (const spec of scenario.eyewear) await store.createEyewear({ siteId: site.id, spec });
   const roomIds: string[] = [];
   const templates: string[] = []; // one real, store-made assessment per demo room
   for (let i = 0; i < ROOMS; i++) {
     const demoRoom = scenario.rooms[i % scenario.rooms.length];
     if (!demoRoom) throw new Error('no demo rooms');
-    const room = store.createRoom({ siteId: site.id, code: `${demoRoom.code}-${i}`, name: demoRoom.name, responsiblePerson: demoRoom.responsible });
-    for (const laser of demoRoom.input.lasers) store.createInstallation({ roomId: room.id, laser });
+    const room = await store.createRoom({ siteId: site.id, code: `${demoRoom.code}-${i}`, name: demoRoom.name, responsiblePerson: demoRoom.responsible });
+    for (const laser of demoRoom.input.lasers) await store.createInstallation({ roomId: room.id, laser });
     roomIds.push(room.id);
     if (i < scenario.rooms.length) {
-      const a = store.createAssessment({ roomId: room.id, content: { ...store.newAssessmentContent(room.id), notes: demoRoom.notes } });
+      const a = await store.createAssessment({ roomId: room.id, content: { ...await store.newAssessmentContent(room.id), notes: demoRoom.notes } });
       templates.push(a.current.id);
     }
   }
-  store.close();
+  await store.close();
 
   // Copy the templates with SQL until there are 10 000 assessments (200 per room).
   const db = new Database(path);
@@ -82,7 +82,7 @@ export async function runRecordsBench(): Promise<BenchEntry[]> {
   const entries: BenchEntry[] = [];
   try {
     const t0 = performance.now();
-    const { path, roomIds, sampleIds } = buildDatabase(dir);
+    const { path, roomIds, sampleIds } = await buildDatabase(dir);
     const buildMs = performance.now() - t0;
     const sizeMb = statSync(path).size / 1e6;
     console.log(`records bench: ${ASSESSMENTS} assessments in ${ROOMS} rooms, ${sizeMb.toFixed(0)} MB, built in ${(buildMs / 1000).toFixed(1)} s`);
@@ -90,32 +90,33 @@ export async function runRecordsBench(): Promise<BenchEntry[]> {
     // Open (integrity_check included), a fresh connection each run.
     entries.push({
       name: `records: open a database of ${ASSESSMENTS} assessments (${sizeMb.toFixed(0)} MB)`,
-      median_ms: timeMedian(15, () => openRecordStore({ path, keyDir: join(dir, 'keys') }).close()),
+      median_ms: await timeMedianAsync(15, async () => (await openRecordStore({ path, keyDir: join(dir, 'keys') })).close()),
       runs: 15,
       target_ms: 200,
     });
 
-    const store: RecordStore = openRecordStore({ path, keyDir: join(dir, 'keys') });
+    const store: RecordStore = await openRecordStore({ path, keyDir: join(dir, 'keys') });
     try {
       const listRoom = roomIds[0] ?? '';
       let listed = 0;
       entries.push({
-        name: `records: list a room's assessments (${store.listAssessments(listRoom).length} rows)`,
-        median_ms: timeMedian(50, () => (listed += store.listAssessments(listRoom).length)),
+        name: `records: list a room's assessments (${(await store.listAssessments(listRoom)).length} rows)`,
+        median_ms: await timeMedianAsync(50, async () => (listed += (await store.listAssessments(listRoom)).length)),
         runs: 50,
         target_ms: 50,
       });
       if (listed === 0) throw new Error('nothing listed');
 
       // Save: notes edited, inputs unchanged (the common save while writing up an assessment).
-      const contents = sampleIds.map((id) => store.getAssessment(id).current.content);
+      const contents: AssessmentContent[] = [];
+      for (const id of sampleIds) contents.push((await store.getAssessment(id)).current.content);
       entries.push({
         name: 'records: save one assessment (notes edited, results reused)',
-        median_ms: timeMedian(sampleIds.length, (i) => {
+        median_ms: await timeMedianAsync(sampleIds.length, async (i) => {
           const id = sampleIds[i] ?? '';
           const c = contents[i];
           if (!c) throw new Error('content missing');
-          store.saveAssessment(id, { ...c, notes: `edited ${i}` });
+          await store.saveAssessment(id, { ...c, notes: `edited ${i}` });
         }),
         runs: sampleIds.length,
         target_ms: 5,
@@ -125,28 +126,28 @@ export async function runRecordsBench(): Promise<BenchEntry[]> {
       const n = 10;
       entries.push({
         name: 'records: save one assessment with changed inputs (includes evaluateRoom, 3 lasers)',
-        median_ms: timeMedian(n, (i) => {
+        median_ms: await timeMedianAsync(n, async (i) => {
           const c = contents[i];
           if (!c) throw new Error('content missing');
           const lasers = c.input.lasers.map((l, li) =>
             li === 0 ? { ...l, beams: l.beams.map((b) => ({ ...b, label: `${b.label ?? ''}`, exposureDuration_s: 10 + i })) } : l,
           );
-          store.saveAssessment(sampleIds[i] ?? '', { ...c, input: { ...c.input, lasers } });
+          await store.saveAssessment(sampleIds[i] ?? '', { ...c, input: { ...c.input, lasers } });
         }),
         runs: n,
       });
       const passphrase = 'bench passphrase (invented)';
-      const officer = store.createPerson({ name: 'Bench Officer', role: 'LSO' });
-      store.createPersonKey({ personId: officer.id, passphrase, passphraseAgain: passphrase });
+      const officer = await store.createPerson({ name: 'Bench Officer', role: 'LSO' });
+      await store.createPersonKey({ personId: officer.id, passphrase, passphraseAgain: passphrase });
       entries.push({
         name: 'records: sign one assessment (passphrase check with scrypt, re-evaluate, fingerprint, Ed25519, supersede, signing log)',
-        median_ms: timeMedian(n, (i) => {
-          store.signAssessment(sampleIds[20 + i] ?? '', { personId: officer.id, passphrase, statement: 'Benchmark sign-off.' });
+        median_ms: await timeMedianAsync(n, async (i) => {
+          await store.signAssessment(sampleIds[20 + i] ?? '', { personId: officer.id, passphrase, statement: 'Benchmark sign-off.' });
         }),
         runs: n,
       });
     } finally {
-      store.close();
+      await store.close();
     }
   } finally {
     if (!process.env["KEEP_BENCH_DB"]) rmSync(dir, { recursive: true, force: true }); else console.log("kept", dir);

@@ -58,6 +58,18 @@ export function timeMedian(runs: number, f: (i: number) => unknown, prepare?: (i
   return median(xs);
 }
 
+/** timeMedian for an asynchronous operation (the record store): each run is awaited before the next. */
+export async function timeMedianAsync(runs: number, f: (i: number) => Promise<unknown>, prepare?: (i: number) => void | Promise<void>): Promise<number> {
+  const xs: number[] = [];
+  for (let i = 0; i < runs; i++) {
+    await prepare?.(i);
+    const t0 = performance.now();
+    await f(i);
+    xs.push(performance.now() - t0);
+  }
+  return median(xs);
+}
+
 /** A small deterministic generator (LCG), so every run times the same "random" queries. */
 export function seededRandom(seed: number): () => number {
   let s = seed >>> 0;

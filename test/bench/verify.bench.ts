@@ -26,22 +26,22 @@ import type { BenchEntry } from './registry.js';
 const COUNT = Number(process.env['BENCH_VERIFY_N'] ?? 10_000);
 const PASSPHRASE = 'bench passphrase (invented)';
 
-function build(dir: string): { db: string; keyDir: string } {
+async function build(dir: string): Promise<{ db: string; keyDir: string }> {
   const db = join(dir, 'verify.sqlite');
   const keyDir = join(dir, 'keys');
   const scenario = DemoScenarioSchema.parse(demo);
   const r = scenario.rooms.find((x) => x.code === 'A0.07');
   if (!r) throw new Error('demo room A0.07 missing');
-  const store = openRecordStore({ path: db, keyDir });
-  const site = store.createSite({ name: scenario.site.name });
-  const room = store.createRoom({ siteId: site.id, code: r.code, name: r.name });
-  for (const laser of r.input.lasers) store.createInstallation({ roomId: room.id, laser, laserType: laser.name });
-  for (const spec of scenario.eyewear) store.createEyewear({ siteId: site.id, spec });
-  const officer = store.createPerson({ name: 'Bench Officer (invented)', role: 'Laser safety officer' });
-  const key = store.createPersonKey({ personId: officer.id, passphrase: PASSPHRASE, passphraseAgain: PASSPHRASE });
-  const template = store.createAssessment({ roomId: room.id, content: store.newAssessmentContent(room.id) });
-  store.signAssessment(template.id, { personId: officer.id, passphrase: PASSPHRASE, statement: 'Benchmark sign-off.' });
-  store.close();
+  const store = await openRecordStore({ path: db, keyDir });
+  const site = await store.createSite({ name: scenario.site.name });
+  const room = await store.createRoom({ siteId: site.id, code: r.code, name: r.name });
+  for (const laser of r.input.lasers) await store.createInstallation({ roomId: room.id, laser, laserType: laser.name });
+  for (const spec of scenario.eyewear) await store.createEyewear({ siteId: site.id, spec });
+  const officer = await store.createPerson({ name: 'Bench Officer (invented)', role: 'Laser safety officer' });
+  const key = await store.createPersonKey({ personId: officer.id, passphrase: PASSPHRASE, passphraseAgain: PASSPHRASE });
+  const template = await store.createAssessment({ roomId: room.id, content: await store.newAssessmentContent(room.id) });
+  await store.signAssessment(template.id, { personId: officer.id, passphrase: PASSPHRASE, statement: 'Benchmark sign-off.' });
+  await store.close();
 
   const raw = new Database(db);
   const sealed = raw.prepare('SELECT sealed_private_key FROM person_key WHERE key_id = ?').get(key.keyId) as { sealed_private_key: string };
@@ -80,7 +80,7 @@ function build(dir: string): { db: string; keyDir: string } {
 export async function runVerifyBench(): Promise<BenchEntry[]> {
   const dir = mkdtempSync(join(tmpdir(), 'bw-bench-verify-'));
   try {
-    const { db, keyDir } = build(dir);
+    const { db, keyDir } = await build(dir);
     const lines: string[] = [];
     const t0 = performance.now();
     const cpu0 = process.cpuUsage(); // worker threads run in this process: their CPU time counts here

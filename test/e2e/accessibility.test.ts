@@ -4,29 +4,20 @@
  * window and the Settings & about dialog.
  */
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { BrowserContext, Page } from 'playwright-core';
-import { launch } from './browser.js';
-import { removeDir, startHost, type HostHandle } from './host-process.js';
+import type { Page } from 'playwright-core';
+import { openDemoSite, type DemoSession } from './demo-session.js';
 import { wcagViolations } from './axe.js';
 
-let host: HostHandle;
-let ctx: BrowserContext;
+let session: DemoSession | undefined;
 let page: Page;
 
 beforeAll(async () => {
-  host = await startHost();
-  ctx = await launch({ width: 1280, height: 800 });
-  page = ctx.pages()[0] ?? (await ctx.newPage());
-  await page.goto(host.url);
-  await page.getByRole('button', { name: 'Load the demo site' }).click();
-  await page.getByRole('heading', { level: 1, name: 'Register' }).waitFor();
-  await page.getByRole('button', { name: 'Dismiss message' }).click();
+  session = await openDemoSite({ viewport: { width: 1280, height: 800 } });
+  page = session.page;
 });
 
 afterAll(async () => {
-  await ctx?.close();
-  await host?.stop();
-  if (host) removeDir(host.dir);
+  await session?.close();
 });
 
 describe('WCAG 2.1 AA, zero violations (axe-core)', () => {
@@ -55,6 +46,18 @@ describe('WCAG 2.1 AA, zero violations (axe-core)', () => {
       await page.getByRole('heading', { level: 1, name }).waitFor();
       expect(await wcagViolations(page), String(name)).toEqual([]);
     }
+  });
+
+  it('the room plan: its drawing with corner and side handles, undo, the plan at a glance, and the entrance choice for the door notice', async () => {
+    await page.keyboard.press('Alt+1');
+    await page.getByRole('button', { name: /^B2\.14/ }).click();
+    await page.getByRole('button', { name: 'Open in workspace' }).click();
+    await page.getByRole('heading', { level: 1, name: /Workspace · B2\.14/ }).waitFor();
+    await page.getByRole('region', { name: 'Room plan at a glance' }).waitFor({ timeout: 60_000 });
+    expect(await wcagViolations(page), 'workspace with a room plan').toEqual([]);
+    await page.keyboard.press('Alt+6');
+    await page.getByLabel('For the entrance').waitFor();
+    expect(await wcagViolations(page), 'print screen with the entrance choice').toEqual([]);
   });
 
   it('Settings & about', async () => {

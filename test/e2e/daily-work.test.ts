@@ -6,13 +6,11 @@
  * Register; put beams of two lasers at one place and read the additive sum for that place.
  */
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { BrowserContext, Page } from 'playwright-core';
-import { launch } from './browser.js';
-import { removeDir, startHost, type HostHandle } from './host-process.js';
+import type { Page } from 'playwright-core';
+import { openDemoSite, type DemoSession } from './demo-session.js';
 import { wcagViolations } from './axe.js';
 
-let host: HostHandle;
-let ctx: BrowserContext;
+let session: DemoSession | undefined;
 let page: Page;
 const pageErrors: string[] = [];
 
@@ -23,21 +21,18 @@ function isoDaysFromToday(days: number): string {
 }
 
 beforeAll(async () => {
-  host = await startHost();
-  ctx = await launch({ width: 1280, height: 800 });
-  page = ctx.pages()[0] ?? (await ctx.newPage());
-  page.on('pageerror', (e) => pageErrors.push(e.message));
-  page.on('dialog', (d) => void d.accept());
-  await page.goto(host.url);
-  await page.getByRole('button', { name: 'Load the demo site' }).click();
-  await page.getByRole('heading', { level: 1, name: 'Register' }).waitFor();
-  await page.getByRole('button', { name: 'Dismiss message' }).click();
+  session = await openDemoSite({
+    viewport: { width: 1280, height: 800 },
+    beforeLoad: (p) => {
+      p.on('pageerror', (e) => pageErrors.push(e.message));
+      p.on('dialog', (d) => void d.accept());
+    },
+  });
+  page = session.page;
 });
 
 afterAll(async () => {
-  await ctx?.close();
-  await host?.stop();
-  if (host) removeDir(host.dir);
+  await session?.close();
 });
 
 describe("an officer's daily work on the Register", () => {

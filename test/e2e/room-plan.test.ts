@@ -91,6 +91,50 @@ describe('the room plan in the workspace', () => {
     await page.getByRole('region', { name: 'Room plan' }).getByText('Door D1 is inside the direct-beam zone of DPSS 532 nm.').waitFor({ timeout: 60_000 });
   });
 
+  it('makes the room L-shaped with the keyboard, undoes a step, and reads the plan at a glance in the results', async () => {
+    const panel = page.getByRole('region', { name: 'Room plan' });
+    // 6 m × 4 m: a + in the middle of the north side adds corner (3, 4); typed to the L (derived by hand):
+    // (0,0) (6,0) (6,4) (3,4) (0,4) → (6,2) and a new corner (3,2): the notch is the north-east quarter.
+    await panel.getByRole('button', { name: 'Add a room corner between corners 3 and 4' }).focus();
+    await page.keyboard.press('Enter');
+    await panel.getByRole('button', { name: 'Add a room corner between corners 3 and 4' }).focus();
+    await page.keyboard.press('Enter');
+    await panel.getByRole('button', { name: 'Undo: add a room corner' }).click();
+    await panel.getByRole('button', { name: 'Redo: add a room corner' }).click();
+    await panel.getByText('Coordinates and details (typed)').click();
+    for (const [label, value] of [
+      ['Room corner 4, y in metres', '2'],
+      ['Room corner 3, y in metres', '2'],
+      ['Room corner 4, x in metres', '3'],
+    ] as const) {
+      await panel.getByLabel(label).fill(value);
+      await panel.getByLabel(label).press('Enter');
+    }
+    const glance = page.getByRole('region', { name: 'Room plan at a glance' });
+    await glance.getByText(/Entrances inside a hazard zone: 1 of 1 door \(D1\)/).waitFor({ timeout: 60_000 });
+    await panel.getByRole('group', { name: /Room plan, top view/ }).scrollIntoViewIfNeeded();
+    await page.waitForTimeout(300);
+    await page.screenshot({ path: path.join(SHOTS, 'plan-l-shaped.png') });
+    await glance.scrollIntoViewIfNeeded();
+    await page.screenshot({ path: path.join(SHOTS, 'plan-at-a-glance.png') });
+    await page.keyboard.press('Control+s');
+    await page.getByText(/saved/i).first().waitFor({ timeout: 30_000 });
+  });
+
+  it('on the print screen the officer chooses the entrance the door notice is for', async () => {
+    await page.keyboard.press('Alt+1');
+    await page.getByRole('button', { name: /^B2\.14/ }).click();
+    await page.getByRole('button', { name: 'Open in workspace' }).click();
+    await page.getByRole('heading', { level: 1, name: /Workspace · B2\.14/ }).waitFor();
+    await page.keyboard.press('Alt+6');
+    const entrance = page.getByLabel('For the entrance');
+    await entrance.waitFor();
+    expect(await entrance.locator('option').allTextContents()).toEqual(['door D1 corridor', 'door D2 to B2.16']);
+    await entrance.selectOption({ label: 'door D2 to B2.16' });
+    await entrance.scrollIntoViewIfNeeded();
+    await page.screenshot({ path: path.join(SHOTS, 'print-entrance.png') });
+  });
+
   it('no script errors on the page', () => {
     expect(pageErrors).toEqual([]);
   });

@@ -26,7 +26,7 @@ const { openRecordStore } = await import('../../electron/backend/records/index.j
 const { IPC } = await import('../../electron/api/desktop-api.js');
 
 const dir = mkdtempSync(path.join(os.tmpdir(), 'beamwarden-ipc-'));
-const store = openRecordStore({ path: path.join(dir, 'records.sqlite') });
+const store = await openRecordStore({ path: path.join(dir, 'records.sqlite') });
 const appFrame = { url: 'beamwarden://app/index.html' };
 const window = { webContents: { id: 3 } };
 
@@ -37,8 +37,8 @@ function event(frame: { url: string } | null, id = 3, mainFrame: object = appFra
 beforeAll(() => {
   registerIpc(handlerTable, { shell: 'electron', version: '0.0.0-test', databasePath: store.info.path, store }, () => window as never);
 });
-afterAll(() => {
-  store.close();
+afterAll(async () => {
+  await store.close();
   rmSync(dir, { recursive: true, force: true });
 });
 

@@ -15,6 +15,7 @@ export default defineConfig({
     include: only ?? ['test/core/**/*.test.ts'],
     exclude: ['test/core/part2/properties.test.ts', 'test/core/limit-continuity.test.ts'],
     environment: 'node',
+    setupFiles: ['test/mutation/setup.ts'],
     testTimeout: 60_000,
   },
 });

@@ -23,13 +23,13 @@ async function until(check: () => boolean, ms = 5000): Promise<void> {
   }
 }
 
-beforeAll(() => {
+beforeAll(async () => {
   t = tempDir();
-  store = openTemp(t.dir);
+  store = await openTemp(t.dir);
   installStoreBridge(store);
 });
-afterAll(() => {
-  store.close();
+afterAll(async () => {
+  await store.close();
   t.cleanup();
 });
 

@@ -15,8 +15,8 @@ import { installStoreBridge } from './store-bridge.js';
 let t: ReturnType<typeof tempDir>;
 let store: RecordStore;
 let revisionId = '';
-let officer: ReturnType<typeof makeSigner>;
-let head: ReturnType<typeof makeSigner>;
+let officer: Awaited<ReturnType<typeof makeSigner>>;
+let head: Awaited<ReturnType<typeof makeSigner>>;
 
 const tick = (ms = 0): Promise<void> => new Promise((r) => setTimeout(r, ms));
 async function until(check: () => boolean, ms = 10000): Promise<void> {
@@ -27,25 +27,25 @@ async function until(check: () => boolean, ms = 10000): Promise<void> {
   }
 }
 
-beforeAll(() => {
+beforeAll(async () => {
   t = tempDir();
-  store = openTemp(t.dir);
-  const { room } = registerRoom(store);
-  officer = makeSigner(store, 'Dr. Imre Calloway-Senn');
-  head = makeSigner(store, 'Prof. Oona Brightwater-Hale');
-  const a = store.createAssessment({ roomId: room.id, content: store.newAssessmentContent(room.id) });
-  store.signAssessment(a.id, officer.signOff(STATEMENT));
-  revisionId = store.getAssessment(a.id).current.id;
+  store = await openTemp(t.dir);
+  const { room } = await registerRoom(store);
+  officer = await makeSigner(store, 'Dr. Imre Calloway-Senn');
+  head = await makeSigner(store, 'Prof. Oona Brightwater-Hale');
+  const a = await store.createAssessment({ roomId: room.id, content: await store.newAssessmentContent(room.id) });
+  await store.signAssessment(a.id, officer.signOff(STATEMENT));
+  revisionId = (await store.getAssessment(a.id)).current.id;
   installStoreBridge(store);
 });
-afterAll(() => {
-  store.close();
+afterAll(async () => {
+  await store.close();
   t.cleanup();
 });
 
 describe('countersigning on the Review screen', () => {
   it('offers only other people with a trusted key, countersigns and lists the co-signature', async () => {
-    render(CoSignatures, { props: { revisionId, mainSignerId: officer.person.id, people: store.listPeople(), keys: store.listPersonKeys() } });
+    render(CoSignatures, { props: { revisionId, mainSignerId: officer.person.id, people: await store.listPeople(), keys: await store.listPersonKeys() } });
     await until(() => screen.queryByTestId('no-co-signatures') !== null);
     const select = screen.getByLabelText('Co-signer') as HTMLSelectElement;
     const offered = [...select.options].map((o) => o.textContent ?? '');
@@ -57,6 +57,6 @@ describe('countersigning on the Review screen', () => {
     await until(() => screen.queryByTestId('co-signatures') !== null);
     const item = within(screen.getByTestId('co-signatures')).getByText('Prof. Oona Brightwater-Hale');
     expect(item.closest('li')?.textContent).toMatch(/Laser safety officer/);
-    expect(store.verify(store.getRevision(revisionId).assessmentId).coSignatures.map((c) => c.ok)).toEqual([true]);
+    expect((await store.verify((await store.getRevision(revisionId)).assessmentId)).coSignatures.map((c) => c.ok)).toEqual([true]);
   });
 });

@@ -19,15 +19,15 @@ let roomId = '';
 
 beforeAll(async () => {
   t = tempDir();
-  store = openTemp(t.dir);
-  roomId = registerRoom(store).room.id;
+  store = await openTemp(t.dir);
+  roomId = (await registerRoom(store)).room.id;
   installStoreBridge(store);
   await session.refreshOverview();
   await session.openRoom(roomId);
 });
-afterAll(() => {
+afterAll(async () => {
   delete window.beamwarden;
-  store.close();
+  await store.close();
   t.cleanup();
 });
 
@@ -50,9 +50,9 @@ describe('accept all suggested, then exceptions', () => {
     const d = session.draft;
     if (!d) throw new Error('no draft');
     d.controls[0] = { ...d.controls[0]!, decision: 'not-applicable', reason: 'no such door in this room' };
-    const created = store.createAssessment({ roomId, content: contentFrom(d) });
-    store.signAssessment(created.id, makeSigner(store).signOff(STATEMENT));
-    const next = store.newAssessmentContent(roomId);
+    const created = await store.createAssessment({ roomId, content: contentFrom(d) });
+    await store.signAssessment(created.id, (await makeSigner(store)).signOff(STATEMENT));
+    const next = await store.newAssessmentContent(roomId);
     expect(next.controls).toEqual(created.current.content.controls);
     expect(next.controls[0]).toMatchObject({ decision: 'not-applicable', reason: 'no such door in this room' });
   });

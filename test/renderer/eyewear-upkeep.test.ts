@@ -20,26 +20,26 @@ let roomId = '';
 
 beforeAll(async () => {
   t = tempDir();
-  store = openTemp(t.dir);
-  const { room, site } = registerRoom(store);
+  store = await openTemp(t.dir);
+  const { room, site } = await registerRoom(store);
   roomId = room.id;
-  const [a, b, c] = store.listEyewear(site.id);
+  const [a, b, c] = await store.listEyewear(site.id);
   if (!a || !b || !c) throw new Error('demo eyewear missing');
-  store.updateEyewear(a.id, { inspectedOn: addDays(today(), -400), condition: 'good', nextInspection: addDays(today(), -35) });
-  store.updateEyewear(b.id, { inspectedOn: addDays(today(), -350), condition: 'worn', nextInspection: addDays(today(), 10) });
-  store.updateEyewear(c.id, { inspectedOn: today(), condition: 'damaged', nextInspection: null });
+  await store.updateEyewear(a.id, { inspectedOn: addDays(today(), -400), condition: 'good', nextInspection: addDays(today(), -35) });
+  await store.updateEyewear(b.id, { inspectedOn: addDays(today(), -350), condition: 'worn', nextInspection: addDays(today(), 10) });
+  await store.updateEyewear(c.id, { inspectedOn: today(), condition: 'damaged', nextInspection: null });
   installStoreBridge(store);
   await session.refreshOverview();
 });
-afterAll(() => {
+afterAll(async () => {
   delete window.beamwarden;
-  store.close();
+  await store.close();
   t.cleanup();
 });
 
 describe('eyewear upkeep', () => {
   it('reminds on the Register and lists overdue, due and damaged items under Due for review', async () => {
-    const [a, b, c] = store.listEyewear(store.listSites()[0]!.id);
+    const [a, b, c] = await store.listEyewear((await store.listSites())[0]!.id);
     render(RegisterScreen);
     const reminder = screen.getByTestId('eyewear-reminder').textContent ?? '';
     expect(reminder).toContain(`${c!.spec.id} (damaged)`);
@@ -63,9 +63,9 @@ describe('eyewear upkeep', () => {
     expect((screen.getByLabelText('Next inspection due') as HTMLInputElement).value).toBe(addDays(today(), 365));
   });
 
-  it('damaged eyewear is not offered to a new assessment', () => {
-    const offered = store.roomInputFromRegister(roomId).eyewear?.map((e) => e.id) ?? [];
-    const damaged = store.listEyewear(store.listSites()[0]!.id).filter((e) => e.condition === 'damaged').map((e) => e.spec.id);
+  it('damaged eyewear is not offered to a new assessment', async () => {
+    const offered = (await store.roomInputFromRegister(roomId)).eyewear?.map((e) => e.id) ?? [];
+    const damaged = (await store.listEyewear((await store.listSites())[0]!.id)).filter((e) => e.condition === 'damaged').map((e) => e.spec.id);
     expect(damaged).toHaveLength(1);
     for (const d of damaged) expect(offered).not.toContain(d);
   });

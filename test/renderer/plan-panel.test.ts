@@ -77,3 +77,59 @@ describe('plan errors in officer words (never a field path on screen)', () => {
     expect(words).not.toMatch(/plan\.|\[\d\]|_m\b/);
   });
 });
+
+describe('undo, redo and the corners of the room outline (keyboard first)', () => {
+  it('a run of arrow keys on one corner is one step: Undo puts it back, Redo moves it again', async () => {
+    render(PlanHarness, { lasers });
+    await fireEvent.click(screen.getByRole('button', { name: 'Start a room plan' }));
+    const corner = () => screen.getByRole('button', { name: /^Room corner 3: / });
+    await fireEvent.keyDown(corner(), { key: 'ArrowRight' });
+    await fireEvent.keyDown(corner(), { key: 'ArrowRight' });
+    expect(plan().outline[2]).toEqual({ x_m: 6.2, y_m: 4 });
+    await fireEvent.click(screen.getByRole('button', { name: 'Undo: move Room corner 3' }));
+    expect(plan().outline[2]).toEqual({ x_m: 6, y_m: 4 });
+    await fireEvent.click(screen.getByRole('button', { name: 'Redo: move Room corner 3' }));
+    expect(plan().outline[2]).toEqual({ x_m: 6.2, y_m: 4 });
+  });
+
+  it('Ctrl+Z and Ctrl+Y work from the drawing; undo goes back past the start of the plan', async () => {
+    render(PlanHarness, { lasers });
+    await fireEvent.click(screen.getByRole('button', { name: 'Start a room plan' }));
+    await fireEvent.click(screen.getByRole('button', { name: '+ Window' }));
+    expect(plan().windows.map((w) => w.id)).toEqual(['W1']);
+    const anyHandle = screen.getByRole('button', { name: /^Room corner 1: / });
+    await fireEvent.keyDown(anyHandle, { key: 'z', ctrlKey: true });
+    expect(plan().windows).toEqual([]);
+    await fireEvent.keyDown(screen.getByRole('button', { name: /^Room corner 1: / }), { key: 'z', ctrlKey: true });
+    expect(plan()).toBeNull();
+    await fireEvent.keyDown(screen.getByRole('button', { name: 'Redo: start the room plan' }), { key: 'y', ctrlKey: true });
+    expect(plan()?.outline).toHaveLength(4);
+  });
+
+  it('makes an L-shaped room: + on a side adds a corner, typed places shape it, Delete removes a corner', async () => {
+    render(PlanHarness, { lasers });
+    await fireEvent.click(screen.getByRole('button', { name: 'Start a room plan' }));
+    // 6 m × 4 m: corners (0,0) (6,0) (6,4) (0,4). Two corners on the north side, then the notch.
+    await fireEvent.keyDown(screen.getByRole('button', { name: 'Add a room corner between corners 3 and 4' }), { key: 'Enter' });
+    await fireEvent.click(screen.getByRole('button', { name: 'Add a room corner between corners 3 and 4' }));
+    expect(plan().outline).toHaveLength(6);
+    // Corners now (0,0) (6,0) (6,4) (4.5,4) (3,4) (0,4); typed to (6,2) and (3,2): an L with the
+    // notch in the north-east (derived by hand; each step keeps the sides from crossing).
+    for (const [label, value] of [
+      ['Room corner 4, y in metres', '2'],
+      ['Room corner 3, y in metres', '2'],
+      ['Room corner 4, x in metres', '3'],
+    ] as const) {
+      const box = screen.getByLabelText(label);
+      await fireEvent.input(box, { target: { value } });
+      await fireEvent.change(box, { target: { value } });
+    }
+    expect(plan().outline).toEqual([{ x_m: 0, y_m: 0 }, { x_m: 6, y_m: 0 }, { x_m: 6, y_m: 2 }, { x_m: 3, y_m: 2 }, { x_m: 3, y_m: 4 }, { x_m: 0, y_m: 4 }]);
+    expect(screen.queryByRole('alert')).toBeNull();
+    // Delete on a corner removes it; the outline keeps at least 3 corners.
+    await fireEvent.keyDown(screen.getByRole('button', { name: /^Room corner 6: / }), { key: 'Delete' });
+    expect(plan().outline).toHaveLength(5);
+    await fireEvent.click(screen.getByRole('button', { name: 'Undo: remove room corner 6' }));
+    expect(plan().outline).toHaveLength(6);
+  });
+});

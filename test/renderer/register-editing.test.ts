@@ -24,9 +24,9 @@ let roomId = '';
 let assessmentId = '';
 
 const tick = (ms = 0): Promise<void> => new Promise((r) => setTimeout(r, ms));
-async function until(check: () => boolean, ms = 5000): Promise<void> {
+async function until(check: () => boolean | Promise<boolean>, ms = 5000): Promise<void> {
   const end = Date.now() + ms;
-  while (!check()) {
+  while (!(await check())) {
     if (Date.now() > end) throw new Error('timed out');
     await tick(20);
   }
@@ -34,13 +34,13 @@ async function until(check: () => boolean, ms = 5000): Promise<void> {
 
 beforeAll(async () => {
   t = tempDir();
-  store = openTemp(t.dir);
-  const { room } = registerRoom(store);
+  store = await openTemp(t.dir);
+  const { room } = await registerRoom(store);
   roomId = room.id;
-  const a = store.createAssessment({ roomId, content: store.newAssessmentContent(roomId) });
+  const a = await store.createAssessment({ roomId, content: await store.newAssessmentContent(roomId) });
   assessmentId = a.id;
-  store.signAssessment(a.id, makeSigner(store).signOff(STATEMENT));
-  store.createPerson({ name: 'Ada Quillfeather', role: 'Deputy LSO' });
+  await store.signAssessment(a.id, (await makeSigner(store)).signOff(STATEMENT));
+  await store.createPerson({ name: 'Ada Quillfeather', role: 'Deputy LSO' });
   const ctx: ApiContext = { shell: 'electron', version: '0.0.0-test', databasePath: store.info.path, store };
   const bridge: DesktopApi = {
     invoke: (name, args) => dispatch(handlerTable, ctx, name, args) as never,
@@ -53,9 +53,9 @@ beforeAll(async () => {
   window.beamwarden = bridge;
   await session.refreshOverview();
 });
-afterAll(() => {
+afterAll(async () => {
   delete window.beamwarden;
-  store.close();
+  await store.close();
   t.cleanup();
 });
 
@@ -63,7 +63,7 @@ describe('editing a laser on the Register', () => {
   it('refuses a value that does not read, beside the field, and saves nothing', async () => {
     const overview = session.roomOverview(roomId);
     if (!overview) throw new Error('no room');
-    const before = JSON.stringify(store.listInstallations(roomId));
+    const before = JSON.stringify(await store.listInstallations(roomId));
     render(RoomDetail, { props: { overview } });
     const first = overview.installations[0];
     if (!first) throw new Error('no laser');
@@ -78,7 +78,7 @@ describe('editing a laser on the Register', () => {
     // the field's own error, and the summary above the buttons
     expect(alerts.some((a) => /Wavelength/.test(a) && /parsecs/.test(a))).toBe(true);
     expect(alerts.some((a) => a.includes('Not saved') && a.includes('Beam 1'))).toBe(true);
-    expect(JSON.stringify(store.listInstallations(roomId))).toBe(before);
+    expect(JSON.stringify(await store.listInstallations(roomId))).toBe(before);
   });
 
   it('saves the new divergence, typed in degrees, into the register and the signed assessment as a new draft', async () => {
@@ -94,15 +94,15 @@ describe('editing a laser on the Register', () => {
     await fireEvent.input(within(editor).getByLabelText(/^Divergence, full angle/), { target: { value: '0.1°' } });
     await fireEvent.input(within(editor).getByLabelText('Serial number'), { target: { value: 'SN-0042' } });
     await fireEvent.click(within(editor).getByRole('button', { name: 'Save laser' }));
-    await until(() => store.listInstallations(roomId)[0]?.serialNumber === 'SN-0042');
-    const saved = store.listInstallations(roomId)[0];
+    await until(async () => (await store.listInstallations(roomId))[0]?.serialNumber === 'SN-0042');
+    const saved = (await store.listInstallations(roomId))[0];
     // derived: 0.1° = 0.1 × π/180 rad = 1.745 mrad (degree, BIPM SI brochure Table 8)
     expect(saved?.laser.beams[0]?.beam.divergence_rad).toBeCloseTo((0.1 * Math.PI) / 180, 12);
-    await until(() => store.getAssessment(assessmentId).current.revisionNo === 2);
-    const a = store.getAssessment(assessmentId);
+    await until(async () => (await store.getAssessment(assessmentId)).current.revisionNo === 2);
+    const a = await store.getAssessment(assessmentId);
     expect(a.current.status).toBe('draft');
     expect(a.current.content.input.lasers[0]?.beams[0]?.beam.divergence_rad).toBeCloseTo((0.1 * Math.PI) / 180, 12);
-    const history = store.laserHistory(first.id);
+    const history = await store.laserHistory(first.id);
     expect(history.map((h) => `${h.revisionNo} ${h.status}`)).toEqual(['2 draft', '1 signed']);
   });
 });
@@ -117,7 +117,7 @@ describe('editing a person on the Register', () => {
     expect(screen.getByRole('alert').textContent).toBe('Name is required');
     await fireEvent.input(nameBox, { target: { value: 'Ada Quillfeather-Ross' } });
     await fireEvent.submit(nameBox.closest('form')!);
-    await until(() => store.listPeople().some((p) => p.name === 'Ada Quillfeather-Ross'));
-    expect(store.listPeople().map((p) => p.role)).toContain('Deputy LSO');
+    await until(async () => (await store.listPeople()).some((p) => p.name === 'Ada Quillfeather-Ross'));
+    expect((await store.listPeople()).map((p) => p.role)).toContain('Deputy LSO');
   });
 });

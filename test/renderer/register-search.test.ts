@@ -20,16 +20,16 @@ const TODAY = '2026-12-02';
 
 beforeAll(async () => {
   t = tempDir();
-  store = openTemp(t.dir);
-  store.seedDemo();
+  store = await openTemp(t.dir);
+  await store.seedDemo();
   installStoreBridge(store);
   await session.refreshOverview();
   if (!session.overview) throw new Error('no overview');
   overview = session.overview;
 });
-afterAll(() => {
+afterAll(async () => {
   delete window.beamwarden;
-  store.close();
+  await store.close();
   t.cleanup();
 });
 

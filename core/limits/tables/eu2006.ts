@@ -285,6 +285,7 @@ export const EU2006_TABLE: RuleSetTable = {
       "expr": "3e10",
       "unit": "W/m^2",
       "effect": "UV cornea/lens",
+      "effectClass": "cornea-lens-unstated",
       "source": "EU-FR Tableau 2.2",
       "confidence": "read",
       "note": "Note c of Table 2.2: equals the 1 ns radiant-exposure limit (3e10 W/m^2 * 1e-9 s = 30 J/m^2)."
@@ -303,6 +304,7 @@ export const EU2006_TABLE: RuleSetTable = {
       "expr": "30",
       "unit": "J/m^2",
       "effect": "UV photochemical cornea",
+      "effectClass": "cornea-lens-photochemical",
       "source": "EU-FR Tableau 2.2",
       "confidence": "read",
       "note": "Directive rows 'UVC 180-280' and 'UVB 280-302'. 302 < lambda < 303 is not listed; OURS: use the 302 nm row (the more restrictive neighbour)."
@@ -321,6 +323,7 @@ export const EU2006_TABLE: RuleSetTable = {
       "expr": "30",
       "unit": "J/m^2",
       "effect": "UV photochemical cornea",
+      "effectClass": "cornea-lens-photochemical",
       "source": "EU-2.3-MEM",
       "confidence": "from memory"
     },
@@ -338,6 +341,7 @@ export const EU2006_TABLE: RuleSetTable = {
       "expr": "5.6e3*t^0.25",
       "unit": "J/m^2",
       "effect": "UV thermal/photochemical cornea",
+      "effectClass": "cornea-lens-thermal-photochemical",
       "source": "EU-FR Tableau 2.2",
       "confidence": "read",
       "note": "Tabulated row '303' nm: 'if t < 2.6e-09 s then H = 5.6e3 t^0.25'. OURS: non-integer wavelengths use the row of floor(lambda)."
@@ -356,6 +360,7 @@ export const EU2006_TABLE: RuleSetTable = {
       "expr": "40",
       "unit": "J/m^2",
       "effect": "UV photochemical cornea",
+      "effectClass": "cornea-lens-photochemical",
       "source": "EU-FR Tableau 2.2",
       "confidence": "read"
     },
@@ -373,6 +378,7 @@ export const EU2006_TABLE: RuleSetTable = {
       "expr": "40",
       "unit": "J/m^2",
       "effect": "UV photochemical cornea",
+      "effectClass": "cornea-lens-photochemical",
       "source": "EU-2.3-MEM",
       "confidence": "from memory"
     },
@@ -390,6 +396,7 @@ export const EU2006_TABLE: RuleSetTable = {
       "expr": "5.6e3*t^0.25",
       "unit": "J/m^2",
       "effect": "UV thermal/photochemical cornea",
+      "effectClass": "cornea-lens-thermal-photochemical",
       "source": "EU-FR Tableau 2.2",
       "confidence": "read",
       "note": "Tabulated row '304' nm: 'if t < 1.3e-08 s then H = 5.6e3 t^0.25'. OURS: non-integer wavelengths use the row of floor(lambda)."
@@ -408,6 +415,7 @@ export const EU2006_TABLE: RuleSetTable = {
       "expr": "60",
       "unit": "J/m^2",
       "effect": "UV photochemical cornea",
+      "effectClass": "cornea-lens-photochemical",
       "source": "EU-FR Tableau 2.2",
       "confidence": "read"
     },
@@ -425,6 +433,7 @@ export const EU2006_TABLE: RuleSetTable = {
       "expr": "60",
       "unit": "J/m^2",
       "effect": "UV photochemical cornea",
+      "effectClass": "cornea-lens-photochemical",
       "source": "EU-2.3-MEM",
       "confidence": "from memory"
     },
@@ -442,6 +451,7 @@ export const EU2006_TABLE: RuleSetTable = {
       "expr": "5.6e3*t^0.25",
       "unit": "J/m^2",
       "effect": "UV thermal/photochemical cornea",
+      "effectClass": "cornea-lens-thermal-photochemical",
       "source": "EU-FR Tableau 2.2",
       "confidence": "read",
       "note": "Tabulated row '305' nm: 'if t < 1e-07 s then H = 5.6e3 t^0.25'. OURS: non-integer wavelengths use the row of floor(lambda)."
@@ -460,6 +470,7 @@ export const EU2006_TABLE: RuleSetTable = {
       "expr": "100",
       "unit": "J/m^2",
       "effect": "UV photochemical cornea",
+      "effectClass": "cornea-lens-photochemical",
       "source": "EU-FR Tableau 2.2",
       "confidence": "read"
     },
@@ -477,6 +488,7 @@ export const EU2006_TABLE: RuleSetTable = {
       "expr": "100",
       "unit": "J/m^2",
       "effect": "UV photochemical cornea",
+      "effectClass": "cornea-lens-photochemical",
       "source": "EU-2.3-MEM",
       "confidence": "from memory"
     },
@@ -494,6 +506,7 @@ export const EU2006_TABLE: RuleSetTable = {
       "expr": "5.6e3*t^0.25",
       "unit": "J/m^2",
       "effect": "UV thermal/photochemical cornea",
+      "effectClass": "cornea-lens-thermal-photochemical",
       "source": "EU-FR Tableau 2.2",
       "confidence": "read",
       "note": "Tabulated row '306' nm: 'if t < 6.7e-07 s then H = 5.6e3 t^0.25'. OURS: non-integer wavelengths use the row of floor(lambda)."
@@ -512,6 +525,7 @@ export const EU2006_TABLE: RuleSetTable = {
       "expr": "160",
       "unit": "J/m^2",
       "effect": "UV photochemical cornea",
+      "effectClass": "cornea-lens-photochemical",
       "source": "EU-FR Tableau 2.2",
       "confidence": "read"
     },
@@ -529,6 +543,7 @@ export const EU2006_TABLE: RuleSetTable = {
       "expr": "160",
       "unit": "J/m^2",
       "effect": "UV photochemical cornea",
+      "effectClass": "cornea-lens-photochemical",
       "source": "EU-2.3-MEM",
       "confidence": "from memory"
     },
@@ -546,6 +561,7 @@ export const EU2006_TABLE: RuleSetTable = {
       "expr": "5.6e3*t^0.25",
       "unit": "J/m^2",
       "effect": "UV thermal/photochemical cornea",
+      "effectClass": "cornea-lens-thermal-photochemical",
       "source": "EU-FR Tableau 2.2",
       "confidence": "read",
       "note": "Tabulated row '307' nm: 'if t < 4e-06 s then H = 5.6e3 t^0.25'. OURS: non-integer wavelengths use the row of floor(lambda)."
@@ -564,6 +580,7 @@ export const EU2006_TABLE: RuleSetTable = {
       "expr": "250",
       "unit": "J/m^2",
       "effect": "UV photochemical cornea",
+      "effectClass": "cornea-lens-photochemical",
       "source": "EU-FR Tableau 2.2",
       "confidence": "read"
     },
@@ -581,6 +598,7 @@ export const EU2006_TABLE: RuleSetTable = {
       "expr": "250",
       "unit": "J/m^2",
       "effect": "UV photochemical cornea",
+      "effectClass": "cornea-lens-photochemical",
       "source": "EU-2.3-MEM",
       "confidence": "from memory"
     },
@@ -598,6 +616,7 @@ export const EU2006_TABLE: RuleSetTable = {
       "expr": "5.6e3*t^0.25",
       "unit": "J/m^2",
       "effect": "UV thermal/photochemical cornea",
+      "effectClass": "cornea-lens-thermal-photochemical",
       "source": "EU-FR Tableau 2.2",
       "confidence": "read",
       "note": "Tabulated row '308' nm: 'if t < 2.6e-05 s then H = 5.6e3 t^0.25'. OURS: non-integer wavelengths use the row of floor(lambda)."
@@ -616,6 +635,7 @@ export const EU2006_TABLE: RuleSetTable = {
       "expr": "400",
       "unit": "J/m^2",
       "effect": "UV photochemical cornea",
+      "effectClass": "cornea-lens-photochemical",
       "source": "EU-FR Tableau 2.2",
       "confidence": "read"
     },
@@ -633,6 +653,7 @@ export const EU2006_TABLE: RuleSetTable = {
       "expr": "400",
       "unit": "J/m^2",
       "effect": "UV photochemical cornea",
+      "effectClass": "cornea-lens-photochemical",
       "source": "EU-2.3-MEM",
       "confidence": "from memory"
     },
@@ -650,6 +671,7 @@ export const EU2006_TABLE: RuleSetTable = {
       "expr": "5.6e3*t^0.25",
       "unit": "J/m^2",
       "effect": "UV thermal/photochemical cornea",
+      "effectClass": "cornea-lens-thermal-photochemical",
       "source": "EU-FR Tableau 2.2",
       "confidence": "read",
       "note": "Tabulated row '309' nm: 'if t < 0.00016 s then H = 5.6e3 t^0.25'. OURS: non-integer wavelengths use the row of floor(lambda)."
@@ -668,6 +690,7 @@ export const EU2006_TABLE: RuleSetTable = {
       "expr": "630",
       "unit": "J/m^2",
       "effect": "UV photochemical cornea",
+      "effectClass": "cornea-lens-photochemical",
       "source": "EU-FR Tableau 2.2",
       "confidence": "read"
     },
@@ -685,6 +708,7 @@ export const EU2006_TABLE: RuleSetTable = {
       "expr": "630",
       "unit": "J/m^2",
       "effect": "UV photochemical cornea",
+      "effectClass": "cornea-lens-photochemical",
       "source": "EU-2.3-MEM",
       "confidence": "from memory"
     },
@@ -702,6 +726,7 @@ export const EU2006_TABLE: RuleSetTable = {
       "expr": "5.6e3*t^0.25",
       "unit": "J/m^2",
       "effect": "UV thermal/photochemical cornea",
+      "effectClass": "cornea-lens-thermal-photochemical",
       "source": "EU-FR Tableau 2.2",
       "confidence": "read",
       "note": "Tabulated row '310' nm: 'if t < 0.001 s then H = 5.6e3 t^0.25'. OURS: non-integer wavelengths use the row of floor(lambda)."
@@ -720,6 +745,7 @@ export const EU2006_TABLE: RuleSetTable = {
       "expr": "1000",
       "unit": "J/m^2",
       "effect": "UV photochemical cornea",
+      "effectClass": "cornea-lens-photochemical",
       "source": "EU-FR Tableau 2.2",
       "confidence": "read"
     },
@@ -737,6 +763,7 @@ export const EU2006_TABLE: RuleSetTable = {
       "expr": "1000",
       "unit": "J/m^2",
       "effect": "UV photochemical cornea",
+      "effectClass": "cornea-lens-photochemical",
       "source": "EU-2.3-MEM",
       "confidence": "from memory"
     },
@@ -754,6 +781,7 @@ export const EU2006_TABLE: RuleSetTable = {
       "expr": "5.6e3*t^0.25",
       "unit": "J/m^2",
       "effect": "UV thermal/photochemical cornea",
+      "effectClass": "cornea-lens-thermal-photochemical",
       "source": "EU-FR Tableau 2.2",
       "confidence": "read",
       "note": "Tabulated row '311' nm: 'if t < 0.0067 s then H = 5.6e3 t^0.25'. OURS: non-integer wavelengths use the row of floor(lambda)."
@@ -772,6 +800,7 @@ export const EU2006_TABLE: RuleSetTable = {
       "expr": "1600",
       "unit": "J/m^2",
       "effect": "UV photochemical cornea",
+      "effectClass": "cornea-lens-photochemical",
       "source": "EU-FR Tableau 2.2",
       "confidence": "read"
     },
@@ -789,6 +818,7 @@ export const EU2006_TABLE: RuleSetTable = {
       "expr": "1600",
       "unit": "J/m^2",
       "effect": "UV photochemical cornea",
+      "effectClass": "cornea-lens-photochemical",
       "source": "EU-2.3-MEM",
       "confidence": "from memory"
     },
@@ -806,6 +836,7 @@ export const EU2006_TABLE: RuleSetTable = {
       "expr": "5.6e3*t^0.25",
       "unit": "J/m^2",
       "effect": "UV thermal/photochemical cornea",
+      "effectClass": "cornea-lens-thermal-photochemical",
       "source": "EU-FR Tableau 2.2",
       "confidence": "read",
       "note": "Tabulated row '312' nm: 'if t < 0.04 s then H = 5.6e3 t^0.25'. OURS: non-integer wavelengths use the row of floor(lambda)."
@@ -824,6 +855,7 @@ export const EU2006_TABLE: RuleSetTable = {
       "expr": "2500",
       "unit": "J/m^2",
       "effect": "UV photochemical cornea",
+      "effectClass": "cornea-lens-photochemical",
       "source": "EU-FR Tableau 2.2",
       "confidence": "read"
     },
@@ -841,6 +873,7 @@ export const EU2006_TABLE: RuleSetTable = {
       "expr": "2500",
       "unit": "J/m^2",
       "effect": "UV photochemical cornea",
+      "effectClass": "cornea-lens-photochemical",
       "source": "EU-2.3-MEM",
       "confidence": "from memory"
     },
@@ -858,6 +891,7 @@ export const EU2006_TABLE: RuleSetTable = {
       "expr": "5.6e3*t^0.25",
       "unit": "J/m^2",
       "effect": "UV thermal/photochemical cornea",
+      "effectClass": "cornea-lens-thermal-photochemical",
       "source": "EU-FR Tableau 2.2",
       "confidence": "read",
       "note": "Tabulated row '313' nm: 'if t < 0.26 s then H = 5.6e3 t^0.25'. OURS: non-integer wavelengths use the row of floor(lambda)."
@@ -876,6 +910,7 @@ export const EU2006_TABLE: RuleSetTable = {
       "expr": "4000",
       "unit": "J/m^2",
       "effect": "UV photochemical cornea",
+      "effectClass": "cornea-lens-photochemical",
       "source": "EU-FR Tableau 2.2",
       "confidence": "read"
     },
@@ -893,6 +928,7 @@ export const EU2006_TABLE: RuleSetTable = {
       "expr": "4000",
       "unit": "J/m^2",
       "effect": "UV photochemical cornea",
+      "effectClass": "cornea-lens-photochemical",
       "source": "EU-2.3-MEM",
       "confidence": "from memory"
     },
@@ -910,6 +946,7 @@ export const EU2006_TABLE: RuleSetTable = {
       "expr": "5.6e3*t^0.25",
       "unit": "J/m^2",
       "effect": "UV thermal/photochemical cornea",
+      "effectClass": "cornea-lens-thermal-photochemical",
       "source": "EU-FR Tableau 2.2",
       "confidence": "read",
       "note": "Tabulated row '314' nm: 'if t < 1.6 s then H = 5.6e3 t^0.25'. OURS: non-integer wavelengths use the row of floor(lambda)."
@@ -928,6 +965,7 @@ export const EU2006_TABLE: RuleSetTable = {
       "expr": "6300",
       "unit": "J/m^2",
       "effect": "UV photochemical cornea",
+      "effectClass": "cornea-lens-photochemical",
       "source": "EU-FR Tableau 2.2",
       "confidence": "read"
     },
@@ -945,6 +983,7 @@ export const EU2006_TABLE: RuleSetTable = {
       "expr": "6300",
       "unit": "J/m^2",
       "effect": "UV photochemical cornea",
+      "effectClass": "cornea-lens-photochemical",
       "source": "EU-2.3-MEM",
       "confidence": "from memory"
     },
@@ -962,6 +1001,7 @@ export const EU2006_TABLE: RuleSetTable = {
       "expr": "5.6e3*t^0.25",
       "unit": "J/m^2",
       "effect": "UV-A cornea/lens",
+      "effectClass": "cornea-lens-unstated",
       "source": "EU-FR Tableau 2.2",
       "confidence": "read"
     },
@@ -979,6 +1019,7 @@ export const EU2006_TABLE: RuleSetTable = {
       "expr": "1e4",
       "unit": "J/m^2",
       "effect": "UV-A lens (photochemical)",
+      "effectClass": "cornea-lens-photochemical",
       "source": "EU-2.3-MEM",
       "confidence": "from memory"
     },
@@ -996,6 +1037,7 @@ export const EU2006_TABLE: RuleSetTable = {
       "expr": "1.5e-4*CE",
       "unit": "J/m^2",
       "effect": "retinal thermal",
+      "effectClass": "retina-thermal",
       "source": "EU-FR Tableau 2.2; BGI832 Tab. 6a",
       "confidence": "read"
     },
@@ -1013,6 +1055,7 @@ export const EU2006_TABLE: RuleSetTable = {
       "expr": "2.7e4*t^0.75*CE",
       "unit": "J/m^2",
       "effect": "retinal thermal",
+      "effectClass": "retina-thermal",
       "source": "EU-FR Tableau 2.2; BGI832 Tab. 6a",
       "confidence": "read"
     },
@@ -1030,6 +1073,7 @@ export const EU2006_TABLE: RuleSetTable = {
       "expr": "5e-3*CE",
       "unit": "J/m^2",
       "effect": "retinal thermal",
+      "effectClass": "retina-thermal",
       "source": "EU-FR Tableau 2.2; BGI832 Tab. 6a",
       "confidence": "read"
     },
@@ -1047,6 +1091,7 @@ export const EU2006_TABLE: RuleSetTable = {
       "expr": "18*t^0.75*CE",
       "unit": "J/m^2",
       "effect": "retinal thermal",
+      "effectClass": "retina-thermal",
       "source": "EU-FR Tableau 2.2; BGI832 Tab. 6a",
       "confidence": "read",
       "note": "For an extended source (alpha > 1.5 mrad) this expression continues up to T2 (Table 2.3, memory)."
@@ -1065,6 +1110,7 @@ export const EU2006_TABLE: RuleSetTable = {
       "expr": "10",
       "unit": "W/m^2",
       "effect": "retinal thermal",
+      "effectClass": "retina-thermal",
       "source": "EU-2.3-MEM",
       "confidence": "from memory",
       "when": "alpha <= 1.5",
@@ -1084,6 +1130,7 @@ export const EU2006_TABLE: RuleSetTable = {
       "expr": "18*t^0.75*CE",
       "unit": "J/m^2",
       "effect": "retinal thermal",
+      "effectClass": "retina-thermal",
       "source": "EU-2.3-MEM",
       "confidence": "from memory",
       "when": "alpha > 1.5 and t <= T2"
@@ -1102,6 +1149,7 @@ export const EU2006_TABLE: RuleSetTable = {
       "expr": "18*CE*T2^(-0.25)",
       "unit": "W/m^2",
       "effect": "retinal thermal",
+      "effectClass": "retina-thermal",
       "source": "EU-2.3-MEM",
       "confidence": "from memory",
       "when": "alpha > 1.5 and t > T2"
@@ -1120,6 +1168,7 @@ export const EU2006_TABLE: RuleSetTable = {
       "expr": "1.5e-4*CA*CE",
       "unit": "J/m^2",
       "effect": "retinal thermal",
+      "effectClass": "retina-thermal",
       "source": "EU-FR Tableau 2.2; BGI832 Tab. 6a",
       "confidence": "read"
     },
@@ -1137,6 +1186,7 @@ export const EU2006_TABLE: RuleSetTable = {
       "expr": "2.7e4*t^0.75*CA*CE",
       "unit": "J/m^2",
       "effect": "retinal thermal",
+      "effectClass": "retina-thermal",
       "source": "EU-FR Tableau 2.2; BGI832 Tab. 6a",
       "confidence": "read"
     },
@@ -1154,6 +1204,7 @@ export const EU2006_TABLE: RuleSetTable = {
       "expr": "5e-3*CA*CE",
       "unit": "J/m^2",
       "effect": "retinal thermal",
+      "effectClass": "retina-thermal",
       "source": "EU-FR Tableau 2.2; BGI832 Tab. 6a",
       "confidence": "read"
     },
@@ -1171,6 +1222,7 @@ export const EU2006_TABLE: RuleSetTable = {
       "expr": "18*t^0.75*CA*CE",
       "unit": "J/m^2",
       "effect": "retinal thermal",
+      "effectClass": "retina-thermal",
       "source": "EU-FR Tableau 2.2; BGI832 Tab. 6a",
       "confidence": "read",
       "note": "For an extended source (alpha > 1.5 mrad) this expression continues up to T2 (Table 2.3, memory)."
@@ -1189,6 +1241,7 @@ export const EU2006_TABLE: RuleSetTable = {
       "expr": "10*CA",
       "unit": "W/m^2",
       "effect": "retinal thermal",
+      "effectClass": "retina-thermal",
       "source": "EU-2.3-MEM",
       "confidence": "from memory",
       "when": "alpha <= 1.5",
@@ -1208,6 +1261,7 @@ export const EU2006_TABLE: RuleSetTable = {
       "expr": "18*t^0.75*CA*CE",
       "unit": "J/m^2",
       "effect": "retinal thermal",
+      "effectClass": "retina-thermal",
       "source": "EU-2.3-MEM",
       "confidence": "from memory",
       "when": "alpha > 1.5 and t <= T2",
@@ -1232,6 +1286,7 @@ export const EU2006_TABLE: RuleSetTable = {
       "expr": "18*CA*CE*T2^(-0.25)",
       "unit": "W/m^2",
       "effect": "retinal thermal",
+      "effectClass": "retina-thermal",
       "source": "EU-2.3-MEM",
       "confidence": "from memory",
       "when": "alpha > 1.5 and t > T2",
@@ -1256,6 +1311,7 @@ export const EU2006_TABLE: RuleSetTable = {
       "expr": "1.5e-3*CC*CE",
       "unit": "J/m^2",
       "effect": "retinal thermal",
+      "effectClass": "retina-thermal",
       "source": "EU-FR Tableau 2.2; BGI832 Tab. 6a",
       "confidence": "read"
     },
@@ -1273,6 +1329,7 @@ export const EU2006_TABLE: RuleSetTable = {
       "expr": "2.7e5*t^0.75*CC*CE",
       "unit": "J/m^2",
       "effect": "retinal thermal",
+      "effectClass": "retina-thermal",
       "source": "EU-FR Tableau 2.2; BGI832 Tab. 6a",
       "confidence": "read"
     },
@@ -1290,6 +1347,7 @@ export const EU2006_TABLE: RuleSetTable = {
       "expr": "5e-2*CC*CE",
       "unit": "J/m^2",
       "effect": "retinal thermal",
+      "effectClass": "retina-thermal",
       "source": "EU-FR Tableau 2.2; BGI832 Tab. 6a",
       "confidence": "read"
     },
@@ -1307,6 +1365,7 @@ export const EU2006_TABLE: RuleSetTable = {
       "expr": "90*t^0.75*CC*CE",
       "unit": "J/m^2",
       "effect": "retinal thermal",
+      "effectClass": "retina-thermal",
       "source": "EU-FR Tableau 2.2; BGI832 Tab. 6a",
       "confidence": "read",
       "note": "90 = 18*CA with CA = 5 already folded in."
@@ -1325,6 +1384,7 @@ export const EU2006_TABLE: RuleSetTable = {
       "expr": "10*CA*CC",
       "unit": "W/m^2",
       "effect": "retinal thermal",
+      "effectClass": "retina-thermal",
       "source": "EU-2.3-MEM",
       "confidence": "from memory",
       "when": "alpha <= 1.5",
@@ -1344,6 +1404,7 @@ export const EU2006_TABLE: RuleSetTable = {
       "expr": "90*t^0.75*CC*CE",
       "unit": "J/m^2",
       "effect": "retinal thermal",
+      "effectClass": "retina-thermal",
       "source": "EU-2.3-MEM",
       "confidence": "from memory",
       "when": "alpha > 1.5 and t <= T2",
@@ -1368,6 +1429,7 @@ export const EU2006_TABLE: RuleSetTable = {
       "expr": "18*CA*CC*CE*T2^(-0.25)",
       "unit": "W/m^2",
       "effect": "retinal thermal",
+      "effectClass": "retina-thermal",
       "source": "EU-2.3-MEM",
       "confidence": "from memory",
       "when": "alpha > 1.5 and t > T2",
@@ -1392,6 +1454,7 @@ export const EU2006_TABLE: RuleSetTable = {
       "expr": "100*CB",
       "unit": "J/m^2",
       "effect": "retinal photochemical",
+      "effectClass": "retina-photochemical",
       "source": "EU-2.3-MEM",
       "confidence": "from memory",
       "note": "Measured with field of view gamma_p = 11 mrad. Dual limit with the thermal rows: both apply, use the lower."
@@ -1410,6 +1473,7 @@ export const EU2006_TABLE: RuleSetTable = {
       "expr": "1*CB",
       "unit": "W/m^2",
       "effect": "retinal photochemical",
+      "effectClass": "retina-photochemical",
       "source": "EU-2.3-MEM",
       "confidence": "from memory",
       "note": "gamma_p = 1.1*t^0.5 mrad up to 1e4 s, 110 mrad above. Radiance form (memory): G = 1e6*CB J m^-2 sr^-1 for 10 s-1e4 s, L = 100*CB W m^-2 sr^-1 above 1e4 s; the irradiance values follow from the solid angle of gamma_p (derived)."
@@ -1428,6 +1492,7 @@ export const EU2006_TABLE: RuleSetTable = {
       "expr": "1e12",
       "unit": "W/m^2",
       "effect": "cornea thermal",
+      "effectClass": "cornea-lens-thermal",
       "source": "EU-FR Tableau 2.2; BGI832 Tab. 6a",
       "confidence": "read"
     },
@@ -1445,6 +1510,7 @@ export const EU2006_TABLE: RuleSetTable = {
       "expr": "1e3",
       "unit": "J/m^2",
       "effect": "cornea thermal",
+      "effectClass": "cornea-lens-thermal",
       "source": "EU-FR Tableau 2.2; BGI832 Tab. 6a",
       "confidence": "read"
     },
@@ -1462,6 +1528,7 @@ export const EU2006_TABLE: RuleSetTable = {
       "expr": "5.6e3*t^0.25",
       "unit": "J/m^2",
       "effect": "cornea thermal",
+      "effectClass": "cornea-lens-thermal",
       "source": "EU-FR Tableau 2.2; BGI832 Tab. 6a",
       "confidence": "read"
     },
@@ -1479,6 +1546,7 @@ export const EU2006_TABLE: RuleSetTable = {
       "expr": "1e3",
       "unit": "W/m^2",
       "effect": "cornea thermal",
+      "effectClass": "cornea-lens-thermal",
       "source": "EU-2.3-MEM",
       "confidence": "from memory"
     },
@@ -1496,6 +1564,7 @@ export const EU2006_TABLE: RuleSetTable = {
       "expr": "1e13",
       "unit": "W/m^2",
       "effect": "cornea thermal",
+      "effectClass": "cornea-lens-thermal",
       "source": "EU-FR Tableau 2.2; BGI832 Tab. 6a",
       "confidence": "read"
     },
@@ -1513,6 +1582,7 @@ export const EU2006_TABLE: RuleSetTable = {
       "expr": "1e4",
       "unit": "J/m^2",
       "effect": "cornea thermal",
+      "effectClass": "cornea-lens-thermal",
       "source": "EU-FR Tableau 2.2; BGI832 Tab. 6a",
       "confidence": "read"
     },
@@ -1530,6 +1600,7 @@ export const EU2006_TABLE: RuleSetTable = {
       "expr": "1e3",
       "unit": "W/m^2",
       "effect": "cornea thermal",
+      "effectClass": "cornea-lens-thermal",
       "source": "EU-2.3-MEM",
       "confidence": "from memory"
     },
@@ -1547,6 +1618,7 @@ export const EU2006_TABLE: RuleSetTable = {
       "expr": "1e12",
       "unit": "W/m^2",
       "effect": "cornea thermal",
+      "effectClass": "cornea-lens-thermal",
       "source": "EU-FR Tableau 2.2; BGI832 Tab. 6a",
       "confidence": "read"
     },
@@ -1564,6 +1636,7 @@ export const EU2006_TABLE: RuleSetTable = {
       "expr": "1e3",
       "unit": "J/m^2",
       "effect": "cornea thermal",
+      "effectClass": "cornea-lens-thermal",
       "source": "EU-FR Tableau 2.2; BGI832 Tab. 6a",
       "confidence": "read"
     },
@@ -1581,6 +1654,7 @@ export const EU2006_TABLE: RuleSetTable = {
       "expr": "5.6e3*t^0.25",
       "unit": "J/m^2",
       "effect": "cornea thermal",
+      "effectClass": "cornea-lens-thermal",
       "source": "EU-FR Tableau 2.2; BGI832 Tab. 6a",
       "confidence": "read"
     },
@@ -1598,6 +1672,7 @@ export const EU2006_TABLE: RuleSetTable = {
       "expr": "1e3",
       "unit": "W/m^2",
       "effect": "cornea thermal",
+      "effectClass": "cornea-lens-thermal",
       "source": "EU-2.3-MEM",
       "confidence": "from memory"
     },
@@ -1615,6 +1690,7 @@ export const EU2006_TABLE: RuleSetTable = {
       "expr": "1e11",
       "unit": "W/m^2",
       "effect": "cornea thermal",
+      "effectClass": "cornea-lens-thermal",
       "source": "EU-FR Tableau 2.2; BGI832 Tab. 6a",
       "confidence": "read"
     },
@@ -1632,6 +1708,7 @@ export const EU2006_TABLE: RuleSetTable = {
       "expr": "100",
       "unit": "J/m^2",
       "effect": "cornea thermal",
+      "effectClass": "cornea-lens-thermal",
       "source": "EU-FR Tableau 2.2; BGI832 Tab. 6a",
       "confidence": "read"
     },
@@ -1649,6 +1726,7 @@ export const EU2006_TABLE: RuleSetTable = {
       "expr": "5.6e3*t^0.25",
       "unit": "J/m^2",
       "effect": "cornea thermal",
+      "effectClass": "cornea-lens-thermal",
       "source": "EU-FR Tableau 2.2; BGI832 Tab. 6a",
       "confidence": "read",
       "note": "The French copy prints '5,6.10^3.t' (exponent lost); the Directive, BGI832 Tab. 6a and continuity at 1e-7 s (99.6 vs 100) give t^0.25."
@@ -1667,6 +1745,7 @@ export const EU2006_TABLE: RuleSetTable = {
       "expr": "1e3",
       "unit": "W/m^2",
       "effect": "cornea thermal",
+      "effectClass": "cornea-lens-thermal",
       "source": "EU-2.3-MEM",
       "confidence": "from memory"
     }
@@ -1686,6 +1765,7 @@ export const EU2006_TABLE: RuleSetTable = {
       "expr": "3e10",
       "unit": "W/m^2",
       "effect": "skin UV",
+      "effectClass": "skin-unstated",
       "source": "EU-FR Tableau 2.4",
       "confidence": "read"
     },
@@ -1703,6 +1783,7 @@ export const EU2006_TABLE: RuleSetTable = {
       "expr": "eye",
       "unit": "-",
       "effect": "skin UV",
+      "effectClass": "skin-unstated",
       "source": "EU-FR Tableau 2.4",
       "confidence": "read",
       "note": "Table 2.4 says 'see eye exposure limits': use the EU eye UV rows (H = 30, tabulated 303-314 nm values, 5.6e3*t^0.25, 1e4) with the skin aperture 3.5 mm."
@@ -1721,6 +1802,7 @@ export const EU2006_TABLE: RuleSetTable = {
       "expr": "2e11",
       "unit": "W/m^2",
       "effect": "skin thermal",
+      "effectClass": "skin-thermal",
       "source": "EU-FR Tableau 2.4",
       "confidence": "read"
     },
@@ -1738,6 +1820,7 @@ export const EU2006_TABLE: RuleSetTable = {
       "expr": "200*CA",
       "unit": "J/m^2",
       "effect": "skin thermal",
+      "effectClass": "skin-thermal",
       "source": "EU-FR Tableau 2.4",
       "confidence": "read"
     },
@@ -1755,6 +1838,7 @@ export const EU2006_TABLE: RuleSetTable = {
       "expr": "1.1e4*CA*t^0.25",
       "unit": "J/m^2",
       "effect": "skin thermal",
+      "effectClass": "skin-thermal",
       "source": "EU-FR Tableau 2.4",
       "confidence": "read",
       "note": "The HTML layout of the French copy splits the 1e-3..10 s column; the published boundary is 10 s (continuity: 1.1e4*10^0.25 = 19 561 J/m^2 vs 2e3*10 = 20 000 J/m^2)."
@@ -1773,6 +1857,7 @@ export const EU2006_TABLE: RuleSetTable = {
       "expr": "2e3*CA",
       "unit": "W/m^2",
       "effect": "skin thermal",
+      "effectClass": "skin-thermal",
       "source": "EU-FR Tableau 2.4",
       "confidence": "read"
     },
@@ -1790,6 +1875,7 @@ export const EU2006_TABLE: RuleSetTable = {
       "expr": "2e11*CA",
       "unit": "W/m^2",
       "effect": "skin thermal",
+      "effectClass": "skin-thermal",
       "source": "EU-FR Tableau 2.4",
       "confidence": "read"
     },
@@ -1807,6 +1893,7 @@ export const EU2006_TABLE: RuleSetTable = {
       "expr": "200*CA",
       "unit": "J/m^2",
       "effect": "skin thermal",
+      "effectClass": "skin-thermal",
       "source": "EU-FR Tableau 2.4",
       "confidence": "read"
     },
@@ -1824,6 +1911,7 @@ export const EU2006_TABLE: RuleSetTable = {
       "expr": "1.1e4*CA*t^0.25",
       "unit": "J/m^2",
       "effect": "skin thermal",
+      "effectClass": "skin-thermal",
       "source": "EU-FR Tableau 2.4",
       "confidence": "read",
       "note": "The HTML layout of the French copy splits the 1e-3..10 s column; the published boundary is 10 s (continuity: 1.1e4*10^0.25 = 19 561 J/m^2 vs 2e3*10 = 20 000 J/m^2)."
@@ -1842,6 +1930,7 @@ export const EU2006_TABLE: RuleSetTable = {
       "expr": "2e3*CA",
       "unit": "W/m^2",
       "effect": "skin thermal",
+      "effectClass": "skin-thermal",
       "source": "EU-FR Tableau 2.4",
       "confidence": "read"
     },
@@ -1859,6 +1948,7 @@ export const EU2006_TABLE: RuleSetTable = {
       "expr": "1e12",
       "unit": "W/m^2",
       "effect": "skin thermal",
+      "effectClass": "skin-thermal",
       "source": "EU-FR Tableau 2.4",
       "confidence": "read"
     },
@@ -1876,6 +1966,7 @@ export const EU2006_TABLE: RuleSetTable = {
       "expr": "eye",
       "unit": "-",
       "effect": "skin thermal",
+      "effectClass": "skin-thermal",
       "source": "EU-FR Tableau 2.4",
       "confidence": "read",
       "note": "Table 2.4: 'see eye exposure limits' (eye rows for the same band, skin aperture)."
@@ -1894,6 +1985,7 @@ export const EU2006_TABLE: RuleSetTable = {
       "expr": "1e13",
       "unit": "W/m^2",
       "effect": "skin thermal",
+      "effectClass": "skin-thermal",
       "source": "EU-FR Tableau 2.4",
       "confidence": "read"
     },
@@ -1911,6 +2003,7 @@ export const EU2006_TABLE: RuleSetTable = {
       "expr": "eye",
       "unit": "-",
       "effect": "skin thermal",
+      "effectClass": "skin-thermal",
       "source": "EU-FR Tableau 2.4",
       "confidence": "read",
       "note": "Table 2.4: 'see eye exposure limits' (eye rows for the same band, skin aperture)."
@@ -1929,6 +2022,7 @@ export const EU2006_TABLE: RuleSetTable = {
       "expr": "1e12",
       "unit": "W/m^2",
       "effect": "skin thermal",
+      "effectClass": "skin-thermal",
       "source": "EU-FR Tableau 2.4",
       "confidence": "read"
     },
@@ -1946,6 +2040,7 @@ export const EU2006_TABLE: RuleSetTable = {
       "expr": "eye",
       "unit": "-",
       "effect": "skin thermal",
+      "effectClass": "skin-thermal",
       "source": "EU-FR Tableau 2.4",
       "confidence": "read",
       "note": "Table 2.4: 'see eye exposure limits' (eye rows for the same band, skin aperture)."
@@ -1964,6 +2059,7 @@ export const EU2006_TABLE: RuleSetTable = {
       "expr": "1e11",
       "unit": "W/m^2",
       "effect": "skin thermal",
+      "effectClass": "skin-thermal",
       "source": "EU-FR Tableau 2.4",
       "confidence": "read"
     },
@@ -1981,6 +2077,7 @@ export const EU2006_TABLE: RuleSetTable = {
       "expr": "eye",
       "unit": "-",
       "effect": "skin thermal",
+      "effectClass": "skin-thermal",
       "source": "EU-FR Tableau 2.4",
       "confidence": "read",
       "note": "Table 2.4: 'see eye exposure limits' (eye rows for the same band, skin aperture)."
@@ -2115,31 +2212,79 @@ export const EU2006_TABLE: RuleSetTable = {
       {
         "n": 1,
         "text": "Each single pulse of a train must not exceed the limit for a single pulse of that duration.",
+        "cite": "EU 2006/25/EC Annex II Table 2.6 rule 1 (read)",
         "source": "EU-FR Tableau 2.6; EU-CONS",
         "confidence": "read"
       },
       {
         "n": 2,
         "text": "Any group (or sub-group) of pulses delivered in a time t must not exceed the limit for duration t.",
+        "cite": "EU 2006/25/EC Annex II Table 2.6 rule 2 (read)",
         "source": "EU-FR Tableau 2.6; EU-CONS",
         "confidence": "read"
       },
       {
         "n": 3,
         "text": "Each single pulse within a group must not exceed the single-pulse limit multiplied by CP = N^-0.25 (N = number of pulses). Applies only to limits protecting against thermal injury; pulses within Tmin count as one pulse.",
-        "expr": "N^(-0.25)",
         "source": "EU-FR Tableau 2.6; EU-CONS",
         "confidence": "read"
       }
     ],
-    "scope_of_CP": "All thermal limits (retina, cornea, skin) - the Directive does not restrict rule 3 to the retina and sets no cap on N.",
-    "practice_notes": [
+    "cp": {
+      "expr": "N^(-0.25)",
+      "appliesTo": [
+        "retina-thermal",
+        "cornea-lens-thermal",
+        "cornea-lens-thermal-photochemical",
+        "cornea-lens-unstated",
+        "skin-thermal",
+        "skin-unstated"
+      ],
+      "scopeNote": "C_P applies only to limits protecting against thermal injury (EU Table 2.6 rule 3); the limits here are photochemical",
+      "pulsesShorterThan_s": "0.25",
+      "source": "EU-FR Tableau 2.6; EU-CONS",
+      "confidence": "read",
+      "note": "All thermal limits (retina, cornea, skin) - the Directive does not restrict rule 3 to the retina and sets no cap on N. Rows whose mechanism the table does not state ('unstated') are treated as thermal: the stricter reading (ours). C_P only for pulses shorter than 0.25 s: BGI832 (read)."
+    },
+    "grouping": {
+      "factor": "T_min",
+      "edgeSide": "lower",
+      "belowTable": {
+        "below_nm": 315,
+        "value_s": "1e-9",
+        "source": "limit specification 5.6: gap in the Directive, 315-400 nm value used",
+        "confidence": "ours"
+      },
+      "countAsOneIfPulseLongerThan_s": "1e-9",
+      "source": "EU-FR Tableau 2.6 (T_min bands written lo < lambda <= hi: on an exact band edge the lower band's T_min applies, limit specification errata); BGI832 (read): pulses inside T_min count as one only if every pulse is longer than 1 ns; Table 2.2 note d sums UV pulses inside T_min but Table 2.6 lists no T_min below 315 nm",
+      "confidence": "read"
+    },
+    "countingWindows": [
+      {
+        "band_nm": [180, 400],
+        "uncappedNote": "no cap below 400 nm; the stricter reading, ours",
+        "source": "BGI832 (read) gives caps only from 400 nm; ours below",
+        "confidence": "ours"
+      },
+      {
+        "band_nm": [400, 1400],
+        "cap": { "factor": "T2" },
+        "source": "BGI832 (read; reflects IEC 60825-1:2001 practice, the Directive itself is silent)",
+        "confidence": "read"
+      },
+      {
+        "band_nm": [1400, 1000000.0],
+        "cap": { "seconds": "10", "label": "above 1400 nm" },
+        "source": "BGI832 (read; reflects IEC 60825-1:2001 practice, the Directive itself is silent)",
+        "confidence": "read"
+      }
+    ],
+    "notes": [
       {
         "text": "Count N over the exposure duration assessed, at most T2 for 400-1400 nm and 10 s for longer wavelengths; apply CP only to pulses shorter than 0.25 s; pulses inside Ti (= Tmin) are counted as one and their energies summed against the limit for duration Ti, if every pulse is longer than 1 ns.",
         "source": "BGI832 (read; reflects IEC 60825-1:2001 practice, the Directive itself is silent)",
         "confidence": "read"
       }
-    ],
-    "T_min_ref": "factors.T_min"
+    ]
   }
 };

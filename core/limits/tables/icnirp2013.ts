@@ -296,6 +296,7 @@ export const ICNIRP2013_TABLE: RuleSetTable = {
       "expr": "3e10",
       "unit": "W/m^2",
       "effect": "UV cornea/lens",
+      "effectClass": "cornea-lens-unstated",
       "source": "ICNIRP2013; IEC2014 Annex A; ANSI2014 Tab. 5a (all from memory); same value as EU Tab. 2.2/2.4 (EU-FR, read)",
       "confidence": "from memory, uncertain",
       "note": "Kept as in ICNIRP 1996/EU. Possible that ANSI Z136.1-2014 instead extends the radiant-exposure limits down to 1e-13 s; this row is the more restrictive reading, so it needs no conservative_alt."
@@ -314,6 +315,7 @@ export const ICNIRP2013_TABLE: RuleSetTable = {
       "expr": "30",
       "unit": "J/m^2",
       "effect": "UV photochemical cornea",
+      "effectClass": "cornea-lens-photochemical",
       "source": "ICNIRP2013; IEC2014 Annex A; ANSI2014 Tab. 5a (all from memory); same value as EU Tab. 2.2/2.4 (EU-FR, read)",
       "confidence": "from memory"
     },
@@ -331,6 +333,7 @@ export const ICNIRP2013_TABLE: RuleSetTable = {
       "expr": "C1",
       "unit": "J/m^2",
       "effect": "UV thermal cornea",
+      "effectClass": "cornea-lens-thermal",
       "source": "ICNIRP2013; IEC2014 Annex A; ANSI2014 Tab. 5a (all from memory)",
       "confidence": "derived",
       "when": "t <= T1",
@@ -350,6 +353,7 @@ export const ICNIRP2013_TABLE: RuleSetTable = {
       "expr": "C2",
       "unit": "J/m^2",
       "effect": "UV photochemical cornea",
+      "effectClass": "cornea-lens-photochemical",
       "source": "ICNIRP2013; IEC2014 Annex A; ANSI2014 Tab. 5a (all from memory)",
       "confidence": "derived",
       "when": "t > T1",
@@ -369,6 +373,7 @@ export const ICNIRP2013_TABLE: RuleSetTable = {
       "expr": "5.6e3*t^0.25",
       "unit": "J/m^2",
       "effect": "UV-A cornea/lens",
+      "effectClass": "cornea-lens-unstated",
       "source": "ICNIRP2013; IEC2014 Annex A; ANSI2014 Tab. 5a (all from memory); same value as EU Tab. 2.2/2.4 (EU-FR, read)",
       "confidence": "from memory"
     },
@@ -386,6 +391,7 @@ export const ICNIRP2013_TABLE: RuleSetTable = {
       "expr": "1e4",
       "unit": "J/m^2",
       "effect": "UV-A lens (photochemical)",
+      "effectClass": "cornea-lens-photochemical",
       "source": "ICNIRP2013; IEC2014 Annex A; ANSI2014 Tab. 5a (all from memory); same as EU Tab. 2.3 (from memory)",
       "confidence": "from memory, uncertain",
       "relaxed_alt": {
@@ -409,6 +415,7 @@ export const ICNIRP2013_TABLE: RuleSetTable = {
       "expr": "1e-3*CE",
       "unit": "J/m^2",
       "effect": "retinal thermal",
+      "effectClass": "retina-thermal",
       "source": "ICNIRP2013; IEC2014 Annex A; ANSI2014 Tab. 5a (all from memory)",
       "confidence": "from memory, uncertain",
       "conservative_alt": "1.5e-4*CE",
@@ -428,6 +435,7 @@ export const ICNIRP2013_TABLE: RuleSetTable = {
       "expr": "2e-3*CE",
       "unit": "J/m^2",
       "effect": "retinal thermal",
+      "effectClass": "retina-thermal",
       "source": "ICNIRP2013; IEC2014 Annex A; ANSI2014 Tab. 5a (all from memory)",
       "confidence": "from memory, uncertain",
       "conservative_alt": "2.7e4*t^0.75*CE",
@@ -447,6 +455,7 @@ export const ICNIRP2013_TABLE: RuleSetTable = {
       "expr": "2e-3*CE",
       "unit": "J/m^2",
       "effect": "retinal thermal",
+      "effectClass": "retina-thermal",
       "source": "ICNIRP2013; IEC2014 Annex A; ANSI2014 Tab. 5a (all from memory)",
       "confidence": "from memory",
       "note": "Lower (stricter) than the EU 5e-3 by a factor 2.5; direction confirmed by ILSC2007 (read). Continuous with 18*(5e-6)^0.75 = 1.90e-3."
@@ -465,6 +474,7 @@ export const ICNIRP2013_TABLE: RuleSetTable = {
       "expr": "18*t^0.75*CE",
       "unit": "J/m^2",
       "effect": "retinal thermal",
+      "effectClass": "retina-thermal",
       "source": "ICNIRP2013; IEC2014 Annex A; ANSI2014 Tab. 5a (all from memory); same value as EU Tab. 2.2/2.4 (EU-FR, read)",
       "confidence": "from memory",
       "note": "For alpha > 1.5 mrad continues up to T2."
@@ -483,6 +493,7 @@ export const ICNIRP2013_TABLE: RuleSetTable = {
       "expr": "10",
       "unit": "W/m^2",
       "effect": "retinal thermal",
+      "effectClass": "retina-thermal",
       "source": "ICNIRP2013; IEC2014 Annex A; ANSI2014 Tab. 5a (all from memory); same as EU Tab. 2.3 (from memory)",
       "confidence": "from memory",
       "when": "alpha <= 1.5"
@@ -501,6 +512,7 @@ export const ICNIRP2013_TABLE: RuleSetTable = {
       "expr": "18*t^0.75*CE",
       "unit": "J/m^2",
       "effect": "retinal thermal",
+      "effectClass": "retina-thermal",
       "source": "ICNIRP2013; IEC2014 Annex A; ANSI2014 Tab. 5a (all from memory); same as EU Tab. 2.3 (from memory)",
       "confidence": "from memory",
       "when": "alpha > 1.5 and t <= T2"
@@ -519,6 +531,7 @@ export const ICNIRP2013_TABLE: RuleSetTable = {
       "expr": "18*CE*T2^(-0.25)",
       "unit": "W/m^2",
       "effect": "retinal thermal",
+      "effectClass": "retina-thermal",
       "source": "ICNIRP2013; IEC2014 Annex A; ANSI2014 Tab. 5a (all from memory); same as EU Tab. 2.3 (from memory)",
       "confidence": "from memory",
       "when": "alpha > 1.5 and t > T2"
@@ -537,6 +550,7 @@ export const ICNIRP2013_TABLE: RuleSetTable = {
       "expr": "1e-3*CA*CE",
       "unit": "J/m^2",
       "effect": "retinal thermal",
+      "effectClass": "retina-thermal",
       "source": "ICNIRP2013; IEC2014 Annex A; ANSI2014 Tab. 5a (all from memory)",
       "confidence": "from memory, uncertain",
       "conservative_alt": "1.5e-4*CA*CE",
@@ -556,6 +570,7 @@ export const ICNIRP2013_TABLE: RuleSetTable = {
       "expr": "2e-3*CA*CE",
       "unit": "J/m^2",
       "effect": "retinal thermal",
+      "effectClass": "retina-thermal",
       "source": "ICNIRP2013; IEC2014 Annex A; ANSI2014 Tab. 5a (all from memory)",
       "confidence": "from memory, uncertain",
       "conservative_alt": "2.7e4*t^0.75*CA*CE",
@@ -575,6 +590,7 @@ export const ICNIRP2013_TABLE: RuleSetTable = {
       "expr": "2e-3*CA*CE",
       "unit": "J/m^2",
       "effect": "retinal thermal",
+      "effectClass": "retina-thermal",
       "source": "ICNIRP2013; IEC2014 Annex A; ANSI2014 Tab. 5a (all from memory)",
       "confidence": "from memory",
       "note": "Lower (stricter) than the EU 5e-3 by a factor 2.5; direction confirmed by ILSC2007 (read). Continuous with 18*(5e-6)^0.75 = 1.90e-3."
@@ -593,6 +609,7 @@ export const ICNIRP2013_TABLE: RuleSetTable = {
       "expr": "18*t^0.75*CA*CE",
       "unit": "J/m^2",
       "effect": "retinal thermal",
+      "effectClass": "retina-thermal",
       "source": "ICNIRP2013; IEC2014 Annex A; ANSI2014 Tab. 5a (all from memory); same value as EU Tab. 2.2/2.4 (EU-FR, read)",
       "confidence": "from memory",
       "note": "For alpha > 1.5 mrad continues up to T2."
@@ -611,6 +628,7 @@ export const ICNIRP2013_TABLE: RuleSetTable = {
       "expr": "10*CA",
       "unit": "W/m^2",
       "effect": "retinal thermal",
+      "effectClass": "retina-thermal",
       "source": "ICNIRP2013; IEC2014 Annex A; ANSI2014 Tab. 5a (all from memory); same as EU Tab. 2.3 (from memory)",
       "confidence": "from memory",
       "when": "alpha <= 1.5"
@@ -629,6 +647,7 @@ export const ICNIRP2013_TABLE: RuleSetTable = {
       "expr": "18*t^0.75*CA*CE",
       "unit": "J/m^2",
       "effect": "retinal thermal",
+      "effectClass": "retina-thermal",
       "source": "ICNIRP2013; IEC2014 Annex A; ANSI2014 Tab. 5a (all from memory); same as EU Tab. 2.3 (from memory)",
       "confidence": "from memory",
       "when": "alpha > 1.5 and t <= T2",
@@ -653,6 +672,7 @@ export const ICNIRP2013_TABLE: RuleSetTable = {
       "expr": "18*CA*CE*T2^(-0.25)",
       "unit": "W/m^2",
       "effect": "retinal thermal",
+      "effectClass": "retina-thermal",
       "source": "ICNIRP2013; IEC2014 Annex A; ANSI2014 Tab. 5a (all from memory); same as EU Tab. 2.3 (from memory)",
       "confidence": "from memory",
       "when": "alpha > 1.5 and t > T2",
@@ -677,6 +697,7 @@ export const ICNIRP2013_TABLE: RuleSetTable = {
       "expr": "1e-2*CC*CE",
       "unit": "J/m^2",
       "effect": "retinal thermal",
+      "effectClass": "retina-thermal",
       "source": "ICNIRP2013; IEC2014 Annex A; ANSI2014 Tab. 5a (all from memory)",
       "confidence": "from memory, uncertain",
       "conservative_alt": "1.5e-3*CC*CE",
@@ -696,6 +717,7 @@ export const ICNIRP2013_TABLE: RuleSetTable = {
       "expr": "2e-2*CC*CE",
       "unit": "J/m^2",
       "effect": "retinal thermal",
+      "effectClass": "retina-thermal",
       "source": "ICNIRP2013; IEC2014 Annex A; ANSI2014 Tab. 5a (all from memory)",
       "confidence": "from memory, uncertain",
       "conservative_alt": "2.7e5*t^0.75*CC*CE"
@@ -714,6 +736,7 @@ export const ICNIRP2013_TABLE: RuleSetTable = {
       "expr": "2e-2*CC*CE",
       "unit": "J/m^2",
       "effect": "retinal thermal",
+      "effectClass": "retina-thermal",
       "source": "ICNIRP2013; IEC2014 Annex A; ANSI2014 Tab. 5a (all from memory)",
       "confidence": "from memory",
       "note": "EU: 5e-2 up to 5e-5 s. Continuous with 90*(1.3e-5)^0.75 = 1.95e-2."
@@ -732,6 +755,7 @@ export const ICNIRP2013_TABLE: RuleSetTable = {
       "expr": "90*t^0.75*CC*CE",
       "unit": "J/m^2",
       "effect": "retinal thermal",
+      "effectClass": "retina-thermal",
       "source": "ICNIRP2013; IEC2014 Annex A; ANSI2014 Tab. 5a (all from memory); same value as EU Tab. 2.2/2.4 (EU-FR, read)",
       "confidence": "from memory"
     },
@@ -749,6 +773,7 @@ export const ICNIRP2013_TABLE: RuleSetTable = {
       "expr": "10*CA*CC",
       "unit": "W/m^2",
       "effect": "retinal thermal",
+      "effectClass": "retina-thermal",
       "source": "ICNIRP2013; IEC2014 Annex A; ANSI2014 Tab. 5a (all from memory); same as EU Tab. 2.3 (from memory)",
       "confidence": "from memory",
       "when": "alpha <= 1.5"
@@ -767,6 +792,7 @@ export const ICNIRP2013_TABLE: RuleSetTable = {
       "expr": "90*t^0.75*CC*CE",
       "unit": "J/m^2",
       "effect": "retinal thermal",
+      "effectClass": "retina-thermal",
       "source": "ICNIRP2013; IEC2014 Annex A; ANSI2014 Tab. 5a (all from memory); same as EU Tab. 2.3 (from memory)",
       "confidence": "from memory",
       "when": "alpha > 1.5 and t <= T2",
@@ -791,6 +817,7 @@ export const ICNIRP2013_TABLE: RuleSetTable = {
       "expr": "18*CA*CC*CE*T2^(-0.25)",
       "unit": "W/m^2",
       "effect": "retinal thermal",
+      "effectClass": "retina-thermal",
       "source": "ICNIRP2013; IEC2014 Annex A; ANSI2014 Tab. 5a (all from memory); same as EU Tab. 2.3 (from memory)",
       "confidence": "from memory",
       "when": "alpha > 1.5 and t > T2",
@@ -815,6 +842,7 @@ export const ICNIRP2013_TABLE: RuleSetTable = {
       "expr": "skin",
       "unit": "-",
       "effect": "cornea thermal (dual)",
+      "effectClass": "cornea-lens-thermal",
       "source": "CORNEA2024 (read); ICNIRP2013",
       "confidence": "read",
       "note": "Dual limit: ICNIRP 2013 recommends using the skin limits (H-S rows, same band) for the cornea. Aperture for this check - OURS: 3.5 mm (skin aperture; stricter than 7 mm for small beams). ANSI Z136.1-2014 has its own corneal MPE for 1.2-1.4 um (values not reproduced; verify). The source discusses the need from about 1250 nm; OURS: apply from 1200 nm."
@@ -833,6 +861,7 @@ export const ICNIRP2013_TABLE: RuleSetTable = {
       "expr": "100*CB",
       "unit": "J/m^2",
       "effect": "retinal photochemical",
+      "effectClass": "retina-photochemical",
       "source": "ICNIRP2013; IEC2014 Annex A; ANSI2014 Tab. 5a (all from memory); same as EU Tab. 2.3 (from memory)",
       "confidence": "from memory",
       "note": "gamma_p = 11 mrad. Dual limit: evaluate with thermal rows, use the lower."
@@ -851,6 +880,7 @@ export const ICNIRP2013_TABLE: RuleSetTable = {
       "expr": "1*CB",
       "unit": "W/m^2",
       "effect": "retinal photochemical",
+      "effectClass": "retina-photochemical",
       "source": "ICNIRP2013; IEC2014 Annex A; ANSI2014 Tab. 5a (all from memory); same as EU Tab. 2.3 (from memory)",
       "confidence": "from memory",
       "note": "gamma_p = 1.1*t^0.5 mrad (100-1e4 s), 110 mrad (1e4-3e4 s)."
@@ -869,6 +899,7 @@ export const ICNIRP2013_TABLE: RuleSetTable = {
       "expr": "1e3",
       "unit": "J/m^2",
       "effect": "cornea thermal",
+      "effectClass": "cornea-lens-thermal",
       "source": "ICNIRP2013; IEC2014 Annex A; ANSI2014 Tab. 5a (all from memory)",
       "confidence": "from memory, uncertain",
       "conservative_alt": "1e12*t",
@@ -888,6 +919,7 @@ export const ICNIRP2013_TABLE: RuleSetTable = {
       "expr": "1e3",
       "unit": "J/m^2",
       "effect": "cornea thermal",
+      "effectClass": "cornea-lens-thermal",
       "source": "ICNIRP2013; IEC2014 Annex A; ANSI2014 Tab. 5a (all from memory); same value as EU Tab. 2.2/2.4 (EU-FR, read)",
       "confidence": "from memory"
     },
@@ -905,6 +937,7 @@ export const ICNIRP2013_TABLE: RuleSetTable = {
       "expr": "5.6e3*t^0.25",
       "unit": "J/m^2",
       "effect": "cornea thermal",
+      "effectClass": "cornea-lens-thermal",
       "source": "ICNIRP2013; IEC2014 Annex A; ANSI2014 Tab. 5a (all from memory); same value as EU Tab. 2.2/2.4 (EU-FR, read)",
       "confidence": "from memory"
     },
@@ -922,6 +955,7 @@ export const ICNIRP2013_TABLE: RuleSetTable = {
       "expr": "1e3",
       "unit": "W/m^2",
       "effect": "cornea thermal",
+      "effectClass": "cornea-lens-thermal",
       "source": "ICNIRP2013; IEC2014 Annex A; ANSI2014 Tab. 5a (all from memory); same as EU Tab. 2.3 (from memory)",
       "confidence": "from memory",
       "note": "IEC/ANSI (memory): for t > 10 s and irradiated area > 0.01 m^2 (skin) the limit is reduced, see large-area note in the .md."
@@ -940,6 +974,7 @@ export const ICNIRP2013_TABLE: RuleSetTable = {
       "expr": "1e4",
       "unit": "J/m^2",
       "effect": "cornea thermal",
+      "effectClass": "cornea-lens-thermal",
       "source": "ICNIRP2013; IEC2014 Annex A; ANSI2014 Tab. 5a (all from memory)",
       "confidence": "from memory, uncertain",
       "conservative_alt": "1e13*t",
@@ -959,6 +994,7 @@ export const ICNIRP2013_TABLE: RuleSetTable = {
       "expr": "1e4",
       "unit": "J/m^2",
       "effect": "cornea thermal",
+      "effectClass": "cornea-lens-thermal",
       "source": "ICNIRP2013; IEC2014 Annex A; ANSI2014 Tab. 5a (all from memory); same value as EU Tab. 2.2/2.4 (EU-FR, read)",
       "confidence": "from memory"
     },
@@ -976,6 +1012,7 @@ export const ICNIRP2013_TABLE: RuleSetTable = {
       "expr": "1e3",
       "unit": "W/m^2",
       "effect": "cornea thermal",
+      "effectClass": "cornea-lens-thermal",
       "source": "ICNIRP2013; IEC2014 Annex A; ANSI2014 Tab. 5a (all from memory); same as EU Tab. 2.3 (from memory)",
       "confidence": "from memory",
       "note": "IEC/ANSI (memory): for t > 10 s and irradiated area > 0.01 m^2 (skin) the limit is reduced, see large-area note in the .md."
@@ -994,6 +1031,7 @@ export const ICNIRP2013_TABLE: RuleSetTable = {
       "expr": "1e3",
       "unit": "J/m^2",
       "effect": "cornea thermal",
+      "effectClass": "cornea-lens-thermal",
       "source": "ICNIRP2013; IEC2014 Annex A; ANSI2014 Tab. 5a (all from memory)",
       "confidence": "from memory, uncertain",
       "conservative_alt": "1e12*t",
@@ -1013,6 +1051,7 @@ export const ICNIRP2013_TABLE: RuleSetTable = {
       "expr": "1e3",
       "unit": "J/m^2",
       "effect": "cornea thermal",
+      "effectClass": "cornea-lens-thermal",
       "source": "ICNIRP2013; IEC2014 Annex A; ANSI2014 Tab. 5a (all from memory); same value as EU Tab. 2.2/2.4 (EU-FR, read)",
       "confidence": "from memory"
     },
@@ -1030,6 +1069,7 @@ export const ICNIRP2013_TABLE: RuleSetTable = {
       "expr": "5.6e3*t^0.25",
       "unit": "J/m^2",
       "effect": "cornea thermal",
+      "effectClass": "cornea-lens-thermal",
       "source": "ICNIRP2013; IEC2014 Annex A; ANSI2014 Tab. 5a (all from memory); same value as EU Tab. 2.2/2.4 (EU-FR, read)",
       "confidence": "from memory"
     },
@@ -1047,6 +1087,7 @@ export const ICNIRP2013_TABLE: RuleSetTable = {
       "expr": "1e3",
       "unit": "W/m^2",
       "effect": "cornea thermal",
+      "effectClass": "cornea-lens-thermal",
       "source": "ICNIRP2013; IEC2014 Annex A; ANSI2014 Tab. 5a (all from memory); same as EU Tab. 2.3 (from memory)",
       "confidence": "from memory",
       "note": "IEC/ANSI (memory): for t > 10 s and irradiated area > 0.01 m^2 (skin) the limit is reduced, see large-area note in the .md."
@@ -1065,6 +1106,7 @@ export const ICNIRP2013_TABLE: RuleSetTable = {
       "expr": "100",
       "unit": "J/m^2",
       "effect": "cornea thermal",
+      "effectClass": "cornea-lens-thermal",
       "source": "ICNIRP2013; IEC2014 Annex A; ANSI2014 Tab. 5a (all from memory)",
       "confidence": "from memory, uncertain",
       "conservative_alt": "1e11*t",
@@ -1084,6 +1126,7 @@ export const ICNIRP2013_TABLE: RuleSetTable = {
       "expr": "100",
       "unit": "J/m^2",
       "effect": "cornea thermal",
+      "effectClass": "cornea-lens-thermal",
       "source": "ICNIRP2013; IEC2014 Annex A; ANSI2014 Tab. 5a (all from memory); same value as EU Tab. 2.2/2.4 (EU-FR, read)",
       "confidence": "from memory"
     },
@@ -1101,6 +1144,7 @@ export const ICNIRP2013_TABLE: RuleSetTable = {
       "expr": "5.6e3*t^0.25",
       "unit": "J/m^2",
       "effect": "cornea thermal",
+      "effectClass": "cornea-lens-thermal",
       "source": "ICNIRP2013; IEC2014 Annex A; ANSI2014 Tab. 5a (all from memory); same value as EU Tab. 2.2/2.4 (EU-FR, read)",
       "confidence": "from memory"
     },
@@ -1118,6 +1162,7 @@ export const ICNIRP2013_TABLE: RuleSetTable = {
       "expr": "1e3",
       "unit": "W/m^2",
       "effect": "cornea thermal",
+      "effectClass": "cornea-lens-thermal",
       "source": "ICNIRP2013; IEC2014 Annex A; ANSI2014 Tab. 5a (all from memory); same as EU Tab. 2.3 (from memory)",
       "confidence": "from memory",
       "note": "IEC/ANSI (memory): for t > 10 s and irradiated area > 0.01 m^2 (skin) the limit is reduced, see large-area note in the .md."
@@ -1138,6 +1183,7 @@ export const ICNIRP2013_TABLE: RuleSetTable = {
       "expr": "3e10",
       "unit": "W/m^2",
       "effect": "skin UV",
+      "effectClass": "skin-unstated",
       "source": "ICNIRP2013; IEC2014 Annex A skin table; ANSI2014 Tab. 7 (all from memory); same value as EU Tab. 2.2/2.4 (EU-FR, read)",
       "confidence": "from memory, uncertain"
     },
@@ -1155,6 +1201,7 @@ export const ICNIRP2013_TABLE: RuleSetTable = {
       "expr": "eye",
       "unit": "-",
       "effect": "skin UV",
+      "effectClass": "skin-unstated",
       "source": "ICNIRP2013; IEC2014 Annex A skin table; ANSI2014 Tab. 7 (all from memory)",
       "confidence": "from memory",
       "note": "Same values as the eye UV rows (H-E-UV-*), skin aperture 3.5 mm; exception below for 315-400 nm beyond 1e3 s."
@@ -1173,6 +1220,7 @@ export const ICNIRP2013_TABLE: RuleSetTable = {
       "expr": "10",
       "unit": "W/m^2",
       "effect": "skin UV-A",
+      "effectClass": "skin-unstated",
       "source": "ICNIRP2013; IEC2014 Annex A skin table; ANSI2014 Tab. 7 (all from memory)",
       "confidence": "from memory, uncertain",
       "conservative_alt": "1e4/t",
@@ -1192,6 +1240,7 @@ export const ICNIRP2013_TABLE: RuleSetTable = {
       "expr": "2e11",
       "unit": "W/m^2",
       "effect": "skin thermal",
+      "effectClass": "skin-thermal",
       "source": "ICNIRP2013; IEC2014 Annex A skin table; ANSI2014 Tab. 7 (all from memory); same value as EU Tab. 2.2/2.4 (EU-FR, read)",
       "confidence": "from memory, uncertain",
       "note": "Sub-nanosecond skin limits not verified for ICNIRP 2013; kept as EU (read)."
@@ -1210,6 +1259,7 @@ export const ICNIRP2013_TABLE: RuleSetTable = {
       "expr": "200*CA",
       "unit": "J/m^2",
       "effect": "skin thermal",
+      "effectClass": "skin-thermal",
       "source": "ICNIRP2013; IEC2014 Annex A skin table; ANSI2014 Tab. 7 (all from memory); same value as EU Tab. 2.2/2.4 (EU-FR, read)",
       "confidence": "from memory"
     },
@@ -1227,6 +1277,7 @@ export const ICNIRP2013_TABLE: RuleSetTable = {
       "expr": "1.1e4*CA*t^0.25",
       "unit": "J/m^2",
       "effect": "skin thermal",
+      "effectClass": "skin-thermal",
       "source": "ICNIRP2013; IEC2014 Annex A skin table; ANSI2014 Tab. 7 (all from memory); same value as EU Tab. 2.2/2.4 (EU-FR, read)",
       "confidence": "from memory"
     },
@@ -1244,6 +1295,7 @@ export const ICNIRP2013_TABLE: RuleSetTable = {
       "expr": "2e3*CA",
       "unit": "W/m^2",
       "effect": "skin thermal",
+      "effectClass": "skin-thermal",
       "source": "ICNIRP2013; IEC2014 Annex A skin table; ANSI2014 Tab. 7 (all from memory); same value as EU Tab. 2.2/2.4 (EU-FR, read)",
       "confidence": "from memory"
     },
@@ -1261,6 +1313,7 @@ export const ICNIRP2013_TABLE: RuleSetTable = {
       "expr": "2e11*CA",
       "unit": "W/m^2",
       "effect": "skin thermal",
+      "effectClass": "skin-thermal",
       "source": "ICNIRP2013; IEC2014 Annex A skin table; ANSI2014 Tab. 7 (all from memory); same value as EU Tab. 2.2/2.4 (EU-FR, read)",
       "confidence": "from memory, uncertain",
       "note": "Sub-nanosecond skin limits not verified for ICNIRP 2013; kept as EU (read)."
@@ -1279,6 +1332,7 @@ export const ICNIRP2013_TABLE: RuleSetTable = {
       "expr": "200*CA",
       "unit": "J/m^2",
       "effect": "skin thermal",
+      "effectClass": "skin-thermal",
       "source": "ICNIRP2013; IEC2014 Annex A skin table; ANSI2014 Tab. 7 (all from memory); same value as EU Tab. 2.2/2.4 (EU-FR, read)",
       "confidence": "from memory"
     },
@@ -1296,6 +1350,7 @@ export const ICNIRP2013_TABLE: RuleSetTable = {
       "expr": "1.1e4*CA*t^0.25",
       "unit": "J/m^2",
       "effect": "skin thermal",
+      "effectClass": "skin-thermal",
       "source": "ICNIRP2013; IEC2014 Annex A skin table; ANSI2014 Tab. 7 (all from memory); same value as EU Tab. 2.2/2.4 (EU-FR, read)",
       "confidence": "from memory"
     },
@@ -1313,6 +1368,7 @@ export const ICNIRP2013_TABLE: RuleSetTable = {
       "expr": "2e3*CA",
       "unit": "W/m^2",
       "effect": "skin thermal",
+      "effectClass": "skin-thermal",
       "source": "ICNIRP2013; IEC2014 Annex A skin table; ANSI2014 Tab. 7 (all from memory); same value as EU Tab. 2.2/2.4 (EU-FR, read)",
       "confidence": "from memory"
     },
@@ -1330,6 +1386,7 @@ export const ICNIRP2013_TABLE: RuleSetTable = {
       "expr": "eye",
       "unit": "-",
       "effect": "skin thermal",
+      "effectClass": "skin-thermal",
       "source": "ICNIRP2013; IEC2014 Annex A skin table; ANSI2014 Tab. 7 (all from memory)",
       "confidence": "from memory",
       "note": "Same values as the eye far-IR rows (H-E-IR*), including their conservative_alt below 1 ns; skin aperture 3.5 mm (11 mm above 1e5 nm)."
@@ -1479,12 +1536,14 @@ export const ICNIRP2013_TABLE: RuleSetTable = {
       {
         "n": 1,
         "text": "Single-pulse limit for every pulse (all wavelengths).",
+        "cite": "ICNIRP2013; IEC2014 4.3 f) rule 1 (from memory)",
         "source": "ICNIRP2013; IEC2014 4.3 f); ANSI2014 (from memory)",
         "confidence": "from memory"
       },
       {
         "n": 2,
         "text": "Average-power (total-dose) limit: the exposure of the train (or any sub-group) over its duration T must not exceed the limit for T. For 400-1400 nm T need not exceed T2; beyond 1400 nm 10 s.",
+        "cite": "ICNIRP2013; IEC2014 4.3 f) rule 2 (from memory)",
         "source": "ICNIRP2013; IEC2014; ANSI2014 (from memory)",
         "confidence": "from memory"
       },
@@ -1495,7 +1554,8 @@ export const ICNIRP2013_TABLE: RuleSetTable = {
         "confidence": "read"
       }
     ],
-    "CP": {
+    "cp": {
+      "expr": "N^(-0.25)",
       "pieces": [
         {
           "when": "alpha <= 5",
@@ -1518,13 +1578,45 @@ export const ICNIRP2013_TABLE: RuleSetTable = {
           "expr": "0.2"
         }
       ],
-      "applies_to": "pulse durations < 0.25 s; N counted within min(T, T2); pulses within T_i counted as one",
+      "conservative_alt": "N^(-0.25)",
+      "appliesTo": ["retina-thermal"],
+      "scopeNote": "C_P applies only to retinal thermal limits (400-1400 nm, eye); ILSC2019 (read)",
+      "pulsesShorterThan_s": "0.25",
       "source": "IEC2014 4.3 f) 3) C5; ICNIRP2013 CP (from memory)",
       "confidence": "from memory, uncertain",
-      "conservative_alt": "N^(-0.25)",
-      "note": "conservative_alt is the EU form (no alpha dependence, no cap on N). Until verified, use CP = N^(-0.25) for every alpha and N: it is never larger than the piecewise form, hence never less protective."
+      "note": "Applies to pulse durations < 0.25 s; N counted within min(T, T2); pulses within T_i counted as one. conservative_alt is the EU form (no alpha dependence, no cap on N). Until verified, use CP = N^(-0.25) for every alpha and N: it is never larger than the piecewise form, hence never less protective. Scope (retinal thermal only): ILSC2019 (read)."
     },
-    "ANSI_difference": "ANSI Z136.1-2014 also restricts CP to retinal thermal exposure; its caps on n and the handling of n within T_i may differ from IEC - not reproduced (memory, unverified).",
-    "T_i_ref": "factors.T_i"
+    "grouping": {
+      "factor": "T_i",
+      "edgeSide": "upper",
+      "source": "ICNIRP2013; IEC2014 4.3 f) (from memory): pulses inside T_i are summed and counted as one; no T_i below 400 nm (UV doses simply add, rule 2)",
+      "confidence": "from memory"
+    },
+    "countingWindows": [
+      {
+        "band_nm": [180, 400],
+        "source": "ICNIRP2013; IEC2014 4.3 f) (from memory): no T2 below 400 nm",
+        "confidence": "from memory"
+      },
+      {
+        "band_nm": [400, 1400],
+        "cap": { "factor": "T2" },
+        "source": "ICNIRP2013; IEC2014 4.3 f) (from memory): N within min(T, T2)",
+        "confidence": "from memory"
+      },
+      {
+        "band_nm": [1400, 1000000.0],
+        "cap": { "seconds": "10", "label": "above 1400 nm" },
+        "source": "ICNIRP2013; IEC2014 4.3 f) (from memory): beyond 1400 nm 10 s",
+        "confidence": "from memory"
+      }
+    ],
+    "notes": [
+      {
+        "text": "ANSI Z136.1-2014 also restricts CP to retinal thermal exposure; its caps on n and the handling of n within T_i may differ from IEC - not reproduced (memory, unverified).",
+        "source": "ANSI2014 (from memory)",
+        "confidence": "from memory, uncertain"
+      }
+    ]
   }
 };

@@ -19,6 +19,8 @@ export interface DocumentRequest {
   readonly units: 'SI' | 'ANSI';
   /** The officer may raise the door notice's signal word to DANGER (domain 5.1). */
   readonly signalWord?: 'DANGER';
+  /** Door notice: the door of the room plan it is for (default the plan's first door). */
+  readonly entranceId?: string;
 }
 
 export interface SiteDocumentRequest {

@@ -1,13 +1,6 @@
 /** Contract of the 'exchange' area: JSON export/import, CSV inventory import, demo data. */
 import type { CsvExistingChoice, CsvImportReport, Id, ImportAdmission, ImportSummary, Site } from './records.js';
 
-export interface TextFile {
-  /** Suggested file name, e.g. "beamwarden-room-B2.14-2026-12-01.json". */
-  readonly fileName: string;
-  readonly mime: string;
-  readonly text: string;
-}
-
 /** An export file: the JSON document gzip-compressed (`.json.gz`), base64 for the trip over IPC/HTTP. */
 export interface ExportFile {
   readonly fileName: string;

@@ -7,8 +7,8 @@ import { EmptySchema } from '../schemas/common.js';
 export const appTable: AreaTable<AppHandlers, ApiContext> = {
   'app-info': {
     input: EmptySchema,
-    run: (_args, ctx) => {
-      const trust = ctx.store.trustList();
+    run: async (_args, ctx) => {
+      const trust = await ctx.store.trustList();
       return {
       name: 'Beamwarden',
       version: ctx.version,

@@ -24,9 +24,9 @@ export const exchangeTable: AreaTable<ExchangeHandlers, ApiContext> = {
   'export-json': {
     input: z.strictObject({ kind: z.enum(['site', 'room', 'assessment']), id: IdSchema }),
     run: async ({ kind, id }, { store }) => {
-      const doc = kind === 'site' ? store.exportSite(id) : kind === 'room' ? store.exportRoom(id) : store.exportAssessment(id);
+      const doc = await (kind === 'site' ? store.exportSite(id) : kind === 'room' ? store.exportRoom(id) : store.exportAssessment(id));
       const label =
-        kind === 'site' ? store.getSite(id).name : kind === 'room' ? store.getRoom(id).code : `assessment-${id.slice(0, 8)}`;
+        kind === 'site' ? (await store.getSite(id)).name : kind === 'room' ? (await store.getRoom(id)).code : `assessment-${id.slice(0, 8)}`;
       const { gz, jsonBytes } = await exportFileBytes(doc);
       return {
         fileName: `beamwarden-${kind}-${fileSafe(label)}-${doc.exportedAt.slice(0, 10)}.json.gz`,

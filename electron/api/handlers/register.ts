@@ -21,20 +21,17 @@ import { ByIdSchema, patchOf } from '../schemas/common.js';
 export const registerTable: AreaTable<RegisterHandlers, ApiContext> = {
   'register-overview': {
     input: z.strictObject({ dueBy: CalendarDateSchema }),
-    run: ({ dueBy }, { store }) => ({
-      sites: store.listSites().map((site) => ({
-        site,
-        rooms: store.listRooms(site.id).map((room) => ({
-          room,
-          installations: store.listInstallations(room.id),
-          assessments: store.listAssessments(room.id),
-        })),
-        eyewear: store.listEyewear(site.id),
-      })),
-      people: store.listPeople(),
-      dueForReview: store.listDueForReview(dueBy),
-      dueBy,
-    }),
+    run: async ({ dueBy }, { store }) => {
+      const sites = [];
+      for (const site of await store.listSites()) {
+        const rooms = [];
+        for (const room of await store.listRooms(site.id)) {
+          rooms.push({ room, installations: await store.listInstallations(room.id), assessments: await store.listAssessments(room.id) });
+        }
+        sites.push({ site, rooms, eyewear: await store.listEyewear(site.id) });
+      }
+      return { sites, people: await store.listPeople(), dueForReview: await store.listDueForReview(dueBy), dueBy };
+    },
   },
 
   'site-create': { input: SiteDraftSchema, run: (a, { store }) => store.createSite(a) },

@@ -20,11 +20,11 @@ export const safekeepingTable: AreaTable<SafekeepingHandlers, ApiContext> = {
       const reopen = ctx.openStore;
       if (!reopen) throw new ApiFailure('conflict', 'This window cannot restore a backup itself: close Beamwarden and run "npm run restore".');
       // Close first: restore never replaces a database that this app is still writing.
-      ctx.store.close();
+      await ctx.store.close();
       try {
         return await restoreBackup({ from: path, to: ctx.databasePath, ...(ctx.nativeBinding !== undefined ? { nativeBinding: ctx.nativeBinding } : {}) });
       } finally {
-        ctx.store = reopen();
+        ctx.store = await reopen();
       }
     },
   },

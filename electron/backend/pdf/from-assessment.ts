@@ -4,8 +4,8 @@ import type { DocumentInput } from './document-input.js';
 import { emergencyContactFor } from '../records/emergency-contact.js';
 
 /** The officer named on the documents: the signer when signed, else the site's LSO in the register. */
-function officerFor(store: RecordStore, revision: Revision): Pick<Person, 'name' | 'role' | 'email' | 'phone'> {
-  const people = store.listPeople();
+async function officerFor(store: RecordStore, revision: Revision): Promise<Pick<Person, 'name' | 'role' | 'email' | 'phone'>> {
+  const people = await store.listPeople();
   const signerId = revision.signature?.personId ?? null;
   const signer = signerId === null ? undefined : people.find((p) => p.id === signerId);
   if (signer) return signer;
@@ -20,22 +20,26 @@ export interface FromAssessmentOptions {
   readonly revisionId?: string;
 }
 
-export function documentInputFromAssessment(store: RecordStore, assessmentId: string, options: FromAssessmentOptions = {}): DocumentInput {
-  const assessment = store.getAssessment(assessmentId);
-  const revision = options.revisionId === undefined ? assessment.current : store.getRevision(options.revisionId);
+export async function documentInputFromAssessment(store: RecordStore, assessmentId: string, options: FromAssessmentOptions = {}): Promise<DocumentInput> {
+  const assessment = await store.getAssessment(assessmentId);
+  const revision = options.revisionId === undefined ? assessment.current : await store.getRevision(options.revisionId);
   if (revision.assessmentId !== assessment.id) {
     throw new RecordError('invalid', `revision ${options.revisionId ?? ''} belongs to another assessment`, [{ path: 'revisionId', problem: 'belongs to another assessment' }]);
   }
-  const room = store.getRoom(assessment.roomId);
-  const site = store.getSite(room.siteId);
-  const eyewear = store.listEyewear(site.id);
+  const room = await store.getRoom(assessment.roomId);
+  const site = await store.getSite(room.siteId);
+  const eyewear = await store.listEyewear(site.id);
+  const installations = await store.listInstallations(room.id);
+  const officer = await officerFor(store, revision);
+  const trustAnchor = revision.signature ? (await store.trustList()).anchorFingerprint : null;
   const sig = revision.signature;
+  const coSigners = sig ? await store.listCoSignatures(revision.id) : [];
   return {
     site: { name: site.name, building: site.building, address: site.address },
     room: { code: room.code, name: room.name, responsiblePerson: room.responsiblePerson, contact: room.contact },
-    officer: officerFor(store, revision),
+    officer,
     emergencyContact: emergencyContactFor(room.notes, site.notes),
-    installations: store.listInstallations(room.id).map((i) => ({
+    installations: installations.map((i) => ({
       id: i.id,
       laserType: i.laserType,
       maker: i.maker,
@@ -66,8 +70,8 @@ export function documentInputFromAssessment(store: RecordStore, assessmentId: st
             fingerprint: sig.fingerprint,
             keyId: sig.keyId,
             keyTrusted: sig.keyTrusted !== false,
-            trustAnchor: store.trustList().anchorFingerprint,
-            coSigners: store.listCoSignatures(revision.id).map((c) => ({ name: c.name, role: c.role, signedAt: c.signedAt, statement: c.statement, keyFingerprint: c.keyFingerprint, keyTrusted: c.keyTrusted })),
+            trustAnchor,
+            coSigners: coSigners.map((c) => ({ name: c.name, role: c.role, signedAt: c.signedAt, statement: c.statement, keyFingerprint: c.keyFingerprint, keyTrusted: c.keyTrusted })),
           },
   };
 }

@@ -23,10 +23,10 @@ export async function renderSiteDoorNotices(store: RecordStore, siteId: string, 
   const rooms: string[] = [];
   const drafts = new Set<number>();
   let first: TDocumentDefinitions | null = null;
-  for (const room of store.listRooms(siteId)) {
-    const assessment = store.listAssessments(room.id)[0];
+  for (const room of await store.listRooms(siteId)) {
+    const assessment = (await store.listAssessments(room.id))[0];
     if (assessment === undefined) continue;
-    const doc = documentInputFromAssessment(store, assessment.id);
+    const doc = await documentInputFromAssessment(store, assessment.id);
     let fit = 0;
     let dd = doorNoticeDefinition(doc, opts, fit);
     while (fit < NOTICE_FIT_LEVELS - 1 && pdfPageCount(await renderPdf(dd)) > 1) dd = doorNoticeDefinition(doc, opts, ++fit);

@@ -14,14 +14,14 @@ import type { RoomResult } from '../../../core/model/results.js';
 import { AssessmentContentSchema, SignOffSchema } from '../schemas/records.js';
 import { RoomResultSchema } from '../schemas/results.js';
 import { canonicalJson } from './canonical.js';
-import { notFound, parseOrThrow, translateSqliteError, type StoreContext } from './context.js';
+import { inTransaction, notFound, parseOrThrow, type StoreContext } from './context.js';
+import { named } from './named-params.js';
 import { diffValues } from './diff.js';
 import { getInstallation, getPerson, getRoom, roomInputFromRegister } from './register.js';
 import { fingerprintOf, keyIdOf, linkOf, sha256Hex, verifyStatement, type SignedStatement } from './signing.js';
 import { signAsPerson, type Signer } from './personal-keys.js';
 import { readTrustList, shortKeyFingerprint, trustOf } from './trust-list.js';
 import { appendSigningLog, signingLogFor } from './signing-log.js';
-import { missingProtections } from './protections.js';
 import { checkCoSignatures } from './co-signature-checks.js';
 import {
   NON_BEAM_HAZARD_KINDS,
@@ -106,13 +106,13 @@ function signatureFromRow(ctx: StoreContext, r: SignatureRow): Signature {
   };
 }
 
-function getSignatureRow(ctx: StoreContext, revisionId: Id): SignatureRow | undefined {
-  return ctx.sql(SIGNATURE_SELECT).get(revisionId) as SignatureRow | undefined;
+async function getSignatureRow(ctx: StoreContext, revisionId: Id): Promise<SignatureRow | undefined> {
+  return await ctx.q.get(SIGNATURE_SELECT, revisionId) as SignatureRow | undefined;
 }
 
 /** What a revision and its history-list summary share: the row's fields and its signature. */
-function revisionHeaderFromRow(ctx: StoreContext, r: RevisionRow): Omit<Revision, 'content' | 'results'> {
-  const sig = getSignatureRow(ctx, r.id);
+async function revisionHeaderFromRow(ctx: StoreContext, r: RevisionRow): Promise<Omit<Revision, 'content' | 'results'>> {
+  const sig = await getSignatureRow(ctx, r.id);
   return {
     id: r.id,
     assessmentId: r.assessment_id,
@@ -126,28 +126,28 @@ function revisionHeaderFromRow(ctx: StoreContext, r: RevisionRow): Omit<Revision
   };
 }
 
-function revisionFromRow(ctx: StoreContext, r: RevisionRow): Revision {
+async function revisionFromRow(ctx: StoreContext, r: RevisionRow): Promise<Revision> {
   const content = parseOrThrow(AssessmentContentSchema, JSON.parse(r.content_json), `Stored content of revision ${r.revision_no}`);
   const results = storedResults(r.results_z);
-  return { ...revisionHeaderFromRow(ctx, r), content, results };
+  return { ...await revisionHeaderFromRow(ctx, r), content, results };
 }
 
-function getAssessmentRow(ctx: StoreContext, id: Id): AssessmentRow {
-  const row = ctx.sql('SELECT * FROM assessment WHERE id = ?').get(id) as AssessmentRow | undefined;
+async function getAssessmentRow(ctx: StoreContext, id: Id): Promise<AssessmentRow> {
+  const row = await ctx.q.get('SELECT * FROM assessment WHERE id = ?', id) as AssessmentRow | undefined;
   if (!row) throw notFound('assessment', id);
   return row;
 }
 
-function newestRevisionRow(ctx: StoreContext, assessmentId: Id): RevisionRow {
-  const r = ctx.sql('SELECT * FROM revision WHERE assessment_id = ? ORDER BY revision_no DESC LIMIT 1').get(assessmentId) as
+async function newestRevisionRow(ctx: StoreContext, assessmentId: Id): Promise<RevisionRow> {
+  const r = await ctx.q.get('SELECT * FROM revision WHERE assessment_id = ? ORDER BY revision_no DESC LIMIT 1', assessmentId) as
     | RevisionRow
     | undefined;
   if (!r) throw new RecordError('corrupt-database', `Assessment ${assessmentId} has no revision`);
   return r;
 }
 
-function getRevisionRow(ctx: StoreContext, revisionId: Id): RevisionRow {
-  const r = ctx.sql('SELECT * FROM revision WHERE id = ?').get(revisionId) as RevisionRow | undefined;
+async function getRevisionRow(ctx: StoreContext, revisionId: Id): Promise<RevisionRow> {
+  const r = await ctx.q.get('SELECT * FROM revision WHERE id = ?', revisionId) as RevisionRow | undefined;
   if (!r) throw notFound('revision', revisionId);
   return r;
 }
@@ -214,20 +214,20 @@ function addOneYear(isoTimestamp: string): CalendarDate {
  * for the officer to go through (domain reference section 7), and a review date one year ahead
  * (institutional practice is annual review plus review on any change — domain reference 6.3).
  */
-export function newAssessmentContent(ctx: StoreContext, roomId: Id, installationId: Id | null = null): AssessmentContent {
-  const room = getRoom(ctx, roomId);
-  const registerInput = roomInputFromRegister(ctx, roomId);
+export async function newAssessmentContent(ctx: StoreContext, roomId: Id, installationId: Id | null = null): Promise<AssessmentContent> {
+  const room = await getRoom(ctx, roomId);
+  const registerInput = await roomInputFromRegister(ctx, roomId);
   let input: RoomInput = registerInput;
   let title = `Laser hazard evaluation, room ${room.code}${room.name ? ` (${room.name})` : ''}`;
   if (installationId !== null) {
-    const inst = getInstallation(ctx, installationId);
+    const inst = await getInstallation(ctx, installationId);
     if (inst.roomId !== roomId) throw new RecordError('invalid', `Installation ${installationId} is not in room ${room.code}`);
     input = { ...registerInput, lasers: [inst.laser] };
     title = `Laser hazard evaluation, ${inst.laser.name}, room ${room.code}`;
   }
   // The officer's decisions carry over: the room's last signed assessment (else its newest) gives
   // the control decisions, non-beam hazards and operating states; the officer reviews them again.
-  const previous = previousContentOfRoom(ctx, roomId, installationId);
+  const previous = await previousContentOfRoom(ctx, roomId, installationId);
   return {
     title,
     input,
@@ -242,14 +242,15 @@ export function newAssessmentContent(ctx: StoreContext, roomId: Id, installation
 }
 
 /** Content of the room's last signed revision (or newest revision) of the same scope, if any. */
-function previousContentOfRoom(ctx: StoreContext, roomId: Id, installationId: Id | null): AssessmentContent | null {
-  const row = ctx
-    .sql(
-      `SELECT r.content_json FROM revision r JOIN assessment a ON a.id = r.assessment_id
-        WHERE a.room_id = ? AND a.installation_id IS ?
-        ORDER BY (r.status = 'signed') DESC, r.updated_at DESC, r.revision_no DESC LIMIT 1`,
-    )
-    .get(roomId, installationId) as { content_json: string } | undefined;
+async function previousContentOfRoom(ctx: StoreContext, roomId: Id, installationId: Id | null): Promise<AssessmentContent | null> {
+  // `IS ?` with a bound NULL is not common SQL: the scope test is written out for each case.
+  const scope = installationId === null ? 'a.installation_id IS NULL' : 'a.installation_id = ?';
+  const row = await ctx.q.get<{ content_json: string }>(
+    `SELECT r.content_json FROM revision r JOIN assessment a ON a.id = r.assessment_id
+        WHERE a.room_id = ? AND ${scope}
+        ORDER BY (CASE WHEN r.status = 'signed' THEN 1 ELSE 0 END) DESC, r.updated_at DESC, r.revision_no DESC LIMIT 1`,
+    ...(installationId === null ? [roomId] : [roomId, installationId]),
+  );
   if (!row) return null;
   const parsed = AssessmentContentSchema.safeParse(JSON.parse(row.content_json));
   return parsed.success ? parsed.data : null;
@@ -307,24 +308,24 @@ function evaluate(ctx: StoreContext, input: RoomInput): RoomResult {
 
 // ---------------------------------------------------------------- queries
 
-export function getRevision(ctx: StoreContext, revisionId: Id): Revision {
-  return revisionFromRow(ctx, getRevisionRow(ctx, revisionId));
+export async function getRevision(ctx: StoreContext, revisionId: Id): Promise<Revision> {
+  return await revisionFromRow(ctx, await getRevisionRow(ctx, revisionId));
 }
 
-export function getAssessment(ctx: StoreContext, id: Id): Assessment {
-  const a = getAssessmentRow(ctx, id);
+export async function getAssessment(ctx: StoreContext, id: Id): Promise<Assessment> {
+  const a = await getAssessmentRow(ctx, id);
   return {
     id: a.id,
     roomId: a.room_id,
     installationId: a.installation_id,
     createdAt: a.created_at,
-    ...currentWithVersion(ctx, id),
+    ...await currentWithVersion(ctx, id),
   };
 }
 
-function currentWithVersion(ctx: StoreContext, id: Id): { current: Revision; version: number } {
-  const row = newestRevisionRow(ctx, id);
-  return { current: revisionFromRow(ctx, row), version: row.version };
+async function currentWithVersion(ctx: StoreContext, id: Id): Promise<{ current: Revision; version: number }> {
+  const row = await newestRevisionRow(ctx, id);
+  return { current: await revisionFromRow(ctx, row), version: row.version };
 }
 
 const SUMMARY_SELECT = `
@@ -367,33 +368,35 @@ const summaryFromRow = (ctx: StoreContext, r: SummaryRow): AssessmentSummary => 
   inForce: r.in_force_no === null ? null : { revisionNo: r.in_force_no, signedAt: r.signed_at ?? '', reviewBy: r.in_force_review_by },
 });
 
-export function listAssessments(ctx: StoreContext, roomId: Id): AssessmentSummary[] {
-  getRoom(ctx, roomId);
-  return (ctx.sql(`${SUMMARY_SELECT} WHERE a.room_id = ? ORDER BY r.updated_at DESC, a.id`).all(roomId) as SummaryRow[]).map((row) => summaryFromRow(ctx, row));
+export async function listAssessments(ctx: StoreContext, roomId: Id): Promise<AssessmentSummary[]> {
+  await getRoom(ctx, roomId);
+  return (await ctx.q.all(`${SUMMARY_SELECT} WHERE a.room_id = ? ORDER BY r.updated_at DESC, a.id`, roomId) as SummaryRow[]).map((row) => summaryFromRow(ctx, row));
 }
 
 /** Every assessment of the database (oldest first), for a whole-database check. */
-export function listAllAssessments(ctx: StoreContext): AssessmentSummary[] {
-  return (ctx.sql(`${SUMMARY_SELECT} ORDER BY a.created_at, a.id`).all() as SummaryRow[]).map((row) => summaryFromRow(ctx, row));
+export async function listAllAssessments(ctx: StoreContext): Promise<AssessmentSummary[]> {
+  return (await ctx.q.all(`${SUMMARY_SELECT} ORDER BY a.created_at, a.id`) as SummaryRow[]).map((row) => summaryFromRow(ctx, row));
 }
 
-export function listDueForReview(ctx: StoreContext, date: CalendarDate): AssessmentSummary[] {
+export async function listDueForReview(ctx: StoreContext, date: CalendarDate): Promise<AssessmentSummary[]> {
   if (!/^\d{4}-\d{2}-\d{2}$/.test(date)) throw new RecordError('invalid', `date: must be a calendar date YYYY-MM-DD (got "${date}")`);
   return (
-    ctx.sql(`${SUMMARY_SELECT} WHERE r.review_by IS NOT NULL AND r.review_by <= ? ORDER BY r.review_by, a.id`).all(date) as SummaryRow[]
+    await ctx.q.all(`${SUMMARY_SELECT} WHERE r.review_by IS NOT NULL AND r.review_by <= ? ORDER BY r.review_by, a.id`, date) as SummaryRow[]
   ).map((row) => summaryFromRow(ctx, row));
 }
 
-export function listRevisions(ctx: StoreContext, assessmentId: Id): RevisionSummary[] {
-  getAssessmentRow(ctx, assessmentId);
-  const rows = ctx.sql('SELECT * FROM revision WHERE assessment_id = ? ORDER BY revision_no').all(assessmentId) as RevisionRow[];
+export async function listRevisions(ctx: StoreContext, assessmentId: Id): Promise<RevisionSummary[]> {
+  await getAssessmentRow(ctx, assessmentId);
+  const rows = await ctx.q.all('SELECT * FROM revision WHERE assessment_id = ? ORDER BY revision_no', assessmentId) as RevisionRow[];
   // Content and results stay encoded: a history list needs neither.
-  return rows.map((r) => ({ ...revisionHeaderFromRow(ctx, r), title: r.title, reviewBy: r.review_by }));
+  const out: RevisionSummary[] = [];
+  for (const r of rows) out.push({ ...(await revisionHeaderFromRow(ctx, r)), title: r.title, reviewBy: r.review_by });
+  return out;
 }
 
-export function compareRevisions(ctx: StoreContext, fromId: Id, toId: Id): FieldDifference[] {
-  const a = getRevision(ctx, fromId);
-  const b = getRevision(ctx, toId);
+export async function compareRevisions(ctx: StoreContext, fromId: Id, toId: Id): Promise<FieldDifference[]> {
+  const a = await getRevision(ctx, fromId);
+  const b = await getRevision(ctx, toId);
   if (a.assessmentId !== b.assessmentId) throw new RecordError('invalid', 'Both revisions must belong to the same assessment');
   return diffValues(
     { content: a.content, results: a.results, calculatedWith: a.calculatedWith },
@@ -408,34 +411,31 @@ const INSERT_REVISION = `INSERT INTO revision (id, assessment_id, revision_no, s
   VALUES (@id, @assessment_id, @revision_no, @status, @content_json, @results_z, @calculated_with, @based_on,
   @created_at, @updated_at, @title, @review_by, @version)`;
 
-export function insertRevisionRow(ctx: StoreContext, row: RevisionRow): void {
-  ctx.sql(INSERT_REVISION).run(row);
+export async function insertRevisionRow(ctx: StoreContext, row: RevisionRow): Promise<void> {
+  await ctx.q.run(...named(INSERT_REVISION, row));
 }
 
-function write<T>(ctx: StoreContext, what: string, fn: () => T): T {
-  try {
-    return ctx.db.transaction(fn).immediate();
-  } catch (e) {
-    throw translateSqliteError(e, what, ctx.db.name);
-  }
+/** One write transaction; `fn` gets the transaction's context and speaks only through it. */
+function write<T>(ctx: StoreContext, what: string, fn: (ctx: StoreContext) => Promise<T>): Promise<T> {
+  return inTransaction(ctx, what, fn);
 }
 
-export function createAssessment(
+export async function createAssessment(
   ctx: StoreContext,
   args: { roomId: Id; installationId?: Id | null; content: AssessmentContent },
-): Assessment {
+): Promise<Assessment> {
   const content = normaliseContent(args.content);
-  const room = getRoom(ctx, args.roomId);
+  const room = await getRoom(ctx, args.roomId);
   const installationId = args.installationId ?? null;
-  if (installationId !== null && getInstallation(ctx, installationId).roomId !== room.id) {
+  if (installationId !== null && (await getInstallation(ctx, installationId)).roomId !== room.id) {
     throw new RecordError('invalid', `installationId: installation ${installationId} is not in room ${room.code}`);
   }
   const results = evaluate(ctx, content.input);
   const now = ctx.now();
   const id = ctx.newId();
-  write(ctx, 'Assessment', () => {
-    ctx.sql('INSERT INTO assessment (id, room_id, installation_id, created_at) VALUES (?, ?, ?, ?)').run(id, room.id, installationId, now);
-    insertRevisionRow(ctx, {
+  await write(ctx, 'Assessment', async (ctx) => {
+    await ctx.q.run('INSERT INTO assessment (id, room_id, installation_id, created_at) VALUES (?, ?, ?, ?)', id, room.id, installationId, now);
+    await insertRevisionRow(ctx, {
       id: ctx.newId(),
       assessment_id: id,
       revision_no: 1,
@@ -450,9 +450,9 @@ export function createAssessment(
       review_by: content.reviewBy,
       version: 1,
     });
-    ctx.audit('created', 'assessment', id, content.title);
+    await ctx.audit('created', 'assessment', id, content.title);
   });
-  return getAssessment(ctx, id);
+  return await getAssessment(ctx, id);
 }
 
 /**
@@ -471,11 +471,11 @@ function resultsFor(ctx: StoreContext, content: AssessmentContent, previous: Rev
  * Refuse a save that started from an older state than the newest revision (another window, host
  * or officer saved or signed meanwhile): nothing is overwritten, and the officer is told when.
  */
-export function assertNotStale(ctx: StoreContext, id: Id, expected: SaveBase | undefined): void {
+export async function assertNotStale(ctx: StoreContext, id: Id, expected: SaveBase | undefined): Promise<void> {
   if (expected === undefined) return;
-  const current = newestRevisionRow(ctx, id);
+  const current = await newestRevisionRow(ctx, id);
   if (current.id === expected.revisionId && current.version === expected.version) return;
-  const signed = current.status !== 'draft' ? getSignatureRow(ctx, current.id) : undefined;
+  const signed = current.status !== 'draft' ? await getSignatureRow(ctx, current.id) : undefined;
   const at = signed?.signed_at ?? current.updated_at;
   const what = signed ? `signed by ${signed.name}` : `saved as revision ${current.revision_no}`;
   throw new RecordError(
@@ -484,29 +484,25 @@ export function assertNotStale(ctx: StoreContext, id: Id, expected: SaveBase | u
   );
 }
 
-export function saveAssessment(ctx: StoreContext, id: Id, rawContent: AssessmentContent, expected?: SaveBase): Assessment {
+export async function saveAssessment(ctx: StoreContext, id: Id, rawContent: AssessmentContent, expected?: SaveBase): Promise<Assessment> {
   const content = normaliseContent(rawContent);
-  getAssessmentRow(ctx, id);
-  assertNotStale(ctx, id, expected);
-  const before = newestRevisionRow(ctx, id);
+  await getAssessmentRow(ctx, id);
+  await assertNotStale(ctx, id, expected);
+  const before = await newestRevisionRow(ctx, id);
   const resultsZ = resultsFor(ctx, content, before);
   // Same bytes as stored in the draft: leave the column alone rather than rewrite the blob.
   const draftResults = before.status === 'draft' && resultsZ === before.results_z ? null : resultsZ;
   const now = ctx.now();
-  write(ctx, 'Assessment', () => {
-    assertNotStale(ctx, id, expected ?? { revisionId: before.id, version: before.version });
-    const current = newestRevisionRow(ctx, id);
+  await write(ctx, 'Assessment', async (ctx) => {
+    await assertNotStale(ctx, id, expected ?? { revisionId: before.id, version: before.version });
+    const current = await newestRevisionRow(ctx, id);
     if (current.status === 'draft') {
-      ctx
-        .sql(
-          `UPDATE revision SET content_json = ?, results_z = coalesce(?, results_z), calculated_with = ?, updated_at = ?, title = ?, review_by = ?,
-           version = version + 1 WHERE id = ? AND status = 'draft'`,
-        )
-        .run(JSON.stringify(content), draftResults, ctx.calculatedWith, now, content.title, content.reviewBy, current.id);
-      ctx.audit('saved', 'revision', current.id, `revision ${current.revision_no}`);
+      await ctx.q.run(`UPDATE revision SET content_json = ?, results_z = coalesce(?, results_z), calculated_with = ?, updated_at = ?, title = ?, review_by = ?,
+           version = version + 1 WHERE id = ? AND status = 'draft'`, JSON.stringify(content), draftResults, ctx.calculatedWith, now, content.title, content.reviewBy, current.id);
+      await ctx.audit('saved', 'revision', current.id, `revision ${current.revision_no}`);
     } else {
       const revId = ctx.newId();
-      insertRevisionRow(ctx, {
+      await insertRevisionRow(ctx, {
         id: revId,
         assessment_id: id,
         revision_no: current.revision_no + 1,
@@ -521,20 +517,20 @@ export function saveAssessment(ctx: StoreContext, id: Id, rawContent: Assessment
         review_by: content.reviewBy,
         version: 1,
       });
-      ctx.audit('revised', 'revision', revId, `revision ${current.revision_no + 1} based on ${current.revision_no}`);
+      await ctx.audit('revised', 'revision', revId, `revision ${current.revision_no + 1} based on ${current.revision_no}`);
     }
   });
-  return getAssessment(ctx, id);
+  return await getAssessment(ctx, id);
 }
 
-export function discardDraft(ctx: StoreContext, id: Id): void {
-  getAssessmentRow(ctx, id);
-  write(ctx, 'Draft', () => {
-    const current = newestRevisionRow(ctx, id);
+export async function discardDraft(ctx: StoreContext, id: Id): Promise<void> {
+  await getAssessmentRow(ctx, id);
+  await write(ctx, 'Draft', async (ctx) => {
+    const current = await newestRevisionRow(ctx, id);
     if (current.status !== 'draft') throw new RecordError('conflict', `Assessment ${id} has no open draft (revision ${current.revision_no} is ${current.status})`);
-    ctx.sql("DELETE FROM revision WHERE id = ? AND status = 'draft'").run(current.id);
-    if (current.revision_no === 1) ctx.sql('DELETE FROM assessment WHERE id = ?').run(id);
-    ctx.audit('discarded', 'revision', current.id, `revision ${current.revision_no}`);
+    await ctx.q.run("DELETE FROM revision WHERE id = ? AND status = 'draft'", current.id);
+    if (current.revision_no === 1) await ctx.q.run('DELETE FROM assessment WHERE id = ?', id);
+    await ctx.audit('discarded', 'revision', current.id, `revision ${current.revision_no}`);
   });
 }
 
@@ -563,19 +559,17 @@ export function statementFor(a: AssessmentRow, r: Pick<RevisionRow, 'id' | 'revi
   return { ...common, version: 2, keyId: s.key_id, previousLink: s.previous_link, trustAnchor: s.trust_anchor ?? '' };
 }
 
-export function registerKey(ctx: StoreContext, keyId: string, publicKey: string, origin: 'this-database' | 'imported'): void {
-  ctx
-    .sql('INSERT INTO signing_key (key_id, public_key, origin, added_at) VALUES (?, ?, ?, ?) ON CONFLICT(key_id) DO NOTHING')
-    .run(keyId, publicKey, origin, ctx.now());
+export async function registerKey(ctx: StoreContext, keyId: string, publicKey: string, origin: 'this-database' | 'imported'): Promise<void> {
+  await ctx.q.run('INSERT INTO signing_key (key_id, public_key, origin, added_at) VALUES (?, ?, ?, ?) ON CONFLICT(key_id) DO NOTHING', keyId, publicKey, origin, ctx.now());
 }
 
 /** Chain link of the newest signed (not superseded) revision of an assessment, or null. */
-function newestSignedLink(ctx: StoreContext, a: AssessmentRow): string | null {
-  const prev = ctx.sql("SELECT * FROM revision WHERE assessment_id = ? AND status = 'signed' ORDER BY revision_no DESC LIMIT 1").get(a.id) as
+async function newestSignedLink(ctx: StoreContext, a: AssessmentRow): Promise<string | null> {
+  const prev = await ctx.q.get("SELECT * FROM revision WHERE assessment_id = ? AND status = 'signed' ORDER BY revision_no DESC LIMIT 1", a.id) as
     | RevisionRow
     | undefined;
   if (!prev) return null;
-  const sig = getSignatureRow(ctx, prev.id);
+  const sig = await getSignatureRow(ctx, prev.id);
   return sig ? linkOf(statementFor(a, prev, sig)) : null;
 }
 
@@ -590,27 +584,27 @@ export const INSERT_SIGNATURE = `INSERT INTO signature (revision_id, person_id, 
  * back end's clock. The statement covers the fingerprint, the previous signed revision's link and the
  * trust anchor, and is recorded in the signing log outside the database.
  */
-export function signAssessment(ctx: StoreContext, id: Id, rawSignOff: SignOff): Assessment {
+export async function signAssessment(ctx: StoreContext, id: Id, rawSignOff: SignOff): Promise<Assessment> {
   const signOff = parseOrThrow(SignOffSchema, rawSignOff, 'Sign-off');
-  const person = getPerson(ctx, signOff.personId);
+  const person = await getPerson(ctx, signOff.personId);
   if (!person.role.trim()) throw new RecordError('invalid', `Enter ${person.name}'s role in the register (People) before signing: the signature records it.`, [{ path: 'personId', problem: 'the person has no role' }]);
-  return signDraftWith(ctx, id, signOff.statement, (build) => signAsPerson(ctx, signOff.personId, signOff.passphrase, build));
+  return await signDraftWith(ctx, id, signOff.statement, (build) => signAsPerson(ctx, signOff.personId, signOff.passphrase, build));
 }
 
 /** Produces the signature: identity and time decided by the signer function (signAsPerson in the app). */
-export type DraftSigner = (build: (signer: Signer) => SignedStatement) => { signer: Signer; payload: SignedStatement; signature: string };
+export type DraftSigner = (build: (signer: Signer) => SignedStatement) => Promise<{ signer: Signer; payload: SignedStatement; signature: string }>;
 
 /** Sign the current draft with `signWith` (the app passes signAsPerson; the demo and benchmark an unlocked key). */
-export function signDraftWith(ctx: StoreContext, id: Id, statementText: string, signWith: DraftSigner): Assessment {
-  const a = getAssessmentRow(ctx, id);
-  const draft = newestRevisionRow(ctx, id);
+export async function signDraftWith(ctx: StoreContext, id: Id, statementText: string, signWith: DraftSigner): Promise<Assessment> {
+  const a = await getAssessmentRow(ctx, id);
+  const draft = await newestRevisionRow(ctx, id);
   if (draft.status !== 'draft') throw new RecordError('conflict', `Nothing to sign: revision ${draft.revision_no} is already ${draft.status}`);
   const content = parseOrThrow(AssessmentContentSchema, JSON.parse(draft.content_json), 'Draft content');
   // Sign what this core computes now, so the signed results are never stale.
   const results = evaluate(ctx, content.input);
   const fingerprint = fingerprintOf(content, results, ctx.calculatedWith);
-  const previousLink = newestSignedLink(ctx, a);
-  const signed = signWith((signer) =>
+  const previousLink = await newestSignedLink(ctx, a);
+  const signed = await signWith((signer) =>
     statementFor(a, draft, {
       person_id: signer.personId,
       name: signer.name,
@@ -625,16 +619,18 @@ export function signDraftWith(ctx: StoreContext, id: Id, statementText: string, 
     }),
   );
   const st = signed.payload;
-  write(ctx, 'Sign-off', () => {
-    const again = newestRevisionRow(ctx, id);
-    if (again.id !== draft.id || again.status !== 'draft') throw new RecordError('conflict', 'The assessment changed while signing; try again');
-    if (newestSignedLink(ctx, a) !== previousLink) throw new RecordError('conflict', 'Another revision was signed meanwhile; try again');
+  await write(ctx, 'Sign-off', async (ctx) => {
+    const again = await newestRevisionRow(ctx, id);
+    // The save counter too: a save that landed between reading the draft and this transaction
+    // changed the content the signature covers (requests of one host now interleave at awaits).
+    if (again.id !== draft.id || again.status !== 'draft' || again.version !== draft.version) throw new RecordError('conflict', 'The assessment changed while signing; try again');
+    if (await newestSignedLink(ctx, a) !== previousLink) throw new RecordError('conflict', 'Another revision was signed meanwhile; try again');
     const resultsZ = encodeResults(results);
     if (!resultsZ.equals(draft.results_z) || draft.calculated_with !== ctx.calculatedWith) {
-      ctx.sql("UPDATE revision SET results_z = ?, calculated_with = ? WHERE id = ? AND status = 'draft'").run(resultsZ, ctx.calculatedWith, draft.id);
+      await ctx.q.run("UPDATE revision SET results_z = ?, calculated_with = ? WHERE id = ? AND status = 'draft'", resultsZ, ctx.calculatedWith, draft.id);
     }
-    registerKey(ctx, signed.signer.keyId, signed.signer.publicKey, 'this-database');
-    ctx.sql(INSERT_SIGNATURE).run({
+    await registerKey(ctx, signed.signer.keyId, signed.signer.publicKey, 'this-database');
+    await ctx.q.run(...named(INSERT_SIGNATURE, {
       revision_id: draft.id,
       person_id: st.personId,
       name: st.name,
@@ -647,11 +643,11 @@ export function signDraftWith(ctx: StoreContext, id: Id, statementText: string, 
       statement_version: 2,
       previous_link: previousLink,
       trust_anchor: signed.signer.trustAnchor,
-    });
-    ctx.sql("UPDATE revision SET status = 'superseded' WHERE assessment_id = ? AND status = 'signed'").run(id);
+    }));
+    await ctx.q.run("UPDATE revision SET status = 'superseded' WHERE assessment_id = ? AND status = 'signed'", id);
     // The save counter moves on: a save started before the sign-off is stale.
-    ctx.sql("UPDATE revision SET status = 'signed', version = version + 1 WHERE id = ?").run(draft.id);
-    ctx.audit('signed', 'revision', draft.id, `revision ${draft.revision_no} by ${st.name} (${st.role}), key ${shortKeyFingerprint(signed.signer.keyId)}`);
+    await ctx.q.run("UPDATE revision SET status = 'signed', version = version + 1 WHERE id = ?", draft.id);
+    await ctx.audit('signed', 'revision', draft.id, `revision ${draft.revision_no} by ${st.name} (${st.role}), key ${shortKeyFingerprint(signed.signer.keyId)}`);
     // Last step before the commit: if the witness outside the database cannot be written, nothing is signed.
     appendSigningLog(ctx.keyDir, {
       assessmentId: a.id,
@@ -662,7 +658,7 @@ export function signDraftWith(ctx: StoreContext, id: Id, statementText: string, 
       keyId: signed.signer.keyId,
     });
   });
-  return getAssessment(ctx, id);
+  return await getAssessment(ctx, id);
 }
 
 // ---------------------------------------------------------------- verify
@@ -675,9 +671,9 @@ const MAX_DIFFERENCES = 200;
  * list columns equal to the signed content, and every signature the signing log (outside the
  * database) remembers still present and unchanged. One plain sentence per problem.
  */
-export function chainFindings(ctx: StoreContext, a: AssessmentRow): string[] {
+export async function chainFindings(ctx: StoreContext, a: AssessmentRow): Promise<string[]> {
   const out: string[] = [];
-  const rows = ctx.sql('SELECT * FROM revision WHERE assessment_id = ? ORDER BY revision_no').all(a.id) as RevisionRow[];
+  const rows = await ctx.q.all('SELECT * FROM revision WHERE assessment_id = ? ORDER BY revision_no', a.id) as RevisionRow[];
   rows.forEach((r, i) => {
     const prevNo = i === 0 ? 0 : (rows[i - 1]?.revision_no ?? 0);
     if (r.revision_no !== prevNo + 1) {
@@ -693,7 +689,7 @@ export function chainFindings(ctx: StoreContext, a: AssessmentRow): string[] {
   let prevLink: string | null = null;
   let prevNo: number | null = null;
   for (const r of signedRows) {
-    const sig = getSignatureRow(ctx, r.id);
+    const sig = await getSignatureRow(ctx, r.id);
     if (!sig) continue;
     const link = linkOf(statementFor(a, r, sig));
     links.set(r.id, link);
@@ -748,21 +744,19 @@ export function chainFindings(ctx: StoreContext, a: AssessmentRow): string[] {
   return out;
 }
 
-export function verifyAssessment(ctx: StoreContext, assessmentId: Id, revisionId?: Id): VerifyReport {
-  const a = getAssessmentRow(ctx, assessmentId);
+export async function verifyAssessment(ctx: StoreContext, assessmentId: Id, revisionId?: Id): Promise<VerifyReport> {
+  const a = await getAssessmentRow(ctx, assessmentId);
   let r: RevisionRow;
   if (revisionId !== undefined) {
-    r = getRevisionRow(ctx, revisionId);
+    r = await getRevisionRow(ctx, revisionId);
     if (r.assessment_id !== assessmentId) throw new RecordError('invalid', `Revision ${revisionId} does not belong to assessment ${assessmentId}`);
   } else {
     r =
-      (ctx
-        .sql("SELECT * FROM revision WHERE assessment_id = ? AND status <> 'draft' ORDER BY revision_no DESC LIMIT 1")
-        .get(assessmentId) as RevisionRow | undefined) ?? newestRevisionRow(ctx, assessmentId);
+      (await ctx.q.get("SELECT * FROM revision WHERE assessment_id = ? AND status <> 'draft' ORDER BY revision_no DESC LIMIT 1", assessmentId) as RevisionRow | undefined) ?? await newestRevisionRow(ctx, assessmentId);
   }
   const findings: string[] = [];
   const checks: VerifyCheck[] = [];
-  const sig = getSignatureRow(ctx, r.id);
+  const sig = await getSignatureRow(ctx, r.id);
 
   // 1. Stored content and results readable?
   let content: AssessmentContent | null = null;
@@ -855,7 +849,7 @@ export function verifyAssessment(ctx: StoreContext, assessmentId: Id, revisionId
     let trustText = keyTrusted
       ? `Key ${shortKeyFingerprint(sig.key_id)} is on this installation's trust list: ${verdict.chain.join(' ')}`
       : `Key ${shortKeyFingerprint(sig.key_id)} is NOT trusted here — a key that only the database lists proves nothing. ${verdict.chain.join(' ')}`;
-    const listProblems = trustProblems(ctx, trust.list?.anchor ?? null, trust.problem);
+    const listProblems = await trustProblems(ctx, trust.list?.anchor ?? null, trust.problem);
     if (listProblems.length) {
       keyTrusted = false;
       trustText = `${trustText} ${listProblems.join(' ')}`;
@@ -870,18 +864,18 @@ export function verifyAssessment(ctx: StoreContext, assessmentId: Id, revisionId
     if (r.status === 'draft') findings.push('A signature exists but the revision is marked as a draft: the status was changed outside Beamwarden.');
   }
   // 3b. Co-signatures (schema 7): each with its own signature, trust and cover of the main signature.
-  const coSignatures = checkCoSignatures(ctx, a, r, sig ? { link: linkOf(statementFor(a, r, sig)), fingerprint: sig.fingerprint } : null);
+  const coSignatures = await checkCoSignatures(ctx, a, r, sig ? { link: linkOf(statementFor(a, r, sig)), fingerprint: sig.fingerprint } : null);
   for (const c of coSignatures) {
     checks.push({ check: 'co-signature', ok: c.ok, finding: c.finding });
     if (!c.ok) findings.push(c.finding);
   }
 
   // 4. The revision chain and 5. the database's own protections.
-  const chain = chainFindings(ctx, a);
+  const chain = await chainFindings(ctx, a);
   const chainIntact = chain.length === 0;
   findings.push(...chain);
   checks.push({ check: 'chain', ok: chainIntact, finding: chainIntact ? 'The revision chain is whole: no signed revision removed, reordered or re-marked, and the list matches the content.' : chain.join(' ') });
-  const missing = missingProtections(ctx.db);
+  const missing = await ctx.engine.missingProtections();
   const protectionsOk = missing.length === 0;
   const protText = protectionsOk
     ? 'The database protections against changing signed records are in place.'
@@ -916,10 +910,10 @@ export function verifyAssessment(ctx: StoreContext, assessmentId: Id, revisionId
 }
 
 /** A missing, unreadable or replaced trust list, in plain words. */
-function trustProblems(ctx: StoreContext, anchor: string | null, problem: string | null): string[] {
+async function trustProblems(ctx: StoreContext, anchor: string | null, problem: string | null): Promise<string[]> {
   const out: string[] = [];
   if (problem) out.push(problem);
-  const pins = (ctx.sql('SELECT anchor FROM trust_anchor_pin').all() as Array<{ anchor: string }>).map((p) => p.anchor);
+  const pins = (await ctx.q.all('SELECT anchor FROM trust_anchor_pin') as Array<{ anchor: string }>).map((p) => p.anchor);
   if (anchor === null && problem === null && pins.length > 0) out.push('The trust list file beside the database is missing: restore it from a backup.');
   if (anchor !== null && pins.length > 0 && !pins.includes(anchor)) {
     out.push(

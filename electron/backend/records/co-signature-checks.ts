@@ -89,8 +89,8 @@ export function payloadOf(row: CoSignatureRow, a: AssessmentRow, r: RevisionRow)
   };
 }
 
-export function listCoSignatures(ctx: StoreContext, revisionId: Id): CoSignature[] {
-  return (ctx.sql('SELECT * FROM co_signature WHERE revision_id = ? ORDER BY signed_at, person_id').all(revisionId) as CoSignatureRow[]).map((x) => rowToCoSignature(x, trustOf(readTrustList(ctx.keyDir).list, x.key_id).trusted));
+export async function listCoSignatures(ctx: StoreContext, revisionId: Id): Promise<CoSignature[]> {
+  return (await ctx.q.all<CoSignatureRow>('SELECT * FROM co_signature WHERE revision_id = ? ORDER BY signed_at, person_id', revisionId)).map((x) => rowToCoSignature(x, trustOf(readTrustList(ctx.keyDir).list, x.key_id).trusted));
 }
 
 /** The main signature as verify computed it: its link and fingerprint (null when the revision has none). */
@@ -100,10 +100,11 @@ export interface MainSignature {
 }
 
 /** Every co-signature of a revision checked: its own signature, its key's trust, and that it covers this revision's main signature. */
-export function checkCoSignatures(ctx: StoreContext, a: AssessmentRow, r: RevisionRow, main: MainSignature | null): CoSignatureCheck[] {
-  const rows = ctx.sql('SELECT * FROM co_signature WHERE revision_id = ? ORDER BY signed_at, person_id').all(r.id) as CoSignatureRow[];
-  return rows.map((row) => {
-    const c = checkPersonSignature(ctx, payloadOf(row, a, r), row.signature, row.key_id);
+export async function checkCoSignatures(ctx: StoreContext, a: AssessmentRow, r: RevisionRow, main: MainSignature | null): Promise<CoSignatureCheck[]> {
+  const rows = await ctx.q.all<CoSignatureRow>('SELECT * FROM co_signature WHERE revision_id = ? ORDER BY signed_at, person_id', r.id);
+  const out: CoSignatureCheck[] = [];
+  for (const row of rows) {
+    const c = await checkPersonSignature(ctx, payloadOf(row, a, r), row.signature, row.key_id);
     const owner = c.ownerPersonId === null || c.ownerPersonId === row.person_id;
     const signatureValid = c.valid && owner;
     const covers = main !== null && row.signed_link === main.link && main.fingerprint === row.fingerprint;
@@ -116,7 +117,8 @@ export function checkCoSignatures(ctx: StoreContext, a: AssessmentRow, r: Revisi
         : !c.trusted
           ? `Co-signature by ${who}: the key is NOT on this installation's trust list. ${c.trustChain.join(' ')}`
           : `Co-signature by ${who} countersigned a different main signature or fingerprint: the main sign-off was changed or replaced after it.`;
-    return { ...rowToCoSignature(row, c.trusted), ok, signatureValid, coversThisSignature: covers, finding };
-  });
+    out.push({ ...rowToCoSignature(row, c.trusted), ok, signatureValid, coversThisSignature: covers, finding });
+  }
+  return out;
 }
 

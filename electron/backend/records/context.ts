@@ -4,52 +4,85 @@ import type { z } from 'zod';
 import { formatZodIssues } from '../schemas/issues.js';
 import { officerPath } from '../../../core/model/input-words.js';
 import type { Evaluate } from './core-link.js';
-import type { Statement } from 'better-sqlite3';
-import type { Db } from './database.js';
-import { storageError } from './storage-errors.js';
+import type { SqlPort } from './sql-port.js';
 import { RecordError } from './types.js';
 
+/**
+ * What a database engine supplies beyond the SQL port: its own way of naming a database error in
+ * plain words, and its own check of the protections (triggers) against changing signed records.
+ */
+export interface EngineSeam {
+  /** Where the register is: the file path (SQLite) or the server address without password (PostgreSQL). */
+  readonly location: string;
+  /** A database error as RecordError in plain words (or `e` unchanged). `storage`: also say what the disk or server refused. */
+  translateError(e: unknown, what: string, storage: boolean): unknown;
+  /**
+   * A column that orders a table's rows as they were inserted, for rows that share a timestamp (a CSV
+   * import writes its lasers within one millisecond; the register lists them as registered).
+   * SQLite: its `rowid`; a server engine: a sequence column of its own schema.
+   */
+  readonly insertionOrder: string;
+  /** Names of protections that are missing or altered; empty when all are in place. */
+  missingProtections(): Promise<string[]>;
+}
+
 export interface StoreContext {
-  readonly db: Db;
+  /** The SQL port: the store's connection, or the transaction's own port inside `inTransaction`. */
+  readonly q: SqlPort;
+  readonly engine: EngineSeam;
   /** The user-data folder beside the database: trust list and signing log (outside the database). */
   readonly keyDir: string;
   readonly evaluate: Evaluate;
   readonly calculatedWith: string;
-  /** A prepared statement for `sql`, prepared once per connection and reused. */
-  sql(sql: string): Statement;
   now(): string;
   newId(): string;
-  audit(action: string, entity: string, entityId: string, detail?: string): void;
+  audit(action: string, entity: string, entityId: string, detail?: string): Promise<void>;
+  /** The same context speaking through another port (a transaction's). */
+  withPort(q: SqlPort): StoreContext;
 }
 
-export function makeContext(
-  db: Db,
-  keyDir: string,
-  evaluate: Evaluate,
-  calculatedWith: string,
-  now: () => string = () => new Date().toISOString(),
-): StoreContext {
-  const statements = new Map<string, Statement>();
-  const sql = (text: string): Statement => {
-    let st = statements.get(text);
-    if (!st) {
-      st = db.prepare(text);
-      statements.set(text, st);
-    }
-    return st;
-  };
+export interface ContextParts {
+  readonly q: SqlPort;
+  readonly engine: EngineSeam;
+  readonly keyDir: string;
+  readonly evaluate: Evaluate;
+  readonly calculatedWith: string;
+  readonly now?: () => string;
+}
+
+export function makeContext(parts: ContextParts): StoreContext {
+  const { q } = parts;
   return {
-    db,
-    sql,
-    keyDir,
-    evaluate,
-    calculatedWith,
-    now,
+    q,
+    engine: parts.engine,
+    keyDir: parts.keyDir,
+    evaluate: parts.evaluate,
+    calculatedWith: parts.calculatedWith,
+    now: parts.now ?? (() => new Date().toISOString()),
     newId: () => randomUUID(),
-    audit(action, entity, entityId, detail = '') {
-      sql('INSERT INTO audit_event (at, action, entity, entity_id, detail) VALUES (?, ?, ?, ?, ?)').run(new Date().toISOString(), action, entity, entityId, detail);
+    async audit(action, entity, entityId, detail = '') {
+      await q.run('INSERT INTO audit_event (at, action, entity, entity_id, detail) VALUES (?, ?, ?, ?, ?)', new Date().toISOString(), action, entity, entityId, detail);
     },
+    withPort: (other) => makeContext({ ...parts, q: other }),
   };
+}
+
+/** `fn` in one write transaction (joining the caller's), with the transaction's context; errors left as they are. */
+export function transact<T>(ctx: StoreContext, fn: (ctx: StoreContext) => Promise<T>): Promise<T> {
+  return ctx.q.transaction((tx) => fn(ctx.withPort(tx)));
+}
+
+/**
+ * Run `fn` in one write transaction (joining the caller's when there is one): `fn` gets the context
+ * of the transaction, and every statement of it must go through that context. A database error
+ * leaves as RecordError in plain words naming `what`.
+ */
+export async function inTransaction<T>(ctx: StoreContext, what: string, fn: (ctx: StoreContext) => Promise<T>, storage = true): Promise<T> {
+  try {
+    return await transact(ctx, fn);
+  } catch (e) {
+    throw ctx.engine.translateError(e, what, storage);
+  }
 }
 
 /** Validate with a zod schema or throw RecordError('invalid') naming every path and problem. */
@@ -66,16 +99,9 @@ export function notFound(kind: string, id: string): RecordError {
   return new RecordError('not-found', `No ${kind} with id ${id}`);
 }
 
-/** Map SQLite constraint errors (raised by our triggers and keys) to RecordError with plain words. */
-export function translateSqliteError(e: unknown, what: string, dbPath?: string): unknown {
-  if (!(e instanceof Error) || !('code' in e)) return e;
-  const code = String((e as { code: unknown }).code);
-  const storage = dbPath !== undefined ? storageError(e, dbPath, what) : null;
-  if (storage) return storage;
-  if (e.message.startsWith('beamwarden: ')) return new RecordError('immutable', e.message.slice('beamwarden: '.length));
-  if (code === 'SQLITE_CONSTRAINT_FOREIGNKEY') {
-    return new RecordError('conflict', `${what} cannot be saved as it is: it refers to a record that is not in the register, or other records still refer to it. Nothing was changed.`);
-  }
-  if (code === 'SQLITE_CONSTRAINT_UNIQUE' || code === 'SQLITE_CONSTRAINT_PRIMARYKEY') return new RecordError('conflict', `${what}: ${e.message.replace(/^UNIQUE constraint failed: /, 'already exists: ')}`);
-  return e;
+/** `f` applied to each item one after the other (not all at once: one connection, one statement at a time). */
+export async function inOrder<T, U>(items: readonly T[], f: (item: T) => Promise<U>): Promise<U[]> {
+  const out: U[] = [];
+  for (const item of items) out.push(await f(item));
+  return out;
 }

@@ -12,7 +12,7 @@ import type { BeamInput, LaserInput } from '../../../core/model/inputs.js';
 import { TEXT_RULES, textProblem, type TextRule } from '../../../core/model/input-rules.js';
 import { BeamInputSchema, LaserClassSchema } from '../schemas/inputs.js';
 import { QUANTITY_COLUMNS, readQuantityCell } from './csv-cells.js';
-import { translateSqliteError, type StoreContext } from './context.js';
+import { inTransaction, type StoreContext } from './context.js';
 import { getRoom, insertInstallation } from './register.js';
 import { RecordError, type CsvExistingChoice, type CsvImportReport, type Id, type LaserInstallation } from './types.js';
 
@@ -136,8 +136,8 @@ interface LaserGroup {
   beams: Array<{ row: number; beam: BeamInput; givenId: string | null }>;
 }
 
-export function importLaserCsv(ctx: StoreContext, roomId: Id, csvText: string, existing: CsvExistingChoice = 'ask'): CsvImportReport {
-  getRoom(ctx, roomId);
+export async function importLaserCsv(ctx: StoreContext, roomId: Id, csvText: string, existing: CsvExistingChoice = 'ask'): Promise<CsvImportReport> {
+  await getRoom(ctx, roomId);
   const firstLine = csvText.replace(/^\uFEFF/, '').split(/\r?\n/, 1)[0] ?? '';
   const delimiter = detectDelimiter(firstLine);
   let parsed: string[][];
@@ -263,13 +263,13 @@ export function importLaserCsv(ctx: StoreContext, roomId: Id, csvText: string, e
 
   // Lasers the room already has (same name, maker, serial number): importing a file twice must
   // not double the register, so the officer chooses to skip them or to add them again.
-  const present = alreadyInRoom(ctx, roomId, groups);
+  const present = await alreadyInRoom(ctx, roomId, groups);
   const leaveOut = existing === 'add' ? new Set<LaserGroup>() : new Set(present.map((p) => p.group));
   for (const g of leaveOut) groups.delete(g.name);
 
   // Beam ids must be unique within the room (assessments refer to beams by id).
   const existingBeamIds = new Set<string>();
-  for (const r of ctx.sql('SELECT laser_json FROM laser_installation WHERE room_id = ?').all(roomId) as Array<{ laser_json: string }>) {
+  for (const r of await ctx.q.all('SELECT laser_json FROM laser_installation WHERE room_id = ?', roomId) as Array<{ laser_json: string }>) {
     const l = JSON.parse(r.laser_json) as LaserInput;
     l.beams.forEach((b) => b.id !== undefined && existingBeamIds.add(b.id));
   }
@@ -319,16 +319,10 @@ export function importLaserCsv(ctx: StoreContext, roomId: Id, csvText: string, e
       updatedAt: now,
     };
   });
-  try {
-    ctx.db
-      .transaction(() => {
-        for (const inst of installations) insertInstallation(ctx, inst);
-        ctx.audit('imported-csv', 'room', roomId, `${installations.length} lasers`);
-      })
-      .immediate();
-  } catch (e) {
-    throw translateSqliteError(e, 'CSV import (nothing was imported)', ctx.db.name);
-  }
+  await inTransaction(ctx, 'CSV import (nothing was imported)', async (ctx) => {
+    for (const inst of installations) await insertInstallation(ctx, inst);
+    await ctx.audit('imported-csv', 'room', roomId, `${installations.length} lasers`);
+  });
   return {
     imported: installations.length,
     errors: [],
@@ -341,12 +335,12 @@ export function importLaserCsv(ctx: StoreContext, roomId: Id, csvText: string, e
 
 const sameText = (a: string, b: string) => a.trim().toLowerCase() === b.trim().toLowerCase();
 
-function alreadyInRoom(
+async function alreadyInRoom(
   ctx: StoreContext,
   roomId: Id,
   groups: ReadonlyMap<string, LaserGroup>,
-): Array<{ group: LaserGroup; row: number; name: string; maker: string; serialNumber: string }> {
-  const rows = ctx.sql('SELECT laser_json, maker, serial_number FROM laser_installation WHERE room_id = ?').all(roomId) as Array<{
+): Promise<Array<{ group: LaserGroup; row: number; name: string; maker: string; serialNumber: string }>> {
+  const rows = await ctx.q.all('SELECT laser_json, maker, serial_number FROM laser_installation WHERE room_id = ?', roomId) as Array<{
     laser_json: string;
     maker: string;
     serial_number: string;

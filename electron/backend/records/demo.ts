@@ -12,7 +12,7 @@
 import { z } from 'zod';
 import demoScenario from '../../../assets/demo/demo-scenario.json' with { type: 'json' };
 import { EyewearSpecSchema, RoomInputSchema } from '../schemas/inputs.js';
-import { parseOrThrow, type StoreContext } from './context.js';
+import { parseOrThrow, transact, type StoreContext } from './context.js';
 import { generateKeyPairSync } from 'node:crypto';
 import { createAssessment, newAssessmentContent, signAssessment, signDraftWith } from './assessments.js';
 import { createPersonalKey, signerFromKey } from './personal-keys.js';
@@ -49,30 +49,31 @@ const DEMO_CONTROLS: readonly ControlChoice[] = [
 export const DEMO_PASSPHRASE = 'demo passphrase, invented site';
 const DEMO_STATEMENT = 'I have evaluated the laser hazards of this area with the inputs and assumptions recorded here and approve the controls listed.';
 
-export function seedDemo(ctx: StoreContext, raw: unknown = demoScenario): Site {
+export async function seedDemo(ctx: StoreContext, raw: unknown = demoScenario): Promise<Site> {
   const scenario = parseOrThrow(DemoScenarioSchema, raw, 'Demo scenario');
-  const existing = listSites(ctx).find((s) => s.name === scenario.site.name && s.building === scenario.site.building);
+  const sites = await listSites(ctx);
+  const existing = sites.find((s) => s.name === scenario.site.name && s.building === scenario.site.building);
   if (existing) return existing;
   // A database made for the demo: no trust list and nobody registered yet.
-  const fresh = readTrustList(ctx.keyDir).list === null && listSites(ctx).length === 0 && ctx.sql('SELECT 1 FROM person LIMIT 1').get() === undefined;
+  const fresh = readTrustList(ctx.keyDir).list === null && sites.length === 0 && (await ctx.q.get('SELECT 1 AS one FROM person LIMIT 1')) === undefined;
   let toSign: { assessmentId: string; personId: string } | null = null;
-  const site = ctx.db.transaction(() => {
-    const site = createSite(ctx, { name: scenario.site.name, building: scenario.site.building, notes: withEmergencyContact(`${scenario.site.kind}. ${scenario.about}`, scenario.site.emergencyContact ?? '') });
-    const officer = createPerson(ctx, {
+  const seeded = await transact(ctx, async (ctx) => {
+    const site = await createSite(ctx, { name: scenario.site.name, building: scenario.site.building, notes: withEmergencyContact(`${scenario.site.kind}. ${scenario.about}`, scenario.site.emergencyContact ?? '') });
+    const officer = await createPerson(ctx, {
       name: scenario.officer.name,
       role: 'Laser safety officer',
       ...(scenario.officer.email ? { email: scenario.officer.email } : {}),
       ...(scenario.officer.phone ? { phone: scenario.officer.phone } : {}),
     });
-    if (scenario.deputy) createPerson(ctx, { name: scenario.deputy.name, role: 'Deputy laser safety officer' });
-    for (const spec of scenario.eyewear) createEyewear(ctx, { siteId: site.id, spec, location: 'Eyewear cabinet, corridor B2' });
-    scenario.rooms.forEach((r, index) => {
-      const room = createRoom(ctx, { siteId: site.id, code: r.code, name: r.name, responsiblePerson: r.responsible, notes: r.notes });
+    if (scenario.deputy) await createPerson(ctx, { name: scenario.deputy.name, role: 'Deputy laser safety officer' });
+    for (const spec of scenario.eyewear) await createEyewear(ctx, { siteId: site.id, spec, location: 'Eyewear cabinet, corridor B2' });
+    for (const [index, r] of scenario.rooms.entries()) {
+      const room = await createRoom(ctx, { siteId: site.id, code: r.code, name: r.name, responsiblePerson: r.responsible, notes: r.notes });
       const laserIds = new Map<string, string>();
       for (const laser of r.input.lasers) {
-        laserIds.set(laser.id, createInstallation(ctx, { roomId: room.id, laser, laserType: laser.name }).id);
+        laserIds.set(laser.id, (await createInstallation(ctx, { roomId: room.id, laser, laserType: laser.name })).id);
       }
-      const skeleton = newAssessmentContent(ctx, room.id);
+      const skeleton = await newAssessmentContent(ctx, room.id);
       const content: AssessmentContent = {
         ...skeleton,
         input: {
@@ -85,24 +86,24 @@ export function seedDemo(ctx: StoreContext, raw: unknown = demoScenario): Site {
         notes: r.notes,
         reviewBy: '2027-06-30',
       };
-      const assessment = createAssessment(ctx, { roomId: room.id, content });
+      const assessment = await createAssessment(ctx, { roomId: room.id, content });
       if (index === 0 && fresh) toSign = { assessmentId: assessment.id, personId: officer.id };
       else if (index === 0) {
         // An installation with its own trust list: a throwaway key on no trust list, so the invented
         // record shows as an unverified signature and no key with a public passphrase is admitted.
-        signDraftWith(ctx, assessment.id, DEMO_STATEMENT, signerFromKey(ctx, officer, generateKeyPairSync('ed25519').privateKey));
+        await signDraftWith(ctx, assessment.id, DEMO_STATEMENT, signerFromKey(ctx, officer, generateKeyPairSync('ed25519').privateKey));
       }
-    });
-    ctx.audit('seeded-demo', 'site', site.id, scenario.site.name);
+    }
+    await ctx.audit('seeded-demo', 'site', site.id, scenario.site.name);
     return site;
-  })();
+  });
   const demo = toSign as { assessmentId: string; personId: string } | null;
   if (demo) {
     // The demo installation's first key (its trust anchor), then the app's own sign-off path.
-    createPersonalKey(ctx, { personId: demo.personId, passphrase: DEMO_PASSPHRASE, passphraseAgain: DEMO_PASSPHRASE });
-    signAssessment(ctx, demo.assessmentId, { personId: demo.personId, passphrase: DEMO_PASSPHRASE, statement: DEMO_STATEMENT });
+    await createPersonalKey(ctx, { personId: demo.personId, passphrase: DEMO_PASSPHRASE, passphraseAgain: DEMO_PASSPHRASE });
+    await signAssessment(ctx, demo.assessmentId, { personId: demo.personId, passphrase: DEMO_PASSPHRASE, statement: DEMO_STATEMENT });
   }
-  return site;
+  return seeded;
 }
 
 /** The demo plan names lasers by their scenario ids; the register gives each installation its own id. */

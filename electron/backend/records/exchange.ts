@@ -21,9 +21,9 @@ import { ExportDocumentSchema } from '../schemas/records.js';
 import { formatZodIssues } from '../schemas/issues.js';
 import { canonicalJson } from './canonical.js';
 import type { StoreContext } from './context.js';
-import { translateSqliteError } from './context.js';
+import { named } from './named-params.js';
 import { encodeResults, INSERT_SIGNATURE, insertRevisionRow, registerKey, statementFor, type RevisionRow, type StatementFields } from './assessments.js';
-import { parseOrThrow } from './context.js';
+import { inOrder, parseOrThrow } from './context.js';
 import { admitKeys, ImportAdmissionSchema, unlockPersonalKey } from './personal-keys.js';
 import { appendSigningLog, type SigningLogLine } from './signing-log.js';
 import { readTrustList, shortKeyFingerprint, trustOf } from './trust-list.js';
@@ -65,9 +65,12 @@ import {
 
 // ---------------------------------------------------------------- export
 
-function assessmentIdsOfRooms(ctx: StoreContext, roomIds: readonly Id[]): Id[] {
-  const stmt = ctx.sql('SELECT id FROM assessment WHERE room_id = ? ORDER BY created_at, id');
-  return roomIds.flatMap((rid) => (stmt.all(rid) as Array<{ id: string }>).map((r) => r.id));
+async function assessmentIdsOfRooms(ctx: StoreContext, roomIds: readonly Id[]): Promise<Id[]> {
+  const out: Id[] = [];
+  for (const rid of roomIds) {
+    for (const r of await ctx.q.all<{ id: string }>('SELECT id FROM assessment WHERE room_id = ? ORDER BY created_at, id', rid)) out.push(r.id);
+  }
+  return out;
 }
 
 /** Whether a key is trusted is this installation's judgement: never written to a file, nor compared. */
@@ -77,16 +80,16 @@ function withoutTrust(r: Revision): Revision {
   return { ...r, signature };
 }
 
-function exportedAssessment(ctx: StoreContext, id: Id): ExportedAssessment {
-  const a = getAssessment(ctx, id);
-  const revisions = listRevisions(ctx, id).map((s) => withoutTrust(getRevision(ctx, s.id)));
+async function exportedAssessment(ctx: StoreContext, id: Id): Promise<ExportedAssessment> {
+  const a = await getAssessment(ctx, id);
+  const revisions = await inOrder(await listRevisions(ctx, id), async (s) => withoutTrust(await getRevision(ctx, s.id)));
   return { id: a.id, roomId: a.roomId, installationId: a.installationId, createdAt: a.createdAt, revisions };
 }
 
-function signersOf(ctx: StoreContext, assessments: readonly ExportedAssessment[]): Person[] {
+async function signersOf(ctx: StoreContext, assessments: readonly ExportedAssessment[]): Promise<Person[]> {
   const ids = new Set<string>();
   for (const a of assessments) for (const r of a.revisions) if (r.signature?.personId) ids.add(r.signature.personId);
-  return [...ids].sort().map((id) => getPerson(ctx, id));
+  return inOrder([...ids].sort(), (id) => getPerson(ctx, id));
 }
 
 function keysOf(assessments: readonly ExportedAssessment[]): ExportDocument['signingKeys'] {
@@ -95,11 +98,11 @@ function keysOf(assessments: readonly ExportedAssessment[]): ExportDocument['sig
   return [...keys].sort(([a], [b]) => (a < b ? -1 : 1)).map(([keyId, publicKey]) => ({ keyId, publicKey }));
 }
 
-function document(
+async function document(
   ctx: StoreContext,
   scope: ExportDocument['scope'],
   parts: Pick<ExportDocument, 'sites' | 'rooms' | 'installations' | 'eyewear' | 'assessments'> & { people?: Person[] },
-): ExportDocument {
+): Promise<ExportDocument> {
   return {
     format: EXPORT_FORMAT,
     version: EXPORT_VERSION,
@@ -109,48 +112,48 @@ function document(
     rooms: parts.rooms,
     installations: parts.installations,
     eyewear: parts.eyewear,
-    people: parts.people ?? signersOf(ctx, parts.assessments),
+    people: parts.people ?? await signersOf(ctx, parts.assessments),
     assessments: parts.assessments,
     signingKeys: keysOf(parts.assessments),
   };
 }
 
 /** Everything about a site: its rooms, lasers, eyewear, assessments, and every person in the register. */
-export function exportSite(ctx: StoreContext, siteId: Id): ExportDocument {
-  const site = getSite(ctx, siteId);
-  const rooms = listRooms(ctx, siteId);
-  const assessments = assessmentIdsOfRooms(ctx, rooms.map((r) => r.id)).map((id) => exportedAssessment(ctx, id));
-  return document(ctx, { kind: 'site', id: siteId }, {
+export async function exportSite(ctx: StoreContext, siteId: Id): Promise<ExportDocument> {
+  const site = await getSite(ctx, siteId);
+  const rooms = await listRooms(ctx, siteId);
+  const assessments = await inOrder(await assessmentIdsOfRooms(ctx, rooms.map((r) => r.id)), (id) => exportedAssessment(ctx, id));
+  return await document(ctx, { kind: 'site', id: siteId }, {
     sites: [site],
     rooms,
-    installations: rooms.flatMap((r) => listInstallations(ctx, r.id)),
-    eyewear: listEyewear(ctx, siteId),
-    people: listPeople(ctx),
+    installations: (await inOrder(rooms, (r) => listInstallations(ctx, r.id))).flat(),
+    eyewear: await listEyewear(ctx, siteId),
+    people: await listPeople(ctx),
     assessments,
   });
 }
 
 /** One room with its site entry, lasers, the site's eyewear, its assessments and their signers. */
-export function exportRoom(ctx: StoreContext, roomId: Id): ExportDocument {
-  const room = getRoom(ctx, roomId);
-  const assessments = assessmentIdsOfRooms(ctx, [roomId]).map((id) => exportedAssessment(ctx, id));
-  return document(ctx, { kind: 'room', id: roomId }, {
-    sites: [getSite(ctx, room.siteId)],
+export async function exportRoom(ctx: StoreContext, roomId: Id): Promise<ExportDocument> {
+  const room = await getRoom(ctx, roomId);
+  const assessments = await inOrder(await assessmentIdsOfRooms(ctx, [roomId]), (id) => exportedAssessment(ctx, id));
+  return await document(ctx, { kind: 'room', id: roomId }, {
+    sites: [await getSite(ctx, room.siteId)],
     rooms: [room],
-    installations: listInstallations(ctx, roomId),
-    eyewear: listEyewear(ctx, room.siteId),
+    installations: await listInstallations(ctx, roomId),
+    eyewear: await listEyewear(ctx, room.siteId),
     assessments,
   });
 }
 
 /** One assessment with every revision, plus the site, room and installation it refers to. */
-export function exportAssessment(ctx: StoreContext, assessmentId: Id): ExportDocument {
-  const a = exportedAssessment(ctx, assessmentId);
-  const room = getRoom(ctx, a.roomId);
-  return document(ctx, { kind: 'assessment', id: assessmentId }, {
-    sites: [getSite(ctx, room.siteId)],
+export async function exportAssessment(ctx: StoreContext, assessmentId: Id): Promise<ExportDocument> {
+  const a = await exportedAssessment(ctx, assessmentId);
+  const room = await getRoom(ctx, a.roomId);
+  return await document(ctx, { kind: 'assessment', id: assessmentId }, {
+    sites: [await getSite(ctx, room.siteId)],
     rooms: [room],
-    installations: a.installationId ? [getInstallation(ctx, a.installationId)] : [],
+    installations: a.installationId ? [await getInstallation(ctx, a.installationId)] : [],
     eyewear: [],
     assessments: [a],
   });
@@ -209,10 +212,25 @@ function fileResults(doc: ExportDocument, ai: number, ri: number): unknown {
   return results !== undefined && canonicalJson(results) === canonicalJson(checked) ? results : checked;
 }
 
-function crossCheck(ctx: StoreContext, doc: ExportDocument): ImportIssue[] {
+async function crossCheck(ctx: StoreContext, doc: ExportDocument): Promise<ImportIssue[]> {
   const issues: ImportIssue[] = [];
-  const exists = (table: 'site' | 'room' | 'laser_installation' | 'person', id: string) =>
-    ctx.sql(`SELECT 1 FROM ${table} WHERE id = ?`).get(id) !== undefined;
+  // Which referenced ids this database has, looked up once before the (synchronous) checks below.
+  type Table = 'site' | 'room' | 'laser_installation' | 'person';
+  const asked: Array<[Table, string]> = [
+    ...doc.rooms.map((r): [Table, string] => ['site', r.siteId]),
+    ...doc.installations.map((x): [Table, string] => ['room', x.roomId]),
+    ...doc.eyewear.map((x): [Table, string] => ['site', x.siteId]),
+    ...doc.assessments.flatMap((a): Array<[Table, string]> => [
+      ['room', a.roomId],
+      ...(a.installationId !== null ? [['laser_installation', a.installationId] as [Table, string]] : []),
+      ...a.revisions.flatMap((r): Array<[Table, string]> => (r.signature?.personId ? [['person', r.signature.personId]] : [])),
+    ]),
+  ];
+  const present = new Set<string>();
+  for (const [table, id] of asked) {
+    if (!present.has(`${table}:${id}`) && (await ctx.q.get(`SELECT 1 AS one FROM ${table} WHERE id = ?`, id)) !== undefined) present.add(`${table}:${id}`);
+  }
+  const exists = (table: Table, id: string) => present.has(`${table}:${id}`);
   const unique = (list: ReadonlyArray<{ id: string }>, name: string) => {
     const seen = new Set<string>();
     list.forEach((x, i) => {
@@ -340,95 +358,92 @@ export function isNotOlder(local: string, imported: string): boolean {
  * their fingerprints, endorsed with a trusted signer's passphrase). Otherwise they are imported and
  * shown as unverified signatures everywhere — never as signed.
  */
-export function importDocument(ctx: StoreContext, input: unknown, rawAdmit?: ImportAdmission): ImportSummary {
+export async function importDocument(ctx: StoreContext, input: unknown, rawAdmit?: ImportAdmission): Promise<ImportSummary> {
   const doc = parseExportDocument(input);
-  const issues = crossCheck(ctx, doc);
+  const issues = await crossCheck(ctx, doc);
   if (issues.length) throw invalid(issues);
   const list = readTrustList(ctx.keyDir).list;
   const signerOf = new Map<string, string>();
   for (const a of doc.assessments) for (const r of a.revisions) if (r.signature) signerOf.set(r.signature.keyId, r.signature.name);
   const untrusted = doc.signingKeys.filter((k) => signerOf.has(k.keyId) && !trustOf(list, k.keyId).trusted);
-  let endorser: ReturnType<typeof unlockPersonalKey> | null = null;
+  let endorser: Awaited<ReturnType<typeof unlockPersonalKey>> | null = null;
   const admit = rawAdmit ? parseOrThrow(ImportAdmissionSchema, rawAdmit, 'Key admission') : null;
   if (admit && admit.keyIds.length > 0) {
     const unknown = admit.keyIds.filter((id) => !untrusted.some((k) => k.keyId === id));
     if (unknown.length) throw new RecordError('invalid', `Key ${shortKeyFingerprint(unknown[0] ?? '')} is not an untrusted signing key of this file; nothing was imported.`);
     // The passphrase is checked before anything is written.
-    endorser = unlockPersonalKey(ctx, admit.endorserPersonId, admit.endorserPassphrase);
+    endorser = await unlockPersonalKey(ctx, admit.endorserPersonId, admit.endorserPassphrase);
   }
   const count = { sites: 0, rooms: 0, installations: 0, eyewear: 0, people: 0, assessments: 0, revisions: 0, unchanged: 0, unverified: 0 };
   const keptDrafts: KeptDraft[] = [];
   const logLines: SigningLogLine[] = [];
-  const db = ctx.db;
 
-  const run = db.transaction(() => {
-    const upsert = <T extends { id: string; updatedAt: string }>(
+  const run = async (ctx: StoreContext): Promise<void> => {
+    const upsert = async <T extends { id: string; updatedAt: string }>(
       list: readonly T[],
       key: keyof typeof count,
-      read: (id: string) => T | null,
-      insert: (x: T) => void,
-      replace: (x: T) => void,
-    ) => {
+      read: (id: string) => Promise<T | null>,
+      insert: (x: T) => Promise<unknown>,
+      replace: (x: T) => Promise<unknown>,
+    ): Promise<void> => {
       for (const x of list) {
-        const local = read(x.id);
+        const local = await read(x.id);
         if (local === null) {
-          insert(x);
+          await insert(x);
           count[key]++;
         } else if (same(local, x) || isNotOlder(local.updatedAt, x.updatedAt)) {
           count.unchanged++;
         } else {
-          replace(x);
+          await replace(x);
           count[key]++;
         }
       }
     };
-    const tryGet = <T>(fn: () => T): T | null => {
+    const tryGet = async <T>(fn: () => Promise<T>): Promise<T | null> => {
       try {
-        return fn();
+        return await fn();
       } catch (e) {
         if (e instanceof RecordError && e.code === 'not-found') return null;
         throw e;
       }
     };
-    upsert(doc.sites, 'sites', (id) => tryGet(() => getSite(ctx, id)), (x) => insertSite(ctx, x), (x: Site) =>
-      ctx.sql('UPDATE site SET name=@name, building=@building, address=@address, notes=@notes, updated_at=@updatedAt WHERE id=@id').run(x),
+    await upsert(doc.sites, 'sites', (id) => tryGet(() => getSite(ctx, id)), (x) => insertSite(ctx, x), (x: Site) =>
+      ctx.q.run(...named('UPDATE site SET name=@name, building=@building, address=@address, notes=@notes, updated_at=@updatedAt WHERE id=@id', x)),
     );
-    upsert(doc.people, 'people', (id) => tryGet(() => getPerson(ctx, id)), (x) => insertPerson(ctx, x), (x) =>
-      ctx.sql('UPDATE person SET name=@name, role=@role, email=@email, phone=@phone, updated_at=@updatedAt WHERE id=@id').run(x),
+    await upsert(doc.people, 'people', (id) => tryGet(() => getPerson(ctx, id)), (x) => insertPerson(ctx, x), (x) =>
+      ctx.q.run(...named('UPDATE person SET name=@name, role=@role, email=@email, phone=@phone, updated_at=@updatedAt WHERE id=@id', x)),
     );
-    upsert(doc.rooms, 'rooms', (id) => tryGet(() => getRoom(ctx, id)), (x) => insertRoom(ctx, x), (x: Room) =>
-      ctx
-        .sql('UPDATE room SET code=@code, name=@name, responsible_person=@responsiblePerson, contact=@contact, notes=@notes, updated_at=@updatedAt WHERE id=@id')
-        .run(x),
+    await upsert(doc.rooms, 'rooms', (id) => tryGet(() => getRoom(ctx, id)), (x) => insertRoom(ctx, x), (x: Room) =>
+      ctx.q.run(...named('UPDATE room SET code=@code, name=@name, responsible_person=@responsiblePerson, contact=@contact, notes=@notes, updated_at=@updatedAt WHERE id=@id', x)),
     );
     // Replaced in place (UPDATE), never deleted and re-inserted: assessments refer to a laser by
     // its id, and the database refuses to delete a laser an assessment refers to.
-    upsert(doc.installations, 'installations', (id) => tryGet(() => getInstallation(ctx, id)), (x) => insertInstallation(ctx, x), (x) =>
+    await upsert(doc.installations, 'installations', (id) => tryGet(() => getInstallation(ctx, id)), (x) => insertInstallation(ctx, x), (x) =>
       replaceInstallation(ctx, x),
     );
-    upsert(doc.eyewear, 'eyewear', (id) => tryGet(() => getEyewear(ctx, id)), (x) => insertEyewear(ctx, x), (x) => replaceEyewear(ctx, x));
-    for (const k of doc.signingKeys) registerKey(ctx, k.keyId, k.publicKey, 'imported');
+    await upsert(doc.eyewear, 'eyewear', (id) => tryGet(() => getEyewear(ctx, id)), (x) => insertEyewear(ctx, x), (x) => replaceEyewear(ctx, x));
+    for (const k of doc.signingKeys) await registerKey(ctx, k.keyId, k.publicKey, 'imported');
 
     for (const [ai, a] of doc.assessments.entries()) {
-      const localA = ctx.sql('SELECT room_id, installation_id FROM assessment WHERE id = ?').get(a.id) as
+      const localA = await ctx.q.get('SELECT room_id, installation_id FROM assessment WHERE id = ?', a.id) as
         | { room_id: string; installation_id: string | null }
         | undefined;
       if (!localA) {
-        ctx.sql('INSERT INTO assessment (id, room_id, installation_id, created_at) VALUES (?, ?, ?, ?)').run(a.id, a.roomId, a.installationId, a.createdAt);
+        await ctx.q.run('INSERT INTO assessment (id, room_id, installation_id, created_at) VALUES (?, ?, ?, ?)', a.id, a.roomId, a.installationId, a.createdAt);
         count.assessments++;
       } else if (localA.room_id !== a.roomId || localA.installation_id !== a.installationId) {
         throw invalid([{ path: `assessments[${ai}].roomId`, problem: 'this assessment exists here for a different room or installation' }]);
       }
       const of = { assessmentId: a.id, roomId: a.roomId, installationId: a.installationId };
-      const keep = (row: RevisionRow, whose: 'yours' | 'imported', reason: string) => {
-        const kept = keepDraftAsCopy(ctx, row, of, whose, reason);
+      const keep = async (row: RevisionRow, whose: 'yours' | 'imported', reason: string): Promise<void> => {
+        const kept = await keepDraftAsCopy(ctx, row, of, whose, reason);
         if (kept) keptDrafts.push(kept);
       };
       for (const [ri, r] of a.revisions.entries()) {
         const path = `assessments[${ai}].revisions[${ri}]`;
-        const local = ctx.sql('SELECT * FROM revision WHERE id = ?').get(r.id) as RevisionRow | undefined;
+        const local = await ctx.q.get('SELECT * FROM revision WHERE id = ?', r.id) as RevisionRow | undefined;
         if (local) {
-          const mine = withoutTrust(getRevision(ctx, r.id));
+          const mine = withoutTrust(await getRevision(ctx, r.id));
           if (same(mine, r)) {
             count.unchanged++;
             continue;
@@ -440,19 +455,19 @@ export function importDocument(ctx: StoreContext, input: unknown, rawAdmit?: Imp
             }
             if (isNotOlder(mine.updatedAt, r.updatedAt)) {
               // Ours stays in the assessment; theirs is kept beside it.
-              keep(revisionRow(r), 'imported', `the file has another version of draft revision ${r.revisionNo}, saved ${r.updatedAt}`);
+              await keep(revisionRow(r), 'imported', `the file has another version of draft revision ${r.revisionNo}, saved ${r.updatedAt}`);
               count.unchanged++;
               continue;
             }
-            keep(local, 'yours', `the file has a newer version of draft revision ${r.revisionNo}, saved ${r.updatedAt}`);
-            ctx.sql("DELETE FROM revision WHERE id = ? AND status = 'draft'").run(r.id);
+            await keep(local, 'yours', `the file has a newer version of draft revision ${r.revisionNo}, saved ${r.updatedAt}`);
+            await ctx.q.run("DELETE FROM revision WHERE id = ? AND status = 'draft'", r.id);
           } else if (local.status === 'draft' && r.status !== 'draft') {
             // Our draft was signed elsewhere: the signed copy takes its place; edits made here
             // after it was copied are kept as a draft of their own.
-            if (!same(mine.content, r.content)) keep(local, 'yours', `revision ${r.revisionNo} was signed elsewhere with other content`);
-            ctx.sql("DELETE FROM revision WHERE id = ? AND status = 'draft'").run(r.id);
+            if (!same(mine.content, r.content)) await keep(local, 'yours', `revision ${r.revisionNo} was signed elsewhere with other content`);
+            await ctx.q.run("DELETE FROM revision WHERE id = ? AND status = 'draft'", r.id);
           } else if (local.status === 'signed' && r.status === 'superseded' && same({ ...mine, status: 'superseded' }, r)) {
-            ctx.sql("UPDATE revision SET status = 'superseded' WHERE id = ?").run(r.id);
+            await ctx.q.run("UPDATE revision SET status = 'superseded' WHERE id = ?", r.id);
             count.revisions++;
             continue;
           } else if (local.status !== 'draft' && r.status === 'signed' && mine.status === 'superseded' && same({ ...mine, status: 'signed' }, r)) {
@@ -460,45 +475,45 @@ export function importDocument(ctx: StoreContext, input: unknown, rawAdmit?: Imp
             continue;
           } else if (r.status === 'draft') {
             count.unchanged++; // the file's draft was signed here meanwhile
-            if (!same(mine.content, r.content)) keep(revisionRow(r), 'imported', `revision ${r.revisionNo} is signed here; the file has a draft of it with other content`);
+            if (!same(mine.content, r.content)) await keep(revisionRow(r), 'imported', `revision ${r.revisionNo} is signed here; the file has a draft of it with other content`);
             continue;
           } else {
             throw invalid([{ path, problem: `revision ${r.revisionNo} is signed here with different content: one of the two copies was altered` }]);
           }
         }
-        const clash = ctx.sql('SELECT * FROM revision WHERE assessment_id = ? AND revision_no = ? AND id <> ?').get(a.id, r.revisionNo, r.id) as
+        const clash = await ctx.q.get('SELECT * FROM revision WHERE assessment_id = ? AND revision_no = ? AND id <> ?', a.id, r.revisionNo, r.id) as
           | RevisionRow
           | undefined;
         if (clash !== undefined && clash.status === 'draft') {
           // Both sides started this revision on their own: ours is kept as a draft of its own.
-          keep(clash, 'yours', `revision ${r.revisionNo} was also started elsewhere`);
-          ctx.sql("DELETE FROM revision WHERE id = ? AND status = 'draft'").run(clash.id);
+          await keep(clash, 'yours', `revision ${r.revisionNo} was also started elsewhere`);
+          await ctx.q.run("DELETE FROM revision WHERE id = ? AND status = 'draft'", clash.id);
         } else if (clash !== undefined) {
           throw invalid([{ path, problem: `this database already has a different revision ${r.revisionNo} of this assessment (both copies were revised separately; export the newer one and import it elsewhere)` }]);
         }
-        insertRevisionRow(ctx, revisionRow(r, fileResults(doc, ai, ri)));
+        await insertRevisionRow(ctx, revisionRow(r, fileResults(doc, ai, ri)));
         const s = r.signature;
         if (s) {
-          ctx.sql(INSERT_SIGNATURE).run({ revision_id: r.id, ...signatureFields(s) });
+          await ctx.q.run(...named(INSERT_SIGNATURE, { revision_id: r.id, ...signatureFields(s) }));
           const aRow = { id: a.id, room_id: a.roomId, installation_id: a.installationId, created_at: a.createdAt };
           logLines.push({ assessmentId: a.id, revisionId: r.id, revisionNo: r.revisionNo, link: linkOf(statementFor(aRow, { id: r.id, revision_no: r.revisionNo }, signatureFields(s))), signedAt: s.signedAt, keyId: s.keyId });
-          if (r.status === 'signed') ctx.sql("UPDATE revision SET status = 'superseded' WHERE assessment_id = ? AND status = 'signed'").run(a.id);
-          ctx.sql('UPDATE revision SET status = ? WHERE id = ?').run(r.status, r.id);
+          if (r.status === 'signed') await ctx.q.run("UPDATE revision SET status = 'superseded' WHERE assessment_id = ? AND status = 'signed'", a.id);
+          await ctx.q.run('UPDATE revision SET status = ? WHERE id = ?', r.status, r.id);
         }
         count.revisions++;
       }
     }
-    ctx.audit('imported', doc.scope.kind, doc.scope.id, `export of ${doc.exportedAt}`);
-  });
+    await ctx.audit('imported', doc.scope.kind, doc.scope.id, `export of ${doc.exportedAt}`);
+  };
   try {
-    run.immediate();
+    await ctx.q.transaction((tx) => run(ctx.withPort(tx)));
   } catch (e) {
     if (e instanceof RecordError) throw e;
-    const t = translateSqliteError(e, 'Import (nothing was changed)', ctx.db.name);
+    const t = ctx.engine.translateError(e, 'Import (nothing was changed)', true);
     throw t instanceof RecordError ? new RecordError(t.code, t.message, [{ path: '(document)', problem: t.message }]) : t;
   }
   if (endorser !== null && admit !== null) {
-    admitKeys(ctx, untrusted.filter((k) => admit.keyIds.includes(k.keyId)).map((k) => ({ ...k, personId: null, personName: `${signerOf.get(k.keyId) ?? ''} (exporting site)` })), endorser);
+    await admitKeys(ctx, untrusted.filter((k) => admit.keyIds.includes(k.keyId)).map((k) => ({ ...k, personId: null, personName: `${signerOf.get(k.keyId) ?? ''} (exporting site)` })), endorser);
   }
   const after = readTrustList(ctx.keyDir).list;
   // Only signatures this installation trusts enter its signing log; the others stay unverified.

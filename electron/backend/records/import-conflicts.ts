@@ -21,25 +21,23 @@ function copyTitle(original: string, whose: 'yours' | 'imported', at: string): s
  * same room. Returns null when an identical copy is already kept (importing one file twice keeps
  * one copy, not two).
  */
-export function keepDraftAsCopy(
+export async function keepDraftAsCopy(
   ctx: StoreContext,
   row: Pick<RevisionRow, 'content_json' | 'results_z' | 'calculated_with' | 'updated_at'>,
   of: { readonly assessmentId: Id; readonly roomId: Id; readonly installationId: Id | null },
   whose: 'yours' | 'imported',
   reason: string,
-): KeptDraft | null {
+): Promise<KeptDraft | null> {
   const content = JSON.parse(row.content_json) as { title: string; reviewBy: string | null };
   const marker = `${whose === 'yours' ? 'local' : 'imported'} draft of assessment ${of.assessmentId}, last saved ${row.updated_at}`;
-  const already = ctx
-    .sql("SELECT a.id FROM audit_event e JOIN assessment a ON a.id = e.entity_id WHERE e.action = 'kept-draft' AND e.detail = ?")
-    .get(marker) as { id: string } | undefined;
+  const already = await ctx.q.get("SELECT a.id FROM audit_event e JOIN assessment a ON a.id = e.entity_id WHERE e.action = 'kept-draft' AND e.detail = ?", marker) as { id: string } | undefined;
   if (already) return null;
   const now = ctx.now();
   const title = copyTitle(content.title, whose, now);
   const copyContent = { ...content, title };
   const id = ctx.newId();
-  ctx.sql('INSERT INTO assessment (id, room_id, installation_id, created_at) VALUES (?, ?, ?, ?)').run(id, of.roomId, of.installationId, now);
-  insertRevisionRow(ctx, {
+  await ctx.q.run('INSERT INTO assessment (id, room_id, installation_id, created_at) VALUES (?, ?, ?, ?)', id, of.roomId, of.installationId, now);
+  await insertRevisionRow(ctx, {
     id: ctx.newId(),
     assessment_id: id,
     revision_no: 1,
@@ -54,6 +52,6 @@ export function keepDraftAsCopy(
     review_by: content.reviewBy,
     version: 1,
   });
-  ctx.audit('kept-draft', 'assessment', id, marker);
+  await ctx.audit('kept-draft', 'assessment', id, marker);
   return { assessmentId: of.assessmentId, keptAs: id, title, whose, reason };
 }

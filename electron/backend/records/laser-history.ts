@@ -19,17 +19,13 @@ interface Row {
   signed_at: string | null;
 }
 
-export function laserHistory(ctx: StoreContext, installationId: Id): LaserUse[] {
-  const inst = getInstallation(ctx, installationId);
-  const rows = ctx
-    .sql(
-      `SELECT r.assessment_id, r.id AS revision_id, r.revision_no, r.status, r.title, r.content_json, r.updated_at, s.signed_at
+export async function laserHistory(ctx: StoreContext, installationId: Id): Promise<LaserUse[]> {
+  const inst = await getInstallation(ctx, installationId);
+  const rows = await ctx.q.all(`SELECT r.assessment_id, r.id AS revision_id, r.revision_no, r.status, r.title, r.content_json, r.updated_at, s.signed_at
          FROM revision r JOIN assessment a ON a.id = r.assessment_id
          LEFT JOIN signature s ON s.revision_id = r.id
         WHERE a.room_id = ?
-        ORDER BY r.updated_at DESC, r.revision_no DESC`,
-    )
-    .all(inst.roomId) as Row[];
+        ORDER BY r.updated_at DESC, r.revision_no DESC`, inst.roomId) as Row[];
   const out: LaserUse[] = [];
   for (const r of rows) {
     let lasers: unknown;

@@ -8,7 +8,7 @@
  * then retired and its file removed (personal-keys.ts), so it cannot sign or endorse again.
  */
 import { statementFor, type AssessmentRow, type RevisionRow, type SignatureRow } from './assessments.js';
-import type { StoreContext } from './context.js';
+import { transact, type StoreContext } from './context.js';
 import { setUpTrustList } from './personal-keys.js';
 import { appendSigningLog } from './signing-log.js';
 import { linkOf, readInstallationKey, PRIVATE_KEY_FILE, verifyStatement } from './signing.js';
@@ -16,15 +16,11 @@ import { INSTALLATION_KEY_HOLDER, readTrustList, shortKeyFingerprint } from './t
 
 
 /** Run at open (read-write only). Returns warnings for the officer; empty when there is nothing to do. */
-export function adoptInstallationKey(ctx: StoreContext): string[] {
-  const legacy = ctx
-    .sql(
-      `SELECT s.*, k.public_key, r.revision_no, r.assessment_id, a.room_id, a.installation_id, a.created_at AS a_created
+export async function adoptInstallationKey(ctx: StoreContext): Promise<string[]> {
+  const legacy = await ctx.q.all(`SELECT s.*, k.public_key, r.revision_no, r.assessment_id, a.room_id, a.installation_id, a.created_at AS a_created
        FROM signature s JOIN revision r ON r.id = s.revision_id JOIN assessment a ON a.id = r.assessment_id
        LEFT JOIN signing_key k ON k.key_id = s.key_id
-       WHERE s.statement_version = 1 ORDER BY r.assessment_id, r.revision_no`,
-    )
-    .all() as Array<SignatureRow & Pick<RevisionRow, 'revision_no' | 'assessment_id'> & { room_id: string; installation_id: string | null; a_created: string }>;
+       WHERE s.statement_version = 1 ORDER BY r.assessment_id, r.revision_no`) as Array<SignatureRow & Pick<RevisionRow, 'revision_no' | 'assessment_id'> & { room_id: string; installation_id: string | null; a_created: string }>;
   if (legacy.length === 0) return [];
   const read = readTrustList(ctx.keyDir);
   if (read.list !== null || read.problem !== null) return []; // already set up (or reported as a trust list problem)
@@ -55,10 +51,10 @@ export function adoptInstallationKey(ctx: StoreContext): string[] {
     );
     return warnings;
   }
-  ctx.db.transaction(() => {
-    setUpTrustList(ctx, { keyId: key.keyId, publicKey: key.publicKeyPem, personId: null, personName: INSTALLATION_KEY_HOLDER, privateKey: key.privateKey });
-    ctx.audit('installation-key-adopted', 'signing_key', key.keyId, `${good.length} signature(s) re-checked`);
-  }).immediate();
+  await transact(ctx, async (ctx) => {
+    await setUpTrustList(ctx, { keyId: key.keyId, publicKey: key.publicKeyPem, personId: null, personName: INSTALLATION_KEY_HOLDER, privateKey: key.privateKey });
+    await ctx.audit('installation-key-adopted', 'signing_key', key.keyId, `${good.length} signature(s) re-checked`);
+  });
   for (const s of good) {
     const a: AssessmentRow = { id: s.assessment_id, room_id: s.room_id, installation_id: s.installation_id, created_at: s.a_created };
     appendSigningLog(ctx.keyDir, {

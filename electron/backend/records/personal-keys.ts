@@ -8,7 +8,7 @@
 import { createPublicKey, generateKeyPairSync, sign, verify, type KeyObject } from 'node:crypto';
 import { z } from 'zod';
 import { canonicalJson } from './canonical.js';
-import { parseOrThrow, translateSqliteError, type StoreContext } from './context.js';
+import { inTransaction, parseOrThrow, type StoreContext } from './context.js';
 import { openSealedKey, sealPrivateKey, SealedKeySchema } from './key-encryption.js';
 import { getPerson } from './register.js';
 import { keyIdOf, PRIVATE_KEY_FILE, readInstallationKey } from './signing.js';
@@ -50,14 +50,14 @@ interface PersonKeyRow {
 }
 const KEY_SELECT = 'SELECT pk.*, k.public_key FROM person_key pk JOIN signing_key k ON k.key_id = pk.key_id';
 
-function activeKeyRow(ctx: StoreContext, personId: Id): PersonKeyRow | undefined {
-  return ctx.sql(`${KEY_SELECT} WHERE pk.person_id = ? AND pk.retired_at IS NULL`).get(personId) as PersonKeyRow | undefined;
+async function activeKeyRow(ctx: StoreContext, personId: Id): Promise<PersonKeyRow | undefined> {
+  return await ctx.q.get(`${KEY_SELECT} WHERE pk.person_id = ? AND pk.retired_at IS NULL`, personId) as PersonKeyRow | undefined;
 }
 
 
-export function trustListInfo(ctx: StoreContext): TrustListInfo {
+export async function trustListInfo(ctx: StoreContext): Promise<TrustListInfo> {
   const read = readTrustList(ctx.keyDir);
-  const pins = (ctx.sql('SELECT anchor FROM trust_anchor_pin ORDER BY pinned_at').all() as Array<{ anchor: string }>).map((r) => r.anchor);
+  const pins = (await ctx.q.all('SELECT anchor FROM trust_anchor_pin ORDER BY pinned_at') as Array<{ anchor: string }>).map((r) => r.anchor);
   const problems: string[] = [];
   if (read.problem) problems.push(read.problem);
   if (read.list === null && !read.problem && pins.length > 0) {
@@ -78,9 +78,9 @@ export function trustListInfo(ctx: StoreContext): TrustListInfo {
   };
 }
 
-export function listPersonKeys(ctx: StoreContext): PersonKey[] {
+export async function listPersonKeys(ctx: StoreContext): Promise<PersonKey[]> {
   const list = readTrustList(ctx.keyDir).list;
-  const rows = ctx.sql(`${KEY_SELECT} ORDER BY pk.created_at, pk.key_id`).all() as PersonKeyRow[];
+  const rows = await ctx.q.all(`${KEY_SELECT} ORDER BY pk.created_at, pk.key_id`) as PersonKeyRow[];
   return rows.map((r) => {
     const t = trustOf(list, r.key_id);
     return {
@@ -98,16 +98,16 @@ export function listPersonKeys(ctx: StoreContext): PersonKey[] {
 }
 
 /** Unlock `personId`'s active key with the passphrase; refuses (and changes nothing) otherwise. */
-export function unlockPersonalKey(ctx: StoreContext, personId: Id, pass: string, opts: { requireTrusted?: boolean } = {}): {
+export async function unlockPersonalKey(ctx: StoreContext, personId: Id, pass: string, opts: { requireTrusted?: boolean } = {}): Promise<{
   person: Person;
   keyId: string;
   privateKey: KeyObject;
   publicKeyPem: string;
-} {
-  const person = getPerson(ctx, personId);
-  const row = activeKeyRow(ctx, personId);
+}> {
+  const person = await getPerson(ctx, personId);
+  const row = await activeKeyRow(ctx, personId);
   if (!row) {
-    const retired = ctx.sql('SELECT 1 FROM person_key WHERE person_id = ?').get(personId) !== undefined;
+    const retired = await ctx.q.get('SELECT 1 FROM person_key WHERE person_id = ?', personId) !== undefined;
     throw new RecordError(
       'signing-key',
       retired
@@ -135,7 +135,7 @@ export function unlockPersonalKey(ctx: StoreContext, personId: Id, pass: string,
     }
     const entry = t.entry;
     if (entry?.retiredAt) throw new RecordError('signing-key', `${person.name}'s key is retired on the trust list; a retired key cannot sign.`);
-    const problems = trustListInfo(ctx).problems;
+    const problems = (await trustListInfo(ctx)).problems;
     if (problems.length) throw new RecordError('signing-key', `Signing is refused: ${problems.join(' ')}`);
   }
   return { person, keyId: row.key_id, privateKey, publicKeyPem };
@@ -159,8 +159,8 @@ export interface Signer {
  * receives the signer (identity from the key's owner, time from this clock) and returns the object
  * whose canonical JSON is signed. Reusable for any signed record (assessments, checked table rows).
  */
-export function signAsPerson<P>(ctx: StoreContext, personId: Id, pass: string, build: (signer: Signer) => P): { signer: Signer; payload: P; signature: string } {
-  const key = unlockPersonalKey(ctx, personId, pass);
+export async function signAsPerson<P>(ctx: StoreContext, personId: Id, pass: string, build: (signer: Signer) => P): Promise<{ signer: Signer; payload: P; signature: string }> {
+  const key = await unlockPersonalKey(ctx, personId, pass);
   const anchor = readTrustList(ctx.keyDir).list?.anchor ?? '';
   const signer: Signer = {
     personId: key.person.id,
@@ -184,7 +184,7 @@ export function signAsPerson<P>(ctx: StoreContext, personId: Id, pass: string, b
 export function signerFromKey(ctx: StoreContext, person: Person, privateKey: KeyObject) {
   const publicKey = createPublicKey(privateKey).export({ type: 'spki', format: 'pem' }).toString();
   const anchor = readTrustList(ctx.keyDir).list?.anchor ?? '';
-  return <P>(build: (signer: Signer) => P): { signer: Signer; payload: P; signature: string } => {
+  return async <P>(build: (signer: Signer) => P): Promise<{ signer: Signer; payload: P; signature: string }> => {
     const signer: Signer = { personId: person.id, name: person.name, role: person.role, keyId: keyIdOf(publicKey), publicKey, signedAt: ctx.now(), trustAnchor: anchor };
     const payload = build(signer);
     return { signer, payload, signature: sign(null, Buffer.from(canonicalJson(payload), 'utf8'), privateKey).toString('base64') };
@@ -192,22 +192,22 @@ export function signerFromKey(ctx: StoreContext, person: Person, privateKey: Key
 }
 
 /** The check that goes with `signAsPerson`, for any signed payload: valid signature, trusted key, and its owner. */
-export function checkPersonSignature(
+export async function checkPersonSignature(
   ctx: StoreContext,
   payload: unknown,
   signatureB64: string,
   keyId: string,
-): { readonly valid: boolean; readonly trusted: boolean; readonly trustChain: readonly string[]; readonly ownerPersonId: string | null; readonly ownerName: string | null } {
+): Promise<{ readonly valid: boolean; readonly trusted: boolean; readonly trustChain: readonly string[]; readonly ownerPersonId: string | null; readonly ownerName: string | null }> {
   const read = readTrustList(ctx.keyDir);
   const verdict = trustOf(read.list, keyId);
-  const publicKey = verdict.entry?.publicKey ?? (ctx.sql('SELECT public_key FROM signing_key WHERE key_id = ?').get(keyId) as { public_key: string } | undefined)?.public_key;
+  const publicKey = verdict.entry?.publicKey ?? (await ctx.q.get('SELECT public_key FROM signing_key WHERE key_id = ?', keyId) as { public_key: string } | undefined)?.public_key;
   let valid = false;
   try {
     valid = publicKey !== undefined && keyIdOf(publicKey) === keyId && verify(null, Buffer.from(canonicalJson(payload), 'utf8'), createPublicKey(publicKey), Buffer.from(signatureB64, 'base64'));
   } catch {
     valid = false;
   }
-  const problems = trustListInfo(ctx).problems;
+  const problems = (await trustListInfo(ctx)).problems;
   return {
     valid,
     trusted: verdict.trusted && problems.length === 0,
@@ -229,23 +229,23 @@ function admitToTrustList(
 }
 
 /** Admit several keys on one endorser's authority (import: the exporting site's keys, after confirmation). */
-export function admitKeys(
+export async function admitKeys(
   ctx: StoreContext,
   keys: ReadonlyArray<{ keyId: string; publicKey: string; personId: string | null; personName: string }>,
   endorser: { keyId: string; privateKey: KeyObject; person: Person },
-): void {
+): Promise<void> {
   const read = readTrustList(ctx.keyDir);
   if (read.list === null) throw new RecordError('signing-key', 'There is no trust list yet.');
   let list = read.list;
   for (const k of keys) {
     list = admitToTrustList(ctx, list, k, endorser);
-    ctx.audit('key-endorsed', 'signing_key', k.keyId, `by ${endorser.person.name} (${k.personName})`);
+    await ctx.audit('key-endorsed', 'signing_key', k.keyId, `by ${endorser.person.name} (${k.personName})`);
   }
   writeTrustList(ctx.keyDir, list);
 }
 
 /** Start the trust list with `key` as its anchor (self-endorsed) and pin the anchor in the database. */
-export function setUpTrustList(ctx: StoreContext, key: { keyId: string; publicKey: string; personId: string | null; personName: string; privateKey: KeyObject }): TrustList {
+export async function setUpTrustList(ctx: StoreContext, key: { keyId: string; publicKey: string; personId: string | null; personName: string; privateKey: KeyObject }): Promise<TrustList> {
   const admittedAt = ctx.now();
   const entry = makeEndorsedEntry(
     { keyId: key.keyId, publicKey: key.publicKey, personId: key.personId, personName: key.personName, admittedAt, endorsedBy: key.keyId },
@@ -253,25 +253,25 @@ export function setUpTrustList(ctx: StoreContext, key: { keyId: string; publicKe
   );
   const list: TrustList = { format: 'beamwarden-trust-list', version: 1, anchor: key.keyId, entries: [entry] };
   writeTrustList(ctx.keyDir, list);
-  ctx.sql('INSERT INTO trust_anchor_pin (anchor, pinned_at) VALUES (?, ?) ON CONFLICT(anchor) DO NOTHING').run(key.keyId, admittedAt);
-  ctx.audit('trust-anchor-set', 'signing_key', key.keyId, `${key.personName}; fingerprint ${shortKeyFingerprint(key.keyId)}`);
+  await ctx.q.run('INSERT INTO trust_anchor_pin (anchor, pinned_at) VALUES (?, ?) ON CONFLICT(anchor) DO NOTHING', key.keyId, admittedAt);
+  await ctx.audit('trust-anchor-set', 'signing_key', key.keyId, `${key.personName}; fingerprint ${shortKeyFingerprint(key.keyId)}`);
   return list;
 }
 
-export function createPersonalKey(ctx: StoreContext, raw: z.input<typeof CreateKeySchema>): PersonKey {
+export async function createPersonalKey(ctx: StoreContext, raw: z.input<typeof CreateKeySchema>): Promise<PersonKey> {
   const args = parseOrThrow(CreateKeySchema, raw, 'New signing key');
   if (args.passphrase !== args.passphraseAgain) throw new RecordError('invalid', 'The two passphrases are not the same; nothing was created.', [{ path: 'passphraseAgain', problem: 'must repeat the passphrase exactly' }]);
-  const person = getPerson(ctx, args.personId);
-  if (activeKeyRow(ctx, person.id)) throw new RecordError('conflict', `${person.name} already has an active signing key; retire it before creating a new one.`);
+  const person = await getPerson(ctx, args.personId);
+  if (await activeKeyRow(ctx, person.id)) throw new RecordError('conflict', `${person.name} already has an active signing key; retire it before creating a new one.`);
   const read = readTrustList(ctx.keyDir);
   if (read.problem) throw new RecordError('signing-key', read.problem);
-  const problems = trustListInfo(ctx).problems;
+  const problems = (await trustListInfo(ctx)).problems;
   if (problems.length) throw new RecordError('signing-key', problems.join(' '));
   // The endorser's passphrase is checked before anything is written.
   let endorser: { keyId: string; privateKey: KeyObject; name: string } | null = null;
   let installationKeyToRetire: string | null = null;
   if (read.list !== null && args.endorserPersonId !== undefined) {
-    const k = unlockPersonalKey(ctx, args.endorserPersonId, args.endorserPassphrase ?? '');
+    const k = await unlockPersonalKey(ctx, args.endorserPersonId, args.endorserPassphrase ?? '');
     endorser = { keyId: k.keyId, privateKey: k.privateKey, name: k.person.name };
   } else if (read.list !== null) {
     // After migrating from schema 2 the installation key is the anchor: it endorses the first personal key, once.
@@ -287,78 +287,75 @@ export function createPersonalKey(ctx: StoreContext, raw: z.input<typeof CreateK
   const keyId = keyIdOf(publicKeyPem);
   const sealed = sealPrivateKey(privateKey, keyId, args.passphrase);
   const now = ctx.now();
-  guardTx(ctx, 'Signing key', () => {
-    ctx.sql("INSERT INTO signing_key (key_id, public_key, origin, added_at) VALUES (?, ?, 'this-database', ?)").run(keyId, publicKeyPem, now);
-    ctx.sql('INSERT INTO person_key (key_id, person_id, sealed_private_key, created_at) VALUES (?, ?, ?, ?)').run(keyId, person.id, JSON.stringify(sealed), now);
-    ctx.audit('key-created', 'person', person.id, `key ${shortKeyFingerprint(keyId)}`);
+  await guardTx(ctx, 'Signing key', async (ctx) => {
+    await ctx.q.run("INSERT INTO signing_key (key_id, public_key, origin, added_at) VALUES (?, ?, 'this-database', ?)", keyId, publicKeyPem, now);
+    await ctx.q.run('INSERT INTO person_key (key_id, person_id, sealed_private_key, created_at) VALUES (?, ?, ?, ?)', keyId, person.id, JSON.stringify(sealed), now);
+    await ctx.audit('key-created', 'person', person.id, `key ${shortKeyFingerprint(keyId)}`);
     // The trust list is written inside the transaction's scope: if it fails, the key rows roll back.
     const entry = { keyId, publicKey: publicKeyPem, personId: person.id, personName: person.name };
-    if (read.list === null) setUpTrustList(ctx, { ...entry, privateKey });
+    if (read.list === null) await setUpTrustList(ctx, { ...entry, privateKey });
     else if (endorser !== null) {
       let list = admitToTrustList(ctx, read.list, entry, endorser);
-      ctx.audit('key-endorsed', 'signing_key', keyId, `by ${endorser.name}`);
+      await ctx.audit('key-endorsed', 'signing_key', keyId, `by ${endorser.name}`);
       if (installationKeyToRetire !== null) {
         const at = ctx.now();
         list = { ...list, entries: list.entries.map((e) => (e.keyId === installationKeyToRetire ? { ...e, retiredAt: at, retiredReason: 'Replaced by personal keys' } : e)) };
-        ctx.audit('key-retired', 'signing_key', installationKeyToRetire, 'installation key replaced by personal keys; key file removed');
+        await ctx.audit('key-retired', 'signing_key', installationKeyToRetire, 'installation key replaced by personal keys; key file removed');
       }
       writeTrustList(ctx.keyDir, list);
     }
   });
   // The installation key file is removed once it has endorsed: a copy of it could otherwise endorse again.
   if (installationKeyToRetire !== null) rmSync(join(ctx.keyDir, PRIVATE_KEY_FILE), { force: true });
-  const made = listPersonKeys(ctx).find((k) => k.keyId === keyId);
+  const made = (await listPersonKeys(ctx)).find((k) => k.keyId === keyId);
   if (!made) throw new Error('key not stored');
   return made;
 }
 
-function guardTx(ctx: StoreContext, what: string, fn: () => void): void {
-  try {
-    ctx.db.transaction(fn).immediate();
-  } catch (e) {
-    throw translateSqliteError(e, what);
-  }
+/** One write transaction; database errors in plain words (without the storage diagnosis, as before). */
+function guardTx(ctx: StoreContext, what: string, fn: (ctx: StoreContext) => Promise<void>): Promise<void> {
+  return inTransaction(ctx, what, fn, false);
 }
 
 /** Admit a key (a person's new key, or an exporting site's key) on the endorsement of a trusted signer. */
-export function endorseKey(ctx: StoreContext, raw: z.input<typeof EndorseKeySchema>): PersonKey | null {
+export async function endorseKey(ctx: StoreContext, raw: z.input<typeof EndorseKeySchema>): Promise<PersonKey | null> {
   const args = parseOrThrow(EndorseKeySchema, raw, 'Endorsement');
-  const endorser = unlockPersonalKey(ctx, args.endorserPersonId, args.endorserPassphrase);
+  const endorser = await unlockPersonalKey(ctx, args.endorserPersonId, args.endorserPassphrase);
   const read = readTrustList(ctx.keyDir);
   if (read.list === null) throw new RecordError('signing-key', 'There is no trust list yet.');
-  const k = ctx.sql('SELECT public_key FROM signing_key WHERE key_id = ?').get(args.keyId) as { public_key: string } | undefined;
+  const k = await ctx.q.get('SELECT public_key FROM signing_key WHERE key_id = ?', args.keyId) as { public_key: string } | undefined;
   if (!k) throw new RecordError('not-found', `No key ${shortKeyFingerprint(args.keyId)} in this database.`);
-  const owner = ctx.sql('SELECT person_id FROM person_key WHERE key_id = ?').get(args.keyId) as { person_id: string } | undefined;
-  const personName = owner ? getPerson(ctx, owner.person_id).name : (ctx.sql('SELECT name FROM signature WHERE key_id = ? LIMIT 1').get(args.keyId) as { name: string } | undefined)?.name ?? '';
+  const owner = await ctx.q.get('SELECT person_id FROM person_key WHERE key_id = ?', args.keyId) as { person_id: string } | undefined;
+  const personName = owner ? (await getPerson(ctx, owner.person_id)).name : (await ctx.q.get('SELECT name FROM signature WHERE key_id = ? LIMIT 1', args.keyId) as { name: string } | undefined)?.name ?? '';
   writeTrustList(ctx.keyDir, admitToTrustList(ctx, read.list, { keyId: args.keyId, publicKey: k.public_key, personId: owner?.person_id ?? null, personName }, endorser));
-  ctx.audit('key-endorsed', 'signing_key', args.keyId, `by ${endorser.person.name}`);
-  return listPersonKeys(ctx).find((x) => x.keyId === args.keyId) ?? null;
+  await ctx.audit('key-endorsed', 'signing_key', args.keyId, `by ${endorser.person.name}`);
+  return (await listPersonKeys(ctx)).find((x) => x.keyId === args.keyId) ?? null;
 }
 
-export function changePassphrase(ctx: StoreContext, raw: z.input<typeof ChangePassphraseSchema>): PersonKey {
+export async function changePassphrase(ctx: StoreContext, raw: z.input<typeof ChangePassphraseSchema>): Promise<PersonKey> {
   const args = parseOrThrow(ChangePassphraseSchema, raw, 'Passphrase change');
   if (args.newPassphrase !== args.newPassphraseAgain) throw new RecordError('invalid', 'The two new passphrases are not the same; nothing was changed.', [{ path: 'newPassphraseAgain', problem: 'must repeat the new passphrase exactly' }]);
-  const key = unlockPersonalKey(ctx, args.personId, args.passphrase, { requireTrusted: false });
+  const key = await unlockPersonalKey(ctx, args.personId, args.passphrase, { requireTrusted: false });
   const sealed = sealPrivateKey(key.privateKey, key.keyId, args.newPassphrase);
-  guardTx(ctx, 'Passphrase', () => {
-    ctx.sql('UPDATE person_key SET sealed_private_key = ? WHERE key_id = ? AND retired_at IS NULL').run(JSON.stringify(sealed), key.keyId);
-    ctx.audit('passphrase-changed', 'person', args.personId, `key ${shortKeyFingerprint(key.keyId)}`);
+  await guardTx(ctx, 'Passphrase', async (ctx) => {
+    await ctx.q.run('UPDATE person_key SET sealed_private_key = ? WHERE key_id = ? AND retired_at IS NULL', JSON.stringify(sealed), key.keyId);
+    await ctx.audit('passphrase-changed', 'person', args.personId, `key ${shortKeyFingerprint(key.keyId)}`);
   });
-  const k = listPersonKeys(ctx).find((x) => x.keyId === key.keyId);
+  const k = (await listPersonKeys(ctx)).find((x) => x.keyId === key.keyId);
   if (!k) throw new Error('key vanished');
   return k;
 }
 
 /** Retire a person's key (lost passphrase, person leaving): it can no longer sign; what it signed stays valid. */
-export function retireKey(ctx: StoreContext, raw: z.input<typeof RetireKeySchema>): PersonKey {
+export async function retireKey(ctx: StoreContext, raw: z.input<typeof RetireKeySchema>): Promise<PersonKey> {
   const args = parseOrThrow(RetireKeySchema, raw, 'Key retirement');
-  const person = getPerson(ctx, args.personId);
-  const row = activeKeyRow(ctx, person.id);
+  const person = await getPerson(ctx, args.personId);
+  const row = await activeKeyRow(ctx, person.id);
   if (!row) throw new RecordError('not-found', `${person.name} has no active signing key.`);
   const now = ctx.now();
-  guardTx(ctx, 'Key retirement', () => {
-    ctx.sql('UPDATE person_key SET retired_at = ?, retired_reason = ? WHERE key_id = ?').run(now, args.reason, row.key_id);
-    ctx.audit('key-retired', 'person', person.id, `key ${shortKeyFingerprint(row.key_id)}: ${args.reason}`);
+  await guardTx(ctx, 'Key retirement', async (ctx) => {
+    await ctx.q.run('UPDATE person_key SET retired_at = ?, retired_reason = ? WHERE key_id = ?', now, args.reason, row.key_id);
+    await ctx.audit('key-retired', 'person', person.id, `key ${shortKeyFingerprint(row.key_id)}: ${args.reason}`);
     const read = readTrustList(ctx.keyDir);
     if (read.list !== null && read.list.entries.some((e) => e.keyId === row.key_id)) {
       writeTrustList(ctx.keyDir, {
@@ -367,7 +364,7 @@ export function retireKey(ctx: StoreContext, raw: z.input<typeof RetireKeySchema
       });
     }
   });
-  const k = listPersonKeys(ctx).find((x) => x.keyId === row.key_id);
+  const k = (await listPersonKeys(ctx)).find((x) => x.keyId === row.key_id);
   if (!k) throw new Error('key vanished');
   return k;
 }

@@ -17,37 +17,31 @@ function listed(kind: string, plural: string, names: readonly string[]): string[
 
 const quoted = (rows: ReadonlyArray<{ t: string }>) => rows.map((r) => `"${r.t}"`);
 
-function assessmentsWhere(ctx: StoreContext, where: string, id: Id): string[] {
-  const rows = ctx
-    .sql(
-      `SELECT r.title AS t FROM assessment a JOIN revision r ON r.assessment_id = a.id
-        AND r.revision_no = (SELECT max(revision_no) FROM revision WHERE assessment_id = a.id) WHERE ${where} ORDER BY a.created_at`,
-    )
-    .all(id) as Array<{ t: string }>;
+async function assessmentsWhere(ctx: StoreContext, where: string, id: Id): Promise<string[]> {
+  const rows = await ctx.q.all(`SELECT r.title AS t FROM assessment a JOIN revision r ON r.assessment_id = a.id
+        AND r.revision_no = (SELECT max(revision_no) FROM revision WHERE assessment_id = a.id) WHERE ${where} ORDER BY a.created_at`, id) as Array<{ t: string }>;
   return listed('assessment', 'assessments', quoted(rows));
 }
 
-export function referencesToInstallation(ctx: StoreContext, id: Id): string[] {
-  return assessmentsWhere(ctx, 'a.installation_id = ?', id);
+export async function referencesToInstallation(ctx: StoreContext, id: Id): Promise<string[]> {
+  return await assessmentsWhere(ctx, 'a.installation_id = ?', id);
 }
 
-export function referencesToRoom(ctx: StoreContext, id: Id): string[] {
-  const lasers = (ctx.sql('SELECT laser_json FROM laser_installation WHERE room_id = ? ORDER BY created_at').all(id) as Array<{ laser_json: string }>).map(
+export async function referencesToRoom(ctx: StoreContext, id: Id): Promise<string[]> {
+  const lasers = (await ctx.q.all('SELECT laser_json FROM laser_installation WHERE room_id = ? ORDER BY created_at', id) as Array<{ laser_json: string }>).map(
     (r) => `"${(JSON.parse(r.laser_json) as { name: string }).name}"`,
   );
-  return [...listed('laser', 'lasers', lasers), ...assessmentsWhere(ctx, 'a.room_id = ?', id)];
+  return [...listed('laser', 'lasers', lasers), ...await assessmentsWhere(ctx, 'a.room_id = ?', id)];
 }
 
-export function referencesToSite(ctx: StoreContext, id: Id): string[] {
-  const rooms = (ctx.sql('SELECT code AS t FROM room WHERE site_id = ? ORDER BY code').all(id) as Array<{ t: string }>).map((r) => r.t);
-  const eyewear = (ctx.sql('SELECT tag AS t FROM eyewear WHERE site_id = ? ORDER BY tag').all(id) as Array<{ t: string }>).map((r) => r.t);
+export async function referencesToSite(ctx: StoreContext, id: Id): Promise<string[]> {
+  const rooms = (await ctx.q.all('SELECT code AS t FROM room WHERE site_id = ? ORDER BY code', id) as Array<{ t: string }>).map((r) => r.t);
+  const eyewear = (await ctx.q.all('SELECT tag AS t FROM eyewear WHERE site_id = ? ORDER BY tag', id) as Array<{ t: string }>).map((r) => r.t);
   return [...listed('room', 'rooms', rooms), ...listed('eyewear', 'eyewear', eyewear)];
 }
 
-export function referencesToPerson(ctx: StoreContext, id: Id): string[] {
-  const rows = ctx
-    .sql('SELECT r.title AS t, r.revision_no AS n FROM signature s JOIN revision r ON r.id = s.revision_id WHERE s.person_id = ? ORDER BY s.signed_at')
-    .all(id) as Array<{ t: string; n: number }>;
+export async function referencesToPerson(ctx: StoreContext, id: Id): Promise<string[]> {
+  const rows = await ctx.q.all('SELECT r.title AS t, r.revision_no AS n FROM signature s JOIN revision r ON r.id = s.revision_id WHERE s.person_id = ? ORDER BY s.signed_at', id) as Array<{ t: string; n: number }>;
   return rows.length ? [`signed ${listed('assessment', 'assessments', rows.map((r) => `"${r.t}" (revision ${r.n})`))[0] ?? ''}`] : [];
 }
 

@@ -16,7 +16,8 @@ import {
   SitePatchSchema,
 } from '../schemas/records.js';
 import { EyewearSpecSchema, StoredEyewearSpecSchema, StoredLaserInputSchema } from '../schemas/inputs.js';
-import { notFound, parseOrThrow, translateSqliteError, type StoreContext } from './context.js';
+import { notFound, parseOrThrow, type StoreContext } from './context.js';
+import { named } from './named-params.js';
 import { referencesToInstallation, referencesToPerson, referencesToRoom, referencesToSite, refuseIfReferenced } from './references.js';
 import type {
   Eyewear,
@@ -34,11 +35,11 @@ import type {
 } from './types.js';
 import { RecordError } from './types.js';
 
-function guard<T>(ctx: StoreContext, what: string, fn: () => T): T {
+async function guard<T>(ctx: StoreContext, what: string, fn: () => Promise<T>): Promise<T> {
   try {
-    return fn();
+    return await fn();
   } catch (e) {
-    throw translateSqliteError(e, what, ctx.db.name);
+    throw ctx.engine.translateError(e, what, true);
   }
 }
 
@@ -63,38 +64,36 @@ const siteFromRow = (r: SiteRow): Site => ({
   updatedAt: r.updated_at,
 });
 
-export function listSites(ctx: StoreContext): Site[] {
-  return (ctx.sql('SELECT * FROM site ORDER BY name, id').all() as SiteRow[]).map(siteFromRow);
+export async function listSites(ctx: StoreContext): Promise<Site[]> {
+  return (await ctx.q.all('SELECT * FROM site ORDER BY name, id') as SiteRow[]).map(siteFromRow);
 }
-export function getSite(ctx: StoreContext, id: Id): Site {
-  const r = ctx.sql('SELECT * FROM site WHERE id = ?').get(id) as SiteRow | undefined;
+export async function getSite(ctx: StoreContext, id: Id): Promise<Site> {
+  const r = await ctx.q.get('SELECT * FROM site WHERE id = ?', id) as SiteRow | undefined;
   if (!r) throw notFound('site', id);
   return siteFromRow(r);
 }
-export function insertSite(ctx: StoreContext, s: Site): void {
-  ctx
-    .sql('INSERT INTO site (id, name, building, address, notes, created_at, updated_at) VALUES (@id, @name, @building, @address, @notes, @createdAt, @updatedAt)')
-    .run(s);
+export async function insertSite(ctx: StoreContext, s: Site): Promise<void> {
+  await ctx.q.run(...named('INSERT INTO site (id, name, building, address, notes, created_at, updated_at) VALUES (@id, @name, @building, @address, @notes, @createdAt, @updatedAt)', s));
 }
-export function createSite(ctx: StoreContext, draft: SiteDraft): Site {
+export async function createSite(ctx: StoreContext, draft: SiteDraft): Promise<Site> {
   const d = parseOrThrow(SiteDraftSchema, draft, 'Site');
   const now = ctx.now();
   const site: Site = { id: ctx.newId(), name: d.name, building: d.building ?? '', address: d.address ?? '', notes: d.notes ?? '', createdAt: now, updatedAt: now };
-  guard(ctx, `Site "${d.name}"`, () => insertSite(ctx, site));
+  await guard(ctx, `Site "${d.name}"`, async () => await insertSite(ctx, site));
   return site;
 }
-export function updateSite(ctx: StoreContext, id: Id, patch: Partial<SiteDraft>): Site {
+export async function updateSite(ctx: StoreContext, id: Id, patch: Partial<SiteDraft>): Promise<Site> {
   const p = parseOrThrow(SitePatchSchema, patch, 'Site changes');
-  const next: Site = { ...getSite(ctx, id), ...stripUndefined(p), updatedAt: ctx.now() };
-  guard(ctx, 'Site', () =>
-    ctx.sql('UPDATE site SET name=@name, building=@building, address=@address, notes=@notes, updated_at=@updatedAt WHERE id=@id').run(next),
+  const next: Site = { ...await getSite(ctx, id), ...stripUndefined(p), updatedAt: ctx.now() };
+  await guard(ctx, 'Site', async () =>
+    await ctx.q.run(...named('UPDATE site SET name=@name, building=@building, address=@address, notes=@notes, updated_at=@updatedAt WHERE id=@id', next)),
   );
   return next;
 }
-export function deleteSite(ctx: StoreContext, id: Id): void {
-  const site = getSite(ctx, id);
-  refuseIfReferenced(`Site "${site.name}" cannot be deleted`, referencesToSite(ctx, id), 'Move or delete them first.');
-  guard(ctx, `Site "${site.name}"`, () => ctx.sql('DELETE FROM site WHERE id = ?').run(id));
+export async function deleteSite(ctx: StoreContext, id: Id): Promise<void> {
+  const site = await getSite(ctx, id);
+  refuseIfReferenced(`Site "${site.name}" cannot be deleted`, await referencesToSite(ctx, id), 'Move or delete them first.');
+  await guard(ctx, `Site "${site.name}"`, async () => await ctx.q.run('DELETE FROM site WHERE id = ?', id));
 }
 
 // ---------------------------------------------------------------- rooms
@@ -122,25 +121,21 @@ const roomFromRow = (r: RoomRow): Room => ({
   updatedAt: r.updated_at,
 });
 
-export function listRooms(ctx: StoreContext, siteId: Id): Room[] {
-  return (ctx.sql('SELECT * FROM room WHERE site_id = ? ORDER BY code, id').all(siteId) as RoomRow[]).map(roomFromRow);
+export async function listRooms(ctx: StoreContext, siteId: Id): Promise<Room[]> {
+  return (await ctx.q.all('SELECT * FROM room WHERE site_id = ? ORDER BY code, id', siteId) as RoomRow[]).map(roomFromRow);
 }
-export function getRoom(ctx: StoreContext, id: Id): Room {
-  const r = ctx.sql('SELECT * FROM room WHERE id = ?').get(id) as RoomRow | undefined;
+export async function getRoom(ctx: StoreContext, id: Id): Promise<Room> {
+  const r = await ctx.q.get('SELECT * FROM room WHERE id = ?', id) as RoomRow | undefined;
   if (!r) throw notFound('room', id);
   return roomFromRow(r);
 }
-export function insertRoom(ctx: StoreContext, r: Room): void {
-  ctx
-    .sql(
-      `INSERT INTO room (id, site_id, code, name, responsible_person, contact, notes, created_at, updated_at)
-       VALUES (@id, @siteId, @code, @name, @responsiblePerson, @contact, @notes, @createdAt, @updatedAt)`,
-    )
-    .run(r);
+export async function insertRoom(ctx: StoreContext, r: Room): Promise<void> {
+  await ctx.q.run(...named(`INSERT INTO room (id, site_id, code, name, responsible_person, contact, notes, created_at, updated_at)
+       VALUES (@id, @siteId, @code, @name, @responsiblePerson, @contact, @notes, @createdAt, @updatedAt)`, r));
 }
-export function createRoom(ctx: StoreContext, draft: RoomDraft): Room {
+export async function createRoom(ctx: StoreContext, draft: RoomDraft): Promise<Room> {
   const d = parseOrThrow(RoomDraftSchema, draft, 'Room');
-  getSite(ctx, d.siteId);
+  await getSite(ctx, d.siteId);
   const now = ctx.now();
   const room: Room = {
     id: ctx.newId(),
@@ -153,23 +148,21 @@ export function createRoom(ctx: StoreContext, draft: RoomDraft): Room {
     createdAt: now,
     updatedAt: now,
   };
-  guard(ctx, `Room ${d.code}`, () => insertRoom(ctx, room));
+  await guard(ctx, `Room ${d.code}`, async () => await insertRoom(ctx, room));
   return room;
 }
-export function updateRoom(ctx: StoreContext, id: Id, patch: Partial<Omit<RoomDraft, 'siteId'>>): Room {
+export async function updateRoom(ctx: StoreContext, id: Id, patch: Partial<Omit<RoomDraft, 'siteId'>>): Promise<Room> {
   const p = parseOrThrow(RoomPatchSchema, patch, 'Room changes');
-  const next: Room = { ...getRoom(ctx, id), ...stripUndefined(p), updatedAt: ctx.now() };
-  guard(ctx, `Room ${next.code}`, () =>
-    ctx
-      .sql('UPDATE room SET code=@code, name=@name, responsible_person=@responsiblePerson, contact=@contact, notes=@notes, updated_at=@updatedAt WHERE id=@id')
-      .run(next),
+  const next: Room = { ...await getRoom(ctx, id), ...stripUndefined(p), updatedAt: ctx.now() };
+  await guard(ctx, `Room ${next.code}`, async () =>
+    await ctx.q.run(...named('UPDATE room SET code=@code, name=@name, responsible_person=@responsiblePerson, contact=@contact, notes=@notes, updated_at=@updatedAt WHERE id=@id', next)),
   );
   return next;
 }
-export function deleteRoom(ctx: StoreContext, id: Id): void {
-  const room = getRoom(ctx, id);
-  refuseIfReferenced(`Room ${room.code} cannot be deleted`, referencesToRoom(ctx, id), 'Its records stay with it.');
-  guard(ctx, `Room ${room.code}`, () => ctx.sql('DELETE FROM room WHERE id = ?').run(id));
+export async function deleteRoom(ctx: StoreContext, id: Id): Promise<void> {
+  const room = await getRoom(ctx, id);
+  refuseIfReferenced(`Room ${room.code} cannot be deleted`, await referencesToRoom(ctx, id), 'Its records stay with it.');
+  await guard(ctx, `Room ${room.code}`, async () => await ctx.q.run('DELETE FROM room WHERE id = ?', id));
 }
 
 // ---------------------------------------------------------------- laser installations
@@ -225,34 +218,30 @@ function installationParams(i: LaserInstallation) {
   };
 }
 
-export function listInstallations(ctx: StoreContext, roomId: Id): LaserInstallation[] {
-  return (ctx.sql('SELECT * FROM laser_installation WHERE room_id = ? ORDER BY created_at, rowid').all(roomId) as InstallationRow[]).map(
+export async function listInstallations(ctx: StoreContext, roomId: Id): Promise<LaserInstallation[]> {
+  return (await ctx.q.all(`SELECT * FROM laser_installation WHERE room_id = ? ORDER BY created_at, ${ctx.engine.insertionOrder}`, roomId) as InstallationRow[]).map(
     installationFromRow,
   );
 }
-export function getInstallation(ctx: StoreContext, id: Id): LaserInstallation {
-  const r = ctx.sql('SELECT * FROM laser_installation WHERE id = ?').get(id) as InstallationRow | undefined;
+export async function getInstallation(ctx: StoreContext, id: Id): Promise<LaserInstallation> {
+  const r = await ctx.q.get('SELECT * FROM laser_installation WHERE id = ?', id) as InstallationRow | undefined;
   if (!r) throw notFound('laser installation', id);
   return installationFromRow(r);
 }
-export function insertInstallation(ctx: StoreContext, i: LaserInstallation): void {
-  ctx
-    .sql(
-      `INSERT INTO laser_installation (id, room_id, laser_type, maker, model, serial_number, registration_number, laser_json,
+export async function insertInstallation(ctx: StoreContext, i: LaserInstallation): Promise<void> {
+  await ctx.q.run(...named(`INSERT INTO laser_installation (id, room_id, laser_type, maker, model, serial_number, registration_number, laser_json,
          class_as_labelled, status, notes, created_at, updated_at)
        VALUES (@id, @roomId, @laserType, @maker, @model, @serialNumber, @registrationNumber, @laserJson,
-         @classAsLabelled, @status, @notes, @createdAt, @updatedAt)`,
-    )
-    .run(installationParams(i));
+         @classAsLabelled, @status, @notes, @createdAt, @updatedAt)`, installationParams(i)));
 }
 /**
  * Assessments refer to beams by id, and the calculation refuses a room where two beams share one:
  * the register refuses it when the laser is stored, not when the next assessment is made.
  */
-function refuseBeamIdClash(ctx: StoreContext, roomId: Id, laser: LaserInput, exceptId: Id | null): void {
+async function refuseBeamIdClash(ctx: StoreContext, roomId: Id, laser: LaserInput, exceptId: Id | null): Promise<void> {
   const ours = laser.beams.map((b) => b.id).filter((x): x is string => x !== undefined);
   if (ours.length === 0) return;
-  const rows = ctx.sql('SELECT id, laser_json FROM laser_installation WHERE room_id = ?').all(roomId) as Array<{ id: string; laser_json: string }>;
+  const rows = await ctx.q.all('SELECT id, laser_json FROM laser_installation WHERE room_id = ?', roomId) as Array<{ id: string; laser_json: string }>;
   for (const r of rows) {
     if (r.id === exceptId) continue;
     const other = JSON.parse(r.laser_json) as { name?: string; beams?: Array<{ id?: string }> };
@@ -265,13 +254,13 @@ function refuseBeamIdClash(ctx: StoreContext, roomId: Id, laser: LaserInput, exc
 }
 
 /** The laser's id is the installation's id, so that beams in an assessment trace back to the register. */
-export function createInstallation(ctx: StoreContext, draft: LaserInstallationDraft): LaserInstallation {
+export async function createInstallation(ctx: StoreContext, draft: LaserInstallationDraft): Promise<LaserInstallation> {
   const d = parseOrThrow(LaserInstallationDraftSchema, draft, 'Laser installation');
-  getRoom(ctx, d.roomId);
+  await getRoom(ctx, d.roomId);
   const now = ctx.now();
   const id = ctx.newId();
   const laser: LaserInput = { ...d.laser, id };
-  refuseBeamIdClash(ctx, d.roomId, laser, null);
+  await refuseBeamIdClash(ctx, d.roomId, laser, null);
   const inst: LaserInstallation = {
     id,
     roomId: d.roomId,
@@ -287,46 +276,38 @@ export function createInstallation(ctx: StoreContext, draft: LaserInstallationDr
     createdAt: now,
     updatedAt: now,
   };
-  guard(ctx, `Laser ${laser.name}`, () => insertInstallation(ctx, inst));
+  await guard(ctx, `Laser ${laser.name}`, async () => await insertInstallation(ctx, inst));
   return inst;
 }
-export function updateInstallation(
+export async function updateInstallation(
   ctx: StoreContext,
   id: Id,
   patch: Partial<Omit<LaserInstallationDraft, 'roomId'>>,
-): LaserInstallation {
+): Promise<LaserInstallation> {
   const p = parseOrThrow(LaserInstallationPatchSchema, patch, 'Laser installation changes');
-  const prev = getInstallation(ctx, id);
+  const prev = await getInstallation(ctx, id);
   const merged = { ...prev, ...stripUndefined(p), updatedAt: ctx.now() };
   const laser: LaserInput = { ...merged.laser, id };
   const next: LaserInstallation = { ...merged, laser, classAsLabelled: laser.classAsLabelled ?? null };
-  if (p.laser !== undefined) refuseBeamIdClash(ctx, prev.roomId, laser, id);
-  guard(ctx, `Laser ${laser.name}`, () =>
-    ctx
-      .sql(
-        `UPDATE laser_installation SET laser_type=@laserType, maker=@maker, model=@model, serial_number=@serialNumber,
+  if (p.laser !== undefined) await refuseBeamIdClash(ctx, prev.roomId, laser, id);
+  await guard(ctx, `Laser ${laser.name}`, async () =>
+    await ctx.q.run(...named(`UPDATE laser_installation SET laser_type=@laserType, maker=@maker, model=@model, serial_number=@serialNumber,
            registration_number=@registrationNumber, laser_json=@laserJson, class_as_labelled=@classAsLabelled, status=@status,
-           notes=@notes, updated_at=@updatedAt WHERE id=@id`,
-      )
-      .run(installationParams(next)),
+           notes=@notes, updated_at=@updatedAt WHERE id=@id`, installationParams(next))),
   );
   return next;
 }
 /** Replace a laser's row in place (import of a newer copy): assessments keep referring to it. */
-export function replaceInstallation(ctx: StoreContext, i: LaserInstallation): void {
-  ctx
-    .sql(
-      `UPDATE laser_installation SET room_id=@roomId, laser_type=@laserType, maker=@maker, model=@model, serial_number=@serialNumber,
+export async function replaceInstallation(ctx: StoreContext, i: LaserInstallation): Promise<void> {
+  await ctx.q.run(...named(`UPDATE laser_installation SET room_id=@roomId, laser_type=@laserType, maker=@maker, model=@model, serial_number=@serialNumber,
          registration_number=@registrationNumber, laser_json=@laserJson, class_as_labelled=@classAsLabelled, status=@status,
-         notes=@notes, created_at=@createdAt, updated_at=@updatedAt WHERE id=@id`,
-    )
-    .run(installationParams(i));
+         notes=@notes, created_at=@createdAt, updated_at=@updatedAt WHERE id=@id`, installationParams(i)));
 }
-export function deleteInstallation(ctx: StoreContext, id: Id): void {
-  const inst = getInstallation(ctx, id);
-  refuseIfReferenced(`Laser "${inst.laser.name}" cannot be deleted`, referencesToInstallation(ctx, id), 'Retire it instead: it then leaves new assessments but stays in the records.');
-  guard(ctx, 'Laser installation (retire it instead if an assessment refers to it)', () =>
-    ctx.sql('DELETE FROM laser_installation WHERE id = ?').run(id),
+export async function deleteInstallation(ctx: StoreContext, id: Id): Promise<void> {
+  const inst = await getInstallation(ctx, id);
+  refuseIfReferenced(`Laser "${inst.laser.name}" cannot be deleted`, await referencesToInstallation(ctx, id), 'Retire it instead: it then leaves new assessments but stays in the records.');
+  await guard(ctx, 'Laser installation (retire it instead if an assessment refers to it)', async () =>
+    await ctx.q.run('DELETE FROM laser_installation WHERE id = ?', id),
   );
 }
 
@@ -376,25 +357,21 @@ const eyewearParams = (e: Eyewear) => ({
   updatedAt: e.updatedAt,
 });
 
-export function listEyewear(ctx: StoreContext, siteId: Id): Eyewear[] {
-  return (ctx.sql('SELECT * FROM eyewear WHERE site_id = ? ORDER BY tag, id').all(siteId) as EyewearRow[]).map(eyewearFromRow);
+export async function listEyewear(ctx: StoreContext, siteId: Id): Promise<Eyewear[]> {
+  return (await ctx.q.all('SELECT * FROM eyewear WHERE site_id = ? ORDER BY tag, id', siteId) as EyewearRow[]).map(eyewearFromRow);
 }
-export function getEyewear(ctx: StoreContext, id: Id): Eyewear {
-  const r = ctx.sql('SELECT * FROM eyewear WHERE id = ?').get(id) as EyewearRow | undefined;
+export async function getEyewear(ctx: StoreContext, id: Id): Promise<Eyewear> {
+  const r = await ctx.q.get('SELECT * FROM eyewear WHERE id = ?', id) as EyewearRow | undefined;
   if (!r) throw notFound('eyewear', id);
   return eyewearFromRow(r);
 }
-export function insertEyewear(ctx: StoreContext, e: Eyewear): void {
-  ctx
-    .sql(
-      `INSERT INTO eyewear (id, site_id, tag, spec_json, location, quantity, notes, inspected_on, condition, next_inspection, created_at, updated_at)
-       VALUES (@id, @siteId, @tag, @specJson, @location, @quantity, @notes, @inspectedOn, @condition, @nextInspection, @createdAt, @updatedAt)`,
-    )
-    .run(eyewearParams(e));
+export async function insertEyewear(ctx: StoreContext, e: Eyewear): Promise<void> {
+  await ctx.q.run(...named(`INSERT INTO eyewear (id, site_id, tag, spec_json, location, quantity, notes, inspected_on, condition, next_inspection, created_at, updated_at)
+       VALUES (@id, @siteId, @tag, @specJson, @location, @quantity, @notes, @inspectedOn, @condition, @nextInspection, @createdAt, @updatedAt)`, eyewearParams(e)));
 }
-export function createEyewear(ctx: StoreContext, draft: EyewearDraft): Eyewear {
+export async function createEyewear(ctx: StoreContext, draft: EyewearDraft): Promise<Eyewear> {
   const d = parseOrThrow(EyewearDraftSchema, draft, 'Eyewear');
-  getSite(ctx, d.siteId);
+  await getSite(ctx, d.siteId);
   const now = ctx.now();
   const e: Eyewear = {
     id: ctx.newId(),
@@ -409,30 +386,24 @@ export function createEyewear(ctx: StoreContext, draft: EyewearDraft): Eyewear {
     createdAt: now,
     updatedAt: now,
   };
-  guard(ctx, `Eyewear ${d.spec.id}`, () => insertEyewear(ctx, e));
+  await guard(ctx, `Eyewear ${d.spec.id}`, async () => await insertEyewear(ctx, e));
   return e;
 }
-export function updateEyewear(ctx: StoreContext, id: Id, patch: Partial<Omit<EyewearDraft, 'siteId'>>): Eyewear {
+export async function updateEyewear(ctx: StoreContext, id: Id, patch: Partial<Omit<EyewearDraft, 'siteId'>>): Promise<Eyewear> {
   const p = parseOrThrow(EyewearPatchSchema, patch, 'Eyewear changes');
-  const next: Eyewear = { ...getEyewear(ctx, id), ...stripUndefined(p), updatedAt: ctx.now() };
-  guard(ctx, `Eyewear ${next.spec.id}`, () =>
-    ctx
-      .sql('UPDATE eyewear SET tag=@tag, spec_json=@specJson, location=@location, quantity=@quantity, notes=@notes, inspected_on=@inspectedOn, condition=@condition, next_inspection=@nextInspection, updated_at=@updatedAt WHERE id=@id')
-      .run(eyewearParams(next)),
+  const next: Eyewear = { ...await getEyewear(ctx, id), ...stripUndefined(p), updatedAt: ctx.now() };
+  await guard(ctx, `Eyewear ${next.spec.id}`, async () =>
+    await ctx.q.run(...named('UPDATE eyewear SET tag=@tag, spec_json=@specJson, location=@location, quantity=@quantity, notes=@notes, inspected_on=@inspectedOn, condition=@condition, next_inspection=@nextInspection, updated_at=@updatedAt WHERE id=@id', eyewearParams(next))),
   );
   return next;
 }
-export function replaceEyewear(ctx: StoreContext, e: Eyewear): void {
-  ctx
-    .sql(
-      `UPDATE eyewear SET site_id=@siteId, tag=@tag, spec_json=@specJson, location=@location, quantity=@quantity, notes=@notes,
-         created_at=@createdAt, updated_at=@updatedAt WHERE id=@id`,
-    )
-    .run(eyewearParams(e));
+export async function replaceEyewear(ctx: StoreContext, e: Eyewear): Promise<void> {
+  await ctx.q.run(...named(`UPDATE eyewear SET site_id=@siteId, tag=@tag, spec_json=@specJson, location=@location, quantity=@quantity, notes=@notes,
+         created_at=@createdAt, updated_at=@updatedAt WHERE id=@id`, eyewearParams(e)));
 }
-export function deleteEyewear(ctx: StoreContext, id: Id): void {
-  getEyewear(ctx, id);
-  guard(ctx, 'Eyewear', () => ctx.sql('DELETE FROM eyewear WHERE id = ?').run(id));
+export async function deleteEyewear(ctx: StoreContext, id: Id): Promise<void> {
+  await getEyewear(ctx, id);
+  await guard(ctx, 'Eyewear', async () => await ctx.q.run('DELETE FROM eyewear WHERE id = ?', id));
 }
 
 // ---------------------------------------------------------------- people
@@ -456,46 +427,44 @@ const personFromRow = (r: PersonRow): Person => ({
   updatedAt: r.updated_at,
 });
 
-export function listPeople(ctx: StoreContext): Person[] {
-  return (ctx.sql('SELECT * FROM person ORDER BY name, id').all() as PersonRow[]).map(personFromRow);
+export async function listPeople(ctx: StoreContext): Promise<Person[]> {
+  return (await ctx.q.all('SELECT * FROM person ORDER BY name, id') as PersonRow[]).map(personFromRow);
 }
-export function getPerson(ctx: StoreContext, id: Id): Person {
-  const r = ctx.sql('SELECT * FROM person WHERE id = ?').get(id) as PersonRow | undefined;
+export async function getPerson(ctx: StoreContext, id: Id): Promise<Person> {
+  const r = await ctx.q.get('SELECT * FROM person WHERE id = ?', id) as PersonRow | undefined;
   if (!r) throw notFound('person', id);
   return personFromRow(r);
 }
-export function insertPerson(ctx: StoreContext, p: Person): void {
-  ctx
-    .sql('INSERT INTO person (id, name, role, email, phone, created_at, updated_at) VALUES (@id, @name, @role, @email, @phone, @createdAt, @updatedAt)')
-    .run(p);
+export async function insertPerson(ctx: StoreContext, p: Person): Promise<void> {
+  await ctx.q.run(...named('INSERT INTO person (id, name, role, email, phone, created_at, updated_at) VALUES (@id, @name, @role, @email, @phone, @createdAt, @updatedAt)', p));
 }
-export function createPerson(ctx: StoreContext, draft: PersonDraft): Person {
+export async function createPerson(ctx: StoreContext, draft: PersonDraft): Promise<Person> {
   const d = parseOrThrow(PersonDraftSchema, draft, 'Person');
   const now = ctx.now();
   const p: Person = { id: ctx.newId(), name: d.name, role: d.role ?? '', email: d.email ?? '', phone: d.phone ?? '', createdAt: now, updatedAt: now };
-  guard(ctx, `Person ${d.name}`, () => insertPerson(ctx, p));
+  await guard(ctx, `Person ${d.name}`, async () => await insertPerson(ctx, p));
   return p;
 }
-export function updatePerson(ctx: StoreContext, id: Id, patch: Partial<PersonDraft>): Person {
+export async function updatePerson(ctx: StoreContext, id: Id, patch: Partial<PersonDraft>): Promise<Person> {
   const p = parseOrThrow(PersonPatchSchema, patch, 'Person changes');
-  const next: Person = { ...getPerson(ctx, id), ...stripUndefined(p), updatedAt: ctx.now() };
-  guard(ctx, 'Person', () =>
-    ctx.sql('UPDATE person SET name=@name, role=@role, email=@email, phone=@phone, updated_at=@updatedAt WHERE id=@id').run(next),
+  const next: Person = { ...await getPerson(ctx, id), ...stripUndefined(p), updatedAt: ctx.now() };
+  await guard(ctx, 'Person', async () =>
+    await ctx.q.run(...named('UPDATE person SET name=@name, role=@role, email=@email, phone=@phone, updated_at=@updatedAt WHERE id=@id', next)),
   );
   return next;
 }
-export function deletePerson(ctx: StoreContext, id: Id): void {
-  const person = getPerson(ctx, id);
-  refuseIfReferenced(`${person.name} cannot be removed from the register`, referencesToPerson(ctx, id), 'Whoever signed records stays in the register.');
-  guard(ctx, 'Person (someone who signed records stays in the register)', () => ctx.sql('DELETE FROM person WHERE id = ?').run(id));
+export async function deletePerson(ctx: StoreContext, id: Id): Promise<void> {
+  const person = await getPerson(ctx, id);
+  refuseIfReferenced(`${person.name} cannot be removed from the register`, await referencesToPerson(ctx, id), 'Whoever signed records stays in the register.');
+  await guard(ctx, 'Person (someone who signed records stays in the register)', async () => await ctx.q.run('DELETE FROM person WHERE id = ?', id));
 }
 
 // ---------------------------------------------------------------- snapshot for an assessment
 
 /** The room's in-service lasers and its site's eyewear, as the core's RoomInput. */
-export function roomInputFromRegister(ctx: StoreContext, roomId: Id): RoomInput {
-  const room = getRoom(ctx, roomId);
-  const lasers = listInstallations(ctx, roomId)
+export async function roomInputFromRegister(ctx: StoreContext, roomId: Id): Promise<RoomInput> {
+  const room = await getRoom(ctx, roomId);
+  const lasers = (await listInstallations(ctx, roomId))
     .filter((i) => i.status === 'in-service')
     .map((i) => i.laser);
   // Eyewear stored under an older, looser rule (e.g. an RB6 marking; EN 208 ends at RB5) would make
@@ -503,7 +472,7 @@ export function roomInputFromRegister(ctx: StoreContext, roomId: Id): RoomInput 
   // claimed for it) and stays on the shelf for correction. Lasers are all kept: a laser left out
   // silently could hide a hazard; the workspace names what to fix. Damaged or withdrawn eyewear is
   // never offered as protection (EN 207: damaged filters must not be used).
-  const eyewear = listEyewear(ctx, room.siteId)
+  const eyewear = (await listEyewear(ctx, room.siteId))
     .filter((e) => e.condition !== 'damaged' && e.condition !== 'withdrawn')
     .map((e) => e.spec)
     .filter((spec) => EyewearSpecSchema.safeParse(spec).success);

@@ -13,7 +13,7 @@ import type { LaserInput } from '../../../core/model/inputs.js';
 import { AssessmentContentSchema, IdSchema, TimestampSchema, LaserInstallationDraftSchema } from '../schemas/records.js';
 import { LaserInputSchema } from '../schemas/inputs.js';
 import { assertNotStale, clockTime, createAssessment, getAssessment, saveAssessment } from './assessments.js';
-import { parseOrThrow, translateSqliteError, type StoreContext } from './context.js';
+import { inTransaction, parseOrThrow, type StoreContext } from './context.js';
 import { createInstallation, getInstallation, getRoom, listInstallations, updateInstallation } from './register.js';
 import { RecordError, type Assessment, type AssessmentContent, type Id, type LaserInstallation, type SaveBase, type Timestamp } from './types.js';
 
@@ -54,18 +54,18 @@ export function sameInstant(a: Timestamp, b: Timestamp): boolean {
   return Date.parse(a) === Date.parse(b);
 }
 
-export function saveWork(ctx: StoreContext, raw: WorkSave): WorkSaved {
+export async function saveWork(ctx: StoreContext, raw: WorkSave): Promise<WorkSaved> {
   const w = parseOrThrow(WorkSaveSchema, raw, 'Save');
   if (w.assessmentId !== null && w.expected === null) {
     throw new RecordError('invalid', 'Save: the version of the assessment you opened is missing (reload it and save again)');
   }
-  const room = getRoom(ctx, w.roomId);
+  const room = await getRoom(ctx, w.roomId);
   const laserIds: Record<string, Id> = {};
-  const run = ctx.db.transaction((): Assessment => {
+  const assessment = await inTransaction(ctx, `Assessment of room ${room.code}`, async (ctx): Promise<Assessment> => {
     // 1. Nothing is written unless every part is still as the officer opened it.
-    if (w.assessmentId !== null) assertNotStale(ctx, w.assessmentId, w.expected ?? undefined);
+    if (w.assessmentId !== null) await assertNotStale(ctx, w.assessmentId, w.expected ?? undefined);
     for (const c of w.changedLasers) {
-      const now = getInstallation(ctx, c.id);
+      const now = await getInstallation(ctx, c.id);
       if (now.roomId !== room.id) throw new RecordError('invalid', `Laser "${now.laser.name}" is not in room ${room.code}`);
       if (!sameInstant(now.updatedAt, c.expectedUpdatedAt)) {
         throw new RecordError(
@@ -76,23 +76,17 @@ export function saveWork(ctx: StoreContext, raw: WorkSave): WorkSaved {
     }
     // 2. Register changes, then the assessment that refers to them.
     for (const n of w.newLasers) {
-      const made = createInstallation(ctx, { roomId: room.id, laser: n.laser, laserType: n.laserType ?? n.laser.name });
+      const made = await createInstallation(ctx, { roomId: room.id, laser: n.laser, laserType: n.laserType ?? n.laser.name });
       laserIds[n.draftId] = made.id;
     }
-    for (const c of w.changedLasers) updateInstallation(ctx, c.id, { laser: c.laser });
+    for (const c of w.changedLasers) await updateInstallation(ctx, c.id, { laser: c.laser });
     const content: AssessmentContent = {
       ...w.content,
       input: { ...w.content.input, lasers: w.content.input.lasers.map((l) => (laserIds[l.id] ? { ...l, id: laserIds[l.id] ?? l.id } : l)) },
     };
     return w.assessmentId === null
-      ? createAssessment(ctx, { roomId: room.id, content })
-      : saveAssessment(ctx, w.assessmentId, content, w.expected ?? undefined);
+      ? await createAssessment(ctx, { roomId: room.id, content })
+      : await saveAssessment(ctx, w.assessmentId, content, w.expected ?? undefined);
   });
-  let assessment: Assessment;
-  try {
-    assessment = run.immediate();
-  } catch (e) {
-    throw translateSqliteError(e, `Assessment of room ${room.code}`, ctx.db.name);
-  }
-  return { assessment: getAssessment(ctx, assessment.id), installations: listInstallations(ctx, room.id), laserIds };
+  return { assessment: await getAssessment(ctx, assessment.id), installations: await listInstallations(ctx, room.id), laserIds };
 }

@@ -4,7 +4,7 @@
  * re-exported here so the back end keeps one import.
  * Nothing here imports Electron: the store runs under plain Node and in the Electron main process.
  */
-import type { CoSignature } from './co-signatures.js';
+import type { CoSignature } from './co-signature-checks.js';
 import type {
   Assessment,
   AssessmentContent,
@@ -69,99 +69,98 @@ export interface StoreInfo {
   readonly warnings: readonly string[];
 }
 
-
 export interface RecordStore {
   readonly info: StoreInfo;
-  close(): void;
+  close(): Promise<void>;
 
   // register
-  listSites(): Site[];
-  getSite(id: Id): Site;
-  createSite(draft: SiteDraft): Site;
-  updateSite(id: Id, patch: Partial<SiteDraft>): Site;
-  deleteSite(id: Id): void;
+  listSites(): Promise<Site[]>;
+  getSite(id: Id): Promise<Site>;
+  createSite(draft: SiteDraft): Promise<Site>;
+  updateSite(id: Id, patch: Partial<SiteDraft>): Promise<Site>;
+  deleteSite(id: Id): Promise<void>;
 
-  listRooms(siteId: Id): Room[];
-  getRoom(id: Id): Room;
-  createRoom(draft: RoomDraft): Room;
-  updateRoom(id: Id, patch: Partial<Omit<RoomDraft, 'siteId'>>): Room;
-  deleteRoom(id: Id): void;
+  listRooms(siteId: Id): Promise<Room[]>;
+  getRoom(id: Id): Promise<Room>;
+  createRoom(draft: RoomDraft): Promise<Room>;
+  updateRoom(id: Id, patch: Partial<Omit<RoomDraft, 'siteId'>>): Promise<Room>;
+  deleteRoom(id: Id): Promise<void>;
 
-  listInstallations(roomId: Id): LaserInstallation[];
-  getInstallation(id: Id): LaserInstallation;
-  createInstallation(draft: LaserInstallationDraft): LaserInstallation;
-  updateInstallation(id: Id, patch: Partial<Omit<LaserInstallationDraft, 'roomId'>>): LaserInstallation;
-  deleteInstallation(id: Id): void;
+  listInstallations(roomId: Id): Promise<LaserInstallation[]>;
+  getInstallation(id: Id): Promise<LaserInstallation>;
+  createInstallation(draft: LaserInstallationDraft): Promise<LaserInstallation>;
+  updateInstallation(id: Id, patch: Partial<Omit<LaserInstallationDraft, 'roomId'>>): Promise<LaserInstallation>;
+  deleteInstallation(id: Id): Promise<void>;
 
-  listEyewear(siteId: Id): Eyewear[];
-  getEyewear(id: Id): Eyewear;
-  createEyewear(draft: EyewearDraft): Eyewear;
-  updateEyewear(id: Id, patch: Partial<Omit<EyewearDraft, 'siteId'>>): Eyewear;
-  deleteEyewear(id: Id): void;
+  listEyewear(siteId: Id): Promise<Eyewear[]>;
+  getEyewear(id: Id): Promise<Eyewear>;
+  createEyewear(draft: EyewearDraft): Promise<Eyewear>;
+  updateEyewear(id: Id, patch: Partial<Omit<EyewearDraft, 'siteId'>>): Promise<Eyewear>;
+  deleteEyewear(id: Id): Promise<void>;
 
-  listPeople(): Person[];
-  getPerson(id: Id): Person;
-  createPerson(draft: PersonDraft): Person;
-  updatePerson(id: Id, patch: Partial<PersonDraft>): Person;
-  deletePerson(id: Id): void;
+  listPeople(): Promise<Person[]>;
+  getPerson(id: Id): Promise<Person>;
+  createPerson(draft: PersonDraft): Promise<Person>;
+  updatePerson(id: Id, patch: Partial<PersonDraft>): Promise<Person>;
+  deletePerson(id: Id): Promise<void>;
   /** Every revision in the laser's room that evaluated it, newest first. */
-  laserHistory(installationId: Id): LaserUse[];
+  laserHistory(installationId: Id): Promise<LaserUse[]>;
 
   /** Snapshot of the room's register as core input (in-service lasers, the site's eyewear). */
-  roomInputFromRegister(roomId: Id): RoomInput;
+  roomInputFromRegister(roomId: Id): Promise<RoomInput>;
   /** A fresh content skeleton for a room: register snapshot, default durations, empty choices. */
-  newAssessmentContent(roomId: Id, installationId?: Id | null): AssessmentContent;
+  newAssessmentContent(roomId: Id, installationId?: Id | null): Promise<AssessmentContent>;
 
   // assessments
   /** New assessment with revision 1 as a draft; results computed by the core. */
-  createAssessment(args: { roomId: Id; installationId?: Id | null; content: AssessmentContent }): Assessment;
-  getAssessment(id: Id): Assessment;
-  listAssessments(roomId: Id): AssessmentSummary[];
+  createAssessment(args: { roomId: Id; installationId?: Id | null; content: AssessmentContent }): Promise<Assessment>;
+  getAssessment(id: Id): Promise<Assessment>;
+  listAssessments(roomId: Id): Promise<AssessmentSummary[]>;
   /** Assessments whose current revision is due for review on or before `date`. */
-  listDueForReview(date: CalendarDate): AssessmentSummary[];
+  listDueForReview(date: CalendarDate): Promise<AssessmentSummary[]>;
   /** Every assessment in the database, oldest first (whole-database verification). */
-  listAllAssessments(): AssessmentSummary[];
+  listAllAssessments(): Promise<AssessmentSummary[]>;
   /**
    * Save content: into the open draft, or — when the newest revision is signed — into a new draft
    * revision based on it (the signed one stays unchanged). Results are recomputed.
    */
-  saveAssessment(id: Id, content: AssessmentContent, expected?: SaveBase): Assessment;
+  saveAssessment(id: Id, content: AssessmentContent, expected?: SaveBase): Promise<Assessment>;
   /**
    * The workspace's save: new and edited register lasers plus the assessment, in one transaction;
    * refused whole (code 'stale') when any part changed since it was opened.
    */
-  saveWork(save: WorkSave): WorkSaved;
+  saveWork(save: WorkSave): Promise<WorkSaved>;
   /** Delete an assessment that has no signed revision, or discard its open draft revision. */
-  discardDraft(id: Id): void;
-  listRevisions(assessmentId: Id): RevisionSummary[];
-  getRevision(revisionId: Id): Revision;
+  discardDraft(id: Id): Promise<void>;
+  listRevisions(assessmentId: Id): Promise<RevisionSummary[]>;
+  getRevision(revisionId: Id): Promise<Revision>;
   /** Field-by-field differences between two revisions (content and results). */
-  compareRevisions(fromRevisionId: Id, toRevisionId: Id): FieldDifference[];
+  compareRevisions(fromRevisionId: Id, toRevisionId: Id): Promise<FieldDifference[]>;
   /** Sign the current draft: it becomes signed, the previous signed revision superseded. */
-  signAssessment(id: Id, signOff: SignOff): Assessment;
+  signAssessment(id: Id, signOff: SignOff): Promise<Assessment>;
   /** Check the newest signed revision (or `revisionId`). */
-  verify(assessmentId: Id, revisionId?: Id): VerifyReport;
+  verify(assessmentId: Id, revisionId?: Id): Promise<VerifyReport>;
 
   // personal keys and the trust list (outside the database)
-  listPersonKeys(): PersonKey[];
+  listPersonKeys(): Promise<PersonKey[]>;
   /** First key of the installation becomes the trust anchor; later keys need an endorser's passphrase. */
-  createPersonKey(args: { personId: Id; passphrase: string; passphraseAgain: string; endorserPersonId?: Id; endorserPassphrase?: string }): PersonKey;
-  changeKeyPassphrase(args: { personId: Id; passphrase: string; newPassphrase: string; newPassphraseAgain: string }): PersonKey;
-  retirePersonKey(args: { personId: Id; reason: string }): PersonKey;
+  createPersonKey(args: { personId: Id; passphrase: string; passphraseAgain: string; endorserPersonId?: Id; endorserPassphrase?: string }): Promise<PersonKey>;
+  changeKeyPassphrase(args: { personId: Id; passphrase: string; newPassphrase: string; newPassphraseAgain: string }): Promise<PersonKey>;
+  retirePersonKey(args: { personId: Id; reason: string }): Promise<PersonKey>;
   /** Admit a key (a person's, or an exporting site's) on the endorsement of a trusted signer. */
-  endorseKey(args: { keyId: string; endorserPersonId: Id; endorserPassphrase: string }): PersonKey | null;
-  trustList(): TrustListInfo;
+  endorseKey(args: { keyId: string; endorserPersonId: Id; endorserPassphrase: string }): Promise<PersonKey | null>;
+  trustList(): Promise<TrustListInfo>;
 
   // exchange
-  exportSite(siteId: Id): ExportDocument;
-  exportRoom(roomId: Id): ExportDocument;
-  exportAssessment(assessmentId: Id): ExportDocument;
+  exportSite(siteId: Id): Promise<ExportDocument>;
+  exportRoom(roomId: Id): Promise<ExportDocument>;
+  exportAssessment(assessmentId: Id): Promise<ExportDocument>;
   /** Validate and import a document (parsed object or JSON text): all or nothing. */
-  importDocument(doc: unknown, admit?: ImportAdmission): ImportSummary;
+  importDocument(doc: unknown, admit?: ImportAdmission): Promise<ImportSummary>;
   /** Signing keys of a document that this installation does not trust (fingerprint and claimed signer). */
-  untrustedKeysIn(doc: unknown): ImportSummary['untrustedKeys'];
+  untrustedKeysIn(doc: unknown): Promise<ImportSummary['untrustedKeys']>;
   /** CSV laser inventory for one room (columns in README); nothing imported if any row is bad. */
-  importLaserCsv(roomId: Id, csvText: string, existing?: CsvExistingChoice): CsvImportReport;
+  importLaserCsv(roomId: Id, csvText: string, existing?: CsvExistingChoice): Promise<CsvImportReport>;
 
   // safekeeping
   /** Online backup to `path` (a consistent copy while the store stays open). */
@@ -169,13 +168,13 @@ export interface RecordStore {
   /** "Back up now": a dated, checked copy in `folder` (default: `backups` beside the database), recorded. */
   backupInto(folder?: string): Promise<BackupReport>;
   /** The last recorded backup and the backups in the default folder. */
-  backupStatus(): BackupStatus;
+  backupStatus(): Promise<BackupStatus>;
   /** Loads the invented demo site (no-op if it is already there); returns its site. */
-  seedDemo(): Site;
+  seedDemo(): Promise<Site>;
   /** A second person countersigns a signed revision with their own key (passphrase checked here). */
-  countersign(args: { revisionId: Id; personId: Id; passphrase: string; statement: string }): CoSignature;
+  countersign(args: { revisionId: Id; personId: Id; passphrase: string; statement: string }): Promise<CoSignature>;
   /** The co-signatures of a revision, oldest first. */
-  listCoSignatures(revisionId: Id): CoSignature[];
+  listCoSignatures(revisionId: Id): Promise<CoSignature[]>;
 }
 
 /** Error with a machine-readable code and the path/field concerned (for IPC answers). */

@@ -46,7 +46,7 @@ const signed = new Map<string, Rendered>();
 let draft: Rendered;
 
 async function render(assessmentId: string, opts: RenderOptions = A4_SI): Promise<Rendered> {
-  const doc = documentInputFromAssessment(store, assessmentId);
+  const doc = await documentInputFromAssessment(store, assessmentId);
   const [report, notice, sheet] = await Promise.all([renderReport(doc, opts), renderDoorNotice(doc, opts), renderEyewearSheet(doc, opts)]);
   return {
     doc,
@@ -71,27 +71,27 @@ function wl(nm: number): string {
 
 beforeAll(async () => {
   dir = mkdtempSync(join(tmpdir(), 'bw-pdf-docs-'));
-  store = openRecordStore({ path: join(dir, 'demo.sqlite'), keyDir: join(dir, 'keys') });
-  const site = store.seedDemo();
-  const officer = store.listPeople().find((p) => p.role === 'Laser safety officer');
+  store = await openRecordStore({ path: join(dir, 'demo.sqlite'), keyDir: join(dir, 'keys') });
+  const site = await store.seedDemo();
+  const officer = (await store.listPeople()).find((p) => p.role === 'Laser safety officer');
   if (!officer) throw new Error('demo officer missing');
   // The demo seed gave the invented demo officer the temporary installation's first key (its trust
   // anchor), sealed with the published demo passphrase, and signed B2.14 with it.
-  const rooms = store.listRooms(site.id);
+  const rooms = await store.listRooms(site.id);
   const a007 = rooms.find((r) => r.code === 'A0.07');
-  const draftId = a007 ? store.listAssessments(a007.id)[0]?.id : undefined;
+  const draftId = a007 ? (await store.listAssessments(a007.id))[0]?.id : undefined;
   if (!draftId) throw new Error('demo assessment A0.07 missing');
   draft = await render(draftId); // seeded as a draft
   for (const room of rooms) {
-    for (const a of store.listAssessments(room.id)) {
-      if (a.status === 'draft') store.signAssessment(a.id, { personId: officer.id, passphrase: PASSPHRASE, statement: 'Approved (test of printed output).' });
+    for (const a of await store.listAssessments(room.id)) {
+      if (a.status === 'draft') await store.signAssessment(a.id, { personId: officer.id, passphrase: PASSPHRASE, statement: 'Approved (test of printed output).' });
       signed.set(room.code, await render(a.id));
     }
   }
 }, 300_000);
 
-afterAll(() => {
-  store?.close();
+afterAll(async () => {
+  await store?.close();
   if (dir) rmSync(dir, { recursive: true, force: true });
 });
 
@@ -318,14 +318,14 @@ describe('a superseded revision says so on every page', () => {
   it('revision 1 of A0.07 after revision 2 is signed: SUPERSEDED in the report header and on the notice', async () => {
     const r = get('A0.07');
     const id = r.doc.assessment.id;
-    const officer = store.listPeople().find((p) => p.role === 'Laser safety officer');
+    const officer = (await store.listPeople()).find((p) => p.role === 'Laser safety officer');
     if (!officer) throw new Error('demo officer missing');
-    const current = store.getAssessment(id).current;
-    store.saveAssessment(id, { ...current.content, notes: `${current.content.notes} Reviewed again.` });
-    store.signAssessment(id, { personId: officer.id, passphrase: PASSPHRASE, statement: 'Approved again (test).' });
-    const first = store.listRevisions(id).find((v) => v.revisionNo === 1);
+    const current = (await store.getAssessment(id)).current;
+    await store.saveAssessment(id, { ...current.content, notes: `${current.content.notes} Reviewed again.` });
+    await store.signAssessment(id, { personId: officer.id, passphrase: PASSPHRASE, statement: 'Approved again (test).' });
+    const first = (await store.listRevisions(id)).find((v) => v.revisionNo === 1);
     if (!first) throw new Error('revision 1 missing');
-    const doc = documentInputFromAssessment(store, id, { revisionId: first.id });
+    const doc = await documentInputFromAssessment(store, id, { revisionId: first.id });
     expect(doc.assessment.status).toBe('superseded');
     const report = pageTexts(await renderReport(doc, A4_SI));
     report.forEach((p, i) => expect(p.includes('SUPERSEDED'), `report page ${i + 1}`).toBe(true));

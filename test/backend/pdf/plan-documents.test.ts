@@ -16,6 +16,8 @@ import { evaluateRoom } from '../../../core/index.js';
 import { openRecordStore, type RecordStore } from '../../../electron/backend/records/index.js';
 import { documentInputFromAssessment, renderDoorNotice, renderReport, type DocumentInput } from '../../../electron/backend/pdf/index.js';
 import { pageTexts, pdfInfo } from './pdf-tools.js';
+import { documentTable } from '../../../electron/api/handlers/documents.js';
+import type { ApiContext } from '../../../electron/api/context.js';
 
 let dir = '';
 let store: RecordStore;
@@ -28,18 +30,18 @@ function drawnText(pdf: Buffer): string {
   return execFileSync('pdftotext', ['-raw', '-enc', 'UTF-8', file, '-'], { encoding: 'utf8' });
 }
 
-beforeAll(() => {
+beforeAll(async () => {
   dir = mkdtempSync(join(tmpdir(), 'bw-plan-docs-'));
-  store = openRecordStore({ path: join(dir, 'demo.sqlite'), keyDir: join(dir, 'keys') });
-  const site = store.seedDemo();
-  for (const room of store.listRooms(site.id)) {
-    const a = store.listAssessments(room.id)[0];
-    if (a) docs.set(room.code, documentInputFromAssessment(store, a.id));
+  store = await openRecordStore({ path: join(dir, 'demo.sqlite'), keyDir: join(dir, 'keys') });
+  const site = await store.seedDemo();
+  for (const room of await store.listRooms(site.id)) {
+    const a = (await store.listAssessments(room.id))[0];
+    if (a) docs.set(room.code, await documentInputFromAssessment(store, a.id));
   }
 }, 120_000);
 
-afterAll(() => {
-  store?.close();
+afterAll(async () => {
+  await store?.close();
   if (dir) rmSync(dir, { recursive: true, force: true });
 });
 
@@ -58,14 +60,25 @@ describe('the room plan on paper (demo room B2.14)', () => {
     expect(text).toMatch(/drawntoscale1:\d+whenprintedat100%/);
   });
 
-  it('the door notice stays one page and marks the entrance it is for (first door, or the one chosen)', async () => {
+  it('the door notice stays one page and says "You are here" at the entrance it is for (first door by default)', async () => {
     const doc = docs.get('B2.14')!;
     const first = await renderDoorNotice(doc, { paper: 'A4', units: 'SI' });
     expect(pdfInfo(first).pages).toBe(1);
-    expect(squash(pageTexts(first).join(' '))).toContain(squash('this door (D1 corridor) solid black'));
-    const other = await renderDoorNotice(doc, { paper: 'Letter', units: 'SI', entranceId: 'D2' });
-    expect(pdfInfo(other).pages).toBe(1);
-    expect(squash(pageTexts(other).join(' '))).toContain(squash('this door (D2 to B2.16) solid black'));
+    const text = squash(pageTexts(first).join(' '));
+    expect(text).toContain(squash('you are here: door D1 corridor'));
+    expect(text).toContain(squash('You are here'));
+  });
+
+  it('the officer chooses the entrance on the print screen: the API prints the notice for door D2, and refuses a door not on the plan', async () => {
+    const room = (await store.listRooms((await store.listSites())[0]!.id)).find((r) => r.code === 'B2.14')!;
+    const assessmentId = (await store.listAssessments(room.id))[0]!.id;
+    const ctx: ApiContext = { shell: 'loopback', version: 'test', databasePath: join(dir, 'demo.sqlite'), store };
+    const op = documentTable['document-render'];
+    const file = await op.run(op.input.parse({ kind: 'door-notice', assessmentId, paper: 'Letter', units: 'SI', entranceId: 'D2' }), ctx);
+    const pdf = Buffer.from(file.base64, 'base64');
+    expect(pdfInfo(pdf).pages).toBe(1);
+    expect(squash(pageTexts(pdf).join(' '))).toContain(squash('you are here: door D2 to B2.16'));
+    await expect(op.run(op.input.parse({ kind: 'door-notice', assessmentId, paper: 'A4', units: 'SI', entranceId: 'D9' }), ctx)).rejects.toThrow(/not a door on the room plan/);
   });
 
   it('a room without a plan prints no plan section', async () => {

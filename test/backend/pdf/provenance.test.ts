@@ -49,16 +49,16 @@ async function print(name: string, doc: DocumentInput): Promise<Printed> {
 
 beforeAll(async () => {
   dir = mkdtempSync(join(tmpdir(), 'bw-provenance-'));
-  store = openRecordStore({ path: join(dir, 'demo.sqlite'), keyDir: join(dir, 'keys') });
-  const site = store.seedDemo();
-  for (const room of store.listRooms(site.id))
-    for (const a of store.listAssessments(room.id)) printed.push(await print(`demo ${room.code} (${a.status})`, documentInputFromAssessment(store, a.id)));
+  store = await openRecordStore({ path: join(dir, 'demo.sqlite'), keyDir: join(dir, 'keys') });
+  const site = await store.seedDemo();
+  for (const room of await store.listRooms(site.id))
+    for (const a of await store.listAssessments(room.id)) printed.push(await print(`demo ${room.code} (${a.status})`, await documentInputFromAssessment(store, a.id)));
   printed.push(await print('generated, 20 lasers, long names, every control, ICNIRP 2013', generatedDocument({ lasers: 20, longNames: true, allControls: true })));
   printed.push(await print('generated, 12 lasers, EU Directive', generatedDocument({ lasers: 12, ruleSet: 'eu2006' })));
 }, 600_000);
 
-afterAll(() => {
-  store?.close();
+afterAll(async () => {
+  await store?.close();
   if (dir) rmSync(dir, { recursive: true, force: true });
 });
 

@@ -46,11 +46,11 @@ describe('arguments', () => {
 describe('a stored assessment from a database file', () => {
   it('writes the three PDFs of the demo room B2.16 (a draft; --db, --assessment, Letter)', async () => {
     const db = join(dir, 'records.sqlite');
-    const store = openRecordStore({ path: db, keyDir: join(dir, 'keys') });
-    const site = store.seedDemo();
-    const room = store.listRooms(site.id).find((r) => r.code === 'B2.16');
-    const id = room ? store.listAssessments(room.id)[0]?.id : undefined;
-    store.close();
+    const store = await openRecordStore({ path: db, keyDir: join(dir, 'keys') });
+    const site = await store.seedDemo();
+    const room = (await store.listRooms(site.id)).find((r) => r.code === 'B2.16');
+    const id = room ? (await store.listAssessments(room.id))[0]?.id : undefined;
+    await store.close();
     if (id === undefined) throw new Error('demo room B2.16 missing');
     const out = join(dir, 'out');
     expect(await main(['--db', db, '--assessment', id, '--out', out, '--paper', 'Letter'])).toBe(0);

@@ -20,15 +20,15 @@ let dir = '';
 let store: RecordStore;
 let ctx: ApiContext;
 
-beforeAll(() => {
+beforeAll(async () => {
   dir = mkdtempSync(join(tmpdir(), 'bw-reprint-'));
-  store = openRecordStore({ path: join(dir, 'demo.sqlite'), keyDir: join(dir, 'keys') });
-  store.seedDemo();
+  store = await openRecordStore({ path: join(dir, 'demo.sqlite'), keyDir: join(dir, 'keys') });
+  await store.seedDemo();
   ctx = { shell: 'loopback', version: 'test', databasePath: join(dir, 'demo.sqlite'), store };
 });
 
-afterAll(() => {
-  store?.close();
+afterAll(async () => {
+  await store?.close();
   if (dir) rmSync(dir, { recursive: true, force: true });
 });
 
@@ -40,26 +40,26 @@ async function print(kind: 'report' | 'door-notice' | 'eyewear-sheet', assessmen
 
 describe('a signed revision reprints exactly as signed after a new draft exists', () => {
   it('report, door notice and eyewear sheet: same text as the first print; the new draft prints DRAFT', async () => {
-    const site = store.listSites()[0];
+    const site = (await store.listSites())[0];
     if (!site) throw new Error('demo site missing');
-    const room = store.listRooms(site.id).find((r) => r.code === 'C1.03');
-    const id = room ? store.listAssessments(room.id)[0]?.id : undefined;
+    const room = (await store.listRooms(site.id)).find((r) => r.code === 'C1.03');
+    const id = room ? (await store.listAssessments(room.id))[0]?.id : undefined;
     if (!id) throw new Error('demo assessment C1.03 missing');
     // The signer holds their own key (personal keys, sealed with their passphrase).
     // The demo seed made the demo officer this installation's anchor; the officer endorses the new key.
-    const officer = store.listPeople().find((p) => p.role === 'Laser safety officer');
+    const officer = (await store.listPeople()).find((p) => p.role === 'Laser safety officer');
     if (!officer) throw new Error('demo officer missing');
-    const signer = makeSigner(store, 'Dr. Reprint Tester', { person: officer, passphrase: DEMO_PASSPHRASE });
-    if (store.getAssessment(id).current.status === 'draft') store.signAssessment(id, signer.signOff('Approved (reprint test).'));
-    const signed = store.getAssessment(id).current;
+    const signer = await makeSigner(store, 'Dr. Reprint Tester', { person: officer, passphrase: DEMO_PASSPHRASE });
+    if ((await store.getAssessment(id)).current.status === 'draft') await store.signAssessment(id, signer.signOff('Approved (reprint test).'));
+    const signed = (await store.getAssessment(id)).current;
     expect(signed.status).toBe('signed');
     const fingerprint = signed.signature?.fingerprint ?? '';
 
     const kinds = ['report', 'door-notice', 'eyewear-sheet'] as const;
     const first = await Promise.all(kinds.map((k) => print(k, id)));
 
-    store.saveAssessment(id, { ...signed.content, notes: `${signed.content.notes} Changed after signing.` });
-    const draft = store.getAssessment(id).current;
+    await store.saveAssessment(id, { ...signed.content, notes: `${signed.content.notes} Changed after signing.` });
+    const draft = (await store.getAssessment(id)).current;
     expect(draft.status).toBe('draft');
     expect(draft.id).not.toBe(signed.id);
 
@@ -79,18 +79,19 @@ describe('a signed revision reprints exactly as signed after a new draft exists'
 
 describe('door notices of every room of a site in one PDF', () => {
   it('one page per room, each room on its own page, DRAFT only where the room is a draft', async () => {
-    const site = store.listSites()[0];
+    const site = (await store.listSites())[0];
     if (!site) throw new Error('demo site missing');
     const req = documentTable['document-render-site'].input.parse({ kind: 'door-notice', siteId: site.id, paper: 'Letter', units: 'SI' });
     const file = await documentTable['document-render-site'].run(req, ctx);
     const pages = pageTexts(Buffer.from(file.base64, 'base64'));
-    const rooms = store.listRooms(site.id).filter((r) => store.listAssessments(r.id).length > 0);
+    const rooms = [];
+    for (const r of await store.listRooms(site.id)) if ((await store.listAssessments(r.id)).length > 0) rooms.push(r);
     expect(pages).toHaveLength(rooms.length);
-    rooms.forEach((r, i) => {
+    for (const [i, r] of rooms.entries()) {
       expect(pages[i], r.code).toContain(`${r.code} —`);
-      const a = store.listAssessments(r.id)[0];
-      const draft = a !== undefined && store.getAssessment(a.id).current.status === 'draft';
+      const a = (await store.listAssessments(r.id))[0];
+      const draft = a !== undefined && (await store.getAssessment(a.id)).current.status === 'draft';
       expect(/\bDRAFT\b/.test(pages[i] ?? ''), `${r.code} draft mark`).toBe(draft);
-    });
+    }
   }, 180_000);
 });

@@ -34,12 +34,12 @@ beforeEach(() => {
 });
 afterEach(() => t.cleanup());
 
-const open = (): RecordStore => openRecordStore({ path: dbPath, keyDir: join(t.dir, 'keys') });
+const open = (): Promise<RecordStore> => openRecordStore({ path: dbPath, keyDir: join(t.dir, 'keys') });
 
 describe('npm run backup and npm run restore', () => {
   it('backs up while Beamwarden has the database open, and restores once it is closed', async () => {
-    const store = open();
-    registerRoom(store);
+    const store = await open();
+    await registerRoom(store);
     const out = join(t.dir, 'usb', 'backups');
     const b = await cli('backup', ['--db', dbPath, '--out', out]);
     expect(b.stderr).toBe('');
@@ -50,20 +50,20 @@ describe('npm run backup and npm run restore', () => {
     expect(copy.pragma('integrity_check', { simple: true })).toBe('ok');
     copy.close();
     // The running app learns of it (reminder).
-    expect(store.backupStatus().lastBackupPath).toBe(made);
+    expect((await store.backupStatus()).lastBackupPath).toBe(made);
 
-    store.createSite({ name: 'Made after the backup' });
+    await store.createSite({ name: 'Made after the backup' });
     const refused = await cli('restore', ['--db', dbPath, '--from', made]);
     expect(refused.code).toBe(1);
     expect(refused.stderr).toMatch(/^beamwarden restore: Not restored: The database .* is already open for writing in another Beamwarden/);
-    store.close();
+    await store.close();
 
     const restored = await cli('restore', ['--db', dbPath, '--from', made]);
     expect(restored.stderr).toBe('');
     expect(restored.stdout).toMatch(/Restored .*records\.sqlite\n +from .* \(schema version \d+\)\nThe replaced database is kept as .*\.replaced-/);
-    const after = open();
-    expect(after.listSites().map((s) => s.name)).not.toContain('Made after the backup');
-    after.close();
+    const after = await open();
+    expect((await after.listSites()).map((s) => s.name)).not.toContain('Made after the backup');
+    await after.close();
   });
 
   it.each([
@@ -78,33 +78,33 @@ describe('npm run backup and npm run restore', () => {
   });
 
   it('restore without --from lists the backups beside the database', async () => {
-    const store = open();
+    const store = await open();
     await store.backupInto();
-    store.close();
+    await store.close();
     const r = await cli('restore', ['--db', dbPath]);
     expect(r.code).toBe(1);
     expect(r.stderr).toMatch(/name the backup with --from\. Backups beside .*records\.sqlite, newest first:\n +\S+beamwarden-backup-\d{4}-\d\d-\d\dT\d\d-\d\d-\d\dZ\.sqlite/);
   });
 
   it('a damaged backup is refused and nothing is replaced', async () => {
-    const store = open();
-    registerRoom(store);
-    store.close();
+    const store = await open();
+    await registerRoom(store);
+    await store.close();
     const junk = join(t.dir, 'not-a-backup.sqlite');
     writeFileSync(junk, 'SQLite format 3\0'.padEnd(8192, 'x'));
     const r = await cli('restore', ['--db', dbPath, '--from', junk]);
     expect(r.code).toBe(1);
     expect(r.stderr).toMatch(/not-a-backup\.sqlite (is not a database file|is damaged)/);
-    const after = open();
-    expect(after.listSites()).toHaveLength(1);
-    after.close();
+    const after = await open();
+    expect(await after.listSites()).toHaveLength(1);
+    await after.close();
   });
 });
 
 describe('Back up now and Restore from backup in the app, over the loopback host', () => {
   it('backs up, lists the backup, restores it with the database closed first, and keeps working', async () => {
-    const store = open();
-    registerRoom(store);
+    const store = await open();
+    await registerRoom(store);
     const host = await startTestHost(store, { openStore: open });
     try {
       const before = await host.ok<BackupStatus>('backup-status', {});
@@ -124,12 +124,12 @@ describe('Back up now and Restore from backup in the app, over the loopback host
       await host.ok('site-create', { name: 'Made after the restore' });
     } finally {
       await host.close();
-      host.ctx.store.close();
+      await host.ctx.store.close();
     }
   });
 
   it('a backup folder that cannot be made is said plainly', async () => {
-    const store = open();
+    const store = await open();
     const host = await startTestHost(store);
     try {
       writeFileSync(join(t.dir, 'a-file'), '');
@@ -141,7 +141,7 @@ describe('Back up now and Restore from backup in the app, over the loopback host
       }
     } finally {
       await host.close();
-      store.close();
+      await store.close();
     }
   });
 });

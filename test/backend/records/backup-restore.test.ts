@@ -12,20 +12,20 @@ import { makeSigner, openTemp, registerRoom, tempDir } from './helpers.js';
 
 let t: ReturnType<typeof tempDir>;
 let store: RecordStore;
-beforeEach(() => {
+beforeEach(async () => {
   t = tempDir('bw-backup-');
-  store = openTemp(t.dir);
+  store = await openTemp(t.dir);
 });
-afterEach(() => {
-  store.close();
+afterEach(async () => {
+  await store.close();
   t.cleanup();
 });
 
 describe('backup and restore', () => {
   it('backs up while open, restores over later changes, and the signed record still verifies', async () => {
-    const { room } = registerRoom(store);
-    const a = store.createAssessment({ roomId: room.id, content: store.newAssessmentContent(room.id) });
-    store.signAssessment(a.id, makeSigner(store).signOff());
+    const { room } = await registerRoom(store);
+    const a = await store.createAssessment({ roomId: room.id, content: await store.newAssessmentContent(room.id) });
+    await store.signAssessment(a.id, (await makeSigner(store)).signOff());
     const backupPath = join(t.dir, 'backups', 'records-backup.sqlite');
     mkdirSync(join(t.dir, 'backups'));
     await store.backup(backupPath);
@@ -37,9 +37,9 @@ describe('backup and restore', () => {
     copy.close();
 
     // Work continues after the backup ...
-    const later = store.createAssessment({ roomId: room.id, content: store.newAssessmentContent(room.id) });
-    expect(store.listAssessments(room.id)).toHaveLength(2);
-    store.close();
+    const later = await store.createAssessment({ roomId: room.id, content: await store.newAssessmentContent(room.id) });
+    expect(await store.listAssessments(room.id)).toHaveLength(2);
+    await store.close();
 
     // ... and restoring brings back the state of the backup.
     const dbPath = join(t.dir, 'records.sqlite');
@@ -47,23 +47,23 @@ describe('backup and restore', () => {
     expect(report.path).toBe(dbPath);
     expect(report.previousCopy).not.toBeNull();
     expect(existsSync(report.previousCopy ?? '')).toBe(true);
-    store = openTemp(t.dir);
-    expect(store.listAssessments(room.id).map((x) => x.id)).toEqual([a.id]);
-    expect(store.verify(a.id).ok).toBe(true);
+    store = await openTemp(t.dir);
+    expect((await store.listAssessments(room.id)).map((x) => x.id)).toEqual([a.id]);
+    expect((await store.verify(a.id)).ok).toBe(true);
     // The replaced database is kept and still holds the later assessment.
-    const prev = openRecordStore({ path: report.previousCopy ?? '', keyDir: join(t.dir, 'keys') });
-    expect(prev.listAssessments(room.id).map((x) => x.id)).toContain(later.id);
-    prev.close();
+    const prev = await openRecordStore({ path: report.previousCopy ?? '', keyDir: join(t.dir, 'keys') });
+    expect((await prev.listAssessments(room.id)).map((x) => x.id)).toContain(later.id);
+    await prev.close();
   });
 
   it('refuses to restore from a file that is not a sound database, and changes nothing', async () => {
-    registerRoom(store);
-    store.close();
+    await registerRoom(store);
+    await store.close();
     const junk = join(t.dir, 'junk.sqlite');
     writeFileSync(junk, 'x'.repeat(10_000));
     await expect(restoreBackup({ from: junk, to: join(t.dir, 'records.sqlite') })).rejects.toThrow(/is not a database file/);
-    store = openTemp(t.dir);
-    expect(store.listSites()).toHaveLength(1);
+    store = await openTemp(t.dir);
+    expect(await store.listSites()).toHaveLength(1);
   });
 
   it('refuses to back up onto the database itself', async () => {

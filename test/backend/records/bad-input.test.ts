@@ -16,25 +16,25 @@ let target: RecordStore;
 let targetPath: string;
 let doc: ExportDocument;
 
-beforeAll(() => {
+beforeAll(async () => {
   t = tempDir('bw-bad-');
-  source = openTemp(t.dir, 'source.sqlite');
-  const { site, room } = registerRoom(source, 'A0.07');
-  const c = source.newAssessmentContent(room.id);
-  const a = source.createAssessment({
+  source = await openTemp(t.dir, 'source.sqlite');
+  const { site, room } = await registerRoom(source, 'A0.07');
+  const c = await source.newAssessmentContent(room.id);
+  const a = await source.createAssessment({
     roomId: room.id,
     content: { ...c, controls: [{ category: 'engineering', measure: 'Fibre connector shutters', decision: 'accepted', implementation: 'in-place' }] },
   });
-  source.signAssessment(a.id, makeSigner(source).signOff());
-  doc = source.exportSite(site.id);
+  await source.signAssessment(a.id, (await makeSigner(source)).signOff());
+  doc = await source.exportSite(site.id);
   // The target already holds other records, which must survive every failed import untouched.
   targetPath = join(t.dir, 'target.sqlite');
-  target = openTemp(t.dir, 'target.sqlite');
-  registerRoom(target, 'C1.03');
+  target = await openTemp(t.dir, 'target.sqlite');
+  await registerRoom(target, 'C1.03');
 });
-afterAll(() => {
-  source.close();
-  target.close();
+afterAll(async () => {
+  await source.close();
+  await target.close();
   t.cleanup();
 });
 
@@ -53,9 +53,9 @@ function edited(path: readonly Key[], value: unknown): unknown {
   return copy;
 }
 
-function importError(input: unknown): RecordError {
+async function importError(input: unknown): Promise<RecordError> {
   try {
-    target.importDocument(input);
+    await target.importDocument(input);
   } catch (e) {
     if (e instanceof RecordError) return e;
     throw e;
@@ -105,9 +105,9 @@ describe('export document import refuses bad input and changes nothing', () => {
     ],
   ];
 
-  it.each(cases)('%s', (_name, input, path, problem) => {
+  it.each(cases)('%s', async (_name, input, path, problem) => {
     const before = snapshot(targetPath);
-    const err = importError(input());
+    const err = await importError(input());
     expect(err.code).toBe('invalid');
     expect(err.message).toMatch(/nothing was changed/);
     const issue = err.issues.find((i) => i.path === path);
@@ -116,65 +116,65 @@ describe('export document import refuses bad input and changes nothing', () => {
     expect(snapshot(targetPath)).toBe(before);
   });
 
-  it('the unchanged document imports (the cases above fail for their own reason only)', () => {
-    const other = openTemp(t.dir, `fresh-${Date.now()}.sqlite`);
+  it('the unchanged document imports (the cases above fail for their own reason only)', async () => {
+    const other = await openTemp(t.dir, `fresh-${Date.now()}.sqlite`);
     try {
-      expect(other.importDocument(JSON.stringify(doc)).revisions).toBe(1);
+      expect((await other.importDocument(JSON.stringify(doc))).revisions).toBe(1);
     } finally {
-      other.close();
+      await other.close();
     }
   });
 });
 
 describe('store methods validate their arguments', () => {
-  it('unknown field in assessment content', () => {
-    const { room } = registerRoom(target, 'B2.16');
-    const c = target.newAssessmentContent(room.id);
+  it('unknown field in assessment content', async () => {
+    const { room } = await registerRoom(target, 'B2.16');
+    const c = await target.newAssessmentContent(room.id);
     const before = snapshot(targetPath);
-    expect(() => target.createAssessment({ roomId: room.id, content: { ...c, colour: 'red' } as typeof c })).toThrow(/Assessment content is not valid: \(document\): unknown field\(s\) "colour"/);
-    expect(() =>
+    await expect(target.createAssessment({ roomId: room.id, content: { ...c, colour: 'red' } as typeof c })).rejects.toThrow(/Assessment content is not valid: \(document\): unknown field\(s\) "colour"/);
+    await expect(
       target.createAssessment({ roomId: room.id, content: { ...c, eyewearChosen: [{ eyewearTag: 'EW-Z', beamIds: [], note: '' }] } }),
-    ).toThrow(/eyewearChosen\[0\]\.eyewearTag: no eyewear "EW-Z"/);
+    ).rejects.toThrow(/eyewearChosen\[0\]\.eyewearTag: no eyewear "EW-Z"/);
     expect(snapshot(targetPath)).toBe(before);
   });
 
-  it('duplicate room code in a site', () => {
-    const site = target.createSite({ name: 'Invented Annex' });
-    target.createRoom({ siteId: site.id, code: 'X1' });
-    expect(() => target.createRoom({ siteId: site.id, code: 'X1' })).toThrow(/Room X1: already exists/);
+  it('duplicate room code in a site', async () => {
+    const site = await target.createSite({ name: 'Invented Annex' });
+    await target.createRoom({ siteId: site.id, code: 'X1' });
+    await expect(target.createRoom({ siteId: site.id, code: 'X1' })).rejects.toThrow(/Room X1: already exists/);
   });
 
-  it('empty sign-off fields', () => {
-    const { room } = registerRoom(target, 'A0.07');
-    const a = target.createAssessment({ roomId: room.id, content: target.newAssessmentContent(room.id) });
-    const signer = makeSigner(target, 'A. Officer');
-    expect(() => target.signAssessment(a.id, { ...signer.signOff(), statement: ' ' })).toThrow(/Sign-off is not valid: [Ss]tatement: must not be empty/);
+  it('empty sign-off fields', async () => {
+    const { room } = await registerRoom(target, 'A0.07');
+    const a = await target.createAssessment({ roomId: room.id, content: await target.newAssessmentContent(room.id) });
+    const signer = await makeSigner(target, 'A. Officer');
+    await expect(target.signAssessment(a.id, { ...signer.signOff(), statement: ' ' })).rejects.toThrow(/Sign-off is not valid: [Ss]tatement: must not be empty/);
   });
 });
 
 describe('import conflicts', () => {
-  it('two databases that revised the same assessment separately: the signed revision comes in, our draft is kept beside it', () => {
+  it('two databases that revised the same assessment separately: the signed revision comes in, our draft is kept beside it', async () => {
     const t2 = tempDir('bw-conflict-');
-    const a = openTemp(t2.dir, 'a.sqlite');
-    const b = openTemp(t2.dir, 'b.sqlite');
+    const a = await openTemp(t2.dir, 'a.sqlite');
+    const b = await openTemp(t2.dir, 'b.sqlite');
     try {
-      const { site, room } = registerRoom(a, 'A0.07');
-      const made = a.createAssessment({ roomId: room.id, content: a.newAssessmentContent(room.id) });
-      const officer = makeSigner(a, 'A. Officer');
-      a.signAssessment(made.id, officer.signOff());
-      b.importDocument(a.exportSite(site.id));
+      const { site, room } = await registerRoom(a, 'A0.07');
+      const made = await a.createAssessment({ roomId: room.id, content: await a.newAssessmentContent(room.id) });
+      const officer = await makeSigner(a, 'A. Officer');
+      await a.signAssessment(made.id, officer.signOff());
+      await b.importDocument(await a.exportSite(site.id));
       // Both sides start revision 2 of the same assessment on their own.
-      a.saveAssessment(made.id, { ...a.getAssessment(made.id).current.content, notes: 'revised in A' });
-      b.saveAssessment(made.id, { ...b.getAssessment(made.id).current.content, notes: 'revised in B' });
-      a.signAssessment(made.id, officer.signOff());
-      const summary = b.importDocument(a.exportAssessment(made.id));
-      expect(b.getAssessment(made.id).current).toMatchObject({ revisionNo: 2, status: 'signed' });
+      await a.saveAssessment(made.id, { ...(await a.getAssessment(made.id)).current.content, notes: 'revised in A' });
+      await b.saveAssessment(made.id, { ...(await b.getAssessment(made.id)).current.content, notes: 'revised in B' });
+      await a.signAssessment(made.id, officer.signOff());
+      const summary = await b.importDocument(await a.exportAssessment(made.id));
+      expect((await b.getAssessment(made.id)).current).toMatchObject({ revisionNo: 2, status: 'signed' });
       expect(summary.keptDrafts).toHaveLength(1);
-      expect(b.getAssessment(summary.keptDrafts[0]?.keptAs ?? '').current.content.notes).toBe('revised in B');
-      expect(b.listAssessments(room.id)).toHaveLength(2);
+      expect((await b.getAssessment(summary.keptDrafts[0]?.keptAs ?? '')).current.content.notes).toBe('revised in B');
+      expect(await b.listAssessments(room.id)).toHaveLength(2);
     } finally {
-      a.close();
-      b.close();
+      await a.close();
+      await b.close();
       t2.cleanup();
     }
   });

@@ -15,24 +15,24 @@ const CO_STATEMENT = 'As head of the laboratory I have read this assessment and 
 
 let t: ReturnType<typeof tempDir> | null = null;
 let store: RecordStore | null = null;
-afterEach(() => {
-  store?.close();
+afterEach(async () => {
+  await store?.close();
   t?.cleanup();
   store = null;
   t = null;
 });
 
 /** A signed assessment of A0.07 by the officer, and a lab head whose key the officer endorsed. */
-function setUp() {
+async function setUp() {
   t = tempDir();
-  const s = openTemp(t.dir);
+  const s = await openTemp(t.dir);
   store = s;
-  const { room } = registerRoom(s);
-  const officer = makeSigner(s, 'Dr. Imre Calloway-Senn');
-  const head = makeSigner(s, 'Prof. Oona Brightwater-Hale');
-  const a = s.createAssessment({ roomId: room.id, content: s.newAssessmentContent(room.id) });
-  s.signAssessment(a.id, officer.signOff(STATEMENT));
-  const revisionId = s.getAssessment(a.id).current.id;
+  const { room } = await registerRoom(s);
+  const officer = await makeSigner(s, 'Dr. Imre Calloway-Senn');
+  const head = await makeSigner(s, 'Prof. Oona Brightwater-Hale');
+  const a = await s.createAssessment({ roomId: room.id, content: await s.newAssessmentContent(room.id) });
+  await s.signAssessment(a.id, officer.signOff(STATEMENT));
+  const revisionId = (await s.getAssessment(a.id)).current.id;
   return { s, officer, head, assessmentId: a.id, revisionId, dbPath: join(t.dir, 'records.sqlite') };
 }
 
@@ -45,51 +45,51 @@ function trigger(name: string): string {
 }
 
 describe('countersigning a signed revision', () => {
-  it('the lab head countersigns; verify reports both signatures, each valid and trusted', () => {
-    const { s, officer, head, assessmentId, revisionId } = setUp();
-    const co = s.countersign({ revisionId, personId: head.person.id, passphrase: head.passphrase, statement: CO_STATEMENT });
+  it('the lab head countersigns; verify reports both signatures, each valid and trusted', async () => {
+    const { s, officer, head, assessmentId, revisionId } = await setUp();
+    const co = await s.countersign({ revisionId, personId: head.person.id, passphrase: head.passphrase, statement: CO_STATEMENT });
     expect(co.name).toBe('Prof. Oona Brightwater-Hale');
-    const report = s.verify(assessmentId);
+    const report = await s.verify(assessmentId);
     expect(report.ok).toBe(true);
     expect(report.signer?.name).toBe(officer.person.name);
     expect(report.coSignatures.map((c) => [c.name, c.ok, c.signatureValid, c.keyTrusted, c.coversThisSignature])).toEqual([['Prof. Oona Brightwater-Hale', true, true, true, true]]);
     expect(report.checks.filter((c) => c.check === 'co-signature').map((c) => c.ok)).toEqual([true]);
-    expect(s.listCoSignatures(revisionId)).toHaveLength(1);
+    expect(await s.listCoSignatures(revisionId)).toHaveLength(1);
   });
 
   // [case, what is tried, expected refusal]
-  const REFUSALS: ReadonlyArray<readonly [string, (x: ReturnType<typeof setUp>) => void, RegExp]> = [
-    ['the main signer countersigns', (x) => x.s.countersign({ revisionId: x.revisionId, personId: x.officer.person.id, passphrase: x.officer.passphrase, statement: CO_STATEMENT }), /must come from another person/],
-    ['a wrong passphrase', (x) => x.s.countersign({ revisionId: x.revisionId, personId: x.head.person.id, passphrase: 'not the passphrase', statement: CO_STATEMENT }), /passphrase is not correct/],
+  const REFUSALS: ReadonlyArray<readonly [string, (x: Awaited<ReturnType<typeof setUp>>) => Promise<unknown>, RegExp]> = [
+    ['the main signer countersigns', async (x) => x.s.countersign({ revisionId: x.revisionId, personId: x.officer.person.id, passphrase: x.officer.passphrase, statement: CO_STATEMENT }), /must come from another person/],
+    ['a wrong passphrase', async (x) => x.s.countersign({ revisionId: x.revisionId, personId: x.head.person.id, passphrase: 'not the passphrase', statement: CO_STATEMENT }), /passphrase is not correct/],
     [
       'a draft revision',
-      (x) => {
-        const draft = x.s.saveAssessment(x.assessmentId, { ...x.s.getAssessment(x.assessmentId).current.content, notes: 'changed' });
-        x.s.countersign({ revisionId: draft.current.id, personId: x.head.person.id, passphrase: x.head.passphrase, statement: CO_STATEMENT });
+      async (x) => {
+        const draft = await x.s.saveAssessment(x.assessmentId, { ...(await x.s.getAssessment(x.assessmentId)).current.content, notes: 'changed' });
+        await x.s.countersign({ revisionId: draft.current.id, personId: x.head.person.id, passphrase: x.head.passphrase, statement: CO_STATEMENT });
       },
       /only a signed revision can be countersigned/,
     ],
     [
       'a key not on the trust list',
-      (x) => {
-        const p = x.s.createPerson({ name: 'Mr. Ulric Fenwhistle', role: 'Technician' });
-        x.s.createPersonKey({ personId: p.id, passphrase: 'an unendorsed passphrase', passphraseAgain: 'an unendorsed passphrase' });
-        x.s.countersign({ revisionId: x.revisionId, personId: p.id, passphrase: 'an unendorsed passphrase', statement: CO_STATEMENT });
+      async (x) => {
+        const p = await x.s.createPerson({ name: 'Mr. Ulric Fenwhistle', role: 'Technician' });
+        await x.s.createPersonKey({ personId: p.id, passphrase: 'an unendorsed passphrase', passphraseAgain: 'an unendorsed passphrase' });
+        await x.s.countersign({ revisionId: x.revisionId, personId: p.id, passphrase: 'an unendorsed passphrase', statement: CO_STATEMENT });
       },
       /not admitted to this installation's trust list/,
     ],
   ];
-  it.each(REFUSALS)('refused: %s (nothing stored)', (_name, attempt, refusal) => {
-    const x = setUp();
-    expect(() => attempt(x)).toThrow(refusal);
-    expect(x.s.listCoSignatures(x.revisionId)).toEqual([]);
+  it.each(REFUSALS)('refused: %s (nothing stored)', async (_name, attempt, refusal) => {
+    const x = await setUp();
+    await expect(attempt(x)).rejects.toThrow(refusal);
+    expect(await x.s.listCoSignatures(x.revisionId)).toEqual([]);
   });
 
-  it('the same person cannot countersign twice; the database refuses to change or delete a co-signature', () => {
-    const x = setUp();
-    x.s.countersign({ revisionId: x.revisionId, personId: x.head.person.id, passphrase: x.head.passphrase, statement: CO_STATEMENT });
+  it('the same person cannot countersign twice; the database refuses to change or delete a co-signature', async () => {
+    const x = await setUp();
+    await x.s.countersign({ revisionId: x.revisionId, personId: x.head.person.id, passphrase: x.head.passphrase, statement: CO_STATEMENT });
     const before = snapshot(x.dbPath);
-    expect(() => x.s.countersign({ revisionId: x.revisionId, personId: x.head.person.id, passphrase: x.head.passphrase, statement: CO_STATEMENT })).toThrow(/already countersigned/);
+    await expect(x.s.countersign({ revisionId: x.revisionId, personId: x.head.person.id, passphrase: x.head.passphrase, statement: CO_STATEMENT })).rejects.toThrow(/already countersigned/);
     const raw = new Database(x.dbPath);
     try {
       expect(() => raw.prepare("UPDATE co_signature SET statement = 'x'").run()).toThrow(/co-signature cannot be changed/);
@@ -108,10 +108,10 @@ describe('attacks on a co-signature are reported by verify', () => {
     ['the co-signature given another name', "UPDATE co_signature SET name = 'Dr. Someone Else'", /is not valid for what it records/],
     ['the co-signature pointed at another main signature', "UPDATE co_signature SET signed_link = '0000000000000000000000000000000000000000000000000000000000000000'", /is not valid for what it records/],
   ];
-  it.each(ATTACKS)('%s', (_name, sql, finding) => {
-    const x = setUp();
-    x.s.countersign({ revisionId: x.revisionId, personId: x.head.person.id, passphrase: x.head.passphrase, statement: CO_STATEMENT });
-    x.s.close();
+  it.each(ATTACKS)('%s', async (_name, sql, finding) => {
+    const x = await setUp();
+    await x.s.countersign({ revisionId: x.revisionId, personId: x.head.person.id, passphrase: x.head.passphrase, statement: CO_STATEMENT });
+    await x.s.close();
     store = null;
     const raw = new Database(x.dbPath);
     try {
@@ -121,20 +121,20 @@ describe('attacks on a co-signature are reported by verify', () => {
     } finally {
       raw.close();
     }
-    const again = openTemp(t?.dir ?? '');
+    const again = await openTemp(t?.dir ?? '');
     store = again;
-    const report = again.verify(x.assessmentId);
+    const report = await again.verify(x.assessmentId);
     expect(report.ok).toBe(false);
     expect(report.checks.find((c) => c.check === 'co-signature')?.ok).toBe(false);
     expect(report.findings.join(' ')).toMatch(finding);
   });
 
-  it('a valid co-signature copied onto another signed revision does not cover it', () => {
-    const x = setUp();
-    x.s.countersign({ revisionId: x.revisionId, personId: x.head.person.id, passphrase: x.head.passphrase, statement: CO_STATEMENT });
-    const draft = x.s.saveAssessment(x.assessmentId, { ...x.s.getAssessment(x.assessmentId).current.content, notes: 'revision 2' });
-    x.s.signAssessment(x.assessmentId, x.officer.signOff(STATEMENT));
-    x.s.close();
+  it('a valid co-signature copied onto another signed revision does not cover it', async () => {
+    const x = await setUp();
+    await x.s.countersign({ revisionId: x.revisionId, personId: x.head.person.id, passphrase: x.head.passphrase, statement: CO_STATEMENT });
+    const draft = await x.s.saveAssessment(x.assessmentId, { ...(await x.s.getAssessment(x.assessmentId)).current.content, notes: 'revision 2' });
+    await x.s.signAssessment(x.assessmentId, x.officer.signOff(STATEMENT));
+    await x.s.close();
     store = null;
     const raw = new Database(x.dbPath);
     try {
@@ -142,9 +142,9 @@ describe('attacks on a co-signature are reported by verify', () => {
     } finally {
       raw.close();
     }
-    const again = openTemp(t?.dir ?? '');
+    const again = await openTemp(t?.dir ?? '');
     store = again;
-    const report = again.verify(x.assessmentId);
+    const report = await again.verify(x.assessmentId);
     expect(report.revisionNo).toBe(2);
     expect(report.ok).toBe(false);
     expect(report.findings.join(' ')).toMatch(/Co-signature by Prof\. Oona Brightwater-Hale .* not valid for what it records/);
@@ -153,9 +153,9 @@ describe('attacks on a co-signature are reported by verify', () => {
 
 describe('npm run verify names the co-signer', () => {
   it('one line per assessment: signed by the officer; co-signed by the lab head', async () => {
-    const x = setUp();
-    x.s.countersign({ revisionId: x.revisionId, personId: x.head.person.id, passphrase: x.head.passphrase, statement: CO_STATEMENT });
-    x.s.close();
+    const x = await setUp();
+    await x.s.countersign({ revisionId: x.revisionId, personId: x.head.person.id, passphrase: x.head.passphrase, statement: CO_STATEMENT });
+    await x.s.close();
     store = null;
     const { runVerify } = await import('../../../electron/cli/verify.js');
     const lines: string[] = [];

@@ -15,21 +15,21 @@ let t: ReturnType<typeof tempDir>;
 let a: RecordStore;
 let b: RecordStore;
 let dbPath: string;
-beforeEach(() => {
+beforeEach(async () => {
   t = tempDir('bw-concurrency-');
   dbPath = join(t.dir, 'records.sqlite');
-  a = openTemp(t.dir);
-  b = openTemp(t.dir); // a second store on the same file: another window or host of this process
+  a = await openTemp(t.dir);
+  b = await openTemp(t.dir); // a second store on the same file: another window or host of this process
 });
-afterEach(() => {
-  a.close();
-  b.close();
+afterEach(async () => {
+  await a.close();
+  await b.close();
   t.cleanup();
 });
 
-function errorOf(fn: () => unknown): RecordError {
+async function errorOf(fn: () => unknown): Promise<RecordError> {
   try {
-    fn();
+    await fn();
   } catch (e) {
     if (e instanceof RecordError) return e;
     throw e;
@@ -41,40 +41,40 @@ const base = (x: Assessment) => ({ revisionId: x.current.id, version: x.version 
 
 describe('a stale save is refused and nothing is overwritten (two stores on one file)', () => {
   it.each([
-    ['the other officer saved the draft', (s: RecordStore, id: string) => void s.saveAssessment(id, { ...s.getAssessment(id).current.content, notes: 'saved by A' }, base(s.getAssessment(id)))],
-    ['the other officer signed the draft', (s: RecordStore, id: string) => void s.signAssessment(id, makeSigner(s).signOff(STATEMENT))],
-  ])('%s', (_case, otherChange) => {
-    const { room } = registerRoom(a);
-    const made = a.createAssessment({ roomId: room.id, content: a.newAssessmentContent(room.id) });
-    const openedInB = b.getAssessment(made.id);
-    otherChange(a, made.id);
+    ['the other officer saved the draft', async (s: RecordStore, id: string) => void (await s.saveAssessment(id, { ...(await s.getAssessment(id)).current.content, notes: 'saved by A' }, base(await s.getAssessment(id))))],
+    ['the other officer signed the draft', async (s: RecordStore, id: string) => void (await s.signAssessment(id, (await makeSigner(s)).signOff(STATEMENT)))],
+  ])('%s', async (_case, otherChange) => {
+    const { room } = await registerRoom(a);
+    const made = await a.createAssessment({ roomId: room.id, content: await a.newAssessmentContent(room.id) });
+    const openedInB = await b.getAssessment(made.id);
+    await otherChange(a, made.id);
     const before = snapshot(dbPath);
-    const err = errorOf(() => b.saveAssessment(made.id, { ...openedInB.current.content, notes: 'saved by B' }, base(openedInB)));
+    const err = await errorOf(() => b.saveAssessment(made.id, { ...openedInB.current.content, notes: 'saved by B' }, base(openedInB)));
     expect(err.code).toBe('stale');
     expect(err.message).toMatch(/was changed by someone else at \d\d:\d\d.* — reload and compare/);
     expect(err.message).toMatch(/Nothing was overwritten/);
     expect(snapshot(dbPath)).toBe(before);
     // After reloading, B's save goes through on top of A's.
-    const reloaded = b.getAssessment(made.id);
-    const saved = b.saveAssessment(made.id, { ...reloaded.current.content, notes: 'saved by B' }, base(reloaded));
+    const reloaded = await b.getAssessment(made.id);
+    const saved = await b.saveAssessment(made.id, { ...reloaded.current.content, notes: 'saved by B' }, base(reloaded));
     expect(saved.current.content.notes).toBe('saved by B');
     expect(saved.version).toBeGreaterThanOrEqual(1);
   });
 
-  it('each save of a draft counts up its version', () => {
-    const { room } = registerRoom(a);
-    const made = a.createAssessment({ roomId: room.id, content: a.newAssessmentContent(room.id) });
+  it('each save of a draft counts up its version', async () => {
+    const { room } = await registerRoom(a);
+    const made = await a.createAssessment({ roomId: room.id, content: await a.newAssessmentContent(room.id) });
     expect(made.version).toBe(1);
-    const s1 = a.saveAssessment(made.id, { ...made.current.content, notes: 'one' }, base(made));
-    const s2 = a.saveAssessment(made.id, { ...s1.current.content, notes: 'two' }, base(s1));
+    const s1 = await a.saveAssessment(made.id, { ...made.current.content, notes: 'one' }, base(made));
+    const s2 = await a.saveAssessment(made.id, { ...s1.current.content, notes: 'two' }, base(s1));
     expect([s1.version, s2.version]).toEqual([2, 3]);
   });
 });
 
 describe('saving the workspace is one transaction', () => {
-  it('a new laser and the assessment that uses it are written together', () => {
-    const { room } = registerRoom(a);
-    const content = a.newAssessmentContent(room.id);
+  it('a new laser and the assessment that uses it are written together', async () => {
+    const { room } = await registerRoom(a);
+    const content = await a.newAssessmentContent(room.id);
     const first = content.input.lasers[0];
     if (!first) throw new Error('demo room has lasers');
     const draftLaser = {
@@ -83,7 +83,7 @@ describe('saving the workspace is one transaction', () => {
       name: 'Bench diode (added in the workspace)',
       beams: first.beams.map((bm, i) => ({ ...bm, id: `draft-beam-${i}` })),
     };
-    const saved = a.saveWork({
+    const saved = await a.saveWork({
       roomId: room.id,
       assessmentId: null,
       expected: null,
@@ -97,15 +97,15 @@ describe('saving the workspace is one transaction', () => {
     expect(saved.assessment.current.content.input.lasers.map((l) => l.id)).toContain(newId);
   });
 
-  it('when the assessment part is refused, the new laser is not left in the register', () => {
-    const { room } = registerRoom(a);
-    const made = a.createAssessment({ roomId: room.id, content: a.newAssessmentContent(room.id) });
-    const openedInB = b.getAssessment(made.id);
-    a.saveAssessment(made.id, { ...made.current.content, notes: 'A was first' }, base(made));
+  it('when the assessment part is refused, the new laser is not left in the register', async () => {
+    const { room } = await registerRoom(a);
+    const made = await a.createAssessment({ roomId: room.id, content: await a.newAssessmentContent(room.id) });
+    const openedInB = await b.getAssessment(made.id);
+    await a.saveAssessment(made.id, { ...made.current.content, notes: 'A was first' }, base(made));
     const before = snapshot(dbPath);
     const first = openedInB.current.content.input.lasers[0];
     if (!first) throw new Error('demo room has lasers');
-    const err = errorOf(() =>
+    const err = await errorOf(() =>
       b.saveWork({
         roomId: room.id,
         assessmentId: made.id,
@@ -119,14 +119,14 @@ describe('saving the workspace is one transaction', () => {
     expect(snapshot(dbPath)).toBe(before);
   });
 
-  it('a register laser edited by someone else meanwhile refuses the whole save', () => {
-    const { room } = registerRoom(a);
-    const made = a.createAssessment({ roomId: room.id, content: a.newAssessmentContent(room.id) });
-    const inst = b.listInstallations(room.id)[0];
+  it('a register laser edited by someone else meanwhile refuses the whole save', async () => {
+    const { room } = await registerRoom(a);
+    const made = await a.createAssessment({ roomId: room.id, content: await a.newAssessmentContent(room.id) });
+    const inst = (await b.listInstallations(room.id))[0];
     if (!inst) throw new Error('demo room has lasers');
-    a.updateInstallation(inst.id, { notes: 'serviced' });
+    await a.updateInstallation(inst.id, { notes: 'serviced' });
     const before = snapshot(dbPath);
-    const err = errorOf(() =>
+    const err = await errorOf(() =>
       b.saveWork({
         roomId: room.id,
         assessmentId: made.id,
@@ -144,8 +144,8 @@ describe('saving the workspace is one transaction', () => {
 
 describe('two loopback hosts on one database file, over HTTP', () => {
   it('the second officer is told to reload and compare; the first one keeps their save', async () => {
-    const { room } = registerRoom(a);
-    const made = a.createAssessment({ roomId: room.id, content: a.newAssessmentContent(room.id) });
+    const { room } = await registerRoom(a);
+    const made = await a.createAssessment({ roomId: room.id, content: await a.newAssessmentContent(room.id) });
     const hostA = await startTestHost(a);
     const hostB = await startTestHost(b);
     try {
@@ -168,7 +168,7 @@ describe('two loopback hosts on one database file, over HTTP', () => {
         expect(second.reply.error.code).toBe('stale');
         expect(second.reply.error.message).toMatch(/changed by someone else at \d\d:\d\d .*— reload and compare/);
       }
-      expect(a.getAssessment(made.id).current.content.notes).toBe('Officer A: beam stops checked');
+      expect((await a.getAssessment(made.id)).current.content.notes).toBe('Officer A: beam stops checked');
       // The plain save operation carries the version too.
       const plain = await hostB.call('assessment-save', { id: made.id, content: { ...inB.current.content, notes: 'x' }, expected: base(inB) });
       expect(plain.status).toBe(409);

@@ -105,13 +105,13 @@ describe('crash safety', () => {
     raw.close();
 
     // 4. The store opens it and every signed record still verifies.
-    const store = openRecordStore({ path: dbPath, keyDir: join(t.dir, 'keys') });
+    const store = await openRecordStore({ path: dbPath, keyDir: join(t.dir, 'keys') });
     try {
       const signedIds = [...new Set(reported.filter((c) => c.status === 'signed').map((c) => c.id))];
       expect(signedIds.length).toBeGreaterThan(0);
-      for (const id of signedIds) expect(store.verify(id)).toMatchObject({ ok: true });
+      for (const id of signedIds) expect(await store.verify(id)).toMatchObject({ ok: true });
     } finally {
-      store.close();
+      await store.close();
     }
   });
 });

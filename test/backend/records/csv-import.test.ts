@@ -16,15 +16,15 @@ let t: ReturnType<typeof tempDir>;
 let store: RecordStore;
 let room: Room;
 let dbPath: string;
-beforeAll(() => {
+beforeAll(async () => {
   t = tempDir('bw-csv-');
-  store = openTemp(t.dir);
+  store = await openTemp(t.dir);
   dbPath = join(t.dir, 'records.sqlite');
-  const site = store.createSite({ name: 'Harwick Vale Photonics Centre' });
-  room = store.createRoom({ siteId: site.id, code: 'B2.16', name: 'Raman spectroscopy laboratory' });
+  const site = await store.createSite({ name: 'Harwick Vale Photonics Centre' });
+  room = await store.createRoom({ siteId: site.id, code: 'B2.16', name: 'Raman spectroscopy laboratory' });
 });
-afterAll(() => {
-  store.close();
+afterAll(async () => {
+  await store.close();
   t.cleanup();
 });
 
@@ -44,17 +44,17 @@ describe('parseCsv (RFC 4180)', () => {
 });
 
 describe('laser inventory CSV', () => {
-  it('imports good rows: beams of one laser grouped, units converted', () => {
+  it('imports good rows: beams of one laser grouped, units converted', async () => {
     const csv = [
       HEADER,
       '"Q-switched Nd:YAG, lab 2",4,Invented Optics,SN-001,fundamental,1064 nm,pulsed,,450 mJ,6 ns,10 Hz,9,0.5,1/e2',
       '"Q-switched Nd:YAG, lab 2",4,,,second harmonic,532,pulsed,,200 mJ,6 ns,10,9 mm,0.5 mrad,1/e²',
       'Diode laser module,3B,,,,405,cw,100 mW,,,,1.5,1,1/e2',
     ].join('\n');
-    const report = store.importLaserCsv(room.id, csv);
+    const report = await store.importLaserCsv(room.id, csv);
     expect(report.errors).toEqual([]);
     expect(report.imported).toBe(2);
-    const [yag, diode] = report.installationIds.map((id) => store.getInstallation(id));
+    const [yag, diode] = await Promise.all(report.installationIds.map((id) => store.getInstallation(id)));
     expect(yag?.laser.name).toBe('Q-switched Nd:YAG, lab 2');
     expect(yag?.classAsLabelled).toBe('4');
     expect(yag?.maker).toBe('Invented Optics');
@@ -65,14 +65,14 @@ describe('laser inventory CSV', () => {
     expect(diode?.laser.beams[0]?.emission).toEqual({ kind: 'cw', power_W: 0.1 });
     expect(new Set(yag?.laser.beams.map((b) => b.id)).size).toBe(2);
     // The register feeds the next assessment.
-    expect(store.roomInputFromRegister(room.id).lasers).toHaveLength(2);
+    expect((await store.roomInputFromRegister(room.id)).lasers).toHaveLength(2);
   });
 
-  it('reads semicolon files with decimal commas (spreadsheets in decimal-comma locales)', () => {
+  it('reads semicolon files with decimal commas (spreadsheets in decimal-comma locales)', async () => {
     const csv = ['laser;wavelength;emission;power;beam_diameter;divergence;beam_definition', 'He-Ne;632,8 nm;cw;2 mW;0,7;1,2;1/e2'].join('\r\n');
-    const report = store.importLaserCsv(room.id, csv);
+    const report = await store.importLaserCsv(room.id, csv);
     expect(report.errors).toEqual([]);
-    const laser = store.getInstallation(report.installationIds[0] ?? '').laser;
+    const laser = (await store.getInstallation(report.installationIds[0] ?? '')).laser;
     expect(laser.beams[0]).toMatchObject({ wavelength_nm: 632.8, emission: { kind: 'cw', power_W: 0.002 }, beam: { diameter_m: 0.0007, divergence_rad: 0.0012 } });
   });
 
@@ -98,9 +98,9 @@ describe('laser inventory CSV', () => {
     ['no data rows', [HEADER], [{ row: 2, column: '(file)', problem: /no data rows/ }]],
   ];
 
-  it.each(bad)('%s: reported per row and nothing imported', (_name, lines, expected) => {
+  it.each(bad)('%s: reported per row and nothing imported', async (_name, lines, expected) => {
     const before = snapshot(dbPath);
-    const report = store.importLaserCsv(room.id, lines.join('\n'));
+    const report = await store.importLaserCsv(room.id, lines.join('\n'));
     expect(report.imported).toBe(0);
     expect(report.installationIds).toEqual([]);
     for (const e of expected) {
@@ -110,14 +110,14 @@ describe('laser inventory CSV', () => {
     expect(snapshot(dbPath)).toBe(before);
   });
 
-  it('an unclosed quote is reported with the row and column where it opens', () => {
-    const report = store.importLaserCsv(room.id, `${HEADER}\n${GOOD}\n"unterminated,4`);
+  it('an unclosed quote is reported with the row and column where it opens', async () => {
+    const report = await store.importLaserCsv(room.id, `${HEADER}\n${GOOD}\n"unterminated,4`);
     expect(report.imported).toBe(0);
     expect(report.errors).toEqual([{ row: 3, column: '(column 1)', problem: expect.stringMatching(/quoted cell is not closed/) }]);
   });
 
-  it('row numbers stay those the spreadsheet shows when blank lines are in between', () => {
-    const report = store.importLaserCsv(room.id, [HEADER, '', GOOD, '', GOOD.replace('Good', 'Bad').replace(',532,', ',green,')].join('\n'));
+  it('row numbers stay those the spreadsheet shows when blank lines are in between', async () => {
+    const report = await store.importLaserCsv(room.id, [HEADER, '', GOOD, '', GOOD.replace('Good', 'Bad').replace(',532,', ',green,')].join('\n'));
     expect(report.errors).toEqual([{ row: 5, column: 'wavelength', problem: expect.stringMatching(/"green" is not a wavelength/) }]);
   });
 });
@@ -136,11 +136,11 @@ describe('README section "CSV columns for laser inventory import"', () => {
     expect([...documented].sort()).toEqual([...CSV_COLUMNS].sort());
   });
 
-  it('its example imports as written', () => {
+  it('its example imports as written', async () => {
     const example = /```csv\n([\s\S]*?)```/.exec(section)?.[1] ?? '';
     // A room of its own: the shared one may already hold lasers of the same name.
-    const fresh = store.createRoom({ siteId: room.siteId, code: 'B2.17-readme' });
-    const report = store.importLaserCsv(fresh.id, example);
+    const fresh = await store.createRoom({ siteId: room.siteId, code: 'B2.17-readme' });
+    const report = await store.importLaserCsv(fresh.id, example);
     expect(report.errors).toEqual([]);
     expect(report.imported).toBe(2);
   });

@@ -13,14 +13,14 @@ import { openTemp, tempDir } from './helpers.js';
 let t: ReturnType<typeof tempDir>;
 let store: RecordStore;
 let room: Room;
-beforeAll(() => {
+beforeAll(async () => {
   t = tempDir('bw-csv-input-');
-  store = openTemp(t.dir);
-  const site = store.createSite({ name: 'Harwick Vale Photonics Centre' });
-  room = store.createRoom({ siteId: site.id, code: 'C1.02', name: 'Fibre laser bay' });
+  store = await openTemp(t.dir);
+  const site = await store.createSite({ name: 'Harwick Vale Photonics Centre' });
+  room = await store.createRoom({ siteId: site.id, code: 'C1.02', name: 'Fibre laser bay' });
 });
-afterAll(() => {
-  store.close();
+afterAll(async () => {
+  await store.close();
   t.cleanup();
 });
 
@@ -40,8 +40,8 @@ describe('refused, with row and column, and nothing imported', () => {
     ['overlapping pulses', row({ em: 'pulsed', e: '2 mJ', tp: '1 ms', f: '5 kHz' }), 'repetition_rate', /pulses would overlap/, 'derived: repetition rate × pulse duration must not exceed 1'],
     ['a 100 000-character laser name', row({ laser: 'N'.repeat(100_000), p: '5 W' }), 'laser', /at most 200 characters/, "the register's own limit (schemas/records.ts)"],
   ];
-  it.each(CASES)('%s', (_n, line, column, problem) => {
-    const report = store.importLaserCsv(room.id, `${HEADER}\n${line}\n`);
+  it.each(CASES)('%s', async (_n, line, column, problem) => {
+    const report = await store.importLaserCsv(room.id, `${HEADER}\n${line}\n`);
     expect(report.imported).toBe(0);
     expect(report.errors, JSON.stringify(report.errors).slice(0, 400)).toContainEqual({ row: 2, column, problem: expect.stringMatching(problem) });
     for (const e of report.errors) {
@@ -53,17 +53,17 @@ describe('refused, with row and column, and nothing imported', () => {
 });
 
 describe('read and shown as read', () => {
-  it('semicolon files keep their decimal commas', () => {
+  it('semicolon files keep their decimal commas', async () => {
     const csv = ['laser;wavelength;emission;power;beam_diameter;divergence;beam_definition', 'Alignment He-Ne;632,8 nm;cw;1,5 mW;0,7;1,2;1/e2'].join('\n');
-    const report = store.importLaserCsv(room.id, csv);
+    const report = await store.importLaserCsv(room.id, csv);
     expect(report.errors).toEqual([]);
-    const beam = store.getInstallation(report.installationIds[0] ?? '').laser.beams[0];
+    const beam = (await store.getInstallation(report.installationIds[0] ?? '')).laser.beams[0];
     expect(beam).toMatchObject({ wavelength_nm: 632.8, emission: { kind: 'cw', power_W: 0.0015 }, beam: { diameter_m: 0.0007, divergence_rad: 0.0012 } });
   });
 
-  it('each quantity cell is echoed in full, and an unusual value asks "is this right?" without refusing', () => {
+  it('each quantity cell is echoed in full, and an unusual value asks "is this right?" without refusing', async () => {
     const csv = [HEADER, row({ laser: 'Q-switched bench laser', wl: '1064', em: 'pulsed', e: '200', tp: '6 ns', f: '10', d: '9', div: '0.5' })].join('\n');
-    const report = store.importLaserCsv(room.id, csv);
+    const report = await store.importLaserCsv(room.id, csv);
     expect(report.errors).toEqual([]);
     const byColumn = new Map((report.readings ?? []).map((r) => [r.column, r]));
     // A bare 200 in pulse_energy is read in J (README column table): shown, and questioned.
@@ -75,11 +75,11 @@ describe('read and shown as read', () => {
     expect(byColumn.get('divergence')?.readAs).toBe('0.5 mrad full angle');
   });
 
-  it('an exit diameter of 0 (a point-like source, as in published NOHD examples) is accepted', () => {
+  it('an exit diameter of 0 (a point-like source, as in published NOHD examples) is accepted', async () => {
     // The Laser-IPL Guys, Lasers and IPLs in Medical/Aesthetic Applications v1.2, ch. 1 p. 110:
     // 1 W, 1 mrad, exit diameter not given: use 0 (shared reference, worked example lipg-ch1-nohd-1W-1mrad).
-    const report = store.importLaserCsv(room.id, `${HEADER}\n${row({ laser: 'Point-like source', wl: '532 nm', p: '1 W', d: '0', div: '1 mrad' })}\n`);
+    const report = await store.importLaserCsv(room.id, `${HEADER}\n${row({ laser: 'Point-like source', wl: '532 nm', p: '1 W', d: '0', div: '1 mrad' })}\n`);
     expect(report.errors).toEqual([]);
-    expect(store.getInstallation(report.installationIds[0] ?? '').laser.beams[0]?.beam.diameter_m).toBe(0);
+    expect((await store.getInstallation(report.installationIds[0] ?? '')).laser.beams[0]?.beam.diameter_m).toBe(0);
   });
 });

@@ -75,14 +75,14 @@ describe('quantity parser', () => {
 let t: ReturnType<typeof tempDir>;
 let store: RecordStore;
 let room: Room;
-beforeAll(() => {
+beforeAll(async () => {
   t = tempDir('bw-csv-fuzz-');
-  store = openTemp(t.dir);
-  const site = store.createSite({ name: 'Harwick Vale Photonics Centre' });
-  room = store.createRoom({ siteId: site.id, code: 'F2.20', name: 'Fuzzing bench' });
+  store = await openTemp(t.dir);
+  const site = await store.createSite({ name: 'Harwick Vale Photonics Centre' });
+  room = await store.createRoom({ siteId: site.id, code: 'F2.20', name: 'Fuzzing bench' });
 });
-afterAll(() => {
-  store.close();
+afterAll(async () => {
+  await store.close();
   t.cleanup();
 });
 
@@ -94,14 +94,14 @@ describe('laser inventory CSV', () => {
   // Half the files have every column, so the rows themselves are read, not only the header.
   const header = fc.oneof(fc.shuffledSubarray([...CSV_COLUMNS, 'colour'], { minLength: 1 }), fc.shuffledSubarray([...CSV_COLUMNS], { minLength: CSV_COLUMNS.length }));
 
-  it('never crashes, and every refusal names a row and a column in officer words', () => {
+  it('never crashes, and every refusal names a row and a column in officer words', async () => {
     let rowLevel = 0;
-    fc.assert(
-      fc.property(header, fc.array(fc.array(cell, { maxLength: 24 }), { maxLength: 6 }), fc.constantFrom(',', ';'), (cols, rows, d) => {
+    await fc.assert(
+      fc.asyncProperty(header, fc.array(fc.array(cell, { maxLength: 24 }), { maxLength: 6 }), fc.constantFrom(',', ';'), async (cols, rows, d) => {
         const text = [cols.join(d), ...rows.map((r) => r.join(d))].join(d === ';' ? '\r\n' : '\n');
         let report;
         try {
-          report = store.importLaserCsv(room.id, text);
+          report = await store.importLaserCsv(room.id, text);
         } catch (e) {
           // Only the store's own refusals (never a crash); none is expected for a CSV text.
           expect(e).toBeInstanceOf(RecordError);
@@ -123,15 +123,15 @@ describe('laser inventory CSV', () => {
     expect(rowLevel).toBeGreaterThan(50);
   });
 
-  it('a quantity written out parses back to the same stored value (round trip through a CSV row)', () => {
-    fc.assert(
-      fc.property(fc.integer({ min: 1, max: 999_999 }), fc.integer({ min: -6, max: 0 }), fc.constantFrom(',', ';'), (m, e, d) => {
+  it('a quantity written out parses back to the same stored value (round trip through a CSV row)', async () => {
+    await fc.assert(
+      fc.asyncProperty(fc.integer({ min: 1, max: 999_999 }), fc.integer({ min: -6, max: 0 }), fc.constantFrom(',', ';'), async (m, e, d) => {
         const power = new Dec(m).mul(new Dec(10).pow(e));
         const text = formatSI(power, 'W', 40);
         const csv = [['laser', 'wavelength', 'emission', 'power', 'beam_diameter', 'divergence', 'beam_definition'].join(d), [`Fuzz ${m}e${e} ${d === ',' ? 'c' : 's'}`, '532 nm', 'cw', text, '2 mm', '1 mrad', '1/e2'].join(d)].join('\n');
-        const report = store.importLaserCsv(room.id, csv.replace(`Fuzz ${m}`, `Fuzz ${m} ${Math.random()}`));
+        const report = await store.importLaserCsv(room.id, csv.replace(`Fuzz ${m}`, `Fuzz ${m} ${Math.random()}`));
         expect(report.errors).toEqual([]);
-        const stored = store.getInstallation(report.installationIds[0] ?? '').laser.beams[0]?.emission;
+        const stored = (await store.getInstallation(report.installationIds[0] ?? '')).laser.beams[0]?.emission;
         expect(stored).toEqual({ kind: 'cw', power_W: power.toNumber() });
       }),
       { numRuns: 150 },

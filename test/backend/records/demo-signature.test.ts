@@ -15,52 +15,57 @@ import { openTemp, tempDir } from './helpers.js';
 
 let t: ReturnType<typeof tempDir> | null = null;
 let store: RecordStore | null = null;
-afterEach(() => {
-  store?.close();
+afterEach(async () => {
+  await store?.close();
   t?.cleanup();
   store = null;
   t = null;
 });
 
-function signedDemo(s: RecordStore) {
-  const site = s.listSites().find((x) => x.name === 'Harwick Vale Photonics Centre');
+async function fresh(): Promise<RecordStore> {
+  t = tempDir();
+  const s = await openTemp(t.dir);
+  store = s;
+  return s;
+}
+
+async function signedDemo(s: RecordStore) {
+  const site = (await s.listSites()).find((x) => x.name === 'Harwick Vale Photonics Centre');
   if (!site) throw new Error('demo site missing');
-  const room = s.listRooms(site.id).find((r) => r.code === 'B2.14');
+  const room = (await s.listRooms(site.id)).find((r) => r.code === 'B2.14');
   if (!room) throw new Error('demo room B2.14 missing');
-  const a = s.listAssessments(room.id)[0];
+  const a = (await s.listAssessments(room.id))[0];
   if (!a) throw new Error('demo assessment missing');
   return a;
 }
 
 describe('the demo seed signs with a real personal key', () => {
-  it('fresh database: B2.14 is signed by the demo officer, verifies intact and trusted', () => {
-    t = tempDir();
-    store = openTemp(t.dir);
-    store.seedDemo();
-    const report = store.verify(signedDemo(store).id);
+  it('fresh database: B2.14 is signed by the demo officer, verifies intact and trusted', async () => {
+    const s = await fresh();
+    await s.seedDemo();
+    const report = await s.verify((await signedDemo(s)).id);
     expect(report.signed).toBe(true);
     expect(report.keyTrusted).toBe(true);
     expect(report.signatureValid).toBe(true);
     expect(report.ok).toBe(true);
     expect(report.signer?.name).toBe('Dr. Imre Calloway-Senn');
     // the demo officer's key is the anchor of this demo installation's trust list
-    const keys = store.listPersonKeys();
+    const keys = await s.listPersonKeys();
     expect(keys).toHaveLength(1);
     expect(keys[0]?.isAnchor).toBe(true);
-    expect(store.trustList().anchorFingerprint).toBe(keys[0]?.fingerprint);
+    expect((await s.trustList()).anchorFingerprint).toBe(keys[0]?.fingerprint);
   });
 
-  it('the published demo passphrase signs another demo room; a wrong one is refused', () => {
-    t = tempDir();
-    store = openTemp(t.dir);
-    const site = store.seedDemo();
-    const officer = store.listPeople().find((p) => p.role === 'Laser safety officer');
-    const other = store.listRooms(site.id).find((r) => r.code === 'C1.03');
-    const a = other ? store.listAssessments(other.id)[0] : undefined;
+  it('the published demo passphrase signs another demo room; a wrong one is refused', async () => {
+    const s = await fresh();
+    const site = await s.seedDemo();
+    const officer = (await s.listPeople()).find((p) => p.role === 'Laser safety officer');
+    const other = (await s.listRooms(site.id)).find((r) => r.code === 'C1.03');
+    const a = other ? (await s.listAssessments(other.id))[0] : undefined;
     if (!officer || !a) throw new Error('demo data missing');
-    expect(() => store?.signAssessment(a.id, { personId: officer.id, passphrase: 'not the demo passphrase', statement: 'Demo.' })).toThrow(/passphrase is not correct/);
-    store.signAssessment(a.id, { personId: officer.id, passphrase: DEMO_PASSPHRASE, statement: 'Demo.' });
-    expect(store.verify(a.id).ok).toBe(true);
+    await expect(s.signAssessment(a.id, { personId: officer.id, passphrase: 'not the demo passphrase', statement: 'Demo.' })).rejects.toThrow(/passphrase is not correct/);
+    await s.signAssessment(a.id, { personId: officer.id, passphrase: DEMO_PASSPHRASE, statement: 'Demo.' });
+    expect((await s.verify(a.id)).ok).toBe(true);
   });
 
   it('the README documents the demo passphrase', () => {
@@ -68,18 +73,17 @@ describe('the demo seed signs with a real personal key', () => {
     expect(readme).toContain(DEMO_PASSPHRASE);
   });
 
-  it('a database with a trust list: the demo admits no key, its record shows as an unverified signature', () => {
-    t = tempDir();
-    store = openTemp(t.dir);
-    const lso = store.createPerson({ name: 'Ada Quillfeather', role: 'Laser safety officer' });
-    store.createPersonKey({ personId: lso.id, passphrase: 'a private passphrase', passphraseAgain: 'a private passphrase' });
-    const before = readFileSync(store.trustList().path, 'utf8');
-    store.seedDemo();
-    const report = store.verify(signedDemo(store).id);
+  it('a database with a trust list: the demo admits no key, its record shows as an unverified signature', async () => {
+    const s = await fresh();
+    const lso = await s.createPerson({ name: 'Ada Quillfeather', role: 'Laser safety officer' });
+    await s.createPersonKey({ personId: lso.id, passphrase: 'a private passphrase', passphraseAgain: 'a private passphrase' });
+    const before = readFileSync((await s.trustList()).path, 'utf8');
+    await s.seedDemo();
+    const report = await s.verify((await signedDemo(s)).id);
     expect(report.signed).toBe(true);
     expect(report.keyTrusted).toBe(false);
     expect(report.ok).toBe(false);
-    expect(readFileSync(store.trustList().path, 'utf8')).toBe(before);
-    expect(store.listPersonKeys().map((k) => k.personId)).toEqual([lso.id]);
+    expect(readFileSync((await s.trustList()).path, 'utf8')).toBe(before);
+    expect((await s.listPersonKeys()).map((k) => k.personId)).toEqual([lso.id]);
   });
 });

@@ -23,37 +23,37 @@ const CLOCK = '2026-11-30T09:00:00.000Z';
 let t: ReturnType<typeof tempDir>;
 let source: RecordStore;
 let room: Room;
-beforeAll(() => {
+beforeAll(async () => {
   t = tempDir('bw-export-');
   // One fixed clock for both databases, so that the export stamp is the same on both sides.
-  source = openRecordStore({ path: join(t.dir, 'source.sqlite'), keyDir: join(t.dir, 'keys'), now: () => CLOCK });
-  const site = source.createSite({ name: scenario.site.name });
-  room = source.createRoom({ siteId: site.id, code: 'B2.14', name: 'Ultrafast laboratory (invented)' });
+  source = await openRecordStore({ path: join(t.dir, 'source.sqlite'), keyDir: join(t.dir, 'keys'), now: () => CLOCK });
+  const site = await source.createSite({ name: scenario.site.name });
+  room = await source.createRoom({ siteId: site.id, code: 'B2.14', name: 'Ultrafast laboratory (invented)' });
   const pool = scenario.rooms.flatMap((r) => r.input.lasers);
   for (let i = 0; i < LASERS; i++) {
     const base = pool[i % pool.length];
     if (!base) throw new Error('demo lasers missing');
     const laser = { ...base, id: `l${i}`, name: `${base.name} #${i + 1}`, beams: base.beams.map((b, j) => ({ ...b, id: `l${i}-b${j}` })) };
-    source.createInstallation({ roomId: room.id, laser, serialNumber: `INV-${1000 + i}` });
+    await source.createInstallation({ roomId: room.id, laser, serialNumber: `INV-${1000 + i}` });
   }
-  const a = source.createAssessment({ roomId: room.id, content: source.newAssessmentContent(room.id) });
-  const officer = makeSigner(source);
+  const a = await source.createAssessment({ roomId: room.id, content: await source.newAssessmentContent(room.id) });
+  const officer = await makeSigner(source);
   for (let n = 1; n <= REVIEWS; n++) {
     if (n > 1) {
-      const cur = source.getAssessment(a.id);
-      source.saveAssessment(a.id, { ...cur.current.content, notes: `Annual review ${n}: interlocks tested, eyewear inspected.` }, { revisionId: cur.current.id, version: cur.version });
+      const cur = await source.getAssessment(a.id);
+      await source.saveAssessment(a.id, { ...cur.current.content, notes: `Annual review ${n}: interlocks tested, eyewear inspected.` }, { revisionId: cur.current.id, version: cur.version });
     }
-    source.signAssessment(a.id, officer.signOff(STATEMENT)); // signed at CLOCK: the store's clock
+    await source.signAssessment(a.id, officer.signOff(STATEMENT)); // signed at CLOCK: the store's clock
   }
 }, 600_000);
-afterAll(() => {
-  source.close();
+afterAll(async () => {
+  await source.close();
   t.cleanup();
 });
 
 describe(`a room with ${LASERS} lasers and ${REVIEWS} signed reviews`, () => {
   it('the streamed file holds exactly the JSON document (compact), gzip-compressed', async () => {
-    const doc = source.exportRoom(room.id);
+    const doc = await source.exportRoom(room.id);
     const { gz, jsonBytes } = await exportFileBytes(doc);
     const json = gunzipSync(gz).toString('utf8');
     expect(json).toBe(JSON.stringify(doc));
@@ -64,7 +64,7 @@ describe(`a room with ${LASERS} lasers and ${REVIEWS} signed reviews`, () => {
   }, 300_000);
 
   it('exports through the host, imports into a fresh database through another host, and re-exports byte-identical', async () => {
-    const target = openRecordStore({ path: join(t.dir, 'fresh.sqlite'), keyDir: join(t.dir, 'keys-2'), now: () => CLOCK });
+    const target = await openRecordStore({ path: join(t.dir, 'fresh.sqlite'), keyDir: join(t.dir, 'keys-2'), now: () => CLOCK });
     const hostA = await startTestHost(source);
     const hostB = await startTestHost(target);
     try {
@@ -74,15 +74,15 @@ describe(`a room with ${LASERS} lasers and ${REVIEWS} signed reviews`, () => {
       expect(summary).toMatchObject({ rooms: 1, installations: LASERS, assessments: 1, revisions: REVIEWS, keptDrafts: [] });
       const again = await hostB.ok<ExportFile>('export-json', { kind: 'room', id: room.id });
       expect(Buffer.from(again.base64, 'base64').equals(Buffer.from(out.base64, 'base64'))).toBe(true);
-      const a = target.listAssessments(room.id)[0];
+      const a = (await target.listAssessments(room.id))[0];
       // Intact on arrival; the exporting site's key is not on this fresh installation's trust list,
       // so the signature stays unverified until an officer admits that key.
-      expect(target.verify(a?.id ?? '')).toMatchObject({ signatureValid: true, fingerprintMatches: true, resultsMatchCore: true, chainIntact: true, keyTrusted: false });
+      expect(await target.verify(a?.id ?? '')).toMatchObject({ signatureValid: true, fingerprintMatches: true, resultsMatchCore: true, chainIntact: true, keyTrusted: false });
       expect(summary).toMatchObject({ unverified: REVIEWS });
     } finally {
       await hostA.close();
       await hostB.close();
-      target.close();
+      await target.close();
     }
   }, 300_000);
 });

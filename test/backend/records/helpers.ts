@@ -19,7 +19,7 @@ export function tempDir(prefix = 'bw-records-'): { dir: string; cleanup: () => v
 }
 
 /** A database in `dir`; each database name is its own installation (own trust list and signing log). */
-export function openTemp(dir: string, name = 'records.sqlite'): RecordStore {
+export function openTemp(dir: string, name = 'records.sqlite'): Promise<RecordStore> {
   return openRecordStore({ path: join(dir, name), keyDir: join(dir, name === 'records.sqlite' ? 'keys' : `keys-${name}`) });
 }
 
@@ -31,12 +31,12 @@ export function demoRoom(code: string) {
 }
 
 /** A site with one room registered from the demo scenario, its lasers and the site eyewear. */
-export function registerRoom(store: RecordStore, code = 'A0.07'): { site: Site; room: Room } {
+export async function registerRoom(store: RecordStore, code = 'A0.07'): Promise<{ site: Site; room: Room }> {
   const r = demoRoom(code);
-  const site = store.createSite({ name: scenario.site.name, building: scenario.site.building });
-  const room = store.createRoom({ siteId: site.id, code: r.code, name: r.name, responsiblePerson: r.responsible });
-  for (const laser of r.input.lasers) store.createInstallation({ roomId: room.id, laser, laserType: laser.name });
-  for (const spec of scenario.eyewear) store.createEyewear({ siteId: site.id, spec });
+  const site = await store.createSite({ name: scenario.site.name, building: scenario.site.building });
+  const room = await store.createRoom({ siteId: site.id, code: r.code, name: r.name, responsiblePerson: r.responsible });
+  for (const laser of r.input.lasers) await store.createInstallation({ roomId: room.id, laser, laserType: laser.name });
+  for (const spec of scenario.eyewear) await store.createEyewear({ siteId: site.id, spec });
   return { site, room };
 }
 
@@ -68,15 +68,15 @@ export const PASSPHRASE = 'correct horse battery staple';
  * trust anchor; later ones are endorsed by `endorser` (a signer made before).
  */
 const firstSigner = new WeakMap<RecordStore, { person: { id: string }; passphrase: string }>();
-export function makeSigner(
+export async function makeSigner(
   store: RecordStore,
   name = 'Dr. Imre Calloway-Senn',
   endorserGiven?: { person: { id: string }; passphrase: string },
   passphrase = PASSPHRASE,
 ) {
   const endorser = endorserGiven ?? firstSigner.get(store);
-  const person = store.createPerson({ name, role: 'Laser safety officer' });
-  const key = store.createPersonKey({
+  const person = await store.createPerson({ name, role: 'Laser safety officer' });
+  const key = await store.createPersonKey({
     personId: person.id,
     passphrase,
     passphraseAgain: passphrase,

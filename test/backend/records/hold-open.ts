@@ -8,16 +8,15 @@ import { openRecordStore } from '../../../electron/backend/records/index.js';
 
 const [dbPath, keyDir] = process.argv.slice(2);
 if (!dbPath || !keyDir) throw new Error('usage: hold-open <db> <keyDir>');
-const store = openRecordStore({ path: dbPath, keyDir });
+const store = await openRecordStore({ path: dbPath, keyDir });
 process.stdout.write('open\n');
 const lines = createInterface({ input: process.stdin });
-lines.on('line', (line) => {
+// One line at a time, in order: each save is awaited before the next line is read.
+for await (const line of lines) {
   const m = /^save (.+)$/.exec(line);
-  if (!m?.[1]) return;
-  store.createSite({ name: m[1] });
+  if (!m?.[1]) continue;
+  await store.createSite({ name: m[1] });
   process.stdout.write(`saved ${m[1]}\n`);
-});
-lines.on('close', () => {
-  store.close();
-  process.exit(0);
-});
+}
+await store.close();
+process.exit(0);

@@ -17,20 +17,20 @@ import { makeSigner, openTemp, registerRoom, snapshot, tempDir } from './helpers
 let t: ReturnType<typeof tempDir>;
 let store: RecordStore;
 let signed: Assessment;
-let signer: ReturnType<typeof makeSigner>;
+let signer: Awaited<ReturnType<typeof makeSigner>>;
 let dbPath: string;
 
-beforeAll(() => {
+beforeAll(async () => {
   t = tempDir();
-  store = openTemp(t.dir);
+  store = await openTemp(t.dir);
   dbPath = join(t.dir, 'records.sqlite');
-  const { room } = registerRoom(store);
-  const a = store.createAssessment({ roomId: room.id, content: store.newAssessmentContent(room.id) });
-  signer = makeSigner(store);
-  signed = store.signAssessment(a.id, signer.signOff());
+  const { room } = await registerRoom(store);
+  const a = await store.createAssessment({ roomId: room.id, content: await store.newAssessmentContent(room.id) });
+  signer = await makeSigner(store);
+  signed = await store.signAssessment(a.id, signer.signOff());
 });
-afterAll(() => {
-  store.close();
+afterAll(async () => {
+  await store.close();
   t.cleanup();
 });
 
@@ -51,7 +51,7 @@ describe('the database refuses changes to signed content (raw SQL, triggers of m
     ['insert a revision already signed', `INSERT INTO revision (id, assessment_id, revision_no, status, content_json, results_z, calculated_with, created_at, updated_at)
        SELECT 'x', assessment_id, 9, 'signed', content_json, results_z, calculated_with, created_at, updated_at FROM revision WHERE id = ?`, (a) => [a.current.id]],
   ];
-  it.each(cases)('refuses: %s', (_name, sql, params) => {
+  it.each(cases)('refuses: %s', async (_name, sql, params) => {
     const before = snapshot(dbPath);
     const raw = new Database(dbPath);
     try {
@@ -60,7 +60,7 @@ describe('the database refuses changes to signed content (raw SQL, triggers of m
       raw.close();
     }
     expect(snapshot(dbPath)).toBe(before);
-    expect(store.verify(signed.id).ok).toBe(true);
+    expect((await store.verify(signed.id)).ok).toBe(true);
   });
 
   it('refuses a second signature on a signed revision', () => {
@@ -79,8 +79,8 @@ describe('the database refuses changes to signed content (raw SQL, triggers of m
     }
   });
 
-  it('the store itself answers an attempt with a clear error', () => {
-    expect(() => store.signAssessment(signed.id, signer.signOff('z'))).toThrow(/already signed/);
+  it('the store itself answers an attempt with a clear error', async () => {
+    await expect(store.signAssessment(signed.id, signer.signOff('z'))).rejects.toThrow(/already signed/);
   });
 });
 
@@ -113,7 +113,7 @@ describe('with the triggers dropped, verify reports tampering', () => {
       expect: { fingerprintMatches: false, signatureValid: false },
     },
   ];
-  it.each(cases)('$name', ({ sql, expect: expected }) => {
+  it.each(cases)('$name', async ({ sql, expect: expected }) => {
     const copy = join(t.dir, `tamper-${Math.random().toString(36).slice(2)}.sqlite`);
     const src = new Database(dbPath, { readonly: true });
     src.prepare('VACUUM INTO ?').run(copy);
@@ -124,18 +124,18 @@ describe('with the triggers dropped, verify reports tampering', () => {
     }
     raw.prepare(sql).run({ rev: signed.current.id });
     raw.close();
-    const s = openRecordStore({ path: copy, keyDir: join(t.dir, 'keys') });
+    const s = await openRecordStore({ path: copy, keyDir: join(t.dir, 'keys') });
     try {
-      const r = s.verify(signed.id);
+      const r = await s.verify(signed.id);
       expect(r.ok).toBe(false);
       expect(r).toMatchObject(expected);
       expect(r.findings.join(' ')).toMatch(/changed/);
     } finally {
-      s.close();
+      await s.close();
     }
   });
 
-  it('results edited to a larger limit: reported field by field', () => {
+  it('results edited to a larger limit: reported field by field', async () => {
     const copy = join(t.dir, 'tamper-results.sqlite');
     const src = new Database(dbPath, { readonly: true });
     src.prepare('VACUUM INTO ?').run(copy);
@@ -148,20 +148,20 @@ describe('with the triggers dropped, verify reports tampering', () => {
     const tampered: RoomResult = { ...results, beams: results.beams.map((b, i) => (i === 0 ? { ...b, nohd_m_reported: '0.001' } : b)) };
     raw.prepare('UPDATE revision SET results_z = ? WHERE id = ?').run(encodeResults(tampered), signed.current.id);
     raw.close();
-    const s = openRecordStore({ path: copy, keyDir: join(t.dir, 'keys') });
+    const s = await openRecordStore({ path: copy, keyDir: join(t.dir, 'keys') });
     try {
-      const r = s.verify(signed.id);
+      const r = await s.verify(signed.id);
       expect(r).toMatchObject({ ok: false, fingerprintMatches: false, resultsMatchCore: false });
       expect(r.differences).toEqual([{ path: 'results.beams[0].nohd_m_reported', old: '0.001', new: original }]);
       expect(r.findings.join(' ')).toMatch(/same core version: the stored results were changed/);
     } finally {
-      s.close();
+      await s.close();
     }
   });
 
-  it('a different core version is named as such, not as tampering of the signature', () => {
+  it('a different core version is named as such, not as tampering of the signature', async () => {
     // Stand-in for a future core whose rounding changed: the real core's results, one value altered.
-    const s = openRecordStore({
+    const s = await openRecordStore({
       path: dbPath,
       keyDir: join(t.dir, 'keys'),
       calculatedWith: 'beamwarden-core 9.9.9',
@@ -171,12 +171,12 @@ describe('with the triggers dropped, verify reports tampering', () => {
       },
     });
     try {
-      const r = s.verify(signed.id);
+      const r = await s.verify(signed.id);
       expect(r).toMatchObject({ ok: false, fingerprintMatches: true, signatureValid: true, resultsMatchCore: false, verifiedWith: 'beamwarden-core 9.9.9' });
       expect(r.differences.map((d) => d.path)).toEqual(['results.largestHazardDistance_m']);
       expect(r.findings.join(' ')).toMatch(/Recomputing with beamwarden-core 9.9.9 gives different results/);
     } finally {
-      s.close();
+      await s.close();
     }
   });
 });

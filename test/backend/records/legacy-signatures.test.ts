@@ -38,7 +38,7 @@ afterEach(() => t.cleanup());
  * the hazard under-estimates). Verify must then say that a different calculation made them, never
  * that the stored results were changed; every signature check still passes.
  */
-function expectOnlyRecomputeDiffers(report: ReturnType<RecordStore['verify']>): void {
+function expectOnlyRecomputeDiffers(report: Awaited<ReturnType<RecordStore['verify']>>): void {
   const failing = report.checks.filter((c) => !c.ok);
   expect(failing.map((c) => c.check)).toEqual(['results']);
   expect(failing[0]?.finding).not.toMatch(/were changed/);
@@ -46,68 +46,68 @@ function expectOnlyRecomputeDiffers(report: ReturnType<RecordStore['verify']>): 
 }
 
 describe('migrating signed records of schema version 2', () => {
-  it('re-checks every signature against the installation key, which becomes the trust anchor', () => {
-    const store = openRecordStore({ path: dbPath, keyDir });
+  it('re-checks every signature against the installation key, which becomes the trust anchor', async () => {
+    const store = await openRecordStore({ path: dbPath, keyDir });
     try {
       expect(store.info.schemaVersion).toBe(SCHEMA_VERSION);
-      const trust = store.trustList();
+      const trust = await store.trustList();
       expect(trust.anchorFingerprint).toMatch(/^[0-9a-f]{4}( [0-9a-f]{4}){4}$/);
       expect(store.info.warnings.join(' ')).toContain(
         `2 signature(s) made before personal keys re-checked against the installation key; it is now the trust anchor, fingerprint ${trust.anchorFingerprint}.`,
       );
-      const newest = store.verify(SIGNED);
+      const newest = await store.verify(SIGNED);
       expect(newest).toMatchObject({ revisionNo: 2, keyTrusted: true, signatureValid: true, chainIntact: true, fingerprintMatches: true });
       expect(newest.trustChain.join(' ')).toMatch(/Installation key .* is the trust anchor/);
       expectOnlyRecomputeDiffers(newest);
-      const first = store.verify(SIGNED, REV1);
+      const first = await store.verify(SIGNED, REV1);
       expect(first).toMatchObject({ status: 'superseded', signatureValid: true, keyTrusted: true });
       expectOnlyRecomputeDiffers(first);
     } finally {
-      store.close();
+      await store.close();
     }
   });
 
-  it('the installation key endorses the first personal key, then is retired and its file removed', () => {
-    const store = openRecordStore({ path: dbPath, keyDir });
+  it('the installation key endorses the first personal key, then is retired and its file removed', async () => {
+    const store = await openRecordStore({ path: dbPath, keyDir });
     try {
-      const key = store.createPersonKey({ personId: OFFICER, passphrase: PASSPHRASE, passphraseAgain: PASSPHRASE });
+      const key = await store.createPersonKey({ personId: OFFICER, passphrase: PASSPHRASE, passphraseAgain: PASSPHRASE });
       expect(key).toMatchObject({ trusted: true, isAnchor: false });
       expect(key.trustChain.join(' ')).toMatch(/endorsed by key .* of Installation key/);
       expect(existsSync(join(keyDir, PRIVATE_KEY_FILE))).toBe(false);
       // The old signatures still verify; new ones are made with the personal key and chain on.
-      const a = store.getAssessment(SIGNED);
-      store.saveAssessment(SIGNED, { ...a.current.content, notes: 'first revision with a personal key' });
-      store.signAssessment(SIGNED, { personId: OFFICER, passphrase: PASSPHRASE, statement: 'Approved again.' });
-      expect(store.verify(SIGNED)).toMatchObject({ ok: true, revisionNo: 3, chainIntact: true });
-      expectOnlyRecomputeDiffers(store.verify(SIGNED, REV1));
+      const a = await store.getAssessment(SIGNED);
+      await store.saveAssessment(SIGNED, { ...a.current.content, notes: 'first revision with a personal key' });
+      await store.signAssessment(SIGNED, { personId: OFFICER, passphrase: PASSPHRASE, statement: 'Approved again.' });
+      expect(await store.verify(SIGNED)).toMatchObject({ ok: true, revisionNo: 3, chainIntact: true });
+      expectOnlyRecomputeDiffers(await store.verify(SIGNED, REV1));
       // A second person's key now needs a trusted endorser: the retired installation key cannot.
-      const other = store.createPerson({ name: 'Prof. Lena Vossberg', role: 'Head of laboratory' });
-      expect(store.createPersonKey({ personId: other.id, passphrase: 'another passphrase', passphraseAgain: 'another passphrase' }).trusted).toBe(false);
+      const other = await store.createPerson({ name: 'Prof. Lena Vossberg', role: 'Head of laboratory' });
+      expect((await store.createPersonKey({ personId: other.id, passphrase: 'another passphrase', passphraseAgain: 'another passphrase' })).trusted).toBe(false);
     } finally {
-      store.close();
+      await store.close();
     }
   });
 
-  it('a replaced installation key file is not admitted, and the old signatures stay unverified', () => {
+  it('a replaced installation key file is not admitted, and the old signatures stay unverified', async () => {
     const { privateKey } = generateKeyPairSync('ed25519');
     writeFileSync(join(keyDir, PRIVATE_KEY_FILE), privateKey.export({ type: 'pkcs8', format: 'pem' }).toString());
-    const store = openRecordStore({ path: dbPath, keyDir });
+    const store = await openRecordStore({ path: dbPath, keyDir });
     try {
       expect(store.info.warnings.join(' ')).toMatch(/The installation key file in .* \(key [0-9a-f ]+\) did not sign any of the existing records: it was replaced\. It is not admitted to the trust list\./);
-      expect(store.trustList().anchor).toBeNull();
-      const report = store.verify(SIGNED);
+      expect((await store.trustList()).anchor).toBeNull();
+      const report = await store.verify(SIGNED);
       expect(report).toMatchObject({ ok: false, keyTrusted: false });
       expect(report.findings.join(' ')).toMatch(/This installation has no trust list yet, so no key is trusted\./);
     } finally {
-      store.close();
+      await store.close();
     }
   });
 
-  it('opening again does not re-adopt or write a second anchor', () => {
-    openRecordStore({ path: dbPath, keyDir }).close();
+  it('opening again does not re-adopt or write a second anchor', async () => {
+    await (await openRecordStore({ path: dbPath, keyDir })).close();
     const list = readFileSync(join(keyDir, 'beamwarden-trust-list.json'), 'utf8');
-    const again = openRecordStore({ path: dbPath, keyDir });
-    again.close();
+    const again = await openRecordStore({ path: dbPath, keyDir });
+    await again.close();
     expect(readFileSync(join(keyDir, 'beamwarden-trust-list.json'), 'utf8')).toBe(list);
   });
 });

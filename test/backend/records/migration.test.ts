@@ -26,9 +26,9 @@ beforeEach(() => {
 });
 afterEach(() => t.cleanup());
 
-function errorOf(fn: () => unknown): RecordError {
+async function errorOf(fn: () => unknown): Promise<RecordError> {
   try {
-    fn();
+    await fn();
   } catch (e) {
     if (e instanceof RecordError) return e;
     throw e;
@@ -37,9 +37,9 @@ function errorOf(fn: () => unknown): RecordError {
 }
 
 describe('migrating the version-1 fixture', () => {
-  it('opens, migrates to the latest version, and keeps a backup copy made before migrating', () => {
+  it('opens, migrates to the latest version, and keeps a backup copy made before migrating', async () => {
     expect(SCHEMA_VERSION).toBeGreaterThan(1);
-    const store = openRecordStore({ path: dbPath, keyDir: join(t.dir, 'keys') });
+    const store = await openRecordStore({ path: dbPath, keyDir: join(t.dir, 'keys') });
     try {
       expect(store.info.schemaVersion).toBe(SCHEMA_VERSION);
       expect(store.info.migrationBackups).toHaveLength(1);
@@ -52,7 +52,7 @@ describe('migrating the version-1 fixture', () => {
       copy.close();
 
       // Migration 0002 backfilled the list columns, also on the signed row.
-      const list = store.listAssessments(ROOM);
+      const list = await store.listAssessments(ROOM);
       expect(list.map((a) => [a.id, a.status, a.reviewBy])).toEqual(
         expect.arrayContaining([
           [SIGNED, 'signed', '2027-03-01'],
@@ -64,17 +64,17 @@ describe('migrating the version-1 fixture', () => {
       // The signed record made by the version-1 build keeps its fingerprint and signature, but the
       // installation key file that made it was not kept with this fixture: nothing outside the
       // database vouches for the key, so it is reported as not trusted (never "known" from the database alone).
-      const report = store.verify(SIGNED);
+      const report = await store.verify(SIGNED);
       expect(report).toMatchObject({ ok: false, signed: true, fingerprintMatches: true, signatureValid: true, keyTrusted: false, chainIntact: true });
       expect(store.info.warnings.join(' ')).toMatch(/1 signature\(s\) were made before personal keys with the installation key, but its key file \(beamwarden-signing-key.pem\) is not in/);
-      expect(store.getAssessment(SIGNED).current.signature?.keyTrusted).toBe(false);
+      expect((await store.getAssessment(SIGNED)).current.signature?.keyTrusted).toBe(false);
 
       // And it can be revised as usual; the new audit log records it.
-      const a = store.getAssessment(SIGNED);
-      const revised = store.saveAssessment(SIGNED, { ...a.current.content, notes: 'after migration' });
+      const a = await store.getAssessment(SIGNED);
+      const revised = await store.saveAssessment(SIGNED, { ...a.current.content, notes: 'after migration' });
       expect(revised.current).toMatchObject({ revisionNo: 2, status: 'draft' });
     } finally {
-      store.close();
+      await store.close();
     }
     const raw = new Database(dbPath, { readonly: true });
     expect(raw.prepare('SELECT version, name FROM schema_migrations ORDER BY version').all()).toEqual([
@@ -94,8 +94,8 @@ describe('migrating the version-1 fixture', () => {
     raw.close();
   });
 
-  it('the rebuilt trigger still refuses changes to the signed row, including the new columns', () => {
-    openRecordStore({ path: dbPath, keyDir: join(t.dir, 'keys') }).close();
+  it('the rebuilt trigger still refuses changes to the signed row, including the new columns', async () => {
+    await (await openRecordStore({ path: dbPath, keyDir: join(t.dir, 'keys') })).close();
     const raw = new Database(dbPath);
     try {
       expect(() => raw.prepare("UPDATE revision SET review_by = '2099-01-01' WHERE assessment_id = ?").run(SIGNED)).toThrow(/beamwarden: /);
@@ -104,19 +104,19 @@ describe('migrating the version-1 fixture', () => {
     }
   });
 
-  it('a second open does not migrate or copy again', () => {
-    openRecordStore({ path: dbPath, keyDir: join(t.dir, 'keys') }).close();
-    const again = openRecordStore({ path: dbPath, keyDir: join(t.dir, 'keys') });
+  it('a second open does not migrate or copy again', async () => {
+    await (await openRecordStore({ path: dbPath, keyDir: join(t.dir, 'keys') })).close();
+    const again = await openRecordStore({ path: dbPath, keyDir: join(t.dir, 'keys') });
     expect(again.info.migrationBackups).toEqual([]);
-    again.close();
+    await again.close();
   });
 
-  it('a failing migration is rolled back whole and names the backup', () => {
+  it('a failing migration is rolled back whole and names the backup', async () => {
     // Sabotage: a table that migration 0002 wants to create already exists.
     const raw = new Database(dbPath);
     raw.exec('CREATE TABLE audit_event (x INTEGER)');
     raw.close();
-    const err = errorOf(() => openRecordStore({ path: dbPath, keyDir: join(t.dir, 'keys') }));
+    const err = await errorOf(() => openRecordStore({ path: dbPath, keyDir: join(t.dir, 'keys') }));
     expect(err.code).toBe('migration-failed');
     expect(err.message).toMatch(/Migration 2 \(list_columns_and_audit_log\) .* failed and was rolled back: .*audit_event already exists.*before-migration-v1/);
     const after = new Database(dbPath, { readonly: true });
@@ -128,52 +128,52 @@ describe('migrating the version-1 fixture', () => {
 });
 
 describe('opening refuses what it must not touch', () => {
-  it('a database newer than this build', () => {
-    openRecordStore({ path: dbPath, keyDir: join(t.dir, 'keys') }).close();
+  it('a database newer than this build', async () => {
+    await (await openRecordStore({ path: dbPath, keyDir: join(t.dir, 'keys') })).close();
     const raw = new Database(dbPath);
     raw.pragma(`user_version = ${SCHEMA_VERSION + 1}`);
     raw.close();
-    const err = errorOf(() => openRecordStore({ path: dbPath }));
+    const err = await errorOf(() => openRecordStore({ path: dbPath }));
     expect(err.code).toBe('newer-database');
     expect(err.message).toMatch(new RegExp(`schema version ${SCHEMA_VERSION + 1}, newer than this Beamwarden build understands \\(${SCHEMA_VERSION}\\)`));
   });
 
-  it('a migration history that is not a prefix of ours', () => {
+  it('a migration history that is not a prefix of ours', async () => {
     const raw = new Database(dbPath);
     raw.prepare("UPDATE schema_migrations SET name = 'something_else' WHERE version = 1").run();
     raw.close();
-    expect(errorOf(() => openRecordStore({ path: dbPath })).message).toMatch(/does not match this build's/);
+    expect((await errorOf(() => openRecordStore({ path: dbPath }))).message).toMatch(/does not match this build's/);
   });
 
-  it('a file that is not a database', () => {
+  it('a file that is not a database', async () => {
     const p = join(t.dir, 'notes.sqlite');
     writeFileSync(p, 'these are not the records you are looking for'.repeat(200));
-    const err = errorOf(() => openRecordStore({ path: p }));
+    const err = await errorOf(() => openRecordStore({ path: p }));
     expect(err.code).toBe('corrupt-database');
     expect(err.message).toMatch(/is not a database file .*restore it from a backup/);
   });
 
-  it('an SQLite database of another program', () => {
+  it('an SQLite database of another program', async () => {
     const p = join(t.dir, 'other.sqlite');
     const raw = new Database(p);
     raw.exec('CREATE TABLE things (id INTEGER)');
     raw.close();
-    expect(errorOf(() => openRecordStore({ path: p })).message).toMatch(/not a Beamwarden one/);
+    expect((await errorOf(() => openRecordStore({ path: p }))).message).toMatch(/not a Beamwarden one/);
   });
 
-  it('a damaged database fails the integrity check at open with a clear error', () => {
+  it('a damaged database fails the integrity check at open with a clear error', async () => {
     // Overwrite one page in the middle of the file (page size 4096) with garbage.
     const fd = openSync(dbPath, 'r+');
     writeSync(fd, Buffer.alloc(4096, 0x5a), 0, 4096, 4096 * 8);
     closeSync(fd);
-    const err = errorOf(() => openRecordStore({ path: dbPath }));
+    const err = await errorOf(() => openRecordStore({ path: dbPath }));
     expect(err.code).toBe('corrupt-database');
     expect(err.message).toMatch(/failed its integrity check|is damaged/);
     expect(err.message).toMatch(/backup/);
   });
 
-  it('read-only open of an old database does not migrate it', () => {
-    const err = errorOf(() => openRecordStore({ path: dbPath, readonly: true }));
+  it('read-only open of an old database does not migrate it', async () => {
+    const err = await errorOf(() => openRecordStore({ path: dbPath, readonly: true }));
     expect(err.code).toBe('migration-failed');
     const raw = new Database(dbPath, { readonly: true });
     expect(raw.pragma('user_version', { simple: true })).toBe(1);

@@ -18,14 +18,14 @@ let t: ReturnType<typeof tempDir>;
 let store: RecordStore;
 let site: Site;
 let room: Room;
-beforeAll(() => {
+beforeAll(async () => {
   t = tempDir('bw-one-validation-');
-  store = openTemp(t.dir);
-  site = store.createSite({ name: 'Harwick Vale Photonics Centre' });
-  room = store.createRoom({ siteId: site.id, code: 'D0.11', name: 'Teaching laboratory' });
+  store = await openTemp(t.dir);
+  site = await store.createSite({ name: 'Harwick Vale Photonics Centre' });
+  room = await store.createRoom({ siteId: site.id, code: 'D0.11', name: 'Teaching laboratory' });
 });
-afterAll(() => {
-  store.close();
+afterAll(async () => {
+  await store.close();
   t.cleanup();
 });
 
@@ -48,11 +48,11 @@ describe('register and core agree on lasers', () => {
     ['a divergence of 0', laser({}, { divergence_rad: 0 }), false, /more than 0 mrad, at most 180°/, 'derived: 0 makes every hazard distance infinite; angle range in officer words (issue 14)'],
     ['an exit diameter of 0 (point-like source)', laser({}, { diameter_m: 0 }), true, null, 'lipg-ch1-nohd-1W-1mrad: exit diameter 0'],
   ];
-  it.each(CASES)('%s', (_n, l, accepted, problem) => {
+  it.each(CASES)('%s', async (_n, l, accepted, problem) => {
     expect(coreAccepts(l)).toBe(accepted);
     const create = () => store.createInstallation({ roomId: room.id, laser: l });
-    if (accepted) expect(create().laser.beams[0]?.beam.diameter_m).toBe(0);
-    else expect(create).toThrow(problem ?? /./);
+    if (accepted) expect((await create()).laser.beams[0]?.beam.diameter_m).toBe(0);
+    else await expect(create()).rejects.toThrow(problem ?? /./);
   });
 });
 
@@ -64,49 +64,49 @@ describe('the shelf and the core agree on eyewear', () => {
     ['an empty description', { id: 'EW-0', label: '', od: [{ from_nm: 1064, to_nm: 1064, od: 7 }] }, false, /must not be empty/],
     ['EN 207 LB10', { id: 'EW-10', label: 'goggles', en207: [{ from_nm: 1064, to_nm: 1064, modes: 'DIR', scale: 10 }] }, true, null],
   ];
-  it.each(CASES)('%s', (_n, spec, accepted, problem) => {
+  it.each(CASES)('%s', async (_n, spec, accepted, problem) => {
     expect(coreAccepts(laser({}), [spec])).toBe(accepted);
     const create = () => store.createEyewear({ siteId: site.id, spec });
-    if (accepted) expect(create().spec.id).toBe(spec.id);
-    else expect(create).toThrow(problem ?? /./);
+    if (accepted) expect((await create()).spec.id).toBe(spec.id);
+    else await expect(create()).rejects.toThrow(problem ?? /./);
   });
 });
 
 describe('an item stored under an older, looser rule never breaks the register or a new assessment', () => {
-  it('an RB6 eyewear already on the shelf is listed for correction and left out of new assessments', () => {
-    const ok = store.createEyewear({ siteId: site.id, spec: { id: 'AL-7', label: 'alignment glasses', en208: [{ from_nm: 633, to_nm: 633, scale: 2 }] } });
-    store.createInstallation({ roomId: room.id, laser: { ...laser({ id: 'L2', name: 'He-Ne alignment laser' }), beams: [{ ...beam, id: 'b2' }] } });
+  it('an RB6 eyewear already on the shelf is listed for correction and left out of new assessments', async () => {
+    const ok = await store.createEyewear({ siteId: site.id, spec: { id: 'AL-7', label: 'alignment glasses', en208: [{ from_nm: 633, to_nm: 633, scale: 2 }] } });
+    await store.createInstallation({ roomId: room.id, laser: { ...laser({ id: 'L2', name: 'He-Ne alignment laser' }), beams: [{ ...beam, id: 'b2' }] } });
     // Written as the register accepted it before EN 208's RB1 to RB5 was applied there.
     const db = new Database(join(t.dir, 'records.sqlite'));
     db.prepare('UPDATE eyewear SET spec_json = ? WHERE id = ?').run(JSON.stringify({ ...ok.spec, en208: [{ from_nm: 633, to_nm: 633, scale: 6 }] }), ok.id);
     db.close();
-    expect(store.listEyewear(site.id).map((e) => e.spec.id)).toContain('AL-7');
-    const input = store.roomInputFromRegister(room.id);
+    expect((await store.listEyewear(site.id)).map((e) => e.spec.id)).toContain('AL-7');
+    const input = await store.roomInputFromRegister(room.id);
     expect((input.eyewear ?? []).map((e) => e.id)).not.toContain('AL-7');
-    const content = store.newAssessmentContent(room.id);
-    const a = store.createAssessment({ roomId: room.id, content });
+    const content = await store.newAssessmentContent(room.id);
+    const a = await store.createAssessment({ roomId: room.id, content });
     expect(a.current.status).toBe('draft');
   });
 });
 
 describe('beam ids: the register refuses what the calculation would refuse later', () => {
-  it('a second laser of the room with a beam id already used there is refused when stored', () => {
-    const site2 = store.createSite({ name: 'Harwick Vale annexe' });
-    const room2 = store.createRoom({ siteId: site2.id, code: 'E1.01', name: 'Optics workshop' });
-    store.createInstallation({ roomId: room2.id, laser: laser({ name: 'First laser' }) });
-    expect(() => store.createInstallation({ roomId: room2.id, laser: laser({ name: 'Second laser' }) })).toThrow(/beam id "b1" is already used by "First laser"/);
+  it('a second laser of the room with a beam id already used there is refused when stored', async () => {
+    const site2 = await store.createSite({ name: 'Harwick Vale annexe' });
+    const room2 = await store.createRoom({ siteId: site2.id, code: 'E1.01', name: 'Optics workshop' });
+    await store.createInstallation({ roomId: room2.id, laser: laser({ name: 'First laser' }) });
+    await expect(store.createInstallation({ roomId: room2.id, laser: laser({ name: 'Second laser' }) })).rejects.toThrow(/beam id "b1" is already used by "First laser"/);
     // the room's next assessment still evaluates
-    expect(store.createAssessment({ roomId: room2.id, content: store.newAssessmentContent(room2.id) }).current.status).toBe('draft');
+    expect((await store.createAssessment({ roomId: room2.id, content: await store.newAssessmentContent(room2.id) })).current.status).toBe('draft');
   });
 });
 
 describe('refusals name the record in officer words, never a path', () => {
-  it('an assessment with an RB6 marking: eyewear, marking and scale number in words', () => {
-    const content = store.newAssessmentContent(room.id);
+  it('an assessment with an RB6 marking: eyewear, marking and scale number in words', async () => {
+    const content = await store.newAssessmentContent(room.id);
     const bad = { ...content, input: { ...content.input, eyewear: [{ id: 'AL-6', label: 'alignment glasses', en208: [{ from_nm: 633, to_nm: 633, scale: 6 }] }] } };
     let message = '';
     try {
-      store.createAssessment({ roomId: room.id, content: bad });
+      await store.createAssessment({ roomId: room.id, content: bad });
     } catch (e) {
       message = (e as Error).message;
     }
@@ -114,12 +114,12 @@ describe('refusals name the record in officer words, never a path', () => {
     expect(message).not.toMatch(/\[\d+\]|en208\./);
   });
 
-  it('a rule only the calculation checks (one beam id per room): which laser and beam, in words', () => {
-    const content = store.newAssessmentContent(room.id);
+  it('a rule only the calculation checks (one beam id per room): which laser and beam, in words', async () => {
+    const content = await store.newAssessmentContent(room.id);
     const first = content.input.lasers[0];
     if (!first) throw new Error('the room has a laser');
     const twin = { ...first, id: 'twin', name: 'Second green laser', beams: first.beams.map((b) => ({ ...b, label: 'twin beam' })) };
     const bad = { ...content, input: { ...content.input, lasers: [first, twin] } };
-    expect(() => store.createAssessment({ roomId: room.id, content: bad })).toThrow(/The calculation refused the input\. Laser "Second green laser", beam "twin beam": Beam id must be an id not used by another beam of the room/);
+    await expect(store.createAssessment({ roomId: room.id, content: bad })).rejects.toThrow(/The calculation refused the input\. Laser "Second green laser", beam "twin beam": Beam id must be an id not used by another beam of the room/);
   });
 });

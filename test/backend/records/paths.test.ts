@@ -29,23 +29,23 @@ describe('default data folder', () => {
     expect(defaultDatabasePath({ platform: 'linux', env: {}, home: '/home/ana' })).toBe('/home/ana/.config/Beamwarden/beamwarden.sqlite');
   });
 
-  it('first start creates the folder and the database there; the demo loads on request', () => {
+  it('first start creates the folder and the database there; the demo loads on request', async () => {
     const root = mkdtempSync(join(tmpdir(), 'bw-first-'));
     const saved = process.env['BEAMWARDEN_DATA_DIR'];
     process.env['BEAMWARDEN_DATA_DIR'] = join(root, 'nested', 'Beamwarden');
     try {
-      const store = openRecordStore();
+      const store = await openRecordStore();
       expect(store.info.path).toBe(join(root, 'nested', 'Beamwarden', 'beamwarden.sqlite'));
       expect(existsSync(store.info.path)).toBe(true);
-      expect(store.listSites()).toEqual([]);
-      const site = store.seedDemo();
+      expect(await store.listSites()).toEqual([]);
+      const site = await store.seedDemo();
       expect(site.name).toBe('Harwick Vale Photonics Centre');
-      expect(store.seedDemo().id).toBe(site.id); // idempotent
-      const rooms = store.listRooms(site.id);
+      expect((await store.seedDemo()).id).toBe(site.id); // idempotent
+      const rooms = await store.listRooms(site.id);
       expect(rooms.map((r) => r.code)).toEqual(['A0.07', 'B2.14', 'B2.16', 'C1.03']);
-      const statuses = rooms.flatMap((r) => store.listAssessments(r.id).map((a) => a.status));
+      const statuses = (await Promise.all(rooms.map(async (r) => (await store.listAssessments(r.id)).map((a) => a.status)))).flat();
       expect(statuses.filter((s) => s === 'signed')).toHaveLength(1);
-      store.close();
+      await store.close();
     } finally {
       if (saved === undefined) delete process.env['BEAMWARDEN_DATA_DIR'];
       else process.env['BEAMWARDEN_DATA_DIR'] = saved;

@@ -13,12 +13,12 @@ let t: ReturnType<typeof tempDir>;
 let store: RecordStore;
 let rows: ChangeRow[];
 
-beforeAll(() => {
+beforeAll(async () => {
   t = tempDir();
-  store = openTemp(t.dir);
-  const { room } = registerRoom(store);
-  const a = store.createAssessment({ roomId: room.id, content: store.newAssessmentContent(room.id) });
-  const signed = store.signAssessment(a.id, makeSigner(store).signOff(STATEMENT));
+  store = await openTemp(t.dir);
+  const { room } = await registerRoom(store);
+  const a = await store.createAssessment({ roomId: room.id, content: await store.newAssessmentContent(room.id) });
+  const signed = await store.signAssessment(a.id, (await makeSigner(store)).signOff(STATEMENT));
   const c = signed.current.content;
   const l0 = c.input.lasers[0];
   const b0 = l0?.beams[0];
@@ -28,13 +28,13 @@ beforeAll(() => {
     ...c,
     input: { ...c.input, lasers: [{ ...l0, beams: [{ ...b0, emission, beam: { ...b0.beam, divergence_rad: 0.0025 } }, ...l0.beams.slice(1)] }, ...c.input.lasers.slice(1)] },
   };
-  const draft = store.saveAssessment(a.id, edited);
-  const diff = store.compareRevisions(signed.current.id, draft.current.id);
+  const draft = await store.saveAssessment(a.id, edited);
+  const diff = await store.compareRevisions(signed.current.id, draft.current.id);
   const view = diffView(diff);
   rows = [...view.content, ...view.headline].map((d) => describeChange(d, draft.current.content, draft.current.results));
 });
-afterAll(() => {
-  store.close();
+afterAll(async () => {
+  await store.close();
   t.cleanup();
 });
 

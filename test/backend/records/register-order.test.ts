@@ -10,15 +10,15 @@ afterEach(() => cleanups.splice(0).forEach((c) => c()));
 describe('register order (ours: registration order)', () => {
   it.each(scenario.rooms.map((r) => [r.code, r.input.lasers.map((l) => l.name)] as const))(
     'room %s lists its lasers as registered',
-    (code, names) => {
+    async (code, names) => {
       const { dir, cleanup } = tempDir();
       cleanups.push(cleanup);
-      const store = openTemp(dir);
+      const store = await openTemp(dir);
       try {
-        const { room } = registerRoom(store, code);
-        for (let i = 0; i < 5; i++) expect(store.listInstallations(room.id).map((l) => l.laser.name)).toEqual(names);
+        const { room } = await registerRoom(store, code);
+        for (let i = 0; i < 5; i++) expect((await store.listInstallations(room.id)).map((l) => l.laser.name)).toEqual(names);
       } finally {
-        store.close();
+        await store.close();
       }
     },
   );

@@ -12,36 +12,36 @@ import { makeSigner, openTemp, PASSPHRASE, registerRoom, tempDir } from './helpe
 
 let t: ReturnType<typeof tempDir>;
 let store: RecordStore;
-beforeEach(() => {
+beforeEach(async () => {
   t = tempDir();
-  store = openTemp(t.dir);
+  store = await openTemp(t.dir);
 });
-afterEach(() => {
-  store.close();
+afterEach(async () => {
+  await store.close();
   t.cleanup();
 });
 
 describe('record round trip', () => {
-  it('register, assess, revise, sign, verify, export, import elsewhere, verify again', () => {
-    const { site, room } = registerRoom(store, 'A0.07');
-    const signer = makeSigner(store);
+  it('register, assess, revise, sign, verify, export, import elsewhere, verify again', async () => {
+    const { site, room } = await registerRoom(store, 'A0.07');
+    const signer = await makeSigner(store);
     const officer = signer.person;
 
     // Assessment with the register snapshot; results come from the core.
-    const content = store.newAssessmentContent(room.id);
+    const content = await store.newAssessmentContent(room.id);
     expect(content.input.lasers).toHaveLength(2);
     expect(content.nonBeamHazards.map((h) => h.kind)).toContain('electrical');
-    const a = store.createAssessment({ roomId: room.id, content: { ...content, notes: 'first draft' } });
+    const a = await store.createAssessment({ roomId: room.id, content: { ...content, notes: 'first draft' } });
     expect(a.current.revisionNo).toBe(1);
     expect(a.current.status).toBe('draft');
     expect(a.current.results.beams.length).toBe(2);
 
     // Unsigned drafts are not "ok" when verified: nothing is signed yet.
-    const draftReport = store.verify(a.id);
+    const draftReport = await store.verify(a.id);
     expect(draftReport).toMatchObject({ ok: false, signed: false, resultsMatchCore: true });
 
     // Sign revision 1.
-    const signed1 = store.signAssessment(a.id, signer.signOff());
+    const signed1 = await store.signAssessment(a.id, signer.signOff());
     expect(signed1.current.status).toBe('signed');
     expect(signed1.current.signature?.fingerprint).toMatch(/^[0-9a-f]{64}$/);
     expect(signed1.current.signature).toMatchObject({ personId: officer.id, name: officer.name, keyId: signer.key.keyId, keyTrusted: true });
@@ -55,19 +55,19 @@ describe('record round trip', () => {
       notes: 'second revision: loupe use banned',
       assumptions: { ...signed1.current.content.assumptions, opticalAidsPossible: true },
     };
-    const a2 = store.saveAssessment(a.id, edited);
+    const a2 = await store.saveAssessment(a.id, edited);
     expect(a2.current).toMatchObject({ revisionNo: 2, status: 'draft', basedOn: signed1.current.id });
-    expect(store.listRevisions(a.id).map((r) => [r.revisionNo, r.status])).toEqual([
+    expect((await store.listRevisions(a.id)).map((r) => [r.revisionNo, r.status])).toEqual([
       [1, 'signed'],
       [2, 'draft'],
     ]);
     // Saving again writes into the same draft.
-    const a2b = store.saveAssessment(a.id, { ...edited, reviewBy: '2027-01-31' });
+    const a2b = await store.saveAssessment(a.id, { ...edited, reviewBy: '2027-01-31' });
     expect(a2b.current.id).toBe(a2.current.id);
-    expect(store.listAssessments(room.id)[0]).toMatchObject({ revisionNo: 2, status: 'draft', reviewBy: '2027-01-31' });
+    expect((await store.listAssessments(room.id))[0]).toMatchObject({ revisionNo: 2, status: 'draft', reviewBy: '2027-01-31' });
 
     // Field-by-field comparison.
-    const diff = store.compareRevisions(signed1.current.id, a2b.current.id);
+    const diff = await store.compareRevisions(signed1.current.id, a2b.current.id);
     expect(diff).toEqual(
       expect.arrayContaining([
         { path: 'content.notes', old: 'first draft', new: 'second revision: loupe use banned' },
@@ -78,70 +78,70 @@ describe('record round trip', () => {
     expect(diff).toHaveLength(3);
 
     // Sign revision 2: revision 1 becomes superseded; both still verify.
-    store.signAssessment(a.id, signer.signOff());
-    expect(store.listRevisions(a.id).map((r) => r.status)).toEqual(['superseded', 'signed']);
-    const report = store.verify(a.id);
+    await store.signAssessment(a.id, signer.signOff());
+    expect((await store.listRevisions(a.id)).map((r) => r.status)).toEqual(['superseded', 'signed']);
+    const report = await store.verify(a.id);
     expect(report).toMatchObject({ ok: true, revisionNo: 2, fingerprintMatches: true, signatureValid: true, keyTrusted: true, chainIntact: true, resultsMatchCore: true });
     expect(report.differences).toEqual([]);
-    expect(store.verify(a.id, signed1.current.id)).toMatchObject({ ok: true, status: 'superseded' });
+    expect(await store.verify(a.id, signed1.current.id)).toMatchObject({ ok: true, status: 'superseded' });
 
     // Export the site and import it into an empty database with its own key.
-    const doc = store.exportSite(site.id);
+    const doc = await store.exportSite(site.id);
     expect(doc).toMatchObject({ format: 'beamwarden-export', version: 1, scope: { kind: 'site', id: site.id } });
-    const other = openTemp(t.dir, 'other.sqlite');
+    const other = await openTemp(t.dir, 'other.sqlite');
     try {
       // Another installation does not trust this one's key: imported, but shown as unverified.
-      const summary = other.importDocument(JSON.stringify(doc));
+      const summary = await other.importDocument(JSON.stringify(doc));
       expect(summary).toMatchObject({ sites: 1, rooms: 1, installations: 2, eyewear: 5, people: 1, assessments: 1, revisions: 2, unchanged: 0, unverified: 2 });
       expect(summary.untrustedKeys).toEqual([{ keyId: signer.key.keyId, fingerprint: signer.key.fingerprint, claimedSigner: officer.name }]);
-      expect(other.getAssessment(a.id).current.signature?.keyTrusted).toBe(false);
-      expect(other.verify(a.id)).toMatchObject({ ok: false, fingerprintMatches: true, signatureValid: true, keyTrusted: false, resultsMatchCore: true });
+      expect((await other.getAssessment(a.id)).current.signature?.keyTrusted).toBe(false);
+      expect(await other.verify(a.id)).toMatchObject({ ok: false, fingerprintMatches: true, signatureValid: true, keyTrusted: false, resultsMatchCore: true });
       // Its officer admits the exporting key explicitly, with their own passphrase, after seeing the fingerprint.
-      const there = makeSigner(other, 'Ona Brightwater');
-      expect(other.untrustedKeysIn(doc).map((k) => k.fingerprint)).toEqual([signer.key.fingerprint]);
-      other.importDocument(doc, { keyIds: [signer.key.keyId], endorserPersonId: there.person.id, endorserPassphrase: PASSPHRASE });
-      const again = other.verify(a.id);
+      const there = await makeSigner(other, 'Ona Brightwater');
+      expect((await other.untrustedKeysIn(doc)).map((k) => k.fingerprint)).toEqual([signer.key.fingerprint]);
+      await other.importDocument(doc, { keyIds: [signer.key.keyId], endorserPersonId: there.person.id, endorserPassphrase: PASSPHRASE });
+      const again = await other.verify(a.id);
       expect(again).toMatchObject({ ok: true, fingerprintMatches: true, signatureValid: true, keyTrusted: true, resultsMatchCore: true });
       expect(again.trustChain.join(' ')).toMatch(/endorsed by key .* of Ona Brightwater/);
-      expect(other.verify(a.id, signed1.current.id).ok).toBe(true);
+      expect((await other.verify(a.id, signed1.current.id)).ok).toBe(true);
       // The imported record is the same record.
       // (The save counter is this database's own concurrency token, not part of the record.)
-      expect({ ...other.getAssessment(a.id), version: 0 }).toEqual({ ...store.getAssessment(a.id), version: 0 });
+      expect({ ...await other.getAssessment(a.id), version: 0 }).toEqual({ ...await store.getAssessment(a.id), version: 0 });
       // Importing the same document again changes nothing.
-      const second = other.importDocument(doc);
+      const second = await other.importDocument(doc);
       expect(second).toMatchObject({ sites: 0, rooms: 0, revisions: 0, assessments: 0 });
       // Export of one assessment and of one room are accepted by the importing side too.
-      expect(other.importDocument(store.exportAssessment(a.id)).revisions).toBe(0);
-      expect(other.importDocument(store.exportRoom(room.id)).rooms).toBe(0);
+      expect((await other.importDocument(await store.exportAssessment(a.id))).revisions).toBe(0);
+      expect((await other.importDocument(await store.exportRoom(room.id))).rooms).toBe(0);
     } finally {
-      other.close();
+      await other.close();
     }
   });
 
-  it('a draft can be discarded; a signed revision cannot', () => {
-    const { room } = registerRoom(store);
-    const a = store.createAssessment({ roomId: room.id, content: store.newAssessmentContent(room.id) });
-    store.signAssessment(a.id, makeSigner(store, 'A. Officer').signOff());
-    expect(() => store.discardDraft(a.id)).toThrow(/no open draft/);
-    store.saveAssessment(a.id, { ...store.getAssessment(a.id).current.content, notes: 'x' });
-    store.discardDraft(a.id);
-    expect(store.listRevisions(a.id).map((r) => r.status)).toEqual(['signed']);
-    expect(store.verify(a.id).ok).toBe(true);
+  it('a draft can be discarded; a signed revision cannot', async () => {
+    const { room } = await registerRoom(store);
+    const a = await store.createAssessment({ roomId: room.id, content: await store.newAssessmentContent(room.id) });
+    await store.signAssessment(a.id, (await makeSigner(store, 'A. Officer')).signOff());
+    await expect(store.discardDraft(a.id)).rejects.toThrow(/no open draft/);
+    await store.saveAssessment(a.id, { ...(await store.getAssessment(a.id)).current.content, notes: 'x' });
+    await store.discardDraft(a.id);
+    expect((await store.listRevisions(a.id)).map((r) => r.status)).toEqual(['signed']);
+    expect((await store.verify(a.id)).ok).toBe(true);
   });
 
-  it('lists assessments due for review', () => {
-    const { room } = registerRoom(store);
-    const c = store.newAssessmentContent(room.id);
-    const early = store.createAssessment({ roomId: room.id, content: { ...c, reviewBy: '2026-01-15' } });
-    store.createAssessment({ roomId: room.id, content: { ...c, reviewBy: '2028-01-15' } });
-    expect(store.listDueForReview('2026-12-31').map((s) => s.id)).toEqual([early.id]);
+  it('lists assessments due for review', async () => {
+    const { room } = await registerRoom(store);
+    const c = await store.newAssessmentContent(room.id);
+    const early = await store.createAssessment({ roomId: room.id, content: { ...c, reviewBy: '2026-01-15' } });
+    await store.createAssessment({ roomId: room.id, content: { ...c, reviewBy: '2028-01-15' } });
+    expect((await store.listDueForReview('2026-12-31')).map((s) => s.id)).toEqual([early.id]);
   });
 
-  it('chosen exposure durations are written into the evaluated input', () => {
-    const { room } = registerRoom(store);
-    const c = store.newAssessmentContent(room.id);
+  it('chosen exposure durations are written into the evaluated input', async () => {
+    const { room } = await registerRoom(store);
+    const c = await store.newAssessmentContent(room.id);
     const beamId = c.input.lasers[0]?.beams[0]?.id ?? '';
-    const a = store.createAssessment({
+    const a = await store.createAssessment({
       roomId: room.id,
       content: { ...c, assumptions: { ...c.assumptions, exposureDurations: [{ beamId, duration_s: 100, why: 'task-specific viewing' }] } },
     });

@@ -24,7 +24,7 @@ interface Env {
   dbPath: string;
   keyDir: string;
   store: RecordStore;
-  officer: ReturnType<typeof makeSigner>;
+  officer: Awaited<ReturnType<typeof makeSigner>>;
   assessmentId: string;
   roomId: string;
 }
@@ -35,16 +35,16 @@ afterEach(() => {
 });
 
 /** An officer's installation with one assessment signed twice (revision 1 superseded, 2 signed). */
-function installation(): Env {
+async function installation(): Promise<Env> {
   const t = tempDir('bw-attack-');
-  const store = openTemp(t.dir);
+  const store = await openTemp(t.dir);
   cleanups.push(() => t.cleanup());
-  const { room } = registerRoom(store);
-  const officer = makeSigner(store);
-  const a = store.createAssessment({ roomId: room.id, content: store.newAssessmentContent(room.id) });
-  store.signAssessment(a.id, officer.signOff());
-  store.saveAssessment(a.id, { ...store.getAssessment(a.id).current.content, notes: 'annual review' });
-  store.signAssessment(a.id, officer.signOff());
+  const { room } = await registerRoom(store);
+  const officer = await makeSigner(store);
+  const a = await store.createAssessment({ roomId: room.id, content: await store.newAssessmentContent(room.id) });
+  await store.signAssessment(a.id, officer.signOff());
+  await store.saveAssessment(a.id, { ...(await store.getAssessment(a.id)).current.content, notes: 'annual review' });
+  await store.signAssessment(a.id, officer.signOff());
   return { dir: t.dir, dbPath: join(t.dir, 'records.sqlite'), keyDir: join(t.dir, 'keys'), store, officer, assessmentId: a.id, roomId: room.id };
 }
 
@@ -127,7 +127,7 @@ function anchorOf(env: Env): string {
 
 interface Attack {
   readonly name: string;
-  readonly attack: (env: Env) => void;
+  readonly attack: (env: Env) => void | Promise<void>;
   /** What verify must say (each must appear among the findings). */
   readonly findings: readonly RegExp[];
   readonly failedCheck: VerifyReport['checks'][number]['check'];
@@ -136,8 +136,8 @@ interface Attack {
 const ATTACKS: readonly Attack[] = [
   {
     name: 'a key inserted into the database signs revision 3 with the power changed to 0.9 mW, in the officer\'s name',
-    attack: (env) => {
-      env.store.saveAssessment(env.assessmentId, weakened(env.store.getAssessment(env.assessmentId).current.content));
+    attack: async (env) => {
+      await env.store.saveAssessment(env.assessmentId, weakened((await env.store.getAssessment(env.assessmentId)).current.content));
       forgeSignature(env, attackerKey(), anchorOf(env));
     },
     findings: [/is NOT trusted here — a key that only the database lists proves nothing\. Key [0-9a-f ]+ is not on this installation's trust list\./],
@@ -194,9 +194,9 @@ const ATTACKS: readonly Attack[] = [
   },
   {
     name: 'a revision removed from the middle of the chain (triggers restored afterwards)',
-    attack: (env) => {
-      env.store.saveAssessment(env.assessmentId, { ...env.store.getAssessment(env.assessmentId).current.content, notes: 'third' });
-      env.store.signAssessment(env.assessmentId, env.officer.signOff());
+    attack: async (env) => {
+      await env.store.saveAssessment(env.assessmentId, { ...(await env.store.getAssessment(env.assessmentId)).current.content, notes: 'third' });
+      await env.store.signAssessment(env.assessmentId, env.officer.signOff());
       withoutTriggers(env, ['revision_signed_no_delete', 'signature_no_delete', 'revision_signed_immutable'], (raw) => {
         const rev2 = raw.prepare('SELECT id FROM revision WHERE assessment_id = ? AND revision_no = 2').get(env.assessmentId) as { id: string };
         raw.prepare('DELETE FROM signature WHERE revision_id = ?').run(rev2.id);
@@ -209,7 +209,7 @@ const ATTACKS: readonly Attack[] = [
   },
   {
     name: 'the trust list file replaced by one whose anchor is the forger\'s key, which then signs',
-    attack: (env) => {
+    attack: async (env) => {
       const key = attackerKey();
       const entry = makeEndorsedEntry(
         { keyId: key.keyId, publicKey: key.pem, personId: env.officer.person.id, personName: env.officer.person.name, admittedAt: new Date().toISOString(), endorsedBy: key.keyId },
@@ -217,7 +217,7 @@ const ATTACKS: readonly Attack[] = [
       );
       const list: TrustList = { format: 'beamwarden-trust-list', version: 1, anchor: key.keyId, entries: [entry] };
       writeFileSync(join(env.keyDir, TRUST_LIST_FILE), JSON.stringify(list));
-      env.store.saveAssessment(env.assessmentId, weakened(env.store.getAssessment(env.assessmentId).current.content));
+      await env.store.saveAssessment(env.assessmentId, weakened((await env.store.getAssessment(env.assessmentId)).current.content));
       forgeSignature(env, key, key.keyId);
     },
     findings: [/The trust list beside the database has the anchor [0-9a-f ]+, but this database was set up with [0-9a-f ]+: the trust list file was replaced\./],
@@ -225,7 +225,7 @@ const ATTACKS: readonly Attack[] = [
   },
   {
     name: 'an endorsement of the forger\'s key added to the trust list without the officer\'s key',
-    attack: (env) => {
+    attack: async (env) => {
       const key = attackerKey();
       const path = join(env.keyDir, TRUST_LIST_FILE);
       const list = JSON.parse(readFileSync(path, 'utf8')) as TrustList;
@@ -234,7 +234,7 @@ const ATTACKS: readonly Attack[] = [
         key.privateKey, // signed with its own key, claiming the anchor's endorsement
       );
       writeFileSync(path, JSON.stringify({ ...list, entries: [...list.entries, forged] }));
-      env.store.saveAssessment(env.assessmentId, weakened(env.store.getAssessment(env.assessmentId).current.content));
+      await env.store.saveAssessment(env.assessmentId, weakened((await env.store.getAssessment(env.assessmentId)).current.content));
       forgeSignature(env, key, list.anchor);
     },
     findings: [/The endorsement of key [0-9a-f ]+ of Dr\. Imre Calloway-Senn is not a valid signature by key [0-9a-f ]+ of Dr\. Imre Calloway-Senn: it was forged or edited\./],
@@ -252,72 +252,72 @@ const ATTACKS: readonly Attack[] = [
 ];
 
 describe('attacks on signed records fail verification with a readable finding', () => {
-  it.each(ATTACKS)('$name', ({ attack, findings, failedCheck }) => {
-    const env = installation();
-    expect(env.store.verify(env.assessmentId).ok).toBe(true); // intact before the attack
-    attack(env);
-    env.store.close();
-    const reopened = openTemp(env.dir); // a fresh connection, as an auditor's verify would use
+  it.each(ATTACKS)('$name', async ({ attack, findings, failedCheck }) => {
+    const env = await installation();
+    expect((await env.store.verify(env.assessmentId)).ok).toBe(true); // intact before the attack
+    await attack(env);
+    await env.store.close();
+    const reopened = await openTemp(env.dir); // a fresh connection, as an auditor's verify would use
     try {
-      const report = reopened.verify(env.assessmentId);
+      const report = await reopened.verify(env.assessmentId);
       expect(report.ok).toBe(false);
       for (const f of findings) expect(report.findings.join('\n')).toMatch(f);
       expect(report.checks.find((c) => c.check === failedCheck)?.ok).toBe(false);
     } finally {
-      reopened.close();
+      await reopened.close();
     }
   });
 
-  it('a dropped trigger is reported when the database is opened', () => {
-    const env = installation();
-    env.store.close();
+  it('a dropped trigger is reported when the database is opened', async () => {
+    const env = await installation();
+    await env.store.close();
     withoutTriggers(env, ['signature_no_delete'], () => undefined, false);
-    const reopened = openTemp(env.dir);
+    const reopened = await openTemp(env.dir);
     try {
       expect(reopened.info.warnings.join(' ')).toMatch(/protections against changing signed records were removed \(trigger signature_no_delete is missing\)/);
     } finally {
-      reopened.close();
+      await reopened.close();
     }
   });
 
-  it('a crafted export, signed at the forger\'s own installation in the officer\'s name, is imported as unverified', () => {
-    const env = installation();
+  it('a crafted export, signed at the forger\'s own installation in the officer\'s name, is imported as unverified', async () => {
+    const env = await installation();
     // The forger's installation: a person with the officer's name and a key trusted there.
     const forgerDir = tempDir('bw-forger-');
     cleanups.push(() => forgerDir.cleanup());
-    const forger = openTemp(forgerDir.dir);
+    const forger = await openTemp(forgerDir.dir);
     try {
-      forger.importDocument(env.store.exportAssessment(env.assessmentId));
-      const twin = makeSigner(forger, env.officer.person.name);
-      forger.saveAssessment(env.assessmentId, weakened(forger.getAssessment(env.assessmentId).current.content));
-      forger.signAssessment(env.assessmentId, twin.signOff());
-      const crafted = forger.exportAssessment(env.assessmentId);
+      await forger.importDocument(await env.store.exportAssessment(env.assessmentId));
+      const twin = await makeSigner(forger, env.officer.person.name);
+      await forger.saveAssessment(env.assessmentId, weakened((await forger.getAssessment(env.assessmentId)).current.content));
+      await forger.signAssessment(env.assessmentId, twin.signOff());
+      const crafted = await forger.exportAssessment(env.assessmentId);
 
-      const summary = env.store.importDocument(crafted);
+      const summary = await env.store.importDocument(crafted);
       expect(summary.unverified).toBe(1);
       expect(summary.untrustedKeys.map((k) => k.fingerprint)).toEqual([twin.key.fingerprint]);
-      const shown = env.store.getAssessment(env.assessmentId).current;
+      const shown = (await env.store.getAssessment(env.assessmentId)).current;
       expect(shown.revisionNo).toBe(3);
       expect(shown.signature?.keyTrusted).toBe(false); // shown as an unverified signature, never as signed
-      const report = env.store.verify(env.assessmentId);
+      const report = await env.store.verify(env.assessmentId);
       expect(report).toMatchObject({ ok: false, keyTrusted: false, signatureValid: true });
       expect(report.findings.join('\n')).toMatch(/is NOT trusted here — a key that only the database lists proves nothing\. Key [0-9a-f ]+ is not on this installation's trust list\./);
     } finally {
-      forger.close();
-      env.store.close();
+      await forger.close();
+      await env.store.close();
     }
   });
 
-  it('a sealed private key replaced in the database cannot sign for the officer', () => {
-    const env = installation();
+  it('a sealed private key replaced in the database cannot sign for the officer', async () => {
+    const env = await installation();
     const raw = new Database(env.dbPath);
     // The forger seals their own key under the officer's key id (knowing their own passphrase).
-    const sealed = (() => {
+    const sealed = await (async () => {
       const dir = tempDir('bw-sealed-');
       cleanups.push(() => dir.cleanup());
-      const s = openTemp(dir.dir);
-      const p = makeSigner(s, 'Forger', undefined, 'forger passphrase 123');
-      s.close();
+      const s = await openTemp(dir.dir);
+      const p = await makeSigner(s, 'Forger', undefined, 'forger passphrase 123');
+      await s.close();
       const db = new Database(join(dir.dir, 'records.sqlite'), { readonly: true });
       const row = db.prepare('SELECT sealed_private_key FROM person_key WHERE key_id = ?').get(p.key.keyId) as { sealed_private_key: string };
       db.close();
@@ -326,11 +326,11 @@ describe('attacks on signed records fail verification with a readable finding', 
     raw.exec('DROP TRIGGER person_key_owner_fixed');
     raw.prepare('UPDATE person_key SET sealed_private_key = ? WHERE key_id = ?').run(sealed, env.officer.key.keyId);
     raw.close();
-    env.store.saveAssessment(env.assessmentId, weakened(env.store.getAssessment(env.assessmentId).current.content));
+    await env.store.saveAssessment(env.assessmentId, weakened((await env.store.getAssessment(env.assessmentId)).current.content));
     // The sealed blob is bound to its own key id (authenticated data): it does not even open.
-    expect(() => env.store.signAssessment(env.assessmentId, { personId: env.officer.person.id, passphrase: 'forger passphrase 123', statement: STATEMENT })).toThrow(
+    await expect(env.store.signAssessment(env.assessmentId, { personId: env.officer.person.id, passphrase: 'forger passphrase 123', statement: STATEMENT })).rejects.toThrow(
       /The passphrase is not correct for Dr\. Imre Calloway-Senn's signing key\. Nothing was signed or changed\./,
     );
-    env.store.close();
+    await env.store.close();
   });
 });

@@ -77,9 +77,9 @@ function fill(dir: string): void {
   throw new Error('the disk never filled');
 }
 
-function errorOf(fn: () => unknown): RecordError {
+async function errorOf(fn: () => unknown): Promise<RecordError> {
   try {
-    fn();
+    await fn();
   } catch (e) {
     if (e instanceof RecordError) return e;
     throw e;
@@ -87,52 +87,52 @@ function errorOf(fn: () => unknown): RecordError {
   throw new Error('expected a RecordError');
 }
 
-const open = (path: string, keyDir = join(t.dir, 'keys')): RecordStore => openRecordStore({ path, keyDir });
+const open = (path: string, keyDir = join(t.dir, 'keys')): Promise<RecordStore> => openRecordStore({ path, keyDir });
 
 describe('at start', () => {
-  it.skipIf(!CAN_MOUNT)('a healthy database on a read-only disk: told read-only, never "damaged"', () => {
+  it.skipIf(!CAN_MOUNT)('a healthy database on a read-only disk: told read-only, never "damaged"', async () => {
     const disk = smallDisk('ro', '8m');
     const path = join(disk, 'records.sqlite');
-    const s = open(path);
-    registerRoom(s);
-    s.close();
+    const s = await open(path);
+    await registerRoom(s);
+    await s.close();
     execFileSync('mount', ['-o', 'remount,ro', disk]);
-    const err = errorOf(() => open(path));
+    const err = await errorOf(() => open(path));
     expect(err.code).toBe('storage');
     expect(err.message).toMatch(/is on a read-only disk or share: Beamwarden can read there but not save/);
     expect(err.message).not.toMatch(/restore it from a backup|is damaged|failed its integrity check/);
     expect(err.message).toMatch(/not damaged/);
     // Opening it read-only (SQLite's write-ahead log needs its shared-memory file beside it) is
     // refused with the same plain words, never as damage.
-    const ro = errorOf(() => openRecordStore({ path, readonly: true }));
+    const ro = await errorOf(() => openRecordStore({ path, readonly: true }));
     expect(ro.message).toMatch(/read-only disk or share.*not damaged/);
   });
 
-  it.skipIf(!CAN_CHATTR)('an immutable database file: refused at start with its own message (not at the first save)', () => {
+  it.skipIf(!CAN_CHATTR)('an immutable database file: refused at start with its own message (not at the first save)', async () => {
     const path = join(t.dir, 'records.sqlite');
-    const s = open(path);
-    registerRoom(s);
-    s.close();
+    const s = await open(path);
+    await registerRoom(s);
+    await s.close();
     execFileSync('chattr', ['+i', path]);
     immutable.push(path);
-    const err = errorOf(() => open(path));
+    const err = await errorOf(() => open(path));
     expect(err.code).toBe('storage');
     expect(err.message).toMatch(/is marked unchangeable \(immutable, or locked by the system\): Beamwarden can read it but cannot save into it/);
     expect(err.message).toMatch(/chattr -i/);
   });
 
-  it('a folder that does not exist (drive not connected): said so, and not created elsewhere', () => {
+  it('a folder that does not exist (drive not connected): said so, and not created elsewhere', async () => {
     const path = join(t.dir, 'usb-stick-not-mounted', 'Beamwarden', 'records.sqlite');
-    const err = errorOf(() => open(path));
+    const err = await errorOf(() => open(path));
     expect(err.code).toBe('storage');
     expect(err.message).toMatch(/The folder .*usb-stick-not-mounted.Beamwarden does not exist \(is the drive or network share connected\?\)/);
     expect(existsSync(join(t.dir, 'usb-stick-not-mounted'))).toBe(false);
   });
 
-  it('a folder whose parent exists is made (a new data folder)', () => {
-    const s = open(join(t.dir, 'new-folder', 'records.sqlite'));
-    expect(s.listSites()).toEqual([]);
-    s.close();
+  it('a folder whose parent exists is made (a new data folder)', async () => {
+    const s = await open(join(t.dir, 'new-folder', 'records.sqlite'));
+    expect(await s.listSites()).toEqual([]);
+    await s.close();
   });
 });
 
@@ -140,12 +140,12 @@ describe('at the failing action', () => {
   it.skipIf(!CAN_MOUNT)('a full disk while saving, over HTTP: code "storage" with the plain message, nothing half-written', async () => {
     const disk = smallDisk('full', '4m');
     const path = join(disk, 'records.sqlite');
-    const s = open(path, join(t.dir, 'keys'));
-    const { room } = registerRoom(s);
+    const s = await open(path, join(t.dir, 'keys'));
+    const { room } = await registerRoom(s);
     const host = await startTestHost(s);
     try {
       fill(disk);
-      const before = s.listInstallations(room.id).length;
+      const before = (await s.listInstallations(room.id)).length;
       // Large notes: the write needs new pages the disk no longer has.
       let reply: Awaited<ReturnType<typeof host.call>>['reply'] | null = null;
       for (let i = 0; i < 20; i++) {
@@ -161,27 +161,27 @@ describe('at the failing action', () => {
         expect(reply.error.code).toBe('storage');
         expect(reply.error.message).toMatch(/The disk holding .* is full: .* could not be saved, and nothing of it was written\. Free some space/);
       }
-      expect(s.listInstallations(room.id)).toHaveLength(before);
+      expect(await s.listInstallations(room.id)).toHaveLength(before);
     } finally {
       await host.close();
-      s.close();
+      await s.close();
     }
   });
 
-  it.skipIf(!CAN_MOUNT)('a full disk while the signing key is made: plain message, no stray temporary file, no key half made', () => {
+  it.skipIf(!CAN_MOUNT)('a full disk while the signing key is made: plain message, no stray temporary file, no key half made', async () => {
     const keys = smallDisk('keys', '64k');
-    const s = open(join(t.dir, 'records.sqlite'), keys);
+    const s = await open(join(t.dir, 'records.sqlite'), keys);
     try {
-      const person = s.createPerson({ name: 'Dr. Imre Calloway-Senn', role: 'LSO' });
+      const person = await s.createPerson({ name: 'Dr. Imre Calloway-Senn', role: 'LSO' });
       fill(keys);
       const pass = 'a passphrase for the test';
-      const err = errorOf(() => s.createPersonKey({ personId: person.id, passphrase: pass, passphraseAgain: pass }));
+      const err = await errorOf(() => s.createPersonKey({ personId: person.id, passphrase: pass, passphraseAgain: pass }));
       expect(err.code).toBe('storage');
       expect(err.message).toMatch(/is full: The trust list could not be saved/);
       expect(readdirSync(keys).filter((f) => f.endsWith('.tmp'))).toEqual([]);
-      expect(s.listPersonKeys()).toEqual([]);
+      expect(await s.listPersonKeys()).toEqual([]);
     } finally {
-      s.close();
+      await s.close();
     }
   });
 });

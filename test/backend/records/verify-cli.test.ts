@@ -22,19 +22,19 @@ function verify(...args: string[]): { status: number | null; lines: string[]; st
   return { status: r.status, stdout: r.stdout, lines: r.stdout.trim().split('\n') };
 }
 
-beforeAll(() => {
+beforeAll(async () => {
   t = tempDir('bw-verify-cli-');
   db = join(t.dir, 'records.sqlite');
-  const store = openTemp(t.dir);
-  const { room } = registerRoom(store);
-  const officer = makeSigner(store);
+  const store = await openTemp(t.dir);
+  const { room } = await registerRoom(store);
+  const officer = await makeSigner(store);
   for (let i = 0; i < 3; i++) {
-    const a = store.createAssessment({ roomId: room.id, content: { ...store.newAssessmentContent(room.id), notes: `bench ${i}` } });
-    store.signAssessment(a.id, officer.signOff());
+    const a = await store.createAssessment({ roomId: room.id, content: { ...await store.newAssessmentContent(room.id), notes: `bench ${i}` } });
+    await store.signAssessment(a.id, officer.signOff());
     ids.push(a.id);
   }
-  draftId = store.createAssessment({ roomId: room.id, content: store.newAssessmentContent(room.id) }).id;
-  store.close();
+  draftId = (await store.createAssessment({ roomId: room.id, content: await store.newAssessmentContent(room.id) })).id;
+  await store.close();
 }, 120_000);
 afterAll(() => t.cleanup());
 

@@ -57,9 +57,9 @@ function startOther(): Promise<{ save: (name: string) => Promise<void> }> {
   }));
 }
 
-function errorOf(fn: () => unknown): RecordError {
+async function errorOf(fn: () => unknown): Promise<RecordError> {
   try {
-    fn();
+    await fn();
   } catch (e) {
     if (e instanceof RecordError) return e;
     throw e;
@@ -71,13 +71,13 @@ describe('a second program opening the database for writing', () => {
   it('is refused and told which program has it; read-only opening still works', async () => {
     const other = await startOther();
     await other.save('Harwick Vale Photonics Centre');
-    const err = errorOf(() => openRecordStore({ path: dbPath, keyDir: join(t.dir, 'keys') }));
+    const err = await errorOf(() => openRecordStore({ path: dbPath, keyDir: join(t.dir, 'keys') }));
     expect(err.code).toBe('in-use');
     expect(err.message).toMatch(new RegExp(`already open for writing in another Beamwarden \\(process ${child?.pid ?? 0} on `));
     expect(err.message).toMatch(/Close Beamwarden there first/);
-    const reader = openRecordStore({ path: dbPath, readonly: true });
-    expect(reader.listSites().map((s) => s.name)).toEqual(['Harwick Vale Photonics Centre']);
-    reader.close();
+    const reader = await openRecordStore({ path: dbPath, readonly: true });
+    expect((await reader.listSites()).map((s) => s.name)).toEqual(['Harwick Vale Photonics Centre']);
+    await reader.close();
   });
 
   it('a lock left by a program that was killed is taken over', async () => {
@@ -87,9 +87,9 @@ describe('a second program opening the database for writing', () => {
     c?.kill('SIGKILL');
     await ended;
     expect(existsSync(`${dbPath}.lock`)).toBe(true);
-    const store = openRecordStore({ path: dbPath, keyDir: join(t.dir, 'keys') });
-    store.createSite({ name: 'After the crash' });
-    store.close();
+    const store = await openRecordStore({ path: dbPath, keyDir: join(t.dir, 'keys') });
+    await store.createSite({ name: 'After the crash' });
+    await store.close();
     expect(existsSync(`${dbPath}.lock`)).toBe(false);
   });
 });
@@ -97,28 +97,28 @@ describe('a second program opening the database for writing', () => {
 describe('restore while the database is in use', () => {
   it('is refused and the running program keeps every confirmed save', async () => {
     // A backup first, taken by this process, which then closes.
-    const store = openRecordStore({ path: dbPath, keyDir: join(t.dir, 'keys') });
-    store.createSite({ name: 'In the backup' });
+    const store = await openRecordStore({ path: dbPath, keyDir: join(t.dir, 'keys') });
+    await store.createSite({ name: 'In the backup' });
     mkdirSync(join(t.dir, 'backups'));
     const backup = join(t.dir, 'backups', 'copy.sqlite');
     await store.backup(backup);
-    store.close();
+    await store.close();
 
     const other = await startOther();
     await other.save('Saved after the backup');
     await expect(restoreBackup({ from: backup, to: dbPath })).rejects.toMatchObject({ code: 'in-use', message: expect.stringMatching(/^Not restored: .*Nothing was changed\.$/) });
     await other.save('Saved after the refused restore');
-    const reader = openRecordStore({ path: dbPath, readonly: true });
-    expect(reader.listSites().map((s) => s.name).sort()).toEqual(['In the backup', 'Saved after the backup', 'Saved after the refused restore']);
-    reader.close();
+    const reader = await openRecordStore({ path: dbPath, readonly: true });
+    expect((await reader.listSites()).map((s) => s.name).sort()).toEqual(['In the backup', 'Saved after the backup', 'Saved after the refused restore']);
+    await reader.close();
   });
 
   it('in this process too: restore refuses while a store is open on the file', async () => {
-    const store = openRecordStore({ path: dbPath, keyDir: join(t.dir, 'keys') });
+    const store = await openRecordStore({ path: dbPath, keyDir: join(t.dir, 'keys') });
     const backup = join(t.dir, 'copy.sqlite');
     await store.backup(backup);
     await expect(restoreBackup({ from: backup, to: dbPath })).rejects.toMatchObject({ code: 'in-use' });
-    store.close();
+    await store.close();
     await expect(restoreBackup({ from: backup, to: dbPath })).resolves.toMatchObject({ path: dbPath });
   });
 });

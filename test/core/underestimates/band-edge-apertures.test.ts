@@ -44,7 +44,7 @@ describe('EU T_min bands at an exact edge (through evaluateBeam)', () => {
   it('EU 1050 nm, 10 ns pulses at 100 kHz: the lower band T_min = 18 us applies (Table 2.6 bands are lo < lambda <= hi; limit specification errata)', () => {
     const r = evaluateBeam({ ruleSet: 'eu2006', wavelength_nm: 1050, emission: { kind: 'pulsed', pulseEnergy_J: 1e-6, pulseDuration_s: 1e-8, repetitionRate_Hz: 1e5 }, beam, exposureDuration_s: 10 });
     const text = JSON.stringify(r.mpe.rules);
-    expect(text).toMatch(/pulse groups inside T_i counted as one pulse/);
+    expect(text).toMatch(/pulse groups inside T_min counted as one pulse/); // the Directive names it T_min
     expect(JSON.stringify(r.trace)).toMatch(/T_min = 1\.8e-5 s/);
   });
 });

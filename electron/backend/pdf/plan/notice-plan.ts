@@ -1,6 +1,7 @@
 /**
  * The small plan on the door notice: the room, the laser controlled area the officer accepted, the
- * hazard zones, and the entrance the notice is for (the chosen door, or the plan's first door).
+ * hazard zones, and "You are here" at the entrance the notice is for (the door the officer chose
+ * on the print screen, or the plan's first door).
  */
 import type { Column } from 'pdfmake/interfaces';
 import type { DocumentInput } from '../document-input.js';
@@ -18,7 +19,7 @@ export function noticePlan(doc: DocumentInput, view: RoomView, width: number, he
     stack: [
       { svg: fig.svg, width: fig.width },
       {
-        text: `Room plan: hazard zones shaded${plan.controlledArea ? ', laser controlled area dash-dot' : ''}${entrance ? `; this door (${entrance.label}) solid black` : ''}.`,
+        text: `Room plan: hazard zones shaded${plan.controlledArea ? ', laser controlled area dash-dot' : ''}${entrance ? `; you are here: door ${entrance.label} (solid black, black dot)` : ''}.`,
         fontSize: 6.5,
         lineHeight: 1,
         margin: [0, 1, 0, 0],

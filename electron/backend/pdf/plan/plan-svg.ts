@@ -5,6 +5,7 @@
  * the findings say where a zone runs beyond it.
  */
 import type { PlanPointResult, PlanResult, RoomPlan } from '../../../../core/plan/plan-model.js';
+import { labelSide, onwardEnd, pathPoints, planMiddle } from '../../../../core/plan/plan-layout.js';
 
 const PT_PER_MM = 72 / 25.4;
 const RATIOS = [10, 20, 25, 50, 75, 100, 200, 250, 500, 1000, 2000, 5000];
@@ -161,13 +162,48 @@ export function planSvg(plan: RoomPlan, result: PlanResult | undefined, o: PlanS
   // room
   out.push(`<polygon points="${plan.outline.map((q) => `${n(X(q.x_m))},${n(Y(q.y_m))}`).join(' ')}" fill="none" stroke="${PLAN_INK.wall}" stroke-width="${o.compact ? 1.6 : 2.2}"/>`);
   for (const w of plan.walls) seg(P(w.a), P(w.b), `stroke="${PLAN_INK.wall}" stroke-width="${o.compact ? 1.6 : 2.2}"`);
-  const midX = (Math.min(...plan.outline.map((q) => q.x_m)) + Math.max(...plan.outline.map((q) => q.x_m))) / 2;
-  const midY = (Math.min(...plan.outline.map((q) => q.y_m)) + Math.max(...plan.outline.map((q) => q.y_m))) / 2;
+  const middle = planMiddle(plan.outline);
+  const midX = middle.x;
+  const pp = (q: Pt) => ({ x_m: q[0], y_m: q[1] });
+  // Beside the piece's middle, on the room side (the same rule as on screen: core/plan/plan-layout.ts).
   const inwardLabel = (a: Pt, b: Pt, t: string, colour: string, bold: boolean) => {
-    const mx = (a[0] + b[0]) / 2;
-    const my = (a[1] + b[1]) / 2;
-    if (Math.abs(a[0] - b[0]) < Math.abs(a[1] - b[1])) text(X(mx) + (mx > midX ? -fs * 0.6 : fs * 0.6), Y(my) + fs * 0.35, t, mx > midX ? 'end' : 'start', colour, bold);
-    else text(X(mx), Y(my) + (my > midY ? fs * 1.4 : -fs * 0.6), t, 'middle', colour, bold);
+    const { at, vertical, toward } = labelSide(pp(a), pp(b), middle);
+    if (vertical) text(X(at.x_m) + toward * fs * 0.6, Y(at.y_m) + fs * 0.35, t, toward > 0 ? 'start' : 'end', colour, bold);
+    else text(X(at.x_m), Y(at.y_m) + (toward < 0 ? fs * 1.4 : -fs * 0.6), t, 'middle', colour, bold);
+  };
+  // The reader of a door notice stands outside the door: a black dot there, on the side away from the
+  // middle of the room, and "You are here" beside it, outside where it fits in the drawing, else inside.
+  const youAreHere = (a: Pt, b: Pt) => {
+    const { at, vertical, toward } = labelSide(pp(a), pp(b), middle);
+    const mx = at.x_m;
+    const my = at.y_m;
+    // Outside: away from the middle of the room.
+    const [ox, oy]: Pt = vertical ? [-toward, 0] : [0, -toward];
+    const off = Math.min(fs * 0.9, margin * s * 0.55);
+    const cx = X(mx) + ox * off;
+    const cy = Y(my) - oy * off;
+    out.push(`<circle cx="${n(cx)}" cy="${n(cy)}" r="${n(Math.min(fs * 0.45, off * 0.8))}" fill="#000000"/>`);
+    const words = 'You are here';
+    const w = words.length * fs * 0.53;
+    let x: number;
+    let y: number;
+    let anchor: 'start' | 'middle' | 'end';
+    if (vertical) {
+      const outX = cx + ox * fs * 0.7;
+      const fits = ox > 0 ? outX + w <= W - 2 : outX - w >= 2;
+      x = fits ? outX : X(mx) - ox * fs * 0.7;
+      anchor = (fits ? ox > 0 : ox < 0) ? 'start' : 'end';
+      y = Y(my) + fs * 0.35;
+    } else {
+      const outY = oy > 0 ? cy - fs * 0.7 : cy + fs * 1.2;
+      const fits = outY - fs >= 1 && outY <= Hd - 2;
+      y = fits ? outY : oy > 0 ? Y(my) + fs * 1.5 : Y(my) - fs * 0.7;
+      x = Math.min(Math.max(X(mx), w / 2 + 2), W - w / 2 - 2);
+      anchor = 'middle';
+    }
+    const left = anchor === 'start' ? x : anchor === 'end' ? x - w : x - w / 2;
+    out.push(`<rect x="${n(left - 1)}" y="${n(y - fs * 0.85)}" width="${n(w + 2)}" height="${n(fs * 1.1)}" fill="#FFFFFF" fill-opacity="0.85"/>`);
+    text(x, y, words, anchor, '#000000', true);
   };
   for (const w of plan.windows) {
     seg(P(w.a), P(w.b), `stroke="#FFFFFF" stroke-width="${o.compact ? 2.4 : 3.2}"`);
@@ -179,9 +215,12 @@ export function planSvg(plan: RoomPlan, result: PlanResult | undefined, o: PlanS
     const here = o.entranceId === d.id;
     seg(P(d.a), P(d.b), `stroke="#FFFFFF" stroke-width="${o.compact ? 2.4 : 3.2}"`);
     seg(P(d.a), P(d.b), `stroke="${here ? '#000000' : PLAN_INK.door}" stroke-width="${here ? 3 : o.compact ? 1.6 : 2.2}" stroke-dasharray="${here ? '0' : '1.5 1.5'}"`);
-    if (o.compact && !here) continue;
-    const label = here ? (o.compact ? 'THIS DOOR' : `${d.label}: this door`) : `${d.label}${d.interlocked ? ' (interlocked)' : ''}`;
-    inwardLabel(P(d.a), P(d.b), label, here ? '#000000' : flagged.has(d.id) ? '#B3261E' : PLAN_INK.door, here || flagged.has(d.id));
+    if (here) {
+      youAreHere(P(d.a), P(d.b));
+      continue;
+    }
+    if (o.compact) continue;
+    inwardLabel(P(d.a), P(d.b), `${d.label}${d.interlocked ? ' (interlocked)' : ''}`, flagged.has(d.id) ? '#B3261E' : PLAN_INK.door, flagged.has(d.id));
   }
   for (const b of plan.barriers) {
     seg(P(b.a), P(b.b), `stroke="${PLAN_INK.barrier}" stroke-width="1.6" stroke-dasharray="3 2"`);
@@ -196,14 +235,10 @@ export function planSvg(plan: RoomPlan, result: PlanResult | undefined, o: PlanS
   }
   // beam paths
   for (const path of plan.paths) {
-    const chain: Pt[] = [P(path.exit), ...path.elements.map((e) => P(e.at))];
+    const chain: Pt[] = pathPoints(path).map(P);
     for (let i = 0; i + 1 < chain.length; i++) seg(chain[i] as Pt, chain[i + 1] as Pt, `stroke="${PLAN_INK.path}" stroke-width="1"`);
-    if (path.onward_deg !== undefined) {
-      const last = chain[chain.length - 1] as Pt;
-      const r = (path.onward_deg * Math.PI) / 180;
-      const far = 4 * Math.max(x1 - x0, y1 - y0);
-      seg(last, [last[0] + far * Math.cos(r), last[1] + far * Math.sin(r)], `stroke="${PLAN_INK.path}" stroke-width="1" stroke-dasharray="3 2"`);
-    }
+    const arrow = onwardEnd(path, 4 * Math.max(x1 - x0, y1 - y0));
+    if (arrow) seg(P(arrow.from), P(arrow.to), `stroke="${PLAN_INK.path}" stroke-width="1" stroke-dasharray="3 2"`);
     const [ex, ey] = P(path.exit);
     out.push(`<rect x="${n(X(ex) - 3)}" y="${n(Y(ey) - 2.5)}" width="4" height="5" fill="#222222"/>`);
     for (const e of path.elements) {

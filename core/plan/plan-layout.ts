@@ -1,0 +1,43 @@
+/**
+ * Layout helpers shared by the drawings of the room plan (the editor on screen and the plan in the
+ * printed documents), in ordinary numbers: they place labels and arrows, never a zone. Zones and
+ * findings come from evaluatePlan only.
+ */
+import type { PlanBeamPath, PlanPoint } from './plan-model.js';
+
+export interface Middle {
+  readonly x: number;
+  readonly y: number;
+}
+
+/** The middle of the outline's bounding box: labels are put on the side toward it, so they stay in view. */
+export function planMiddle(outline: readonly PlanPoint[]): Middle {
+  const xs = outline.map((q) => q.x_m);
+  const ys = outline.map((q) => q.y_m);
+  return { x: (Math.min(...xs) + Math.max(...xs)) / 2, y: (Math.min(...ys) + Math.max(...ys)) / 2 };
+}
+
+/**
+ * Where the label of a door, window or wall piece a–b goes: beside its middle, on the side toward
+ * the middle of the room. `vertical`: the piece runs more north–south than east–west, so the label
+ * goes east or west of it (`toward` +1 east, −1 west); otherwise north or south (`toward` +1 north).
+ */
+export function labelSide(a: PlanPoint, b: PlanPoint, middle: Middle): { at: PlanPoint; vertical: boolean; toward: 1 | -1 } {
+  const at = { x_m: (a.x_m + b.x_m) / 2, y_m: (a.y_m + b.y_m) / 2 };
+  const vertical = Math.abs(a.x_m - b.x_m) < Math.abs(a.y_m - b.y_m);
+  const toward = vertical ? (at.x_m > middle.x ? -1 : 1) : at.y_m > middle.y ? -1 : 1;
+  return { at, vertical, toward };
+}
+
+/** The drawn points of a beam path: the exit, then each mirror, dump or target. */
+export function pathPoints(path: PlanBeamPath): PlanPoint[] {
+  return [path.exit, ...path.elements.map((e) => e.at)];
+}
+
+/** The far end of the arrow of an open path, `length` metres from its last point; null when the path ends. */
+export function onwardEnd(path: PlanBeamPath, length: number): { from: PlanPoint; to: PlanPoint } | null {
+  if (path.onward_deg === undefined) return null;
+  const from = path.elements.length ? (path.elements[path.elements.length - 1]?.at ?? path.exit) : path.exit;
+  const r = (path.onward_deg * Math.PI) / 180;
+  return { from, to: { x_m: from.x_m + length * Math.cos(r), y_m: from.y_m + length * Math.sin(r) } };
+}

@@ -1,0 +1,57 @@
+/**
+ * The room plan at a glance in the results panel: the lines the officer reads, counted from the
+ * core's findings on a plan placed by hand (derived geometry, stated with each case).
+ * Beam A (invented): 5 mW CW at 633 nm, 1 mm, 1 mrad (1/e): NOHD 14.9 m (ICNIRP 2013 Table 5,
+ * visible 0.25 s, derived in test/core/plan/plan-zones.test.ts); diffuse reflectance 0.1 gives a
+ * diffuse radius of a few millimetres, so only the direct beam reaches the doors here.
+ */
+import { describe, expect, it } from 'vitest';
+import { evaluateRoom, type BeamInput, type RoomPlan } from '../../core/index.js';
+import { planSummary } from '../../renderer/lib/plan-summary.js';
+
+const beamA: BeamInput = { id: 'a', label: 'beam A', wavelength_nm: 633, emission: { kind: 'cw', power_W: 0.005 }, beam: { diameter_m: 0.001, divergence_rad: 0.001, definition: '1/e' }, viewing: { diffuse: { reflectance: 0.1 } } };
+const p = (x_m: number, y_m: number) => ({ x_m, y_m });
+// 8 m × 5 m; door D1 on the east wall at y 1–2 m, door D2 on the north wall at x 1–2 m; desk P1 at (4, 3).
+const base: RoomPlan = {
+  outline: [p(0, 0), p(8, 0), p(8, 5), p(0, 5)],
+  doors: [{ id: 'D1', label: 'D1 corridor', a: p(8, 1), b: p(8, 2) }, { id: 'D2', label: 'D2 store', a: p(1, 5), b: p(2, 5), interlocked: true }],
+  windows: [],
+  walls: [],
+  barriers: [],
+  workPositions: [{ id: 'P1', label: 'desk', at: p(4, 3) }],
+  enclosures: [],
+  paths: [],
+  reflectionPoints: [],
+};
+
+function lines(plan: RoomPlan): string[] {
+  const r = evaluateRoom({ lasers: [{ id: 'L1', name: 'Laser 1', beams: [beamA] }, { id: 'L2', name: 'Laser 2', beams: [{ ...beamA, id: 'b', label: 'beam B' }] }], plan });
+  return planSummary(plan, r.plan!, new Map(r.beams.map((b) => [b.beamId, b.label]))).map((l) => `${l.tone}: ${l.text}`);
+}
+
+describe('room plan at a glance (derived geometry)', () => {
+  it('an open beam along y = 1.5 m leaves through door D1 7 m from the exit (< 14.9 m); the desk 1.5 m off the line is clear', () => {
+    expect(lines({ ...base, paths: [{ laserId: 'L1', exit: p(1, 1.5), elements: [], onward_deg: 0 }] })).toEqual([
+      'hazard: Entrances inside a hazard zone: 1 of 2 doors (D1 corridor).',
+      'ok: No work position lies inside a hazard zone (1 position drawn).',
+      'hazard: Beam paths leaving the room above the limit: beam A (through door D1 corridor).',
+      'check: No laser controlled area has been accepted yet.',
+      'check: 1 laser is not placed on the plan.',
+    ]);
+  });
+
+  it('a curtain at x = 6 m stops it: no entrance in a zone, the curtain to check, the room accepted as the controlled area', () => {
+    const plan: RoomPlan = {
+      ...base,
+      barriers: [{ id: 'C1', label: 'C1', kind: 'curtain', rating: 'maker rating 100 W/m² for 60 s', a: p(6, 0), b: p(6, 3) }],
+      paths: [{ laserId: 'L1', exit: p(1, 1.5), elements: [], onward_deg: 0 }, { laserId: 'L2', exit: p(1, 4), elements: [{ kind: 'dump', at: p(3, 4) }] }],
+      controlledArea: { outline: base.outline, acceptedBy: 'I. Calloway-Senn' },
+    };
+    expect(lines(plan)).toEqual([
+      'ok: No entrance lies inside a hazard zone (2 doors drawn).',
+      'ok: No work position lies inside a hazard zone (1 position drawn).',
+      'check: Beam paths ending on a curtain or barrier (check its rating): beam A on curtain C1.',
+      'ok: Every hazard zone stays inside the accepted laser controlled area.',
+    ]);
+  });
+});
