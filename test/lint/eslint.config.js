@@ -4,6 +4,7 @@
 // no Node built-ins, Electron, SQLite, Svelte or pdfmake under core/ (DEVELOPERS.md; the same rule
 // is checked again by test/core/core-purity.test.ts). Svelte components are linted with
 // eslint-plugin-svelte's recommended rules.
+import { fileURLToPath } from 'node:url';
 import globals from 'globals';
 import tseslint from 'typescript-eslint';
 import svelte from 'eslint-plugin-svelte';
@@ -39,6 +40,18 @@ export default tseslint.config(
       'no-restricted-globals': 'off',
       eqeqeq: ['error', 'always'],
       'prefer-const': 'error',
+    },
+  },
+  {
+    // The record store is asynchronous (one SQL port, SQLite or PostgreSQL): a store call that is not
+    // awaited would let a refused save or sign pass unseen, so every promise must be awaited or handled.
+    // (The fence probe is a virtual file linted by test/electron/renderer-fence.test.ts.)
+    files: ['electron/**/*.ts', 'renderer/**/*.ts', 'test/**/*.ts'],
+    languageOptions: { parserOptions: { projectService: { allowDefaultProject: ['renderer/lib/fence-probe.ts'] }, tsconfigRootDir: fileURLToPath(new URL('../..', import.meta.url)) } },
+    rules: {
+      '@typescript-eslint/no-floating-promises': 'error',
+      '@typescript-eslint/await-thenable': 'error',
+      '@typescript-eslint/no-misused-promises': ['error', { checksVoidReturn: false }],
     },
   },
   {
