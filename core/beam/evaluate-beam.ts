@@ -20,6 +20,7 @@ import { validateBeamInput } from './validate-beam.js';
 import { withLargeSkinArea } from './skin-large-area.js';
 import { distanceReported, fmt, maxOf, rec } from './format.js';
 import { computeBounds } from './bounds.js';
+import { summaryByMargin } from './governing-by-margin.js';
 import { distanceOver } from '../hazard/distance.js';
 import { aidedGain, aidedSpec, directSpec, lensSpec, multimodeFiberSpec, singlemodeFiberSpec, skinSpec, specularSpec } from '../hazard/geometries.js';
 import { diffuseDistance } from '../hazard/diffuse.js';
@@ -251,6 +252,10 @@ function evaluateValid(input: BeamInput, ruleSet: RuleSetId, settings: LimitSett
   const position = v.closestApproach_m ?? 0;
   const od = requiredOd(eye, m, lambda, position, v.lens !== undefined);
   trace.children.push(od.requirement.trace);
+  // The summaries name the row with the lowest margin, which over its own aperture is not always the lowest limit.
+  const eyeSummary = summaryByMargin(eye, od, input.emission);
+  const skinSummary = summaryByMargin(skin, requiredOd(skin, m, lambda, position, v.lens !== undefined), input.emission);
+  for (const g of [eyeSummary, skinSummary]) if (g.step) addStep(trace, g.step);
   const conservative = settings?.conservative !== false;
   const scaleNumbers = en207Requirements({ wavelength_nm: lambda, model: m, position_m: position, emission: input.emission, needed: od.od.gt(0), conservative });
   const rb = en208Requirement({ wavelength_nm: lambda, model: m, position_m: position, emission: input.emission });
@@ -306,8 +311,8 @@ function evaluateValid(input: BeamInput, ruleSet: RuleSetId, settings: LimitSett
     ruleSetName: RULE_SET_NAME[ruleSet],
     wavelength_nm: lambda,
     emissionSummary: emissionSummary(input),
-    mpe: eye.summary,
-    skinMpe: skin.summary,
+    mpe: eyeSummary.summary,
+    skinMpe: skinSummary.summary,
     nohd_m: direct.result.distance_m,
     nohd_m_reported: direct.result.distance_m_reported,
     odRequired: od.requirement.odRequired_reported,

@@ -25,6 +25,8 @@ export interface OdOutcome {
   /** Largest exposure/limit ratio (10^od). */
   readonly ratio: Dec;
   readonly governing: Criterion;
+  /** exposure/limit ratio of every criterion, in the order of the criteria. */
+  readonly ratios: readonly Dec[];
 }
 
 export function requiredOd(tl: LimitCriteria, m: BeamModel, wavelength_nm: number, closestApproach_m: number, lensPresent: boolean): OdOutcome {
@@ -40,6 +42,7 @@ export function requiredOd(tl: LimitCriteria, m: BeamModel, wavelength_nm: numbe
   addStep(trace, { kind: 'assumption', label: 'Position', detail: r0.isZero() ? 'at the exit aperture (worst case; no closest approach given)' : `closest approach ${fmt(r0)} m from the exit`, value: fmt(r0), unit: 'm' });
   const unit = tl.quantity === 'E' ? 'W/m²' : 'J/m²';
   let best: { X: Dec; c: Criterion; ratio: Dec } | null = null;
+  const ratios: Dec[] = [];
   for (const c of tl.criteria) {
     let X = exposureAt(tl.S, spreadOf(m), c.aperture_m, r0);
     let how = `4*S/(pi*max(d,D_f)^2) at ${fmt(r0)} m`;
@@ -52,6 +55,7 @@ export function requiredOd(tl: LimitCriteria, m: BeamModel, wavelength_nm: numbe
       }
     }
     const ratio = X.div(c.L);
+    ratios.push(ratio);
     addStep(trace, { kind: 'formula', label: c.rule, detail: `${c.label}: exposure ${how} = ${fmt(X)} ${unit}; / limit ${fmt(c.L)} ${unit}`, value: fmt(ratio) });
     if (!best || ratio.gt(best.ratio)) best = { X, c, ratio };
   }
@@ -79,5 +83,6 @@ export function requiredOd(tl: LimitCriteria, m: BeamModel, wavelength_nm: numbe
     od,
     ratio: best.ratio,
     governing: best.c,
+    ratios,
   };
 }

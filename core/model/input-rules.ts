@@ -130,17 +130,31 @@ export function inRange(rule: NumberRule, x: number): boolean {
 
 /** The range in words and the rule's unit, e.g. "more than 0 W", "from 180 nm to 1000000 nm". */
 export function rangeWords(rule: NumberRule): string {
+  if (rule.unit === 'rad') return angleRangeWords(rule);
   const u = rule.unit ? ` ${rule.unit}` : '';
   if (rule.max !== undefined) {
-    return rule.minInclusive ? `from ${rule.min}${u} to ${numberWords(rule.max)}${u}` : `more than ${rule.min}${u}, at most ${numberWords(rule.max)}${u}`;
+    return rule.minInclusive ? `from ${rule.min}${u} to ${rule.max}${u}` : `more than ${rule.min}${u}, at most ${rule.max}${u}`;
   }
   return rule.minInclusive ? `${rule.min} or more${u}` : `more than ${rule.min}${u}`;
 }
 
-function numberWords(x: number): string {
-  if (Math.abs(x - Math.PI) < 1e-12) return 'π';
-  if (Math.abs(x - Math.PI / 2) < 1e-12) return 'π/2';
-  return String(x);
+/**
+ * An angle as an officer writes a range bound: whole degrees for the half and full turn bounds
+ * ("180°", "90°"), small angles in mrad as they are typed ("0 mrad"); never "π rad".
+ */
+export function angleBoundWords(rad: number, small: 'mrad' | 'deg'): string {
+  const deg = (rad * 180) / Math.PI;
+  if (small === 'deg' || Math.abs(deg - Math.round(deg)) < 1e-9 && deg >= 1) return `${Number(deg.toPrecision(6))}°`;
+  return `${Number((rad * 1000).toPrecision(6))} mrad`;
+}
+
+/** An angle rule's range: the viewing angle (up to 90°) in degrees, beam angles from mrad to 180°. */
+export function angleRangeWords(rule: NumberRule): string {
+  const small = rule.max !== undefined && rule.max <= Math.PI / 2 + 1e-12 ? 'deg' : 'mrad';
+  const lo = angleBoundWords(rule.min, small);
+  if (rule.max === undefined) return rule.minInclusive ? `${lo} or more` : `more than ${lo}`;
+  const hi = angleBoundWords(rule.max, small);
+  return rule.minInclusive ? `from ${lo} to ${hi}` : `more than ${lo}, at most ${hi}`;
 }
 
 /** The question asked beside a value that is allowed but unusual, or null. */

@@ -60,7 +60,7 @@ export function whereInRoom(field: string): WhereInRoom {
   return { rest: field };
 }
 
-/** "Divergence (full angle) must be more than 0 rad, at most π rad (got 0)". */
+/** "Divergence (full angle) must be more than 0 mrad, at most 180° (got 0)". */
 export function officerWords(e: InputError): string {
   const label = labelOf(whereInRoom(e.field));
   const got = typeof e.value === 'number' || typeof e.value === 'string' ? ` (got ${typeof e.value === 'string' ? `"${e.value}"` : e.value})` : '';

@@ -62,6 +62,7 @@ export const SOURCE_CITATIONS: Readonly<Record<string, string>> = {
   'EU-FR Tableau 2.6; EU-CONS Table 2.6': `${DIR}, Table 2.6 (repetitive pulses)`,
   'EU-FR Tableau 2.6; EU-CONS': `${DIR}, Table 2.6 (repetitive pulses)`,
   'limit specification 5.6: gap in the Directive, 315-400 nm value used': `${DIR}: no value given for this case; the 315–400 nm value is used`,
+  'EU Directive 2006/25/EC Annex II Table 2.2 notes a and b': `${DIR}, Table 2.2, notes a and b (each limit over its own limiting aperture; the more restrictive governs)`,
   'limit specification convention 2 and 3; EU Table 2.2 note a': `${DIR}, Table 2.2, note a (where two limits apply, the lower governs)`,
   // ICNIRP 2013 / IEC 60825-1:2014 / ANSI Z136.1-2014 (harmonised limits).
   'ICNIRP2013; IEC2014 (C7); ANSI2014 Tab. 6 (from memory)': `${ICNIRP}; IEC 60825-1:2014, correction factor C7; ${ANSI_FACTORS}`,

@@ -5,12 +5,13 @@
  * database, so the app's reminder knows about it.
  */
 import { backupDatabaseFile, defaultBackupFolder, defaultDatabasePath } from '../backend/records/index.js';
-import { BackupArgsSchema, parseWith } from './safekeeping-args.js';
+import { BackupArgsSchema } from './safekeeping-args.js';
+import { parseCommandArgs } from './command-args.js';
 
 const USAGE = 'usage: npm run backup -- [--db <database file>] [--out <folder>]';
 
 async function main(): Promise<void> {
-  const args = parseWith(BackupArgsSchema, process.argv.slice(2), USAGE);
+  const args = parseCommandArgs(BackupArgsSchema, process.argv.slice(2), USAGE);
   const db = args.db ?? defaultDatabasePath();
   const report = await backupDatabaseFile({ db, out: args.out ?? defaultBackupFolder(db) });
   process.stdout.write(`Backed up ${db}\n      to ${report.path} (${(report.bytes / 1e6).toFixed(1)} MB; integrity checked)\n`);

@@ -13,6 +13,8 @@ import { tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
 import { z } from 'zod';
 import { openRecordStore, type RecordStore } from '../backend/records/index.js';
+import { DEMO_PASSPHRASE } from '../backend/records/demo.js';
+import { parseCommandArgs } from './command-args.js';
 import {
   DOCUMENT_FILE_NAME,
   documentInputFromAssessment,
@@ -42,27 +44,9 @@ const ArgsSchema = z
 
 export type ReportArgs = z.infer<typeof ArgsSchema>;
 
-/** "--paper Letter --demo" -> { paper: 'Letter', demo: true }; flags without a value are booleans. */
+/** "--paper Letter --demo" -> { paper: 'Letter', demo: true } (electron/cli/command-args.ts). */
 export function parseArgs(argv: readonly string[]): ReportArgs {
-  const raw: Record<string, string | boolean> = {};
-  for (let i = 0; i < argv.length; i++) {
-    const a = argv[i] as string;
-    if (!a.startsWith('--')) throw new Error(`unexpected argument '${a}'\n${USAGE}`);
-    const [flag, inline] = a.slice(2).split('=', 2) as [string, string | undefined];
-    const next = argv[i + 1];
-    if (inline !== undefined) raw[flag] = inline;
-    else if (next !== undefined && !next.startsWith('--')) {
-      raw[flag] = next;
-      i++;
-    } else raw[flag] = true;
-  }
-  const parsed = ArgsSchema.safeParse(raw);
-  if (!parsed.success) {
-    const first = parsed.error.issues[0];
-    const field = first?.path.join('.') ?? '';
-    throw new Error(`${field ? `--${field}: ` : ''}${first?.message ?? 'invalid arguments'}\n${USAGE}`);
-  }
-  return parsed.data;
+  return parseCommandArgs(ArgsSchema, argv, USAGE, ['demo']);
 }
 
 const KINDS: readonly DocumentKind[] = ['report', 'door-notice', 'eyewear-sheet'];
@@ -92,9 +76,9 @@ export async function writeDemoDocuments(outDir: string, opts: RenderOptions): P
     const site = await store.seedDemo();
     const officer = (await store.listPeople()).find((p) => p.role === 'Laser safety officer');
     const files: string[] = [];
-    // The temporary installation's first key (its trust anchor), for the invented demo officer only.
-    const passphrase = 'demo passphrase, invented site';
-    if (officer) await store.createPersonKey({ personId: officer.id, passphrase, passphraseAgain: passphrase });
+    // The temporary database is fresh: the demo seed gave the demo officer the installation's first
+    // key (its trust anchor), sealed with the published demo passphrase.
+    const passphrase = DEMO_PASSPHRASE;
     for (const room of await store.listRooms(site.id)) {
       for (const a of await store.listAssessments(room.id)) {
         if (a.status === 'draft' && officer) {

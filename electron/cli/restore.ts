@@ -5,12 +5,13 @@
  * the backups found beside the database.
  */
 import { defaultBackupFolder, defaultDatabasePath, listBackups, restoreBackup } from '../backend/records/index.js';
-import { parseWith, RestoreArgsSchema } from './safekeeping-args.js';
+import { RestoreArgsSchema } from './safekeeping-args.js';
+import { parseCommandArgs } from './command-args.js';
 
 const USAGE = 'usage: npm run restore -- --from <backup file> [--db <database file>]';
 
 async function main(): Promise<void> {
-  const args = parseWith(RestoreArgsSchema, process.argv.slice(2), USAGE);
+  const args = parseCommandArgs(RestoreArgsSchema, process.argv.slice(2), USAGE);
   const db = args.db ?? defaultDatabasePath();
   if (args.from === undefined) {
     const found = listBackups(defaultBackupFolder(db));

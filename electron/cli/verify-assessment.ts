@@ -45,11 +45,13 @@ async function check(store: RecordStore, assessmentId: Id, title: string): Promi
     return { assessmentId, title, outcome: 'failed', line: `FAILED  ${assessmentId}  ${title}: revision ${bad.revisionNo}: ${finding}`, reports };
   }
   const who = newest?.signer ? `, signed by ${newest.signer.name} on ${newest.signer.signedAt.slice(0, 10)}, key ${newest.signer.keyFingerprint}` : '';
+  const co = (newest?.coSignatures ?? []).map((c) => `${c.name} on ${c.signedAt.slice(0, 10)}, key ${c.keyFingerprint}`);
+  const coText = co.length ? `; co-signed by ${co.join('; ')}` : '';
   return {
     assessmentId,
     title,
     outcome: 'ok',
-    line: `ok      ${assessmentId}  ${title}: revision ${newest?.revisionNo ?? ''}${who}${reports.length > 1 ? ` (${reports.length} signed revisions checked)` : ''}`,
+    line: `ok      ${assessmentId}  ${title}: revision ${newest?.revisionNo ?? ''}${who}${coText}${reports.length > 1 ? ` (${reports.length} signed revisions checked)` : ''}`,
     reports,
   };
 }

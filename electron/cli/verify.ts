@@ -16,6 +16,7 @@ import { Worker } from 'node:worker_threads';
 import { z } from 'zod';
 import { openRecordStore } from '../backend/records/index.js';
 import { verifyOneAssessment, type AssessmentVerdict } from './verify-assessment.js';
+import { parseCommandArgs } from './command-args.js';
 
 const USAGE = 'Usage: npm run verify -- --db <file> [--assessment <id> | --all] [--json] [--key-dir <folder>] [--workers <n>]';
 
@@ -32,24 +33,7 @@ const ArgsSchema = z
 export type VerifyArgs = z.infer<typeof ArgsSchema>;
 
 export function parseVerifyArgs(argv: readonly string[]): VerifyArgs {
-  const raw: Record<string, string | boolean> = {};
-  for (let i = 0; i < argv.length; i++) {
-    const a = argv[i] as string;
-    if (!a.startsWith('--')) throw new Error(`unexpected argument '${a}'\n${USAGE}`);
-    const [flag, inline] = a.slice(2).split('=', 2) as [string, string | undefined];
-    const next = argv[i + 1];
-    if (inline !== undefined) raw[flag] = inline;
-    else if (next !== undefined && !next.startsWith('--') && flag !== 'all' && flag !== 'json') {
-      raw[flag] = next;
-      i++;
-    } else raw[flag] = true;
-  }
-  const parsed = ArgsSchema.safeParse(raw);
-  if (!parsed.success) {
-    const first = parsed.error.issues[0];
-    throw new Error(`${first?.path.length ? `--${String(first.path[0])}: ` : ''}${first?.message ?? 'invalid arguments'}\n${USAGE}`);
-  }
-  return parsed.data;
+  return parseCommandArgs(ArgsSchema, argv, USAGE, ['all', 'json']);
 }
 
 function progress(done: number, total: number): void {

@@ -1,6 +1,6 @@
 /** Command-line options of `npm run serve`, validated like any other outside input. */
 import { z } from 'zod';
-import { describeIssues, issuesOf } from '../api/dispatch.js';
+import { parseCommandArgs } from '../cli/command-args.js';
 
 export interface HostOptions {
   /** 0 = let the system pick a free port. */
@@ -20,24 +20,6 @@ const Schema = z.strictObject({
 export const HOST_USAGE = 'usage: npm run serve -- [--port <0-65535>] [--db <file>] [--demo]';
 
 export function parseHostArgs(argv: readonly string[]): HostOptions {
-  const raw: Record<string, string | boolean> = {};
-  for (let i = 0; i < argv.length; i++) {
-    const a = argv[i] ?? '';
-    const eq = /^--([a-z]+)=(.*)$/.exec(a);
-    if (eq?.[1] !== undefined) {
-      raw[eq[1]] = eq[2] ?? '';
-    } else if (a === '--demo') {
-      raw['demo'] = true;
-    } else if (a === '--port' || a === '--db') {
-      const v = argv[i + 1];
-      if (v === undefined) throw new Error(`${a} needs a value. ${HOST_USAGE}`);
-      raw[a.slice(2)] = v;
-      i++;
-    } else {
-      throw new Error(`unknown option ${JSON.stringify(a)}. ${HOST_USAGE}`);
-    }
-  }
-  const parsed = Schema.safeParse(raw);
-  if (!parsed.success) throw new Error(`${describeIssues(issuesOf(parsed.error))}. ${HOST_USAGE}`);
-  return { port: parsed.data.port, db: parsed.data.db, demo: parsed.data.demo };
+  const parsed = parseCommandArgs(Schema, argv, HOST_USAGE, ['demo']);
+  return { port: parsed.port, db: parsed.db, demo: parsed.demo };
 }

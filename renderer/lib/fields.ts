@@ -5,6 +5,7 @@
  * not change) and shows the error beside the field.
  */
 import {
+  angleRangeWords,
   DIMENSION_WORDS,
   INPUT_RULES,
   InputError,
@@ -67,10 +68,11 @@ export function fieldLabel(spec: FieldSpec): string {
 
 function rangeText(spec: FieldSpec): string {
   const rule = spec.rule;
+  // angles: the half or full turn bound in degrees, small angles as typed (officer words, never "π rad")
+  if (rule.unit === 'rad') return angleRangeWords(rule);
   const per = spec.storedPerSI ?? 1;
   const f = (v: number): string => formatField(spec, v / per);
-  const pi = (v: number): boolean => Math.abs(v - Math.PI) < 1e-12 || Math.abs(v - Math.PI / 2) < 1e-12;
-  if (rule.max !== undefined && !pi(rule.max)) {
+  if (rule.max !== undefined) {
     return rule.minInclusive ? `${f(rule.min)} to ${f(rule.max)}` : `more than ${f(rule.min)}, at most ${f(rule.max)}`;
   }
   return rule.minInclusive ? `at least ${f(rule.min)}` : `more than ${f(rule.min)}`;

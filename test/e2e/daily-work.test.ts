@@ -36,6 +36,10 @@ afterAll(async () => {
 });
 
 describe("an officer's daily work on the Register", () => {
+  it('the demo on a fresh database: the demo officer\'s key is the trust anchor shown in the side bar', async () => {
+    await expect.poll(() => page.getByTestId('nav-anchor').textContent()).toMatch(/Trust anchor: [0-9a-f]{4}(?: [0-9a-f]{4}){4}/);
+  });
+
   it('the signed room reads "signed rev 1 in force"', async () => {
     await expect(page.getByRole('button', { name: /^B2\.14/ }).textContent()).resolves.toMatch(/signed rev 1 in force \(\d{4}-\d{2}-\d{2}\)/);
   });

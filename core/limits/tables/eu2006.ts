@@ -1264,7 +1264,13 @@ export const EU2006_TABLE: RuleSetTable = {
       "effectClass": "retina-thermal",
       "source": "EU-2.3-MEM",
       "confidence": "from memory",
-      "when": "alpha > 1.5 and t <= T2"
+      "when": "alpha > 1.5 and t <= T2",
+      "max_E": {
+        "value": "1000",
+        "source": "EU 2006/25/EC Annex II Table 2.3 note: not to exceed 1000 W/m^2 (from memory)",
+        "confidence": "from memory"
+      },
+      "note": "For 700-1400 nm Table 2.3 adds 'not to exceed 1000 W/m^2' (memory); the limit as mean irradiance H/t is capped from 10 s to T2 as well as after T2."
     },
     {
       "id": "EU-E-NIR1-6x",
@@ -1401,7 +1407,13 @@ export const EU2006_TABLE: RuleSetTable = {
       "effectClass": "retina-thermal",
       "source": "EU-2.3-MEM",
       "confidence": "from memory",
-      "when": "alpha > 1.5 and t <= T2"
+      "when": "alpha > 1.5 and t <= T2",
+      "max_E": {
+        "value": "1000",
+        "source": "EU 2006/25/EC Annex II Table 2.3 note: not to exceed 1000 W/m^2 (from memory)",
+        "confidence": "from memory"
+      },
+      "note": "For 700-1400 nm Table 2.3 adds 'not to exceed 1000 W/m^2' (memory); the limit as mean irradiance H/t is capped from 10 s to T2 as well as after T2."
     },
     {
       "id": "EU-E-NIR2-6x",

@@ -650,7 +650,13 @@ export const ICNIRP2013_TABLE: RuleSetTable = {
       "effectClass": "retina-thermal",
       "source": "ICNIRP2013; IEC2014 Annex A; ANSI2014 Tab. 5a (all from memory); same as EU Tab. 2.3 (from memory)",
       "confidence": "from memory",
-      "when": "alpha > 1.5 and t <= T2"
+      "when": "alpha > 1.5 and t <= T2",
+      "max_E": {
+        "value": "1000",
+        "source": "EU 2006/25/EC Annex II Table 2.3 note: not to exceed 1000 W/m^2 (from memory), applied while unverified",
+        "confidence": "from memory, uncertain",
+        "conservativeOnly": true
+      }
     },
     {
       "id": "H-E-NIR1-6x",
@@ -789,7 +795,13 @@ export const ICNIRP2013_TABLE: RuleSetTable = {
       "effectClass": "retina-thermal",
       "source": "ICNIRP2013; IEC2014 Annex A; ANSI2014 Tab. 5a (all from memory); same as EU Tab. 2.3 (from memory)",
       "confidence": "from memory",
-      "when": "alpha > 1.5 and t <= T2"
+      "when": "alpha > 1.5 and t <= T2",
+      "max_E": {
+        "value": "1000",
+        "source": "EU 2006/25/EC Annex II Table 2.3 note: not to exceed 1000 W/m^2 (from memory), applied while unverified",
+        "confidence": "from memory, uncertain",
+        "conservativeOnly": true
+      }
     },
     {
       "id": "H-E-NIR2-6x",

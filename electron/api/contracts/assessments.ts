@@ -4,6 +4,7 @@ import type {
   Assessment,
   AssessmentContent,
   AssessmentSummary,
+  CoSignature,
   FieldDifference,
   Id,
   Revision,
@@ -32,4 +33,7 @@ export type AssessmentHandlers = {
   /** `reviewed`: the revision and save counter shown in the confirm step; a draft that moved on is refused (code 'stale'). */
   'assessment-sign': (args: { readonly id: Id; readonly signOff: SignOff; readonly reviewed: SaveBase }) => Promise<Assessment>;
   'assessment-verify': (args: { readonly assessmentId: Id; readonly revisionId?: Id }) => Promise<VerifyReport>;
+  /** A second person countersigns a signed revision with their own key (schema 7). */
+  'revision-countersign': (args: { readonly revisionId: Id; readonly personId: Id; readonly passphrase: string; readonly statement: string }) => Promise<CoSignature>;
+  'revision-co-signatures': (args: { readonly revisionId: Id }) => Promise<CoSignature[]>;
 };

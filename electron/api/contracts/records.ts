@@ -14,6 +14,8 @@ import type { RoomResult } from '../../../core/model/results.js';
 // Declared beside the store code that makes them (type-only: nothing of the back end runs here).
 export type { WorkSave, WorkSaved } from '../../backend/records/save-work.js';
 export type { BackupFile, BackupReport, BackupStatus } from '../../backend/records/safekeeping.js';
+import type { CoSignatureCheck } from '../../backend/records/co-signature-checks.js';
+export type { CoSignature, CoSignatureCheck } from '../../backend/records/co-signature-checks.js';
 
 export type Id = string;
 /** ISO 8601 timestamp in UTC, e.g. 2026-05-01T09:30:00.000Z. */
@@ -278,7 +280,7 @@ export interface TrustListInfo {
 
 /** One check of a verification, in words an officer can read. */
 export interface VerifyCheck {
-  readonly check: 'signature' | 'key-trusted' | 'fingerprint' | 'results' | 'chain' | 'protections';
+  readonly check: 'signature' | 'key-trusted' | 'fingerprint' | 'results' | 'chain' | 'protections' | 'co-signature';
   readonly ok: boolean;
   readonly finding: string;
 }
@@ -397,6 +399,8 @@ export interface VerifyReport {
   readonly differences: readonly FieldDifference[];
   /** Plain sentences: what failed and what it means. */
   readonly findings: readonly string[];
+  /** Each co-signature of the revision (schema 7) with its own checks; empty when none. */
+  readonly coSignatures: readonly CoSignatureCheck[];
 }
 
 // ---------------------------------------------------------------- export / import

@@ -5,6 +5,7 @@ import type { ApiContext } from '../context.js';
 import type { AreaTable } from '../operation.js';
 import { ByIdSchema } from '../schemas/common.js';
 import { SaveBaseSchema, WorkSaveSchema } from '../../backend/records/save-work.js';
+import { CountersignSchema } from '../../backend/records/co-signatures.js';
 
 const RoomRef = z.strictObject({ roomId: IdSchema });
 
@@ -39,5 +40,13 @@ export const assessmentTable: AreaTable<AssessmentHandlers, ApiContext> = {
   'assessment-verify': {
     input: z.strictObject({ assessmentId: IdSchema, revisionId: IdSchema.optional() }),
     run: (a, { store }) => store.verify(a.assessmentId, a.revisionId),
+  },
+  'revision-countersign': {
+    input: CountersignSchema,
+    run: (a, { store }) => store.countersign(a),
+  },
+  'revision-co-signatures': {
+    input: z.strictObject({ revisionId: IdSchema }),
+    run: (a, { store }) => store.listCoSignatures(a.revisionId),
   },
 };

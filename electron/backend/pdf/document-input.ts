@@ -26,6 +26,8 @@ export type SignatureInfo = Pick<Signature, 'name' | 'role' | 'signedAt' | 'stat
   readonly keyTrusted: boolean;
   /** Short fingerprint of the trust list's anchor key, printed so a replaced trust list shows on paper. */
   readonly trustAnchor: string | null;
+  /** Co-signatures of the revision (schema 7), oldest first; an untrusted one prints as UNVERIFIED CO-SIGNATURE. */
+  readonly coSigners?: ReadonlyArray<{ readonly name: string; readonly role: string; readonly signedAt: string; readonly statement: string; readonly keyFingerprint: string; readonly keyTrusted: boolean }>;
 };
 
 export interface DocumentInput {

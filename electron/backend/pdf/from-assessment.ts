@@ -33,6 +33,7 @@ export async function documentInputFromAssessment(store: RecordStore, assessment
   const officer = await officerFor(store, revision);
   const trustAnchor = revision.signature ? (await store.trustList()).anchorFingerprint : null;
   const sig = revision.signature;
+  const coSigners = sig ? await store.listCoSignatures(revision.id) : [];
   return {
     site: { name: site.name, building: site.building, address: site.address },
     room: { code: room.code, name: room.name, responsiblePerson: room.responsiblePerson, contact: room.contact },
@@ -70,6 +71,7 @@ export async function documentInputFromAssessment(store: RecordStore, assessment
             keyId: sig.keyId,
             keyTrusted: sig.keyTrusted !== false,
             trustAnchor,
+            coSigners: coSigners.map((c) => ({ name: c.name, role: c.role, signedAt: c.signedAt, statement: c.statement, keyFingerprint: c.keyFingerprint, keyTrusted: c.keyTrusted })),
           },
   };
 }

@@ -136,6 +136,9 @@ export function fingerprintStack(doc: DocumentInput, qrSize: number, fontSize: n
       { text: `rev. ${doc.assessment.revisionNo}, signed ${calendarDate(doc.signature.signedAt)}`, fontSize: fontSize - 1.5, color: COLOR.muted },
       { text: `trust anchor ${doc.signature.trustAnchor ?? 'none'}`, fontSize: fontSize - 1.5, color: COLOR.muted },
       ...(doc.signature.keyTrusted ? [] : [{ text: 'UNVERIFIED SIGNATURE', bold: true, color: COLOR.draft, fontSize } as Content]),
+      ...(doc.signature.coSigners ?? []).map(
+        (c): Content => (c.keyTrusted ? { text: `co-signed by ${c.name}`, fontSize: fontSize - 1.5, color: COLOR.muted } : { text: `UNVERIFIED CO-SIGNATURE (${c.name})`, bold: true, color: COLOR.draft, fontSize: fontSize - 1.5 }),
+      ),
       ...(doc.assessment.status === 'superseded' ? [{ text: 'SUPERSEDED: replace this notice', bold: true, color: COLOR.draft, fontSize } as Content] : []),
     ],
   };

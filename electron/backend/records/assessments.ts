@@ -23,6 +23,7 @@ import { fingerprintOf, keyIdOf, linkOf, sha256Hex, verifyStatement, type Signed
 import { signAsPerson, type Signer } from './personal-keys.js';
 import { readTrustList, shortKeyFingerprint, trustOf } from './trust-list.js';
 import { appendSigningLog, signingLogFor } from './signing-log.js';
+import { checkCoSignatures } from './co-signature-checks.js';
 import {
   NON_BEAM_HAZARD_KINDS,
   RecordError,
@@ -878,6 +879,12 @@ export async function verifyAssessment(ctx: StoreContext, assessmentId: Id, revi
     checks.push({ check: 'key-trusted', ok: keyTrusted, finding: trustText });
     if (r.status === 'draft') findings.push('A signature exists but the revision is marked as a draft: the status was changed outside Beamwarden.');
   }
+  // 3b. Co-signatures (schema 7): each with its own signature, trust and cover of the main signature.
+  const coSignatures = await checkCoSignatures(ctx, a, r, sig ? { link: linkOf(statementFor(a, r, sig)), fingerprint: sig.fingerprint } : null);
+  for (const c of coSignatures) {
+    checks.push({ check: 'co-signature', ok: c.ok, finding: c.finding });
+    if (!c.ok) findings.push(c.finding);
+  }
 
   // 4. The revision chain and 5. the database's own protections.
   const chain = await chainFindings(ctx, a);
@@ -893,7 +900,7 @@ export async function verifyAssessment(ctx: StoreContext, assessmentId: Id, revi
   checks.push({ check: 'protections', ok: protectionsOk, finding: protText });
 
   const signed = sig !== undefined && r.status !== 'draft';
-  const ok = signed && fingerprintMatches && signatureValid && keyTrusted && resultsMatchCore && chainIntact && protectionsOk;
+  const ok = signed && fingerprintMatches && signatureValid && keyTrusted && resultsMatchCore && chainIntact && protectionsOk && coSignatures.every((c) => c.ok);
   if (ok) findings.push(`Revision ${r.revision_no} is intact: signature valid, key trusted, fingerprint matches, results recompute, chain whole.`);
   return {
     ok,
@@ -914,6 +921,7 @@ export async function verifyAssessment(ctx: StoreContext, assessmentId: Id, revi
     verifiedWith: ctx.calculatedWith,
     differences,
     findings,
+    coSignatures,
   };
 }
 

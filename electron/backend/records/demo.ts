@@ -2,14 +2,21 @@
  * The invented demo site (assets/demo/demo-scenario.json; every name, room and device is invented)
  * loaded into the register on request, with one assessment per room so the screens and printed
  * documents have something to show. The first room's assessment is signed by the demo officer.
+ *
+ * On a fresh database (no trust list, nobody registered) the demo officer gets a real personal key,
+ * sealed with DEMO_PASSPHRASE (published in the README), which becomes that demo installation's
+ * trust anchor, and signs through the app's own sign-off: the demo verifies as trusted. Where a
+ * trust list already exists the demo never admits a key whose passphrase is public: its record is
+ * signed with a throwaway key and shows as an unverified signature.
  */
 import { z } from 'zod';
 import demoScenario from '../../../assets/demo/demo-scenario.json' with { type: 'json' };
 import { EyewearSpecSchema, RoomInputSchema } from '../schemas/inputs.js';
 import { parseOrThrow, transact, type StoreContext } from './context.js';
 import { generateKeyPairSync } from 'node:crypto';
-import { createAssessment, newAssessmentContent, signDraftWith } from './assessments.js';
-import { signerFromKey } from './personal-keys.js';
+import { createAssessment, newAssessmentContent, signAssessment, signDraftWith } from './assessments.js';
+import { createPersonalKey, signerFromKey } from './personal-keys.js';
+import { readTrustList } from './trust-list.js';
 import { createEyewear, createInstallation, createPerson, createRoom, createSite, listSites } from './register.js';
 import type { AssessmentContent, ControlChoice, Site } from './types.js';
 import type { RoomPlan } from '../../../core/plan/plan-model.js';
@@ -38,11 +45,19 @@ const DEMO_CONTROLS: readonly ControlChoice[] = [
   { category: 'engineering', measure: 'Remote viewing by camera', decision: 'rejected', reason: 'Experiments need direct access to the optics; enclosures and eyewear used instead.' },
 ];
 
+/** The invented demo officer's passphrase (published in the README): only ever on a database made for the demo. */
+export const DEMO_PASSPHRASE = 'demo passphrase, invented site';
+const DEMO_STATEMENT = 'I have evaluated the laser hazards of this area with the inputs and assumptions recorded here and approve the controls listed.';
+
 export async function seedDemo(ctx: StoreContext, raw: unknown = demoScenario): Promise<Site> {
   const scenario = parseOrThrow(DemoScenarioSchema, raw, 'Demo scenario');
-  const existing = (await listSites(ctx)).find((s) => s.name === scenario.site.name && s.building === scenario.site.building);
+  const sites = await listSites(ctx);
+  const existing = sites.find((s) => s.name === scenario.site.name && s.building === scenario.site.building);
   if (existing) return existing;
-  return await transact(ctx, async (ctx) => {
+  // A database made for the demo: no trust list and nobody registered yet.
+  const fresh = readTrustList(ctx.keyDir).list === null && sites.length === 0 && (await ctx.q.get('SELECT 1 AS one FROM person LIMIT 1')) === undefined;
+  let toSign: { assessmentId: string; personId: string } | null = null;
+  const seeded = await transact(ctx, async (ctx) => {
     const site = await createSite(ctx, { name: scenario.site.name, building: scenario.site.building, notes: withEmergencyContact(`${scenario.site.kind}. ${scenario.about}`, scenario.site.emergencyContact ?? '') });
     const officer = await createPerson(ctx, {
       name: scenario.officer.name,
@@ -72,20 +87,23 @@ export async function seedDemo(ctx: StoreContext, raw: unknown = demoScenario): 
         reviewBy: '2027-06-30',
       };
       const assessment = await createAssessment(ctx, { roomId: room.id, content });
-      if (index === 0) {
-        // A throwaway key on no trust list: the invented record shows as an unverified signature,
-        // and the demo never becomes (or needs) a key this installation trusts.
-        await signDraftWith(
-          ctx,
-          assessment.id,
-          'I have evaluated the laser hazards of this area with the inputs and assumptions recorded here and approve the controls listed.',
-          signerFromKey(ctx, officer, generateKeyPairSync('ed25519').privateKey),
-        );
+      if (index === 0 && fresh) toSign = { assessmentId: assessment.id, personId: officer.id };
+      else if (index === 0) {
+        // An installation with its own trust list: a throwaway key on no trust list, so the invented
+        // record shows as an unverified signature and no key with a public passphrase is admitted.
+        await signDraftWith(ctx, assessment.id, DEMO_STATEMENT, signerFromKey(ctx, officer, generateKeyPairSync('ed25519').privateKey));
       }
     }
     await ctx.audit('seeded-demo', 'site', site.id, scenario.site.name);
     return site;
   });
+  const demo = toSign as { assessmentId: string; personId: string } | null;
+  if (demo) {
+    // The demo installation's first key (its trust anchor), then the app's own sign-off path.
+    await createPersonalKey(ctx, { personId: demo.personId, passphrase: DEMO_PASSPHRASE, passphraseAgain: DEMO_PASSPHRASE });
+    await signAssessment(ctx, demo.assessmentId, { personId: demo.personId, passphrase: DEMO_PASSPHRASE, statement: DEMO_STATEMENT });
+  }
+  return seeded;
 }
 
 /** The demo plan names lasers by their scenario ids; the register gives each installation its own id. */

@@ -73,10 +73,33 @@ export function readInstallationKey(keyDir: string): SigningKey | null {
 
 /** Key id: SHA-256 (hex) of the raw 32-byte Ed25519 public key. */
 export function keyIdOf(publicKeyPem: string): string {
-  const key = createPublicKey(publicKeyPem);
-  const der = key.export({ type: 'spki', format: 'der' });
-  // SPKI for Ed25519 is a 12-byte header followed by the 32-byte key (RFC 8410).
-  return sha256Hex(der.subarray(der.length - 32));
+  let id = keyIds.get(publicKeyPem);
+  if (id === undefined) {
+    const der = publicKeyObject(publicKeyPem).export({ type: 'spki', format: 'der' });
+    // SPKI for Ed25519 is a 12-byte header followed by the 32-byte key (RFC 8410).
+    id = sha256Hex(der.subarray(der.length - 32));
+    remember(keyIds, publicKeyPem, id);
+  }
+  return id;
+}
+
+// A verification run meets the same few keys thousands of times: each public key text is parsed
+// (and its id computed) once per process, not once per record (npm run bench, verify). The text is
+// the key, so a different key never finds another's entry; bounded so a hostile file cannot grow it.
+const KEY_CACHE_MAX = 256;
+const keyObjects = new Map<string, KeyObject>();
+const keyIds = new Map<string, string>();
+function remember<V>(m: Map<string, V>, k: string, v: V): void {
+  if (m.size >= KEY_CACHE_MAX) m.clear();
+  m.set(k, v);
+}
+function publicKeyObject(pem: string): KeyObject {
+  let k = keyObjects.get(pem);
+  if (k === undefined) {
+    k = createPublicKey(pem);
+    remember(keyObjects, pem, k);
+  }
+  return k;
 }
 
 export interface SigningKey {
@@ -128,7 +151,7 @@ export function signStatement(key: SigningKey, statement: SignedStatement): stri
 
 export function verifyStatement(publicKeyPem: string, statement: SignedStatement, signatureB64: string): boolean {
   try {
-    return verify(null, Buffer.from(canonicalJson(statement), 'utf8'), createPublicKey(publicKeyPem), Buffer.from(signatureB64, 'base64'));
+    return verify(null, Buffer.from(canonicalJson(statement), 'utf8'), publicKeyObject(publicKeyPem), Buffer.from(signatureB64, 'base64'));
   } catch {
     return false;
   }

@@ -13,6 +13,7 @@ import { makeContext, type StoreContext } from './context.js';
 import { CALCULATED_WITH, evaluateRoom, type Evaluate } from './core-link.js';
 import { importLaserCsv } from './csv.js';
 import { seedDemo } from './demo.js';
+import { countersign, listCoSignatures } from './co-signatures.js';
 import type { RecordEngine } from './engine.js';
 import * as X from './exchange.js';
 import * as K from './personal-keys.js';
@@ -98,6 +99,8 @@ function storeOver(ctx: StoreContext, engine: RecordEngine, info: StoreInfo): Re
     backupInto: (folder) => engine.backupInto(folder ?? backupFolder),
     backupStatus: () => engine.backupStatus(backupFolder),
     seedDemo: () => seedDemo(ctx),
+    countersign: (args) => countersign(ctx, args),
+    listCoSignatures: (revisionId) => listCoSignatures(ctx, revisionId),
   };
 }
 

@@ -4,6 +4,7 @@
  * re-exported here so the back end keeps one import.
  * Nothing here imports Electron: the store runs under plain Node and in the Electron main process.
  */
+import type { CoSignature } from './co-signature-checks.js';
 import type {
   Assessment,
   AssessmentContent,
@@ -178,6 +179,10 @@ export interface RecordStore {
   backupStatus(): Promise<BackupStatus>;
   /** Loads the invented demo site (no-op if it is already there); returns its site. */
   seedDemo(): Promise<Site>;
+  /** A second person countersigns a signed revision with their own key (passphrase checked here). */
+  countersign(args: { revisionId: Id; personId: Id; passphrase: string; statement: string }): Promise<CoSignature>;
+  /** The co-signatures of a revision, oldest first. */
+  listCoSignatures(revisionId: Id): Promise<CoSignature[]>;
 }
 
 /** Error with a machine-readable code and the path/field concerned (for IPC answers). */

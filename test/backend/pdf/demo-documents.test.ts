@@ -11,7 +11,7 @@
  * published sources). The rounding rules checked are the project's conservative policy (SAFETY.md:
  * limits down, distances and optical densities up, 3 significant figures; OD to 0.1).
  */
-import { PASSPHRASE } from '../records/helpers.js';
+import { DEMO_PASSPHRASE as PASSPHRASE } from '../../../electron/backend/records/demo.js';
 import { mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
@@ -75,8 +75,8 @@ beforeAll(async () => {
   const site = await store.seedDemo();
   const officer = (await store.listPeople()).find((p) => p.role === 'Laser safety officer');
   if (!officer) throw new Error('demo officer missing');
-  // The temporary installation's first key (its trust anchor) for the invented demo officer.
-  await store.createPersonKey({ personId: officer.id, passphrase: PASSPHRASE, passphraseAgain: PASSPHRASE });
+  // The demo seed gave the invented demo officer the temporary installation's first key (its trust
+  // anchor), sealed with the published demo passphrase, and signed B2.14 with it.
   const rooms = await store.listRooms(site.id);
   const a007 = rooms.find((r) => r.code === 'A0.07');
   const draftId = a007 ? (await store.listAssessments(a007.id))[0]?.id : undefined;
@@ -120,10 +120,10 @@ describe('required fields (issue: Printed output; domain reference 5.1 and 6.2)'
     const sig = d.signature;
     if (!sig) throw new Error('expected signed');
     const first = [r.text.report[0] ?? ''];
-    // The demo seeds B2.14 signed with a throwaway key on no trust list: paper must call it unverified.
-    // The others were signed here with the officer's key, the temporary installation's trust anchor.
-    const status = sig.keyTrusted ? `Signed, revision ${d.assessment.revisionNo}` : `UNVERIFIED SIGNATURE, revision ${d.assessment.revisionNo}`;
-    expect(sig.keyTrusted).toBe(code !== 'B2.14');
+    // Every room is signed with the demo officer's key, the temporary installation's trust anchor
+    // (B2.14 by the demo seed itself, the others here).
+    const status = `Signed, revision ${d.assessment.revisionNo}`;
+    expect(sig.keyTrusted).toBe(true);
     expect(has(r.text.report, `trust anchor ${sig.trustAnchor ?? '?'}`), 'trust anchor in the footer').toBe(true);
     for (const field of [d.site.name, d.room.code, d.room.name, d.room.responsiblePerson, d.officer.name, status, ...(sig.keyTrusted ? [sig.signedAt.slice(0, 10)] : []), d.content.reviewBy ?? 'not set']) {
       expect(has(first, field), `page 1 lacks '${field}'`).toBe(true);

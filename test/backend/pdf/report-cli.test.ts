@@ -32,7 +32,7 @@ describe('arguments', () => {
     [['--demo', '--out', 'x', '--paper', 'A3'], /--paper/],
     [['--demo', '--out', 'x', '--units', 'imperial'], /--units/],
     [['--demo', '--out', 'x', '--colour', 'red'], /colour/],
-    [['demo'], /unexpected argument 'demo'/],
+    [['demo'], /unexpected argument "demo"/],
   ];
   it.each(bad)('%j is refused naming the problem (%s)', (argv, message) => {
     expect(() => parseArgs(argv)).toThrow(message);

@@ -14,6 +14,7 @@ import type { ApiContext } from '../../../electron/api/context.js';
 import { openRecordStore, type RecordStore } from '../../../electron/backend/records/index.js';
 import { pageTexts } from './pdf-tools.js';
 import { makeSigner } from '../records/helpers.js';
+import { DEMO_PASSPHRASE } from '../../../electron/backend/records/demo.js';
 
 let dir = '';
 let store: RecordStore;
@@ -45,7 +46,10 @@ describe('a signed revision reprints exactly as signed after a new draft exists'
     const id = room ? (await store.listAssessments(room.id))[0]?.id : undefined;
     if (!id) throw new Error('demo assessment C1.03 missing');
     // The signer holds their own key (personal keys, sealed with their passphrase).
-    const signer = await makeSigner(store, 'Dr. Reprint Tester');
+    // The demo seed made the demo officer this installation's anchor; the officer endorses the new key.
+    const officer = (await store.listPeople()).find((p) => p.role === 'Laser safety officer');
+    if (!officer) throw new Error('demo officer missing');
+    const signer = await makeSigner(store, 'Dr. Reprint Tester', { person: officer, passphrase: DEMO_PASSPHRASE });
     if ((await store.getAssessment(id)).current.status === 'draft') await store.signAssessment(id, signer.signOff('Approved (reprint test).'));
     const signed = (await store.getAssessment(id)).current;
     expect(signed.status).toBe('signed');

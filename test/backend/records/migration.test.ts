@@ -83,7 +83,10 @@ describe('migrating the version-1 fixture', () => {
       { version: 3, name: 'personal_keys_and_chain' },
       { version: 4, name: 'revision_version' },
       { version: 5, name: 'eyewear_upkeep' },
+      { version: 7, name: 'co_signatures' },
     ]);
+    // a version-1 signed record has no co-signatures (schema 7 adds the empty table)
+    expect(raw.prepare('SELECT count(*) AS n FROM co_signature').get()).toEqual({ n: 0 });
     // eyewear of the version-1 fixture: upkeep columns added, nothing recorded yet
     const ew = raw.prepare('SELECT condition, inspected_on, next_inspection FROM eyewear').all() as Array<Record<string, unknown>>;
     for (const e of ew) expect(e).toEqual({ condition: 'not recorded', inspected_on: null, next_inspection: null });

@@ -45,7 +45,7 @@ describe('register and core agree on lasers', () => {
     ['an empty laser name', laser({ name: '' }), false, /Laser name must not be empty/, 'issue 11: accepted by the register, refused by the calculation'],
     ['a name of spaces only', laser({ name: '   ' }), false, /Laser name must not be empty/, 'derived: trimmed like every required text of the register'],
     ['a 100 000-character name', laser({ name: 'N'.repeat(100_000) }), false, /at most 200 characters/, "the register's text limit (schemas/records.ts)"],
-    ['a divergence of 0', laser({}, { divergence_rad: 0 }), false, /more than 0 rad/, 'derived: 0 makes every hazard distance infinite'],
+    ['a divergence of 0', laser({}, { divergence_rad: 0 }), false, /more than 0 mrad, at most 180°/, 'derived: 0 makes every hazard distance infinite; angle range in officer words (issue 14)'],
     ['an exit diameter of 0 (point-like source)', laser({}, { diameter_m: 0 }), true, null, 'lipg-ch1-nohd-1W-1mrad: exit diameter 0'],
   ];
   it.each(CASES)('%s', async (_n, l, accepted, problem) => {

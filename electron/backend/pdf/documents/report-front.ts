@@ -24,8 +24,9 @@ export function statusText(doc: DocumentInput): Content {
   if (!doc.signature.keyTrusted) {
     return { text: `UNVERIFIED SIGNATURE, revision ${doc.assessment.revisionNo}, in the name of ${doc.signature.name}: the key is not on this installation's trust list${superseded}`, bold: true, color: COLOR.bad };
   }
+  const co = (doc.signature.coSigners ?? []).map((c) => (c.keyTrusted ? `${c.name} (${fmt.calendarDate(c.signedAt)})` : `${c.name} (UNVERIFIED CO-SIGNATURE)`));
   return {
-    text: `Signed, revision ${doc.assessment.revisionNo}, on ${fmt.calendarDate(doc.signature.signedAt)} by ${doc.signature.name}${superseded}`,
+    text: `Signed, revision ${doc.assessment.revisionNo}, on ${fmt.calendarDate(doc.signature.signedAt)} by ${doc.signature.name}${co.length ? `; co-signed by ${co.join(', ')}` : ''}${superseded}`,
     bold: true,
     color: superseded === '' ? COLOR.good : COLOR.bad,
   };

@@ -90,6 +90,21 @@ export function nonBeamSection(doc: DocumentInput): Content[] {
   return [heading('Non-beam hazards'), gridTable(['Hazard', 'Present', 'What and where', 'Controls'], rows, [120, 50, 150, '*'], 8)];
 }
 
+/** A co-signature's rows in the sign-off table (schema 7): who, when, what they confirm, their key. */
+function coSignerRows(c: NonNullable<NonNullable<DocumentInput['signature']>['coSigners']>[number]) {
+  return [
+    ['Co-signed by', { text: `${c.name}, ${c.role}`, bold: true }],
+    ['Co-signed on', fmt.calendarDate(c.signedAt)],
+    ['Co-signer confirms', { text: c.statement, italics: true }],
+    [
+      'Co-signer key',
+      c.keyTrusted
+        ? { text: c.keyFingerprint, fontSize: 8.5 }
+        : { text: `${c.keyFingerprint} — UNVERIFIED CO-SIGNATURE: this key is not on this installation's trust list.`, bold: true, color: COLOR.draft, fontSize: 8.5 },
+    ],
+  ] as const;
+}
+
 export function signOffSection(doc: DocumentInput): Content[] {
   const s = doc.signature;
   if (s === null) {
@@ -139,6 +154,7 @@ export function signOffSection(doc: DocumentInput): Content[] {
           ...(s.keyTrusted
             ? []
             : ([['Status', { text: "UNVERIFIED SIGNATURE: the signing key is not on this installation's trust list. Do not rely on this as a signed assessment.", bold: true, color: COLOR.draft }]] as const)),
+          ...(s.coSigners ?? []).flatMap((c) => coSignerRows(c)),
         ]),
         {
           margin: [0, 8, 0, 0],

@@ -1,0 +1,30 @@
+/**
+ * Schema version 7: co-signatures. A second person (a lab head, a deputy officer) may countersign a
+ * signed revision with their own personal key: the countersignature covers the revision's record
+ * fingerprint and the link (hash) of the main signed statement, so it stands or falls with that
+ * signature. Append-only like the signatures: never changed, never deleted.
+ */
+export const name = 'co_signatures';
+
+export const sql = `
+CREATE TABLE co_signature (
+  revision_id   TEXT NOT NULL REFERENCES revision(id),
+  person_id     TEXT NOT NULL REFERENCES person(id),
+  name          TEXT NOT NULL,
+  role          TEXT NOT NULL,
+  signed_at     TEXT NOT NULL,
+  statement     TEXT NOT NULL,
+  signed_link   TEXT NOT NULL,
+  fingerprint   TEXT NOT NULL,
+  key_id        TEXT NOT NULL,
+  trust_anchor  TEXT NOT NULL,
+  signature     TEXT NOT NULL,
+  PRIMARY KEY (revision_id, person_id)
+);
+
+CREATE TRIGGER co_signature_no_update BEFORE UPDATE ON co_signature
+BEGIN SELECT RAISE(ABORT, 'beamwarden: a co-signature cannot be changed'); END;
+
+CREATE TRIGGER co_signature_no_delete BEFORE DELETE ON co_signature
+BEGIN SELECT RAISE(ABORT, 'beamwarden: a co-signature cannot be deleted'); END;
+`;
