@@ -10,18 +10,11 @@ import type { RecordStore } from '../../electron/backend/records/index.js';
 import AboutPanel from '../../renderer/components/AboutPanel.svelte';
 import { openTemp, tempDir } from '../backend/records/helpers.js';
 import { installStoreBridge } from './store-bridge.js';
+import { until } from './waiting.js';
 
 let t: ReturnType<typeof tempDir>;
 let store: RecordStore;
 
-const tick = (ms = 0): Promise<void> => new Promise((r) => setTimeout(r, ms));
-async function until(check: () => boolean, ms = 5000): Promise<void> {
-  const end = Date.now() + ms;
-  while (!check()) {
-    if (Date.now() > end) throw new Error('timed out');
-    await tick(20);
-  }
-}
 
 beforeAll(async () => {
   t = tempDir();

@@ -11,6 +11,7 @@ import type { RecordStore } from '../../electron/backend/records/index.js';
 import CoSignatures from '../../renderer/components/review/CoSignatures.svelte';
 import { makeSigner, openTemp, registerRoom, STATEMENT, tempDir } from '../backend/records/helpers.js';
 import { installStoreBridge } from './store-bridge.js';
+import { until } from './waiting.js';
 
 let t: ReturnType<typeof tempDir>;
 let store: RecordStore;
@@ -18,14 +19,6 @@ let revisionId = '';
 let officer: Awaited<ReturnType<typeof makeSigner>>;
 let head: Awaited<ReturnType<typeof makeSigner>>;
 
-const tick = (ms = 0): Promise<void> => new Promise((r) => setTimeout(r, ms));
-async function until(check: () => boolean, ms = 10000): Promise<void> {
-  const end = Date.now() + ms;
-  while (!check()) {
-    if (Date.now() > end) throw new Error('timed out');
-    await tick(20);
-  }
-}
 
 beforeAll(async () => {
   t = tempDir();
@@ -46,7 +39,7 @@ afterAll(async () => {
 describe('countersigning on the Review screen', () => {
   it('offers only other people with a trusted key, countersigns and lists the co-signature', async () => {
     render(CoSignatures, { props: { revisionId, mainSignerId: officer.person.id, people: await store.listPeople(), keys: await store.listPersonKeys() } });
-    await until(() => screen.queryByTestId('no-co-signatures') !== null);
+    await until(() => screen.queryByTestId('no-co-signatures') !== null, 10000);
     const select = screen.getByLabelText('Co-signer') as HTMLSelectElement;
     const offered = [...select.options].map((o) => o.textContent ?? '');
     expect(offered.some((o) => o.includes('Brightwater-Hale'))).toBe(true);
@@ -54,7 +47,7 @@ describe('countersigning on the Review screen', () => {
     await fireEvent.change(select, { target: { value: head.person.id } });
     await fireEvent.input(screen.getByLabelText("Passphrase of the co-signer's key"), { target: { value: head.passphrase } });
     await fireEvent.click(screen.getByRole('button', { name: 'Countersign' }));
-    await until(() => screen.queryByTestId('co-signatures') !== null);
+    await until(() => screen.queryByTestId('co-signatures') !== null, 10000);
     const item = within(screen.getByTestId('co-signatures')).getByText('Prof. Oona Brightwater-Hale');
     expect(item.closest('li')?.textContent).toMatch(/Laser safety officer/);
     expect((await store.verify((await store.getRevision(revisionId)).assessmentId)).coSignatures.map((c) => c.ok)).toEqual([true]);

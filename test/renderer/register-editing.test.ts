@@ -17,20 +17,13 @@ import RoomDetail from '../../renderer/components/register/RoomDetail.svelte';
 import PeoplePanel from '../../renderer/components/register/PeoplePanel.svelte';
 import { session } from '../../renderer/lib/session.svelte.js';
 import { makeSigner, openTemp, registerRoom, STATEMENT, tempDir } from '../backend/records/helpers.js';
+import { tick, until } from './waiting.js';
 
 let t: ReturnType<typeof tempDir>;
 let store: RecordStore;
 let roomId = '';
 let assessmentId = '';
 
-const tick = (ms = 0): Promise<void> => new Promise((r) => setTimeout(r, ms));
-async function until(check: () => boolean | Promise<boolean>, ms = 5000): Promise<void> {
-  const end = Date.now() + ms;
-  while (!(await check())) {
-    if (Date.now() > end) throw new Error('timed out');
-    await tick(20);
-  }
-}
 
 beforeAll(async () => {
   t = tempDir();

@@ -11,6 +11,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { fireEvent, render, screen, within } from '@testing-library/svelte';
 import { join } from 'node:path';
 import { installStoreBridge } from './store-bridge.js';
+import { until } from './waiting.js';
 import type { RecordStore } from '../../electron/backend/records/index.js';
 import RegisterScreen from '../../renderer/screens/RegisterScreen.svelte';
 import ReviewScreen from '../../renderer/screens/ReviewScreen.svelte';
@@ -22,14 +23,6 @@ let mine: RecordStore;
 let other: RecordStore;
 let roomId = '';
 
-const tick = (ms = 0): Promise<void> => new Promise((r) => setTimeout(r, ms));
-async function until(check: () => boolean | Promise<boolean>, ms = 5000): Promise<void> {
-  const end = Date.now() + ms;
-  while (!(await check())) {
-    if (Date.now() > end) throw new Error('timed out');
-    await tick(20);
-  }
-}
 
 beforeAll(async () => {
   t = tempDir();

@@ -9,6 +9,7 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { fireEvent, render, within } from '@testing-library/svelte';
 import { installStoreBridge } from './store-bridge.js';
+import { until } from './waiting.js';
 import RevisionCompare from '../../renderer/components/review/RevisionCompare.svelte';
 import type { AssessmentContent, RecordStore } from '../../electron/backend/records/index.js';
 import { makeSigner, openTemp, registerRoom, STATEMENT, tempDir } from '../backend/records/helpers.js';
@@ -18,14 +19,6 @@ let store: RecordStore;
 let roomId = '';
 let assessmentId = '';
 
-const tick = (ms = 0): Promise<void> => new Promise((r) => setTimeout(r, ms));
-async function until(check: () => boolean | Promise<boolean>, ms = 5000): Promise<void> {
-  const end = Date.now() + ms;
-  while (!(await check())) {
-    if (Date.now() > end) throw new Error('timed out');
-    await tick(20);
-  }
-}
 
 /** The first beam with another power and a skin area. */
 function edited(c: AssessmentContent, power_W: number, skinArea_m2?: number): AssessmentContent {
