@@ -106,3 +106,69 @@ describe('EN 208 just above a table row (EN 208:2009 Table B.1 via a supplier ex
     expect(scale(beam(633, { kind: 'cw', power_W: P }), 'RB')?.scale).toBe(rb);
   });
 });
+
+// EN 208 alignment eyewear (EN 208:2009 section 1 and Table B.1 via a supplier explainer: RB1 read,
+// RB2-RB4 by the decade pattern, RB5 from memory): RB n up to 0.01*10^(n-1) W (CW, pulses > 2e-4 s)
+// and 2e-6*10^(n-1) J (1 ns - 2e-4 s), visible 400-700 nm only, the beam through a 7 mm aperture.
+// All beams here are narrower than 7 mm, so the whole power or energy counts.
+const rbOf = (x: BeamInput) => evaluateBeam(x).scaleNumbers.find((s) => s.mode === 'RB');
+const green = (emission: Emission, extra: Partial<BeamInput> = {}): BeamInput => ({ ...beam(532, emission), ...extra });
+
+describe('EN 208 scope: visible beams, 400 to 700 nm inclusive (EN 208:2009 section 1)', () => {
+  it.each([
+    [399, false],
+    [400, true],
+    [700, true],
+    [701, false],
+  ] as const)('%s nm, 0.05 W CW: RB requirement %s', (lambda, has) => {
+    const rb = rbOf(beam(lambda, { kind: 'cw', power_W: 0.05 }));
+    expect(rb !== undefined).toBe(has);
+    if (rb) expect([rb.scale, rb.applies, rb.densityUnit]).toEqual([2, true, 'W']);
+  });
+  it('532 nm, pulses of 0.5 ns: outside EN 208 (it covers pulses from 1 ns), no RB applies', () => {
+    const rb = rbOf(green({ kind: 'pulsed', pulseEnergy_J: 1e-6, pulseDuration_s: 5e-10 }));
+    expect([rb?.scale, rb?.applies]).toEqual([0, false]);
+    expect(rb?.note).toMatch(/EN 208 covers pulses from 1 ns; shorter pulses need EN 207 eyewear/);
+  });
+});
+
+// [case, input, RB, unit, note must match, note must not match]
+const RB_CASES: ReadonlyArray<readonly [string, BeamInput, number, string, RegExp, RegExp | null]> = [
+  ['532 nm, 5 mW CW: RB1, a row read in the explainer', green({ kind: 'cw', power_W: 0.005 }), 1, 'W', /; RB1 row: read \(EN 208:2009 Table B\.1/, /above RB5/],
+  ['532 nm, 100 W CW: RB5 exactly, a row from memory', green({ kind: 'cw', power_W: 100 }), 5, 'W', /; RB5 row: from memory$/, /above RB5/],
+  ['532 nm, 200 W CW: beyond RB5 (table would need RB6)', green({ kind: 'cw', power_W: 200 }), 6, 'W', /above RB5: no EN 208 alignment filter can bring this beam to Class 2 levels, use EN 207 eyewear/, null],
+  [
+    '532 nm, 10 mJ pulses of 1 ms at 10 Hz: the pulse power Q/t = 10 W, not the 0.1 W mean, sets RB4',
+    green({ kind: 'pulsed', pulseEnergy_J: 0.01, pulseDuration_s: 1e-3, repetitionRate_Hz: 10 }), 4, 'W', /larger of the peak and the mean power/, /above RB5/,
+  ],
+  [
+    '532 nm, 1 uJ, 10 ns at 100 Hz: the pulse criterion (1e-6 J x 1000^(1/4) = 5.6e-6 J, RB2) governs, the mean 0.1 mW is also checked',
+    green({ kind: 'pulsed', pulseEnergy_J: 1e-6, pulseDuration_s: 1e-8, repetitionRate_Hz: 100 }), 2, 'J',
+    /^pulse energy through a 7 mm aperture times N\^\(1\/4\) \(N = 1000 pulses in 10 s\).*\[governs; also checked: mean power of the train/, null,
+  ],
+  [
+    '532 nm, 0.1 uJ, 10 ns at 1 MHz: the pulse criterion 1e-7 J x 1e7^(1/4) = 5.6e-6 J and the mean 0.1 W both give RB2; on a tie the pulse criterion is named',
+    green({ kind: 'pulsed', pulseEnergy_J: 1e-7, pulseDuration_s: 1e-8, repetitionRate_Hz: 1e6 }), 2, 'J',
+    /^pulse energy through a 7 mm aperture.*\[governs; also checked: mean power of the train/, null,
+  ],
+  [
+    '532 nm, 0.1 uJ, 10 ns at 10 MHz: the mean 1 W (RB3) governs over the pulse criterion 1e-7 J x 1e8^(1/4) = 1e-5 J (RB2)',
+    green({ kind: 'pulsed', pulseEnergy_J: 1e-7, pulseDuration_s: 1e-8, repetitionRate_Hz: 1e7 }), 3, 'W',
+    /^mean power of the train through a 7 mm aperture, checked as for CW.*\[governs; also checked: pulse energy through a 7 mm aperture/, null,
+  ],
+  [
+    '633 nm, 0.9 mW CW viewed for 100 s (above the limit, so eyewear is needed): at or below the Class 2 level of 1 mW, no alignment filter (RB0)',
+    { ...beam(633, { kind: 'cw', power_W: 9e-4 }), exposureDuration_s: 100 }, 0, 'W', /at or below the Class 2 level, no alignment filter needed/, null,
+  ],
+];
+
+describe('EN 208 scale numbers through evaluateBeam', () => {
+  it.each(RB_CASES)('%s', (_name, x, scaleRb, unit, note, notNote) => {
+    const r = evaluateBeam(x);
+    const rb = r.scaleNumbers.find((s) => s.mode === 'RB');
+    expect([rb?.scale, rb?.applies, rb?.densityUnit]).toEqual([scaleRb, true, unit]);
+    expect(rb?.note).toMatch(note);
+    if (notNote) expect(rb?.note).not.toMatch(notNote);
+    if (scaleRb === 0) expect(Number(r.odRequired)).toBeGreaterThan(0);
+  });
+});
