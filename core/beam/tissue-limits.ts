@@ -8,7 +8,7 @@ import { Dec } from '../numeric/decimal.js';
 import type { Emission, LimitSettings, RuleSetId, Tissue } from '../model/inputs.js';
 import type { LimitSummary, PulseRule } from '../model/results.js';
 import type { ExposureLimitResult } from '../limits/exposure-limit.js';
-import type { PulsedLimitResult } from '../limits/pulse-rules.js';
+import { governingPulseRule, type PulsedLimitResult } from '../limits/pulse-rules.js';
 import { DURATION_RANGE_S } from '../limits/rule-sets.js';
 import { addStep, newTrace, type Trace } from '../trace/trace.js';
 import { cachedExposureLimit, cachedPulsedLimit } from './limit-cache.js';
@@ -168,12 +168,11 @@ function computeTissueLimits(q: TissueQuery): TissueLimits {
   trace.children.push(pl.trace);
   const criteria: Criterion[] = [];
   criteria.push(...candidateCriteria(pl.singlePulse.limit, 'single-pulse', (H) => H.mul(k), 'rule 1 single pulse'));
-  let rule1 = new Dec(pl.singlePulse.H_Jm2).mul(k);
+  let group: Dec | null = null;
   if (pl.grouping) {
     const g = pl.grouping;
-    const L = new Dec(g.perPulse_H_Jm2);
-    criteria.push({ rule: 'single-pulse', L, aperture_m: new Dec(g.limit.aperture.diameter_m), rowId: g.limit.governing.rowId, effect: g.limit.governing.effect, label: `rule 1, pulse group: ${g.why}` });
-    if (L.lt(rule1)) rule1 = L;
+    group = new Dec(g.perPulse_H_Jm2);
+    criteria.push({ rule: 'single-pulse', L: group, aperture_m: new Dec(g.limit.aperture.diameter_m), rowId: g.limit.governing.rowId, effect: g.limit.governing.effect, label: `rule 1, pulse group: ${g.why}` });
   }
   let rule2: Dec | null = null;
   if (pl.averagePower) {
@@ -195,19 +194,9 @@ function computeTissueLimits(q: TissueQuery): TissueLimits {
   }
   for (const c of criteria) addStep(trace, { kind: 'row', label: 'Criterion', detail: c.label, value: fmt(c.L), unit: 'J/m² per pulse' });
 
-  let governingRule: PulseRule = 'single-pulse';
-  let H = rule1;
-  let govLimit = pl.singlePulse.limit;
-  if (rule2 && rule2.lt(H) && pl.averagePower) {
-    governingRule = 'average-power';
-    H = rule2;
-    govLimit = pl.averagePower.limit;
-  }
-  if (rule3 && rule3.lt(H)) {
-    governingRule = 'pulse-train';
-    H = rule3;
-    govLimit = pl.singlePulse.limit;
-  }
+  // The same choice as the pulse rules make, on the values scaled for pulses shorter than the tables.
+  const { rule1, governing: governingRule, perPulse: H } = governingPulseRule({ singlePulse: new Dec(pl.singlePulse.H_Jm2).mul(k), group, averagePower: rule2, pulseTrain: rule3 });
+  const govLimit = governingRule === 'average-power' && pl.averagePower ? pl.averagePower.limit : pl.singlePulse.limit;
   const f = e.repetitionRate_Hz !== undefined ? new Dec(e.repetitionRate_Hz) : null;
   const E = f ? H.mul(f) : H.div(tp);
   const rules: Array<LimitSummary['rules'][number]> = [

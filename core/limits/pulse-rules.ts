@@ -270,7 +270,7 @@ export function pulsedExposureLimit(q: PulsedLimitQuery): PulsedLimitResult {
   const g: Grouping | null = gt ? groupWithin(f, gt.T_g, T, NT) : null;
   let grouping: PulsedLimitResult['grouping'] = null;
   let groupLimit: ExposureLimitResult | null = null;
-  let rule1 = H1;
+  let groupPerPulse: Dec | null = null;
   if (g && gt) {
     groupLimit = exposureLimit({ ...base, duration_s: g.groupDuration_s.toNumber() });
     groupLimit.conservativeReplacements.forEach((r) => replacements.add(r));
@@ -281,8 +281,7 @@ export function pulsedExposureLimit(q: PulsedLimitQuery): PulsedLimitResult {
       `${g.groupedPulses.toString()} pulses inside ${fmt(g.groupDuration_s)} s are one pulse; their summed energy is compared with the limit for ${fmt(g.groupDuration_s)} s`;
     grouping = { time: gt.name, groupedPulses: g.groupedPulses.toString(), groupDuration_s: recordString(g.groupDuration_s), why, perPulse_H_Jm2: recordString(perPulse), limit: groupLimit };
     addStep(trace, { kind: 'row', label: `Grouping inside ${gt.name}`, detail: `${why}: ${fmt(new Dec(groupLimit.H_Jm2))} / ${g.groupedPulses.toString()}`, value: fmt(perPulse), unit: 'J/m² per pulse', source: gt.source, confidence: gt.confidence });
-    // The merged pulse is a pulse for rule 1: the lower of the two per-pulse values counts.
-    if (perPulse.lt(rule1)) rule1 = perPulse;
+    groupPerPulse = perPulse;
   } else if (gt) {
     addStep(trace, { kind: 'note', label: `Grouping inside ${gt.name}`, detail: `pulse period ${fmt(new Dec(1).div(f))} s is not shorter than ${gt.name} = ${fmt(gt.T_g)} s: every pulse counts on its own`, source: gt.source, confidence: gt.confidence });
   }
@@ -299,17 +298,7 @@ export function pulsedExposureLimit(q: PulsedLimitQuery): PulsedLimitResult {
     confidence: train.confidence,
   });
 
-  // The lowest per-pulse limit governs; on a tie the earlier rule is named.
-  let governing: GoverningPulseRule = 'single-pulse';
-  let perPulse = rule1;
-  if (H2.lt(perPulse)) {
-    governing = 'average-power';
-    perPulse = H2;
-  }
-  if (train.applies && train.H.lt(perPulse)) {
-    governing = 'pulse-train';
-    perPulse = train.H;
-  }
+  const { rule1, governing, perPulse } = governingPulseRule({ singlePulse: H1, group: groupPerPulse, averagePower: H2, pulseTrain: train.applies ? train.H : null });
   addStep(trace, {
     kind: 'result',
     label: 'Governing',
@@ -331,6 +320,48 @@ export function pulsedExposureLimit(q: PulsedLimitQuery): PulsedLimitResult {
     replacements,
     trace,
   });
+}
+
+/** Per-pulse values of the three rules, as the caller holds them (J/m² per pulse). */
+export interface PulseRuleValues {
+  /** Rule 1 for one pulse of its own duration. */
+  readonly singlePulse: Dec;
+  /** Rule 1 for a group of pulses inside T_i / T_min, per pulse (null when none are grouped). */
+  readonly group: Dec | null;
+  /** Rule 2, H_T / N_T (null for a single pulse). */
+  readonly averagePower: Dec | null;
+  /** Rule 3, single-pulse thermal limit * C_P (null for a single pulse or where rule 3 does not apply). */
+  readonly pulseTrain: Dec | null;
+}
+
+export interface GoverningPerPulse {
+  /** Rule 1: the lower of the single-pulse and the group value. */
+  readonly rule1: Dec;
+  readonly governing: GoverningPulseRule;
+  /** The lowest per-pulse limit of the rules that apply. */
+  readonly perPulse: Dec;
+}
+
+/**
+ * Which pulse rule governs: the lowest per-pulse limit of the rules that apply (all three rules are
+ * evaluated and the most restrictive governs: limit specification sections 3 step 7, 4.6, 5.6). The
+ * merged pulse of a group is a pulse for rule 1, so the lower of the single-pulse and the group
+ * value is rule 1. On a tie the earlier rule is named. The one place this choice is made: the beam's
+ * limit criteria (core/beam/tissue-limits.ts) call it with their own (short-pulse scaled) values.
+ */
+export function governingPulseRule(v: PulseRuleValues): GoverningPerPulse {
+  const rule1 = v.group !== null && v.group.lt(v.singlePulse) ? v.group : v.singlePulse;
+  let governing: GoverningPulseRule = 'single-pulse';
+  let perPulse = rule1;
+  if (v.averagePower !== null && v.averagePower.lt(perPulse)) {
+    governing = 'average-power';
+    perPulse = v.averagePower;
+  }
+  if (v.pulseTrain !== null && v.pulseTrain.lt(perPulse)) {
+    governing = 'pulse-train';
+    perPulse = v.pulseTrain;
+  }
+  return { rule1, governing, perPulse };
 }
 
 interface TrainInput {
