@@ -120,6 +120,30 @@ describe('direct-beam zone along the drawn path (issue 16 cases; derived geometr
   });
 });
 
+describe('a mirror turning the beam toward a door, NOHD just under 10 m (issue 16 case; derived geometry)', () => {
+  // Beam D: 2.4 mW CW at 633 nm, 1 mm, 1 mrad (1/e). E_L = 25.46 W/m² (ICNIRP 2013 Table 5, visible,
+  // 0.25 s, as for beam A above); NOHD = (√(4·0.0024/(π·25.46)) − 0.001)/0.001 = (0.010956 − 0.001)/0.001
+  // = 9.956 m, reported 9.96 m (rounded up, 3 figures).
+  const beamD: BeamInput = { ...beamA, id: 'd', label: 'beam D', emission: { kind: 'cw', power_W: 0.0024 } };
+  const base = { outline: [p(0, 0), p(12, 0), p(12, 5), p(0, 5)], doors: [] };
+  const turned = (mirrorX: number) => ({ ...base, doors: [{ id: 'D1', label: 'D1', a: p(mirrorX - 0.5, 5), b: p(mirrorX + 0.5, 5) }], paths: [{ laserId: 'L1', exit: p(0.5, 1), elements: [{ kind: 'mirror' as const, at: p(mirrorX, 1) }], onward_deg: 90 }] });
+  const cases: Array<{ name: string; source: string; mirrorX: number; inside: boolean }> = [
+    { name: 'the door 4 m past a mirror 1.5 m from the exit is inside the direct-beam zone', source: 'derived: 1.5 + 4 = 5.5 m along the path < 9.96 m', mirrorX: 2, inside: true },
+    { name: 'the same door 4 m past a mirror 6.5 m from the exit is beyond the NOHD', source: 'derived: 6.5 + 4 = 10.5 m along the path > 9.96 m + 51 mm drawing margin', mirrorX: 7, inside: false },
+  ];
+  it('beam D has an NOHD of 9.96 m (derived above)', () => {
+    expect(evaluateRoom(room(beamD, base)).beams[0]!.nohd_m_reported).toBe('9.96');
+  });
+  for (const c of cases) {
+    it(`${c.name} (${c.source})`, () => {
+      const plan = evaluateRoom(room(beamD, turned(c.mirrorX))).plan!;
+      const doorFindings = plan.findings.filter((f) => f.subjectId === 'D1').map((f) => f.text);
+      expect(doorFindings).toEqual(c.inside ? ['The direct beam of beam D passes door D1 5.5 m along its path, still above the limit (hazard distance 9.96 m).', 'Door D1 is inside the direct-beam zone of beam D.'] : []);
+      expect(plan.runs[0]!.endsAt).toBe('nohd');
+    });
+  }
+});
+
 describe('diffuse-reflection zones (domain notes 1.4: NHZ = √(ρ·P·cosθ/(π·E_L)))', () => {
   it('beam B: the zone radius is the diffuse NHZ the officer sees, rounded up, at least the accidental-viewing value 0.250 m derived above', () => {
     const r = evaluateRoom(room(beamB, { paths: [{ laserId: 'L1', exit: p(0.5, 1), elements: [{ kind: 'mirror', at: p(2, 1) }], onward_deg: 90 }] }));
