@@ -57,6 +57,14 @@ describe('plan editor', () => {
     await fireEvent.click(accept);
     expect(plan().controlledArea).toEqual({ outline: plan().outline, acceptedBy: 'I. Calloway-Senn' });
     expect(screen.getByText(/Laser controlled area accepted by/)).toBeTruthy();
+    // The officer's reason for the boundary is recorded with it (printed beside it in the report).
+    const note = screen.getByLabelText('Note on the accepted boundary (optional)');
+    await fireEvent.input(note, { target: { value: ' Both doors interlocked; corridor side signed. ' } });
+    await fireEvent.change(note, { target: { value: ' Both doors interlocked; corridor side signed. ' } });
+    expect(plan().controlledArea?.note).toBe('Both doors interlocked; corridor side signed.');
+    await fireEvent.input(note, { target: { value: '' } });
+    await fireEvent.change(note, { target: { value: '' } });
+    expect(plan().controlledArea).toEqual({ outline: plan().outline, acceptedBy: 'I. Calloway-Senn' });
   });
 });
 
