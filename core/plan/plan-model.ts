@@ -148,7 +148,8 @@ export type PlanFindingKind =
   | 'outside-controlled-area'
   | 'no-controlled-area'
   | 'no-diffuse-distance'
-  | 'path-not-placed';
+  | 'path-not-placed'
+  | 'path-meets-wall';
 
 export interface PlanFinding {
   readonly kind: PlanFindingKind;

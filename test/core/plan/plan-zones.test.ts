@@ -144,6 +144,26 @@ describe('a mirror turning the beam toward a door, NOHD just under 10 m (issue 1
   }
 });
 
+describe('a drawn path that runs into a wall before its beam dump (derived geometry)', () => {
+  const cases: Array<{ name: string; source: string; dumpX: number; text: string[] }> = [
+    {
+      name: 'a dump drawn 1 m beyond the east wall: the wall is taken to stop the beam, and the officer is asked to check the drawing',
+      source: 'derived: exit x = 1 m, east wall x = 8 m, dump x = 9 m; the beam meets the wall 7 m along its path',
+      dumpX: 9,
+      text: ['The drawn beam path of Laser 1 meets the room wall 7 m along its path, before beam dump 1: the wall is taken to stop the beam there.'],
+    },
+    { name: 'a dump drawn on the east wall itself ends the path there: nothing to check', source: 'derived: the dump at x = 8 m lies on the wall', dumpX: 8, text: [] },
+  ];
+  for (const c of cases) {
+    it(`${c.name} (${c.source})`, () => {
+      // Along y = 3 m, clear of door D1 (y 1–2 m) in the east wall.
+      const plan = evaluateRoom(room(beamA, { paths: [{ laserId: 'L1', exit: p(1, 3), elements: [{ kind: 'dump', at: p(c.dumpX, 3) }] }] })).plan!;
+      expect(plan.findings.filter((f) => f.kind === 'path-meets-wall').map((f) => f.text)).toEqual(c.text);
+      expect(plan.runs[0]!.endDetail).toBe('The direct beam ends at the room wall 7 m along its path.');
+    });
+  }
+});
+
 describe('diffuse-reflection zones (domain notes 1.4: NHZ = √(ρ·P·cosθ/(π·E_L)))', () => {
   it('beam B: the zone radius is the diffuse NHZ the officer sees, rounded up, at least the accidental-viewing value 0.250 m derived above', () => {
     const r = evaluateRoom(room(beamB, { paths: [{ laserId: 'L1', exit: p(0.5, 1), elements: [{ kind: 'mirror', at: p(2, 1) }], onward_deg: 90 }] }));
