@@ -30,7 +30,7 @@ function beamName(z: ZoneWithShape): string {
 
 export const PLAN_METHOD: readonly string[] = [
   `Direct-beam zones follow the drawn beam path up to the NOHD (rounded up, or the upper bound from the input tolerances where larger), stopped by beam dumps, targets, walls and barriers; doors and windows are taken as open.`,
-  `Their width is where the exposure of a Gaussian beam exceeds the limit (derived from the beam diameter, divergence and NOHD), plus ${PATH_MARGIN_M.mul(1000).toString()} mm on each side for the accuracy of the drawing.`,
+  `Their width is where the exposure of a Gaussian beam exceeds the limit (derived from the beam diameter, divergence and NOHD), plus ${PATH_MARGIN_M.mul(1000).toString()} mm on each side for the accuracy of the drawing; a wall, curtain or barrier beside the beam or at its end cuts them 1 mm beyond its surface (the beam cannot reach behind it).`,
   `Diffuse-reflection zones are drawn around a circle of the diffuse NHZ (rounded up) about every mirror and target the beam reaches, every point where it ends on a wall or barrier, and every reflection point marked on the plan (a ${CIRCLE_CORNERS}-sided polygon outside the circle).`,
   'Walls, curtains and barriers are taken as opaque to scattered light: a diffuse-reflection zone covers only what its reflection point can see in a straight line, cut at the room outline (of any shape), interior walls, curtains, barriers and the enclosure the point lies in, 1 mm beyond the surface along the line of sight; a spot on a wall or barrier is seen from the side the beam comes from; a door or window the zone reaches is reported.',
   'Every zone is widened by 1 mm before its corners are rounded to the millimetre, so no zone is drawn smaller than computed. Heights are not modelled except for the eye-level check of a stated beam height.',
@@ -59,13 +59,15 @@ export function evaluatePlan(plan: RoomPlan, input: RoomInput, beams: readonly B
     const mine = onPlan.filter((b) => b.laserId === laser.id);
     const far = mine.reduce((m, b) => Dec.max(m, directLength(b.result)), new Dec(1)).add(1);
     const legs = tracePath(plan, path, far);
+    const short = pathMeetsWall(plan, path, legs, laser.name);
+    if (short) findings.push(short);
     for (const b of mine) {
       const { zones: dz, run } = directZones(plan, b, legs);
       const fz = diffuseZones(plan, b, legs);
       for (const z of [...dz, ...fz]) names.set(z, b.result.label);
       zones.push(...dz, ...fz);
       const last = legs[legs.length - 1];
-      if (last && run.points.length > 1) runs.push(runOf(b, last, run.points, run.length));
+      if (last && run.points.length > 1) runs.push(runOf(plan, b, last, run.points, run.length));
       beamFindings(plan, b, legs, dz, findings, path.height_m);
       if (diffuseRadius(b.result) === null) {
         findings.push({ kind: 'no-diffuse-distance', severity: 'check', subjectId: b.result.beamId, zoneIds: [], text: `No diffuse reflection was assessed for ${b.result.label}, so no diffuse-reflection zone is drawn for it.`, suggestion: `Add a diffuse reflection to the viewing conditions of ${b.result.label} (reflectance of the surfaces the beam can meet).` });
@@ -87,13 +89,51 @@ export function evaluatePlan(plan: RoomPlan, input: RoomInput, beams: readonly B
   };
 }
 
-function runOf(b: BeamOnPlan, last: Leg, points: P[], length: Dec): PlanBeamRun {
+/** A wall this far or more before the point the leg was drawn to is a drawing to check (ours: 1 cm, the drawing's resolution). */
+const DRAWN_TO_TOLERANCE_M = new Dec('0.01');
+
+/** The wall or barrier that stops a leg, in officer words. */
+function stopWords(plan: RoomPlan, leg: Leg): string {
+  if (leg.endsWith === 'wall') {
+    const w = plan.walls.find((x) => x.id === leg.endId);
+    return w ? `interior wall ${w.label}` : 'the room wall';
+  }
+  if (leg.endsWith === 'barrier') {
+    const b = plan.barriers.find((x) => x.id === leg.endId);
+    return b ? `${b.kind} ${b.label}` : 'a barrier';
+  }
+  return leg.endsWith === 'dump' ? 'the beam dump' : leg.endsWith === 'target' ? 'the target' : leg.endId;
+}
+
+/**
+ * The drawn path runs into a wall before a mirror, dump or target drawn beyond it: the trace takes
+ * the wall to stop the beam (the zones end there), and the officer checks which the drawing meant.
+ */
+function pathMeetsWall(plan: RoomPlan, path: RoomPlan['paths'][number], legs: readonly Leg[], laserName: string): PlanFinding | null {
+  const k = legs.length - 1;
+  const last = legs[k];
+  const el = path.elements[k];
+  if (!last || !el || last.endsWith !== 'wall') return null;
+  const [dx, dy] = [new Dec(el.at.x_m).sub(last.to.x), new Dec(el.at.y_m).sub(last.to.y)];
+  if (dx.mul(dx).add(dy.mul(dy)).sqrt().lt(DRAWN_TO_TOLERANCE_M)) return null;
+  const what = `${el.kind === 'dump' ? 'beam dump' : el.kind} ${el.label ?? k + 1}`;
+  return {
+    kind: 'path-meets-wall',
+    severity: 'check',
+    subjectId: path.laserId,
+    zoneIds: [],
+    text: `The drawn beam path of ${laserName} meets ${stopWords(plan, last)} ${metres(last.end)} along its path, before ${what}: the wall is taken to stop the beam there.`,
+    suggestion: `Check the beam path of ${laserName} on the plan: move ${what} inside the room, or draw the opening the beam passes through.`,
+  };
+}
+
+function runOf(plan: RoomPlan, b: BeamOnPlan, last: Leg, points: P[], length: Dec): PlanBeamRun {
   const physicalEnd = last.end;
   const endsAt: PlanBeamRun['endsAt'] = length.lt(physicalEnd) || last.endsWith === 'open' || last.endsWith === 'mirror' ? 'nohd' : (last.endsWith as 'dump' | 'target' | 'wall' | 'barrier');
   const endDetail =
     endsAt === 'nohd'
       ? `The direct beam is above the limit for ${metres(length)} along its path.`
-      : `The direct beam ends at ${last.endId} ${metres(last.end)} along its path.`;
+      : `The direct beam ends at ${stopWords(plan, last)} ${metres(last.end)} along its path.`;
   return { beamId: b.result.beamId, laserId: b.laserId, points: points.map(roundPoint), endsAt, endDetail };
 }
 

@@ -3,7 +3,9 @@
  * printed documents), in ordinary numbers: they place labels and arrows, never a zone. Zones and
  * findings come from evaluatePlan only.
  */
-import type { PlanBeamPath, PlanPoint } from './plan-model.js';
+import { Dec } from '../numeric/decimal.js';
+import type { PlanBeamPath, PlanPoint, RoomPlan } from './plan-model.js';
+import { tracePath } from './trace-path.js';
 
 export interface Middle {
   readonly x: number;
@@ -40,4 +42,25 @@ export function onwardEnd(path: PlanBeamPath, length: number): { from: PlanPoint
   const from = path.elements.length ? (path.elements[path.elements.length - 1]?.at ?? path.exit) : path.exit;
   const r = (path.onward_deg * Math.PI) / 180;
   return { from, to: { x_m: from.x_m + length * Math.cos(r), y_m: from.y_m + length * Math.sin(r) } };
+}
+
+/**
+ * The arrow of an open path as drawn: up to the first wall, curtain or barrier the beam meets (it
+ * passes open doors and windows, as the zones take it; core/plan/trace-path.ts), else `length`
+ * metres long. An arrow through a wall would tell the reader the beam reaches the next room.
+ */
+export function onwardStop(plan: RoomPlan, path: PlanBeamPath, length: number): { from: PlanPoint; to: PlanPoint } | null {
+  const arrow = onwardEnd(path, length);
+  if (!arrow) return null;
+  try {
+    const legs = tracePath(plan, path, new Dec(length));
+    const last = legs[legs.length - 1];
+    // Only when the trace reached the open leg (a wall before the last mirror ends the path earlier).
+    if (last && legs.length === path.elements.length + 1 && (last.endsWith === 'wall' || last.endsWith === 'barrier')) {
+      return { from: arrow.from, to: { x_m: last.to.x.toNumber(), y_m: last.to.y.toNumber() } };
+    }
+  } catch {
+    // A plan being edited can be momentarily degenerate (two points on one spot): draw the plain arrow.
+  }
+  return arrow;
 }

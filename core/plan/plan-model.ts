@@ -112,7 +112,7 @@ export interface PlanPointResult {
 
 export type ZoneKind = 'direct' | 'diffuse';
 
-/** One piece of a hazard zone, a simple polygon in plan coordinates (never smaller than the zone): a convex strip along a direct beam; for a diffuse reflection, what the spot sees of its circle (star-shaped about the spot). */
+/** One piece of a hazard zone, a simple polygon in plan coordinates (never smaller than the zone): a convex slice of the strip along a direct beam, or what an end of the beam sees of the 50 mm past it; for a diffuse reflection, what the spot sees of its circle (star-shaped about the spot). */
 export interface PlanZone {
   readonly id: string;
   readonly kind: ZoneKind;
@@ -148,7 +148,8 @@ export type PlanFindingKind =
   | 'outside-controlled-area'
   | 'no-controlled-area'
   | 'no-diffuse-distance'
-  | 'path-not-placed';
+  | 'path-not-placed'
+  | 'path-meets-wall';
 
 export interface PlanFinding {
   readonly kind: PlanFindingKind;

@@ -2,7 +2,8 @@
  * Hazard zones on the plan, from the same evaluation as the numbers (never re-derived in the UI):
  * - direct beam: along the traced path up to the NOHD (rounded up; the upper bound from the input
  *   tolerances where larger), as wide as the region where the exposure exceeds the limit, plus a
- *   placement margin;
+ *   placement margin, cut at the walls, curtains and barriers beside it or at its end
+ *   (core/plan/beam-strip.ts);
  * - diffuse reflection: a polygon around the circle of the diffuse NHZ (rounded up) about every
  *   mirror and target the beam reaches, every point where it ends on a wall or barrier, and every
  *   reflection point the officer marked.
@@ -13,8 +14,9 @@ import { Dec } from '../numeric/decimal.js';
 import { distanceReported } from '../beam/format.js';
 import type { BeamInput } from '../model/inputs.js';
 import type { BeamResult } from '../model/results.js';
-import { DecGeo, add, box, boxOf, circleOutside, corridor, edges, insideBox, pointInPolygon, rayHitsSegment, scale, sub, unit, type Box, type P } from './geometry.js';
+import { DecGeo, add, box, boxOf, boxesApart, circleOutside, edges, insideBox, pointInPolygon, rayHitsSegment, scale, sub, unit, type Box, type P } from './geometry.js';
 import { screensOf, visibleRegion, type ScreenSeg } from './visibility.js';
+import { cutStrip, passedScreens, type StripPiece } from './beam-strip.js';
 import type { PlanPointResult, PlanZone, RoomPlan } from './plan-model.js';
 import { toP, type Leg } from './trace-path.js';
 
@@ -163,6 +165,8 @@ export function directZones(plan: RoomPlan, beam: BeamOnPlan, legs: readonly Leg
     if (pieceLen.lte(0)) break;
     const u = unit(leg.from, leg.to);
     const end = add(leg.from, scale(u, pieceLen));
+    const passed = passedScreens(leg.from, leg.to, roomScreens(plan));
+    const screens = roomScreens(plan).filter((sc) => !passed.has(sc));
     if (points.length === 0) points.push(leg.from);
     points.push(end);
     const cuts = [new Dec(0), ...enclosureCuts(plan, leg.from, end, pieceLen), ...taperCuts(leg.start, pieceLen), pieceLen]
@@ -174,27 +178,49 @@ export function directZones(plan: RoomPlan, beam: BeamOnPlan, legs: readonly Leg
       if (!t1 || !t2 || t2.sub(t1).lte(0)) continue;
       const w = halfWidth(d0, phi, H, leg.start.add(t1), leg.start.add(t2)).add(PATH_MARGIN_M).add(ROUNDING_PAD_M);
       // Pieces meet edge to edge inside a leg; only the leg's own ends get the placement margin.
+      // Walls, curtains and barriers beside the beam or at its end cut the strip (core/plan/beam-strip.ts).
       const ext = PATH_MARGIN_M.add(ROUNDING_PAD_M);
-      const shape = corridor(add(leg.from, scale(u, t1)), add(leg.from, scale(u, t2)), w, i === 0 ? ext : new Dec(0), i + 2 === cuts.length ? ext : new Dec(0));
-      n += 1;
-      zones.push(
-        zone(
-          {
-            id: `${beam.result.beamId}:direct:${n}`,
-            kind: 'direct',
-            beamId: beam.result.beamId,
-            laserId: beam.laserId,
-            label: `Direct beam of ${beam.result.label}`,
-            shape,
-          },
-          plan,
-        ),
-      );
+      const piece = { from: add(leg.from, scale(u, t1)), to: add(leg.from, scale(u, t2)), w, ext, capStart: i === 0, capEnd: i + 2 === cuts.length };
+      for (const shape of stripShapes(piece, screens)) {
+        n += 1;
+        zones.push(
+          zone(
+            {
+              id: `${beam.result.beamId}:direct:${n}`,
+              kind: 'direct',
+              beamId: beam.result.beamId,
+              laserId: beam.laserId,
+              label: `Direct beam of ${beam.result.label}`,
+              shape,
+            },
+            plan,
+          ),
+        );
+      }
     }
   }
   const last = legs[legs.length - 1];
   return { zones, run: { points, length: Dec.min(H, last ? last.end : new Dec(0)) } };
 }
+
+/**
+ * The cut strip of one beam piece, kept by its inputs (the piece and every screen): a live edit that
+ * moves a door or a desk leaves it as it was, and the end pieces' sight-line sweep is slow.
+ */
+function stripShapes(piece: StripPiece, allScreens: readonly ScreenSeg[]): P[][] {
+  // Only screens that can reach the strip matter (its box widened by its half-width and end margin).
+  const b = boxOf([piece.from, piece.to]);
+  const screens = allScreens.filter((sc) => !boxesApart(sc.box, b, piece.w.add(piece.ext).toNumber()));
+  const q = (p: P) => `${p.x.toString()},${p.y.toString()}`;
+  const key = `${q(piece.from)}|${q(piece.to)}|${piece.w.toString()}|${piece.ext.toString()}|${piece.capStart}|${piece.capEnd}|${screensKey(screens)}`;
+  const hit = strips.get(key);
+  if (hit) return hit;
+  const shapes = cutStrip(piece, screens, ROUNDING_PAD_M);
+  if (strips.size >= SHAPES_KEPT) strips.clear();
+  strips.set(key, shapes);
+  return shapes;
+}
+const strips = new Map<string, P[][]>();
 
 /** How far in front of a wall or barrier a spot on it is seen from, m (ours). */
 const SURFACE_STANDOFF_M = new Dec('0.001');
@@ -223,6 +249,12 @@ export function reflectionPointsOf(plan: RoomPlan, laserId: string, legs: readon
  * the walls are reported when a zone reaches them.
  */
 function screensFor(plan: RoomPlan, centre: P): ScreenSeg[] {
+  const fixed = roomScreens(plan);
+  const encl = plan.enclosures.find((e) => pointInPolygon(centre, box(toP(e.min), toP(e.max))));
+  return encl ? [...fixed, ...screensOf(edges(box(toP(encl.min), toP(encl.max))), ROUNDING_PAD_M)] : fixed;
+}
+/** The room outline, interior walls, curtains and barriers as screens, worked out once per evaluation (every zone of the plan uses them). */
+function roomScreens(plan: RoomPlan): ScreenSeg[] {
   let fixed = planScreens.get(plan);
   if (!fixed) {
     const segs: Array<readonly [P, P]> = [...edges(plan.outline.map(toP))];
@@ -231,10 +263,8 @@ function screensFor(plan: RoomPlan, centre: P): ScreenSeg[] {
     fixed = screensOf(segs, ROUNDING_PAD_M);
     planScreens.set(plan, fixed);
   }
-  const encl = plan.enclosures.find((e) => pointInPolygon(centre, box(toP(e.min), toP(e.max))));
-  return encl ? [...fixed, ...screensOf(edges(box(toP(encl.min), toP(encl.max))), ROUNDING_PAD_M)] : fixed;
+  return fixed;
 }
-/** The screens of a plan, worked out once per evaluation (every diffuse zone of the plan uses them). */
 const planScreens = new WeakMap<RoomPlan, ScreenSeg[]>();
 
 /**

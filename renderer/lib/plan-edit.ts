@@ -279,6 +279,14 @@ export function acceptControlledArea(plan: RoomPlan, acceptedBy: string): RoomPl
   return { ...plan, controlledArea: { outline: copy([...(plan.controlledArea?.outline ?? plan.outline)]), acceptedBy: acceptedBy.trim() } };
 }
 
+/** The officer's note on the accepted boundary (why it runs where it does); an empty note is removed. */
+export function noteControlledArea(plan: RoomPlan, note: string): RoomPlan {
+  if (!plan.controlledArea) return plan;
+  const { note: _old, ...rest } = plan.controlledArea;
+  const text = note.trim();
+  return { ...plan, controlledArea: text ? { ...rest, note: text } : rest };
+}
+
 export function dropControlledArea(plan: RoomPlan): RoomPlan {
   const { controlledArea: _c, ...rest } = plan;
   return rest;

@@ -57,6 +57,14 @@ describe('plan editor', () => {
     await fireEvent.click(accept);
     expect(plan().controlledArea).toEqual({ outline: plan().outline, acceptedBy: 'I. Calloway-Senn' });
     expect(screen.getByText(/Laser controlled area accepted by/)).toBeTruthy();
+    // The officer's reason for the boundary is recorded with it (printed beside it in the report).
+    const note = screen.getByLabelText('Note on the accepted boundary (optional)');
+    await fireEvent.input(note, { target: { value: ' Both doors interlocked; corridor side signed. ' } });
+    await fireEvent.change(note, { target: { value: ' Both doors interlocked; corridor side signed. ' } });
+    expect(plan().controlledArea?.note).toBe('Both doors interlocked; corridor side signed.');
+    await fireEvent.input(note, { target: { value: '' } });
+    await fireEvent.change(note, { target: { value: '' } });
+    expect(plan().controlledArea).toEqual({ outline: plan().outline, acceptedBy: 'I. Calloway-Senn' });
   });
 });
 
@@ -131,5 +139,61 @@ describe('undo, redo and the corners of the room outline (keyboard first)', () =
     expect(plan().outline).toHaveLength(5);
     await fireEvent.click(screen.getByRole('button', { name: 'Undo: remove room corner 6' }));
     expect(plan().outline).toHaveLength(6);
+  });
+});
+
+describe('handles never cover each other (each stays reachable with the mouse)', () => {
+  /** Every handle and + of the drawing as a circle (a + square by the circle through its corners), in drawing units. */
+  function shapes(): Array<{ name: string; x: number; y: number; r: number }> {
+    const svg = screen.getByRole('group', { name: /Room plan, top view/ });
+    const num = (e: Element, a: string) => Number(e.getAttribute(a));
+    const circles = [...svg.querySelectorAll('circle.handle')].map((c) => ({ name: c.getAttribute('aria-label') ?? '', x: num(c, 'cx'), y: num(c, 'cy'), r: num(c, 'r') }));
+    const pluses = [...svg.querySelectorAll('g.side-add')].map((g) => {
+      const rect = g.querySelector('rect') as Element;
+      const w = num(rect, 'width');
+      return { name: g.getAttribute('aria-label') ?? '', x: num(rect, 'x') + w / 2, y: num(rect, 'y') + w / 2, r: (w / 2) * Math.SQRT2 };
+    });
+    return [...circles, ...pluses];
+  }
+  function overlaps(): string[] {
+    const all = shapes();
+    const out: string[] = [];
+    all.forEach((a, i) => all.slice(i + 1).forEach((b) => Math.hypot(a.x - b.x, a.y - b.y) < a.r + b.r && out.push(`${a.name} / ${b.name}`)));
+    return out;
+  }
+
+  it('a door put on the middle of the north wall, a window on the middle of the south wall and a controlled area accepted as the room: no two handles overlap', async () => {
+    render(PlanHarness, { lasers });
+    await fireEvent.click(screen.getByRole('button', { name: 'Start a room plan' }));
+    // 6 m × 4 m: "+ Door" puts door D2's first side at (3, 4), the middle of the north side where its + is (derived).
+    await fireEvent.click(screen.getByRole('button', { name: '+ Door' }));
+    await fireEvent.click(screen.getByRole('button', { name: '+ Window' }));
+    // The window's ends typed 0.05 m either side of the middle of the south side (3, 0).
+    for (const [label, value] of [
+      ['Window W1, one end, x in metres', '2.95'],
+      ['Window W1, other end, x in metres', '3.05'],
+    ] as const) {
+      const box = screen.getByLabelText(label);
+      await fireEvent.input(box, { target: { value } });
+      await fireEvent.change(box, { target: { value } });
+    }
+    expect(plan().doors[1]?.a).toEqual({ x_m: 3, y_m: 4 });
+    await fireEvent.input(screen.getByLabelText('Accept the room as the laser controlled area, by'), { target: { value: 'I. Calloway-Senn' } });
+    await fireEvent.click(screen.getByRole('button', { name: 'Accept boundary' }));
+    expect(plan().controlledArea?.outline).toEqual(plan().outline);
+    expect(shapes().length).toBe(4 + 4 + 4 + 4 + 4 + 2 + 2); // corners and + of room and area, two doors, one window, exit and dump
+    expect(overlaps()).toEqual([]);
+  });
+
+  it('a handle drawn beside another still names and moves its own point (arrow keys)', async () => {
+    render(PlanHarness, { lasers });
+    await fireEvent.click(screen.getByRole('button', { name: 'Start a room plan' }));
+    await fireEvent.input(screen.getByLabelText('Accept the room as the laser controlled area, by'), { target: { value: 'I. Calloway-Senn' } });
+    await fireEvent.click(screen.getByRole('button', { name: 'Accept boundary' }));
+    // Controlled area corner 1 stands for (0, 0), drawn beside room corner 1 and joined to it by a line; the arrow keys move the point itself.
+    expect(screen.getByRole('group', { name: /Room plan, top view/ }).querySelectorAll('line.leader').length).toBe(4);
+    const handle = screen.getByRole('button', { name: /^Controlled area corner 1: x 0\.00 m, y 0\.00 m/ });
+    await fireEvent.keyDown(handle, { key: 'ArrowLeft' });
+    expect(plan().controlledArea?.outline[0]).toEqual({ x_m: -0.1, y_m: 0 });
   });
 });

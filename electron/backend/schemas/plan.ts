@@ -106,6 +106,7 @@ export const PlanFindingSchema = z.strictObject({
     'no-controlled-area',
     'no-diffuse-distance',
     'path-not-placed',
+    'path-meets-wall',
   ]),
   severity: z.enum(['hazard', 'check']),
   subjectId: z.string(),

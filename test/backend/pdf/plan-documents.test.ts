@@ -16,6 +16,7 @@ import { evaluateRoom } from '../../../core/index.js';
 import { openRecordStore, type RecordStore } from '../../../electron/backend/records/index.js';
 import { documentInputFromAssessment, renderDoorNotice, renderReport, type DocumentInput } from '../../../electron/backend/pdf/index.js';
 import { pageTexts, pdfInfo } from './pdf-tools.js';
+import { planSvg } from '../../../electron/backend/pdf/plan/plan-svg.js';
 import { documentTable } from '../../../electron/api/handlers/documents.js';
 import type { ApiContext } from '../../../electron/api/context.js';
 
@@ -79,6 +80,25 @@ describe('the room plan on paper (demo room B2.14)', () => {
     expect(pdfInfo(pdf).pages).toBe(1);
     expect(squash(pageTexts(pdf).join(' '))).toContain(squash('you are here: door D2 to B2.16'));
     await expect(op.run(op.input.parse({ kind: 'door-notice', assessmentId, paper: 'A4', units: 'SI', entranceId: 'D9' }), ctx)).rejects.toThrow(/not a door on the room plan/);
+  });
+
+  it('"You are here" on the small plan lies outside the room, beside the dot (south door D1 and east door D2 of B2.14)', () => {
+    // The drawing as it goes into the notice (108 pt wide, as door-notice.ts sets it): the label's box
+    // (turned upright beside a north–south wall) must not overlap the room outline's box (ours: words never cover the room).
+    const doc = docs.get('B2.14')!;
+    const plan = doc.content.input.plan!;
+    for (const entranceId of ['D1', 'D2']) {
+      const { svg } = planSvg(plan, doc.results.plan, { maxWidth: 108, maxHeight: 110, compact: true, entranceId, laserNames: new Map() });
+      const room = /<polygon points="([^"]+)" fill="none" stroke="#222222"/.exec(svg)![1]!.split(' ').map((q) => q.split(',').map(Number) as [number, number]);
+      const [rx0, rx1, ry0, ry1] = [Math.min(...room.map((q) => q[0])), Math.max(...room.map((q) => q[0])), Math.min(...room.map((q) => q[1])), Math.max(...room.map((q) => q[1]))];
+      const m = /<g transform="translate\(([\d.]+) ([\d.]+)\)( rotate\(-90\))?"><rect x="[-\d.]+" y="[-\d.]+" width="([\d.]+)" height="([\d.]+)"/.exec(svg);
+      expect(m, entranceId).not.toBeNull();
+      const [x, y, upright, w, h] = [Number(m![1]), Number(m![2]), m![3] !== undefined, Number(m![4]), Number(m![5])];
+      const [hw, hh] = upright ? [h / 2, w / 2] : [w / 2, h / 2];
+      const apart = x + hw <= rx0 || x - hw >= rx1 || y + hh <= ry0 || y - hh >= ry1;
+      expect(apart, `${entranceId}: label at (${x}, ${y}) against the room ${rx0}–${rx1} × ${ry0}–${ry1}`).toBe(true);
+      expect(upright).toBe(entranceId === 'D2');
+    }
   });
 
   it('a room without a plan prints no plan section', async () => {

@@ -128,6 +128,42 @@ describe('an L-shaped room: beams and zones stop at its own walls (derived geome
     expect(kinds(plan.findings)).toEqual(['door-in-zone:D1', 'no-controlled-area:plan']);
   });
 
+  // The direct-beam zone is the beam's over-limit width plus 50 mm each side for the drawing; walls
+  // the beam runs beside or ends on stop it (the beam cannot reach behind them), 1 mm beyond the surface.
+  // Beam C's half-width here is under 16 mm (derived: D_L/(2√e) with the beam ≤ 12 mm wide over 8 m), so
+  // the zone edge lies 51–67 mm from the drawn line.
+  const y0 = 2.97;
+  const under = [{ laserId: 'L1', exit: p(1, y0), elements: [], onward_deg: 0 }];
+  const zoneOf = (paths: RoomPlan['paths'], extra: Partial<RoomPlan> = {}) =>
+    evaluateRoom(room({ outline: L, controlledArea: { outline: L, acceptedBy: 'I. Calloway-Senn' }, paths, ...extra })).plan!;
+  const cornersOf = (plan: ReturnType<typeof zoneOf>) => plan.zones.filter((z) => z.kind === 'direct').flatMap((z) => z.polygon.map((q) => [Number(q.x_m), Number(q.y_m)] as const));
+
+  it('a beam 30 mm under the inner corner: its zone keeps its width in the west wing and stops 1 mm into the wall y = 3 m beside the office, and 1 mm into the east wall', () => {
+    // derived: the beam runs along y = 2.97 m from x = 1 m to the east wall x = 8 m; its zone edge
+    // (y ≥ 2.97 + 0.051 = 3.021 m) would lie in the office (x > 3 m, y > 3 m) over x 3–8 m.
+    const plan = zoneOf(under, { workPositions: [{ id: 'P1', label: 'office desk', at: p(5, 3.01) }, { id: 'P2', label: 'west wing bench', at: p(2.5, 3.01) }] });
+    const corners = cornersOf(plan);
+    expect(corners.filter(([x, y]) => x > 3.0005 && y > 3.001)).toEqual([]);
+    expect(Math.max(...corners.map(([x]) => x))).toBeLessThanOrEqual(8.001);
+    expect(Math.max(...corners.filter(([x]) => x < 3).map(([, y]) => y))).toBeGreaterThanOrEqual(3.021);
+    // The officer reads: the bench in the west wing 40 mm from the beam is inside, the desk behind the wall is not,
+    // and the zone stays inside the accepted boundary (the L itself).
+    expect(kinds(plan.findings)).toEqual(['work-position-in-zone:P2']);
+  });
+
+  it('a beam ending on the inner wall 20 mm above the inner corner: its zone stops 1 mm into the wall and does not reach the office', () => {
+    // derived: the beam east along y = 3.02 m meets the wall x = 3 m (y 3–7 m) at (3, 3.02); without the
+    // cut its end would run 51 mm past it, over the corner into the office (x > 3 m, y > 3 m). Its end,
+    // seen from 1 mm before the wall, still sees past the corner (3, 3) into the south wing (a sliver
+    // under 3 mm wide: the line from (2.999, 3.02) past (3, 3) reaches y = 2.96 m at x = 3.002 m).
+    const plan = zoneOf([{ laserId: 'L1', exit: p(1, 3.02), elements: [], onward_deg: 0 }], { workPositions: [{ id: 'P1', label: 'office desk', at: p(3.03, 3.04) }] });
+    expect(plan.runs[0]!.endsAt).toBe('wall');
+    const corners = cornersOf(plan);
+    expect(corners.filter(([x, y]) => x > 3.0015 && y > 3.0015)).toEqual([]);
+    expect(Math.max(...corners.map(([x]) => x))).toBeLessThanOrEqual(3.003);
+    expect(kinds(plan.findings)).toEqual([]);
+  });
+
   it('an outline whose sides cross is refused, naming the outline (ours: a room outline is a simple polygon)', () => {
     try {
       evaluateRoom(room({ outline: [p(0, 0), p(4, 4), p(4, 0), p(0, 4)], paths: short }));

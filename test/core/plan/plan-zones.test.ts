@@ -54,21 +54,21 @@ describe('direct-beam zone along the drawn path (issue 16 cases; derived geometr
       findings: ['door-in-zone:D1', 'leaves-room:D1', 'no-controlled-area:plan'],
     },
     {
-      name: 'the same beam without a door in its way ends on the wall',
-      source: 'derived: the north wall at y = 5 m is 4 m from the mirror; no opening there',
+      name: 'the same beam without a door in its way ends on the wall, and its zone 1 mm beyond it (the wall stops the beam and the drawing margin)',
+      source: 'derived: the north wall at y = 5 m is 4 m from the mirror; no opening there; 5 + 0.001 m',
       plan: { paths: [{ laserId: 'L1', exit: p(0.5, 1), elements: [{ kind: 'mirror', at: p(2, 1) }], onward_deg: 90 }] },
       endsAt: 'wall',
-      maxY: 5.051,
+      maxY: 5.001,
       findings: ['no-controlled-area:plan'],
     },
     {
       name: 'a curtain across the bench stops the beam before door D1; the rating must be checked',
-      source: 'derived: curtain at x = 4 m lies between the exit (x = 1 m) and door D1 (x = 8 m) on the line y = 1.5 m',
+      source: 'derived: curtain at x = 4 m lies between the exit (x = 1 m) and door D1 (x = 8 m) on the line y = 1.5 m; the zone ends 1 mm beyond it, 4.001 m',
       plan: {
         barriers: [{ id: 'C1', label: 'C1', kind: 'curtain', rating: 'maker rating 100 W/m² for 60 s', a: p(4, 0), b: p(4, 3) }],
         paths: [{ laserId: 'L1', exit: p(1, 1.5), elements: [], onward_deg: 0 }],
       },
-      maxX: 4.051,
+      maxX: 4.001,
       endsAt: 'barrier',
       findings: ['no-controlled-area:plan', 'stopped-by-barrier:C1'],
     },
@@ -118,6 +118,50 @@ describe('direct-beam zone along the drawn path (issue 16 cases; derived geometr
     expect(kinds(plan.findings)).toEqual(['beam-at-eye-level:L1', 'no-controlled-area:plan', 'work-position-in-zone:P1']);
     expect(plan.suggestions.join(' ')).toMatch(/raise the beam height/);
   });
+});
+
+describe('a mirror turning the beam toward a door, NOHD just under 10 m (issue 16 case; derived geometry)', () => {
+  // Beam D: 2.4 mW CW at 633 nm, 1 mm, 1 mrad (1/e). E_L = 25.46 W/m² (ICNIRP 2013 Table 5, visible,
+  // 0.25 s, as for beam A above); NOHD = (√(4·0.0024/(π·25.46)) − 0.001)/0.001 = (0.010956 − 0.001)/0.001
+  // = 9.956 m, reported 9.96 m (rounded up, 3 figures).
+  const beamD: BeamInput = { ...beamA, id: 'd', label: 'beam D', emission: { kind: 'cw', power_W: 0.0024 } };
+  const base = { outline: [p(0, 0), p(12, 0), p(12, 5), p(0, 5)], doors: [] };
+  const turned = (mirrorX: number) => ({ ...base, doors: [{ id: 'D1', label: 'D1', a: p(mirrorX - 0.5, 5), b: p(mirrorX + 0.5, 5) }], paths: [{ laserId: 'L1', exit: p(0.5, 1), elements: [{ kind: 'mirror' as const, at: p(mirrorX, 1) }], onward_deg: 90 }] });
+  const cases: Array<{ name: string; source: string; mirrorX: number; inside: boolean }> = [
+    { name: 'the door 4 m past a mirror 1.5 m from the exit is inside the direct-beam zone', source: 'derived: 1.5 + 4 = 5.5 m along the path < 9.96 m', mirrorX: 2, inside: true },
+    { name: 'the same door 4 m past a mirror 6.5 m from the exit is beyond the NOHD', source: 'derived: 6.5 + 4 = 10.5 m along the path > 9.96 m + 51 mm drawing margin', mirrorX: 7, inside: false },
+  ];
+  it('beam D has an NOHD of 9.96 m (derived above)', () => {
+    expect(evaluateRoom(room(beamD, base)).beams[0]!.nohd_m_reported).toBe('9.96');
+  });
+  for (const c of cases) {
+    it(`${c.name} (${c.source})`, () => {
+      const plan = evaluateRoom(room(beamD, turned(c.mirrorX))).plan!;
+      const doorFindings = plan.findings.filter((f) => f.subjectId === 'D1').map((f) => f.text);
+      expect(doorFindings).toEqual(c.inside ? ['The direct beam of beam D passes door D1 5.5 m along its path, still above the limit (hazard distance 9.96 m).', 'Door D1 is inside the direct-beam zone of beam D.'] : []);
+      expect(plan.runs[0]!.endsAt).toBe('nohd');
+    });
+  }
+});
+
+describe('a drawn path that runs into a wall before its beam dump (derived geometry)', () => {
+  const cases: Array<{ name: string; source: string; dumpX: number; text: string[] }> = [
+    {
+      name: 'a dump drawn 1 m beyond the east wall: the wall is taken to stop the beam, and the officer is asked to check the drawing',
+      source: 'derived: exit x = 1 m, east wall x = 8 m, dump x = 9 m; the beam meets the wall 7 m along its path',
+      dumpX: 9,
+      text: ['The drawn beam path of Laser 1 meets the room wall 7 m along its path, before beam dump 1: the wall is taken to stop the beam there.'],
+    },
+    { name: 'a dump drawn on the east wall itself ends the path there: nothing to check', source: 'derived: the dump at x = 8 m lies on the wall', dumpX: 8, text: [] },
+  ];
+  for (const c of cases) {
+    it(`${c.name} (${c.source})`, () => {
+      // Along y = 3 m, clear of door D1 (y 1–2 m) in the east wall.
+      const plan = evaluateRoom(room(beamA, { paths: [{ laserId: 'L1', exit: p(1, 3), elements: [{ kind: 'dump', at: p(c.dumpX, 3) }] }] })).plan!;
+      expect(plan.findings.filter((f) => f.kind === 'path-meets-wall').map((f) => f.text)).toEqual(c.text);
+      expect(plan.runs[0]!.endDetail).toBe('The direct beam ends at the room wall 7 m along its path.');
+    });
+  }
 });
 
 describe('diffuse-reflection zones (domain notes 1.4: NHZ = √(ρ·P·cosθ/(π·E_L)))', () => {

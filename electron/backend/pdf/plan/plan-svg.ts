@@ -5,7 +5,7 @@
  * the findings say where a zone runs beyond it.
  */
 import type { PlanPointResult, PlanResult, RoomPlan } from '../../../../core/plan/plan-model.js';
-import { labelSide, onwardEnd, pathPoints, planMiddle } from '../../../../core/plan/plan-layout.js';
+import { labelSide, onwardStop, pathPoints, planMiddle } from '../../../../core/plan/plan-layout.js';
 
 const PT_PER_MM = 72 / 25.4;
 const RATIOS = [10, 20, 25, 50, 75, 100, 200, 250, 500, 1000, 2000, 5000];
@@ -104,13 +104,27 @@ export function planSvg(plan: RoomPlan, result: PlanResult | undefined, o: PlanS
   const xs = pts.map((p) => p.x_m);
   const ys = pts.map((p) => p.y_m);
   const margin = o.compact ? 0.35 : 0.6;
-  const x0 = Math.min(...xs) - margin;
-  const x1 = Math.max(...xs) + margin;
-  const y0 = Math.min(...ys) - margin;
-  const y1 = Math.max(...ys) + margin;
+  const fs = o.compact ? 5.5 : 7;
+  // The door notice marks its entrance outside the room: the side of the drawing beyond that door is
+  // made wide enough for the dot and "You are here" (set along the wall), so the words never lie over the room.
+  const entrance = plan.doors.find((d) => d.id === o.entranceId);
+  const out_ = entrance ? labelSide(entrance.a, entrance.b, planMiddle(plan.outline)) : null;
+  const roomFit = (m: { l: number; r: number; b: number; t: number }) =>
+    Math.min(o.maxWidth / (Math.max(...xs) - Math.min(...xs) + m.l + m.r), (o.maxHeight - (o.compact ? 12 : 56)) / (Math.max(...ys) - Math.min(...ys) + m.b + m.t));
+  const side = { l: margin, r: margin, b: margin, t: margin };
+  if (out_) {
+    // A wider margin makes the drawing smaller, so the margin in metres is worked out again a few
+    // times (the margin is small beside the room: it settles at once); 5 % to spare.
+    const key = out_.vertical ? (out_.toward > 0 ? 'l' : 'r') : out_.toward > 0 ? 'b' : 't';
+    for (let i = 0; i < 4; i++) side[key] = Math.max(margin, ((fs * 1.7) / roomFit(side)) * 1.05);
+  }
+  const x0 = Math.min(...xs) - side.l;
+  const x1 = Math.max(...xs) + side.r;
+  const y0 = Math.min(...ys) - side.b;
+  const y1 = Math.max(...ys) + side.t;
   const legendRows = (cols: number) => Math.ceil(9 / cols);
   // Largest drawing at a standard ratio that fits.
-  const fit = Math.min(o.maxWidth / (x1 - x0), (o.maxHeight - (o.compact ? 12 : 56)) / (y1 - y0)); // pt per metre
+  const fit = roomFit(side); // pt per metre
   // The report uses a standard ratio; the small plan on the notice takes all the room it has.
   const ratio = o.compact ? 0 : (RATIOS.find((r) => (1000 / r) * PT_PER_MM <= fit) ?? RATIOS[RATIOS.length - 1] ?? 5000);
   const s = o.compact ? fit : (1000 / ratio) * PT_PER_MM;
@@ -122,7 +136,6 @@ export function planSvg(plan: RoomPlan, result: PlanResult | undefined, o: PlanS
   const X = (x: number) => (x - x0) * s;
   const Y = (y: number) => (y1 - y) * s;
   const P = (p: { x_m: number | string; y_m: number | string }): Pt => [Number(p.x_m), Number(p.y_m)];
-  const fs = o.compact ? 5.5 : 7;
   const out: string[] = [];
   out.push(`<svg xmlns="http://www.w3.org/2000/svg" width="${n(W)}" height="${n(Hd + legendH)}" viewBox="0 0 ${n(W)} ${n(Hd + legendH)}">`);
   out.push(`<rect x="0" y="0" width="${n(W)}" height="${n(Hd)}" fill="#FFFFFF" stroke="#999999" stroke-width="0.5"/>`);
@@ -172,38 +185,32 @@ export function planSvg(plan: RoomPlan, result: PlanResult | undefined, o: PlanS
     else text(X(at.x_m), Y(at.y_m) + (toward < 0 ? fs * 1.4 : -fs * 0.6), t, 'middle', colour, bold);
   };
   // The reader of a door notice stands outside the door: a black dot there, on the side away from the
-  // middle of the room, and "You are here" beside it, outside where it fits in the drawing, else inside.
+  // middle of the room, and "You are here" beside the dot along the wall (turned upright beside a wall
+  // that runs north–south), in the margin kept for it outside the room: never over the room, and never
+  // over the doorway where a beam leaving the room is drawn.
   const youAreHere = (a: Pt, b: Pt) => {
     const { at, vertical, toward } = labelSide(pp(a), pp(b), middle);
-    const mx = at.x_m;
-    const my = at.y_m;
     // Outside: away from the middle of the room.
     const [ox, oy]: Pt = vertical ? [-toward, 0] : [0, -toward];
-    const off = Math.min(fs * 0.9, margin * s * 0.55);
-    const cx = X(mx) + ox * off;
-    const cy = Y(my) - oy * off;
-    out.push(`<circle cx="${n(cx)}" cy="${n(cy)}" r="${n(Math.min(fs * 0.45, off * 0.8))}" fill="#000000"/>`);
+    const off = fs * 0.7;
+    const r = fs * 0.45;
+    const cx = X(at.x_m) + ox * off;
+    const cy = Y(at.y_m) - oy * off;
+    out.push(`<circle cx="${n(cx)}" cy="${n(cy)}" r="${n(r)}" fill="#000000"/>`);
     const words = 'You are here';
-    const w = words.length * fs * 0.53;
-    let x: number;
-    let y: number;
-    let anchor: 'start' | 'middle' | 'end';
-    if (vertical) {
-      const outX = cx + ox * fs * 0.7;
-      const fits = ox > 0 ? outX + w <= W - 2 : outX - w >= 2;
-      x = fits ? outX : X(mx) - ox * fs * 0.7;
-      anchor = (fits ? ox > 0 : ox < 0) ? 'start' : 'end';
-      y = Y(my) + fs * 0.35;
-    } else {
-      const outY = oy > 0 ? cy - fs * 0.7 : cy + fs * 1.2;
-      const fits = outY - fs >= 1 && outY <= Hd - 2;
-      y = fits ? outY : oy > 0 ? Y(my) + fs * 1.5 : Y(my) - fs * 0.7;
-      x = Math.min(Math.max(X(mx), w / 2 + 2), W - w / 2 - 2);
-      anchor = 'middle';
-    }
-    const left = anchor === 'start' ? x : anchor === 'end' ? x - w : x - w / 2;
-    out.push(`<rect x="${n(left - 1)}" y="${n(y - fs * 0.85)}" width="${n(w + 2)}" height="${n(fs * 1.1)}" fill="#FFFFFF" fill-opacity="0.85"/>`);
-    text(x, y, words, anchor, '#000000', true);
+    const w = words.length * fs * 0.6; // bold Roboto, generous
+    const h = fs * 1.1;
+    const gap = r + fs * 0.4;
+    // Centre of the words along the wall: past the dot on the side where they fit.
+    const along = (c: number, max: number) => (c + gap + w <= max - 2 ? c + gap + w / 2 : c - gap - w / 2);
+    const label = (x: number, y: number, upright: boolean) => {
+      out.push(`<g transform="translate(${n(x)} ${n(y)})${upright ? ' rotate(-90)' : ''}">`);
+      out.push(`<rect x="${n(-w / 2 - 1)}" y="${n(-h / 2)}" width="${n(w + 2)}" height="${n(h)}" fill="#FFFFFF" fill-opacity="0.85"/>`);
+      out.push(`<text x="0" y="${n(fs * 0.35)}" font-size="${fs}" text-anchor="middle" fill="#000000" font-weight="bold">${esc(words)}</text>`);
+      out.push('</g>');
+    };
+    if (vertical) label(cx, along(cy, Hd), true);
+    else label(along(cx, W), cy, false);
   };
   for (const w of plan.windows) {
     seg(P(w.a), P(w.b), `stroke="#FFFFFF" stroke-width="${o.compact ? 2.4 : 3.2}"`);
@@ -237,7 +244,7 @@ export function planSvg(plan: RoomPlan, result: PlanResult | undefined, o: PlanS
   for (const path of plan.paths) {
     const chain: Pt[] = pathPoints(path).map(P);
     for (let i = 0; i + 1 < chain.length; i++) seg(chain[i] as Pt, chain[i + 1] as Pt, `stroke="${PLAN_INK.path}" stroke-width="1"`);
-    const arrow = onwardEnd(path, 4 * Math.max(x1 - x0, y1 - y0));
+    const arrow = onwardStop(plan, path, 4 * Math.max(x1 - x0, y1 - y0));
     if (arrow) seg(P(arrow.from), P(arrow.to), `stroke="${PLAN_INK.path}" stroke-width="1" stroke-dasharray="3 2"`);
     const [ex, ey] = P(path.exit);
     out.push(`<rect x="${n(X(ex) - 3)}" y="${n(Y(ey) - 2.5)}" width="4" height="5" fill="#222222"/>`);
