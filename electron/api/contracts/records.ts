@@ -342,6 +342,19 @@ export interface RegisterBase<Seen> {
   readonly seen?: Seen;
 }
 
+/** What the register can delete with a confirmation. */
+export type DeletionKind = 'site' | 'room' | 'person';
+
+/** What deleting a register entry would do, for the confirmation shown before it. */
+export interface DeletionImpact {
+  /** The entry, in the register's words: 'Room B2.14 (Ultrafast laboratory)'. */
+  readonly what: string;
+  /** What is deleted with it, one line each: '2 lasers: "Ti:sapphire oscillator", "Pump laser"'. */
+  readonly alsoDeleted: readonly string[];
+  /** Why it cannot be deleted (signed records refer to it), or null when it can. */
+  readonly refusal: string | null;
+}
+
 /** One line of an assessment list. */
 export interface AssessmentSummary {
   readonly id: Id;
