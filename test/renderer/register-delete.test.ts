@@ -85,7 +85,7 @@ describe('deleting a room', () => {
     await fireEvent.click(screen.getByRole('button', { name: 'Delete room…' }));
     await until(() => screen.queryByRole('alertdialog') !== null);
     const d = within(dialog());
-    expect(d.getByRole('heading').textContent).toBe(`Room A0.07 (${room.name}) cannot be deleted`);
+    expect(d.getByRole('heading').textContent).toBe(`Delete Room A0.07 (${room.name})?`);
     expect(dialog().textContent).toMatch(/it has 1 signed assessment: ".+"\. Signed records are kept, so the room stays in the register\./);
     expect(d.queryByRole('button', { name: 'Delete room' })).toBeNull();
     expect(await store.listRooms(room.siteId)).toHaveLength(1);
@@ -124,7 +124,7 @@ describe('removing a person', () => {
     await fireEvent.click(screen.getByRole('button', { name: 'Edit Dr. Imre Calloway-Senn' }));
     await fireEvent.click(screen.getByRole('button', { name: 'Remove from the register…' }));
     await until(() => screen.queryByRole('alertdialog') !== null);
-    expect(within(dialog()).getByRole('heading').textContent).toBe('Dr. Imre Calloway-Senn (Laser safety officer) cannot be removed from the register');
+    expect(within(dialog()).getByRole('heading').textContent).toBe('Remove Dr. Imre Calloway-Senn (Laser safety officer) from the register?');
     expect(dialog().textContent).toMatch(/they signed 1 assessment: ".+" \(revision 1\)\. Signed records are kept with their signers/);
     await fireEvent.click(within(dialog()).getByRole('button', { name: 'Close' }));
     await fireEvent.click(screen.getByRole('button', { name: 'Edit Dr. Imre Calloway-Senn' }));
