@@ -342,6 +342,19 @@ export interface RegisterBase<Seen> {
   readonly seen?: Seen;
 }
 
+/** What the register can delete with a confirmation. */
+export type DeletionKind = 'site' | 'room' | 'person';
+
+/** What deleting a register entry would do, for the confirmation shown before it. */
+export interface DeletionImpact {
+  /** The entry, in the register's words: 'Room B2.14 (Ultrafast laboratory)'. */
+  readonly what: string;
+  /** What is deleted with it, one line each: '2 lasers: "Ti:sapphire oscillator", "Pump laser"'. */
+  readonly alsoDeleted: readonly string[];
+  /** Why it cannot be deleted (signed records refer to it), or null when it can. */
+  readonly refusal: string | null;
+}
+
 /** One line of an assessment list. */
 export interface AssessmentSummary {
   readonly id: Id;
@@ -406,7 +419,31 @@ export interface VerifyReport {
 // ---------------------------------------------------------------- export / import
 
 export const EXPORT_FORMAT = 'beamwarden-export' as const;
-export const EXPORT_VERSION = 1 as const;
+/** 2: adds the co-signatures (`coSignatures`). Files of version 1 (none) still import. */
+export const EXPORT_VERSION = 2 as const;
+/** Every export format version this Beamwarden imports. */
+export const READABLE_EXPORT_VERSIONS = [1, 2] as const;
+
+/**
+ * A co-signature as carried by an export file (format version 2): what the co-signer's key signed
+ * (co-signature-checks.ts CoSignedStatement, with the assessment and revision number taken from the
+ * revision it names) and the signature; its public key is in the document's signingKeys.
+ */
+export interface ExportedCoSignature {
+  readonly revisionId: Id;
+  readonly personId: Id;
+  readonly name: string;
+  readonly role: string;
+  readonly signedAt: Timestamp;
+  readonly statement: string;
+  /** Link (SHA-256 of the canonical main signed statement) of the signature countersigned. */
+  readonly signedLink: string;
+  /** Record fingerprint of the revision countersigned. */
+  readonly fingerprint: string;
+  readonly keyId: string;
+  readonly trustAnchor: string;
+  readonly signature: string;
+}
 
 export interface ExportedAssessment {
   readonly id: Id;
@@ -418,7 +455,7 @@ export interface ExportedAssessment {
 
 export interface ExportDocument {
   readonly format: typeof EXPORT_FORMAT;
-  readonly version: typeof EXPORT_VERSION;
+  readonly version: (typeof READABLE_EXPORT_VERSIONS)[number];
   readonly exportedAt: Timestamp;
   /** What was exported: a whole site, one room, or one assessment. */
   readonly scope: { readonly kind: 'site' | 'room' | 'assessment'; readonly id: Id };
@@ -428,8 +465,10 @@ export interface ExportDocument {
   readonly eyewear: readonly Eyewear[];
   readonly people: readonly Person[];
   readonly assessments: readonly ExportedAssessment[];
-  /** Public keys of every signature in the document. */
+  /** Public keys of every signature and co-signature in the document. */
   readonly signingKeys: ReadonlyArray<{ readonly keyId: string; readonly publicKey: string }>;
+  /** Co-signatures of the signed revisions in the document (format version 2; absent in version 1). */
+  readonly coSignatures?: readonly ExportedCoSignature[];
 }
 
 /** The officer's explicit admission of exporting sites' keys, after seeing their fingerprints. */
@@ -451,6 +490,10 @@ export interface ImportSummary {
   readonly unchanged: number;
   /** Signed revisions whose key is not on this installation's trust list: imported, shown as unverified. */
   readonly unverified: number;
+  /** Co-signatures added (each checked: signature valid and covering its revision's sign-off). */
+  readonly coSignatures: number;
+  /** Of those, co-signatures whose key is not on this installation's trust list: shown as unverified. */
+  readonly unverifiedCoSignatures: number;
   /** Keys in the file that this installation does not trust (fingerprint and claimed owner). */
   readonly untrustedKeys: ReadonlyArray<{ readonly keyId: string; readonly fingerprint: string; readonly claimedSigner: string }>;
   /** Drafts kept beside the imported version because the two differed (nothing is discarded). */

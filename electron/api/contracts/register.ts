@@ -1,6 +1,8 @@
 /** Contract of the 'register' area: sites, rooms, laser installations, eyewear and people. */
 import type {
   AssessmentSummary,
+  DeletionImpact,
+  DeletionKind,
   Eyewear,
   EyewearDraft,
   Id,
@@ -68,4 +70,7 @@ export type RegisterHandlers = {
   'person-create': (args: PersonDraft) => Promise<Person>;
   'person-update': (args: Patch<Partial<PersonDraft>>) => Promise<Person>;
   'person-delete': (args: Removal<Partial<PersonDraft>>) => Promise<void>;
+
+  /** Before a delete: what goes with the entry, or why it cannot be deleted (signed records are kept). */
+  'register-delete-impact': (args: { readonly kind: DeletionKind; readonly id: Id }) => Promise<DeletionImpact>;
 };

@@ -67,4 +67,9 @@ export const registerTable: AreaTable<RegisterHandlers, ApiContext> = {
   'person-create': { input: PersonDraftSchema, run: (a, { store }) => store.createPerson(a) },
   'person-update': { input: checkedPatchOf(PersonPatchSchema, PersonBaseSchema), run: (a, { store }) => store.updatePerson(a.id, a.patch, a.expected) },
   'person-delete': { input: checkedDeleteOf(PersonBaseSchema), run: (a, { store }) => store.deletePerson(a.id, a.expected) },
+
+  'register-delete-impact': {
+    input: z.strictObject({ kind: z.enum(['site', 'room', 'person'], { error: 'must be site, room or person' }), id: IdSchema }),
+    run: (a, { store }) => store.deletionImpact(a.kind, a.id),
+  },
 };

@@ -70,7 +70,7 @@ export function rowToCoSignature(x: CoSignatureRow, keyTrusted: boolean): CoSign
   return { keyTrusted, revisionId: x.revision_id, personId: x.person_id, name: x.name, role: x.role, signedAt: x.signed_at, statement: x.statement, keyId: x.key_id, keyFingerprint: shortKeyFingerprint(x.key_id) };
 }
 
-export function payloadOf(row: CoSignatureRow, a: AssessmentRow, r: RevisionRow): CoSignedStatement {
+export function payloadOf(row: CoSignatureRow, a: AssessmentRow, r: Pick<RevisionRow, 'id' | 'revision_no'>): CoSignedStatement {
   return {
     format: 'beamwarden-co-signature',
     version: 1,

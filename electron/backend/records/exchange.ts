@@ -1,6 +1,7 @@
 /**
  * Export and import: a whole site, one room or one assessment as one JSON document of our own
- * design, `{ format: 'beamwarden-export', version: 1, ... }` (see types.ts ExportDocument).
+ * design, `{ format: 'beamwarden-export', version: 2, ... }` (see types.ts ExportDocument). Version 2
+ * adds the co-signatures (co-signature-exchange.ts); files of version 1 still import.
  *
  * Import policy (all or nothing, one transaction):
  * - The document is validated against ExportDocumentSchema (strict: unknown fields are errors),
@@ -26,7 +27,7 @@ import { encodeResults, INSERT_SIGNATURE, insertRevisionRow, registerKey, statem
 import { inOrder, parseOrThrow } from './context.js';
 import { admitKeys, ImportAdmissionSchema, unlockPersonalKey } from './personal-keys.js';
 import { appendSigningLog, type SigningLogLine } from './signing-log.js';
-import { readTrustList, shortKeyFingerprint, trustOf } from './trust-list.js';
+import { readTrustList, shortKeyFingerprint, trustOf, type TrustList } from './trust-list.js';
 import { getAssessment, getRevision, listRevisions } from './assessments.js';
 import {
   getInstallation,
@@ -45,13 +46,16 @@ import {
 import { getEyewear, getPerson, replaceEyewear, replaceInstallation } from './register.js';
 import { assumedDefaults, eyewearDefaultsAssumed } from './older-content.js';
 import { keepDraftAsCopy } from './import-conflicts.js';
+import { coSignatureIssues, coSignatureRefusal, coSignaturesOf, coSignerKeys, coSignerNames, importCoSignatures } from './co-signature-exchange.js';
 import { fingerprintOf, keyIdOf, linkOf, verifyStatement } from './signing.js';
 import {
   EXPORT_FORMAT,
   EXPORT_VERSION,
+  READABLE_EXPORT_VERSIONS,
   RecordError,
   type ExportDocument,
   type ExportedAssessment,
+  type ExportedCoSignature,
   type Id,
   type ImportAdmission,
   type ImportIssue,
@@ -87,15 +91,17 @@ async function exportedAssessment(ctx: StoreContext, id: Id): Promise<ExportedAs
   return { id: a.id, roomId: a.roomId, installationId: a.installationId, createdAt: a.createdAt, revisions };
 }
 
-async function signersOf(ctx: StoreContext, assessments: readonly ExportedAssessment[]): Promise<Person[]> {
+async function signersOf(ctx: StoreContext, assessments: readonly ExportedAssessment[], coSigned: readonly ExportedCoSignature[]): Promise<Person[]> {
   const ids = new Set<string>();
   for (const a of assessments) for (const r of a.revisions) if (r.signature?.personId) ids.add(r.signature.personId);
+  for (const c of coSigned) ids.add(c.personId);
   return inOrder([...ids].sort(), (id) => getPerson(ctx, id));
 }
 
-function keysOf(assessments: readonly ExportedAssessment[]): ExportDocument['signingKeys'] {
+function keysOf(assessments: readonly ExportedAssessment[], coSignerKeys: ReadonlyArray<{ keyId: string; publicKey: string }>): ExportDocument['signingKeys'] {
   const keys = new Map<string, string>();
   for (const a of assessments) for (const r of a.revisions) if (r.signature) keys.set(r.signature.keyId, r.signature.publicKey);
+  for (const k of coSignerKeys) keys.set(k.keyId, k.publicKey);
   return [...keys].sort(([a], [b]) => (a < b ? -1 : 1)).map(([keyId, publicKey]) => ({ keyId, publicKey }));
 }
 
@@ -104,6 +110,7 @@ async function document(
   scope: ExportDocument['scope'],
   parts: Pick<ExportDocument, 'sites' | 'rooms' | 'installations' | 'eyewear' | 'assessments'> & { people?: Person[] },
 ): Promise<ExportDocument> {
+  const coSignatures = await coSignaturesOf(ctx, parts.assessments);
   return {
     format: EXPORT_FORMAT,
     version: EXPORT_VERSION,
@@ -113,9 +120,10 @@ async function document(
     rooms: parts.rooms,
     installations: parts.installations,
     eyewear: parts.eyewear,
-    people: parts.people ?? await signersOf(ctx, parts.assessments),
+    people: parts.people ?? await signersOf(ctx, parts.assessments, coSignatures),
     assessments: parts.assessments,
-    signingKeys: keysOf(parts.assessments),
+    signingKeys: keysOf(parts.assessments, await coSignerKeys(ctx, coSignatures)),
+    coSignatures,
   };
 }
 
@@ -173,7 +181,7 @@ function invalid(issues: ImportIssue[]): RecordError {
  * documented defaults (older-content.ts), so a different number is a newer format or not ours.
  */
 function versionProblem(version: unknown): string {
-  const reads = `this Beamwarden reads export format version ${EXPORT_VERSION}`;
+  const reads = `this Beamwarden reads export format versions ${READABLE_EXPORT_VERSIONS.join(' and ')}`;
   if (version === undefined) return `The export file does not say which format version it is; ${reads}.`;
   if (typeof version === 'number' && Number.isInteger(version) && version > EXPORT_VERSION) {
     return `The export file is format version ${version}, written by a newer Beamwarden; ${reads}. Update Beamwarden to import it.`;
@@ -200,7 +208,7 @@ export function parseExportDocument(input: unknown): ExportDocument {
   if (header.data.format !== EXPORT_FORMAT) {
     throw invalid([{ path: 'format', problem: `must be "${EXPORT_FORMAT}" (this is not a Beamwarden export file)` }]);
   }
-  if (header.data.version !== EXPORT_VERSION) {
+  if (!(READABLE_EXPORT_VERSIONS as readonly unknown[]).includes(header.data.version)) {
     const problem = versionProblem(header.data.version);
     throw new RecordError('invalid', `${problem} Nothing was changed.`, [{ path: 'version', problem }]);
   }
@@ -322,6 +330,26 @@ async function crossCheck(ctx: StoreContext, doc: ExportDocument): Promise<Impor
   return issues;
 }
 
+/** Each co-signature of the file checked (co-signature-exchange.ts); any that fails refuses the import. */
+async function refuseForgedCoSignatures(ctx: StoreContext, doc: ExportDocument, trust: TrustList | null): Promise<void> {
+  if (doc.coSignatures === undefined) return;
+  const inFile = new Set(doc.people.map((p) => p.id));
+  const known = new Set<string>();
+  for (const c of doc.coSignatures) {
+    if (inFile.has(c.personId) || (await ctx.q.get('SELECT 1 AS one FROM person WHERE id = ?', c.personId)) !== undefined) known.add(c.personId);
+  }
+  // A revision a co-signature names is signed (checked there), so its signature is present.
+  const issues = coSignatureIssues(doc, (r) => signatureFields(r.signature as Signature), (id) => known.has(id), trust);
+  if (issues.length) throw coSignatureRefusal(issues);
+}
+
+/** Key id -> the name of who signed or countersigned with it in the file (for the admission of keys). */
+function signerNames(doc: ExportDocument): Map<string, string> {
+  const out = coSignerNames(doc);
+  for (const a of doc.assessments) for (const r of a.revisions) if (r.signature) out.set(r.signature.keyId, r.signature.name);
+  return out;
+}
+
 // ---------------------------------------------------------------- import: writing
 
 function signatureFields(s: Signature): StatementFields & { signature: string } {
@@ -376,8 +404,8 @@ export async function importDocument(ctx: StoreContext, input: unknown, rawAdmit
   const issues = await crossCheck(ctx, doc);
   if (issues.length) throw invalid(issues);
   const list = readTrustList(ctx.keyDir).list;
-  const signerOf = new Map<string, string>();
-  for (const a of doc.assessments) for (const r of a.revisions) if (r.signature) signerOf.set(r.signature.keyId, r.signature.name);
+  await refuseForgedCoSignatures(ctx, doc, list);
+  const signerOf = signerNames(doc);
   const untrusted = doc.signingKeys.filter((k) => signerOf.has(k.keyId) && !trustOf(list, k.keyId).trusted);
   let endorser: Awaited<ReturnType<typeof unlockPersonalKey>> | null = null;
   const admit = rawAdmit ? parseOrThrow(ImportAdmissionSchema, rawAdmit, 'Key admission') : null;
@@ -388,6 +416,7 @@ export async function importDocument(ctx: StoreContext, input: unknown, rawAdmit
     endorser = await unlockPersonalKey(ctx, admit.endorserPersonId, admit.endorserPassphrase);
   }
   const count = { sites: 0, rooms: 0, installations: 0, eyewear: 0, people: 0, assessments: 0, revisions: 0, unchanged: 0, unverified: 0 };
+  let coSigned: string[] = [];
   const keptDrafts: KeptDraft[] = [];
   const logLines: SigningLogLine[] = [];
 
@@ -516,6 +545,9 @@ export async function importDocument(ctx: StoreContext, input: unknown, rawAdmit
         count.revisions++;
       }
     }
+    const co = await importCoSignatures(ctx, doc);
+    coSigned = co.added;
+    count.unchanged += co.unchanged;
     await ctx.audit('imported', doc.scope.kind, doc.scope.id, `export of ${doc.exportedAt}`);
   };
   try {
@@ -537,6 +569,8 @@ export async function importDocument(ctx: StoreContext, input: unknown, rawAdmit
   const stillUntrusted = untrusted.filter((k) => !trustOf(after, k.keyId).trusted);
   return {
     ...count,
+    coSignatures: coSigned.length,
+    unverifiedCoSignatures: coSigned.filter((keyId) => !trustOf(after, keyId).trusted).length,
     keptDrafts,
     assumedDefaults: defaultsAssumedIn(doc),
     untrustedKeys: stillUntrusted.map((k) => ({ keyId: k.keyId, fingerprint: shortKeyFingerprint(k.keyId), claimedSigner: signerOf.get(k.keyId) ?? '' })),
@@ -562,8 +596,7 @@ function defaultsAssumedIn(doc: ExportDocument): string[] {
 export function untrustedKeysOf(ctx: StoreContext, input: unknown): ImportSummary['untrustedKeys'] {
   const doc = parseExportDocument(input);
   const list = readTrustList(ctx.keyDir).list;
-  const signerOf = new Map<string, string>();
-  for (const a of doc.assessments) for (const r of a.revisions) if (r.signature) signerOf.set(r.signature.keyId, r.signature.name);
+  const signerOf = signerNames(doc);
   return doc.signingKeys
     .filter((k) => signerOf.has(k.keyId) && !trustOf(list, k.keyId).trusted)
     .map((k) => ({ keyId: k.keyId, fingerprint: shortKeyFingerprint(k.keyId), claimedSigner: signerOf.get(k.keyId) ?? '' }));

@@ -8,6 +8,22 @@ import { MIGRATIONS } from './migrations/index.js';
 
 const normalise = (sql: string): string => sql.replace(/\s+/g, ' ').replace(/;\s*$/, '').trim();
 
+/**
+ * normalise() of trigger texts as read from the file, remembered by their exact text: verify asks
+ * for every assessment, and the same few texts come back each time (the text itself is still read
+ * and compared every time, so a changed trigger is seen at once).
+ */
+const normalised = new Map<string, string>();
+function normaliseRead(sql: string): string {
+  let n = normalised.get(sql);
+  if (n === undefined) {
+    n = normalise(sql);
+    if (normalised.size > 1000) normalised.clear();
+    normalised.set(sql, n);
+  }
+  return n;
+}
+
 /** Trigger name -> normalised CREATE TRIGGER text, as the migrations up to `version` leave them. */
 const expectedCache = new Map<number, Map<string, string>>();
 function expectedTriggers(version: number): Map<string, string> {
@@ -31,7 +47,7 @@ export function missingProtections(db: Db): string[] {
   const version = db.pragma('user_version', { simple: true });
   const expected = expectedTriggers(typeof version === 'number' ? version : 0);
   const present = new Map(
-    (db.prepare("SELECT name, sql FROM sqlite_schema WHERE type = 'trigger'").all() as Array<{ name: string; sql: string }>).map((t) => [t.name, normalise(t.sql)]),
+    (db.prepare("SELECT name, sql FROM sqlite_schema WHERE type = 'trigger'").all() as Array<{ name: string; sql: string }>).map((t) => [t.name, normaliseRead(t.sql)]),
   );
   const out: string[] = [];
   for (const [name, sql] of expected) {

@@ -1,7 +1,8 @@
 /**
- * What still refers to a register entry, in the officer's words ("assessment "Laser hazard
- * evaluation, room B2.14"", "room B2.16"), so that a refused delete names the records instead of
- * SQLite's "FOREIGN KEY constraint failed". The database's foreign keys stay the last guard.
+ * What still refers to a laser, in the officer's words ("assessment "Laser hazard evaluation, room
+ * B2.14""), so that a refused delete names the records instead of SQLite's "FOREIGN KEY constraint
+ * failed". The database's foreign keys stay the last guard. Sites, rooms and people:
+ * register-deletion.ts.
  */
 import type { StoreContext } from './context.js';
 import { RecordError, type Id } from './types.js';
@@ -25,24 +26,6 @@ async function assessmentsWhere(ctx: StoreContext, where: string, id: Id): Promi
 
 export async function referencesToInstallation(ctx: StoreContext, id: Id): Promise<string[]> {
   return await assessmentsWhere(ctx, 'a.installation_id = ?', id);
-}
-
-export async function referencesToRoom(ctx: StoreContext, id: Id): Promise<string[]> {
-  const lasers = (await ctx.q.all('SELECT laser_json FROM laser_installation WHERE room_id = ? ORDER BY created_at', id) as Array<{ laser_json: string }>).map(
-    (r) => `"${(JSON.parse(r.laser_json) as { name: string }).name}"`,
-  );
-  return [...listed('laser', 'lasers', lasers), ...await assessmentsWhere(ctx, 'a.room_id = ?', id)];
-}
-
-export async function referencesToSite(ctx: StoreContext, id: Id): Promise<string[]> {
-  const rooms = (await ctx.q.all('SELECT code AS t FROM room WHERE site_id = ? ORDER BY code', id) as Array<{ t: string }>).map((r) => r.t);
-  const eyewear = (await ctx.q.all('SELECT tag AS t FROM eyewear WHERE site_id = ? ORDER BY tag', id) as Array<{ t: string }>).map((r) => r.t);
-  return [...listed('room', 'rooms', rooms), ...listed('eyewear', 'eyewear', eyewear)];
-}
-
-export async function referencesToPerson(ctx: StoreContext, id: Id): Promise<string[]> {
-  const rows = await ctx.q.all('SELECT r.title AS t, r.revision_no AS n FROM signature s JOIN revision r ON r.id = s.revision_id WHERE s.person_id = ? ORDER BY s.signed_at', id) as Array<{ t: string; n: number }>;
-  return rows.length ? [`signed ${listed('assessment', 'assessments', rows.map((r) => `"${r.t}" (revision ${r.n})`))[0] ?? ''}`] : [];
 }
 
 /** Throws RecordError('conflict') "<what>: <refs> refer to it. <advice>" when anything refers to it. */

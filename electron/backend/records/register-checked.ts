@@ -7,6 +7,7 @@
 import { inTransaction, type StoreContext } from './context.js';
 import * as R from './register.js';
 import { assertEntryCurrent } from './register-versions.js';
+import { deletePersonIfUnsigned, deleteRoomWithDrafts, deleteSiteWithDrafts } from './register-deletion.js';
 import {
   RecordError,
   type Eyewear,
@@ -56,7 +57,7 @@ export function deleteSite(ctx: StoreContext, id: Id, expected?: RegisterBase<Si
   return inTransaction(ctx, 'Site', async (tx) => {
     const now = await orGone(() => R.getSite(tx, id));
     assertEntryCurrent(siteTitle(now, expected?.seen), 'delete', now, expected);
-    await R.deleteSite(tx, id);
+    await deleteSiteWithDrafts(tx, id);
   });
 }
 
@@ -71,7 +72,7 @@ export function deleteRoom(ctx: StoreContext, id: Id, expected?: RegisterBase<Ro
   return inTransaction(ctx, 'Room', async (tx) => {
     const now = await orGone(() => R.getRoom(tx, id));
     assertEntryCurrent(roomTitle(now, expected?.seen), 'delete', now, expected);
-    await R.deleteRoom(tx, id);
+    await deleteRoomWithDrafts(tx, id);
   });
 }
 
@@ -116,6 +117,6 @@ export function deletePerson(ctx: StoreContext, id: Id, expected?: RegisterBase<
   return inTransaction(ctx, 'Person', async (tx) => {
     const now = await orGone(() => R.getPerson(tx, id));
     assertEntryCurrent(personTitle(now, expected?.seen), 'delete', now, expected);
-    await R.deletePerson(tx, id);
+    await deletePersonIfUnsigned(tx, id);
   });
 }

@@ -18,7 +18,7 @@ import {
 import { EyewearSpecSchema, StoredEyewearSpecSchema, StoredLaserInputSchema } from '../schemas/inputs.js';
 import { notFound, parseOrThrow, type StoreContext } from './context.js';
 import { named } from './named-params.js';
-import { referencesToInstallation, referencesToPerson, referencesToRoom, referencesToSite, refuseIfReferenced } from './references.js';
+import { referencesToInstallation, refuseIfReferenced } from './references.js';
 import type {
   Eyewear,
   EyewearCondition,
@@ -92,11 +92,6 @@ export async function updateSite(ctx: StoreContext, id: Id, patch: Partial<SiteD
   );
   return next;
 }
-export async function deleteSite(ctx: StoreContext, id: Id): Promise<void> {
-  const site = await getSite(ctx, id);
-  refuseIfReferenced(`Site "${site.name}" cannot be deleted`, await referencesToSite(ctx, id), 'Move or delete them first.');
-  await guard(ctx, `Site "${site.name}"`, async () => await ctx.q.run('DELETE FROM site WHERE id = ?', id));
-}
 
 // ---------------------------------------------------------------- rooms
 
@@ -161,11 +156,6 @@ export async function updateRoom(ctx: StoreContext, id: Id, patch: Partial<Omit<
     await ctx.q.run(...named('UPDATE room SET code=@code, name=@name, responsible_person=@responsiblePerson, contact=@contact, notes=@notes, updated_at=@updatedAt WHERE id=@id', next)),
   );
   return next;
-}
-export async function deleteRoom(ctx: StoreContext, id: Id): Promise<void> {
-  const room = await getRoom(ctx, id);
-  refuseIfReferenced(`Room ${room.code} cannot be deleted`, await referencesToRoom(ctx, id), 'Its records stay with it.');
-  await guard(ctx, `Room ${room.code}`, async () => await ctx.q.run('DELETE FROM room WHERE id = ?', id));
 }
 
 // ---------------------------------------------------------------- laser installations
@@ -457,11 +447,6 @@ export async function updatePerson(ctx: StoreContext, id: Id, patch: Partial<Per
     await ctx.q.run(...named('UPDATE person SET name=@name, role=@role, email=@email, phone=@phone, updated_at=@updatedAt WHERE id=@id', next)),
   );
   return next;
-}
-export async function deletePerson(ctx: StoreContext, id: Id): Promise<void> {
-  const person = await getPerson(ctx, id);
-  refuseIfReferenced(`${person.name} cannot be removed from the register`, await referencesToPerson(ctx, id), 'Whoever signed records stays in the register.');
-  await guard(ctx, 'Person (someone who signed records stays in the register)', async () => await ctx.q.run('DELETE FROM person WHERE id = ?', id));
 }
 
 // ---------------------------------------------------------------- snapshot for an assessment

@@ -150,8 +150,13 @@ export function signStatement(key: SigningKey, statement: SignedStatement): stri
 }
 
 export function verifyStatement(publicKeyPem: string, statement: SignedStatement, signatureB64: string): boolean {
+  return verifyPayload(publicKeyPem, statement, signatureB64);
+}
+
+/** An Ed25519 signature over the canonical JSON of any signed payload (a statement, a co-signature). */
+export function verifyPayload(publicKeyPem: string, payload: unknown, signatureB64: string): boolean {
   try {
-    return verify(null, Buffer.from(canonicalJson(statement), 'utf8'), publicKeyObject(publicKeyPem), Buffer.from(signatureB64, 'base64'));
+    return verify(null, Buffer.from(canonicalJson(payload), 'utf8'), publicKeyObject(publicKeyPem), Buffer.from(signatureB64, 'base64'));
   } catch {
     return false;
   }

@@ -21,6 +21,7 @@ import { adoptInstallationKey } from './legacy-signatures.js';
 import { defaultDatabasePath } from './paths.js';
 import * as R from './register.js';
 import * as C from './register-checked.js';
+import { deletionImpact } from './register-deletion.js';
 import { laserHistory } from './laser-history.js';
 import { saveWork } from './save-work.js';
 import { defaultBackupFolder } from './safekeeping.js';
@@ -62,6 +63,7 @@ function storeOver(ctx: StoreContext, engine: RecordEngine, info: StoreInfo): Re
     createPerson: (draft) => R.createPerson(ctx, draft),
     updatePerson: (id, patch, expected) => C.updatePerson(ctx, id, patch, expected),
     deletePerson: (id, expected) => C.deletePerson(ctx, id, expected),
+    deletionImpact: (kind, id) => deletionImpact(ctx, kind, id),
     laserHistory: (installationId) => laserHistory(ctx, installationId),
 
     roomInputFromRegister: (roomId) => R.roomInputFromRegister(ctx, roomId),

@@ -9,6 +9,8 @@ import type {
   Assessment,
   AssessmentContent,
   AssessmentSummary,
+  DeletionImpact,
+  DeletionKind,
   BackupReport,
   BackupStatus,
   CalendarDate,
@@ -109,6 +111,8 @@ export interface RecordStore {
   createPerson(draft: PersonDraft): Promise<Person>;
   updatePerson(id: Id, patch: Partial<PersonDraft>, expected?: RegisterBase<Partial<PersonDraft>>): Promise<Person>;
   deletePerson(id: Id, expected?: RegisterBase<Partial<PersonDraft>>): Promise<void>;
+  /** What deleting a site, room or person would delete with it, or why it cannot be deleted. */
+  deletionImpact(kind: DeletionKind, id: Id): Promise<DeletionImpact>;
   /** Every revision in the laser's room that evaluated it, newest first. */
   laserHistory(installationId: Id): Promise<LaserUse[]>;
 

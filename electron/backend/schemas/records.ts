@@ -9,6 +9,7 @@ import type {
   Eyewear,
   EyewearDraft,
   ExportDocument,
+  ExportedCoSignature,
   LaserInstallation,
   LaserInstallationDraft,
   Person,
@@ -270,9 +271,24 @@ export const ExportedAssessmentSchema = z.strictObject({
   revisions: z.array(RevisionSchema).min(1, 'an assessment needs at least one revision'),
 });
 
+/** A co-signature in an export file (format version 2); its public key is in signingKeys. */
+export const ExportedCoSignatureSchema = z.strictObject({
+  revisionId: IdSchema,
+  personId: IdSchema,
+  name: requiredText(),
+  role: requiredText(),
+  signedAt: TimestampSchema,
+  statement: requiredText(2000),
+  signedLink: hex64,
+  fingerprint: hex64,
+  keyId: hex64,
+  trustAnchor: hex64,
+  signature: SignatureSchema.shape.signature,
+});
+
 export const ExportDocumentSchema = z.strictObject({
   format: z.literal('beamwarden-export', { error: 'must be "beamwarden-export"' }),
-  version: z.literal(1, { error: 'must be 1 (this version of Beamwarden reads export version 1 only)' }),
+  version: z.union([z.literal(1), z.literal(2)], { error: 'must be 1 or 2 (the export format versions this Beamwarden reads)' }),
   exportedAt: TimestampSchema,
   scope: z.strictObject({ kind: z.enum(['site', 'room', 'assessment']), id: IdSchema }),
   sites: z.array(SiteSchema),
@@ -282,6 +298,7 @@ export const ExportDocumentSchema = z.strictObject({
   people: z.array(PersonSchema),
   assessments: z.array(ExportedAssessmentSchema),
   signingKeys: z.array(z.strictObject({ keyId: hex64, publicKey: SignatureSchema.shape.publicKey })),
+  coSignatures: z.array(ExportedCoSignatureSchema).optional(),
 });
 
 // ---- compile-time proof that the schemas are the record types (fails to compile on drift)
@@ -299,4 +316,5 @@ assertType<SameShape<z.infer<typeof AssessmentContentSchema>, AssessmentContent>
 assertType<SameShape<z.infer<typeof SignOffSchema>, SignOff>>(true);
 assertType<SameShape<z.infer<typeof SignatureSchema>, Signature>>(true);
 assertType<SameShape<z.infer<typeof RevisionSchema>, Revision>>(true);
+assertType<SameShape<z.infer<typeof ExportedCoSignatureSchema>, ExportedCoSignature>>(true);
 assertType<SameShape<z.infer<typeof ExportDocumentSchema>, ExportDocument>>(true);

@@ -87,7 +87,7 @@ describe('record round trip', () => {
 
     // Export the site and import it into an empty database with its own key.
     const doc = await store.exportSite(site.id);
-    expect(doc).toMatchObject({ format: 'beamwarden-export', version: 1, scope: { kind: 'site', id: site.id } });
+    expect(doc).toMatchObject({ format: 'beamwarden-export', version: 2, scope: { kind: 'site', id: site.id } });
     const other = await openTemp(t.dir, 'other.sqlite');
     try {
       // Another installation does not trust this one's key: imported, but shown as unverified.
