@@ -3,6 +3,10 @@
  *
  *   npm run report -- --demo --out <folder> [--paper A4|Letter] [--units SI|ANSI]
  *   npm run report -- --db <file> --assessment <id> --out <folder> [--revision <id>] [--paper ..] [--units ..]
+ *   npm run report -- --db <file> --site <id> --out <folder> [--paper ..] [--units ..]
+ *
+ * --site writes the current report of every room of the site, one file per room, and all of them
+ * in one PDF (each room's report keeps its own page numbering).
  *
  * --demo loads the invented demo site into a temporary database with a signing key made for the
  * demo, signs each room's assessment as the demo officer, renders the three documents per room
@@ -20,19 +24,22 @@ import {
   documentInputFromAssessment,
   renderDocument,
   renderOptionsSchema,
+  renderSiteReports,
   type DocumentKind,
   type RenderOptions,
 } from '../backend/pdf/index.js';
 
 const USAGE = `Usage:
   npm run report -- --demo --out <folder> [--paper A4|Letter] [--units SI|ANSI]
-  npm run report -- --db <file> --assessment <id> --out <folder> [--revision <id>] [--paper A4|Letter] [--units SI|ANSI]`;
+  npm run report -- --db <file> --assessment <id> --out <folder> [--revision <id>] [--paper A4|Letter] [--units SI|ANSI]
+  npm run report -- --db <file> --site <id> --out <folder> [--paper A4|Letter] [--units SI|ANSI]`;
 
 const ArgsSchema = z
   .object({
     demo: z.boolean().default(false),
     db: z.string().min(1).optional(),
     assessment: z.string().min(1).optional(),
+    site: z.string().min(1).optional(),
     revision: z.string().min(1).optional(),
     out: z.string({ error: '--out <folder> is required' }).min(1, '--out <folder> is required'),
     paper: renderOptionsSchema.shape.paper,
@@ -40,7 +47,8 @@ const ArgsSchema = z
   })
   .strict()
   .refine((a) => a.demo !== (a.db !== undefined), { message: 'give either --demo or --db <file>', path: ['db'] })
-  .refine((a) => a.db === undefined || a.assessment !== undefined, { message: '--db needs --assessment <id>', path: ['assessment'] });
+  .refine((a) => a.db === undefined || (a.assessment !== undefined) !== (a.site !== undefined), { message: '--db needs either --assessment <id> or --site <id>', path: ['assessment'] })
+  .refine((a) => a.site === undefined || a.revision === undefined, { message: '--site prints each room\'s current revision; --revision goes with --assessment', path: ['revision'] });
 
 export type ReportArgs = z.infer<typeof ArgsSchema>;
 
@@ -65,6 +73,26 @@ export async function writeDocuments(store: RecordStore, assessmentId: string, o
     writeFileSync(file, await renderDocument(kind, doc, opts));
     files.push(file);
   }
+  return files;
+}
+
+/**
+ * The current report of every room of a site: one file per room (room code and revision in its
+ * name, DRAFT where unsigned) and all of them in one PDF, in the register's room order.
+ */
+export async function writeSiteReports(store: RecordStore, siteId: string, outDir: string, opts: RenderOptions): Promise<string[]> {
+  const site = await store.getSite(siteId);
+  const reports = await renderSiteReports(store, site.id, opts);
+  mkdirSync(outDir, { recursive: true });
+  const files: string[] = [];
+  for (const r of reports.rooms) {
+    const file = join(outDir, `${safeName(r.code)}-${DOCUMENT_FILE_NAME.report}-rev${r.revisionNo}-${r.draft ? 'DRAFT' : 'signed'}.pdf`);
+    writeFileSync(file, r.pdf);
+    files.push(file);
+  }
+  const all = join(outDir, `${safeName(site.name)}-${DOCUMENT_FILE_NAME.report}s-every-room.pdf`);
+  writeFileSync(all, reports.pdf);
+  files.push(all);
   return files;
 }
 
@@ -114,7 +142,7 @@ export async function main(argv: readonly string[]): Promise<number> {
   } else {
     const store = await openRecordStore({ path: resolve(args.db as string), readonly: true });
     try {
-      files = await writeDocuments(store, args.assessment as string, out, opts, args.revision);
+      files = args.site !== undefined ? await writeSiteReports(store, args.site, out, opts) : await writeDocuments(store, args.assessment as string, out, opts, args.revision);
     } finally {
       await store.close();
     }

@@ -5,13 +5,16 @@
  * The room is made of ten lasers of the invented demo site (one beam each); the evaluation and
  * the document input are set up untimed. Medians over repeated runs after one warm-up render.
  * Plot curves are kept across renders (electron/backend/pdf/plots/curve-cache.ts), so the report
- * line times a re-print; the "first print" line clears them before each run (no target: shown so
- * the cost of computing the curves stays visible).
+ * line times a re-print; the "first print" line clears them before each run: the room's report
+ * printed for the first time by a running application (target below 0.5 s, issue 12). The parsed
+ * fonts and the shaped words (electron/backend/pdf/shared-fonts.ts) belong to the process, not to
+ * a room, and are kept; the last line clears the shaped words too, so what they save stays visible.
  * Run alone: npx tsx test/bench/pdf.bench.ts
  */
 import { renderDoorNotice, renderReport, type RenderOptions } from '../../electron/backend/pdf/index.js';
 import { benchDocument, tenLaserRoom } from '../backend/pdf/ten-laser-room.js';
 import { clearPlotCurveCaches } from '../../electron/backend/pdf/plots/curve-cache.js';
+import { clearSharedWordLayouts } from '../../electron/backend/pdf/shared-fonts.js';
 import { median, type BenchEntry } from './registry.js';
 
 const RUNS = 5;
@@ -35,10 +38,16 @@ export async function runPdfBench(): Promise<BenchEntry[]> {
     clearPlotCurveCaches();
     return renderReport(doc, opts);
   });
+  const firstPrintNoWords = await timeAsync(RUNS, () => {
+    clearPlotCurveCaches();
+    clearSharedWordLayouts();
+    return renderReport(doc, opts);
+  });
   const notice = await timeAsync(RUNS, () => renderDoorNotice(doc, opts));
   return [
     { name: 'pdf: assessment report, 10-laser room', median_ms: report, runs: RUNS, target_ms: 1500 },
-    { name: 'pdf: assessment report, 10-laser room, first print (plot curves computed)', median_ms: firstPrint, runs: RUNS },
+    { name: 'pdf: assessment report, 10-laser room, first print (plot curves computed)', median_ms: firstPrint, runs: RUNS, target_ms: 500 },
+    { name: 'pdf: assessment report, 10-laser room, first print, shaped words not kept', median_ms: firstPrintNoWords, runs: RUNS },
     { name: 'pdf: door notice, 10-laser room', median_ms: notice, runs: RUNS, target_ms: 500 },
   ];
 }

@@ -43,7 +43,7 @@ describe('defaults assumed for content from an older version', () => {
     const view = within(render(AssumedDefaults).container);
     const note = view.getByTestId('assumed-defaults').textContent ?? '';
     expect(note).toContain('Saved by an older version of Beamwarden.');
-    expect(note).toMatch(/Irradiated skin area: not given, so the large-area skin limit is not applied .*saved with beamwarden-core 0\.1\.0/);
+    expect(note).toMatch(/Irradiated skin area: not given, so the large-area skin limit .* is not applied .*saved by version 0\.1\.0 of the Beamwarden calculation/);
     expect(note).not.toMatch(/skinArea_m2|\[\d\]/);
     // a change and a save with this version: the defaults become the officer's own choice
     if (session.draft) session.draft.notes = 'checked after the update';

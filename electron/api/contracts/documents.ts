@@ -24,7 +24,8 @@ export interface DocumentRequest {
 }
 
 export interface SiteDocumentRequest {
-  readonly kind: 'door-notice';
+  /** Door notices (one page per room) or assessment reports (each room's report with its own page numbering). */
+  readonly kind: 'door-notice' | 'report';
   readonly siteId: Id;
   readonly paper: 'A4' | 'Letter';
   readonly units: 'SI' | 'ANSI';
@@ -32,6 +33,9 @@ export interface SiteDocumentRequest {
 
 export type DocumentHandlers = {
   'document-render': (args: DocumentRequest) => Promise<BinaryFile>;
-  /** The door notices of every room of a site (current revisions) in one PDF, one page per room. */
+  /**
+   * The door notices (one page per room) or the assessment reports of every room of a site
+   * (current revisions) in one PDF, in the register's room order.
+   */
   'document-render-site': (args: SiteDocumentRequest) => Promise<BinaryFile>;
 };

@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import { IdSchema } from '../../backend/schemas/index.js';
-import { DOCUMENT_FILE_NAME, documentInputFromAssessment, renderDocument, renderSiteDoorNotices } from '../../backend/pdf/index.js';
+import { DOCUMENT_FILE_NAME, documentInputFromAssessment, renderDocument, renderSiteDoorNotices, renderSiteReports } from '../../backend/pdf/index.js';
 import type { DocumentHandlers } from '../contracts/documents.js';
 import type { ApiContext } from '../context.js';
 import type { AreaTable } from '../operation.js';
@@ -18,7 +18,7 @@ export const DocumentRequestSchema = z.strictObject({
 });
 
 export const SiteDocumentRequestSchema = z.strictObject({
-  kind: z.literal('door-notice'),
+  kind: z.enum(['door-notice', 'report']),
   siteId: IdSchema,
   paper: z.enum(['A4', 'Letter']),
   units: z.enum(['SI', 'ANSI']),
@@ -52,7 +52,12 @@ export const documentTable: AreaTable<DocumentHandlers, ApiContext> = {
     input: SiteDocumentRequestSchema,
     run: async (req, { store }) => {
       const site = await store.getSite(req.siteId);
-      const batch = await renderSiteDoorNotices(store, site.id, { paper: req.paper, units: req.units });
+      const opts = { paper: req.paper, units: req.units };
+      if (req.kind === 'report') {
+        const reports = await renderSiteReports(store, site.id, opts);
+        return { fileName: `assessment-reports-${fileSafe(site.name)}-${reports.rooms.length}-rooms.pdf`, mime: 'application/pdf', base64: reports.pdf.toString('base64') };
+      }
+      const batch = await renderSiteDoorNotices(store, site.id, opts);
       return { fileName: `door-notices-${fileSafe(site.name)}-${batch.rooms.length}-rooms.pdf`, mime: 'application/pdf', base64: batch.pdf.toString('base64') };
     },
   },

@@ -19,6 +19,7 @@ export function renderReport(doc: DocumentInput, opts: RenderOptions): Promise<B
 
 export { pdfPageCount } from './page-count.js';
 export { renderSiteDoorNotices, type SiteBatch } from './site-batch.js';
+export { renderSiteReports, type SiteReports, type SiteReportRoom } from './site-reports.js';
 
 /**
  * The door notice is one page, whatever the room: when the content does not fit, it is set again

@@ -28,10 +28,18 @@ interface Fontkit {
 
 interface PdfmakeDocumentProto {
   provideFont(this: PdfkitDocument, family: string, bold: boolean, italics: boolean): unknown;
+  font(this: PdfkitDocument, ...args: unknown[]): unknown;
+}
+
+/** The part of pdfkit's embedded-font object read here: the parsed font and its per-document word cache. */
+interface PdfkitFont {
+  font?: unknown;
+  layoutCache?: Record<string, unknown>;
 }
 
 interface PdfkitDocument {
   registerFont(name: string, src: Uint8Array): unknown;
+  _font?: PdfkitFont;
 }
 
 const requireHere = createRequire(import.meta.url);
@@ -99,6 +107,7 @@ export function shareParsedFonts(fonts: TFontDictionary): void {
     }
   }
   if (tags.size === 0) return;
+  shareWordLayouts(documentProto);
   const provideFont = documentProto.provideFont;
   const registeredDocs = new WeakSet<object>();
   documentProto.provideFont = function (this: PdfkitDocument, family: string, bold: boolean, italics: boolean): unknown {
@@ -109,3 +118,55 @@ export function shareParsedFonts(fonts: TFontDictionary): void {
     return provideFont.call(this, family, bold, italics);
   };
 }
+
+/**
+ * Word shapes shared across documents. pdfkit keeps, per document and font, a cache from each word
+ * to its shaped glyph run (fontkit's substitution and positioning, the bulk of measuring text); a
+ * new document starts it empty, so every report shaped its whole vocabulary again. The run depends
+ * only on the parsed font and the word (pdfkit calls it without features and scales it to its fixed
+ * 1000-unit em, and never changes a cached run), so documents using the same parsed font can share
+ * one cache. Bounded: past WORD_CACHE_LIMIT words a fresh cache is started for later documents.
+ */
+const WORD_CACHE_LIMIT = 50_000;
+const wordCaches = new Map<unknown, Record<string, unknown>>();
+
+/** The shared word cache of one parsed font; counted (once per document and font) and started afresh past the bound. */
+function sharedWordCache(parsedFont: unknown): Record<string, unknown> {
+  let words = wordCaches.get(parsedFont);
+  if (words === undefined || Object.keys(words).length > WORD_CACHE_LIMIT) {
+    words = Object.create(null) as Record<string, unknown>;
+    wordCaches.set(parsedFont, words);
+  }
+  return words;
+}
+
+/** Forget the shared word shapes (the benchmark shows a first print without them). */
+export function clearSharedWordLayouts(): void {
+  wordCaches.clear();
+}
+
+let sharingWords = true;
+
+/**
+ * Off: documents started from now on keep pdfkit's own per-document word cache, as without this
+ * module (a test compares the two; nothing else turns it off).
+ */
+export function setWordShapeSharing(on: boolean): void {
+  sharingWords = on;
+}
+
+function shareWordLayouts(documentProto: PdfmakeDocumentProto): void {
+  const font = documentProto.font;
+  const shared = new Set(parsed);
+  documentProto.font = function (this: PdfkitDocument, ...args: unknown[]): unknown {
+    const out = font.apply(this, args);
+    const current = this._font;
+    if (sharingWords && current !== undefined && shared.has(current.font) && current.layoutCache !== undefined && !wordCacheOwners.has(current)) {
+      wordCacheOwners.add(current);
+      current.layoutCache = sharedWordCache(current.font);
+    }
+    return out;
+  };
+}
+
+const wordCacheOwners = new WeakSet<object>();

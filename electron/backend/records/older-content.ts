@@ -40,13 +40,13 @@ const NEWER_BEAM_INPUTS: readonly NewerInput[] = [
   {
     since: [0, 2, 0],
     label: 'Irradiated skin area',
-    assumed: 'not given, so the large-area skin limit is not applied (limit specification 4.3)',
+    assumed: 'not given, so the large-area skin limit (IEC 60825-1 / ANSI Z136.1, more than 10 s over more than 0.01 m²) is not applied',
     absentIn: (b) => b.skinArea_m2 === undefined,
   },
   {
     since: [0, 2, 0],
     label: 'Deliberate viewing duration',
-    assumed: '600 s (customary for looking at a diffuse spot on purpose; from memory)',
+    assumed: '600 s (the customary value for looking at a diffuse spot on purpose; not yet checked against the published text)',
     absentIn: (b) => b.viewing?.diffuse !== undefined && b.viewing.diffuse.deliberateDuration_s === undefined,
   },
   {
@@ -77,9 +77,7 @@ export function assumedDefaults(content: AssessmentContent, calculatedWith: stri
     }
     if (places.length === 0) continue;
     const where = places.length > MAX_PLACES ? `${places.slice(0, MAX_PLACES).join('; ')} and ${places.length - MAX_PLACES} more` : places.join('; ');
-    out.push(
-      `${input.label}: ${input.assumed} — saved with ${calculatedWith}, before this input existed (${where}).`,
-    );
+    out.push(`${input.label}: ${input.assumed} — saved by version ${v.join('.')} of the Beamwarden calculation, before this input existed (${where}).`);
   }
   return out;
 }

@@ -37,6 +37,21 @@ describe('one page for every room size', () => {
       }, 60_000);
 });
 
+describe('one page in the most crowded form', () => {
+  // 20 lasers, long names, every control accepted, the signal word raised to DANGER, unsigned
+  // (DRAFT mark) and in the ANSI unit habit: still one sheet for the door.
+  for (const paper of PAPERS)
+    it(`20 lasers, DANGER, draft, ANSI units, ${paper}`, async () => {
+      const doc = { ...generatedDocument({ lasers: 20, longNames: true, allControls: true }), signature: null, emergencyContact: 'Site security control room, extension 2222 (24 h)' };
+      const pdf = await renderDoorNotice(doc, { paper, units: 'ANSI', signalWord: 'DANGER' });
+      expect(pdfInfo(pdf).pages).toBe(1);
+      const text = squash(pageTexts(pdf).join(' '));
+      expect(text).toContain('DANGER');
+      expect(text).toContain('DRAFT');
+      for (const l of doc.content.input.lasers) expect(text, l.name).toContain(squash(l.name));
+    }, 60_000);
+});
+
 describe('"Before you enter" is for the person at the door', () => {
   it('no administrative control of the officer is copied onto the notice; emergency and eyewear are', async () => {
     const doc = { ...generatedDocument({ lasers: 5, allControls: true }), emergencyContact: 'Security desk, extension 2222' };

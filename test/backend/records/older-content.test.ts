@@ -36,7 +36,7 @@ const keep = async (made: Promise<RecordStore>): Promise<RecordStore> => {
   return s;
 };
 
-const SKIN = /^Irradiated skin area: not given, so the large-area skin limit is not applied \(limit specification 4\.3\) — saved with beamwarden-core 0\.1\.0, before this input existed \(/;
+const SKIN = /^Irradiated skin area: not given, so the large-area skin limit \(IEC 60825-1 \/ ANSI Z136\.1, more than 10 s over more than 0\.01 m²\) is not applied — saved by version 0\.1\.0 of the Beamwarden calculation, before this input existed \(/;
 
 function withDiffuse(c: AssessmentContent): AssessmentContent {
   const l0 = c.input.lasers[0];
@@ -74,10 +74,10 @@ describe('stored content from an older calculation', () => {
     const said = (await older.getAssessment(made.id)).assumedDefaults;
     expect(said).toHaveLength(3);
     expect(said[1]).toBe(
-      `Deliberate viewing duration: 600 s (customary for looking at a diffuse spot on purpose; from memory) — saved with ${OLD}, before this input existed (Erbium fibre amplifier, Erbium fibre amplifier 1550 nm).`,
+      'Deliberate viewing duration: 600 s (the customary value for looking at a diffuse spot on purpose; not yet checked against the published text) — saved by version 0.1.0 of the Beamwarden calculation, before this input existed (Erbium fibre amplifier, Erbium fibre amplifier 1550 nm).',
     );
     expect(said[2]).toBe(
-      `Case that sets the diffuse hazard distance: the larger of the accidental and the deliberate viewing distances — saved with ${OLD}, before this input existed (Erbium fibre amplifier, Erbium fibre amplifier 1550 nm).`,
+      'Case that sets the diffuse hazard distance: the larger of the accidental and the deliberate viewing distances — saved by version 0.1.0 of the Beamwarden calculation, before this input existed (Erbium fibre amplifier, Erbium fibre amplifier 1550 nm).',
     );
     // the same content saved by this version: nothing assumed
     const now = await keep(openTemp(t.dir, 'now.sqlite'));

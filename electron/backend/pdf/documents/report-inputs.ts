@@ -5,6 +5,7 @@ import { dec, roundPlaces, roundSig } from '../../../../core/numeric/decimal.js'
 import { formatSI, plain } from '../../../../core/units/quantities.js';
 import type { UnitHabit } from '../../../../core/units/quantities.js';
 import type { DocumentInput } from '../document-input.js';
+import { assumedDefaults } from '../../records/older-content.js';
 import { bullets, gridTable, heading, headingOnNewPage, headingWith, paragraph } from '../blocks.js';
 import * as fmt from '../format.js';
 import { COLOR } from '../page.js';
@@ -123,7 +124,29 @@ export function inputsSection(doc: DocumentInput, view: RoomView, units: UnitHab
         9,
       ),
     ),
+    ...olderRecordSection(doc),
     ...(additive.length > 0 ? [heading('Beams acting on the same tissue and effect (added)', 2), bullets(additive, 8.5)] : []),
+  ];
+}
+
+/**
+ * A revision saved by an older version lacks inputs added since; the calculation used their
+ * documented defaults (electron/backend/records/older-content.ts), and the paper says which, as
+ * the workspace does, so the officer and an auditor can check them.
+ */
+function olderRecordSection(doc: DocumentInput): Content[] {
+  const assumed = assumedDefaults(doc.content, doc.assessment.calculatedWith);
+  if (assumed.length === 0) return [];
+  return [
+    headingWith(
+      'Assumed for this older record',
+      2,
+      paragraph(
+        'This revision was saved by an older version of Beamwarden, before the inputs below existed. The results use their defaults, as stated; check them and save a new revision to record your own values.',
+        { fontSize: 8.5 },
+      ),
+    ),
+    bullets(assumed, 8.5),
   ];
 }
 

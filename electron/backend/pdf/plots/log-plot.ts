@@ -1,8 +1,34 @@
 /**
  * A small log-log line plot drawn as SVG text for pdfmake (vector, so it prints sharp at any size).
  * Only what the two report plots need: decade axes, line series, point markers, vertical and
- * horizontal reference lines with labels.
+ * horizontal reference lines with labels. Labels are placed where they cover no
+ * curve, line or other label (core/plot/label-placement.ts, shared with the screen's plots); the
+ * curves and lines carry data-role="line" and the labels data-role="label" so a test can check
+ * that from the document definition.
  */
+import {
+  candidatesAlongHorizontal,
+  candidatesAlongVertical,
+  candidatesAroundPoint,
+  candidatesInCorners,
+  candidatesInFrame,
+  nearestPointOfBox,
+  placeLabels,
+  textBoxSize,
+  type LabelBox,
+  type LabelRequest,
+  type PlotPoint,
+} from '../../../../core/plot/label-placement.js';
+
+/** Label text size (pt), marker radius, legend row geometry (above the frame), and where the baseline sits in a text box (Roboto's ascent). */
+const LABEL_PT = 7.5;
+const MARKER_R = 3.2;
+const LEGEND_SWATCH = 20;
+const LEGEND_ROW = 10;
+const BASELINE = 0.95;
+/** A marker's label further than this from it gets a thin leader line to it. */
+const LEADER_BEYOND = MARKER_R + 2 + 2.5 * LABEL_PT * 1.2;
+
 export interface Series {
   readonly label: string;
   readonly points: ReadonlyArray<readonly [number, number]>;
@@ -65,7 +91,9 @@ function decades(values: readonly number[]): [number, number] {
 }
 
 export function logPlotSvg(p: LogPlot): string {
-  const m = { left: 46, right: 10, top: 8, bottom: 30 };
+  // The legend stands in a band above the frame (a short line and the series name per row), so it
+  // can never cover a curve: inside a crowded frame there is not always room for it.
+  const m = { left: 46, right: 10, top: 8 + p.series.length * LEGEND_ROW, bottom: 30 };
   const w = p.width - m.left - m.right;
   const h = p.height - m.top - m.bottom;
   const xs = [...p.series.flatMap((s) => s.points.map((pt) => pt[0])), ...(p.markers ?? []).map((k) => k.x), ...(p.vLines ?? []).map((l) => l.at)];
@@ -100,39 +128,81 @@ export function logPlotSvg(p: LogPlot): string {
   out.push(`<rect x="${m.left}" y="${m.top}" width="${w}" height="${h}" fill="none" stroke="#444444" stroke-width="0.8"/>`);
   out.push(`<text x="${n(m.left + w / 2)}" y="${p.height - 4}" font-size="8" text-anchor="middle" fill="#000000">${esc(p.xLabel)}</text>`);
   out.push(`<text x="10" y="${n(m.top + h / 2)}" font-size="8" text-anchor="middle" fill="#000000" transform="rotate(-90 10 ${n(m.top + h / 2)})">${esc(p.yLabel)}</text>`);
+  const frame: LabelBox = { x: m.left, y: m.top, w, h };
+  const lines: PlotPoint[][] = [];
+  const lineOut: string[] = [];
   for (const l of p.hLines ?? []) {
     const y = Y(l.at);
-    out.push(`<line x1="${m.left}" y1="${n(y)}" x2="${m.left + w}" y2="${n(y)}" stroke="${l.color}" stroke-width="1" stroke-dasharray="4 2"/>`);
-    out.push(`<text x="${m.left + w - 3}" y="${n(y - 3)}" font-size="7.5" text-anchor="end" fill="${l.color}">${esc(l.label)}</text>`);
+    lines.push([{ x: m.left, y }, { x: m.left + w, y }]);
+    lineOut.push(`<line data-role="line" x1="${m.left}" y1="${n(y)}" x2="${m.left + w}" y2="${n(y)}" stroke="${l.color}" stroke-width="1" stroke-dasharray="4 2"/>`);
   }
   for (const l of p.vLines ?? []) {
     const x = X(l.at);
-    out.push(`<line x1="${n(x)}" y1="${m.top}" x2="${n(x)}" y2="${m.top + h}" stroke="${l.color}" stroke-width="1.2"/>`);
-    const anchorEnd = x > m.left + w * 0.7;
-    // Label at the foot of the line: the legend sits at the top left.
-    out.push(`<text x="${n(anchorEnd ? x - 3 : x + 3)}" y="${m.top + h - 4}" font-size="7.5" text-anchor="${anchorEnd ? 'end' : 'start'}" fill="${l.color}" font-weight="bold">${esc(l.label)}</text>`);
+    lines.push([{ x, y: m.top }, { x, y: m.top + h }]);
+    lineOut.push(`<line data-role="line" x1="${n(x)}" y1="${m.top}" x2="${n(x)}" y2="${m.top + h}" stroke="${l.color}" stroke-width="1.2"/>`);
   }
   for (const s of p.series) {
     const pts = s.points.filter(([a, b]) => a > 0 && b > 0 && Number.isFinite(a) && Number.isFinite(b));
     if (pts.length < 2) continue;
+    lines.push(pts.map(([a, b]) => ({ x: X(a), y: Y(b) })));
     const d = pts.map(([a, b], i) => `${i === 0 ? 'M' : 'L'}${n(X(a))} ${n(Y(b))}`).join(' ');
-    out.push(`<path d="${d}" fill="none" stroke="${s.color}" stroke-width="1.4"${s.dashed ? ' stroke-dasharray="3 2"' : ''}/>`);
+    lineOut.push(`<path data-role="line" d="${d}" fill="none" stroke="${s.color}" stroke-width="1.4"${s.dashed ? ' stroke-dasharray="3 2"' : ''}/>`);
   }
+  out.push(...lineOut);
+  const markerBoxes: LabelBox[] = [];
   for (const k of p.markers ?? []) {
     const x = X(k.x);
     const y = Y(k.y);
-    out.push(`<circle cx="${n(x)}" cy="${n(y)}" r="3.2" fill="${k.color}" stroke="#000000" stroke-width="0.6"/>`);
-    const anchorEnd = x > m.left + w * 0.6;
-    out.push(`<text x="${n(anchorEnd ? x - 6 : x + 6)}" y="${n(y - 5)}" font-size="7.5" text-anchor="${anchorEnd ? 'end' : 'start'}" fill="#000000">${esc(k.label)}</text>`);
+    markerBoxes.push({ x: x - MARKER_R, y: y - MARKER_R, w: 2 * MARKER_R, h: 2 * MARKER_R });
+    out.push(`<circle cx="${n(x)}" cy="${n(y)}" r="${MARKER_R}" fill="${k.color}" stroke="#000000" stroke-width="0.6"/>`);
   }
-  // legend, top left inside the frame
-  let ly = m.top + 10;
-  for (const s of p.series) {
-    out.push(`<line x1="${m.left + 6}" y1="${ly - 2.5}" x2="${m.left + 20}" y2="${ly - 2.5}" stroke="${s.color}" stroke-width="1.4"${s.dashed ? ' stroke-dasharray="3 2"' : ''}/>`);
-    out.push(`<text x="${m.left + 24}" y="${ly}" font-size="7.5" fill="#000000">${esc(s.label)}</text>`);
-    ly += 10;
+  // Labels: placed where they cover no curve, line, marker or other label (core/plot/label-placement.ts).
+  const requests: LabelRequest[] = [];
+  const texts: Array<{ id: string; draw: (b: LabelBox) => string }> = [];
+  const textLabel = (id: string, text: string, size: number, attrs: string, candidates: (wd: number, ht: number) => PlotPoint[], leaderFrom?: PlotPoint): void => {
+    const { width, height } = textBoxSize(text, size);
+    requests.push({ id, width, height, candidates: candidates(width, height), ...(leaderFrom === undefined ? {} : { leaderFrom, leaderBeyond: LEADER_BEYOND }) });
+    texts.push({ id, draw: (b) => `<text data-role="label" x="${n(b.x)}" y="${n(b.y + size * BASELINE)}" font-size="${size}" ${attrs}>${esc(text)}</text>` });
+  };
+  (p.vLines ?? []).forEach((l, i) => {
+    const x = X(l.at);
+    textLabel(`v${i}`, l.label, LABEL_PT, `fill="${l.color}" font-weight="bold"`, (wd, ht) => candidatesAlongVertical(x, m.top, m.top + h, wd, ht, 3));
+  });
+  (p.hLines ?? []).forEach((l, i) => {
+    const y = Y(l.at);
+    textLabel(`h${i}`, l.label, LABEL_PT, `fill="${l.color}"`, (wd, ht) => candidatesAlongHorizontal(y, m.left, m.left + w, wd, ht, 2.5));
+  });
+  const markerAt = new Map<string, PlotPoint>();
+  (p.markers ?? []).forEach((k, i) => {
+    const at = { x: X(k.x), y: Y(k.y) };
+    markerAt.set(`m${i}`, at);
+    // Near the point first; anywhere in the frame as a last resort (then with a leader to the point).
+    textLabel(`m${i}`, k.label, LABEL_PT, 'fill="#000000"', (wd, ht) => [...candidatesAroundPoint(at, wd, ht, MARKER_R), ...candidatesInFrame(frame, wd, ht, 3)], at);
+  });
+  if (p.note !== undefined) {
+    textLabel('note', p.note, LABEL_PT, 'fill="#1B6E2E" font-weight="bold"', (wd, ht) => {
+      const c = candidatesInCorners(frame, wd, ht, 5);
+      return [c[2], c[0], c[3], c[1]].filter((q): q is PlotPoint => q !== undefined);
+    });
   }
-  if (p.note !== undefined) out.push(`<text x="${m.left + 6}" y="${m.top + h - 6}" font-size="7.5" fill="#1B6E2E" font-weight="bold">${esc(p.note)}</text>`);
+  p.series.forEach((s, i) => {
+    const top = 4 + i * LEGEND_ROW;
+    const mid = top + LEGEND_ROW / 2;
+    out.push(`<line x1="${m.left + 2}" y1="${n(mid)}" x2="${m.left + 16}" y2="${n(mid)}" stroke="${s.color}" stroke-width="1.4"${s.dashed ? ' stroke-dasharray="3 2"' : ''}/>`);
+    out.push(`<text x="${m.left + LEGEND_SWATCH}" y="${n(top + (LEGEND_ROW - LABEL_PT * 1.2) / 2 + LABEL_PT * BASELINE)}" font-size="${LABEL_PT}" fill="#000000">${esc(s.label)}</text>`);
+  });
+  const placed = placeLabels(requests, { lines, boxes: markerBoxes }, { frame, pad: 2 });
+  for (const pl of placed) {
+    const at = markerAt.get(pl.id);
+    if (at !== undefined) {
+      const q = nearestPointOfBox(at, pl.box);
+      if (Math.hypot(q.x - at.x, q.y - at.y) > LEADER_BEYOND) {
+        out.push(`<line x1="${n(at.x)}" y1="${n(at.y)}" x2="${n(q.x)}" y2="${n(q.y)}" stroke="#666666" stroke-width="0.5"/>`);
+      }
+    }
+    const t = texts.find((x) => x.id === pl.id);
+    if (t !== undefined) out.push(t.draw(pl.box));
+  }
   out.push('</svg>');
   return out.join('');
 }
