@@ -4,7 +4,7 @@
  * <date>" — taken from the checks the revision used (its settings), so a reprint of a signed
  * revision says exactly what it said when signed.
  */
-import { factorPieceKey, ruleSetTable, type RowCheck, type RuleSetId } from '../../../core/index.js';
+import { allSteps, factorPieceKey, ruleSetTable, type RowCheck, type RuleSetId } from '../../../core/index.js';
 import type { TraceStep } from '../../../core/trace/trace.js';
 import type { DocumentInput } from './document-input.js';
 
@@ -39,4 +39,32 @@ export function checkForStep(checks: ReadonlyMap<string, RowCheck>, ruleSet: Rul
   if (!def.pieces) return checks.get(factorPieceKey(s.label));
   const piece = def.pieces.find((p) => s.detail === p.expr || s.detail.startsWith(`${p.expr} `) || (p.conservative_alt !== undefined && s.detail.startsWith(`${p.conservative_alt} `)));
   return piece ? checks.get(factorPieceKey(s.label, piece)) : undefined;
+}
+
+/** The checks of the rows and factors the results actually use, in the order the traces name them. */
+export function checksUsed(doc: Pick<DocumentInput, 'content' | 'results'>): RowCheck[] {
+  const checks = checksOf(doc);
+  if (checks.size === 0) return [];
+  const out = new Map<string, RowCheck>();
+  for (const t of [...doc.results.beams.map((b) => b.trace), doc.results.trace]) {
+    for (const s of allSteps(t)) {
+      const c = checkForStep(checks, doc.results.ruleSet, s);
+      if (c) out.set(c.key, c);
+    }
+  }
+  return [...out.values()];
+}
+
+/**
+ * One sentence for the notice and the eyewear sheet (inside the caution block): the checked rows
+ * their figures rest on, each cited in words; more than two are summed up and left to the report.
+ */
+export function checksSentence(doc: Pick<DocumentInput, 'content' | 'results'>): string | null {
+  const used = checksUsed(doc);
+  if (used.length === 0) return null;
+  const what = (c: RowCheck): string => `${/^factor:/.test(c.key) ? 'the factor' : 'row'} ${c.key.startsWith('factor:') ? c.key.replace(/^factor:([^[]+)(?:\[(.*)\])?$/, (_m, n: string, span?: string) => (span ? `${n} (${span})` : n)) : c.key} ${checkedWords(c)}`;
+  if (used.length <= 2) return `Limit-table entries checked by the officer: ${used.map(what).join('; ')}.`;
+  const names = [...new Set(used.map((c) => c.checkedBy))].join(', ');
+  const differs = used.filter((c) => c.verdict === 'differs').length;
+  return `${used.length} limit-table entries used here were checked against the published text by ${names}${differs ? ` (${differs} differ from the tables: the lower value is used)` : ''}; the report lists each.`;
 }
