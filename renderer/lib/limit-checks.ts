@@ -45,9 +45,17 @@ export function spanText(e: CheckableEntry): string {
   return `${band} · ${t}${e.condition ? ` · where ${e.condition}` : ''}`;
 }
 
-/** A table expression typeset a little: "2e-3·CE" (the symbols as in the tables). */
+const SUPERSCRIPT: Readonly<Record<string, string>> = { '-': '⁻', '+': '', 0: '⁰', 1: '¹', 2: '²', 3: '³', 4: '⁴', 5: '⁵', 6: '⁶', 7: '⁷', 8: '⁸', 9: '⁹' };
+
+/**
+ * A table expression typeset for reading: "2e-3*CE" -> "2×10⁻³·CE" (powers of ten as printed in
+ * the standards; the symbols stay as the tables name them, the same the officer types).
+ */
 export function formulaText(expr: string): string {
-  return expr.replace(/\*/g, '·').replace(/\s+/g, '');
+  return expr
+    .replace(/\s+/g, '')
+    .replace(/(\d+(?:\.\d+)?)e([+-]?\d+)/g, (_m, m: string, e: string) => `${m === '1' ? '' : `${m}×`}10${[...e].map((ch) => SUPERSCRIPT[ch] ?? ch).join('')}`)
+    .replace(/\*/g, '·');
 }
 
 /** "H = 2e-3·CE J/m²", "C_C = 8+10^(0.04·(lambda-1250))". */

@@ -46,7 +46,7 @@ describe('Limit table checks screen', () => {
     const li = entryOf('H-E-VIS-2');
     expect(li.textContent).toContain('Row H-E-VIS-2 · eye, retinal thermal');
     expect(li.textContent).toContain('400 nm – 700 nm · 10 ps – 1 ns');
-    expect(li.textContent).toContain('H = 2e-3·CE J/m²');
+    expect(li.textContent).toContain('H = 2×10⁻³·CE J/m²');
     const first = within(li).getAllByRole('row')[1];
     expect(first?.textContent).toBe('400 nm, 10 ps, α = 1 mrad2 mJ/m²151 µJ/m²');
   });
