@@ -10,6 +10,7 @@
  */
 import { Dec, recordString } from '../numeric/decimal.js';
 import { limitReported } from '../numeric/safe-rounding.js';
+import { quantityText } from '../units/display.js';
 import { intervalPosition } from './intervals.js';
 import { InputError, requireInRange } from '../errors.js';
 import type { LimitSettings, RowCheck, RuleSetId, Tissue } from '../model/inputs.js';
@@ -397,7 +398,7 @@ export function exposureLimit(q: ExposureLimitQuery): ExposureLimitResult {
     if (k) {
       const by = `checked against ${k.check.reference} by ${k.check.checkedBy} on ${k.check.checkedOn}`;
       if (k.check.verdict === 'matches') addStep(trace, { kind: 'note', label: `Checked row ${c.rowId}`, detail: `${by}: matches the published text; the row is used as written` });
-      else addStep(trace, { kind: 'warning', label: `Checked row ${c.rowId} differs`, detail: `row ${c.rowId} was ${by}, and the published text differs: it gives ${k.check.documentExpr ?? ''} (H = ${fmt(new Dec(k.documentH_Jm2 ?? c.H_Jm2))} J/m² here); ${k.documentUsed ? 'that is lower and is used' : 'the value as written is lower and is kept'}` });
+      else addStep(trace, { kind: 'warning', label: `Checked row ${c.rowId} differs`, detail: `row ${c.rowId} was ${by}, and the published text differs: it gives ${k.check.documentExpr ?? ''} (H = ${quantityText(k.documentH_Jm2 ?? c.H_Jm2, 'J/m²', { round: 'down' })} here); ${k.documentUsed ? 'that is lower and is used' : 'the value as written is lower and is kept'}` });
     }
     for (const f of c.factorFromDocument ?? []) {
       addStep(trace, { kind: 'warning', label: `Checked factor differs (row ${c.rowId})`, detail: `${entryWords(f.key)} was checked against ${f.reference} by ${f.checkedBy} on ${f.checkedOn}, and the published text differs: it gives ${f.documentExpr ?? ''}; row ${c.rowId} is evaluated with both and the lower limit is kept` });

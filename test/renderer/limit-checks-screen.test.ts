@@ -66,7 +66,7 @@ describe('Limit table checks screen', () => {
     await fireEvent.click(screen.getByRole('button', { name: 'Sign the check' }));
     await until(() => screen.queryByTestId('recorded-checks') !== null, 10000);
     const row = within(screen.getByTestId('recorded-checks')).getByText('row H-E-VIS-2').closest('tr');
-    expect(row?.textContent).toMatch(/differs\s*1e-3\*CE/);
+    expect(row?.textContent).toMatch(/differs\s*10⁻³·CE/);
     expect(row?.textContent).toContain('IEC 60825-1:2014 Table A.1');
     expect(row?.textContent).toContain('Dr. Imre Calloway-Senn');
     expect(row?.textContent).toContain('in use');
