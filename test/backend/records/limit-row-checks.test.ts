@@ -46,7 +46,7 @@ function api(store: RecordStore) {
   };
 }
 
-async function setUp(name = 'records.sqlite') {
+async function setUp(name = 'records.sqlite', laser: LaserInput = SEED_LASER) {
   t ??= tempDir();
   const store = await openTemp(t.dir, name);
   stores.push(store);
@@ -54,7 +54,7 @@ async function setUp(name = 'records.sqlite') {
   const officer = await makeSigner(store, 'Dr. Imre Calloway-Senn');
   const site = await store.createSite({ name: 'Harwick Vale Photonics Centre', building: 'Building B' });
   const room: Room = await store.createRoom({ siteId: site.id, code: 'B2.14', name: 'Ultrafast laboratory', responsiblePerson: 'Dr. Tomasz Ferreira-Lund' });
-  await store.createInstallation({ roomId: room.id, laser: SEED_LASER, laserType: SEED_LASER.name });
+  await store.createInstallation({ roomId: room.id, laser, laserType: laser.name });
   /** A new assessment of the room evaluated on the register now: the eye limit as the officer reads it. */
   const evaluate = async () => {
     const content = await call('assessment-new-content', { roomId: room.id });
@@ -91,6 +91,26 @@ describe('a check of a limit-table row changes the limit the officer reads, neve
     expect(r.warnings.some((w) => /row H-E-VIS-2 was checked against IEC 60825-1:2014 Table A\.1 by Dr\. Imre Calloway-Senn on \d{4}-\d\d-\d\d, and the published text differs/.test(w))).toBe(flagged);
     // the revision records which checks it used
     expect(r.used.map((c) => [c.key, c.verdict, c.reference, c.checkedBy])).toEqual(verdict === null ? [] : [['H-E-VIS-2', verdict, REFERENCE, 'Dr. Imre Calloway-Senn']]);
+  });
+
+  // A correction-factor piece: C_C for 1200-1400 nm reads 8+10^(0.04*(lambda-1250)) as written
+  // (from memory: self-consistency), 108 at 1300 nm; its stricter alternative is 8. Row H-E-NIR2-4,
+  // H = 90*t^0.75*C_C J/m² (from memory), at 1 s: 720 J/m² with 8, 9720 J/m² with 108.
+  const DIODE: LaserInput = { id: 'diode', name: 'Telecom test diode', beams: [{ id: 'diode-1300', wavelength_nm: 1300, exposureDuration_s: 1, emission: { kind: 'cw', power_W: 1e-3 }, beam: { diameter_m: 0.002, divergence_rad: 0.001, definition: '1/e' } }] };
+  const FACTOR_CASES: ReadonlyArray<readonly [string, 'matches' | 'differs' | null, string | undefined, string, boolean]> = [
+    ['factor not yet checked: C_C = 8 (the stricter alternative)', null, undefined, '720', false],
+    ['factor matches: C_C = 108 as written', 'matches', undefined, '9720', false],
+    ['factor differs, published 200 (larger): 108 is kept, flagged', 'differs', '200', '9720', true],
+    ['factor differs, published 50 (smaller): 90 * 50 = 4500 J/m², flagged', 'differs', '50', '4500', true],
+  ];
+  it.each(FACTOR_CASES)('%s', async (_name, verdict, typed, expected, flagged) => {
+    const { call, officer, evaluate } = await setUp('records.sqlite', DIODE);
+    if (verdict !== null) {
+      await call('limit-check-record', { ruleSet: 'icnirp2013', entryKey: 'factor:CC[1200-1400 nm]', verdict, ...(typed ? { documentExpr: typed } : {}), reference: 'IEC 60825-1:2014 Table A.6', personId: officer.person.id, passphrase: officer.passphrase });
+    }
+    const r = await evaluate();
+    expect(r.limit).toBe(expected);
+    expect(r.warnings.some((w) => /factor CC \(1200-1400 nm\) was checked against IEC 60825-1:2014 Table A\.6 .* the published text differs/.test(w))).toBe(flagged);
   });
 
   it('a check never switches a row to its less strict reading: UV-A 315-400 nm eye over 1000 s stays 1e4 J/m² (SAFETY.md decision)', async () => {
