@@ -9,7 +9,7 @@
  */
 import { Dec } from '../numeric/decimal.js';
 import { openPoints, type CheckableEntry } from './open-points.js';
-import { RULE_SET_IDS, ruleSetTable } from './rule-sets.js';
+import { ruleSetTable, type RULE_SET_IDS } from './rule-sets.js';
 import { condition, evaluate, variablesOf } from './expression.js';
 import { evaluateFactors, FACTOR_ORDER } from './factors.js';
 import type { RuleSetId } from '../model/inputs.js';

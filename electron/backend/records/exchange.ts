@@ -47,7 +47,6 @@ import { assumedDefaults, eyewearDefaultsAssumed } from './older-content.js';
 import { keepDraftAsCopy } from './import-conflicts.js';
 import { fingerprintOf, keyIdOf, linkOf, verifyStatement } from './signing.js';
 import { insertRowCheck, statementOf, type RowCheckRow } from './limit-row-checks.js';
-import { canonicalJson as canonical } from './canonical.js';
 import { createPublicKey, verify as verifyEd25519 } from 'node:crypto';
 import {
   EXPORT_FORMAT,
