@@ -31,6 +31,7 @@ async function main(): Promise<void> {
     await page.keyboard.press('Alt+7');
     await page.getByRole('heading', { level: 1, name: 'Limit table checks' }).waitFor();
     await page.getByTestId('check-counts').getByText(/not yet checked/).waitFor();
+    await page.locator('li[data-entry="H-E-UV-180"] table.samples').waitFor();
     await shot(page, '40-limit-checks-list');
 
     const entry = page.locator('li[data-entry="H-E-VIS-2"]');

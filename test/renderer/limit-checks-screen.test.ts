@@ -43,6 +43,7 @@ describe('Limit table checks screen', () => {
     render(LimitChecksScreen);
     await until(() => (screen.getByTestId('check-counts').textContent ?? '').includes('not yet checked') && screen.queryByTestId('no-checks') !== null, 10000);
     expect(screen.getByTestId('check-counts').textContent).toBe('79 not yet checked · 0 checked');
+    await until(() => entryOf('H-E-VIS-2').querySelector('table.samples') !== null, 10000);
     const li = entryOf('H-E-VIS-2');
     expect(li.textContent).toContain('Row H-E-VIS-2 · eye, retinal thermal');
     expect(li.textContent).toContain('400 nm – 700 nm · 10 ps – 1 ns');
