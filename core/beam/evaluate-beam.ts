@@ -13,7 +13,7 @@ import { RULE_SET_NAME } from '../limits/rule-sets.js';
 import { defaultExposureDuration } from '../limits/durations.js';
 import { formatSI } from '../units/quantities.js';
 import { numberText, odText, quantityText } from '../units/display.js';
-import { addStep, newTrace } from '../trace/trace.js';
+import { addStep, allSteps, newTrace } from '../trace/trace.js';
 import { beamModel, describeBeam, type BeamModel } from './beam-model.js';
 import { tissueLimits, type TissueLimits } from './tissue-limits.js';
 import { validateBeamInput } from './validate-beam.js';
@@ -156,6 +156,12 @@ function evaluateValid(input: BeamInput, ruleSet: RuleSetId, settings: LimitSett
   if (replaced.length) {
     warnings.push(`Conservative mode: unverified limit-table entries were replaced by stricter values (${replaced.join(', ')}); the limits may be lower than the published ones until verified.`);
   }
+  // A row or factor the officer checked as 'differs' is flagged on every result that uses it (issue 12).
+  const differs = new Set<string>();
+  for (const st of [...allSteps(eye.trace), ...allSteps(skin.trace)]) {
+    if (st.kind === 'warning' && (/^Checked row \S+ differs$/.test(st.label) || st.label.startsWith('Checked factor differs'))) differs.add(st.detail);
+  }
+  for (const d of differs) warnings.push(`Limit-table ${d}.`);
   trace.children.push(eye.trace, skin.trace);
   if (large.trace) trace.children.push(large.trace);
 

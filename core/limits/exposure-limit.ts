@@ -10,12 +10,13 @@
  */
 import { Dec, recordString } from '../numeric/decimal.js';
 import { limitReported } from '../numeric/safe-rounding.js';
+import { quantityText } from '../units/display.js';
 import { intervalPosition } from './intervals.js';
 import { InputError, requireInRange } from '../errors.js';
-import type { LimitSettings, RuleSetId, Tissue } from '../model/inputs.js';
+import type { LimitSettings, RowCheck, RuleSetId, Tissue } from '../model/inputs.js';
 import { addStep, newTrace, type Trace } from '../trace/trace.js';
 import { condition, evaluate, substitute, variablesOf } from './expression.js';
-import { conservativeOn, evaluateFactors, FACTOR_ORDER, onFactorEdge, type FactorSet, type FactorValue } from './factors.js';
+import { checkOf, conservativeOn, documentExprOf, entryWords, evaluateFactors, FACTOR_ORDER, hasFactorDocumentValues, onFactorEdge, type FactorSet, type FactorValue } from './factors.js';
 import { DEFAULT_RULE_SET, DURATION_RANGE_S, RULE_SET_IDS, RULE_SET_NAME, ruleSetTable, WAVELENGTH_RANGE_NM } from './rule-sets.js';
 import type { EffectClass, Interval, LimitRow, RuleSetTable } from './table-types.js';
 import { limitingAperture, type ApertureResult } from './apertures.js';
@@ -56,6 +57,13 @@ export interface LimitCandidate {
   readonly factorsFromBelow?: true;
   /** Set when the row's "not to exceed" irradiance cap lowered the value (W/m², source). */
   readonly cap?: { readonly E_Wm2: string; readonly uncappedH_Jm2: string; readonly source: string; readonly confidence: string; readonly conservative: boolean };
+  /**
+   * The officer's signed check of this row against the published document. For 'differs',
+   * documentH_Jm2 is the document's value here and documentUsed says whether it was the lower one.
+   */
+  readonly check?: { readonly check: RowCheck; readonly documentH_Jm2?: string; readonly documentUsed: boolean };
+  /** Set where a factor's 'differs' check (the document's factor value) gave this lower value. */
+  readonly factorFromDocument?: readonly RowCheck[];
 }
 
 export interface ExposureLimitResult {
@@ -177,6 +185,25 @@ function evaluateRow(ctx: Ctx, row: LimitRow, tableTissue: Tissue, apertureTissu
       conservativeApplied = true;
     }
   }
+  // The officer's check against the published document (issue 12): either verdict ended the stricter
+  // replacement above (conservativeOn); 'differs' evaluates the document's value and keeps the lower,
+  // so a check never raises the limit above the value as written (SAFETY.md).
+  const rowCheck = checkOf(ctx.settings, row.id);
+  let checked: LimitCandidate['check'];
+  if (rowCheck) {
+    const doc = documentExprOf(ctx.settings, row.id);
+    if (doc) {
+      const D = toH(evaluate(doc.expr, vars));
+      const documentUsed = D.lt(H);
+      checked = { check: rowCheck, documentH_Jm2: recordString(D), documentUsed };
+      if (documentUsed) {
+        H = D;
+        expr = doc.expr;
+      }
+    } else {
+      checked = { check: rowCheck, documentUsed: false };
+    }
+  }
   // A less strict reading of an uncertain row: kept aside until the row is verified with it.
   let relaxed: LimitCandidate['relaxed'];
   if (row.relaxed_alt && condition(row.relaxed_alt.when, vars)) {
@@ -237,6 +264,7 @@ function evaluateRow(ctx: Ctx, row: LimitRow, tableTissue: Tissue, apertureTissu
     ...(fov ? { fieldOfViewFactor: recordString(fov) } : {}),
     ...(cap ? { cap } : {}),
     ...(relaxed ? { relaxed } : {}),
+    ...(checked ? { check: checked } : {}),
   };
   return c;
 }
@@ -265,6 +293,21 @@ export function exposureLimit(q: ExposureLimitQuery): ExposureLimitResult {
       const c = candidates[i];
       if (!c) candidates.push({ ...b, factorsFromBelow: true });
       else if (new Dec(b.H_Jm2).lt(c.H_Jm2)) candidates[i] = { ...b, factorsFromBelow: true };
+    }
+  }
+  if (hasFactorDocumentValues(settings)) {
+    // A factor checked as 'differs': the rows are evaluated again with the document's factor value
+    // and each keeps the lower limit (a check never raises a limit, SAFETY.md).
+    const fDoc = evaluateFactors(table, lambda, t, alphaForFactors, settings, 'upper', true);
+    const docFactors = FACTOR_ORDER.map((n) => fDoc.get(n)).filter((v): v is FactorValue => v?.fromDocument !== undefined);
+    if (docFactors.length > 0) {
+      const withDoc = candidatesFor({ ...ctx, f: fDoc }, q.tissue, true, false, q.tissue);
+      for (const b of withDoc) {
+        const i = candidates.findIndex((c) => c.rowId === b.rowId);
+        const c = candidates[i];
+        const used = docFactors.filter((v) => variablesOf(b.expr).includes(v.name)).map((v) => v.fromDocument as RowCheck);
+        if (c && used.length > 0) candidates[i] = new Dec(b.H_Jm2).lt(c.H_Jm2) ? { ...b, factorFromDocument: used } : { ...c, factorFromDocument: used };
+      }
     }
   }
   if (candidates.length === 0) {
@@ -351,6 +394,15 @@ export function exposureLimit(q: ExposureLimitQuery): ExposureLimitResult {
     });
   }
   for (const c of candidates) {
+    const k = c.check;
+    if (k) {
+      const by = `checked against ${k.check.reference} by ${k.check.checkedBy} on ${k.check.checkedOn}`;
+      if (k.check.verdict === 'matches') addStep(trace, { kind: 'note', label: `Checked row ${c.rowId}`, detail: `${by}: matches the published text; the row is used as written` });
+      else addStep(trace, { kind: 'warning', label: `Checked row ${c.rowId} differs`, detail: `row ${c.rowId} was ${by}, and the published text differs: it gives ${k.check.documentExpr ?? ''} (H = ${quantityText(k.documentH_Jm2 ?? c.H_Jm2, 'J/m²', { round: 'down' })} here); ${k.documentUsed ? 'that is lower and is used' : 'the value as written is lower and is kept'}` });
+    }
+    for (const f of c.factorFromDocument ?? []) {
+      addStep(trace, { kind: 'warning', label: `Checked factor differs (row ${c.rowId})`, detail: `${entryWords(f.key)} was checked against ${f.reference} by ${f.checkedBy} on ${f.checkedOn}, and the published text differs: it gives ${f.documentExpr ?? ''}; row ${c.rowId} is evaluated with both and the lower limit is kept` });
+    }
     if (c.cap) addStep(trace, { kind: c.cap.conservative ? 'conservative' : 'row', label: `Cap on row ${c.rowId}`, detail: `the limit is not to exceed ${c.cap.E_Wm2} W/m² (Table 2.3 note)`, source: c.cap.source, confidence: c.cap.confidence });
     if (c.relaxed) addStep(trace, { kind: 'note', label: `Alternative reading of row ${c.rowId}`, detail: `older editions give ${c.relaxed.expr} J/m² here (10 W/m²); ${c.relaxed.used ? 'used: the row was checked with that reading' : 'not used until the row is checked with that reading'}`, source: c.relaxed.source, confidence: 'from memory, uncertain' });
   }

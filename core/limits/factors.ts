@@ -8,7 +8,7 @@ import { Dec } from '../numeric/decimal.js';
 import { condition, evaluate, type Vars } from './expression.js';
 import type { FactorDef, FactorPiece, RuleSetTable } from './table-types.js';
 import { atTop, inInterval, inIntervalFromBelow, onAnyEdge } from './intervals.js';
-import type { LimitSettings } from '../model/inputs.js';
+import type { LimitSettings, RowCheck } from '../model/inputs.js';
 
 export interface FactorValue {
   readonly name: string;
@@ -19,6 +19,8 @@ export interface FactorValue {
   /** True where conservative mode replaced a remembered value by its stricter alternative. */
   readonly conservativeApplied: boolean;
   readonly remembered?: Dec;
+  /** Set where the officer's 'differs' check replaced the value as written by the document's (see evaluateFactors' useDocument). */
+  readonly fromDocument?: RowCheck;
 }
 
 
@@ -44,9 +46,46 @@ function pickPiece(def: FactorDef, vars: Vars, side: EdgeSide = 'upper'): Factor
   return pieces.find((p) => ok(p, false)) ?? pieces.find((p) => ok(p, true));
 }
 
-export function conservativeOn(settings: LimitSettings | undefined, key: string): boolean {
+export function conservativeOn(settings: LimitSettings | undefined, key: string, pieceKey?: string): boolean {
   if (settings?.conservative === false) return false;
+  if (checkOf(settings, key) !== undefined || (pieceKey !== undefined && checkOf(settings, pieceKey) !== undefined)) return false;
   return !(settings?.verifiedRows ?? []).includes(key);
+}
+
+/** The officer's signed check of an entry (row id or factor key), if the settings carry one. */
+export function checkOf(settings: LimitSettings | undefined, key: string): RowCheck | undefined {
+  return settings?.rowChecks?.find((c) => c.key === key);
+}
+
+/** The document's value of a 'differs' check, where one was typed. */
+export function documentExprOf(settings: LimitSettings | undefined, key: string): { check: RowCheck; expr: string } | undefined {
+  const c = checkOf(settings, key);
+  return c?.verdict === 'differs' && c.documentExpr !== undefined ? { check: c, expr: c.documentExpr } : undefined;
+}
+
+const span = (iv: readonly [number, number], unit: string): string => `${iv[0]}-${iv[1]} ${unit}`;
+
+/**
+ * The key a check of one factor piece is recorded under: the factor's name and the piece's own
+ * conditions (band, duration, source size, condition), so it names the same piece in any build of
+ * the same table. A factor without pieces is 'factor:<name>'.
+ */
+export function factorPieceKey(name: string, p?: FactorPiece): string {
+  if (!p) return `factor:${name}`;
+  const parts = [p.band_nm && span(p.band_nm, 'nm'), p.t_s && span(p.t_s, 's'), p.alpha_mrad, p.when].filter((x): x is string => typeof x === 'string' && x !== '');
+  return `factor:${name}[${parts.join('; ')}]`;
+}
+
+/** A check key in words: "row H-E-VIS-2", "factor CC (1200-1400 nm)". */
+export function entryWords(key: string): string {
+  const m = /^factor:([A-Za-z_0-9]+)(?:\[(.*)\])?$/.exec(key);
+  if (!m) return `row ${key}`;
+  return m[2] ? `factor ${m[1] ?? ''} (${m[2]})` : `factor ${m[1] ?? ''}`;
+}
+
+/** True where the settings carry a 'differs' check with a document value for any factor. */
+export function hasFactorDocumentValues(settings: LimitSettings | undefined): boolean {
+  return (settings?.rowChecks ?? []).some((c) => c.key.startsWith('factor:') && c.verdict === 'differs' && c.documentExpr !== undefined);
 }
 
 /** Evaluate one factor; undefined where the factor is not defined at this wavelength/time. */
@@ -56,18 +95,29 @@ export function evalFactor(
   vars: Vars,
   settings: LimitSettings | undefined,
   side: EdgeSide = 'upper',
+  useDocument = false,
 ): FactorValue | undefined {
   const def = table.factors[name];
   if (!def) return undefined;
   const source = def.source ?? '';
+  // The document's value of a 'differs' check: evaluated in a second factor set only; the limit
+  // engine keeps, row by row, the lower of the two limits (exposure-limit.ts), never the higher.
+  const fromDocument = (key: string, base: Omit<FactorValue, 'value' | 'expr' | 'conservativeApplied'>): FactorValue | undefined => {
+    const d = useDocument ? documentExprOf(settings, key) : undefined;
+    return d ? { ...base, value: evaluate(d.expr, vars), expr: d.expr, conservativeApplied: false, fromDocument: d.check } : undefined;
+  };
   if (def.value !== undefined) {
-    return { name, value: new Dec(def.value), expr: String(def.value), source, confidence: def.confidence ?? '', conservativeApplied: false };
+    const base = { name, source, confidence: def.confidence ?? '' };
+    return fromDocument(factorPieceKey(name), base) ?? { ...base, value: new Dec(def.value), expr: String(def.value), conservativeApplied: false };
   }
   if (def.pieces) {
     const p = pickPiece(def, vars, side);
     if (!p) return undefined;
+    const pieceKey = factorPieceKey(name, p);
+    const doc = fromDocument(pieceKey, { name, source: p.source ?? source, confidence: p.confidence ?? def.confidence ?? '' });
+    if (doc) return doc;
     const v = evaluate(p.expr, vars);
-    if (p.conservative_alt && conservativeOn(settings, `factor:${name}`)) {
+    if (p.conservative_alt && conservativeOn(settings, `factor:${name}`, pieceKey)) {
       const alt = evaluate(p.conservative_alt, vars);
       if (alt.lt(v)) {
         return { name, value: alt, expr: p.conservative_alt, source: p.source ?? source, confidence: p.confidence ?? def.confidence ?? '', conservativeApplied: true, remembered: v };
@@ -78,6 +128,8 @@ export function evalFactor(
   if (def.expr) {
     const lambda = vars['lambda'] as Dec;
     if (def.band_nm && !(inInterval(lambda, def.band_nm) || atTop(lambda, def.band_nm))) return undefined;
+    const doc = fromDocument(factorPieceKey(name), { name, source, confidence: def.confidence ?? '' });
+    if (doc) return doc;
     return { name, value: evaluate(def.expr, vars), expr: def.expr, source, confidence: def.confidence ?? '', conservativeApplied: false };
   }
   return undefined;
@@ -109,13 +161,14 @@ export function evaluateFactors(
   alpha: Dec,
   settings: LimitSettings | undefined,
   side: EdgeSide = 'upper',
+  useDocument = false,
 ): FactorSet {
   const vars: Record<string, Dec | undefined> = { lambda, t, alpha };
   const cache = new Map<string, FactorValue | null>();
   const get = (name: string): FactorValue | undefined => {
     let f = cache.get(name);
     if (f === undefined) {
-      f = evalFactor(table, name, vars, settings, side) ?? null;
+      f = evalFactor(table, name, vars, settings, side, useDocument) ?? null;
       cache.set(name, f);
     }
     return f ?? undefined;

@@ -5,11 +5,36 @@
  */
 import { RULE_SET_IDS, RULE_SET_NAME, ruleSetTable } from './rule-sets.js';
 import type { Interval } from './table-types.js';
+import { factorPieceKey } from './factors.js';
 
 export interface OpenPoint {
   readonly what: string;
   readonly confidence: string;
   readonly source: string;
+  /** Limit rows and factor pieces: the entry as the officer checks it (the limit-table checks screen). */
+  readonly entry?: CheckableEntry;
+}
+
+/** A limit row or factor piece an officer can check against the published document (issue 12). */
+export interface CheckableEntry {
+  /** The key a check is recorded under: the row id, or factorPieceKey(name, piece). */
+  readonly key: string;
+  readonly kind: 'row' | 'factor';
+  /** Row id or factor name. */
+  readonly name: string;
+  readonly tissue?: 'eye' | 'skin';
+  readonly effect?: string;
+  readonly band_nm?: Interval;
+  readonly t_s?: Interval;
+  /** Conditions on the source size or others under which the entry applies. */
+  readonly condition?: string;
+  /** H (radiant exposure), E (irradiance) or a factor. */
+  readonly quantity: 'H' | 'E' | 'factor';
+  readonly expr: string;
+  readonly unit: string;
+  readonly stricterAlt?: string;
+  readonly source: string;
+  readonly confidence: string;
 }
 
 const isOpen = (confidence: string | undefined): confidence is string => confidence !== undefined && (confidence.startsWith('from memory') || confidence === 'ours');
@@ -20,7 +45,14 @@ export function openPoints(ruleSet: (typeof RULE_SET_IDS)[number]): OpenPoint[] 
   const out: OpenPoint[] = [];
   for (const tissue of ['eye', 'skin'] as const) {
     for (const r of t[tissue]) {
-      if (isOpen(r.confidence)) out.push({ what: `limit row ${r.id} (${tissue}, ${span(r.band_nm, 'nm')}, ${span(r.t_s, 's')}, ${r.effect})`, confidence: r.confidence, source: r.source });
+      if (isOpen(r.confidence) && r.quantity !== 'ref') {
+        const entry: CheckableEntry = {
+          key: r.id, kind: 'row', name: r.id, tissue, effect: r.effect, band_nm: r.band_nm, t_s: r.t_s, quantity: r.quantity, expr: r.expr, unit: r.unit, source: r.source, confidence: r.confidence,
+          ...(r.when ? { condition: r.when } : {}),
+          ...(r.conservative_alt ? { stricterAlt: r.conservative_alt } : {}),
+        };
+        out.push({ what: `limit row ${r.id} (${tissue}, ${span(r.band_nm, 'nm')}, ${span(r.t_s, 's')}, ${r.effect})`, confidence: r.confidence, source: r.source, entry });
+      } else if (isOpen(r.confidence)) out.push({ what: `limit row ${r.id} (${tissue}, ${span(r.band_nm, 'nm')}, ${span(r.t_s, 's')}, ${r.effect})`, confidence: r.confidence, source: r.source });
     }
     for (const a of t.apertures[tissue]) {
       if (isOpen(a.confidence)) out.push({ what: `${tissue} aperture ${a.diameter_mm} mm (${span(a.band_nm, 'nm')}, ${span(a.t_s, 's')})`, confidence: a.confidence, source: a.source });
@@ -30,10 +62,22 @@ export function openPoints(ruleSet: (typeof RULE_SET_IDS)[number]): OpenPoint[] 
     if (def.pieces) {
       for (const p of def.pieces) {
         const c = p.confidence ?? def.confidence;
-        if (isOpen(c)) out.push({ what: `factor ${name}${p.band_nm ? `, ${span(p.band_nm, 'nm')}` : ''}${p.t_s ? `, ${span(p.t_s, 's')}` : ''}${p.alpha_mrad ? `, ${p.alpha_mrad}` : ''}: ${p.expr}`, confidence: c, source: p.source ?? def.source ?? '' });
+        if (!isOpen(c)) continue;
+        const source = p.source ?? def.source ?? '';
+        const cond = [p.alpha_mrad, p.when].filter((x): x is string => x !== undefined && x !== '').join(' and ');
+        const entry: CheckableEntry = {
+          key: factorPieceKey(name, p), kind: 'factor', name, quantity: 'factor', expr: p.expr, unit: def.unit ?? '', source, confidence: c,
+          ...(p.band_nm ? { band_nm: p.band_nm } : {}),
+          ...(p.t_s ? { t_s: p.t_s } : {}),
+          ...(cond ? { condition: cond } : {}),
+          ...(p.conservative_alt ? { stricterAlt: p.conservative_alt } : {}),
+        };
+        out.push({ what: `factor ${name}${p.band_nm ? `, ${span(p.band_nm, 'nm')}` : ''}${p.t_s ? `, ${span(p.t_s, 's')}` : ''}${p.alpha_mrad ? `, ${p.alpha_mrad}` : ''}: ${p.expr}`, confidence: c, source, entry });
       }
     } else if (isOpen(def.confidence)) {
-      out.push({ what: `factor ${name}: ${def.expr ?? String(def.value)}`, confidence: def.confidence, source: def.source ?? '' });
+      const expr = def.expr ?? String(def.value);
+      const entry: CheckableEntry = { key: factorPieceKey(name), kind: 'factor', name, quantity: 'factor', expr, unit: def.unit ?? '', source: def.source ?? '', confidence: def.confidence, ...(def.band_nm ? { band_nm: def.band_nm } : {}) };
+      out.push({ what: `factor ${name}: ${expr}`, confidence: def.confidence, source: def.source ?? '', entry });
     }
   }
   const rp = t.repetitivePulses;

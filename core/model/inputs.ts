@@ -20,6 +20,33 @@ export interface LimitSettings {
    * instead of the stricter alternative.
    */
   readonly verifiedRows?: readonly string[];
+  /**
+   * The register's signed checks of limit-table entries against the published document (issue 12),
+   * as the revision used them. A check, either verdict, ends the stricter replacement of that entry;
+   * 'differs' also evaluates what the document gives and keeps the lower limit, so a check never
+   * raises a limit above the value as written in the table (SAFETY.md, "Checks of the limit tables").
+   * Unlike verifiedRows, a check never switches a row to its less strict alternative reading.
+   */
+  readonly rowChecks?: readonly RowCheck[];
+}
+
+/** One signed check of a limit-table row or factor piece, as evaluation and documents use it. */
+export interface RowCheck {
+  /** The entry: a row id ('H-E-VIS-4') or a factor key (see factorPieceKey in core/limits/factors.ts). */
+  readonly key: string;
+  readonly verdict: 'matches' | 'differs';
+  /**
+   * 'differs' only: what the published document gives, as an expression in the entry's quantity and
+   * unit with the table's variables (t, lambda, alpha, CA, CB, CC, CE, T1, T2 ...).
+   */
+  readonly documentExpr?: string;
+  /** The check's id in the register (the revision records which checks it used). */
+  readonly checkId: string;
+  /** The published document and table as the officer cited it ("IEC 60825-1:2014 Table A.1"). */
+  readonly reference: string;
+  readonly checkedBy: string;
+  /** Calendar date of the signature, YYYY-MM-DD. */
+  readonly checkedOn: string;
 }
 
 export type Emission =

@@ -9,7 +9,8 @@ import type { AssessmentHandlers } from './contracts/assessments.js';
 import type { DocumentHandlers } from './contracts/documents.js';
 import type { ExchangeHandlers } from './contracts/exchange.js';
 import type { KeyHandlers } from './contracts/keys.js';
+import type { LimitCheckHandlers } from './contracts/limit-checks.js';
 import type { RegisterHandlers } from './contracts/register.js';
 import type { SafekeepingHandlers } from './contracts/safekeeping.js';
 
-export type Handlers = AppHandlers & RegisterHandlers & AssessmentHandlers & ExchangeHandlers & KeyHandlers & DocumentHandlers & SafekeepingHandlers;
+export type Handlers = AppHandlers & RegisterHandlers & AssessmentHandlers & ExchangeHandlers & KeyHandlers & LimitCheckHandlers & DocumentHandlers & SafekeepingHandlers;

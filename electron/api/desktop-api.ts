@@ -14,6 +14,7 @@ export const MENU_COMMANDS = [
   'go-controls',
   'go-review',
   'go-documents',
+  'go-checks',
   'save',
   'print-screen',
   'export-json',

@@ -10,6 +10,7 @@ import { assessmentTable } from './handlers/assessments.js';
 import { documentTable } from './handlers/documents.js';
 import { exchangeTable } from './handlers/exchange.js';
 import { keyTable } from './handlers/keys.js';
+import { limitCheckTable } from './handlers/limit-checks.js';
 import { registerTable } from './handlers/register.js';
 import { safekeepingTable } from './handlers/safekeeping.js';
 
@@ -19,6 +20,7 @@ export const handlerTable: HandlerTable<ApiContext> = {
   ...assessmentTable,
   ...exchangeTable,
   ...keyTable,
+  ...limitCheckTable,
   ...documentTable,
   ...safekeepingTable,
 };

@@ -9,6 +9,7 @@
  * 2 on a usage or open error. A progress bar goes to stderr on a terminal. --all runs on worker
  * threads (one per core, at most 8): recomputing is the costly part. The database is opened read-only.
  */
+import type { RowCheckRecord } from '../backend/records/limit-row-checks.js';
 import { availableParallelism } from 'node:os';
 import { dirname, resolve } from 'node:path';
 import { fileURLToPath, pathToFileURL } from 'node:url';
@@ -88,7 +89,10 @@ export async function runVerify(argv: readonly string[], out: (line: string) => 
   }
   let verdicts: AssessmentVerdict[];
   let header: string[];
+  let checks: RowCheckRecord[] = [];
   try {
+    // The register's signed checks of the limit tables (issue 12): each signature and key checked here.
+    checks = await store.listRowChecks();
     const trust = await store.trustList();
     header = [
       `Database ${db}`,
@@ -117,14 +121,19 @@ export async function runVerify(argv: readonly string[], out: (line: string) => 
     await store.close(); // a no-op when already closed for the workers
   }
   const failed = verdicts.filter((v) => v.outcome === 'failed').length;
+  // A check whose signature fails or whose key is not trusted here is never used, and is a failure.
+  const badChecks = checks.filter((c) => !c.signatureValid || !c.keyTrusted);
+  const limitTableChecks = checks.map((c) => ({ id: c.id, ruleSet: c.ruleSet, entry: c.entryWords, verdict: c.verdict, checkedBy: c.name, signedAt: c.signedAt, used: c.ok, signatureValid: c.signatureValid, keyTrusted: c.keyTrusted, finding: c.finding }));
   if (args.json) {
-    out(JSON.stringify({ database: db, header, failed, assessments: verdicts }, null, 2));
+    out(JSON.stringify({ database: db, header, failed: failed + badChecks.length, assessments: verdicts, limitTableChecks }, null, 2));
   } else {
     for (const h of header) out(h);
     for (const v of verdicts) out(v.line);
     out(`${verdicts.length} assessment(s): ${verdicts.filter((v) => v.outcome === 'ok').length} ok, ${verdicts.filter((v) => v.outcome === 'draft').length} not signed yet, ${failed} failed.`);
+    for (const c of checks) out(`${c.ok ? 'ok    ' : badChecks.includes(c) ? 'FAILED' : 'unused'}  ${c.finding}`);
+    if (checks.length > 0) out(`${checks.length} limit-table check(s): ${checks.filter((c) => c.ok).length} in use, ${badChecks.length} failed.`);
   }
-  return failed > 0 ? 1 : 0;
+  return failed + badChecks.length > 0 ? 1 : 0;
 }
 
 if (process.argv[1] && resolve(process.argv[1]) === fileURLToPath(import.meta.url)) {

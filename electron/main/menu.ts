@@ -35,6 +35,7 @@ export function buildMenu(window: () => BrowserWindow | null, isMac: boolean): M
         { label: 'Controls', accelerator: 'Alt+4', click: send('go-controls') },
         { label: 'Review & sign', accelerator: 'Alt+5', click: send('go-review') },
         { label: 'Print & export', accelerator: 'Alt+6', click: send('go-documents') },
+        { label: 'Limit table checks', accelerator: 'Alt+7', click: send('go-checks') },
       ],
     },
     {

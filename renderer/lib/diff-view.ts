@@ -5,6 +5,7 @@
  * form uses ("Power", "Beam diameter"), its laser and beam by name, and values in engineering
  * notation with their unit; no stored path or full-precision twin reaches the screen.
  */
+import { entryWords } from '../../core/index.js';
 import { quantityText, type DisplayUnit, type RoomResult, type UnitHabit } from '../../core/index.js';
 import type { AssessmentContent, FieldDifference } from '../../electron/api/contracts/records.js';
 
@@ -201,6 +202,19 @@ function humanise(p: string): string {
     .replace(/^./, (c) => c.toUpperCase());
 }
 
+const hasConservative = (v: unknown): boolean => typeof v === 'object' && v !== null && 'conservative' in v;
+
+/** Checks of the limit tables as the officer reads them: "row H-E-VIS-2: differs (IEC …, Dr. A, 2026-12-02)". */
+function checksText(v: unknown): string {
+  const one = (c: unknown): string => {
+    if (typeof c !== 'object' || c === null) return c === undefined || c === null ? 'none' : String(c);
+    const x = c as { key?: unknown; verdict?: unknown; reference?: unknown; checkedBy?: unknown; checkedOn?: unknown };
+    return typeof x.key === 'string' ? `${entryWords(x.key)}: ${String(x.verdict ?? '')} (${String(x.reference ?? '')}, ${String(x.checkedBy ?? '')}, ${String(x.checkedOn ?? '')})` : 'a check';
+  };
+  if (Array.isArray(v)) return v.length === 0 ? 'none' : v.map(one).join('; ');
+  return one(v);
+}
+
 /** One change as the officer reads it: where (laser · beam), the form's label, and both values with units. */
 export function describeChange(d: FieldDifference, content: AssessmentContent | undefined, results?: RoomResult, habit: UnitHabit = 'SI'): ChangeRow {
   const p = d.path.replace(/^content\./, '');
@@ -247,6 +261,11 @@ export function describeChange(d: FieldDifference, content: AssessmentContent | 
       }
     }
     return row('Room', humanise(key), undefined, true);
+  }
+  if (/^input\.settings\.rowChecks\b/.test(p) || (p === 'input.settings' && !hasConservative(d.old) && !hasConservative(d.new))) {
+    // The register's checks of the limit tables the revision uses (issue 12), in words.
+    const of = (v: unknown): unknown => (p === 'input.settings' && typeof v === 'object' && v !== null ? (v as { rowChecks?: unknown }).rowChecks : v);
+    return { where: 'Assessment', what: 'Limit-table checks used', old: checksText(of(d.old)), new: checksText(of(d.new)), result: false };
   }
   const info = ROOM_FIELDS[p];
   if (info) return row('Assessment', info.label, info);

@@ -6,6 +6,7 @@ export const SCREENS = [
   { id: 'controls', title: 'Controls', key: '4' },
   { id: 'review', title: 'Review & sign', key: '5' },
   { id: 'documents', title: 'Print & export', key: '6' },
+  { id: 'checks', title: 'Limit table checks', key: '7' },
 ] as const;
 export type ScreenId = (typeof SCREENS)[number]['id'];
 

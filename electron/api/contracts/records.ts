@@ -16,6 +16,19 @@ export type { WorkSave, WorkSaved } from '../../backend/records/save-work.js';
 export type { BackupFile, BackupReport, BackupStatus } from '../../backend/records/safekeeping.js';
 import type { CoSignatureCheck } from '../../backend/records/co-signature-checks.js';
 export type { CoSignature, CoSignatureCheck } from '../../backend/records/co-signature-checks.js';
+export type { RowCheckRecord } from '../../backend/records/limit-row-checks.js';
+
+/** Arguments of a check of a limit-table entry (issue 12); the passphrase unlocks the checker's key. */
+export interface RecordRowCheckArgs {
+  readonly ruleSet: 'icnirp2013' | 'eu2006';
+  readonly entryKey: string;
+  readonly verdict: 'matches' | 'differs';
+  readonly documentExpr?: string;
+  readonly reference: string;
+  readonly note?: string;
+  readonly personId: string;
+  readonly passphrase: string;
+}
 
 export type Id = string;
 /** ISO 8601 timestamp in UTC, e.g. 2026-05-01T09:30:00.000Z. */
@@ -280,7 +293,7 @@ export interface TrustListInfo {
 
 /** One check of a verification, in words an officer can read. */
 export interface VerifyCheck {
-  readonly check: 'signature' | 'key-trusted' | 'fingerprint' | 'results' | 'chain' | 'protections' | 'co-signature';
+  readonly check: 'signature' | 'key-trusted' | 'fingerprint' | 'results' | 'chain' | 'protections' | 'co-signature' | 'limit-table-check';
   readonly ok: boolean;
   readonly finding: string;
 }
@@ -469,6 +482,27 @@ export interface ExportDocument {
   readonly signingKeys: ReadonlyArray<{ readonly keyId: string; readonly publicKey: string }>;
   /** Co-signatures of the signed revisions in the document (format version 2; absent in version 1). */
   readonly coSignatures?: readonly ExportedCoSignature[];
+  /** The register's signed checks of the limit tables (issue 12); absent in files written before them. */
+  readonly limitRowChecks?: readonly ExportedRowCheck[];
+}
+
+/** One signed check of a limit-table entry as exported: the signed statement's fields and the signature. */
+export interface ExportedRowCheck {
+  readonly id: Id;
+  readonly ruleSet: 'icnirp2013' | 'eu2006';
+  readonly entryKey: string;
+  readonly entryExpr: string;
+  readonly verdict: 'matches' | 'differs';
+  readonly documentExpr: string | null;
+  readonly reference: string;
+  readonly note: string;
+  readonly personId: Id;
+  readonly name: string;
+  readonly role: string;
+  readonly signedAt: Timestamp;
+  readonly keyId: string;
+  readonly trustAnchor: string;
+  readonly signature: string;
 }
 
 /** The officer's explicit admission of exporting sites' keys, after seeing their fingerprints. */

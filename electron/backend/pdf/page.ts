@@ -6,6 +6,7 @@ import type { Content, ContentText, DynamicContent, TDocumentDefinitions, Waterm
 import { RESULT_CAUTION } from '../../../core/model/results.js';
 import type { DocumentInput, Paper } from './document-input.js';
 import { calendarDate, shortFingerprint } from './format.js';
+import { checksSentence } from './row-checks.js';
 
 export const PAGE_SIZE: Readonly<Record<Paper, 'A4' | 'LETTER'>> = { A4: 'A4', Letter: 'LETTER' };
 
@@ -55,6 +56,7 @@ export function cautionBlock(fontSize: number, doc?: DocumentInput): Content {
             stack: [
               { text: RESULT_CAUTION, bold: true, fontSize, color: COLOR.ink },
               ...(doc === undefined ? [] : [{ ...ruleSetLine(doc, fontSize - 1.5), margin: [0, 1, 0, 0] } as Content]),
+              ...(doc === undefined ? [] : checksContent(doc, fontSize - 1.5)),
             ],
             margin: [6, 4, 6, 4],
           },
@@ -69,6 +71,12 @@ export function cautionBlock(fontSize: number, doc?: DocumentInput): Content {
       vLineWidth: () => 1.2,
     },
   };
+}
+
+/** The officer's checks of the rows these figures use (issue 12), cited in words; nothing when none. */
+function checksContent(doc: DocumentInput, fontSize: number): Content[] {
+  const sentence = checksSentence(doc);
+  return sentence === null ? [] : [{ text: sentence, fontSize, color: COLOR.ink, margin: [0, 1, 0, 0] }];
 }
 
 export function ruleSetLine(doc: DocumentInput, fontSize: number): ContentText {

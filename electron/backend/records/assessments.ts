@@ -6,6 +6,7 @@
  * the database triggers would refuse it anyway). Signing turns the draft into the signed revision
  * and marks the previously signed one superseded, all in one transaction.
  */
+import { checksUsedFindings, contentWithChecks, inputWithChecks } from './limit-row-checks.js';
 import { brotliCompressSync, brotliDecompressSync, constants as zlibConstants } from 'node:zlib';
 import type { RoomInput } from '../../../core/model/inputs.js';
 import type { InputError } from '../../../core/errors.js';
@@ -231,7 +232,8 @@ export async function newAssessmentContent(ctx: StoreContext, roomId: Id, instal
   const previous = await previousContentOfRoom(ctx, roomId, installationId);
   return {
     title,
-    input,
+    // The register's signed checks of the limit tables (issue 12) are in force for a new assessment.
+    input: await inputWithChecks(ctx, input),
     operatingStates: previous?.operatingStates ? [...previous.operatingStates] : ['normal', 'alignment', 'maintenance'],
     assumptions: { exposureDurations: [], personsPresent: previous?.assumptions.personsPresent ?? 'Authorised laser users only', opticalAidsPossible: previous?.assumptions.opticalAidsPossible ?? false, other: [] },
     controls: previous ? previous.controls.map((c) => ({ ...c })) : [],
@@ -431,7 +433,7 @@ export async function createAssessment(
   ctx: StoreContext,
   args: { roomId: Id; installationId?: Id | null; content: AssessmentContent },
 ): Promise<Assessment> {
-  const content = normaliseContent(args.content);
+  const content = await contentWithChecks(ctx, normaliseContent(args.content));
   const room = await getRoom(ctx, args.roomId);
   const installationId = args.installationId ?? null;
   if (installationId !== null && (await getInstallation(ctx, installationId)).roomId !== room.id) {
@@ -498,7 +500,9 @@ export async function assertNotStale(ctx: StoreContext, id: Id, expected: SaveBa
 }
 
 export async function saveAssessment(ctx: StoreContext, id: Id, rawContent: AssessmentContent, expected?: SaveBase): Promise<Assessment> {
-  const content = normaliseContent(rawContent);
+  // A saved draft or a new revision is evaluated with the register's checks in force now (issue 12);
+  // a signed revision keeps the checks it was signed with in its content.
+  const content = await contentWithChecks(ctx, normaliseContent(rawContent));
   await getAssessmentRow(ctx, id);
   await assertNotStale(ctx, id, expected);
   const before = await newestRevisionRow(ctx, id);
@@ -888,6 +892,14 @@ export async function verifyAssessment(ctx: StoreContext, assessmentId: Id, revi
     if (!c.ok) findings.push(c.finding);
   }
 
+  // 3c. The checks of the limit tables the results used (issue 12): each signed, trusted, as recorded.
+  if (content !== null) {
+    for (const c of await checksUsedFindings(ctx, content.input)) {
+      checks.push({ check: 'limit-table-check', ok: c.ok, finding: c.finding });
+      if (!c.ok) findings.push(c.finding);
+    }
+  }
+
   // 4. The revision chain and 5. the database's own protections.
   const chain = await chainFindings(ctx, a);
   const chainIntact = chain.length === 0;
@@ -902,7 +914,7 @@ export async function verifyAssessment(ctx: StoreContext, assessmentId: Id, revi
   checks.push({ check: 'protections', ok: protectionsOk, finding: protText });
 
   const signed = sig !== undefined && r.status !== 'draft';
-  const ok = signed && fingerprintMatches && signatureValid && keyTrusted && resultsMatchCore && chainIntact && protectionsOk && coSignatures.every((c) => c.ok);
+  const ok = signed && fingerprintMatches && signatureValid && keyTrusted && resultsMatchCore && chainIntact && protectionsOk && coSignatures.every((c) => c.ok) && checks.every((c) => c.check !== 'limit-table-check' || c.ok);
   if (ok) findings.push(`Revision ${r.revision_no} is intact: signature valid, key trusted, fingerprint matches, results recompute, chain whole.`);
   return {
     ok,

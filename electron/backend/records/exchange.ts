@@ -48,6 +48,8 @@ import { assumedDefaults, eyewearDefaultsAssumed } from './older-content.js';
 import { keepDraftAsCopy } from './import-conflicts.js';
 import { coSignatureIssues, coSignatureRefusal, coSignaturesOf, coSignerKeys, coSignerNames, importCoSignatures } from './co-signature-exchange.js';
 import { fingerprintOf, keyIdOf, linkOf, verifyStatement } from './signing.js';
+import { insertRowCheck, statementOf, type RowCheckRow } from './limit-row-checks.js';
+import { createPublicKey, verify as verifyEd25519 } from 'node:crypto';
 import {
   EXPORT_FORMAT,
   EXPORT_VERSION,
@@ -56,6 +58,7 @@ import {
   type ExportDocument,
   type ExportedAssessment,
   type ExportedCoSignature,
+  type ExportedRowCheck,
   type Id,
   type ImportAdmission,
   type ImportIssue,
@@ -105,12 +108,38 @@ function keysOf(assessments: readonly ExportedAssessment[], coSignerKeys: Readon
   return [...keys].sort(([a], [b]) => (a < b ? -1 : 1)).map(([keyId, publicKey]) => ({ keyId, publicKey }));
 }
 
+/** Every signed check of the limit tables in this register, as exported (issue 12). */
+async function exportedChecks(ctx: StoreContext): Promise<ExportedRowCheck[]> {
+  const rows = await ctx.q.all<RowCheckRow>('SELECT * FROM limit_row_checks ORDER BY signed_at, id');
+  return rows.map((x) => {
+    const st = statementOf(x);
+    return {
+      id: st.id, ruleSet: st.ruleSet === 'eu2006' ? 'eu2006' : 'icnirp2013', entryKey: st.entryKey, entryExpr: st.entryExpr, verdict: st.verdict, documentExpr: st.documentExpr,
+      reference: st.reference, note: st.note, personId: st.personId, name: st.name, role: st.role, signedAt: st.signedAt, keyId: st.keyId, trustAnchor: st.trustAnchor, signature: x.signature,
+    };
+  });
+}
+
+/** The check's stored row from its exported form. */
+function checkRowOf(c: ExportedRowCheck): RowCheckRow {
+  return {
+    id: c.id, rule_set: c.ruleSet, entry_key: c.entryKey, entry_expr: c.entryExpr, verdict: c.verdict, document_expr: c.documentExpr, reference: c.reference, note: c.note,
+    person_id: c.personId, name: c.name, role: c.role, signed_at: c.signedAt, key_id: c.keyId, trust_anchor: c.trustAnchor, signature: c.signature,
+  };
+}
+
 async function document(
   ctx: StoreContext,
   scope: ExportDocument['scope'],
   parts: Pick<ExportDocument, 'sites' | 'rooms' | 'installations' | 'eyewear' | 'assessments'> & { people?: Person[] },
 ): Promise<ExportDocument> {
   const coSignatures = await coSignaturesOf(ctx, parts.assessments);
+  const limitRowChecks = await exportedChecks(ctx);
+  const checkKeys: Array<{ keyId: string; publicKey: string }> = [];
+  for (const keyId of new Set(limitRowChecks.map((c) => c.keyId))) {
+    const k = await ctx.q.get<{ public_key: string }>('SELECT public_key FROM signing_key WHERE key_id = ?', keyId);
+    if (k) checkKeys.push({ keyId, publicKey: k.public_key });
+  }
   return {
     format: EXPORT_FORMAT,
     version: EXPORT_VERSION,
@@ -122,8 +151,9 @@ async function document(
     eyewear: parts.eyewear,
     people: parts.people ?? await signersOf(ctx, parts.assessments, coSignatures),
     assessments: parts.assessments,
-    signingKeys: keysOf(parts.assessments, await coSignerKeys(ctx, coSignatures)),
+    signingKeys: keysOf(parts.assessments, [...(await coSignerKeys(ctx, coSignatures)), ...checkKeys]),
     coSignatures,
+    ...(limitRowChecks.length > 0 ? { limitRowChecks } : {}),
   };
 }
 
@@ -169,6 +199,15 @@ export async function exportAssessment(ctx: StoreContext, assessmentId: Id): Pro
 }
 
 // ---------------------------------------------------------------- import: validation
+
+/** An Ed25519 signature over the canonical JSON of a payload (a check of the limit tables). */
+function verifySigned(publicKeyPem: string, payload: unknown, signatureB64: string): boolean {
+  try {
+    return verifyEd25519(null, Buffer.from(canonicalJson(payload), 'utf8'), createPublicKey(publicKeyPem), Buffer.from(signatureB64, 'base64'));
+  } catch {
+    return false;
+  }
+}
 
 function invalid(issues: ImportIssue[]): RecordError {
   const shown = issues.slice(0, 10).map((i) => `${i.path}: ${i.problem}`).join('; ');
@@ -287,6 +326,13 @@ async function crossCheck(ctx: StoreContext, doc: ExportDocument): Promise<Impor
     }
     if (actual !== k.keyId) issues.push({ path: `signingKeys[${i}].keyId`, problem: 'does not match the public key (not an Ed25519 key, or altered)' });
   });
+  // Each check of the limit tables must carry a valid signature by a key in the file (issue 12).
+  (doc.limitRowChecks ?? []).forEach((c, i) => {
+    const pk = keys.get(c.keyId);
+    const row = checkRowOf(c);
+    if (pk === undefined) issues.push({ path: `limitRowChecks[${i}].keyId`, problem: 'no public key for this check in signingKeys' });
+    else if (!verifySigned(pk, statementOf(row), c.signature)) issues.push({ path: `limitRowChecks[${i}].signature`, problem: `the signature of the check of ${c.entryKey} by ${c.name} is not valid for what it records (altered)` });
+  });
   doc.assessments.forEach((a, ai) => {
     const base = `assessments[${ai}]`;
     if (!roomIds.has(a.roomId) && !exists('room', a.roomId)) issues.push({ path: `${base}.roomId`, problem: `room ${a.roomId} is neither in the file nor in this database` });
@@ -347,6 +393,7 @@ async function refuseForgedCoSignatures(ctx: StoreContext, doc: ExportDocument, 
 function signerNames(doc: ExportDocument): Map<string, string> {
   const out = coSignerNames(doc);
   for (const a of doc.assessments) for (const r of a.revisions) if (r.signature) out.set(r.signature.keyId, r.signature.name);
+  for (const c of doc.limitRowChecks ?? []) if (!out.has(c.keyId)) out.set(c.keyId, c.name);
   return out;
 }
 
@@ -465,6 +512,12 @@ export async function importDocument(ctx: StoreContext, input: unknown, rawAdmit
     );
     await upsert(doc.eyewear, 'eyewear', (id) => tryGet(() => getEyewear(ctx, id)), (x) => insertEyewear(ctx, x), (x) => replaceEyewear(ctx, x));
     for (const k of doc.signingKeys) await registerKey(ctx, k.keyId, k.publicKey, 'imported');
+    // Signed checks are added when new (never changed); whether one is used is judged here, on read.
+    for (const c of doc.limitRowChecks ?? []) {
+      const local = await ctx.q.get<RowCheckRow>('SELECT * FROM limit_row_checks WHERE id = ?', c.id);
+      if (!local) await insertRowCheck(ctx, checkRowOf(c));
+      else if (local.signature !== c.signature) throw invalid([{ path: `limitRowChecks`, problem: `the check ${c.id} exists here with a different signature: one of the two was altered` }]);
+    }
 
     for (const [ai, a] of doc.assessments.entries()) {
       const localA = await ctx.q.get('SELECT room_id, installation_id FROM assessment WHERE id = ?', a.id) as

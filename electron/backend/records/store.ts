@@ -14,6 +14,7 @@ import { CALCULATED_WITH, evaluateRoom, type Evaluate } from './core-link.js';
 import { importLaserCsv } from './csv.js';
 import { seedDemo } from './demo.js';
 import { countersign, listCoSignatures } from './co-signatures.js';
+import { listRowChecks, recordRowCheck } from './limit-row-checks.js';
 import type { RecordEngine } from './engine.js';
 import * as X from './exchange.js';
 import * as K from './personal-keys.js';
@@ -103,6 +104,8 @@ function storeOver(ctx: StoreContext, engine: RecordEngine, info: StoreInfo): Re
     seedDemo: () => seedDemo(ctx),
     countersign: (args) => countersign(ctx, args),
     listCoSignatures: (revisionId) => listCoSignatures(ctx, revisionId),
+    recordRowCheck: (args) => recordRowCheck(ctx, args),
+    listRowChecks: (ruleSet) => listRowChecks(ctx, ruleSet),
   };
 }
 

@@ -30,11 +30,13 @@ import type {
   Person,
   PersonDraft,
   PersonKey,
+  RecordRowCheckArgs,
   RegisterBase,
   Revision,
   RevisionSummary,
   Room,
   RoomDraft,
+  RowCheckRecord,
   SaveBase,
   SignOff,
   Site,
@@ -44,7 +46,7 @@ import type {
   WorkSave,
   WorkSaved,
 } from '../../api/contracts/records.js';
-import type { RoomInput } from '../../../core/model/inputs.js';
+import type { RoomInput, RuleSetId } from '../../../core/model/inputs.js';
 
 export * from '../../api/contracts/records.js';
 
@@ -187,6 +189,10 @@ export interface RecordStore {
   countersign(args: { revisionId: Id; personId: Id; passphrase: string; statement: string }): Promise<CoSignature>;
   /** The co-signatures of a revision, oldest first. */
   listCoSignatures(revisionId: Id): Promise<CoSignature[]>;
+  /** Record a signed check of a limit-table entry against the published document (issue 12). */
+  recordRowCheck(args: RecordRowCheckArgs): Promise<RowCheckRecord>;
+  /** Every signed check of the limit tables (of one rule set, or all), oldest first, each checked here. */
+  listRowChecks(ruleSet?: RuleSetId): Promise<RowCheckRecord[]>;
 }
 
 /** Error with a machine-readable code and the path/field concerned (for IPC answers). */

@@ -7,6 +7,8 @@
  * (property test: test/backend/records/schema-core-agreement.test.ts).
  * The assertions at the end fail to compile if a schema drifts from the core type.
  */
+import { variablesOf } from '../../../core/limits/expression.js';
+import { DOCUMENT_VARIABLES } from '../../../core/limits/check-samples.js';
 import { z } from 'zod';
 import type {
   BeamGeometry,
@@ -58,9 +60,30 @@ export const WavelengthNmSchema = num(R.wavelength_nm);
 export const RuleSetIdSchema = z.enum(['icnirp2013', 'eu2006']);
 export const TissueSchema = z.enum(['eye', 'skin']);
 
+/** A typed published value the core can read: the tables' grammar and symbols only. */
+function readableDocumentValue(expr: string): boolean {
+  try {
+    return variablesOf(expr).every((v) => DOCUMENT_VARIABLES.includes(v));
+  } catch {
+    return false;
+  }
+}
+
+/** A signed check of a limit-table entry as a revision used it (issue 12; core RowCheck). */
+export const RowCheckSchema = z.strictObject({
+  key: z.string().min(1).max(200),
+  verdict: z.enum(['matches', 'differs']),
+  documentExpr: z.string().min(1).max(200).refine(readableDocumentValue, 'must be written as in the tables (numbers, + - * / ^, parentheses and the tables’ symbols)').optional(),
+  checkId: z.string().min(1).max(200),
+  reference: z.string().min(1).max(300),
+  checkedBy: z.string().min(1).max(300),
+  checkedOn: z.string().regex(/^\d{4}-\d{2}-\d{2}$/, 'must be a date YYYY-MM-DD'),
+});
+
 export const LimitSettingsSchema = z.strictObject({
   conservative: z.boolean().optional(),
   verifiedRows: z.array(z.string().min(1)).optional(),
+  rowChecks: z.array(RowCheckSchema).max(1000).optional(),
 });
 
 export const EmissionSchema = z.discriminatedUnion('kind', [

@@ -286,6 +286,24 @@ export const ExportedCoSignatureSchema = z.strictObject({
   signature: SignatureSchema.shape.signature,
 });
 
+export const ExportedRowCheckSchema = z.strictObject({
+  id: IdSchema,
+  ruleSet: z.enum(['icnirp2013', 'eu2006']),
+  entryKey: z.string().min(1).max(200),
+  entryExpr: z.string().min(1).max(200),
+  verdict: z.enum(['matches', 'differs']),
+  documentExpr: z.string().min(1).max(200).nullable(),
+  reference: z.string().min(1).max(300),
+  note: z.string().max(1000),
+  personId: IdSchema,
+  name: z.string().min(1).max(300),
+  role: z.string().max(300),
+  signedAt: TimestampSchema,
+  keyId: hex64,
+  trustAnchor: z.string().max(200),
+  signature: z.string().min(1).max(200),
+});
+
 export const ExportDocumentSchema = z.strictObject({
   format: z.literal('beamwarden-export', { error: 'must be "beamwarden-export"' }),
   version: z.union([z.literal(1), z.literal(2)], { error: 'must be 1 or 2 (the export format versions this Beamwarden reads)' }),
@@ -299,6 +317,7 @@ export const ExportDocumentSchema = z.strictObject({
   assessments: z.array(ExportedAssessmentSchema),
   signingKeys: z.array(z.strictObject({ keyId: hex64, publicKey: SignatureSchema.shape.publicKey })),
   coSignatures: z.array(ExportedCoSignatureSchema).optional(),
+  limitRowChecks: z.array(ExportedRowCheckSchema).max(10_000).optional(),
 });
 
 // ---- compile-time proof that the schemas are the record types (fails to compile on drift)

@@ -83,8 +83,11 @@ describe('migrating the version-1 fixture', () => {
       { version: 3, name: 'personal_keys_and_chain' },
       { version: 4, name: 'revision_version' },
       { version: 5, name: 'eyewear_upkeep' },
+      { version: 6, name: 'limit_row_checks' },
       { version: 7, name: 'co_signatures' },
     ]);
+    // no checks of the limit tables yet (schema 6 adds the empty table)
+    expect(raw.prepare('SELECT count(*) AS n FROM limit_row_checks').get()).toEqual({ n: 0 });
     // a version-1 signed record has no co-signatures (schema 7 adds the empty table)
     expect(raw.prepare('SELECT count(*) AS n FROM co_signature').get()).toEqual({ n: 0 });
     // eyewear of the version-1 fixture: upkeep columns added, nothing recorded yet

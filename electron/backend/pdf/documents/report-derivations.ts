@@ -1,4 +1,5 @@
 /** Report: per beam, the two plots and the core's derivation trace. */
+import { checkForStep, checksOf } from '../row-checks.js';
 import type { Content } from 'pdfmake/interfaces';
 import type { UnitHabit } from '../../../../core/units/quantities.js';
 import type { DocumentInput } from '../document-input.js';
@@ -56,7 +57,8 @@ export function derivationsSection(doc: DocumentInput, view: RoomView): Content[
     ),
   ];
   out.push(...rowsUsedSection(doc));
-  const printer = new TracePrinter(doc.results.ruleSetName);
+  const checks = checksOf(doc);
+  const printer = new TracePrinter(doc.results.ruleSetName, (s) => checkForStep(checks, doc.results.ruleSet, s));
   view.beams.forEach((b, i) => {
     out.push(heading(`${i + 1}. ${b.result.label}`, 2));
     out.push(...printer.render(b.result.trace, `D${i + 1}`));

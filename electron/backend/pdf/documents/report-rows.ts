@@ -11,12 +11,16 @@ import { citationLine, citationOf, STATUS_TEXT, type CheckStatus } from '../../.
 import type { DocumentInput } from '../document-input.js';
 import { heading, paragraph } from '../blocks.js';
 import { COLOR } from '../page.js';
+import type { RowCheck } from '../../../../core/model/inputs.js';
+import { checkedWords, checksOf } from '../row-checks.js';
 
 export interface RowUsed {
   readonly row: LimitRow;
   readonly tissue: 'eye' | 'skin';
   readonly citation: string;
   readonly status: CheckStatus;
+  /** The officer's check of the row the results used (issue 12), if any. */
+  readonly check?: RowCheck;
 }
 
 const ROW_LABEL = /^Row (\S+)/;
@@ -38,10 +42,12 @@ export function rowsUsed(doc: DocumentInput): RowUsed[] {
       if (s.kind === 'conservative') stricter.add(id);
     }
   }
+  const checks = checksOf(doc);
   return order.map((id) => {
     const { row, tissue } = byId.get(id) as { row: LimitRow; tissue: 'eye' | 'skin' };
-    const c = citationOf(row.source, row.confidence, stricter.has(id));
-    return { row, tissue, citation: c.text, status: c.status };
+    const check = checks.get(id);
+    const c = citationOf(row.source, check ? 'read' : row.confidence, !check && stricter.has(id));
+    return { row, tissue, citation: c.text, status: c.status, ...(check ? { check } : {}) };
   });
 }
 
@@ -56,14 +62,14 @@ export function rowsUsedSection(doc: DocumentInput): Content[] {
   if (rows.length === 0) return [];
   const groups = new Map<string, RowUsed[]>();
   for (const r of rows) {
-    const key = citationLine({ text: r.citation, status: r.status });
+    const key = r.check ? `${r.citation} — ${checkedWords(r.check)}` : citationLine({ text: r.citation, status: r.status });
     groups.set(key, [...(groups.get(key) ?? []), r]);
   }
   const out: Content[] = [
     heading('Limit-table rows used', 2),
     paragraph(
       `Every row of the exposure-limit tables (${doc.results.ruleSetName}) that a result above rests on, under the published document it comes from and whether it was checked against the published text. ` +
-        'Where a row was not yet checked and a stricter alternative exists, the stricter value is used.',
+        'Where a row was not yet checked and a stricter alternative exists, the stricter value is used. A row checked by an officer names the document, the person and the date of the check.',
       { fontSize: 8, color: COLOR.muted },
     ),
   ];
@@ -74,13 +80,18 @@ export function rowsUsedSection(doc: DocumentInput): Content[] {
       r.row.effect,
       range(r.row.band_nm[0], r.row.band_nm[1], 'nm'),
       range(r.row.t_s[0], r.row.t_s[1], 's'),
-      `${r.row.quantity === 'E' ? 'E' : 'H'} = ${r.row.expr} ${r.row.unit.replace('^2', '²')}`,
+      `${r.row.quantity === 'E' ? 'E' : 'H'} = ${r.row.expr} ${r.row.unit.replace('^2', '²')}${r.check?.verdict === 'differs' ? `; published: ${r.check.documentExpr ?? ''}` : ''}`,
     ]);
     out.push({
       unbreakable: members.length <= 8,
       stack: [
         {
-          text: [{ text: first.citation === '' ? '' : `${first.citation} — ` }, { text: STATUS_TEXT[first.status], bold: true, color: first.status === 'checked' ? COLOR.good : COLOR.ink }],
+          text: [
+            { text: first.citation === '' ? '' : `${first.citation} — ` },
+            first.check
+              ? { text: checkedWords(first.check), bold: true, color: first.check.verdict === 'matches' ? COLOR.good : COLOR.bad }
+              : { text: STATUS_TEXT[first.status], bold: true, color: first.status === 'checked' ? COLOR.good : COLOR.ink },
+          ],
           fontSize: 7.6,
           margin: [0, 4, 0, 1],
         },

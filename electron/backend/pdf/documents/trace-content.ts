@@ -20,6 +20,8 @@ import type { Content } from 'pdfmake/interfaces';
 import type { Trace, TraceKind, TraceStep } from '../../../../core/trace/trace.js';
 import { citationLine, citationOf, readableText } from '../../../../core/provenance/citations.js';
 import { COLOR } from '../page.js';
+import type { RowCheck } from '../../../../core/model/inputs.js';
+import { checkedWords } from '../row-checks.js';
 
 const KIND_STYLE: Readonly<Record<TraceKind, { tag: string; color: string; bold?: boolean }>> = {
   input: { tag: 'input', color: COLOR.muted },
@@ -96,7 +98,14 @@ export class TracePrinter {
   /** Readable citation line -> its number, for the whole report (listed once, at the end). */
   private readonly sources = new Map<string, string>();
 
-  constructor(private readonly ruleSetName: string) {}
+  /**
+   * `checkFor`: the officer's check behind a step (issue 12), cited in its source line instead of
+   * the table's own status ("checked against … by … on …").
+   */
+  constructor(
+    private readonly ruleSetName: string,
+    private readonly checkFor: (s: TraceStep) => RowCheck | undefined = () => undefined,
+  ) {}
 
   /** Lines for one beam's (or the room's) trace, numbered `prefix`. */
   render(trace: Trace, prefix: string): Content[] {
@@ -118,7 +127,9 @@ export class TracePrinter {
 
   private refFor(s: TraceStep): string | null {
     if ((s.source ?? '') === '' && (s.confidence ?? '') === '') return null;
-    const line = citationLine(citationOf(s.source, s.confidence, s.kind === 'conservative'));
+    const check = this.checkFor(s);
+    const c = citationOf(s.source, s.confidence, s.kind === 'conservative');
+    const line = check ? `${c.text === '' ? '' : `${c.text} — `}${checkedWords(check)}` : citationLine(c);
     let ref = this.sources.get(line);
     if (ref === undefined) {
       ref = `[${this.sources.size + 1}]`;

@@ -11,6 +11,7 @@ import * as m0002 from './0002_list_columns_and_audit_log.js';
 import * as m0003 from './0003_personal_keys_and_chain.js';
 import * as m0004 from './0004_revision_version.js';
 import * as m0005 from './0005_eyewear_upkeep.js';
+import * as m0006 from './0006_limit_row_checks.js';
 import * as m0007 from './0007_co_signatures.js';
 
 export interface Migration {
@@ -25,6 +26,7 @@ export const MIGRATIONS: readonly Migration[] = [
   { version: 3, name: m0003.name, sql: m0003.sql },
   { version: 4, name: m0004.name, sql: m0004.sql },
   { version: 5, name: m0005.name, sql: m0005.sql },
+  { version: 6, name: m0006.name, sql: m0006.sql },
   { version: 7, name: m0007.name, sql: m0007.sql },
 ];
 

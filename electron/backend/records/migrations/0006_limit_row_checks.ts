@@ -1,0 +1,40 @@
+/**
+ * Schema version 6: the officer's checks of the limit tables against the published documents
+ * (issue 12). Each row records one check of one limit-table row or correction-factor piece of one
+ * rule set: the verdict ('matches', or 'differs' with what the published text gives), the document
+ * and table cited, and the signature of the person who checked it with their personal key (the
+ * same keys, passphrase and trust list as a signed assessment). A new check of the same entry is a
+ * new row (the newest valid one applies); a signed check is never changed and never deleted.
+ *
+ * Plain SQL that any engine reads (TEXT columns, a CHECK on the verdict); only the two triggers are
+ * SQLite's own (a server engine writes its own equivalent).
+ */
+export const name = 'limit_row_checks';
+
+export const sql = `
+CREATE TABLE limit_row_checks (
+  id             TEXT PRIMARY KEY,
+  rule_set       TEXT NOT NULL,
+  entry_key      TEXT NOT NULL,
+  entry_expr     TEXT NOT NULL,
+  verdict        TEXT NOT NULL CHECK (verdict IN ('matches', 'differs')),
+  document_expr  TEXT,
+  reference      TEXT NOT NULL,
+  note           TEXT NOT NULL,
+  person_id      TEXT NOT NULL,
+  name           TEXT NOT NULL,
+  role           TEXT NOT NULL,
+  signed_at      TEXT NOT NULL,
+  key_id         TEXT NOT NULL,
+  trust_anchor   TEXT NOT NULL,
+  signature      TEXT NOT NULL
+);
+
+CREATE INDEX limit_row_checks_entry ON limit_row_checks (rule_set, entry_key, signed_at);
+
+CREATE TRIGGER limit_row_checks_no_update BEFORE UPDATE ON limit_row_checks
+BEGIN SELECT RAISE(ABORT, 'beamwarden: a signed check of a limit-table row cannot be changed'); END;
+
+CREATE TRIGGER limit_row_checks_no_delete BEFORE DELETE ON limit_row_checks
+BEGIN SELECT RAISE(ABORT, 'beamwarden: a signed check of a limit-table row cannot be deleted'); END;
+`;

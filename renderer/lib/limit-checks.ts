@@ -1,0 +1,88 @@
+/**
+ * Words and numbers of the limit-table checks screen (issue 12): an open table entry's band,
+ * durations, formula and its values at the sample points the core computes, in engineering notation
+ * with units, limits rounded down (SAFETY.md, displayed figures).
+ */
+import { entrySamples, numberText, quantityText, type CheckableEntry, type RuleSetId, type SamplePoint } from '../../core/index.js';
+
+export const RULE_SET_TITLE: Readonly<Record<RuleSetId, string>> = {
+  icnirp2013: 'ICNIRP 2013 guidelines (IEC 60825-1:2014, ANSI Z136.1-2014)',
+  eu2006: 'EU Directive 2006/25/EC, Annex II',
+};
+
+const FACTOR_NAME: Readonly<Record<string, string>> = {
+  CA: 'Correction factor C_A',
+  CB: 'Correction factor C_B',
+  CC: 'Correction factor C_C',
+  CE: 'Correction factor C_E',
+  T1: 'Break-point time T_1',
+  T2: 'Break-point time T_2',
+  alpha_min: 'Smallest source angle α_min',
+  alpha_max: 'Largest source angle α_max',
+  gamma_p: 'Photochemical field of view γ_p',
+  T_i: 'Pulse grouping time T_i',
+  T_min: 'Pulse grouping time T_min',
+  C1: 'Factor C_1',
+  C2: 'Factor C_2',
+  T1_vis: 'Break-point time T_1 (visible)',
+};
+
+/** "Row H-E-VIS-2 · eye, retinal thermal" or "Correction factor C_C". */
+export function entryTitle(e: CheckableEntry): string {
+  if (e.kind === 'factor') return FACTOR_NAME[e.name] ?? `Factor ${e.name}`;
+  return `Row ${e.name} · ${e.tissue === 'skin' ? 'skin' : 'eye'}, ${e.effect ?? ''}`;
+}
+
+/** The unit as the officer reads it: "J/m²", "W/m²", "s", "mrad" or nothing. */
+export function unitText(e: CheckableEntry): string {
+  return e.unit.replace('^2', '²');
+}
+
+/** Band and durations: "400 nm – 700 nm · 10 ps – 1 ns". */
+export function spanText(e: CheckableEntry): string {
+  const band = e.band_nm ? `${quantityText(String(e.band_nm[0]), 'nm')} – ${quantityText(String(e.band_nm[1]), 'nm')}` : 'every wavelength';
+  const t = e.t_s ? `${quantityText(String(e.t_s[0]), 's')} – ${quantityText(String(e.t_s[1]), 's')}` : 'every duration';
+  return `${band} · ${t}${e.condition ? ` · where ${e.condition}` : ''}`;
+}
+
+const SUPERSCRIPT: Readonly<Record<string, string>> = { '-': '⁻', '+': '', 0: '⁰', 1: '¹', 2: '²', 3: '³', 4: '⁴', 5: '⁵', 6: '⁶', 7: '⁷', 8: '⁸', 9: '⁹' };
+
+/**
+ * A table expression typeset for reading: "2e-3*CE" -> "2×10⁻³·CE" (powers of ten as printed in
+ * the standards; the symbols stay as the tables name them, the same the officer types).
+ */
+export function formulaText(expr: string): string {
+  return expr
+    .replace(/\s+/g, '')
+    .replace(/(\d+(?:\.\d+)?)e([+-]?\d+)/g, (_m, m: string, e: string) => `${m === '1' ? '' : `${m}×`}10${[...e].map((ch) => SUPERSCRIPT[ch] ?? ch).join('')}`)
+    .replace(/\*/g, '·');
+}
+
+/** "H = 2e-3·CE J/m²", "C_C = 8+10^(0.04·(lambda-1250))". */
+export function entryFormula(e: CheckableEntry, expr = e.expr): string {
+  const lhs = e.kind === 'factor' ? e.name : e.quantity;
+  const unit = unitText(e);
+  return `${lhs} = ${formulaText(expr)}${unit ? ` ${unit}` : ''}`;
+}
+
+/** A value of the entry as the officer reads it: limits rounded down, 3 significant figures. */
+export function valueText(e: CheckableEntry, v: string | undefined): string {
+  if (v === undefined) return '—';
+  const unit = unitText(e);
+  if (unit === 'J/m²' || unit === 'W/m²' || unit === 's') return quantityText(v, unit, { round: e.kind === 'row' ? 'down' : 'nearest' });
+  return `${numberText(v)}${unit ? ` ${unit}` : ''}`;
+}
+
+/** "532 nm, 100 ps" (and the source angle where the entry depends on it). */
+export function pointText(p: SamplePoint): string {
+  return `${quantityText(p.wavelength_nm, 'nm')}, ${quantityText(p.duration_s, 's')}${p.alpha_mrad !== undefined ? `, α = ${numberText(p.alpha_mrad)} mrad` : ''}`;
+}
+
+/** The samples, or null where the core cannot evaluate the entry at its sample points. */
+export function samplesOf(ruleSet: RuleSetId, e: CheckableEntry, typed?: string): SamplePoint[] | null {
+  try {
+    return entrySamples(ruleSet, e, typed);
+  } catch {
+    return null;
+  }
+}
