@@ -25,6 +25,8 @@ import { laserHistory } from './laser-history.js';
 import { saveWork } from './save-work.js';
 import { defaultBackupFolder } from './safekeeping.js';
 import { openSqliteEngine } from './sqlite-engine.js';
+import { describeAddress, isServerAddress } from './address.js';
+import { openPgEngine } from './pg-engine.js';
 import type { OpenOptions, RecordStore, StoreInfo } from './types.js';
 
 function storeOver(ctx: StoreContext, engine: RecordEngine, info: StoreInfo): RecordStore {
@@ -117,13 +119,25 @@ export interface InternalOpenOptions extends OpenOptions {
  * folder (paths.ts); the trust list and signing log live beside the database unless `keyDir` is given.
  */
 export async function openRecordStore(options: InternalOpenOptions = {}): Promise<RecordStore> {
-  const path = resolve(options.path ?? defaultDatabasePath());
-  const keyDir = resolve(options.keyDir ?? dirname(path));
   const readonly = options.readonly === true;
-  // The default folder is made with its parents (first start); a folder the officer named must exist.
-  if (!readonly && options.path === undefined) mkdirSync(dirname(path), { recursive: true });
-  if (!readonly) checkWritableAtStart(path);
-  const engine = openSqliteEngine(path, { ...(options.nativeBinding !== undefined ? { nativeBinding: options.nativeBinding } : {}), readonly });
+  const server = options.path !== undefined && isServerAddress(options.path);
+  let path: string;
+  let keyDir: string;
+  let engine: RecordEngine;
+  if (server) {
+    // The institution register: personal keys, trust list and signing log stay on this desk.
+    path = describeAddress(options.path ?? '');
+    keyDir = resolve(options.keyDir ?? dirname(defaultDatabasePath()));
+    if (!readonly && options.keyDir === undefined) mkdirSync(keyDir, { recursive: true });
+    engine = await openPgEngine(options.path ?? '', { readonly });
+  } else {
+    path = resolve(options.path ?? defaultDatabasePath());
+    keyDir = resolve(options.keyDir ?? dirname(path));
+    // The default folder is made with its parents (first start); a folder the officer named must exist.
+    if (!readonly && options.path === undefined) mkdirSync(dirname(path), { recursive: true });
+    if (!readonly) checkWritableAtStart(path);
+    engine = openSqliteEngine(path, { ...(options.nativeBinding !== undefined ? { nativeBinding: options.nativeBinding } : {}), readonly });
+  }
   const calculatedWith = options.calculatedWith ?? CALCULATED_WITH;
   const ctx = makeContext({
     q: engine.port,
