@@ -10,7 +10,7 @@
 import { createHash } from 'node:crypto';
 import { join } from 'node:path';
 import pg from 'pg';
-import { afterAll } from 'vitest';
+import { afterAll, describe } from 'vitest';
 
 export const PG_ADDRESS = process.env['BEAMWARDEN_TEST_PG'] ?? '';
 export const PG_SKIP_REASON = 'skipped: BEAMWARDEN_TEST_PG is not set (.ci/run sets it to a throw-away PostgreSQL database)';
@@ -74,4 +74,16 @@ export async function pgSnapshot(schema: string): Promise<string> {
     out[t] = rows.map((row) => Object.fromEntries(Object.entries(row).map(([k, v]) => [k, Buffer.isBuffer(v) ? v.toString('base64') : v])));
   }
   return JSON.stringify(out);
+}
+
+/** `fn`'s tests once per engine, each group named after its engine (and the reason when skipped). */
+export function forEachEngine(fn: (engine: TestEngine) => void): void {
+  for (const engine of ENGINES) describe.skipIf(engine.skip)(engine.label, () => fn(engine));
+}
+
+/** A connection of the register's owner in `schema`, for holding a lock across a test step; release it after. */
+export async function adminClient(schema: string): Promise<pg.PoolClient> {
+  const client = await adminPool().connect();
+  await client.query(`SET search_path = ${schema}`);
+  return client;
 }
