@@ -39,9 +39,11 @@ async function appliedHistory(client: pg.PoolClient, where: string): Promise<num
   if (schema.rows[0]?.s == null) {
     throw new RecordError('server', `The institution register at ${where} has no schema to work in: the schema named in the address (search_path) does not exist, or your account may not use it.`);
   }
-  const exists = await client.query<{ t: string | null }>("SELECT to_regclass('schema_migrations')::text AS t");
-  if (exists.rows[0]?.t == null) {
-    const tables = await client.query<{ n: number }>("SELECT count(*)::int AS n FROM pg_tables WHERE schemaname = current_schema()");
+  // One statement, one snapshot: another desk may be committing the first migration meanwhile.
+  const tables = await client.query<{ history: number; n: number }>(
+    "SELECT count(*) FILTER (WHERE tablename = 'schema_migrations')::int AS history, count(*)::int AS n FROM pg_tables WHERE schemaname = current_schema()",
+  );
+  if ((tables.rows[0]?.history ?? 0) === 0) {
     if ((tables.rows[0]?.n ?? 0) > 0) {
       throw new RecordError('corrupt-database', `The database at ${where} holds other tables but no Beamwarden register. Point Beamwarden at an empty database (or schema) made for the register.`);
     }
@@ -97,8 +99,17 @@ async function migrate(pool: pg.Pool, where: string, target: number, readonly: b
         throw new RecordError('migration-failed', `Migration ${m.version} (${m.name}) of the institution register at ${where} failed and was rolled back: ${e instanceof Error ? e.message : String(e)}`);
       }
     }
-    // Rights for the group roles the administrator made (README): new tables included.
-    await client.query('SELECT bw_grant_access()');
+    // Rights for the group roles the administrator made (README), new tables included; under the
+    // migration lock, since two desks granting at once collide in the catalog.
+    try {
+      await client.query('BEGIN');
+      await client.query(MIGRATION_LOCK);
+      await client.query('SELECT bw_grant_access()');
+      await client.query('COMMIT');
+    } catch (e) {
+      await client.query('ROLLBACK').catch(() => undefined);
+      throw e;
+    }
     return version;
   } finally {
     client.release();
