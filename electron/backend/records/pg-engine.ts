@@ -36,7 +36,7 @@ const MIGRATION_LOCK = "SELECT pg_advisory_xact_lock(hashtext(current_schema() |
 
 async function appliedHistory(client: pg.PoolClient, where: string): Promise<number> {
   const schema = await client.query<{ s: string | null }>('SELECT current_schema() AS s');
-  if (schema.rows[0]?.s == null) {
+  if ((schema.rows[0]?.s ?? null) === null) {
     throw new RecordError('server', `The institution register at ${where} has no schema to work in: the schema named in the address (search_path) does not exist, or your account may not use it.`);
   }
   // One statement, one snapshot: another desk may be committing the first migration meanwhile.

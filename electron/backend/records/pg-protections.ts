@@ -26,7 +26,7 @@ function expected(version: number): Expected {
     for (const f of sql.matchAll(/CREATE (?:OR REPLACE )?FUNCTION (\w+)\(\) RETURNS trigger[\s\S]*?AS \$\$([\s\S]*?)\$\$;/g)) {
       if (f[1] && f[2] !== undefined) out.functions.set(f[1], normalise(f[2]));
     }
-    for (const t of sql.matchAll(/CREATE TRIGGER (\w+)[\s\S]*? ON (\w+)\s+FOR EACH ROW EXECUTE FUNCTION (\w+)\(\);/g)) {
+    for (const t of sql.matchAll(/CREATE TRIGGER (\w+)[^;]*? ON (\w+)\s+FOR EACH ROW EXECUTE FUNCTION (\w+)\([^)]*\);/g)) {
       if (t[1] && t[2] && t[3]) out.triggers.set(t[1], { table: t[2], fn: t[3] });
     }
     for (const d of sql.matchAll(/DROP TRIGGER (?:IF EXISTS )?(\w+)/g)) if (d[1]) out.triggers.delete(d[1]);

@@ -28,6 +28,13 @@ export const ENGINES: readonly TestEngine[] = [
   { name: 'postgresql', label: PG_ADDRESS ? 'PostgreSQL server' : `PostgreSQL server (${PG_SKIP_REASON})`, skip: PG_ADDRESS === '' },
 ];
 
+/**
+ * The engine of suites that name none (openTemp without an engine): SQLite, or the server with
+ * BEAMWARDEN_TEST_ENGINE=postgresql, to try a whole suite on the server by hand (suites that read the
+ * SQLite file with raw SQL then fail by design).
+ */
+export const DEFAULT_ENGINE: TestEngine | undefined = process.env['BEAMWARDEN_TEST_ENGINE'] === 'postgresql' && PG_ADDRESS !== '' ? ENGINES[1] : undefined;
+
 let admin: pg.Pool | null = null;
 function adminPool(): pg.Pool {
   admin ??= new pg.Pool({ connectionString: PG_ADDRESS, max: 2 });

@@ -11,7 +11,7 @@ import demo from '../../../assets/demo/demo-scenario.json' with { type: 'json' }
 import { DemoScenarioSchema } from '../../../electron/backend/records/demo.js';
 import { openRecordStore, type RecordStore, type Room, type Site } from '../../../electron/backend/records/index.js';
 import type { InternalOpenOptions } from '../../../electron/backend/records/store.js';
-import { pgAddress, pgSnapshot, schemaFor, type TestEngine } from './engines.js';
+import { DEFAULT_ENGINE, pgAddress, pgSnapshot, schemaFor, type TestEngine } from './engines.js';
 
 export const scenario = DemoScenarioSchema.parse(demo);
 
@@ -25,7 +25,7 @@ export function tempDir(prefix = 'bw-records-'): { dir: string; cleanup: () => v
  * On PostgreSQL the "file" `dir/name` is a schema of the test database (engines.ts): opening the
  * same name twice opens the same register, as two hosts would.
  */
-export async function openTemp(dir: string, name = 'records.sqlite', engine?: TestEngine, extra: Omit<InternalOpenOptions, 'path'> = {}): Promise<RecordStore> {
+export async function openTemp(dir: string, name = 'records.sqlite', engine: TestEngine | undefined = DEFAULT_ENGINE, extra: Omit<InternalOpenOptions, 'path'> = {}): Promise<RecordStore> {
   const keyDir = join(dir, name === 'records.sqlite' ? 'keys' : `keys-${name}`);
   if (engine?.name === 'postgresql') return openRecordStore({ keyDir, ...extra, path: await pgAddress(schemaFor(dir, name)) });
   return openRecordStore({ keyDir, ...extra, path: join(dir, name) });

@@ -8,7 +8,6 @@
  * Real SQLite files; cases "derived: no silent loss" unless a standard is named. Timestamps per
  * ISO 8601 / RFC 3339 section 5.6 (a time with an offset names one instant).
  */
-import { join } from 'node:path';
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { RecordError, type RecordStore } from '../../../electron/backend/records/index.js';
 import { makeSigner, openTemp, registerRoom, snapshotOn, STATEMENT, tempDir } from './helpers.js';

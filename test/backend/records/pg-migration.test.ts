@@ -98,6 +98,23 @@ describe.skipIf(skip)(`institution register migrations on PostgreSQL${skip ? ` (
     expect(pgTriggers.sort()).toEqual(liteTriggers.sort());
   });
 
+  it('a trigger rewritten, dropped or switched off, or row-level security turned off, is reported at open', async () => {
+    const schema = freshSchema('tamper');
+    const address = await pgAddress(schema);
+    await (await openPgEngine(address)).close();
+    await adminQuery(schema, 'CREATE OR REPLACE FUNCTION bw_signature_no_update() RETURNS trigger LANGUAGE plpgsql AS $$ BEGIN RETURN NEW; END $$');
+    await adminQuery(schema, 'DROP TRIGGER revision_recorded ON revision');
+    await adminQuery(schema, 'ALTER TABLE audit_event DISABLE TRIGGER audit_event_no_delete');
+    await adminQuery(schema, 'ALTER TABLE room DISABLE ROW LEVEL SECURITY');
+    const store = await openRecordStore({ path: address, keyDir: t.dir });
+    await store.close();
+    const said = store.info.warnings.join(' ');
+    for (const finding of ['trigger signature_no_update was altered', 'trigger revision_recorded is missing', 'trigger audit_event_no_delete is switched off', 'row-level security on room is off']) {
+      expect(said).toContain(finding);
+    }
+    expect(said).toMatch(/^The database's protections against changing signed records were removed/);
+  });
+
   it('a history written by another build is refused, and nothing is changed', async () => {
     const schema = freshSchema('other');
     const address = await pgAddress(schema);

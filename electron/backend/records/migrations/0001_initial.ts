@@ -330,10 +330,12 @@ FOR EACH ROW EXECUTE FUNCTION bw_revision_insert_as_draft();
 
 CREATE FUNCTION bw_revision_signed_immutable() RETURNS trigger LANGUAGE plpgsql AS $$
 BEGIN
-  IF OLD.status <> 'draft' AND NOT (
-    OLD.status = 'signed' AND NEW.status = 'superseded'
-    AND (to_jsonb(NEW) - 'status') = (to_jsonb(OLD) - 'status')) THEN
-    RAISE EXCEPTION 'beamwarden: a signed revision cannot be changed; save creates a new draft revision';
+  -- Drafts are saved often and carry large results: the whole-row comparison runs for signed rows only.
+  IF OLD.status <> 'draft' THEN
+    IF NOT (OLD.status = 'signed' AND NEW.status = 'superseded'
+            AND (to_jsonb(NEW) - 'status') = (to_jsonb(OLD) - 'status')) THEN
+      RAISE EXCEPTION 'beamwarden: a signed revision cannot be changed; save creates a new draft revision';
+    END IF;
   END IF;
   RETURN NEW;
 END $$;
@@ -448,13 +450,19 @@ CREATE TRIGGER write_record_append_only BEFORE UPDATE OR DELETE ON write_record
 FOR EACH ROW EXECUTE FUNCTION bw_append_only();
 
 -- SECURITY DEFINER: writers need no right on write_record, and cannot leave a change unrecorded.
+-- The trigger's argument names the row's key column; only that column is read (a revision row
+-- carries tens of kB of content and results).
 CREATE FUNCTION bw_record_write() RETURNS trigger LANGUAGE plpgsql SECURITY DEFINER SET search_path FROM CURRENT AS $$
 DECLARE
-  r jsonb := CASE WHEN TG_OP = 'DELETE' THEN to_jsonb(OLD) ELSE to_jsonb(NEW) END;
+  k text;
 BEGIN
+  IF TG_OP = 'DELETE' THEN
+    EXECUTE format('SELECT ($1).%I::text', TG_ARGV[0]) USING OLD INTO k;
+  ELSE
+    EXECUTE format('SELECT ($1).%I::text', TG_ARGV[0]) USING NEW INTO k;
+  END IF;
   INSERT INTO write_record (db_role, table_name, operation, row_key)
-  VALUES (session_user, TG_TABLE_NAME, TG_OP,
-          coalesce(r ->> 'id', r ->> 'revision_id', r ->> 'key_id', r ->> 'anchor', ''));
+  VALUES (session_user, TG_TABLE_NAME, TG_OP, coalesce(k, ''));
   RETURN NULL;
 END $$;
 
@@ -538,14 +546,14 @@ CREATE POLICY signature_read ON signature FOR SELECT USING (true);
 CREATE POLICY signature_insert ON signature FOR INSERT WITH CHECK (bw_may_write_site(bw_revision_site(revision_id)));
 
 -- The record of who wrote: on every table of the register.
-CREATE TRIGGER site_recorded AFTER INSERT OR UPDATE OR DELETE ON site FOR EACH ROW EXECUTE FUNCTION bw_record_write();
-CREATE TRIGGER person_recorded AFTER INSERT OR UPDATE OR DELETE ON person FOR EACH ROW EXECUTE FUNCTION bw_record_write();
-CREATE TRIGGER room_recorded AFTER INSERT OR UPDATE OR DELETE ON room FOR EACH ROW EXECUTE FUNCTION bw_record_write();
-CREATE TRIGGER laser_installation_recorded AFTER INSERT OR UPDATE OR DELETE ON laser_installation FOR EACH ROW EXECUTE FUNCTION bw_record_write();
-CREATE TRIGGER eyewear_recorded AFTER INSERT OR UPDATE OR DELETE ON eyewear FOR EACH ROW EXECUTE FUNCTION bw_record_write();
-CREATE TRIGGER signing_key_recorded AFTER INSERT OR UPDATE OR DELETE ON signing_key FOR EACH ROW EXECUTE FUNCTION bw_record_write();
-CREATE TRIGGER assessment_recorded AFTER INSERT OR UPDATE OR DELETE ON assessment FOR EACH ROW EXECUTE FUNCTION bw_record_write();
-CREATE TRIGGER revision_recorded AFTER INSERT OR UPDATE OR DELETE ON revision FOR EACH ROW EXECUTE FUNCTION bw_record_write();
-CREATE TRIGGER signature_recorded AFTER INSERT OR UPDATE OR DELETE ON signature FOR EACH ROW EXECUTE FUNCTION bw_record_write();
-CREATE TRIGGER officer_site_recorded AFTER INSERT OR UPDATE OR DELETE ON officer_site FOR EACH ROW EXECUTE FUNCTION bw_record_write();
+CREATE TRIGGER site_recorded AFTER INSERT OR UPDATE OR DELETE ON site FOR EACH ROW EXECUTE FUNCTION bw_record_write('id');
+CREATE TRIGGER person_recorded AFTER INSERT OR UPDATE OR DELETE ON person FOR EACH ROW EXECUTE FUNCTION bw_record_write('id');
+CREATE TRIGGER room_recorded AFTER INSERT OR UPDATE OR DELETE ON room FOR EACH ROW EXECUTE FUNCTION bw_record_write('id');
+CREATE TRIGGER laser_installation_recorded AFTER INSERT OR UPDATE OR DELETE ON laser_installation FOR EACH ROW EXECUTE FUNCTION bw_record_write('id');
+CREATE TRIGGER eyewear_recorded AFTER INSERT OR UPDATE OR DELETE ON eyewear FOR EACH ROW EXECUTE FUNCTION bw_record_write('id');
+CREATE TRIGGER signing_key_recorded AFTER INSERT OR UPDATE OR DELETE ON signing_key FOR EACH ROW EXECUTE FUNCTION bw_record_write('key_id');
+CREATE TRIGGER assessment_recorded AFTER INSERT OR UPDATE OR DELETE ON assessment FOR EACH ROW EXECUTE FUNCTION bw_record_write('id');
+CREATE TRIGGER revision_recorded AFTER INSERT OR UPDATE OR DELETE ON revision FOR EACH ROW EXECUTE FUNCTION bw_record_write('id');
+CREATE TRIGGER signature_recorded AFTER INSERT OR UPDATE OR DELETE ON signature FOR EACH ROW EXECUTE FUNCTION bw_record_write('revision_id');
+CREATE TRIGGER officer_site_recorded AFTER INSERT OR UPDATE OR DELETE ON officer_site FOR EACH ROW EXECUTE FUNCTION bw_record_write('db_role');
 `;

@@ -99,6 +99,6 @@ FOR EACH ROW EXECUTE FUNCTION bw_trust_anchor_pin_append_only();
 CREATE TRIGGER trust_anchor_pin_no_delete BEFORE DELETE ON trust_anchor_pin
 FOR EACH ROW EXECUTE FUNCTION bw_trust_anchor_pin_append_only();
 
-CREATE TRIGGER person_key_recorded AFTER INSERT OR UPDATE OR DELETE ON person_key FOR EACH ROW EXECUTE FUNCTION bw_record_write();
-CREATE TRIGGER trust_anchor_pin_recorded AFTER INSERT OR UPDATE OR DELETE ON trust_anchor_pin FOR EACH ROW EXECUTE FUNCTION bw_record_write();
+CREATE TRIGGER person_key_recorded AFTER INSERT OR UPDATE OR DELETE ON person_key FOR EACH ROW EXECUTE FUNCTION bw_record_write('key_id');
+CREATE TRIGGER trust_anchor_pin_recorded AFTER INSERT OR UPDATE OR DELETE ON trust_anchor_pin FOR EACH ROW EXECUTE FUNCTION bw_record_write('anchor');
 `;

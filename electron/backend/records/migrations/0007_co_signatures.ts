@@ -64,5 +64,5 @@ ALTER TABLE co_signature ENABLE ROW LEVEL SECURITY;
 CREATE POLICY co_signature_read ON co_signature FOR SELECT USING (true);
 CREATE POLICY co_signature_insert ON co_signature FOR INSERT WITH CHECK (bw_may_write_site(bw_revision_site(revision_id)));
 
-CREATE TRIGGER co_signature_recorded AFTER INSERT OR UPDATE OR DELETE ON co_signature FOR EACH ROW EXECUTE FUNCTION bw_record_write();
+CREATE TRIGGER co_signature_recorded AFTER INSERT OR UPDATE OR DELETE ON co_signature FOR EACH ROW EXECUTE FUNCTION bw_record_write('revision_id');
 `;
