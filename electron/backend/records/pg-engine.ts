@@ -154,6 +154,7 @@ export async function openPgEngine(address: string, options: PgEngineOptions = {
     throw connectionError(e, where) ?? translatePgError(e, 'Opening the institution register', where);
   }
   const port = new PgSqlPort(pool);
+  const channel = (await pool.query<{ c: string }>("SELECT 'bw_changes_' || current_schema() AS c")).rows[0]?.c ?? 'bw_changes_public';
   const refused = (): Promise<never> => Promise.reject(new RecordError('storage', NO_SERVER_BACKUP));
   return {
     port,
@@ -163,6 +164,23 @@ export async function openPgEngine(address: string, options: PgEngineOptions = {
     backup: refused,
     backupInto: refused,
     backupStatus: () => Promise.resolve({ databasePath: where, folder: '', lastBackupAt: null, lastBackupPath: null, backups: [] }),
+    watch: async (listener) => {
+      // A connection of its own: a pooled one would be handed to other work between notifications.
+      const client = new pg.Client({ connectionString: address.trim(), application_name: 'beamwarden-changes' });
+      client.on('error', () => undefined);
+      client.on('notification', (n) => {
+        if (n.channel !== channel || n.payload === undefined) return;
+        try {
+          const c = JSON.parse(n.payload) as { table?: unknown; key?: unknown; operation?: unknown; by?: unknown };
+          listener({ table: String(c.table ?? ''), id: String(c.key ?? ''), operation: String(c.operation ?? ''), by: String(c.by ?? '') });
+        } catch {
+          // Not ours: ignored.
+        }
+      });
+      await client.connect();
+      await client.query(`LISTEN "${channel.replace(/"/g, '""')}"`);
+      return () => client.end();
+    },
     close: () => port.close(),
   };
 }

@@ -27,13 +27,43 @@ import { defaultBackupFolder } from './safekeeping.js';
 import { openSqliteEngine } from './sqlite-engine.js';
 import { describeAddress, isServerAddress } from './address.js';
 import { openPgEngine } from './pg-engine.js';
-import type { OpenOptions, RecordStore, StoreInfo } from './types.js';
+import type { OpenOptions, RecordStore, RegisterChange, RegisterChanges, StoreInfo } from './types.js';
+
+/** The changes heard from the register (institution register), kept for open screens to ask after. */
+function changeFeed(engine: RecordEngine): { since(seq: number): Promise<RegisterChanges>; close(): Promise<void> } {
+  const kept: RegisterChange[] = [];
+  let seq = 0;
+  let stop: Promise<() => Promise<void>> | null = null;
+  const KEEP = 200;
+  return {
+    async since(after) {
+      const watch = engine.watch;
+      if (watch === undefined) return { live: false, seq: 0, changes: [] };
+      stop ??= watch((c) => {
+        seq += 1;
+        const operation = c.operation === 'INSERT' || c.operation === 'DELETE' ? c.operation : 'UPDATE';
+        kept.push({ seq, table: c.table, id: c.id, operation, by: c.by });
+        if (kept.length > KEEP) kept.splice(0, kept.length - KEEP);
+      });
+      await stop;
+      return { live: true, seq, changes: kept.filter((c) => c.seq > after) };
+    },
+    async close() {
+      if (stop) await (await stop)();
+    },
+  };
+}
 
 function storeOver(ctx: StoreContext, engine: RecordEngine, info: StoreInfo): RecordStore {
   const backupFolder = defaultBackupFolder(info.path);
+  const changes = changeFeed(engine);
   return {
     info,
-    close: () => engine.close(),
+    close: async () => {
+      await changes.close();
+      await engine.close();
+    },
+    registerChanges: (since) => changes.since(since),
 
     listSites: () => R.listSites(ctx),
     getSite: (id) => R.getSite(ctx, id),

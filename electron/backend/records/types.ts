@@ -5,6 +5,7 @@
  * Nothing here imports Electron: the store runs under plain Node and in the Electron main process.
  */
 import type { CoSignature } from './co-signature-checks.js';
+import type { RegisterChanges } from '../../api/contracts/app.js';
 import type {
   Assessment,
   AssessmentContent,
@@ -45,6 +46,7 @@ import type {
 import type { RoomInput } from '../../../core/model/inputs.js';
 
 export * from '../../api/contracts/records.js';
+export type { RegisterChange, RegisterChanges } from '../../api/contracts/app.js';
 
 // ---------------------------------------------------------------- the store
 
@@ -77,6 +79,8 @@ export interface StoreInfo {
 export interface RecordStore {
   readonly info: StoreInfo;
   close(): Promise<void>;
+  /** Changes to the register after `since` (institution register: made by any officer, heard with LISTEN/NOTIFY). */
+  registerChanges(since: number): Promise<RegisterChanges>;
 
   // register
   listSites(): Promise<Site[]>;

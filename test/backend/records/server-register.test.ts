@@ -17,9 +17,10 @@ import { randomBytes } from 'node:crypto';
 import { existsSync, readdirSync } from 'node:fs';
 import { join } from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { openRecordStore, RecordError, type Assessment, type RecordStore } from '../../../electron/backend/records/index.js';
+import { openRecordStore, RecordError, type Assessment, type RecordStore, type RegisterChanges } from '../../../electron/backend/records/index.js';
 import { adminClient, adminQuery, PG_ADDRESS, PG_SKIP_REASON, pgAddress, pgSnapshot, schemaFor } from './engines.js';
-import { makeSigner, registerRoom, STATEMENT, tempDir } from './helpers.js';
+import { makeSigner, openTemp, registerRoom, STATEMENT, tempDir } from './helpers.js';
+import { startTestHost } from './http-host.js';
 
 const skip = PG_ADDRESS === '';
 const base = (x: Assessment) => ({ revisionId: x.current.id, version: x.version });
@@ -41,6 +42,18 @@ async function addressAs(schema: string, user: string, password: string): Promis
   u.password = password;
   return u.toString();
 }
+
+it('a register file has no changes to hear: only this program writes it', async () => {
+  const t = tempDir('bw-file-changes-');
+  const s = await openTemp(t.dir);
+  try {
+    await registerRoom(s);
+    expect(await s.registerChanges(0)).toEqual({ live: false, seq: 0, changes: [] });
+  } finally {
+    await s.close();
+    t.cleanup();
+  }
+});
 
 describe.skipIf(skip)(`institution register on PostgreSQL${skip ? ` (${PG_SKIP_REASON})` : ''}`, () => {
   let t: ReturnType<typeof tempDir>;
@@ -130,6 +143,26 @@ describe.skipIf(skip)(`institution register on PostgreSQL${skip ? ` (${PG_SKIP_R
       expect(sigs[0]?.n).toBe(1);
       expect((await b.verify(made.id)).ok).toBe(true);
     });
+  });
+
+  it('a change by another officer reaches an open screen without a reload (LISTEN/NOTIFY, over the host too)', async () => {
+    const { room } = await registerRoom(b, 'A0.07');
+    const host = await startTestHost(a);
+    try {
+      const start = await host.ok<RegisterChanges>('register-changes', { since: 0 });
+      expect(start.live).toBe(true);
+      await b.updateRoom(room.id, { name: 'Telecom test bench (renamed by officer B)' });
+      let heard: RegisterChanges = start;
+      for (let i = 0; i < 100 && !heard.changes.some((c) => c.table === 'room' && c.id === room.id); i++) {
+        await new Promise((r) => setTimeout(r, 50));
+        heard = await host.ok<RegisterChanges>('register-changes', { since: start.seq });
+      }
+      expect(heard.changes).toContainEqual(expect.objectContaining({ table: 'room', id: room.id, operation: 'UPDATE', by: new URL(PG_ADDRESS).username }));
+      expect(heard.seq).toBeGreaterThan(start.seq);
+      expect((await a.getRoom(room.id)).name).toBe('Telecom test bench (renamed by officer B)');
+    } finally {
+      await host.close();
+    }
   });
 
   describe('the database refuses changes to signed content (raw SQL as the register owner)', () => {

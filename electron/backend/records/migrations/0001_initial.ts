@@ -463,6 +463,10 @@ BEGIN
   END IF;
   INSERT INTO write_record (db_role, table_name, operation, row_key)
   VALUES (session_user, TG_TABLE_NAME, TG_OP, coalesce(k, ''));
+  -- Open screens of other officers learn of the change when it commits (LISTEN/NOTIFY; a register
+  -- per schema, so the channel carries the schema's name).
+  PERFORM pg_notify('bw_changes_' || current_schema(),
+    json_build_object('table', TG_TABLE_NAME, 'key', coalesce(k, ''), 'operation', TG_OP, 'by', session_user)::text);
   RETURN NULL;
 END $$;
 
