@@ -158,6 +158,8 @@ export async function copyRegister(from: string, to: string, keyDir: string): Pr
     } finally {
       client.release();
     }
+    // Fresh statistics for the planner: the tables were empty when the copy started.
+    await engine.port.run('ANALYZE');
     // Every signed revision checked again on the server, and compared with the same check on the file.
     target = await openRecordStore({ path: to, keyDir });
     let signedRevisions = 0;
