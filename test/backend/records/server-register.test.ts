@@ -21,6 +21,7 @@ import { openRecordStore, RecordError, type Assessment, type RecordStore, type R
 import { adminClient, adminQuery, PG_ADDRESS, PG_SKIP_REASON, pgAddress, pgSnapshot, schemaFor } from './engines.js';
 import { makeSigner, openTemp, registerRoom, STATEMENT, tempDir } from './helpers.js';
 import { startTestHost } from './http-host.js';
+import { runVerify } from '../../../electron/cli/verify.js';
 
 const skip = PG_ADDRESS === '';
 const base = (x: Assessment) => ({ revisionId: x.current.id, version: x.version });
@@ -325,6 +326,16 @@ describe.skipIf(skip)(`institution register on PostgreSQL${skip ? ` (${PG_SKIP_R
       expect(err.code).toBe('newer-database');
       expect(err.message).toMatch(/schema version 99, newer than this Beamwarden build understands/);
     });
+  });
+
+  it('npm run verify checks the register on the server, showing its address without the password', async () => {
+    const lines: string[] = [];
+    const status = await runVerify(['--db', await pgAddress(schema), '--key-dir', join(t.dir, 'keys'), '--all'], (l) => lines.push(l));
+    const said = lines.join('\n');
+    expect(said).toMatch(/^Database postgresql:\/\/\w+@127\.0\.0\.1:\d+\/\w+$/m);
+    expect(said).not.toContain(`:${new URL(PG_ADDRESS).password}@`);
+    expect(said).toMatch(/\d+ assessment\(s\): \d+ ok, \d+ not signed yet, 0 failed\./);
+    expect(status).toBe(0);
   });
 
   it('backup from the app answers that the server keeps the backups', async () => {
