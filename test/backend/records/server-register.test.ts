@@ -302,6 +302,22 @@ describe.skipIf(skip)(`institution register on PostgreSQL${skip ? ` (${PG_SKIP_R
       }
     });
 
+    it('the password may be kept out of the address (PGPASSWORD, PostgreSQL 15 documentation 34.15 "Environment Variables")', async () => {
+      const u = new URL(await pgAddress(schema));
+      const password = decodeURIComponent(u.password);
+      u.password = '';
+      const before = process.env['PGPASSWORD'];
+      process.env['PGPASSWORD'] = password;
+      try {
+        const s = await openRecordStore({ path: u.toString(), keyDir: join(t.dir, 'keys') });
+        await s.close();
+        expect(s.info.schemaVersion).toBeGreaterThan(0);
+      } finally {
+        if (before === undefined) delete process.env['PGPASSWORD'];
+        else process.env['PGPASSWORD'] = before;
+      }
+    });
+
     it('a register not set up, opened by an account that may not set it up', async () => {
       const empty = `t_empty_${randomBytes(4).toString('hex')}`;
       await pgAddress(empty);
