@@ -68,6 +68,8 @@ const RECORD_CODE: Readonly<Record<RecordError['code'], ApiErrorBody['code']>> =
   'corrupt-database': 'internal',
   'migration-failed': 'internal',
   'signing-key': 'invalid_input',
+  server: 'storage',
+  'not-permitted': 'conflict',
 };
 
 export async function dispatch<C>(table: HandlerTable<C>, ctx: C, name: string, payload: unknown): Promise<Reply<unknown>> {

@@ -5,6 +5,8 @@
  * database, so the app's reminder knows about it.
  */
 import { backupDatabaseFile, defaultBackupFolder, defaultDatabasePath } from '../backend/records/index.js';
+import { isServerAddress } from '../backend/records/address.js';
+import { NO_SERVER_BACKUP } from '../backend/records/pg-engine.js';
 import { BackupArgsSchema } from './safekeeping-args.js';
 import { parseCommandArgs } from './command-args.js';
 
@@ -13,6 +15,8 @@ const USAGE = 'usage: npm run backup -- [--db <database file>] [--out <folder>]'
 async function main(): Promise<void> {
   const args = parseCommandArgs(BackupArgsSchema, process.argv.slice(2), USAGE);
   const db = args.db ?? defaultDatabasePath();
+  // The institution register's backups are the server's (README "Institution register").
+  if (isServerAddress(db)) throw new Error(NO_SERVER_BACKUP);
   const report = await backupDatabaseFile({ db, out: args.out ?? defaultBackupFolder(db) });
   process.stdout.write(`Backed up ${db}\n      to ${report.path} (${(report.bytes / 1e6).toFixed(1)} MB; integrity checked)\n`);
 }

@@ -16,7 +16,7 @@ import { mkdirSync, mkdtempSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
 import { z } from 'zod';
-import { openRecordStore, type RecordStore } from '../backend/records/index.js';
+import { isServerAddress, openRecordStore, type RecordStore } from '../backend/records/index.js';
 import { DEMO_PASSPHRASE } from '../backend/records/demo.js';
 import { parseCommandArgs } from './command-args.js';
 import {
@@ -140,7 +140,7 @@ export async function main(argv: readonly string[]): Promise<number> {
   if (args.demo) {
     files = await writeDemoDocuments(out, opts);
   } else {
-    const store = await openRecordStore({ path: resolve(args.db as string), readonly: true });
+    const store = await openRecordStore({ path: isServerAddress(args.db as string) ? (args.db as string) : resolve(args.db as string), readonly: true });
     try {
       files = args.site !== undefined ? await writeSiteReports(store, args.site, out, opts) : await writeDocuments(store, args.assessment as string, out, opts, args.revision);
     } finally {

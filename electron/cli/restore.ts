@@ -5,6 +5,8 @@
  * the backups found beside the database.
  */
 import { defaultBackupFolder, defaultDatabasePath, listBackups, restoreBackup } from '../backend/records/index.js';
+import { isServerAddress } from '../backend/records/address.js';
+import { NO_SERVER_BACKUP } from '../backend/records/pg-engine.js';
 import { RestoreArgsSchema } from './safekeeping-args.js';
 import { parseCommandArgs } from './command-args.js';
 
@@ -13,6 +15,8 @@ const USAGE = 'usage: npm run restore -- --from <backup file> [--db <database fi
 async function main(): Promise<void> {
   const args = parseCommandArgs(RestoreArgsSchema, process.argv.slice(2), USAGE);
   const db = args.db ?? defaultDatabasePath();
+  // The institution register's backups are the server's (README "Institution register").
+  if (isServerAddress(db)) throw new Error(NO_SERVER_BACKUP);
   if (args.from === undefined) {
     const found = listBackups(defaultBackupFolder(db));
     const list = found.length ? found.map((b) => `  ${b.path}  (${(b.bytes / 1e6).toFixed(1)} MB)`).join('\n') : '  (none)';

@@ -15,7 +15,7 @@ import { dirname, resolve } from 'node:path';
 import { fileURLToPath, pathToFileURL } from 'node:url';
 import { Worker } from 'node:worker_threads';
 import { z } from 'zod';
-import { openRecordStore } from '../backend/records/index.js';
+import { defaultDatabasePath, describeAddress, isServerAddress, openRecordStore } from '../backend/records/index.js';
 import { verifyOneAssessment, type AssessmentVerdict } from './verify-assessment.js';
 import { parseCommandArgs } from './command-args.js';
 
@@ -78,13 +78,17 @@ export async function runVerify(argv: readonly string[], out: (line: string) => 
     process.stderr.write(`${(e as Error).message}\n`);
     return 2;
   }
-  const db = resolve(args.db);
-  const keyDir = resolve(args['key-dir'] ?? dirname(db));
+  // A postgres:// address is the institution register (never taken for a file); its trust list is
+  // this desk's, in the user-data folder unless --key-dir names another.
+  const server = isServerAddress(args.db);
+  const db = server ? args.db : resolve(args.db);
+  const keyDir = resolve(args['key-dir'] ?? dirname(server ? defaultDatabasePath() : db));
+  const shown = server ? describeAddress(db) : db;
   let store;
   try {
     store = await openRecordStore({ path: db, keyDir, readonly: true });
   } catch (e) {
-    process.stderr.write(`Cannot open ${db}: ${(e as Error).message}\n`);
+    process.stderr.write(`Cannot open ${shown}: ${(e as Error).message}\n`);
     return 2;
   }
   let verdicts: AssessmentVerdict[];
@@ -95,14 +99,14 @@ export async function runVerify(argv: readonly string[], out: (line: string) => 
     checks = await store.listRowChecks();
     const trust = await store.trustList();
     header = [
-      `Database ${db}`,
+      `Database ${shown}`,
       `Trust list ${trust.path}: anchor ${trust.anchorFingerprint ?? 'none'}${trust.problems.length ? ` — ${trust.problems.join(' ')}` : ''}`,
       ...store.info.warnings.map((w) => `Warning: ${w}`),
     ];
     const all = await store.listAllAssessments();
     const items = (args.assessment !== undefined ? all.filter((a) => a.id === args.assessment) : all).map((a) => ({ id: a.id, title: a.title }));
     if (args.assessment !== undefined && items.length === 0) {
-      process.stderr.write(`No assessment with id ${args.assessment} in ${db}\n`);
+      process.stderr.write(`No assessment with id ${args.assessment} in ${shown}\n`);
       return 2;
     }
     const workers = Math.min(args.workers ?? Math.min(availableParallelism(), 8), items.length);
@@ -125,7 +129,7 @@ export async function runVerify(argv: readonly string[], out: (line: string) => 
   const badChecks = checks.filter((c) => !c.signatureValid || !c.keyTrusted);
   const limitTableChecks = checks.map((c) => ({ id: c.id, ruleSet: c.ruleSet, entry: c.entryWords, verdict: c.verdict, checkedBy: c.name, signedAt: c.signedAt, used: c.ok, signatureValid: c.signatureValid, keyTrusted: c.keyTrusted, finding: c.finding }));
   if (args.json) {
-    out(JSON.stringify({ database: db, header, failed: failed + badChecks.length, assessments: verdicts, limitTableChecks }, null, 2));
+    out(JSON.stringify({ database: shown, header, failed: failed + badChecks.length, assessments: verdicts, limitTableChecks }, null, 2));
   } else {
     for (const h of header) out(h);
     for (const v of verdicts) out(v.line);

@@ -7,7 +7,7 @@
 import { randomBytes } from 'node:crypto';
 import { existsSync } from 'node:fs';
 import path from 'node:path';
-import { defaultDatabasePath, openRecordStore } from '../backend/records/index.js';
+import { isServerAddress, openRecordStore } from '../backend/records/index.js';
 import { handlerTable } from '../api/table.js';
 import type { ApiContext } from '../api/context.js';
 import { parseHostArgs } from './args.js';
@@ -19,8 +19,11 @@ async function main(): Promise<void> {
   if (!existsSync(path.join(RENDERER_DIST, 'index.html'))) {
     throw new Error(`the renderer is not built (${RENDERER_DIST}); run "npm run build" first (npm run serve does it for you)`);
   }
-  const dbPath = path.resolve(opts.db ?? defaultDatabasePath());
-  const open = () => openRecordStore(opts.db === undefined ? {} : { path: dbPath });
+  // --db, else BEAMWARDEN_DB (as the desktop app), else the default file. A file path is made
+  // absolute; a postgres:// address opens the institution register and is never taken for a file.
+  const given = opts.db ?? process.env['BEAMWARDEN_DB'];
+  const location = given === undefined ? undefined : isServerAddress(given) ? given : path.resolve(given);
+  const open = () => openRecordStore(location === undefined ? {} : { path: location });
   const store = await open();
   if (opts.demo) await store.seedDemo();
   const ctx: ApiContext = { shell: 'loopback', version: packageVersion(), databasePath: store.info.path, store, openStore: open };

@@ -66,9 +66,52 @@ class Session {
       await this.refreshOverview();
       const last = readLast();
       if (last && this.roomOverview(last.roomId)) await this.openRoom(last.roomId, last.assessmentId ?? undefined);
+      void this.followChanges();
     } catch (e) {
       this.loadError = messageOf(e);
     }
+  }
+
+  /** The newest register change heard of (institution register: writes by any officer). */
+  private changesSeen = 0;
+  private following = false;
+
+  /**
+   * On an institution register, the changes other officers commit are asked for every few seconds
+   * and the open screens read the register again: the overview always, the open assessment when it
+   * has no unsaved edits and was saved or signed elsewhere. With unsaved edits the officer is told
+   * instead; their save is then checked against the other change as always. A register file has no
+   * changes to hear (only this program writes it), so the asking stops at once.
+   */
+  private async followChanges(): Promise<void> {
+    let heard;
+    try {
+      heard = await invoke('register-changes', { since: this.changesSeen });
+    } catch {
+      return; // the host is gone or does not offer it: nothing to follow
+    }
+    if (!heard.live) return;
+    // The first answer only starts the listening: what this desk has on screen is current.
+    const first = !this.following;
+    this.following = true;
+    this.changesSeen = heard.seq;
+    if (!first && heard.changes.length > 0) {
+      try {
+        await this.refreshOverview();
+        const open = this.assessment;
+        if (open && heard.changes.some((c) => ['assessment', 'revision', 'signature', 'co_signature'].includes(c.table))) {
+          const now = await invoke('assessment-get', { id: open.id });
+          const changed = now.current.id !== open.current.id || now.version !== open.version;
+          if (changed && (this.dirty || this.busy)) {
+            const who = [...new Set(heard.changes.map((c) => c.by))].join(', ');
+            this.say('info', `This assessment was changed in the institution register (by ${who}). Your unsaved edits stay on screen; saving will show you what changed.`);
+          } else if (changed) this.setAssessment(now);
+        }
+      } catch {
+        // A failed refresh is tried again with the next change.
+      }
+    }
+    setTimeout(() => void this.followChanges(), 4000);
   }
 
   async refreshOverview(): Promise<void> {

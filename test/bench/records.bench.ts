@@ -22,11 +22,11 @@ import { DemoScenarioSchema } from '../../electron/backend/records/demo.js';
 import { openRecordStore, type AssessmentContent, type RecordStore, type Room, type SaveBase } from '../../electron/backend/records/index.js';
 import { timeMedianAsync, type BenchEntry } from './registry.js';
 
-const ASSESSMENTS = 10_000;
+export const ASSESSMENTS = 10_000;
 const ROOMS = 50;
 
 /** Build the 10 000-assessment database; returns its path and some ids to work on. */
-async function buildDatabase(dir: string): Promise<{ path: string; roomIds: string[]; sampleIds: string[] }> {
+export async function buildDatabase(dir: string): Promise<{ path: string; roomIds: string[]; sampleIds: string[] }> {
   const path = join(dir, 'bench.sqlite');
   const scenario = DemoScenarioSchema.parse(demo);
   const store = await openRecordStore({ path, keyDir: join(dir, 'keys') });
@@ -77,6 +77,116 @@ async function buildDatabase(dir: string): Promise<{ path: string; roomIds: stri
   return { path, roomIds, sampleIds };
 }
 
+/**
+ * The records figures on one register: open, list 200, save, save with changed inputs, sign, edit a
+ * register entry. `open` opens a new store on the register; `engine` names the figures
+ * (SQLite figures keep their names; other engines are prefixed) and `targets` sets the targets.
+ */
+export async function measureRegister(
+  open: () => Promise<RecordStore>,
+  what: { readonly engine: string; readonly size: string; readonly roomIds: readonly string[]; readonly sampleIds: readonly string[] },
+  targets: { readonly open: number; readonly list: number; readonly save: number; readonly sign?: number; readonly edit: number },
+): Promise<BenchEntry[]> {
+  const entries: BenchEntry[] = [];
+  const { roomIds, sampleIds } = what;
+  const label = what.engine === 'SQLite' ? 'records' : `records (${what.engine})`;
+  // Open (integrity_check included), a fresh connection each run.
+  entries.push({
+    name: `${label}: open a database of ${ASSESSMENTS} assessments (${what.size})`,
+    median_ms: await timeMedianAsync(15, async () => (await open()).close()),
+    runs: 15,
+    target_ms: targets.open,
+  });
+
+  const store: RecordStore = await open();
+  try {
+    const listRoom = roomIds[0] ?? '';
+    let listed = 0;
+    entries.push({
+      name: `${label}: list a room's assessments (${(await store.listAssessments(listRoom)).length} rows)`,
+      median_ms: await timeMedianAsync(50, async () => (listed += (await store.listAssessments(listRoom)).length)),
+      runs: 50,
+      target_ms: targets.list,
+    });
+    if (listed === 0) throw new Error('nothing listed');
+
+    // Save: notes edited, inputs unchanged (the common save while writing up an assessment), naming
+    // the version it started from as the app does (optimistic concurrency).
+    const contents: AssessmentContent[] = [];
+    const bases: SaveBase[] = [];
+    for (const id of sampleIds) {
+      const a = await store.getAssessment(id);
+      contents.push(a.current.content);
+      bases.push({ revisionId: a.current.id, version: a.version });
+    }
+    entries.push({
+      name: `${label}: save one assessment (notes edited, results reused, version checked)`,
+      median_ms: await timeMedianAsync(sampleIds.length, async (i) => {
+        const id = sampleIds[i] ?? '';
+        const c = contents[i];
+        if (!c) throw new Error('content missing');
+        await store.saveAssessment(id, { ...c, notes: `edited ${i}` }, bases[i]);
+      }),
+      runs: sampleIds.length,
+      target_ms: targets.save,
+    });
+
+    // Save with changed inputs: the core recomputes the room (no target here; see the core bench).
+    const n = 10;
+    entries.push({
+      name: `${label}: save one assessment with changed inputs (includes evaluateRoom, 3 lasers)`,
+      median_ms: await timeMedianAsync(n, async (i) => {
+        const c = contents[i];
+        if (!c) throw new Error('content missing');
+        const lasers = c.input.lasers.map((l, li) =>
+          li === 0 ? { ...l, beams: l.beams.map((b) => ({ ...b, label: `${b.label ?? ''}`, exposureDuration_s: 10 + i })) } : l,
+        );
+        await store.saveAssessment(sampleIds[i] ?? '', { ...c, input: { ...c.input, lasers } });
+      }),
+      runs: n,
+    });
+    const passphrase = 'bench passphrase (invented)';
+    const officer = await store.createPerson({ name: 'Bench Officer', role: 'LSO' });
+    await store.createPersonKey({ personId: officer.id, passphrase, passphraseAgain: passphrase });
+    let reviewed: SaveBase = { revisionId: '', version: 0 };
+    entries.push({
+      name: `${label}: sign one assessment (passphrase check with scrypt, re-evaluate, fingerprint, Ed25519, supersede, signing log)`,
+      median_ms: await timeMedianAsync(
+        n,
+        async (i) => {
+          await store.signAssessment(sampleIds[20 + i] ?? '', { personId: officer.id, passphrase, statement: 'Benchmark sign-off.' }, reviewed);
+        },
+        async (i) => {
+          // the revision shown in the confirm step (untimed: the window already holds it)
+          const a = await store.getAssessment(sampleIds[20 + i] ?? '');
+          reviewed = { revisionId: a.current.id, version: a.version };
+        },
+      ),
+      runs: n,
+      ...(targets.sign !== undefined ? { target_ms: targets.sign } : {}),
+    });
+
+    // A Register edit as the window sends it: the version opened and the fields seen, checked and
+    // written in one write transaction.
+    const roomsToEdit: Room[] = [];
+    for (const id of roomIds.slice(0, 40)) roomsToEdit.push(await store.getRoom(id));
+    entries.push({
+      name: `${label}: edit one register entry (version check and write in one transaction)`,
+      median_ms: await timeMedianAsync(roomsToEdit.length, async (i) => {
+        const r = roomsToEdit[i];
+        if (!r) throw new Error('room missing');
+        await store.updateRoom(r.id, { contact: `ext. ${4000 + i}` }, { updatedAt: r.updatedAt, seen: { code: r.code, name: r.name, contact: r.contact } });
+      }),
+      runs: roomsToEdit.length,
+      // one committed write, like the notes-only save above
+      target_ms: targets.edit,
+    });
+  } finally {
+    await store.close();
+  }
+  return entries;
+}
+
 export async function runRecordsBench(): Promise<BenchEntry[]> {
   const dir = mkdtempSync(join(tmpdir(), 'bw-bench-records-'));
   const entries: BenchEntry[] = [];
@@ -87,99 +197,7 @@ export async function runRecordsBench(): Promise<BenchEntry[]> {
     const sizeMb = statSync(path).size / 1e6;
     console.log(`records bench: ${ASSESSMENTS} assessments in ${ROOMS} rooms, ${sizeMb.toFixed(0)} MB, built in ${(buildMs / 1000).toFixed(1)} s`);
 
-    // Open (integrity_check included), a fresh connection each run.
-    entries.push({
-      name: `records: open a database of ${ASSESSMENTS} assessments (${sizeMb.toFixed(0)} MB)`,
-      median_ms: await timeMedianAsync(15, async () => (await openRecordStore({ path, keyDir: join(dir, 'keys') })).close()),
-      runs: 15,
-      target_ms: 200,
-    });
-
-    const store: RecordStore = await openRecordStore({ path, keyDir: join(dir, 'keys') });
-    try {
-      const listRoom = roomIds[0] ?? '';
-      let listed = 0;
-      entries.push({
-        name: `records: list a room's assessments (${(await store.listAssessments(listRoom)).length} rows)`,
-        median_ms: await timeMedianAsync(50, async () => (listed += (await store.listAssessments(listRoom)).length)),
-        runs: 50,
-        target_ms: 50,
-      });
-      if (listed === 0) throw new Error('nothing listed');
-
-      // Save: notes edited, inputs unchanged (the common save while writing up an assessment), naming
-      // the version it started from as the app does (optimistic concurrency).
-      const contents: AssessmentContent[] = [];
-      const bases: SaveBase[] = [];
-      for (const id of sampleIds) {
-        const a = await store.getAssessment(id);
-        contents.push(a.current.content);
-        bases.push({ revisionId: a.current.id, version: a.version });
-      }
-      entries.push({
-        name: 'records: save one assessment (notes edited, results reused, version checked)',
-        median_ms: await timeMedianAsync(sampleIds.length, async (i) => {
-          const id = sampleIds[i] ?? '';
-          const c = contents[i];
-          if (!c) throw new Error('content missing');
-          await store.saveAssessment(id, { ...c, notes: `edited ${i}` }, bases[i]);
-        }),
-        runs: sampleIds.length,
-        target_ms: 5,
-      });
-
-      // Save with changed inputs: the core recomputes the room (no target here; see the core bench).
-      const n = 10;
-      entries.push({
-        name: 'records: save one assessment with changed inputs (includes evaluateRoom, 3 lasers)',
-        median_ms: await timeMedianAsync(n, async (i) => {
-          const c = contents[i];
-          if (!c) throw new Error('content missing');
-          const lasers = c.input.lasers.map((l, li) =>
-            li === 0 ? { ...l, beams: l.beams.map((b) => ({ ...b, label: `${b.label ?? ''}`, exposureDuration_s: 10 + i })) } : l,
-          );
-          await store.saveAssessment(sampleIds[i] ?? '', { ...c, input: { ...c.input, lasers } });
-        }),
-        runs: n,
-      });
-      const passphrase = 'bench passphrase (invented)';
-      const officer = await store.createPerson({ name: 'Bench Officer', role: 'LSO' });
-      await store.createPersonKey({ personId: officer.id, passphrase, passphraseAgain: passphrase });
-      let reviewed: SaveBase = { revisionId: '', version: 0 };
-      entries.push({
-        name: 'records: sign one assessment (passphrase check with scrypt, re-evaluate, fingerprint, Ed25519, supersede, signing log)',
-        median_ms: await timeMedianAsync(
-          n,
-          async (i) => {
-            await store.signAssessment(sampleIds[20 + i] ?? '', { personId: officer.id, passphrase, statement: 'Benchmark sign-off.' }, reviewed);
-          },
-          async (i) => {
-            // the revision shown in the confirm step (untimed: the window already holds it)
-            const a = await store.getAssessment(sampleIds[20 + i] ?? '');
-            reviewed = { revisionId: a.current.id, version: a.version };
-          },
-        ),
-        runs: n,
-      });
-
-      // A Register edit as the window sends it: the version opened and the fields seen, checked and
-      // written in one write transaction.
-      const roomsToEdit: Room[] = [];
-      for (const id of roomIds.slice(0, 40)) roomsToEdit.push(await store.getRoom(id));
-      entries.push({
-        name: 'records: edit one register entry (version check and write in one transaction)',
-        median_ms: await timeMedianAsync(roomsToEdit.length, async (i) => {
-          const r = roomsToEdit[i];
-          if (!r) throw new Error('room missing');
-          await store.updateRoom(r.id, { contact: `ext. ${4000 + i}` }, { updatedAt: r.updatedAt, seen: { code: r.code, name: r.name, contact: r.contact } });
-        }),
-        runs: roomsToEdit.length,
-        // one committed write, like the notes-only save above
-        target_ms: 10,
-      });
-    } finally {
-      await store.close();
-    }
+    entries.push(...(await measureRegister(() => openRecordStore({ path, keyDir: join(dir, 'keys') }), { engine: 'SQLite', size: `${sizeMb.toFixed(0)} MB`, roomIds, sampleIds }, { open: 200, list: 50, save: 5, edit: 10 })));
   } finally {
     if (!process.env["KEEP_BENCH_DB"]) rmSync(dir, { recursive: true, force: true }); else console.log("kept", dir);
   }

@@ -2,6 +2,7 @@ import { RULE_SET_IDS, RULE_SET_NAME } from '../../../core/index.js';
 import type { AppHandlers } from '../contracts/app.js';
 import type { ApiContext } from '../context.js';
 import type { AreaTable } from '../operation.js';
+import { z } from 'zod';
 import { EmptySchema } from '../schemas/common.js';
 
 export const appTable: AreaTable<AppHandlers, ApiContext> = {
@@ -19,5 +20,9 @@ export const appTable: AreaTable<AppHandlers, ApiContext> = {
         warnings: [...new Set([...ctx.store.info.warnings, ...trust.problems])],
       };
     },
+  },
+  'register-changes': {
+    input: z.strictObject({ since: z.number().int('must be a whole number').min(0, 'must be 0 or more') }),
+    run: ({ since }, ctx) => ctx.store.registerChanges(since),
   },
 };

@@ -15,7 +15,7 @@ import type { RoomResult } from '../../../core/model/results.js';
 import { AssessmentContentSchema, SignOffSchema } from '../schemas/records.js';
 import { RoomResultSchema } from '../schemas/results.js';
 import { canonicalJson } from './canonical.js';
-import { inTransaction, notFound, parseOrThrow, type StoreContext } from './context.js';
+import { inTransaction, lockRow, notFound, parseOrThrow, type StoreContext } from './context.js';
 import { named } from './named-params.js';
 import { diffValues } from './diff.js';
 import { assumedDefaults } from './older-content.js';
@@ -511,6 +511,8 @@ export async function saveAssessment(ctx: StoreContext, id: Id, rawContent: Asse
   const draftResults = before.status === 'draft' && resultsZ === before.results_z ? null : resultsZ;
   const now = ctx.now();
   await write(ctx, 'Assessment', async (ctx) => {
+    // On a server, another officer's save or sign-off of this assessment waits here until ours commits.
+    await lockRow(ctx, 'assessment', id);
     await assertNotStale(ctx, id, expected ?? { revisionId: before.id, version: before.version });
     const current = await newestRevisionRow(ctx, id);
     if (current.status === 'draft') {
@@ -639,6 +641,8 @@ export async function signDraftWith(ctx: StoreContext, id: Id, statementText: st
   );
   const st = signed.payload;
   await write(ctx, 'Sign-off', async (ctx) => {
+    // The row lock of the sign-off: a concurrent save or sign-off of this assessment waits for it.
+    await lockRow(ctx, 'assessment', id);
     await assertNotStale(ctx, id, reviewed, 'sign');
     const again = await newestRevisionRow(ctx, id);
     // The save counter too: a save that landed between reading the draft and this transaction

@@ -22,6 +22,13 @@ export interface EngineSeam {
    * SQLite: its `rowid`; a server engine: a sequence column of its own schema.
    */
   readonly insertionOrder: string;
+  /**
+   * Appended to a SELECT inside a write transaction to lock the rows it reads until the commit
+   * (lockRow). SQLite: '' (BEGIN IMMEDIATE already holds the only write lock); PostgreSQL:
+   * ' FOR UPDATE', so two officers' saves or sign-offs of one record take turns and the second one
+   * sees the first one's commit in its version check.
+   */
+  readonly rowLock: string;
   /** Names of protections that are missing or altered; empty when all are in place. */
   missingProtections(): Promise<string[]>;
 }
@@ -83,6 +90,18 @@ export async function inTransaction<T>(ctx: StoreContext, what: string, fn: (ctx
   } catch (e) {
     throw ctx.engine.translateError(e, what, storage);
   }
+}
+
+/** The tables whose rows a check-then-write locks first (names are code, never input). */
+export type LockedTable = 'assessment' | 'site' | 'room' | 'laser_installation' | 'eyewear' | 'person';
+
+/**
+ * Lock one row for the rest of the transaction before checking and changing it (a no-op on SQLite,
+ * `SELECT ... FOR UPDATE` on PostgreSQL). Call it first inside `inTransaction`, with its ctx.
+ */
+export async function lockRow(ctx: StoreContext, table: LockedTable, id: string): Promise<void> {
+  if (ctx.engine.rowLock === '') return;
+  await ctx.q.get(`SELECT id FROM ${table} WHERE id = ?${ctx.engine.rowLock}`, id);
 }
 
 /** Validate with a zod schema or throw RecordError('invalid') naming every path and problem. */

@@ -20,6 +20,12 @@ export interface RecordEngine {
   backupInto(folder: string): Promise<BackupReport>;
   /** The last recorded backup and the backups in `folder`. */
   backupStatus(folder: string): Promise<BackupStatus>;
+  /**
+   * Calls `listener` for every change committed to the register by anyone (a server register:
+   * LISTEN/NOTIFY on a connection of its own); absent where only this program writes (SQLite).
+   * Resolves with the function that stops listening.
+   */
+  readonly watch?: (listener: (change: { table: string; id: string; operation: string; by: string }) => void) => Promise<() => Promise<void>>;
   /** Ends the connection (after running work) and releases what the engine holds (lock file, pool). */
   close(): Promise<void>;
 }

@@ -14,3 +14,4 @@ export { CSV_COLUMNS, QUANTITY_COLUMNS } from './csv.js';
 export { parseExportDocument } from './exchange.js';
 export { LATEST_VERSION as SCHEMA_VERSION } from './migrations/index.js';
 export { CALCULATED_WITH } from './core-link.js';
+export { describeAddress, isServerAddress } from './address.js';

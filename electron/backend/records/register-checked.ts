@@ -4,7 +4,7 @@
  * already holds one), so no other writer can slip between.
  * Without `expected` (the store's own callers: demo, tests) they behave as before.
  */
-import { inTransaction, type StoreContext } from './context.js';
+import { inTransaction, lockRow, type StoreContext } from './context.js';
 import * as R from './register.js';
 import { assertEntryCurrent } from './register-versions.js';
 import { deletePersonIfUnsigned, deleteRoomWithDrafts, deleteSiteWithDrafts } from './register-deletion.js';
@@ -48,6 +48,7 @@ const personTitle = (p: Person | null, seen?: PersonSeen) => p?.name ?? seen?.na
 
 export function updateSite(ctx: StoreContext, id: Id, patch: SiteSeen, expected?: RegisterBase<SiteSeen>): Promise<Site> {
   return inTransaction(ctx, 'Site', async (tx) => {
+    await lockRow(tx, 'site', id);
     const now = await orGone(() => R.getSite(tx, id));
     assertEntryCurrent(siteTitle(now, expected?.seen), 'edit', now, expected);
     return await R.updateSite(tx, id, patch);
@@ -55,6 +56,7 @@ export function updateSite(ctx: StoreContext, id: Id, patch: SiteSeen, expected?
 }
 export function deleteSite(ctx: StoreContext, id: Id, expected?: RegisterBase<SiteSeen>): Promise<void> {
   return inTransaction(ctx, 'Site', async (tx) => {
+    await lockRow(tx, 'site', id);
     const now = await orGone(() => R.getSite(tx, id));
     assertEntryCurrent(siteTitle(now, expected?.seen), 'delete', now, expected);
     await deleteSiteWithDrafts(tx, id);
@@ -63,6 +65,7 @@ export function deleteSite(ctx: StoreContext, id: Id, expected?: RegisterBase<Si
 
 export function updateRoom(ctx: StoreContext, id: Id, patch: RoomSeen, expected?: RegisterBase<RoomSeen>): Promise<Room> {
   return inTransaction(ctx, 'Room', async (tx) => {
+    await lockRow(tx, 'room', id);
     const now = await orGone(() => R.getRoom(tx, id));
     assertEntryCurrent(roomTitle(now, expected?.seen), 'edit', now, expected);
     return await R.updateRoom(tx, id, patch);
@@ -70,6 +73,7 @@ export function updateRoom(ctx: StoreContext, id: Id, patch: RoomSeen, expected?
 }
 export function deleteRoom(ctx: StoreContext, id: Id, expected?: RegisterBase<RoomSeen>): Promise<void> {
   return inTransaction(ctx, 'Room', async (tx) => {
+    await lockRow(tx, 'room', id);
     const now = await orGone(() => R.getRoom(tx, id));
     assertEntryCurrent(roomTitle(now, expected?.seen), 'delete', now, expected);
     await deleteRoomWithDrafts(tx, id);
@@ -78,6 +82,7 @@ export function deleteRoom(ctx: StoreContext, id: Id, expected?: RegisterBase<Ro
 
 export function updateInstallation(ctx: StoreContext, id: Id, patch: InstallationSeen, expected?: RegisterBase<InstallationSeen>): Promise<LaserInstallation> {
   return inTransaction(ctx, 'Laser installation', async (tx) => {
+    await lockRow(tx, 'laser_installation', id);
     const now = await orGone(() => R.getInstallation(tx, id));
     assertEntryCurrent(laserTitle(now, expected?.seen), 'edit', now, expected);
     return await R.updateInstallation(tx, id, patch);
@@ -85,6 +90,7 @@ export function updateInstallation(ctx: StoreContext, id: Id, patch: Installatio
 }
 export function deleteInstallation(ctx: StoreContext, id: Id, expected?: RegisterBase<InstallationSeen>): Promise<void> {
   return inTransaction(ctx, 'Laser installation', async (tx) => {
+    await lockRow(tx, 'laser_installation', id);
     const now = await orGone(() => R.getInstallation(tx, id));
     assertEntryCurrent(laserTitle(now, expected?.seen), 'delete', now, expected);
     await R.deleteInstallation(tx, id);
@@ -93,6 +99,7 @@ export function deleteInstallation(ctx: StoreContext, id: Id, expected?: Registe
 
 export function updateEyewear(ctx: StoreContext, id: Id, patch: EyewearSeen, expected?: RegisterBase<EyewearSeen>): Promise<Eyewear> {
   return inTransaction(ctx, 'Eyewear', async (tx) => {
+    await lockRow(tx, 'eyewear', id);
     const now = await orGone(() => R.getEyewear(tx, id));
     assertEntryCurrent(eyewearTitle(now, expected?.seen), 'edit', now, expected);
     return await R.updateEyewear(tx, id, patch);
@@ -100,6 +107,7 @@ export function updateEyewear(ctx: StoreContext, id: Id, patch: EyewearSeen, exp
 }
 export function deleteEyewear(ctx: StoreContext, id: Id, expected?: RegisterBase<EyewearSeen>): Promise<void> {
   return inTransaction(ctx, 'Eyewear', async (tx) => {
+    await lockRow(tx, 'eyewear', id);
     const now = await orGone(() => R.getEyewear(tx, id));
     assertEntryCurrent(eyewearTitle(now, expected?.seen), 'delete', now, expected);
     await R.deleteEyewear(tx, id);
@@ -108,6 +116,7 @@ export function deleteEyewear(ctx: StoreContext, id: Id, expected?: RegisterBase
 
 export function updatePerson(ctx: StoreContext, id: Id, patch: PersonSeen, expected?: RegisterBase<PersonSeen>): Promise<Person> {
   return inTransaction(ctx, 'Person', async (tx) => {
+    await lockRow(tx, 'person', id);
     const now = await orGone(() => R.getPerson(tx, id));
     assertEntryCurrent(personTitle(now, expected?.seen), 'edit', now, expected);
     return await R.updatePerson(tx, id, patch);
@@ -115,6 +124,7 @@ export function updatePerson(ctx: StoreContext, id: Id, patch: PersonSeen, expec
 }
 export function deletePerson(ctx: StoreContext, id: Id, expected?: RegisterBase<PersonSeen>): Promise<void> {
   return inTransaction(ctx, 'Person', async (tx) => {
+    await lockRow(tx, 'person', id);
     const now = await orGone(() => R.getPerson(tx, id));
     assertEntryCurrent(personTitle(now, expected?.seen), 'delete', now, expected);
     await deletePersonIfUnsigned(tx, id);

@@ -14,7 +14,7 @@ import { AssessmentContentSchema, IdSchema, TimestampSchema, LaserInstallationDr
 import { LaserInputSchema, StoredLaserInputSchema } from '../schemas/inputs.js';
 import { whatChanged } from './register-versions.js';
 import { assertNotStale, clockTime, createAssessment, getAssessment, saveAssessment } from './assessments.js';
-import { inTransaction, parseOrThrow, type StoreContext } from './context.js';
+import { inTransaction, lockRow, parseOrThrow, type StoreContext } from './context.js';
 import { createInstallation, getInstallation, getRoom, listInstallations, updateInstallation } from './register.js';
 import { RecordError, type Assessment, type AssessmentContent, type Id, type LaserInstallation, type SaveBase, type Timestamp } from './types.js';
 
@@ -69,8 +69,12 @@ export async function saveWork(ctx: StoreContext, raw: WorkSave): Promise<WorkSa
   const laserIds: Record<string, Id> = {};
   const assessment = await inTransaction(ctx, `Assessment of room ${room.code}`, async (ctx): Promise<Assessment> => {
     // 1. Nothing is written unless every part is still as the officer opened it.
-    if (w.assessmentId !== null) await assertNotStale(ctx, w.assessmentId, w.expected ?? undefined);
+    if (w.assessmentId !== null) {
+      await lockRow(ctx, 'assessment', w.assessmentId);
+      await assertNotStale(ctx, w.assessmentId, w.expected ?? undefined);
+    }
     for (const c of w.changedLasers) {
+      await lockRow(ctx, 'laser_installation', c.id);
       const now = await getInstallation(ctx, c.id);
       if (now.roomId !== room.id) throw new RecordError('invalid', `Laser "${now.laser.name}" is not in room ${room.code}`);
       if (!sameInstant(now.updatedAt, c.expectedUpdatedAt)) {

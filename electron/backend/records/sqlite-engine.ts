@@ -35,6 +35,7 @@ export function sqliteSeam(port: SqliteSqlPort, path: string): EngineSeam {
   return {
     location: path,
     insertionOrder: 'rowid',
+    rowLock: '',
     translateError: (e, what, storage) => translateSqliteError(e, what, storage ? path : undefined),
     missingProtections: () => port.exclusive((db) => missingProtections(db)),
   };

@@ -27,13 +27,45 @@ import { laserHistory } from './laser-history.js';
 import { saveWork } from './save-work.js';
 import { defaultBackupFolder } from './safekeeping.js';
 import { openSqliteEngine } from './sqlite-engine.js';
-import type { OpenOptions, RecordStore, StoreInfo } from './types.js';
+import { describeAddress, isServerAddress } from './address.js';
+import { openPgEngine } from './pg-engine.js';
+import type { OpenOptions, RecordStore, RegisterChange, RegisterChanges, StoreInfo } from './types.js';
+
+/** The changes heard from the register (institution register), kept for open screens to ask after. */
+function changeFeed(engine: RecordEngine): { since(seq: number): Promise<RegisterChanges>; close(): Promise<void> } {
+  const kept: RegisterChange[] = [];
+  let seq = 0;
+  let stop: Promise<() => Promise<void>> | null = null;
+  const KEEP = 200;
+  return {
+    async since(after) {
+      const watch = engine.watch;
+      if (watch === undefined) return { live: false, seq: 0, changes: [] };
+      stop ??= watch((c) => {
+        seq += 1;
+        const operation = c.operation === 'INSERT' || c.operation === 'DELETE' ? c.operation : 'UPDATE';
+        kept.push({ seq, table: c.table, id: c.id, operation, by: c.by });
+        if (kept.length > KEEP) kept.splice(0, kept.length - KEEP);
+      });
+      await stop;
+      return { live: true, seq, changes: kept.filter((c) => c.seq > after) };
+    },
+    async close() {
+      if (stop) await (await stop)();
+    },
+  };
+}
 
 function storeOver(ctx: StoreContext, engine: RecordEngine, info: StoreInfo): RecordStore {
   const backupFolder = defaultBackupFolder(info.path);
+  const changes = changeFeed(engine);
   return {
     info,
-    close: () => engine.close(),
+    close: async () => {
+      await changes.close();
+      await engine.close();
+    },
+    registerChanges: (since) => changes.since(since),
 
     listSites: () => R.listSites(ctx),
     getSite: (id) => R.getSite(ctx, id),
@@ -122,13 +154,25 @@ export interface InternalOpenOptions extends OpenOptions {
  * folder (paths.ts); the trust list and signing log live beside the database unless `keyDir` is given.
  */
 export async function openRecordStore(options: InternalOpenOptions = {}): Promise<RecordStore> {
-  const path = resolve(options.path ?? defaultDatabasePath());
-  const keyDir = resolve(options.keyDir ?? dirname(path));
   const readonly = options.readonly === true;
-  // The default folder is made with its parents (first start); a folder the officer named must exist.
-  if (!readonly && options.path === undefined) mkdirSync(dirname(path), { recursive: true });
-  if (!readonly) checkWritableAtStart(path);
-  const engine = openSqliteEngine(path, { ...(options.nativeBinding !== undefined ? { nativeBinding: options.nativeBinding } : {}), readonly });
+  const server = options.path !== undefined && isServerAddress(options.path);
+  let path: string;
+  let keyDir: string;
+  let engine: RecordEngine;
+  if (server) {
+    // The institution register: personal keys, trust list and signing log stay on this desk.
+    path = describeAddress(options.path ?? '');
+    keyDir = resolve(options.keyDir ?? dirname(defaultDatabasePath()));
+    if (!readonly && options.keyDir === undefined) mkdirSync(keyDir, { recursive: true });
+    engine = await openPgEngine(options.path ?? '', { readonly });
+  } else {
+    path = resolve(options.path ?? defaultDatabasePath());
+    keyDir = resolve(options.keyDir ?? dirname(path));
+    // The default folder is made with its parents (first start); a folder the officer named must exist.
+    if (!readonly && options.path === undefined) mkdirSync(dirname(path), { recursive: true });
+    if (!readonly) checkWritableAtStart(path);
+    engine = openSqliteEngine(path, { ...(options.nativeBinding !== undefined ? { nativeBinding: options.nativeBinding } : {}), readonly });
+  }
   const calculatedWith = options.calculatedWith ?? CALCULATED_WITH;
   const ctx = makeContext({
     q: engine.port,

@@ -13,7 +13,8 @@ import type { ExportFile } from '../../../electron/api/contracts/exchange.js';
 import { openRecordStore, type ImportSummary, type RecordStore, type Room } from '../../../electron/backend/records/index.js';
 import { exportFileBytes } from '../../../electron/backend/records/export-file.js';
 import { MAX_BODY_BYTES } from '../../../electron/host/server.js';
-import { makeSigner, scenario, STATEMENT, tempDir } from './helpers.js';
+import { makeSigner, openTemp, scenario, STATEMENT, tempDir } from './helpers.js';
+import { ENGINES } from './engines.js';
 import { startTestHost } from './http-host.js';
 
 const LASERS = 20;
@@ -63,8 +64,10 @@ describe(`a room with ${LASERS} lasers and ${REVIEWS} signed reviews`, () => {
     expect(gz.length * 4 / 3).toBeLessThan(MAX_BODY_BYTES);
   }, 300_000);
 
-  it('exports through the host, imports into a fresh database through another host, and re-exports byte-identical', async () => {
-    const target = await openRecordStore({ path: join(t.dir, 'fresh.sqlite'), keyDir: join(t.dir, 'keys-2'), now: () => CLOCK });
+  // The fresh database on either engine: the same file goes into the institution register.
+  for (const engine of ENGINES)
+  it.skipIf(engine.skip)(`exports through the host, imports into a fresh database (${engine.label}) through another host, and re-exports byte-identical`, async () => {
+    const target = await openTemp(t.dir, `fresh-${engine.name}.sqlite`, engine, { keyDir: join(t.dir, `keys-2-${engine.name}`), now: () => CLOCK });
     const hostA = await startTestHost(source);
     const hostB = await startTestHost(target);
     try {

@@ -10,6 +10,8 @@ import Database from 'better-sqlite3';
 import demo from '../../../assets/demo/demo-scenario.json' with { type: 'json' };
 import { DemoScenarioSchema } from '../../../electron/backend/records/demo.js';
 import { openRecordStore, type RecordStore, type Room, type Site } from '../../../electron/backend/records/index.js';
+import type { InternalOpenOptions } from '../../../electron/backend/records/store.js';
+import { DEFAULT_ENGINE, pgAddress, pgSnapshot, schemaFor, type TestEngine } from './engines.js';
 
 export const scenario = DemoScenarioSchema.parse(demo);
 
@@ -18,9 +20,20 @@ export function tempDir(prefix = 'bw-records-'): { dir: string; cleanup: () => v
   return { dir, cleanup: () => rmSync(dir, { recursive: true, force: true }) };
 }
 
-/** A database in `dir`; each database name is its own installation (own trust list and signing log). */
-export function openTemp(dir: string, name = 'records.sqlite'): Promise<RecordStore> {
-  return openRecordStore({ path: join(dir, name), keyDir: join(dir, name === 'records.sqlite' ? 'keys' : `keys-${name}`) });
+/**
+ * A database in `dir`; each database name is its own installation (own trust list and signing log).
+ * On PostgreSQL the "file" `dir/name` is a schema of the test database (engines.ts): opening the
+ * same name twice opens the same register, as two hosts would.
+ */
+export async function openTemp(dir: string, name = 'records.sqlite', engine: TestEngine | undefined = DEFAULT_ENGINE, extra: Omit<InternalOpenOptions, 'path'> = {}): Promise<RecordStore> {
+  const keyDir = join(dir, name === 'records.sqlite' ? 'keys' : `keys-${name}`);
+  if (engine?.name === 'postgresql') return openRecordStore({ keyDir, ...extra, path: await pgAddress(schemaFor(dir, name)) });
+  return openRecordStore({ keyDir, ...extra, path: join(dir, name) });
+}
+
+/** `snapshot` of the database `dir/name` on either engine. */
+export function snapshotOn(engine: TestEngine, dir: string, name = 'records.sqlite'): Promise<string> {
+  return engine.name === 'postgresql' ? pgSnapshot(schemaFor(dir, name)) : Promise.resolve(snapshot(join(dir, name)));
 }
 
 /** Demo room by code (invented), e.g. A0.07 telecom bench: two lasers, fast to evaluate. */

@@ -45,3 +45,41 @@ BEGIN SELECT RAISE(ABORT, 'beamwarden: the audit log is append-only'); END;
 CREATE TRIGGER audit_event_no_delete BEFORE DELETE ON audit_event
 BEGIN SELECT RAISE(ABORT, 'beamwarden: the audit log is append-only'); END;
 `;
+
+/**
+ * PostgreSQL: the same columns and log. The immutability function compares whole rows (0001), so
+ * it covers the new columns as it is; it is only switched off around the backfill, like SQLite's.
+ */
+export const postgresql = `
+ALTER TABLE revision ADD COLUMN title text NOT NULL DEFAULT '';
+ALTER TABLE revision ADD COLUMN review_by text;
+
+ALTER TABLE revision DISABLE TRIGGER revision_signed_immutable;
+UPDATE revision SET
+  title = coalesce(content_json::jsonb ->> 'title', ''),
+  review_by = content_json::jsonb ->> 'reviewBy';
+ALTER TABLE revision ENABLE TRIGGER revision_signed_immutable;
+
+CREATE INDEX revision_review_by ON revision(review_by) WHERE review_by IS NOT NULL;
+
+CREATE TABLE audit_event (
+  seq bigserial PRIMARY KEY,
+  at text NOT NULL,
+  action text NOT NULL,
+  entity text NOT NULL,
+  entity_id text NOT NULL,
+  detail text NOT NULL DEFAULT '',
+  -- The database account that wrote the event (several officers share one register).
+  db_role text NOT NULL DEFAULT session_user
+);
+CREATE INDEX audit_event_entity ON audit_event(entity, entity_id);
+
+CREATE FUNCTION bw_audit_event_append_only() RETURNS trigger LANGUAGE plpgsql AS $$
+BEGIN
+  RAISE EXCEPTION 'beamwarden: the audit log is append-only';
+END $$;
+CREATE TRIGGER audit_event_no_update BEFORE UPDATE ON audit_event
+FOR EACH ROW EXECUTE FUNCTION bw_audit_event_append_only();
+CREATE TRIGGER audit_event_no_delete BEFORE DELETE ON audit_event
+FOR EACH ROW EXECUTE FUNCTION bw_audit_event_append_only();
+`;

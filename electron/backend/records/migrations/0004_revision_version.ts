@@ -9,3 +9,8 @@ export const name = 'revision_version';
 export const sql = `
 ALTER TABLE revision ADD COLUMN version INTEGER NOT NULL DEFAULT 1 CHECK (version >= 1);
 `;
+
+/** PostgreSQL: the same column. */
+export const postgresql = `
+ALTER TABLE revision ADD COLUMN version integer NOT NULL DEFAULT 1 CHECK (version >= 1);
+`;

@@ -13,3 +13,12 @@ ALTER TABLE eyewear ADD COLUMN condition TEXT NOT NULL DEFAULT 'not recorded'
 ALTER TABLE eyewear ADD COLUMN next_inspection TEXT;
 CREATE INDEX eyewear_next_inspection ON eyewear(next_inspection) WHERE next_inspection IS NOT NULL;
 `;
+
+/** PostgreSQL: the same columns and index. */
+export const postgresql = `
+ALTER TABLE eyewear ADD COLUMN inspected_on text;
+ALTER TABLE eyewear ADD COLUMN condition text NOT NULL DEFAULT 'not recorded'
+  CHECK (condition IN ('not recorded', 'good', 'worn', 'damaged', 'withdrawn'));
+ALTER TABLE eyewear ADD COLUMN next_inspection text;
+CREATE INDEX eyewear_next_inspection ON eyewear(next_inspection) WHERE next_inspection IS NOT NULL;
+`;

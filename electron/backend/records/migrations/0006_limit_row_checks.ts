@@ -38,3 +38,46 @@ BEGIN SELECT RAISE(ABORT, 'beamwarden: a signed check of a limit-table row canno
 CREATE TRIGGER limit_row_checks_no_delete BEFORE DELETE ON limit_row_checks
 BEGIN SELECT RAISE(ABORT, 'beamwarden: a signed check of a limit-table row cannot be deleted'); END;
 `;
+
+/**
+ * PostgreSQL: the same table, index and refusals. A check belongs to the register, not to a site
+ * (like a person or a signing key), so no row-level policy narrows it to the officer's sites; the
+ * change is recorded with the account that made it.
+ */
+export const postgresql = `
+CREATE TABLE limit_row_checks (
+  id             text PRIMARY KEY,
+  rule_set       text NOT NULL,
+  entry_key      text NOT NULL,
+  entry_expr     text NOT NULL,
+  verdict        text NOT NULL CHECK (verdict IN ('matches', 'differs')),
+  document_expr  text,
+  reference      text NOT NULL,
+  note           text NOT NULL,
+  person_id      text NOT NULL,
+  name           text NOT NULL,
+  role           text NOT NULL,
+  signed_at      text NOT NULL,
+  key_id         text NOT NULL,
+  trust_anchor   text NOT NULL,
+  signature      text NOT NULL
+);
+
+CREATE INDEX limit_row_checks_entry ON limit_row_checks (rule_set, entry_key, signed_at);
+
+CREATE FUNCTION bw_limit_row_checks_no_update() RETURNS trigger LANGUAGE plpgsql AS $$
+BEGIN
+  RAISE EXCEPTION 'beamwarden: a signed check of a limit-table row cannot be changed';
+END $$;
+CREATE TRIGGER limit_row_checks_no_update BEFORE UPDATE ON limit_row_checks
+FOR EACH ROW EXECUTE FUNCTION bw_limit_row_checks_no_update();
+
+CREATE FUNCTION bw_limit_row_checks_no_delete() RETURNS trigger LANGUAGE plpgsql AS $$
+BEGIN
+  RAISE EXCEPTION 'beamwarden: a signed check of a limit-table row cannot be deleted';
+END $$;
+CREATE TRIGGER limit_row_checks_no_delete BEFORE DELETE ON limit_row_checks
+FOR EACH ROW EXECUTE FUNCTION bw_limit_row_checks_no_delete();
+
+CREATE TRIGGER limit_row_checks_recorded AFTER INSERT OR UPDATE OR DELETE ON limit_row_checks FOR EACH ROW EXECUTE FUNCTION bw_record_write('id');
+`;

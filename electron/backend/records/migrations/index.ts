@@ -17,17 +17,25 @@ import * as m0007 from './0007_co_signatures.js';
 export interface Migration {
   readonly version: number;
   readonly name: string;
+  /** SQLite's SQL (the embedded file). */
   readonly sql: string;
+  /**
+   * PostgreSQL's SQL for the same version (the institution register): the same tables, columns,
+   * keys, checks and refusals (PL/pgSQL triggers with the same names and words), plus the
+   * register's access rules (row-level security) for any table that belongs to a site.
+   * DEVELOPERS.md "A new migration" says what it needs.
+   */
+  readonly postgresql: string;
 }
 
 export const MIGRATIONS: readonly Migration[] = [
-  { version: 1, name: m0001.name, sql: m0001.sql },
-  { version: 2, name: m0002.name, sql: m0002.sql },
-  { version: 3, name: m0003.name, sql: m0003.sql },
-  { version: 4, name: m0004.name, sql: m0004.sql },
-  { version: 5, name: m0005.name, sql: m0005.sql },
-  { version: 6, name: m0006.name, sql: m0006.sql },
-  { version: 7, name: m0007.name, sql: m0007.sql },
+  { version: 1, name: m0001.name, sql: m0001.sql, postgresql: m0001.postgresql },
+  { version: 2, name: m0002.name, sql: m0002.sql, postgresql: m0002.postgresql },
+  { version: 3, name: m0003.name, sql: m0003.sql, postgresql: m0003.postgresql },
+  { version: 4, name: m0004.name, sql: m0004.sql, postgresql: m0004.postgresql },
+  { version: 5, name: m0005.name, sql: m0005.sql, postgresql: m0005.postgresql },
+  { version: 6, name: m0006.name, sql: m0006.sql, postgresql: m0006.postgresql },
+  { version: 7, name: m0007.name, sql: m0007.sql, postgresql: m0007.postgresql },
 ];
 
 export const LATEST_VERSION = MIGRATIONS[MIGRATIONS.length - 1]?.version ?? 0;
