@@ -5,15 +5,15 @@
  * list of rows used and its source list cite the check in words ("checked against IEC
  * 60825-1:2014 Table A.1 by <name> on <date>"); an unchecked row says "not yet checked against
  * the published text — the stricter value is used"; a 'differs' check is flagged on the results;
- * the door notice names the check. Source of the rule: SAFETY.md, "Sources and their status" and
+ * the door notice and the eyewear sheet name the check. Source of the rule: SAFETY.md, "Sources and their status" and
  * "Checks of the limit tables" (derived). Beam (invented): 532 nm, one 100 ps pulse of 1 µJ, so row
  * H-E-VIS-2 of set (a) governs the eye limit.
  */
 import { afterEach, describe, expect, it } from 'vitest';
 import type { LaserInput } from '../../../core/index.js';
 import type { RecordStore } from '../../../electron/backend/records/index.js';
-import { documentInputFromAssessment, renderDoorNotice, renderReport } from '../../../electron/backend/pdf/index.js';
-import { makeSigner, openTemp, tempDir } from '../records/helpers.js';
+import { documentInputFromAssessment, renderDoorNotice, renderEyewearSheet, renderReport } from '../../../electron/backend/pdf/index.js';
+import { makeSigner, openTemp, scenario, tempDir } from '../records/helpers.js';
 import { collapse, pageTexts } from './pdf-tools.js';
 
 const SEED: LaserInput = {
@@ -40,6 +40,8 @@ async function printed(check: { verdict: 'matches' | 'differs'; documentExpr?: s
   const site = await s.createSite({ name: 'Harwick Vale Photonics Centre', building: 'Building B' });
   const room = await s.createRoom({ siteId: site.id, code: 'B2.14', name: 'Ultrafast laboratory', responsiblePerson: 'Dr. Tomasz Ferreira-Lund' });
   await s.createInstallation({ roomId: room.id, laser: SEED, laserType: SEED.name });
+  // the invented demo shelf (an eyewear sheet of a site without any eyewear is not printable today)
+  for (const spec of scenario.eyewear) await s.createEyewear({ siteId: site.id, spec });
   let on = '';
   if (check) {
     const rec = await s.recordRowCheck({ ruleSet: 'icnirp2013', entryKey: 'H-E-VIS-2', ...check, reference: 'IEC 60825-1:2014 Table A.1', personId: officer.person.id, passphrase: officer.passphrase });
@@ -49,7 +51,12 @@ async function printed(check: { verdict: 'matches' | 'differs'; documentExpr?: s
   await s.signAssessment(a.id, officer.signOff());
   const doc = await documentInputFromAssessment(s, a.id);
   const opts = { paper: 'A4', units: 'SI' } as const;
-  return { on, report: collapse(pageTexts(await renderReport(doc, opts)).join('\n')), notice: collapse(pageTexts(await renderDoorNotice(doc, opts)).join('\n')) };
+  return {
+    on,
+    report: collapse(pageTexts(await renderReport(doc, opts)).join('\n')),
+    notice: collapse(pageTexts(await renderDoorNotice(doc, opts)).join('\n')),
+    sheet: collapse(pageTexts(await renderEyewearSheet(doc, opts)).join('\n')),
+  };
 }
 
 describe('checked rows on paper', () => {
@@ -58,6 +65,7 @@ describe('checked rows on paper', () => {
     expect(p.report).toContain('not yet checked against the published text — the stricter value is used');
     expect(p.report).not.toMatch(/checked against IEC 60825-1:2014 Table A\.1 by/);
     expect(p.notice).not.toContain('Limit-table entries checked by the officer');
+    expect(p.sheet).not.toContain('Limit-table entries checked by the officer');
   });
 
   it('a "matches" check is cited in words in the rows used, the source list and on the door notice', async () => {
@@ -67,6 +75,7 @@ describe('checked rows on paper', () => {
     expect(p.report.split(words).length - 1).toBeGreaterThanOrEqual(2);
     expect(p.report).toMatch(/\[\d+\] [^[]*— checked against IEC 60825-1:2014 Table A\.1 by Dr\. Imre Calloway-Senn/);
     expect(p.notice).toContain(`Limit-table entries checked by the officer: row H-E-VIS-2 ${words}.`);
+    expect(p.sheet).toContain(`Limit-table entries checked by the officer: row H-E-VIS-2 ${words}.`);
   });
 
   it('a "differs" check: the lower published value is used and every result that uses the row is flagged', async () => {

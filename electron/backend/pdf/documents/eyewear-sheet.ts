@@ -3,6 +3,7 @@
  * the shelf, which beams of the room it protects against and which it must NOT be used for (from
  * the core's coverage verdicts), and what the room needs per wavelength.
  */
+import { checksSentence } from '../row-checks.js';
 import type { Content, TableCell, TDocumentDefinitions } from 'pdfmake/interfaces';
 import type { EyewearSpec } from '../../../../core/model/inputs.js';
 import type { DocumentInput, RenderOptions } from '../document-input.js';
@@ -97,6 +98,7 @@ export function eyewearSheetDefinition(original: DocumentInput, opts: RenderOpti
     table: { widths: ['*'], dontBreakRows: true, body: part.map((u) => [useEntry(u)]) },
     layout: { hLineWidth: () => 0.6, vLineWidth: () => 0.6, hLineColor: () => '#999999', vLineColor: () => '#999999' },
   });
+  const checks = checksSentence(doc);
   const content: Content[] = [
     {
       columns: [
@@ -141,6 +143,8 @@ export function eyewearSheetDefinition(original: DocumentInput, opts: RenderOpti
       color: COLOR.muted,
       margin: [0, 0, 0, 4],
     },
+    // The officer's checks of the limit-table entries these optical densities rest on (issue 12).
+    ...(checks === null ? [] : [{ text: checks, fontSize: fit >= 3 ? 6 : 7, color: COLOR.ink, margin: [0, 0, 0, 4] } as Content]),
     { text: 'Use and do not use (beam numbers as in the matrix)', bold: true, fontSize: fit >= 4 ? 10 : 12, margin: [0, 0, 0, 2] },
     compact
       ? { columns: Array.from({ length: Math.ceil(uses.length / perColumn) }, (_, i) => compactUse(uses.slice(i * perColumn, (i + 1) * perColumn))), columnGap: 8 }
