@@ -1,5 +1,5 @@
 /**
- * The officer's checks of the limit tables against the published documents (issue 12, schema 6).
+ * The officer's checks of the limit tables against the published documents (issue 12, schema 8).
  *
  * An officer who holds the published document checks one open row or correction-factor piece of a
  * rule set (core openPoints / checkableEntries) and records the result, signed with their personal

@@ -1,5 +1,5 @@
 /**
- * The officer's signed checks of the limit tables (issue 12, schema 6), through the handler table
+ * The officer's signed checks of the limit tables (issue 12, schema 8), through the handler table
  * the app uses: a check recorded with the officer's passphrase feeds the assessments evaluated on
  * the register afterwards, the revision records the checks it used, verify checks each signature,
  * and export/import keeps them. Real SQLite files and real keys in temporary folders (no mocks).
@@ -134,7 +134,7 @@ describe('a check of a limit-table row changes the limit the officer reads, neve
   });
 });
 
-describe('a signed check is never changed or deleted (schema 6 triggers)', () => {
+describe('a signed check is never changed or deleted (schema 8 triggers)', () => {
   it.each([
     ['the verdict rewritten', "UPDATE limit_row_checks SET verdict = 'matches'", /check of a limit-table row cannot be changed/],
     ['the check removed', 'DELETE FROM limit_row_checks', /check of a limit-table row cannot be deleted/],

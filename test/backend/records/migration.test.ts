@@ -11,6 +11,7 @@ import { fileURLToPath } from 'node:url';
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { openRecordStore, RecordError, SCHEMA_VERSION } from '../../../electron/backend/records/index.js';
 import { tempDir } from './helpers.js';
+import { MIGRATIONS } from '../../../electron/backend/records/migrations/index.js';
 
 const fixture = fileURLToPath(new URL('../../fixtures/db-v1.sqlite', import.meta.url));
 const SIGNED = '44444444-4444-4444-8444-444444444444';
@@ -83,10 +84,10 @@ describe('migrating the version-1 fixture', () => {
       { version: 3, name: 'personal_keys_and_chain' },
       { version: 4, name: 'revision_version' },
       { version: 5, name: 'eyewear_upkeep' },
-      { version: 6, name: 'limit_row_checks' },
       { version: 7, name: 'co_signatures' },
+      { version: 8, name: 'limit_row_checks' },
     ]);
-    // no checks of the limit tables yet (schema 6 adds the empty table)
+    // no checks of the limit tables yet (schema 8 adds the empty table)
     expect(raw.prepare('SELECT count(*) AS n FROM limit_row_checks').get()).toEqual({ n: 0 });
     // a version-1 signed record has no co-signatures (schema 7 adds the empty table)
     expect(raw.prepare('SELECT count(*) AS n FROM co_signature').get()).toEqual({ n: 0 });
@@ -127,6 +128,28 @@ describe('migrating the version-1 fixture', () => {
     const cols = (after.prepare('PRAGMA table_info(revision)').all() as Array<{ name: string }>).map((c) => c.name);
     expect(cols).not.toContain('title');
     after.close();
+  });
+});
+
+describe('a register as released at schema 7 (history 1-5, 7)', () => {
+  it('opens and migrates to the latest schema: the checks of the limit tables come as migration 8, after the released 7', async () => {
+    // Built the way the runner writes a register, with the migrations released up to 0.2.2 only.
+    const path = join(t.dir, 'released-7.sqlite');
+    const raw = new Database(path);
+    for (const m of MIGRATIONS.filter((x) => x.version <= 7)) {
+      raw.exec(m.sql);
+      raw.prepare('INSERT INTO schema_migrations (version, name, applied_at) VALUES (?, ?, ?)').run(m.version, m.name, '2026-11-30T12:00:00.000Z');
+      raw.pragma(`user_version = ${m.version}`);
+    }
+    raw.close();
+    await (await openRecordStore({ path, keyDir: join(t.dir, 'keys') })).close();
+    const after = new Database(path, { readonly: true });
+    try {
+      expect((after.prepare('SELECT version FROM schema_migrations ORDER BY version').all() as Array<{ version: number }>).map((r) => r.version)).toEqual([1, 2, 3, 4, 5, 7, 8]);
+      expect(after.prepare('SELECT count(*) AS n FROM limit_row_checks').get()).toEqual({ n: 0 });
+    } finally {
+      after.close();
+    }
   });
 });
 

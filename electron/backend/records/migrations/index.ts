@@ -11,8 +11,8 @@ import * as m0002 from './0002_list_columns_and_audit_log.js';
 import * as m0003 from './0003_personal_keys_and_chain.js';
 import * as m0004 from './0004_revision_version.js';
 import * as m0005 from './0005_eyewear_upkeep.js';
-import * as m0006 from './0006_limit_row_checks.js';
 import * as m0007 from './0007_co_signatures.js';
+import * as m0008 from './0008_limit_row_checks.js';
 
 export interface Migration {
   readonly version: number;
@@ -34,8 +34,9 @@ export const MIGRATIONS: readonly Migration[] = [
   { version: 3, name: m0003.name, sql: m0003.sql, postgresql: m0003.postgresql },
   { version: 4, name: m0004.name, sql: m0004.sql, postgresql: m0004.postgresql },
   { version: 5, name: m0005.name, sql: m0005.sql, postgresql: m0005.postgresql },
-  { version: 6, name: m0006.name, sql: m0006.sql, postgresql: m0006.postgresql },
   { version: 7, name: m0007.name, sql: m0007.sql, postgresql: m0007.postgresql },
+  // 8, not 6: schema 7 was released first, and a released database's history must stay a prefix.
+  { version: 8, name: m0008.name, sql: m0008.sql, postgresql: m0008.postgresql },
 ];
 
 export const LATEST_VERSION = MIGRATIONS[MIGRATIONS.length - 1]?.version ?? 0;

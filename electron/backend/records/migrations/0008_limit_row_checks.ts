@@ -1,5 +1,5 @@
 /**
- * Schema version 6: the officer's checks of the limit tables against the published documents
+ * Schema version 8: the officer's checks of the limit tables against the published documents
  * (issue 12). Each row records one check of one limit-table row or correction-factor piece of one
  * rule set: the verdict ('matches', or 'differs' with what the published text gives), the document
  * and table cited, and the signature of the person who checked it with their personal key (the
