@@ -23,9 +23,9 @@ export async function verifyOneAssessment(store: RecordStore, assessmentId: Id, 
 }
 
 async function check(store: RecordStore, assessmentId: Id, title: string): Promise<AssessmentVerdict> {
-  const revisions = await store.listRevisions(assessmentId);
-  const signed = revisions.filter((r) => r.status !== 'draft' || r.signature !== null);
-  if (signed.length === 0) {
+  // Chain and protections are read once for all the signed revisions of the assessment.
+  const reports = await store.verifySignedRevisions(assessmentId);
+  if (reports.length === 0) {
     const report = await store.verify(assessmentId);
     const clean = report.chainIntact && report.checks.every((c) => c.check !== 'protections' || c.ok);
     return {
@@ -36,8 +36,6 @@ async function check(store: RecordStore, assessmentId: Id, title: string): Promi
       reports: [report],
     };
   }
-  const reports: VerifyReport[] = [];
-  for (const r of signed) reports.push(await store.verify(assessmentId, r.id));
   const bad = reports.find((r) => !r.ok);
   const newest = reports.at(-1);
   if (bad) {

@@ -115,6 +115,7 @@ function storeOver(ctx: StoreContext, engine: RecordEngine, info: StoreInfo): Re
     compareRevisions: (fromRevisionId, toRevisionId) => A.compareRevisions(ctx, fromRevisionId, toRevisionId),
     signAssessment: (id, signOff, reviewed) => A.signAssessment(ctx, id, signOff, reviewed),
     verify: (assessmentId, revisionId) => A.verifyAssessment(ctx, assessmentId, revisionId),
+    verifySignedRevisions: (assessmentId) => A.verifySignedRevisions(ctx, assessmentId),
 
     listPersonKeys: () => K.listPersonKeys(ctx),
     createPersonKey: (args) => K.createPersonalKey(ctx, args),

@@ -162,6 +162,8 @@ export interface RecordStore {
   signAssessment(id: Id, signOff: SignOff, reviewed?: SaveBase): Promise<Assessment>;
   /** Check the newest signed revision (or `revisionId`). */
   verify(assessmentId: Id, revisionId?: Id): Promise<VerifyReport>;
+  /** Every signed (and superseded) revision verified, oldest first; chain and protections read once. */
+  verifySignedRevisions(assessmentId: Id): Promise<VerifyReport[]>;
 
   // personal keys and the trust list (outside the database)
   listPersonKeys(): Promise<PersonKey[]>;
