@@ -9,7 +9,7 @@ import type { EyewearSpec } from '../../../../core/model/inputs.js';
 import type { DocumentInput, RenderOptions } from '../document-input.js';
 import { baseDocument, cautionBlock, COLOR, contentWidth, fingerprintBlock, footerFor, headerFor } from '../page.js';
 import { roomView } from '../room-view.js';
-import { coverageMatrix, eyewearMarkings, verdictOf } from './eyewear-tables.js';
+import { coverageMatrix, eyewearMarkings, requiredEyewearTable, verdictOf } from './eyewear-tables.js';
 import type { RoomView } from '../room-view.js';
 import { coveringEyewear } from './door-notice.js';
 
@@ -99,6 +99,7 @@ export function eyewearSheetDefinition(original: DocumentInput, opts: RenderOpti
     layout: { hLineWidth: () => 0.6, vLineWidth: () => 0.6, hLineColor: () => '#999999', vLineColor: () => '#999999' },
   });
   const checks = checksSentence(doc);
+  const noEyewear = (doc.content.input.eyewear ?? []).length === 0;
   const content: Content[] = [
     {
       columns: [
@@ -117,7 +118,9 @@ export function eyewearSheetDefinition(original: DocumentInput, opts: RenderOpti
                         { text: e.marking === '' ? '' : `, marked ${e.marking}`, fontSize: 9 },
                       ]),
                     ]
-                  : [{ text: 'No single eyewear covers every beam here: choose by the beams in use.', bold: true, color: COLOR.bad }],
+                  : noEyewear
+                    ? [{ text: 'No eyewear is listed for this room.', bold: true, color: COLOR.bad }]
+                    : [{ text: 'No single eyewear covers every beam here: choose by the beams in use.', bold: true, color: COLOR.bad }],
               fontSize: 13,
             },
             {
@@ -133,8 +136,14 @@ export function eyewearSheetDefinition(original: DocumentInput, opts: RenderOpti
     },
     // The caution stands in every page's footer too; a full sheet keeps that one only.
     ...(fit >= 2 ? [] : [{ text: '', margin: [0, 2, 0, 0] } as Content, cautionBlock(10)]),
-    { text: 'Which eyewear protects against which beam', bold: true, fontSize: fit >= 4 ? 10 : 12, margin: [0, 4, 0, 0] },
-    coverageMatrix(doc, view, matrixFont, eyewearCell, true, fit >= 2 ? 130 : 92, fit < 3, fit >= 4),
+    { text: noEyewear ? 'What the eyewear must provide' : 'Which eyewear protects against which beam', bold: true, fontSize: fit >= 4 ? 10 : 12, margin: [0, 4, 0, 0] },
+    // A room with no eyewear on its shelf still needs the sheet by the door: what to get, per wavelength.
+    ...(noEyewear
+      ? [
+          { text: 'Do not work with the beams exposed until eyewear meeting these values is issued:', bold: true, color: COLOR.bad, fontSize: 10, margin: [0, 0, 0, 3] } as Content,
+          requiredEyewearTable(doc, matrixFont + 1),
+        ]
+      : [coverageMatrix(doc, view, matrixFont, eyewearCell, true, fit >= 2 ? 130 : 92, fit < 3, fit >= 4)]),
     {
       text: view.beams
         .map((b, i) => `${i + 1}: ${b.result.label}`)
@@ -145,8 +154,10 @@ export function eyewearSheetDefinition(original: DocumentInput, opts: RenderOpti
     },
     // The officer's checks of the limit-table entries these optical densities rest on (issue 12).
     ...(checks === null ? [] : [{ text: checks, fontSize: fit >= 3 ? 6 : 7, color: COLOR.ink, margin: [0, 0, 0, 4] } as Content]),
-    { text: 'Use and do not use (beam numbers as in the matrix)', bold: true, fontSize: fit >= 4 ? 10 : 12, margin: [0, 0, 0, 2] },
-    compact
+    ...(noEyewear ? [] : [{ text: 'Use and do not use (beam numbers as in the matrix)', bold: true, fontSize: fit >= 4 ? 10 : 12, margin: [0, 0, 0, 2] } as Content]),
+    noEyewear
+      ? { text: '' }
+      : compact
       ? { columns: Array.from({ length: Math.ceil(uses.length / perColumn) }, (_, i) => compactUse(uses.slice(i * perColumn, (i + 1) * perColumn))), columnGap: 8 }
       : {
           table: { headerRows: 0, dontBreakRows: true, widths: [112, 130, 150, '*'], body: useRows },
