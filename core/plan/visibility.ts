@@ -245,6 +245,13 @@ function roughHit(cx: number, cy: number, dx: number, dy: number, ax: number, ay
   return t > -1e-9 && w > -1e-6 && w < 1 + 1e-6 ? t : null;
 }
 
+/**
+ * A sight line aimed at a corner of the zone polygon meets the side there at w = 0 or 1 exactly, but
+ * the corner's own digits can put the computed w a few units of the 40th digit outside: such a line
+ * still meets the side (without this a small zone could find no side in a sector and be left uncut).
+ */
+const W_ROUNDING = new Dec('1e-25');
+
 /** The ray c + t·d (t > 0) against the closed segment a–b: t, or null (parallel lines do not meet). */
 function rayParam(c: P, d: P, a: P, b: P): Dec | null {
   const s = sub(b, a);
@@ -253,7 +260,7 @@ function rayParam(c: P, d: P, a: P, b: P): Dec | null {
   const q = sub(a, c);
   const t = cross(q, s).div(den);
   const w = cross(q, d).div(den);
-  if (t.lte(0) || w.lt(0) || w.gt(1)) return null;
+  if (t.lte(0) || w.lt(W_ROUNDING.neg()) || w.gt(W_ROUNDING.add(1))) return null;
   return t;
 }
 

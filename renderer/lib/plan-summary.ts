@@ -1,7 +1,8 @@
 /**
  * The room plan at a glance, for the results panel: a few lines counted from the core's findings
  * (never from the zones themselves): entrances, windows and work positions inside a hazard zone,
- * beams that leave the room, end on a curtain or barrier or leave their enclosure, and whether the
+ * beams that leave the room, end on a curtain or barrier or leave their enclosure, paths drawn through
+ * a wall before their end, and whether the
  * accepted laser controlled area holds every zone.
  */
 import type { PlanFinding, PlanFindingKind, PlanResult, RoomPlan } from '../../core/index.js';
@@ -21,7 +22,7 @@ function beamsOf(f: PlanFinding): string[] {
   return unique(f.zoneIds.map((z) => z.split(':')[0] ?? z));
 }
 
-export function planSummary(plan: RoomPlan, result: PlanResult, beamLabel: ReadonlyMap<string, string>): SummaryLine[] {
+export function planSummary(plan: RoomPlan, result: PlanResult, beamLabel: ReadonlyMap<string, string>, laserName: ReadonlyMap<string, string> = new Map()): SummaryLine[] {
   const of = (k: PlanFindingKind) => result.findings.filter((f) => f.kind === k);
   const subjects = (k: PlanFindingKind) => new Set(of(k).map((f) => f.subjectId));
   const out: SummaryLine[] = [];
@@ -58,6 +59,9 @@ export function planSummary(plan: RoomPlan, result: PlanResult, beamLabel: Reado
     for (const b of beamsOf(f)) stopped.set(b, unique([...(stopped.get(b) ?? []), `${bar?.kind === 'curtain' ? 'curtain' : 'barrier'} ${bar?.label ?? f.subjectId}`]));
   }
   if (stopped.size > 0) out.push({ tone: 'check', text: `Beam paths ending on a curtain or barrier (check its rating): ${list([...stopped].map(([b, on]) => `${name(b)} on ${list(on)}`))}.` });
+
+  const throughWall = unique(of('path-meets-wall').map((f) => laserName.get(f.subjectId) ?? f.subjectId));
+  if (throughWall.length > 0) out.push({ tone: 'check', text: `Beam paths drawn through a wall before their end (check the drawing; the wall is taken to stop the beam): ${list(throughWall)}.` });
 
   if (!plan.controlledArea) out.push({ tone: 'check', text: 'No laser controlled area has been accepted yet.' });
   else {

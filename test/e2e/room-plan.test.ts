@@ -117,6 +117,25 @@ describe('the room plan in the workspace', () => {
     await page.screenshot({ path: path.join(SHOTS, 'plan-l-shaped.png') });
     await glance.scrollIntoViewIfNeeded();
     await page.screenshot({ path: path.join(SHOTS, 'plan-at-a-glance.png') });
+    // The room accepted as the controlled area: its corner 1 lies on room corner 1 (0, 0) and is drawn
+    // beside it. Dragged 0.5 m west with the mouse, the point moves 0.5 m (not onto the pointer), and the
+    // drawing keeps its scale while the corner runs past the old edge (derived: 6 m between room corners 1 and 2).
+    await panel.getByLabel('Accept the room as the laser controlled area, by').fill('I. Calloway-Senn');
+    await panel.getByRole('button', { name: 'Accept boundary' }).click();
+    const caCorner = panel.getByRole('button', { name: /^Controlled area corner 1: x 0\.00 m, y 0\.00 m/ });
+    await caCorner.scrollIntoViewIfNeeded();
+    const c1 = (await panel.getByRole('button', { name: /^Room corner 1: / }).boundingBox())!;
+    const c2 = (await panel.getByRole('button', { name: /^Room corner 2: / }).boundingBox())!;
+    const pxPerM = (c2.x - c1.x) / 6;
+    const from = (await caCorner.boundingBox())!;
+    await page.mouse.move(from.x + from.width / 2, from.y + from.height / 2);
+    await page.mouse.down();
+    await page.mouse.move(from.x + from.width / 2 - pxPerM * 0.5, from.y + from.height / 2, { steps: 5 });
+    await page.mouse.up();
+    const moved = await panel.getByRole('button', { name: /^Controlled area corner 1: / }).getAttribute('aria-label');
+    const [, x, y] = /x (-?[\d.]+) m, y (-?[\d.]+) m/.exec(moved ?? '') ?? [];
+    expect(Number(x)).toBeCloseTo(-0.5, 1);
+    expect(Number(y)).toBeCloseTo(0, 1);
     await page.keyboard.press('Control+s');
     await page.getByText(/saved/i).first().waitFor({ timeout: 30_000 });
   });

@@ -26,7 +26,7 @@ const base: RoomPlan = {
 
 function lines(plan: RoomPlan): string[] {
   const r = evaluateRoom({ lasers: [{ id: 'L1', name: 'Laser 1', beams: [beamA] }, { id: 'L2', name: 'Laser 2', beams: [{ ...beamA, id: 'b', label: 'beam B' }] }], plan });
-  return planSummary(plan, r.plan!, new Map(r.beams.map((b) => [b.beamId, b.label]))).map((l) => `${l.tone}: ${l.text}`);
+  return planSummary(plan, r.plan!, new Map(r.beams.map((b) => [b.beamId, b.label])), new Map([['L1', 'Laser 1'], ['L2', 'Laser 2']])).map((l) => `${l.tone}: ${l.text}`);
 }
 
 describe('room plan at a glance (derived geometry)', () => {
@@ -53,5 +53,10 @@ describe('room plan at a glance (derived geometry)', () => {
       'check: Beam paths ending on a curtain or barrier (check its rating): beam A on curtain C1.',
       'ok: Every hazard zone stays inside the accepted laser controlled area.',
     ]);
+  });
+
+  it('a beam dump drawn beyond the east wall: the drawing is to be checked (derived: the beam along y = 3 m meets x = 8 m before the dump at x = 9 m)', () => {
+    const plan: RoomPlan = { ...base, paths: [{ laserId: 'L1', exit: p(1, 3), elements: [{ kind: 'dump', at: p(9, 3) }] }, { laserId: 'L2', exit: p(1, 4), elements: [{ kind: 'dump', at: p(3, 4) }] }], controlledArea: { outline: base.outline, acceptedBy: 'I. Calloway-Senn' } };
+    expect(lines(plan)).toContain('check: Beam paths drawn through a wall before their end (check the drawing; the wall is taken to stop the beam): Laser 1.');
   });
 });

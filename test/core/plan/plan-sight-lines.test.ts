@@ -164,6 +164,20 @@ describe('an L-shaped room: beams and zones stop at its own walls (derived geome
     expect(kinds(plan.findings)).toEqual([]);
   });
 
+  it('a small diffuse zone where a beam ends on the inner wall is cut 1 mm beyond the wall, so it stays inside the accepted boundary', () => {
+    // Beam E (invented): 100 mW CW at 405 nm, 2.3 mm, 0.4 mrad (1/e²), diffuse reflectance 0.2: a diffuse
+    // radius under 0.1 m (√(ρ·P/(π·E_L)), domain notes 1.4). It runs east along y = 3.5 m and ends on the
+    // inner wall x = 3 m at (3, 3.5); the spot is seen from the west wing (derived), so no corner of its zone
+    // lies beyond x = 3.0015 m (1 mm beyond the wall plus the rounding to the millimetre).
+    const beamE: BeamInput = { id: 'e', label: 'beam E', wavelength_nm: 405, emission: { kind: 'cw', power_W: 0.1 }, beam: { diameter_m: 0.0023, divergence_rad: 0.0004, definition: '1/e2' }, viewing: { diffuse: { reflectance: 0.2 } } };
+    const input: RoomInput = { lasers: [{ id: 'L1', name: 'Laser 1', beams: [beamE] }], plan: { ...none, outline: L, controlledArea: { outline: L, acceptedBy: 'I. Calloway-Senn' }, paths: [{ laserId: 'L1', exit: p(0.5, 3.5), elements: [], onward_deg: 0 }] } };
+    const plan = evaluateRoom(input).plan!;
+    const zone = plan.zones.find((z) => z.kind === 'diffuse')!;
+    expect(Number(zone.radius_m)).toBeLessThan(0.1);
+    expect(Math.max(...zone.polygon.map((q) => Number(q.x_m)))).toBeLessThanOrEqual(3.0015);
+    expect(kinds(plan.findings)).toEqual([]);
+  });
+
   it('an outline whose sides cross is refused, naming the outline (ours: a room outline is a simple polygon)', () => {
     try {
       evaluateRoom(room({ outline: [p(0, 0), p(4, 4), p(4, 0), p(0, 4)], paths: short }));
