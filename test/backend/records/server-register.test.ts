@@ -354,8 +354,17 @@ describe.skipIf(skip)(`institution register on PostgreSQL${skip ? ` (${PG_SKIP_R
     expect(status).toBe(0);
   });
 
-  it('backup from the app answers that the server keeps the backups', async () => {
+  it('backup and restore from the app answer that the server keeps the backups; nothing is closed or replaced', async () => {
     const err = await errorOf(() => a.backupInto());
     expect(err.message).toMatch(/use your server's backup \(pg_dump/);
+    const host = await startTestHost(a, { openStore: () => openRecordStore({ path: PG_ADDRESS }) });
+    try {
+      const restore = await host.call('restore-backup', { path: join(t.dir, 'some-backup.sqlite') });
+      expect(restore.reply.ok).toBe(false);
+      if (!restore.reply.ok) expect(restore.reply.error.message).toMatch(/Backup and restore from Beamwarden are not available on an institution register/);
+      await expect(a.listSites()).resolves.toBeInstanceOf(Array); // the store is still open
+    } finally {
+      await host.close();
+    }
   });
 });
