@@ -110,6 +110,8 @@ describe.skipIf(skip)(`institution register on PostgreSQL${skip ? ` (${PG_SKIP_R
       expect(refused).toHaveLength(1);
       expect((refused[0]?.reason as RecordError).code).toBe('stale');
       expect((refused[0]?.reason as RecordError).message).toMatch(/changed by someone else at \d\d:\d\d .*Nothing was overwritten/);
+      // Who changed it: the other officer's account, as the register recorded it.
+      expect((refused[0]?.reason as RecordError).message).toContain(`(saved as revision 1 by ${new URL(PG_ADDRESS).username})`);
       const now = await b.getAssessment(made.id);
       expect(now.version).toBe(2);
       const winner = saved[0]?.status === 'fulfilled' ? saved[0].value.current.content.notes : '';
