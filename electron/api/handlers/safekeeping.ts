@@ -1,5 +1,6 @@
 import { z } from 'zod';
-import { restoreBackup } from '../../backend/records/index.js';
+import { isServerAddress, restoreBackup } from '../../backend/records/index.js';
+import { NO_SERVER_BACKUP } from '../../backend/records/pg-engine.js';
 import type { SafekeepingHandlers } from '../contracts/safekeeping.js';
 import type { ApiContext } from '../context.js';
 import type { AreaTable } from '../operation.js';
@@ -17,6 +18,8 @@ export const safekeepingTable: AreaTable<SafekeepingHandlers, ApiContext> = {
   'restore-backup': {
     input: z.strictObject({ path: PathSchema }),
     run: async ({ path }, ctx) => {
+      // The institution register's backups are the server's; its address is never a file to replace.
+      if (isServerAddress(ctx.databasePath)) throw new ApiFailure('conflict', NO_SERVER_BACKUP);
       const reopen = ctx.openStore;
       if (!reopen) throw new ApiFailure('conflict', 'This window cannot restore a backup itself: close Beamwarden and run "npm run restore".');
       // Close first: restore never replaces a database that this app is still writing.

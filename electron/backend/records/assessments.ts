@@ -486,7 +486,9 @@ export async function assertNotStale(ctx: StoreContext, id: Id, expected: SaveBa
   if (current.id === expected.revisionId && current.version === expected.version) return;
   const signed = current.status !== 'draft' ? await getSignatureRow(ctx, current.id) : undefined;
   const at = signed?.signed_at ?? current.updated_at;
-  const what = signed ? `signed by ${signed.name}` : `saved as revision ${current.revision_no}`;
+  // On an institution register the account that saved is named too (several officers share it).
+  const by = signed ? null : await ctx.engine.lastWriter(ctx.q, 'revision', current.id);
+  const what = signed ? `signed by ${signed.name}` : `saved as revision ${current.revision_no}${by !== null ? ` by ${by}` : ''}`;
   if (doing === 'sign') {
     throw new RecordError(
       'stale',

@@ -31,6 +31,11 @@ export interface EngineSeam {
   readonly rowLock: string;
   /** Names of protections that are missing or altered; empty when all are in place. */
   missingProtections(): Promise<string[]>;
+  /**
+   * The account that last wrote the row `id` of `table`, where the engine records it (an
+   * institution register: several officers), else null (a file: one desk).
+   */
+  lastWriter(q: SqlPort, table: string, id: string): Promise<string | null>;
 }
 
 export interface StoreContext {

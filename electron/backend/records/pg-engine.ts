@@ -128,6 +128,7 @@ export function pgSeam(port: PgSqlPort, where: string, schemaVersion: number): E
     rowLock: ' FOR UPDATE',
     translateError: (e, what) => translatePgError(e, what, where),
     missingProtections: () => missingPgProtections(port, schemaVersion),
+    lastWriter: async (q, table, id) => (await q.get<{ by: string | null }>('SELECT bw_last_writer(?, ?) AS by', table, id))?.by ?? null,
   };
 }
 

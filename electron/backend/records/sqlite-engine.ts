@@ -38,6 +38,7 @@ export function sqliteSeam(port: SqliteSqlPort, path: string): EngineSeam {
     rowLock: '',
     translateError: (e, what, storage) => translateSqliteError(e, what, storage ? path : undefined),
     missingProtections: () => port.exclusive((db) => missingProtections(db)),
+    lastWriter: () => Promise.resolve(null),
   };
 }
 

@@ -110,6 +110,8 @@ describe.skipIf(skip)(`institution register on PostgreSQL${skip ? ` (${PG_SKIP_R
       expect(refused).toHaveLength(1);
       expect((refused[0]?.reason as RecordError).code).toBe('stale');
       expect((refused[0]?.reason as RecordError).message).toMatch(/changed by someone else at \d\d:\d\d .*Nothing was overwritten/);
+      // Who changed it: the other officer's account, as the register recorded it.
+      expect((refused[0]?.reason as RecordError).message).toContain(`(saved as revision 1 by ${new URL(PG_ADDRESS).username})`);
       const now = await b.getAssessment(made.id);
       expect(now.version).toBe(2);
       const winner = saved[0]?.status === 'fulfilled' ? saved[0].value.current.content.notes : '';
@@ -354,8 +356,17 @@ describe.skipIf(skip)(`institution register on PostgreSQL${skip ? ` (${PG_SKIP_R
     expect(status).toBe(0);
   });
 
-  it('backup from the app answers that the server keeps the backups', async () => {
+  it('backup and restore from the app answer that the server keeps the backups; nothing is closed or replaced', async () => {
     const err = await errorOf(() => a.backupInto());
     expect(err.message).toMatch(/use your server's backup \(pg_dump/);
+    const host = await startTestHost(a, { openStore: () => openRecordStore({ path: PG_ADDRESS }) });
+    try {
+      const restore = await host.call('restore-backup', { path: join(t.dir, 'some-backup.sqlite') });
+      expect(restore.reply.ok).toBe(false);
+      if (!restore.reply.ok) expect(restore.reply.error.message).toMatch(/Backup and restore from Beamwarden are not available on an institution register/);
+      await expect(a.listSites()).resolves.toBeInstanceOf(Array); // the store is still open
+    } finally {
+      await host.close();
+    }
   });
 });

@@ -470,6 +470,11 @@ BEGIN
   RETURN NULL;
 END $$;
 
+-- Who last wrote a row, for refusals that name the other officer (write_record itself is not readable).
+CREATE FUNCTION bw_last_writer(p_table text, p_key text) RETURNS text LANGUAGE sql STABLE SECURITY DEFINER SET search_path FROM CURRENT AS $$
+  SELECT db_role FROM write_record WHERE table_name = p_table AND row_key = p_key ORDER BY seq DESC LIMIT 1
+$$;
+
 -- The site a row belongs to (SECURITY DEFINER: the lookup itself is not filtered).
 CREATE FUNCTION bw_room_site(p_room text) RETURNS text LANGUAGE sql STABLE SECURITY DEFINER SET search_path FROM CURRENT AS $$
   SELECT site_id FROM room WHERE id = p_room
