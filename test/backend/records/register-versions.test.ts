@@ -226,7 +226,7 @@ forEachEngine((engine) => {
       expect(reply.ok).toBe(false);
       if (!reply.ok) {
         expect(reply.error.code).toBe('stale');
-        expect(reply.error.message).toMatch(/changed by someone else since you opened it: saved as revision 1 at \d\d:\d\d\. Nothing was signed — reload, review the revision again, then sign\./);
+        expect(reply.error.message).toMatch(/changed by someone else since you opened it: saved as revision 1 (?:by \S+ )?at \d\d:\d\d\. Nothing was signed — reload, review the revision again, then sign\./);
       }
       expect(await snapshotOn(engine, t.dir)).toBe(before);
       // reviewed again, it signs
