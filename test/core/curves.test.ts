@@ -45,3 +45,25 @@ describe('limitAgainstDuration matches exposureLimit at the limit specification 
     expect(pts[1]).toEqual({ t_s: DURATION_RANGE_S[1] * 10, H_Jm2: null });
   });
 });
+
+// The criterion drawn is the one that sets the NOHD (highest exposure/limit ratio there), wherever it
+// stands in the list of criteria, and the room's settings reach it.
+describe('exposureAlongBeam draws the criterion that sets the NOHD', () => {
+  const along = (input: BeamInput, settings?: BeamInput['settings']) => {
+    const r = evaluateBeam({ ...input, ...(settings ? { settings } : {}) });
+    return exposureAlongBeam({ input, ruleSet: r.ruleSet, settings, nohd_m: r.nohd_m }, [0]);
+  };
+  it('EU, exactly 1400 nm, 10 mW CW over 30 000 s: the cornea row 1000 W/m² over 3.5 mm, not the lower retinal 400 W/m² over 7 mm (EU Table 2.2 notes a and b, read)', () => {
+    const a = along({ ruleSet: 'eu2006', wavelength_nm: 1400, exposureDuration_s: 30000, emission: { kind: 'cw', power_W: 0.01 }, beam: { diameter_m: 0.001, divergence_rad: 0.001, definition: '1/e' } });
+    expect([Number(a?.limit), a?.aperture_mm]).toEqual([1000, '3.5']);
+  });
+  it('10.6 um, 0.1 J, 1 us at 1 Hz over 5 s: rule 1, 5600 (1e-6)^0.25 J/m² (EU Table 2.2, read), listed before rule 2', () => {
+    const a = along({ wavelength_nm: 10600, exposureDuration_s: 5, emission: { kind: 'pulsed', pulseEnergy_J: 0.1, pulseDuration_s: 1e-6, repetitionRate_Hz: 1 }, beam: { diameter_m: 0.005, divergence_rad: 0.001, definition: '1/e' } });
+    expect(a?.rule).toBe('single-pulse');
+    expect(Math.abs(Number(a?.limit) / (5600 * 1e-6 ** 0.25) - 1)).toBeLessThan(1e-9);
+  });
+  it('the room settings reach the curve: 1064 nm, 1 mJ, 10 ns at 1 kHz over 10 s with conservative mode off, C_P = 1 for a small source (remembered piecewise form, from memory): 2e-2 J/m²', () => {
+    const a = along({ wavelength_nm: 1064, exposureDuration_s: 10, emission: { kind: 'pulsed', pulseEnergy_J: 1e-3, pulseDuration_s: 1e-8, repetitionRate_Hz: 1000 }, beam: { diameter_m: 0.005, divergence_rad: 0.001, definition: '1/e' } }, { conservative: false });
+    expect(Math.abs(Number(a?.limit) / 2e-2 - 1)).toBeLessThan(1e-9);
+  });
+});

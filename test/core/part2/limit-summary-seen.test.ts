@@ -94,3 +94,43 @@ describe('a beam evaluated after another gets its own limit', () => {
     expect(evaluateBeam(base).mpe.H_Jm2).not.toBe(alone.H_Jm2);
   });
 });
+
+// The governing-row note (EU Directive 2006/25/EC Annex II Table 2.2 notes a and b, read: each row
+// over its own limiting aperture) names the limits in the unit of the comparison.
+describe('units in the governing-row note', () => {
+  const walk = (t: Trace): string[] => [...t.steps.filter((s) => s.label === 'Governing row').map((s) => s.detail ?? ''), ...t.children.flatMap(walk)];
+  const b: BeamInput['beam'] = { diameter_m: 0.002, divergence_rad: 0.001, definition: '1/e' };
+  it.each([
+    ['CW, 1400 nm, 100 s: W/m²', { ruleSet: 'eu2006', wavelength_nm: 1400, exposureDuration_s: 100, emission: { kind: 'cw', power_W: 1 }, beam: b } as BeamInput, /limit 1000 W\/m²;.*400 W\/m²\)/],
+    ['0.5 s pulses at 1 Hz, 1400 nm, 30 000 s: J/m² per pulse', { ruleSet: 'eu2006', wavelength_nm: 1400, exposureDuration_s: 30000, emission: pulses(1e-3, 0.5, 1), beam: b } as BeamInput, /limit 1000 J\/m² per pulse;.*400 J\/m² per pulse\)/],
+  ] as const)('%s', (_name, x, re) => {
+    const n = walk(evaluateBeam(x).trace);
+    expect(n.length).toBe(1);
+    expect(n[0]).toMatch(re);
+  });
+});
+
+// Large irradiated skin areas (IEC 60825-1 / ANSI Z136.1 large-area note, from memory; SAFETY.md):
+// for t > 10 s at 1400 nm - 1 mm and A_s above 0.01 m², E = 10/A_s W/m², 100 W/m² from 0.1 m². The
+// far-IR skin rows are the eye's (5600 t^0.25 J/m² for 1e-7 to 10 s, EU Table 2.2, read; 1000 W/m²
+// from 10 s, from memory) over 3.5 mm.
+describe('large-area skin limit in the summary', () => {
+  const co2 = (emission: BeamInput['emission'], skinArea_m2: number, wavelength_nm = 10600): BeamInput => ({ wavelength_nm, exposureDuration_s: 100, skinArea_m2, emission, beam: { diameter_m: 0.01, divergence_rad: 0.001, definition: '1/e' } });
+  it('exactly 1400 nm, 1 W CW, 0.05 m², 100 s: the rule applies from 1400 nm: 200 W/m², over 100 s 2e4 J/m²', () => {
+    const s = evaluateBeam(co2({ kind: 'cw', power_W: 1 }, 0.05, 1400)).skinMpe;
+    expect([s.governingRule, s.governingRow]).toEqual(['cw', 'skin-large-area']);
+    expect(rel(s.E_Wm2, 200)).toBeLessThan(1e-9);
+    expect(rel(s.H_Jm2, 200 * 100)).toBeLessThan(1e-9);
+  });
+  it('10.6 um, 1 ms pulses at 10 Hz, 0.05 m², 100 s: 200 W/m² as 20 J/m² per pulse governs (rule 2 of the tables: 1000 W/m² = 100 J/m² per pulse)', () => {
+    const s = evaluateBeam(co2(pulses(0.01, 1e-3, 10), 0.05)).skinMpe;
+    expect([s.governingRule, s.governingRow]).toEqual(['average-power', 'skin-large-area']);
+    expect(rel(s.H_Jm2, 20)).toBeLessThan(1e-9);
+    expect(rel(s.E_Wm2, 200)).toBeLessThan(1e-9);
+  });
+  it('10.6 um, 1 us pulses at 1 Hz, 0.02 m², 100 s: one pulse, 5600 (1e-6)^0.25 = 177 J/m², is already below 10/0.02 = 500 J/m² per pulse', () => {
+    const s = evaluateBeam(co2(pulses(0.01, 1e-6, 1), 0.02)).skinMpe;
+    expect(s.governingRule).toBe('single-pulse');
+    expect(rel(s.H_Jm2, 5600 * 1e-6 ** 0.25)).toBeLessThan(1e-9);
+  });
+});
