@@ -67,7 +67,7 @@ describe('Settings & about: connect to an institution register', () => {
     await fireEvent.click(screen.getByRole('button', { name: 'Save for the next start' }));
     await until(() => /Saved\./.test(text('register-connection-result')));
     expect(text('register-connection-result')).toBe('Saved. Restart Beamwarden to work in the institution register.');
-    expect(text('register-saved')).toBe('Saved for the start: postgresql://dr_calloway@dbserver.example:5432/beamwarden. It applies after a restart.');
+    expect(text('register-saved')).toBe('Saved for the next start: postgresql://dr_calloway@dbserver.example:5432/beamwarden. It applies after a restart.');
     // still the file until the restart
     expect(text('register-in-force')).toContain(store.info.path);
     await fireEvent.click(screen.getByRole('button', { name: 'Use the local file again' }));
@@ -84,5 +84,21 @@ describe('Settings & about: connect to an institution register', () => {
     await fireEvent.click(screen.getByRole('button', { name: 'Test the connection' }));
     await until(() => /Cannot reach/.test(text('register-connection-result')));
     expect(text('register-connection-result')).toMatch(/^Cannot reach the institution register at postgresql:\/\/dr_calloway@127\.0\.0\.1:1\/beamwarden: the server refused the connection .* Beamwarden did not open a local file instead\.$/);
+  });
+
+  it('started with --db: says so, and that the saved register is used only at a start without --db or BEAMWARDEN_DB', async () => {
+    installStoreBridge(store, { settingsDir, registerSource: 'option' });
+    try {
+      await opened();
+      expect(text('register-in-force')).toBe(`In force now: ${store.info.path} (named by the --db option when Beamwarden was started).`);
+      await typeAddress('postgres://dr_calloway@dbserver.example:5432/beamwarden');
+      await fireEvent.click(screen.getByRole('button', { name: 'Save for the next start' }));
+      await until(() => /Saved\./.test(text('register-connection-result')));
+      expect(text('register-connection-result')).toBe('Saved. It is used at the next start without --db or BEAMWARDEN_DB.');
+      await fireEvent.click(screen.getByRole('button', { name: 'Use the local file again' }));
+      await until(() => /removed/.test(text('register-connection-result')));
+    } finally {
+      installStoreBridge(store, { settingsDir, registerSource: 'default' });
+    }
   });
 });
