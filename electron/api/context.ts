@@ -3,6 +3,7 @@
  * host; handlers never reach for globals, so the same table runs in both shells and in tests.
  */
 import type { RecordStore } from '../backend/records/types.js';
+import type { RegisterSource } from '../backend/records/register-setting.js';
 
 export type ShellKind = 'electron' | 'loopback';
 
@@ -17,4 +18,8 @@ export interface ApiContext {
   readonly openStore?: () => Promise<RecordStore>;
   /** better-sqlite3 build for this runtime (Electron), when not the default. */
   readonly nativeBinding?: string;
+  /** Where the register in force was named at start-up (--db, BEAMWARDEN_DB, the saved setting, the default file). */
+  readonly registerSource?: RegisterSource;
+  /** Folder of the institution register setting file (default: the user-data folder). */
+  readonly settingsDir?: string;
 }

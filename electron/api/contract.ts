@@ -5,6 +5,7 @@
  * Type-only: the renderer imports this file, so it must never import runtime Node code.
  */
 import type { AppHandlers } from './contracts/app.js';
+import type { ConnectionHandlers } from './contracts/connection.js';
 import type { AssessmentHandlers } from './contracts/assessments.js';
 import type { DocumentHandlers } from './contracts/documents.js';
 import type { ExchangeHandlers } from './contracts/exchange.js';
@@ -13,4 +14,4 @@ import type { LimitCheckHandlers } from './contracts/limit-checks.js';
 import type { RegisterHandlers } from './contracts/register.js';
 import type { SafekeepingHandlers } from './contracts/safekeeping.js';
 
-export type Handlers = AppHandlers & RegisterHandlers & AssessmentHandlers & ExchangeHandlers & KeyHandlers & LimitCheckHandlers & DocumentHandlers & SafekeepingHandlers;
+export type Handlers = AppHandlers & ConnectionHandlers & RegisterHandlers & AssessmentHandlers & ExchangeHandlers & KeyHandlers & LimitCheckHandlers & DocumentHandlers & SafekeepingHandlers;

@@ -6,6 +6,7 @@
 import type { ApiContext } from './context.js';
 import type { HandlerTable } from './operation.js';
 import { appTable } from './handlers/app.js';
+import { connectionTable } from './handlers/connection.js';
 import { assessmentTable } from './handlers/assessments.js';
 import { documentTable } from './handlers/documents.js';
 import { exchangeTable } from './handlers/exchange.js';
@@ -16,6 +17,7 @@ import { safekeepingTable } from './handlers/safekeeping.js';
 
 export const handlerTable: HandlerTable<ApiContext> = {
   ...appTable,
+  ...connectionTable,
   ...registerTable,
   ...assessmentTable,
   ...exchangeTable,

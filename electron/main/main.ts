@@ -3,10 +3,10 @@
  * renderer on the private app scheme, the ONE handler table on IPC, native menus, and the window
  * size remembered. Electron is imported only in electron/main.
  */
-import { app, BrowserWindow, Menu, session as electronSession, shell } from 'electron';
+import { app, BrowserWindow, dialog, Menu, session as electronSession, shell } from 'electron';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
-import { defaultDatabasePath, openRecordStore } from '../backend/records/index.js';
+import { chooseRegister, defaultDataDir, openRecordStore } from '../backend/records/index.js';
 import { handlerTable } from '../api/table.js';
 import type { ApiContext } from '../api/context.js';
 import { buildMenu } from './menu.js';
@@ -28,6 +28,16 @@ registerSchemePrivileges();
 if (!app.requestSingleInstanceLock()) app.quit();
 
 let win: BrowserWindow | null = null;
+
+/** `--db <location>` or `--db=<location>` on the desktop app's command line, when given. */
+function dbOption(argv: readonly string[]): string | undefined {
+  for (let i = 0; i < argv.length; i++) {
+    const a = argv[i] ?? '';
+    if (a === '--db') return argv[i + 1];
+    if (a.startsWith('--db=')) return a.slice('--db='.length);
+  }
+  return undefined;
+}
 
 function harden(): void {
   // No permission (camera, notifications, geolocation ...) is ever granted to the renderer.
@@ -70,17 +80,34 @@ function createWindow(): void {
 
 void app.whenReady().then(async () => {
   harden();
-  const databasePath = process.env['BEAMWARDEN_DB'] ?? defaultDatabasePath();
   const nativeBinding = electronNativeBinding(ROOT, process.versions.electron ?? '');
-  // The default folder is made with its parents on first start; a folder named in BEAMWARDEN_DB must exist.
-  const open = () => openRecordStore({ ...(process.env['BEAMWARDEN_DB'] ? { path: databasePath } : {}), ...(nativeBinding ? { nativeBinding } : {}) });
-  const store = await open();
+  // --db, else BEAMWARDEN_DB, else the saved institution register setting, else the default file
+  // (made with its parents on first start; a folder named in --db or BEAMWARDEN_DB must exist).
+  // A saved register that cannot be reached stops the start with the reason: never a silent
+  // fallback to the local file.
+  const settingsDir = defaultDataDir();
+  let store: Awaited<ReturnType<typeof openRecordStore>>;
+  let open: () => ReturnType<typeof openRecordStore>;
+  let source: ReturnType<typeof chooseRegister>['source'];
+  try {
+    const choice = chooseRegister({ db: dbOption(process.argv), env: process.env['BEAMWARDEN_DB'], settingsDir });
+    source = choice.source;
+    const location = choice.location;
+    open = () => openRecordStore({ ...(location !== undefined ? { path: location } : {}), ...(nativeBinding ? { nativeBinding } : {}) });
+    store = await open();
+  } catch (e) {
+    dialog.showErrorBox('Beamwarden cannot open the records', e instanceof Error ? e.message : String(e));
+    app.exit(1);
+    return;
+  }
   const ctx: ApiContext = {
     shell: 'electron',
     version: packageVersion(),
     databasePath: store.info.path,
     store,
     openStore: open,
+    registerSource: source,
+    settingsDir,
     ...(nativeBinding ? { nativeBinding } : {}),
   };
   registerIpc(handlerTable, ctx, () => win);

@@ -7,8 +7,8 @@ import { handlerTable } from '../../electron/api/table.js';
 import type { ApiContext } from '../../electron/api/context.js';
 import type { RecordStore } from '../../electron/backend/records/index.js';
 
-export function installStoreBridge(store: RecordStore): void {
-  const ctx: ApiContext = { shell: 'electron', version: '0.0.0-test', databasePath: store.info.path, store };
+export function installStoreBridge(store: RecordStore, extra: Pick<ApiContext, 'settingsDir' | 'registerSource'> = {}): void {
+  const ctx: ApiContext = { shell: 'electron', version: '0.0.0-test', databasePath: store.info.path, store, ...extra };
   window.beamwarden = {
     invoke: (name, args) => dispatch(handlerTable, ctx, name, args) as never,
     saveFile: async () => ({ saved: false }),

@@ -15,3 +15,5 @@ export { parseExportDocument } from './exchange.js';
 export { LATEST_VERSION as SCHEMA_VERSION } from './migrations/index.js';
 export { CALCULATED_WITH } from './core-link.js';
 export { describeAddress, isServerAddress } from './address.js';
+export { addressProblem, chooseRegister, clearRegisterSetting, readRegisterSetting, REGISTER_SETTING_FILE, saveRegisterSetting, testRegisterAddress } from './register-setting.js';
+export type { RegisterChoice, RegisterSource } from './register-setting.js';
