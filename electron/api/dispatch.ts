@@ -81,7 +81,7 @@ export async function dispatch<C>(table: HandlerTable<C>, ctx: C, name: string, 
   const parsed = op.input.safeParse(payload);
   if (!parsed.success) {
     const issues = issuesOf(parsed.error);
-    return { ok: false, error: { code: 'invalid_input', message: `${name}: ${describeIssues(issues)}`, issues } };
+    return { ok: false, error: { code: 'invalid_input', message: describeIssues(issues), issues } };
   }
   try {
     const value = await op.run(parsed.data, ctx);

@@ -49,3 +49,18 @@ describe('dispatch maps thrown errors by class', () => {
     expect(JSON.stringify(body)).not.toMatch(/\/home|\/tmp|\/srv|ENOENT|TypeError|undefined/);
   });
 });
+
+describe('a refused input is told in officer words, without the operation name', () => {
+  // Owner rules: never an internal key on screen; the operation name is the handler table's key.
+  it('the message names the field and the problem only', async () => {
+    const table = { 'register-connection-save': { input: z.strictObject({ address: z.string().min(1, 'must not be empty') }), run: () => 'saved' } } as unknown as HandlerTable<null>;
+    const r = await dispatch(table, null, 'register-connection-save', { address: '' });
+    expect(r.ok).toBe(false);
+    if (!r.ok) {
+      expect(r.error.code).toBe('invalid_input');
+      expect(r.error.message).not.toContain('register-connection-save');
+      expect(r.error.message).toMatch(/must not be empty/);
+      expect(r.error.issues?.[0]?.path).toBe('address');
+    }
+  });
+});
