@@ -27,10 +27,10 @@ const FACTOR_NAME: Readonly<Record<string, string>> = {
   T1_vis: 'Break-point time T_1 (visible)',
 };
 
-/** "Row H-E-VIS-2 · eye, retinal thermal" or "Correction factor C_C". */
+/** "Eye, retinal thermal · table row H-E-VIS-2" or "Correction factor C_C": what the limit is for first, the row as the derivations cite it last. */
 export function entryTitle(e: CheckableEntry): string {
   if (e.kind === 'factor') return FACTOR_NAME[e.name] ?? `Factor ${e.name}`;
-  return `Row ${e.name} · ${e.tissue === 'skin' ? 'skin' : 'eye'}, ${e.effect ?? ''}`;
+  return `${e.tissue === 'skin' ? 'Skin' : 'Eye'}, ${e.effect ?? ''} · table row ${e.name}`;
 }
 
 /** The unit as the officer reads it: "J/m²", "W/m²", "s", "mrad" or nothing. */

@@ -45,7 +45,7 @@ describe('Limit table checks screen', () => {
     expect(screen.getByTestId('check-counts').textContent).toBe('79 not yet checked · 0 checked');
     await until(() => entryOf('H-E-VIS-2').querySelector('table.samples') !== null, 10000);
     const li = entryOf('H-E-VIS-2');
-    expect(li.textContent).toContain('Row H-E-VIS-2 · eye, retinal thermal');
+    expect(li.textContent).toContain('Eye, retinal thermal · table row H-E-VIS-2');
     expect(li.textContent).toContain('400 nm – 700 nm · 10 ps – 1 ns');
     expect(li.textContent).toContain('H = 2×10⁻³·CE J/m²');
     const first = within(li).getAllByRole('row')[1];
