@@ -11,6 +11,9 @@ import AboutPanel from '../../renderer/components/AboutPanel.svelte';
 import { openTemp, tempDir } from '../backend/records/helpers.js';
 import { installStoreBridge } from './store-bridge.js';
 import { until } from './waiting.js';
+import { ENGINES } from '../backend/records/engines.js';
+import { invoke } from '../../renderer/lib/api.js';
+import { session } from '../../renderer/lib/session.svelte.js';
 
 let t: ReturnType<typeof tempDir>;
 let store: RecordStore;
@@ -44,5 +47,30 @@ describe('Settings & about: the last backup, when and where', () => {
     expect(text).toMatch(/Last backup:\s*today \(\d{4}-\d{2}-\d{2} \d{2}:\d{2} UTC\)/);
     expect(text).toContain(report.path);
     view.unmount();
+  });
+});
+
+describe.skipIf(ENGINES[1]?.skip ?? true)(`Settings & about on an institution register (${ENGINES[1]?.label ?? ''})`, () => {
+  it('names the register on the server and its backups there, with no file, folder or backup date of this desk', async () => {
+    const t2 = tempDir();
+    const server = await openTemp(t2.dir, 'about-server.sqlite', ENGINES[1]);
+    try {
+      installStoreBridge(server);
+      session.info = await invoke('app-info', {});
+      const view = render(AboutPanel);
+      await view.component.open();
+      await until(() => screen.queryByTestId('server-backups') !== null);
+      expect(screen.getByTestId('data-location').textContent).toMatch(/^postgresql:\/\//);
+      expect(screen.getByTestId('data-location').textContent).not.toMatch(/:[^@/]*@/); // no password shown
+      expect(screen.getByTestId('server-backups').textContent).toMatch(/server's own backups/);
+      expect(screen.queryByTestId('last-backup')).toBeNull();
+      expect(screen.queryByRole('button', { name: /Open the folder|Copy the path/ })).toBeNull();
+      view.unmount();
+    } finally {
+      session.info = null;
+      installStoreBridge(store);
+      await server.close();
+      t2.cleanup();
+    }
   });
 });
