@@ -103,6 +103,18 @@ function get(code: string): Rendered {
   return r;
 }
 
+describe('no section heading ends a page', () => {
+  // Common practice in document layout: a heading alone at the foot of a page reads as a missing section.
+  it.each(ROOMS)('room %s: the Plots heading shares its page with the first pair of plots', (code) => {
+    const pages = get(code).text.report;
+    const mark = 'Plots Left: the eye exposure limit against exposure duration';
+    const page = pages.find((p) => p.includes(mark));
+    expect(page, 'a page with the Plots heading').toBeDefined();
+    const first = get(code).doc.results.beams[0]?.label ?? '';
+    expect((page ?? '').slice((page ?? '').indexOf(mark))).toContain(`1. ${first}`);
+  });
+});
+
 describe('the three documents of every demo room render', () => {
   it.each(ROOMS)('room %s: report, notice and eyewear sheet are PDFs; notice and sheet fit one page', (code) => {
     const r = get(code);

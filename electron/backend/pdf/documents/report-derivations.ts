@@ -43,6 +43,10 @@ export function plotsSection(doc: DocumentInput, view: RoomView, units: UnitHabi
       ],
     });
   });
+  // The heading and its note travel with the first pair of plots: a heading alone at the foot of a
+  // page reads as a missing section (the plots are unbreakable blocks, so pdfmake's heading test
+  // sees the note follow and would not move the heading).
+  if (out.length > 2) return [{ stack: out.slice(0, 3), unbreakable: true }, ...out.slice(3)];
   return out;
 }
 
