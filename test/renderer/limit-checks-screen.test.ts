@@ -7,7 +7,7 @@
  * Values shown (rounded down, 3 significant figures): at 400 nm and 10 ps the row as written gives
  * 2e-3 J/m² (tables, from memory: self-consistency), the stricter EU value 2.7e4*(1e-11)^0.75 =
  * 1.518e-4 J/m² -> "151 µJ/m²" (Directive 2006/25/EC Annex II Table 2.2, read;
- * /work/shared/reference/exposure-limits.md, errata, gives 1.518e-4 J/m² at 1e-11 s).
+ * the exposure-limit specification (exposure-limits.md), errata, gives 1.518e-4 J/m² at 1e-11 s).
  */
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { fireEvent, render, screen, within } from '@testing-library/svelte';

@@ -4,7 +4,7 @@
  * what goes with it before anything is touched; confirming deletes a draft-only room or site with
  * its lasers, drafts and eyewear; a room with a signed assessment and a person who signed are
  * refused in the officer's words, without a delete button, and nothing changes. Invented demo
- * rooms (assets/demo, /work/shared/demo-scenario.md).
+ * rooms (assets/demo, the project's demo scenario).
  */
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { cleanup, fireEvent, render, screen, within } from '@testing-library/svelte';

@@ -5,7 +5,7 @@
  * keys are admitted; a crafted file with a forged or moved co-signature is refused in an officer's
  * sentence with nothing written; one signed with a key not trusted here is imported and reported as
  * unverified; a file of format version 1 (before co-signatures) still imports. Invented people and
- * the invented demo room A0.07 (/work/shared/demo-scenario.md).
+ * the invented demo room A0.07 (the project's demo scenario).
  */
 import { generateKeyPairSync, sign } from 'node:crypto';
 import { join } from 'node:path';

@@ -8,7 +8,7 @@
  * (400-700 nm, 10 ps - 1 ns) reads H = 2e-3*C_E J/m² as written in the tables (from memory:
  * self-consistency, not a published check value); its stricter alternative is the EU value
  * 2.7e4*t^0.75*C_E J/m² (Directive 2006/25/EC Annex II Table 2.2, read in the official text,
- * /work/shared/reference/exposure-limits.md section 5.2a, row EU-E-VIS-2): 2.7e4*(1e-10)^0.75 = 8.538e-4 J/m².
+ * the exposure-limit specification (exposure-limits.md) section 5.2a, row EU-E-VIS-2): 2.7e4*(1e-10)^0.75 = 8.538e-4 J/m².
  */
 import { afterEach, describe, expect, it } from 'vitest';
 import { dispatch } from '../../../electron/api/dispatch.js';

@@ -4,7 +4,7 @@
  * real SQLite file: what has only drafts goes cleanly with its lasers, draft assessments and
  * eyewear; anything a signed record refers to is refused in the officer's words and nothing
  * changes (signed records are kept: the record-keeping policy of this tool, SAFETY.md "What a
- * signature proves"). Invented demo rooms A0.07 and B2.14 (/work/shared/demo-scenario.md).
+ * signature proves"). Invented demo rooms A0.07 and B2.14 (the project's demo scenario).
  */
 import Database from 'better-sqlite3';
 import { join } from 'node:path';
