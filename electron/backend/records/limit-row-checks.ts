@@ -84,25 +84,12 @@ export interface RowCheckRow {
   signature: string;
 }
 
-/** One signed check as the register shows it, with this installation's verdict on it. */
-export interface RowCheckRecord {
-  readonly id: Id;
+/** One signed check as the register shows it (the signed statement's fields), with this installation's verdict on it. */
+export interface RowCheckRecord extends Omit<RowCheckStatement, 'format' | 'version' | 'ruleSet'> {
   readonly ruleSet: RuleSetId;
-  readonly entryKey: string;
   /** "row H-E-VIS-2", "factor CC (1200-1400 nm)". */
   readonly entryWords: string;
-  readonly entryExpr: string;
-  readonly verdict: 'matches' | 'differs';
-  readonly documentExpr: string | null;
-  readonly reference: string;
-  readonly note: string;
-  readonly personId: Id;
-  readonly name: string;
-  readonly role: string;
-  readonly signedAt: string;
-  readonly keyId: string;
   readonly keyFingerprint: string;
-  readonly trustAnchor: string;
   readonly signature: string;
   readonly signatureValid: boolean;
   readonly keyTrusted: boolean;
