@@ -127,7 +127,9 @@ describe('zod schema and core accept exactly the same inputs', () => {
   });
 
   it('accepts a fair share of the generated cases (the test is not only of refusals)', () => {
-    const sample = fc.sample(beam, 2000).map(clean);
+    // A fixed seed: about 2.5 % of the random cases are valid beams (most carry at least one value
+    // outside its bound), so an unseeded sample of 2000 fell under the bar about one run in twelve.
+    const sample = fc.sample(beam, { numRuns: 2000, seed: 20261202 }).map(clean);
     const accepted = sample.filter((x) => BeamInputSchema.safeParse(x).success).length;
     expect(accepted).toBeGreaterThan(40);
   });
