@@ -131,7 +131,8 @@ function isRuleSet(x: string): x is RuleSetId {
 export async function checkRow(ctx: StoreContext, x: RowCheckRow): Promise<RowCheckRecord> {
   const ruleSet: RuleSetId = isRuleSet(x.rule_set) ? x.rule_set : 'icnirp2013';
   const words = entryWords(x.entry_key);
-  const c = await checkPersonSignature(ctx, statementOf(x), x.signature, x.key_id);
+  const statement = statementOf(x);
+  const c = await checkPersonSignature(ctx, statement, x.signature, x.key_id);
   const owner = c.ownerPersonId === null || c.ownerPersonId === x.person_id;
   const entry = isRuleSet(x.rule_set) ? entryOf(ruleSet, x.entry_key) : undefined;
   const who = `${x.name} on ${x.signed_at.slice(0, 10)}, key ${shortKeyFingerprint(x.key_id)}`;
@@ -145,23 +146,15 @@ export async function checkRow(ctx: StoreContext, x: RowCheckRow): Promise<RowCh
     ok = true;
     finding = `The check of ${words} by ${who} (${x.verdict === 'matches' ? 'matches the published text' : `the published text differs: ${x.document_expr ?? ''}`}) is valid; key trusted: ${c.trustChain.join(' ')}`;
   }
+  // The record is the signed statement's fields (one reading of the row) plus this installation's verdict.
+  const { format: _format, version: _version, ...fields } = statement;
+  void _format;
+  void _version;
   return {
-    id: x.id,
+    ...fields,
     ruleSet,
-    entryKey: x.entry_key,
     entryWords: words,
-    entryExpr: x.entry_expr,
-    verdict: x.verdict === 'differs' ? 'differs' : 'matches',
-    documentExpr: x.document_expr,
-    reference: x.reference,
-    note: x.note,
-    personId: x.person_id,
-    name: x.name,
-    role: x.role,
-    signedAt: x.signed_at,
-    keyId: x.key_id,
     keyFingerprint: shortKeyFingerprint(x.key_id),
-    trustAnchor: x.trust_anchor,
     signature: x.signature,
     signatureValid: c.valid && owner,
     keyTrusted: c.trusted,
