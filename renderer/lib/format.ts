@@ -46,6 +46,14 @@ export function dateTime(ts: string | null | undefined): string {
   return `${d.toISOString().slice(0, 10)} ${d.toISOString().slice(11, 16)} UTC`;
 }
 
+/** A moment in the machine's local time to the minute, "2026-11-28 09:14", as lists of files show it. */
+export function localMinute(iso: string): string {
+  const d = new Date(iso);
+  if (Number.isNaN(d.getTime())) return iso;
+  const pad = (n: number) => String(n).padStart(2, '0');
+  return `${d.getFullYear()}-${pad(d.getMonth() + 1)}-${pad(d.getDate())} ${pad(d.getHours())}:${pad(d.getMinutes())}`;
+}
+
 export function shortFingerprint(fp: string): string {
   return fp.length > 16 ? `${fp.slice(0, 8)} ${fp.slice(8, 16)}…` : fp;
 }

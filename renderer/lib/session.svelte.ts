@@ -12,6 +12,9 @@ import { addDays, today } from './dates.js';
 
 export { addDays, today };
 import { laserInputFrom } from './beam-form.js';
+import { confirmChoice } from './confirm-choice.js';
+import { dateTime } from './format.js';
+import { unsavedChanges, unsavedIntro } from './unsaved-changes.js';
 import type { LaserInput } from '../../core/index.js';
 
 const LAST_KEY = 'beamwarden.last.v1';
@@ -130,7 +133,7 @@ class Session {
 
   /** Open a room in the workspace: its newest assessment, or a new draft from the register. */
   async openRoom(roomId: string, assessmentId?: string): Promise<void> {
-    if (!this.confirmDiscard()) return;
+    if (!(await this.confirmDiscard())) return;
     await this.run(async () => {
       const [room, installations, list] = await Promise.all([
         invoke('room-get', { id: roomId }),
@@ -155,7 +158,7 @@ class Session {
   /** Start a fresh assessment for the open room (a second one, e.g. for one installation). */
   async newAssessment(): Promise<void> {
     const room = this.room;
-    if (!room || !this.confirmDiscard()) return;
+    if (!room || !(await this.confirmDiscard())) return;
     await this.run(async () => {
       const content = await invoke('assessment-new-content', { roomId: room.id });
       this.assessment = null;
@@ -164,9 +167,36 @@ class Session {
     });
   }
 
-  /** Leaving a draft with unsaved changes asks first (nothing is lost silently). */
-  private confirmDiscard(): boolean {
-    return !this.dirty || window.confirm('The open assessment has unsaved changes. Discard them?');
+  /** Leaving a draft with unsaved changes asks first, naming what would be lost (nothing is lost silently). */
+  private async confirmDiscard(): Promise<boolean> {
+    if (!this.dirty) return true;
+    const lost = this.unsavedChanges();
+    return confirmChoice({
+      title: 'Discard the unsaved changes?',
+      body: `The open assessment “${this.draft?.title.trim() || 'Laser hazard assessment'}” of room ${this.room?.code ?? ''} has changes that are not saved.`,
+      consequencesIntro: unsavedIntro(lost.length),
+      consequences: lost,
+      kept: `${this.storedVersionWords()} To keep your changes, choose Keep editing and save first.`,
+      confirmLabel: 'Discard changes',
+      cancelLabel: 'Keep editing',
+      danger: true,
+    });
+  }
+
+  /** The unsaved changes of the open draft, one line each in the workspace's words (empty when none). */
+  unsavedChanges(): string[] {
+    const d = this.draft;
+    if (!d || !this.dirty) return [];
+    const saved = this.savedJson === '' ? null : (JSON.parse(this.savedJson) as AssessmentContent);
+    return unsavedChanges(saved, contentFrom(d), d.lasers);
+  }
+
+  /** What stays when the draft is discarded: the stored revision, or the room and its register. */
+  storedVersionWords(): string {
+    const cur = this.assessment?.current;
+    if (!cur) return 'The room and the lasers in its register stay as they are.';
+    const status = cur.status === 'signed' ? 'signed' : 'draft';
+    return `The stored revision ${cur.revisionNo} (${status}, saved ${dateTime(cur.updatedAt)}) and the register stay as they are.`;
   }
 
   private setAssessment(a: Assessment): void {
@@ -283,7 +313,17 @@ class Session {
 
   /** After a refused save: open the stored version, discarding the edits on screen (asked first). */
   async reloadDiscardingMine(): Promise<void> {
-    if (!window.confirm('Discard your unsaved changes and open the stored version?')) return;
+    const lost = this.unsavedChanges();
+    const ok = await confirmChoice({
+      title: 'Discard your changes and open the stored version?',
+      body: 'Someone else saved this assessment after you opened it. Opening their stored version replaces what is on your screen.',
+      consequencesIntro: unsavedIntro(lost.length),
+      consequences: lost,
+      kept: 'Their stored version and the register stay as they are. To keep your changes as well, choose Cancel and then “Keep my version as a copy, open the stored one”.',
+      confirmLabel: 'Discard my changes and open the stored version',
+      danger: true,
+    });
+    if (!ok) return;
     this.stale = null;
     const a = this.assessment;
     if (!a) return;
