@@ -20,6 +20,9 @@ const CORE_BANNED = {
   ],
 };
 
+const NATIVE_BOXES = ['confirm', 'alert', 'prompt'];
+const NATIVE_BOX_MESSAGE = "Use the app's dialog (renderer/lib/confirm-choice.ts: confirmChoice, askText, tellWhy), never the browser's confirm/alert/prompt.";
+
 export default tseslint.config(
   {
     ignores: ['**/node_modules/**', '**/dist/**', '**/out/**', '**/.vite/**', 'test/artifacts/**', '**/*.d.ts'],
@@ -82,6 +85,13 @@ export default tseslint.config(
     files: ['renderer/**/*.ts', 'renderer/**/*.js', 'renderer/**/*.svelte'],
     rules: {
       'no-restricted-imports': ['error', { patterns: [{ regex: '(^|/)electron/backend(/|$)', message: 'renderer/ must not import the back end: use the shared types in electron/api/contracts.' }] }],
+      // The browser's own boxes show the program's internal title, cannot say what is lost, and are
+      // blocked by some browsers for the loopback host: ask with confirmChoice/askText/tellWhy.
+      'no-restricted-globals': ['error', ...NATIVE_BOXES.map((name) => ({ name, message: NATIVE_BOX_MESSAGE }))],
+      'no-restricted-properties': [
+        'error',
+        ...['window', 'globalThis', 'self', 'top', 'parent'].flatMap((object) => NATIVE_BOXES.map((property) => ({ object, property, message: NATIVE_BOX_MESSAGE }))),
+      ],
     },
   },
   ...svelte.configs['flat/recommended'].map((c) => ({ ...c, files: c.files ?? ['**/*.svelte', '**/*.svelte.ts', '**/*.svelte.js'] })),
