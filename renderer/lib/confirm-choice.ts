@@ -40,31 +40,49 @@ interface Answer {
 }
 
 let queue: Promise<unknown> = Promise.resolve();
+/** Raised by cancelOpenChoices: requests made before it are answered Cancel without being shown. */
+let generation = 0;
+/** The dialog on screen: answering it Cancel from outside. */
+let shownCancel: (() => void) | null = null;
 
 function ask(request: ChoiceRequest): Promise<Answer> {
+  const asked = generation;
   const turn = queue.then(
     () =>
       new Promise<Answer>((resolve) => {
+        if (asked !== generation) {
+          resolve({ ok: false, text: '' });
+          return;
+        }
         const returnTo = document.activeElement instanceof HTMLElement ? document.activeElement : null;
         const target = document.createElement('div');
         target.className = 'choice-host';
         document.body.append(target);
-        const shown = mount(ChoiceDialog, {
-          target,
-          props: {
-            request,
-            onanswer: (ok: boolean, text: string) => {
-              void unmount(shown);
-              target.remove();
-              if (returnTo?.isConnected) returnTo.focus();
-              resolve({ ok, text });
-            },
-          },
-        });
+        let done = false;
+        const finish = (ok: boolean, text: string): void => {
+          if (done) return;
+          done = true;
+          shownCancel = null;
+          void unmount(shown);
+          target.remove();
+          if (returnTo?.isConnected) returnTo.focus();
+          resolve({ ok, text });
+        };
+        const shown = mount(ChoiceDialog, { target, props: { request, onanswer: finish } });
+        shownCancel = () => finish(false, '');
       }),
   );
   queue = turn;
   return turn;
+}
+
+/**
+ * Answers Cancel to the dialog on screen and to every request still waiting (the safe choice), e.g.
+ * when the records are replaced underneath or a component test ends.
+ */
+export function cancelOpenChoices(): void {
+  generation++;
+  shownCancel?.();
 }
 
 /** Asks before a choice that loses or replaces work; true when the officer chose the named action. */

@@ -13,6 +13,7 @@ import RoomDetail from '../../renderer/components/register/RoomDetail.svelte';
 import SiteDetail from '../../renderer/components/register/SiteDetail.svelte';
 import PeoplePanel from '../../renderer/components/register/PeoplePanel.svelte';
 import { session } from '../../renderer/lib/session.svelte.js';
+import { cancelOpenChoices } from '../../renderer/lib/confirm-choice.js';
 import { makeSigner, openTemp, registerRoom, STATEMENT, tempDir } from '../backend/records/helpers.js';
 import { installStoreBridge } from './store-bridge.js';
 import { until } from './waiting.js';
@@ -26,6 +27,8 @@ beforeEach(async () => {
 });
 afterEach(async () => {
   cleanup();
+  // the app's dialog lives on document.body, outside the rendered component: close any left open
+  cancelOpenChoices();
   delete window.beamwarden;
   await store.close();
   t.cleanup();
