@@ -42,8 +42,8 @@ class Safekeeping {
     const unsaved = session.unsavedChanges();
     const title = session.draft?.title.trim() || 'Laser hazard assessment';
     const ok = await confirmChoice({
-      title: `Replace the records with the backup made ${made}?`,
-      body: `Backup file: ${backup.name} (${(backup.bytes / 1e6).toFixed(1)} MB).`,
+      title: 'Replace the records with an earlier backup?',
+      body: `The backup was made ${made}: ${backup.name} (${(backup.bytes / 1e6).toFixed(1)} MB).`,
       consequencesIntro: 'The open records then no longer show:',
       consequences: [
         `Everything entered, saved, signed or checked after ${made}: sites, rooms, lasers, eyewear, assessments and signatures`,

@@ -13,6 +13,8 @@ import { wcagViolations } from './axe.js';
 let session: DemoSession | undefined;
 let page: Page;
 const pageErrors: string[] = [];
+/** The browser's own boxes (confirm, alert, prompt): the app asks in its own dialog, so none may appear. */
+const nativeBoxes: string[] = [];
 
 function isoDaysFromToday(days: number): string {
   const d = new Date();
@@ -25,7 +27,10 @@ beforeAll(async () => {
     viewport: { width: 1280, height: 800 },
     beforeLoad: (p) => {
       p.on('pageerror', (e) => pageErrors.push(e.message));
-      p.on('dialog', (d) => void d.accept());
+      p.on('dialog', (d) => {
+        nativeBoxes.push(`${d.type()}: ${d.message()}`);
+        void d.dismiss();
+      });
     },
   });
   page = session.page;
@@ -114,5 +119,6 @@ describe("an officer's daily work on the Register", () => {
       .toMatch(/At the Raman sample stage, eye, [a-z, ]+: Diode-pumped solid-state laser · DPSS 532 nm \+ Diode laser module · Diode module 405 nm — sum of fractions [\d. ]+/);
     expect(await wcagViolations(page)).toEqual([]);
     expect(pageErrors).toEqual([]);
+    expect(nativeBoxes).toEqual([]);
   });
 });
