@@ -6,7 +6,8 @@
 import { app, BrowserWindow, dialog, Menu, session as electronSession, shell } from 'electron';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
-import { chooseRegister, defaultDataDir, openRecordStore } from '../backend/records/index.js';
+import { defaultDataDir } from '../backend/records/index.js';
+import { openAtStart } from './open-at-start.js';
 import { handlerTable } from '../api/table.js';
 import type { ApiContext } from '../api/context.js';
 import { buildMenu } from './menu.js';
@@ -28,16 +29,6 @@ registerSchemePrivileges();
 if (!app.requestSingleInstanceLock()) app.quit();
 
 let win: BrowserWindow | null = null;
-
-/** `--db <location>` or `--db=<location>` on the desktop app's command line, when given. */
-function dbOption(argv: readonly string[]): string | undefined {
-  for (let i = 0; i < argv.length; i++) {
-    const a = argv[i] ?? '';
-    if (a === '--db') return argv[i + 1];
-    if (a.startsWith('--db=')) return a.slice('--db='.length);
-  }
-  return undefined;
-}
 
 function harden(): void {
   // No permission (camera, notifications, geolocation ...) is ever granted to the renderer.
@@ -86,20 +77,13 @@ void app.whenReady().then(async () => {
   // A saved register that cannot be reached stops the start with the reason: never a silent
   // fallback to the local file.
   const settingsDir = defaultDataDir();
-  let store: Awaited<ReturnType<typeof openRecordStore>>;
-  let open: () => ReturnType<typeof openRecordStore>;
-  let source: ReturnType<typeof chooseRegister>['source'];
-  try {
-    const choice = chooseRegister({ db: dbOption(process.argv), env: process.env['BEAMWARDEN_DB'], settingsDir });
-    source = choice.source;
-    const location = choice.location;
-    open = () => openRecordStore({ ...(location !== undefined ? { path: location } : {}), ...(nativeBinding ? { nativeBinding } : {}) });
-    store = await open();
-  } catch (e) {
-    dialog.showErrorBox('Beamwarden cannot open the records', e instanceof Error ? e.message : String(e));
+  const started = await openAtStart({ argv: process.argv, env: process.env['BEAMWARDEN_DB'], settingsDir, ...(nativeBinding ? { nativeBinding } : {}) });
+  if (!started.ok) {
+    dialog.showErrorBox(started.title, started.message);
     app.exit(1);
     return;
   }
+  const { store, open, source } = started;
   const ctx: ApiContext = {
     shell: 'electron',
     version: packageVersion(),

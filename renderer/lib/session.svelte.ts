@@ -50,6 +50,9 @@ class Session {
   readonly dirty = $derived(this.draft !== null && (this.contentJson !== this.savedJson || this.draft.lasers.some((l) => l.isNew)));
   readonly blockers = $derived(this.draft ? saveBlockers(this.draft) : []);
 
+  /** An institution register on a server: its backups are the server's, never this desk's. */
+  readonly onServer = $derived(/^postgres(?:ql)?:\/\//i.test(this.info?.databasePath ?? ''));
+
   get firstStart(): boolean {
     return this.overview !== null && this.overview.sites.length === 0;
   }
@@ -108,7 +111,13 @@ class Session {
           if (changed && (this.dirty || this.busy)) {
             const who = [...new Set(heard.changes.map((c) => c.by))].join(', ');
             this.say('info', `This assessment was changed in the institution register (by ${who}). Your unsaved edits stay on screen; saving will show you what changed.`);
-          } else if (changed) this.setAssessment(now);
+          } else if (changed) {
+            // The other officer's save may have changed the room's register lasers too: take them
+            // with the assessment, or this desk's next save would name the lasers as they were
+            // before and be refused as if someone had changed them after it.
+            this.installations = await invoke('installations-list', { roomId: now.roomId });
+            this.setAssessment(now);
+          }
         }
       } catch {
         // A failed refresh is tried again with the next change.

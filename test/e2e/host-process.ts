@@ -23,9 +23,17 @@ export interface HostHandle {
   stop(): Promise<void>;
 }
 
-export async function startHost(opts: { demo?: boolean; dir?: string } = {}): Promise<HostHandle> {
+export interface HostOptions {
+  readonly demo?: boolean;
+  /** The desk's user-data folder (trust list, signing log, settings); a new temporary one if left out. */
+  readonly dir?: string;
+  /** A database address given with --db (a postgres:// address for an institution register); the folder's records.sqlite if left out. */
+  readonly db?: string;
+}
+
+export async function startHost(opts: HostOptions = {}): Promise<HostHandle> {
   const dir = opts.dir ?? mkdtempSync(path.join(os.tmpdir(), 'beamwarden-e2e-'));
-  const db = path.join(dir, 'records.sqlite');
+  const db = opts.db ?? path.join(dir, 'records.sqlite');
   const args = [path.join(REPO, 'node_modules', 'tsx', 'dist', 'cli.mjs'), path.join(REPO, 'electron', 'host', 'serve.ts'), '--db', db, '--port', '0'];
   if (opts.demo) args.push('--demo');
   const child = spawn(process.execPath, args, { cwd: REPO, stdio: ['ignore', 'pipe', 'pipe'], env: { ...process.env, BEAMWARDEN_DATA_DIR: dir } });

@@ -37,7 +37,20 @@ const MIGRATION_LOCK = "SELECT pg_advisory_xact_lock(hashtext(current_schema() |
 async function appliedHistory(client: pg.PoolClient, where: string): Promise<number> {
   const schema = await client.query<{ s: string | null }>('SELECT current_schema() AS s');
   if ((schema.rows[0]?.s ?? null) === null) {
-    throw new RecordError('server', `The institution register at ${where} has no schema to work in: the schema named in the address (search_path) does not exist, or your account may not use it.`);
+    // pg_namespace is readable by every account: a register that is there but not usable is a
+    // matter of rights (the account is in neither group role of the README's set-up).
+    const there = await client.query<{ who: string; present: boolean }>(
+      "SELECT session_user AS who, EXISTS (SELECT 1 FROM pg_namespace WHERE nspname = ANY (current_schemas(false)::text[] || string_to_array(replace(current_setting('search_path'), ' ', ''), ','))) AS present",
+    );
+    const row = there.rows[0];
+    if (row?.present) {
+      throw new RecordError(
+        'not-permitted',
+        `The institution register at ${where} is there, but your account ${row.who} has no rights on it: it is in neither group role of the register (beamwarden_officer to write, beamwarden_reader to read). ` +
+          'Ask the register\'s administrator to add your account to one of them (README: "Institution register"). Beamwarden did not open a local file instead.',
+      );
+    }
+    throw new RecordError('server', `The institution register at ${where} has no schema to work in: the schema named in the address (search_path) does not exist. Check the address, or ask the register's administrator. Beamwarden did not open a local file instead.`);
   }
   // One statement, one snapshot: another desk may be committing the first migration meanwhile.
   const tables = await client.query<{ history: number; n: number }>(

@@ -183,7 +183,7 @@ describe.skipIf(PG_ADDRESS === '')(PG_ADDRESS ? 'testing the connection on the r
     }
   });
 
-  it('an account without rights on the register: says it may not use it', async () => {
+  it('an account without rights on the register: says it holds neither group role', async () => {
     const s = await openTemp(t.dir, 'rights.sqlite', { name: 'postgresql', label: 'PostgreSQL server', skip: false });
     await s.close();
     const owner = decodeURIComponent(new URL(PG_ADDRESS).username);
@@ -196,7 +196,7 @@ describe.skipIf(PG_ADDRESS === '')(PG_ADDRESS ? 'testing the connection on the r
       const u = new URL(await pgAddress(schemaFor(t.dir, 'rights.sqlite')));
       u.username = role;
       const msg = errorOf(await test(withoutPassword(u.toString())));
-      expect(msg).toMatch(/has no schema to work in: the schema named in the address \(search_path\) does not exist, or your account may not use it/);
+      expect(msg).toMatch(/is there, but your account \S+_norights has no rights on it: it is in neither group role of the register/);
     } finally {
       await admin.query(`DROP ROLE IF EXISTS ${role}`);
       await admin.end();
