@@ -4,16 +4,16 @@
  * over-limit width) stop 1 mm beyond such a surface instead of running into the next room at an inside
  * corner of the outline or through the wall the beam ends on.
  *
- * - Along the beam: a point of the strip is kept when the line at right angles from the beam to it
- *   meets no screen. The strip is cut across at every screen end that lies inside it; in each slice
- *   a screen that enters it runs from edge to edge, so keeping the beam's side of its line (plus the
- *   pad) is exact (derived).
- * - At each end of the leg (the 50 mm before the start and after the end): what the end of the beam,
- *   1 mm back from it, sees in a straight line (core/plan/visibility.ts), as for a diffuse spot.
+ * - Along the beam: the strip is what the lines of the band reach, each parallel to the beam, starting
+ *   beside the leg's start and stopped (plus the pad) by the first screen it meets. A line passing
+ *   the end of a curtain or a corner runs on, so the strip is never cut by a surface the beam, placed
+ *   anywhere within it, may miss (derived; ours: the safe side).
+ * - The 50 mm past the end of the leg are swept the same way; the 50 mm before its start are what the
+ *   start, 1 mm in from it, sees in a straight line (core/plan/visibility.ts), as for a diffuse spot.
  * Screens the leg passes through are openings (a door or window in that wall) and cut nothing.
  */
 import { Dec } from '../numeric/decimal.js';
-import { add, corridor, cross, dot, normal, rayHitsSegment, scale, sub, unit, type P } from './geometry.js';
+import { add, corridor, dot, normal, rayHitsSegment, scale, sub, unit, type P } from './geometry.js';
 import { visibleRegion, type ScreenSeg } from './visibility.js';
 
 /** A point in the strip's own frame: t along the beam from its start, s to the left of it. */
@@ -36,6 +36,8 @@ export function passedScreens(from: P, to: P, screens: readonly ScreenSeg[]): Se
 }
 
 export interface StripPiece {
+  /** Start of the leg: where the lines of the band start (beside it). */
+  readonly origin: P;
   /** Start and end of the beam piece the strip follows. */
   readonly from: P;
   readonly to: P;
@@ -58,13 +60,14 @@ export function cutStrip(piece: StripPiece, screens: readonly ScreenSeg[], pad: 
   const len = dot(sub(to, from), u);
   const endLen = pad.mul(2);
   const t0 = piece.capStart ? endLen : new Dec(0);
-  const t1 = piece.capEnd ? len.sub(endLen) : len;
+  // The margin past the leg's end is swept like the rest: each line of the band runs on to the first screen it meets.
+  const t1 = piece.capEnd ? len.add(ext) : len;
   if (t1.lte(t0)) return [corridor(from, to, w, piece.capStart ? ext : new Dec(0), piece.capEnd ? ext : new Dec(0))];
   const at = (t: Dec) => add(from, scale(u, t));
   const out: P[][] = [];
   if (piece.capStart) out.push(endPiece(corridor(from, at(endLen), w, ext, new Dec(0)), at(pad), screens, pad));
-  out.push(...besideScreens(from, u, t0, t1, w, screens, pad));
-  if (piece.capEnd) out.push(endPiece(corridor(at(t1), to, w, new Dec(0), ext), at(len.sub(pad)), screens, pad));
+  const off = dot(sub(from, piece.origin), u);
+  out.push(...besideScreens(piece.origin, u, off.add(t0), off.add(t1), w, screens, pad));
   return out.filter((q) => q.length >= 3);
 }
 
@@ -72,102 +75,117 @@ function endPiece(rect: P[], seenFrom: P, screens: readonly ScreenSeg[], pad: De
   return visibleRegion(seenFrom, rect, screens, pad);
 }
 
-/** The slices of the strip t ∈ [t0, t1], |s| ≤ w, each kept on the beam's side of the screens that cross it. */
+/**
+ * The slices of the strip t ∈ [t0, t1], |s| ≤ w (t from `o`, the leg's start, along `u`; s to its
+ * left): what the lines of the band reach. Each line s starts beside the leg's start (where the line
+ * at right angles from the start to it meets no screen) and runs along `u` until the first screen it
+ * meets, `pad` beyond it. Between the offsets where a screen ends or two screens cross, one screen is
+ * the first met, so the reached region is bounded by straight pieces (derived).
+ */
 function besideScreens(o: P, u: P, t0: Dec, t1: Dec, w: Dec, screens: readonly ScreenSeg[], pad: Dec): P[][] {
   const n = normal(u);
   const local = (q: P): Local => ({ t: dot(sub(q, o), u), s: dot(sub(q, o), n) });
   const plan = (q: Local): P => add(o, add(scale(u, q.t), scale(n, q.s)));
-  const wNeg = w.neg();
-  const segs = screens
-    .map((sc) => [local(sc.a), local(sc.b)] as const)
-    .filter(([a, b]) => chord(a, b, t0, t1, wNeg, w) !== null);
-  // Cut across at every screen end inside the strip, so that in each slice every screen runs edge to edge.
-  const cuts = [t0, t1];
-  for (const [a, b] of segs) for (const q of [a, b]) if (q.t.gt(t0) && q.t.lt(t1) && q.s.gt(wNeg) && q.s.lt(w)) cuts.push(q.t);
-  cuts.sort((x, y) => x.cmp(y));
-  const out: P[][] = [];
+  const eps = new Dec('1e-9');
+  // Lines the start reaches: up to the nearest screen crossing the start's own cross line, each side.
+  let sLo = w.neg();
+  let sHi = w;
+  const lines: Array<{ s0: Dec; s1: Dec; at: (s: Dec) => Dec }> = [];
+  for (const sc of screens) {
+    const a = local(sc.a);
+    const b = local(sc.b);
+    if (!a.t.sub(b.t).isZero() && a.t.mul(b.t).lte(0)) {
+      const s0 = a.s.add(b.s.sub(a.s).mul(a.t.neg().div(b.t.sub(a.t))));
+      if (s0.gt(eps) && s0.lt(sHi)) sHi = s0;
+      if (s0.lt(eps.neg()) && s0.gt(sLo)) sLo = s0;
+    }
+    if (a.s.eq(b.s)) continue; // along the lines: meets none of them
+    const [p, q] = a.s.lt(b.s) ? [a, b] : [b, a];
+    const k = q.t.sub(p.t).div(q.s.sub(p.s));
+    lines.push({ s0: p.s, s1: q.s, at: (s: Dec) => p.t.add(k.mul(s.sub(p.s))) });
+  }
+  sHi = Dec.min(w, sHi.add(pad));
+  sLo = Dec.max(w.neg(), sLo.sub(pad));
+  if (sHi.lte(sLo)) return [];
+  // Offsets where the first screen met can change: ends, crossings of two screens, and where a screen passes the start.
+  const marks: Dec[] = [sLo, sHi];
+  const within = (s: Dec) => s.gt(sLo) && s.lt(sHi);
+  for (const l of lines) {
+    for (const s of [l.s0, l.s1]) if (within(s)) marks.push(s);
+    const d = l.at(l.s1).sub(l.at(l.s0));
+    if (!d.isZero()) {
+      const s = l.s0.sub(l.at(l.s0).mul(l.s1.sub(l.s0)).div(d)); // where it is at t = 0
+      if (within(s)) marks.push(s);
+    }
+  }
+  for (let i = 0; i < lines.length; i++) {
+    for (let j = i + 1; j < lines.length; j++) {
+      const A = lines[i] as (typeof lines)[number];
+      const B = lines[j] as (typeof lines)[number];
+      const lo = Dec.max(A.s0, B.s0);
+      const hi = Dec.min(A.s1, B.s1);
+      if (lo.gte(hi)) continue;
+      const dLo = A.at(lo).sub(B.at(lo));
+      const dHi = A.at(hi).sub(B.at(hi));
+      if (dLo.mul(dHi).lt(0)) {
+        const s = lo.add(hi.sub(lo).mul(dLo.div(dLo.sub(dHi))));
+        if (within(s)) marks.push(s);
+      }
+    }
+  }
+  marks.sort((x, y) => x.cmp(y));
+  const cuts = marks.filter((m, k) => k === 0 || !m.eq(marks[k - 1] as Dec));
+  // The far edge of the reached region in each interval, clipped to the slice [t0, t1].
+  type Pt = Local;
+  const runs: Pt[][] = [];
+  let run: Pt[] = [];
+  const close = () => {
+    if (run.length >= 2) runs.push(run);
+    run = [];
+  };
+  const clip = (t: Dec) => Dec.min(t1, Dec.max(t0, t));
   for (let i = 0; i + 1 < cuts.length; i++) {
-    const a = cuts[i] as Dec;
-    const b = cuts[i + 1] as Dec;
-    if (b.sub(a).lte(0)) continue;
-    let poly: Local[] = [
-      { t: a, s: wNeg },
-      { t: b, s: wNeg },
-      { t: b, s: w },
-      { t: a, s: w },
-    ];
-    const axis: Local = { t: a.add(b).div(2), s: new Dec(0) };
-    for (const [p, q] of segs) {
-      const c = chord(p, q, a, b, wNeg, w);
-      if (!c || !strictlyInside(mid(c[0], c[1]), a, b, wNeg, w)) continue; // touching an edge cuts nothing
-      poly = keepSide(poly, p, q, axis, pad);
-      if (poly.length < 3) break;
+    const sa = cuts[i] as Dec;
+    const sb = cuts[i + 1] as Dec;
+    const mid = sa.add(sb).div(2);
+    let first: ((s: Dec) => Dec) | null = null;
+    let best: Dec | null = null;
+    for (const l of lines) {
+      if (mid.lt(l.s0) || mid.gt(l.s1)) continue;
+      const t = l.at(mid);
+      if (t.lte(eps)) continue; // behind the start
+      if (best === null || t.lt(best)) {
+        best = t;
+        first = l.at;
+      }
     }
-    if (poly.length >= 3) out.push(poly.map(plan));
-  }
-  return out;
-}
-
-const mid = (p: Local, q: Local): Local => ({ t: p.t.add(q.t).div(2), s: p.s.add(q.s).div(2) });
-
-function strictlyInside(q: Local, t0: Dec, t1: Dec, s0: Dec, s1: Dec): boolean {
-  return q.t.gt(t0) && q.t.lt(t1) && q.s.gt(s0) && q.s.lt(s1);
-}
-
-/** Liang–Barsky: the part of segment p–q inside the box [t0, t1] × [s0, s1] (edges included), or null. */
-function chord(p: Local, q: Local, t0: Dec, t1: Dec, s0: Dec, s1: Dec): [Local, Local] | null {
-  let lo = new Dec(0);
-  let hi = new Dec(1);
-  const dt = q.t.sub(p.t);
-  const ds = q.s.sub(p.s);
-  for (const [num, den] of [
-    [p.t.sub(t0), dt],
-    [t1.sub(p.t), dt.neg()],
-    [p.s.sub(s0), ds],
-    [s1.sub(p.s), ds.neg()],
-  ] as const) {
-    // Inside this side where num + den·k ≥ 0.
-    if (den.isZero()) {
-      if (num.lt(0)) return null;
-      continue;
+    const far = (s: Dec) => (first ? first(s).add(pad) : t1);
+    // Split where the far edge crosses t0 or t1, so each piece is straight after clipping.
+    const pts = [sa, sb];
+    const fa = far(sa);
+    const fb = far(sb);
+    for (const edge of [t0, t1]) {
+      const da = fa.sub(edge);
+      const db = fb.sub(edge);
+      if (da.mul(db).lt(0)) pts.splice(pts.length - 1, 0, sa.add(sb.sub(sa).mul(da.div(da.sub(db)))));
     }
-    const k = num.neg().div(den);
-    if (den.gt(0)) lo = Dec.max(lo, k);
-    else hi = Dec.min(hi, k);
-    if (lo.gt(hi)) return null;
+    pts.sort((x, y) => x.cmp(y));
+    for (let k = 0; k + 1 < pts.length; k++) {
+      const s0 = pts[k] as Dec;
+      const s1 = pts[k + 1] as Dec;
+      const m = far(s0.add(s1).div(2));
+      if (m.lte(t0)) {
+        close();
+        continue;
+      }
+      run.push({ t: clip(far(s0)), s: s0 }, { t: clip(far(s1)), s: s1 });
+    }
   }
-  const at = (k: Dec): Local => ({ t: p.t.add(dt.mul(k)), s: p.s.add(ds.mul(k)) });
-  return [at(lo), at(hi)];
+  close();
+  return runs.map((r) => {
+    const first = r[0] as Pt;
+    const last = r[r.length - 1] as Pt;
+    return [{ t: t0, s: first.s }, ...r, { t: t0, s: last.s }].map(plan);
+  });
 }
 
-/** The part of the convex polygon on `ref`'s side of the line p–q, widened `pad` beyond the line. */
-function keepSide(poly: readonly Local[], p: Local, q: Local, ref: Local, pad: Dec): Local[] {
-  const d = { t: q.t.sub(p.t), s: q.s.sub(p.s) };
-  const len = d.t.mul(d.t).add(d.s.mul(d.s)).sqrt();
-  if (len.isZero()) return [...poly];
-  const side = (x: Local) => crossL(d, { t: x.t.sub(p.t), s: x.s.sub(p.s) }).div(len); // signed distance to the line
-  const refSide = side(ref);
-  if (refSide.isZero()) return [...poly]; // the beam runs along the screen: nothing is cut (the safe side)
-  const sign = refSide.gt(0) ? 1 : -1;
-  const f = (x: Local) => side(x).mul(-sign).sub(pad); // ≤ 0: kept
-  const out: Local[] = [];
-  let prev = poly[poly.length - 1];
-  for (const e of poly) {
-    const a = prev;
-    if (!a) break;
-    const fs = f(a);
-    const fe = f(e);
-    const cut = () => {
-      const k = fs.div(fs.sub(fe));
-      out.push({ t: a.t.add(e.t.sub(a.t).mul(k)), s: a.s.add(e.s.sub(a.s).mul(k)) });
-    };
-    if (fe.lte(0)) {
-      if (fs.gt(0)) cut();
-      out.push(e);
-    } else if (fs.lte(0)) cut();
-    prev = e;
-  }
-  return out;
-}
-
-const crossL = (a: Local, b: Local): Dec => cross({ x: a.t, y: a.s }, { x: b.t, y: b.s });

@@ -9,7 +9,7 @@ import type { BeamResult } from '../model/results.js';
 import { asRectangle, boxesApart, boxOf, insideBox, insideOutline, segmentTouchesPolygon, withinOfPolygon, type P } from './geometry.js';
 import type { PlanBeamRun, PlanFinding, PlanResult, RoomPlan } from './plan-model.js';
 import { tracePath, toP, type Leg } from './trace-path.js';
-import { CIRCLE_CORNERS, PATH_MARGIN_M, diffuseRadius, directLength, directZones, diffuseZones, insideEnclosure, roundPoint, type BeamOnPlan, type ZoneWithShape } from './plan-zones.js';
+import { CIRCLE_CORNERS, PATH_MARGIN_M, bandOf, diffuseRadius, directLength, directZones, diffuseZones, insideEnclosure, roundPoint, type BeamOnPlan, type ZoneWithShape } from './plan-zones.js';
 
 /** Eye level of standing and seated people, about 1.2 m to 1.8 m above the floor (domain.md 4.3, [STAN-OLD]). */
 export const EYE_LEVEL_M: readonly [number, number] = [1.2, 1.8];
@@ -30,7 +30,8 @@ function beamName(z: ZoneWithShape): string {
 
 export const PLAN_METHOD: readonly string[] = [
   `Direct-beam zones follow the drawn beam path up to the NOHD (rounded up, or the upper bound from the input tolerances where larger), stopped by beam dumps, targets, walls and barriers; doors and windows are taken as open.`,
-  `Their width is where the exposure of a Gaussian beam exceeds the limit (derived from the beam diameter, divergence and NOHD), plus ${PATH_MARGIN_M.mul(1000).toString()} mm on each side for the accuracy of the drawing; a wall, curtain or barrier beside the beam or at its end cuts them 1 mm beyond its surface (the beam cannot reach behind it).`,
+  `Their width is where the exposure of a Gaussian beam exceeds the limit (derived from the beam diameter, divergence and NOHD), plus ${PATH_MARGIN_M.mul(1000).toString()} mm on each side for the accuracy of the drawing. Every line of that band runs parallel to the drawn beam until the first wall, curtain or barrier it meets, and the zone ends 1 mm beyond that surface.`,
+  'A wall, curtain or barrier stops the beam only where it spans the whole band: where the beam meets one within the band of its end, a corner of the room or the edge of a door or window, part of the beam may pass, and the path and zone go on past it (the finding says so).',
   `Diffuse-reflection zones are drawn around a circle of the diffuse NHZ (rounded up) about every mirror and target the beam reaches, every point where it ends on a wall or barrier, and every reflection point marked on the plan (a ${CIRCLE_CORNERS}-sided polygon outside the circle).`,
   'Walls, curtains and barriers are taken as opaque to scattered light: a diffuse-reflection zone covers only what its reflection point can see in a straight line, cut at the room outline (of any shape), interior walls, curtains, barriers and the enclosure the point lies in, 1 mm beyond the surface along the line of sight; a spot on a wall or barrier is seen from the side the beam comes from; a door or window the zone reaches is reported.',
   'Every zone is widened by 1 mm before its corners are rounded to the millimetre, so no zone is drawn smaller than computed. Heights are not modelled except for the eye-level check of a stated beam height.',
@@ -58,7 +59,7 @@ export function evaluatePlan(plan: RoomPlan, input: RoomInput, beams: readonly B
     }
     const mine = onPlan.filter((b) => b.laserId === laser.id);
     const far = mine.reduce((m, b) => Dec.max(m, directLength(b.result)), new Dec(1)).add(1);
-    const legs = tracePath(plan, path, far);
+    const legs = tracePath(plan, path, far, bandOf(mine));
     const short = pathMeetsWall(plan, path, legs, laser.name);
     if (short) findings.push(short);
     for (const b of mine) {
@@ -92,16 +93,24 @@ export function evaluatePlan(plan: RoomPlan, input: RoomInput, beams: readonly B
 /** A wall this far or more before the point the leg was drawn to is a drawing to check (ours: 1 cm, the drawing's resolution). */
 const DRAWN_TO_TOLERANCE_M = new Dec('0.01');
 
-/** The wall or barrier that stops a leg, in officer words. */
-function stopWords(plan: RoomPlan, leg: Leg): string {
-  if (leg.endsWith === 'wall') {
-    const w = plan.walls.find((x) => x.id === leg.endId);
+/** A wall or barrier in officer words. */
+function surfaceWords(plan: RoomPlan, kind: 'wall' | 'barrier', id: string): string {
+  if (kind === 'wall') {
+    const w = plan.walls.find((x) => x.id === id);
     return w ? `interior wall ${w.label}` : 'the room wall';
   }
-  if (leg.endsWith === 'barrier') {
-    const b = plan.barriers.find((x) => x.id === leg.endId);
-    return b ? `${b.kind} ${b.label}` : 'a barrier';
-  }
+  const b = plan.barriers.find((x) => x.id === id);
+  return b ? `${b.kind} ${b.label}` : 'a barrier';
+}
+
+/** A band half-width for a sentence: millimetres, 3 significant figures, rounded up. */
+function millimetres(d: Dec): string {
+  return `${d.mul(1000).toSignificantDigits(3, Dec.ROUND_UP).toString()} mm`;
+}
+
+/** The wall or barrier that stops a leg, in officer words. */
+function stopWords(plan: RoomPlan, leg: Leg): string {
+  if (leg.endsWith === 'wall' || leg.endsWith === 'barrier') return surfaceWords(plan, leg.endsWith, leg.endId);
   return leg.endsWith === 'dump' ? 'the beam dump' : leg.endsWith === 'target' ? 'the target' : leg.endId;
 }
 
@@ -156,6 +165,34 @@ function beamFindings(plan: RoomPlan, b: BeamOnPlan, legs: readonly Leg[], dz: r
         zoneIds: ids,
         text: `The direct beam of ${label} passes ${name} ${metres(o.at)} along its path, still above the limit (hazard distance ${metres(H)}${H.gt(b.result.nohd_m_reported) ? ', the upper bound from the input tolerances' : ''}).`,
         suggestion: `End the beam of ${label} in a beam dump before it reaches ${name}.`,
+      });
+    }
+    // Met near an end, a corner or a door's edge: part of the beam may pass, and the path goes on.
+    for (const g of leg.grazed) {
+      if (g.at.gt(H)) continue;
+      const band = millimetres(g.band);
+      if (g.through) {
+        const item = g.through.kind === 'door' ? plan.doors.find((d) => d.id === g.through?.id) : plan.windows.find((w) => w.id === g.through?.id);
+        const name = `${g.through.kind} ${item?.label ?? g.through.id}`;
+        out.push({
+          kind: 'leaves-room',
+          severity: 'hazard',
+          subjectId: g.through.id,
+          zoneIds: ids,
+          text: `The direct beam of ${label} meets ${surfaceWords(plan, g.kind, g.id)} ${metres(g.at)} along its path within ${band} of ${name}, still above the limit (hazard distance ${metres(H)}${H.gt(b.result.nohd_m_reported) ? ', the upper bound from the input tolerances' : ''}): part of the beam may pass through ${name}.`,
+          suggestion: `End the beam of ${label} in a beam dump before it reaches ${name}.`,
+        });
+        continue;
+      }
+      const where = g.corner ? 'a corner' : 'its end';
+      const what = surfaceWords(plan, g.kind, g.id);
+      out.push({
+        kind: 'passes-surface-end',
+        severity: 'hazard',
+        subjectId: g.id,
+        zoneIds: ids,
+        text: `The direct beam of ${label} meets ${what} ${metres(g.at)} along its path within ${band} of ${where}: part of the beam may pass ${g.corner ? 'the corner' : 'the end'}, so it is taken to go on past it.`,
+        suggestion: g.kind === 'barrier' ? `Extend ${what} well past the beam of ${label}, or end the beam in a beam dump before it.` : `End the beam of ${label} in a beam dump before it reaches ${what}, clear of ${where}.`,
       });
     }
     // Stopped by a barrier or curtain within the NOHD: the rating must hold.

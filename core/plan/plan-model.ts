@@ -144,6 +144,7 @@ export type PlanFindingKind =
   | 'leaves-enclosure'
   | 'leaves-room'
   | 'stopped-by-barrier'
+  | 'passes-surface-end'
   | 'beam-at-eye-level'
   | 'outside-controlled-area'
   | 'no-controlled-area'

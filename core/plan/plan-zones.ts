@@ -14,11 +14,11 @@ import { Dec } from '../numeric/decimal.js';
 import { distanceReported } from '../beam/format.js';
 import type { BeamInput } from '../model/inputs.js';
 import type { BeamResult } from '../model/results.js';
-import { DecGeo, add, box, boxOf, boxesApart, circleOutside, edges, insideBox, pointInPolygon, rayHitsSegment, scale, sub, unit, type Box, type P } from './geometry.js';
+import { DecGeo, add, box, boxOf, boxesApart, circleOutside, distanceSqToSegment, edges, insideBox, pointInPolygon, rayHitsSegment, scale, sub, unit, type Box, type P } from './geometry.js';
 import { screensOf, visibleRegion, type ScreenSeg } from './visibility.js';
 import { cutStrip, passedScreens, type StripPiece } from './beam-strip.js';
 import type { PlanPointResult, PlanZone, RoomPlan } from './plan-model.js';
-import { toP, type Leg } from './trace-path.js';
+import { toP, type BandWidth, type Leg } from './trace-path.js';
 
 /** Placement margin on each side of a drawn beam path, m (ours: a drawn plan is good to a few centimetres). */
 export const PATH_MARGIN_M = new Dec('0.05');
@@ -89,6 +89,15 @@ function computeHalfWidth(d0: Dec, phi: Dec, nohd: Dec, z1: Dec, z2: Dec): Dec {
   if (D2.lte(Dstar)) return r(D2);
   if (D1.gte(Dstar)) return r(D1);
   return DL.div(SQRT_E.mul(2));
+}
+
+/**
+ * Half-width of the band a laser's beams are traced as (core/plan/trace-path.ts) between two path
+ * distances: the widest of its beams' zones there (over-limit half-width, drawing margin and pad).
+ */
+export function bandOf(beams: readonly BeamOnPlan[]): BandWidth {
+  const shapes = beams.map((b) => ({ ...oneOverE(b.input), H: directLength(b.result) }));
+  return (z1, z2) => shapes.reduce((m, b) => Dec.max(m, halfWidth(b.d0, b.phi, b.H, z1, z2)), new Dec(0)).add(PATH_MARGIN_M).add(ROUNDING_PAD_M);
 }
 
 export interface BeamOnPlan {
@@ -166,7 +175,11 @@ export function directZones(plan: RoomPlan, beam: BeamOnPlan, legs: readonly Leg
     const u = unit(leg.from, leg.to);
     const end = add(leg.from, scale(u, pieceLen));
     const passed = passedScreens(leg.from, leg.to, roomScreens(plan));
-    const screens = roomScreens(plan).filter((sc) => !passed.has(sc));
+    // A surface the drawn line passes near its end (or a corner) still stops the lines of the band that meet it;
+    // one it passes at a door or window in it is an opening (the screens do not hold the openings).
+    const grazedAt = leg.grazed.filter((g) => g.through === null).map((g) => g.point);
+    const keep = (sc: ScreenSeg) => grazedAt.some((q) => distanceSqToSegment(q, sc.a, sc.b).lte(GRAZE_ON_SCREEN_M2));
+    const screens = roomScreens(plan).filter((sc) => !passed.has(sc) || keep(sc));
     if (points.length === 0) points.push(leg.from);
     points.push(end);
     const cuts = [new Dec(0), ...enclosureCuts(plan, leg.from, end, pieceLen), ...taperCuts(leg.start, pieceLen), pieceLen]
@@ -180,7 +193,7 @@ export function directZones(plan: RoomPlan, beam: BeamOnPlan, legs: readonly Leg
       // Pieces meet edge to edge inside a leg; only the leg's own ends get the placement margin.
       // Walls, curtains and barriers beside the beam or at its end cut the strip (core/plan/beam-strip.ts).
       const ext = PATH_MARGIN_M.add(ROUNDING_PAD_M);
-      const piece = { from: add(leg.from, scale(u, t1)), to: add(leg.from, scale(u, t2)), w, ext, capStart: i === 0, capEnd: i + 2 === cuts.length };
+      const piece = { origin: leg.from, from: add(leg.from, scale(u, t1)), to: add(leg.from, scale(u, t2)), w, ext, capStart: i === 0, capEnd: i + 2 === cuts.length };
       for (const shape of stripShapes(piece, screens)) {
         n += 1;
         zones.push(
@@ -203,16 +216,19 @@ export function directZones(plan: RoomPlan, beam: BeamOnPlan, legs: readonly Leg
   return { zones, run: { points, length: Dec.min(H, last ? last.end : new Dec(0)) } };
 }
 
+/** A grazed point within 2 mm of a screen lies on it (its free end is taken 1 mm in); squared, m². */
+const GRAZE_ON_SCREEN_M2 = new Dec('4e-6');
+
 /**
  * The cut strip of one beam piece, kept by its inputs (the piece and every screen): a live edit that
  * moves a door or a desk leaves it as it was, and the end pieces' sight-line sweep is slow.
  */
 function stripShapes(piece: StripPiece, allScreens: readonly ScreenSeg[]): P[][] {
   // Only screens that can reach the strip matter (its box widened by its half-width and end margin).
-  const b = boxOf([piece.from, piece.to]);
+  const b = boxOf([piece.origin, piece.from, piece.to]);
   const screens = allScreens.filter((sc) => !boxesApart(sc.box, b, piece.w.add(piece.ext).toNumber()));
   const q = (p: P) => `${p.x.toString()},${p.y.toString()}`;
-  const key = `${q(piece.from)}|${q(piece.to)}|${piece.w.toString()}|${piece.ext.toString()}|${piece.capStart}|${piece.capEnd}|${screensKey(screens)}`;
+  const key = `${q(piece.origin)}|${q(piece.from)}|${q(piece.to)}|${piece.w.toString()}|${piece.ext.toString()}|${piece.capStart}|${piece.capEnd}|${screensKey(screens)}`;
   const hit = strips.get(key);
   if (hit) return hit;
   const shapes = cutStrip(piece, screens, ROUNDING_PAD_M);
@@ -234,9 +250,17 @@ export function reflectionPointsOf(plan: RoomPlan, laserId: string, legs: readon
   const out: Array<{ key: string; at: P; seenFrom: P; what: string }> = [];
   legs.forEach((leg, i) => {
     if (leg.endsWith === 'mirror' || leg.endsWith === 'target') out.push({ key: `p${i + 1}`, at: leg.to, seenFrom: leg.to, what: leg.endId });
+    const u = () => unit(leg.from, leg.to);
+    // Part of the beam meets a surface it may pass near its end: that spot scatters too.
+    leg.grazed.forEach((g, k) => {
+      const front = sub(g.point, scale(u(), Dec.min(SURFACE_STANDOFF_M, g.at.sub(leg.start).div(2))));
+      out.push({ key: `p${i + 1}g${k + 1}`, at: g.point, seenFrom: front, what: `where the beam meets ${g.kind === 'wall' ? 'the wall' : 'the barrier'} near its end` });
+    });
     if (leg.endsWith === 'wall' || leg.endsWith === 'barrier') {
-      const front = sub(leg.to, scale(unit(leg.from, leg.to), Dec.min(SURFACE_STANDOFF_M, leg.end.sub(leg.start).div(2))));
-      out.push({ key: `p${i + 1}`, at: leg.to, seenFrom: front, what: `where the beam meets ${leg.endsWith === 'wall' ? 'the wall' : 'the barrier'}` });
+      // Where the last passing part of the band is stopped, when that is off the drawn line.
+      const spot = leg.endSpot ?? leg.to;
+      const front = sub(spot, scale(u(), Dec.min(SURFACE_STANDOFF_M, leg.end.sub(leg.start).div(2))));
+      out.push({ key: `p${i + 1}`, at: spot, seenFrom: front, what: `where the beam meets ${leg.endsWith === 'wall' ? 'the wall' : 'the barrier'}` });
     }
   });
   for (const r of plan.reflectionPoints) if (r.laserId === laserId) out.push({ key: r.id, at: toP(r.at), seenFrom: toP(r.at), what: r.label });

@@ -55,6 +55,18 @@ describe('room plan at a glance (derived geometry)', () => {
     ]);
   });
 
+  it('a curtain ending 30 mm past the beam does not stop it: the beam is said to go on past it, through door D1 (derived: curtain x = 6 m from y = 1.47 m; the band there is over 54 mm, test/core/plan/plan-surface-ends.test.ts)', () => {
+    const plan: RoomPlan = {
+      ...base,
+      barriers: [{ id: 'C1', label: 'C1', kind: 'curtain', rating: 'maker rating 100 W/m² for 60 s', a: p(6, 1.47), b: p(6, 3) }],
+      paths: [{ laserId: 'L1', exit: p(1, 1.5), elements: [], onward_deg: 0 }, { laserId: 'L2', exit: p(1, 4), elements: [{ kind: 'dump', at: p(3, 4) }] }],
+    };
+    const said = lines(plan);
+    expect(said).toContain('hazard: Beam paths meeting a wall, curtain or barrier near its end or a corner, taken to go on past it: beam A.');
+    expect(said).toContain('hazard: Beam paths leaving the room above the limit: beam A (through door D1 corridor).');
+    expect(said.join(' ')).not.toMatch(/ending on a curtain/);
+  });
+
   it('a beam dump drawn beyond the east wall: the drawing is to be checked (derived: the beam along y = 3 m meets x = 8 m before the dump at x = 9 m)', () => {
     const plan: RoomPlan = { ...base, paths: [{ laserId: 'L1', exit: p(1, 3), elements: [{ kind: 'dump', at: p(9, 3) }] }, { laserId: 'L2', exit: p(1, 4), elements: [{ kind: 'dump', at: p(3, 4) }] }], controlledArea: { outline: base.outline, acceptedBy: 'I. Calloway-Senn' } };
     expect(lines(plan)).toContain('check: Beam paths drawn through a wall before their end (check the drawing; the wall is taken to stop the beam): Laser 1.');

@@ -101,6 +101,7 @@ export const PlanFindingSchema = z.strictObject({
     'leaves-enclosure',
     'leaves-room',
     'stopped-by-barrier',
+    'passes-surface-end',
     'beam-at-eye-level',
     'outside-controlled-area',
     'no-controlled-area',

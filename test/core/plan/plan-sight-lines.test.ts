@@ -143,7 +143,8 @@ describe('an L-shaped room: beams and zones stop at its own walls (derived geome
     // (y ≥ 2.97 + 0.051 = 3.021 m) would lie in the office (x > 3 m, y > 3 m) over x 3–8 m.
     const plan = zoneOf(under, { workPositions: [{ id: 'P1', label: 'office desk', at: p(5, 3.01) }, { id: 'P2', label: 'west wing bench', at: p(2.5, 3.01) }] });
     const corners = cornersOf(plan);
-    expect(corners.filter(([x, y]) => x > 3.0005 && y > 3.001)).toEqual([]);
+    // Lines of the band above y = 3 m stop 1 mm into the wall x = 3 m (corners rounded to the millimetre).
+    expect(corners.filter(([x, y]) => x > 3.0015 && y > 3.0015)).toEqual([]);
     expect(Math.max(...corners.map(([x]) => x))).toBeLessThanOrEqual(8.001);
     expect(Math.max(...corners.filter(([x]) => x < 3).map(([, y]) => y))).toBeGreaterThanOrEqual(3.021);
     // The officer reads: the bench in the west wing 40 mm from the beam is inside, the desk behind the wall is not,
@@ -151,17 +152,20 @@ describe('an L-shaped room: beams and zones stop at its own walls (derived geome
     expect(kinds(plan.findings)).toEqual(['work-position-in-zone:P2']);
   });
 
-  it('a beam ending on the inner wall 20 mm above the inner corner: its zone stops 1 mm into the wall and does not reach the office', () => {
-    // derived: the beam east along y = 3.02 m meets the wall x = 3 m (y 3–7 m) at (3, 3.02); without the
-    // cut its end would run 51 mm past it, over the corner into the office (x > 3 m, y > 3 m). Its end,
-    // seen from 1 mm before the wall, still sees past the corner (3, 3) into the south wing (a sliver
-    // under 3 mm wide: the line from (2.999, 3.02) past (3, 3) reaches y = 2.96 m at x = 3.002 m).
-    const plan = zoneOf([{ laserId: 'L1', exit: p(1, 3.02), elements: [], onward_deg: 0 }], { workPositions: [{ id: 'P1', label: 'office desk', at: p(3.03, 3.04) }] });
+  it('a beam meeting the inner wall 20 mm above the inner corner: the part under the corner goes on through the south wing to the east wall; the office is not reached', () => {
+    // derived: the beam east along y = 3.02 m meets the wall x = 3 m (y 3–7 m) at (3, 3.02), 20 mm above
+    // the corner (3, 3), inside its band (over 51 mm each side). The lines of the band above y = 3 m stop
+    // 1 mm into that wall; those below it run on through the south wing to the east wall x = 8 m, 7 m
+    // from the exit (inside the NOHD), and stop 1 mm into it. The office (x > 3 m, y > 3 m) is not reached.
+    const plan = zoneOf([{ laserId: 'L1', exit: p(1, 3.02), elements: [], onward_deg: 0 }], { workPositions: [{ id: 'P1', label: 'office desk', at: p(3.03, 3.04) }, { id: 'P2', label: 'south wing bench', at: p(6, 2.99) }] });
     expect(plan.runs[0]!.endsAt).toBe('wall');
     const corners = cornersOf(plan);
     expect(corners.filter(([x, y]) => x > 3.0015 && y > 3.0015)).toEqual([]);
-    expect(Math.max(...corners.map(([x]) => x))).toBeLessThanOrEqual(3.003);
-    expect(kinds(plan.findings)).toEqual([]);
+    expect(Math.max(...corners.map(([x]) => x))).toBeCloseTo(8.001, 6);
+    // P2, 30 mm under the drawn line, is in the direct-beam zone, and 2.0 m from where the part under the
+    // corner meets the east wall, inside the 2.53 m diffuse zone there.
+    expect(kinds(plan.findings)).toEqual(['passes-surface-end:outline', 'work-position-in-zone:P2', 'work-position-in-zone:P2']);
+    expect(plan.findings.filter((f) => f.subjectId === 'P2').map((f) => f.text)).toEqual(['Work position south wing bench is inside the direct-beam zone of beam C.', 'Work position south wing bench is inside the diffuse-reflection zone of beam C.']);
   });
 
   it('a small diffuse zone where a beam ends on the inner wall is cut 1 mm beyond the wall, so it stays inside the accepted boundary', () => {
