@@ -1,4 +1,4 @@
-/** Contract of the 'keys' area: personal signing keys and the installation's trust list. */
+/** Contract of the 'keys' area: personal signing keys, the trust list and this desk's trust anchor. */
 import type { Id, PersonKey, TrustListInfo } from '../../backend/records/types.js';
 
 export type KeyHandlers = {
@@ -15,4 +15,7 @@ export type KeyHandlers = {
   'person-key-retire': (args: { readonly personId: Id; readonly reason: string }) => Promise<PersonKey>;
   'person-key-endorse': (args: { readonly keyId: string; readonly endorserPersonId: Id; readonly endorserPassphrase: string }) => Promise<PersonKey | null>;
   'trust-list-info': (args: Record<string, never>) => Promise<TrustListInfo>;
+  /** This desk's trust anchor (outside the database), typed or pasted from paper: 64 hex digits. */
+  'trust-anchor-set': (args: { readonly fingerprint: string }) => Promise<TrustListInfo>;
+  'trust-anchor-clear': (args: Record<string, never>) => Promise<TrustListInfo>;
 };

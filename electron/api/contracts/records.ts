@@ -280,14 +280,25 @@ export interface PersonKey {
   readonly trustChain: readonly string[];
 }
 
-/** The trust list outside the database, as the app and printed documents show it. */
+/**
+ * The trust list as this desk believes it: the register's endorsements under the trust anchor
+ * configured on this desk (outside the database), as the app and printed documents show it.
+ */
 export interface TrustListInfo {
+  /** Where this desk keeps its anchor setting. */
   readonly path: string;
   readonly anchor: string | null;
   /** Short form of the anchor key id (what the officer wrote down at set-up). */
   readonly anchorFingerprint: string | null;
+  /** All 64 hex digits of the anchor in groups of four, to compare with the paper copy. */
+  readonly anchorFull: string | null;
+  /** When the anchor was configured on this desk. */
+  readonly anchorSetAt: Timestamp | null;
+  /** The anchors this register was set up with, all 64 hex digits in groups of four. */
+  readonly registerAnchors: readonly string[];
+  /** Keys trusted on this desk. */
   readonly keys: number;
-  /** Missing, unreadable or replaced list. */
+  /** No anchor on this desk, a damaged setting, or an anchor the register does not know. */
   readonly problems: readonly string[];
 }
 

@@ -22,7 +22,9 @@ import { assumedDefaults } from './older-content.js';
 import { getInstallation, getPerson, getRoom, roomInputFromRegister } from './register.js';
 import { fingerprintOf, keyIdOf, linkOf, sha256Hex, verifyStatement, type SignedStatement } from './signing.js';
 import { signAsPerson, type Signer } from './personal-keys.js';
-import { readTrustList, shortKeyFingerprint, trustOf } from './trust-list.js';
+import { shortKeyFingerprint, trustOf, type TrustList } from './trust-list.js';
+import { loadTrust } from './trust-store.js';
+import { trustProblems } from './personal-keys.js';
 import { appendSigningLog, signingLogFor } from './signing-log.js';
 import { checkCoSignatures } from './co-signature-checks.js';
 import {
@@ -89,7 +91,7 @@ export interface SignatureRow {
 
 const SIGNATURE_SELECT = `SELECT s.*, k.public_key FROM signature s LEFT JOIN signing_key k ON k.key_id = s.key_id WHERE s.revision_id = ?`;
 
-function signatureFromRow(ctx: StoreContext, r: SignatureRow): Signature {
+function signatureFromRow(r: SignatureRow, trust: TrustList | null): Signature {
   const v2 = r.statement_version === 2;
   return {
     revisionId: r.revision_id,
@@ -104,7 +106,7 @@ function signatureFromRow(ctx: StoreContext, r: SignatureRow): Signature {
     keyId: r.key_id,
     publicKey: r.public_key ?? '',
     ...(v2 ? { statementVersion: 2 as const, previousLink: r.previous_link, ...(r.trust_anchor ? { trustAnchor: r.trust_anchor } : {}) } : {}),
-    keyTrusted: trustOf(readTrustList(ctx.keyDir).list, r.key_id).trusted,
+    keyTrusted: trustOf(trust, r.key_id).trusted,
   };
 }
 
@@ -124,7 +126,7 @@ async function revisionHeaderFromRow(ctx: StoreContext, r: RevisionRow): Promise
     basedOn: r.based_on,
     createdAt: r.created_at,
     updatedAt: r.updated_at,
-    signature: sig ? signatureFromRow(ctx, sig) : null,
+    signature: sig ? signatureFromRow(sig, (await loadTrust(ctx)).list) : null,
   };
 }
 
@@ -359,7 +361,7 @@ interface SummaryRow {
   in_force_no: number | null;
   in_force_review_by: string | null;
 }
-const summaryFromRow = (ctx: StoreContext, r: SummaryRow): AssessmentSummary => ({
+const summaryFromRow = (trust: TrustList | null, r: SummaryRow): AssessmentSummary => ({
   id: r.id,
   roomId: r.room_id,
   installationId: r.installation_id,
@@ -368,26 +370,29 @@ const summaryFromRow = (ctx: StoreContext, r: SummaryRow): AssessmentSummary => 
   status: r.status,
   reviewBy: r.review_by,
   signedAt: r.signed_at,
-  signatureUnverified: r.signed_key !== null && !trustOf(readTrustList(ctx.keyDir).list, r.signed_key).trusted,
+  signatureUnverified: r.signed_key !== null && !trustOf(trust, r.signed_key).trusted,
   updatedAt: r.updated_at,
   inForce: r.in_force_no === null ? null : { revisionNo: r.in_force_no, signedAt: r.signed_at ?? '', reviewBy: r.in_force_review_by },
 });
 
 export async function listAssessments(ctx: StoreContext, roomId: Id): Promise<AssessmentSummary[]> {
   await getRoom(ctx, roomId);
-  return (await ctx.q.all(`${SUMMARY_SELECT} WHERE a.room_id = ? ORDER BY r.updated_at DESC, a.id`, roomId) as SummaryRow[]).map((row) => summaryFromRow(ctx, row));
+  const trust = (await loadTrust(ctx)).list;
+  return (await ctx.q.all(`${SUMMARY_SELECT} WHERE a.room_id = ? ORDER BY r.updated_at DESC, a.id`, roomId) as SummaryRow[]).map((row) => summaryFromRow(trust, row));
 }
 
 /** Every assessment of the database (oldest first), for a whole-database check. */
 export async function listAllAssessments(ctx: StoreContext): Promise<AssessmentSummary[]> {
-  return (await ctx.q.all(`${SUMMARY_SELECT} ORDER BY a.created_at, a.id`) as SummaryRow[]).map((row) => summaryFromRow(ctx, row));
+  const trust = (await loadTrust(ctx)).list;
+  return (await ctx.q.all(`${SUMMARY_SELECT} ORDER BY a.created_at, a.id`) as SummaryRow[]).map((row) => summaryFromRow(trust, row));
 }
 
 export async function listDueForReview(ctx: StoreContext, date: CalendarDate): Promise<AssessmentSummary[]> {
   if (!/^\d{4}-\d{2}-\d{2}$/.test(date)) throw new RecordError('invalid', `date: must be a calendar date YYYY-MM-DD (got "${date}")`);
+  const trust = (await loadTrust(ctx)).list;
   return (
     await ctx.q.all(`${SUMMARY_SELECT} WHERE r.review_by IS NOT NULL AND r.review_by <= ? ORDER BY r.review_by, a.id`, date) as SummaryRow[]
-  ).map((row) => summaryFromRow(ctx, row));
+  ).map((row) => summaryFromRow(trust, row));
 }
 
 export async function listRevisions(ctx: StoreContext, assessmentId: Id): Promise<RevisionSummary[]> {
@@ -847,12 +852,12 @@ export async function verifyAssessment(ctx: StoreContext, assessmentId: Id, revi
     differences = differences.slice(0, MAX_DIFFERENCES);
   }
 
-  // 3. Fingerprint, signature and the key's trust (the trust list outside the database).
+  // 3. Fingerprint, signature and the key's trust (the register's endorsements under this desk's anchor).
   let fingerprintMatches = false;
   let signatureValid = false;
   let keyTrusted = false;
   let trustChain: readonly string[] = [];
-  const trust = readTrustList(ctx.keyDir);
+  const trust = await loadTrust(ctx);
   if (!sig) {
     findings.push(
       r.status === 'draft'
@@ -898,9 +903,9 @@ export async function verifyAssessment(ctx: StoreContext, assessmentId: Id, revi
 
     keyTrusted = verdict.trusted && trust.problem === null;
     let trustText = keyTrusted
-      ? `Key ${shortKeyFingerprint(sig.key_id)} is on this installation's trust list: ${verdict.chain.join(' ')}`
+      ? `Key ${shortKeyFingerprint(sig.key_id)} is trusted on this desk: ${verdict.chain.join(' ')}`
       : `Key ${shortKeyFingerprint(sig.key_id)} is NOT trusted here — a key that only the database lists proves nothing. ${verdict.chain.join(' ')}`;
-    const listProblems = await trustProblems(ctx, trust.list?.anchor ?? null, trust.problem);
+    const listProblems = await trustProblems(ctx, trust);
     if (listProblems.length) {
       keyTrusted = false;
       trustText = `${trustText} ${listProblems.join(' ')}`;
@@ -968,16 +973,3 @@ export async function verifyAssessment(ctx: StoreContext, assessmentId: Id, revi
   };
 }
 
-/** A missing, unreadable or replaced trust list, in plain words. */
-async function trustProblems(ctx: StoreContext, anchor: string | null, problem: string | null): Promise<string[]> {
-  const out: string[] = [];
-  if (problem) out.push(problem);
-  const pins = (await ctx.q.all('SELECT anchor FROM trust_anchor_pin') as Array<{ anchor: string }>).map((p) => p.anchor);
-  if (anchor === null && problem === null && pins.length > 0) out.push('The trust list file beside the database is missing: restore it from a backup.');
-  if (anchor !== null && pins.length > 0 && !pins.includes(anchor)) {
-    out.push(
-      `The trust list beside the database has the anchor ${shortKeyFingerprint(anchor)}, but this database was set up with ${pins.map(shortKeyFingerprint).join(', ')}: the trust list file was replaced.`,
-    );
-  }
-  return out;
-}

@@ -6,7 +6,8 @@
  */
 import type { StoreContext } from './context.js';
 import { checkPersonSignature } from './personal-keys.js';
-import { readTrustList, shortKeyFingerprint, trustOf } from './trust-list.js';
+import { shortKeyFingerprint, trustOf } from './trust-list.js';
+import { loadTrust } from './trust-store.js';
 import type { AssessmentRow, RevisionRow } from './assessments.js';
 import type { Id } from './types.js';
 
@@ -90,7 +91,8 @@ export function payloadOf(row: CoSignatureRow, a: AssessmentRow, r: Pick<Revisio
 }
 
 export async function listCoSignatures(ctx: StoreContext, revisionId: Id): Promise<CoSignature[]> {
-  return (await ctx.q.all<CoSignatureRow>('SELECT * FROM co_signature WHERE revision_id = ? ORDER BY signed_at, person_id', revisionId)).map((x) => rowToCoSignature(x, trustOf(readTrustList(ctx.keyDir).list, x.key_id).trusted));
+  const trust = (await loadTrust(ctx)).list;
+  return (await ctx.q.all<CoSignatureRow>('SELECT * FROM co_signature WHERE revision_id = ? ORDER BY signed_at, person_id', revisionId)).map((x) => rowToCoSignature(x, trustOf(trust, x.key_id).trusted));
 }
 
 /** The main signature as verify computed it: its link and fingerprint (null when the revision has none). */

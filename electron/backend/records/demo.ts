@@ -16,7 +16,7 @@ import { parseOrThrow, transact, type StoreContext } from './context.js';
 import { generateKeyPairSync } from 'node:crypto';
 import { createAssessment, newAssessmentContent, signAssessment, signDraftWith } from './assessments.js';
 import { createPersonalKey, signerFromKey } from './personal-keys.js';
-import { readTrustList } from './trust-list.js';
+import { loadTrust, registerAnchors } from './trust-store.js';
 import { createEyewear, createInstallation, createPerson, createRoom, createSite, listSites } from './register.js';
 import type { AssessmentContent, ControlChoice, Site } from './types.js';
 import type { RoomPlan } from '../../../core/plan/plan-model.js';
@@ -54,8 +54,8 @@ export async function seedDemo(ctx: StoreContext, raw: unknown = demoScenario): 
   const sites = await listSites(ctx);
   const existing = sites.find((s) => s.name === scenario.site.name && s.building === scenario.site.building);
   if (existing) return existing;
-  // A database made for the demo: no trust list and nobody registered yet.
-  const fresh = readTrustList(ctx.keyDir).list === null && sites.length === 0 && (await ctx.q.get('SELECT 1 AS one FROM person LIMIT 1')) === undefined;
+  // A database made for the demo: no trust anchor (here or in the register) and nobody registered yet.
+  const fresh = (await loadTrust(ctx)).list === null && (await registerAnchors(ctx)).length === 0 && sites.length === 0 && (await ctx.q.get('SELECT 1 AS one FROM person LIMIT 1')) === undefined;
   let toSign: { assessmentId: string; personId: string } | null = null;
   const seeded = await transact(ctx, async (ctx) => {
     const site = await createSite(ctx, { name: scenario.site.name, building: scenario.site.building, notes: withEmergencyContact(`${scenario.site.kind}. ${scenario.about}`, scenario.site.emergencyContact ?? '') });

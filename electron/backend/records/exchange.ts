@@ -27,7 +27,8 @@ import { encodeResults, INSERT_SIGNATURE, insertRevisionRow, registerKey, statem
 import { inOrder, parseOrThrow } from './context.js';
 import { admitKeys, ImportAdmissionSchema, unlockPersonalKey } from './personal-keys.js';
 import { appendSigningLog, type SigningLogLine } from './signing-log.js';
-import { readTrustList, shortKeyFingerprint, trustOf, type TrustList } from './trust-list.js';
+import { shortKeyFingerprint, trustOf, type TrustList } from './trust-list.js';
+import { loadTrust } from './trust-store.js';
 import { getAssessment, getRevision, listRevisions } from './assessments.js';
 import {
   getInstallation,
@@ -450,7 +451,7 @@ export async function importDocument(ctx: StoreContext, input: unknown, rawAdmit
   const doc = parseExportDocument(input);
   const issues = await crossCheck(ctx, doc);
   if (issues.length) throw invalid(issues);
-  const list = readTrustList(ctx.keyDir).list;
+  const list = (await loadTrust(ctx)).list;
   await refuseForgedCoSignatures(ctx, doc, list);
   const signerOf = signerNames(doc);
   const untrusted = doc.signingKeys.filter((k) => signerOf.has(k.keyId) && !trustOf(list, k.keyId).trusted);
@@ -613,7 +614,7 @@ export async function importDocument(ctx: StoreContext, input: unknown, rawAdmit
   if (endorser !== null && admit !== null) {
     await admitKeys(ctx, untrusted.filter((k) => admit.keyIds.includes(k.keyId)).map((k) => ({ ...k, personId: null, personName: `${signerOf.get(k.keyId) ?? ''} (exporting site)` })), endorser);
   }
-  const after = readTrustList(ctx.keyDir).list;
+  const after = (await loadTrust(ctx)).list;
   // Only signatures this installation trusts enter its signing log; the others stay unverified.
   for (const line of logLines) {
     if (trustOf(after, line.keyId).trusted) appendSigningLog(ctx.keyDir, line);
@@ -646,9 +647,9 @@ function defaultsAssumedIn(doc: ExportDocument): string[] {
 }
 
 /** Which keys of a file this installation does not trust (for the confirmation before admitting them). */
-export function untrustedKeysOf(ctx: StoreContext, input: unknown): ImportSummary['untrustedKeys'] {
+export async function untrustedKeysOf(ctx: StoreContext, input: unknown): Promise<ImportSummary['untrustedKeys']> {
   const doc = parseExportDocument(input);
-  const list = readTrustList(ctx.keyDir).list;
+  const list = (await loadTrust(ctx)).list;
   const signerOf = signerNames(doc);
   return doc.signingKeys
     .filter((k) => signerOf.has(k.keyId) && !trustOf(list, k.keyId).trusted)

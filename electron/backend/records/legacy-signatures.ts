@@ -12,7 +12,8 @@ import { transact, type StoreContext } from './context.js';
 import { setUpTrustList } from './personal-keys.js';
 import { appendSigningLog } from './signing-log.js';
 import { linkOf, readInstallationKey, PRIVATE_KEY_FILE, verifyStatement } from './signing.js';
-import { INSTALLATION_KEY_HOLDER, readTrustList, shortKeyFingerprint } from './trust-list.js';
+import { INSTALLATION_KEY_HOLDER, shortKeyFingerprint } from './trust-list.js';
+import { loadTrust, registerAnchors } from './trust-store.js';
 
 
 /** Run at open (read-write only). Returns warnings for the officer; empty when there is nothing to do. */
@@ -22,8 +23,9 @@ export async function adoptInstallationKey(ctx: StoreContext): Promise<string[]>
        LEFT JOIN signing_key k ON k.key_id = s.key_id
        WHERE s.statement_version = 1 ORDER BY r.assessment_id, r.revision_no`) as Array<SignatureRow & Pick<RevisionRow, 'revision_no' | 'assessment_id'> & { room_id: string; installation_id: string | null; a_created: string }>;
   if (legacy.length === 0) return [];
-  const read = readTrustList(ctx.keyDir);
-  if (read.list !== null || read.problem !== null) return []; // already set up (or reported as a trust list problem)
+  const read = await loadTrust(ctx);
+  // Already set up (here or in the register), or reported as a trust problem.
+  if (read.list !== null || read.problem !== null || (await registerAnchors(ctx)).length > 0) return [];
   const key = readInstallationKey(ctx.keyDir);
   if (key === null) {
     return [

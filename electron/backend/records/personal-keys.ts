@@ -14,7 +14,9 @@ import { getPerson } from './register.js';
 import { keyIdOf, PRIVATE_KEY_FILE, readInstallationKey } from './signing.js';
 import { rmSync } from 'node:fs';
 import { join } from 'node:path';
-import { INSTALLATION_KEY_HOLDER, makeEndorsedEntry, readTrustList, shortKeyFingerprint, trustOf, writeTrustList, type TrustList } from './trust-list.js';
+import { fullKeyFingerprint, readAnchorSetting, writeAnchorSetting } from './trust-anchor-setting.js';
+import { INSTALLATION_KEY_HOLDER, makeEndorsedEntry, shortKeyFingerprint, trustOf, type TrustEntry } from './trust-list.js';
+import { addEndorsement, addRetirement, loadTrust, registerAnchors } from './trust-store.js';
 import { RecordError, type Id, type Person, type PersonKey, type TrustListInfo } from './types.js';
 
 const passphrase = z
@@ -55,31 +57,57 @@ async function activeKeyRow(ctx: StoreContext, personId: Id): Promise<PersonKeyR
 }
 
 
-export async function trustListInfo(ctx: StoreContext): Promise<TrustListInfo> {
-  const read = readTrustList(ctx.keyDir);
-  const pins = (await ctx.q.all('SELECT anchor FROM trust_anchor_pin ORDER BY pinned_at') as Array<{ anchor: string }>).map((r) => r.anchor);
+/**
+ * What stands between this desk and trusting the register's signatures, in plain words: no anchor
+ * configured here, a damaged setting, or an anchor the register was not set up with (issue 15,
+ * item 4: "a database whose anchor differs from the desk's configured one is reported plainly").
+ */
+export async function trustProblems(ctx: StoreContext, read: { list: { anchor: string } | null; problem: string | null }): Promise<string[]> {
+  const pins = await registerAnchors(ctx);
   const problems: string[] = [];
   if (read.problem) problems.push(read.problem);
+  const pinned = pins.map(shortKeyFingerprint).join(', ');
   if (read.list === null && !read.problem && pins.length > 0) {
-    problems.push(`The trust list file ${read.path} is missing: no signature can be trusted until it is restored from a backup.`);
+    problems.push(
+      `This desk has no trust anchor configured, so no signature in this register is trusted here. ` +
+        `Enter the fingerprint of the register's trust anchor (${pinned}…), as you were given it on paper, in Settings & about.`,
+    );
   }
   if (read.list !== null && pins.length > 0 && !pins.includes(read.list.anchor)) {
     problems.push(
-      `The trust list beside the database has the anchor ${shortKeyFingerprint(read.list.anchor)}, but this database was set up with ` +
-        `${pins.map(shortKeyFingerprint).join(', ')}: the trust list file was replaced.`,
+      `This register's signatures are endorsed by a key this desk does not recognise: the register was set up with the trust anchor ${pinned}, ` +
+        `but this desk is configured with ${shortKeyFingerprint(read.list.anchor)}. No signature is trusted here until they agree: ` +
+        'compare the fingerprint in Settings & about with the one you were given on paper, and check that this is the right register.',
     );
   }
+  if (read.list !== null && pins.length === 0) {
+    problems.push(
+      `This register has no trust anchor yet, but this desk is configured with ${shortKeyFingerprint(read.list.anchor)} (from another register). ` +
+        'Clear the desk\'s trust anchor in Settings & about before creating the register\'s first signing key, or connect to the register that anchor belongs to.',
+    );
+  }
+  return problems;
+}
+
+export async function trustListInfo(ctx: StoreContext): Promise<TrustListInfo> {
+  const read = await loadTrust(ctx);
+  const setting = readAnchorSetting(ctx.keyDir);
+  const list = read.list;
+  const trustedKeys = list ? new Set(list.entries.filter((e) => trustOf(list, e.keyId).trusted).map((e) => e.keyId)).size : 0;
   return {
     path: read.path,
-    anchor: read.list?.anchor ?? null,
-    anchorFingerprint: read.list ? shortKeyFingerprint(read.list.anchor) : null,
-    keys: read.list?.entries.length ?? 0,
-    problems,
+    anchor: list?.anchor ?? null,
+    anchorFingerprint: list ? shortKeyFingerprint(list.anchor) : null,
+    anchorFull: list ? fullKeyFingerprint(list.anchor) : null,
+    anchorSetAt: setting.setAt,
+    registerAnchors: (await registerAnchors(ctx)).map(fullKeyFingerprint),
+    keys: trustedKeys,
+    problems: await trustProblems(ctx, read),
   };
 }
 
 export async function listPersonKeys(ctx: StoreContext): Promise<PersonKey[]> {
-  const list = readTrustList(ctx.keyDir).list;
+  const list = (await loadTrust(ctx)).list;
   const rows = await ctx.q.all(`${KEY_SELECT} ORDER BY pk.created_at, pk.key_id`) as PersonKeyRow[];
   return rows.map((r) => {
     const t = trustOf(list, r.key_id);
@@ -124,7 +152,7 @@ export async function unlockPersonalKey(ctx: StoreContext, personId: Id, pass: s
     throw new RecordError('signing-key', `${person.name}'s stored signing key does not match its public key: the key was replaced. Retire it and create a new one.`);
   }
   if (opts.requireTrusted !== false) {
-    const read = readTrustList(ctx.keyDir);
+    const read = await loadTrust(ctx);
     const t = trustOf(read.list, row.key_id);
     if (!t.trusted) {
       throw new RecordError(
@@ -135,7 +163,7 @@ export async function unlockPersonalKey(ctx: StoreContext, personId: Id, pass: s
     }
     const entry = t.entry;
     if (entry?.retiredAt) throw new RecordError('signing-key', `${person.name}'s key is retired on the trust list; a retired key cannot sign.`);
-    const problems = (await trustListInfo(ctx)).problems;
+    const problems = await trustProblems(ctx, read);
     if (problems.length) throw new RecordError('signing-key', `Signing is refused: ${problems.join(' ')}`);
   }
   return { person, keyId: row.key_id, privateKey, publicKeyPem };
@@ -161,7 +189,7 @@ export interface Signer {
  */
 export async function signAsPerson<P>(ctx: StoreContext, personId: Id, pass: string, build: (signer: Signer) => P): Promise<{ signer: Signer; payload: P; signature: string }> {
   const key = await unlockPersonalKey(ctx, personId, pass);
-  const anchor = readTrustList(ctx.keyDir).list?.anchor ?? '';
+  const anchor = readAnchorSetting(ctx.keyDir).anchor ?? '';
   const signer: Signer = {
     personId: key.person.id,
     name: key.person.name,
@@ -183,7 +211,7 @@ export async function signAsPerson<P>(ctx: StoreContext, personId: Id, pass: str
  */
 export function signerFromKey(ctx: StoreContext, person: Person, privateKey: KeyObject) {
   const publicKey = createPublicKey(privateKey).export({ type: 'spki', format: 'pem' }).toString();
-  const anchor = readTrustList(ctx.keyDir).list?.anchor ?? '';
+  const anchor = readAnchorSetting(ctx.keyDir).anchor ?? '';
   return async <P>(build: (signer: Signer) => P): Promise<{ signer: Signer; payload: P; signature: string }> => {
     const signer: Signer = { personId: person.id, name: person.name, role: person.role, keyId: keyIdOf(publicKey), publicKey, signedAt: ctx.now(), trustAnchor: anchor };
     const payload = build(signer);
@@ -198,7 +226,7 @@ export async function checkPersonSignature(
   signatureB64: string,
   keyId: string,
 ): Promise<{ readonly valid: boolean; readonly trusted: boolean; readonly trustChain: readonly string[]; readonly ownerPersonId: string | null; readonly ownerName: string | null }> {
-  const read = readTrustList(ctx.keyDir);
+  const read = await loadTrust(ctx);
   const verdict = trustOf(read.list, keyId);
   const publicKey = verdict.entry?.publicKey ?? (await ctx.q.get('SELECT public_key FROM signing_key WHERE key_id = ?', keyId) as { public_key: string } | undefined)?.public_key;
   let valid = false;
@@ -207,7 +235,7 @@ export async function checkPersonSignature(
   } catch {
     valid = false;
   }
-  const problems = (await trustListInfo(ctx)).problems;
+  const problems = await trustProblems(ctx, read);
   return {
     valid,
     trusted: verdict.trusted && problems.length === 0,
@@ -217,15 +245,15 @@ export async function checkPersonSignature(
   };
 }
 
-function admitToTrustList(
+/** An endorsement of `entry` by `endorser`, dated by this back end's clock, stored in the register. */
+async function admit(
   ctx: StoreContext,
-  list: TrustList,
   entry: { keyId: string; publicKey: string; personId: string | null; personName: string },
   endorser: { keyId: string; privateKey: KeyObject },
-): TrustList {
-  const admittedAt = ctx.now();
-  const e = makeEndorsedEntry({ ...entry, admittedAt, endorsedBy: endorser.keyId }, endorser.privateKey);
-  return { ...list, entries: [...list.entries.filter((x) => x.keyId !== entry.keyId), e] };
+): Promise<TrustEntry> {
+  const e = makeEndorsedEntry({ ...entry, admittedAt: ctx.now(), endorsedBy: endorser.keyId }, endorser.privateKey);
+  await addEndorsement(ctx, e);
+  return e;
 }
 
 /** Admit several keys on one endorser's authority (import: the exporting site's keys, after confirmation). */
@@ -234,28 +262,30 @@ export async function admitKeys(
   keys: ReadonlyArray<{ keyId: string; publicKey: string; personId: string | null; personName: string }>,
   endorser: { keyId: string; privateKey: KeyObject; person: Person },
 ): Promise<void> {
-  const read = readTrustList(ctx.keyDir);
-  if (read.list === null) throw new RecordError('signing-key', 'There is no trust list yet.');
-  let list = read.list;
-  for (const k of keys) {
-    list = admitToTrustList(ctx, list, k, endorser);
-    await ctx.audit('key-endorsed', 'signing_key', k.keyId, `by ${endorser.person.name} (${k.personName})`);
-  }
-  writeTrustList(ctx.keyDir, list);
+  if ((await loadTrust(ctx)).list === null) throw new RecordError('signing-key', 'This desk has no trust anchor yet.');
+  await guardTx(ctx, 'Endorsement', async (ctx) => {
+    for (const k of keys) {
+      await admit(ctx, k, endorser);
+      await ctx.audit('key-endorsed', 'signing_key', k.keyId, `by ${endorser.person.name} (${k.personName})`);
+    }
+  });
 }
 
-/** Start the trust list with `key` as its anchor (self-endorsed) and pin the anchor in the database. */
-export async function setUpTrustList(ctx: StoreContext, key: { keyId: string; publicKey: string; personId: string | null; personName: string; privateKey: KeyObject }): Promise<TrustList> {
+/**
+ * Start the trust list with `key` as its anchor: its self-endorsement goes into the register, the
+ * anchor is pinned there (append-only) and becomes this desk's setting. The setting is written last,
+ * after the rows, inside the caller's transaction scope: a failure before it rolls the rows back.
+ */
+export async function setUpTrustList(ctx: StoreContext, key: { keyId: string; publicKey: string; personId: string | null; personName: string; privateKey: KeyObject }): Promise<void> {
   const admittedAt = ctx.now();
   const entry = makeEndorsedEntry(
     { keyId: key.keyId, publicKey: key.publicKey, personId: key.personId, personName: key.personName, admittedAt, endorsedBy: key.keyId },
     key.privateKey,
   );
-  const list: TrustList = { format: 'beamwarden-trust-list', version: 1, anchor: key.keyId, entries: [entry] };
-  writeTrustList(ctx.keyDir, list);
+  await addEndorsement(ctx, entry);
   await ctx.q.run('INSERT INTO trust_anchor_pin (anchor, pinned_at) VALUES (?, ?) ON CONFLICT(anchor) DO NOTHING', key.keyId, admittedAt);
   await ctx.audit('trust-anchor-set', 'signing_key', key.keyId, `${key.personName}; fingerprint ${shortKeyFingerprint(key.keyId)}`);
-  return list;
+  writeAnchorSetting(ctx.keyDir, key.keyId, admittedAt);
 }
 
 export async function createPersonalKey(ctx: StoreContext, raw: z.input<typeof CreateKeySchema>): Promise<PersonKey> {
@@ -263,9 +293,9 @@ export async function createPersonalKey(ctx: StoreContext, raw: z.input<typeof C
   if (args.passphrase !== args.passphraseAgain) throw new RecordError('invalid', 'The two passphrases are not the same; nothing was created.', [{ path: 'passphraseAgain', problem: 'must repeat the passphrase exactly' }]);
   const person = await getPerson(ctx, args.personId);
   if (await activeKeyRow(ctx, person.id)) throw new RecordError('conflict', `${person.name} already has an active signing key; retire it before creating a new one.`);
-  const read = readTrustList(ctx.keyDir);
+  const read = await loadTrust(ctx);
   if (read.problem) throw new RecordError('signing-key', read.problem);
-  const problems = (await trustListInfo(ctx)).problems;
+  const problems = await trustProblems(ctx, read);
   if (problems.length) throw new RecordError('signing-key', problems.join(' '));
   // The endorser's passphrase is checked before anything is written.
   let endorser: { keyId: string; privateKey: KeyObject; name: string } | null = null;
@@ -291,18 +321,16 @@ export async function createPersonalKey(ctx: StoreContext, raw: z.input<typeof C
     await ctx.q.run("INSERT INTO signing_key (key_id, public_key, origin, added_at) VALUES (?, ?, 'this-database', ?)", keyId, publicKeyPem, now);
     await ctx.q.run('INSERT INTO person_key (key_id, person_id, sealed_private_key, created_at) VALUES (?, ?, ?, ?)', keyId, person.id, JSON.stringify(sealed), now);
     await ctx.audit('key-created', 'person', person.id, `key ${shortKeyFingerprint(keyId)}`);
-    // The trust list is written inside the transaction's scope: if it fails, the key rows roll back.
+    // The endorsement is written in the same transaction as the key: both or neither.
     const entry = { keyId, publicKey: publicKeyPem, personId: person.id, personName: person.name };
     if (read.list === null) await setUpTrustList(ctx, { ...entry, privateKey });
     else if (endorser !== null) {
-      let list = admitToTrustList(ctx, read.list, entry, endorser);
+      await admit(ctx, entry, endorser);
       await ctx.audit('key-endorsed', 'signing_key', keyId, `by ${endorser.name}`);
       if (installationKeyToRetire !== null) {
-        const at = ctx.now();
-        list = { ...list, entries: list.entries.map((e) => (e.keyId === installationKeyToRetire ? { ...e, retiredAt: at, retiredReason: 'Replaced by personal keys' } : e)) };
+        await addRetirement(ctx, installationKeyToRetire, ctx.now(), 'Replaced by personal keys');
         await ctx.audit('key-retired', 'signing_key', installationKeyToRetire, 'installation key replaced by personal keys; key file removed');
       }
-      writeTrustList(ctx.keyDir, list);
     }
   });
   // The installation key file is removed once it has endorsed: a copy of it could otherwise endorse again.
@@ -321,14 +349,15 @@ function guardTx(ctx: StoreContext, what: string, fn: (ctx: StoreContext) => Pro
 export async function endorseKey(ctx: StoreContext, raw: z.input<typeof EndorseKeySchema>): Promise<PersonKey | null> {
   const args = parseOrThrow(EndorseKeySchema, raw, 'Endorsement');
   const endorser = await unlockPersonalKey(ctx, args.endorserPersonId, args.endorserPassphrase);
-  const read = readTrustList(ctx.keyDir);
-  if (read.list === null) throw new RecordError('signing-key', 'There is no trust list yet.');
+  if ((await loadTrust(ctx)).list === null) throw new RecordError('signing-key', 'This desk has no trust anchor yet.');
   const k = await ctx.q.get('SELECT public_key FROM signing_key WHERE key_id = ?', args.keyId) as { public_key: string } | undefined;
   if (!k) throw new RecordError('not-found', `No key ${shortKeyFingerprint(args.keyId)} in this database.`);
   const owner = await ctx.q.get('SELECT person_id FROM person_key WHERE key_id = ?', args.keyId) as { person_id: string } | undefined;
   const personName = owner ? (await getPerson(ctx, owner.person_id)).name : (await ctx.q.get('SELECT name FROM signature WHERE key_id = ? LIMIT 1', args.keyId) as { name: string } | undefined)?.name ?? '';
-  writeTrustList(ctx.keyDir, admitToTrustList(ctx, read.list, { keyId: args.keyId, publicKey: k.public_key, personId: owner?.person_id ?? null, personName }, endorser));
-  await ctx.audit('key-endorsed', 'signing_key', args.keyId, `by ${endorser.person.name}`);
+  await guardTx(ctx, 'Endorsement', async (ctx) => {
+    await admit(ctx, { keyId: args.keyId, publicKey: k.public_key, personId: owner?.person_id ?? null, personName }, endorser);
+    await ctx.audit('key-endorsed', 'signing_key', args.keyId, `by ${endorser.person.name}`);
+  });
   return (await listPersonKeys(ctx)).find((x) => x.keyId === args.keyId) ?? null;
 }
 
@@ -356,13 +385,8 @@ export async function retireKey(ctx: StoreContext, raw: z.input<typeof RetireKey
   await guardTx(ctx, 'Key retirement', async (ctx) => {
     await ctx.q.run('UPDATE person_key SET retired_at = ?, retired_reason = ? WHERE key_id = ?', now, args.reason, row.key_id);
     await ctx.audit('key-retired', 'person', person.id, `key ${shortKeyFingerprint(row.key_id)}: ${args.reason}`);
-    const read = readTrustList(ctx.keyDir);
-    if (read.list !== null && read.list.entries.some((e) => e.keyId === row.key_id)) {
-      writeTrustList(ctx.keyDir, {
-        ...read.list,
-        entries: read.list.entries.map((e) => (e.keyId === row.key_id ? { ...e, retiredAt: now, retiredReason: args.reason } : e)),
-      });
-    }
+    // In the register, so every desk sees the key retired (a retirement only takes trust away).
+    await addRetirement(ctx, row.key_id, now, args.reason);
   });
   const k = (await listPersonKeys(ctx)).find((x) => x.keyId === row.key_id);
   if (!k) throw new Error('key vanished');

@@ -19,6 +19,8 @@ import type { RecordEngine } from './engine.js';
 import * as X from './exchange.js';
 import * as K from './personal-keys.js';
 import { adoptInstallationKey } from './legacy-signatures.js';
+import { clearDeskAnchor, setDeskAnchor } from './desk-anchor.js';
+import { adoptTrustListFile } from './trust-store.js';
 import { defaultDatabasePath } from './paths.js';
 import * as R from './register.js';
 import * as C from './register-checked.js';
@@ -123,6 +125,8 @@ function storeOver(ctx: StoreContext, engine: RecordEngine, info: StoreInfo): Re
     retirePersonKey: (args) => K.retireKey(ctx, args),
     endorseKey: (args) => K.endorseKey(ctx, args),
     trustList: () => K.trustListInfo(ctx),
+    setTrustAnchor: (args) => setDeskAnchor(ctx, args),
+    clearTrustAnchor: () => clearDeskAnchor(ctx),
 
     exportSite: (siteId) => X.exportSite(ctx, siteId),
     exportRoom: (roomId) => X.exportRoom(ctx, roomId),
@@ -189,7 +193,7 @@ export async function openRecordStore(options: InternalOpenOptions = {}): Promis
     if (missing.length) {
       warnings.push(`The database's protections against changing signed records were removed (${missing.join(', ')}): it was changed with another tool. Run verify on every assessment.`);
     }
-    if (!readonly) warnings.push(...(await adoptInstallationKey(ctx)));
+    if (!readonly) warnings.push(...(await adoptTrustListFile(ctx)), ...(await adoptInstallationKey(ctx)));
     warnings.push(...(await K.trustListInfo(ctx)).problems);
   } catch (e) {
     await engine.close();

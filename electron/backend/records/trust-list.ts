@@ -1,15 +1,16 @@
 /**
- * The installation's trust list: the public keys allowed to sign, kept OUTSIDE the SQLite file
- * (in the user-data folder, beside the database), so that writing the database alone cannot make
- * a key trusted. A key that appears only in the database is never trusted.
+ * The trust list: the public keys allowed to sign, each admitted by an endorsement (an Ed25519
+ * signature, by an already trusted key, over the entry: key, owner, date), back to the trust anchor
+ * that endorses itself. Since schema 9 the endorsements are rows of the register (trust-store.ts),
+ * shared by every desk, and the anchor is each desk's own setting outside the database
+ * (trust-anchor-setting.ts): `trustOf` believes an entry only when its chain of valid endorsements
+ * ends at that anchor, so a key that appears only in the database, or a row written without a
+ * trusted key's signature, is never trusted (issue 10; issue 15, item 4).
  *
- * Each entry is admitted by an endorsement: an Ed25519 signature, by an already trusted key, over
- * the entry (key, owner, date). The first key — the trust anchor — endorses itself when the list is
- * set up; its fingerprint is shown to the officer to write down and printed on every signed
- * document, so a replaced list shows a different anchor on paper and on screen.
+ * Before schema 9 the list was a file beside the database (TRUST_LIST_FILE); it is read only to
+ * carry its entries into the register once (trust-store.ts, adoptTrustListFile).
  */
-import { existsSync, mkdirSync, readFileSync, renameSync, rmSync, statSync, writeFileSync } from 'node:fs';
-import { storageError } from './storage-errors.js';
+import { existsSync, readFileSync, statSync } from 'node:fs';
 import { join } from 'node:path';
 import { createPublicKey, sign, verify, type KeyObject } from 'node:crypto';
 import { z } from 'zod';
@@ -82,7 +83,7 @@ export function trustListPath(dir: string): string {
   return join(dir, TRUST_LIST_FILE);
 }
 
-export function readTrustList(dir: string): TrustListRead {
+export function readTrustListFile(dir: string): TrustListRead {
   const path = trustListPath(dir);
   if (!existsSync(path)) return { path, list: null, problem: null };
   const st = statSync(path);
@@ -99,21 +100,6 @@ export function readTrustList(dir: string): TrustListRead {
   }
   cache.set(path, { mtimeMs: st.mtimeMs, size: st.size, read });
   return read;
-}
-
-/** Write the whole list under a temporary name, then rename into place (a crash leaves the old or the new list). */
-export function writeTrustList(dir: string, list: TrustList): void {
-  mkdirSync(dir, { recursive: true });
-  const path = trustListPath(dir);
-  const tmp = `${path}.${process.pid}.tmp`;
-  try {
-    writeFileSync(tmp, `${JSON.stringify(TrustListSchema.parse(list), null, 2)}\n`, { mode: 0o644 });
-    renameSync(tmp, path);
-  } catch (e) {
-    rmSync(tmp, { force: true });
-    throw storageError(e, path, 'The trust list') ?? e;
-  }
-  cache.delete(path);
 }
 
 export interface TrustVerdict {
@@ -141,51 +127,70 @@ export function trustOf(list: TrustList | null, keyId: string): TrustVerdict {
 }
 
 function judge(list: TrustList | null, keyId: string): TrustVerdict {
-  if (list === null) return { trusted: false, chain: ['This installation has no trust list yet, so no key is trusted.'], entry: null };
-  const byId = new Map(list.entries.map((e) => [e.keyId, e]));
-  const chain: string[] = [];
-  const seen = new Set<string>();
-  const first = byId.get(keyId) ?? null;
-  let current = first;
-  if (current === null) {
+  if (list === null) {
+    return { trusted: false, chain: ['This desk has no trust anchor configured, so no key is trusted (Settings & about: enter the anchor\'s fingerprint you were given).'], entry: null };
+  }
+  const byId = new Map<string, TrustEntry[]>();
+  for (const e of list.entries) byId.set(e.keyId, [...(byId.get(e.keyId) ?? []), e]);
+  const candidates = byId.get(keyId) ?? [];
+  if (candidates.length === 0) {
     return { trusted: false, chain: [`Key ${shortKeyFingerprint(keyId)} is not on this installation's trust list.`], entry: null };
   }
-  while (current !== null) {
-    const e: TrustEntry = current;
-    if (seen.has(e.keyId)) return { trusted: false, chain: [...chain, 'The endorsements run in a circle: the trust list was edited by hand.'], entry: first };
-    seen.add(e.keyId);
-    let idOk = false;
-    try {
-      idOk = keyIdOf(e.publicKey) === e.keyId;
-    } catch {
-      idOk = false;
-    }
-    if (!idOk) return { trusted: false, chain: [...chain, `The entry for ${who(e)} does not match its public key: the trust list was edited by hand.`], entry: first };
-    const endorser = e.endorsedBy === e.keyId ? e : byId.get(e.endorsedBy);
-    if (endorser === undefined) {
-      return { trusted: false, chain: [...chain, `${who(e)} names an endorsing key that is not on the trust list.`], entry: first };
-    }
-    let valid = false;
-    try {
-      valid = verify(null, endorsementPayload(e), createPublicKey(endorser.publicKey), Buffer.from(e.endorsement, 'base64'));
-    } catch {
-      valid = false;
-    }
-    if (!valid) {
-      return { trusted: false, chain: [...chain, `The endorsement of ${who(e)} is not a valid signature by ${who(endorser)}: it was forged or edited.`], entry: first };
-    }
-    if (endorser === e) {
-      if (e.keyId !== list.anchor) {
-        return { trusted: false, chain: [...chain, `${who(e)} endorses itself but is not the trust anchor.`], entry: first };
-      }
-      chain.push(`${who(e)} is the trust anchor (first key, admitted at set-up on ${e.admittedAt.slice(0, 10)}).`);
-      return { trusted: true, chain, entry: first };
-    }
-    if (endorser.retiredAt && endorser.retiredAt < e.admittedAt) {
-      return { trusted: false, chain: [...chain, `${who(e)} was endorsed by ${who(endorser)} after that key was retired.`], entry: first };
-    }
-    chain.push(`${who(e)} was endorsed by ${who(endorser)} on ${e.admittedAt.slice(0, 10)}.`);
-    current = endorser;
+  // Any one endorsement that leads to the anchor admits the key; otherwise the first one's failure is told.
+  let failed: { chain: string[]; entry: TrustEntry } | null = null;
+  for (const e of candidates) {
+    const r = chainFrom(list, byId, e, new Set());
+    if (r.ok) return { trusted: true, chain: r.chain, entry: e };
+    failed ??= { chain: r.chain, entry: e };
   }
-  return { trusted: false, chain, entry: first };
+  return { trusted: false, chain: failed?.chain ?? [], entry: failed?.entry ?? null };
+}
+
+function publicKeyMatches(e: TrustEntry): boolean {
+  try {
+    return keyIdOf(e.publicKey) === e.keyId;
+  } catch {
+    return false;
+  }
+}
+
+function endorsementValid(e: TrustEntry, endorser: TrustEntry): boolean {
+  try {
+    return verify(null, endorsementPayload(e), createPublicKey(endorser.publicKey), Buffer.from(e.endorsement, 'base64'));
+  } catch {
+    return false;
+  }
+}
+
+/** One entry's chain to the anchor, trying each endorsement its endorser holds (depth first, no key twice). */
+function chainFrom(list: TrustList, byId: ReadonlyMap<string, readonly TrustEntry[]>, e: TrustEntry, seen: ReadonlySet<string>): { ok: boolean; chain: string[] } {
+  if (seen.has(e.keyId)) return { ok: false, chain: ['The endorsements run in a circle: they were written by hand.'] };
+  if (!publicKeyMatches(e)) return { ok: false, chain: [`The entry for ${who(e)} does not match its public key: it was written by hand.`] };
+  if (e.endorsedBy === e.keyId) {
+    if (!endorsementValid(e, e)) return { ok: false, chain: [`The endorsement of ${who(e)} is not a valid signature by ${who(e)}: it was forged or edited.`] };
+    if (e.keyId !== list.anchor) {
+      return { ok: false, chain: [`${who(e)} endorses itself but is not this desk's trust anchor (${shortKeyFingerprint(list.anchor)}).`] };
+    }
+    return { ok: true, chain: [`${who(e)} is the trust anchor (first key, admitted at set-up on ${e.admittedAt.slice(0, 10)}).`] };
+  }
+  const endorsers = (byId.get(e.endorsedBy) ?? []).filter(publicKeyMatches);
+  const endorserKey = endorsers[0];
+  if (endorserKey === undefined) return { ok: false, chain: [`${who(e)} names an endorsing key that is not on this installation's trust list.`] };
+  if (!endorsementValid(e, endorserKey)) {
+    return { ok: false, chain: [`The endorsement of ${who(e)} is not a valid signature by ${who(endorserKey)}: it was forged or edited.`] };
+  }
+  // A retirement belongs to the key, so every entry of the endorser carries the same one.
+  const retiredAt = endorsers.find((x) => x.retiredAt)?.retiredAt;
+  if (retiredAt && retiredAt < e.admittedAt) {
+    return { ok: false, chain: [`${who(e)} was endorsed by ${who(endorserKey)} after that key was retired.`] };
+  }
+  const link = `${who(e)} was endorsed by ${who(endorserKey)} on ${e.admittedAt.slice(0, 10)}.`;
+  let failed: string[] | null = null;
+  const next = new Set(seen).add(e.keyId);
+  for (const up of endorsers) {
+    const r = chainFrom(list, byId, up, next);
+    if (r.ok) return { ok: true, chain: [link, ...r.chain] };
+    failed ??= r.chain;
+  }
+  return { ok: false, chain: [link, ...(failed ?? [])] };
 }

@@ -174,6 +174,9 @@ export interface RecordStore {
   /** Admit a key (a person's, or an exporting site's) on the endorsement of a trusted signer. */
   endorseKey(args: { keyId: string; endorserPersonId: Id; endorserPassphrase: string }): Promise<PersonKey | null>;
   trustList(): Promise<TrustListInfo>;
+  /** This desk's trust anchor, as typed from paper (64 hex digits; spaces between groups allowed). */
+  setTrustAnchor(args: { fingerprint: string }): Promise<TrustListInfo>;
+  clearTrustAnchor(): Promise<TrustListInfo>;
 
   // exchange
   exportSite(siteId: Id): Promise<ExportDocument>;

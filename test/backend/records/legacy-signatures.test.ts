@@ -6,6 +6,7 @@
  * test/fixtures/db-v2-keys (made by make-db-v2.ts). Source: derived — a migration must not turn an
  * unchecked key into a trusted one.
  */
+import Database from 'better-sqlite3';
 import { copyFileSync, cpSync, existsSync, readFileSync, writeFileSync } from 'node:fs';
 import { generateKeyPairSync } from 'node:crypto';
 import { join } from 'node:path';
@@ -97,7 +98,7 @@ describe('migrating signed records of schema version 2', () => {
       expect((await store.trustList()).anchor).toBeNull();
       const report = await store.verify(SIGNED);
       expect(report).toMatchObject({ ok: false, keyTrusted: false });
-      expect(report.findings.join(' ')).toMatch(/This installation has no trust list yet, so no key is trusted\./);
+      expect(report.findings.join(' ')).toMatch(/This desk has no trust anchor configured, so no key is trusted/);
     } finally {
       await store.close();
     }
@@ -105,9 +106,20 @@ describe('migrating signed records of schema version 2', () => {
 
   it('opening again does not re-adopt or write a second anchor', async () => {
     await (await openRecordStore({ path: dbPath, keyDir })).close();
-    const list = readFileSync(join(keyDir, 'beamwarden-trust-list.json'), 'utf8');
+    const setting = readFileSync(join(keyDir, 'beamwarden-trust-anchor.json'), 'utf8');
+    const rows = () => {
+      const raw = new Database(dbPath, { readonly: true });
+      try {
+        return raw.prepare('SELECT (SELECT count(*) FROM trust_endorsement) AS e, (SELECT count(*) FROM trust_anchor_pin) AS p').get();
+      } finally {
+        raw.close();
+      }
+    };
+    const before = rows();
+    expect(before).toEqual({ e: 1, p: 1 });
     const again = await openRecordStore({ path: dbPath, keyDir });
     await again.close();
-    expect(readFileSync(join(keyDir, 'beamwarden-trust-list.json'), 'utf8')).toBe(list);
+    expect(readFileSync(join(keyDir, 'beamwarden-trust-anchor.json'), 'utf8')).toBe(setting);
+    expect(rows()).toEqual(before);
   });
 });

@@ -47,8 +47,8 @@ forEachEngine((engine) => {
       expect(signed1.current.status).toBe('signed');
       expect(signed1.current.signature?.fingerprint).toMatch(/^[0-9a-f]{64}$/);
       expect(signed1.current.signature).toMatchObject({ personId: officer.id, name: officer.name, keyId: signer.key.keyId, keyTrusted: true });
-      // The trust list lives beside the database, outside it; no installation key file any more.
-      expect(existsSync(join(t.dir, 'keys', 'beamwarden-trust-list.json'))).toBe(true);
+      // The trust anchor is this desk's setting, outside the database; no installation key file any more.
+      expect(existsSync(join(t.dir, 'keys', 'beamwarden-trust-anchor.json'))).toBe(true);
       expect(existsSync(join(t.dir, 'keys', 'beamwarden-signing-key.pem'))).toBe(false);
 
       // Editing a signed assessment makes revision 2 as a draft; revision 1 stays signed.

@@ -14,7 +14,8 @@ import { decodeResults, statementFor, type AssessmentRow, type RevisionRow, type
 import { canonicalJson } from '../../../electron/backend/records/canonical.js';
 import { MIGRATIONS } from '../../../electron/backend/records/migrations/index.js';
 import { fingerprintOf, keyIdOf, linkOf } from '../../../electron/backend/records/signing.js';
-import { makeEndorsedEntry, TRUST_LIST_FILE, type TrustList } from '../../../electron/backend/records/trust-list.js';
+import { makeEndorsedEntry, type TrustEntry } from '../../../electron/backend/records/trust-list.js';
+import { TRUST_ANCHOR_FILE } from '../../../electron/backend/records/trust-anchor-setting.js';
 import type { AssessmentContent, RecordStore, VerifyReport } from '../../../electron/backend/records/index.js';
 import type { RoomResult } from '../../../core/model/results.js';
 import { makeSigner, openTemp, registerRoom, STATEMENT, tempDir } from './helpers.js';
@@ -122,7 +123,19 @@ function withoutTriggers(env: Env, names: readonly string[], sql: (raw: Database
 }
 
 function anchorOf(env: Env): string {
-  return (JSON.parse(readFileSync(join(env.keyDir, TRUST_LIST_FILE), 'utf8')) as TrustList).anchor;
+  return (JSON.parse(readFileSync(join(env.keyDir, TRUST_ANCHOR_FILE), 'utf8')) as { anchor: string }).anchor;
+}
+
+/** Raw SQL, as another SQLite tool: an endorsement row written straight into the register. */
+function insertEndorsement(env: Env, e: TrustEntry): void {
+  const raw = new Database(env.dbPath);
+  try {
+    raw
+      .prepare('INSERT INTO trust_endorsement (key_id, endorsed_by, public_key, person_id, person_name, admitted_at, endorsement) VALUES (?, ?, ?, ?, ?, ?, ?)')
+      .run(e.keyId, e.endorsedBy, e.publicKey, e.personId, e.personName, e.admittedAt, e.endorsement);
+  } finally {
+    raw.close();
+  }
 }
 
 interface Attack {
@@ -208,34 +221,33 @@ const ATTACKS: readonly Attack[] = [
     failedCheck: 'chain',
   },
   {
-    name: 'the trust list file replaced by one whose anchor is the forger\'s key, which then signs',
+    name: 'the desk\'s anchor setting replaced by the forger\'s key, self-endorsed in the register, which then signs',
     attack: async (env) => {
       const key = attackerKey();
       const entry = makeEndorsedEntry(
         { keyId: key.keyId, publicKey: key.pem, personId: env.officer.person.id, personName: env.officer.person.name, admittedAt: new Date().toISOString(), endorsedBy: key.keyId },
         key.privateKey,
       );
-      const list: TrustList = { format: 'beamwarden-trust-list', version: 1, anchor: key.keyId, entries: [entry] };
-      writeFileSync(join(env.keyDir, TRUST_LIST_FILE), JSON.stringify(list));
+      insertEndorsement(env, entry);
+      writeFileSync(join(env.keyDir, TRUST_ANCHOR_FILE), JSON.stringify({ format: 'beamwarden-trust-anchor', version: 1, anchor: key.keyId, setAt: entry.admittedAt }));
       await env.store.saveAssessment(env.assessmentId, weakened((await env.store.getAssessment(env.assessmentId)).current.content));
       forgeSignature(env, key, key.keyId);
     },
-    findings: [/The trust list beside the database has the anchor [0-9a-f ]+, but this database was set up with [0-9a-f ]+: the trust list file was replaced\./],
+    findings: [/This register's signatures are endorsed by a key this desk does not recognise: the register was set up with the trust anchor [0-9a-f ]+, but this desk is configured with [0-9a-f ]+\./],
     failedCheck: 'key-trusted',
   },
   {
-    name: 'an endorsement of the forger\'s key added to the trust list without the officer\'s key',
+    name: 'an endorsement of the forger\'s key written into the register without the officer\'s key',
     attack: async (env) => {
       const key = attackerKey();
-      const path = join(env.keyDir, TRUST_LIST_FILE);
-      const list = JSON.parse(readFileSync(path, 'utf8')) as TrustList;
+      const anchor = anchorOf(env);
       const forged = makeEndorsedEntry(
-        { keyId: key.keyId, publicKey: key.pem, personId: env.officer.person.id, personName: env.officer.person.name, admittedAt: new Date().toISOString(), endorsedBy: list.anchor },
+        { keyId: key.keyId, publicKey: key.pem, personId: env.officer.person.id, personName: env.officer.person.name, admittedAt: new Date().toISOString(), endorsedBy: anchor },
         key.privateKey, // signed with its own key, claiming the anchor's endorsement
       );
-      writeFileSync(path, JSON.stringify({ ...list, entries: [...list.entries, forged] }));
+      insertEndorsement(env, forged);
       await env.store.saveAssessment(env.assessmentId, weakened((await env.store.getAssessment(env.assessmentId)).current.content));
-      forgeSignature(env, key, list.anchor);
+      forgeSignature(env, key, anchor);
     },
     findings: [/The endorsement of key [0-9a-f ]+ of Dr\. Imre Calloway-Senn is not a valid signature by key [0-9a-f ]+ of Dr\. Imre Calloway-Senn: it was forged or edited\./],
     failedCheck: 'key-trusted',
