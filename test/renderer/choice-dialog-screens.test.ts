@@ -5,12 +5,15 @@
  * (the laser's beams; each unsaved change) and what stays (the register, the stored revision), the
  * safe choice has the focus, Escape and Keep editing change nothing, and only the named action
  * does what it says. Invented demo room A0.07 (the project's demo scenario: an erbium fibre
- * amplifier and a DFB source).
+ * amplifier and a DFB source; its site's eyewear shelf). Also removing eyewear from the shelf and
+ * the room plan from the assessment.
  */
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { cleanup, fireEvent, render, screen, within } from '@testing-library/svelte';
 import type { RecordStore } from '../../electron/backend/records/index.js';
 import WorkspaceScreen from '../../renderer/screens/WorkspaceScreen.svelte';
+import RegisterScreen from '../../renderer/screens/RegisterScreen.svelte';
+import PlanHarness from './PlanHarness.svelte';
 import { session } from '../../renderer/lib/session.svelte.js';
 import { cancelOpenChoices } from '../../renderer/lib/confirm-choice.js';
 import { openTemp, registerRoom, tempDir } from '../backend/records/helpers.js';
@@ -26,6 +29,7 @@ beforeEach(async () => {
 });
 afterEach(async () => {
   cancelOpenChoices();
+  await until(() => !session.busy); // a register read still under way finishes before the store closes
   cleanup();
   session.draft = null;
   session.assessment = null;
@@ -118,5 +122,52 @@ describe('discarding unsaved changes', () => {
     expect(session.draft?.title).not.toBe('Telecom bench, after the new amplifier');
     // nothing of the discarded draft reached the records
     expect((await store.listInstallations(session.room?.id ?? '')).map((i) => i.laser.name)).not.toContain('New CW laser');
+  });
+});
+
+describe('removing eyewear from the shelf', () => {
+  it('names the item, its place and markings, and that saved assessments keep their copy; only the named action deletes it', async () => {
+    const { site } = await registerRoom(store, 'A0.07');
+    await session.refreshOverview();
+    const shelf = await store.listEyewear(site.id);
+    const item = shelf.at(-1);
+    if (!item) throw new Error('no eyewear');
+    render(RegisterScreen);
+    await fireEvent.click(screen.getByRole('tab', { name: 'Eyewear shelf' }));
+    await fireEvent.click(screen.getByRole('button', { name: `Remove ${item.spec.id}` }));
+    await until(shown);
+    const d = within(dialog());
+    expect(d.getByRole('heading').textContent).toBe(`Remove ${item.spec.id} from the shelf of ${site.name}?`);
+    expect(dialog().textContent).toContain(`${item.quantity} kept at`);
+    expect(dialog().textContent).toMatch(/Markings: .*OD \d/);
+    expect(d.getByTestId('choice-kept').textContent).toBe('Assessments already saved, signed or not, keep their own copy of it. Only restoring a backup brings the shelf entry back.');
+    await fireEvent.click(d.getByRole('button', { name: 'Cancel' }));
+    await until(() => !shown());
+    expect(await store.listEyewear(site.id)).toHaveLength(shelf.length);
+
+    await fireEvent.click(screen.getByRole('button', { name: `Remove ${item.spec.id}` }));
+    await until(shown);
+    await fireEvent.click(within(dialog()).getByRole('button', { name: `Remove ${item.spec.id} from the shelf` }));
+    await until(async () => (await store.listEyewear(site.id)).length === shelf.length - 1);
+    expect((await store.listEyewear(site.id)).map((e) => e.spec.id)).not.toContain(item.spec.id);
+  });
+});
+
+describe('removing the room plan', () => {
+  it('counts what the drawing holds; Remove the plan takes it out and Undo brings it back', async () => {
+    // invented green laser (as in the plan editor test): 5 W CW at 532 nm
+    render(PlanHarness, { lasers: [{ id: 'L1', name: 'Green laser', beams: [{ id: 'g', label: 'green 532 nm', wavelength_nm: 532, emission: { kind: 'cw', power_W: 5 }, beam: { diameter_m: 0.0023, divergence_rad: 0.0004, definition: '1/e2' } }] }] });
+    await fireEvent.click(screen.getByRole('button', { name: 'Start a room plan' }));
+    await fireEvent.click(screen.getByRole('button', { name: 'Remove the plan' }));
+    await until(shown);
+    const d = within(dialog());
+    expect(d.getByRole('heading').textContent).toBe('Remove the room plan from this assessment?');
+    const lost = d.getAllByRole('listitem').map((li) => li.textContent ?? '');
+    expect(lost[0]).toMatch(/^The drawing: the outline \(4 corners\), 1 door, .*1 beam path/);
+    expect(lost[1]).toBe('The hazard zones and findings drawn from it');
+    await fireEvent.click(d.getByRole('button', { name: 'Remove the plan' }));
+    await until(() => screen.getByTestId('plan-json').textContent === 'null');
+    await fireEvent.click(screen.getByRole('button', { name: 'Undo: remove the plan' }));
+    expect(screen.getByTestId('plan-json').textContent).not.toBe('null');
   });
 });
