@@ -9,6 +9,8 @@ import { ApiError, invoke, messageOf } from './api.js';
 import { contentFrom, draftFrom, roomInputFrom, saveBlockers, type Draft } from './draft.js';
 import { completeHazards } from './hazards-catalogue.js';
 import { addDays, today } from './dates.js';
+import { describeChange, diffView, type ChangeRow } from './diff-view.js';
+import { settings } from './settings.svelte.js';
 
 export { addDays, today };
 import { laserInputFrom } from './beam-form.js';
@@ -33,6 +35,8 @@ class Session {
   busy = $state(false);
   /** The message of a save refused because someone else saved first (null when none). */
   stale = $state<string | null>(null);
+  /** After such a refusal: what the other save changed, by the form's labels (empty until read, or when it cannot be). */
+  staleChanges = $state<ChangeRow[]>([]);
   /** The message of a register edit refused because someone else changed the entry first (null when none). */
   registerStale = $state<string | null>(null);
   /** Counts reloads of the register after such a refusal: open register forms take the stored values again. */
@@ -249,10 +253,14 @@ class Session {
         });
       } catch (e) {
         // Someone else saved first: keep the officer's edits on screen and offer the two ways on.
-        if (e instanceof ApiError && e.code === 'stale') this.stale = e.message;
+        if (e instanceof ApiError && e.code === 'stale') {
+          this.stale = e.message;
+          if (a) await this.readStaleChanges(a);
+        }
         throw e;
       }
       this.stale = null;
+      this.staleChanges = [];
       for (const lf of d.lasers) {
         const id = saved.laserIds[lf.id];
         if (lf.isNew && id !== undefined) {
@@ -266,6 +274,20 @@ class Session {
       await this.refreshOverview();
       this.say('ok', `Saved: revision ${saved.assessment.current.revisionNo} (${saved.assessment.current.status}).`);
     });
+  }
+
+  /**
+   * What the other officer's save changed since this desk opened `opened`, for the refusal banner
+   * (who and when are in the refusal itself). A failure to read it leaves the list empty: the
+   * refusal and the two ways on stay.
+   */
+  private async readStaleChanges(opened: Assessment): Promise<void> {
+    try {
+      const [diff, now] = await Promise.all([invoke('assessment-changes-since', { id: opened.id, seen: opened.current.content }), invoke('assessment-get', { id: opened.id })]);
+      this.staleChanges = diffView(diff).content.map((d) => describeChange(d, now.current.content, undefined, settings.units));
+    } catch {
+      this.staleChanges = [];
+    }
   }
 
   /** New and edited register lasers of the draft, each edited one with the state it was opened at. */
@@ -313,6 +335,7 @@ class Session {
         changedLasers: [],
       });
       this.stale = null;
+      this.staleChanges = [];
       this.installations = [...kept.installations];
       this.setAssessment(await invoke('assessment-get', { id: a.id }));
       await this.refreshOverview();
@@ -334,6 +357,7 @@ class Session {
     });
     if (!ok) return;
     this.stale = null;
+    this.staleChanges = [];
     const a = this.assessment;
     if (!a) return;
     await this.run(async () => {
@@ -382,13 +406,14 @@ class Session {
     });
   }
 
-  /** Run an operation with the busy flag; errors become a notice. */
+  /** Run an operation with the busy flag; errors become a notice (a refused stale save has its own banner instead). */
   async run(fn: () => Promise<void>): Promise<boolean> {
     this.busy = true;
     try {
       await fn();
       return true;
     } catch (e) {
+      if (e instanceof ApiError && e.code === 'stale' && this.stale !== null) return false;
       this.say('error', messageOf(e));
       return false;
     } finally {

@@ -180,10 +180,11 @@ describe.skipIf(skip)(`two hosts on one institution register${skip ? ` (${SKIP_R
     b = await openDesk(roleB, passwords[roleB] ?? '', mkdtempSync(path.join(os.tmpdir(), 'beamwarden-e2e-desk-b-')));
   });
 
-  // A failed step leaves both screens as they were, for a person to look at.
+  // With BEAMWARDEN_E2E_SHOTS=<folder>, both screens after each step, for a person to look at.
   afterEach(async (t) => {
-    if (t.task.result?.state !== 'fail' || !process.env['BEAMWARDEN_E2E_FAILURE_SHOTS']) return;
-    for (const [n, d] of [['a', a], ['b', b]] as const) await d?.page.screenshot({ path: path.join(process.env['BEAMWARDEN_E2E_FAILURE_SHOTS'], `${t.task.name.slice(0, 3)}-${n}.png`), fullPage: true });
+    const folder = process.env['BEAMWARDEN_E2E_SHOTS'];
+    if (!folder) return;
+    for (const [n, d] of [['a', a], ['b', b]] as const) await d?.page.screenshot({ path: path.join(folder, `${t.task.name.slice(0, 3)}-${n}.png`), fullPage: true });
   });
 
   afterAll(async () => {
@@ -273,6 +274,13 @@ describe.skipIf(skip)(`two hosts on one institution register${skip ? ` (${SKIP_R
     expect(said).toMatch(/^Not saved\. "[^"]*room A0\.07" was changed by someone else at \d\d:\d\d \(saved as revision 1 by /);
     expect(said).toContain(`by ${a.role})`);
     expect(said).toMatch(/Nothing was overwritten\./);
+    // ... and what A changed, by the form's labels: the laser's name, from what B had opened to A's.
+    const changes = b.page.getByTestId('stale-changes');
+    await changes.waitFor();
+    expect(await changes.getByRole('listitem').allTextContents()).toEqual(['EDFA, bench 1 (A) · Laser name: Erbium fibre amplifier (bench 1, EDFA) → EDFA, bench 1 (A)']);
+    // Said once, in the banner with the two ways on (not again in a notice beside it).
+    expect(await b.page.getByText(/was changed by someone else/).count()).toBe(1);
+    if (process.env['BEAMWARDEN_E2E_SHOTS']) await b.page.screenshot({ path: path.join(process.env['BEAMWARDEN_E2E_SHOTS'], 'refused-save-b.png') });
     // B's typing is still on screen after the refusal ...
     expect(await laserName(b.page).inputValue()).toBe('EDFA, bench 1 (B)');
     // ... and is kept as an assessment of its own, beside A's stored version.

@@ -30,6 +30,8 @@ export type AssessmentHandlers = {
   'revisions-list': (args: { readonly assessmentId: Id }) => Promise<RevisionSummary[]>;
   'revision-get': (args: { readonly revisionId: Id }) => Promise<Revision>;
   'revisions-compare': (args: { readonly fromRevisionId: Id; readonly toRevisionId: Id }) => Promise<FieldDifference[]>;
+  /** After a stale refusal: what the stored assessment changed since the content this desk opened. */
+  'assessment-changes-since': (args: { readonly id: Id; readonly seen: AssessmentContent }) => Promise<FieldDifference[]>;
   /** `reviewed`: the revision and save counter shown in the confirm step; a draft that moved on is refused (code 'stale'). */
   'assessment-sign': (args: { readonly id: Id; readonly signOff: SignOff; readonly reviewed: SaveBase }) => Promise<Assessment>;
   'assessment-verify': (args: { readonly assessmentId: Id; readonly revisionId?: Id }) => Promise<VerifyReport>;

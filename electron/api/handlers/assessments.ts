@@ -33,6 +33,10 @@ export const assessmentTable: AreaTable<AssessmentHandlers, ApiContext> = {
     input: z.strictObject({ fromRevisionId: IdSchema, toRevisionId: IdSchema }),
     run: (a, { store }) => store.compareRevisions(a.fromRevisionId, a.toRevisionId),
   },
+  'assessment-changes-since': {
+    input: z.strictObject({ id: IdSchema, seen: AssessmentContentSchema }),
+    run: (a, { store }) => store.changesSince(a.id, a.seen),
+  },
   'assessment-sign': {
     input: z.strictObject({ id: IdSchema, signOff: SignOffSchema, reviewed: SaveBaseSchema }),
     run: (a, { store }) => store.signAssessment(a.id, a.signOff, a.reviewed),

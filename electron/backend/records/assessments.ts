@@ -418,6 +418,12 @@ export async function compareRevisions(ctx: StoreContext, fromId: Id, toId: Id):
   );
 }
 
+/** The stored content's differences from `seen`, each path under `content.` as in compareRevisions. */
+export async function changesSince(ctx: StoreContext, id: Id, seen: AssessmentContent): Promise<FieldDifference[]> {
+  const now = await getAssessment(ctx, id);
+  return diffValues({ content: seen }, { content: now.current.content });
+}
+
 // ---------------------------------------------------------------- writes
 
 const INSERT_REVISION = `INSERT INTO revision (id, assessment_id, revision_no, status, content_json, results_z, calculated_with, based_on,

@@ -115,6 +115,7 @@ function storeOver(ctx: StoreContext, engine: RecordEngine, info: StoreInfo): Re
     listRevisions: (assessmentId) => A.listRevisions(ctx, assessmentId),
     getRevision: (revisionId) => A.getRevision(ctx, revisionId),
     compareRevisions: (fromRevisionId, toRevisionId) => A.compareRevisions(ctx, fromRevisionId, toRevisionId),
+    changesSince: (id, seen) => A.changesSince(ctx, id, seen),
     signAssessment: (id, signOff, reviewed) => A.signAssessment(ctx, id, signOff, reviewed),
     verify: (assessmentId, revisionId) => A.verifyAssessment(ctx, assessmentId, revisionId),
     verifySignedRevisions: (assessmentId) => A.verifySignedRevisions(ctx, assessmentId),

@@ -157,6 +157,11 @@ export interface RecordStore {
   /** Field-by-field differences between two revisions (content and results) of one room's assessments. */
   compareRevisions(fromRevisionId: Id, toRevisionId: Id): Promise<FieldDifference[]>;
   /**
+   * What changed in the stored assessment since `seen` (the content as this desk opened it): after a
+   * save refused as stale, the other officer's changes by field (content only, no results).
+   */
+  changesSince(id: Id, seen: AssessmentContent): Promise<FieldDifference[]>;
+  /**
    * Sign the current draft: it becomes signed, the previous signed revision superseded. `reviewed`: the revision and save counter shown in the confirm step; refused (code 'stale') when the draft moved on.
    */
   signAssessment(id: Id, signOff: SignOff, reviewed?: SaveBase): Promise<Assessment>;
