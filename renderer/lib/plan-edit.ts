@@ -61,18 +61,30 @@ export function placeLaser(plan: RoomPlan, laserId: string): RoomPlan {
   return { ...plan, paths: [...plan.paths, { laserId, exit: p(toCm(x0 + w * 0.2), y), elements: [{ kind: 'dump', at: p(toCm(x0 + w * 0.7), y) }] }] };
 }
 
+/**
+ * The words for the two points of a door, window, wall, curtain or barrier, the same on the drawn
+ * handles, the typed-coordinate fields and the refusals: a door or window is an opening between two
+ * sides; a wall, curtain or barrier runs from one end to the other.
+ */
+export function endWords(group: 'doors' | 'windows' | 'walls' | 'barriers', which: 'a' | 'b'): string {
+  const opening = group === 'doors' || group === 'windows';
+  return which === 'a' ? (opening ? 'one side' : 'one end') : opening ? 'other side' : 'other end';
+}
+
+/** A curtain or barrier by its kind and name ("Curtain C1"). */
+export const barrierName = (b: { readonly kind: 'curtain' | 'barrier'; readonly label: string }): string => `${b.kind === 'curtain' ? 'Curtain' : 'Barrier'} ${b.label}`;
+
 /** Every point the officer can move, with its label. */
 export function handles(plan: RoomPlan, lasers: readonly LaserRef[]): Handle[] {
   const name = new Map(lasers.map((l) => [l.id, l.name]));
   const out: Handle[] = [];
   plan.outline.forEach((q, i) => out.push({ key: `outline.${i}`, label: `Room corner ${i + 1}`, point: q }));
-  plan.doors.forEach((d, i) => out.push({ key: `doors.${i}.a`, label: `Door ${d.label}, one side`, point: d.a }, { key: `doors.${i}.b`, label: `Door ${d.label}, other side`, point: d.b }));
-  plan.windows.forEach((d, i) => out.push({ key: `windows.${i}.a`, label: `Window ${d.label}, one side`, point: d.a }, { key: `windows.${i}.b`, label: `Window ${d.label}, other side`, point: d.b }));
-  plan.walls.forEach((d, i) => out.push({ key: `walls.${i}.a`, label: `Wall ${d.label}, one end`, point: d.a }, { key: `walls.${i}.b`, label: `Wall ${d.label}, other end`, point: d.b }));
-  plan.barriers.forEach((d, i) => {
-    const what = d.kind === 'curtain' ? 'Curtain' : 'Barrier';
-    out.push({ key: `barriers.${i}.a`, label: `${what} ${d.label}, one end`, point: d.a }, { key: `barriers.${i}.b`, label: `${what} ${d.label}, other end`, point: d.b });
-  });
+  const two = (group: 'doors' | 'windows' | 'walls' | 'barriers', i: number, name: string, d: { readonly a: PlanPoint; readonly b: PlanPoint }) =>
+    out.push({ key: `${group}.${i}.a`, label: `${name}, ${endWords(group, 'a')}`, point: d.a }, { key: `${group}.${i}.b`, label: `${name}, ${endWords(group, 'b')}`, point: d.b });
+  plan.doors.forEach((d, i) => two('doors', i, `Door ${d.label}`, d));
+  plan.windows.forEach((d, i) => two('windows', i, `Window ${d.label}`, d));
+  plan.walls.forEach((d, i) => two('walls', i, `Wall ${d.label}`, d));
+  plan.barriers.forEach((d, i) => two('barriers', i, barrierName(d), d));
   plan.workPositions.forEach((w, i) => out.push({ key: `workPositions.${i}.at`, label: `Work position ${w.label}`, point: w.at }));
   plan.enclosures.forEach((e, i) => out.push({ key: `enclosures.${i}.min`, label: `Enclosure ${e.label}, lower left corner`, point: e.min }, { key: `enclosures.${i}.max`, label: `Enclosure ${e.label}, upper right corner`, point: e.max }));
   plan.paths.forEach((x, i) => {
@@ -302,8 +314,6 @@ const GROUP_WORDS: Readonly<Record<string, string>> = {
   reflectionPoints: 'Reflection point',
 };
 const PART_WORDS: Readonly<Record<string, string>> = {
-  a: 'one side',
-  b: 'other side',
   at: 'place',
   min: 'lower left corner',
   max: 'upper right corner',
@@ -336,13 +346,16 @@ export function planErrorWords(message: string, field: string, plan: RoomPlan, l
   else if (group === 'paths') {
     const id = plan.paths[i]?.laserId ?? '';
     what = `Beam path of ${lasers.find((l) => l.id === id)?.name ?? 'a laser'}`;
+  } else if (group === 'barriers' && plan.barriers[i]) {
+    what = barrierName(plan.barriers[i]);
   } else if (GROUP_WORDS[group]) {
     const item = (plan[group as Group] as ReadonlyArray<{ label?: string }>)[i];
     what = `${GROUP_WORDS[group]} ${item?.label ?? i + 1}`;
   }
+  const twoPoints = group === 'doors' || group === 'windows' || group === 'walls' || group === 'barriers' ? group : null;
   const parts = tail
     .split(/[.[\]]/)
     .filter((x) => x !== '')
-    .map((x) => (/^\d+$/.test(x) ? `point ${Number(x) + 1}` : (PART_WORDS[x] ?? x)));
+    .map((x) => (/^\d+$/.test(x) ? `point ${Number(x) + 1}` : twoPoints && (x === 'a' || x === 'b') ? endWords(twoPoints, x) : (PART_WORDS[x] ?? x)));
   return `${[what, ...parts].join(', ')}${rest}`;
 }

@@ -39,6 +39,29 @@ describe('plan editor', () => {
     expect(within(findings).getByText(/Door D2 is inside the direct-beam zone of green 532 nm\./)).toBeTruthy();
   });
 
+  it('every point of a door, window, wall, curtain and barrier is named in the same words on its drawn handle and its typed fields (a door or window by its sides, the others by their ends)', async () => {
+    render(PlanHarness, { lasers });
+    await fireEvent.click(screen.getByRole('button', { name: 'Start a room plan' }));
+    for (const what of ['Window', 'Interior wall', 'Curtain', 'Barrier']) await fireEvent.click(screen.getByRole('button', { name: `+ ${what}` }));
+    const drawing = screen.getByRole('group', { name: /Room plan, top view/ });
+    const named = [...drawing.querySelectorAll('[role="button"][aria-label]')]
+      .map((h) => /^(.*): x -?\d/.exec(h.getAttribute('aria-label') ?? '')?.[1] ?? '')
+      .filter((n) => /^(Door|Window|Wall|Curtain|Barrier) /.test(n));
+    expect(named).toEqual([
+      'Door D1, one side',
+      'Door D1, other side',
+      'Window W1, one side',
+      'Window W1, other side',
+      'Wall IW1, one end',
+      'Wall IW1, other end',
+      'Curtain C1, one end',
+      'Curtain C1, other end',
+      'Barrier B1, one end',
+      'Barrier B1, other end',
+    ]);
+    for (const n of named) for (const axis of ['x', 'y']) expect(screen.getByLabelText(`${n}, ${axis} in metres`)).toBeTruthy();
+  });
+
   it('moves the laser exit with the arrow keys (0.1 m; with Shift 0.01 m) and keeps the new place', async () => {
     render(PlanHarness, { lasers });
     await fireEvent.click(screen.getByRole('button', { name: 'Start a room plan' }));
@@ -83,6 +106,21 @@ describe('plan errors in officer words (never a field path on screen)', () => {
     }
     expect(words).toMatch(/^Door D2 store, other side: /);
     expect(words).not.toMatch(/plan\.|\[\d\]|_m\b/);
+  });
+
+  it('a curtain typed with both ends at one point is named as on its handle: by its kind and its ends', async () => {
+    const { evaluateRoom, InputError } = await import('../../core/index.js');
+    const { newPlan, planErrorWords } = await import('../../renderer/lib/plan-edit.js');
+    const base = newPlan([{ id: 'L1', name: 'Green laser' }]);
+    const bad: RoomPlan = { ...base, barriers: [{ id: 'C1', label: 'C1', kind: 'curtain', rating: '', a: { x_m: 2, y_m: 1 }, b: { x_m: 2, y_m: 1 } }] };
+    let words = '';
+    try {
+      evaluateRoom({ lasers, plan: bad });
+    } catch (e) {
+      if (!(e instanceof InputError)) throw e;
+      words = planErrorWords(e.message, e.field, bad, [{ id: 'L1', name: 'Green laser' }]);
+    }
+    expect(words).toMatch(/^Curtain C1, other end: /);
   });
 });
 
@@ -170,8 +208,8 @@ describe('handles never cover each other (each stays reachable with the mouse)',
     await fireEvent.click(screen.getByRole('button', { name: '+ Window' }));
     // The window's ends typed 0.05 m either side of the middle of the south side (3, 0).
     for (const [label, value] of [
-      ['Window W1, one end, x in metres', '2.95'],
-      ['Window W1, other end, x in metres', '3.05'],
+      ['Window W1, one side, x in metres', '2.95'],
+      ['Window W1, other side, x in metres', '3.05'],
     ] as const) {
       const box = screen.getByLabelText(label);
       await fireEvent.input(box, { target: { value } });
