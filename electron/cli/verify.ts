@@ -1,6 +1,7 @@
 /**
  * Headless check for auditors: every signed revision of one assessment, or of all, verified against
- * this installation's trust list (outside the database), recomputed with this core, and checked for
+ * the trust anchor configured on this desk (outside the database) through the register's endorsements,
+ * recomputed with this core, and checked for
  * a whole revision chain and intact database protections.
  *
  *   npm run verify -- --db <file> [--assessment <id> | --all] [--json] [--key-dir <folder>] [--workers <n>]
@@ -78,8 +79,8 @@ export async function runVerify(argv: readonly string[], out: (line: string) => 
     process.stderr.write(`${(e as Error).message}\n`);
     return 2;
   }
-  // A postgres:// address is the institution register (never taken for a file); its trust list is
-  // this desk's, in the user-data folder unless --key-dir names another.
+  // A postgres:// address is the institution register (never taken for a file); the trust anchor is
+  // this desk's setting, in the user-data folder unless --key-dir names another.
   const server = isServerAddress(args.db);
   const db = server ? args.db : resolve(args.db);
   const keyDir = resolve(args['key-dir'] ?? dirname(server ? defaultDatabasePath() : db));
@@ -100,7 +101,7 @@ export async function runVerify(argv: readonly string[], out: (line: string) => 
     const trust = await store.trustList();
     header = [
       `Database ${shown}`,
-      `Trust list ${trust.path}: anchor ${trust.anchorFingerprint ?? 'none'}${trust.problems.length ? ` — ${trust.problems.join(' ')}` : ''}`,
+      `Trust anchor of this desk (${trust.path}): ${trust.anchorFingerprint ?? 'none'}${trust.problems.length ? ` — ${trust.problems.join(' ')}` : ''}`,
       ...store.info.warnings.map((w) => `Warning: ${w}`),
     ];
     const all = await store.listAllAssessments();

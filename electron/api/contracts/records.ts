@@ -417,7 +417,7 @@ export interface VerifyReport {
   readonly fingerprintMatches: boolean;
   /** The Ed25519 signature is valid for the recorded public key and statement. */
   readonly signatureValid: boolean;
-  /** The signing key is on this installation's trust list (outside the database) by a valid endorsement chain. */
+  /** The signing key is trusted on this desk: a chain of valid endorsements (stored in the register) to the trust anchor configured on this desk, outside the database. */
   readonly keyTrusted: boolean;
   /** The endorsement chain from the signing key to the trust anchor (or why it is broken). */
   readonly trustChain: readonly string[];

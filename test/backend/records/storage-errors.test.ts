@@ -177,7 +177,7 @@ describe('at the failing action', () => {
       const pass = 'a passphrase for the test';
       const err = await errorOf(() => s.createPersonKey({ personId: person.id, passphrase: pass, passphraseAgain: pass }));
       expect(err.code).toBe('storage');
-      expect(err.message).toMatch(/is full: The trust list could not be saved/);
+      expect(err.message).toMatch(/is full: This desk's trust anchor setting could not be saved/);
       expect(readdirSync(keys).filter((f) => f.endsWith('.tmp'))).toEqual([]);
       expect(await s.listPersonKeys()).toEqual([]);
     } finally {
