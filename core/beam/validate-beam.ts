@@ -8,6 +8,7 @@ import { InputError } from '../errors.js';
 import type { RuleSetId } from '../model/inputs.js';
 import { INPUT_RULES, TEXT_RULES, inRange, rangeWords, textProblem, type NumberRule, type TextRule } from '../model/input-rules.js';
 import { DEFAULT_RULE_SET, RULE_SET_IDS } from '../limits/rule-sets.js';
+import { validateSettings } from '../model/validate-settings.js';
 
 function isObject(x: unknown): x is Record<string, unknown> {
   return typeof x === 'object' && x !== null && !Array.isArray(x);
@@ -116,7 +117,7 @@ export function validateBeamInput(input: unknown, prefix = '', roomRuleSet?: Rul
       if (t[k] !== undefined) requireRule(p(`tolerances.${k}`), t[k], R.tolerance);
     }
   }
-  if (b['settings'] !== undefined) requireObject(p('settings'), b['settings']);
+  validateSettings(p('settings'), b['settings']);
   return ruleSet;
 }
 

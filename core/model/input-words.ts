@@ -27,6 +27,18 @@ const LABEL_OF_PATH: ReadonlyArray<readonly [RegExp, string]> = [
   [/^en208\[\d+\]\.scale$/, 'EN 208 scale number'],
   [/^en208\[\d+\]\.(from|to)_nm$/, 'Wavelength band of an EN 208 marking'],
   [/^visibleTransmission$/, INPUT_RULES.visibleTransmission.label],
+  // Limit settings (core/model/validate-settings.ts): the register's signed checks of table entries.
+  [/^settings\.rowChecks\[\d+\]\.key$/, 'Limit table check: the table entry checked'],
+  [/^settings\.rowChecks\[\d+\]\.verdict$/, 'Limit table check: the result (matches or differs)'],
+  [/^settings\.rowChecks\[\d+\]\.documentExpr$/, 'Limit table check: the value the published document gives'],
+  [/^settings\.rowChecks\[\d+\]\.checkId$/, 'Limit table check: its record in the register'],
+  [/^settings\.rowChecks\[\d+\]\.reference$/, 'Limit table check: the published document and table'],
+  [/^settings\.rowChecks\[\d+\]\.checkedBy$/, 'Limit table check: the person who checked'],
+  [/^settings\.rowChecks\[\d+\]\.checkedOn$/, 'Limit table check: the date of the check'],
+  [/^settings\.rowChecks(\[\d+\])?(\.\w+)?$/, 'Limit table checks'],
+  [/^settings\.verifiedRows(\[\d+\])?$/, 'Table entries checked against the published document'],
+  [/^settings\.conservative$/, 'Conservative mode'],
+  [/^settings(\.\w+)?$/, 'Limit settings'],
 ];
 
 function labelOf(at: WhereInRoom): string {

@@ -8,6 +8,7 @@ import type { EyewearSpec, RuleSetId } from '../model/inputs.js';
 import { DEFAULT_RULE_SET, RULE_SET_IDS } from '../limits/rule-sets.js';
 import { EN207_MODES, INPUT_RULES, LASER_CLASS_LABELS as CLASSES, SCALE_NUMBERS, TEXT_RULES, type TextRule } from '../model/input-rules.js';
 import { requireRule, requireText } from '../beam/validate-beam.js';
+import { validateSettings } from '../model/validate-settings.js';
 
 function isObject(x: unknown): x is Record<string, unknown> {
   return typeof x === 'object' && x !== null && !Array.isArray(x);
@@ -77,7 +78,7 @@ export function validateRoomShape(input: unknown): RuleSetId {
     }
     ruleSet = input['ruleSet'] as RuleSetId;
   }
-  if (input['settings'] !== undefined && !isObject(input['settings'])) throw new InputError('missing', 'settings', input['settings'], 'an object');
+  validateSettings('settings', input['settings']);
   const lasers = requireArray('lasers', input['lasers'], true);
   const laserIds = new Set<string>();
   const beamIds = new Set<string>();

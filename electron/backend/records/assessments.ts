@@ -150,6 +150,18 @@ async function newestRevisionRow(ctx: StoreContext, assessmentId: Id): Promise<R
   return r;
 }
 
+/** The columns of a revision that the version checks read (not its content and results, which are large). */
+type RevisionHead = Pick<RevisionRow, 'id' | 'assessment_id' | 'revision_no' | 'status' | 'version' | 'title' | 'updated_at'>;
+
+/** The newest revision's head: what a version check needs, without reading the stored content and results. */
+async function newestRevisionHead(ctx: StoreContext, assessmentId: Id): Promise<RevisionHead> {
+  const r = await ctx.q.get('SELECT id, assessment_id, revision_no, status, version, title, updated_at FROM revision WHERE assessment_id = ? ORDER BY revision_no DESC LIMIT 1', assessmentId) as
+    | RevisionHead
+    | undefined;
+  if (!r) throw new RecordError('corrupt-database', `Assessment ${assessmentId} has no revision`);
+  return r;
+}
+
 async function getRevisionRow(ctx: StoreContext, revisionId: Id): Promise<RevisionRow> {
   const r = await ctx.q.get('SELECT * FROM revision WHERE id = ?', revisionId) as RevisionRow | undefined;
   if (!r) throw notFound('revision', revisionId);
@@ -493,7 +505,7 @@ function resultsFor(ctx: StoreContext, content: AssessmentContent, previous: Rev
  */
 export async function assertNotStale(ctx: StoreContext, id: Id, expected: SaveBase | undefined, doing: 'save' | 'sign' = 'save'): Promise<void> {
   if (expected === undefined) return;
-  const current = await newestRevisionRow(ctx, id);
+  const current = await newestRevisionHead(ctx, id);
   if (current.id === expected.revisionId && current.version === expected.version) return;
   const signed = current.status !== 'draft' ? await getSignatureRow(ctx, current.id) : undefined;
   const at = signed?.signed_at ?? current.updated_at;
@@ -597,8 +609,9 @@ export async function registerKey(ctx: StoreContext, keyId: string, publicKey: s
 
 /** Chain link of the newest signed (not superseded) revision of an assessment, or null. */
 async function newestSignedLink(ctx: StoreContext, a: AssessmentRow): Promise<string | null> {
-  const prev = await ctx.q.get("SELECT * FROM revision WHERE assessment_id = ? AND status = 'signed' ORDER BY revision_no DESC LIMIT 1", a.id) as
-    | RevisionRow
+  // Only what the statement names (id, number): the content and results are not read here.
+  const prev = await ctx.q.get("SELECT id, revision_no FROM revision WHERE assessment_id = ? AND status = 'signed' ORDER BY revision_no DESC LIMIT 1", a.id) as
+    | Pick<RevisionRow, 'id' | 'revision_no'>
     | undefined;
   if (!prev) return null;
   const sig = await getSignatureRow(ctx, prev.id);
@@ -630,39 +643,79 @@ export type DraftSigner = (build: (signer: Signer) => SignedStatement) => Promis
 
 /** Sign the current draft with `signWith` (the app passes signAsPerson; the demo and benchmark an unlocked key). */
 export async function signDraftWith(ctx: StoreContext, id: Id, statementText: string, signWith: DraftSigner, reviewed?: SaveBase): Promise<Assessment> {
+  const prepared = await prepareSignOff(ctx, id);
+  const signed = await signWith(statementBuilder(prepared, statementText));
+  await commitSignOff(ctx, prepared, signed, reviewed);
+  return await getAssessment(ctx, id);
+}
+
+/** What a sign-off covers, computed before the passphrase is asked for and before the write transaction. */
+export interface PreparedSignOff {
+  readonly assessment: AssessmentRow;
+  readonly draft: RevisionRow;
+  readonly results: RoomResult;
+  readonly fingerprint: string;
+  readonly previousLink: string | null;
+  /** The results as stored (compressed here, so the write transaction does not hold the lock for it). */
+  readonly resultsZ: Buffer;
+}
+
+/**
+ * The first phase of a sign-off, outside any transaction: the draft, its results as this core
+ * computes them now (so the signed results are never stale), their fingerprint and the link of the
+ * signed revision it follows. `commitSignOff` checks all of it again under the row lock.
+ */
+export async function prepareSignOff(ctx: StoreContext, id: Id): Promise<PreparedSignOff> {
   const a = await getAssessmentRow(ctx, id);
   const draft = await newestRevisionRow(ctx, id);
   if (draft.status !== 'draft') throw new RecordError('conflict', `Nothing to sign: revision ${draft.revision_no} is already ${draft.status}`);
   const content = parseOrThrow(AssessmentContentSchema, JSON.parse(draft.content_json), 'Draft content');
-  // Sign what this core computes now, so the signed results are never stale.
   const results = evaluate(ctx, content.input);
   const fingerprint = fingerprintOf(content, results, ctx.calculatedWith);
   const previousLink = await newestSignedLink(ctx, a);
-  const signed = await signWith((signer) =>
-    statementFor(a, draft, {
+  return { assessment: a, draft, results, fingerprint, previousLink, resultsZ: encodeResults(results) };
+}
+
+/** The statement the signer signs for a prepared sign-off (identity and time come from the signer). */
+export function statementBuilder(p: PreparedSignOff, statementText: string): (signer: Signer) => SignedStatement {
+  return (signer) =>
+    statementFor(p.assessment, p.draft, {
       person_id: signer.personId,
       name: signer.name,
       role: signer.role,
       signed_at: signer.signedAt,
       statement: statementText,
-      fingerprint,
+      fingerprint: p.fingerprint,
       statement_version: 2,
-      previous_link: previousLink,
+      previous_link: p.previousLink,
       trust_anchor: signer.trustAnchor,
       key_id: signer.keyId,
-    }),
-  );
+    });
+}
+
+/**
+ * The signing transaction: row lock, the draft and the chain checked again (a save or sign-off that
+ * landed meanwhile refuses this one), the signature row, the previous signed revision superseded,
+ * the audit event and, last before the commit, the signing log outside the database.
+ */
+export async function commitSignOff(
+  ctx: StoreContext,
+  p: PreparedSignOff,
+  signed: { signer: Signer; payload: SignedStatement; signature: string },
+  reviewed?: SaveBase,
+): Promise<void> {
+  const { assessment: a, draft, fingerprint, previousLink, resultsZ } = p;
+  const id = a.id;
   const st = signed.payload;
   await write(ctx, 'Sign-off', async (ctx) => {
     // The row lock of the sign-off: a concurrent save or sign-off of this assessment waits for it.
     await lockRow(ctx, 'assessment', id);
     await assertNotStale(ctx, id, reviewed, 'sign');
-    const again = await newestRevisionRow(ctx, id);
+    const again = await newestRevisionHead(ctx, id);
     // The save counter too: a save that landed between reading the draft and this transaction
     // changed the content the signature covers (requests of one host now interleave at awaits).
     if (again.id !== draft.id || again.status !== 'draft' || again.version !== draft.version) throw new RecordError('conflict', 'The assessment changed while signing; try again');
     if (await newestSignedLink(ctx, a) !== previousLink) throw new RecordError('conflict', 'Another revision was signed meanwhile; try again');
-    const resultsZ = encodeResults(results);
     if (!resultsZ.equals(draft.results_z) || draft.calculated_with !== ctx.calculatedWith) {
       await ctx.q.run("UPDATE revision SET results_z = ?, calculated_with = ? WHERE id = ? AND status = 'draft'", resultsZ, ctx.calculatedWith, draft.id);
     }
@@ -695,7 +748,6 @@ export async function signDraftWith(ctx: StoreContext, id: Id, statementText: st
       keyId: signed.signer.keyId,
     });
   });
-  return await getAssessment(ctx, id);
 }
 
 // ---------------------------------------------------------------- verify

@@ -7,8 +7,7 @@
  * (property test: test/backend/records/schema-core-agreement.test.ts).
  * The assertions at the end fail to compile if a schema drifts from the core type.
  */
-import { variablesOf } from '../../../core/limits/expression.js';
-import { DOCUMENT_VARIABLES } from '../../../core/limits/check-samples.js';
+import { MAX_ROW_CHECKS, ROW_CHECK_TEXT, readableDocumentValue } from '../../../core/model/validate-settings.js';
 import { z } from 'zod';
 import type {
   BeamGeometry,
@@ -60,30 +59,30 @@ export const WavelengthNmSchema = num(R.wavelength_nm);
 export const RuleSetIdSchema = z.enum(['icnirp2013', 'eu2006']);
 export const TissueSchema = z.enum(['eye', 'skin']);
 
-/** A typed published value the core can read: the tables' grammar and symbols only. */
-function readableDocumentValue(expr: string): boolean {
-  try {
-    return variablesOf(expr).every((v) => DOCUMENT_VARIABLES.includes(v));
-  } catch {
-    return false;
-  }
-}
-
-/** A signed check of a limit-table entry as a revision used it (issue 12; core RowCheck). */
-export const RowCheckSchema = z.strictObject({
-  key: z.string().min(1).max(200),
-  verdict: z.enum(['matches', 'differs']),
-  documentExpr: z.string().min(1).max(200).refine(readableDocumentValue, 'must be written as in the tables (numbers, + - * / ^, parentheses and the tables’ symbols)').optional(),
-  checkId: z.string().min(1).max(200),
-  reference: z.string().min(1).max(300),
-  checkedBy: z.string().min(1).max(300),
-  checkedOn: z.string().regex(/^\d{4}-\d{2}-\d{2}$/, 'must be a date YYYY-MM-DD'),
-});
+/**
+ * A signed check of a limit-table entry as a revision used it (issue 12; core RowCheck). The same
+ * rules as the core's validator (core/model/validate-settings.ts): a 'differs' check carries the
+ * published value, a 'matches' check none.
+ */
+export const RowCheckSchema = z
+  .strictObject({
+    key: z.string().min(1).max(ROW_CHECK_TEXT.key),
+    verdict: z.enum(['matches', 'differs']),
+    documentExpr: z.string().min(1).max(ROW_CHECK_TEXT.documentExpr).refine(readableDocumentValue, 'must be written as in the tables (numbers, + - * / ^, parentheses and the tables’ symbols)').optional(),
+    checkId: z.string().min(1).max(ROW_CHECK_TEXT.checkId),
+    reference: z.string().min(1).max(ROW_CHECK_TEXT.reference),
+    checkedBy: z.string().min(1).max(ROW_CHECK_TEXT.checkedBy),
+    checkedOn: z.string().regex(/^\d{4}-\d{2}-\d{2}$/, 'must be a date YYYY-MM-DD'),
+  })
+  .superRefine((c, ctx) => {
+    if (c.verdict === 'differs' && c.documentExpr === undefined) ctx.addIssue({ code: 'custom', path: ['documentExpr'], message: 'must give what the published document says when it differs' });
+    if (c.verdict === 'matches' && c.documentExpr !== undefined) ctx.addIssue({ code: 'custom', path: ['documentExpr'], message: 'is only given when the published document differs' });
+  });
 
 export const LimitSettingsSchema = z.strictObject({
   conservative: z.boolean().optional(),
   verifiedRows: z.array(z.string().min(1)).optional(),
-  rowChecks: z.array(RowCheckSchema).max(1000).optional(),
+  rowChecks: z.array(RowCheckSchema).max(MAX_ROW_CHECKS).optional(),
 });
 
 export const EmissionSchema = z.discriminatedUnion('kind', [
