@@ -57,6 +57,38 @@ describe('two tabs on one assessment', () => {
     await b.getByRole('cell', { name: /— your version, kept when your save was refused/ }).waitFor();
     await b.close();
   });
+
+  it('"Open the stored one, discard mine" asks first in the app\'s dialog, listing what is discarded', async () => {
+    const a = ctx.pages()[0] ?? (await ctx.newPage());
+    await openRoom(a);
+    const b = await ctx.newPage();
+    const boxes: string[] = [];
+    b.on('dialog', (d) => {
+      boxes.push(d.message());
+      void d.dismiss();
+    });
+    await openRoom(b);
+    await a.locator('input[id$="-name"]').first().fill('Telecom bench laser (tab A, again)');
+    await a.getByRole('button', { name: 'Save', exact: true }).click();
+    await a.getByText(/^Saved: revision/).waitFor();
+    await b.locator('input[id$="-name"]').first().fill('Telecom bench laser (tab B, again)');
+    await b.getByRole('button', { name: 'Save', exact: true }).click();
+    await b.getByTestId('stale-save').waitFor();
+
+    await b.getByRole('button', { name: 'Open the stored one, discard mine' }).click();
+    const dialog = b.getByRole('alertdialog');
+    await dialog.waitFor();
+    expect(await dialog.getByRole('listitem').allTextContents()).toEqual(['Changes to laser “Telecom bench laser (tab B, again)”']);
+    await dialog.getByRole('button', { name: 'Cancel' }).click();
+    await dialog.waitFor({ state: 'detached' });
+    expect(await b.locator('input[id$="-name"]').first().inputValue()).toBe('Telecom bench laser (tab B, again)');
+
+    await b.getByRole('button', { name: 'Open the stored one, discard mine' }).click();
+    await dialog.getByRole('button', { name: 'Discard my changes and open the stored version' }).click();
+    await expect.poll(() => b.locator('input[id$="-name"]').first().inputValue()).toBe('Telecom bench laser (tab A, again)');
+    expect(boxes).toEqual([]);
+    await b.close();
+  });
 });
 
 describe('backups from the app', () => {
