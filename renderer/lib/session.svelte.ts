@@ -17,6 +17,12 @@ import { laserInputFrom } from './beam-form.js';
 import type { LaserInput } from '../../core/index.js';
 
 const LAST_KEY = 'beamwarden.last.v1';
+/** How long one question for register changes may wait on the back end (its limit is 30 s). */
+const CHANGE_WAIT_MS = 25_000;
+/** Between two questions that heard nothing (the wait ran out): a breath, not a busy loop. */
+const CHANGE_PAUSE_MS = 250;
+/** After a failed question: the host may be restarting. */
+const CHANGE_RETRY_MS = 4000;
 
 export interface Notice {
   readonly kind: 'ok' | 'error' | 'info';
@@ -84,18 +90,22 @@ class Session {
   private following = false;
 
   /**
-   * On an institution register, the changes other officers commit are asked for every few seconds
-   * and the open screens read the register again: the overview always, the open assessment when it
-   * has no unsaved edits and was saved or signed elsewhere. With unsaved edits the officer is told
-   * instead; their save is then checked against the other change as always. A register file has no
-   * changes to hear (only this program writes it), so the asking stops at once.
+   * On an institution register, the open screens hear of the changes other officers commit as they
+   * happen (the question waits on the back end until the next change: a long poll) and read the
+   * register again: the overview always, the open assessment when it has no unsaved edits and was
+   * saved or signed elsewhere. With unsaved edits the officer is told instead; their save is then
+   * checked against the other change as always. A register file has no changes to hear (only this
+   * program writes it), so the asking stops at once.
    */
   private async followChanges(): Promise<void> {
     let heard;
     try {
-      heard = await invoke('register-changes', { since: this.changesSeen });
+      // The first question only starts the listening, and is answered at once.
+      heard = await invoke('register-changes', { since: this.changesSeen, ...(this.following ? { waitMs: CHANGE_WAIT_MS } : {}) });
     } catch {
-      return; // the host is gone or does not offer it: nothing to follow
+      // The host is gone, or the connection broke while waiting: ask again a little later.
+      if (this.following) setTimeout(() => void this.followChanges(), CHANGE_RETRY_MS);
+      return;
     }
     if (!heard.live) return;
     // The first answer only starts the listening: what this desk has on screen is current.
@@ -124,7 +134,8 @@ class Session {
         // A failed refresh is tried again with the next change.
       }
     }
-    setTimeout(() => void this.followChanges(), 4000);
+    // Asked again at once: the back end holds the question until something changes.
+    setTimeout(() => void this.followChanges(), heard.changes.length > 0 ? 0 : CHANGE_PAUSE_MS);
   }
 
   async refreshOverview(): Promise<void> {
