@@ -21,6 +21,9 @@ const LAST_KEY = 'beamwarden.last.v1';
 const CHANGE_WAIT_MS = 25_000;
 /** Between two questions that heard nothing (the wait ran out): a breath, not a busy loop. */
 const CHANGE_PAUSE_MS = 250;
+/** Waiting for this desk's own operation to finish before comparing (at most 30 s). */
+const BUSY_WAIT_STEP_MS = 100;
+const BUSY_WAIT_STEPS = 300;
 /** After a failed question: the host may be restarting. */
 const CHANGE_RETRY_MS = 4000;
 
@@ -114,6 +117,9 @@ class Session {
     this.changesSeen = heard.seq;
     if (!first && heard.changes.length > 0) {
       try {
+        // This desk's own save or sign-off is announced too, often before its answer is back:
+        // compare only once it has landed, or the officer is told of their own change.
+        for (let i = 0; this.busy && i < BUSY_WAIT_STEPS; i++) await new Promise((r) => setTimeout(r, BUSY_WAIT_STEP_MS));
         await this.refreshOverview();
         const open = this.assessment;
         if (open && heard.changes.some((c) => ['assessment', 'revision', 'signature', 'co_signature'].includes(c.table))) {
