@@ -20,6 +20,15 @@ import { unsavedChanges, unsavedIntro } from './unsaved-changes.js';
 import type { LaserInput } from '../../core/index.js';
 
 const LAST_KEY = 'beamwarden.last.v1';
+/** How long one question for register changes may wait on the back end (its limit is 30 s). */
+const CHANGE_WAIT_MS = 25_000;
+/** Between two questions that heard nothing (the wait ran out): a breath, not a busy loop. */
+const CHANGE_PAUSE_MS = 250;
+/** Waiting for this desk's own operation to finish before comparing (at most 30 s). */
+const BUSY_WAIT_STEP_MS = 100;
+const BUSY_WAIT_STEPS = 300;
+/** After a failed question: the host may be restarting. */
+const CHANGE_RETRY_MS = 4000;
 
 export interface Notice {
   readonly kind: 'ok' | 'error' | 'info';
@@ -87,18 +96,22 @@ class Session {
   private following = false;
 
   /**
-   * On an institution register, the changes other officers commit are asked for every few seconds
-   * and the open screens read the register again: the overview always, the open assessment when it
-   * has no unsaved edits and was saved or signed elsewhere. With unsaved edits the officer is told
-   * instead; their save is then checked against the other change as always. A register file has no
-   * changes to hear (only this program writes it), so the asking stops at once.
+   * On an institution register, the open screens hear of the changes other officers commit as they
+   * happen (the question waits on the back end until the next change: a long poll) and read the
+   * register again: the overview always, the open assessment when it has no unsaved edits and was
+   * saved or signed elsewhere. With unsaved edits the officer is told instead; their save is then
+   * checked against the other change as always. A register file has no changes to hear (only this
+   * program writes it), so the asking stops at once.
    */
   private async followChanges(): Promise<void> {
     let heard;
     try {
-      heard = await invoke('register-changes', { since: this.changesSeen });
+      // The first question only starts the listening, and is answered at once.
+      heard = await invoke('register-changes', { since: this.changesSeen, ...(this.following ? { waitMs: CHANGE_WAIT_MS } : {}) });
     } catch {
-      return; // the host is gone or does not offer it: nothing to follow
+      // The host is gone, or the connection broke while waiting: ask again a little later.
+      if (this.following) setTimeout(() => void this.followChanges(), CHANGE_RETRY_MS);
+      return;
     }
     if (!heard.live) return;
     // The first answer only starts the listening: what this desk has on screen is current.
@@ -107,6 +120,9 @@ class Session {
     this.changesSeen = heard.seq;
     if (!first && heard.changes.length > 0) {
       try {
+        // This desk's own save or sign-off is announced too, often before its answer is back:
+        // compare only once it has landed, or the officer is told of their own change.
+        for (let i = 0; this.busy && i < BUSY_WAIT_STEPS; i++) await new Promise((r) => setTimeout(r, BUSY_WAIT_STEP_MS));
         await this.refreshOverview();
         const open = this.assessment;
         if (open && heard.changes.some((c) => ['assessment', 'revision', 'signature', 'co_signature'].includes(c.table))) {
@@ -127,7 +143,8 @@ class Session {
         // A failed refresh is tried again with the next change.
       }
     }
-    setTimeout(() => void this.followChanges(), 4000);
+    // Asked again at once: the back end holds the question until something changes.
+    setTimeout(() => void this.followChanges(), heard.changes.length > 0 ? 0 : CHANGE_PAUSE_MS);
   }
 
   async refreshOverview(): Promise<void> {

@@ -254,6 +254,8 @@ describe.skipIf(skip)(`two hosts on one institution register${skip ? ` (${SKIP_R
     const saved = Date.now();
     await expect.poll(() => laserName(b.page).inputValue(), { timeout: 30_000, interval: 100 }).toBe('Erbium fibre amplifier (bench 1)');
     measured['A saves -> B sees (ms)'] = Date.now() - saved;
+    // A's own save is announced to A's screen too: it is no news to A.
+    expect(await a.page.getByText(/changed in the institution register/).count()).toBe(0);
     // B's screen took it as its own: an edit of B's after it saves without a refusal.
     await laserName(b.page).fill('Erbium fibre amplifier (bench 1, EDFA)');
     await b.page.keyboard.press('Control+s');
@@ -267,6 +269,9 @@ describe.skipIf(skip)(`two hosts on one institution register${skip ? ` (${SKIP_R
     await laserName(b.page).fill('EDFA, bench 1 (B)');
     await a.page.keyboard.press('Control+s');
     await a.page.getByText(/^Saved: revision 1/).waitFor();
+    // B, with unsaved edits, is told at once, naming A's account; B's edits stay.
+    await b.page.getByText(new RegExp(`This assessment was changed in the institution register \\(by ${a.role}\\)\\. Your unsaved edits stay on screen`)).waitFor();
+    expect(await a.page.getByText(/changed in the institution register/).count()).toBe(0);
     await b.page.keyboard.press('Control+s');
     const banner = b.page.getByTestId('stale-save');
     await banner.waitFor();

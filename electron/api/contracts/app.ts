@@ -37,6 +37,6 @@ export interface RegisterChanges {
 
 export type AppHandlers = {
   'app-info': (args: Record<string, never>) => Promise<AppInfo>;
-  /** Changes made to the register since `since` (institution register: heard with LISTEN/NOTIFY). */
-  'register-changes': (args: { readonly since: number }) => Promise<RegisterChanges>;
+  /** Changes made to the register since `since` (institution register: heard with LISTEN/NOTIFY); `waitMs`: wait that long for the next one when there is none yet. */
+  'register-changes': (args: { readonly since: number; readonly waitMs?: number }) => Promise<RegisterChanges>;
 };

@@ -5,6 +5,9 @@ import type { AreaTable } from '../operation.js';
 import { z } from 'zod';
 import { EmptySchema } from '../schemas/common.js';
 
+/** Longest a screen's question for changes is held open (well under any browser or proxy timeout). */
+const MAX_CHANGE_WAIT_MS = 30_000;
+
 export const appTable: AreaTable<AppHandlers, ApiContext> = {
   'app-info': {
     input: EmptySchema,
@@ -22,7 +25,10 @@ export const appTable: AreaTable<AppHandlers, ApiContext> = {
     },
   },
   'register-changes': {
-    input: z.strictObject({ since: z.number().int('must be a whole number').min(0, 'must be 0 or more') }),
-    run: ({ since }, ctx) => ctx.store.registerChanges(since),
+    input: z.strictObject({
+      since: z.number().int('must be a whole number').min(0, 'must be 0 or more'),
+      waitMs: z.number().int('must be a whole number').min(0, 'must be 0 or more').max(MAX_CHANGE_WAIT_MS, `must be at most ${MAX_CHANGE_WAIT_MS}`).optional(),
+    }),
+    run: ({ since, waitMs }, ctx) => ctx.store.registerChanges(since, waitMs),
   },
 };

@@ -34,13 +34,20 @@ import { openPgEngine } from './pg-engine.js';
 import type { OpenOptions, RecordStore, RegisterChange, RegisterChanges, StoreInfo } from './types.js';
 
 /** The changes heard from the register (institution register), kept for open screens to ask after. */
-function changeFeed(engine: RecordEngine): { since(seq: number): Promise<RegisterChanges>; close(): Promise<void> } {
+function changeFeed(engine: RecordEngine): { since(seq: number, waitMs?: number): Promise<RegisterChanges>; close(): Promise<void> } {
   const kept: RegisterChange[] = [];
   let seq = 0;
   let stop: Promise<() => Promise<void>> | null = null;
+  let closed = false;
   const KEEP = 200;
+  // A save commits several rows at once; their announcements arrive together, and a short pause
+  // after the first one hands them to the screen as one answer (one refresh, not five).
+  const GATHER_MS = 100;
+  /** Screens waiting for the next change (long poll): woken by a change or by closing. */
+  const waiting = new Set<() => void>();
+  const answer = (after: number): RegisterChanges => ({ live: true, seq, changes: kept.filter((c) => c.seq > after) });
   return {
-    async since(after) {
+    async since(after, waitMs = 0) {
       const watch = engine.watch;
       if (watch === undefined) return { live: false, seq: 0, changes: [] };
       stop ??= watch((c) => {
@@ -48,11 +55,25 @@ function changeFeed(engine: RecordEngine): { since(seq: number): Promise<Registe
         const operation = c.operation === 'INSERT' || c.operation === 'DELETE' ? c.operation : 'UPDATE';
         kept.push({ seq, table: c.table, id: c.id, operation, by: c.by });
         if (kept.length > KEEP) kept.splice(0, kept.length - KEEP);
+        for (const wake of [...waiting]) wake();
       });
       await stop;
-      return { live: true, seq, changes: kept.filter((c) => c.seq > after) };
+      if (seq > after || waitMs <= 0 || closed) return answer(after);
+      await new Promise<void>((resolve) => {
+        const done = (): void => {
+          clearTimeout(timer);
+          waiting.delete(done);
+          resolve();
+        };
+        const timer = setTimeout(done, waitMs);
+        waiting.add(done);
+      });
+      if (seq > after && !closed) await new Promise((r) => setTimeout(r, GATHER_MS));
+      return answer(after);
     },
     async close() {
+      closed = true;
+      for (const wake of [...waiting]) wake();
       if (stop) await (await stop)();
     },
   };
@@ -67,7 +88,7 @@ function storeOver(ctx: StoreContext, engine: RecordEngine, info: StoreInfo): Re
       await changes.close();
       await engine.close();
     },
-    registerChanges: (since) => changes.since(since),
+    registerChanges: (since, waitMs) => changes.since(since, waitMs),
 
     listSites: () => R.listSites(ctx),
     getSite: (id) => R.getSite(ctx, id),

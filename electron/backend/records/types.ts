@@ -83,8 +83,12 @@ export interface StoreInfo {
 export interface RecordStore {
   readonly info: StoreInfo;
   close(): Promise<void>;
-  /** Changes to the register after `since` (institution register: made by any officer, heard with LISTEN/NOTIFY). */
-  registerChanges(since: number): Promise<RegisterChanges>;
+  /**
+   * Changes to the register after `since` (institution register: made by any officer, heard with
+   * LISTEN/NOTIFY). With `waitMs`, and nothing new yet, the answer waits up to that long for the next
+   * change (a long poll: an open screen hears of a change when it happens, not at its next question).
+   */
+  registerChanges(since: number, waitMs?: number): Promise<RegisterChanges>;
 
   // register
   listSites(): Promise<Site[]>;

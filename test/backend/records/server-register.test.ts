@@ -168,6 +168,34 @@ describe.skipIf(skip)(`institution register on PostgreSQL${skip ? ` (${PG_SKIP_R
     }
   });
 
+  it('a screen waiting for changes (long poll) is answered when another officer commits, not at its next question', async () => {
+    const { room } = await registerRoom(b, 'A0.07');
+    const host = await startTestHost(a);
+    try {
+      const start = await host.ok<RegisterChanges>('register-changes', { since: 0 });
+      const asked = Date.now();
+      const waiting = host.ok<RegisterChanges>('register-changes', { since: start.seq, waitMs: 20_000 });
+      await new Promise((r) => setTimeout(r, 300));
+      const committed = Date.now();
+      await b.updateRoom(room.id, { name: 'Telecom test bench (heard at once)' });
+      const heard = await waiting;
+      const answered = Date.now();
+      expect(heard.changes).toContainEqual(expect.objectContaining({ table: 'room', id: room.id, operation: 'UPDATE' }));
+      // Answered by the change, long before the wait ran out (the figure goes to the report, not a pass mark).
+      expect(answered - asked).toBeLessThan(20_000);
+      process.stderr.write(`long poll: answered ${answered - committed} ms after the other store's update was sent\n`);
+      // Nothing new: the wait runs out and the answer says so.
+      const quiet = await host.ok<RegisterChanges>('register-changes', { since: heard.seq, waitMs: 200 });
+      expect(quiet).toMatchObject({ live: true, seq: heard.seq, changes: [] });
+      // A wait beyond the limit is refused naming the field.
+      const tooLong = await host.call('register-changes', { since: 0, waitMs: 60_000 });
+      expect(tooLong.reply.ok).toBe(false);
+      if (!tooLong.reply.ok) expect(tooLong.reply.error.message).toMatch(/must be at most 30000/);
+    } finally {
+      await host.close();
+    }
+  });
+
   describe('the database refuses changes to signed content (raw SQL as the register owner)', () => {
     let signed: Assessment;
     beforeAll(async () => {
