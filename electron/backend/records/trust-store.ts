@@ -99,16 +99,24 @@ export async function adoptTrustListFile(ctx: StoreContext): Promise<string[]> {
   if (setting.problem !== null || (setting.anchor !== null && setting.anchor !== file.list.anchor)) return [];
   if (!(await registerAnchors(ctx)).includes(file.list.anchor)) return [];
   const list = file.list;
-  await inTransaction(ctx, 'Trust list', async (ctx) => {
-    for (const e of list.entries) {
-      await addEndorsement(ctx, e);
-      if (e.retiredAt) await addRetirement(ctx, e.keyId, e.retiredAt, e.retiredReason ?? '');
-    }
-  });
+  const warnings: string[] = [];
+  try {
+    await inTransaction(ctx, 'Trust list', async (ctx) => {
+      for (const e of list.entries) {
+        await addEndorsement(ctx, e);
+        if (e.retiredAt) await addRetirement(ctx, e.keyId, e.retiredAt, e.retiredReason ?? '');
+      }
+    });
+  } catch (e) {
+    // A reader's account may not write the register: the desk keeps working, and says so.
+    warnings.push(
+      `The endorsements of the trust list file ${file.path} could not be carried into the register (${e instanceof Error ? e.message : String(e)}). ` +
+        'Keys endorsed only there are not trusted until an officer with write access opens the register from this desk.',
+    );
+  }
   if (setting.anchor === null) {
     writeAnchorSetting(ctx.keyDir, list.anchor, ctx.now());
-    await ctx.audit('trust-anchor-configured', 'signing_key', list.anchor, `from the trust list file ${file.path}; fingerprint ${shortKeyFingerprint(list.anchor)}`);
-    return [];
+    if (warnings.length === 0) await ctx.audit('trust-anchor-configured', 'signing_key', list.anchor, `from the trust list file ${file.path}; fingerprint ${shortKeyFingerprint(list.anchor)}`);
   }
-  return [];
+  return warnings;
 }
