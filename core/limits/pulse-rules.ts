@@ -25,11 +25,11 @@
  */
 import { Dec, recordString } from '../numeric/decimal.js';
 import { InputError, requireInRange, requirePositive } from '../errors.js';
-import type { LimitSettings, RuleSetId, Tissue } from '../model/inputs.js';
+import type { LimitSettings, RowCheck, RuleSetId, Tissue } from '../model/inputs.js';
 import type { CountingWindow, CpRuleData, PulseRuleText, RepetitivePulseRules, RuleSetTable } from './table-types.js';
 import { addStep, newTrace, type Trace } from '../trace/trace.js';
 import { condition, evaluate } from './expression.js';
-import { conservativeOn, evaluateFactors, type EdgeSide, type FactorSet } from './factors.js';
+import { conservativeOn, entryWords, evaluateFactors, hasFactorDocumentValues, type EdgeSide, type FactorSet } from './factors.js';
 import { exposureLimit, type ExposureLimitResult, type LimitCandidate } from './exposure-limit.js';
 import { DEFAULT_RULE_SET, DURATION_RANGE_S, RULE_SET_NAME, ruleSetTable } from './rule-sets.js';
 import { groupsAmong, groupWithin, pulsesIn, type Grouping } from './pulse-counting.js';
@@ -155,9 +155,30 @@ interface GroupingTime {
  * Factors the pulse rules need (T_i / T_min, T2, alpha_max), evaluated on their own at the pulse
  * duration: reading ExposureLimitResult.factors would evaluate all twelve factors.
  */
-function pulseFactors(q: PulsedLimitQuery, ruleSet: RuleSetId, tp: Dec, side: EdgeSide = 'upper'): FactorSet {
+function pulseFactors(q: PulsedLimitQuery, ruleSet: RuleSetId, tp: Dec, side: EdgeSide = 'upper', useDocument = false): FactorSet {
   const alpha = q.tissue === 'eye' ? new Dec(q.sourceAngle_rad ?? 0).mul(1000) : new Dec(0);
-  return evaluateFactors(ruleSetTable(ruleSet), new Dec(q.wavelength_nm), tp, alpha, q.settings, side);
+  return evaluateFactors(ruleSetTable(ruleSet), new Dec(q.wavelength_nm), tp, alpha, q.settings, side, useDocument);
+}
+
+/**
+ * The officer's 'differs' checks whose published value changes a factor the pulse rules read here:
+ * the grouping time (T_i / T_min, on either side of an exact band edge), the factor that caps the
+ * counting window (T2) and alpha_max (C_P's source-size break). Empty when there is none.
+ */
+function pulseTimingChecks(q: PulsedLimitQuery, ruleSet: RuleSetId, tp: Dec): RowCheck[] {
+  if (!hasFactorDocumentValues(q.settings)) return [];
+  const rp = ruleSetTable(ruleSet).repetitivePulses;
+  const names = new Set<string>([rp.grouping.factor, 'alpha_max']);
+  for (const w of rp.countingWindows) if (w.cap && 'factor' in w.cap) names.add(w.cap.factor);
+  const out: RowCheck[] = [];
+  for (const side of new Set<EdgeSide>(['upper', rp.grouping.edgeSide])) {
+    const doc = pulseFactors(q, ruleSet, tp, side, true);
+    for (const n of names) {
+      const c = doc.get(n)?.fromDocument;
+      if (c !== undefined && !out.some((x) => x.key === c.key)) out.push(c);
+    }
+  }
+  return out;
 }
 
 /**
@@ -209,6 +230,33 @@ function countingWindow(windows: readonly CountingWindow[], lambda: number, T: D
  * Throws InputError naming the field for bad input.
  */
 export function pulsedExposureLimit(q: PulsedLimitQuery): PulsedLimitResult {
+  const asTable = pulsedWith(q, false);
+  const { tp } = validatePulsed(q);
+  const checks = pulseTimingChecks(q, q.ruleSet ?? DEFAULT_RULE_SET, tp);
+  if (checks.length === 0 || asTable.averagePower === null) return asTable;
+  // The officer recorded that the published grouping time, counting-window cap or alpha_max
+  // differs from the table (SAFETY.md, "Checks of the limit tables"): the pulse rules are
+  // evaluated with the table's and with the published value, and the lower per-pulse limit is
+  // kept, as for a factor in a limit row. A check never raises a limit.
+  const asDocument = pulsedWith(q, true);
+  const documentLower = new Dec(asDocument.perPulse_H_Jm2).lt(asTable.perPulse_H_Jm2);
+  const kept = documentLower ? asDocument : asTable;
+  for (const c of checks) {
+    addStep(kept.trace, {
+      kind: 'warning',
+      label: `Checked factor differs (pulse rules)`,
+      detail:
+        `${entryWords(c.key)} was checked against ${c.reference} by ${c.checkedBy} on ${c.checkedOn}, and the published text differs: it gives ${c.documentExpr ?? ''}. ` +
+        `The pulse rules for the ${q.tissue} (grouping of pulses, the window in which pulses are counted, C_P) were evaluated with the table's value and with the published one; ` +
+        `${documentLower ? 'the published value gives the lower limit and is used' : 'the value as written gives the lower (or the same) limit and is kept'} ` +
+        `(per pulse: as written ${fmt(new Dec(asTable.perPulse_H_Jm2))} J/m², with the published value ${fmt(new Dec(asDocument.perPulse_H_Jm2))} J/m²)`,
+    });
+  }
+  return kept;
+}
+
+/** The three pulse rules with the factors as the table gives them, or (useDocument) with the officer's published values. */
+function pulsedWith(q: PulsedLimitQuery, useDocument: boolean): PulsedLimitResult {
   const { tp, T, f } = validatePulsed(q);
   const ruleSet = q.ruleSet ?? DEFAULT_RULE_SET;
   const base = {
@@ -262,11 +310,11 @@ export function pulsedExposureLimit(q: PulsedLimitQuery): PulsedLimitResult {
   });
 
   // Grouping inside T_i / T_min: the summed energy against the limit for the group duration.
-  const pf = pulseFactors(q, ruleSet, tp);
+  const pf = pulseFactors(q, ruleSet, tp, 'upper', useDocument);
   // A table written lo < lambda <= hi (EU Table 2.6 T_min) gives the lower band's value on an exact
   // band edge (1050, 1400, 1500, 1800, 2600 nm; limit specification errata): grouping.edgeSide.
   const edgeSide = rp.grouping.edgeSide;
-  const gt = groupingTime(table, edgeSide === 'upper' ? pf : pulseFactors(q, ruleSet, tp, edgeSide), q.wavelength_nm);
+  const gt = groupingTime(table, edgeSide === 'upper' ? pf : pulseFactors(q, ruleSet, tp, edgeSide, useDocument), q.wavelength_nm);
   const g: Grouping | null = gt ? groupWithin(f, gt.T_g, T, NT) : null;
   let grouping: PulsedLimitResult['grouping'] = null;
   let groupLimit: ExposureLimitResult | null = null;

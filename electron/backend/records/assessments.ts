@@ -609,13 +609,16 @@ export async function registerKey(ctx: StoreContext, keyId: string, publicKey: s
 
 /** Chain link of the newest signed (not superseded) revision of an assessment, or null. */
 async function newestSignedLink(ctx: StoreContext, a: AssessmentRow): Promise<string | null> {
-  // Only what the statement names (id, number): the content and results are not read here.
-  const prev = await ctx.q.get("SELECT id, revision_no FROM revision WHERE assessment_id = ? AND status = 'signed' ORDER BY revision_no DESC LIMIT 1", a.id) as
-    | Pick<RevisionRow, 'id' | 'revision_no'>
-    | undefined;
-  if (!prev) return null;
-  const sig = await getSignatureRow(ctx, prev.id);
-  return sig ? linkOf(statementFor(a, prev, sig)) : null;
+  // One query (a round trip less on a server): the newest signed revision's number and its
+  // signature, if it has one (LEFT JOIN: a signed revision without its signature gives null, as
+  // before, never an older revision's link). Its content and results are not read here.
+  const row = await ctx.q.get(
+    `SELECT r.id AS signed_revision_id, r.revision_no AS signed_revision_no, s.* FROM revision r LEFT JOIN signature s ON s.revision_id = r.id
+     WHERE r.assessment_id = ? AND r.status = 'signed' ORDER BY r.revision_no DESC LIMIT 1`,
+    a.id,
+  ) as (SignatureRow & { signed_revision_id: string; signed_revision_no: number; revision_id: string | null }) | undefined;
+  if (!row || row.revision_id === null) return null;
+  return linkOf(statementFor(a, { id: row.signed_revision_id, revision_no: row.signed_revision_no }, row));
 }
 
 export const INSERT_SIGNATURE = `INSERT INTO signature (revision_id, person_id, name, role, signed_at, statement, fingerprint, algorithm, signature, key_id,
@@ -710,8 +713,10 @@ export async function commitSignOff(
   await write(ctx, 'Sign-off', async (ctx) => {
     // The row lock of the sign-off: a concurrent save or sign-off of this assessment waits for it.
     await lockRow(ctx, 'assessment', id);
-    await assertNotStale(ctx, id, reviewed, 'sign');
     const again = await newestRevisionHead(ctx, id);
+    // What the officer reviewed must still be the newest (read once with the check below; the
+    // refusal itself names who changed it).
+    if (reviewed !== undefined && (again.id !== reviewed.revisionId || again.version !== reviewed.version)) await assertNotStale(ctx, id, reviewed, 'sign');
     // The save counter too: a save that landed between reading the draft and this transaction
     // changed the content the signature covers (requests of one host now interleave at awaits).
     if (again.id !== draft.id || again.status !== 'draft' || again.version !== draft.version) throw new RecordError('conflict', 'The assessment changed while signing; try again');
