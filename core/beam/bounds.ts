@@ -1,7 +1,7 @@
 /**
  * Input tolerances -> nominal value and conservative bound (largest NOHD and OD, smallest limit),
  * and the input that dominates. Each toleranced input is moved to both ends of its range on its
- * own; then all at once to the ends that lengthen the NOHD. The bound is the worst of every
+ * own; then all at once, to every combination of the ends. The bound is the worst of every
  * evaluation, so it is never below the nominal value (ours; common practice of a worst-case
  * stack-up).
  */
@@ -63,8 +63,7 @@ export function computeBounds(input: BeamInput, ruleSet: RuleSetId, settings: Li
   let od = nominal.od;
   let limitE = nominal.limitE;
   let dominant: { key: Key; moveNohd: Dec; moveOd: Dec } | null = null;
-  let combined: BeamInput = input;
-  let toleranceGiven = false;
+  const applied: Array<{ key: Key; t: number }> = [];
   for (const key of Object.keys(tol) as Key[]) {
     const t = tol[key];
     if (t === undefined || t === 0) continue;
@@ -74,7 +73,7 @@ export function computeBounds(input: BeamInput, ruleSet: RuleSetId, settings: Li
       addStep(trace, { kind: 'note', label: key, detail: `tolerance ±${fmt(new Dec(t * 100))} % given, but this input does not apply to the beam` });
       continue;
     }
-    toleranceGiven = true;
+    applied.push({ key, t });
     const nLo = safeNumbers(lo, ruleSet, settings);
     const nHi = safeNumbers(hi, ruleSet, settings);
     const outs = [nLo, nHi].filter((x): x is CoreNumbers => x !== null);
@@ -82,8 +81,6 @@ export function computeBounds(input: BeamInput, ruleSet: RuleSetId, settings: Li
     let w = outs[0] as CoreNumbers;
     for (const o of outs) if (worse(o, w)) w = o;
     const worstSide = w === nHi ? 1 + t : 1 - t;
-    const moved = perturb(combined, key, worstSide);
-    if (moved) combined = moved;
     for (const o of outs) {
       if (o.nohd.gt(nohd)) nohd = o.nohd;
       if (o.od.gt(od)) od = o.od;
@@ -99,20 +96,35 @@ export function computeBounds(input: BeamInput, ruleSet: RuleSetId, settings: Li
     });
     if (!dominant || moveNohd.gt(dominant.moveNohd) || (moveNohd.eq(dominant.moveNohd) && moveOd.gt(dominant.moveOd))) dominant = { key, moveNohd, moveOd };
   }
-  if (toleranceGiven) {
-    const c = safeNumbers(combined, ruleSet, settings);
-    if (c) {
-      if (c.nohd.gt(nohd)) nohd = c.nohd;
-      if (c.od.gt(od)) od = c.od;
-      if (c.limitE.lt(limitE)) limitE = c.limitE;
-      addStep(trace, { kind: 'formula', label: 'All at once', detail: `every input at its worst end: NOHD ${fmt(c.nohd)} m, OD ${fmt(c.od)}, limit ${fmt(c.limitE)} W/m²` });
-    }
+  // All at once: every corner of the tolerance box (each input at either end; at most 2^5 = 32
+  // evaluations). The worse end of each input on its own is not enough: where an input's two ends
+  // give the same NOHD, OD and limit at the nominal values of the others, it can still matter once
+  // they move (a 1550 nm train whose NOHD is set by one pulse over 1 mm: the repetition rate moves
+  // nothing, but with more energy the average-power limit over 3.5 mm sets the NOHD, and then more
+  // pulses lengthen it).
+  let worst: { n: CoreNumbers; sides: string } | null = null;
+  const corners = applied.length > 0 ? 2 ** applied.length : 0; // none without a tolerance
+  for (let mask = 0; mask < corners; mask++) {
+    let x: BeamInput | null = input;
+    const sides: string[] = [];
+    applied.forEach(({ key, t }, i) => {
+      const up = Math.floor(mask / 2 ** i) % 2 === 1;
+      if (x) x = perturb(x, key, up ? 1 + t : 1 - t);
+      sides.push(`${key} ${up ? '+' : '-'}${fmt(new Dec(t * 100))} %`);
+    });
+    const c = x ? safeNumbers(x, ruleSet, settings) : null;
+    if (!c) continue;
+    if (c.nohd.gt(nohd)) nohd = c.nohd;
+    if (c.od.gt(od)) od = c.od;
+    if (c.limitE.lt(limitE)) limitE = c.limitE;
+    if (!worst || worse(c, worst.n)) worst = { n: c, sides: sides.join(', ') };
   }
+  if (worst) addStep(trace, { kind: 'formula', label: 'All at once', detail: `every combination of the ends; the worst is ${worst.sides}: NOHD ${fmt(worst.n.nohd)} m, OD ${fmt(worst.n.od)}, limit ${fmt(worst.n.limitE)} W/m²` });
   const dominantInput = dominant && (dominant.moveNohd.gt(0) || dominant.moveOd.gt(0)) ? dominant.key : null;
   addStep(trace, {
     kind: 'result',
     label: 'Conservative bound',
-    detail: toleranceGiven
+    detail: applied.length > 0
       ? `NOHD ${fmt(nohd)} m, OD ${fmt(od)}, limit ${fmt(limitE)} W/m²; dominant input: ${dominantInput ?? 'none (no tolerance moves the result)'}`
       : 'no tolerances given: the conservative bound equals the nominal value',
   });

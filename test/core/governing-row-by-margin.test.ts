@@ -58,3 +58,35 @@ describe('the limit summary names the row with the lowest margin (through evalua
     ]);
   });
 });
+
+// Two criteria with EXACTLY the same lowest limit over different apertures (the case line 34 of
+// core/beam/governing-by-margin.ts decides): ICNIRP 2013 set without conservative mode, exactly
+// 1400 nm, one 10 ns pulse. The cornea row of 1400-1500 nm gives 1e3 J/m² for 1 ns-1 ms (EU Directive
+// Table 2.2, read; same value in ICNIRP 2013, from memory) over 1 mm (Table 2.2 note b, read); the
+// skin limit used for the cornea from 1200 nm (ICNIRP 2013 recommendation, CORNEA2024 abstract, read)
+// gives 200 C_A J/m² for 1 ns-100 ns with C_A = 5 at 1050-1400 nm (EU Table 2.4, read) = 1e3 J/m² too,
+// over 3.5 mm (ours). A 0.5 mm beam puts the whole 1 mJ inside either aperture: 4Q/(pi (1 mm)²) =
+// 1273 J/m² (ratio 1.27) against 4Q/(pi (3.5 mm)²) = 104 J/m² (ratio 0.104). The named row must be
+// the 1 mm one with the HIGHER ratio of the two equal limits, so no "Governing row" correction is
+// written: the summary already names the row that governs.
+describe('equal lowest limits over different apertures', () => {
+  const x: BeamInput = {
+    ruleSet: 'icnirp2013',
+    settings: { conservative: false },
+    wavelength_nm: 1400,
+    emission: { kind: 'pulsed', pulseEnergy_J: 1e-3, pulseDuration_s: 1e-8 },
+    beam: { diameter_m: 0.0005, divergence_rad: 0.001, definition: '1/e' },
+  };
+  it.each([
+    ['one 10 ns pulse (one row on each side of 1400 nm)', 1e-8, 1e11],
+    ['one 1 ns pulse (two rows on each side, duration edge)', 1e-9, 1e12],
+  ] as const)('1400 nm, 1 mJ, %s: 1e3 J/m² over 1 mm, OD log10(1.273), no correction step', (_n, tp, E) => {
+    const r = evaluateBeam({ ...x, emission: { kind: 'pulsed', pulseEnergy_J: 1e-3, pulseDuration_s: tp } });
+    expect(Number(r.mpe.H_Jm2)).toBe(1000);
+    expect(Number(r.mpe.E_Wm2)).toBe(E);
+    expect(r.mpe.aperture_m).toBe('0.001');
+    expect(r.mpe.governingRow).toBe('H-E-IR1400-1');
+    expect(Number(r.od.od)).toBeCloseTo(Math.log10(4e-3 / (Math.PI * 1e-6) / 1000), 12);
+    expect(r.trace.steps.filter((s) => s.label === 'Governing row')).toEqual([]);
+  });
+});

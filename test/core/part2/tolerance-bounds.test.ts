@@ -8,7 +8,7 @@
 //   (common practice, worked-examples.md aversion-response-time);
 //   OD = log10(4 P / (pi (7 mm)²) / E) for a beam narrower than the 7 mm aperture at the exit.
 import { describe, expect, it } from 'vitest';
-import { evaluateBeam, type BeamInput } from '../../../core/index.js';
+import { evaluateBeam, type BeamInput, type BeamResult } from '../../../core/index.js';
 
 const E = (18 * 0.25 ** 0.75) / 0.25;
 const nohd = (P: number, a: number, phi: number): number => (Math.sqrt((4 * P) / (Math.PI * E)) - a) / phi;
@@ -65,5 +65,208 @@ describe('pulsed inputs', () => {
     const b = evaluateBeam(green({ power: 0.1 }, { kind: 'pulsed', pulseEnergy_J: 1e-3, pulseDuration_s: 1e-8 })).bounds;
     expect(b.nohd_m.conservative).toBe(b.nohd_m.nominal);
     expect(b.dominantInput).toBeNull();
+  });
+});
+
+// ---------------------------------------------------------------------------------------------
+// Each end of each tolerance, as the officer sees it: the conservative bound and the trace line of
+// the input (which end is the worse one, and the numbers at that end). Expected values from the
+// range equation and the limit formulas, never read back from the core.
+// ---------------------------------------------------------------------------------------------
+const toleranceSteps = (r: BeamResult): Array<{ label: string; detail: string }> => {
+  const t = r.trace.children.find((c) => c.title.startsWith('Input tolerances'));
+  if (!t) throw new Error('no tolerance trace');
+  return t.steps.map((s) => ({ label: s.label, detail: s.detail }));
+};
+const stepOf = (r: BeamResult, label: string): string => {
+  const s = toleranceSteps(r).find((x) => x.label === label);
+  if (!s) throw new Error(`no trace step ${label}`);
+  return s.detail;
+};
+// Elliptical beam, 1/e axes: (a_x + r phi_x)(a_y + r phi_y) = 4P/(pi E) (range equation with the
+// elliptical spot area pi d_x d_y / 4; domain notes 1.2, derived). Returns r.
+const ellipticalNohd = (P: number, ax: number, ay: number, px: number, py: number): number => {
+  const K = (4 * P) / (Math.PI * E);
+  const A = px * py;
+  const B = ax * py + ay * px;
+  const C = ax * ay - K;
+  return (-B + Math.sqrt(B * B - 4 * A * C)) / (2 * A);
+};
+
+describe('pulse duration and repetition rate tolerances', () => {
+  // One 10 ns pulse at 532 nm: the per-pulse limit H is flat from 1 ns to 5 us (ICNIRP 2013, from
+  // memory; the test above), so the NOHD and OD do not move, but the limit as an irradiance E = H / t
+  // is lowest at the LONGER pulse: the +10 % end is the worse one (lower limit at equal NOHD and OD).
+  it('532 nm, 1 mJ, 10 ns, pulse duration ±10 %: limit bound H / 11 ns, worst at +10 %, NOHD and OD unchanged', () => {
+    const r = evaluateBeam(green({ pulseDuration: 0.1 }, { kind: 'pulsed', pulseEnergy_J: 1e-3, pulseDuration_s: 1e-8 }));
+    const H = Number(r.mpe.H_Jm2);
+    expect(rel(r.bounds.limit_E_Wm2.nominal, H / 1e-8)).toBeLessThan(1e-12);
+    expect(rel(r.bounds.limit_E_Wm2.conservative, H / 1.1e-8)).toBeLessThan(1e-12);
+    expect(r.bounds.nohd_m.conservative).toBe(r.bounds.nohd_m.nominal);
+    expect(r.bounds.odRequired.conservative).toBe(r.bounds.odRequired.nominal);
+    // the trace line: tolerance and worse end in per cent, and that end's limit (6 significant figures)
+    expect(stepOf(r, 'pulseDuration')).toMatch(/^±10 %: worst at \+10 %: .* limit 181818 W\/m²$/);
+    expect(stepOf(r, 'pulseDuration')).not.toContain('skipped');
+    expect(stepOf(r, 'Conservative bound')).toContain('dominant input: none (no tolerance moves the result)');
+  });
+
+  // 532 nm, 1 mJ, 10 ns, 1 kHz over 0.25 s: the reduced single pulse governs, H = 2e-3 J/m² x C_P with
+  // C_P = N^-0.25, N = f T (EU Directive 2006/25/EC Annex II Table 2.6 rule 3; C_P = N^-1/4 in
+  // conservative mode, SAFETY.md "Pulse trains"). More pulses lower the per-pulse limit: NOHD and OD
+  // are worst at +20 % (N = 300). The limit as an irradiance E = H f = 2e-3 f^0.75 T^-0.25 is LOWEST
+  // at -20 % (N = 200): the bound takes each number at its own worst end.
+  it('532 nm, 1 mJ, 10 ns, 1 kHz, repetition rate ±20 %: NOHD and OD at 1.2 kHz, limit at 800 Hz', () => {
+    const x = green({ repetitionRate: 0.2 }, { kind: 'pulsed', pulseEnergy_J: 1e-3, pulseDuration_s: 1e-8, repetitionRate_Hz: 1000 });
+    const r = evaluateBeam(x);
+    const H1 = Number(r.mpe.H_Jm2) * 250 ** 0.25; // the single-pulse limit behind the nominal C_P limit
+    expect(rel(String(H1), 2e-3)).toBeLessThan(1e-9);
+    const H = (f: number): number => 2e-3 * (f * 0.25) ** -0.25;
+    const nohdQ = (Hf: number): number => (Math.sqrt((4 * 1e-3) / (Math.PI * Hf)) - 0.001) / 0.001;
+    expect(rel(r.bounds.nohd_m.conservative, nohdQ(H(1200)))).toBeLessThan(1e-9);
+    expect(rel(r.bounds.odRequired.conservative, Math.log10((4 * 1e-3) / (Math.PI * 0.007 ** 2) / H(1200)))).toBeLessThan(1e-9);
+    expect(rel(r.bounds.limit_E_Wm2.conservative, H(800) * 800)).toBeLessThan(1e-9);
+    expect(r.bounds.dominantInput).toBe('repetitionRate');
+    expect(stepOf(r, 'repetitionRate')).toMatch(/^±20 %: worst at \+20 %: NOHD 1626\.72 m/);
+    expect(stepOf(r, 'Conservative bound')).toContain('dominant input: repetitionRate');
+  });
+
+  // 1550 nm, 1 J, 1 us pulses at 1 Hz over 10 s, 0.5 mm, 1 mrad (1/e). Rule 1: 1e4 J/m² over 1 mm
+  // (1500-1800 nm, 1 ns-10 s; EU Directive Table 2.2, read; aperture 1 mm below 0.3 s, EU Table 2.2
+  // note b, read). Rule 2: 1000 W/m² x 10 s / N = 1e4/N J/m² over 3.5 mm (EU Table 2.3, from memory;
+  // N = f T). At 1.2 Hz (N = 12) rule 2 gives the longer NOHD; the OD at the exit stays with rule 1
+  // over 1 mm (ratio 4Q/(pi (1 mm)²)/1e4 above 4Q/(pi (3.5 mm)²)/(1e4/12)); the limit E = (1e4/N) f
+  // is 1000 W/m² at both ends. So only the NOHD decides: the worse end is +20 %.
+  it('1550 nm, 1 J, 1 Hz over 10 s, repetition rate ±20 %: worst at +20 % by the NOHD alone (equal OD and limit)', () => {
+    const r = evaluateBeam({
+      wavelength_nm: 1550,
+      emission: { kind: 'pulsed', pulseEnergy_J: 1, pulseDuration_s: 1e-6, repetitionRate_Hz: 1 },
+      beam: { diameter_m: 0.0005, divergence_rad: 0.001, definition: '1/e' },
+      exposureDuration_s: 10,
+      tolerances: { repetitionRate: 0.2 },
+    });
+    const nohd12 = (Math.sqrt((4 * 1) / (Math.PI * (1e4 / 12))) - 0.0005) / 0.001;
+    expect(rel(r.bounds.nohd_m.conservative, nohd12)).toBeLessThan(1e-9);
+    expect(rel(r.bounds.odRequired.conservative, Math.log10(4 / (Math.PI * 0.001 ** 2) / 1e4))).toBeLessThan(1e-9);
+    expect(r.bounds.odRequired.conservative).toBe(r.bounds.odRequired.nominal);
+    expect(rel(r.bounds.limit_E_Wm2.conservative, 1000)).toBeLessThan(1e-12);
+    expect(stepOf(r, 'repetitionRate')).toMatch(/^±20 %: worst at \+20 %: NOHD 38\.5882 m/);
+  });
+
+  // 1064 nm, 1 uJ, 1 us at 900 kHz: +20 % would be 1.08 MHz, pulses of 1 us overlapping (input rule:
+  // rate at most 1 / pulse duration). That end is skipped and says so; the bound is the worst of the
+  // nominal value and the end that exists.
+  it('1064 nm, 1 us at 900 kHz, repetition rate ±20 %: the overlapping end is skipped and named in the trace', () => {
+    const x: BeamInput = { wavelength_nm: 1064, emission: { kind: 'pulsed', pulseEnergy_J: 1e-6, pulseDuration_s: 1e-6, repetitionRate_Hz: 9e5 }, beam: { diameter_m: 0.001, divergence_rad: 0.001, definition: '1/e' }, tolerances: { repetitionRate: 0.2 } };
+    const r = evaluateBeam(x);
+    const lo = evaluateBeam({ ...x, emission: { kind: 'pulsed', pulseEnergy_J: 1e-6, pulseDuration_s: 1e-6, repetitionRate_Hz: 9e5 * 0.8 }, tolerances: {} });
+    expect(r.bounds.nohd_m.conservative).toBe(r.bounds.nohd_m.nominal); // fewer pulses: shorter NOHD
+    expect(r.bounds.odRequired.conservative).toBe(r.bounds.odRequired.nominal);
+    expect(r.bounds.limit_E_Wm2.conservative).toBe(lo.mpe.E_Wm2); // E = H f is lowest at 720 kHz
+    expect(stepOf(r, 'repetitionRate')).toMatch(/^±20 %: worst at -20 %: .*\(one end left the valid range and was skipped\)$/);
+  });
+});
+
+describe('elliptical beams: both axes move with the tolerance (range equation for an elliptical spot)', () => {
+  // 532 nm, 1 W CW, axes 1 mm x 2 mm, 1 mrad x 2 mrad (1/e), E = 25.5 W/m² at 0.25 s (EU Table 2.2).
+  const ell = (tolerances: BeamInput['tolerances']): BeamInput => ({
+    wavelength_nm: 532,
+    emission: { kind: 'cw', power_W: 1 },
+    beam: { diameter_m: 0.001, diameterY_m: 0.002, divergence_rad: 0.001, divergenceY_rad: 0.002, definition: '1/e' },
+    ...(tolerances ? { tolerances } : {}),
+  });
+  const CASES: ReadonlyArray<readonly [string, BeamInput['tolerances'], number, string]> = [
+    ['divergence ±10 %: 0.9 x 1.8 mrad', { divergence: 0.1 }, ellipticalNohd(1, 0.001, 0.002, 0.0009, 0.0018), 'divergence'],
+    ['diameter ±20 %: 0.8 x 1.6 mm', { diameter: 0.2 }, ellipticalNohd(1, 0.0008, 0.0016, 0.001, 0.002), 'diameter'],
+    ['both: all at once 0.8 x 1.6 mm and 0.9 x 1.8 mrad', { divergence: 0.1, diameter: 0.2 }, ellipticalNohd(1, 0.0008, 0.0016, 0.0009, 0.0018), 'divergence'],
+  ];
+  it.each(CASES)('%s', (_n, tol, nohdC, dominant) => {
+    const r = evaluateBeam(ell(tol));
+    expect(rel(r.bounds.nohd_m.nominal, ellipticalNohd(1, 0.001, 0.002, 0.001, 0.002))).toBeLessThan(1e-9);
+    expect(rel(r.bounds.nohd_m.conservative, nohdC)).toBeLessThan(1e-9);
+    expect(r.bounds.dominantInput).toBe(dominant);
+  });
+});
+
+describe('below the limit: the OD decides between equal NOHDs, and the dominant input', () => {
+  // 532 nm, 10 uW CW, 1 mm, 1 mrad: 4P/(pi (7 mm)²) = 0.26 W/m² < 25.5 W/m², so the NOHD is 0 at
+  // every end; the OD (negative: no filter needed) still moves with the power, log10(1.1) at +10 %.
+  // Divergence moves nothing at the exit. The dominant input is the one that moves the OD, whatever
+  // the order in which the tolerances were given.
+  const low = (tolerances: BeamInput['tolerances']): BeamInput => ({ ...green(tolerances, { kind: 'cw', power_W: 1e-5 }) });
+  const odLow = (P: number): number => Math.log10((4 * P) / (Math.PI * 0.007 ** 2) / E);
+  it.each([
+    ['power first', { power: 0.1, divergence: 0.1 }],
+    ['divergence first', { divergence: 0.1, power: 0.1 }],
+  ] as const)('10 uW, power ±10 %, divergence ±10 % (%s): NOHD 0, OD bound at 11 uW, dominant power', (_n, tol) => {
+    const r = evaluateBeam(low(tol));
+    expect(r.bounds.nohd_m.conservative).toBe('0');
+    expect(rel(r.bounds.odRequired.conservative, odLow(1.1e-5))).toBeLessThan(1e-9);
+    expect(r.bounds.dominantInput).toBe('power');
+    expect(stepOf(r, 'power')).toMatch(/^±10 %: worst at \+10 %: NOHD 0 m/);
+    expect(stepOf(r, 'divergence')).toMatch(/^±10 %: worst at -10 %/);
+  });
+});
+
+describe('tolerances that do not apply or are zero leave the trace without a bound', () => {
+  it('energy ±10 % on a CW beam: the note names the tolerance in per cent', () => {
+    const r = evaluateBeam(green({ energy: 0.1 }));
+    expect(stepOf(r, 'energy')).toBe('tolerance ±10 % given, but this input does not apply to the beam');
+  });
+  it.each([
+    ['no tolerances', undefined],
+    ['a tolerance of 0 %', { power: 0 }],
+  ] as const)('%s: no evaluation at the ends and none all at once', (_n, tol) => {
+    const r = evaluateBeam(green(tol));
+    expect(toleranceSteps(r).map((s) => s.label)).toEqual(['Conservative bound']);
+    expect(stepOf(r, 'Conservative bound')).toBe('no tolerances given: the conservative bound equals the nominal value');
+  });
+});
+
+describe('all at once: every combination of the ends', () => {
+  // DEFECT found by mutation testing (2026-12-02): the all-at-once evaluation used to move each input
+  // to the end that was worse ON ITS OWN. 1550 nm, 8 mJ, 1 us pulses at 1 Hz over 10 s, 0.5 mm,
+  // 1 mrad (1/e). Rule 1: 1e4 J/m² over 1 mm; rule 2: 1000 W/m² x 10 s / N over 3.5 mm, N = f T
+  // (EU Directive Table 2.2 and note b, read; Table 2.3, from memory; Table 2.6 rules 1 and 2, read).
+  // At 8 mJ the beam over 3.5 mm (4Q/(pi (3.5 mm)²) = 832 J/m²) stays below the rule-2 limit for
+  // N = 8 to 12, so the NOHD (0.509 m) is set by rule 1 and the repetition rate moves nothing: its
+  // "worse end" fell to -20 % by the tie-break. With the energy at +30 % (10.4 mJ, 1081 J/m² over
+  // 3.5 mm) rule 2 sets the NOHD, and then +20 % (N = 12, 833 J/m²) is the worst: NOHD
+  // (sqrt(4 x 10.4 mJ / (pi 833 J/m²)) - 0.5 mm) / 1 mrad = 3.486 m. The old bound was 3.139 m
+  // (energy alone), 10 % short.
+  it('1550 nm, 8 mJ, 1 Hz, energy ±30 % and repetition rate ±20 %: NOHD bound 3.486 m at +30 % and +20 %', () => {
+    const r = evaluateBeam({
+      wavelength_nm: 1550,
+      emission: { kind: 'pulsed', pulseEnergy_J: 8e-3, pulseDuration_s: 1e-6, repetitionRate_Hz: 1 },
+      beam: { diameter_m: 0.0005, divergence_rad: 0.001, definition: '1/e' },
+      exposureDuration_s: 10,
+      tolerances: { energy: 0.3, repetitionRate: 0.2 },
+    });
+    const Q = 8e-3 * 1.3;
+    expect(rel(r.bounds.nohd_m.nominal, (Math.sqrt((4 * 8e-3) / (Math.PI * 1e4)) - 0.0005) / 0.001)).toBeLessThan(1e-9);
+    expect(rel(r.bounds.nohd_m.conservative, (Math.sqrt((4 * Q) / (Math.PI * (1e4 / 12))) - 0.0005) / 0.001)).toBeLessThan(1e-9);
+    // the OD at the exit stays with rule 1 over 1 mm: log10(4Q/(pi (1 mm)²) / 1e4)
+    expect(rel(r.bounds.odRequired.conservative, Math.log10((4 * Q) / (Math.PI * 1e-6) / 1e4))).toBeLessThan(1e-9);
+    expect(r.bounds.dominantInput).toBe('energy');
+    expect(stepOf(r, 'All at once')).toMatch(/the worst is energy \+30 %, repetitionRate \+20 %: NOHD 3\.48623 m/);
+  });
+
+  // Each input on its own can still give the worst number: the 1400-1500 nm limit dips at 1 ms, where
+  // the rows 1e3 J/m² (below 1 ms) and 5.6e3 t^0.25 J/m² (from 1 ms) meet, both evaluated on the edge
+  // (EU Directive Table 2.2, read; SAFETY.md "Exact boundaries"): 5.6e3 x (1e-3)^0.25 = 995.8 J/m².
+  // At 0.99 ms the limit is 1e3, at 1.01 ms 5.6e3 x (1.01e-3)^0.25 = 998.3 J/m². With energy ±10 %,
+  // the energy's own end (11 mJ at exactly 1 ms, 995.8 J/m²) is worse than every combination of the
+  // ends (11 mJ at 1.01 ms, 998.3 J/m²). 1450 nm, 10 mJ, 1 ms, 0.5 mm, 1 mrad, aperture 1 mm (t < 0.3 s).
+  it('1450 nm, 10 mJ, 1 ms, energy ±10 % and pulse duration ±1 %: NOHD and OD bounds at 11 mJ and exactly 1 ms', () => {
+    const r = evaluateBeam({
+      wavelength_nm: 1450,
+      emission: { kind: 'pulsed', pulseEnergy_J: 1e-2, pulseDuration_s: 1e-3 },
+      beam: { diameter_m: 0.0005, divergence_rad: 0.001, definition: '1/e' },
+      tolerances: { energy: 0.1, pulseDuration: 0.01 },
+    });
+    const Hdip = 5.6e3 * 1e-3 ** 0.25;
+    expect(rel(r.bounds.nohd_m.conservative, (Math.sqrt((4 * 1.1e-2) / (Math.PI * Hdip)) - 0.0005) / 0.001)).toBeLessThan(1e-9);
+    expect(rel(r.bounds.odRequired.conservative, Math.log10((4 * 1.1e-2) / (Math.PI * 1e-6) / Hdip))).toBeLessThan(1e-9);
+    // the limit as an irradiance is lowest at the longer pulse: 5.6e3 (1.01 ms)^0.25 / 1.01 ms
+    expect(rel(r.bounds.limit_E_Wm2.conservative, (5.6e3 * 1.01e-3 ** 0.25) / 1.01e-3)).toBeLessThan(1e-9);
   });
 });

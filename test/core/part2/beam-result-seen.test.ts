@@ -1,0 +1,154 @@
+// What the officer reads at the head of a beam's result and in a refusal, through evaluateBeam and
+// evaluateRoom: the emission line (result card, report front page, plan findings), the beam's name,
+// and the field an error names (the form highlights it; a room names the laser and beam by position).
+// These are wording and naming, not physics: each case states the rule it checks (ours unless cited).
+import { describe, expect, it } from 'vitest';
+import { evaluateBeam, evaluateRoom, InputError, type BeamInput, type RoomInput } from '../../../core/index.js';
+
+const beam = { diameter_m: 0.001, divergence_rad: 0.001, definition: '1/e' } as const;
+
+describe('the emission line and the default name', () => {
+  it.each([
+    ['CW', { kind: 'cw', power_W: 0.005 }, 'CW 5 mW', '532 nm CW'],
+    ['one pulse', { kind: 'pulsed', pulseEnergy_J: 1e-3, pulseDuration_s: 1e-8 }, 'pulsed 1 mJ per pulse, 10 ns, single pulse', '532 nm pulsed'],
+    ['a train', { kind: 'pulsed', pulseEnergy_J: 2.5e-6, pulseDuration_s: 1e-9, repetitionRate_Hz: 8e7 }, 'pulsed 2.5 µJ per pulse, 1 ns, 80 MHz', '532 nm pulsed'],
+  ] as const)('%s: "%s"', (_n, emission, summary, label) => {
+    const r = evaluateBeam({ wavelength_nm: 532, emission, beam });
+    expect(r.emissionSummary).toBe(summary);
+    expect(r.label).toBe(label);
+    expect(r.beamId).toBe('beam-532nm');
+  });
+});
+
+// A limit function names its own parameter (repetitionRate_Hz); the officer's form has it under
+// the emission, and a room adds the laser's and the beam's position.
+const overlap: BeamInput = { id: 'x', wavelength_nm: 1064, emission: { kind: 'pulsed', pulseEnergy_J: 1e-6, pulseDuration_s: 1e-6, repetitionRate_Hz: 2e6 }, beam };
+const lensOnPoint: BeamInput = { id: 'x', wavelength_nm: 532, emission: { kind: 'cw', power_W: 1 }, beam: { ...beam, diameter_m: 0 }, viewing: { lens: { focalLength_m: 0.1 } } };
+const fieldOf = (f: () => unknown): string => {
+  try {
+    f();
+  } catch (e) {
+    expect(e).toBeInstanceOf(InputError);
+    return (e as InputError).field;
+  }
+  throw new Error('no error');
+};
+const good: BeamInput = { id: 'a1', wavelength_nm: 532, emission: { kind: 'cw', power_W: 0.001 }, beam };
+const room = (b: BeamInput): RoomInput => ({ lasers: [{ id: 'A', name: 'Laser A', beams: [good] }, { id: 'B', name: 'Laser B', beams: [b] }] });
+
+describe('refusals name the field as the form shows it', () => {
+  it.each([
+    ['1 us pulses at 2 MHz overlap (rate at most 1 / pulse duration)', overlap, 'emission.repetitionRate_Hz', 'lasers[1].beams[0].emission.repetitionRate_Hz'],
+    ['a lens on a beam of exit diameter 0 needs the diameter on the lens', lensOnPoint, 'viewing.lens.beamDiameterAtLens_m', 'lasers[1].beams[0].viewing.lens.beamDiameterAtLens_m'],
+  ] as const)('%s', (_n, b, beamField, roomField) => {
+    expect(fieldOf(() => evaluateBeam(b))).toBe(beamField);
+    expect(fieldOf(() => evaluateRoom(room(b)))).toBe(roomField);
+  });
+});
+
+const topSteps = (r: ReturnType<typeof evaluateBeam>, label: string): string[] => r.trace.steps.filter((s) => s.label === label).map((s) => s.detail);
+const cw = (nm: number, extra: Partial<BeamInput> = {}): BeamInput => ({ wavelength_nm: nm, emission: { kind: 'cw', power_W: 1e-3 }, beam, ...extra });
+const INVISIBLE_WARNING = /aversion response only works for visible light/;
+
+describe('exposure durations: the 0.25 s warning, the default note, the skin duration', () => {
+  // The aversion response protects only in the visible, 400-700 nm, both ends included (trade fact
+  // aversion-response-time, worked-examples.md; common practice): 0.25 s for an invisible beam is
+  // flagged, 0.25 s at 400 or 700 nm is not.
+  it.each([
+    [399, true],
+    [400, false],
+    [700, false],
+    [701, true],
+    [1064, true],
+  ] as const)('%s nm over 0.25 s: warning %s', (nm, warned) => {
+    const r = evaluateBeam(cw(nm, { exposureDuration_s: 0.25 }));
+    expect(r.warnings.some((w) => INVISIBLE_WARNING.test(w))).toBe(warned);
+  });
+  it('1064 nm with its default 10 s: no warning', () => {
+    expect(evaluateBeam(cw(1064)).warnings.some((w) => INVISIBLE_WARNING.test(w))).toBe(false);
+  });
+  it('the 0.25 s default in the visible carries the note that deliberate viewing needs longer; a given duration or the infrared does not', () => {
+    expect(topSteps(evaluateBeam(cw(532)), 'Exposure duration')).toEqual([expect.stringMatching(/0\.25 s default covers unintended viewing only/)]);
+    expect(topSteps(evaluateBeam(cw(532, { exposureDuration_s: 0.25 })), 'Exposure duration')).toEqual([]);
+    expect(topSteps(evaluateBeam(cw(1064)), 'Exposure duration')).toEqual([]);
+  });
+  // Skin: 30 000 s below 400 nm (UV effects add up over the day), 10 s from 400 nm (common
+  // practice, SAFETY.md "Large irradiated skin areas"), or the duration given.
+  it.each([
+    ['355 nm default', cw(355), 30000, 'ultraviolet: 30 000 s (common practice)'],
+    ['400 nm default', cw(400), 10, 'skin: no aversion response, 10 s (common practice, ours)'],
+    ['400 nm, 5 s given', cw(400, { exposureDuration_s: 5 }), 5, 'given by the caller'],
+  ] as const)('%s: skin limit over %s s', (_n, x, T, why) => {
+    const r = evaluateBeam(x);
+    expect(r.skinMpe.exposureDuration_s).toBe(T);
+    expect(r.skinMpe.durationWhy).toBe(why);
+  });
+});
+
+describe('pulses shorter than the tables (SAFETY.md "Pulses shorter than 100 fs")', () => {
+  const fs = (t: number, conservative = true): BeamInput => ({ wavelength_nm: 800, emission: { kind: 'pulsed', pulseEnergy_J: 1e-6, pulseDuration_s: t }, beam, settings: { conservative } });
+  it('50 fs, conservative: the top of the trace says the limits are scaled by t/1e-13 = 0.5; the replaced-entries warning lists table entries only', () => {
+    const r = evaluateBeam(fs(5e-14));
+    expect(topSteps(r, 'Pulse shorter than 100 fs')).toEqual([expect.stringMatching(/scaled by t\/1e-13 = 0\.5 \(conservative mode, ours\)/)]);
+    expect(r.warnings.filter((w) => w.startsWith('Pulse duration 50 fs is shorter than the limit tables'))).toHaveLength(1);
+    expect(r.warnings).toContain('Conservative mode: unverified limit-table entries were replaced by stricter values (H-E-NIR1-1); the limits may be lower than the published ones until verified.');
+  });
+  it('50 fs, conservative mode off: the 100 fs limits unchanged, said so; no replaced entries', () => {
+    const r = evaluateBeam(fs(5e-14, false));
+    expect(topSteps(r, 'Pulse shorter than 100 fs')).toEqual([expect.stringMatching(/100 fs limits are used unchanged/)]);
+    expect(r.warnings.some((w) => w.startsWith('Conservative mode'))).toBe(false);
+  });
+  it('exactly 100 fs is in the tables: no flag', () => {
+    expect(topSteps(evaluateBeam(fs(1e-13)), 'Pulse shorter than 100 fs')).toEqual([]);
+  });
+});
+
+describe('the input lines at the top of the trace', () => {
+  it('an elliptical beam names its second axis; the missing divergence of that axis is the first one', () => {
+    const r = evaluateBeam(cw(532, { beam: { ...beam, diameterY_m: 0.002 } }));
+    expect(topSteps(r, 'Beam')).toEqual(['diameter 0.001 m, divergence 0.001 rad, definition 1/e, profile gaussian, second axis 0.002 m / 0.001 rad']);
+    const r2 = evaluateBeam(cw(532, { beam: { ...beam, divergenceY_rad: 0.003 } }));
+    expect(topSteps(r2, 'Beam')).toEqual(['diameter 0.001 m, divergence 0.001 rad, definition 1/e, profile gaussian, second axis 0.001 m / 0.003 rad']);
+    expect(topSteps(evaluateBeam(cw(532)), 'Beam')).toEqual(['diameter 0.001 m, divergence 0.001 rad, definition 1/e, profile gaussian']);
+  });
+  it('a top-hat beam given at 1/e points: the warning reaches the result and the trace', () => {
+    const r = evaluateBeam(cw(1064, { beam: { ...beam, profile: 'tophat' } }));
+    const w = r.warnings.filter((x) => x.startsWith('The beam is marked top-hat'));
+    expect(w).toHaveLength(1);
+    expect(topSteps(r, 'Beam definition')).toEqual(w);
+  });
+  // Beer-Lambert credit is optional (ANSI Z136.6, from memory); 0 means none and is not mentioned.
+  it('attenuation 0 is no credit (no step, same NOHD); 0.01 1/m is stated and shortens the NOHD', () => {
+    const none = evaluateBeam(cw(532, { emission: { kind: 'cw', power_W: 1 } }));
+    const zero = evaluateBeam(cw(532, { emission: { kind: 'cw', power_W: 1 }, viewing: { attenuation_per_m: 0 } }));
+    const some = evaluateBeam(cw(532, { emission: { kind: 'cw', power_W: 1 }, viewing: { attenuation_per_m: 0.01 } }));
+    expect(zero.nohd_m).toBe(none.nohd_m);
+    expect(topSteps(zero, 'Atmospheric attenuation')).toEqual([]);
+    expect(topSteps(some, 'Atmospheric attenuation')).toEqual([expect.stringMatching(/^mu = 0\.01 1\/m credited/)]);
+    expect(Number(some.nohd_m)).toBeLessThan(Number(none.nohd_m));
+  });
+  it('a beam keeps its own id and label; in a room a beam without id is named after its laser and position', () => {
+    const r = evaluateBeam(cw(532, { id: 'b7', label: 'Pump, 532 nm' }));
+    expect([r.beamId, r.label]).toEqual(['b7', 'Pump, 532 nm']);
+    const rr = evaluateRoom({ lasers: [{ id: 'L1', name: 'Laser 1', beams: [cw(532), cw(633)] }] });
+    expect(rr.beams.map((b) => [b.beamId, b.laserId])).toEqual([
+      ['L1-b0', 'L1'],
+      ['L1-b1', 'L1'],
+    ]);
+  });
+});
+
+describe('a limit-table row checked as differing is flagged on the result (SAFETY.md "Checks of the limit tables")', () => {
+  const check = (verdict: 'matches' | 'differs', row: string): BeamInput['settings'] => ({
+    rowChecks: [{ key: row, verdict, ...(verdict === 'differs' ? { documentExpr: '1' } : {}), checkId: 'c1', reference: 'IEC 60825-1:2014 Table A.1', checkedBy: 'Dr. Imre Calloway-Senn', checkedOn: '2026-11-30' }],
+  });
+  it('532 nm, 1 mW: a "differs" check of the governing row gives one warning naming it; "matches" gives none', () => {
+    const row = evaluateBeam(cw(532)).mpe.governingRow;
+    const differs = evaluateBeam(cw(532, { settings: check('differs', row) }));
+    const flagged = differs.warnings.filter((w) => w.startsWith('Limit-table '));
+    expect(flagged).toHaveLength(1);
+    expect(flagged[0]).toContain(`row ${row} was checked`);
+    expect(flagged[0]).toContain('the published text differs');
+    expect(evaluateBeam(cw(532, { settings: check('matches', row) })).warnings.filter((w) => w.startsWith('Limit-table '))).toEqual([]);
+  });
+});
