@@ -131,10 +131,13 @@ class Session {
     return null;
   }
 
-  /** Open a room in the workspace: its newest assessment, or a new draft from the register. */
-  async openRoom(roomId: string, assessmentId?: string): Promise<void> {
-    if (!(await this.confirmDiscard())) return;
-    await this.run(async () => {
+  /**
+   * Open a room in the workspace: its newest assessment, or a new draft from the register. False
+   * when the officer chose to keep editing the open draft instead (or the room could not be read).
+   */
+  async openRoom(roomId: string, assessmentId?: string): Promise<boolean> {
+    if (!(await this.confirmDiscard())) return false;
+    return this.run(async () => {
       const [room, installations, list] = await Promise.all([
         invoke('room-get', { id: roomId }),
         invoke('installations-list', { roomId }),
