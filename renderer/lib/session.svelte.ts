@@ -161,10 +161,13 @@ class Session {
     return null;
   }
 
-  /** Open a room in the workspace: its newest assessment, or a new draft from the register. */
-  async openRoom(roomId: string, assessmentId?: string): Promise<void> {
-    if (!(await this.confirmDiscard())) return;
-    await this.run(async () => {
+  /**
+   * Open a room in the workspace: its newest assessment, or a new draft from the register. False
+   * when the officer chose to keep editing the open draft instead (or the room could not be read).
+   */
+  async openRoom(roomId: string, assessmentId?: string): Promise<boolean> {
+    if (!(await this.confirmDiscard())) return false;
+    return this.run(async () => {
       const [room, installations, list] = await Promise.all([
         invoke('room-get', { id: roomId }),
         invoke('installations-list', { roomId }),
@@ -198,19 +201,24 @@ class Session {
   }
 
   /** Leaving a draft with unsaved changes asks first, naming what would be lost (nothing is lost silently). */
-  private async confirmDiscard(): Promise<boolean> {
+  private async confirmDiscard(ask: { title: string; confirmLabel: string } = { title: 'Discard the unsaved changes?', confirmLabel: 'Discard changes' }): Promise<boolean> {
     if (!this.dirty) return true;
     const lost = this.unsavedChanges();
     return confirmChoice({
-      title: 'Discard the unsaved changes?',
+      title: ask.title,
       body: `The open assessment “${this.draft?.title.trim() || 'Laser hazard assessment'}” of room ${this.room?.code ?? ''} has changes that are not saved.`,
       consequencesIntro: unsavedIntro(lost.length),
       consequences: lost,
       kept: `${this.storedVersionWords()} To keep your changes, choose Keep editing and save first.`,
-      confirmLabel: 'Discard changes',
+      confirmLabel: ask.confirmLabel,
       cancelLabel: 'Keep editing',
       danger: true,
     });
+  }
+
+  /** Closing the window with unsaved changes asks the same question (true: close and discard). */
+  confirmClose(): Promise<boolean> {
+    return this.confirmDiscard({ title: 'Close Beamwarden and discard the unsaved changes?', confirmLabel: 'Discard changes and close' });
   }
 
   /** The unsaved changes of the open draft, one line each in the workspace's words (empty when none). */

@@ -125,6 +125,25 @@ describe('discarding unsaved changes', () => {
   });
 });
 
+describe('choosing another assessment of the room with unsaved changes', () => {
+  it('Keep editing leaves the list on the open assessment and the edits on screen', async () => {
+    const { roomId } = await openSavedRoom();
+    const other = await store.createAssessment({ roomId, content: { ...(await store.newAssessmentContent(roomId)), title: 'Second assessment of A0.07 (invented)' } });
+    await session.refreshOverview();
+    const openId = session.assessment?.id ?? '';
+    const list = (await screen.findByLabelText('Assessment')) as HTMLSelectElement;
+    await fireEvent.input(screen.getByLabelText('Assessment title'), { target: { value: 'Edited, not saved' } });
+    list.value = other.id;
+    await fireEvent.change(list);
+    await until(shown);
+    expect(within(dialog()).getAllByRole('listitem').map((li) => li.textContent)).toEqual([expect.stringMatching(/^Title “.+” changed to “Edited, not saved”$/)]);
+    await fireEvent.click(within(dialog()).getByRole('button', { name: 'Keep editing' }));
+    await until(() => !shown() && list.value === openId);
+    expect(session.assessment?.id).toBe(openId);
+    expect(session.draft?.title).toBe('Edited, not saved');
+  });
+});
+
 describe('removing eyewear from the shelf', () => {
   it('names the item, its place and markings, and that saved assessments keep their copy; only the named action deletes it', async () => {
     const { site } = await registerRoom(store, 'A0.07');
