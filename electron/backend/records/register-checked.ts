@@ -6,7 +6,7 @@
  */
 import { inTransaction, lockRow, type StoreContext } from './context.js';
 import * as R from './register.js';
-import { assertEntryCurrent } from './register-versions.js';
+import { assertEntryCurrent, entryIsStale, type StoredEntry } from './register-versions.js';
 import { deletePersonIfUnsigned, deleteRoomWithDrafts, deleteSiteWithDrafts } from './register-deletion.js';
 import {
   RecordError,
@@ -34,6 +34,20 @@ async function orGone<T>(get: () => Promise<T>): Promise<T | null> {
   }
 }
 
+/** The version check of register-versions.ts, naming the account that last wrote the entry on an institution register. */
+async function assertCurrent(
+  tx: StoreContext,
+  table: 'site' | 'room' | 'laser_installation' | 'eyewear' | 'person',
+  id: Id,
+  title: string,
+  action: 'edit' | 'delete',
+  now: StoredEntry | null,
+  expected: RegisterBase<object> | undefined,
+): Promise<void> {
+  const by = entryIsStale(now, expected) ? await tx.engine.lastWriter(tx.q, table, id) : null;
+  assertEntryCurrent(title, action, now, expected, by);
+}
+
 type SiteSeen = Partial<SiteDraft>;
 type RoomSeen = Partial<Omit<RoomDraft, 'siteId'>>;
 type InstallationSeen = Partial<Omit<LaserInstallationDraft, 'roomId'>>;
@@ -50,7 +64,7 @@ export function updateSite(ctx: StoreContext, id: Id, patch: SiteSeen, expected?
   return inTransaction(ctx, 'Site', async (tx) => {
     await lockRow(tx, 'site', id);
     const now = await orGone(() => R.getSite(tx, id));
-    assertEntryCurrent(siteTitle(now, expected?.seen), 'edit', now, expected);
+    await assertCurrent(tx, 'site', id, siteTitle(now, expected?.seen), 'edit', now, expected);
     return await R.updateSite(tx, id, patch);
   });
 }
@@ -58,7 +72,7 @@ export function deleteSite(ctx: StoreContext, id: Id, expected?: RegisterBase<Si
   return inTransaction(ctx, 'Site', async (tx) => {
     await lockRow(tx, 'site', id);
     const now = await orGone(() => R.getSite(tx, id));
-    assertEntryCurrent(siteTitle(now, expected?.seen), 'delete', now, expected);
+    await assertCurrent(tx, 'site', id, siteTitle(now, expected?.seen), 'delete', now, expected);
     await deleteSiteWithDrafts(tx, id);
   });
 }
@@ -67,7 +81,7 @@ export function updateRoom(ctx: StoreContext, id: Id, patch: RoomSeen, expected?
   return inTransaction(ctx, 'Room', async (tx) => {
     await lockRow(tx, 'room', id);
     const now = await orGone(() => R.getRoom(tx, id));
-    assertEntryCurrent(roomTitle(now, expected?.seen), 'edit', now, expected);
+    await assertCurrent(tx, 'room', id, roomTitle(now, expected?.seen), 'edit', now, expected);
     return await R.updateRoom(tx, id, patch);
   });
 }
@@ -75,7 +89,7 @@ export function deleteRoom(ctx: StoreContext, id: Id, expected?: RegisterBase<Ro
   return inTransaction(ctx, 'Room', async (tx) => {
     await lockRow(tx, 'room', id);
     const now = await orGone(() => R.getRoom(tx, id));
-    assertEntryCurrent(roomTitle(now, expected?.seen), 'delete', now, expected);
+    await assertCurrent(tx, 'room', id, roomTitle(now, expected?.seen), 'delete', now, expected);
     await deleteRoomWithDrafts(tx, id);
   });
 }
@@ -84,7 +98,7 @@ export function updateInstallation(ctx: StoreContext, id: Id, patch: Installatio
   return inTransaction(ctx, 'Laser installation', async (tx) => {
     await lockRow(tx, 'laser_installation', id);
     const now = await orGone(() => R.getInstallation(tx, id));
-    assertEntryCurrent(laserTitle(now, expected?.seen), 'edit', now, expected);
+    await assertCurrent(tx, 'laser_installation', id, laserTitle(now, expected?.seen), 'edit', now, expected);
     return await R.updateInstallation(tx, id, patch);
   });
 }
@@ -92,7 +106,7 @@ export function deleteInstallation(ctx: StoreContext, id: Id, expected?: Registe
   return inTransaction(ctx, 'Laser installation', async (tx) => {
     await lockRow(tx, 'laser_installation', id);
     const now = await orGone(() => R.getInstallation(tx, id));
-    assertEntryCurrent(laserTitle(now, expected?.seen), 'delete', now, expected);
+    await assertCurrent(tx, 'laser_installation', id, laserTitle(now, expected?.seen), 'delete', now, expected);
     await R.deleteInstallation(tx, id);
   });
 }
@@ -101,7 +115,7 @@ export function updateEyewear(ctx: StoreContext, id: Id, patch: EyewearSeen, exp
   return inTransaction(ctx, 'Eyewear', async (tx) => {
     await lockRow(tx, 'eyewear', id);
     const now = await orGone(() => R.getEyewear(tx, id));
-    assertEntryCurrent(eyewearTitle(now, expected?.seen), 'edit', now, expected);
+    await assertCurrent(tx, 'eyewear', id, eyewearTitle(now, expected?.seen), 'edit', now, expected);
     return await R.updateEyewear(tx, id, patch);
   });
 }
@@ -109,7 +123,7 @@ export function deleteEyewear(ctx: StoreContext, id: Id, expected?: RegisterBase
   return inTransaction(ctx, 'Eyewear', async (tx) => {
     await lockRow(tx, 'eyewear', id);
     const now = await orGone(() => R.getEyewear(tx, id));
-    assertEntryCurrent(eyewearTitle(now, expected?.seen), 'delete', now, expected);
+    await assertCurrent(tx, 'eyewear', id, eyewearTitle(now, expected?.seen), 'delete', now, expected);
     await R.deleteEyewear(tx, id);
   });
 }
@@ -118,7 +132,7 @@ export function updatePerson(ctx: StoreContext, id: Id, patch: PersonSeen, expec
   return inTransaction(ctx, 'Person', async (tx) => {
     await lockRow(tx, 'person', id);
     const now = await orGone(() => R.getPerson(tx, id));
-    assertEntryCurrent(personTitle(now, expected?.seen), 'edit', now, expected);
+    await assertCurrent(tx, 'person', id, personTitle(now, expected?.seen), 'edit', now, expected);
     return await R.updatePerson(tx, id, patch);
   });
 }
@@ -126,7 +140,7 @@ export function deletePerson(ctx: StoreContext, id: Id, expected?: RegisterBase<
   return inTransaction(ctx, 'Person', async (tx) => {
     await lockRow(tx, 'person', id);
     const now = await orGone(() => R.getPerson(tx, id));
-    assertEntryCurrent(personTitle(now, expected?.seen), 'delete', now, expected);
+    await assertCurrent(tx, 'person', id, personTitle(now, expected?.seen), 'delete', now, expected);
     await deletePersonIfUnsigned(tx, id);
   });
 }

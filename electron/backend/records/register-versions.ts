@@ -134,17 +134,24 @@ export function assertEntryCurrent<T extends StoredEntry>(
   action: 'edit' | 'delete',
   current: T | null,
   expected: RegisterBase<object> | undefined,
+  /** On an institution register, the account that last wrote the entry (null on a file). */
+  by: string | null = null,
 ): void {
   if (expected === undefined) return;
   const notDone = action === 'edit' ? 'Your changes were not saved' : 'It was not deleted';
   if (current === null) {
-    throw new RecordError('stale', `${title} was deleted by someone else since you opened it. ${notDone}. Reload the register.`);
+    throw new RecordError('stale', `${title} was deleted by someone else${by !== null ? ` (${by})` : ''} since you opened it. ${notDone}. Reload the register.`);
   }
   if (sameInstant(current.updatedAt, expected.updatedAt)) return;
   const changes = whatChanged(expected.seen as Readonly<Record<string, unknown>> | undefined, current as unknown as Readonly<Record<string, unknown>>);
   const what = changes.length > 0 ? changes.join('; ') : 'it was saved again (no field you see differs)';
   throw new RecordError(
     'stale',
-    `${title} was changed by someone else since you opened it: ${what} (saved at ${clockTime(current.updatedAt)}). ${notDone}; nothing was overwritten. Reload to see the stored version, then make your change again.`,
+    `${title} was changed by someone else since you opened it: ${what} (saved${by !== null ? ` by ${by}` : ''} at ${clockTime(current.updatedAt)}). ${notDone}; nothing was overwritten. Reload to see the stored version, then make your change again.`,
   );
+}
+
+/** True when `assertEntryCurrent` would refuse: only then is the last writer looked up. */
+export function entryIsStale(current: StoredEntry | null, expected: RegisterBase<object> | undefined): boolean {
+  return expected !== undefined && (current === null || !sameInstant(current.updatedAt, expected.updatedAt));
 }

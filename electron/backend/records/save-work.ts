@@ -79,9 +79,11 @@ export async function saveWork(ctx: StoreContext, raw: WorkSave): Promise<WorkSa
       if (now.roomId !== room.id) throw new RecordError('invalid', `Laser "${now.laser.name}" is not in room ${room.code}`);
       if (!sameInstant(now.updatedAt, c.expectedUpdatedAt)) {
         const changed = c.seenLaser !== undefined ? whatChanged({ laser: c.seenLaser }, { laser: now.laser }) : [];
+        // On an institution register the account that saved is named too (several officers share it).
+        const by = await ctx.engine.lastWriter(ctx.q, 'laser_installation', c.id);
         throw new RecordError(
           'stale',
-          `Laser "${now.laser.name}" in the register was changed by someone else at ${clockTime(now.updatedAt)}${changed.length > 0 ? ` (${changed.join('; ')})` : ''} — reload and compare before saving again. Nothing was overwritten.`,
+          `Laser "${now.laser.name}" in the register was changed by someone else${by !== null ? ` (${by})` : ''} at ${clockTime(now.updatedAt)}${changed.length > 0 ? ` (${changed.join('; ')})` : ''} — reload and compare before saving again. Nothing was overwritten.`,
         );
       }
     }

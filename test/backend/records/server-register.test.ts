@@ -168,6 +168,39 @@ describe.skipIf(skip)(`institution register on PostgreSQL${skip ? ` (${PG_SKIP_R
     }
   });
 
+  describe('a stale register edit names the account that saved it (write_record)', () => {
+    const who = () => new URL(PG_ADDRESS).username;
+    it('a room renamed on one desk, then edited from the older version on the other', async () => {
+      const { room } = await registerRoom(a, 'A0.07');
+      const seen = await b.getRoom(room.id);
+      await a.updateRoom(room.id, { name: 'Telecom test bench, bench 1' });
+      const err = await errorOf(() => b.updateRoom(room.id, { notes: 'curtain replaced' }, { updatedAt: seen.updatedAt, seen: { name: seen.name, notes: seen.notes } }));
+      expect(err.code).toBe('stale');
+      expect(err.message).toMatch(new RegExp(`^Room A0\\.07 was changed by someone else since you opened it: name "[^"]*" → "Telecom test bench, bench 1" \\(saved by ${who()} at \\d\\d:\\d\\d\\)\\. Your changes were not saved; nothing was overwritten\\.`));
+    });
+
+    it('a room deleted on one desk, then edited on the other', async () => {
+      const { room } = await registerRoom(a, 'A0.07');
+      const seen = await b.getRoom(room.id);
+      await a.deleteRoom(room.id);
+      const err = await errorOf(() => b.updateRoom(room.id, { notes: 'too late' }, { updatedAt: seen.updatedAt, seen: { code: seen.code, notes: seen.notes } }));
+      expect(err.message).toBe(`Room A0.07 was deleted by someone else (${who()}) since you opened it. Your changes were not saved. Reload the register.`);
+    });
+
+    it('a laser changed on one desk, then saved with the workspace on the other', async () => {
+      const { room } = await registerRoom(a, 'A0.07');
+      const [laser] = await b.listInstallations(room.id);
+      if (!laser) throw new Error('demo room without a laser');
+      await a.updateInstallation(laser.id, { laser: { ...laser.laser, name: `${laser.laser.name} (serviced)` } });
+      const content = await b.newAssessmentContent(room.id);
+      const err = await errorOf(() =>
+        b.saveWork({ roomId: room.id, assessmentId: null, expected: null, content, newLasers: [], changedLasers: [{ id: laser.id, laser: { ...laser.laser, name: 'renamed on desk B' }, expectedUpdatedAt: laser.updatedAt, seenLaser: laser.laser }] }),
+      );
+      expect(err.code).toBe('stale');
+      expect(err.message).toMatch(new RegExp(`^Laser "[^"]+ \\(serviced\\)" in the register was changed by someone else \\(${who()}\\) at \\d\\d:\\d\\d \\(laser name "[^"]+" → "[^"]+ \\(serviced\\)"\\)`));
+    });
+  });
+
   it('a screen waiting for changes (long poll) is answered when another officer commits, not at its next question', async () => {
     const { room } = await registerRoom(b, 'A0.07');
     const host = await startTestHost(a);
