@@ -15,6 +15,8 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { evaluateRoom } from '../../../core/index.js';
 import { openRecordStore, type RecordStore } from '../../../electron/backend/records/index.js';
 import { documentInputFromAssessment, renderDoorNotice, renderReport, type DocumentInput } from '../../../electron/backend/pdf/index.js';
+import { doorNoticeDefinition } from '../../../electron/backend/pdf/documents/door-notice.js';
+import { renderPdf } from '../../../electron/backend/pdf/runtime.js';
 import { pageTexts, pdfInfo } from './pdf-tools.js';
 import { planSvg } from '../../../electron/backend/pdf/plan/plan-svg.js';
 import { documentTable } from '../../../electron/api/handlers/documents.js';
@@ -66,8 +68,31 @@ describe('the room plan on paper (demo room B2.14)', () => {
     const first = await renderDoorNotice(doc, { paper: 'A4', units: 'SI' });
     expect(pdfInfo(first).pages).toBe(1);
     const text = squash(pageTexts(first).join(' '));
-    expect(text).toContain(squash('you are here: door D1 corridor'));
-    expect(text).toContain(squash('You are here'));
+    expect(text).toContain(squash('You are here: door D1 corridor'));
+    expect(text).toContain(squash('Hazard zones shaded; laser controlled area dash-dot.'));
+  });
+
+  it('the plan on the door notice is drawn large enough to read at the door: over 140 pt (49 mm) wide on A4 and 110 pt (39 mm) on Letter at the level the notice is set, its words 7.5 pt or more (the earlier small plan: 108 pt, 5.5 pt words)', async () => {
+    const doc = docs.get('B2.14')!;
+    for (const [paper, least] of [['A4', 140], ['Letter', 110]] as const) {
+      // The level the notice is set at: the first whose document is one page (as renderDoorNotice does).
+      let fit = 0;
+      while (pdfInfo(await renderPdf(doorNoticeDefinition(doc, { paper, units: 'SI' }, fit))).pages > 1) fit++;
+      const svgs: Array<{ svg: string; width: number }> = [];
+      const walk = (node: unknown): void => {
+        if (Array.isArray(node)) node.forEach(walk);
+        else if (node && typeof node === 'object') {
+          const o = node as Record<string, unknown>;
+          if (typeof o.svg === 'string' && o.svg.includes('You are here')) svgs.push({ svg: o.svg, width: Number(/width="([\d.]+)"/.exec(o.svg)?.[1]) });
+          Object.values(o).forEach(walk);
+        }
+      };
+      walk(doorNoticeDefinition(doc, { paper, units: 'SI' }, fit).content);
+      expect(svgs, paper).toHaveLength(1);
+      expect(svgs[0]!.width, `${paper} at level ${fit}`).toBeGreaterThan(least);
+      const sizes = [...svgs[0]!.svg.matchAll(/font-size="([\d.]+)"/g)].map((m) => Number(m[1]));
+      expect(Math.min(...sizes), paper).toBeGreaterThanOrEqual(7.5);
+    }
   });
 
   it('the officer chooses the entrance on the print screen: the API prints the notice for door D2, and refuses a door not on the plan', async () => {
@@ -78,7 +103,7 @@ describe('the room plan on paper (demo room B2.14)', () => {
     const file = await op.run(op.input.parse({ kind: 'door-notice', assessmentId, paper: 'Letter', units: 'SI', entranceId: 'D2' }), ctx);
     const pdf = Buffer.from(file.base64, 'base64');
     expect(pdfInfo(pdf).pages).toBe(1);
-    expect(squash(pageTexts(pdf).join(' '))).toContain(squash('you are here: door D2 to B2.16'));
+    expect(squash(pageTexts(pdf).join(' '))).toContain(squash('You are here: door D2 to B2.16'));
     await expect(op.run(op.input.parse({ kind: 'door-notice', assessmentId, paper: 'A4', units: 'SI', entranceId: 'D9' }), ctx)).rejects.toThrow(/not a door on the room plan/);
   });
 

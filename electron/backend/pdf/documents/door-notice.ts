@@ -11,7 +11,7 @@
  * same message. Details (lasers, contact, fingerprint) are read at the door; crowded rooms get
  * smaller details so the notice stays one page.
  */
-import type { Content, TableCell, TDocumentDefinitions } from 'pdfmake/interfaces';
+import type { Column, Content, TableCell, TDocumentDefinitions } from 'pdfmake/interfaces';
 import { dec } from '../../../../core/numeric/decimal.js';
 import type { DocumentInput, RenderOptions } from '../document-input.js';
 import * as fmt from '../format.js';
@@ -200,16 +200,42 @@ export function doorNoticeDefinition(doc: DocumentInput, opts: RenderOptions, fi
   const base = roomy ? 12.5 : view.lasers.length <= 4 && !letter ? 10.5 : view.lasers.length <= 7 ? 9 : 7.5;
   const detail = Math.max(base * shrink, 5.8); // 5.8 pt: still read at arm's length
   const listSize = (roomy ? 11.5 : view.lasers.length <= 4 && !letter ? 10.5 : 9.5) * near;
-  // With the room plan beside the hazard lines, the symbol takes the crowded-room size.
-  const withPlan = doc.content.input.plan !== undefined;
-  const symbol = (dense || withPlan ? 96 : letter ? 112 : 124) * (fit >= 4 ? 0.62 : fit >= 3 ? 0.8 : 1);
+  const symbol = (dense ? 96 : letter ? 112 : 124) * (fit >= 4 ? 0.62 : fit >= 3 ? 0.8 : 1);
   // From level 3 on, the hazard and class lines give up some size too (still far above 9 mm capitals at the lowest).
   const big = fit >= 4 ? 0.68 : fit >= 3 ? 0.82 : 1;
   const officerContact = [doc.officer.phone, doc.officer.email].filter((x) => x.trim() !== '').join(' · ');
-  // The room plan, small, beside the hazard lines (only when the assessment has a plan).
-  const smallPlan = noticePlan(doc, view, 108 * (fit >= 3 ? 0.85 : 1), dense ? 100 : 128, opts.entranceId);
+  // The room plan (only when the assessment has a plan), beside the contacts below the entry
+  // instructions: as wide as the contacts and fingerprint leave, about 90 mm on A4.
+  const emergencyW = 170;
+  const fingerprintW = 92;
+  const planW = width - emergencyW - fingerprintW - 2 * 12;
+  // The plan gives up height before the lines read from afar do (they shrink from level 3).
+  const planScale = [1, 1, 0.82, 0.72, 0.66, 0.62, 0.6, 0.58][Math.min(fit, NOTICE_FIT_LEVELS - 1)] as number;
+  const roomPlan = noticePlan(doc, view, planW, (letter ? 140 : 185) * planScale, opts.entranceId, fit >= 3 ? 7.5 : 8.5);
   const covering = coveringEyewear(doc);
   const twoColumns = view.lasers.length > 10;
+
+  const beforeYouEnter: Column = {
+    width: '*',
+    stack: [
+      { text: 'Before you enter', bold: true, fontSize: roomy ? 14 : 12 * big, margin: [0, 0, 0, 2] },
+      { ul: entryInstructions(doc, view), fontSize: listSize, lineHeight: 1.05 },
+    ],
+  };
+  // Whom to call and what the notice is for; beside the entry instructions, or (with a plan) in a band below them.
+  const callStack: Content[] = [
+    { text: 'In an emergency call', bold: true, fontSize: 9.5, color: '#B00020' },
+    doc.emergencyContact ? { text: doc.emergencyContact, fontSize: 13 * near, bold: true } : { text: 'Emergency number: ____________________', fontSize: 11, bold: true, margin: [0, 4, 0, 0] },
+    { text: 'Laser safety officer', bold: true, fontSize: 9.5, margin: [0, 4, 0, 0] },
+    { text: doc.officer.name, fontSize: 12 * near, bold: true },
+    { text: officerContact, fontSize: 10.5 * near },
+  ];
+  const roomStack: Content[] = [
+    { text: [{ text: 'Responsible person: ', bold: true }, `${doc.room.responsiblePerson}${doc.room.contact ? ' · ' + doc.room.contact : ''}`], fontSize: 9 * near, margin: [0, roomPlan ? 0 : 3, 0, 0] },
+    { text: [{ text: 'Room: ', bold: true }, `${doc.room.code}${doc.room.name ? ' — ' + doc.room.name : ''}, ${doc.site.name}`], fontSize: 9 * near },
+    { text: [{ text: 'Valid until: ', bold: true }, { text: fmt.calendarDate(doc.content.reviewBy), bold: true }], fontSize: 13 * near, margin: [0, 3, 0, 0] },
+  ];
+  const fingerprintColumn: Column = { width: fingerprintW, stack: [fingerprintStack(doc, dense ? 64 : 76, 8.5)] };
 
   const laserHeader = (): TableCell[] => [{ text: 'Laser type', bold: true }, { text: 'Wavelength', bold: true }, { text: 'Max. output', bold: true }, { text: 'Pulse', bold: true }, { text: 'Class', bold: true }];
   const laserTable = (rows: TableCell[][], widths: Array<number | string>): Content => ({ table: { headerRows: 1, widths, body: [laserHeader(), ...rows] }, layout: CELL_LAYOUT, fontSize: detail });
@@ -233,11 +259,10 @@ export function doorNoticeDefinition(doc: DocumentInput, opts: RenderOptions, fi
           margin: [14, 0, 0, 0],
           stack: [
             ...hazardLines(view).map((t, i, all) => ({ text: t, fontSize: (all.length > 1 && i === 0 ? 22 : all.length > 1 ? 30 : NOTICE_SIZES.hazardLine) * big, bold: true, lineHeight: 1 })),
-            { text: [{ text: `CLASS ${view.highestClass} `, fontSize: (dense || smallPlan ? 40 : NOTICE_SIZES.classLine) * big }, { text: 'LASER AREA', fontSize: 24 * big }], bold: true, margin: [0, 2, 0, 2], lineHeight: 1 },
+            { text: [{ text: `CLASS ${view.highestClass} `, fontSize: (dense ? 40 : NOTICE_SIZES.classLine) * big }, { text: 'LASER AREA', fontSize: 24 * big }], bold: true, margin: [0, 2, 0, 2], lineHeight: 1 },
             { text: precautionFor(view.highestClass).toUpperCase(), fontSize: 13 * Math.max(big, 0.8), bold: true, lineHeight: 1.05 },
           ],
         },
-        ...(smallPlan ? [smallPlan] : []),
       ],
     },
     eyewear.length > 0
@@ -261,35 +286,12 @@ export function doorNoticeDefinition(doc: DocumentInput, opts: RenderOptions, fi
       : { text: 'No protective eyewear is required for the beams assessed.', fontSize: 16, bold: true, margin: [0, 10, 0, 0] },
     { text: 'Lasers in this room', bold: true, fontSize: roomy ? 14 : 11.5 * near, margin: [0, roomy ? 10 : 4 * shrink, 0, 1] },
     lasersBlock,
-    {
-      margin: [0, 8 * shrink, 0, 0],
-      columnGap: 12,
-      columns: [
-        {
-          width: '*',
-          stack: [
-            { text: 'Before you enter', bold: true, fontSize: roomy ? 14 : 12 * big, margin: [0, 0, 0, 2] },
-            { ul: entryInstructions(doc, view), fontSize: listSize, lineHeight: 1.05 },
-          ],
-        },
-        {
-          width: 170,
-          stack: [
-            { text: 'In an emergency call', bold: true, fontSize: 9.5, color: '#B00020' },
-            doc.emergencyContact
-              ? { text: doc.emergencyContact, fontSize: 13 * near, bold: true }
-              : { text: 'Emergency number: ____________________', fontSize: 11, bold: true, margin: [0, 4, 0, 0] },
-            { text: 'Laser safety officer', bold: true, fontSize: 9.5, margin: [0, 4, 0, 0] },
-            { text: doc.officer.name, fontSize: 12 * near, bold: true },
-            { text: officerContact, fontSize: 10.5 * near },
-            { text: [{ text: 'Responsible person: ', bold: true }, `${doc.room.responsiblePerson}${doc.room.contact ? ' · ' + doc.room.contact : ''}`], fontSize: 9 * near, margin: [0, 3, 0, 0] },
-            { text: [{ text: 'Room: ', bold: true }, `${doc.room.code}${doc.room.name ? ' — ' + doc.room.name : ''}, ${doc.site.name}`], fontSize: 9 * near },
-            { text: [{ text: 'Valid until: ', bold: true }, { text: fmt.calendarDate(doc.content.reviewBy), bold: true }], fontSize: 13 * near, margin: [0, 3, 0, 0] },
-          ],
-        },
-        { width: 92, stack: [fingerprintStack(doc, dense ? 64 : 76, 8.5)] },
-      ],
-    },
+    ...(roomPlan
+      ? [
+          { margin: [0, 8 * shrink, 0, 0], columnGap: 12, columns: [beforeYouEnter, roomPlan] } as Content,
+          { margin: [0, 6 * shrink, 0, 0], columnGap: 12, columns: [{ width: '*', stack: callStack }, { width: '*', stack: roomStack }, fingerprintColumn] } as Content,
+        ]
+      : [{ margin: [0, 8 * shrink, 0, 0], columnGap: 12, columns: [beforeYouEnter, { width: emergencyW, stack: [...callStack, ...roomStack] }, fingerprintColumn] } as Content]),
     { text: '', margin: [0, dense ? 3 : 6, 0, 0] },
     cautionBlock(fit >= 6 ? 8.5 : 10, doc),
   ];

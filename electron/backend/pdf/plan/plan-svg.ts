@@ -29,6 +29,8 @@ export interface PlanSvgOptions {
   readonly maxHeight: number;
   /** Small version (door notice): fewer labels, no legend inside. */
   readonly compact?: boolean;
+  /** Letter size of the compact drawing's words (scale bar, "You are here"), pt; 5.5 unless given. */
+  readonly fontSize?: number;
   /** Door marked as "this entrance" (door notice). */
   readonly entranceId?: string;
   readonly laserNames: ReadonlyMap<string, string>;
@@ -104,13 +106,13 @@ export function planSvg(plan: RoomPlan, result: PlanResult | undefined, o: PlanS
   const xs = pts.map((p) => p.x_m);
   const ys = pts.map((p) => p.y_m);
   const margin = o.compact ? 0.35 : 0.6;
-  const fs = o.compact ? 5.5 : 7;
+  const fs = o.compact ? (o.fontSize ?? 5.5) : 7;
   // The door notice marks its entrance outside the room: the side of the drawing beyond that door is
   // made wide enough for the dot and "You are here" (set along the wall), so the words never lie over the room.
   const entrance = plan.doors.find((d) => d.id === o.entranceId);
   const out_ = entrance ? labelSide(entrance.a, entrance.b, planMiddle(plan.outline)) : null;
   const roomFit = (m: { l: number; r: number; b: number; t: number }) =>
-    Math.min(o.maxWidth / (Math.max(...xs) - Math.min(...xs) + m.l + m.r), (o.maxHeight - (o.compact ? 12 : 56)) / (Math.max(...ys) - Math.min(...ys) + m.b + m.t));
+    Math.min(o.maxWidth / (Math.max(...xs) - Math.min(...xs) + m.l + m.r), (o.maxHeight - (o.compact ? fs * 2.2 : 56)) / (Math.max(...ys) - Math.min(...ys) + m.b + m.t));
   const side = { l: margin, r: margin, b: margin, t: margin };
   if (out_) {
     // A wider margin makes the drawing smaller, so the margin in metres is worked out again a few
@@ -132,7 +134,7 @@ export function planSvg(plan: RoomPlan, result: PlanResult | undefined, o: PlanS
   const Hd = (y1 - y0) * s;
   const legendCols = W >= 420 ? 3 : 2;
   // The small plan has its scale bar in a band below the drawing instead of a legend.
-  const legendH = o.compact ? 12 : legendRows(legendCols) * 10 + 6;
+  const legendH = o.compact ? fs * 2.2 : legendRows(legendCols) * 10 + 6;
   const X = (x: number) => (x - x0) * s;
   const Y = (y: number) => (y1 - y) * s;
   const P = (p: { x_m: number | string; y_m: number | string }): Pt => [Number(p.x_m), Number(p.y_m)];
@@ -273,11 +275,13 @@ export function planSvg(plan: RoomPlan, result: PlanResult | undefined, o: PlanS
   // scale bar (1 m or more) and north arrow
   const barM = [0.5, 1, 2, 5, 10, 20, 50].find((m) => m * s >= W / 8) ?? 1;
   const bx = 6;
-  const by = o.compact ? Hd + 10 : Hd - 7;
-  out.push(`<rect x="${bx}" y="${n(by - 3)}" width="${n((barM * s) / 2)}" height="3" fill="#222222"/>`);
-  out.push(`<rect x="${n(bx + (barM * s) / 2)}" y="${n(by - 3)}" width="${n((barM * s) / 2)}" height="3" fill="#FFFFFF" stroke="#222222" stroke-width="0.5"/>`);
-  text(bx, by - 5, '0');
-  text(bx + barM * s, by - 5, `${barM} m`, 'middle');
+  // On the small plan the bar and its words grow with the letter size (the words above the bar).
+  const barH = o.compact ? Math.max(3, fs * 0.45) : 3;
+  const by = o.compact ? Hd + fs * 1.8 : Hd - 7;
+  out.push(`<rect x="${bx}" y="${n(by - barH)}" width="${n((barM * s) / 2)}" height="${n(barH)}" fill="#222222"/>`);
+  out.push(`<rect x="${n(bx + (barM * s) / 2)}" y="${n(by - barH)}" width="${n((barM * s) / 2)}" height="${n(barH)}" fill="#FFFFFF" stroke="#222222" stroke-width="0.5"/>`);
+  text(bx, by - barH - 2, '0');
+  text(bx + barM * s, by - barH - 2, `${barM} m`, 'middle');
   if (ratio > 0) text(bx + barM * s + 14, by, `scale 1:${ratio}`, 'start', '#444444');
   if (!o.compact) {
     out.push(`<path d="M${n(W - 10)} 5l3 8h-6z" fill="#222222"/>`);
