@@ -62,8 +62,12 @@ async function activeKeyRow(ctx: StoreContext, personId: Id): Promise<PersonKeyR
  * configured here, a damaged setting, or an anchor the register was not set up with (issue 15,
  * item 4: "a database whose anchor differs from the desk's configured one is reported plainly").
  */
-export async function trustProblems(ctx: StoreContext, read: { list: { anchor: string } | null; problem: string | null }): Promise<string[]> {
-  const pins = await registerAnchors(ctx);
+export async function trustProblems(
+  ctx: StoreContext,
+  read: { list: { anchor: string } | null; problem: string | null },
+  known?: readonly string[],
+): Promise<string[]> {
+  const pins = known ?? (await registerAnchors(ctx));
   const problems: string[] = [];
   if (read.problem) problems.push(read.problem);
   const pinned = pins.map(shortKeyFingerprint).join(', ');
@@ -94,15 +98,16 @@ export async function trustListInfo(ctx: StoreContext): Promise<TrustListInfo> {
   const setting = readAnchorSetting(ctx.keyDir);
   const list = read.list;
   const trustedKeys = list ? new Set(list.entries.filter((e) => trustOf(list, e.keyId).trusted).map((e) => e.keyId)).size : 0;
+  const pins = await registerAnchors(ctx);
   return {
     path: read.path,
     anchor: list?.anchor ?? null,
     anchorFingerprint: list ? shortKeyFingerprint(list.anchor) : null,
     anchorFull: list ? fullKeyFingerprint(list.anchor) : null,
     anchorSetAt: setting.setAt,
-    registerAnchors: (await registerAnchors(ctx)).map(fullKeyFingerprint),
+    registerAnchors: pins.map(fullKeyFingerprint),
     keys: trustedKeys,
-    problems: await trustProblems(ctx, read),
+    problems: await trustProblems(ctx, read, pins),
   };
 }
 
