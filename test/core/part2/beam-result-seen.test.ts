@@ -152,3 +152,89 @@ describe('a limit-table row checked as differing is flagged on the result (SAFET
     expect(evaluateBeam(cw(532, { settings: check('matches', row) })).warnings.filter((w) => w.startsWith('Limit-table '))).toEqual([]);
   });
 });
+
+// Lens on the beam: r = (f/b0) sqrt(4P/(pi E)) from the focus (ANSI Z136.1 App. B, from memory;
+// domain notes 1.3), b0 in the 1/e convention. 1064 nm, 10 W, EU set over 10 s: E = 10 C_A C_C =
+// 50 W/m² (EU Directive Table 2.3, C_A = 5 and C_C = 1 at 1050-1150 nm; the published lens case
+// derived-lens-1064nm-10W-f200mm uses 50 W/m²).
+describe('lens: the beam diameter on the lens in the 1/e convention', () => {
+  const lens = (b: BeamInput['beam'], atLens?: number): BeamInput => ({
+    ruleSet: 'eu2006',
+    wavelength_nm: 1064,
+    emission: { kind: 'cw', power_W: 10 },
+    beam: b,
+    exposureDuration_s: 10,
+    viewing: { lens: { focalLength_m: 0.2, ...(atLens !== undefined ? { beamDiameterAtLens_m: atLens } : {}) } },
+  });
+  const r = (f: number, b0: number): number => (f / b0) * Math.sqrt((4 * 10) / (Math.PI * 50));
+  const lensDistance = (x: BeamInput): number => Number(evaluateBeam(x).distances.find((d) => d.kind === 'lens')?.distance_m);
+  it.each([
+    ['3 mm on the lens given at 1/e²: b0 = 3 mm / sqrt(2) (SAFETY.md "Beam definitions")', lens({ diameter_m: 0.003, divergence_rad: 1e-3, definition: '1/e2' }, 0.003), r(0.2, 0.003 / Math.SQRT2)],
+    ['3 mm on the lens given at 1/e: used as it is', lens({ diameter_m: 0.003, divergence_rad: 1e-3, definition: '1/e' }, 0.003), r(0.2, 0.003)],
+    ['not given, elliptical 3 mm x 5 mm exit: the smaller axis (slower spread past the focus, longer distance)', lens({ diameter_m: 0.003, diameterY_m: 0.005, divergence_rad: 1e-3, definition: '1/e' }), r(0.2, 0.003)],
+    ['not given, elliptical 5 mm x 3 mm exit: still the smaller axis', lens({ diameter_m: 0.005, diameterY_m: 0.003, divergence_rad: 1e-3, definition: '1/e' }), r(0.2, 0.003)],
+  ] as const)('%s', (_n, x, want) => {
+    expect(Math.abs(lensDistance(x) / want - 1)).toBeLessThan(1e-9);
+  });
+});
+
+// Fibre ends through evaluateBeam (the published cases of worked-examples-hazard check the helper):
+// single-mode r = (pi w0 / lambda) sqrt(2 S / (pi L)) (Gaussian far field, domain notes 1.6,
+// derived; the case "1.6 single-mode 1064 nm 1 W w0 5 um" gives 1.66 m with L = 50.61 W/m²);
+// multimode r = (1.7 / NA) sqrt(S / (pi L)) (ANSI Z136.1 App. B, from memory). 1064 nm, 1 W, EU set
+// over 10 s: L = 50 W/m² (EU Table 2.3, 10 C_A C_C).
+describe('fibre ends: the distance from the fibre end', () => {
+  const fib = (fiber: NonNullable<BeamInput['viewing']>['fiber']): number =>
+    Number(
+      evaluateBeam({ ruleSet: 'eu2006', wavelength_nm: 1064, emission: { kind: 'cw', power_W: 1 }, beam: { diameter_m: 1e-5, divergence_rad: 0.1, definition: '1/e' }, exposureDuration_s: 10, viewing: { fiber } }).distances.find((d) => d.kind === 'fiber')
+        ?.distance_m,
+    );
+  it('single-mode, mode-field diameter 10 um: 1.666 m', () => {
+    const want = ((Math.PI * 5e-6) / 1.064e-6) * Math.sqrt(2 / (Math.PI * 50));
+    expect(Math.abs(fib({ kind: 'singlemode', numericalAperture: 0.14, modeFieldDiameter_m: 1e-5 }) / want - 1)).toBeLessThan(1e-9);
+  });
+  it('multimode, NA 0.2: 1.2 m', () => {
+    const want = (1.7 / 0.2) * Math.sqrt(1 / (Math.PI * 50));
+    expect(Math.abs(fib({ kind: 'multimode', numericalAperture: 0.2 }) / want - 1)).toBeLessThan(1e-9);
+  });
+});
+
+// Optically aided viewing (SAFETY.md "Optically aided viewing", derived from first-order optics): the
+// trace says when the instrument collects no more than the eye (gain K tau <= 1) and when the
+// transmission was not given and 1 was used (the conservative value).
+describe('aided viewing: the notes of its trace', () => {
+  const aided = (a: NonNullable<BeamInput['viewing']>['aided']): string[] => {
+    const r = evaluateBeam({ wavelength_nm: 532, emission: { kind: 'cw', power_W: 0.01 }, beam: { diameter_m: 0.003, divergence_rad: 0.001, definition: '1/e' }, viewing: { aided: a } });
+    const d = r.distances.find((x) => x.kind === 'aided');
+    return (d?.trace.steps ?? []).filter((s) => s.label === 'Gain' || s.label === 'Transmission').map((s) => `${s.label}: ${s.detail}`);
+  };
+  it.each([
+    ['1x, 7 mm objective, no transmission given: gain 1, tau = 1 stated', { magnification: 1, objectiveDiameter_m: 0.007 }, ['Gain: K*tau = 1 <= 1: the instrument collects no more than the naked eye; the direct NOHD governs', 'Transmission: not given: tau = 1 (the conservative value)']],
+    ['7x50 binocular, tau 0.9: no note', { magnification: 7, objectiveDiameter_m: 0.05, transmission: 0.9 }, []],
+    ['7x50 binocular, tau 0.01: gain 0.49', { magnification: 7, objectiveDiameter_m: 0.05, transmission: 0.01 }, ['Gain: K*tau = 0.49 <= 1: the instrument collects no more than the naked eye; the direct NOHD governs']],
+  ] as const)('%s', (_n, a, notes) => {
+    expect(aided(a)).toEqual(notes);
+  });
+});
+
+// The summary's "largest ocular hazard distance" counts the diffuse case that governs only (SAFETY.md
+// "Diffuse reflections, two viewing cases"). 532 nm, 1 W, a 100 mm exit spreading at 1 rad: direct
+// NOHD (sqrt(4P/(pi 25.46 W/m²)) - 0.1 m) / 1 rad = 0.124 m; a white card (rho = 1) viewed at the
+// normal: accidental sqrt(rho P/(pi 25.46)) = 0.112 m, deliberate (600 s) 0.178 m (the engine's
+// limit at 600 s). When the officer says the accidental case governs, the larger deliberate distance
+// is shown but is not the room's largest.
+describe('the largest ocular hazard distance', () => {
+  const x = (governs?: 'accidental' | 'deliberate'): BeamInput => ({ wavelength_nm: 532, emission: { kind: 'cw', power_W: 1 }, beam: { diameter_m: 0.1, divergence_rad: 1, definition: '1/e' }, viewing: { diffuse: { reflectance: 1, ...(governs ? { governs } : {}) } } });
+  const largest = (r: ReturnType<typeof evaluateBeam>): number => Number(/largest ocular hazard distance (\S+) m/.exec(topSteps(r, 'Summary')[0] ?? '')?.[1]);
+  it('no choice: the larger (deliberate) case governs and is the largest', () => {
+    const r = evaluateBeam(x());
+    expect(largest(r)).toBe(Number(r.distances.find((d) => d.viewing === 'deliberate')?.distance_m_reported));
+    expect(largest(r)).toBeGreaterThan(Number(r.nohd_m_reported));
+  });
+  it('accidental chosen: the direct NOHD, 0.124 m, is the largest of what governs', () => {
+    const r = evaluateBeam(x('accidental'));
+    expect(Number(r.nohd_m)).toBeCloseTo(Math.sqrt(4 / (Math.PI * ((18 * 0.25 ** 0.75) / 0.25))) - 0.1, 9);
+    expect(largest(r)).toBe(Number(r.nohd_m_reported));
+    expect(Number(r.nhzDiffuse_m)).toBeCloseTo(Math.sqrt(1 / (Math.PI * ((18 * 0.25 ** 0.75) / 0.25))), 9);
+  });
+});

@@ -194,16 +194,19 @@ describe('below the limit: the OD decides between equal NOHDs, and the dominant 
   // the order in which the tolerances were given.
   const low = (tolerances: BeamInput['tolerances']): BeamInput => ({ ...green(tolerances, { kind: 'cw', power_W: 1e-5 }) });
   const odLow = (P: number): number => Math.log10((4 * P) / (Math.PI * 0.007 ** 2) / E);
+  // All at once, the corners tie in pairs (divergence moves nothing): the trace names the first worst
+  // corner in the order the tolerances were given, lower ends first.
   it.each([
-    ['power first', { power: 0.1, divergence: 0.1 }],
-    ['divergence first', { divergence: 0.1, power: 0.1 }],
-  ] as const)('10 uW, power ±10 %, divergence ±10 % (%s): NOHD 0, OD bound at 11 uW, dominant power', (_n, tol) => {
+    ['power first', { power: 0.1, divergence: 0.1 }, 'power +10 %, divergence -10 %'],
+    ['divergence first', { divergence: 0.1, power: 0.1 }, 'divergence -10 %, power +10 %'],
+  ] as const)('10 uW, power ±10 %, divergence ±10 % (%s): NOHD 0, OD bound at 11 uW, dominant power', (_n, tol, corner) => {
     const r = evaluateBeam(low(tol));
     expect(r.bounds.nohd_m.conservative).toBe('0');
     expect(rel(r.bounds.odRequired.conservative, odLow(1.1e-5))).toBeLessThan(1e-9);
     expect(r.bounds.dominantInput).toBe('power');
     expect(stepOf(r, 'power')).toMatch(/^±10 %: worst at \+10 %: NOHD 0 m/);
     expect(stepOf(r, 'divergence')).toMatch(/^±10 %: worst at -10 %/);
+    expect(stepOf(r, 'All at once')).toBe(`every combination of the ends; the worst is ${corner}: NOHD 0 m, OD -1.94968, limit 25.4558 W/m²`);
   });
 });
 
