@@ -57,6 +57,8 @@ export function unsavedChanges(saved: AssessmentContent | null, now: AssessmentC
   else if (pb && !pa) out.push('Removal of the room plan');
   else if (!same(pb, pa)) out.push('Changes to the room plan');
   for (const [name, part] of PARTS) if (!same(part(saved), part(now))) out.push(name);
+  // a part not named above (the order of the lasers, a field added later) is still said
+  if (out.length === 0 && !same(saved, now)) out.push('Other changes to the assessment');
   return out;
 }
 

@@ -44,6 +44,7 @@ const CASES: ReadonlyArray<readonly [string, (d: Draft) => void, readonly string
   ['a laser removed', (d) => void (d.lasers = d.lasers.filter((l) => l.name !== 'DFB source')), ['Removal of laser “DFB source” from the assessment']],
   ['a plan started', (d) => void (d.plan = newPlan(d.lasers.map((l) => ({ id: l.id, name: l.name })))), ['The new room plan']],
   ['notes and the review date', (d) => { d.notes = 'Fibre ends capped when not in use.'; d.reviewBy = '2027-06-30'; }, ['Notes', 'Review-by date']],
+  ['the order of the lasers', (d) => void d.lasers.reverse(), ['Other changes to the assessment']],
   ['the title', (d) => void (d.title = 'Telecom bench, second amplifier'), [expect.stringMatching(/^Title “.+” changed to “Telecom bench, second amplifier”$/) as unknown as string]],
 ];
 
