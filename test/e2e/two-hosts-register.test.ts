@@ -245,7 +245,11 @@ describe.skipIf(skip)(`two hosts on one institution register${skip ? ` (${SKIP_R
   });
 
   it('(a) what officer A saves appears on officer B\'s open workspace without a reload', async () => {
+    // B looks at the site's rooms while A adds one: it appears in B's list without a reload.
+    await b.page.getByRole('tab', { name: 'Rooms & lasers' }).click();
+    expect(await b.page.getByRole('button', { name: /^A0\.07/ }).count()).toBe(0);
     await roomWithLaser(a.page, 'A0.07', 'Erbium fibre amplifier');
+    await b.page.getByRole('button', { name: /^A0\.07/ }).waitFor({ timeout: 10_000 });
     await openInWorkspace(b.page, 'A0.07');
     expect(await laserName(b.page).inputValue()).toBe('Erbium fibre amplifier');
     await laserName(a.page).fill('Erbium fibre amplifier (bench 1)');
