@@ -9,6 +9,7 @@
  * common practice for entrance notices; one page is derived: a notice is posted as one sheet.
  */
 import { describe, expect, it } from 'vitest';
+import { evaluateRoom, type RoomPlan } from '../../../core/index.js';
 import { renderDoorNotice, type RenderOptions } from '../../../electron/backend/pdf/index.js';
 import { CONTROL_CATALOGUE } from '../../../renderer/lib/controls-catalogue.js';
 import { pageTexts, pdfInfo } from './pdf-tools.js';
@@ -50,6 +51,36 @@ describe('one page in the most crowded form', () => {
       expect(text).toContain('DRAFT');
       for (const l of doc.content.input.lasers) expect(text, l.name).toContain(squash(l.name));
     }, 60_000);
+});
+
+describe('one page with the room plan on the notice', () => {
+  // The plan takes a slot beside the entry instructions (electron/backend/pdf/plan/notice-plan.ts):
+  // an 8 m × 5 m room, a door in the east wall, each laser's beam along the room to a dump; still one sheet.
+  for (const paper of PAPERS)
+    for (const lasers of [1, 5, 20] as const)
+      it(`${lasers} laser${lasers === 1 ? '' : 's'} with a room plan, long names, every control accepted, ${paper}`, async () => {
+        const base = generatedDocument({ lasers, longNames: true, allControls: true });
+        const p = (x_m: number, y_m: number) => ({ x_m, y_m });
+        const plan: RoomPlan = {
+          outline: [p(0, 0), p(8, 0), p(8, 5), p(0, 5)],
+          doors: [{ id: 'D1', label: 'D1 corridor', a: p(8, 1), b: p(8, 2) }],
+          windows: [],
+          walls: [],
+          barriers: [],
+          workPositions: [],
+          enclosures: [],
+          paths: base.content.input.lasers.map((l, i) => ({ laserId: l.id, exit: p(0.5, 0.2 + (4.6 * i) / Math.max(1, lasers - 1)), elements: [{ kind: 'dump' as const, at: p(6, 0.2 + (4.6 * i) / Math.max(1, lasers - 1)) }] })),
+          reflectionPoints: [],
+          controlledArea: { outline: [p(0, 0), p(8, 0), p(8, 5), p(0, 5)], acceptedBy: 'I. Calloway-Senn' },
+        };
+        const input = { ...base.content.input, plan };
+        const doc = { ...base, content: { ...base.content, input }, results: evaluateRoom(input), emergencyContact: 'Site security control room, extension 2222 (24 h)' };
+        const pdf = await renderDoorNotice(doc, { paper, units: 'SI' });
+        expect(pdfInfo(pdf).pages).toBe(1);
+        const text = squash(pageTexts(pdf).join(' '));
+        expect(text).toContain(squash('You are here: door D1 corridor'));
+        for (const l of doc.content.input.lasers) expect(text, l.name).toContain(squash(l.name));
+      }, 60_000);
 });
 
 describe('"Before you enter" is for the person at the door', () => {

@@ -210,8 +210,12 @@ export function doorNoticeDefinition(doc: DocumentInput, opts: RenderOptions, fi
   const fingerprintW = 92;
   const planW = width - emergencyW - fingerprintW - 2 * 12;
   // The plan gives up height before the lines read from afar do (they shrink from level 3).
-  const planScale = [1, 1, 0.82, 0.72, 0.66, 0.62, 0.6, 0.58][Math.min(fit, NOTICE_FIT_LEVELS - 1)] as number;
-  const roomPlan = noticePlan(doc, view, planW, (letter ? 140 : 185) * planScale, opts.entranceId, fit >= 3 ? 7.5 : 8.5);
+  // At the last levels (the most crowded rooms) the plan goes back to a small one beside the hazard
+  // lines, and the contacts beside the entry instructions, so the notice stays one sheet.
+  const planScale = [1, 1, 0.82, 0.72, 0.66][Math.min(fit, 4)] as number;
+  const smallPlanOnly = fit >= 5;
+  const roomPlan = smallPlanOnly ? null : noticePlan(doc, view, planW, (letter ? 140 : 185) * planScale, opts.entranceId, fit >= 3 ? 7.5 : 8.5);
+  const headerPlan = smallPlanOnly ? noticePlan(doc, view, 92, 100, opts.entranceId, 6) : null;
   const covering = coveringEyewear(doc);
   const twoColumns = view.lasers.length > 10;
 
@@ -259,10 +263,11 @@ export function doorNoticeDefinition(doc: DocumentInput, opts: RenderOptions, fi
           margin: [14, 0, 0, 0],
           stack: [
             ...hazardLines(view).map((t, i, all) => ({ text: t, fontSize: (all.length > 1 && i === 0 ? 22 : all.length > 1 ? 30 : NOTICE_SIZES.hazardLine) * big, bold: true, lineHeight: 1 })),
-            { text: [{ text: `CLASS ${view.highestClass} `, fontSize: (dense ? 40 : NOTICE_SIZES.classLine) * big }, { text: 'LASER AREA', fontSize: 24 * big }], bold: true, margin: [0, 2, 0, 2], lineHeight: 1 },
+            { text: [{ text: `CLASS ${view.highestClass} `, fontSize: (dense || headerPlan ? 40 : NOTICE_SIZES.classLine) * big }, { text: 'LASER AREA', fontSize: 24 * big }], bold: true, margin: [0, 2, 0, 2], lineHeight: 1 },
             { text: precautionFor(view.highestClass).toUpperCase(), fontSize: 13 * Math.max(big, 0.8), bold: true, lineHeight: 1.05 },
           ],
         },
+        ...(headerPlan ? [headerPlan] : []),
       ],
     },
     eyewear.length > 0

@@ -26,9 +26,9 @@ export function noticePlan(doc: DocumentInput, view: RoomView, width: number, he
   const here: Content[] = entrance ? [{ text: `You are here: door ${entrance.label}`, bold: true }] : [];
   const zones = `Hazard zones shaded${plan.controlledArea ? '; laser controlled area dash-dot' : ''}.`;
   // Key beside (the drawing takes the slot's whole height) or below (its whole width): whichever draws the room larger.
-  const beside = draw(width - KEY_BESIDE_PT - 8, slot);
   const below = draw(width, slot - caption * 3.6 - fontSize * 1.3);
-  if (beside.width >= below.width) {
+  const beside = width - KEY_BESIDE_PT - 8 >= 60 ? draw(width - KEY_BESIDE_PT - 8, slot) : null;
+  if (beside && beside.width >= below.width) {
     return {
       width,
       columnGap: 8,
