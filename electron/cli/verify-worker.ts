@@ -7,12 +7,13 @@ interface Job {
   readonly module: string;
   readonly db: string;
   readonly keyDir: string;
+  readonly anchor?: string;
   readonly items: ReadonlyArray<{ readonly id: string; readonly title: string }>;
   readonly keepReports: boolean;
 }
 
 const job = workerData as Job;
-const store = await openRecordStore({ path: job.db, keyDir: job.keyDir, readonly: true });
+const store = await openRecordStore({ path: job.db, keyDir: job.keyDir, readonly: true, ...(job.anchor !== undefined ? { trustAnchor: job.anchor } : {}) });
 try {
   for (const item of job.items) {
     const v = await verifyOneAssessment(store, item.id, item.title);

@@ -4,7 +4,10 @@
  * recomputed with this core, and checked for
  * a whole revision chain and intact database protections.
  *
- *   npm run verify -- --db <file> [--assessment <id> | --all] [--json] [--key-dir <folder>] [--workers <n>]
+ *   npm run verify -- --db <file> [--assessment <id> | --all] [--json] [--key-dir <folder>] [--anchor <fingerprint>] [--workers <n>]
+ *
+ * --anchor: judge the signatures by this trust anchor (64 hex digits as on paper) instead of the
+ * desk's setting, e.g. an auditor checking an institution register from their own machine.
  *
  * One line per assessment ("ok", "draft" or "FAILED" with the finding); exit status 1 if any fails,
  * 2 on a usage or open error. A progress bar goes to stderr on a terminal. --all runs on worker
@@ -17,10 +20,11 @@ import { fileURLToPath, pathToFileURL } from 'node:url';
 import { Worker } from 'node:worker_threads';
 import { z } from 'zod';
 import { defaultDatabasePath, describeAddress, isServerAddress, openRecordStore } from '../backend/records/index.js';
+import { readTypedFingerprint } from '../backend/records/trust-anchor-setting.js';
 import { verifyOneAssessment, type AssessmentVerdict } from './verify-assessment.js';
 import { parseCommandArgs } from './command-args.js';
 
-const USAGE = 'Usage: npm run verify -- --db <file> [--assessment <id> | --all] [--json] [--key-dir <folder>] [--workers <n>]';
+const USAGE = 'Usage: npm run verify -- --db <file> [--assessment <id> | --all] [--json] [--key-dir <folder>] [--anchor <fingerprint>] [--workers <n>]';
 
 const ArgsSchema = z
   .strictObject({
@@ -29,6 +33,17 @@ const ArgsSchema = z
     all: z.boolean().optional(),
     json: z.boolean().optional(),
     'key-dir': z.string().min(1).optional(),
+    // The trust anchor's 64 hex digits as on paper (groups allowed), instead of the desk's setting.
+    anchor: z
+      .string()
+      .optional()
+      .transform((text, c) => {
+        if (text === undefined) return undefined;
+        const r = readTypedFingerprint(text);
+        if (r.ok) return r.anchor;
+        c.addIssue({ code: 'custom', message: `--anchor ${r.problem}` });
+        return z.NEVER;
+      }),
     workers: z.coerce.number().int().min(1).max(64).optional(),
   })
   .refine((a) => !(a.all === true && a.assessment !== undefined), { message: 'give either --assessment <id> or --all, not both', path: ['all'] });
@@ -46,7 +61,7 @@ function progress(done: number, total: number): void {
   if (done === total) process.stderr.write('\n');
 }
 
-async function inWorkers(db: string, keyDir: string, items: Array<{ id: string; title: string }>, workers: number, keepReports: boolean): Promise<AssessmentVerdict[]> {
+async function inWorkers(db: string, keyDir: string, anchor: string | undefined, items: Array<{ id: string; title: string }>, workers: number, keepReports: boolean): Promise<AssessmentVerdict[]> {
   const here = dirname(fileURLToPath(import.meta.url));
   const boot = pathToFileURL(resolve(here, 'ts-worker.mjs'));
   const module = pathToFileURL(resolve(here, 'verify-worker.ts')).href;
@@ -58,7 +73,7 @@ async function inWorkers(db: string, keyDir: string, items: Array<{ id: string; 
       (share) =>
         new Promise<void>((done, fail) => {
           if (share.length === 0) return done();
-          const worker = new Worker(boot, { workerData: { module, db, keyDir, items: share, keepReports } });
+          const worker = new Worker(boot, { workerData: { module, db, keyDir, ...(anchor !== undefined ? { anchor } : {}), items: share, keepReports } });
           worker.on('message', (v: AssessmentVerdict) => {
             byId.set(v.assessmentId, v);
             progress(byId.size, items.length);
@@ -87,7 +102,7 @@ export async function runVerify(argv: readonly string[], out: (line: string) => 
   const shown = server ? describeAddress(db) : db;
   let store;
   try {
-    store = await openRecordStore({ path: db, keyDir, readonly: true });
+    store = await openRecordStore({ path: db, keyDir, readonly: true, ...(args.anchor !== undefined ? { trustAnchor: args.anchor } : {}) });
   } catch (e) {
     process.stderr.write(`Cannot open ${shown}: ${(e as Error).message}\n`);
     return 2;
@@ -114,7 +129,7 @@ export async function runVerify(argv: readonly string[], out: (line: string) => 
     // Small jobs are quicker in one thread than with workers starting up, unless asked for.
     if (workers > 1 && (items.length >= 20 || args.workers !== undefined)) {
       await store.close();
-      verdicts = await inWorkers(db, keyDir, items, workers, args.json === true);
+      verdicts = await inWorkers(db, keyDir, args.anchor, items, workers, args.json === true);
     } else {
       verdicts = [];
       for (const x of items) {

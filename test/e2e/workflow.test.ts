@@ -98,7 +98,9 @@ describe('an officer assesses a new room', () => {
     await made.waitFor();
     const fingerprint = /([0-9a-f]{4}(?: [0-9a-f]{4}){4})/.exec((await made.textContent()) ?? '')?.[1] ?? '';
     expect(fingerprint).not.toBe('');
-    expect(await made.textContent()).toContain('this is the trust anchor; write it down');
+    expect(await made.textContent()).toContain('this is the trust anchor; write down its full fingerprint');
+    // The full fingerprint (64 hex digits) is what the other desks of a register are configured with.
+    expect(await made.textContent()).toMatch(/its full fingerprint, [0-9a-f]{4}(?: [0-9a-f]{4}){15}, and keep it/);
     await expect.poll(() => page.getByTestId('nav-anchor').textContent()).toContain(fingerprint);
   });
 

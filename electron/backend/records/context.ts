@@ -42,8 +42,10 @@ export interface StoreContext {
   /** The SQL port: the store's connection, or the transaction's own port inside `inTransaction`. */
   readonly q: SqlPort;
   readonly engine: EngineSeam;
-  /** The user-data folder beside the database: trust list and signing log (outside the database). */
+  /** The user-data folder beside the database: trust anchor setting and signing log (outside the database). */
   readonly keyDir: string;
+  /** A trust anchor given for this open only (an auditor's check), instead of the desk's setting. */
+  readonly trustAnchor?: string;
   readonly evaluate: Evaluate;
   readonly calculatedWith: string;
   now(): string;
@@ -57,6 +59,7 @@ export interface ContextParts {
   readonly q: SqlPort;
   readonly engine: EngineSeam;
   readonly keyDir: string;
+  readonly trustAnchor?: string;
   readonly evaluate: Evaluate;
   readonly calculatedWith: string;
   readonly now?: () => string;
@@ -68,6 +71,7 @@ export function makeContext(parts: ContextParts): StoreContext {
     q,
     engine: parts.engine,
     keyDir: parts.keyDir,
+    ...(parts.trustAnchor !== undefined ? { trustAnchor: parts.trustAnchor } : {}),
     evaluate: parts.evaluate,
     calculatedWith: parts.calculatedWith,
     now: parts.now ?? (() => new Date().toISOString()),

@@ -14,9 +14,9 @@ import { getPerson } from './register.js';
 import { keyIdOf, PRIVATE_KEY_FILE, readInstallationKey } from './signing.js';
 import { rmSync } from 'node:fs';
 import { join } from 'node:path';
-import { fullKeyFingerprint, readAnchorSetting, writeAnchorSetting } from './trust-anchor-setting.js';
+import { fullKeyFingerprint, writeAnchorSetting } from './trust-anchor-setting.js';
 import { INSTALLATION_KEY_HOLDER, makeEndorsedEntry, shortKeyFingerprint, trustOf, type TrustEntry } from './trust-list.js';
-import { addEndorsement, addRetirement, loadTrust, registerAnchors } from './trust-store.js';
+import { addEndorsement, addRetirement, deskAnchor, loadTrust, registerAnchors } from './trust-store.js';
 import { RecordError, type Id, type Person, type PersonKey, type TrustListInfo } from './types.js';
 
 const passphrase = z
@@ -95,7 +95,7 @@ export async function trustProblems(
 
 export async function trustListInfo(ctx: StoreContext): Promise<TrustListInfo> {
   const read = await loadTrust(ctx);
-  const setting = readAnchorSetting(ctx.keyDir);
+  const setting = deskAnchor(ctx);
   const list = read.list;
   const trustedKeys = list ? new Set(list.entries.filter((e) => trustOf(list, e.keyId).trusted).map((e) => e.keyId)).size : 0;
   const pins = await registerAnchors(ctx);
@@ -194,7 +194,7 @@ export interface Signer {
  */
 export async function signAsPerson<P>(ctx: StoreContext, personId: Id, pass: string, build: (signer: Signer) => P): Promise<{ signer: Signer; payload: P; signature: string }> {
   const key = await unlockPersonalKey(ctx, personId, pass);
-  const anchor = readAnchorSetting(ctx.keyDir).anchor ?? '';
+  const anchor = deskAnchor(ctx).anchor ?? '';
   const signer: Signer = {
     personId: key.person.id,
     name: key.person.name,
@@ -216,7 +216,7 @@ export async function signAsPerson<P>(ctx: StoreContext, personId: Id, pass: str
  */
 export function signerFromKey(ctx: StoreContext, person: Person, privateKey: KeyObject) {
   const publicKey = createPublicKey(privateKey).export({ type: 'spki', format: 'pem' }).toString();
-  const anchor = readAnchorSetting(ctx.keyDir).anchor ?? '';
+  const anchor = deskAnchor(ctx).anchor ?? '';
   return async <P>(build: (signer: Signer) => P): Promise<{ signer: Signer; payload: P; signature: string }> => {
     const signer: Signer = { personId: person.id, name: person.name, role: person.role, keyId: keyIdOf(publicKey), publicKey, signedAt: ctx.now(), trustAnchor: anchor };
     const payload = build(signer);

@@ -205,6 +205,7 @@ export async function openRecordStore(options: InternalOpenOptions = {}): Promis
     q: engine.port,
     engine: engine.seam,
     keyDir,
+    ...(options.trustAnchor !== undefined ? { trustAnchor: options.trustAnchor } : {}),
     evaluate: options.evaluate ?? evaluateRoom,
     calculatedWith,
     ...(options.now ? { now: options.now } : {}),

@@ -7,7 +7,7 @@
  * issue 15, item 4 (trust across desks).
  */
 import { inTransaction, type StoreContext } from './context.js';
-import { readAnchorSetting, writeAnchorSetting } from './trust-anchor-setting.js';
+import { readAnchorSetting, writeAnchorSetting, type AnchorSettingRead } from './trust-anchor-setting.js';
 import { readTrustListFile, shortKeyFingerprint, type TrustEntry, type TrustList } from './trust-list.js';
 
 interface EndorsementRow {
@@ -38,8 +38,14 @@ export interface TrustRead {
  */
 const built = new Map<string, TrustList>();
 
+/** The anchor this desk judges by: one given for this open (an auditor's check), else the desk's setting. */
+export function deskAnchor(ctx: StoreContext): AnchorSettingRead {
+  if (ctx.trustAnchor !== undefined) return { path: 'the fingerprint given on the command line', anchor: ctx.trustAnchor, setAt: null, problem: null };
+  return readAnchorSetting(ctx.keyDir);
+}
+
 export async function loadTrust(ctx: StoreContext): Promise<TrustRead> {
-  const setting = readAnchorSetting(ctx.keyDir);
+  const setting = deskAnchor(ctx);
   if (setting.anchor === null) return { path: setting.path, list: null, problem: setting.problem };
   const rows = await ctx.q.all<EndorsementRow>(
     `SELECT e.key_id, e.endorsed_by, e.public_key, e.person_id, e.person_name, e.admitted_at, e.endorsement, r.retired_at, r.reason AS retired_reason

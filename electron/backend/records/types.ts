@@ -67,6 +67,11 @@ export interface OpenOptions {
   readonly nativeBinding?: string;
   /** Open read-only (no migrations, no writes). */
   readonly readonly?: boolean;
+  /**
+   * The trust anchor (64 hex digits) to judge signatures by instead of the desk's setting: an
+   * auditor's check from the fingerprint on paper (`npm run verify -- --anchor`). Nothing is saved.
+   */
+  readonly trustAnchor?: string;
 }
 
 export interface StoreInfo {

@@ -308,4 +308,25 @@ forEachEngine((engine: TestEngine) => {
     await b.setTrustAnchor({ fingerprint: anchor });
     expect(await b.verify(assessmentId)).toMatchObject({ ok: true, keyTrusted: true });
   });
+
+  it('the protections of the endorsements are checked at open: a removed one is reported on every desk', async () => {
+    await institution();
+    while (open.length) await open.pop()?.close();
+    if (engine.name === 'postgresql') {
+      await adminQuery(schemaFor(t.dir, 'register'), 'ALTER TABLE trust_retirement DISABLE TRIGGER trust_retirement_no_delete');
+    } else {
+      const raw = new Database(address);
+      try {
+        raw.exec('DROP TRIGGER trust_retirement_no_delete');
+      } finally {
+        raw.close();
+      }
+    }
+    for (const name of ['A', 'B']) {
+      const d = await desk(name);
+      expect(d.info.warnings.join(' ')).toMatch(
+        /The database's protections against changing signed records were removed \(trigger trust_retirement_no_delete is (missing|switched off)\)/,
+      );
+    }
+  });
 });

@@ -6,6 +6,7 @@
  */
 import Database from 'better-sqlite3';
 import { spawnSync } from 'node:child_process';
+import { mkdirSync, readdirSync, readFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
@@ -45,6 +46,28 @@ describe('npm run verify', () => {
     for (const id of ids) expect(r.lines.find((l) => l.includes(id))).toMatch(/^ok {6}\S+ {2}Laser hazard evaluation, room A0\.07.*: revision 1, signed by Dr\. Imre Calloway-Senn on \d{4}-\d{2}-\d{2}, key [0-9a-f ]+$/);
     expect(r.lines.find((l) => l.includes(draftId))).toMatch(/^draft .*nothing signed yet$/);
     expect(r.lines.at(-1)).toBe('4 assessment(s): 3 ok, 1 not signed yet, 0 failed.');
+  });
+
+  // Issue 15 item 4 (trust across desks): an auditor's machine has no anchor of its own; the
+  // fingerprint from paper is given for the one check and nothing is saved.
+  it('an auditor without the desk\'s setting: nothing trusted, then --anchor from paper; a mistyped or foreign anchor is said plainly', () => {
+    const auditor = join(t.dir, 'auditor');
+    mkdirSync(auditor, { recursive: true });
+    const anchor = (JSON.parse(readFileSync(join(t.dir, 'keys', 'beamwarden-trust-anchor.json'), 'utf8')) as { anchor: string }).anchor;
+    const bare = verify('--db', db, '--key-dir', auditor, '--assessment', ids[0] ?? '');
+    expect(bare.status).toBe(1);
+    expect(bare.stdout).toMatch(/This desk has no trust anchor configured/);
+    const typed = (anchor.toUpperCase().match(/.{4}/g) ?? []).join(' ');
+    const given = verify('--db', db, '--key-dir', auditor, '--assessment', ids[0] ?? '', '--anchor', typed);
+    expect(given.status).toBe(0);
+    expect(given.lines[1]).toBe(`Trust anchor of this desk (the fingerprint given on the command line): ${(anchor.slice(0, 20).match(/.{4}/g) ?? []).join(' ')}`);
+    expect(readdirSync(auditor)).toEqual([]);
+    const mistyped = spawnSync(process.execPath, ['--import', 'tsx', join(root, 'electron/cli/verify.ts'), '--db', db, '--anchor', 'ab12 cd34'], { cwd: root, encoding: 'utf8' });
+    expect(mistyped.status).toBe(2);
+    expect(mistyped.stderr).toMatch(/--anchor must be 64 hexadecimal digits; 8 were given/);
+    const foreign = verify('--db', db, '--key-dir', auditor, '--assessment', ids[0] ?? '', '--anchor', '0'.repeat(64));
+    expect(foreign.status).toBe(1);
+    expect(foreign.stdout).toMatch(/This register's signatures are endorsed by a key this desk does not recognise/);
   });
 
   it('a flipped status fails with its finding and exit 1; workers give the same lines; --json carries the checks', () => {
