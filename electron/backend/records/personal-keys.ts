@@ -5,13 +5,13 @@
  * signed record — `signAsPerson`, which checks the passphrase and trust, takes the time from this
  * back end's clock and the identity from the key's owner, and signs a canonical payload.
  */
-import { createPublicKey, generateKeyPairSync, sign, verify, type KeyObject } from 'node:crypto';
+import { createPublicKey, generateKeyPairSync, sign, type KeyObject } from 'node:crypto';
 import { z } from 'zod';
 import { canonicalJson } from './canonical.js';
 import { inTransaction, parseOrThrow, type StoreContext } from './context.js';
 import { openSealedKey, sealPrivateKey, SealedKeySchema } from './key-encryption.js';
 import { getPerson } from './register.js';
-import { keyIdOf, PRIVATE_KEY_FILE, readInstallationKey } from './signing.js';
+import { keyIdOf, PRIVATE_KEY_FILE, readInstallationKey, verifyEd25519Memo } from './signing.js';
 import { rmSync } from 'node:fs';
 import { join } from 'node:path';
 import { INSTALLATION_KEY_HOLDER, makeEndorsedEntry, readTrustList, shortKeyFingerprint, trustOf, writeTrustList, type TrustList } from './trust-list.js';
@@ -197,17 +197,21 @@ export async function checkPersonSignature(
   payload: unknown,
   signatureB64: string,
   keyId: string,
+  /** The trust list's problems (trustListInfo), when the caller checks many signatures at once. */
+  trustProblems?: readonly string[],
 ): Promise<{ readonly valid: boolean; readonly trusted: boolean; readonly trustChain: readonly string[]; readonly ownerPersonId: string | null; readonly ownerName: string | null }> {
+  // The trust list is read from its file only when it changed (readTrustList: mtime and size), and
+  // each key's verdict is kept per list read (trustOf).
   const read = readTrustList(ctx.keyDir);
   const verdict = trustOf(read.list, keyId);
   const publicKey = verdict.entry?.publicKey ?? (await ctx.q.get('SELECT public_key FROM signing_key WHERE key_id = ?', keyId) as { public_key: string } | undefined)?.public_key;
   let valid = false;
   try {
-    valid = publicKey !== undefined && keyIdOf(publicKey) === keyId && verify(null, Buffer.from(canonicalJson(payload), 'utf8'), createPublicKey(publicKey), Buffer.from(signatureB64, 'base64'));
+    valid = publicKey !== undefined && keyIdOf(publicKey) === keyId && verifyEd25519Memo(publicKey, payload, signatureB64);
   } catch {
     valid = false;
   }
-  const problems = (await trustListInfo(ctx)).problems;
+  const problems = trustProblems ?? (await trustListInfo(ctx)).problems;
   return {
     valid,
     trusted: verdict.trusted && problems.length === 0,
