@@ -20,7 +20,8 @@ import { unlockPersonalKey, type Signer } from '../../electron/backend/records/p
 import { readTrustList } from '../../electron/backend/records/trust-list.js';
 import { median, type BenchEntry } from './registry.js';
 
-async function contextOn(address: string, keyDir: string): Promise<{ ctx: StoreContext; engine: RecordEngine }> {
+/** A store context on the register at `address` (the store itself must be closed: one writer on a file). */
+export async function contextOn(address: string, keyDir: string): Promise<{ ctx: StoreContext; engine: RecordEngine }> {
   const engine = isServerAddress(address) ? await openPgEngine(address) : openSqliteEngine(address);
   return { ctx: makeContext({ q: engine.port, engine: engine.seam, keyDir, evaluate: evaluateRoom, calculatedWith: CALCULATED_WITH }), engine };
 }

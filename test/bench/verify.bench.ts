@@ -2,10 +2,12 @@
  * Benchmark of the auditor's check: `npm run verify -- --all` over signed assessments (the invented
  * demo room A0.07, two lasers), each recomputed with the core, its signature checked against the
  * trust list, its chain and the database protections checked — on worker threads, one per core.
- * Target: 10 000 signed assessments under 60 s on this machine. The bench verifies a smaller number
- * (1000 by default, so the bench stays short) and projects the 10 000 figure from the fixed cost
+ * Target: 10 000 signed assessments under 60 s on this machine. The bench builds and verifies a
+ * register of 10 000 signed assessments (measured, not projected; building it takes a few minutes).
+ * BENCH_VERIFY_N=<n> verifies fewer, and then projects the 10 000 figure from the fixed cost
  * (measured on two assessments) and the time per assessment (the work per assessment does not grow
- * with the count: each is read by its id).
+ * with the count: each is read by its id). CPU time per assessment is given beside the wall time:
+ * on a shared machine the wall time says more about the other work than about verify.
  *
  * Setup (not timed): one real store-made signed assessment's rows copied with SQL. Each copy's beam
  * diameters differ by a few parts per million, so every copy is really recomputed (identical copies
@@ -32,7 +34,7 @@ import { evaluateRoom } from '../../core/index.js';
 import { runVerify } from '../../electron/cli/verify.js';
 import type { BenchEntry } from './registry.js';
 
-const COUNT = Number(process.env['BENCH_VERIFY_N'] ?? 1000);
+const COUNT = Number(process.env['BENCH_VERIFY_N'] ?? 10_000);
 const TARGET_COUNT = 10_000;
 const TARGET_MS = 60_000;
 const PASSPHRASE = 'bench passphrase (invented)';
@@ -137,11 +139,17 @@ export async function runVerifyBench(): Promise<BenchEntry[]> {
     const all = await timedVerify(db, keyDir, COUNT);
     const perMs = Math.max(0, all.ms - start.ms) / (COUNT - 2);
     const perCpu = Math.max(0, all.cpuMs - start.cpuMs) / (COUNT - 2);
+    const measured = COUNT >= TARGET_COUNT;
     return [
-      { name: `verify --all: ${COUNT} distinct signed assessments recomputed and checked (worker threads)`, median_ms: all.ms, runs: 1 },
+      {
+        name: `verify --all: ${COUNT} distinct signed assessments recomputed and checked (worker threads)`,
+        median_ms: all.ms,
+        runs: 1,
+        ...(measured ? { target_ms: TARGET_MS } : {}),
+      },
       { name: 'verify --all: fixed cost (open, start the workers; two assessments)', median_ms: start.ms, runs: 1 },
       { name: 'verify --all: wall time per signed assessment (worker threads)', median_ms: perMs, runs: 1 },
-      { name: `verify --all: ${TARGET_COUNT} signed assessments, projected (fixed cost + time per assessment)`, median_ms: start.ms + perMs * TARGET_COUNT, runs: 1, target_ms: TARGET_MS },
+      ...(measured ? [] : [{ name: `verify --all: ${TARGET_COUNT} signed assessments, projected (fixed cost + time per assessment)`, median_ms: start.ms + perMs * TARGET_COUNT, runs: 1, target_ms: TARGET_MS }]),
       // Wall time depends on what else the machine runs; CPU time per assessment does much less.
       { name: 'verify --all: CPU time per signed assessment (all threads)', median_ms: perCpu, runs: 1 },
     ];

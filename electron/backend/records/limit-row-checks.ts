@@ -17,7 +17,7 @@ import { z } from 'zod';
 import { checkableEntries, documentValueProblem, entryWords, type CheckableEntry, type RowCheck, type RuleSetId } from '../../../core/index.js';
 import type { RoomInput } from '../../../core/model/inputs.js';
 import { inTransaction, parseOrThrow, type StoreContext } from './context.js';
-import { checkPersonSignature, signAsPerson } from './personal-keys.js';
+import { checkPersonSignature, signAsPerson, trustListInfo } from './personal-keys.js';
 import { shortKeyFingerprint } from './trust-list.js';
 import { RecordError, type AssessmentContent, type Id } from './types.js';
 
@@ -119,8 +119,12 @@ export function statementOf(x: RowCheckRow): RowCheckStatement {
   };
 }
 
+/** The open entries of each rule set by key: the tables are fixed data, so the list is made once per process. */
+const entriesByKey = new Map<RuleSetId, ReadonlyMap<string, CheckableEntry>>();
 function entryOf(ruleSet: RuleSetId, key: string): CheckableEntry | undefined {
-  return checkableEntries(ruleSet).find((e) => e.key === key);
+  let byKey = entriesByKey.get(ruleSet);
+  if (byKey === undefined) entriesByKey.set(ruleSet, (byKey = new Map(checkableEntries(ruleSet).map((e) => [e.key, e]))));
+  return byKey.get(key);
 }
 
 function isRuleSet(x: string): x is RuleSetId {
@@ -128,11 +132,11 @@ function isRuleSet(x: string): x is RuleSetId {
 }
 
 /** Check one stored row: its signature, its key's trust, and that the entry still reads as checked. */
-export async function checkRow(ctx: StoreContext, x: RowCheckRow): Promise<RowCheckRecord> {
+export async function checkRow(ctx: StoreContext, x: RowCheckRow, trustProblems?: readonly string[]): Promise<RowCheckRecord> {
   const ruleSet: RuleSetId = isRuleSet(x.rule_set) ? x.rule_set : 'icnirp2013';
   const words = entryWords(x.entry_key);
   const statement = statementOf(x);
-  const c = await checkPersonSignature(ctx, statement, x.signature, x.key_id);
+  const c = await checkPersonSignature(ctx, statement, x.signature, x.key_id, trustProblems);
   const owner = c.ownerPersonId === null || c.ownerPersonId === x.person_id;
   const entry = isRuleSet(x.rule_set) ? entryOf(ruleSet, x.entry_key) : undefined;
   const who = `${x.name} on ${x.signed_at.slice(0, 10)}, key ${shortKeyFingerprint(x.key_id)}`;
@@ -169,8 +173,11 @@ export async function listRowChecks(ctx: StoreContext, ruleSet?: RuleSetId): Pro
     ruleSet === undefined
       ? await ctx.q.all<RowCheckRow>('SELECT * FROM limit_row_checks ORDER BY signed_at, id')
       : await ctx.q.all<RowCheckRow>('SELECT * FROM limit_row_checks WHERE rule_set = ? ORDER BY signed_at, id', ruleSet);
+  // The trust list's own problems (file damaged or replaced) are read once for the whole list;
+  // every check is still verified (signature, key trust, entry unchanged) on each call.
+  const problems = rows.length > 0 ? (await trustListInfo(ctx)).problems : [];
   const out: RowCheckRecord[] = [];
-  for (const r of rows) out.push(await checkRow(ctx, r));
+  for (const r of rows) out.push(await checkRow(ctx, r, problems));
   return out;
 }
 

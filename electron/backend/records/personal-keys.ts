@@ -5,13 +5,13 @@
  * signed record — `signAsPerson`, which checks the passphrase and trust, takes the time from this
  * back end's clock and the identity from the key's owner, and signs a canonical payload.
  */
-import { createPublicKey, generateKeyPairSync, sign, verify, type KeyObject } from 'node:crypto';
+import { createPublicKey, generateKeyPairSync, sign, type KeyObject } from 'node:crypto';
 import { z } from 'zod';
 import { canonicalJson } from './canonical.js';
 import { inTransaction, parseOrThrow, type StoreContext } from './context.js';
 import { openSealedKey, sealPrivateKey, SealedKeySchema } from './key-encryption.js';
 import { getPerson } from './register.js';
-import { keyIdOf, PRIVATE_KEY_FILE, readInstallationKey } from './signing.js';
+import { keyIdOf, PRIVATE_KEY_FILE, readInstallationKey, verifyEd25519Memo } from './signing.js';
 import { rmSync } from 'node:fs';
 import { join } from 'node:path';
 import { fullKeyFingerprint, writeAnchorSetting } from './trust-anchor-setting.js';
@@ -230,17 +230,19 @@ export async function checkPersonSignature(
   payload: unknown,
   signatureB64: string,
   keyId: string,
+  /** The trust list's problems (trustListInfo), when the caller checks many signatures at once. */
+  knownProblems?: readonly string[],
 ): Promise<{ readonly valid: boolean; readonly trusted: boolean; readonly trustChain: readonly string[]; readonly ownerPersonId: string | null; readonly ownerName: string | null }> {
   const read = await loadTrust(ctx);
   const verdict = trustOf(read.list, keyId);
   const publicKey = verdict.entry?.publicKey ?? (await ctx.q.get('SELECT public_key FROM signing_key WHERE key_id = ?', keyId) as { public_key: string } | undefined)?.public_key;
   let valid = false;
   try {
-    valid = publicKey !== undefined && keyIdOf(publicKey) === keyId && verify(null, Buffer.from(canonicalJson(payload), 'utf8'), createPublicKey(publicKey), Buffer.from(signatureB64, 'base64'));
+    valid = publicKey !== undefined && keyIdOf(publicKey) === keyId && verifyEd25519Memo(publicKey, payload, signatureB64);
   } catch {
     valid = false;
   }
-  const problems = await trustProblems(ctx, read);
+  const problems = knownProblems ?? (await trustProblems(ctx, read));
   return {
     valid,
     trusted: verdict.trusted && problems.length === 0,

@@ -102,6 +102,31 @@ function publicKeyObject(pem: string): KeyObject {
   return k;
 }
 
+/**
+ * Ed25519 verification of a signed payload (its canonical JSON) against a public key text, with the
+ * outcome kept per exact (key, signature, payload): verification is a pure function of those, so a
+ * repeated question (every save re-reads the register's signed checks of the limit tables) gets the
+ * same answer without the curve arithmetic. The memo is keyed by the key text, the signature and
+ * the payload's full JSON text, so any changed byte (a key swapped, a statement edited) is verified
+ * afresh; two payloads with the same JSON text have the same canonical JSON. Bounded.
+ */
+const VERDICT_CACHE_MAX = 5_000;
+const verdicts = new Map<string, boolean>();
+export function verifyEd25519Memo(publicKeyPem: string, payload: unknown, signatureB64: string): boolean {
+  const key = `${publicKeyPem}\u0000${signatureB64}\u0000${JSON.stringify(payload)}`;
+  const hit = verdicts.get(key);
+  if (hit !== undefined) return hit;
+  let ok: boolean;
+  try {
+    ok = verify(null, Buffer.from(canonicalJson(payload), 'utf8'), publicKeyObject(publicKeyPem), Buffer.from(signatureB64, 'base64'));
+  } catch {
+    ok = false;
+  }
+  if (verdicts.size >= VERDICT_CACHE_MAX) verdicts.clear();
+  verdicts.set(key, ok);
+  return ok;
+}
+
 export interface SigningKey {
   readonly privateKey: KeyObject;
   readonly publicKeyPem: string;
