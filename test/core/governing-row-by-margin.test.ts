@@ -90,3 +90,24 @@ describe('equal lowest limits over different apertures', () => {
     expect(r.trace.steps.filter((s) => s.label === 'Governing row')).toEqual([]);
   });
 });
+
+// Equal limits again, the lower ratio LAST: 266 nm, 1 us pulses of 1 mJ at 1 Hz over 1 s (N = 1),
+// 0.5 mm beam. Rule 1: 30 J/m² over 1 mm (t < 0.3 s); rule 2: 30 J/m² over 1.5 t^0.375 mm = 1.5 mm
+// at 1 s (EU Directive Table 2.2 and its aperture column, read; 180-302 nm: 30 J/m² at every
+// duration). Ratios 4Q/(pi (1 mm)²)/30 = 42.4 and 4Q/(pi (1.5 mm)²)/30 = 18.9: the summary names
+// rule 1 over 1 mm and no correction is written; OD log10(42.4) = 1.63, reported 1.7.
+describe('equal limits, the larger ratio first', () => {
+  it('266 nm, 1 mJ, 1 us, 1 Hz over 1 s: rule 1, 30 J/m² over 1 mm, OD 1.7, no correction step', () => {
+    const r = evaluateBeam({ ruleSet: 'icnirp2013', settings: { conservative: false }, wavelength_nm: 266, emission: { kind: 'pulsed', pulseEnergy_J: 1e-3, pulseDuration_s: 1e-6, repetitionRate_Hz: 1 }, beam: { diameter_m: 0.0005, divergence_rad: 0.001, definition: '1/e' }, exposureDuration_s: 1 });
+    expect([r.mpe.governingRule, Number(r.mpe.H_Jm2), r.mpe.aperture_m]).toEqual(['single-pulse', 30, '0.001']);
+    expect(Number(r.od.od)).toBeCloseTo(Math.log10(4e-3 / (Math.PI * 1e-6) / 30), 12);
+    expect(r.odRequired).toBe('1.7');
+    expect(r.trace.steps.filter((s) => s.label === 'Governing row')).toEqual([]);
+  });
+  it('the correction step gives the limit in the quantity of the criteria: W/m² for CW, J/m² per pulse for pulses', () => {
+    const step = (x: BeamInput): string => evaluateBeam(x).trace.steps.find((s) => s.label === 'Governing row')?.detail ?? '';
+    expect(step(edge1400)).toContain('limit 1000 W/m²;');
+    expect(step(train1550)).toContain('limit 10000 J/m² per pulse;');
+  });
+});
+

@@ -273,3 +273,16 @@ describe('all at once: every combination of the ends', () => {
     expect(rel(r.bounds.limit_E_Wm2.conservative, (5.6e3 * 1.01e-3 ** 0.25) / 1.01e-3)).toBeLessThan(1e-9);
   });
 });
+
+// The limit bound can sit at one input's own end with the others nominal, below every corner: the
+// pulse count N = ceil(f T) steps. 532 nm, 100 us pulses at 40.4 Hz over 0.25 s: N = 11 (10.1
+// rounded up; at 39.6 Hz N = 10). The reduced single pulse governs: H = 18 t^0.75 J/m² x N^-0.25
+// (ICNIRP 2013 from 5 us, from memory; EU Table 2.2 from 18 us, read; C_P = N^-1/4, EU Table 2.6
+// rule 3), E = H f. Pulse duration -10 % with the rate nominal: E = 18 (90 us)^0.75 11^-0.25 x 40.4
+// = 0.3690 W/m²; the corners give 0.3703 (39.6 Hz, N = 10) and 0.3763 (41.2 Hz), the nominal 0.3993.
+it('532 nm, 100 us at 40.4 Hz, pulse duration ±10 % and repetition rate ±2 %: limit bound at 90 us and 40.4 Hz', () => {
+  const r = evaluateBeam(green({ pulseDuration: 0.1, repetitionRate: 0.02 }, { kind: 'pulsed', pulseEnergy_J: 1e-3, pulseDuration_s: 1e-4, repetitionRate_Hz: 40.4 }));
+  expect(rel(r.bounds.limit_E_Wm2.nominal, 18 * 1e-4 ** 0.75 * 11 ** -0.25 * 40.4)).toBeLessThan(1e-9);
+  expect(rel(r.bounds.limit_E_Wm2.conservative, 18 * 9e-5 ** 0.75 * 11 ** -0.25 * 40.4)).toBeLessThan(1e-9);
+});
+
