@@ -17,7 +17,7 @@ import type { RecordEngine } from '../../electron/backend/records/engine.js';
 import { openPgEngine } from '../../electron/backend/records/pg-engine.js';
 import { openSqliteEngine } from '../../electron/backend/records/sqlite-engine.js';
 import { unlockPersonalKey, type Signer } from '../../electron/backend/records/personal-keys.js';
-import { readTrustList } from '../../electron/backend/records/trust-list.js';
+import { deskAnchor } from '../../electron/backend/records/trust-store.js';
 import { median, type BenchEntry } from './registry.js';
 
 /** A store context on the register at `address` (the store itself must be closed: one writer on a file). */
@@ -59,7 +59,7 @@ export async function measureSignPhases(
         keyId: key.keyId,
         publicKey: key.publicKeyPem,
         signedAt: ctx.now(),
-        trustAnchor: readTrustList(ctx.keyDir).list?.anchor ?? '',
+        trustAnchor: deskAnchor(ctx).anchor ?? '',
       };
       const payload = statementBuilder(prepared, 'Benchmark sign-off.')(who);
       const signature = sign(null, Buffer.from(canonicalJson(payload), 'utf8'), key.privateKey).toString('base64');
