@@ -238,3 +238,30 @@ describe('the largest ocular hazard distance', () => {
     expect(Number(r.nhzDiffuse_m)).toBeCloseTo(Math.sqrt(1 / (Math.PI * ((18 * 0.25 ** 0.75) / 0.25))), 9);
   });
 });
+
+// EN 208 alignment eyewear is offered only where a filter is needed at all (ours, SAFETY.md
+// "Eyewear scale numbers for pulse trains"): 532 nm, one 100 us pulse. The limit is 18 t^0.75 J/m² =
+// 0.0180 J/m² (EU Directive Table 2.2, read). 0.5 uJ through 7 mm is 0.0130 J/m²: below the limit,
+// so RB0 with the reason, although the pulse is above the RB1 energy of 2e-7 J (EN 208:2009 Table B.1,
+// read via the supplier explainer). 1 uJ (0.0260 J/m²) needs RB1.
+describe('EN 208 below the limit', () => {
+  const rb = (Q: number): { scale: number; note: string } | undefined =>
+    evaluateBeam({ ruleSet: 'eu2006', wavelength_nm: 532, emission: { kind: 'pulsed', pulseEnergy_J: Q, pulseDuration_s: 1e-4 }, beam }).scaleNumbers.find((s) => s.mode === 'RB');
+  it('0.5 uJ: RB0, "exposure below the limit: no filter needed"', () => {
+    expect(rb(5e-7)?.scale).toBe(0);
+    expect(rb(5e-7)?.note).toMatch(/^exposure below the limit: no filter needed; pulse energy through a 7 mm aperture/);
+  });
+  it('1 uJ: RB1', () => {
+    expect(rb(1e-6)?.scale).toBe(1);
+    expect(rb(1e-6)?.note).toMatch(/^pulse energy through a 7 mm aperture/);
+  });
+});
+
+// EN 207 mode M in the UV: the LB1 entry differs between revisions (3e11 or 1e11 W/m², from memory,
+// core/eyewear/en207.ts); conservative mode (the default) uses the stricter 1e11. 266 nm, 15.71 uJ in
+// 100 ps over 1 mm: Q/(t A) = 2.0e11 W/m²: M2 against 1e11, M1 against 3e11 (conservative mode off).
+it('266 nm, 15.71 uJ, 100 ps: M2 in conservative mode, M1 without', () => {
+  const m = (conservative: boolean): number | undefined =>
+    evaluateBeam({ wavelength_nm: 266, emission: { kind: 'pulsed', pulseEnergy_J: 1.571e-5, pulseDuration_s: 1e-10 }, beam, settings: { conservative } }).scaleNumbers.find((s) => s.mode === 'M')?.scale;
+  expect([m(true), m(false)]).toEqual([2, 1]);
+});
