@@ -63,6 +63,14 @@ describe.skipIf(skip)(`copy-register into an institution register on PostgreSQL$
       expect(await server.listAllAssessments()).toEqual(await desk.listAllAssessments());
       expect(await server.listPeople()).toEqual(await desk.listPeople());
       expect(await server.listPersonKeys()).toEqual(await desk.listPersonKeys());
+      // The endorsements travel with the register (issue 15 item 4): another desk, given the anchor, trusts the same keys.
+      const other = await openRecordStore({ path: to, keyDir: join(t.dir, 'desk-B') });
+      try {
+        await other.setTrustAnchor({ fingerprint: (await desk.trustList()).anchor ?? '' });
+        expect((await other.listPersonKeys()).map((k) => [k.keyId, k.trusted])).toEqual((await desk.listPersonKeys()).map((k) => [k.keyId, true]));
+      } finally {
+        await other.close();
+      }
       expect(JSON.stringify(await server.exportSite(siteId))).toBe(JSON.stringify(await desk.exportSite(siteId)));
       for (const a of await desk.listAllAssessments()) {
         for (const r of await desk.listRevisions(a.id)) {
