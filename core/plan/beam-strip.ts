@@ -104,9 +104,10 @@ function besideScreens(o: P, u: P, t0: Dec, t1: Dec, w: Dec, screens: readonly S
     const k = q.t.sub(p.t).div(q.s.sub(p.s));
     lines.push({ s0: p.s, s1: q.s, at: (s: Dec) => p.t.add(k.mul(s.sub(p.s))) });
   }
-  sHi = Dec.min(w, sHi.add(pad));
-  sLo = Dec.max(w.neg(), sLo.sub(pad));
   if (sHi.lte(sLo)) return [];
+  // A surface beside the start bounds the band: the region is carried `pad` beyond it sideways
+  // (the lines themselves stop at it, so nothing runs on along the far side of that surface).
+  const widen = (q: Local): Local => (q.s.eq(sHi) && sHi.lt(w) ? { t: q.t, s: Dec.min(w, sHi.add(pad)) } : q.s.eq(sLo) && sLo.gt(w.neg()) ? { t: q.t, s: Dec.max(w.neg(), sLo.sub(pad)) } : q);
   // Offsets where the first screen met can change: ends, crossings of two screens, and where a screen passes the start.
   const marks: Dec[] = [sLo, sHi];
   const within = (s: Dec) => s.gt(sLo) && s.lt(sHi);
@@ -185,7 +186,7 @@ function besideScreens(o: P, u: P, t0: Dec, t1: Dec, w: Dec, screens: readonly S
   return runs.map((r) => {
     const first = r[0] as Pt;
     const last = r[r.length - 1] as Pt;
-    return [{ t: t0, s: first.s }, ...r, { t: t0, s: last.s }].map(plan);
+    return [{ t: t0, s: first.s }, ...r, { t: t0, s: last.s }].map(widen).map(plan);
   });
 }
 

@@ -76,6 +76,14 @@ describe('a surface met within the beam band of its end does not stop the beam (
       text: /^The direct beam of beam A meets the room wall 7 m along its path within 55\.7 mm of door D1, still above the limit \(hazard distance 14\.9 m\): part of the beam may pass through door D1\.$/,
     },
     {
+      name: 'a beam meeting the east wall 30 mm from an ordinary corner of the room is stopped there: the part past the corner meets the north wall first',
+      source: 'derived: the beam runs along y = 4.97 m to the east wall x = 8 m; the lines of its band above y = 5 m start outside the room (the line at right angles from the exit crosses the north wall), those below meet the east wall; the zone ends 1 mm beyond it',
+      plan: { doors: [], paths: [{ laserId: 'L1', exit: p(1, 4.97), elements: [], onward_deg: 0 }] },
+      endsAt: 'wall',
+      maxX: 8.001,
+      findings: ['no-controlled-area:plan'],
+    },
+    {
       name: 'in an L-shaped room, a beam meeting the wall 30 mm from the inside corner: part of it passes the corner into the north arm and reaches its north wall',
       source: 'derived: the beam runs north along x = 3.03 m and meets y = 2 m 1.5 m from the exit; the corner (3, 2) is 30 mm away, inside the 53.5 mm band; the part west of x = 3 m runs on to the north wall, y = 5 m, 4.5 m from the exit; the zone ends 1 mm beyond it',
       plan: { outline: lRoom, doors: [], paths: [{ laserId: 'L1', exit: p(3.03, 0.5), elements: [], onward_deg: 90 }] },
