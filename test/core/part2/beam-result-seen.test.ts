@@ -151,6 +151,12 @@ describe('a limit-table row checked as differing is flagged on the result (SAFET
     expect(flagged[0]).toContain('the published text differs');
     expect(evaluateBeam(cw(532, { settings: check('matches', row) })).warnings.filter((w) => w.startsWith('Limit-table '))).toEqual([]);
   });
+  it('1300 nm: a "differs" check of the factor C_C (1200-1400 nm) is flagged for each row evaluated with it', () => {
+    const r = evaluateBeam(cw(1300, { settings: check('differs', 'factor:CC[1200-1400 nm]') }));
+    const flagged = r.warnings.filter((w) => w.startsWith('Limit-table factor CC (1200-1400 nm) was checked'));
+    expect(flagged.length).toBeGreaterThan(0);
+    expect(flagged.every((w) => w.includes('is evaluated with both and the lower limit is kept'))).toBe(true);
+  });
 });
 
 // Lens on the beam: r = (f/b0) sqrt(4P/(pi E)) from the focus (ANSI Z136.1 App. B, from memory;
@@ -264,4 +270,44 @@ it('266 nm, 15.71 uJ, 100 ps: M2 in conservative mode, M1 without', () => {
   const m = (conservative: boolean): number | undefined =>
     evaluateBeam({ wavelength_nm: 266, emission: { kind: 'pulsed', pulseEnergy_J: 1.571e-5, pulseDuration_s: 1e-10 }, beam, settings: { conservative } }).scaleNumbers.find((s) => s.mode === 'M')?.scale;
   expect([m(true), m(false)]).toEqual([2, 1]);
+});
+
+describe('the eye limit: its duration, the source size, the warnings list', () => {
+  it('532 nm, 1 mW, nothing unusual: no warnings at all; the duration reason is the aversion response, or "given by the caller"', () => {
+    const r = evaluateBeam(cw(532));
+    expect(r.warnings).toEqual([]);
+    expect(r.mpe.durationWhy).toBe('visible beam, unintended viewing: aversion response within 0.25 s (common practice)');
+    expect(evaluateBeam(cw(532, { exposureDuration_s: 0.25 })).mpe.durationWhy).toBe('given by the caller');
+  });
+  // Extended source: C_E = alpha / alpha_min = 10 mrad / 1.5 mrad (EU Directive Table 2.5, read), so
+  // the 0.25 s limit is 18 C_E t^0.75 / t = 25.46 x 6.667 = 169.7 W/m² (EU Table 2.2, read).
+  it('532 nm seen as a 10 mrad source: E = 169.7 W/m² (C_E = 6.667)', () => {
+    expect(Number(evaluateBeam(cw(532, { sourceAngle_rad: 0.01 })).mpe.E_Wm2)).toBeCloseTo(((18 * 0.25 ** 0.75) / 0.25) * (10 / 1.5), 9);
+  });
+  it('a conservative-mode note in the limit trace is not taken for an officer\'s check: 532 nm, 1 mJ, 10 ns, 1 kHz', () => {
+    const r = evaluateBeam({ wavelength_nm: 532, emission: { kind: 'pulsed', pulseEnergy_J: 1e-3, pulseDuration_s: 1e-8, repetitionRate_Hz: 1000 }, beam });
+    expect(r.warnings).toEqual(['Conservative mode: unverified limit-table entries were replaced by stricter values (rule:CP); the limits may be lower than the published ones until verified.']);
+  });
+});
+
+// The two diffuse viewing cases (SAFETY.md "Diffuse reflections, two viewing cases"): each case's trace
+// says over which duration and why, which case governs and why; the deliberate case's trace carries
+// its own (600 s or given) limit, the accidental one does not.
+describe('diffuse viewing cases: what each trace says', () => {
+  const cases = (diffuse: NonNullable<BeamInput['viewing']>['diffuse']): Array<{ viewing: string | undefined; said: string; limitTrace: string }> =>
+    evaluateBeam({ wavelength_nm: 532, emission: { kind: 'cw', power_W: 1 }, beam, viewing: { diffuse } })
+      .distances.filter((d) => d.kind === 'diffuse')
+      .map((d) => ({ viewing: d.viewing, said: d.trace.steps.find((s) => s.label === 'Viewing case')?.detail ?? '', limitTrace: d.trace.children.filter((c) => c.title === 'Limit criteria, eye').map((c) => c.steps[0]?.detail ?? '').join() }));
+  it('no choice, 600 s by default', () => {
+    expect(cases({ reflectance: 1 })).toEqual([
+      { viewing: 'accidental', said: 'accidental viewing over 0.25 s (visible beam, unintended viewing: aversion response within 0.25 s (common practice)); shown for comparison; the deliberate case governs (the larger distance (no choice given))', limitTrace: '' },
+      { viewing: 'deliberate', said: 'deliberate viewing of the spot over 600 s (deliberate viewing of the diffuse spot: 600 s (customary value, from memory)); this case governs: the larger distance (no choice given)', limitTrace: '600 s: deliberate viewing of the diffuse spot: 600 s (customary value, from memory)' },
+    ]);
+  });
+  it('the officer chooses the accidental case and gives 100 s for deliberate viewing', () => {
+    expect(cases({ reflectance: 1, deliberateDuration_s: 100, governs: 'accidental' })).toEqual([
+      { viewing: 'accidental', said: 'accidental viewing over 0.25 s (visible beam, unintended viewing: aversion response within 0.25 s (common practice)); this case governs: chosen by the officer', limitTrace: '' },
+      { viewing: 'deliberate', said: 'deliberate viewing of the spot over 100 s (deliberate viewing of the diffuse spot, given by the caller); shown for comparison; the accidental case governs (chosen by the officer)', limitTrace: '100 s: deliberate viewing of the diffuse spot, given by the caller' },
+    ]);
+  });
 });
