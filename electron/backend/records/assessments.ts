@@ -609,6 +609,11 @@ export async function registerKey(ctx: StoreContext, keyId: string, publicKey: s
 
 /** Chain link of the newest signed (not superseded) revision of an assessment, or null. */
 async function newestSignedLink(ctx: StoreContext, a: AssessmentRow): Promise<string | null> {
+  return (await newestSigned(ctx, a)).link;
+}
+
+/** The newest signed revision: whether there is one, and its chain link (null without a signature). */
+async function newestSigned(ctx: StoreContext, a: AssessmentRow): Promise<{ present: boolean; link: string | null }> {
   // One query (a round trip less on a server): the newest signed revision's number and its
   // signature, if it has one (LEFT JOIN: a signed revision without its signature gives null, as
   // before, never an older revision's link). Its content and results are not read here.
@@ -617,8 +622,9 @@ async function newestSignedLink(ctx: StoreContext, a: AssessmentRow): Promise<st
      WHERE r.assessment_id = ? AND r.status = 'signed' ORDER BY r.revision_no DESC LIMIT 1`,
     a.id,
   ) as (SignatureRow & { signed_revision_id: string; signed_revision_no: number; revision_id: string | null }) | undefined;
-  if (!row || row.revision_id === null) return null;
-  return linkOf(statementFor(a, { id: row.signed_revision_id, revision_no: row.signed_revision_no }, row));
+  if (!row) return { present: false, link: null };
+  if (row.revision_id === null) return { present: true, link: null };
+  return { present: true, link: linkOf(statementFor(a, { id: row.signed_revision_id, revision_no: row.signed_revision_no }, row)) };
 }
 
 export const INSERT_SIGNATURE = `INSERT INTO signature (revision_id, person_id, name, role, signed_at, statement, fingerprint, algorithm, signature, key_id,
@@ -710,6 +716,10 @@ export async function commitSignOff(
   const { assessment: a, draft, fingerprint, previousLink, resultsZ } = p;
   const id = a.id;
   const st = signed.payload;
+  // Key rows are never changed or deleted (signing_key_no_update / _no_delete): a key already
+  // registered before the transaction is still there inside it, so the insert is needed only for a
+  // new key (a round trip less on a server).
+  const keyKnown = (await ctx.q.get('SELECT 1 AS known FROM signing_key WHERE key_id = ?', signed.signer.keyId)) !== undefined;
   await write(ctx, 'Sign-off', async (ctx) => {
     // The row lock of the sign-off: a concurrent save or sign-off of this assessment waits for it.
     await lockRow(ctx, 'assessment', id);
@@ -720,11 +730,12 @@ export async function commitSignOff(
     // The save counter too: a save that landed between reading the draft and this transaction
     // changed the content the signature covers (requests of one host now interleave at awaits).
     if (again.id !== draft.id || again.status !== 'draft' || again.version !== draft.version) throw new RecordError('conflict', 'The assessment changed while signing; try again');
-    if (await newestSignedLink(ctx, a) !== previousLink) throw new RecordError('conflict', 'Another revision was signed meanwhile; try again');
+    const before = await newestSigned(ctx, a);
+    if (before.link !== previousLink) throw new RecordError('conflict', 'Another revision was signed meanwhile; try again');
     if (!resultsZ.equals(draft.results_z) || draft.calculated_with !== ctx.calculatedWith) {
       await ctx.q.run("UPDATE revision SET results_z = ?, calculated_with = ? WHERE id = ? AND status = 'draft'", resultsZ, ctx.calculatedWith, draft.id);
     }
-    await registerKey(ctx, signed.signer.keyId, signed.signer.publicKey, 'this-database');
+    if (!keyKnown) await registerKey(ctx, signed.signer.keyId, signed.signer.publicKey, 'this-database');
     await ctx.q.run(...named(INSERT_SIGNATURE, {
       revision_id: draft.id,
       person_id: st.personId,
@@ -739,7 +750,8 @@ export async function commitSignOff(
       previous_link: previousLink,
       trust_anchor: signed.signer.trustAnchor,
     }));
-    await ctx.q.run("UPDATE revision SET status = 'superseded' WHERE assessment_id = ? AND status = 'signed'", id);
+    // Read under the lock just above: with no signed revision there is nothing to supersede.
+    if (before.present) await ctx.q.run("UPDATE revision SET status = 'superseded' WHERE assessment_id = ? AND status = 'signed'", id);
     // The save counter moves on: a save started before the sign-off is stale.
     await ctx.q.run("UPDATE revision SET status = 'signed', version = version + 1 WHERE id = ?", draft.id);
     await ctx.audit('signed', 'revision', draft.id, `revision ${draft.revision_no} by ${st.name} (${st.role}), key ${shortKeyFingerprint(signed.signer.keyId)}`);
