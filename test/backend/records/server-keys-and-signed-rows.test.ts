@@ -46,7 +46,6 @@ describe.skipIf(skip)(`sealed keys and signed rows on the institution register${
   let officerSql: pg.Client;
   let readerSql: pg.Client;
   let roomA: string;
-  const loginRoles: string[] = [];
   let signer: Awaited<ReturnType<typeof makeSigner>>;
   let cosigner: Awaited<ReturnType<typeof makeSigner>>;
 
@@ -64,7 +63,6 @@ describe.skipIf(skip)(`sealed keys and signed rows on the institution register${
     const readerRole = `${ownerRole}_reader_${suffix}`;
     await adminQuery(schema, `CREATE ROLE ${officerRole} LOGIN PASSWORD '${password}' IN ROLE beamwarden_officer`);
     await adminQuery(schema, `CREATE ROLE ${readerRole} LOGIN PASSWORD '${password}' IN ROLE beamwarden_reader`);
-    loginRoles.push(officerRole, readerRole);
     await adminQuery(schema, 'SELECT bw_grant_access()');
     signer = await makeSigner(owner, 'Dr. Imre Calloway-Senn');
     cosigner = await makeSigner(owner, 'Prof. Nadia Ferreira-Holm');
@@ -85,11 +83,6 @@ describe.skipIf(skip)(`sealed keys and signed rows on the institution register${
     await officer?.close();
     await reader?.close();
     await owner?.close();
-    // This run's login roles go again (the group roles stay, as the README's set-up has them).
-    for (const role of loginRoles) {
-      await adminQuery(schema, `DROP OWNED BY ${role}`).catch(() => undefined);
-      await adminQuery(schema, `DROP ROLE IF EXISTS ${role}`).catch(() => undefined);
-    }
     t.cleanup();
   });
 
