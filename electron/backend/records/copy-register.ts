@@ -20,7 +20,7 @@ import { openRecordStore } from './store.js';
 import { RecordError, type RecordStore } from './types.js';
 
 /** Tables in the order their foreign keys need, with the order rows were written in the file. */
-const REGISTER_TABLES = ['site', 'person', 'room', 'laser_installation', 'eyewear', 'signing_key', 'person_key', 'trust_anchor_pin', 'trust_endorsement', 'trust_retirement'] as const;
+const REGISTER_TABLES = ['site', 'person', 'room', 'laser_installation', 'eyewear', 'signing_key', 'person_key', 'trust_anchor_pin', 'trust_anchor_setup', 'trust_endorsement', 'trust_retirement'] as const;
 const ASSESSMENT_TABLES = ['assessment', 'revision', 'signature', 'co_signature'] as const;
 /** Columns the server numbers itself. */
 const SERVER_NUMBERED = new Set(['insert_seq', 'seq', 'db_role']);

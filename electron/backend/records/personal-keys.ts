@@ -44,13 +44,35 @@ export const RetireKeySchema = z.strictObject({ personId: IdText, reason: z.stri
 interface PersonKeyRow {
   key_id: string;
   person_id: string;
-  sealed_private_key: string;
   created_at: string;
   retired_at: string | null;
   retired_reason: string;
   public_key: string;
 }
-const KEY_SELECT = 'SELECT pk.*, k.public_key FROM person_key pk JOIN signing_key k ON k.key_id = pk.key_id';
+/**
+ * Everything about a key but its sealed private key: on an institution register readers may not
+ * read `sealed_private_key` (column privileges, migration 11), and only unlocking needs it.
+ */
+const KEY_SELECT =
+  'SELECT pk.key_id, pk.person_id, pk.created_at, pk.retired_at, pk.retired_reason, k.public_key FROM person_key pk JOIN signing_key k ON k.key_id = pk.key_id';
+
+/** The sealed private key, for unlocking only; an account that may not read it is told so in words. */
+async function sealedKeyOf(ctx: StoreContext, keyId: string, personName: string): Promise<string> {
+  try {
+    const row = await ctx.q.get<{ sealed_private_key: string }>('SELECT sealed_private_key FROM person_key WHERE key_id = ?', keyId);
+    if (!row) throw new RecordError('signing-key', `${personName}'s signing key is no longer in the register.`);
+    return row.sealed_private_key;
+  } catch (e) {
+    const code = typeof e === 'object' && e !== null && 'code' in e ? String((e as { code: unknown }).code) : '';
+    if (code === '42501' || (e instanceof RecordError && e.code === 'not-permitted')) {
+      throw new RecordError(
+        'not-permitted',
+        `Your account may read the institution register but not use its signing keys: signing needs an officer's account. Nothing was signed or changed.`,
+      );
+    }
+    throw e;
+  }
+}
 
 async function activeKeyRow(ctx: StoreContext, personId: Id): Promise<PersonKeyRow | undefined> {
   return await ctx.q.get(`${KEY_SELECT} WHERE pk.person_id = ? AND pk.retired_at IS NULL`, personId) as PersonKeyRow | undefined;
@@ -148,7 +170,7 @@ export async function unlockPersonalKey(ctx: StoreContext, personId: Id, pass: s
         : `${person.name} has no signing key yet. Create one in the register (People).`,
     );
   }
-  const sealed = SealedKeySchema.safeParse(JSON.parse(row.sealed_private_key));
+  const sealed = SealedKeySchema.safeParse(JSON.parse(await sealedKeyOf(ctx, row.key_id, person.name)));
   if (!sealed.success) throw new RecordError('signing-key', `${person.name}'s sealed signing key is damaged; retire it and create a new one.`);
   const privateKey = openSealedKey(sealed.data, row.key_id, pass);
   if (privateKey === null) throw new RecordError('signing-key', `The passphrase is not correct for ${person.name}'s signing key. Nothing was signed or changed.`);
@@ -285,6 +307,7 @@ export async function admitKeys(
  */
 export async function setUpTrustList(ctx: StoreContext, key: { keyId: string; publicKey: string; personId: string | null; personName: string; privateKey: KeyObject }): Promise<void> {
   const admittedAt = ctx.now();
+  await claimRegisterAnchor(ctx, key.keyId, admittedAt);
   const entry = makeEndorsedEntry(
     { keyId: key.keyId, publicKey: key.publicKey, personId: key.personId, personName: key.personName, admittedAt, endorsedBy: key.keyId },
     key.privateKey,
@@ -293,6 +316,30 @@ export async function setUpTrustList(ctx: StoreContext, key: { keyId: string; pu
   await ctx.q.run('INSERT INTO trust_anchor_pin (anchor, pinned_at) VALUES (?, ?) ON CONFLICT(anchor) DO NOTHING', key.keyId, admittedAt);
   await ctx.audit('trust-anchor-set', 'signing_key', key.keyId, `${key.personName}; fingerprint ${shortKeyFingerprint(key.keyId)}`);
   writeAnchorSetting(ctx.keyDir, key.keyId, admittedAt);
+}
+
+/**
+ * The register's one anchor (migration 11, `trust_anchor_setup`, a one-row table): written first in
+ * the set-up transaction, so when another desk set the register up at the same moment this
+ * transaction fails here and nothing of it (key, endorsement, pin, the desk's setting) stays.
+ */
+async function claimRegisterAnchor(ctx: StoreContext, anchor: string, at: string): Promise<void> {
+  const taken = (): RecordError =>
+    new RecordError(
+      'conflict',
+      'Another desk has just created this register\'s first signing key, which is now the register\'s trust anchor. Nothing was created here. ' +
+        'Enter the register\'s trust anchor fingerprint in Settings & about (as its owner gives it to you on paper), then create your key again with an endorsement by a trusted signer.',
+    );
+  const existing = await ctx.q.get<{ anchor: string }>('SELECT anchor FROM trust_anchor_setup WHERE only_row = 1');
+  if (existing) throw taken();
+  try {
+    await ctx.q.run('INSERT INTO trust_anchor_setup (only_row, anchor, set_up_at) VALUES (1, ?, ?)', anchor, at);
+  } catch (e) {
+    // SQLite: SQLITE_CONSTRAINT_PRIMARYKEY; PostgreSQL: 23505 unique_violation (after waiting for the other desk's commit).
+    const code = typeof e === 'object' && e !== null && 'code' in e ? String((e as { code: unknown }).code) : '';
+    if (code === '23505' || code.startsWith('SQLITE_CONSTRAINT') || (e instanceof RecordError && e.code === 'conflict')) throw taken();
+    throw e;
+  }
 }
 
 export async function createPersonalKey(ctx: StoreContext, raw: z.input<typeof CreateKeySchema>): Promise<PersonKey> {
