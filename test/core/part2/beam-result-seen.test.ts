@@ -311,3 +311,31 @@ describe('diffuse viewing cases: what each trace says', () => {
     ]);
   });
 });
+
+// The skin distance is never the largest OCULAR distance: 1550 nm, 10 W, 100 s on 0.1 m² of skin. The
+// skin limit falls to 100 W/m² for so large an area (SAFETY.md "Large irradiated skin areas", from
+// memory), below the eye's 1000 W/m² (EU Table 2.3, from memory): skin (sqrt(4P/(pi 100)) - 1 mm) /
+// 1 mrad = 355.8 m, eye (sqrt(4P/(pi 1000)) - 1 mm) / 1 mrad = 111.8 m, the largest ocular distance.
+it('1550 nm, 10 W, 100 s, 0.1 m² of skin: largest ocular distance 112 m although the skin distance is 356 m', () => {
+  const r = evaluateBeam({ wavelength_nm: 1550, emission: { kind: 'cw', power_W: 10 }, beam, exposureDuration_s: 100, skinArea_m2: 0.1 });
+  expect(Number(r.skinHazardDistance_m)).toBeCloseTo((Math.sqrt(40 / (Math.PI * 100)) - 0.001) / 0.001, 6);
+  expect(Number(r.nohd_m)).toBeCloseTo((Math.sqrt(40 / (Math.PI * 1000)) - 0.001) / 0.001, 6);
+  expect(topSteps(r, 'Summary')[0]).toContain(`largest ocular hazard distance ${r.nohd_m_reported} m`);
+});
+
+// Additive rule with a lens on the path (SAFETY.md "Additive rule by place"; domain notes 2.1 item 2):
+// a lens can put the whole beam inside the 7 mm aperture, so each beam's exposure is S/A_f, not the
+// part of a 20 mm beam that falls in 7 mm. Two 1 mW beams of 532 nm, 0.25 s: each fraction is
+// 4 x 1 mW / (pi (7 mm)²) / 25.46 W/m² = 1.0205 (EU Table 2.2, read), the sum 2.041 (without the lens
+// rule it would be (7/20)² of that, 0.25).
+it('two 1 mW beams of 20 mm with a lens on the path: sum of fractions 2.04', () => {
+  const b = (id: string): BeamInput => ({ id, wavelength_nm: 532, emission: { kind: 'cw', power_W: 1e-3 }, beam: { diameter_m: 0.02, divergence_rad: 0.001, definition: '1/e' }, viewing: { lens: { focalLength_m: 0.1 } } });
+  const room = evaluateRoom({ lasers: [{ id: 'L', name: 'Laser L', beams: [b('x'), b('y')] }] });
+  const g = room.additive.find((a) => a.tissue === 'eye' && a.beamIds.length === 2);
+  const E = (18 * 0.25 ** 0.75) / 0.25;
+  expect(Number(g?.sumOfFractions)).toBeCloseTo((2 * (4 * 1e-3)) / (Math.PI * 0.007 ** 2) / E, 6);
+  // the same beams without a lens: 4P/(pi (20 mm)²) each over the 7 mm aperture, sum 0.25
+  const bare = evaluateRoom({ lasers: [{ id: 'L', name: 'Laser L', beams: [{ ...b('x'), viewing: {} }, { ...b('y'), viewing: {} }] }] });
+  const g0 = bare.additive.find((a) => a.tissue === 'eye' && a.beamIds.length === 2);
+  expect(Number(g0?.sumOfFractions)).toBeCloseTo((2 * (4 * 1e-3)) / (Math.PI * 0.02 ** 2) / E, 6);
+});
