@@ -3,12 +3,15 @@
  * both started with --db pointing at one PostgreSQL register, each driven through its own Debian
  * chromium. The register is set up as the README's "Institution register" section says: group
  * roles, the owner's first open (tables, protections, grants), one login role per officer in
- * beamwarden_officer, and each officer assigned the site in officer_site. Then, with both screens
- * open on the same site:
+ * beamwarden_officer, and each officer assigned the site in officer_site. Trust as the README's
+ * "Trust across desks" says: A's first key becomes the anchor, B's officer types its fingerprint
+ * from paper into Settings & about (no file goes from desk to desk), and B's key, endorsed once on
+ * A's desk, is trusted on both. Then, with both screens open on the same site:
  *   (a) what officer A saves appears on officer B's open workspace without a reload;
  *   (b) both edit one assessment, A saves first: B's save is refused naming who saved which
  *       record, and what B typed is kept as a copy of its own;
- *   (c) both sign different assessments at the same moment: both signatures verify on both desks;
+ *   (c) both sign different assessments at the same moment: each desk's signature verifies on the
+ *       other desk as on its own;
  *   (d) nothing is lost: the register's contents read back through both hosts' API.
  * Cases "derived: no silent loss" (optimistic concurrency with a row lock, PostgreSQL 15
  * documentation 13.3.2 "Row-Level Locks"; LISTEN/NOTIFY, SQL command reference "NOTIFY").
@@ -19,13 +22,14 @@
  * two login roles.
  */
 import { randomBytes } from 'node:crypto';
-import { copyFileSync, mkdtempSync } from 'node:fs';
+import { existsSync, mkdtempSync } from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
 import pg from 'pg';
 import type { BrowserContext, Page } from 'playwright-core';
 import { afterAll, afterEach, beforeAll, describe, expect, it } from 'vitest';
 import { openRecordStore } from '../../electron/backend/records/index.js';
+import { TRUST_ANCHOR_FILE } from '../../electron/backend/records/trust-anchor-setting.js';
 import { TRUST_LIST_FILE } from '../../electron/backend/records/trust-list.js';
 import { launch } from './browser.js';
 import { removeDir, startHost, type HostHandle } from './host-process.js';
@@ -210,7 +214,7 @@ describe.skipIf(skip)(`two hosts on one institution register${skip ? ` (${SKIP_R
     }
   });
 
-  it('set-up: A registers the site, the owner assigns it to B, each officer adds themselves with a signing key', async () => {
+  it('set-up: A registers the site, the owner assigns it to B, B enters the anchor from paper, B\'s key is endorsed once and trusted on both desks', async () => {
     await a.page.goto(a.host.url);
     await a.page.getByRole('heading', { name: 'Welcome to Beamwarden' }).waitFor();
     await fill(a.page, 'Site (institution or building)', SITE);
@@ -222,17 +226,33 @@ describe.skipIf(skip)(`two hosts on one institution register${skip ? ` (${SKIP_R
     await sql('INSERT INTO officer_site (db_role, site_id) VALUES ($1, $2)', [b.role, sites[0]?.id]);
 
     await addPersonWithKey(a.page, OFFICER_A, PASS_A);
-    expect(await a.page.getByTestId('new-key').textContent()).toContain('this is the trust anchor');
-    // B's desk takes the institution's trust list from the desk that made the anchor (README,
-    // "Keys and trust stay on the desk"); B's key is endorsed by A, who types A's passphrase at B's desk.
-    copyFileSync(path.join(a.dir, TRUST_LIST_FILE), path.join(b.dir, TRUST_LIST_FILE));
+    // A's first key is the register's trust anchor; A writes its full fingerprint on paper for the office.
+    const madeA = (await a.page.getByTestId('new-key').textContent()) ?? '';
+    expect(madeA).toContain('this is the trust anchor');
+    const onPaper = /((?:[0-9a-f]{4} ){15}[0-9a-f]{4})/.exec(madeA)?.[1] ?? '';
+    expect(onPaper).toHaveLength(79);
+
+    // B's desk: no trust anchor yet, so no signature is trusted there (README, "Trust across desks").
     await b.page.goto(b.host.url);
     await b.page.getByRole('heading', { level: 1, name: 'Register' }).waitFor();
-    await addPersonWithKey(b.page, OFFICER_B, PASS_B, { name: OFFICER_A, pass: PASS_A });
+    await b.page.getByRole('button', { name: 'Settings & about' }).click();
+    await b.page.getByTestId('desk-anchor').getByText('No trust anchor is configured on this desk').waitFor();
+    // B types the fingerprint from the paper copy (groups of four, as written) in Settings & about.
+    await b.page.getByLabel('Fingerprint of the trust anchor (64 hexadecimal digits, as on paper)').fill(onPaper.replace(/ /g, '  ').toUpperCase());
+    await b.page.getByRole('button', { name: 'Use this anchor on this desk' }).click();
+    await b.page.getByTestId('trust-anchor-result').getByText('Saved. 1 signing key is trusted here.').waitFor();
+    expect(await b.page.getByTestId('desk-anchor-fingerprint').innerText()).toBe(`${onPaper.slice(0, 39)}\n${onPaper.slice(40)}`);
+    // Nothing was copied between the desks: B's folder holds its own anchor setting and no trust list file.
+    expect(existsSync(path.join(b.dir, TRUST_LIST_FILE))).toBe(false);
+    expect(existsSync(path.join(b.dir, TRUST_ANCHOR_FILE))).toBe(true);
+    await b.page.getByRole('dialog', { name: 'Settings & about' }).getByRole('button', { name: 'Close' }).click();
+
+    // B makes a key on B's desk; it waits for endorsement (B's passphrase only, no one else's).
+    await addPersonWithKey(b.page, OFFICER_B, PASS_B);
     const madeB = (await b.page.getByTestId('new-key').textContent()) ?? '';
-    expect(madeB).not.toContain('waits for endorsement');
+    expect(madeB).toContain('It waits for endorsement');
     const fingerprintB = /([0-9a-f]{4}(?: [0-9a-f]{4}){4})/.exec(madeB)?.[1] ?? '';
-    // Each desk checks signatures against its own trust list: A admits B's key on A's desk too.
+    // A endorses it once, on A's own desk with A's passphrase (the endorsement is a row of the register).
     await a.page.reload();
     await a.page.getByRole('tab', { name: 'People' }).click();
     await a.page.locator('#endorse-key').selectOption({ label: `${OFFICER_B} · ${fingerprintB}` });
@@ -240,6 +260,18 @@ describe.skipIf(skip)(`two hosts on one institution register${skip ? ` (${SKIP_R
     await a.page.locator('#endorse-pass').fill(PASS_A);
     await a.page.getByRole('button', { name: 'Endorse' }).click();
     await a.page.getByText('The key is admitted to the trust list.').waitFor();
+    // ... and B's desk, which did nothing more, trusts it through the chain to its own anchor.
+    await b.page.keyboard.press('Alt+1');
+    await b.page.getByRole('tab', { name: 'People' }).click();
+    await b.page.getByRole('row', { name: new RegExp(`^${OFFICER_B} ${fingerprintB}`) }).getByText('trusted', { exact: true }).waitFor();
+    for (const d of [a, b]) {
+      const keys = await api<Array<{ fingerprint: string; trusted: boolean; isAnchor: boolean }>>(d, 'person-keys-list', {});
+      expect({ desk: d.role, keys: keys.map((k) => [k.trusted, k.isAnchor]).sort() }).toEqual({ desk: d.role, keys: [[true, false], [true, true]] });
+      const trust = await api<{ anchorFull: string; keys: number; problems: string[] }>(d, 'trust-list-info', {});
+      expect({ desk: d.role, ...trust }).toMatchObject({ desk: d.role, anchorFull: onPaper, keys: 2, problems: [] });
+    }
+    const endorsements = await sql<{ n: string }>('SELECT count(*) AS n FROM trust_endorsement');
+    expect(Number(endorsements[0]?.n)).toBe(2);
     // The server keeps the register's backups: neither desk is reminded to make one of its own.
     for (const d of [a, b]) expect(await d.page.getByTestId('backup-reminder').count()).toBe(0);
   });
