@@ -12,7 +12,9 @@
  *       record, and what B typed is kept as a copy of its own;
  *   (c) both sign different assessments at the same moment: each desk's signature verifies on the
  *       other desk as on its own;
- *   (d) nothing is lost: the register's contents read back through both hosts' API.
+ *   (d) nothing is lost: the register's contents read back through both hosts' API;
+ *   (e) B deletes a room whose draft A has open with edits: A's screen says so at once, naming B,
+ *       and A's typing is kept (the room registered again with it) instead of being lost at the next save.
  * Cases "derived: no silent loss" (optimistic concurrency with a row lock, PostgreSQL 15
  * documentation 13.3.2 "Row-Level Locks"; LISTEN/NOTIFY, SQL command reference "NOTIFY").
  * Names are invented (demo scenario: Harwick Vale Photonics Centre).
@@ -374,6 +376,49 @@ describe.skipIf(skip)(`two hosts on one institution register${skip ? ` (${SKIP_R
     // Every write names the officer's account that made it (README: write_record).
     const writers = await sql<{ db_role: string }>("SELECT DISTINCT db_role FROM write_record WHERE table_name = 'revision' ORDER BY db_role");
     expect(writers.map((w) => w.db_role)).toEqual([...roles].sort());
+  });
+
+  it('(e) B deletes a room while A has its draft open with edits: A is told at once and keeps the typing', async () => {
+    await roomWithLaser(b.page, 'C1.02', 'Helium-neon alignment laser');
+    await b.page.getByRole('button', { name: 'Dismiss message' }).click().catch(() => undefined);
+    await a.page.keyboard.press('Alt+1');
+    await a.page.getByRole('tab', { name: 'Rooms & lasers' }).click();
+    await a.page.getByRole('button', { name: /^C1\.02/ }).waitFor({ timeout: 10_000 });
+    await openInWorkspace(a.page, 'C1.02');
+    await laserName(a.page).fill('HeNe alignment laser, bench 3 (A, not saved)');
+    // B deletes the room (a draft only, so it goes with its laser and draft), confirming in the dialog.
+    await b.page.keyboard.press('Alt+1');
+    await b.page.getByRole('tab', { name: 'Rooms & lasers' }).click();
+    await b.page.getByRole('button', { name: /^C1\.02/ }).click();
+    await b.page.getByRole('button', { name: 'Delete room…' }).click();
+    await b.page.getByRole('alertdialog').getByRole('button', { name: 'Delete room' }).click();
+    await b.page.getByRole('button', { name: /^C1\.02/ }).waitFor({ state: 'detached' });
+    const deleted = Date.now();
+    // A's open screen says so, live, naming B's account; A's typing stays on screen.
+    const banner = a.page.getByTestId('deleted-elsewhere');
+    await banner.waitFor({ timeout: 30_000 });
+    measured['B deletes -> A told (ms)'] = Date.now() - deleted;
+    expect(await banner.textContent()).toContain(`" was deleted from the institution register by ${b.role}, together with room C1.02. Your unsaved edits stay on screen, but what is on screen is stored nowhere now.`);
+    expect(await laserName(a.page).inputValue()).toBe('HeNe alignment laser, bench 3 (A, not saved)');
+    if (process.env['BEAMWARDEN_E2E_SHOTS']) await a.page.screenshot({ path: path.join(process.env['BEAMWARDEN_E2E_SHOTS'], 'deleted-elsewhere-a.png') });
+    // A save now is refused in words (nothing to save into) ...
+    await a.page.keyboard.press('Control+s');
+    await a.page.getByText(/^Not saved: .* Keep your version with the button in the message above\.$/).waitFor();
+    // ... and keeping it registers the room again with A's laser and A's version as a draft of its own.
+    await banner.getByRole('button', { name: 'Keep my version: register room C1.02 again with it' }).click();
+    await a.page.getByText(/^Your version is kept as ".*— your version, kept after it was deleted elsewhere" in room C1\.02, registered again\.$/).waitFor();
+    expect(await banner.count()).toBe(0);
+    expect(await laserName(a.page).inputValue()).toBe('HeNe alignment laser, bench 3 (A, not saved)');
+    // Both desks read it back from the register.
+    for (const d of [a, b]) {
+      const o = await api<{ sites: Array<{ rooms: Array<{ room: { id: string; code: string } }> }> }>(d, 'register-overview', { dueBy: '2099-01-01' });
+      const room = o.sites[0]?.rooms.find((r) => r.room.code === 'C1.02');
+      expect(room).toBeDefined();
+      const list = await api<Array<{ id: string; title: string; status: string }>>(d, 'assessments-list', { roomId: room?.room.id });
+      expect(list.map((x) => [x.status, x.title.endsWith('— your version, kept after it was deleted elsewhere')])).toEqual([['draft', true]]);
+      const lasers = await api<Array<{ laser: { name: string } }>>(d, 'installations-list', { roomId: room?.room.id });
+      expect(lasers.map((l) => l.laser.name)).toEqual(['HeNe alignment laser, bench 3 (A, not saved)']);
+    }
   });
 
   it('no script errors on either page', () => {
