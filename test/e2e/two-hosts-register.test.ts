@@ -421,6 +421,23 @@ describe.skipIf(skip)(`two hosts on one institution register${skip ? ` (${SKIP_R
     }
   });
 
+  it('(f) B discards the draft A has open without edits: A is told, and keeps it as an assessment of its own in the room', async () => {
+    // A's kept version from (e) is open on A's screen, saved; B discards that draft (the operation B's page sends).
+    interface Summary { id: string; title: string; status: string }
+    const o = await api<{ sites: Array<{ rooms: Array<{ room: { id: string; code: string } }> }> }>(b, 'register-overview', { dueBy: '2099-01-01' });
+    const roomId = o.sites[0]?.rooms.find((r) => r.room.code === 'C1.02')?.room.id;
+    const [kept] = await api<Summary[]>(b, 'assessments-list', { roomId });
+    await api(b, 'assessment-discard-draft', { id: kept?.id });
+    const banner = a.page.getByTestId('deleted-elsewhere');
+    await banner.waitFor({ timeout: 30_000 });
+    expect(await banner.textContent()).toContain(`of room C1.02 was deleted from the institution register by ${b.role} (its draft was discarded). What is on screen is stored nowhere now.`);
+    await banner.getByRole('button', { name: 'Keep my version as an assessment of its own' }).click();
+    await a.page.getByText(/^Your version is kept as ".*" in room C1\.02\.$/).waitFor();
+    const list = await api<Summary[]>(b, 'assessments-list', { roomId });
+    expect(list.map((x) => x.status)).toEqual(['draft']);
+    expect(list[0]?.id).not.toBe(kept?.id);
+  });
+
   it('no script errors on either page', () => {
     expect(a.errors).toEqual([]);
     expect(b.errors).toEqual([]);
