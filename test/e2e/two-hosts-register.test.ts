@@ -266,6 +266,7 @@ describe.skipIf(skip)(`two hosts on one institution register${skip ? ` (${SKIP_R
     await b.page.keyboard.press('Alt+1');
     await b.page.getByRole('tab', { name: 'People' }).click();
     await b.page.getByRole('row', { name: new RegExp(`^${OFFICER_B} ${fingerprintB}`) }).getByText('trusted', { exact: true }).waitFor();
+    expect(await b.page.getByTestId('new-key').textContent()).toContain('It is endorsed now and trusted on this desk.');
     for (const d of [a, b]) {
       const keys = await api<Array<{ fingerprint: string; trusted: boolean; isAnchor: boolean }>>(d, 'person-keys-list', {});
       expect({ desk: d.role, keys: keys.map((k) => [k.trusted, k.isAnchor]).sort() }).toEqual({ desk: d.role, keys: [[true, false], [true, true]] });
