@@ -2,7 +2,7 @@
  * Application state shared by the screens: the register overview, the room being assessed, its
  * assessment (as last saved) and the draft being edited, with live core results of the draft.
  */
-import type { AppInfo } from '../../electron/api/contracts/app.js';
+import type { AppInfo, RegisterChange } from '../../electron/api/contracts/app.js';
 import type { RegisterOverview, RoomOverview } from '../../electron/api/contracts/register.js';
 import type { Assessment, AssessmentContent, LaserInstallation, Room, Site, WorkSaved } from '../../electron/api/contracts/records.js';
 import { ApiError, invoke, messageOf } from './api.js';
@@ -46,6 +46,13 @@ class Session {
   stale = $state<string | null>(null);
   /** After such a refusal: what the other save changed, by the form's labels (empty until read, or when it cannot be). */
   staleChanges = $state<ChangeRow[]>([]);
+  /**
+   * The open assessment was deleted from the institution register by another officer (its draft
+   * discarded, or its room deleted) while it was open here: what the banner says (null when not).
+   * What is on screen is then stored nowhere, so it is kept on screen until the officer keeps it
+   * as an assessment of its own or leaves it.
+   */
+  deletedElsewhere = $state<string | null>(null);
   /** The message of a register edit refused because someone else changed the entry first (null when none). */
   registerStale = $state<string | null>(null);
   /** Counts reloads of the register after such a refusal: open register forms take the stored values again. */
@@ -126,7 +133,15 @@ class Session {
         await this.refreshOverview();
         const open = this.assessment;
         if (open && heard.changes.some((c) => ['assessment', 'revision', 'signature', 'co_signature'].includes(c.table))) {
-          const now = await invoke('assessment-get', { id: open.id });
+          const now = await invoke('assessment-get', { id: open.id }).catch((e: unknown) => {
+            if (!(e instanceof ApiError && e.code === 'not_found')) throw e;
+            return null;
+          });
+          if (now === null) {
+            if (this.assessment === open) this.tellDeleted(open, heard.changes);
+            this.askAgain(heard.changes.length);
+            return;
+          }
           const changed = now.current.id !== open.current.id || now.version !== open.version;
           if (changed && (this.dirty || this.busy)) {
             const who = [...new Set(heard.changes.map((c) => c.by))].join(', ');
@@ -143,8 +158,76 @@ class Session {
         // A failed refresh is tried again with the next change.
       }
     }
-    // Asked again at once: the back end holds the question until something changes.
-    setTimeout(() => void this.followChanges(), heard.changes.length > 0 ? 0 : CHANGE_PAUSE_MS);
+    this.askAgain(heard.changes.length);
+  }
+
+  /** Asked again at once: the back end holds the question until something changes. */
+  private askAgain(heard: number): void {
+    setTimeout(() => void this.followChanges(), heard > 0 ? 0 : CHANGE_PAUSE_MS);
+  }
+
+  /** Words for the banner when the open assessment was deleted elsewhere (the overview is already read again). */
+  private tellDeleted(open: Assessment, changes: readonly RegisterChange[]): void {
+    const deletes = changes.filter((c) => c.operation === 'DELETE');
+    const who = [...new Set((deletes.length > 0 ? deletes : changes).map((c) => c.by))].join(', ');
+    const title = open.current.content.title.trim() || 'Laser hazard assessment';
+    const code = this.room?.code ?? '';
+    const roomGone = this.room !== null && this.roomOverview(this.room.id) === null;
+    const what = roomGone ? `"${title}" was deleted from the institution register by ${who}, together with room ${code}.` : `"${title}" of room ${code} was deleted from the institution register by ${who} (its draft was discarded).`;
+    const mine = this.dirty ? 'Your unsaved edits stay on screen, but what is on screen is stored nowhere now.' : 'What is on screen is stored nowhere now.';
+    this.deletedElsewhere = `${what} ${mine}`;
+  }
+
+  /** Whether the room of a deleted assessment is gone too (keeping a copy then registers the room again). */
+  get deletedWithRoom(): boolean {
+    return this.deletedElsewhere !== null && this.room !== null && this.roomOverview(this.room.id) === null;
+  }
+
+  /**
+   * After the open assessment was deleted elsewhere: keep what is on screen as an assessment of its
+   * own, in its room; when the room was deleted too, the room is registered again in its site (same
+   * code, name and contacts) and the lasers on screen go into the register with it. Nothing typed
+   * is lost; the officer then decides with the other officer what stays.
+   */
+  async keepDeletedAsCopy(): Promise<void> {
+    const d = this.draft;
+    const room = this.room;
+    if (!d || !room || this.deletedElsewhere === null) return;
+    await this.run(async () => {
+      await this.refreshOverview();
+      let roomId = room.id;
+      let again = false;
+      if (this.roomOverview(room.id) === null) {
+        const site = this.site;
+        if (!site || !(this.overview?.sites ?? []).some((s) => s.site.id === site.id)) {
+          throw new Error(`Site ${site?.name ?? ''} was deleted from the register too, so room ${room.code} cannot be registered again in it. Register the site and the room again first; what is on screen stays until then.`);
+        }
+        const made = await invoke('room-create', { siteId: site.id, code: room.code, name: room.name, responsiblePerson: room.responsiblePerson, contact: room.contact, notes: room.notes });
+        roomId = made.id;
+        this.room = made;
+        again = true;
+      }
+      // Lasers whose register entries went with the deletion go into the register again with the copy.
+      const registered = await invoke('installations-list', { roomId });
+      this.installations = registered;
+      for (const lf of d.lasers) if (!lf.isNew && !registered.some((i) => i.id === lf.id)) lf.isNew = true;
+      const { newLasers } = this.registerChanges(d);
+      const content = contentFrom(d);
+      const suffix = ' — your version, kept after it was deleted elsewhere';
+      const kept = await invoke('work-save', {
+        roomId,
+        assessmentId: null,
+        expected: null,
+        content: { ...content, title: content.title.slice(0, 300 - suffix.length) + suffix },
+        newLasers,
+        changedLasers: [],
+      });
+      this.installations = [...kept.installations];
+      this.setAssessment(kept.assessment);
+      writeLast({ roomId, assessmentId: kept.assessment.id });
+      await this.refreshOverview();
+      this.say('ok', `Your version is kept as "${kept.assessment.current.content.title}" in room ${room.code}${again ? ', registered again' : ''}.`);
+    });
   }
 
   async refreshOverview(): Promise<void> {
@@ -244,6 +327,7 @@ class Session {
   }
 
   private loadDraft(content: AssessmentContent, savedJson: string): void {
+    this.deletedElsewhere = null;
     const ids = new Set(this.installations.map((i) => i.id));
     const d = draftFrom(content, ids);
     d.nonBeamHazards = completeHazards(d.nonBeamHazards);
@@ -259,6 +343,10 @@ class Session {
     if (!d || !room) return false;
     if (this.blockers.length > 0) {
       this.say('error', `Not saved. Fix first: ${this.blockers.join(' | ')}`);
+      return false;
+    }
+    if (this.deletedElsewhere !== null) {
+      this.say('error', `Not saved: ${this.deletedElsewhere} Keep your version with the button in the message above.`);
       return false;
     }
     return this.run(async () => {

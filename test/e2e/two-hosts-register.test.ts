@@ -3,13 +3,18 @@
  * both started with --db pointing at one PostgreSQL register, each driven through its own Debian
  * chromium. The register is set up as the README's "Institution register" section says: group
  * roles, the owner's first open (tables, protections, grants), one login role per officer in
- * beamwarden_officer, and each officer assigned the site in officer_site. Then, with both screens
- * open on the same site:
+ * beamwarden_officer, and each officer assigned the site in officer_site. Trust as the README's
+ * "Trust across desks" says: A's first key becomes the anchor, B's officer types its fingerprint
+ * from paper into Settings & about (no file goes from desk to desk), and B's key, endorsed once on
+ * A's desk, is trusted on both. Then, with both screens open on the same site:
  *   (a) what officer A saves appears on officer B's open workspace without a reload;
  *   (b) both edit one assessment, A saves first: B's save is refused naming who saved which
  *       record, and what B typed is kept as a copy of its own;
- *   (c) both sign different assessments at the same moment: both signatures verify on both desks;
- *   (d) nothing is lost: the register's contents read back through both hosts' API.
+ *   (c) both sign different assessments at the same moment: each desk's signature verifies on the
+ *       other desk as on its own;
+ *   (d) nothing is lost: the register's contents read back through both hosts' API;
+ *   (e) B deletes a room whose draft A has open with edits: A's screen says so at once, naming B,
+ *       and A's typing is kept (the room registered again with it) instead of being lost at the next save.
  * Cases "derived: no silent loss" (optimistic concurrency with a row lock, PostgreSQL 15
  * documentation 13.3.2 "Row-Level Locks"; LISTEN/NOTIFY, SQL command reference "NOTIFY").
  * Names are invented (demo scenario: Harwick Vale Photonics Centre).
@@ -19,13 +24,14 @@
  * two login roles.
  */
 import { randomBytes } from 'node:crypto';
-import { copyFileSync, mkdtempSync } from 'node:fs';
+import { existsSync, mkdtempSync } from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
 import pg from 'pg';
 import type { BrowserContext, Page } from 'playwright-core';
 import { afterAll, afterEach, beforeAll, describe, expect, it } from 'vitest';
 import { openRecordStore } from '../../electron/backend/records/index.js';
+import { TRUST_ANCHOR_FILE } from '../../electron/backend/records/trust-anchor-setting.js';
 import { TRUST_LIST_FILE } from '../../electron/backend/records/trust-list.js';
 import { launch } from './browser.js';
 import { removeDir, startHost, type HostHandle } from './host-process.js';
@@ -210,7 +216,7 @@ describe.skipIf(skip)(`two hosts on one institution register${skip ? ` (${SKIP_R
     }
   });
 
-  it('set-up: A registers the site, the owner assigns it to B, each officer adds themselves with a signing key', async () => {
+  it('set-up: A registers the site, the owner assigns it to B, B enters the anchor from paper, B\'s key is endorsed once and trusted on both desks', async () => {
     await a.page.goto(a.host.url);
     await a.page.getByRole('heading', { name: 'Welcome to Beamwarden' }).waitFor();
     await fill(a.page, 'Site (institution or building)', SITE);
@@ -222,17 +228,33 @@ describe.skipIf(skip)(`two hosts on one institution register${skip ? ` (${SKIP_R
     await sql('INSERT INTO officer_site (db_role, site_id) VALUES ($1, $2)', [b.role, sites[0]?.id]);
 
     await addPersonWithKey(a.page, OFFICER_A, PASS_A);
-    expect(await a.page.getByTestId('new-key').textContent()).toContain('this is the trust anchor');
-    // B's desk takes the institution's trust list from the desk that made the anchor (README,
-    // "Keys and trust stay on the desk"); B's key is endorsed by A, who types A's passphrase at B's desk.
-    copyFileSync(path.join(a.dir, TRUST_LIST_FILE), path.join(b.dir, TRUST_LIST_FILE));
+    // A's first key is the register's trust anchor; A writes its full fingerprint on paper for the office.
+    const madeA = (await a.page.getByTestId('new-key').textContent()) ?? '';
+    expect(madeA).toContain('this is the trust anchor');
+    const onPaper = /((?:[0-9a-f]{4} ){15}[0-9a-f]{4})/.exec(madeA)?.[1] ?? '';
+    expect(onPaper).toHaveLength(79);
+
+    // B's desk: no trust anchor yet, so no signature is trusted there (README, "Trust across desks").
     await b.page.goto(b.host.url);
     await b.page.getByRole('heading', { level: 1, name: 'Register' }).waitFor();
-    await addPersonWithKey(b.page, OFFICER_B, PASS_B, { name: OFFICER_A, pass: PASS_A });
+    await b.page.getByRole('button', { name: 'Settings & about' }).click();
+    await b.page.getByTestId('desk-anchor').getByText('No trust anchor is configured on this desk').waitFor();
+    // B types the fingerprint from the paper copy (groups of four, as written) in Settings & about.
+    await b.page.getByLabel('Fingerprint of the trust anchor (64 hexadecimal digits, as on paper)').fill(onPaper.replace(/ /g, '  ').toUpperCase());
+    await b.page.getByRole('button', { name: 'Use this anchor on this desk' }).click();
+    await b.page.getByTestId('trust-anchor-result').getByText('Saved. 1 signing key is trusted here.').waitFor();
+    expect(await b.page.getByTestId('desk-anchor-fingerprint').innerText()).toBe(`${onPaper.slice(0, 39)}\n${onPaper.slice(40)}`);
+    // Nothing was copied between the desks: B's folder holds its own anchor setting and no trust list file.
+    expect(existsSync(path.join(b.dir, TRUST_LIST_FILE))).toBe(false);
+    expect(existsSync(path.join(b.dir, TRUST_ANCHOR_FILE))).toBe(true);
+    await b.page.getByRole('dialog', { name: 'Settings & about' }).getByRole('button', { name: 'Close' }).click();
+
+    // B makes a key on B's desk; it waits for endorsement (B's passphrase only, no one else's).
+    await addPersonWithKey(b.page, OFFICER_B, PASS_B);
     const madeB = (await b.page.getByTestId('new-key').textContent()) ?? '';
-    expect(madeB).not.toContain('waits for endorsement');
+    expect(madeB).toContain('It waits for endorsement');
     const fingerprintB = /([0-9a-f]{4}(?: [0-9a-f]{4}){4})/.exec(madeB)?.[1] ?? '';
-    // Each desk checks signatures against its own trust list: A admits B's key on A's desk too.
+    // A endorses it once, on A's own desk with A's passphrase (the endorsement is a row of the register).
     await a.page.reload();
     await a.page.getByRole('tab', { name: 'People' }).click();
     await a.page.locator('#endorse-key').selectOption({ label: `${OFFICER_B} · ${fingerprintB}` });
@@ -240,6 +262,19 @@ describe.skipIf(skip)(`two hosts on one institution register${skip ? ` (${SKIP_R
     await a.page.locator('#endorse-pass').fill(PASS_A);
     await a.page.getByRole('button', { name: 'Endorse' }).click();
     await a.page.getByText('The key is admitted to the trust list.').waitFor();
+    // ... and B's desk, which did nothing more, trusts it through the chain to its own anchor.
+    await b.page.keyboard.press('Alt+1');
+    await b.page.getByRole('tab', { name: 'People' }).click();
+    await b.page.getByRole('row', { name: new RegExp(`^${OFFICER_B} ${fingerprintB}`) }).getByText('trusted', { exact: true }).waitFor();
+    expect(await b.page.getByTestId('new-key').textContent()).toContain('It is endorsed now and trusted on this desk.');
+    for (const d of [a, b]) {
+      const keys = await api<Array<{ fingerprint: string; trusted: boolean; isAnchor: boolean }>>(d, 'person-keys-list', {});
+      expect({ desk: d.role, keys: keys.map((k) => [k.trusted, k.isAnchor]).sort() }).toEqual({ desk: d.role, keys: [[true, false], [true, true]] });
+      const trust = await api<{ anchorFull: string; keys: number; problems: string[] }>(d, 'trust-list-info', {});
+      expect({ desk: d.role, ...trust }).toMatchObject({ desk: d.role, anchorFull: onPaper, keys: 2, problems: [] });
+    }
+    const endorsements = await sql<{ n: string }>('SELECT count(*) AS n FROM trust_endorsement');
+    expect(Number(endorsements[0]?.n)).toBe(2);
     // The server keeps the register's backups: neither desk is reminded to make one of its own.
     for (const d of [a, b]) expect(await d.page.getByTestId('backup-reminder').count()).toBe(0);
   });
@@ -342,6 +377,66 @@ describe.skipIf(skip)(`two hosts on one institution register${skip ? ` (${SKIP_R
     // Every write names the officer's account that made it (README: write_record).
     const writers = await sql<{ db_role: string }>("SELECT DISTINCT db_role FROM write_record WHERE table_name = 'revision' ORDER BY db_role");
     expect(writers.map((w) => w.db_role)).toEqual([...roles].sort());
+  });
+
+  it('(e) B deletes a room while A has its draft open with edits: A is told at once and keeps the typing', async () => {
+    await roomWithLaser(b.page, 'C1.02', 'Helium-neon alignment laser');
+    await b.page.getByRole('button', { name: 'Dismiss message' }).click().catch(() => undefined);
+    await a.page.keyboard.press('Alt+1');
+    await a.page.getByRole('tab', { name: 'Rooms & lasers' }).click();
+    await a.page.getByRole('button', { name: /^C1\.02/ }).waitFor({ timeout: 10_000 });
+    await openInWorkspace(a.page, 'C1.02');
+    await laserName(a.page).fill('HeNe alignment laser, bench 3 (A, not saved)');
+    // B deletes the room (a draft only, so it goes with its laser and draft), confirming in the dialog.
+    await b.page.keyboard.press('Alt+1');
+    await b.page.getByRole('tab', { name: 'Rooms & lasers' }).click();
+    await b.page.getByRole('button', { name: /^C1\.02/ }).click();
+    await b.page.getByRole('button', { name: 'Delete room…' }).click();
+    await b.page.getByRole('alertdialog').getByRole('button', { name: 'Delete room' }).click();
+    await b.page.getByRole('button', { name: /^C1\.02/ }).waitFor({ state: 'detached' });
+    const deleted = Date.now();
+    // A's open screen says so, live, naming B's account; A's typing stays on screen.
+    const banner = a.page.getByTestId('deleted-elsewhere');
+    await banner.waitFor({ timeout: 30_000 });
+    measured['B deletes -> A told (ms)'] = Date.now() - deleted;
+    expect(await banner.textContent()).toContain(`" was deleted from the institution register by ${b.role}, together with room C1.02. Your unsaved edits stay on screen, but what is on screen is stored nowhere now.`);
+    expect(await laserName(a.page).inputValue()).toBe('HeNe alignment laser, bench 3 (A, not saved)');
+    if (process.env['BEAMWARDEN_E2E_SHOTS']) await a.page.screenshot({ path: path.join(process.env['BEAMWARDEN_E2E_SHOTS'], 'deleted-elsewhere-a.png') });
+    // A save now is refused in words (nothing to save into) ...
+    await a.page.keyboard.press('Control+s');
+    await a.page.getByText(/^Not saved: .* Keep your version with the button in the message above\.$/).waitFor();
+    // ... and keeping it registers the room again with A's laser and A's version as a draft of its own.
+    await banner.getByRole('button', { name: 'Keep my version: register room C1.02 again with it' }).click();
+    await a.page.getByText(/^Your version is kept as ".*— your version, kept after it was deleted elsewhere" in room C1\.02, registered again\.$/).waitFor();
+    expect(await banner.count()).toBe(0);
+    expect(await laserName(a.page).inputValue()).toBe('HeNe alignment laser, bench 3 (A, not saved)');
+    // Both desks read it back from the register.
+    for (const d of [a, b]) {
+      const o = await api<{ sites: Array<{ rooms: Array<{ room: { id: string; code: string } }> }> }>(d, 'register-overview', { dueBy: '2099-01-01' });
+      const room = o.sites[0]?.rooms.find((r) => r.room.code === 'C1.02');
+      expect(room).toBeDefined();
+      const list = await api<Array<{ id: string; title: string; status: string }>>(d, 'assessments-list', { roomId: room?.room.id });
+      expect(list.map((x) => [x.status, x.title.endsWith('— your version, kept after it was deleted elsewhere')])).toEqual([['draft', true]]);
+      const lasers = await api<Array<{ laser: { name: string } }>>(d, 'installations-list', { roomId: room?.room.id });
+      expect(lasers.map((l) => l.laser.name)).toEqual(['HeNe alignment laser, bench 3 (A, not saved)']);
+    }
+  });
+
+  it('(f) B discards the draft A has open without edits: A is told, and keeps it as an assessment of its own in the room', async () => {
+    // A's kept version from (e) is open on A's screen, saved; B discards that draft (the operation B's page sends).
+    interface Summary { id: string; title: string; status: string }
+    const o = await api<{ sites: Array<{ rooms: Array<{ room: { id: string; code: string } }> }> }>(b, 'register-overview', { dueBy: '2099-01-01' });
+    const roomId = o.sites[0]?.rooms.find((r) => r.room.code === 'C1.02')?.room.id;
+    const [kept] = await api<Summary[]>(b, 'assessments-list', { roomId });
+    await api(b, 'assessment-discard-draft', { id: kept?.id });
+    const banner = a.page.getByTestId('deleted-elsewhere');
+    await banner.waitFor({ timeout: 30_000 });
+    expect(await banner.textContent()).toContain(`of room C1.02 was deleted from the institution register by ${b.role} (its draft was discarded). What is on screen is stored nowhere now.`);
+    await banner.getByRole('button', { name: 'Keep my version as an assessment of its own' }).click();
+    await a.page.getByText(/^Your version is kept as ".*" in room C1\.02\.$/).waitFor();
+    const list = await api<Summary[]>(b, 'assessments-list', { roomId });
+    expect(list.map((x) => x.status)).toEqual(['draft']);
+    expect(list[0]?.id).not.toBe(kept?.id);
   });
 
   it('no script errors on either page', () => {

@@ -24,6 +24,13 @@ import { startTestHost } from './http-host.js';
 import { runVerify } from '../../../electron/cli/verify.js';
 
 const skip = PG_ADDRESS === '';
+/**
+ * Schemas and login roles this file makes, dropped in its afterAll: CI drops the whole throw-away
+ * database, but a developer's test database is kept between runs (the group roles stay: the
+ * README's set-up makes them once per cluster).
+ */
+const madeSchemas = new Set<string>();
+const madeRoles = new Set<string>();
 const base = (x: Assessment) => ({ revisionId: x.current.id, version: x.version });
 
 async function errorOf(fn: () => unknown): Promise<RecordError> {
@@ -72,6 +79,10 @@ describe.skipIf(skip)(`institution register on PostgreSQL${skip ? ` (${PG_SKIP_R
     await a?.close();
     await b?.close();
     t?.cleanup();
+    // Schemas first: a role that still holds rights on one of them cannot be dropped.
+    if (schema) madeSchemas.add(schema);
+    for (const s of madeSchemas) await adminQuery(s, `DROP SCHEMA IF EXISTS ${s} CASCADE`);
+    for (const r of madeRoles) await adminQuery('public', `DROP ROLE IF EXISTS ${r}`);
   });
 
   it('opens with the address shown without its password, and keeps no local database file', () => {
@@ -289,6 +300,7 @@ describe.skipIf(skip)(`institution register on PostgreSQL${skip ? ` (${PG_SKIP_R
       const password = randomBytes(12).toString('hex');
       officerRole = `${owner}_officer_${suffix}`;
       const readerRole = `${owner}_reader_${suffix}`;
+      madeRoles.add(officerRole).add(readerRole);
       await adminQuery(schema, `CREATE ROLE ${officerRole} LOGIN PASSWORD '${password}' IN ROLE beamwarden_officer, beamwarden_reader`);
       await adminQuery(schema, `CREATE ROLE ${readerRole} LOGIN PASSWORD '${password}' IN ROLE beamwarden_reader`);
       await adminQuery(schema, 'SELECT bw_grant_access()');
@@ -383,10 +395,12 @@ describe.skipIf(skip)(`institution register on PostgreSQL${skip ? ` (${PG_SKIP_R
 
     it('a register not set up, opened by an account that may not set it up', async () => {
       const empty = `t_empty_${randomBytes(4).toString('hex')}`;
+      madeSchemas.add(empty);
       await pgAddress(empty);
       const owner = new URL(PG_ADDRESS).username;
       const role = `${owner}_late_${randomBytes(4).toString('hex')}`;
       const password = randomBytes(12).toString('hex');
+      madeRoles.add(role);
       await adminQuery(empty, `CREATE ROLE ${role} LOGIN PASSWORD '${password}'`);
       await adminQuery(empty, `GRANT USAGE ON SCHEMA ${empty} TO ${role}`);
       const address = await addressAs(empty, role, password);
@@ -397,6 +411,7 @@ describe.skipIf(skip)(`institution register on PostgreSQL${skip ? ` (${PG_SKIP_R
 
     it('a register with a newer schema version is refused and left unchanged', async () => {
       const newer = `t_newer_${randomBytes(4).toString('hex')}`;
+      madeSchemas.add(newer);
       const address = await pgAddress(newer);
       const s = await openRecordStore({ path: address, keyDir: t.dir });
       await s.close();

@@ -14,6 +14,7 @@ import * as m0005 from './0005_eyewear_upkeep.js';
 import * as m0007 from './0007_co_signatures.js';
 import * as m0008 from './0008_limit_row_checks.js';
 import * as m0009 from './0009_trust_endorsements.js';
+import * as m0010 from './0010_write_record_lookup.js';
 import * as m0011 from './0011_one_anchor_and_sealed_keys.js';
 
 export interface Migration {
@@ -40,7 +41,7 @@ export const MIGRATIONS: readonly Migration[] = [
   // 8, not 6: schema 7 was released first, and a released database's history must stay a prefix.
   { version: 8, name: m0008.name, sql: m0008.sql, postgresql: m0008.postgresql },
   { version: 9, name: m0009.name, sql: m0009.sql, postgresql: m0009.postgresql },
-  // 11: 10 is reserved by a change on another branch.
+  { version: 10, name: m0010.name, sql: m0010.sql, postgresql: m0010.postgresql },
   { version: 11, name: m0011.name, sql: m0011.sql, postgresql: m0011.postgresql },
 ];
 
