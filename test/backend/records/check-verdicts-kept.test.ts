@@ -5,14 +5,13 @@
  * must never outlive a change that matters for safety (SAFETY.md, "Checks of the limit tables":
  * only checks whose signature is valid and whose key is trusted here are used):
  *  - a check row carrying a valid check's signature over a changed statement is not valid;
- *  - a key taken off the trust list stops its checks at the next listing, in the same process.
+ *  - a desk whose trust anchor changes stops trusting the checks at the next listing, in the same process.
  * Real SQLite files and real keys (no mocks); the people are the invented demo scenario's.
  */
 import Database from 'better-sqlite3';
-import { readFileSync, writeFileSync } from 'node:fs';
 import { afterEach, describe, expect, it } from 'vitest';
 import type { RecordStore } from '../../../electron/backend/records/index.js';
-import { trustListPath } from '../../../electron/backend/records/trust-list.js';
+import { writeAnchorSetting } from '../../../electron/backend/records/trust-anchor-setting.js';
 import { makeSigner, openTemp, tempDir } from './helpers.js';
 
 const REFERENCE = 'IEC 60825-1:2014 Table A.1';
@@ -55,12 +54,11 @@ describe('remembered check verdicts never outlive a change', () => {
     ]);
   });
 
-  it('a key taken off the trust list: its check is no longer used at the next listing', async () => {
+  it("the desk's trust anchor changed (another register's): its check is no longer used at the next listing", async () => {
     const { s, keyDir } = await withCheck();
-    const path = trustListPath(keyDir);
-    const list = JSON.parse(readFileSync(path, 'utf8')) as { entries: Array<{ personName: string }> };
-    // Hand-edited: the officer's entry removed (the file changes size).
-    writeFileSync(path, `${JSON.stringify({ ...list, entries: list.entries.filter((e) => e.personName !== 'Dr. Imre Calloway-Senn') }, null, 2)}\n`);
+    // The anchor lives outside the database (trust across desks, issue 15 item 4): the officer's key
+    // is trusted only through a chain to it, so a desk set to another anchor trusts none of it.
+    writeAnchorSetting(keyDir, 'ab'.repeat(32), '2026-12-02T12:00:00.000Z');
     const listed = await s.listRowChecks('icnirp2013');
     expect(listed.map((c) => [c.keyTrusted, c.ok])).toEqual([[false, false]]);
   });
