@@ -113,6 +113,23 @@ describe('no internal key in what the officer is shown', () => {
     expect(texts.length).toBeGreaterThan(10);
     expect(keyShaped(texts)).toEqual([]);
   });
+  // The words that replace the keys, as the warning and the trace show them. The entries are the
+  // ones the tables mark unchecked: the UV eye aperture at t >= 10 s (3.5 mm in IEC 60825-1:2014 from
+  // memory; the stricter 1 mm of older editions is kept, core/limits/tables/icnirp2013.ts) and the
+  // remembered piecewise C_P (spec 4.6, core/limits/pulse-rules.ts).
+  it.each([
+    ['308 nm UV, 100 s exposure, conservative mode on', 'replaced by stricter values (the limiting aperture for the eye, 180-400 nm, 10 s-30 000 s)'],
+    ['1064 nm train, 10 ns at 1 kHz, tolerances on energy, pulse duration and repetition rate, conservative mode on', 'the pulse correction factor C_P'],
+  ])('the warning names the entry in words: %s', (name, words) => {
+    const beam = BEAMS.find(([n]) => n === name)?.[1];
+    expect(beam).toBeDefined();
+    expect(evaluateBeam(beam as BeamInput).warnings.join('\n')).toContain(words);
+  });
+  it('the tolerance trace names the inputs by the form\'s labels', () => {
+    const beam = BEAMS.find(([n]) => n.startsWith('1064 nm train'))?.[1] as BeamInput;
+    const steps = evaluateBeam(beam).trace.children.find((t) => t.title.startsWith('Input tolerances'))?.steps ?? [];
+    expect(steps.map((x) => x.label)).toEqual(expect.arrayContaining(['Energy per pulse tolerance', 'Pulse duration tolerance', 'Repetition rate tolerance']));
+  });
   it('the scan finds the keys it looks for (a check of the check)', () => {
     const planted = [{ at: 'x', text: 'the repetitionRate tolerance' }, { at: 'y', text: 'replaced: aperture:eye:180-400:10-30000, rule:CP' }, { at: 'z', text: 'pulseEnergy_J' }];
     expect(keyShaped(planted)).toHaveLength(4);
