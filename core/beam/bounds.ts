@@ -10,6 +10,7 @@ import type { BeamInput, Emission, InputTolerances, LimitSettings, RuleSetId } f
 import type { UncertaintyBounds } from '../model/results.js';
 import { addStep, newTrace, type Trace } from '../trace/trace.js';
 import { InputError } from '../errors.js';
+import { toleranceWords } from '../model/input-words.js';
 import { coreNumbers, type CoreNumbers } from './core-numbers.js';
 import { fmt, rec } from './format.js';
 
@@ -38,6 +39,12 @@ function perturb(input: BeamInput, key: Key, factor: number): BeamInput | null {
         beam: { ...input.beam, diameter_m: input.beam.diameter_m * factor, ...(input.beam.diameterY_m !== undefined ? { diameterY_m: input.beam.diameterY_m * factor } : {}) },
       };
   }
+}
+
+/** 'repetitionRate' -> 'Repetition rate tolerance' (a trace step's label). */
+function toleranceLabel(key: Key): string {
+  const w = toleranceWords(key);
+  return `${w.charAt(0).toUpperCase()}${w.slice(1)} tolerance`;
 }
 
 function safeNumbers(x: BeamInput, ruleSet: RuleSetId, settings: LimitSettings | undefined): CoreNumbers | null {
@@ -70,7 +77,7 @@ export function computeBounds(input: BeamInput, ruleSet: RuleSetId, settings: Li
     const lo = perturb(input, key, 1 - t);
     const hi = perturb(input, key, 1 + t);
     if (!lo || !hi) {
-      addStep(trace, { kind: 'note', label: key, detail: `tolerance ±${fmt(new Dec(t * 100))} % given, but this input does not apply to the beam` });
+      addStep(trace, { kind: 'note', label: toleranceLabel(key), detail: `tolerance ±${fmt(new Dec(t * 100))} % given, but this input does not apply to the beam` });
       continue;
     }
     applied.push({ key, t });
@@ -90,7 +97,7 @@ export function computeBounds(input: BeamInput, ruleSet: RuleSetId, settings: Li
     const moveOd = w.od.minus(nominal.od).abs();
     addStep(trace, {
       kind: 'formula',
-      label: key,
+      label: toleranceLabel(key),
       detail: `±${fmt(new Dec(t * 100))} %: worst at ${worstSide > 1 ? '+' : '-'}${fmt(new Dec(t * 100))} %: NOHD ${fmt(w.nohd)} m (nominal ${fmt(nominal.nohd)}), OD ${fmt(w.od)} (nominal ${fmt(nominal.od)}), limit ${fmt(w.limitE)} W/m²` +
         (outs.length < 2 ? ' (one end left the valid range and was skipped)' : ''),
     });
@@ -110,7 +117,7 @@ export function computeBounds(input: BeamInput, ruleSet: RuleSetId, settings: Li
     applied.forEach(({ key, t }, i) => {
       const up = Math.floor(mask / 2 ** i) % 2 === 1;
       if (x) x = perturb(x, key, up ? 1 + t : 1 - t);
-      sides.push(`${key} ${up ? '+' : '-'}${fmt(new Dec(t * 100))} %`);
+      sides.push(`${toleranceWords(key)} ${up ? '+' : '-'}${fmt(new Dec(t * 100))} %`);
     });
     const c = x ? safeNumbers(x, ruleSet, settings) : null;
     if (!c) continue;
@@ -121,11 +128,14 @@ export function computeBounds(input: BeamInput, ruleSet: RuleSetId, settings: Li
   }
   if (worst) addStep(trace, { kind: 'formula', label: 'All at once', detail: `every combination of the ends; the worst is ${worst.sides}: NOHD ${fmt(worst.n.nohd)} m, OD ${fmt(worst.n.od)}, limit ${fmt(worst.n.limitE)} W/m²` });
   const dominantInput = dominant && (dominant.moveNohd.gt(0) || dominant.moveOd.gt(0)) ? dominant.key : null;
+  // The dominant input is chosen by how far it moves the NOHD, then (where no input moves the NOHD)
+  // the OD: say which of the two it moved.
+  const dominantMoves = dominant && dominantInput !== null ? (dominant.moveNohd.gt(0) ? 'NOHD' : 'OD') : null;
   addStep(trace, {
     kind: 'result',
     label: 'Conservative bound',
     detail: applied.length > 0
-      ? `NOHD ${fmt(nohd)} m, OD ${fmt(od)}, limit ${fmt(limitE)} W/m²; dominant input: ${dominantInput ?? 'none (no tolerance moves the result)'}`
+      ? `NOHD ${fmt(nohd)} m, OD ${fmt(od)}, limit ${fmt(limitE)} W/m²; the tolerance that moves the result most: ${dominantInput !== null && dominantMoves !== null ? `${toleranceWords(dominantInput)} (moves the ${dominantMoves} most)` : 'none (no tolerance moves the result)'}`
       : 'no tolerances given: the conservative bound equals the nominal value',
   });
   return {
@@ -134,6 +144,7 @@ export function computeBounds(input: BeamInput, ruleSet: RuleSetId, settings: Li
       odRequired: { nominal: rec(nominal.od), conservative: rec(od) },
       limit_E_Wm2: { nominal: rec(nominal.limitE), conservative: rec(limitE) },
       dominantInput,
+      ...(dominantMoves !== null ? { dominantMoves } : {}),
     },
     trace,
   };

@@ -17,6 +17,7 @@ import { addStep, allSteps, newTrace } from '../trace/trace.js';
 import { beamModel, describeBeam, type BeamModel } from './beam-model.js';
 import { tissueLimits, type TissueLimits } from './tissue-limits.js';
 import { validateBeamInput } from './validate-beam.js';
+import { entryWords } from '../model/input-words.js';
 import { withLargeSkinArea } from './skin-large-area.js';
 import { distanceReported, fmt, maxOf, rec } from './format.js';
 import { computeBounds } from './bounds.js';
@@ -154,7 +155,7 @@ function evaluateValid(input: BeamInput, ruleSet: RuleSetId, settings: LimitSett
   }
   const replaced = [...new Set([...eye.summary.conservativeReplacements, ...skin.summary.conservativeReplacements])].filter((x) => x !== 'pulse-shorter-than-tables');
   if (replaced.length) {
-    warnings.push(`Conservative mode: unverified limit-table entries were replaced by stricter values (${replaced.join(', ')}); the limits may be lower than the published ones until verified.`);
+    warnings.push(`Conservative mode: unverified limit-table entries were replaced by stricter values (${replaced.map(entryWords).join('; ')}); the limits may be lower than the published ones until verified.`);
   }
   // A row or factor the officer checked as 'differs' is flagged on every result that uses it (issue 12).
   const differs = new Set<string>();

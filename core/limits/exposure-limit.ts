@@ -441,7 +441,7 @@ export function exposureLimit(q: ExposureLimitQuery): ExposureLimitResult {
     addStep(trace, {
       kind: 'warning',
       label: 'Conservative mode',
-      detail: `unverified entries replaced by the stricter value: ${conservativeReplacements.join(', ')}`,
+      detail: `unverified entries replaced by the stricter value: ${conservativeReplacements.map(entryWords).join('; ')}`,
     });
   }
 

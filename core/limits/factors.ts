@@ -76,12 +76,8 @@ export function factorPieceKey(name: string, p?: FactorPiece): string {
   return `factor:${name}[${parts.join('; ')}]`;
 }
 
-/** A check key in words: "row H-E-VIS-2", "factor CC (1200-1400 nm)". */
-export function entryWords(key: string): string {
-  const m = /^factor:([A-Za-z_0-9]+)(?:\[(.*)\])?$/.exec(key);
-  if (!m) return `row ${key}`;
-  return m[2] ? `factor ${m[1] ?? ''} (${m[2]})` : `factor ${m[1] ?? ''}`;
-}
+/** A check key in words: defined once with the other keys in words (core/model/input-words.ts). */
+export { entryWords } from '../model/input-words.js';
 
 /** True where the settings carry a 'differs' check with a document value for any factor. */
 export function hasFactorDocumentValues(settings: LimitSettings | undefined): boolean {

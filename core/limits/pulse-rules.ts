@@ -538,7 +538,7 @@ function finish(x: FinishInput): PulsedLimitResult {
   }
   const conservativeReplacements = [...x.replacements];
   if (conservativeReplacements.length) {
-    addStep(x.trace, { kind: 'warning', label: 'Conservative mode', detail: `unverified entries replaced by the stricter value: ${conservativeReplacements.join(', ')}` });
+    addStep(x.trace, { kind: 'warning', label: 'Conservative mode', detail: `unverified entries replaced by the stricter value: ${conservativeReplacements.map(entryWords).join('; ')}` });
   }
   return {
     singlePulse: { H_Jm2: recordString(x.H1), limit: x.single },

@@ -6,6 +6,8 @@
  */
 import { InputError } from '../errors.js';
 import { INPUT_RULES, TEXT_RULES, type RuleName } from './input-rules.js';
+import type { InputTolerances } from './inputs.js';
+import { formatSI } from '../units/quantities.js';
 
 /** Path endings (after lasers[i].beams[j]. or eyewear[k].) and the label they stand for. */
 const LABEL_OF_PATH: ReadonlyArray<readonly [RegExp, string]> = [
@@ -188,4 +190,69 @@ export function placeInRoom(
     return `${laser}, ${named('beam', b?.label || b?.id, at.beam + 1)}`;
   }
   return 'The room';
+}
+
+// ---------------------------------------------------------------------------------------------
+// Keys in officer words: the ONE place that says an input key or a limit-table entry key the way
+// the form and the published tables do. The trace, the warnings, the result card, the limit-table
+// checks screen and the PDF use these; none prints the key itself (issue 12).
+
+/** The form field each tolerance key moves (its label comes from the one input table). */
+const TOLERANCE_RULE: Readonly<Record<keyof InputTolerances, RuleName>> = {
+  power: 'power_W',
+  energy: 'pulseEnergy_J',
+  pulseDuration: 'pulseDuration_s',
+  repetitionRate: 'repetitionRate_Hz',
+  divergence: 'divergence_rad',
+  diameter: 'diameter_m',
+};
+
+/** A toleranced input by the form's label: 'repetitionRate' -> 'repetition rate'. */
+export function toleranceWords(key: string): string {
+  const rule = (TOLERANCE_RULE as Readonly<Record<string, RuleName | undefined>>)[key];
+  if (!rule) return 'an input';
+  const label = INPUT_RULES[rule].label;
+  return label.charAt(0).toLowerCase() + label.slice(1);
+}
+
+/** A table number as the tables print it: 30000 -> '30 000', 0.35 -> '0.35', 1e-13 -> '100 fs'. */
+function tableNumber(text: string, unit: string): string {
+  const n = Number(text);
+  if (!Number.isFinite(n)) return `${text} ${unit}`;
+  if (unit === 's' && n > 0 && n < 1e-3) return formatSI(text, 's');
+  const [whole = '', frac] = String(n).split('.');
+  const grouped = whole.length > 4 ? whole.replace(/\B(?=(\d{3})+(?!\d))/g, ' ') : whole;
+  return `${grouped}${frac !== undefined ? `.${frac}` : ''} ${unit}`;
+}
+
+const TISSUE_WORDS: Readonly<Record<string, string>> = { eye: 'the eye', skin: 'the skin' };
+
+/**
+ * A limit-table entry key in words: a row id ('row H-E-VIS-2'), a factor or factor piece
+ * ('factor CC (1200-1400 nm)', from factorPieceKey), a limiting aperture
+ * ('aperture:eye:180-400:10-30000' -> 'the limiting aperture for the eye, 180-400 nm, 10 s-30 000 s')
+ * or the pulse correction factor ('rule:CP' -> 'the pulse correction factor C_P').
+ */
+export function entryWords(key: string): string {
+  if (key === 'rule:CP') return 'the pulse correction factor C_P';
+  const N = String.raw`(\d+(?:\.\d+)?(?:e[+-]?\d+)?)`; // a number as String(number) writes it
+  const a = new RegExp(`^aperture:(eye|skin):${N}-${N}:${N}-${N}$`).exec(key);
+  if (a) {
+    const [, tissue = '', lo = '', hi = '', tlo = '', thi = ''] = a;
+    return `the limiting aperture for ${TISSUE_WORDS[tissue] ?? tissue}, ${lo}-${tableNumber(hi, 'nm')}, ${tableNumber(tlo, 's')}-${tableNumber(thi, 's')}`;
+  }
+  const m = /^factor:([A-Za-z_0-9]+)(?:\[(.*)\])?$/.exec(key);
+  if (!m) return `row ${key}`;
+  return m[2] ? `factor ${m[1] ?? ''} (${m[2]})` : `factor ${m[1] ?? ''}`;
+}
+
+/**
+ * The sentence the result card and the report say about the tolerances: "the repetition rate
+ * tolerance moves the NOHD most", or "... moves the OD most" where the input was chosen by its
+ * effect on the OD (no tolerance moved the NOHD). Results saved before the field existed say
+ * "the result".
+ */
+export function dominantToleranceWords(bounds: { readonly dominantInput: string | null; readonly dominantMoves?: 'NOHD' | 'OD' }): string | null {
+  if (bounds.dominantInput === null) return null;
+  return `the ${toleranceWords(bounds.dominantInput)} tolerance moves the ${bounds.dominantMoves ?? 'result'} most`;
 }

@@ -96,6 +96,8 @@ export interface UncertaintyBounds {
   readonly limit_E_Wm2: { readonly nominal: string; readonly conservative: string };
   /** Input whose tolerance moves the NOHD the most (none when no tolerances were given). */
   readonly dominantInput: string | null;
+  /** What the dominant input moved most: the NOHD, or (where no tolerance moves the NOHD) the OD. */
+  readonly dominantMoves?: 'NOHD' | 'OD';
 }
 
 export interface BeamResult {

@@ -12,6 +12,7 @@
  * the tables and the traces of many beams and fails on any key without one.
  */
 import { RULE_SETS } from '../limits/rule-sets.js';
+import { entryWords } from '../model/input-words.js';
 
 /** How far a value was checked against the published text. */
 export type CheckStatus =
@@ -187,10 +188,11 @@ export function citationLine(c: Citation): string {
 }
 
 /** Internal keys of the limit tables, spelled out where they appear inside a sentence. */
-const KEY_WORDS: ReadonlyArray<readonly [RegExp, string]> = [
-  [/\brule:CP\b/g, 'pulse-train factor C_P'],
+const KEY_WORDS: ReadonlyArray<readonly [RegExp, string | ((key: string) => string)]> = [
+  // Results saved before the core said these in words (core/model/input-words.ts, the one place).
+  [/\brule:CP\b/g, entryWords],
   [/\bfactor:([A-Za-z_]+)\b/g, 'correction factor $1'],
-  [/\baperture:(eye|skin):[0-9.e+-]+\b/g, 'limiting aperture ($1)'],
+  [/\baperture:(?:eye|skin):[0-9.e+-]+:[0-9.e+-]+/g, entryWords],
   [/\bpulse-shorter-than-tables\b/g, 'pulse shorter than the tables'],
   [/;?\s*ILSC2019 \(read\)/g, ' (ILSC 2019, paper P106)'],
   [/\(published: lasersafe\.de; Seibersdorf Laboratories\)/g, '(published training material, Seibersdorf Laboratories)'],
@@ -213,7 +215,7 @@ export function readableText(text: string): string {
   if (!MAY_NEED_WORK.test(text)) return text;
   let out = text;
   for (const [status, ids] of Object.entries(RULE_SET_STATUS_NOTES)) if (out.includes(status)) out = out.split(status).join(ids);
-  for (const [re, by] of KEY_WORDS) out = out.replace(re, by);
+  for (const [re, by] of KEY_WORDS) out = typeof by === 'string' ? out.replace(re, by) : out.replace(re, (m) => by(m));
   return out;
 }
 

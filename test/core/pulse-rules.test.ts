@@ -189,7 +189,7 @@ describe('the result shows all three rules and names the governing one', () => {
   it('conservative replacements are named in the trace (icnirp2013, C_P unverified)', () => {
     const c = pulsedExposureLimit({ tissue: 'eye', wavelength_nm: 532, pulseDuration_s: 1e-8, repetitionRate_Hz: 1000, exposureDuration_s: 0.25 });
     expect(c.conservativeReplacements).toContain('rule:CP');
-    expect(allSteps(c.trace).some((s) => s.kind === 'warning' && s.detail.includes('rule:CP'))).toBe(true);
+    expect(allSteps(c.trace).some((s) => s.kind === 'warning' && s.detail.includes('the pulse correction factor C_P'))).toBe(true);
   });
 });
 

@@ -118,6 +118,7 @@ export const UncertaintyBoundsSchema = z.strictObject({
   odRequired: nominalConservative,
   limit_E_Wm2: nominalConservative,
   dominantInput: z.string().nullable(),
+  dominantMoves: z.enum(['NOHD', 'OD']).optional(),
 });
 
 export const BeamResultSchema = z.strictObject({

@@ -91,7 +91,7 @@ describe('pulses shorter than the tables (SAFETY.md "Pulses shorter than 100 fs"
     const r = evaluateBeam(fs(5e-14));
     expect(topSteps(r, 'Pulse shorter than 100 fs')).toEqual([expect.stringMatching(/scaled by t\/1e-13 = 0\.5 \(conservative mode, ours\)/)]);
     expect(r.warnings.filter((w) => w.startsWith('Pulse duration 50 fs is shorter than the limit tables'))).toHaveLength(1);
-    expect(r.warnings).toContain('Conservative mode: unverified limit-table entries were replaced by stricter values (H-E-NIR1-1); the limits may be lower than the published ones until verified.');
+    expect(r.warnings).toContain('Conservative mode: unverified limit-table entries were replaced by stricter values (row H-E-NIR1-1); the limits may be lower than the published ones until verified.');
   });
   it('50 fs, conservative mode off: the 100 fs limits unchanged, said so; no replaced entries', () => {
     const r = evaluateBeam(fs(5e-14, false));
@@ -286,7 +286,7 @@ describe('the eye limit: its duration, the source size, the warnings list', () =
   });
   it('a conservative-mode note in the limit trace is not taken for an officer\'s check: 532 nm, 1 mJ, 10 ns, 1 kHz', () => {
     const r = evaluateBeam({ wavelength_nm: 532, emission: { kind: 'pulsed', pulseEnergy_J: 1e-3, pulseDuration_s: 1e-8, repetitionRate_Hz: 1000 }, beam });
-    expect(r.warnings).toEqual(['Conservative mode: unverified limit-table entries were replaced by stricter values (rule:CP); the limits may be lower than the published ones until verified.']);
+    expect(r.warnings).toEqual(['Conservative mode: unverified limit-table entries were replaced by stricter values (the pulse correction factor C_P); the limits may be lower than the published ones until verified.']);
   });
 });
 

@@ -8,7 +8,7 @@
 //   (common practice, worked-examples.md aversion-response-time);
 //   OD = log10(4 P / (pi (7 mm)²) / E) for a beam narrower than the 7 mm aperture at the exit.
 import { describe, expect, it } from 'vitest';
-import { evaluateBeam, type BeamInput, type BeamResult } from '../../../core/index.js';
+import { dominantToleranceWords, evaluateBeam, type BeamInput, type BeamResult } from '../../../core/index.js';
 
 const E = (18 * 0.25 ** 0.75) / 0.25;
 const nohd = (P: number, a: number, phi: number): number => (Math.sqrt((4 * P) / (Math.PI * E)) - a) / phi;
@@ -105,9 +105,9 @@ describe('pulse duration and repetition rate tolerances', () => {
     expect(r.bounds.nohd_m.conservative).toBe(r.bounds.nohd_m.nominal);
     expect(r.bounds.odRequired.conservative).toBe(r.bounds.odRequired.nominal);
     // the trace line: tolerance and worse end in per cent, and that end's limit (6 significant figures)
-    expect(stepOf(r, 'pulseDuration')).toMatch(/^±10 %: worst at \+10 %: .* limit 181818 W\/m²$/);
-    expect(stepOf(r, 'pulseDuration')).not.toContain('skipped');
-    expect(stepOf(r, 'Conservative bound')).toContain('dominant input: none (no tolerance moves the result)');
+    expect(stepOf(r, 'Pulse duration tolerance')).toMatch(/^±10 %: worst at \+10 %: .* limit 181818 W\/m²$/);
+    expect(stepOf(r, 'Pulse duration tolerance')).not.toContain('skipped');
+    expect(stepOf(r, 'Conservative bound')).toContain('the tolerance that moves the result most: none (no tolerance moves the result)');
   });
 
   // 532 nm, 1 mJ, 10 ns, 1 kHz over 0.25 s: the reduced single pulse governs, H = 2e-3 J/m² x C_P with
@@ -126,8 +126,9 @@ describe('pulse duration and repetition rate tolerances', () => {
     expect(rel(r.bounds.odRequired.conservative, Math.log10((4 * 1e-3) / (Math.PI * 0.007 ** 2) / H(1200)))).toBeLessThan(1e-9);
     expect(rel(r.bounds.limit_E_Wm2.conservative, H(800) * 800)).toBeLessThan(1e-9);
     expect(r.bounds.dominantInput).toBe('repetitionRate');
-    expect(stepOf(r, 'repetitionRate')).toMatch(/^±20 %: worst at \+20 %: NOHD 1626\.72 m/);
-    expect(stepOf(r, 'Conservative bound')).toContain('dominant input: repetitionRate');
+    expect(stepOf(r, 'Repetition rate tolerance')).toMatch(/^±20 %: worst at \+20 %: NOHD 1626\.72 m/);
+    expect(stepOf(r, 'Conservative bound')).toContain('the tolerance that moves the result most: repetition rate (moves the NOHD most)');
+    expect(r.bounds.dominantMoves).toBe('NOHD');
   });
 
   // 1550 nm, 1 J, 1 us pulses at 1 Hz over 10 s, 0.5 mm, 1 mrad (1/e). Rule 1: 1e4 J/m² over 1 mm
@@ -149,7 +150,7 @@ describe('pulse duration and repetition rate tolerances', () => {
     expect(rel(r.bounds.odRequired.conservative, Math.log10(4 / (Math.PI * 0.001 ** 2) / 1e4))).toBeLessThan(1e-9);
     expect(r.bounds.odRequired.conservative).toBe(r.bounds.odRequired.nominal);
     expect(rel(r.bounds.limit_E_Wm2.conservative, 1000)).toBeLessThan(1e-12);
-    expect(stepOf(r, 'repetitionRate')).toMatch(/^±20 %: worst at \+20 %: NOHD 38\.5882 m/);
+    expect(stepOf(r, 'Repetition rate tolerance')).toMatch(/^±20 %: worst at \+20 %: NOHD 38\.5882 m/);
   });
 
   // 1064 nm, 1 uJ, 1 us at 900 kHz: +20 % would be 1.08 MHz, pulses of 1 us overlapping (input rule:
@@ -162,7 +163,7 @@ describe('pulse duration and repetition rate tolerances', () => {
     expect(r.bounds.nohd_m.conservative).toBe(r.bounds.nohd_m.nominal); // fewer pulses: shorter NOHD
     expect(r.bounds.odRequired.conservative).toBe(r.bounds.odRequired.nominal);
     expect(r.bounds.limit_E_Wm2.conservative).toBe(lo.mpe.E_Wm2); // E = H f is lowest at 720 kHz
-    expect(stepOf(r, 'repetitionRate')).toMatch(/^±20 %: worst at -20 %: .*\(one end left the valid range and was skipped\)$/);
+    expect(stepOf(r, 'Repetition rate tolerance')).toMatch(/^±20 %: worst at -20 %: .*\(one end left the valid range and was skipped\)$/);
   });
 });
 
@@ -197,15 +198,18 @@ describe('below the limit: the OD decides between equal NOHDs, and the dominant 
   // All at once, the corners tie in pairs (divergence moves nothing): the trace names the first worst
   // corner in the order the tolerances were given, lower ends first.
   it.each([
-    ['power first', { power: 0.1, divergence: 0.1 }, 'power +10 %, divergence -10 %'],
-    ['divergence first', { divergence: 0.1, power: 0.1 }, 'divergence -10 %, power +10 %'],
+    ['power first', { power: 0.1, divergence: 0.1 }, 'power +10 %, divergence (full angle) -10 %'],
+    ['divergence first', { divergence: 0.1, power: 0.1 }, 'divergence (full angle) -10 %, power +10 %'],
   ] as const)('10 uW, power ±10 %, divergence ±10 % (%s): NOHD 0, OD bound at 11 uW, dominant power', (_n, tol, corner) => {
     const r = evaluateBeam(low(tol));
     expect(r.bounds.nohd_m.conservative).toBe('0');
     expect(rel(r.bounds.odRequired.conservative, odLow(1.1e-5))).toBeLessThan(1e-9);
     expect(r.bounds.dominantInput).toBe('power');
-    expect(stepOf(r, 'power')).toMatch(/^±10 %: worst at \+10 %: NOHD 0 m/);
-    expect(stepOf(r, 'divergence')).toMatch(/^±10 %: worst at -10 %/);
+    // chosen by its effect on the OD (no tolerance moves the NOHD of 0 m): the words say so
+    expect(r.bounds.dominantMoves).toBe('OD');
+    expect(dominantToleranceWords(r.bounds)).toBe('the power tolerance moves the OD most');
+    expect(stepOf(r, 'Power tolerance')).toMatch(/^±10 %: worst at \+10 %: NOHD 0 m/);
+    expect(stepOf(r, 'Divergence (full angle) tolerance')).toMatch(/^±10 %: worst at -10 %/);
     expect(stepOf(r, 'All at once')).toBe(`every combination of the ends; the worst is ${corner}: NOHD 0 m, OD -1.94968, limit 25.4558 W/m²`);
   });
 });
@@ -213,7 +217,7 @@ describe('below the limit: the OD decides between equal NOHDs, and the dominant 
 describe('tolerances that do not apply or are zero leave the trace without a bound', () => {
   it('energy ±10 % on a CW beam: the note names the tolerance in per cent', () => {
     const r = evaluateBeam(green({ energy: 0.1 }));
-    expect(stepOf(r, 'energy')).toBe('tolerance ±10 % given, but this input does not apply to the beam');
+    expect(stepOf(r, 'Energy per pulse tolerance')).toBe('tolerance ±10 % given, but this input does not apply to the beam');
   });
   it.each([
     ['no tolerances', undefined],
@@ -250,7 +254,7 @@ describe('all at once: every combination of the ends', () => {
     // the OD at the exit stays with rule 1 over 1 mm: log10(4Q/(pi (1 mm)²) / 1e4)
     expect(rel(r.bounds.odRequired.conservative, Math.log10((4 * Q) / (Math.PI * 1e-6) / 1e4))).toBeLessThan(1e-9);
     expect(r.bounds.dominantInput).toBe('energy');
-    expect(stepOf(r, 'All at once')).toMatch(/the worst is energy \+30 %, repetitionRate \+20 %: NOHD 3\.48623 m/);
+    expect(stepOf(r, 'All at once')).toMatch(/the worst is energy per pulse \+30 %, repetition rate \+20 %: NOHD 3\.48623 m/);
   });
 
   // Each input on its own can still give the worst number: the 1400-1500 nm limit dips at 1 ms, where

@@ -2,6 +2,7 @@
 import type { Content, TableCell } from 'pdfmake/interfaces';
 import type { BeamInput, ViewingConditions } from '../../../../core/model/inputs.js';
 import { dec, roundPlaces, roundSig } from '../../../../core/numeric/decimal.js';
+import { dominantToleranceWords } from '../../../../core/model/input-words.js';
 import { formatSI, plain } from '../../../../core/units/quantities.js';
 import type { UnitHabit } from '../../../../core/units/quantities.js';
 import type { DocumentInput } from '../document-input.js';
@@ -72,7 +73,7 @@ export function inputsSection(doc: DocumentInput, view: RoomView, units: UnitHab
       `${fmt.distanceFull(bd.nohd_m.nominal)} / ${fmt.distanceFull(bd.nohd_m.conservative)}`,
       `${fmt.od(roundOd(bd.odRequired.nominal))} / ${fmt.od(roundOd(bd.odRequired.conservative))}`,
       `${fmt.limitE(bd.limit_E_Wm2.nominal, units)} / ${fmt.limitE(bd.limit_E_Wm2.conservative, units)}`,
-      bd.dominantInput ?? 'no tolerances given',
+      dominantToleranceWords(bd) ?? 'no tolerance moves the result',
     ];
   });
   const a = c.assumptions;
@@ -111,7 +112,7 @@ export function inputsSection(doc: DocumentInput, view: RoomView, units: UnitHab
       ? [paragraph([{ text: 'Entries checked by a named person and used as remembered: ', bold: true }, settings.verifiedRows.join(', ')], { fontSize: 8.5 })]
       : []),
     heading('Uncertainty bounds (nominal / with input tolerances)', 2),
-    gridTable(['Beam', 'NOHD', 'Required OD', 'Eye limit as irradiance', 'Input that moves the NOHD most'], boundRows, [110, 90, 90, 120, '*'], 7.5),
+    gridTable(['Beam', 'NOHD', 'Required OD', 'Eye limit as irradiance', 'Input tolerances'], boundRows, [110, 90, 90, 120, '*'], 7.5),
     headingWith(
       'Who and what was assumed',
       2,
