@@ -4,27 +4,16 @@
  * The list of open entries, the check form with a typed published value and its preview, and the
  * recorded checks after signing. Loopback host on a temporary database with the invented demo site.
  */
-import { mkdirSync } from 'node:fs';
 import path from 'node:path';
-import type { Page } from 'playwright-core';
-import { launch } from './browser.js';
-import { REPO, startHost } from './host-process.js';
+import { REPO } from './host-process.js';
+import { openScreenshotSession } from './screenshot-session.js';
 
 const OUT = path.join(REPO, 'test', 'artifacts', 'screens');
 const DEMO_PASSPHRASE = 'demo passphrase, invented site';
 
-async function shot(page: Page, name: string, full = false): Promise<void> {
-  await page.waitForTimeout(400);
-  await page.screenshot({ path: path.join(OUT, `${name}.png`), fullPage: full });
-  process.stdout.write(`${name}.png\n`);
-}
-
 async function main(): Promise<void> {
-  mkdirSync(OUT, { recursive: true });
-  const host = await startHost({ demo: true });
-  const ctx = await launch();
-  const page = ctx.pages()[0] ?? (await ctx.newPage());
-  page.on('pageerror', (e) => process.stderr.write(`page error: ${e.message}\n`));
+  const s = await openScreenshotSession({ out: OUT, host: { demo: true }, settleMs: 400 });
+  const { host, page } = s;
   try {
     await page.goto(host.url);
     await page.getByRole('heading', { name: 'Register' }).waitFor();
@@ -32,7 +21,7 @@ async function main(): Promise<void> {
     await page.getByRole('heading', { level: 1, name: 'Limit table checks' }).waitFor();
     await page.getByTestId('check-counts').getByText(/not yet checked/).waitFor();
     await page.locator('li[data-entry="H-E-UV-180"] table.samples').waitFor();
-    await shot(page, '40-limit-checks-list');
+    await s.shot('40-limit-checks-list');
 
     const entry = page.locator('li[data-entry="H-E-VIS-2"]');
     await entry.scrollIntoViewIfNeeded();
@@ -44,7 +33,7 @@ async function main(): Promise<void> {
     await page.getByLabel('Passphrase of your signing key').fill(DEMO_PASSPHRASE);
     await page.getByTestId('typed-preview').waitFor();
     await entry.scrollIntoViewIfNeeded();
-    await shot(page, '41-limit-checks-form');
+    await s.shot('41-limit-checks-form');
     await page.getByRole('button', { name: 'Sign the check' }).click();
     await page.getByTestId('recorded-checks').waitFor();
     const cf = page.locator('li[data-entry="factor:CC[1200-1400 nm]"]');
@@ -56,10 +45,9 @@ async function main(): Promise<void> {
     await page.getByRole('button', { name: 'Sign the check' }).click();
     await page.getByTestId('recorded-checks').getByText(/factor CC/).waitFor();
     await page.getByTestId('recorded-checks').scrollIntoViewIfNeeded();
-    await shot(page, '42-limit-checks-recorded');
+    await s.shot('42-limit-checks-recorded');
   } finally {
-    await ctx.close();
-    await host.stop();
+    await s.close();
   }
 }
 

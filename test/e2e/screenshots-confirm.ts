@@ -5,26 +5,15 @@
  * workspace, discarding unsaved changes, removing eyewear from the shelf, restoring a backup, and
  * naming a new site.
  */
-import { mkdirSync } from 'node:fs';
 import path from 'node:path';
-import type { Page } from 'playwright-core';
-import { launch } from './browser.js';
-import { REPO, removeDir, startHost } from './host-process.js';
+import { REPO, removeDir } from './host-process.js';
+import { openScreenshotSession } from './screenshot-session.js';
 
 const OUT = path.join(REPO, 'test', 'artifacts', 'screens', 'confirm');
 
-async function shot(page: Page, name: string): Promise<void> {
-  await page.waitForTimeout(300);
-  await page.screenshot({ path: path.join(OUT, `${name}.png`) });
-  process.stdout.write(`${path.relative(REPO, OUT)}/${name}.png\n`);
-}
-
 async function main(): Promise<void> {
-  mkdirSync(OUT, { recursive: true });
-  const host = await startHost();
-  const ctx = await launch({ width: 1280, height: 800 });
-  const page = ctx.pages()[0] ?? (await ctx.newPage());
-  page.on('pageerror', (e) => process.stderr.write(`page error: ${e.message}\n`));
+  const s = await openScreenshotSession({ out: OUT, viewport: { width: 1280, height: 800 }, settleMs: 300 });
+  const { host, page } = s;
   page.on('dialog', (d) => {
     process.stderr.write(`native ${d.type()} box: ${d.message()}\n`);
     void d.dismiss();
@@ -42,7 +31,7 @@ async function main(): Promise<void> {
     await page.getByRole('heading', { level: 1, name: /Workspace · B2\.16/ }).waitFor();
     await page.getByRole('button', { name: 'Remove Q-switched Nd:YAG' }).click();
     await dialog.waitFor();
-    await shot(page, '01-remove-laser');
+    await s.shot('01-remove-laser');
     await page.keyboard.press('Escape');
     await dialog.waitFor({ state: 'detached' });
 
@@ -51,7 +40,7 @@ async function main(): Promise<void> {
     await page.getByRole('button', { name: '+ Pulsed laser' }).click();
     await page.getByRole('button', { name: 'New assessment' }).click();
     await dialog.waitFor();
-    await shot(page, '02-discard-unsaved-changes');
+    await s.shot('02-discard-unsaved-changes');
     await dialog.getByRole('button', { name: 'Keep editing' }).click();
 
     // Print & export: back up, then restore with unsaved changes open
@@ -61,7 +50,7 @@ async function main(): Promise<void> {
     await page.getByText(/Backed up and checked/).waitFor();
     await page.locator('#safekeeping').getByRole('button', { name: 'Restore…' }).first().click();
     await dialog.waitFor();
-    await shot(page, '03-restore-backup');
+    await s.shot('03-restore-backup');
     await page.keyboard.press('Escape');
 
     // the eyewear shelf
@@ -70,7 +59,7 @@ async function main(): Promise<void> {
     await page.getByRole('tab', { name: 'Eyewear shelf' }).click();
     await page.getByRole('button', { name: /^Remove EW-/ }).last().click();
     await dialog.waitFor();
-    await shot(page, '04-remove-eyewear');
+    await s.shot('04-remove-eyewear');
     await page.keyboard.press('Escape');
 
     // naming a new site
@@ -78,11 +67,10 @@ async function main(): Promise<void> {
     await page.getByRole('button', { name: '+ Add a site' }).click();
     await dialog.waitFor();
     await page.keyboard.type('Harwick Vale Photonics Centre, Building C');
-    await shot(page, '05-new-site-name');
+    await s.shot('05-new-site-name');
     await page.keyboard.press('Escape');
   } finally {
-    await ctx.close();
-    await host.stop();
+    await s.close();
     removeDir(host.dir);
   }
 }

@@ -6,26 +6,15 @@
  * thousands comma refused), and an empty room.
  * Loopback host on a temporary database with the invented demo site.
  */
-import { mkdirSync } from 'node:fs';
 import path from 'node:path';
-import type { Page } from 'playwright-core';
-import { launch } from './browser.js';
-import { REPO, removeDir, startHost } from './host-process.js';
+import { REPO, removeDir } from './host-process.js';
+import { openScreenshotSession } from './screenshot-session.js';
 
 const OUT = path.join(REPO, 'test', 'artifacts', 'screens');
 
-async function shot(page: Page, name: string): Promise<void> {
-  await page.waitForTimeout(500);
-  await page.screenshot({ path: path.join(OUT, `${name}.png`) });
-  process.stdout.write(`${name}.png\n`);
-}
-
 async function main(): Promise<void> {
-  mkdirSync(OUT, { recursive: true });
-  const host = await startHost({ demo: true });
-  const ctx = await launch();
-  const page = ctx.pages()[0] ?? (await ctx.newPage());
-  page.on('pageerror', (e) => process.stderr.write(`page error: ${e.message}\n`));
+  const s = await openScreenshotSession({ out: OUT, host: { demo: true }, settleMs: 500 });
+  const { host, page } = s;
   try {
     await page.goto(host.url);
     await page.getByRole('heading', { name: 'Register' }).waitFor();
@@ -36,15 +25,15 @@ async function main(): Promise<void> {
     await page.getByRole('button', { name: /^Beam 1: Nd:YAG 1064/ }).click();
     const energy = page.getByLabel('Energy per pulse', { exact: true });
     await energy.scrollIntoViewIfNeeded();
-    await shot(page, '20-input-echo');
+    await s.shot('20-input-echo');
     await energy.fill('200 MJ');
     await page.getByLabel('Pulse duration', { exact: true }).fill('8');
-    await shot(page, '21-input-question-and-bare-number');
+    await s.shot('21-input-question-and-bare-number');
     await page.getByLabel('Pulse duration', { exact: true }).fill('6 ns');
     await energy.fill('450 mJ');
     await page.getByLabel('Diffuse reflection').first().check();
     await page.getByLabel('Diffuse reflectance (% or fraction)').first().scrollIntoViewIfNeeded();
-    await shot(page, '22-input-diffuse-incomplete');
+    await s.shot('22-input-diffuse-incomplete');
     // a CSV inventory: how each quantity cell was read, and a question for an unusual one
     await page.keyboard.press('Alt+6');
     await page.getByRole('heading', { level: 1, name: /^Print/ }).waitFor();
@@ -52,11 +41,11 @@ async function main(): Promise<void> {
     await page.locator('#import-csv').setInputFiles({ name: 'inventory.csv', mimeType: 'text/csv', buffer: Buffer.from(csv) });
     await page.getByTestId('csv-readings').waitFor();
     await page.getByTestId('csv-readings').scrollIntoViewIfNeeded();
-    await shot(page, '24-csv-readings');
+    await s.shot('24-csv-readings');
     await page.locator('#import-csv').setInputFiles({ name: 'inventory.csv', mimeType: 'text/csv', buffer: Buffer.from(csv.replace('1 mW', '"1,500 mW"').replace(/\(invented\)/g, '(invented 2)')) });
     await page.getByRole('cell', { name: /comma/ }).waitFor();
     await page.getByRole('cell', { name: /comma/ }).scrollIntoViewIfNeeded();
-    await shot(page, '25-csv-comma-refused');
+    await s.shot('25-csv-comma-refused');
     // an empty room: a friendly start, not an error
     const overview = await fetch(`${host.origin}/api/register-overview`, { method: 'POST', headers: { 'content-type': 'application/json', 'x-beamwarden-token': host.token }, body: JSON.stringify({ dueBy: '2099-01-01' }) });
     const siteId = ((await overview.json()) as { value: { sites: Array<{ site: { id: string } }> } }).value.sites[0]?.site.id ?? '';
@@ -68,10 +57,9 @@ async function main(): Promise<void> {
     await page.getByRole('button', { name: /^Z9\.99/ }).click();
     await page.getByRole('button', { name: 'Open in workspace' }).click();
     await page.getByTestId('room-start').waitFor({ timeout: 30_000 });
-    await shot(page, '23-empty-room');
+    await s.shot('23-empty-room');
   } finally {
-    await ctx.close();
-    await host.stop();
+    await s.close();
     removeDir(host.dir);
   }
 }
