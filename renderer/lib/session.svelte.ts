@@ -478,6 +478,44 @@ class Session {
     });
   }
 
+  /**
+   * Discard the open draft revision (asked first, in the app's dialog): the draft leaves the
+   * register; signed revisions are never touched. A draft on top of a signed revision gives that
+   * revision back; a first draft (nothing signed) takes its assessment with it, and the room's
+   * next assessment (or a fresh draft) opens. False when the officer kept it, or it was refused.
+   */
+  async discardDraft(): Promise<boolean> {
+    const a = this.assessment;
+    const room = this.room;
+    if (!a || !room || a.current.status !== 'draft' || this.deletedElsewhere !== null) return false;
+    const ok = await confirmChoice(discardDraftQuestion(a, room.code, this.unsavedChanges()));
+    if (!ok || this.assessment !== a) return false;
+    return this.run(async () => {
+      await invoke('assessment-discard-draft', { id: a.id });
+      this.stale = null;
+      this.staleChanges = [];
+      const rev = a.current.revisionNo;
+      const title = a.current.content.title.trim() || 'Laser hazard assessment';
+      if (rev > 1) {
+        this.setAssessment(await invoke('assessment-get', { id: a.id }));
+        await this.refreshOverview();
+        this.say('ok', `Draft revision ${rev} of “${title}” discarded; signed revision ${rev - 1} is open again.`);
+        return;
+      }
+      // The assessment went with its only revision: open the room as if chosen in the register.
+      this.assessment = null;
+      this.draft = null;
+      await this.refreshOverview();
+      const [installations, list] = await Promise.all([invoke('installations-list', { roomId: room.id }), invoke('assessments-list', { roomId: room.id })]);
+      this.installations = installations;
+      const next = [...list].sort((x, y) => y.updatedAt.localeCompare(x.updatedAt))[0];
+      if (next) this.setAssessment(await invoke('assessment-get', { id: next.id }));
+      else this.loadDraft(await invoke('assessment-new-content', { roomId: room.id }), '');
+      writeLast({ roomId: room.id, assessmentId: this.assessment?.id ?? null });
+      this.say('ok', `Draft “${title}” discarded; it had no signed revision, so it is no longer in the register of room ${room.code}.`);
+    });
+  }
+
   async reloadAssessment(): Promise<void> {
     const a = this.assessment;
     if (!a) return;
@@ -535,6 +573,37 @@ class Session {
   }
 }
 
+
+/**
+ * The question before a draft revision is discarded: what leaves the register (the draft as last
+ * saved, the edits not saved yet, and for a first draft the assessment itself) and what stays
+ * (every signed revision, the room and its register).
+ */
+export function discardDraftQuestion(a: Assessment, roomCode: string, unsaved: readonly string[]): Parameters<typeof confirmChoice>[0] {
+  const cur = a.current;
+  const n = cur.revisionNo;
+  const title = cur.content.title.trim() || 'Laser hazard assessment';
+  const lost = [`Draft revision ${n} as last saved (${dateTime(cur.updatedAt)}): its inputs, assumptions, eyewear and control choices and its results`];
+  if (n === 1) lost.push(`The assessment “${title}” itself: it has no signed revision, so it leaves the room's list`);
+  if (unsaved.length > 0) lost.push(...unsaved.map((u) => `Not saved yet: ${u}`));
+  const register = `Room ${roomCode}, its lasers (also those added with this draft) and the eyewear shelf stay in the register.`;
+  return {
+    title: n === 1 ? `Discard the draft “${title}”?` : `Discard draft revision ${n} of “${title}”?`,
+    body:
+      n === 1
+        ? `“${title}” of room ${roomCode} has only this draft, never signed. Discarding deletes it from the register; this cannot be undone.`
+        : `“${title}” of room ${roomCode} has a draft revision ${n} on top of signed revision ${n - 1}. Discarding deletes the draft from the register; this cannot be undone.`,
+    consequencesIntro: 'Deleted with it:',
+    consequences: lost,
+    kept:
+      n === 1
+        ? `Nothing signed is affected. ${register}`
+        : `${n === 2 ? 'Signed revision 1 stays' : `Signed revisions 1 to ${n - 1} stay`} exactly as signed, and revision ${n - 1} opens again. ${register}`,
+    confirmLabel: `Discard draft revision ${n}`,
+    cancelLabel: 'Keep the draft',
+    danger: true,
+  };
+}
 
 function readLast(): { roomId: string; assessmentId: string | null } | null {
   try {
