@@ -584,22 +584,22 @@ export function discardDraftQuestion(a: Assessment, roomCode: string, unsaved: r
   const n = cur.revisionNo;
   const title = cur.content.title.trim() || 'Laser hazard assessment';
   const lost = [`Draft revision ${n} as last saved (${dateTime(cur.updatedAt)}): its inputs, assumptions, eyewear and control choices and its results`];
-  if (n === 1) lost.push(`The assessment “${title}” itself: it has no signed revision, so it leaves the room's list`);
+  if (n === 1) lost.push("The assessment itself: it has no signed revision, so it leaves the room's list");
   if (unsaved.length > 0) lost.push(...unsaved.map((u) => `Not saved yet: ${u}`));
   const register = `Room ${roomCode}, its lasers (also those added with this draft) and the eyewear shelf stay in the register.`;
   return {
     title: n === 1 ? `Discard the draft “${title}”?` : `Discard draft revision ${n} of “${title}”?`,
     body:
       n === 1
-        ? `“${title}” of room ${roomCode} has only this draft, never signed. Discarding deletes it from the register; this cannot be undone.`
-        : `“${title}” of room ${roomCode} has a draft revision ${n} on top of signed revision ${n - 1}. Discarding deletes the draft from the register; this cannot be undone.`,
+        ? `This assessment of room ${roomCode} has only this draft and was never signed. Discarding deletes it from the register; this cannot be undone.`
+        : `Revision ${n} of this assessment of room ${roomCode} is a draft made from signed revision ${n - 1}. Discarding deletes the draft from the register; this cannot be undone.`,
     consequencesIntro: 'Deleted with it:',
     consequences: lost,
     kept:
       n === 1
         ? `Nothing signed is affected. ${register}`
         : `${n === 2 ? 'Signed revision 1 stays' : `Signed revisions 1 to ${n - 1} stay`} exactly as signed, and revision ${n - 1} opens again. ${register}`,
-    confirmLabel: `Discard draft revision ${n}`,
+    confirmLabel: n === 1 ? 'Discard the draft' : `Discard draft revision ${n}`,
     cancelLabel: 'Keep the draft',
     danger: true,
   };

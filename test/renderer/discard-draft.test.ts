@@ -62,11 +62,11 @@ describe('discarding the draft of an assessment', () => {
     await until(shown);
     const d = within(dialog());
     expect(d.getByRole('heading').textContent).toBe('Discard the draft “Fibre bench, first look”?');
-    expect(dialog().textContent).toContain('“Fibre bench, first look” of room A0.07 has only this draft, never signed. Discarding deletes it from the register; this cannot be undone.');
+    expect(dialog().textContent).toContain('This assessment of room A0.07 has only this draft and was never signed. Discarding deletes it from the register; this cannot be undone.');
     const lost = d.getAllByRole('listitem').map((li) => li.textContent ?? '');
     expect(lost).toEqual([
       expect.stringMatching(/^Draft revision 1 as last saved \(\d{4}-\d{2}-\d{2} \d{2}:\d{2} UTC\): its inputs, assumptions, eyewear and control choices and its results$/),
-      "The assessment “Fibre bench, first look” itself: it has no signed revision, so it leaves the room's list",
+      "The assessment itself: it has no signed revision, so it leaves the room's list",
     ]);
     expect(d.getByTestId('choice-kept').textContent).toBe('Nothing signed is affected. Room A0.07, its lasers (also those added with this draft) and the eyewear shelf stay in the register.');
     expect(document.activeElement).toBe(d.getByRole('button', { name: 'Keep the draft' }));
@@ -76,7 +76,7 @@ describe('discarding the draft of an assessment', () => {
 
     await fireEvent.click(screen.getByRole('button', { name: 'Discard this draft…' }));
     await until(shown);
-    await fireEvent.click(within(dialog()).getByRole('button', { name: 'Discard draft revision 1' }));
+    await fireEvent.click(within(dialog()).getByRole('button', { name: 'Discard the draft' }));
     await until(() => !shown() && !session.busy);
     expect(await store.listAssessments(room.id)).toEqual([]);
     // The room stays, with its register lasers; a fresh unsaved draft is on screen.
@@ -98,7 +98,7 @@ describe('discarding the draft of an assessment', () => {
     await until(shown);
     const d = within(dialog());
     expect(d.getByRole('heading').textContent).toBe('Discard draft revision 2 of “Fibre bench, new amplifier”?');
-    expect(dialog().textContent).toContain('has a draft revision 2 on top of signed revision 1.');
+    expect(dialog().textContent).toContain('Revision 2 of this assessment of room A0.07 is a draft made from signed revision 1.');
     const lost = d.getAllByRole('listitem').map((li) => li.textContent ?? '');
     expect(lost).toHaveLength(2);
     expect(lost[0]).toMatch(/^Draft revision 2 as last saved /);
@@ -133,7 +133,7 @@ describe('discarding the draft of an assessment', () => {
     render(WorkspaceScreen);
     await fireEvent.click(screen.getByRole('button', { name: 'Discard this draft…' }));
     await until(shown);
-    expect(within(dialog()).getByRole('button', { name: 'Discard draft revision 1' })).toBeTruthy();
+    expect(within(dialog()).getByRole('button', { name: 'Discard the draft' })).toBeTruthy();
     await fireEvent.click(within(dialog()).getByRole('button', { name: 'Keep the draft' }));
     await until(() => !shown());
     expect(await store.listAssessments(room.id)).toHaveLength(1);
