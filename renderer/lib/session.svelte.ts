@@ -132,13 +132,16 @@ class Session {
         for (let i = 0; this.busy && i < BUSY_WAIT_STEPS; i++) await new Promise((r) => setTimeout(r, BUSY_WAIT_STEP_MS));
         await this.refreshOverview();
         const open = this.assessment;
+        if (!open && this.draft && this.room && this.deletedElsewhere === null && this.roomOverview(this.room.id) === null) {
+          this.tellDeleted(whoDeleted(heard.changes, this.deletedIds()));
+        }
         if (open && heard.changes.some((c) => ['assessment', 'revision', 'signature', 'co_signature'].includes(c.table))) {
           const now = await invoke('assessment-get', { id: open.id }).catch((e: unknown) => {
             if (!(e instanceof ApiError && e.code === 'not_found')) throw e;
             return null;
           });
           if (now === null) {
-            if (this.assessment === open) this.tellDeleted(open, heard.changes);
+            if (this.assessment === open) this.tellDeleted(whoDeleted(heard.changes, this.deletedIds()));
             this.askAgain(heard.changes.length);
             return;
           }
@@ -166,21 +169,66 @@ class Session {
     setTimeout(() => void this.followChanges(), heard > 0 ? 0 : CHANGE_PAUSE_MS);
   }
 
-  /** Words for the banner when the open assessment was deleted elsewhere (the overview is already read again). */
-  private tellDeleted(open: Assessment, changes: readonly RegisterChange[]): void {
-    const deletes = changes.filter((c) => c.operation === 'DELETE');
-    const who = [...new Set((deletes.length > 0 ? deletes : changes).map((c) => c.by))].join(', ');
-    const title = open.current.content.title.trim() || 'Laser hazard assessment';
+  /** The ids whose deletion elsewhere takes the open work with it: the assessment, its room, its site. */
+  private deletedIds(): Set<string> {
+    return new Set([this.assessment?.id, this.room?.id, this.site?.id].filter((x): x is string => x !== undefined));
+  }
+
+  /**
+   * Words for the banner when the open work was deleted elsewhere (the overview is already read
+   * again): the site with the room, the room, or only the assessment's draft; by whom on a server
+   * (null: not known, on a register file another window of the same host).
+   */
+  private tellDeleted(who: string | null): void {
+    const a = this.assessment;
+    const title = (a?.current.content.title ?? this.draft?.title ?? '').trim() || 'Laser hazard assessment';
     const code = this.room?.code ?? '';
+    const register = this.onServer ? 'the institution register' : 'the register';
+    // Not known: on a server, a desk that has not heard the deletion; on a file, another window of this host.
+    const by = who !== null && who !== '' ? `by ${who}` : this.onServer ? 'by another officer' : 'in another window';
+    const withIt = a ? `“${title}”` : 'its assessments';
+    const siteGone = this.site !== null && !(this.overview?.sites ?? []).some((s) => s.site.id === this.site?.id);
     const roomGone = this.room !== null && this.roomOverview(this.room.id) === null;
-    const what = roomGone ? `"${title}" was deleted from the institution register by ${who}, together with room ${code}.` : `"${title}" of room ${code} was deleted from the institution register by ${who} (its draft was discarded).`;
+    const what = siteGone
+      ? `Site ${this.site?.name ?? ''} was deleted from ${register} ${by}, with room ${code} and ${withIt}.`
+      : roomGone
+        ? `Room ${code} was deleted from ${register} ${by}, with ${withIt}.`
+        : `“${title}” of room ${code} was deleted from ${register} ${by} (its draft was discarded).`;
     const mine = this.dirty ? 'Your unsaved edits stay on screen, but what is on screen is stored nowhere now.' : 'What is on screen is stored nowhere now.';
     this.deletedElsewhere = `${what} ${mine}`;
+  }
+
+  /**
+   * After a save refused as "not found": whether the open room or assessment went (deleted in
+   * another window or on another desk); if so the banner says so, with who on a server.
+   */
+  private async noticeDeleted(): Promise<boolean> {
+    const a = this.assessment;
+    const room = this.room;
+    if (!room) return false;
+    await this.refreshOverview();
+    const roomGone = this.roomOverview(room.id) === null;
+    const assessmentGone = a !== null && !roomGone && !(this.roomOverview(room.id)?.assessments ?? []).some((x) => x.id === a.id);
+    if (!roomGone && !assessmentGone) return false;
+    let who: string | null = null;
+    try {
+      const heard = await invoke('register-changes', { since: 0 });
+      if (heard.live) who = whoDeleted(heard.changes, this.deletedIds());
+    } catch {
+      // Who it was is a courtesy; the banner stands without it.
+    }
+    this.tellDeleted(who);
+    return true;
   }
 
   /** Whether the room of a deleted assessment is gone too (keeping a copy then registers the room again). */
   get deletedWithRoom(): boolean {
     return this.deletedElsewhere !== null && this.room !== null && this.roomOverview(this.room.id) === null;
+  }
+
+  /** Whether the site of the open room is gone too (keeping a copy then registers the site again). */
+  get deletedWithSite(): boolean {
+    return this.deletedWithRoom && this.site !== null && !(this.overview?.sites ?? []).some((s) => s.site.id === this.site?.id);
   }
 
   /**
@@ -197,10 +245,18 @@ class Session {
       await this.refreshOverview();
       let roomId = room.id;
       let again = false;
+      let siteAgain = false;
       if (this.roomOverview(room.id) === null) {
-        const site = this.site;
-        if (!site || !(this.overview?.sites ?? []).some((s) => s.site.id === site.id)) {
-          throw new Error(`Site ${site?.name ?? ''} was deleted from the register too, so room ${room.code} cannot be registered again in it. Register the site and the room again first; what is on screen stays until then.`);
+        let site = this.site;
+        if (!site) throw new Error(`Room ${room.code} cannot be registered again: its site is not known here. What is on screen stays; register the room again in the Register first.`);
+        if (!(this.overview?.sites ?? []).some((s) => s.site.id === site?.id)) {
+          // The site went too: register it again as it was, with the eyewear the assessment names,
+          // so the copy has a room to live in (an officer without the right to add sites is refused here, in words).
+          const eyewear = d.eyewear;
+          site = await invoke('site-create', { name: site.name, building: site.building, address: site.address, notes: site.notes });
+          for (const spec of eyewear) await invoke('eyewear-create', { siteId: site.id, spec: JSON.parse(JSON.stringify(spec)) as typeof spec });
+          this.site = site;
+          siteAgain = true;
         }
         const made = await invoke('room-create', { siteId: site.id, code: room.code, name: room.name, responsiblePerson: room.responsiblePerson, contact: room.contact, notes: room.notes });
         roomId = made.id;
@@ -226,7 +282,7 @@ class Session {
       this.setAssessment(kept.assessment);
       writeLast({ roomId, assessmentId: kept.assessment.id });
       await this.refreshOverview();
-      this.say('ok', `Your version is kept as "${kept.assessment.current.content.title}" in room ${room.code}${again ? ', registered again' : ''}.`);
+      this.say('ok', `Your version is kept as "${kept.assessment.current.content.title}" in room ${room.code}${siteAgain ? `, registered again with site ${this.site?.name ?? ''} and its eyewear` : again ? ', registered again' : ''}.`);
     });
   }
 
@@ -370,6 +426,8 @@ class Session {
           this.stale = e.message;
           if (a) await this.readStaleChanges(a);
         }
+        // The room or the assessment went while it was open here: the banner says so and offers the copy.
+        if (e instanceof ApiError && e.code === 'not_found') await this.noticeDeleted();
         throw e;
       }
       this.stale = null;
@@ -565,6 +623,7 @@ class Session {
       return true;
     } catch (e) {
       if (e instanceof ApiError && e.code === 'stale' && this.stale !== null) return false;
+      if (e instanceof ApiError && e.code === 'not_found' && this.deletedElsewhere !== null) return false;
       this.say('error', messageOf(e));
       return false;
     } finally {
@@ -603,6 +662,14 @@ export function discardDraftQuestion(a: Assessment, roomCode: string, unsaved: r
     cancelLabel: 'Keep the draft',
     danger: true,
   };
+}
+
+/** The accounts that deleted any of `ids` among the changes heard (else any deletion heard; null when none). */
+function whoDeleted(changes: readonly RegisterChange[], ids: ReadonlySet<string>): string | null {
+  const deletes = changes.filter((c) => c.operation === 'DELETE');
+  const these = deletes.filter((c) => ids.has(c.id));
+  const names = [...new Set((these.length > 0 ? these : deletes).map((c) => c.by))];
+  return names.length > 0 ? names.join(', ') : null;
 }
 
 function readLast(): { roomId: string; assessmentId: string | null } | null {

@@ -65,7 +65,9 @@ export async function saveWork(ctx: StoreContext, raw: WorkSave): Promise<WorkSa
   if (w.assessmentId !== null && w.expected === null) {
     throw new RecordError('invalid', 'Save: the version of the assessment you opened is missing (reload it and save again)');
   }
-  const room = await getRoom(ctx, w.roomId);
+  const room = await getRoom(ctx, w.roomId).catch(async (e: unknown) => {
+    throw await goneRefusal(ctx, w, e);
+  });
   const laserIds: Record<string, Id> = {};
   const assessment = await inTransaction(ctx, `Assessment of room ${room.code}`, async (ctx): Promise<Assessment> => {
     // 1. Nothing is written unless every part is still as the officer opened it.
@@ -100,6 +102,29 @@ export async function saveWork(ctx: StoreContext, raw: WorkSave): Promise<WorkSa
     return w.assessmentId === null
       ? await createAssessment(ctx, { roomId: room.id, content })
       : await saveAssessment(ctx, w.assessmentId, content, w.expected ?? undefined);
+  }).catch(async (e: unknown) => {
+    throw await goneRefusal(ctx, w, e);
   });
   return { assessment: await getAssessment(ctx, assessment.id), installations: await listInstallations(ctx, room.id), laserIds };
+}
+
+/**
+ * A save into a room or an assessment that is no longer in the register (deleted on another desk,
+ * or in another window of this host, after it was opened here): said in officer words, naming the
+ * account that deleted it on a server, instead of "No room with id …". Looked up only after a
+ * refusal, so a save that goes through costs no extra query. Any other error is passed on as it is.
+ */
+async function goneRefusal(ctx: StoreContext, w: WorkSave, e: unknown): Promise<unknown> {
+  // An assessment deleted between the room read and the version check reads as one without
+  // revisions ('corrupt-database'): only when it is still there is that damage.
+  if (!(e instanceof RecordError) || (e.code !== 'not-found' && e.code !== 'corrupt-database')) return e;
+  const roomThere = (await ctx.q.get('SELECT id FROM room WHERE id = ?', w.roomId)) !== undefined;
+  const assessmentThere = w.assessmentId === null || (await ctx.q.get('SELECT id FROM assessment WHERE id = ?', w.assessmentId)) !== undefined;
+  if (roomThere && assessmentThere) return e;
+  const by = await ctx.engine.lastWriter(ctx.q, roomThere ? 'assessment' : 'room', roomThere ? (w.assessmentId ?? '') : w.roomId);
+  const byWhom = by !== null ? ` by ${by}` : '';
+  const what = roomThere
+    ? `“${w.content.title}” is no longer in the register: its draft was discarded${byWhom} after it was opened here.`
+    : `The room of “${w.content.title}” is no longer in the register: it was deleted${byWhom} after it was opened here.`;
+  return new RecordError('not-found', `Not saved. ${what} Nothing was written; keep your version as an assessment of its own.`);
 }
