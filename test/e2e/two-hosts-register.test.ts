@@ -35,6 +35,7 @@ import { TRUST_ANCHOR_FILE } from '../../electron/backend/records/trust-anchor-s
 import { TRUST_LIST_FILE } from '../../electron/backend/records/trust-list.js';
 import { launch } from './browser.js';
 import { removeDir, startHost, type HostHandle } from './host-process.js';
+import { createLoginRole, ensureGroupRoles, type RoleQuery } from '../backend/records/pg-roles.js';
 
 const PG_ADDRESS = process.env['BEAMWARDEN_TEST_PG'] ?? '';
 const SKIP_REASON = 'skipped: BEAMWARDEN_TEST_PG is not set (.ci/run sets it to a throw-away PostgreSQL database)';
@@ -163,15 +164,15 @@ describe.skipIf(skip)(`two hosts on one institution register${skip ? ` (${SKIP_R
     schema = `e2e_two_hosts_${suffix}`;
     await admin.query(`CREATE SCHEMA ${schema}`);
     // README, server set-up: the two group roles (cluster-wide, so made only where missing) ...
-    for (const g of ['beamwarden_reader', 'beamwarden_officer']) {
-      await admin.query(`DO $$ BEGIN IF NOT EXISTS (SELECT 1 FROM pg_roles WHERE rolname = '${g}') THEN CREATE ROLE ${g} NOLOGIN; END IF; END $$`);
-    }
+    const pool = admin;
+    const q: RoleQuery = async (sql, params) => (await pool.query(sql, params)).rows as Array<Record<string, unknown>>;
+    await ensureGroupRoles(q);
     // ... one login per officer in beamwarden_officer (named after the run's role, so .ci/run drops them too) ...
     const passwords: Record<string, string> = {};
     for (const who of ['a', 'b']) {
       const role = `${owner}_officer_${who}_${suffix}`;
       passwords[role] = randomBytes(12).toString('hex');
-      await admin.query(`CREATE ROLE ${role} LOGIN PASSWORD '${passwords[role]}' IN ROLE beamwarden_officer`);
+      await createLoginRole(q, role, passwords[role] ?? '', ['beamwarden_officer']);
       roles.push(role);
     }
     // ... and the owner's first open sets the register up (tables, protections, grants).

@@ -16,6 +16,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { openRecordStore, RecordError, type RecordStore } from '../../../electron/backend/records/index.js';
 import { adminQuery, ENGINES, PG_ADDRESS, PG_SKIP_REASON, pgAddress, pgSnapshot, schemaFor } from './engines.js';
 import { makeSigner, openTemp, registerRoom, STATEMENT, tempDir } from './helpers.js';
+import { createLoginRole, ensureGroupRoles, type RoleQuery } from './pg-roles.js';
 
 const skip = PG_ADDRESS === '';
 const pgEngine = ENGINES[1];
@@ -53,16 +54,15 @@ describe.skipIf(skip)(`sealed keys and signed rows on the institution register${
     schema = schemaFor(t.dir, 'records.sqlite');
     owner = await openTemp(t.dir, undefined, pgEngine);
     const ownerRole = new URL(PG_ADDRESS).username;
-    for (const g of ['beamwarden_reader', 'beamwarden_officer']) {
-      await adminQuery(schema, `DO $$ BEGIN IF NOT EXISTS (SELECT 1 FROM pg_roles WHERE rolname = '${g}') THEN CREATE ROLE ${g} NOLOGIN; END IF; END $$`);
-    }
+    const q: RoleQuery = (sql, params) => adminQuery(schema, sql, params);
+    await ensureGroupRoles(q);
     // Login roles of this run, named after the run's own role so that .ci/run drops them.
     const suffix = randomBytes(4).toString('hex');
     const password = randomBytes(12).toString('hex');
     const officerRole = `${ownerRole}_officer_${suffix}`;
     const readerRole = `${ownerRole}_reader_${suffix}`;
-    await adminQuery(schema, `CREATE ROLE ${officerRole} LOGIN PASSWORD '${password}' IN ROLE beamwarden_officer`);
-    await adminQuery(schema, `CREATE ROLE ${readerRole} LOGIN PASSWORD '${password}' IN ROLE beamwarden_reader`);
+    await createLoginRole(q, officerRole, password, ['beamwarden_officer']);
+    await createLoginRole(q, readerRole, password, ['beamwarden_reader']);
     await adminQuery(schema, 'SELECT bw_grant_access()');
     signer = await makeSigner(owner, 'Dr. Imre Calloway-Senn');
     cosigner = await makeSigner(owner, 'Prof. Nadia Ferreira-Holm');

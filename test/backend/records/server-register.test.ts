@@ -20,6 +20,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { openRecordStore, RecordError, type Assessment, type RecordStore, type RegisterChanges } from '../../../electron/backend/records/index.js';
 import { adminClient, adminQuery, PG_ADDRESS, PG_SKIP_REASON, pgAddress, pgSnapshot, schemaFor } from './engines.js';
 import { makeSigner, openTemp, registerRoom, STATEMENT, tempDir } from './helpers.js';
+import { createLoginRole, ensureGroupRoles, type RoleQuery } from './pg-roles.js';
 import { startTestHost } from './http-host.js';
 import { runVerify } from '../../../electron/cli/verify.js';
 
@@ -292,17 +293,16 @@ describe.skipIf(skip)(`institution register on PostgreSQL${skip ? ` (${PG_SKIP_R
     beforeAll(async () => {
       owner = new URL(PG_ADDRESS).username;
       // Group roles as the README's set-up makes them (cluster-wide; kept between runs).
-      for (const g of ['beamwarden_reader', 'beamwarden_officer']) {
-        await adminQuery(schema, `DO $$ BEGIN IF NOT EXISTS (SELECT 1 FROM pg_roles WHERE rolname = '${g}') THEN CREATE ROLE ${g} NOLOGIN; END IF; END $$`);
-      }
+      const q: RoleQuery = (sql, params) => adminQuery(schema, sql, params);
+      await ensureGroupRoles(q);
       // Login roles of this run, named after the run's own role so that .ci/run drops them.
       const suffix = randomBytes(4).toString('hex');
       const password = randomBytes(12).toString('hex');
       officerRole = `${owner}_officer_${suffix}`;
       const readerRole = `${owner}_reader_${suffix}`;
       madeRoles.add(officerRole).add(readerRole);
-      await adminQuery(schema, `CREATE ROLE ${officerRole} LOGIN PASSWORD '${password}' IN ROLE beamwarden_officer, beamwarden_reader`);
-      await adminQuery(schema, `CREATE ROLE ${readerRole} LOGIN PASSWORD '${password}' IN ROLE beamwarden_reader`);
+      await createLoginRole(q, officerRole, password, ['beamwarden_officer', 'beamwarden_reader']);
+      await createLoginRole(q, readerRole, password, ['beamwarden_reader']);
       await adminQuery(schema, 'SELECT bw_grant_access()');
       const { site, room } = await registerRoom(a, 'A0.07');
       siteA = site.id;
