@@ -15,7 +15,13 @@ import { adminQuery, PG_ADDRESS, PG_SKIP_REASON, pgAddress } from './engines.js'
 import { tempDir } from './helpers.js';
 
 const skip = PG_ADDRESS === '';
-const freshSchema = (what: string) => `t_${what}_${randomBytes(4).toString('hex')}`;
+/** Schemas this file made: dropped after the file (locally nothing else removes them; .ci/run drops its whole database). */
+const madeSchemas: string[] = [];
+const freshSchema = (what: string): string => {
+  const schema = `t_${what}_${randomBytes(4).toString('hex')}`;
+  madeSchemas.push(schema);
+  return schema;
+};
 
 async function errorOf(fn: () => unknown): Promise<RecordError> {
   try {
@@ -36,7 +42,10 @@ describe.skipIf(skip)(`institution register migrations on PostgreSQL${skip ? ` (
   beforeAll(() => {
     t = tempDir('bw-pg-migrate-');
   });
-  afterAll(() => t.cleanup());
+  afterAll(async () => {
+    t.cleanup();
+    for (const schema of madeSchemas.splice(0)) await adminQuery('public', `DROP SCHEMA IF EXISTS ${schema} CASCADE`);
+  });
 
   it.each(MIGRATIONS.slice(0, -1).map((m) => [m.version]))('a register at version %i is migrated to the latest, with its history', async (from) => {
     const schema = freshSchema(`v${from}`);
