@@ -569,7 +569,7 @@ class Session {
       const next = [...list].sort((x, y) => y.updatedAt.localeCompare(x.updatedAt))[0];
       if (next) this.setAssessment(await invoke('assessment-get', { id: next.id }));
       else this.loadDraft(await invoke('assessment-new-content', { roomId: room.id }), '');
-      writeLast({ roomId: room.id, assessmentId: this.assessment?.id ?? null });
+      writeLast({ roomId: room.id, assessmentId: next ? next.id : null });
       this.say('ok', `Draft “${title}” discarded; it had no signed revision, so it is no longer in the register of room ${room.code}.`);
     });
   }

@@ -388,9 +388,12 @@ const summaryFromRow = (trust: TrustList | null, r: SummaryRow): AssessmentSumma
 });
 
 export async function listAssessments(ctx: StoreContext, roomId: Id): Promise<AssessmentSummary[]> {
-  await getRoom(ctx, roomId);
   const trust = (await loadTrust(ctx)).list;
-  return (await ctx.q.all(`${SUMMARY_SELECT} WHERE a.room_id = ? ORDER BY r.updated_at DESC, a.id`, roomId) as SummaryRow[]).map((row) => summaryFromRow(trust, row));
+  const rows = await ctx.q.all(`${SUMMARY_SELECT} WHERE a.room_id = ? ORDER BY r.updated_at DESC, a.id`, roomId) as SummaryRow[];
+  // A room with assessments exists; only an empty list asks whether the room is there at all
+  // (a round trip less on a server for the list an officer opens most).
+  if (rows.length === 0) await getRoom(ctx, roomId);
+  return rows.map((row) => summaryFromRow(trust, row));
 }
 
 /** Every assessment of the database (oldest first), for a whole-database check. */
@@ -505,7 +508,14 @@ function resultsFor(ctx: StoreContext, content: AssessmentContent, previous: Rev
  */
 export async function assertNotStale(ctx: StoreContext, id: Id, expected: SaveBase | undefined, doing: 'save' | 'sign' = 'save'): Promise<void> {
   if (expected === undefined) return;
-  const current = await newestRevisionHead(ctx, id);
+  await refuseIfStale(ctx, await newestRevisionHead(ctx, id), expected, doing);
+}
+
+/**
+ * The version check on a newest revision already read (a round trip less on a server than reading
+ * it again): nothing when it is the one the officer opened, else the refusal naming who and when.
+ */
+async function refuseIfStale(ctx: StoreContext, current: RevisionHead, expected: SaveBase, doing: 'save' | 'sign' = 'save'): Promise<void> {
   if (current.id === expected.revisionId && current.version === expected.version) return;
   const signed = current.status !== 'draft' ? await getSignatureRow(ctx, current.id) : undefined;
   const at = signed?.signed_at ?? current.updated_at;
@@ -528,9 +538,15 @@ export async function saveAssessment(ctx: StoreContext, id: Id, rawContent: Asse
   // A saved draft or a new revision is evaluated with the register's checks in force now (issue 12);
   // a signed revision keeps the checks it was signed with in its content.
   const content = await contentWithChecks(ctx, normaliseContent(rawContent));
-  await getAssessmentRow(ctx, id);
-  await assertNotStale(ctx, id, expected);
-  const before = await newestRevisionRow(ctx, id);
+  // One read of the newest revision serves the early version check and the reuse of its results
+  // (on a server each statement is a round trip); a missing one is told apart afterwards.
+  const newest = await ctx.q.get('SELECT * FROM revision WHERE assessment_id = ? ORDER BY revision_no DESC LIMIT 1', id) as RevisionRow | undefined;
+  if (newest === undefined) {
+    await getAssessmentRow(ctx, id); // "No assessment …" when it is gone
+    throw new RecordError('corrupt-database', `Assessment ${id} has no revision`);
+  }
+  const before = newest;
+  if (expected !== undefined) await refuseIfStale(ctx, before, expected);
   const resultsZ = resultsFor(ctx, content, before);
   // Same bytes as stored in the draft: leave the column alone rather than rewrite the blob.
   const draftResults = before.status === 'draft' && resultsZ === before.results_z ? null : resultsZ;
@@ -538,8 +554,9 @@ export async function saveAssessment(ctx: StoreContext, id: Id, rawContent: Asse
   await write(ctx, 'Assessment', async (ctx) => {
     // On a server, another officer's save or sign-off of this assessment waits here until ours commits.
     await lockRow(ctx, 'assessment', id);
-    await assertNotStale(ctx, id, expected ?? { revisionId: before.id, version: before.version });
-    const current = await newestRevisionRow(ctx, id);
+    // The head (not the stored content) is all the check and the write below need.
+    const current = await newestRevisionHead(ctx, id);
+    await refuseIfStale(ctx, current, expected ?? { revisionId: before.id, version: before.version });
     if (current.status === 'draft') {
       await ctx.q.run(`UPDATE revision SET content_json = ?, results_z = coalesce(?, results_z), calculated_with = ?, updated_at = ?, title = ?, review_by = ?,
            version = version + 1 WHERE id = ? AND status = 'draft'`, JSON.stringify(content), draftResults, ctx.calculatedWith, now, content.title, content.reviewBy, current.id);
