@@ -7,29 +7,27 @@
  * Case "derived: the officer's check reaches the record".
  */
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { BrowserContext } from 'playwright-core';
-import { launch } from './browser.js';
-import { removeDir, startHost, type HostHandle } from './host-process.js';
+import type { Page } from 'playwright-core';
+import type { HostHandle } from './host-process.js';
 import { wcagViolations } from './axe.js';
+import { openDemoHost, type DemoSession } from './demo-session.js';
 
 const DEMO_PASSPHRASE = 'demo passphrase, invented site';
 
+let session: DemoSession | undefined;
 let host: HostHandle;
-let ctx: BrowserContext;
+let page: Page;
 
 beforeAll(async () => {
-  host = await startHost({ demo: true });
-  ctx = await launch();
+  session = await openDemoHost();
+  ({ host, page } = session);
 });
 afterAll(async () => {
-  await ctx?.close();
-  await host?.stop();
-  if (host) removeDir(host.dir);
+  await session?.close();
 });
 
 describe('checking a limit-table row against the published text', () => {
   it('records a signed check from the screen and lists it as in use', async () => {
-    const page = ctx.pages()[0] ?? (await ctx.newPage());
     await page.goto(host.url);
     await page.getByRole('heading', { name: 'Register' }).waitFor();
     await page.getByRole('navigation', { name: 'Screens' }).getByRole('link', { name: /Limit table checks/ }).click();

@@ -7,20 +7,19 @@
  */
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { BrowserContext, Page } from 'playwright-core';
-import { launch } from './browser.js';
-import { removeDir, startHost, type HostHandle } from './host-process.js';
+import { openDemoHost, type DemoSession } from './demo-session.js';
+import type { HostHandle } from './host-process.js';
 
+let session: DemoSession | undefined;
 let host: HostHandle;
 let ctx: BrowserContext;
 
 beforeAll(async () => {
-  host = await startHost({ demo: true });
-  ctx = await launch();
+  session = await openDemoHost();
+  ({ host, ctx } = session);
 });
 afterAll(async () => {
-  await ctx?.close();
-  await host?.stop();
-  if (host) removeDir(host.dir);
+  await session?.close();
 });
 
 async function openRoom(page: Page): Promise<void> {

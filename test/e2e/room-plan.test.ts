@@ -10,35 +10,27 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { mkdirSync } from 'node:fs';
 import path from 'node:path';
-import type { BrowserContext, Page } from 'playwright-core';
-import { launch } from './browser.js';
-import { REPO, removeDir, startHost, type HostHandle } from './host-process.js';
+import type { Page } from 'playwright-core';
+import { openDemoSite, type DemoSession } from './demo-session.js';
+import { REPO } from './host-process.js';
 
-let host: HostHandle;
-let ctx: BrowserContext;
+let session: DemoSession | undefined;
 let page: Page;
 const pageErrors: string[] = [];
 const SHOTS = path.join(REPO, 'test', 'artifacts', 'screens');
 
 beforeAll(async () => {
   mkdirSync(SHOTS, { recursive: true });
-  host = await startHost();
-  ctx = await launch({ width: 1400, height: 1000 });
-  page = ctx.pages()[0] ?? (await ctx.newPage());
-  page.on('pageerror', (e) => pageErrors.push(e.message));
-  await page.goto(host.url);
+  session = await openDemoSite({ viewport: { width: 1400, height: 1000 }, beforeLoad: (p) => p.on('pageerror', (e) => pageErrors.push(e.message)) });
+  page = session.page;
 });
 
 afterAll(async () => {
-  await ctx?.close();
-  await host?.stop();
-  if (host) removeDir(host.dir);
+  await session?.close();
 });
 
 describe('the room plan in the workspace', () => {
   it('opens the signed demo room with its plan and shows its findings', async () => {
-    await page.getByRole('button', { name: 'Load the demo site' }).click();
-    await page.getByRole('heading', { name: 'Register' }).waitFor();
     await page.getByRole('button', { name: /^B2\.14/ }).click();
     await page.getByRole('button', { name: 'Open in workspace' }).click();
     await page.getByRole('heading', { level: 1, name: /Workspace/ }).waitFor();

@@ -6,21 +6,16 @@
  * (the assessment against the copy kept after a refused save); the defaults named for records
  * written by an older version. Loopback host, demo site.
  */
-import { mkdirSync, mkdtempSync, rmSync } from 'node:fs';
+import { mkdtempSync, rmSync } from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
 import { openRecordStore } from '../../electron/backend/records/store.js';
 import type { Page } from 'playwright-core';
-import { launch } from './browser.js';
-import { REPO, startHost } from './host-process.js';
+import { REPO } from './host-process.js';
+import { openScreenshotSession } from './screenshot-session.js';
 
 const OUT = path.join(REPO, 'test', 'artifacts', 'screens');
-
-async function shot(page: Page, name: string): Promise<void> {
-  await page.waitForTimeout(400);
-  await page.screenshot({ path: path.join(OUT, `${name}.png`), fullPage: false });
-  process.stdout.write(`${name}.png\n`);
-}
+const VIEWPORT = { width: 1280, height: 900 };
 
 async function registerRoom(page: Page, url: string): Promise<void> {
   await page.goto(url);
@@ -37,17 +32,12 @@ async function openFirstBeam(page: Page): Promise<void> {
 }
 
 async function main(): Promise<void> {
-  mkdirSync(OUT, { recursive: true });
-  const host = await startHost({ demo: true });
-  const ctx = await launch();
-  const a = ctx.pages()[0] ?? (await ctx.newPage());
-  a.on('pageerror', (e) => process.stderr.write(`page error: ${e.message}\n`));
+  const s = await openScreenshotSession({ out: OUT, host: { demo: true }, viewport: VIEWPORT });
+  const { host, page: a } = s;
   try {
-    await a.setViewportSize({ width: 1280, height: 900 });
     // 1. Two tabs on one room of the Register.
     await registerRoom(a, host.url);
-    const b = await ctx.newPage();
-    await b.setViewportSize({ width: 1280, height: 900 });
+    const b = await s.newPage();
     await registerRoom(b, host.url);
     await a.getByLabel('Responsible person', { exact: true }).fill('Dr. Imre Calloway-Senn');
     await a.getByRole('button', { name: 'Save room' }).click();
@@ -55,10 +45,10 @@ async function main(): Promise<void> {
     await b.getByLabel('Contact', { exact: true }).fill('ext. 4471');
     await b.getByRole('button', { name: 'Save room' }).click();
     await b.getByTestId('register-stale').waitFor();
-    await shot(b, '30-register-stale');
+    await s.shot('30-register-stale', { page: b });
     await b.getByRole('button', { name: 'Reload the register' }).click();
     await b.getByTestId('register-stale').waitFor({ state: 'detached' });
-    await shot(b, '31-register-reloaded');
+    await s.shot('31-register-reloaded', { page: b });
 
     // 2. The beam form's newer fields.
     await a.getByRole('button', { name: 'Open in workspace' }).click();
@@ -70,15 +60,14 @@ async function main(): Promise<void> {
     await a.getByLabel(/^Deliberate viewing duration \(s\)/).first().fill('1 min');
     await a.getByLabel('Case that sets the hazard distance').first().selectOption('deliberate');
     await a.getByLabel(/^Irradiated skin area/).first().scrollIntoViewIfNeeded();
-    await shot(a, '32-beam-newer-fields');
+    await s.shot('32-beam-newer-fields');
     await a.getByLabel(/^Deliberate viewing duration/).first().scrollIntoViewIfNeeded();
-    await shot(a, '33-beam-diffuse-case');
+    await s.shot('33-beam-diffuse-case');
     await a.getByRole('button', { name: 'Save', exact: true }).click();
     await a.getByText(/^Saved: revision/).waitFor();
 
     // 3. A refused workspace save keeps a copy; the Review screen compares the two.
-    const c = await ctx.newPage();
-    await c.setViewportSize({ width: 1280, height: 900 });
+    const c = await s.newPage();
     await c.goto(host.url);
     await c.getByRole('heading', { name: 'Register' }).waitFor();
     await c.getByRole('button', { name: /^A0\.07/ }).click();
@@ -105,10 +94,9 @@ async function main(): Promise<void> {
     await c.getByRole('button', { name: 'Compare side by side' }).click();
     await c.getByTestId('compare-table').waitFor();
     await cmp.scrollIntoViewIfNeeded();
-    await shot(c, '34-revisions-side-by-side');
+    await s.shot('34-revisions-side-by-side', { page: c });
   } finally {
-    await ctx.close();
-    await host.stop();
+    await s.close();
   }
   await olderRecords();
 }
@@ -119,20 +107,17 @@ async function olderRecords(): Promise<void> {
   const older = await openRecordStore({ path: path.join(dir, 'records.sqlite'), keyDir: dir, calculatedWith: 'beamwarden-core 0.1.0' });
   await older.seedDemo();
   await older.close();
-  const host = await startHost({ dir });
-  const ctx = await launch();
-  const page = ctx.pages()[0] ?? (await ctx.newPage());
+  const s = await openScreenshotSession({ out: OUT, host: { dir }, viewport: VIEWPORT });
+  const { host, page } = s;
   try {
-    await page.setViewportSize({ width: 1280, height: 900 });
     await page.goto(host.url);
     await page.getByRole('heading', { name: 'Register' }).waitFor();
     await page.getByRole('button', { name: /^B2\.16/ }).click();
     await page.getByRole('button', { name: 'Open in workspace' }).click();
     await page.getByTestId('assumed-defaults').waitFor();
-    await shot(page, '35-older-record-defaults');
+    await s.shot('35-older-record-defaults');
   } finally {
-    await ctx.close();
-    await host.stop();
+    await s.close();
     rmSync(dir, { recursive: true, force: true });
   }
 }

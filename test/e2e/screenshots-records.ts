@@ -4,19 +4,12 @@
  * The backup reminder, the Backups panel before and after "Back up now", and a stale save from a
  * second browser tab with the officer's version kept as a copy. Loopback host on a temporary database with the demo site.
  */
-import { mkdirSync } from 'node:fs';
 import path from 'node:path';
 import type { Page } from 'playwright-core';
-import { launch } from './browser.js';
-import { REPO, startHost } from './host-process.js';
+import { REPO } from './host-process.js';
+import { openScreenshotSession } from './screenshot-session.js';
 
 const OUT = path.join(REPO, 'test', 'artifacts', 'screens');
-
-async function shot(page: Page, name: string): Promise<void> {
-  await page.waitForTimeout(400);
-  await page.screenshot({ path: path.join(OUT, `${name}.png`) });
-  process.stdout.write(`${name}.png\n`);
-}
 
 async function openRoom(page: Page, url: string): Promise<void> {
   await page.goto(url);
@@ -27,28 +20,25 @@ async function openRoom(page: Page, url: string): Promise<void> {
 }
 
 async function main(): Promise<void> {
-  mkdirSync(OUT, { recursive: true });
-  const host = await startHost({ demo: true });
-  const ctx = await launch();
-  const a = ctx.pages()[0] ?? (await ctx.newPage());
-  a.on('pageerror', (e) => process.stderr.write(`page error: ${e.message}\n`));
+  const s = await openScreenshotSession({ out: OUT, host: { demo: true } });
+  const { host, page: a } = s;
   try {
     await a.goto(host.url);
     await a.getByRole('heading', { name: 'Register' }).waitFor();
     await a.getByTestId('backup-reminder').waitFor();
-    await shot(a, '20-backup-reminder');
+    await s.shot('20-backup-reminder');
     await a.keyboard.press('Alt+6');
     await a.getByRole('heading', { level: 1, name: /^Print/ }).waitFor();
     await a.locator('#safekeeping').scrollIntoViewIfNeeded();
-    await shot(a, '21-backups-panel');
+    await s.shot('21-backups-panel');
     await a.locator('#safekeeping').getByRole('button', { name: 'Back up now' }).click();
     await a.locator('#safekeeping table').waitFor();
     await a.locator('#safekeeping').scrollIntoViewIfNeeded();
-    await shot(a, '22-backups-after-backup');
+    await s.shot('22-backups-after-backup');
 
     // Two tabs on one assessment: the second save is refused.
     await openRoom(a, host.url);
-    const b = await ctx.newPage();
+    const b = await s.newPage();
     await openRoom(b, host.url);
     const nameA = a.locator('input[id$="-name"]').first();
     await nameA.fill('Telecom bench laser (renamed in tab A)');
@@ -58,16 +48,15 @@ async function main(): Promise<void> {
     await nameB.fill('Telecom bench laser (renamed in tab B)');
     await b.getByRole('button', { name: 'Save', exact: true }).click();
     await b.getByTestId('stale-save').waitFor();
-    await shot(b, '23-stale-save');
+    await s.shot('23-stale-save', { page: b });
     await b.getByRole('button', { name: 'Keep my version as a copy, open the stored one' }).click();
     await b.getByText(/Your version is kept as/).waitFor();
     await b.keyboard.press('Alt+1');
     await b.getByRole('heading', { name: 'Register' }).waitFor();
     await b.getByRole('button', { name: /^A0\.07/ }).click();
-    await shot(b, '24-stale-save-kept');
+    await s.shot('24-stale-save-kept', { page: b });
   } finally {
-    await ctx.close();
-    await host.stop();
+    await s.close();
   }
 }
 

@@ -8,7 +8,7 @@
  * strings (UTC timestamps `2026-05-01T09:30:00.000Z`, calendar dates `2026-05-01`). Ids are
  * random UUIDs made by the store.
  */
-import type { EyewearSpec, LaserInput, RoomInput } from '../../../core/model/inputs.js';
+import type { EyewearSpec, LaserInput, RoomInput, RuleSetId } from '../../../core/model/inputs.js';
 import type { RoomResult } from '../../../core/model/results.js';
 
 // Declared beside the store code that makes them (type-only: nothing of the back end runs here).
@@ -20,7 +20,7 @@ export type { RowCheckRecord } from '../../backend/records/limit-row-checks.js';
 
 /** Arguments of a check of a limit-table entry (issue 12); the passphrase unlocks the checker's key. */
 export interface RecordRowCheckArgs {
-  readonly ruleSet: 'icnirp2013' | 'eu2006';
+  readonly ruleSet: RuleSetId;
   readonly entryKey: string;
   readonly verdict: 'matches' | 'differs';
   readonly documentExpr?: string;
@@ -497,11 +497,17 @@ export interface ExportDocument {
   readonly limitRowChecks?: readonly ExportedRowCheck[];
 }
 
-/** One signed check of a limit-table entry as exported: the signed statement's fields and the signature. */
-export interface ExportedRowCheck {
+/**
+ * What the checker's key signs for a check of a limit-table entry (canonical JSON of this object):
+ * made by the back end (electron/backend/records/limit-row-checks.ts), carried by the export.
+ */
+export interface RowCheckStatement {
+  readonly format: 'beamwarden-limit-row-check';
+  readonly version: 1;
   readonly id: Id;
-  readonly ruleSet: 'icnirp2013' | 'eu2006';
+  readonly ruleSet: RuleSetId;
   readonly entryKey: string;
+  /** The entry as written in the table when it was checked. */
   readonly entryExpr: string;
   readonly verdict: 'matches' | 'differs';
   readonly documentExpr: string | null;
@@ -513,6 +519,10 @@ export interface ExportedRowCheck {
   readonly signedAt: Timestamp;
   readonly keyId: string;
   readonly trustAnchor: string;
+}
+
+/** One signed check of a limit-table entry as exported: the signed statement's fields and the signature. */
+export interface ExportedRowCheck extends Omit<RowCheckStatement, 'format' | 'version'> {
   readonly signature: string;
 }
 

@@ -19,7 +19,7 @@ import type { RoomInput } from '../../../core/model/inputs.js';
 import { inTransaction, parseOrThrow, type StoreContext } from './context.js';
 import { checkPersonSignature, signAsPerson, trustListInfo } from './personal-keys.js';
 import { shortKeyFingerprint } from './trust-list.js';
-import { RecordError, type AssessmentContent, type Id } from './types.js';
+import { RecordError, type AssessmentContent, type RowCheckStatement } from './types.js';
 
 export const RuleSetIdArg = z.enum(['icnirp2013', 'eu2006'], { error: 'must be icnirp2013 or eu2006' });
 
@@ -45,25 +45,13 @@ export const RecordRowCheckSchema = z
 
 export const ListRowChecksSchema = z.strictObject({ ruleSet: RuleSetIdArg.optional() });
 
-/** What the checker's key signs (canonical JSON of this object). */
-export interface RowCheckStatement {
-  readonly format: 'beamwarden-limit-row-check';
-  readonly version: 1;
-  readonly id: Id;
+/**
+ * A signed statement as the register holds it. The rule set stays the stored text: a check of a rule
+ * set this version does not know (made by a newer desk) still verifies its signature and is then
+ * refused by its entry (checkRow), never reported as altered.
+ */
+export interface StoredRowCheckStatement extends Omit<RowCheckStatement, 'ruleSet'> {
   readonly ruleSet: string;
-  readonly entryKey: string;
-  /** The entry as written in the table when it was checked. */
-  readonly entryExpr: string;
-  readonly verdict: 'matches' | 'differs';
-  readonly documentExpr: string | null;
-  readonly reference: string;
-  readonly note: string;
-  readonly personId: Id;
-  readonly name: string;
-  readonly role: string;
-  readonly signedAt: string;
-  readonly keyId: string;
-  readonly trustAnchor: string;
 }
 
 export interface RowCheckRow {
@@ -85,8 +73,7 @@ export interface RowCheckRow {
 }
 
 /** One signed check as the register shows it (the signed statement's fields), with this installation's verdict on it. */
-export interface RowCheckRecord extends Omit<RowCheckStatement, 'format' | 'version' | 'ruleSet'> {
-  readonly ruleSet: RuleSetId;
+export interface RowCheckRecord extends Omit<RowCheckStatement, 'format' | 'version'> {
   /** "row H-E-VIS-2", "factor CC (1200-1400 nm)". */
   readonly entryWords: string;
   readonly keyFingerprint: string;
@@ -98,7 +85,7 @@ export interface RowCheckRecord extends Omit<RowCheckStatement, 'format' | 'vers
   readonly finding: string;
 }
 
-export function statementOf(x: RowCheckRow): RowCheckStatement {
+export function statementOf(x: RowCheckRow): StoredRowCheckStatement {
   return {
     format: 'beamwarden-limit-row-check',
     version: 1,

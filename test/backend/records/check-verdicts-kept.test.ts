@@ -58,6 +58,9 @@ describe('remembered check verdicts never outlive a change', () => {
     const { s, keyDir } = await withCheck();
     // The anchor lives outside the database (trust across desks, issue 15 item 4): the officer's key
     // is trusted only through a chain to it, so a desk set to another anchor trusts none of it.
+    // Guards the remembered reading of the desk's setting (readAnchorSetting in
+    // trust-anchor-setting.ts: forgotten on a write, re-read when the file's size or time changes);
+    // seen failing with that reading kept regardless.
     writeAnchorSetting(keyDir, 'ab'.repeat(32), '2026-12-02T12:00:00.000Z');
     const listed = await s.listRowChecks('icnirp2013');
     expect(listed.map((c) => [c.keyTrusted, c.ok])).toEqual([[false, false]]);
