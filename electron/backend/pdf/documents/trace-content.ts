@@ -27,7 +27,8 @@ const KIND_STYLE: Readonly<Record<TraceKind, { tag: string; color: string; bold?
   input: { tag: 'input', color: COLOR.muted },
   assumption: { tag: 'assumed', color: '#6A4C93' },
   row: { tag: 'table', color: '#0B5394' },
-  factor: { tag: 'factor', color: '#0B5394' },
+  // 'parameter': the step names the factor itself ("Correction factor C_A", "Break-point time T_2")
+  factor: { tag: 'parameter', color: '#0B5394' },
   formula: { tag: 'formula', color: '#134F5C' },
   result: { tag: 'result', color: COLOR.ink, bold: true },
   rounding: { tag: 'rounded', color: COLOR.muted },
