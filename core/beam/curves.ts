@@ -9,7 +9,7 @@
  */
 import { Dec } from '../numeric/decimal.js';
 import type { BeamInput, LimitSettings, RuleSetId } from '../model/inputs.js';
-import { exposureLimit, type ExposureLimitQuery } from '../limits/exposure-limit.js';
+import { exposureLimitH, type ExposureLimitQuery } from '../limits/exposure-limit.js';
 import type { PulseRule } from '../model/results.js';
 import { beamModel, exposureAt, spreadOf } from './beam-model.js';
 import { eyeLimitsOf } from './core-numbers.js';
@@ -20,11 +20,15 @@ export interface LimitPoint {
   readonly H_Jm2: string | null;
 }
 
-/** The limit of `query` at each duration; a duration outside the tables gives H_Jm2 null, never an error. */
+/**
+ * The limit of `query` at each duration; a duration outside the tables gives H_Jm2 null, never an
+ * error. The value is exposureLimit's own (exposureLimitH runs the same look-up without building
+ * the derivation trace that a curve would throw away at every point).
+ */
 export function limitAgainstDuration(query: Omit<ExposureLimitQuery, 'duration_s'>, durations_s: readonly number[]): LimitPoint[] {
   return durations_s.map((t_s) => {
     try {
-      return { t_s, H_Jm2: exposureLimit({ ...query, duration_s: t_s }).H_Jm2 };
+      return { t_s, H_Jm2: exposureLimitH({ ...query, duration_s: t_s }) };
     } catch {
       return { t_s, H_Jm2: null }; // outside the rule set's range: the curve has no point there
     }

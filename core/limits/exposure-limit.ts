@@ -269,11 +269,8 @@ function evaluateRow(ctx: Ctx, row: LimitRow, tableTissue: Tissue, apertureTissu
   return c;
 }
 
-/**
- * The exposure limit for one query. Throws InputError for bad input; never returns NaN,
- * Infinity or a non-positive limit.
- */
-export function exposureLimit(q: ExposureLimitQuery): ExposureLimitResult {
+/** The candidate rows of one query and the one that governs (shared by exposureLimit and exposureLimitH). */
+function governingLimit(q: ExposureLimitQuery): GoverningLimit {
   const { ruleSet, lambda, t, alphaMrad } = validateLimitQuery(q);
   const table = ruleSetTable(ruleSet);
   const settings = q.settings;
@@ -318,6 +315,38 @@ export function exposureLimit(q: ExposureLimitQuery): ExposureLimitResult {
   for (const c of candidates) if (new Dec(c.H_Jm2).lte(governing.H_Jm2)) governing = c;
   const H = new Dec(governing.H_Jm2);
   if (!H.isFinite() || H.lte(0)) throw new Error(`internal: limit not positive for ${JSON.stringify(q)}`);
+  return { ruleSet, lambda, t, alphaMrad, table, settings, f, candidates, governing, H };
+}
+
+/** What every limit look-up computes: the validated query, the factors, every candidate row and the one that governs. */
+interface GoverningLimit {
+  readonly ruleSet: RuleSetId;
+  readonly lambda: Dec;
+  readonly t: Dec;
+  readonly alphaMrad: Dec;
+  readonly table: RuleSetTable;
+  readonly settings: LimitSettings | undefined;
+  readonly f: FactorSet;
+  readonly candidates: LimitCandidate[];
+  readonly governing: LimitCandidate;
+  readonly H: Dec;
+}
+
+/**
+ * The limit as radiant exposure H (J/m², decimal string), the same value as `exposureLimit(q).H_Jm2`
+ * from the same code, without the derivation trace and the reported roundings: for curves that
+ * sample the limit at many durations (the plots), where the trace would be thrown away.
+ */
+export function exposureLimitH(q: ExposureLimitQuery): string {
+  return recordString(governingLimit(q).H);
+}
+
+/**
+ * The exposure limit for one query. Throws InputError for bad input; never returns NaN,
+ * Infinity or a non-positive limit.
+ */
+export function exposureLimit(q: ExposureLimitQuery): ExposureLimitResult {
+  const { ruleSet, lambda, t, alphaMrad, table, settings, f, candidates, governing, H } = governingLimit(q);
   const E = H.div(t);
 
   // Every factor defined here, in FACTOR_ORDER; built on first read (factors are lazy, see factors.ts).

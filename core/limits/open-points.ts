@@ -6,6 +6,7 @@
 import { RULE_SET_IDS, RULE_SET_NAME, ruleSetTable } from './rule-sets.js';
 import type { Interval } from './table-types.js';
 import { factorPieceKey } from './factors.js';
+import { factorWords } from '../model/factor-words.js';
 
 export interface OpenPoint {
   readonly what: string;
@@ -72,17 +73,17 @@ export function openPoints(ruleSet: (typeof RULE_SET_IDS)[number]): OpenPoint[] 
           ...(cond ? { condition: cond } : {}),
           ...(p.conservative_alt ? { stricterAlt: p.conservative_alt } : {}),
         };
-        out.push({ what: `factor ${name}${p.band_nm ? `, ${span(p.band_nm, 'nm')}` : ''}${p.t_s ? `, ${span(p.t_s, 's')}` : ''}${p.alpha_mrad ? `, ${p.alpha_mrad}` : ''}: ${p.expr}`, confidence: c, source, entry });
+        out.push({ what: `${factorWords(name)}${p.band_nm ? `, ${span(p.band_nm, 'nm')}` : ''}${p.t_s ? `, ${span(p.t_s, 's')}` : ''}${p.alpha_mrad ? `, ${p.alpha_mrad}` : ''}: ${p.expr}`, confidence: c, source, entry });
       }
     } else if (isOpen(def.confidence)) {
       const expr = def.expr ?? String(def.value);
       const entry: CheckableEntry = { key: factorPieceKey(name), kind: 'factor', name, quantity: 'factor', expr, unit: def.unit ?? '', source: def.source ?? '', confidence: def.confidence, ...(def.band_nm ? { band_nm: def.band_nm } : {}) };
-      out.push({ what: `factor ${name}: ${expr}`, confidence: def.confidence, source: def.source ?? '', entry });
+      out.push({ what: `${factorWords(name)}: ${expr}`, confidence: def.confidence, source: def.source ?? '', entry });
     }
   }
   const rp = t.repetitivePulses;
   for (const r of rp.rules) if (isOpen(r.confidence)) out.push({ what: `repetitive pulses, rule ${r.n}: ${r.text}`, confidence: r.confidence, source: r.source });
-  if (isOpen(rp.cp.confidence)) out.push({ what: `pulse-train factor C_P: ${rp.cp.pieces ? 'piecewise form' : rp.cp.expr} (applies to ${rp.cp.appliesTo.join(', ')})`, confidence: rp.cp.confidence, source: rp.cp.source });
+  if (isOpen(rp.cp.confidence)) out.push({ what: `${factorWords('C_P')}: ${rp.cp.pieces ? 'piecewise form' : rp.cp.expr} (applies to ${rp.cp.appliesTo.join(', ')})`, confidence: rp.cp.confidence, source: rp.cp.source });
   if (isOpen(rp.grouping.confidence)) out.push({ what: `pulse grouping inside ${rp.grouping.factor}`, confidence: rp.grouping.confidence, source: rp.grouping.source });
   const below = rp.grouping.belowTable;
   if (below && isOpen(below.confidence)) out.push({ what: `pulse grouping below ${below.below_nm} nm: ${below.value_s} s`, confidence: below.confidence, source: below.source });

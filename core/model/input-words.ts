@@ -8,6 +8,7 @@ import { InputError } from '../errors.js';
 import { INPUT_RULES, TEXT_RULES, type RuleName } from './input-rules.js';
 import type { InputTolerances } from './inputs.js';
 import { formatSI } from '../units/quantities.js';
+import { factorWords } from './factor-words.js';
 
 /** Path endings (after lasers[i].beams[j]. or eyewear[k].) and the label they stand for. */
 const LABEL_OF_PATH: ReadonlyArray<readonly [RegExp, string]> = [
@@ -229,12 +230,12 @@ const TISSUE_WORDS: Readonly<Record<string, string>> = { eye: 'the eye', skin: '
 
 /**
  * A limit-table entry key in words: a row id ('row H-E-VIS-2'), a factor or factor piece
- * ('factor CC (1200-1400 nm)', from factorPieceKey), a limiting aperture
+ * ('correction factor C_C (1200-1400 nm)', from factorPieceKey; names from factor-words.ts), a limiting aperture
  * ('aperture:eye:180-400:10-30000' -> 'the limiting aperture for the eye, 180-400 nm, 10 s-30 000 s')
  * or the pulse correction factor ('rule:CP' -> 'the pulse correction factor C_P').
  */
 export function entryWords(key: string): string {
-  if (key === 'rule:CP') return 'the pulse correction factor C_P';
+  if (key === 'rule:CP') return `the ${factorWords('C_P')}`;
   const N = String.raw`(\d+(?:\.\d+)?(?:e[+-]?\d+)?)`; // a number as String(number) writes it
   const a = new RegExp(`^aperture:(eye|skin):${N}-${N}:${N}-${N}$`).exec(key);
   if (a) {
@@ -243,7 +244,8 @@ export function entryWords(key: string): string {
   }
   const m = /^factor:([A-Za-z_0-9]+)(?:\[(.*)\])?$/.exec(key);
   if (!m) return `row ${key}`;
-  return m[2] ? `factor ${m[1] ?? ''} (${m[2]})` : `factor ${m[1] ?? ''}`;
+  const name = factorWords(m[1] ?? '');
+  return m[2] ? `${name} (${m[2]})` : name;
 }
 
 /**

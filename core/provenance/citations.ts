@@ -13,6 +13,8 @@
  */
 import { RULE_SETS } from '../limits/rule-sets.js';
 import { entryWords } from '../model/input-words.js';
+import { factorTitle, factorWords, isFactorName } from '../model/factor-words.js';
+import type { TraceStep } from '../trace/trace.js';
 
 /** How far a value was checked against the published text. */
 export type CheckStatus =
@@ -191,7 +193,7 @@ export function citationLine(c: Citation): string {
 const KEY_WORDS: ReadonlyArray<readonly [RegExp, string | ((key: string) => string)]> = [
   // Results saved before the core said these in words (core/model/input-words.ts, the one place).
   [/\brule:CP\b/g, entryWords],
-  [/\bfactor:([A-Za-z_]+)\b/g, 'correction factor $1'],
+  [/\bfactor:([A-Za-z_0-9]+)\b/g, (key) => factorWords(key.slice('factor:'.length))],
   [/\baperture:(?:eye|skin):[0-9.e+-]+:[0-9.e+-]+/g, entryWords],
   [/\bpulse-shorter-than-tables\b/g, 'pulse shorter than the tables'],
   [/;?\s*ILSC2019 \(read\)/g, ' (ILSC 2019, paper P106)'],
@@ -217,6 +219,17 @@ export function readableText(text: string): string {
   for (const [status, ids] of Object.entries(RULE_SET_STATUS_NOTES)) if (out.includes(status)) out = out.split(status).join(ids);
   for (const [re, by] of KEY_WORDS) out = typeof by === 'string' ? out.replace(re, by) : out.replace(re, (m) => by(m));
   return out;
+}
+
+/**
+ * The label of a derivation step as the officer reads it (derivation window and report alike): a
+ * step labelled by the core with a factor's table name ("CC": the factor's value, or its stricter
+ * replacement) is named in words ("Correction factor C_C", core/model/factor-words.ts); any other
+ * label is made readable.
+ */
+export function stepLabelText(step: Pick<TraceStep, 'label'>): string {
+  if (isFactorName(step.label)) return factorTitle(step.label);
+  return readableText(step.label);
 }
 
 /** The working notes stored with each rule set (table `status`), replaced on paper by RULE_SET_PROVENANCE. */

@@ -3,6 +3,7 @@
  * durations, formula and its values at the sample points the core computes, in engineering notation
  * with units, limits rounded down (SAFETY.md, displayed figures).
  */
+import { factorTitle } from '../../core/model/factor-words.js';
 import { entrySamples, numberText, quantityText, type CheckableEntry, type RuleSetId, type SamplePoint } from '../../core/index.js';
 
 export const RULE_SET_TITLE: Readonly<Record<RuleSetId, string>> = {
@@ -10,26 +11,9 @@ export const RULE_SET_TITLE: Readonly<Record<RuleSetId, string>> = {
   eu2006: 'EU Directive 2006/25/EC, Annex II',
 };
 
-const FACTOR_NAME: Readonly<Record<string, string>> = {
-  CA: 'Correction factor C_A',
-  CB: 'Correction factor C_B',
-  CC: 'Correction factor C_C',
-  CE: 'Correction factor C_E',
-  T1: 'Break-point time T_1',
-  T2: 'Break-point time T_2',
-  alpha_min: 'Smallest source angle α_min',
-  alpha_max: 'Largest source angle α_max',
-  gamma_p: 'Photochemical field of view γ_p',
-  T_i: 'Pulse grouping time T_i',
-  T_min: 'Pulse grouping time T_min',
-  C1: 'Factor C_1',
-  C2: 'Factor C_2',
-  T1_vis: 'Break-point time T_1 (visible)',
-};
-
 /** "Eye, retinal thermal · table row H-E-VIS-2" or "Correction factor C_C": what the limit is for first, the row as the derivations cite it last. */
 export function entryTitle(e: CheckableEntry): string {
-  if (e.kind === 'factor') return FACTOR_NAME[e.name] ?? `Factor ${e.name}`;
+  if (e.kind === 'factor') return factorTitle(e.name);
   return `${e.tissue === 'skin' ? 'Skin' : 'Eye'}, ${e.effect ?? ''} · table row ${e.name}`;
 }
 

@@ -9,6 +9,23 @@
  * printed for the first time by a running application (target below 0.5 s, issue 12). The parsed
  * fonts and the shaped words (electron/backend/pdf/shared-fonts.ts) belong to the process, not to
  * a room, and are kept; the last line clears the shaped words too, so what they save stays visible.
+ *
+ * Where the first print's time goes (2 December 2026, the 2-core machine shared with other jobs, load
+ * average 13-15; CPU time, medians of 5, phases timed around pdfmake's own steps, node --cpu-prof):
+ *  total about 1.05 s CPU (0.93-1.05 s across runs; wall time is meaningless under that load):
+ *  - document definition 175 ms, of which the eye-limit curves of the ten limit plots ~130 ms (220
+ *    look-ups of the core's exposureLimit at 40 digits, ~0.6 ms each) and the appendix content ~25 ms;
+ *  - pdfmake measure 215 ms: ~6000 inline runs of the derivation appendix (22 of the 32 pages; 22 style
+ *    look-ups per run in pdfmake's StyleContextStack), the tables, and parsing the 20 plot SVGs;
+ *  - layout 70 ms, headers and footers of 32 pages 60 ms;
+ *  - rendering 470 ms: the text runs (pdfkit, one text object per run), the 20 SVG plots ~100 ms
+ *    (svg-to-pdfkit places every label glyph by glyph), page compression;
+ *  - font subsets and the end of the file 15 ms.
+ *  By part: the appendix ~60 % of pdfmake's time, the plots ~30 % (curves plus SVG), the rest ~10 %.
+ *  The curves now use exposureLimitH (the same look-up without the derivation trace): 38 % less
+ *  time for the same digits (690 look-ups, 425 -> 264 ms in one process, interleaved).
+ *  The 0.5 s target needs the appendix's run count halved or pdfmake's per-run cost cut (its style
+ *  look-up and pdfkit's per-run text object), and the plot labels drawn without per-glyph SVG text.
  * Run alone: npx tsx test/bench/pdf.bench.ts
  */
 import { renderDoorNotice, renderReport, type RenderOptions } from '../../electron/backend/pdf/index.js';

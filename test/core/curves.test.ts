@@ -67,3 +67,29 @@ describe('exposureAlongBeam draws the criterion that sets the NOHD', () => {
     expect(Math.abs(Number(a?.limit) / 2e-2 - 1)).toBeLessThan(1e-9);
   });
 });
+
+// The plot's curve is sampled at every row and factor edge and just below it (report plots), where
+// the look-up takes its edge rules; limitAgainstDuration runs exposureLimit's look-up without its
+// trace (exposureLimitH), so it must give exposureLimit's own digits there too (self-consistency:
+// the curve agrees with the number printed beside it). Wavelengths: one in each band of the tables.
+describe('limitAgainstDuration gives exposureLimit’s digits at table edges, both rule sets, conservative mode on and off', () => {
+  const edges = [1e-13, 1e-11, 1e-9, 1e-9 * (1 - 1e-9), 1e-7, 5e-6, 1.3e-5, 1e-3, 0.25, 0.7, 10, 10 * (1 - 1e-9), 100, 1000, 3e4];
+  const cases = (['icnirp2013', 'eu2006'] as const).flatMap((ruleSet) =>
+    [250, 305, 355, 400, 450, 532, 700, 800, 1064, 1150, 1200, 1300, 1400, 1550, 2000, 10600].flatMap((wavelength_nm) =>
+      [true, false].map((conservative) => ({ ruleSet, wavelength_nm, conservative })),
+    ),
+  );
+  it.each(cases)('$ruleSet $wavelength_nm nm, conservative $conservative', ({ ruleSet, wavelength_nm, conservative }) => {
+    const q = { ruleSet, tissue: 'eye' as const, wavelength_nm, sourceAngle_rad: 0.002, settings: { conservative } };
+    const curve = limitAgainstDuration(q, edges);
+    const full = edges.map((duration_s) => {
+      try {
+        return exposureLimit({ ...q, duration_s }).H_Jm2;
+      } catch {
+        return null;
+      }
+    });
+    expect(curve.map((p) => p.H_Jm2)).toEqual(full);
+    expect(full.filter((h) => h !== null).length).toBeGreaterThan(0);
+  });
+});

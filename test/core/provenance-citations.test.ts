@@ -106,7 +106,7 @@ describe('sentences of the core made readable', () => {
   const cases: ReadonlyArray<readonly [string, string]> = [
     ['replaced by the stricter value: H-E-NIR1-1, rule:CP', 'replaced by the stricter value: H-E-NIR1-1, the pulse correction factor C_P'],
     ['replaced by the stricter value: aperture:eye:180-400:10-30000', 'replaced by the stricter value: the limiting aperture for the eye, 180-400 nm, 10 s-30 000 s'],
-    ['replaced: factor:CC', 'replaced: correction factor CC'],
+    ['replaced: factor:CC', 'replaced: correction factor C_C'],
     ['time base 100 s above 400 nm (IEC 60825-1:2014 4.3, from memory)', 'time base 100 s above 400 nm (IEC 60825-1:2014 4.3; not yet checked against the published text)'],
     ['retinal thermal limits (400-1400 nm, eye); ILSC2019 (read)', 'retinal thermal limits (400-1400 nm, eye) (ILSC 2019, paper P106)'],
     ['10 s (common practice, ours)', '10 s (common practice, Beamwarden’s choice)'],

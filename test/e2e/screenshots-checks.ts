@@ -43,7 +43,7 @@ async function main(): Promise<void> {
     await page.getByLabel('Checked by').selectOption({ label: 'Dr. Imre Calloway-Senn (Laser safety officer)' });
     await page.getByLabel('Passphrase of your signing key').fill(DEMO_PASSPHRASE);
     await page.getByRole('button', { name: 'Sign the check' }).click();
-    await page.getByTestId('recorded-checks').getByText(/factor CC/).waitFor();
+    await page.getByTestId('recorded-checks').getByText(/correction factor C_C/).waitFor();
     await page.getByTestId('recorded-checks').scrollIntoViewIfNeeded();
     await s.shot('42-limit-checks-recorded');
   } finally {

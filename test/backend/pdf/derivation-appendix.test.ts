@@ -4,7 +4,8 @@
  * read back with poppler. The appendix is handed to pdfmake in short unbreakable pieces to keep the
  * report quick to print (electron/backend/pdf/documents/trace-content.ts); these checks make sure
  * that costs nothing on paper:
- *  - every step of every trace (beams and room) is on paper: its label, and its value with its unit;
+ *  - every step of every trace (beams and room) is on paper: its label (a factor by its name in words,
+ *    core/model/factor-words.ts), and its value with its unit;
  *  - no word runs past the right margin (40 pt) on A4 or US Letter.
  * The reference is the core's own trace (evaluateRoom): the demo is invented, so this checks that
  * paper and core agree, not the physics. Page sizes: ISO 216 (A4, 595.28 x 841.89 pt) and
@@ -17,6 +18,7 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { beforeAll, describe, expect, it } from 'vitest';
 import type { Trace, TraceStep } from '../../../core/trace/trace.js';
+import { stepLabelText } from '../../../core/provenance/citations.js';
 import { renderReport, type DocumentInput, type Paper } from '../../../electron/backend/pdf/index.js';
 import { pageTexts } from './pdf-tools.js';
 import { benchDocument, tenLaserRoom } from './ten-laser-room.js';
@@ -90,7 +92,7 @@ describe('every derivation step of the ten-laser room is on paper', () => {
     const { text } = report('A4');
     const steps = traces().flatMap(allSteps);
     expect(steps.length).toBeGreaterThan(0);
-    const missing = steps.filter((s) => !text.includes(squash(s.label)) || (s.value !== undefined && !text.includes(squash(`${s.value}${s.unit ?? ''}`))));
+    const missing = steps.filter((s) => !text.includes(squash(stepLabelText(s))) || (s.value !== undefined && !text.includes(squash(`${s.value}${s.unit ?? ''}`))));
     expect(missing.map((s) => `${s.label} = ${s.value ?? ''} ${s.unit ?? ''}`)).toEqual([]);
   });
 });

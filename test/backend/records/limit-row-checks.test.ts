@@ -110,7 +110,7 @@ describe('a check of a limit-table row changes the limit the officer reads, neve
     }
     const r = await evaluate();
     expect(r.limit).toBe(expected);
-    expect(r.warnings.some((w) => /factor CC \(1200-1400 nm\) was checked against IEC 60825-1:2014 Table A\.6 .* the published text differs/.test(w))).toBe(flagged);
+    expect(r.warnings.some((w) => /correction factor C_C \(1200-1400 nm\) was checked against IEC 60825-1:2014 Table A\.6 .* the published text differs/.test(w))).toBe(flagged);
   });
 
   it('a check never switches a row to its less strict reading: UV-A 315-400 nm eye over 1000 s stays 1e4 J/m² (SAFETY.md decision)', async () => {

@@ -153,7 +153,7 @@ describe('a limit-table row checked as differing is flagged on the result (SAFET
   });
   it('1300 nm: a "differs" check of the factor C_C (1200-1400 nm) is flagged for each row evaluated with it', () => {
     const r = evaluateBeam(cw(1300, { settings: check('differs', 'factor:CC[1200-1400 nm]') }));
-    const flagged = r.warnings.filter((w) => w.startsWith('Limit-table factor CC (1200-1400 nm) was checked'));
+    const flagged = r.warnings.filter((w) => w.startsWith('Limit-table correction factor C_C (1200-1400 nm) was checked'));
     expect(flagged.length).toBeGreaterThan(0);
     expect(flagged.every((w) => w.includes('is evaluated with both and the lower limit is kept'))).toBe(true);
   });

@@ -18,7 +18,7 @@
  */
 import type { Content } from 'pdfmake/interfaces';
 import type { Trace, TraceKind, TraceStep } from '../../../../core/trace/trace.js';
-import { citationLine, citationOf, readableText } from '../../../../core/provenance/citations.js';
+import { citationLine, citationOf, readableText, stepLabelText } from '../../../../core/provenance/citations.js';
 import { COLOR } from '../page.js';
 import type { RowCheck } from '../../../../core/model/inputs.js';
 import { checkedWords } from '../row-checks.js';
@@ -27,7 +27,8 @@ const KIND_STYLE: Readonly<Record<TraceKind, { tag: string; color: string; bold?
   input: { tag: 'input', color: COLOR.muted },
   assumption: { tag: 'assumed', color: '#6A4C93' },
   row: { tag: 'table', color: '#0B5394' },
-  factor: { tag: 'factor', color: '#0B5394' },
+  // 'parameter': the step names the factor itself ("Correction factor C_A", "Break-point time T_2")
+  factor: { tag: 'parameter', color: '#0B5394' },
   formula: { tag: 'formula', color: '#134F5C' },
   result: { tag: 'result', color: COLOR.ink, bold: true },
   rounding: { tag: 'rounded', color: COLOR.muted },
@@ -74,7 +75,7 @@ function stepRuns(s: TraceStep, ref: string | null): Run[] {
   const k = KIND_STYLE[s.kind];
   const runs: Run[] = [
     { text: `${k.tag}  `, color: k.color, bold: true, fontSize: 6.3, noWrap: true },
-    ...pieces(`${readableText(s.label)}: `, { bold: true }),
+    ...pieces(`${stepLabelText(s)}: `, { bold: true }),
     ...pieces(readableText(s.detail), { ...(k.bold ? { bold: true } : {}), ...(s.kind === 'warning' ? { color: COLOR.bad } : {}) }),
   ];
   // "Wavelength: 800 nm = 800 nm": the value is not repeated when the detail already says it.
