@@ -2,6 +2,7 @@
  * One assessment checked for an auditor: every signed (and superseded) revision verified — signature,
  * key trust, fingerprint, recomputed results, chain, database protections — summed up in one line.
  */
+import type { VerifyRun } from '../backend/records/assessments.js';
 import type { Id, RecordStore, VerifyReport } from '../backend/records/types.js';
 
 export interface AssessmentVerdict {
@@ -13,18 +14,19 @@ export interface AssessmentVerdict {
   readonly reports: readonly VerifyReport[];
 }
 
-export async function verifyOneAssessment(store: RecordStore, assessmentId: Id, title: string): Promise<AssessmentVerdict> {
+/** `run`: kept over the whole check of many assessments (the database protections and trust list read once). */
+export async function verifyOneAssessment(store: RecordStore, assessmentId: Id, title: string, run?: VerifyRun): Promise<AssessmentVerdict> {
   try {
-    return await check(store, assessmentId, title);
+    return await check(store, assessmentId, title, run);
   } catch (e) {
     // A record so damaged that it cannot even be read is a failed check, not a crash of the audit.
     return { assessmentId, title, outcome: 'failed', line: `FAILED  ${assessmentId}  ${title}: cannot be read: ${(e as Error).message}`, reports: [] };
   }
 }
 
-async function check(store: RecordStore, assessmentId: Id, title: string): Promise<AssessmentVerdict> {
+async function check(store: RecordStore, assessmentId: Id, title: string, run?: VerifyRun): Promise<AssessmentVerdict> {
   // Chain and protections are read once for all the signed revisions of the assessment.
-  const reports = await store.verifySignedRevisions(assessmentId);
+  const reports = await store.verifySignedRevisions(assessmentId, run);
   if (reports.length === 0) {
     const report = await store.verify(assessmentId);
     const clean = report.chainIntact && report.checks.every((c) => c.check !== 'protections' || c.ok);

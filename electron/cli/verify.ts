@@ -14,6 +14,7 @@
  * threads (one per core, at most 8): recomputing is the costly part. The database is opened read-only.
  */
 import type { RowCheckRecord } from '../backend/records/limit-row-checks.js';
+import type { VerifyRun } from '../backend/records/assessments.js';
 import { availableParallelism } from 'node:os';
 import { dirname, resolve } from 'node:path';
 import { fileURLToPath, pathToFileURL } from 'node:url';
@@ -132,8 +133,9 @@ export async function runVerify(argv: readonly string[], out: (line: string) => 
       verdicts = await inWorkers(db, keyDir, args.anchor, items, workers, args.json === true);
     } else {
       verdicts = [];
+      const run: VerifyRun = {};
       for (const x of items) {
-        verdicts.push(await verifyOneAssessment(store, x.id, x.title));
+        verdicts.push(await verifyOneAssessment(store, x.id, x.title, run));
         progress(verdicts.length, items.length);
       }
     }

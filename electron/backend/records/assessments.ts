@@ -23,7 +23,7 @@ import { getInstallation, getPerson, getRoom, roomInputFromRegister } from './re
 import { fingerprintOf, keyIdOf, linkOf, sha256Hex, verifyStatement, type SignedStatement } from './signing.js';
 import { signAsPerson, type Signer } from './personal-keys.js';
 import { shortKeyFingerprint, trustOf, type TrustList } from './trust-list.js';
-import { loadTrust } from './trust-store.js';
+import { loadTrust, type TrustRead } from './trust-store.js';
 import { trustProblems } from './personal-keys.js';
 import { appendSigningLog, signingLogFor } from './signing-log.js';
 import { checkCoSignatures } from './co-signature-checks.js';
@@ -89,7 +89,8 @@ export interface SignatureRow {
   public_key: string | null;
 }
 
-const SIGNATURE_SELECT = `SELECT s.*, k.public_key FROM signature s LEFT JOIN signing_key k ON k.key_id = s.key_id WHERE s.revision_id = ?`;
+const SIGNATURE_SELECT_ALL = 'SELECT s.*, k.public_key FROM signature s LEFT JOIN signing_key k ON k.key_id = s.key_id';
+const SIGNATURE_SELECT = `${SIGNATURE_SELECT_ALL} WHERE s.revision_id = ?`;
 
 function signatureFromRow(r: SignatureRow, trust: TrustList | null): Signature {
   const v2 = r.statement_version === 2;
@@ -794,9 +795,9 @@ const MAX_DIFFERENCES = 200;
  * list columns equal to the signed content, and every signature the signing log (outside the
  * database) remembers still present and unchanged. One plain sentence per problem.
  */
-export async function chainFindings(ctx: StoreContext, a: AssessmentRow): Promise<string[]> {
+export async function chainFindings(ctx: StoreContext, a: AssessmentRow, read?: AssessmentRows): Promise<string[]> {
   const out: string[] = [];
-  const rows = await ctx.q.all('SELECT * FROM revision WHERE assessment_id = ? ORDER BY revision_no', a.id) as RevisionRow[];
+  const rows = read?.rows ?? (await ctx.q.all('SELECT * FROM revision WHERE assessment_id = ? ORDER BY revision_no', a.id) as RevisionRow[]);
   rows.forEach((r, i) => {
     const prevNo = i === 0 ? 0 : (rows[i - 1]?.revision_no ?? 0);
     if (r.revision_no !== prevNo + 1) {
@@ -812,7 +813,7 @@ export async function chainFindings(ctx: StoreContext, a: AssessmentRow): Promis
   let prevLink: string | null = null;
   let prevNo: number | null = null;
   for (const r of signedRows) {
-    const sig = await getSignatureRow(ctx, r.id);
+    const sig = read ? read.signatures.get(r.id) : await getSignatureRow(ctx, r.id);
     if (!sig) continue;
     const link = linkOf(statementFor(a, r, sig));
     links.set(r.id, link);
@@ -867,10 +868,54 @@ export async function chainFindings(ctx: StoreContext, a: AssessmentRow): Promis
   return out;
 }
 
+/**
+ * The record fingerprint of the stored content and results. `results` is the recomputed object when
+ * its JSON text is the stored text byte for byte (`sameText`); should that object hold anything the
+ * canonical form refuses, the stored text itself is parsed and fingerprinted, so the fingerprint is
+ * always that of the stored values.
+ */
+function fingerprintOfStored(content: AssessmentContent, results: RoomResult, sameText: boolean, storedText: string, calculatedWith: string): string {
+  if (!sameText) return fingerprintOf(content, results, calculatedWith);
+  try {
+    return fingerprintOf(content, results, calculatedWith);
+  } catch {
+    return fingerprintOf(content, JSON.parse(storedText) as RoomResult, calculatedWith);
+  }
+}
+
+/** An assessment's revision rows (oldest first) and their signature rows, read once for a verify. */
+interface AssessmentRows {
+  readonly rows: readonly RevisionRow[];
+  readonly signatures: ReadonlyMap<Id, SignatureRow>;
+}
+
 /** The checks that belong to the whole assessment and the database, not to one revision. */
 interface SharedChecks {
   readonly chain: readonly string[];
   readonly missing: readonly string[];
+  /** Rows already read for the chain: the same rows are checked, not read again. */
+  readonly assessment?: AssessmentRow;
+  readonly row?: RevisionRow;
+  readonly signature?: SignatureRow | undefined;
+  readonly trust?: RunTrust;
+}
+
+/** The trust list this desk believes and what stands in its way, read once for a verify run. */
+interface RunTrust {
+  readonly read: TrustRead;
+  readonly problems: readonly string[];
+}
+
+/**
+ * What a verify run over many assessments (`npm run verify -- --all`, one per worker thread) reads
+ * once instead of once per assessment: the database protections (a property of the database, not
+ * of an assessment) and the trust list under this desk's anchor with its problems. Every signature
+ * is still judged against that list (`trustOf`, chain of endorsements to the anchor, per key); the
+ * list is that of the run's start, as if the run were quicker. Start a new object for each run.
+ */
+export interface VerifyRun {
+  protections?: readonly string[];
+  trust?: RunTrust;
 }
 
 /**
@@ -878,23 +923,33 @@ interface SharedChecks {
  * own checks as `verifyAssessment` runs them, with the revision chain and the database protections
  * (the same for every revision of the assessment) read once instead of once per revision.
  */
-export async function verifySignedRevisions(ctx: StoreContext, assessmentId: Id): Promise<VerifyReport[]> {
+export async function verifySignedRevisions(ctx: StoreContext, assessmentId: Id, run: VerifyRun = {}): Promise<VerifyReport[]> {
   const a = await getAssessmentRow(ctx, assessmentId);
-  const shared: SharedChecks = { chain: await chainFindings(ctx, a), missing: await ctx.engine.missingProtections() };
-  const rows = await ctx.q.all<{ id: string }>(
-    "SELECT r.id AS id FROM revision r WHERE r.assessment_id = ? AND (r.status <> 'draft' OR EXISTS (SELECT 1 FROM signature s WHERE s.revision_id = r.id)) ORDER BY r.revision_no",
-    assessmentId,
-  );
+  // One read of the revisions and one of their signatures serve the chain and every revision's checks.
+  const rows = await ctx.q.all('SELECT * FROM revision WHERE assessment_id = ? ORDER BY revision_no', a.id) as RevisionRow[];
+  const signatures = new Map<Id, SignatureRow>();
+  for (const sig of await ctx.q.all<SignatureRow>(`${SIGNATURE_SELECT_ALL} WHERE s.revision_id IN (SELECT id FROM revision WHERE assessment_id = ?)`, a.id)) signatures.set(sig.revision_id, sig);
+  const read: AssessmentRows = { rows, signatures };
+  run.protections ??= await ctx.engine.missingProtections();
+  if (run.trust === undefined) {
+    const trust = await loadTrust(ctx);
+    run.trust = { read: trust, problems: await trustProblems(ctx, trust) };
+  }
+  const chain = await chainFindings(ctx, a, read);
   const out: VerifyReport[] = [];
-  for (const r of rows) out.push(await verifyAssessment(ctx, assessmentId, r.id, shared));
+  for (const r of rows) {
+    // Signed and superseded revisions, and a draft that has a signature (its status was changed).
+    if (r.status === 'draft' && !signatures.has(r.id)) continue;
+    out.push(await verifyAssessment(ctx, assessmentId, r.id, { chain, missing: run.protections, assessment: a, row: r, signature: signatures.get(r.id), trust: run.trust }));
+  }
   return out;
 }
 
 export async function verifyAssessment(ctx: StoreContext, assessmentId: Id, revisionId?: Id, shared?: SharedChecks): Promise<VerifyReport> {
-  const a = await getAssessmentRow(ctx, assessmentId);
+  const a = shared?.assessment ?? await getAssessmentRow(ctx, assessmentId);
   let r: RevisionRow;
   if (revisionId !== undefined) {
-    r = await getRevisionRow(ctx, revisionId);
+    r = shared?.row?.id === revisionId ? shared.row : await getRevisionRow(ctx, revisionId);
     if (r.assessment_id !== assessmentId) throw new RecordError('invalid', `Revision ${revisionId} does not belong to assessment ${assessmentId}`);
   } else {
     r =
@@ -902,30 +957,45 @@ export async function verifyAssessment(ctx: StoreContext, assessmentId: Id, revi
   }
   const findings: string[] = [];
   const checks: VerifyCheck[] = [];
-  const sig = await getSignatureRow(ctx, r.id);
+  const sig = shared?.row === r ? shared.signature : await getSignatureRow(ctx, r.id);
 
-  // 1. Stored content and results readable?
+  // 1. Stored content and results readable? 2. Recompute with this core.
+  // The inputs are recomputed first: when the core's JSON text of the recomputed results is byte
+  // for byte the stored text, the stored results are those values (JSON.parse of a text that
+  // JSON.stringify wrote gives back the same JSON values), so the stored text is not parsed again
+  // (a room's results are ~80 kB of JSON: parsing them was a tenth of verify's time, npm run bench).
+  // Any other stored text is parsed and compared in canonical form, as before.
   let content: AssessmentContent | null = null;
   let storedResults: unknown = null;
   let storedText = '';
+  let recomputed: RoomResult | null = null;
+  let recomputeError: Error | null = null;
+  let sameText = false;
   try {
     storedText = brotliDecompressSync(r.results_z).toString('utf8');
-    storedResults = JSON.parse(storedText);
     const c = AssessmentContentSchema.safeParse(JSON.parse(r.content_json));
+    if (c.success) {
+      try {
+        recomputed = ctx.evaluate(c.data.input);
+        sameText = JSON.stringify(recomputed) === storedText;
+      } catch (e) {
+        recomputeError = e as Error;
+      }
+    }
+    storedResults = sameText ? recomputed : JSON.parse(storedText);
     if (c.success) content = c.data;
     else findings.push(`The stored content is not a valid assessment (${c.error.issues[0]?.message ?? 'schema'}): it was changed outside Beamwarden.`);
   } catch {
     findings.push('The stored content or results cannot be read (not valid JSON or not valid compressed data): the record was changed outside Beamwarden.');
   }
 
-  // 2. Recompute with this core.
   let differences: FieldDifference[] = [];
   let resultsMatchCore = false;
   if (content !== null) {
     try {
-      const recomputed = ctx.evaluate(content.input);
+      if (recomputeError !== null || recomputed === null) throw recomputeError ?? new Error('no results');
       // Byte-equal JSON means equal values (the quick test); otherwise compare canonical forms.
-      resultsMatchCore = JSON.stringify(recomputed) === storedText || canonicalJson(recomputed) === canonicalJson(storedResults);
+      resultsMatchCore = sameText || canonicalJson(recomputed) === canonicalJson(storedResults);
       if (!resultsMatchCore) {
         differences = diffValues(storedResults, recomputed, 'results');
         findings.push(
@@ -949,7 +1019,7 @@ export async function verifyAssessment(ctx: StoreContext, assessmentId: Id, revi
   let signatureValid = false;
   let keyTrusted = false;
   let trustChain: readonly string[] = [];
-  const trust = await loadTrust(ctx);
+  const trust = shared?.trust?.read ?? await loadTrust(ctx);
   if (!sig) {
     findings.push(
       r.status === 'draft'
@@ -960,7 +1030,7 @@ export async function verifyAssessment(ctx: StoreContext, assessmentId: Id, revi
     // Stored results equal to this core's recomputation are a room result by construction: the
     // schema is asked only about results that differ (a large room's results take ~1 ms to parse).
     if (content !== null && (resultsMatchCore || RoomResultSchema.safeParse(storedResults).success)) {
-      fingerprintMatches = fingerprintOf(content, storedResults as RoomResult, r.calculated_with) === sig.fingerprint;
+      fingerprintMatches = fingerprintOfStored(content, storedResults as RoomResult, sameText, storedText, r.calculated_with) === sig.fingerprint;
     }
     const fpText = fingerprintMatches
       ? `The fingerprint ${sig.fingerprint.slice(0, 16)}… matches the stored content and results.`
@@ -997,7 +1067,7 @@ export async function verifyAssessment(ctx: StoreContext, assessmentId: Id, revi
     let trustText = keyTrusted
       ? `Key ${shortKeyFingerprint(sig.key_id)} is trusted on this desk: ${verdict.chain.join(' ')}`
       : `Key ${shortKeyFingerprint(sig.key_id)} is NOT trusted here — a key that only the database lists proves nothing. ${verdict.chain.join(' ')}`;
-    const listProblems = await trustProblems(ctx, trust);
+    const listProblems = shared?.trust?.problems ?? await trustProblems(ctx, trust);
     if (listProblems.length) {
       keyTrusted = false;
       trustText = `${trustText} ${listProblems.join(' ')}`;

@@ -139,7 +139,7 @@ function storeOver(ctx: StoreContext, engine: RecordEngine, info: StoreInfo): Re
     changesSince: (id, seen) => A.changesSince(ctx, id, seen),
     signAssessment: (id, signOff, reviewed) => A.signAssessment(ctx, id, signOff, reviewed),
     verify: (assessmentId, revisionId) => A.verifyAssessment(ctx, assessmentId, revisionId),
-    verifySignedRevisions: (assessmentId) => A.verifySignedRevisions(ctx, assessmentId),
+    verifySignedRevisions: (assessmentId, run) => A.verifySignedRevisions(ctx, assessmentId, run),
 
     listPersonKeys: () => K.listPersonKeys(ctx),
     createPersonKey: (args) => K.createPersonalKey(ctx, args),

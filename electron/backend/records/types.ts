@@ -5,6 +5,7 @@
  * Nothing here imports Electron: the store runs under plain Node and in the Electron main process.
  */
 import type { CoSignature } from './co-signature-checks.js';
+import type { VerifyRun } from './assessments.js';
 import type { RegisterChanges } from '../../api/contracts/app.js';
 import type {
   Assessment,
@@ -176,8 +177,12 @@ export interface RecordStore {
   signAssessment(id: Id, signOff: SignOff, reviewed?: SaveBase): Promise<Assessment>;
   /** Check the newest signed revision (or `revisionId`). */
   verify(assessmentId: Id, revisionId?: Id): Promise<VerifyReport>;
-  /** Every signed (and superseded) revision verified, oldest first; chain and protections read once. */
-  verifySignedRevisions(assessmentId: Id): Promise<VerifyReport[]>;
+  /**
+   * Every signed (and superseded) revision verified, oldest first; chain and protections read once.
+   * `run`: one object kept over a verify of many assessments, so that what belongs to the database
+   * (protections, the trust list) is read once per run (assessments.ts, VerifyRun).
+   */
+  verifySignedRevisions(assessmentId: Id, run?: VerifyRun): Promise<VerifyReport[]>;
 
   // personal keys and the trust list (outside the database)
   listPersonKeys(): Promise<PersonKey[]>;

@@ -20,6 +20,26 @@ describe('canonicalJson', () => {
     expect(canonicalJson(value)).toBe(expected);
   });
 
+  // Strings and keys written by the quick path must be the bytes JSON.stringify writes
+  // (ECMA-262, QuoteJSONString: quote, backslash and code units below U+0020 escaped, unpaired
+  // surrogates written as \uXXXX since ES2019 "well-formed JSON.stringify"; U+2028/U+2029 and
+  // paired surrogates left as they are).
+  it.each([
+    ['plain text as it is', 'W/m² at 1064 nm', '"W/m² at 1064 nm"'],
+    ['backslash', 'a\\b', '"a\\\\b"'],
+    ['control character U+001F', 'a\u001fb', '"a\\u001fb"'],
+    ['tab', 'a\tb', '"a\\tb"'],
+    ['U+007F left as it is', 'a\u007fb', '"a\u007fb"'],
+    ['U+2028 left as it is', 'a\u2028b', '"a\u2028b"'],
+    ['paired surrogates left as they are', 'beam 🔴', '"beam 🔴"'],
+    ['unpaired high surrogate escaped', 'a\ud800b', '"a\\ud800b"'],
+    ['unpaired low surrogate escaped', 'a\udfffb', '"a\\udfffb"'],
+  ] as const)('string and key: %s', (_n, text, quoted) => {
+    expect(canonicalJson([text])).toBe(`[${quoted}]`);
+    expect(canonicalJson({ [text]: text })).toBe(`{${quoted}:${quoted}}`);
+    expect(quoted).toBe(JSON.stringify(text));
+  });
+
   it.each([
     ['NaN', { a: Number.NaN }, /\$\.a is NaN/],
     ['Infinity', [Number.POSITIVE_INFINITY], /\$\[0\] is Infinity/],
