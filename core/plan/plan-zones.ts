@@ -12,6 +12,7 @@
  */
 import { Dec } from '../numeric/decimal.js';
 import { distanceReported } from '../beam/format.js';
+import { SQRT2 } from '../beam/beam-model.js';
 import type { BeamInput } from '../model/inputs.js';
 import type { BeamResult } from '../model/results.js';
 import { DecGeo, add, box, boxOf, boxesApart, circleOutside, distanceSqToSegment, edges, insideBox, pointInPolygon, rayHitsSegment, scale, sub, unit, type Box, type P } from './geometry.js';
@@ -98,6 +99,40 @@ function computeHalfWidth(d0: Dec, phi: Dec, nohd: Dec, z1: Dec, z2: Dec): Dec {
 export function bandOf(beams: readonly BeamOnPlan[]): BandWidth {
   const shapes = beams.map((b) => ({ ...oneOverE(b.input), H: directLength(b.result) }));
   return (z1, z2) => shapes.reduce((m, b) => Dec.max(m, halfWidth(b.d0, b.phi, b.H, z1, z2)), new Dec(0)).add(PATH_MARGIN_M).add(ROUNDING_PAD_M);
+}
+
+/**
+ * How wide the beam is where it meets a beam dump or target `z` metres along its path, m: the
+ * larger of
+ * - the width across which it exceeds the limit, 2·r with r = (D/2)·√(2·ln(D_L/D)) as for the
+ *   zone (halfWidth; zero beyond the drawn hazard distance), and
+ * - its beam diameter there, for a Gaussian beam at the 1/e² points (the diameter a dump's maker
+ *   sizes against, holding 86 % of the power; d(1/e²) = √2·d(1/e), domain.md 1.1), for a top-hat
+ *   its edge;
+ * larger axis of an elliptical beam. The beam grows as in the evaluation, d(z) = a + z·φ (domain.md
+ * 1.2.1, the standards' linear model, core/beam/beam-model.ts); the quadrature form √(a² + (z·φ)²)
+ * gives a narrower beam at every z, so it is not used here (the safe side is the wider beam).
+ * Rounded up to 15 significant figures, so digits lost in the 40-digit arithmetic never make it narrower.
+ */
+export function beamWidthAt(b: BeamOnPlan, z: Dec): Dec {
+  const H = directLength(b.result);
+  const { d0, phi } = oneOverE(b.input);
+  const over = z.gte(H) ? new Dec(0) : halfWidth(d0, phi, H, z, z).mul(2);
+  const g = b.input.beam;
+  const along = (d: number, f: number) => new Dec(d).add(new Dec(f).mul(z));
+  const edge = Dec.max(along(g.diameter_m, g.divergence_rad), along(g.diameterY_m ?? g.diameter_m, g.divergenceY_rad ?? g.divergence_rad));
+  // A 1/e² input is already the 1/e² diameter (taken as typed, so a beam typed 10 mm wide is exactly 10 mm, not 9.999…).
+  const diameter = (g.profile ?? 'gaussian') === 'tophat' || g.definition === '1/e2' ? edge : edge.mul(SQRT2);
+  return Dec.max(over, diameter).toSignificantDigits(15, Dec.ROUND_UP);
+}
+
+/**
+ * Does part of the beam pass a beam dump or target of aperture `aperture` met `z` metres along the
+ * path while still above the limit? A beam exactly as wide as the aperture counts as passing (ours:
+ * the safe side; a dump as wide as the beam's 1/e² diameter already lets 14 % of a Gaussian beam past).
+ */
+export function passesAperture(b: BeamOnPlan, z: Dec, aperture: Dec): boolean {
+  return z.lt(directLength(b.result)) && beamWidthAt(b, z).gte(aperture);
 }
 
 export interface BeamOnPlan {
