@@ -211,8 +211,9 @@ function beamFindings(plan: RoomPlan, b: BeamOnPlan, legs: readonly Leg[], dz: r
     }
     // A beam dump or target narrower than the beam where it meets it: the part that spills past is still above the limit.
     if (leg.passedAperture !== null && passesAperture(b, leg.end, leg.passedAperture)) {
-      const el = path?.elements.find((e, i) => (e.label ?? `${e.kind} ${i + 1}`) === leg.endId && e.kind !== 'mirror');
-      const what = `${el?.kind === 'target' ? 'target' : 'beam dump'} ${el?.label ?? leg.endId}`;
+      const k = path ? path.elements.findIndex((e, i) => e.kind !== 'mirror' && (e.label ?? `${e.kind} ${i + 1}`) === leg.endId) : -1;
+      const el = path?.elements[k];
+      const what = `${el?.kind === 'target' ? 'target' : 'beam dump'} ${el?.label ?? k + 1}`;
       const w = beamWidthAt(b, leg.end);
       out.push({
         kind: 'wider-than-dump',
