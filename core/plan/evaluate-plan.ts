@@ -9,7 +9,7 @@ import type { BeamResult } from '../model/results.js';
 import { asRectangle, boxesApart, boxOf, insideBox, insideOutline, segmentTouchesPolygon, withinOfPolygon, type P } from './geometry.js';
 import type { PlanBeamRun, PlanFinding, PlanResult, RoomPlan } from './plan-model.js';
 import { tracePath, toP, type Leg } from './trace-path.js';
-import { CIRCLE_CORNERS, PATH_MARGIN_M, bandOf, beamWidthAt, passesAperture, diffuseRadius, directLength, directZones, diffuseZones, insideEnclosure, roundPoint, type BeamOnPlan, type ZoneWithShape } from './plan-zones.js';
+import { CIRCLE_CORNERS, PATH_MARGIN_M, bandOf, beamWidthsAt, passesAperture, diffuseRadius, directLength, directZones, diffuseZones, insideEnclosure, roundPoint, type BeamOnPlan, type ZoneWithShape } from './plan-zones.js';
 
 /** Eye level of standing and seated people, about 1.2 m to 1.8 m above the floor (domain.md 4.3, [STAN-OLD]). */
 export const EYE_LEVEL_M: readonly [number, number] = [1.2, 1.8];
@@ -214,13 +214,14 @@ function beamFindings(plan: RoomPlan, b: BeamOnPlan, legs: readonly Leg[], dz: r
       const k = path ? path.elements.findIndex((e, i) => e.kind !== 'mirror' && (e.label ?? `${e.kind} ${i + 1}`) === leg.endId) : -1;
       const el = path?.elements[k];
       const what = `${el?.kind === 'target' ? 'target' : 'beam dump'} ${el?.label ?? k + 1}`;
-      const w = beamWidthAt(b, leg.end);
+      const { width: w, governs } = beamWidthsAt(b, leg.end);
+      const which = governs === 'over-limit' ? 'the width across which the beam is above the limit' : (b.input.beam.profile ?? 'gaussian') === 'tophat' ? 'the beam diameter' : 'the beam diameter at the 1/e² points';
       out.push({
         kind: 'wider-than-dump',
         severity: 'hazard',
         subjectId: b.laserId,
         zoneIds: ids,
-        text: `The beam of ${label} is ${w.gt(leg.passedAperture) ? 'wider than' : 'as wide as'} ${what} where it meets it, ${metres(leg.end)} along its path (${millimetres(w)} against ${apertureWords(leg.passedAperture)}): part of the beam passes it, still above the limit, so its hazard zone goes on past it.`,
+        text: `The beam of ${label} is ${w.gt(leg.passedAperture) ? 'wider than' : 'as wide as'} ${what} where it meets it, ${metres(leg.end)} along its path (${millimetres(w)} against ${apertureWords(leg.passedAperture)}, ${which}): part of the beam passes it, still above the limit, so its hazard zone goes on past it.`,
         suggestion: `Replace ${what} by one with an aperture well over ${millimetres(w)}, or place it where the beam of ${label} is narrower.`,
       });
     }

@@ -115,6 +115,11 @@ export function bandOf(beams: readonly BeamOnPlan[]): BandWidth {
  * Rounded up to 15 significant figures, so digits lost in the 40-digit arithmetic never make it narrower.
  */
 export function beamWidthAt(b: BeamOnPlan, z: Dec): Dec {
+  return beamWidthsAt(b, z).width;
+}
+
+/** The two widths of beamWidthAt and the larger (which the finding names). */
+export function beamWidthsAt(b: BeamOnPlan, z: Dec): { readonly width: Dec; readonly governs: 'over-limit' | 'diameter' } {
   const H = directLength(b.result);
   const { d0, phi } = oneOverE(b.input);
   const over = z.gte(H) ? new Dec(0) : halfWidth(d0, phi, H, z, z).mul(2);
@@ -123,7 +128,7 @@ export function beamWidthAt(b: BeamOnPlan, z: Dec): Dec {
   const edge = Dec.max(along(g.diameter_m, g.divergence_rad), along(g.diameterY_m ?? g.diameter_m, g.divergenceY_rad ?? g.divergence_rad));
   // A 1/e² input is already the 1/e² diameter (taken as typed, so a beam typed 10 mm wide is exactly 10 mm, not 9.999…).
   const diameter = (g.profile ?? 'gaussian') === 'tophat' || g.definition === '1/e2' ? edge : edge.mul(SQRT2);
-  return Dec.max(over, diameter).toSignificantDigits(15, Dec.ROUND_UP);
+  return { width: Dec.max(over, diameter).toSignificantDigits(15, Dec.ROUND_UP), governs: over.gt(diameter) ? 'over-limit' : 'diameter' };
 }
 
 /**

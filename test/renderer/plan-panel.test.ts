@@ -249,7 +249,7 @@ describe('the aperture of a beam dump, typed with its unit (keyboard)', () => {
     await fireEvent.change(box, { target: { value: '5' } });
     expect(plan().paths[0]?.elements[0]).toMatchObject({ kind: 'dump', aperture_m: 0.005 });
     expect(findings()).toHaveLength(1);
-    expect(findings()[0]).toMatch(/^The beam of green 532 nm is wider than beam dump 1 where it meets it, 3\.5 m along its path \(8\.\d\d mm against 5 mm\): part of the beam passes it/);
+    expect(findings()[0]).toMatch(/^The beam of green 532 nm is wider than beam dump 1 where it meets it, 3\.5 m along its path \(8\.\d\d mm against 5 mm, the width across which the beam is above the limit\): part of the beam passes it/);
     await fireEvent.change(box, { target: { value: '1 cm' } });
     expect(plan().paths[0]?.elements[0]).toMatchObject({ aperture_m: 0.01 });
     expect(findings()).toEqual([]);

@@ -69,7 +69,7 @@ describe('a beam dump or target narrower than the beam lets part of it pass (der
       endsAt: 'nohd',
       maxX: 1 + 14.9 + 0.051,
       findings: ['door-in-zone:D1', 'leaves-room:D1', 'no-controlled-area:plan', 'wider-than-dump:L2'],
-      text: 'The beam of beam A is wider than beam dump B1 where it meets it, 3 m along its path (6.65 mm against 6.6 mm): part of the beam passes it, still above the limit, so its hazard zone goes on past it.',
+      text: 'The beam of beam A is wider than beam dump B1 where it meets it, 3 m along its path (6.65 mm against 6.6 mm, the width across which the beam is above the limit): part of the beam passes it, still above the limit, so its hazard zone goes on past it.',
     },
     {
       name: 'a 10 mm dump 4 m from the exit and beam B exactly 10 mm wide there: a beam as wide as the dump counts as passing',
@@ -78,7 +78,7 @@ describe('a beam dump or target narrower than the beam lets part of it pass (der
       endsAt: 'nohd',
       maxX: 1 + 10.2 + 0.051,
       findings: ['door-in-zone:D1', 'leaves-room:D1', 'no-controlled-area:plan', 'wider-than-dump:L2'],
-      text: 'The beam of beam B is as wide as beam dump B1 where it meets it, 4 m along its path (10 mm against 10 mm): part of the beam passes it, still above the limit, so its hazard zone goes on past it.',
+      text: 'The beam of beam B is as wide as beam dump B1 where it meets it, 4 m along its path (10 mm against 10 mm, the beam diameter at the 1/e² points): part of the beam passes it, still above the limit, so its hazard zone goes on past it.',
     },
     {
       name: 'a 10.001 mm dump at the same place takes beam B',
@@ -96,7 +96,7 @@ describe('a beam dump or target narrower than the beam lets part of it pass (der
       maxX: 1 + 14.9 + 0.051,
       findings: ['door-in-zone:D1', 'leaves-room:D1', 'no-controlled-area:plan', 'wider-than-dump:L2'],
       diffuseAt: 'Diffuse reflection of beam A at T1',
-      text: 'The beam of beam A is wider than target T1 where it meets it, 3 m along its path (6.65 mm against 5 mm): part of the beam passes it, still above the limit, so its hazard zone goes on past it.',
+      text: 'The beam of beam A is wider than target T1 where it meets it, 3 m along its path (6.65 mm against 5 mm, the width across which the beam is above the limit): part of the beam passes it, still above the limit, so its hazard zone goes on past it.',
     },
     {
       name: 'a small dump beyond the hazard distance: the beam is below the limit there, nothing passes that matters',
