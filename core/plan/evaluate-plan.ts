@@ -9,7 +9,7 @@ import type { BeamResult } from '../model/results.js';
 import { asRectangle, boxesApart, boxOf, insideBox, insideOutline, segmentTouchesPolygon, withinOfPolygon, type P } from './geometry.js';
 import type { PlanBeamRun, PlanFinding, PlanResult, RoomPlan } from './plan-model.js';
 import { tracePath, toP, type Leg } from './trace-path.js';
-import { CIRCLE_CORNERS, PATH_MARGIN_M, bandOf, beamWidthsAt, passesAperture, diffuseRadius, directLength, directZones, diffuseZones, insideEnclosure, roundPoint, type BeamOnPlan, type ZoneWithShape } from './plan-zones.js';
+import { BAND_EDGE_ROUNDING_M, CIRCLE_CORNERS, PATH_MARGIN_M, bandOf, beamWidthsAt, passesAperture, diffuseRadius, directLength, directZones, diffuseZones, insideEnclosure, roundPoint, type BeamOnPlan, type ZoneWithShape } from './plan-zones.js';
 
 /** Eye level of standing and seated people, about 1.2 m to 1.8 m above the floor (domain.md 4.3, [STAN-OLD]). */
 export const EYE_LEVEL_M: readonly [number, number] = [1.2, 1.8];
@@ -30,7 +30,7 @@ function beamName(z: ZoneWithShape): string {
 
 export const PLAN_METHOD: readonly string[] = [
   `Direct-beam zones follow the drawn beam path up to the NOHD (rounded up, or the upper bound from the input tolerances where larger), stopped by beam dumps, targets, walls and barriers; doors and windows are taken as open.`,
-  `Their width is where the exposure of a Gaussian beam exceeds the limit (derived from the beam diameter, divergence and NOHD), plus ${PATH_MARGIN_M.mul(1000).toString()} mm on each side for the accuracy of the drawing. Every line of that band runs parallel to the drawn beam until the first wall, curtain or barrier it meets, and the zone ends 1 mm beyond that surface.`,
+  `Their width is where the exposure of a Gaussian beam exceeds the limit (derived from the beam diameter, divergence and NOHD), plus ${PATH_MARGIN_M.mul(1000).toString()} mm on each side for the accuracy of the drawing and ${BAND_EDGE_ROUNDING_M.mul(1000).toString()} mm for rounding (a surface end within it counts as inside the band). Every line of that band runs parallel to the drawn beam until the first wall, curtain or barrier it meets, and the zone ends 1 mm beyond that surface.`,
   'A wall, curtain or barrier stops the beam only where it spans the whole band: where the beam meets one within the band of its end, a corner of the room or the edge of a door or window, part of the beam may pass, and the path and zone go on past it (the finding says so).',
   'A beam dump or target with its aperture stated takes the whole beam only where the beam there is narrower than the aperture: the beam is taken as wide as the larger of its 1/e² diameter (growing linearly with the divergence from the exit, as in the hazard distance) and the width across which it exceeds the limit; where it is as wide or wider, part of it passes, and the path and zone go on past the dump (the finding says so).',
   `Diffuse-reflection zones are drawn around a circle of the diffuse NHZ (rounded up) about every mirror and target the beam reaches, every point where it ends on a wall or barrier, and every reflection point marked on the plan (a ${CIRCLE_CORNERS}-sided polygon outside the circle).`,

@@ -25,6 +25,13 @@ import { toP, type BandWidth, type Leg } from './trace-path.js';
 export const PATH_MARGIN_M = new Dec('0.05');
 /** Widening before rounding corners to the millimetre (derived: covers the 0.71 mm a corner can move). */
 const ROUNDING_PAD_M = new Dec('0.001');
+/**
+ * The band is taken this much wider, for tracing and for drawing (ours): the over-limit width is
+ * computed, the surfaces are placed and the zones drawn to the millimetre, so whether a surface end
+ * lies just inside or just outside the band is decided by roundings within half a millimetre. An end
+ * within 0.5 mm outside the computed band counts as inside it (part of the beam passes), the safe side.
+ */
+export const BAND_EDGE_ROUNDING_M = new Dec('0.0005');
 /** Corners of the polygon drawn around a circle. */
 export const CIRCLE_CORNERS = 24;
 
@@ -98,7 +105,7 @@ function computeHalfWidth(d0: Dec, phi: Dec, nohd: Dec, z1: Dec, z2: Dec): Dec {
  */
 export function bandOf(beams: readonly BeamOnPlan[]): BandWidth {
   const shapes = beams.map((b) => ({ ...oneOverE(b.input), H: directLength(b.result) }));
-  return (z1, z2) => shapes.reduce((m, b) => Dec.max(m, halfWidth(b.d0, b.phi, b.H, z1, z2)), new Dec(0)).add(PATH_MARGIN_M).add(ROUNDING_PAD_M);
+  return (z1, z2) => shapes.reduce((m, b) => Dec.max(m, halfWidth(b.d0, b.phi, b.H, z1, z2)), new Dec(0)).add(PATH_MARGIN_M).add(ROUNDING_PAD_M).add(BAND_EDGE_ROUNDING_M);
 }
 
 /**
@@ -229,7 +236,7 @@ export function directZones(plan: RoomPlan, beam: BeamOnPlan, legs: readonly Leg
       const t1 = cuts[i];
       const t2 = cuts[i + 1];
       if (!t1 || !t2 || t2.sub(t1).lte(0)) continue;
-      const w = halfWidth(d0, phi, H, leg.start.add(t1), leg.start.add(t2)).add(PATH_MARGIN_M).add(ROUNDING_PAD_M);
+      const w = halfWidth(d0, phi, H, leg.start.add(t1), leg.start.add(t2)).add(PATH_MARGIN_M).add(ROUNDING_PAD_M).add(BAND_EDGE_ROUNDING_M);
       // Pieces meet edge to edge inside a leg; only the leg's own ends get the placement margin.
       // Walls, curtains and barriers beside the beam or at its end cut the strip (core/plan/beam-strip.ts).
       const ext = PATH_MARGIN_M.add(ROUNDING_PAD_M);

@@ -146,7 +146,8 @@ function passingLines(surfaces: readonly Surface[], pos: P, u: P, len: Dec, c: H
   for (const s of surfaces) {
     for (const e of [s.a, s.b]) {
       const off = dot(sub(e, pos), n);
-      if (off.abs().lt(T)) for (const k of [off.sub(PAST_END_M), off.add(PAST_END_M)]) if (k.abs().lte(T)) offsets.push(k);
+      // An end on the band's edge counts as inside it: the line just past it still passes (the safe side).
+      if (off.abs().lte(T)) for (const k of [off.sub(PAST_END_M), off.add(PAST_END_M)]) if (k.abs().lte(T.add(PAST_END_M))) offsets.push(k);
     }
   }
   const S = c.surface;
