@@ -221,7 +221,7 @@ export function directZones(plan: RoomPlan, beam: BeamOnPlan, legs: readonly Leg
     if (pieceLen.lte(0)) break;
     const u = unit(leg.from, leg.to);
     const end = add(leg.from, scale(u, pieceLen));
-    const passed = passedScreens(leg.from, leg.to, roomScreens(plan));
+    const passed = passedOf(plan, leg);
     // A surface the drawn line passes near its end (or a corner) still stops the lines of the band that meet it;
     // one it passes at a door or window in it is an opening (the screens do not hold the openings).
     const grazedAt = leg.grazed.filter((g) => g.through === null).map((g) => g.point);
@@ -262,6 +262,17 @@ export function directZones(plan: RoomPlan, beam: BeamOnPlan, legs: readonly Leg
   const last = legs[legs.length - 1];
   return { zones, run: { points, length: Dec.min(H, last ? last.end : new Dec(0)) } };
 }
+
+/** The screens a leg passes, worked out once per leg: the beams of one laser share its legs. */
+function passedOf(plan: RoomPlan, leg: Leg): Set<ScreenSeg> {
+  let s = passedByLeg.get(leg);
+  if (!s) {
+    s = passedScreens(leg.from, leg.to, roomScreens(plan));
+    passedByLeg.set(leg, s);
+  }
+  return s;
+}
+const passedByLeg = new WeakMap<Leg, Set<ScreenSeg>>();
 
 /** A grazed point within 2 mm of a screen lies on it (its free end is taken 1 mm in); squared, m². */
 const GRAZE_ON_SCREEN_M2 = new Dec('4e-6');
@@ -344,11 +355,15 @@ const planScreens = new WeakMap<RoomPlan, ScreenSeg[]>();
  * moves a door or a desk leaves every diffuse zone as it was, and the sweep is the plan's largest cost.
  */
 function diffuseShape(plan: RoomPlan, at: P, seenFrom: P, R: Dec): P[] {
-  const screens = screensFor(plan, seenFrom);
+  const circle = circleOutside(at, R.add(ROUNDING_PAD_M), CIRCLE_CORNERS);
+  // Keyed by the screens that reach the circle's box only: visibleRegion sweeps no other (the same
+  // test), so a curtain moved across the room leaves a small zone elsewhere as it was.
+  const around = boxOf(circle);
+  const screens = screensFor(plan, seenFrom).filter((sc) => !boxesApart(sc.box, around, 0));
   const key = `${at.x.toString()},${at.y.toString()}|${seenFrom.x.toString()},${seenFrom.y.toString()}|${R.toString()}|${screensKey(screens)}`;
   const hit = shapes.get(key);
   if (hit) return hit;
-  const shape = visibleRegion(seenFrom, circleOutside(at, R.add(ROUNDING_PAD_M), CIRCLE_CORNERS), screens, ROUNDING_PAD_M);
+  const shape = visibleRegion(seenFrom, circle, screens, ROUNDING_PAD_M);
   if (shapes.size >= SHAPES_KEPT) shapes.clear();
   shapes.set(key, shape);
   return shape;
