@@ -29,6 +29,6 @@ export { nohdWithLimit, diffuseWithLimit, lensWithLimit, fiberWithLimit, type Gi
 export * from './plan/plan-model.js';
 export { evaluatePlan, EYE_LEVEL_M } from './plan/evaluate-plan.js';
 export { validatePlan, PLAN_COORDINATE_RANGE_M } from './plan/validate-plan.js';
-export { labelSide, onwardEnd, onwardStop, pathPoints, planMiddle, type Middle } from './plan/plan-layout.js';
+export { labelSide, onwardEnd, onwardStop, pathPoints, planMiddle, spillLine, type Middle } from './plan/plan-layout.js';
 export { checkableEntries, entrySamples, documentValueProblem, DOCUMENT_VARIABLES, type CheckableEntry, type SamplePoint } from './limits/check-samples.js';
 export { factorPieceKey } from './limits/factors.js';

@@ -112,6 +112,16 @@ export const INPUT_RULES = {
   modeFieldDiameter_m: r({ label: 'Mode-field / core diameter', unit: 'm', min: 1e-7, minInclusive: true, max: 1e-3 }),
   magnification: r({ label: 'Magnification', unit: '', min: 1, minInclusive: true, max: 1000 }),
   objectiveDiameter_m: r({ label: 'Objective diameter', unit: 'm', min: 0, minInclusive: false, max: 2 }),
+  /** Room plan: the width of the opening of a beam dump or the face of a target (ours: 2 m, as an objective; a plan's elements are bench optics). */
+  planAperture_m: r({
+    label: 'Aperture',
+    unit: 'm',
+    min: 0,
+    minInclusive: false,
+    max: 2,
+    why: 'the opening of a beam dump or the face of a target',
+    plausible: { above: 0.3, below: 0.001, note: 'beam dumps and targets on a bench are usually a few millimetres to a few centimetres wide; check mm against m' },
+  }),
   transmission: r({ label: 'Optics transmission', unit: '', min: 0, minInclusive: false, max: 1 }),
   /** Relative tolerances (0.1 = ±10 %): below 1 so the lower bound of a quantity stays positive. */
   tolerance: r({ label: 'Tolerance', unit: '', min: 0, minInclusive: true, max: 0.99 }),

@@ -9,7 +9,7 @@ import type { BeamResult } from '../model/results.js';
 import { asRectangle, boxesApart, boxOf, insideBox, insideOutline, segmentTouchesPolygon, withinOfPolygon, type P } from './geometry.js';
 import type { PlanBeamRun, PlanFinding, PlanResult, RoomPlan } from './plan-model.js';
 import { tracePath, toP, type Leg } from './trace-path.js';
-import { CIRCLE_CORNERS, PATH_MARGIN_M, bandOf, diffuseRadius, directLength, directZones, diffuseZones, insideEnclosure, roundPoint, type BeamOnPlan, type ZoneWithShape } from './plan-zones.js';
+import { BAND_EDGE_ROUNDING_M, CIRCLE_CORNERS, PATH_MARGIN_M, bandOf, beamWidthsAt, passesAperture, diffuseRadius, directLength, directZones, diffuseZones, insideEnclosure, roundPoint, type BeamOnPlan, type ZoneWithShape } from './plan-zones.js';
 
 /** Eye level of standing and seated people, about 1.2 m to 1.8 m above the floor (domain.md 4.3, [STAN-OLD]). */
 export const EYE_LEVEL_M: readonly [number, number] = [1.2, 1.8];
@@ -30,8 +30,9 @@ function beamName(z: ZoneWithShape): string {
 
 export const PLAN_METHOD: readonly string[] = [
   `Direct-beam zones follow the drawn beam path up to the NOHD (rounded up, or the upper bound from the input tolerances where larger), stopped by beam dumps, targets, walls and barriers; doors and windows are taken as open.`,
-  `Their width is where the exposure of a Gaussian beam exceeds the limit (derived from the beam diameter, divergence and NOHD), plus ${PATH_MARGIN_M.mul(1000).toString()} mm on each side for the accuracy of the drawing. Every line of that band runs parallel to the drawn beam until the first wall, curtain or barrier it meets, and the zone ends 1 mm beyond that surface.`,
+  `Their width is where the exposure of a Gaussian beam exceeds the limit (derived from the beam diameter, divergence and NOHD), plus ${PATH_MARGIN_M.mul(1000).toString()} mm on each side for the accuracy of the drawing and ${BAND_EDGE_ROUNDING_M.mul(1000).toString()} mm for rounding (a surface end within it counts as inside the band). Every line of that band runs parallel to the drawn beam until the first wall, curtain or barrier it meets, and the zone ends 1 mm beyond that surface.`,
   'A wall, curtain or barrier stops the beam only where it spans the whole band: where the beam meets one within the band of its end, a corner of the room or the edge of a door or window, part of the beam may pass, and the path and zone go on past it (the finding says so).',
+  'A beam dump or target with its aperture stated takes the whole beam only where the beam there is narrower than the aperture: the beam is taken as wide as the larger of its 1/e² diameter (growing linearly with the divergence from the exit, as in the hazard distance) and the width across which it exceeds the limit; where it is as wide or wider, part of it passes, and the path and zone go on past the dump (the finding says so).',
   `Diffuse-reflection zones are drawn around a circle of the diffuse NHZ (rounded up) about every mirror and target the beam reaches, every point where it ends on a wall or barrier, and every reflection point marked on the plan (a ${CIRCLE_CORNERS}-sided polygon outside the circle).`,
   'Walls, curtains and barriers are taken as opaque to scattered light: a diffuse-reflection zone covers only what its reflection point can see in a straight line, cut at the room outline (of any shape), interior walls, curtains, barriers and the enclosure the point lies in, 1 mm beyond the surface along the line of sight; a spot on a wall or barrier is seen from the side the beam comes from; a door or window the zone reaches is reported.',
   'Every zone is widened by 1 mm before its corners are rounded to the millimetre, so no zone is drawn smaller than computed. Heights are not modelled except for the eye-level check of a stated beam height.',
@@ -59,17 +60,19 @@ export function evaluatePlan(plan: RoomPlan, input: RoomInput, beams: readonly B
     }
     const mine = onPlan.filter((b) => b.laserId === laser.id);
     const far = mine.reduce((m, b) => Dec.max(m, directLength(b.result)), new Dec(1)).add(1);
-    const legs = tracePath(plan, path, far, bandOf(mine));
-    const short = pathMeetsWall(plan, path, legs, laser.name);
+    const traced = tracePath(plan, path, far, bandOf(mine), (z, aperture) => mine.some((b) => passesAperture(b, z, aperture)));
+    const short = pathMeetsWall(plan, path, traced, laser.name);
     if (short) findings.push(short);
     for (const b of mine) {
+      // The laser's path goes on past a dump or target that one of its beams is wider than; a beam that it takes whole ends there.
+      const legs = legsOfBeam(traced, b);
       const { zones: dz, run } = directZones(plan, b, legs);
       const fz = diffuseZones(plan, b, legs);
       for (const z of [...dz, ...fz]) names.set(z, b.result.label);
       zones.push(...dz, ...fz);
       const last = legs[legs.length - 1];
       if (last && run.points.length > 1) runs.push(runOf(plan, b, last, run.points, run.length));
-      beamFindings(plan, b, legs, dz, findings, path.height_m);
+      beamFindings(plan, b, legs, dz, findings, path.height_m, path);
       if (diffuseRadius(b.result) === null) {
         findings.push({ kind: 'no-diffuse-distance', severity: 'check', subjectId: b.result.beamId, zoneIds: [], text: `No diffuse reflection was assessed for ${b.result.label}, so no diffuse-reflection zone is drawn for it.`, suggestion: `Add a diffuse reflection to the viewing conditions of ${b.result.label} (reflectance of the surfaces the beam can meet).` });
       }
@@ -136,6 +139,17 @@ function pathMeetsWall(plan: RoomPlan, path: RoomPlan['paths'][number], legs: re
   };
 }
 
+/** The legs a beam follows: up to the first beam dump or target it is narrower than. */
+function legsOfBeam(legs: readonly Leg[], b: BeamOnPlan): readonly Leg[] {
+  const k = legs.findIndex((l) => l.passedAperture !== null && !passesAperture(b, l.end, l.passedAperture));
+  return k < 0 ? legs : legs.slice(0, k + 1);
+}
+
+/** An aperture for a sentence: millimetres, 3 significant figures, rounded down (the dump is never said to be wider than typed). */
+function apertureWords(d: Dec): string {
+  return `${d.mul(1000).toSignificantDigits(3, Dec.ROUND_DOWN).toString()} mm`;
+}
+
 function runOf(plan: RoomPlan, b: BeamOnPlan, last: Leg, points: P[], length: Dec): PlanBeamRun {
   const physicalEnd = last.end;
   const endsAt: PlanBeamRun['endsAt'] = length.lt(physicalEnd) || last.endsWith === 'open' || last.endsWith === 'mirror' ? 'nohd' : (last.endsWith as 'dump' | 'target' | 'wall' | 'barrier');
@@ -146,7 +160,7 @@ function runOf(plan: RoomPlan, b: BeamOnPlan, last: Leg, points: P[], length: De
   return { beamId: b.result.beamId, laserId: b.laserId, points: points.map(roundPoint), endsAt, endDetail };
 }
 
-function beamFindings(plan: RoomPlan, b: BeamOnPlan, legs: readonly Leg[], dz: readonly ZoneWithShape[], out: PlanFinding[], height_m: number | undefined): void {
+function beamFindings(plan: RoomPlan, b: BeamOnPlan, legs: readonly Leg[], dz: readonly ZoneWithShape[], out: PlanFinding[], height_m: number | undefined, path?: RoomPlan['paths'][number]): void {
   const H = directLength(b.result);
   const label = b.result.label;
   const ids = dz.map((z) => z.id);
@@ -193,6 +207,22 @@ function beamFindings(plan: RoomPlan, b: BeamOnPlan, legs: readonly Leg[], dz: r
         zoneIds: ids,
         text: `The direct beam of ${label} meets ${what} ${metres(g.at)} along its path within ${band} of ${where}: part of the beam may pass ${g.corner ? 'the corner' : 'the end'}, so it is taken to go on past it.`,
         suggestion: g.kind === 'barrier' ? `Extend ${what} well past the beam of ${label}, or end the beam in a beam dump before it.` : `End the beam of ${label} in a beam dump before it reaches ${what}, clear of ${where}.`,
+      });
+    }
+    // A beam dump or target narrower than the beam where it meets it: the part that spills past is still above the limit.
+    if (leg.passedAperture !== null && passesAperture(b, leg.end, leg.passedAperture)) {
+      const k = path ? path.elements.findIndex((e, i) => e.kind !== 'mirror' && (e.label ?? `${e.kind} ${i + 1}`) === leg.endId) : -1;
+      const el = path?.elements[k];
+      const what = `${el?.kind === 'target' ? 'target' : 'beam dump'} ${el?.label ?? k + 1}`;
+      const { width: w, governs } = beamWidthsAt(b, leg.end);
+      const which = governs === 'over-limit' ? 'the width across which the beam is above the limit' : (b.input.beam.profile ?? 'gaussian') === 'tophat' ? 'the beam diameter' : 'the beam diameter at the 1/e² points';
+      out.push({
+        kind: 'wider-than-dump',
+        severity: 'hazard',
+        subjectId: b.laserId,
+        zoneIds: ids,
+        text: `The beam of ${label} is ${w.gt(leg.passedAperture) ? 'wider than' : 'as wide as'} ${what} where it meets it, ${metres(leg.end)} along its path (${millimetres(w)} against ${apertureWords(leg.passedAperture)}, ${which}): part of the beam passes it, still above the limit, so its hazard zone goes on past it.`,
+        suggestion: `Replace ${what} by one with an aperture well over ${millimetres(w)}, or place it where the beam of ${label} is narrower.`,
       });
     }
     // Stopped by a barrier or curtain within the NOHD: the rating must hold.

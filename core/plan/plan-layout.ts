@@ -4,7 +4,7 @@
  * findings come from evaluatePlan only.
  */
 import { Dec } from '../numeric/decimal.js';
-import type { PlanBeamPath, PlanPoint, RoomPlan } from './plan-model.js';
+import type { PlanBeamPath, PlanBeamRun, PlanPoint, RoomPlan } from './plan-model.js';
 import { tracePath } from './trace-path.js';
 
 export interface Middle {
@@ -63,4 +63,28 @@ export function onwardStop(plan: RoomPlan, path: PlanBeamPath, length: number): 
     // A plan being edited can be momentarily degenerate (two points on one spot): draw the plain arrow.
   }
   return arrow;
+}
+
+/**
+ * Past a beam dump or target the beam is wider than: the line of the part that passes, from the
+ * element to where the farthest run of the laser's beams ends (the core's runs, evaluatePlan), drawn
+ * dashed like an open beam. Null when nothing passes.
+ */
+export function spillLine(path: PlanBeamPath, runs: readonly PlanBeamRun[] | undefined): { from: PlanPoint; to: PlanPoint } | null {
+  const last = path.elements[path.elements.length - 1];
+  if (!last || last.kind === 'mirror' || last.aperture_m === undefined || !runs) return null;
+  const drawn = path.elements.length + 1;
+  let to: PlanPoint | null = null;
+  let far = 0;
+  for (const r of runs) {
+    const q = r.points[r.points.length - 1];
+    if (r.laserId !== path.laserId || r.points.length <= drawn || !q) continue;
+    const p = { x_m: Number(q.x_m), y_m: Number(q.y_m) };
+    const d = Math.hypot(p.x_m - last.at.x_m, p.y_m - last.at.y_m);
+    if (d > far) {
+      far = d;
+      to = p;
+    }
+  }
+  return to ? { from: last.at, to } : null;
 }

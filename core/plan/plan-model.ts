@@ -52,6 +52,12 @@ export interface PathElement {
   readonly kind: PathElementKind;
   readonly at: PlanPoint;
   readonly label?: string;
+  /**
+   * Beam dumps and targets only: the width of the opening or face that takes the beam, m. Where the
+   * beam there is at least as wide, part of it passes and its hazard zone goes on (core/plan/plan-zones.ts,
+   * beamWidthAt). Absent: the element is taken to take the whole beam, as drawn.
+   */
+  readonly aperture_m?: number;
 }
 
 /** Where one laser sits and the path its beams take. */
@@ -145,6 +151,7 @@ export type PlanFindingKind =
   | 'leaves-room'
   | 'stopped-by-barrier'
   | 'passes-surface-end'
+  | 'wider-than-dump'
   | 'beam-at-eye-level'
   | 'outside-controlled-area'
   | 'no-controlled-area'

@@ -12,6 +12,7 @@
  */
 import { Dec } from '../numeric/decimal.js';
 import { distanceReported } from '../beam/format.js';
+import { SQRT2 } from '../beam/beam-model.js';
 import type { BeamInput } from '../model/inputs.js';
 import type { BeamResult } from '../model/results.js';
 import { DecGeo, add, box, boxOf, boxesApart, circleOutside, distanceSqToSegment, edges, insideBox, pointInPolygon, rayHitsSegment, scale, sub, unit, type Box, type P } from './geometry.js';
@@ -24,6 +25,13 @@ import { toP, type BandWidth, type Leg } from './trace-path.js';
 export const PATH_MARGIN_M = new Dec('0.05');
 /** Widening before rounding corners to the millimetre (derived: covers the 0.71 mm a corner can move). */
 const ROUNDING_PAD_M = new Dec('0.001');
+/**
+ * The band is taken this much wider, for tracing and for drawing (ours): the over-limit width is
+ * computed, the surfaces are placed and the zones drawn to the millimetre, so whether a surface end
+ * lies just inside or just outside the band is decided by roundings within half a millimetre. An end
+ * within 0.5 mm outside the computed band counts as inside it (part of the beam passes), the safe side.
+ */
+export const BAND_EDGE_ROUNDING_M = new Dec('0.0005');
 /** Corners of the polygon drawn around a circle. */
 export const CIRCLE_CORNERS = 24;
 
@@ -97,7 +105,46 @@ function computeHalfWidth(d0: Dec, phi: Dec, nohd: Dec, z1: Dec, z2: Dec): Dec {
  */
 export function bandOf(beams: readonly BeamOnPlan[]): BandWidth {
   const shapes = beams.map((b) => ({ ...oneOverE(b.input), H: directLength(b.result) }));
-  return (z1, z2) => shapes.reduce((m, b) => Dec.max(m, halfWidth(b.d0, b.phi, b.H, z1, z2)), new Dec(0)).add(PATH_MARGIN_M).add(ROUNDING_PAD_M);
+  return (z1, z2) => shapes.reduce((m, b) => Dec.max(m, halfWidth(b.d0, b.phi, b.H, z1, z2)), new Dec(0)).add(PATH_MARGIN_M).add(ROUNDING_PAD_M).add(BAND_EDGE_ROUNDING_M);
+}
+
+/**
+ * How wide the beam is where it meets a beam dump or target `z` metres along its path, m: the
+ * larger of
+ * - the width across which it exceeds the limit, 2·r with r = (D/2)·√(2·ln(D_L/D)) as for the
+ *   zone (halfWidth; zero beyond the drawn hazard distance), and
+ * - its beam diameter there, for a Gaussian beam at the 1/e² points (the diameter a dump's maker
+ *   sizes against, holding 86 % of the power; d(1/e²) = √2·d(1/e), domain.md 1.1), for a top-hat
+ *   its edge;
+ * larger axis of an elliptical beam. The beam grows as in the evaluation, d(z) = a + z·φ (domain.md
+ * 1.2.1, the standards' linear model, core/beam/beam-model.ts); the quadrature form √(a² + (z·φ)²)
+ * gives a narrower beam at every z, so it is not used here (the safe side is the wider beam).
+ * Rounded up to 15 significant figures, so digits lost in the 40-digit arithmetic never make it narrower.
+ */
+export function beamWidthAt(b: BeamOnPlan, z: Dec): Dec {
+  return beamWidthsAt(b, z).width;
+}
+
+/** The two widths of beamWidthAt and the larger (which the finding names). */
+export function beamWidthsAt(b: BeamOnPlan, z: Dec): { readonly width: Dec; readonly governs: 'over-limit' | 'diameter' } {
+  const H = directLength(b.result);
+  const { d0, phi } = oneOverE(b.input);
+  const over = z.gte(H) ? new Dec(0) : halfWidth(d0, phi, H, z, z).mul(2);
+  const g = b.input.beam;
+  const along = (d: number, f: number) => new Dec(d).add(new Dec(f).mul(z));
+  const edge = Dec.max(along(g.diameter_m, g.divergence_rad), along(g.diameterY_m ?? g.diameter_m, g.divergenceY_rad ?? g.divergence_rad));
+  // A 1/e² input is already the 1/e² diameter (taken as typed, so a beam typed 10 mm wide is exactly 10 mm, not 9.999…).
+  const diameter = (g.profile ?? 'gaussian') === 'tophat' || g.definition === '1/e2' ? edge : edge.mul(SQRT2);
+  return { width: Dec.max(over, diameter).toSignificantDigits(15, Dec.ROUND_UP), governs: over.gt(diameter) ? 'over-limit' : 'diameter' };
+}
+
+/**
+ * Does part of the beam pass a beam dump or target of aperture `aperture` met `z` metres along the
+ * path while still above the limit? A beam exactly as wide as the aperture counts as passing (ours:
+ * the safe side; a dump as wide as the beam's 1/e² diameter already lets 14 % of a Gaussian beam past).
+ */
+export function passesAperture(b: BeamOnPlan, z: Dec, aperture: Dec): boolean {
+  return z.lt(directLength(b.result)) && beamWidthAt(b, z).gte(aperture);
 }
 
 export interface BeamOnPlan {
@@ -174,7 +221,7 @@ export function directZones(plan: RoomPlan, beam: BeamOnPlan, legs: readonly Leg
     if (pieceLen.lte(0)) break;
     const u = unit(leg.from, leg.to);
     const end = add(leg.from, scale(u, pieceLen));
-    const passed = passedScreens(leg.from, leg.to, roomScreens(plan));
+    const passed = passedOf(plan, leg);
     // A surface the drawn line passes near its end (or a corner) still stops the lines of the band that meet it;
     // one it passes at a door or window in it is an opening (the screens do not hold the openings).
     const grazedAt = leg.grazed.filter((g) => g.through === null).map((g) => g.point);
@@ -189,7 +236,7 @@ export function directZones(plan: RoomPlan, beam: BeamOnPlan, legs: readonly Leg
       const t1 = cuts[i];
       const t2 = cuts[i + 1];
       if (!t1 || !t2 || t2.sub(t1).lte(0)) continue;
-      const w = halfWidth(d0, phi, H, leg.start.add(t1), leg.start.add(t2)).add(PATH_MARGIN_M).add(ROUNDING_PAD_M);
+      const w = halfWidth(d0, phi, H, leg.start.add(t1), leg.start.add(t2)).add(PATH_MARGIN_M).add(ROUNDING_PAD_M).add(BAND_EDGE_ROUNDING_M);
       // Pieces meet edge to edge inside a leg; only the leg's own ends get the placement margin.
       // Walls, curtains and barriers beside the beam or at its end cut the strip (core/plan/beam-strip.ts).
       const ext = PATH_MARGIN_M.add(ROUNDING_PAD_M);
@@ -215,6 +262,17 @@ export function directZones(plan: RoomPlan, beam: BeamOnPlan, legs: readonly Leg
   const last = legs[legs.length - 1];
   return { zones, run: { points, length: Dec.min(H, last ? last.end : new Dec(0)) } };
 }
+
+/** The screens a leg passes, worked out once per leg: the beams of one laser share its legs. */
+function passedOf(plan: RoomPlan, leg: Leg): Set<ScreenSeg> {
+  let s = passedByLeg.get(leg);
+  if (!s) {
+    s = passedScreens(leg.from, leg.to, roomScreens(plan));
+    passedByLeg.set(leg, s);
+  }
+  return s;
+}
+const passedByLeg = new WeakMap<Leg, Set<ScreenSeg>>();
 
 /** A grazed point within 2 mm of a screen lies on it (its free end is taken 1 mm in); squared, m². */
 const GRAZE_ON_SCREEN_M2 = new Dec('4e-6');
@@ -297,11 +355,15 @@ const planScreens = new WeakMap<RoomPlan, ScreenSeg[]>();
  * moves a door or a desk leaves every diffuse zone as it was, and the sweep is the plan's largest cost.
  */
 function diffuseShape(plan: RoomPlan, at: P, seenFrom: P, R: Dec): P[] {
-  const screens = screensFor(plan, seenFrom);
+  const circle = circleOutside(at, R.add(ROUNDING_PAD_M), CIRCLE_CORNERS);
+  // Keyed by the screens that reach the circle's box only: visibleRegion sweeps no other (the same
+  // test), so a curtain moved across the room leaves a small zone elsewhere as it was.
+  const around = boxOf(circle);
+  const screens = screensFor(plan, seenFrom).filter((sc) => !boxesApart(sc.box, around, 0));
   const key = `${at.x.toString()},${at.y.toString()}|${seenFrom.x.toString()},${seenFrom.y.toString()}|${R.toString()}|${screensKey(screens)}`;
   const hit = shapes.get(key);
   if (hit) return hit;
-  const shape = visibleRegion(seenFrom, circleOutside(at, R.add(ROUNDING_PAD_M), CIRCLE_CORNERS), screens, ROUNDING_PAD_M);
+  const shape = visibleRegion(seenFrom, circle, screens, ROUNDING_PAD_M);
   if (shapes.size >= SHAPES_KEPT) shapes.clear();
   shapes.set(key, shape);
   return shape;

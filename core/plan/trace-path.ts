@@ -64,7 +64,15 @@ export interface Leg {
    * the point of the stopping surface it meets. Null when the drawn line itself ends the leg.
    */
   readonly endSpot: P | null;
+  /**
+   * A beam dump or target with its aperture stated, which the beam of at least one of the laser's
+   * beams is as wide as or wider than: the path goes on past it in the same direction (the next leg).
+   */
+  readonly passedAperture: Dec | null;
 }
+
+/** Does the beam met `z` metres along the path pass (in part) an element of this aperture? */
+export type PassesAperture = (z: Dec, aperture: Dec) => boolean;
 
 export const toP = (p: PlanPoint): P => pt(p.x_m, p.y_m);
 
@@ -138,7 +146,8 @@ function passingLines(surfaces: readonly Surface[], pos: P, u: P, len: Dec, c: H
   for (const s of surfaces) {
     for (const e of [s.a, s.b]) {
       const off = dot(sub(e, pos), n);
-      if (off.abs().lt(T)) for (const k of [off.sub(PAST_END_M), off.add(PAST_END_M)]) if (k.abs().lte(T)) offsets.push(k);
+      // An end on the band's edge counts as inside it: the line just past it still passes (the safe side).
+      if (off.abs().lte(T)) for (const k of [off.sub(PAST_END_M), off.add(PAST_END_M)]) if (k.abs().lte(T.add(PAST_END_M))) offsets.push(k);
     }
   }
   const S = c.surface;
@@ -175,15 +184,16 @@ function cornerNear(surfaces: readonly Surface[], s: Surface, q: P): boolean {
  * The legs of one path; `farLength_m` is how far an open path is followed, `band` the half-width of
  * the beam band (without it, the 50 mm drawing tolerance).
  */
-export function tracePath(plan: RoomPlan, path: PlanBeamPath, farLength_m: Dec, band: BandWidth = () => TOL): Leg[] {
+export function tracePath(plan: RoomPlan, path: PlanBeamPath, farLength_m: Dec, band: BandWidth = () => TOL, passes: PassesAperture = () => false): Leg[] {
   const surfaces = surfacesOf(plan);
   const legs: Leg[] = [];
   let pos = toP(path.exit);
   let along = new Dec(0);
-  const steps: Array<{ kind: LegEnd; at: P | null; label: string }> = path.elements.map((e, i) => ({ kind: e.kind, at: toP(e.at), label: e.label ?? `${e.kind} ${i + 1}` }));
-  if (path.onward_deg !== undefined) steps.push({ kind: 'open', at: null, label: 'open' });
-  for (const step of steps) {
-    const u = step.at ? unit(pos, step.at) : unitFromDegrees(path.onward_deg ?? 0);
+  const steps: Array<{ kind: LegEnd; at: P | null; label: string; aperture: Dec | null; dir?: P }> = path.elements.map((e, i) => ({ kind: e.kind, at: toP(e.at), label: e.label ?? `${e.kind} ${i + 1}`, aperture: e.aperture_m === undefined ? null : new Dec(e.aperture_m) }));
+  if (path.onward_deg !== undefined) steps.push({ kind: 'open', at: null, label: 'open', aperture: null });
+  for (let i = 0; i < steps.length; i++) {
+    const step = steps[i] as (typeof steps)[number];
+    const u = step.dir ?? (step.at ? unit(pos, step.at) : unitFromDegrees(path.onward_deg ?? 0));
     const len = step.at ? distance(pos, step.at) : farLength_m;
     const all = hits(surfaces, pos, u, len);
     const openings = all.filter((h) => h.kind === 'door' || h.kind === 'window');
@@ -211,6 +221,9 @@ export function tracePath(plan: RoomPlan, path: PlanBeamPath, farLength_m: Dec, 
     }
     const legLen = stop ? stop.t : len;
     const to = stop ? add(pos, scale(u, stop.t)) : (step.at ?? add(pos, scale(u, len)));
+    // A dump or target narrower than the beam: the part that spills past goes on the same way.
+    const passed = !stop && step.aperture !== null && passes(along.add(legLen), step.aperture) ? step.aperture : null;
+    if (passed) steps.push({ kind: 'open', at: null, label: 'open', aperture: null, dir: u });
     legs.push({
       from: pos,
       to,
@@ -221,8 +234,9 @@ export function tracePath(plan: RoomPlan, path: PlanBeamPath, farLength_m: Dec, 
       openings: openings.filter((o) => o.t.lte(legLen)).map((o) => ({ kind: o.kind as 'door' | 'window', id: o.id, at: along.add(o.t) })),
       grazed,
       endSpot,
+      passedAperture: passed,
     });
-    if (stop || step.kind !== 'mirror') break;
+    if (stop || (step.kind !== 'mirror' && !passed)) break;
     along = along.add(legLen);
     pos = to;
   }

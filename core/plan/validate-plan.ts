@@ -3,6 +3,8 @@
  * (e.g. 'plan.doors[1].a.x_m'). Ranges are ours: a room plan spans at most a kilometre each way.
  */
 import { InputError, requireInRange } from '../errors.js';
+import { requireRule } from '../beam/validate-beam.js';
+import { INPUT_RULES } from '../model/input-rules.js';
 import { isSimpleOutline } from './geometry.js';
 import type { PlanPoint, RoomPlan } from './plan-model.js';
 import { toP } from './trace-path.js';
@@ -120,6 +122,10 @@ export function validatePlan(x: unknown, laserIds: ReadonlySet<string>): RoomPla
       point(`${g}.at`, el['at']);
       if (samePoint(prev, el['at'] as Obj)) throw new InputError('invalid_choice', `${g}.at`, el['at'], 'a point different from the previous point of the path');
       if (el['label'] !== undefined) text(`${g}.label`, el['label'], false);
+      if (el['aperture_m'] !== undefined) {
+        if (el['kind'] === 'mirror') throw new InputError('invalid_choice', `${g}.aperture_m`, el['aperture_m'], 'nothing (only a beam dump or a target has an aperture)');
+        requireRule(`${g}.aperture_m`, el['aperture_m'], INPUT_RULES.planAperture_m);
+      }
       prev = el['at'] as Obj;
     });
     const last = els[els.length - 1] as Obj | undefined;

@@ -192,6 +192,8 @@ export const F = {
   fiberMfd: s('modeFieldDiameter_m', { key: 'modeFieldDiameter_m', dimension: 'length', defaultUnit: 'µm', unitNote: 'µm', display: 'mm', optional: true, placeholder: 'e.g. 10 µm' }),
   aidedMagnification: s('magnification', { key: 'magnification', unitNote: '×', dimension: 'ratio', display: 'x', placeholder: 'e.g. 7' }),
   aidedObjective: s('objectiveDiameter_m', { key: 'objectiveDiameter_m', dimension: 'length', defaultUnit: 'mm', unitNote: 'mm', display: 'mm', placeholder: 'e.g. 50 mm' }),
+  // room plan
+  planAperture: s('planAperture_m', { key: 'aperture_m', label: 'Aperture', dimension: 'length', defaultUnit: 'mm', unitNote: 'mm', display: 'mm', phrase: 'wide', optional: true, placeholder: 'not stated' }),
   aidedTransmission: s('transmission', { key: 'transmission', unitNote: '% or fraction', dimension: 'ratio', display: '%', optional: true, placeholder: 'full (100 %)' }),
   // tolerances (relative, 0.1 = ±10 %)
   tolPower: s('tolerance', { key: 'tolerances.power', label: 'Power / energy tolerance', unitNote: '±%', dimension: 'ratio', display: '%', optional: true, placeholder: 'none' }),

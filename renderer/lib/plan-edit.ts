@@ -280,6 +280,25 @@ export function patchPath(plan: RoomPlan, pathIndex: number, patch: { height_m?:
   };
 }
 
+/** The aperture of a beam dump or target (m); null removes it (the element is then taken to take the whole beam). */
+export function setElementAperture(plan: RoomPlan, pathIndex: number, elementIndex: number, aperture_m: number | null): RoomPlan {
+  return {
+    ...plan,
+    paths: plan.paths.map((x, i) =>
+      i !== pathIndex
+        ? x
+        : {
+            ...x,
+            elements: x.elements.map((e, k) => {
+              if (k !== elementIndex || e.kind === 'mirror') return e;
+              const { aperture_m: _old, ...rest } = e;
+              return aperture_m === null ? rest : { ...rest, aperture_m };
+            }),
+          },
+    ),
+  };
+}
+
 export function addReflectionPoint(plan: RoomPlan, laserId: string): RoomPlan {
   const id = nextId(plan, 'R');
   const c = centre(plan);
@@ -322,6 +341,7 @@ const PART_WORDS: Readonly<Record<string, string>> = {
   y_m: 'y',
   onward_deg: 'direction of the open beam',
   height_m: 'beam height',
+  aperture_m: 'aperture',
   laserId: 'laser',
   label: 'name',
   id: 'name',
@@ -353,9 +373,17 @@ export function planErrorWords(message: string, field: string, plan: RoomPlan, l
     what = `${GROUP_WORDS[group]} ${item?.label ?? i + 1}`;
   }
   const twoPoints = group === 'doors' || group === 'windows' || group === 'walls' || group === 'barriers' ? group : null;
-  const parts = tail
+  // A path element by its name on the list ("beam dump 2"), never "elements, point 2".
+  let element: string | null = null;
+  const el = /^\.elements\[(\d+)\](.*)$/.exec(tail);
+  if (group === 'paths' && el) {
+    const k = Number(el[1]);
+    const kind = plan.paths[i]?.elements[k]?.kind;
+    element = kind ? `${ELEMENT_NAME[kind]} ${k + 1}` : `point ${k + 1}`;
+  }
+  const parts = (element !== null && el ? (el[2] ?? '') : tail)
     .split(/[.[\]]/)
     .filter((x) => x !== '')
     .map((x) => (/^\d+$/.test(x) ? `point ${Number(x) + 1}` : twoPoints && (x === 'a' || x === 'b') ? endWords(twoPoints, x) : (PART_WORDS[x] ?? x)));
-  return `${[what, ...parts].join(', ')}${rest}`;
+  return `${[what, ...(element !== null ? [element] : []), ...parts].join(', ')}${rest}`;
 }

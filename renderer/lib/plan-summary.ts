@@ -1,8 +1,8 @@
 /**
  * The room plan at a glance, for the results panel: a few lines counted from the core's findings
  * (never from the zones themselves): entrances, windows and work positions inside a hazard zone,
- * beams that leave the room, end on a curtain or barrier, pass one near its end or leave their
- * enclosure, paths drawn through
+ * beams that leave the room, end on a curtain or barrier, pass one near its end, are wider than
+ * their beam dump or leave their enclosure, paths drawn through
  * a wall before their end, and whether the
  * accepted laser controlled area holds every zone.
  */
@@ -63,6 +63,9 @@ export function planSummary(plan: RoomPlan, result: PlanResult, beamLabel: Reado
 
   const passing = unique(of('passes-surface-end').flatMap(beamsOf));
   if (passing.length > 0) out.push({ tone: 'hazard', text: `Beam paths meeting a wall, curtain or barrier near its end or a corner, taken to go on past it: ${list(passing.map(name))}.` });
+
+  const spilling = unique(of('wider-than-dump').flatMap(beamsOf));
+  if (spilling.length > 0) out.push({ tone: 'hazard', text: `Beams wider than their beam dump or target, taken to go on past it: ${list(spilling.map(name))}.` });
 
   const throughWall = unique(of('path-meets-wall').map((f) => laserName.get(f.subjectId) ?? f.subjectId));
   if (throughWall.length > 0) out.push({ tone: 'check', text: `Beam paths drawn through a wall before their end (check the drawing; the wall is taken to stop the beam): ${list(throughWall)}.` });

@@ -1,17 +1,20 @@
 /**
  * The room plan: evaluating the invented demo room B2.14 (4 lasers, 9 beams) with and without its
  * plan, beams already cached as in the live workspace, so the figure is the plan's own cost.
- * Target (ours): the plan adds no more than 100 ms to a live re-evaluation.
+ * Target (ours): the plan adds no more than 100 ms to a live re-evaluation. The processor-time
+ * entries say what the computation itself costs: on a loaded machine (many processes on 2 cores) the
+ * wall-time median mostly measures waiting for a processor (load 18: wall 100–220 ms, processor 22–45 ms).
  */
 import demo from '../../assets/demo/demo-scenario.json' with { type: 'json' };
 import { evaluateRoom, type RoomInput } from '../../core/index.js';
-import { registerBench, timeMedian, type BenchEntry } from './registry.js';
+import { cpuMedian, registerBench, timeMedian, type BenchEntry } from './registry.js';
 
 function runPlanBench(): BenchEntry[] {
   const withPlan = demo.rooms[0]?.input as unknown as RoomInput;
   const { plan: _plan, ...without } = withPlan;
   evaluateRoom(withPlan); // beams and the polygon corners of circles cached, as after the first keystroke
   const runs = 9;
+  const cpuRuns = 21;
   let moved = 0;
   const curtainMoved = (): RoomInput => {
     const plan = withPlan.plan;
@@ -25,6 +28,8 @@ function runPlanBench(): BenchEntry[] {
     { name: 'room B2.14 re-evaluation with plan (zones, findings)', median_ms: timeMedian(runs, () => evaluateRoom(withPlan)), runs, target_ms: 100 },
     // A curtain moved by 1 mm more each time: every diffuse zone's line-of-sight sweep runs again.
     { name: 'room B2.14 re-evaluation after a curtain is moved (every diffuse zone recomputed)', median_ms: timeMedian(runs, () => evaluateRoom(curtainMoved())), runs, target_ms: 100 },
+    { name: 'room B2.14 re-evaluation with plan, processor time', median_ms: cpuMedian(cpuRuns, () => evaluateRoom(withPlan)), runs: cpuRuns, target_ms: 100 },
+    { name: 'room B2.14 re-evaluation after a curtain is moved, processor time', median_ms: cpuMedian(cpuRuns, () => evaluateRoom(curtainMoved())), runs: cpuRuns, target_ms: 100 },
   ];
 }
 

@@ -58,6 +58,22 @@ export function timeMedian(runs: number, f: (i: number) => unknown, prepare?: (i
   return median(xs);
 }
 
+/**
+ * Median processor time (user + system) of this process per run, ms: what the work itself costs,
+ * without the time spent waiting for a processor on a loaded machine (wall time then grows with the
+ * load, processor time hardly). Synchronous work only.
+ */
+export function cpuMedian(runs: number, f: (i: number) => unknown): number {
+  const xs: number[] = [];
+  for (let i = 0; i < runs; i++) {
+    const t0 = process.cpuUsage();
+    f(i);
+    const d = process.cpuUsage(t0);
+    xs.push((d.user + d.system) / 1000);
+  }
+  return median(xs);
+}
+
 /** timeMedian for an asynchronous operation (the record store): each run is awaited before the next. */
 export async function timeMedianAsync(runs: number, f: (i: number) => Promise<unknown>, prepare?: (i: number) => void | Promise<void>): Promise<number> {
   const xs: number[] = [];

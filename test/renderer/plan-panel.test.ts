@@ -235,3 +235,28 @@ describe('handles never cover each other (each stays reachable with the mouse)',
     expect(plan().controlledArea?.outline[0]).toEqual({ x_m: -0.1, y_m: 0 });
   });
 });
+
+describe('the aperture of a beam dump, typed with its unit (keyboard)', () => {
+  // Derived: the dump is 3.5 m from the exit; the beam there is 2.3 mm + 3.5 m × 0.4 mrad = 3.7 mm at
+  // the 1/e² points, and above the limit across 2·r = D·√(2·ln(D_L/D)) ≈ 8.5 mm (D = 3.7/√2 mm,
+  // D_L ≈ 0.5 m: the NOHD is far beyond the room); a 5 mm dump is narrower, a 1 cm one wider.
+  it('a bare number is millimetres, "1 cm" is read with its unit, a bad text is refused beside the field and keeps the plan', async () => {
+    render(PlanHarness, { lasers });
+    await fireEvent.click(screen.getByRole('button', { name: 'Start a room plan' }));
+    const box = screen.getByLabelText(/^Green laser, beam dump 1, aperture/);
+    const findings = () => within(screen.getByRole('region', { name: 'Findings from the plan' })).queryAllByText(/is wider than beam dump 1/).map((n) => n.textContent);
+    expect(findings()).toEqual([]);
+    await fireEvent.change(box, { target: { value: '5' } });
+    expect(plan().paths[0]?.elements[0]).toMatchObject({ kind: 'dump', aperture_m: 0.005 });
+    expect(findings()).toHaveLength(1);
+    expect(findings()[0]).toMatch(/^The beam of green 532 nm is wider than beam dump 1 where it meets it, 3\.5 m along its path \(8\.\d\d mm against 5 mm, the width across which the beam is above the limit\): part of the beam passes it/);
+    await fireEvent.change(box, { target: { value: '1 cm' } });
+    expect(plan().paths[0]?.elements[0]).toMatchObject({ aperture_m: 0.01 });
+    expect(findings()).toEqual([]);
+    await fireEvent.change(box, { target: { value: 'wide' } });
+    expect(screen.getByRole('alert').textContent).toMatch(/^Aperture: /);
+    expect(plan().paths[0]?.elements[0]).toMatchObject({ aperture_m: 0.01 });
+    await fireEvent.change(box, { target: { value: '' } });
+    expect(plan().paths[0]?.elements[0]).not.toHaveProperty('aperture_m');
+  });
+});

@@ -30,6 +30,18 @@ function lines(plan: RoomPlan): string[] {
 }
 
 describe('room plan at a glance (derived geometry)', () => {
+  it('a 6 mm beam dump 3 m from the exit, where beam A is 6.65 mm wide: the beam goes on past it and leaves through door D1', () => {
+    // Derived in test/core/plan/plan-dump-aperture.test.ts: beam A is above the limit across 6.645 mm 3 m from its exit.
+    expect(lines({ ...base, paths: [{ laserId: 'L1', exit: p(1, 1.5), elements: [{ kind: 'dump', at: p(4, 1.5), aperture_m: 0.006 }] }] })).toEqual([
+      'hazard: Entrances inside a hazard zone: 1 of 2 doors (D1 corridor).',
+      'ok: No work position lies inside a hazard zone (1 position drawn).',
+      'hazard: Beam paths leaving the room above the limit: beam A (through door D1 corridor).',
+      'hazard: Beams wider than their beam dump or target, taken to go on past it: beam A.',
+      'check: No laser controlled area has been accepted yet.',
+      'check: 1 laser is not placed on the plan.',
+    ]);
+  });
+
   it('an open beam along y = 1.5 m leaves through door D1 7 m from the exit (< 14.9 m); the desk 1.5 m off the line is clear', () => {
     expect(lines({ ...base, paths: [{ laserId: 'L1', exit: p(1, 1.5), elements: [], onward_deg: 0 }] })).toEqual([
       'hazard: Entrances inside a hazard zone: 1 of 2 doors (D1 corridor).',

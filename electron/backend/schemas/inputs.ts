@@ -28,24 +28,16 @@ import {
   LASER_CLASS_LABELS,
   SCALE_NUMBERS,
   TEXT_RULES,
-  rangeWords,
   textProblem,
-  type NumberRule,
   type TextRule,
 } from '../../../core/model/input-rules.js';
 import { SINGLE_MODE_NEEDS_MFD, exposureVsPulseProblem, pulseTrainProblem } from '../../../core/beam/validate-beam.js';
 import { assertType, type SameShape } from './type-equality.js';
 import { RoomPlanSchema } from './plan.js';
+import { numberByRule } from './number-by-rule.js';
 
 /** A number checked against its rule in the one table (core/model/input-rules.ts). */
-const num = (rule: NumberRule) => {
-  const u = rule.unit ? ` ${rule.unit}` : '';
-  let n = z.number({ error: `must be a number${u ? ` (${rule.unit})` : ''}` });
-  const range = `must be ${rangeWords(rule)}${rule.why ? ` (${rule.why})` : ''}`;
-  n = rule.minInclusive ? n.min(rule.min, range) : n.gt(rule.min, range);
-  if (rule.max !== undefined) n = n.max(rule.max, range);
-  return n;
-};
+const num = numberByRule;
 const text = (rule: TextRule) =>
   z.string({ error: `${rule.label} must be text` }).superRefine((x, c) => {
     const problem = textProblem(rule, x);

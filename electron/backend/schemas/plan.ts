@@ -21,6 +21,8 @@ import type {
   PlanZone,
   RoomPlan,
 } from '../../../core/plan/plan-model.js';
+import { INPUT_RULES } from '../../../core/model/input-rules.js';
+import { numberByRule } from './number-by-rule.js';
 import { assertType, type SameShape } from './type-equality.js';
 
 const coordinate = z
@@ -45,7 +47,8 @@ export const PathElementSchema = z.strictObject({
   kind: z.enum(['mirror', 'dump', 'target'], { error: 'must be a mirror, a beam dump or a target' }),
   at: PlanPointSchema,
   label: z.string().optional(),
-});
+  aperture_m: numberByRule(INPUT_RULES.planAperture_m).optional(),
+}).refine((e) => e.aperture_m === undefined || e.kind !== 'mirror', { message: 'only a beam dump or a target has an aperture', path: ['aperture_m'] });
 export const PlanBeamPathSchema = z.strictObject({
   laserId: name,
   exit: PlanPointSchema,
@@ -102,6 +105,7 @@ export const PlanFindingSchema = z.strictObject({
     'leaves-room',
     'stopped-by-barrier',
     'passes-surface-end',
+    'wider-than-dump',
     'beam-at-eye-level',
     'outside-controlled-area',
     'no-controlled-area',

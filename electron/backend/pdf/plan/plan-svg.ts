@@ -5,7 +5,7 @@
  * the findings say where a zone runs beyond it.
  */
 import type { PlanPointResult, PlanResult, RoomPlan } from '../../../../core/plan/plan-model.js';
-import { labelSide, onwardStop, pathPoints, planMiddle } from '../../../../core/plan/plan-layout.js';
+import { labelSide, onwardStop, pathPoints, planMiddle, spillLine } from '../../../../core/plan/plan-layout.js';
 
 const PT_PER_MM = 72 / 25.4;
 const RATIOS = [10, 20, 25, 50, 75, 100, 200, 250, 500, 1000, 2000, 5000];
@@ -248,6 +248,8 @@ export function planSvg(plan: RoomPlan, result: PlanResult | undefined, o: PlanS
     for (let i = 0; i + 1 < chain.length; i++) seg(chain[i] as Pt, chain[i + 1] as Pt, `stroke="${PLAN_INK.path}" stroke-width="1"`);
     const arrow = onwardStop(plan, path, 4 * Math.max(x1 - x0, y1 - y0));
     if (arrow) seg(P(arrow.from), P(arrow.to), `stroke="${PLAN_INK.path}" stroke-width="1" stroke-dasharray="3 2"`);
+    const spill = spillLine(path, result?.runs);
+    if (spill) seg(P(spill.from), P(spill.to), `stroke="${PLAN_INK.path}" stroke-width="1" stroke-dasharray="3 2"`);
     const [ex, ey] = P(path.exit);
     out.push(`<rect x="${n(X(ex) - 3)}" y="${n(Y(ey) - 2.5)}" width="4" height="5" fill="#222222"/>`);
     for (const e of path.elements) {
