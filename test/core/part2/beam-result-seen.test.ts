@@ -184,6 +184,36 @@ describe('lens: the beam diameter on the lens in the 1/e convention', () => {
   });
 });
 
+// What the lens trace says about b0 (SAFETY.md "Beam definitions"; ours): a b0 the officer did not
+// give is the exit diameter, and the trace says so; a given b0 is not called the exit diameter.
+it('lens: the trace says "taken as the exit diameter" only when b0 was not given', () => {
+  const note = (atLens?: number): string | undefined =>
+    evaluateBeam({ wavelength_nm: 532, emission: { kind: 'cw', power_W: 1 }, beam, viewing: { lens: { focalLength_m: 0.1, ...(atLens !== undefined ? { beamDiameterAtLens_m: atLens } : {}) } } })
+      .distances.find((d) => d.kind === 'lens')
+      ?.trace.steps.find((s) => s.label === 'Beam on the lens')?.detail;
+  expect(note()).toBe('b0 = 1 mm (1/e), taken as the exit diameter; divergence after the focus b0/f = 10 mrad');
+  expect(note(0.002)).toBe('b0 = 2 mm (1/e); divergence after the focus b0/f = 20 mrad');
+});
+
+// Specular reflection through evaluateBeam (domain notes 1.5, derived: a flat surface returns the
+// direct beam with power rho_s S, so r = (sqrt(4 rho_s S/(pi E)) - a)/phi). 532 nm, 1 W, 1 mm, 1 mrad,
+// glass (rho_s = 0.04), E = 18 t^0.75/t at 0.25 s = 25.46 W/m² (EU Directive Table 2.2, read):
+// 43.73 m along the total path. The path to the surface, when given, is stated in the trace.
+describe('specular reflection: the distance along the total path, and the path to the surface', () => {
+  const spec = (path?: number): ReturnType<typeof evaluateBeam>['distances'][number] | undefined =>
+    evaluateBeam({ wavelength_nm: 532, emission: { kind: 'cw', power_W: 1 }, beam, viewing: { specular: { reflectance: 0.04, ...(path !== undefined ? { pathToSurface_m: path } : {}) } } }).distances.find((d) => d.kind === 'specular');
+  const E = (18 * 0.25 ** 0.75) / 0.25;
+  it.each([
+    ['path not given', undefined, []],
+    ['2 m to the surface', 2, ['2 m from the exit; the reflected beam is hazardous only where the total path is shorter than the distance found']],
+  ] as const)('%s: 43.73 m', (_n, path, notes) => {
+    const d = spec(path);
+    expect(Math.abs(Number(d?.distance_m) / ((Math.sqrt((4 * 0.04) / (Math.PI * E)) - 0.001) / 0.001) - 1)).toBeLessThan(1e-9);
+    expect(d?.distance_m_reported).toBe('43.8');
+    expect(d?.trace.steps.filter((s) => s.label === 'Path to the surface').map((s) => s.detail)).toEqual(notes);
+  });
+});
+
 // Fibre ends through evaluateBeam (the published cases of worked-examples-hazard check the helper):
 // single-mode r = (pi w0 / lambda) sqrt(2 S / (pi L)) (Gaussian far field, domain notes 1.6,
 // derived; the case "1.6 single-mode 1064 nm 1 W w0 5 um" gives 1.66 m with L = 50.61 W/m²);
@@ -290,24 +320,41 @@ describe('the eye limit: its duration, the source size, the warnings list', () =
   });
 });
 
+// The warning for a viewer at a stated distance from a diffuse spot (domain notes 1.4 and 1.2.3,
+// derived): 532 nm, 1 W on a 10 mm spot, viewer 1 mm from the surface, accidental viewing. The
+// exposure there is at most the spot exitance 4 rho S/(pi d²) = 12 732 W/m² (below rho S/(pi r²)),
+// 500.18 x the 0.25 s limit 25.46 W/m² (EU Table 2.2, read): shown as 501 (ratios round UP), the OD
+// log10(500.18) = 2.699 as 2.7 (up), the distance 1 mm as given.
+it('a viewer 1 mm from a 10 mm spot of 1 W at 532 nm: "501 times the limit (OD 2.7 ...)"', () => {
+  const r = evaluateBeam({ wavelength_nm: 532, emission: { kind: 'cw', power_W: 1 }, beam: { ...beam, diameter_m: 0.01 }, viewing: { diffuse: { reflectance: 1, governs: 'accidental', viewerDistance_m: 0.001 } } });
+  const ratio = 4 / (Math.PI * 0.01 ** 2) / ((18 * 0.25 ** 0.75) / 0.25);
+  expect(ratio).toBeGreaterThan(500.1);
+  expect(r.warnings).toEqual([`Diffuse reflection (accidental viewing, 250 ms): 1 mm from the surface the exposure is ${Math.ceil(ratio)} times the limit (OD ${(Math.ceil(Math.log10(ratio) * 10) / 10).toFixed(1)} needed for diffuse viewing there).`]);
+});
+
 // The two diffuse viewing cases (SAFETY.md "Diffuse reflections, two viewing cases"): each case's trace
 // says over which duration and why, which case governs and why; the deliberate case's trace carries
 // its own (600 s or given) limit, the accidental one does not.
+// The confidence mark of each case's duration: the 600 s default for deliberate viewing is a
+// customary value from memory; 0.25 s (aversion response) and a duration the officer gives are not.
 describe('diffuse viewing cases: what each trace says', () => {
   const cases = (diffuse: NonNullable<BeamInput['viewing']>['diffuse']): Array<{ viewing: string | undefined; said: string; limitTrace: string }> =>
     evaluateBeam({ wavelength_nm: 532, emission: { kind: 'cw', power_W: 1 }, beam, viewing: { diffuse } })
       .distances.filter((d) => d.kind === 'diffuse')
-      .map((d) => ({ viewing: d.viewing, said: d.trace.steps.find((s) => s.label === 'Viewing case')?.detail ?? '', limitTrace: d.trace.children.filter((c) => c.title === 'Limit criteria, eye').map((c) => c.steps[0]?.detail ?? '').join() }));
+      .map((d) => {
+        const step = d.trace.steps.find((s) => s.label === 'Viewing case');
+        return { viewing: d.viewing, said: step?.detail ?? '', confidence: step?.confidence, limitTrace: d.trace.children.filter((c) => c.title === 'Limit criteria, eye').map((c) => c.steps[0]?.detail ?? '').join() };
+      });
   it('no choice, 600 s by default', () => {
     expect(cases({ reflectance: 1 })).toEqual([
-      { viewing: 'accidental', said: 'accidental viewing over 0.25 s (visible beam, unintended viewing: aversion response within 0.25 s (common practice)); shown for comparison; the deliberate case governs (the larger distance (no choice given))', limitTrace: '' },
-      { viewing: 'deliberate', said: 'deliberate viewing of the spot over 600 s (deliberate viewing of the diffuse spot: 600 s (customary value, from memory)); this case governs: the larger distance (no choice given)', limitTrace: '600 s: deliberate viewing of the diffuse spot: 600 s (customary value, from memory)' },
+      { viewing: 'accidental', said: 'accidental viewing over 0.25 s (visible beam, unintended viewing: aversion response within 0.25 s (common practice)); shown for comparison; the deliberate case governs (the larger distance (no choice given))', confidence: 'common practice', limitTrace: '' },
+      { viewing: 'deliberate', said: 'deliberate viewing of the spot over 600 s (deliberate viewing of the diffuse spot: 600 s (customary value, from memory)); this case governs: the larger distance (no choice given)', confidence: 'from memory', limitTrace: '600 s: deliberate viewing of the diffuse spot: 600 s (customary value, from memory)' },
     ]);
   });
   it('the officer chooses the accidental case and gives 100 s for deliberate viewing', () => {
     expect(cases({ reflectance: 1, deliberateDuration_s: 100, governs: 'accidental' })).toEqual([
-      { viewing: 'accidental', said: 'accidental viewing over 0.25 s (visible beam, unintended viewing: aversion response within 0.25 s (common practice)); this case governs: chosen by the officer', limitTrace: '' },
-      { viewing: 'deliberate', said: 'deliberate viewing of the spot over 100 s (deliberate viewing of the diffuse spot, given by the caller); shown for comparison; the accidental case governs (chosen by the officer)', limitTrace: '100 s: deliberate viewing of the diffuse spot, given by the caller' },
+      { viewing: 'accidental', said: 'accidental viewing over 0.25 s (visible beam, unintended viewing: aversion response within 0.25 s (common practice)); this case governs: chosen by the officer', confidence: 'common practice', limitTrace: '' },
+      { viewing: 'deliberate', said: 'deliberate viewing of the spot over 100 s (deliberate viewing of the diffuse spot, given by the caller); shown for comparison; the accidental case governs (chosen by the officer)', confidence: 'common practice', limitTrace: '100 s: deliberate viewing of the diffuse spot, given by the caller' },
     ]);
   });
 });
