@@ -386,3 +386,87 @@ it('two 1 mW beams of 20 mm with a lens on the path: sum of fractions 2.04', () 
   const g0 = bare.additive.find((a) => a.tissue === 'eye' && a.beamIds.length === 2);
   expect(Number(g0?.sumOfFractions)).toBeCloseTo((2 * (4 * 1e-3)) / (Math.PI * 0.02 ** 2) / E, 6);
 });
+
+// The required OD with a lens on the path (domain notes 2.1 item 2; ANSI Z136.1 section 4.6.2, from
+// memory): a lens can bring the whole beam inside the 7 mm aperture, so the exposure is S/A_f, not
+// the part of a 20 mm beam that falls in 7 mm. 532 nm, 1 W, 0.25 s: E = 18 t^0.75/t = 25.46 W/m² (EU
+// Directive Table 2.2, read). With a lens OD = log10(4 S/(pi (7 mm)²)/E) = 3.009, shown 3.1 (rounded
+// up); without, log10(4 S/(pi (20 mm)²)/E) = 2.097, shown 2.1.
+it('532 nm, 1 W, a 20 mm beam: OD 3.1 with a lens on the path, 2.1 without', () => {
+  const od = (lens: boolean): ReturnType<typeof evaluateBeam>['od'] =>
+    evaluateBeam({ wavelength_nm: 532, emission: { kind: 'cw', power_W: 1 }, beam: { ...beam, diameter_m: 0.02 }, ...(lens ? { viewing: { lens: { focalLength_m: 0.1 } } } : {}) }).od;
+  const E = (18 * 0.25 ** 0.75) / 0.25;
+  expect(Number(od(true).od)).toBeCloseTo(Math.log10(4 / (Math.PI * 0.007 ** 2) / E), 9);
+  expect(od(true).odRequired_reported).toBe('3.1');
+  expect(Number(od(false).od)).toBeCloseTo(Math.log10(4 / (Math.PI * 0.02 ** 2) / E), 9);
+  expect(od(false).odRequired_reported).toBe('2.1');
+});
+
+// EN 208 below its own first step keeps its own reason: 532 nm, one 100 us pulse of 0.1 uJ, below the
+// RB1 energy 2e-7 J (EN 208:2009 Table B.1, read via the supplier explainer) and below the limit (OD
+// < 0): RB0 "at or below the Class 2 level", not the "exposure below the limit" wording (ours), which
+// is for an RB step the table would give although no filter is needed.
+it('532 nm, 0.1 uJ in 100 us: RB0 with the EN 208 reason only', () => {
+  const r = evaluateBeam({ ruleSet: 'eu2006', wavelength_nm: 532, emission: { kind: 'pulsed', pulseEnergy_J: 1e-7, pulseDuration_s: 1e-4 }, beam });
+  expect(Number(r.od.od)).toBeLessThan(0);
+  expect(r.scaleNumbers.find((s) => s.mode === 'RB')).toMatchObject({ scale: 0, note: 'pulse energy through a 7 mm aperture times N^(1/4) (N = 1 pulses in 10 s) = 1e-7 J: at or below the Class 2 level, no alignment filter needed' });
+});
+
+// The derivation's scale-number lines are written as the marking on the eyewear: EN 207 scale numbers
+// with LB, EN 208 ones with RB (EN 207:2017, EN 208:2009 marking; common practice). 532 nm, 1 mJ in
+// 10 ns: mode R of EN 207 and an EN 208 requirement both apply.
+it('532 nm, 1 mJ, 10 ns: the trace shows the EN 207 number as LBn and the EN 208 one as RBn', () => {
+  const r = evaluateBeam({ ruleSet: 'eu2006', wavelength_nm: 532, emission: { kind: 'pulsed', pulseEnergy_J: 1e-3, pulseDuration_s: 1e-8 }, beam });
+  const t = r.trace.children.find((c) => c.title === 'EN 207 / EN 208 scale numbers');
+  const shown = (mode: string): string | undefined => t?.steps.find((s) => s.label === mode)?.value;
+  const scale = (mode: string): number | undefined => r.scaleNumbers.find((s) => s.mode === mode && s.applies)?.scale;
+  expect(scale('R')).toBeGreaterThan(0);
+  expect(scale('RB')).toBeGreaterThan(0);
+  expect([shown('R'), shown('RB'), shown('D')]).toEqual([`LB${scale('R')}`, `RB${scale('RB')}`, 'n/a']);
+});
+
+describe('the class estimate: the source size, the settings, the band edges (estimates only; the manufacturer\'s class governs)', () => {
+  const cw = (nm: number, P: number, extra: Partial<BeamInput> = {}): ReturnType<typeof evaluateBeam>['classEstimate'] => evaluateBeam({ wavelength_nm: nm, emission: { kind: 'cw', power_W: P }, beam, ...extra }).classEstimate;
+  // 532 nm, 0.4 mW. Point source: the Class 1 AEL is the 10 W/m² retinal limit (t >= T2) over the
+  // 7 mm aperture, 0.385 mW: above it, within the 1 mW Class 2 AEL. Seen as a 100 mrad source:
+  // C_E = 100/1.5 and T2 = 10 x 10^((100 - 1.5)/98.5) s = 100 s (EU Directive Table 2.5, read), the
+  // limit 18 C_E T2^-0.25 W/m² (EU Table 2.3), so the AEL is 18 x 66.67 x 100^-0.25 x pi (3.5 mm)² =
+  // 14.6 mW: Class 1.
+  it('532 nm, 0.4 mW: Class 2 as a point source, Class 1 (AEL 14.6 mW) as a 100 mrad source', () => {
+    expect(cw(532, 4e-4).estimate).toBe('2');
+    const ext = cw(532, 4e-4, { sourceAngle_rad: 0.1 });
+    expect(ext.estimate).toBe('1');
+    const ael = 18 * (100 / 1.5) * 100 ** -0.25 * Math.PI * 0.0035 ** 2;
+    expect(Number(/Class 1 AEL \(([0-9.e-]+) W\)/.exec(ext.decidedBy)?.[1]) / ael - 1).toBeCloseTo(0, 5);
+  });
+  // 355 nm, 1 uW over 30 000 s: the limit 1e4 J/m² (EU Directive Table 2.2, 315-400 nm, read) is
+  // 0.333 W/m². Conservative mode (default) takes the UV aperture's stricter alternative, 1 mm: AEL
+  // 0.262 uW, and 1 uW is within 5 x it: Class 3R. Without conservative mode the ICNIRP 2013 aperture
+  // for t >= 10 s is 3.5 mm (IEC 60825-1:2014 Annex A, from memory): AEL 3.21 uW, Class 1.
+  it.each([
+    ['conservative mode (default)', '3R', undefined],
+    ['conservative mode off', '1', { conservative: false }],
+  ] as const)('355 nm, 1 uW, %s: Class %s', (_n, cls, settings) => {
+    expect(cw(355, 1e-6, settings ? { settings } : {}).estimate).toBe(cls);
+  });
+  // Exactly on a band edge both sides are estimated and the higher class is reported, with a remark
+  // (SAFETY.md "Exact boundaries"); where both sides give the same class there is nothing to remark.
+  // 400 nm, 1 uW: the ultraviolet side gives 3R (as at 355 nm), the visible side Class 1 (0.385 mW).
+  // 400 nm, 0.1 W: 3B on both sides (above 5 x Class 1 and below 0.5 W).
+  it.each([
+    [1e-6, '3R', 'above the Class 1 AEL, within 5 x it (Class 3R AEL) (band edge at 400 nm, evaluated on both sides)'],
+    [0.1, '3B', 'above the Class 3R AEL, within the Class 3B AEL (0.5 W)'],
+  ] as const)('400 nm, %s W: Class %s, "%s"', (P, cls, decided) => {
+    const c = cw(400, P);
+    expect([c.estimate, c.decidedBy]).toEqual([cls, decided]);
+  });
+  // Off the band edges the class is taken at the wavelength itself, not beside it. 1000 nm: the
+  // Class 1 AEL is 10 C_A W/m² over 7 mm with C_A = 10^(0.002 (lambda - 700)) (EU Directive Table 2.3
+  // and Table 2.5, read; 700 nm gives 0.385 mW as above), rising with the wavelength. A power 2e-8
+  // below it is Class 1; 1e-8 below 1000 nm the AEL is 4.6e-8 lower and that power would exceed it.
+  it('1000 nm at 2e-8 below the Class 1 AEL: Class 1', () => {
+    const ael = 10 * 10 ** (0.002 * 300) * Math.PI * 0.0035 ** 2;
+    expect(cw(1000, ael * (1 - 2e-8)).estimate).toBe('1');
+    expect(cw(1000, ael * (1 + 2e-8)).estimate).not.toBe('1');
+  });
+});
