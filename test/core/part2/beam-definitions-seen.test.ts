@@ -52,6 +52,15 @@ describe('the "Definition" line of the derivation', () => {
   });
 });
 
+// Its first half says which conversion was made (domain notes 1.1): 1/e and d63 are both used as
+// they are, but for different reasons, and the line says which.
+it.each([
+  ['1/e', 'diameter and divergence given at the 1/e irradiance points: used as they are (4*Phi/(pi*d^2) is the peak irradiance of a Gaussian beam): a = 2 mm, phi = 2 mrad (1/e)'],
+  ['d63', 'd63 (63 % of the power inside) equals the 1/e irradiance diameter of a Gaussian beam: used as it is: a = 2 mm, phi = 2 mrad (1/e)'],
+] as const)('the Definition line of a Gaussian beam given at %s', (definition, line) => {
+  expect(stepOf(evaluateBeam(green({ diameter_m: 0.002, divergence_rad: 0.002, definition })), 'Definition')).toBe(line);
+});
+
 // An elliptical beam (domain notes 1.2.4): the exposure is 4 S/(pi d_x d_y), each axis growing on its
 // own, so the NOHD solves (a_x + r phi_x)(a_y + r phi_y) = 4 S/(pi E). Given the second divergence
 // only, the second diameter is the first one.
