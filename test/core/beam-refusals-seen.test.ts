@@ -117,6 +117,11 @@ it('a beam with every optional field at a valid value is evaluated', () => {
   expect([r.beamId, r.label, r.ruleSet]).toEqual(['b1', 'Probe beam', 'eu2006']);
 });
 
+// Pulses that just touch (f t_p = 1, a 100 % duty cycle) are still a train; only f t_p > 1 overlaps.
+it('1 ms pulses at exactly 1 kHz: evaluated', () => {
+  expect(evaluateBeam({ ...pulsed, emission: { kind: 'pulsed', pulseEnergy_J: 1e-6, pulseDuration_s: 1e-3, repetitionRate_Hz: 1000 } }).emissionSummary).toBe('pulsed 1 µJ per pulse, 1 ms, 1 kHz');
+});
+
 // An exposure of exactly one pulse is an exposure (the refusal is for one SHORTER than the pulse).
 it('1 ms pulses over an exposure of exactly 1 ms: evaluated', () => {
   expect(evaluateBeam({ ...pulsed, exposureDuration_s: 1e-3 }).mpe.exposureDuration_s).toBe(1e-3);
@@ -132,8 +137,13 @@ describe('what the refusal says', () => {
     expect(e.validRange).toBe('at most 1 / pulse duration = 1000 Hz (pulses would overlap)');
     expect(refusal(() => evaluateBeam({ ...pulsed, exposureDuration_s: 5e-4 })).validRange).toBe('at least the pulse duration (0.001 s)');
   });
+  it('a choice names the allowed values', () => {
+    expect(refusal(() => evaluateBeam({ ...cw, emission: { kind: 'qcw', power_W: 1 } } as unknown as BeamInput)).validRange).toBe("'cw' | 'pulsed'");
+    expect(refusal(() => evaluateBeam(withBeam({ definition: 'FWHM' }) as BeamInput)).validRange).toBe("'1/e' | '1/e2' | 'd63'");
+  });
   it('an id is required text, a label is not; a long text is shown cut to 60 characters', () => {
-    expect(refusal(() => evaluateBeam({ ...cw, id: '' })).validRange).toBe('text of at most 200 characters, not empty');
+    const empty = refusal(() => evaluateBeam({ ...cw, id: '' }));
+    expect([empty.validRange, empty.value]).toEqual(['text of at most 200 characters, not empty', '']);
     const long = refusal(() => evaluateBeam({ ...cw, label: 'x'.repeat(201) }));
     expect(long.validRange).toBe('text of at most 200 characters');
     expect(long.value).toBe(`${'x'.repeat(60)}…`);
