@@ -48,7 +48,7 @@ const CASES: ReadonlyArray<readonly [string, string, string, unknown]> = [
   ['second divergence NaN', 'beam.divergenceY_rad', 'not_finite', withBeam({ divergenceY_rad: Number.NaN })],
   ['exposure 40 000 s', 'exposureDuration_s', 'out_of_range', { ...cw, exposureDuration_s: 4e4 }],
   ['exposure 0.5 ms for 1 ms pulses', 'exposureDuration_s', 'out_of_range', { ...pulsed, exposureDuration_s: 5e-4 }],
-  ['source angle -1 mrad', 'sourceAngle_rad', 'out_of_range', { ...cw, sourceAngle_rad: -0.001 }],
+  ['source angle 4 rad (beyond pi)', 'sourceAngle_rad', 'out_of_range', { ...cw, sourceAngle_rad: 4 }],
   ['skin area 11 m²', 'skinArea_m2', 'out_of_range', { ...cw, skinArea_m2: 11 }],
   ['viewing not an object', 'viewing', 'missing', { ...cw, viewing: 5 }],
   ['tolerances not an object', 'tolerances', 'missing', { ...cw, tolerances: 'ten per cent' }],
