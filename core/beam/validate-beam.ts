@@ -105,7 +105,9 @@ export function validateBeamInput(input: unknown, prefix = '', roomRuleSet?: Rul
 
   if (b['exposureDuration_s'] !== undefined) {
     const T = requireRule(p('exposureDuration_s'), b['exposureDuration_s'], R.exposureDuration_s);
-    if (tp !== undefined && T < tp) throw new InputError('out_of_range', p('exposureDuration_s'), T, `at least the pulse duration (${tp} s)`);
+    // the same rule as the form's schema (electron/backend/schemas/inputs.ts): one function states it
+    const problem = exposureVsPulseProblem({ emission: { kind, ...(tp !== undefined ? { pulseDuration_s: tp } : {}) }, exposureDuration_s: T });
+    if (problem) throw new InputError('out_of_range', p('exposureDuration_s'), T, problem.replace(/^must be /, ''));
   }
   if (b['sourceAngle_rad'] !== undefined) requireRule(p('sourceAngle_rad'), b['sourceAngle_rad'], R.sourceAngle_rad);
   if (b['skinArea_m2'] !== undefined) requireRule(p('skinArea_m2'), b['skinArea_m2'], R.skinArea_m2);

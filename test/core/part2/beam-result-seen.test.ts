@@ -184,6 +184,36 @@ describe('lens: the beam diameter on the lens in the 1/e convention', () => {
   });
 });
 
+// What the lens trace says about b0 (SAFETY.md "Beam definitions"; ours): a b0 the officer did not
+// give is the exit diameter, and the trace says so; a given b0 is not called the exit diameter.
+it('lens: the trace says "taken as the exit diameter" only when b0 was not given', () => {
+  const note = (atLens?: number): string | undefined =>
+    evaluateBeam({ wavelength_nm: 532, emission: { kind: 'cw', power_W: 1 }, beam, viewing: { lens: { focalLength_m: 0.1, ...(atLens !== undefined ? { beamDiameterAtLens_m: atLens } : {}) } } })
+      .distances.find((d) => d.kind === 'lens')
+      ?.trace.steps.find((s) => s.label === 'Beam on the lens')?.detail;
+  expect(note()).toBe('b0 = 1 mm (1/e), taken as the exit diameter; divergence after the focus b0/f = 10 mrad');
+  expect(note(0.002)).toBe('b0 = 2 mm (1/e); divergence after the focus b0/f = 20 mrad');
+});
+
+// Specular reflection through evaluateBeam (domain notes 1.5, derived: a flat surface returns the
+// direct beam with power rho_s S, so r = (sqrt(4 rho_s S/(pi E)) - a)/phi). 532 nm, 1 W, 1 mm, 1 mrad,
+// glass (rho_s = 0.04), E = 18 t^0.75/t at 0.25 s = 25.46 W/m² (EU Directive Table 2.2, read):
+// 43.73 m along the total path. The path to the surface, when given, is stated in the trace.
+describe('specular reflection: the distance along the total path, and the path to the surface', () => {
+  const spec = (path?: number): ReturnType<typeof evaluateBeam>['distances'][number] | undefined =>
+    evaluateBeam({ wavelength_nm: 532, emission: { kind: 'cw', power_W: 1 }, beam, viewing: { specular: { reflectance: 0.04, ...(path !== undefined ? { pathToSurface_m: path } : {}) } } }).distances.find((d) => d.kind === 'specular');
+  const E = (18 * 0.25 ** 0.75) / 0.25;
+  it.each([
+    ['path not given', undefined, []],
+    ['2 m to the surface', 2, ['2 m from the exit; the reflected beam is hazardous only where the total path is shorter than the distance found']],
+  ] as const)('%s: 43.73 m', (_n, path, notes) => {
+    const d = spec(path);
+    expect(Math.abs(Number(d?.distance_m) / ((Math.sqrt((4 * 0.04) / (Math.PI * E)) - 0.001) / 0.001) - 1)).toBeLessThan(1e-9);
+    expect(d?.distance_m_reported).toBe('43.8');
+    expect(d?.trace.steps.filter((s) => s.label === 'Path to the surface').map((s) => s.detail)).toEqual(notes);
+  });
+});
+
 // Fibre ends through evaluateBeam (the published cases of worked-examples-hazard check the helper):
 // single-mode r = (pi w0 / lambda) sqrt(2 S / (pi L)) (Gaussian far field, domain notes 1.6,
 // derived; the case "1.6 single-mode 1064 nm 1 W w0 5 um" gives 1.66 m with L = 50.61 W/m²);
@@ -290,24 +320,41 @@ describe('the eye limit: its duration, the source size, the warnings list', () =
   });
 });
 
+// The warning for a viewer at a stated distance from a diffuse spot (domain notes 1.4 and 1.2.3,
+// derived): 532 nm, 1 W on a 10 mm spot, viewer 1 mm from the surface, accidental viewing. The
+// exposure there is at most the spot exitance 4 rho S/(pi d²) = 12 732 W/m² (below rho S/(pi r²)),
+// 500.18 x the 0.25 s limit 25.46 W/m² (EU Table 2.2, read): shown as 501 (ratios round UP), the OD
+// log10(500.18) = 2.699 as 2.7 (up), the distance 1 mm as given.
+it('a viewer 1 mm from a 10 mm spot of 1 W at 532 nm: "501 times the limit (OD 2.7 ...)"', () => {
+  const r = evaluateBeam({ wavelength_nm: 532, emission: { kind: 'cw', power_W: 1 }, beam: { ...beam, diameter_m: 0.01 }, viewing: { diffuse: { reflectance: 1, governs: 'accidental', viewerDistance_m: 0.001 } } });
+  const ratio = 4 / (Math.PI * 0.01 ** 2) / ((18 * 0.25 ** 0.75) / 0.25);
+  expect(ratio).toBeGreaterThan(500.1);
+  expect(r.warnings).toEqual([`Diffuse reflection (accidental viewing, 250 ms): 1 mm from the surface the exposure is ${Math.ceil(ratio)} times the limit (OD ${(Math.ceil(Math.log10(ratio) * 10) / 10).toFixed(1)} needed for diffuse viewing there).`]);
+});
+
 // The two diffuse viewing cases (SAFETY.md "Diffuse reflections, two viewing cases"): each case's trace
 // says over which duration and why, which case governs and why; the deliberate case's trace carries
 // its own (600 s or given) limit, the accidental one does not.
+// The confidence mark of each case's duration: the 600 s default for deliberate viewing is a
+// customary value from memory; 0.25 s (aversion response) and a duration the officer gives are not.
 describe('diffuse viewing cases: what each trace says', () => {
   const cases = (diffuse: NonNullable<BeamInput['viewing']>['diffuse']): Array<{ viewing: string | undefined; said: string; limitTrace: string }> =>
     evaluateBeam({ wavelength_nm: 532, emission: { kind: 'cw', power_W: 1 }, beam, viewing: { diffuse } })
       .distances.filter((d) => d.kind === 'diffuse')
-      .map((d) => ({ viewing: d.viewing, said: d.trace.steps.find((s) => s.label === 'Viewing case')?.detail ?? '', limitTrace: d.trace.children.filter((c) => c.title === 'Limit criteria, eye').map((c) => c.steps[0]?.detail ?? '').join() }));
+      .map((d) => {
+        const step = d.trace.steps.find((s) => s.label === 'Viewing case');
+        return { viewing: d.viewing, said: step?.detail ?? '', confidence: step?.confidence, limitTrace: d.trace.children.filter((c) => c.title === 'Limit criteria, eye').map((c) => c.steps[0]?.detail ?? '').join() };
+      });
   it('no choice, 600 s by default', () => {
     expect(cases({ reflectance: 1 })).toEqual([
-      { viewing: 'accidental', said: 'accidental viewing over 0.25 s (visible beam, unintended viewing: aversion response within 0.25 s (common practice)); shown for comparison; the deliberate case governs (the larger distance (no choice given))', limitTrace: '' },
-      { viewing: 'deliberate', said: 'deliberate viewing of the spot over 600 s (deliberate viewing of the diffuse spot: 600 s (customary value, from memory)); this case governs: the larger distance (no choice given)', limitTrace: '600 s: deliberate viewing of the diffuse spot: 600 s (customary value, from memory)' },
+      { viewing: 'accidental', said: 'accidental viewing over 0.25 s (visible beam, unintended viewing: aversion response within 0.25 s (common practice)); shown for comparison; the deliberate case governs (the larger distance (no choice given))', confidence: 'common practice', limitTrace: '' },
+      { viewing: 'deliberate', said: 'deliberate viewing of the spot over 600 s (deliberate viewing of the diffuse spot: 600 s (customary value, from memory)); this case governs: the larger distance (no choice given)', confidence: 'from memory', limitTrace: '600 s: deliberate viewing of the diffuse spot: 600 s (customary value, from memory)' },
     ]);
   });
   it('the officer chooses the accidental case and gives 100 s for deliberate viewing', () => {
     expect(cases({ reflectance: 1, deliberateDuration_s: 100, governs: 'accidental' })).toEqual([
-      { viewing: 'accidental', said: 'accidental viewing over 0.25 s (visible beam, unintended viewing: aversion response within 0.25 s (common practice)); this case governs: chosen by the officer', limitTrace: '' },
-      { viewing: 'deliberate', said: 'deliberate viewing of the spot over 100 s (deliberate viewing of the diffuse spot, given by the caller); shown for comparison; the accidental case governs (chosen by the officer)', limitTrace: '100 s: deliberate viewing of the diffuse spot, given by the caller' },
+      { viewing: 'accidental', said: 'accidental viewing over 0.25 s (visible beam, unintended viewing: aversion response within 0.25 s (common practice)); this case governs: chosen by the officer', confidence: 'common practice', limitTrace: '' },
+      { viewing: 'deliberate', said: 'deliberate viewing of the spot over 100 s (deliberate viewing of the diffuse spot, given by the caller); shown for comparison; the accidental case governs (chosen by the officer)', confidence: 'common practice', limitTrace: '100 s: deliberate viewing of the diffuse spot, given by the caller' },
     ]);
   });
 });
@@ -338,4 +385,88 @@ it('two 1 mW beams of 20 mm with a lens on the path: sum of fractions 2.04', () 
   const bare = evaluateRoom({ lasers: [{ id: 'L', name: 'Laser L', beams: [{ ...b('x'), viewing: {} }, { ...b('y'), viewing: {} }] }] });
   const g0 = bare.additive.find((a) => a.tissue === 'eye' && a.beamIds.length === 2);
   expect(Number(g0?.sumOfFractions)).toBeCloseTo((2 * (4 * 1e-3)) / (Math.PI * 0.02 ** 2) / E, 6);
+});
+
+// The required OD with a lens on the path (domain notes 2.1 item 2; ANSI Z136.1 section 4.6.2, from
+// memory): a lens can bring the whole beam inside the 7 mm aperture, so the exposure is S/A_f, not
+// the part of a 20 mm beam that falls in 7 mm. 532 nm, 1 W, 0.25 s: E = 18 t^0.75/t = 25.46 W/m² (EU
+// Directive Table 2.2, read). With a lens OD = log10(4 S/(pi (7 mm)²)/E) = 3.009, shown 3.1 (rounded
+// up); without, log10(4 S/(pi (20 mm)²)/E) = 2.097, shown 2.1.
+it('532 nm, 1 W, a 20 mm beam: OD 3.1 with a lens on the path, 2.1 without', () => {
+  const od = (lens: boolean): ReturnType<typeof evaluateBeam>['od'] =>
+    evaluateBeam({ wavelength_nm: 532, emission: { kind: 'cw', power_W: 1 }, beam: { ...beam, diameter_m: 0.02 }, ...(lens ? { viewing: { lens: { focalLength_m: 0.1 } } } : {}) }).od;
+  const E = (18 * 0.25 ** 0.75) / 0.25;
+  expect(Number(od(true).od)).toBeCloseTo(Math.log10(4 / (Math.PI * 0.007 ** 2) / E), 9);
+  expect(od(true).odRequired_reported).toBe('3.1');
+  expect(Number(od(false).od)).toBeCloseTo(Math.log10(4 / (Math.PI * 0.02 ** 2) / E), 9);
+  expect(od(false).odRequired_reported).toBe('2.1');
+});
+
+// EN 208 below its own first step keeps its own reason: 532 nm, one 100 us pulse of 0.1 uJ, below the
+// RB1 energy 2e-7 J (EN 208:2009 Table B.1, read via the supplier explainer) and below the limit (OD
+// < 0): RB0 "at or below the Class 2 level", not the "exposure below the limit" wording (ours), which
+// is for an RB step the table would give although no filter is needed.
+it('532 nm, 0.1 uJ in 100 us: RB0 with the EN 208 reason only', () => {
+  const r = evaluateBeam({ ruleSet: 'eu2006', wavelength_nm: 532, emission: { kind: 'pulsed', pulseEnergy_J: 1e-7, pulseDuration_s: 1e-4 }, beam });
+  expect(Number(r.od.od)).toBeLessThan(0);
+  expect(r.scaleNumbers.find((s) => s.mode === 'RB')).toMatchObject({ scale: 0, note: 'pulse energy through a 7 mm aperture times N^(1/4) (N = 1 pulses in 10 s) = 1e-7 J: at or below the Class 2 level, no alignment filter needed' });
+});
+
+// The derivation's scale-number lines are written as the marking on the eyewear: EN 207 scale numbers
+// with LB, EN 208 ones with RB (EN 207:2017, EN 208:2009 marking; common practice). 532 nm, 1 mJ in
+// 10 ns: mode R of EN 207 and an EN 208 requirement both apply.
+it('532 nm, 1 mJ, 10 ns: the trace shows the EN 207 number as LBn and the EN 208 one as RBn', () => {
+  const r = evaluateBeam({ ruleSet: 'eu2006', wavelength_nm: 532, emission: { kind: 'pulsed', pulseEnergy_J: 1e-3, pulseDuration_s: 1e-8 }, beam });
+  const t = r.trace.children.find((c) => c.title === 'EN 207 / EN 208 scale numbers');
+  const shown = (mode: string): string | undefined => t?.steps.find((s) => s.label === mode)?.value;
+  const scale = (mode: string): number | undefined => r.scaleNumbers.find((s) => s.mode === mode && s.applies)?.scale;
+  expect(scale('R')).toBeGreaterThan(0);
+  expect(scale('RB')).toBeGreaterThan(0);
+  expect([shown('R'), shown('RB'), shown('D')]).toEqual([`LB${scale('R')}`, `RB${scale('RB')}`, 'n/a']);
+});
+
+describe('the class estimate: the source size, the settings, the band edges (estimates only; the manufacturer\'s class governs)', () => {
+  const cw = (nm: number, P: number, extra: Partial<BeamInput> = {}): ReturnType<typeof evaluateBeam>['classEstimate'] => evaluateBeam({ wavelength_nm: nm, emission: { kind: 'cw', power_W: P }, beam, ...extra }).classEstimate;
+  // 532 nm, 0.4 mW. Point source: the Class 1 AEL is the 10 W/m² retinal limit (t >= T2) over the
+  // 7 mm aperture, 0.385 mW: above it, within the 1 mW Class 2 AEL. Seen as a 100 mrad source:
+  // C_E = 100/1.5 and T2 = 10 x 10^((100 - 1.5)/98.5) s = 100 s (EU Directive Table 2.5, read), the
+  // limit 18 C_E T2^-0.25 W/m² (EU Table 2.3), so the AEL is 18 x 66.67 x 100^-0.25 x pi (3.5 mm)² =
+  // 14.6 mW: Class 1.
+  it('532 nm, 0.4 mW: Class 2 as a point source, Class 1 (AEL 14.6 mW) as a 100 mrad source', () => {
+    expect(cw(532, 4e-4).estimate).toBe('2');
+    const ext = cw(532, 4e-4, { sourceAngle_rad: 0.1 });
+    expect(ext.estimate).toBe('1');
+    const ael = 18 * (100 / 1.5) * 100 ** -0.25 * Math.PI * 0.0035 ** 2;
+    expect(Number(/Class 1 AEL \(([0-9.e-]+) W\)/.exec(ext.decidedBy)?.[1]) / ael - 1).toBeCloseTo(0, 5);
+  });
+  // 355 nm, 1 uW over 30 000 s: the limit 1e4 J/m² (EU Directive Table 2.2, 315-400 nm, read) is
+  // 0.333 W/m². Conservative mode (default) takes the UV aperture's stricter alternative, 1 mm: AEL
+  // 0.262 uW, and 1 uW is within 5 x it: Class 3R. Without conservative mode the ICNIRP 2013 aperture
+  // for t >= 10 s is 3.5 mm (IEC 60825-1:2014 Annex A, from memory): AEL 3.21 uW, Class 1.
+  it.each([
+    ['conservative mode (default)', '3R', undefined],
+    ['conservative mode off', '1', { conservative: false }],
+  ] as const)('355 nm, 1 uW, %s: Class %s', (_n, cls, settings) => {
+    expect(cw(355, 1e-6, settings ? { settings } : {}).estimate).toBe(cls);
+  });
+  // Exactly on a band edge both sides are estimated and the higher class is reported, with a remark
+  // (SAFETY.md "Exact boundaries"); where both sides give the same class there is nothing to remark.
+  // 400 nm, 1 uW: the ultraviolet side gives 3R (as at 355 nm), the visible side Class 1 (0.385 mW).
+  // 400 nm, 0.1 W: 3B on both sides (above 5 x Class 1 and below 0.5 W).
+  it.each([
+    [1e-6, '3R', 'above the Class 1 AEL, within 5 x it (Class 3R AEL) (band edge at 400 nm, evaluated on both sides)'],
+    [0.1, '3B', 'above the Class 3R AEL, within the Class 3B AEL (0.5 W)'],
+  ] as const)('400 nm, %s W: Class %s, "%s"', (P, cls, decided) => {
+    const c = cw(400, P);
+    expect([c.estimate, c.decidedBy]).toEqual([cls, decided]);
+  });
+  // Off the band edges the class is taken at the wavelength itself, not beside it. 1000 nm: the
+  // Class 1 AEL is 10 C_A W/m² over 7 mm with C_A = 10^(0.002 (lambda - 700)) (EU Directive Table 2.3
+  // and Table 2.5, read; 700 nm gives 0.385 mW as above), rising with the wavelength. A power 2e-8
+  // below it is Class 1; 1e-8 below 1000 nm the AEL is 4.6e-8 lower and that power would exceed it.
+  it('1000 nm at 2e-8 below the Class 1 AEL: Class 1', () => {
+    const ael = 10 * 10 ** (0.002 * 300) * Math.PI * 0.0035 ** 2;
+    expect(cw(1000, ael * (1 - 2e-8)).estimate).toBe('1');
+    expect(cw(1000, ael * (1 + 2e-8)).estimate).not.toBe('1');
+  });
 });
