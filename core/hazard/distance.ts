@@ -29,7 +29,7 @@ export interface DistanceSpec {
   readonly confidence: string;
   readonly setup: (c: Criterion) => RangeSetup;
   /** Extra trace lines (inputs of this geometry). */
-  readonly notes?: ReadonlyArray<{ label: string; detail: string; source?: string; confidence?: string }>;
+  readonly notes?: ReadonlyArray<{ label: string; detail: string }>;
 }
 
 export interface DistanceOutcome {
@@ -42,7 +42,7 @@ export interface DistanceOutcome {
 export function distanceOver(tl: LimitCriteria, spec: DistanceSpec): DistanceOutcome {
   const trace: Trace = newTrace(`${spec.label}`);
   addStep(trace, { kind: 'formula', label: 'Method', detail: spec.formula, source: spec.source, confidence: spec.confidence });
-  for (const n of spec.notes ?? []) addStep(trace, { kind: 'input', label: n.label, detail: n.detail, ...(n.source ? { source: n.source } : {}), ...(n.confidence ? { confidence: n.confidence } : {}) });
+  for (const n of spec.notes ?? []) addStep(trace, { kind: 'input', label: n.label, detail: n.detail });
   const unit = tl.quantity === 'E' ? 'W/m²' : 'J/m²';
   const sUnit = tl.quantity === 'E' ? 'W' : 'J';
   const setups = tl.criteria.map((c) => ({ c, setup: spec.setup(c) }));
@@ -50,7 +50,10 @@ export function distanceOver(tl: LimitCriteria, spec: DistanceSpec): DistanceOut
   let best: { r: Dec; c: Criterion; range: RangeResult; setup: RangeSetup } | null = null;
   if (setups.every((x) => round(x.setup))) {
     // Round beam without attenuation: r = (sqrt(4S/(pi L)) - a)/phi grows with S/L, so only the
-    // criterion with the largest S/L among those exceeded at the start needs the square root.
+    // criterion with the largest S/L among those exceeded at the start needs the square root. Every
+    // criterion of one geometry has the same spread (the set-up varies only S and the aperture), so
+    // equal S/L give the same distance: the first listed is named, as governingPulseRule names rule 1
+    // on a tie.
     let pick: { c: Criterion; setup: RangeSetup; q: Dec } | null = null;
     for (const { c, setup } of setups) {
       const X0 = exposureAt(setup.S, setup.spread, setup.cap, ZERO);
@@ -61,7 +64,7 @@ export function distanceOver(tl: LimitCriteria, spec: DistanceSpec): DistanceOut
         label: c.rule,
         detail: `${c.label}: S = ${fmt(setup.S)} ${sUnit}, exposure at the start ${fmt(X0)} ${unit} ${exceeded ? '>' : '<='} limit ${fmt(c.L)} ${unit}` + (exceeded ? `; S/L = ${fmt(q)} m²` : ': not exceeded at any distance'),
       });
-      if (exceeded && (!pick || q.gt(pick.q) || (q.eq(pick.q) && setup.spread.phi.lt(pick.setup.spread.phi)))) pick = { c, setup, q };
+      if (exceeded && (!pick || q.gt(pick.q))) pick = { c, setup, q };
     }
     if (pick) {
       const range = solveRange({ S: pick.setup.S, L: pick.c.L, cap: pick.setup.cap, spread: pick.setup.spread });
@@ -83,7 +86,7 @@ export function distanceOver(tl: LimitCriteria, spec: DistanceSpec): DistanceOut
       if (!prev || q.gt(prev.q)) perCap.set(k, { c, setup, q });
     }
     for (const { c, setup } of setups) {
-      if (!perCap.has(setup.cap.toString()) || perCap.get(setup.cap.toString())?.c !== c) {
+      if (perCap.get(setup.cap.toString())?.c !== c) {
         addStep(trace, { kind: 'formula', label: c.rule, detail: `${c.label}: S/L = ${fmt(setup.S.div(c.L))} m², not above the largest S/L for the same aperture: a shorter distance` });
       }
     }
