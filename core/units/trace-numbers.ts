@@ -63,7 +63,9 @@ export function traceQuantityText(value: string, unit: string): string {
   const perPulse = / per pulse$/.exec(unit);
   const base = perPulse ? unit.slice(0, perPulse.index) : unit;
   const family = UNIT_FAMILY[base];
-  if (family === undefined || !new RegExp(`^${NUMBER}$`).test(value)) return unit === '' ? value : `${value} ${unit}`;
+  // a value that is itself a list with units ("0.02 J/m²; 3330000 W/m²", the reported limits) reads as a sentence
+  if (!new RegExp(`^${NUMBER}$`).test(value)) return traceText(unit === '' ? value : `${value} ${unit}`);
+  if (family === undefined) return unit === '' ? value : `${value} ${unit}`;
   const v = dec(value);
   // zero keeps the unit it was written in ("alpha = 0 mrad"), never a bare family unit
   if (v.isZero()) return `0 ${unit}`;

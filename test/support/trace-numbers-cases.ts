@@ -33,8 +33,9 @@ export const TRACE_NUMBERS_CASES: readonly TraceNumbersCase[] = [
       lasers: [{ id: 'L1', name: 'Femtosecond oscillator', beams: [{ id: 'b1', label: 'fs 800', wavelength_nm: 800, emission: { kind: 'pulsed', pulseEnergy_J: 1e-6, pulseDuration_s: 1e-13 }, beam: { diameter_m: 0.002, divergence_rad: 0.001, definition: '1/e' } }] }],
       eyewear: [],
     },
-    readable: ['Exposure limit, eye, 800 nm, 100 fs', '2.37734 GW/m²', '237.734 µJ/m²', '1.5 mrad', '5 mrad', '1.58489'],
-    raw: ['0.0000000000001', '2377340000', '0.000237734'],
+    // the reported limits (3 figures, rounded down) read in the same notation: 237 µJ/m²; 2.37 GW/m²
+    readable: ['Exposure limit, eye, 800 nm, 100 fs', '2.37734 GW/m²', '237.734 µJ/m²', '237 µJ/m²; 2.37 GW/m²', '1.5 mrad', '5 mrad', '1.58489'],
+    raw: ['0.0000000000001', '2377340000', '2370000000', '0.000237734'],
   },
   {
     what: '1064 nm, 10 ns pulses at 1 kHz: 10 ns and 1 kHz in the titles',
