@@ -48,7 +48,23 @@ const UNITS = Object.keys(UNIT_FAMILY)
   .map((u) => u.replace(/[/^]/g, (c) => `\\${c}`))
   .join('|');
 // a number stands alone: not part of a name ("NIR1-4"), an expression ("1e-4*CA", "(10)^0.75") or a ratio
-const QUANTITY = new RegExp(String.raw`(?<![\w.^*/\-])(${NUMBER}) (${UNITS})(?![\w²/^])`, 'g');
+const ALONE = String.raw`(?<![\w.^*/\-])`;
+const UNIT_END = String.raw`(?![\w²/^])`;
+const VALUE_OR_NA = String.raw`(?:${NUMBER}|n/a)`;
+/**
+ * One pass (a value once written with a prefix and digit groups is never read again), three shapes:
+ * a list sharing the unit written after its last item ("rule 1 2.37734e-4, rule 2 0.0158489, rule 3
+ * 2.37734e-5 J/m²": each item takes the unit, or the last item's prefix would be read for all), a
+ * range ("1e-13–1e-9 s", "10 to 600 s": both ends take the unit), and a single value with its unit.
+ */
+const QUANTITY = new RegExp(
+  [
+    String.raw`((?:rule \d+ ${VALUE_OR_NA}, )+rule \d+ ${VALUE_OR_NA}) (${UNITS})${UNIT_END}`,
+    String.raw`${ALONE}(${NUMBER})(–| to )(${NUMBER}) (${UNITS})${UNIT_END}`,
+    String.raw`${ALONE}(${NUMBER}) (${UNITS})${UNIT_END}`,
+  ].join('|'),
+  'g',
+);
 const TINY_DECIMAL = new RegExp(String.raw`(?<![\w.^*/\-])(-?0\.000\d*)(?![\d.e])`, 'g');
 
 /** Significant figures written in a decimal text ("0.000237734" -> 6, "2377340000" -> 6, "1e-13" -> 1). */
@@ -76,7 +92,12 @@ export function traceQuantityText(value: string, unit: string): string {
 /** A sentence or title of a derivation with its numbers made readable (see the file comment). */
 export function traceText(text: string): string {
   return text
-    .replace(QUANTITY, (_m, n: string, u: string) => traceQuantityText(n, u))
+    .replace(QUANTITY, (...g: (string | undefined)[]) => {
+      const [, list, listUnit, from, dash, to, rangeUnit, n, u] = g;
+      if (list !== undefined && listUnit !== undefined) return list.replace(new RegExp(`(rule \\d+ )(${NUMBER})`, 'g'), (_m, r: string, v: string) => `${r}${traceQuantityText(v, listUnit)}`);
+      if (from !== undefined && dash !== undefined && to !== undefined && rangeUnit !== undefined) return `${traceQuantityText(from, rangeUnit)}${dash}${traceQuantityText(to, rangeUnit)}`;
+      return n !== undefined && u !== undefined ? traceQuantityText(n, u) : String(g[0]);
+    })
     .replace(TINY_DECIMAL, (n: string) => dec(n).toExponential());
 }
 
