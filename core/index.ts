@@ -5,6 +5,7 @@ export * from './trace/trace.js';
 export * from './units/quantities.js';
 export { quantityText, numberText, odText, angleText, plainDigits, type DisplayUnit, type DisplayOptions, type Rounding } from './units/display.js';
 export * from './units/read-back.js';
+export { traceText, traceQuantityText, traceStepValue } from './units/trace-numbers.js';
 export * from './model/input-rules.js';
 export { dominantToleranceWords, entryWords, officerPath, officerWords, placeInRoom, toleranceWords, whereInRoom, type WhereInRoom } from './model/input-words.js';
 export { Dec, dec, roundSig, roundPlaces, recordString } from './numeric/decimal.js';

@@ -1,5 +1,5 @@
 /** Display helpers. Values from the core are already rounded in the safe direction; re-rounding here keeps that direction. */
-import { formatDensity, odText, quantityText, type DisplayUnit, type UnitHabit } from '../../core/index.js';
+import { formatDensity, odText, quantityText, type UnitHabit } from '../../core/index.js';
 import type { LimitSummary, ScaleNumberRequirement } from '../../core/model/results.js';
 
 /** A distance in metres (decimal string), rounded UP to 3 significant figures, mm below 10 cm. */
@@ -61,19 +61,4 @@ export function shortFingerprint(fp: string): string {
 /** An optical density rounded UP to one decimal place and never below 0 (safe direction). */
 export function odUp(x: string): string {
   return odText(x);
-}
-
-const TRACE_UNITS: Readonly<Record<string, DisplayUnit>> = { J: 'J', W: 'W', m: 'm', s: 's', 'W/m²': 'W/m²', 'J/m²': 'J/m²' };
-
-/**
- * A derivation step's value: the full figures kept (6 significant, nearest) but in engineering
- * notation with an SI prefix, so "125000000000 W/m²" reads "125 GW/m²". Unknown units as given.
- */
-export function traceValue(value: string | undefined, unit: string | undefined): string {
-  if (value === undefined || value === '') return '';
-  const base = unit === undefined ? undefined : unit.replace(/ per pulse$/, '');
-  const du = base === undefined ? undefined : TRACE_UNITS[base];
-  if (du === undefined || !/^-?[\d.]+(e[-+]?\d+)?$/i.test(value)) return unit ? `${value} ${unit}` : value;
-  const text = quantityText(value, du, { sig: 6, round: 'nearest' });
-  return unit !== base ? `${text} per pulse` : text;
 }

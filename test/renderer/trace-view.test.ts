@@ -1,7 +1,7 @@
 /**
  * The derivation window: every step is one table row with its cells side by side (a step kind never
  * takes a layout class such as the flex ".row"), values in engineering notation with their unit, and
- * the full 6 significant figures kept. Input: a 532 nm 10 ns pulse of 1 mJ, 2 mm (1/e), 1 mrad
+ * every figure the core wrote kept. Input: a 532 nm 10 ns pulse of 1 mJ, 2 mm (1/e), 1 mrad
  * (invented demo beam; the values shown are whatever the core computes, read back through the screen).
  */
 import { describe, expect, it } from 'vitest';
@@ -32,8 +32,8 @@ describe('TraceView', () => {
   it.each([
     { value: '0.000000008', unit: 's', text: '8 ns', source: 'SI prefix n (BIPM SI brochure Table 7)' },
     { value: '125000000000', unit: 'W/m²', text: '125 GW/m²', source: 'SI prefix G on the numerator' },
-    { value: '0.0000083212345', unit: 'J/m² per pulse', text: '8.32123 µJ/m² per pulse', source: 'derivation keeps 6 significant figures' },
-    { value: '1762.3301', unit: 'm', text: '1762.33 m', source: 'derived: plain metres below 10 km' },
+    { value: '0.0000083212345', unit: 'J/m² per pulse', text: '8.3212345 µJ/m² per pulse', source: 'the derivation keeps every figure written (issue 14, item 6)' },
+    { value: '1762.3301', unit: 'm', text: '1762.3301 m', source: 'derived: plain metres below 10 km, every figure kept' },
   ])('a step value $value $unit reads "$text" [$source]', ({ value, unit, text }) => {
     render(TraceView, { props: { trace: { title: 'Example', steps: [{ kind: 'result', label: 'Value', detail: 'shown', value, unit }], children: [] } } });
     expect(screen.getByText(text)).toBeTruthy();

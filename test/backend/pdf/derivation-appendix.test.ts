@@ -19,6 +19,7 @@ import { join } from 'node:path';
 import { beforeAll, describe, expect, it } from 'vitest';
 import type { Trace, TraceStep } from '../../../core/trace/trace.js';
 import { stepLabelText } from '../../../core/provenance/citations.js';
+import { traceStepValue } from '../../../core/units/trace-numbers.js';
 import { renderReport, type DocumentInput, type Paper } from '../../../electron/backend/pdf/index.js';
 import { pageTexts } from './pdf-tools.js';
 import { benchDocument, tenLaserRoom } from './ten-laser-room.js';
@@ -88,11 +89,11 @@ describe('every derivation step of the ten-laser room is on paper', () => {
     { what: 'the beams', traces: (): Trace[] => doc.results.beams.map((b) => b.trace) },
     { what: 'the room', traces: (): Trace[] => [doc.results.trace] },
   ];
-  it.each(cases)('$what: label, and value with unit, of every step', ({ traces }) => {
+  it.each(cases)('$what: label, and value with unit (engineering notation, as the officer reads it), of every step', ({ traces }) => {
     const { text } = report('A4');
     const steps = traces().flatMap(allSteps);
     expect(steps.length).toBeGreaterThan(0);
-    const missing = steps.filter((s) => !text.includes(squash(stepLabelText(s))) || (s.value !== undefined && !text.includes(squash(`${s.value}${s.unit ?? ''}`))));
+    const missing = steps.filter((s) => !text.includes(squash(stepLabelText(s))) || (s.value !== undefined && !text.includes(squash(traceStepValue(s)))));
     expect(missing.map((s) => `${s.label} = ${s.value ?? ''} ${s.unit ?? ''}`)).toEqual([]);
   });
 });

@@ -22,6 +22,7 @@ import { citationLine, citationOf, readableText, stepLabelText } from '../../../
 import { COLOR } from '../page.js';
 import type { RowCheck } from '../../../../core/model/inputs.js';
 import { checkedWords } from '../row-checks.js';
+import { traceStepValue, traceText } from '../../../../core/units/trace-numbers.js';
 
 const KIND_STYLE: Readonly<Record<TraceKind, { tag: string; color: string; bold?: boolean }>> = {
   input: { tag: 'input', color: COLOR.muted },
@@ -73,14 +74,17 @@ function pieces(text: string, style: Omit<Run, 'text'>): Run[] {
 
 function stepRuns(s: TraceStep, ref: string | null): Run[] {
   const k = KIND_STYLE[s.kind];
+  // numbers with a unit in engineering notation, all figures kept (core/units/trace-numbers.ts);
+  // a parameter whose table expression is its bare value ("1.5") reads with its unit ("1.5 mrad")
+  const valueText = traceStepValue(s);
+  const detail = s.value !== undefined && s.detail === s.value ? valueText : traceText(readableText(s.detail));
   const runs: Run[] = [
     { text: `${k.tag}  `, color: k.color, bold: true, fontSize: 6.3, noWrap: true },
     ...pieces(`${stepLabelText(s)}: `, { bold: true }),
-    ...pieces(readableText(s.detail), { ...(k.bold ? { bold: true } : {}), ...(s.kind === 'warning' ? { color: COLOR.bad } : {}) }),
+    ...pieces(detail, { ...(k.bold ? { bold: true } : {}), ...(s.kind === 'warning' ? { color: COLOR.bad } : {}) }),
   ];
   // "Wavelength: 800 nm = 800 nm": the value is not repeated when the detail already says it.
-  const valueText = s.value === undefined ? '' : `${s.value}${s.unit ? ' ' + s.unit : ''}`;
-  if (valueText !== '' && !s.detail.endsWith(valueText)) runs.push(...pieces(` = ${valueText}`, { bold: true }));
+  if (valueText !== '' && !detail.endsWith(valueText)) runs.push(...pieces(` = ${valueText}`, { bold: true }));
   if (ref !== null) runs.push({ text: `  ${ref}`, color: COLOR.muted, fontSize: 6.6, noWrap: true });
   return runs;
 }
@@ -140,7 +144,7 @@ export class TracePrinter {
   }
 
   private title(t: Trace): string {
-    return t.title.replace(` (${this.ruleSetName})`, '');
+    return traceText(t.title.replace(` (${this.ruleSetName})`, ''));
   }
 
   private walk(trace: Trace, number: string, depth: number, out: Content[]): void {
