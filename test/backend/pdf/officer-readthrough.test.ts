@@ -86,3 +86,24 @@ describe('the assessment report (room B2.16: two beams of one laser add on the r
     expect(whole).toContain('OD 7 at 9–11 µm');
   });
 });
+
+describe('the eyewear sheet (room B2.14)', () => {
+  let text = '';
+  beforeAll(async () => {
+    text = layoutText(await renderEyewearSheet(await docOf('B2.14'), A4_SI));
+  }, 120_000);
+
+  it('one beam is "beam 3", several are "beams 4, 6, 7"', () => {
+    expect(text).not.toMatch(/USE for beams \d+(?![\d,–])/);
+    expect(text).toContain('USE for beam 3');
+    expect(text).toContain('USE for beams 4, 6, 7');
+  });
+
+  it('the same 9–11 µm band as the report', () => {
+    expect(text).toContain('OD 7 at 9–11 µm');
+  });
+
+  it('a percentage stays on one line with its number (ISO 80000-1 clause 7)', () => {
+    expect(text).not.toMatch(/\d\s*\n\s*%/);
+  });
+});
