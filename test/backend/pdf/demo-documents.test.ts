@@ -164,7 +164,7 @@ describe('required fields (issue: Printed output; domain reference 5.1 and 6.2)'
     expect(has(t, 'LASER EYEWEAR REQUIRED')).toBe(true);
     expect(has(t, 'Authorised persons only')).toBe(true);
     // the demo site's emergency contact (register: site notes line "Emergency contact: ...")
-    expect(has(t, 'In an emergency call')).toBe(true);
+    expect(has(t, 'In an emergency, call')).toBe(true);
     expect(has(t, 'Site security control room, extension 2222 (24 h)')).toBe(true);
     for (const s of [d.officer.name, d.officer.phone, d.officer.email, `Valid until: ${d.content.reviewBy ?? ''}`]) expect(has(t, s), s).toBe(true);
     expect(has(t, (d.signature?.fingerprint ?? '').slice(0, 4))).toBe(true);

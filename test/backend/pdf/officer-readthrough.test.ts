@@ -107,3 +107,19 @@ describe('the eyewear sheet (room B2.14)', () => {
     expect(text).not.toMatch(/\d\s*\n\s*%/);
   });
 });
+
+describe('the door notice (room A0.07: classes 3B and 1M)', () => {
+  let text = '';
+  beforeAll(async () => {
+    text = layoutText(await renderDoorNotice(await docOf('A0.07'), A4_SI));
+  }, 120_000);
+
+  it('the class in the lasers table reads on one line ("Class 3B", not "Class" above "3B")', () => {
+    expect(text).toMatch(/Class 3B/);
+    expect(text).toMatch(/Class 1M/);
+  });
+
+  it('the emergency heading reads as a sentence: "In an emergency, call"', () => {
+    expect(text).toContain('In an emergency, call');
+  });
+});
