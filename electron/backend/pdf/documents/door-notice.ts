@@ -251,7 +251,7 @@ export function doorNoticeDefinition(doc: DocumentInput, opts: RenderOptions, fi
     text: [{ text: `${cellText(r[0])}`, bold: true }, ` · ${cellText(r[1])} · ${cellText(r[2])}${cellText(r[3]) === '–' || cellText(r[3]) === '' ? '' : `, ${cellText(r[3])}`} · `, { text: cellText(r[4]), bold: true }],
   });
   const list = (part: TableCell[][]): Content => ({ table: { widths: ['*'], body: part.map((r) => [entry(r)]) }, layout: { ...CELL_LAYOUT, fillColor: () => null }, fontSize: detail });
-  const lasersBlock: Content = twoColumns ? { columns: [list(rows.slice(0, half)), list(rows.slice(half))], columnGap: 8 } : laserTable(rows, ['*', 120, 80, 64, 56]);
+  const lasersBlock: Content = twoColumns ? { columns: [list(rows.slice(0, half)), list(rows.slice(half))], columnGap: 8 } : laserTable(rows, ['*', 108, 80, 64, 56]);
 
   const content: Content[] = [
     signalPanel(choice, width, dense ? (fit >= 4 ? 44 : fit >= 3 ? 52 : 60) : NOTICE_SIZES.signalWord),
