@@ -173,7 +173,7 @@ describe('required fields (issue: Printed output; domain reference 5.1 and 6.2)'
   it.each(ROOMS)('room %s: the eyewear sheet names every eyewear with its use and must-not-use beams', (code) => {
     const r = get(code);
     for (const e of r.doc.content.input.eyewear ?? []) expect(has(r.text.sheet, e.id)).toBe(true);
-    expect(has(r.text.sheet, 'NOT for beams')).toBe(true);
+    expect(has(r.text.sheet, 'NOT for beam')).toBe(true); // 'NOT for beam 1' where the room has one beam
     for (const v of r.core.coverage) {
       const beamNo = r.core.beams.findIndex((b) => b.beamId === v.beamId) + 1;
       expect(beamNo).toBeGreaterThan(0);

@@ -81,6 +81,12 @@ describe('the assessment report (room B2.16: two beams of one laser add on the r
     expect(whole).toContain('needs OD ≥ 3.8');
   });
 
+  it('the summary says where a governing row such as "H-E-VIS-4" is cited (document, table), so an auditor can follow it', () => {
+    expect(whole).toContain('row H-E-VIS-4');
+    expect(whole).toContain('Row: the exposure-limit table row the limit comes from; its published source (document, edition, table) is named under "Limit-table rows used" in the appendix.');
+    expect(pages.join(' ')).toMatch(/Limit-table rows used .*H-E-VIS-4/);
+  });
+
   it('a marked band from 9 µm to 11 µm keeps one unit for both ends', () => {
     expect(whole).not.toContain('9000–11 µm');
     expect(whole).toContain('OD 7 at 9–11 µm');
