@@ -64,7 +64,7 @@ export function requiredByWavelength(beams: readonly BeamResult[]): RoomResult['
 
 function needText(b: BeamResult): string {
   const lb = b.scaleNumbers.filter((s) => s.applies && s.scale > 0).map((s) => (s.mode === 'RB' ? `RB${s.scale} (alignment)` : `${s.mode} LB${s.scale}`));
-  return `OD >= ${b.odRequired}${lb.length ? `, ${lb.join(', ')}` : ''}`;
+  return `OD ≥ ${b.odRequired}${lb.length ? `, ${lb.join(', ')}` : ''}`;
 }
 
 /** Greedy smallest set of shelf eyewear covering the beams that some eyewear covers. */
@@ -116,7 +116,7 @@ export function purchaseAdvice(beams: readonly BeamResult[], eyewear: readonly E
   const byWl = requiredByWavelength(uncovered.length ? uncovered : needing);
   advice.push(
     `To cover ${uncovered.length ? 'the remaining beams' : 'all beams'} with one pair, buy eyewear with: ` +
-      byWl.map((w) => `${w.wavelength_nm} nm OD >= ${w.odRequired}${w.scaleNumbers.filter((s) => s.scale > 0 && s.mode !== 'RB').map((s) => ` ${s.mode} LB${s.scale}`).join('')}`).join('; ') +
+      byWl.map((w) => `${w.wavelength_nm} nm OD ≥ ${w.odRequired}${w.scaleNumbers.filter((s) => s.scale > 0 && s.mode !== 'RB').map((s) => ` ${s.mode} LB${s.scale}`).join('')}`).join('; ') +
       '.',
   );
   return advice;

@@ -103,6 +103,23 @@ export function shortFingerprint(hex: string): string {
   return (hex.slice(0, 16).match(/.{1,4}/g) ?? []).join(' ');
 }
 
+const SUPERSCRIPT: Readonly<Record<string, string>> = { '-': '⁻', '0': '⁰', '1': '¹', '2': '²', '3': '³', '4': '⁴', '5': '⁵', '6': '⁶', '7': '⁷', '8': '⁸', '9': '⁹' };
+
+/**
+ * A dimensionless ratio (a sum of exposure/limit fractions), 3 significant figures rounded UP (the
+ * exposure side); from 10 000 on and below 0.001 in engineering notation, "5.27 × 10⁶", never a
+ * string of zeros or a programmer's "5.27e6" (ISO 80000-1:2009, clause 7: the multiplication sign
+ * and a power of ten).
+ */
+export function ratio(value: string | number): string {
+  const v = roundSig(value, 3, 'up');
+  const a = v.abs();
+  if (a.isZero() || (a.lt(10000) && a.gte('0.001'))) return v.toString();
+  const exp = Math.floor(Number(a.toExponential().split('e')[1]) / 3) * 3;
+  const mantissa = v.div(dec(10).pow(exp)).toString();
+  return `${mantissa} × 10${String(exp).split('').map((c) => SUPERSCRIPT[c] ?? c).join('')}`;
+}
+
 export function percent(ratio: number | undefined): string {
   return ratio === undefined ? '–' : `${plain(roundSig(ratio * 100, 3, 'down'))} %`;
 }

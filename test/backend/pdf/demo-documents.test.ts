@@ -164,7 +164,7 @@ describe('required fields (issue: Printed output; domain reference 5.1 and 6.2)'
     expect(has(t, 'LASER EYEWEAR REQUIRED')).toBe(true);
     expect(has(t, 'Authorised persons only')).toBe(true);
     // the demo site's emergency contact (register: site notes line "Emergency contact: ...")
-    expect(has(t, 'In an emergency call')).toBe(true);
+    expect(has(t, 'In an emergency, call')).toBe(true);
     expect(has(t, 'Site security control room, extension 2222 (24 h)')).toBe(true);
     for (const s of [d.officer.name, d.officer.phone, d.officer.email, `Valid until: ${d.content.reviewBy ?? ''}`]) expect(has(t, s), s).toBe(true);
     expect(has(t, (d.signature?.fingerprint ?? '').slice(0, 4))).toBe(true);
@@ -173,7 +173,7 @@ describe('required fields (issue: Printed output; domain reference 5.1 and 6.2)'
   it.each(ROOMS)('room %s: the eyewear sheet names every eyewear with its use and must-not-use beams', (code) => {
     const r = get(code);
     for (const e of r.doc.content.input.eyewear ?? []) expect(has(r.text.sheet, e.id)).toBe(true);
-    expect(has(r.text.sheet, 'NOT for beams')).toBe(true);
+    expect(has(r.text.sheet, 'NOT for beam')).toBe(true); // 'NOT for beam 1' where the room has one beam
     for (const v of r.core.coverage) {
       const beamNo = r.core.beams.findIndex((b) => b.beamId === v.beamId) + 1;
       expect(beamNo).toBeGreaterThan(0);

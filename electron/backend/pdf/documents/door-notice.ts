@@ -120,7 +120,8 @@ function laserRows(view: RoomView): TableCell[][] {
       wl,
       outputs,
       pulses,
-      { text: l.classAsLabelled === null ? 'not labelled' : `Class ${l.classAsLabelled}`, bold: true },
+      // a no-break space: "Class 3B" is one term and must not be split over two lines
+      { text: l.classAsLabelled === null ? 'not labelled' : `Class\u00a0${l.classAsLabelled}`, bold: true },
     ];
   });
 }
@@ -228,7 +229,7 @@ export function doorNoticeDefinition(doc: DocumentInput, opts: RenderOptions, fi
   };
   // Whom to call and what the notice is for; beside the entry instructions, or (with a plan) in a band below them.
   const callStack: Content[] = [
-    { text: 'In an emergency call', bold: true, fontSize: 9.5, color: '#B00020' },
+    { text: 'In an emergency, call', bold: true, fontSize: 9.5, color: '#B00020' },
     doc.emergencyContact ? { text: doc.emergencyContact, fontSize: 13 * near, bold: true } : { text: 'Emergency number: ____________________', fontSize: 11, bold: true, margin: [0, 4, 0, 0] },
     { text: 'Laser safety officer', bold: true, fontSize: 9.5, margin: [0, 4, 0, 0] },
     { text: doc.officer.name, fontSize: 12 * near, bold: true },
@@ -250,7 +251,7 @@ export function doorNoticeDefinition(doc: DocumentInput, opts: RenderOptions, fi
     text: [{ text: `${cellText(r[0])}`, bold: true }, ` · ${cellText(r[1])} · ${cellText(r[2])}${cellText(r[3]) === '–' || cellText(r[3]) === '' ? '' : `, ${cellText(r[3])}`} · `, { text: cellText(r[4]), bold: true }],
   });
   const list = (part: TableCell[][]): Content => ({ table: { widths: ['*'], body: part.map((r) => [entry(r)]) }, layout: { ...CELL_LAYOUT, fillColor: () => null }, fontSize: detail });
-  const lasersBlock: Content = twoColumns ? { columns: [list(rows.slice(0, half)), list(rows.slice(half))], columnGap: 8 } : laserTable(rows, ['*', 120, 80, 64, 44]);
+  const lasersBlock: Content = twoColumns ? { columns: [list(rows.slice(0, half)), list(rows.slice(half))], columnGap: 8 } : laserTable(rows, ['*', 108, 80, 64, 56]);
 
   const content: Content[] = [
     signalPanel(choice, width, dense ? (fit >= 4 ? 44 : fit >= 3 ? 52 : 60) : NOTICE_SIZES.signalWord),

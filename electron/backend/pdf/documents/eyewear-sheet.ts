@@ -27,6 +27,11 @@ function useByNumber(doc: DocumentInput, view: RoomView): Array<{ eyewear: Eyewe
 }
 
 /** 1, 2, 4, 5, 6 -> "1, 2, 4–6". */
+/** "beam 3" for one beam, "beams 4, 6, 7" for several (the sheet is read aloud at the rack). */
+function beamsWord(ns: readonly number[]): string {
+  return ns.length === 1 ? 'beam ' : 'beams ';
+}
+
 export function numberRanges(ns: readonly number[]): string {
   const out: string[] = [];
   for (let i = 0; i < ns.length; i++) {
@@ -70,10 +75,10 @@ export function eyewearSheetDefinition(original: DocumentInput, opts: RenderOpti
   const useRows: TableCell[][] = useByNumber(doc, view).map((u) => [
     { text: [{ text: u.eyewear.id, bold: true, fontSize: 11 }, ...(location(u.eyewear.id) ? [{ text: `\n${location(u.eyewear.id)}`, fontSize: 6.5, color: COLOR.muted }] : [])] },
     u.covers.length > 0
-      ? { text: [{ text: 'USE for beams ', bold: true }, numberRanges(u.covers)], color: COLOR.good, fillColor: COLOR.goodTint }
+      ? { text: [{ text: `USE for ${beamsWord(u.covers)}`, bold: true }, numberRanges(u.covers)], color: COLOR.good, fillColor: COLOR.goodTint }
       : { text: 'no beam in this room', color: COLOR.muted },
     u.mustNot.length > 0
-      ? { text: [{ text: 'NOT for beams ', bold: true, color: COLOR.bad }, numberRanges(u.mustNot)], fillColor: COLOR.badTint }
+      ? { text: [{ text: `NOT for ${beamsWord(u.mustNot)}`, bold: true, color: COLOR.bad }, numberRanges(u.mustNot)], fillColor: COLOR.badTint }
       : { text: 'usable for every beam in this room', bold: true, color: COLOR.good },
     { text: [{ text: 'marked: ', bold: true }, eyewearMarkings(u.eyewear)], fontSize: 7.5 },
   ]);
@@ -82,9 +87,9 @@ export function eyewearSheetDefinition(original: DocumentInput, opts: RenderOpti
       {
         text: [
           { text: `${u.eyewear.id}  `, bold: true, fontSize: 10 },
-          u.covers.length > 0 ? { text: `USE for beams ${numberRanges(u.covers)}`, bold: true, color: COLOR.good } : { text: 'no beam in this room', color: COLOR.muted },
+          u.covers.length > 0 ? { text: `USE for ${beamsWord(u.covers)}${numberRanges(u.covers)}`, bold: true, color: COLOR.good } : { text: 'no beam in this room', color: COLOR.muted },
           { text: '   ' },
-          u.mustNot.length > 0 ? { text: `NOT for beams ${numberRanges(u.mustNot)}`, bold: true, color: COLOR.bad } : { text: 'usable for every beam here', bold: true, color: COLOR.good },
+          u.mustNot.length > 0 ? { text: `NOT for ${beamsWord(u.mustNot)}${numberRanges(u.mustNot)}`, bold: true, color: COLOR.bad } : { text: 'usable for every beam here', bold: true, color: COLOR.good },
           ...(location(u.eyewear.id) ? [{ text: `   ${location(u.eyewear.id)}`, fontSize: 6.5, color: COLOR.muted }] : []),
         ],
         fontSize: 8,

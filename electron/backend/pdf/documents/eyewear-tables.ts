@@ -29,12 +29,15 @@ export function eyewearMarkings(e: EyewearSpec): string {
   for (const b of e.od ?? []) parts.push(`OD ${b.od} at ${band(b.from_nm, b.to_nm)}`);
   for (const b of e.en207 ?? []) parts.push(`${b.modes} LB${b.scale} at ${band(b.from_nm, b.to_nm)}`);
   for (const b of e.en208 ?? []) parts.push(`RB${b.scale} at ${band(b.from_nm, b.to_nm)}`);
-  if (e.visibleTransmission !== undefined) parts.push(`visible light transmission ${fmt.percent(e.visibleTransmission)}`);
+  if (e.visibleTransmission !== undefined) parts.push(`visible light transmission ${fmt.percent(e.visibleTransmission).replace(' %', '\u00a0%')}`); // a no-break space: the number keeps its unit (ISO 80000-1, clause 7)
   return parts.join('; ');
 }
 
+/** A marked band in one unit for both ends: "740–1100 nm", "9–11 µm" (never "9000–11 µm"). */
 function band(from: number, to: number): string {
-  return from === to ? fmt.wavelength(from) : `${plain(dec(from))}–${fmt.wavelength(to)}`;
+  if (from === to) return fmt.wavelength(from);
+  const um = fmt.wavelength(to).endsWith('µm');
+  return `${plain(um ? dec(from).div(1000) : dec(from))}–${fmt.wavelength(to)}`;
 }
 
 export function verdictOf(doc: DocumentInput, beamId: string, eyewearId: string): EyewearVerdict | null {
@@ -58,7 +61,27 @@ export function shortReason(v: EyewearVerdict, wavelength_nm: number): string {
   if (v.odMargin === null) return `no OD at ${fmt.wavelength(wavelength_nm)}`;
   if (dec(v.odMargin).lt(0)) return `OD short by ${plain(dec(v.odMargin).neg().toDecimalPlaces(1, Dec.ROUND_UP))}`;
   const failing = v.scaleChecks.find((c) => /TOO LOW|too low|not marked/.test(c));
-  return failing ?? 'see the report';
+  return failing === undefined ? 'see the report' : scaleCheckWords(failing);
+}
+
+/**
+ * The core's scale-number check ("D: LB5 < LB6 TOO LOW") in the words of a frame marking
+ * (EN 207:2017 clause 7: mode letter and LB number; EN 208:2009: RB number): "D LB5 marked,
+ * D LB6 needed". A check in any other shape is printed as it is.
+ */
+export function scaleCheckWords(check: string): string {
+  const low = /^(\w+): (LB|RB)(\d+) < (?:LB|RB)(\d+) (TOO LOW|too low for alignment)$/.exec(check);
+  if (low) {
+    const [, mode, tag, marked, needed, why] = low;
+    const name = (n: string | undefined): string => (tag === 'RB' ? `RB${n ?? ''}` : `${mode ?? ''} ${tag ?? ''}${n ?? ''}`);
+    return `${name(marked)} marked, ${name(needed)} needed${why === 'too low for alignment' ? ' for alignment' : ''}`;
+  }
+  const unmarked = /^(\w+): needs (LB|RB)(\d+); not marked for (\d+(?:\.\d+)?) nm$/.exec(check);
+  if (unmarked) {
+    const [, mode, tag, needed, nm] = unmarked;
+    return `${tag === 'RB' ? '' : `${mode ?? ''} `}${tag ?? ''}${needed ?? ''} needed, not marked at ${fmt.wavelength(Number(nm))}`;
+  }
+  return check;
 }
 
 /** Rows: eyewear; columns: beams. YES (green) / NO (red) with the OD margin. */

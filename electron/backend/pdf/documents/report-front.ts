@@ -100,7 +100,9 @@ export function beamSummary(doc: DocumentInput, view: RoomView, units: UnitHabit
     heading('Summary per beam'),
     paragraph(
       `Limits are rounded down, distances, optical densities and scale numbers up (${units === 'ANSI' ? 'W/cm², J/cm²' : 'W/m², J/m²'}; distances in metres). ` +
-        'Diffuse: hazard zone radius for diffuse reflection (the governing viewing case; both cases are listed below the table). Class: estimate / as labelled — the manufacturer\'s class governs.',
+        'Diffuse: hazard zone radius for diffuse reflection (the governing viewing case; both cases are listed below the table). Class: estimate / as labelled — the manufacturer\'s class governs. ' +
+        // the row name is the cross-reference; the readable citation is printed once, in the appendix
+        'Row: the exposure-limit table row the limit comes from; its published source (document, edition, table) is named under "Limit-table rows used" in the appendix.',
       { fontSize: 8, color: COLOR.muted },
     ),
     gridTable(

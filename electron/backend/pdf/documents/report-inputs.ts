@@ -1,7 +1,7 @@
 /** Report: the inputs and assumptions behind every number (domain reference 6.2 items 3-6). */
 import type { Content, TableCell } from 'pdfmake/interfaces';
 import type { BeamInput, ViewingConditions } from '../../../../core/model/inputs.js';
-import { dec, roundPlaces, roundSig } from '../../../../core/numeric/decimal.js';
+import { dec, roundPlaces } from '../../../../core/numeric/decimal.js';
 import { dominantToleranceWords } from '../../../../core/model/input-words.js';
 import { formatSI, plain } from '../../../../core/units/quantities.js';
 import type { UnitHabit } from '../../../../core/units/quantities.js';
@@ -83,7 +83,8 @@ export function inputsSection(doc: DocumentInput, view: RoomView, units: UnitHab
     .map((g) => {
       const effect = g.effect.toLowerCase().startsWith(g.tissue) ? g.effect : `${g.tissue}, ${g.effect}`;
       const over = dec(g.sumOfFractions).gt(1);
-      return `${effect[0]?.toUpperCase() ?? ''}${effect.slice(1)}: beams ${g.beamIds.map((id) => beamNumber(view, id)).join(', ')} — sum of exposure/limit fractions ${plain(roundSig(g.sumOfFractions, 3, 'up'))}${over ? ' (over the limit combined)' : ''}. ${g.note}`;
+      // The core's note repeats the sum as plain digits; the page prints it once, in engineering notation.
+      return `${effect[0]?.toUpperCase() ?? ''}${effect.slice(1)}: beams ${g.beamIds.map((id) => beamNumber(view, id)).join(', ')} — sum of exposure/limit fractions ${fmt.ratio(g.sumOfFractions)}${over ? ' (over the limit combined)' : ''}. ${g.place === undefined ? g.note : `Place: ${g.place}; each beam taken at its worst reachable position.`}`;
     });
   const inventoryRows: TableCell[][] = view.lasers.map((l) => {
     const i = l.installation;
@@ -126,7 +127,8 @@ export function inputsSection(doc: DocumentInput, view: RoomView, units: UnitHab
       ),
     ),
     ...olderRecordSection(doc),
-    ...(additive.length > 0 ? [heading('Beams acting on the same tissue and effect (added)', 2), bullets(additive, 8.5)] : []),
+    // kept with its few lines: alone at a page foot the heading reads as a missing section (common practice)
+    ...(additive.length > 0 ? [headingWith('Beams acting on the same tissue and effect (added)', 2, bullets(additive, 8.5))] : []),
   ];
 }
 
