@@ -132,7 +132,7 @@ export const SOURCE_CITATIONS: Readonly<Record<string, string>> = {
     'EN 207:2017 (filters against laser radiation), scale-number table; EN 208:2009 (alignment eyewear), Table B.1',
   'IEC 60825-1:2014 4.3 and Table 10 (from memory; domain notes section 10 item 7); relation checked against 0.39 mW and 10 mW (domain notes 3.2)':
     'IEC 60825-1:2014, clauses on classification, accessible emission limits and measurement conditions',
-  'lasersafe.de; Seibersdorf Laboratories (published)': 'IEC 60825-1:2014, accessible emission limits of Class 2 and 3R (as published in training material of Seibersdorf Laboratories)',
+  'lasersafe.de; Seibersdorf Laboratories (published)': 'IEC 60825-1:2014, accessible emission limits of Class 2 and 3R (as published by Seibersdorf Laboratories, accredited laser test house, on its page on laser classes)',
   'domain notes 1.1 (derived)': 'Gaussian beam optics: beam diameter and divergence converted from the 1/e² to the 1/e points',
   'domain notes 1.5 (derived); specular reflections treated as intrabeam in ANSI Z136.1 section 3': `${ANSI_EVAL}: a specular reflection is treated as the direct beam`,
   'domain notes 1.6 (derived from Gaussian optics)': 'Gaussian beam optics: far field of a single-mode fibre from its mode-field diameter',
@@ -197,7 +197,7 @@ const KEY_WORDS: ReadonlyArray<readonly [RegExp, string | ((key: string) => stri
   [/\baperture:(?:eye|skin):[0-9.e+-]+:[0-9.e+-]+/g, entryWords],
   [/\bpulse-shorter-than-tables\b/g, 'pulse shorter than the tables'],
   [/;?\s*ILSC2019 \(read\)/g, ' (ILSC 2019, paper P106)'],
-  [/\(published: lasersafe\.de; Seibersdorf Laboratories\)/g, '(published training material, Seibersdorf Laboratories)'],
+  [/\(published: lasersafe\.de; Seibersdorf Laboratories\)/g, '(as published by Seibersdorf Laboratories, accredited laser test house)'],
   [/read \(EN 208:2009 Table B\.1 via a supplier explainer\)/g, 'EN 208:2009, Table B.1 (seen in a secondary copy; not yet checked against the published text)'],
   [/\bunverified remembered\b/g, 'unchecked'],
   [/\bremembered\b/g, 'unchecked'],

@@ -64,7 +64,7 @@ describe("a 'differs' check of a pulse-timing factor applies to the pulse rules"
     expect(Number(r.mpe.H_Jm2)).toBeLessThanOrEqual(Number(plain.mpe.H_Jm2));
     if (used) expect(Number(r.nohd_m)).toBeGreaterThan(Number(plain.nohd_m));
     else expect(r.nohd_m).toBe(plain.nohd_m);
-    const said = r.warnings.find((w) => /pulse rules for the eye/.test(w) && /factor T2/.test(w));
+    const said = r.warnings.find((w) => /pulse rules for the eye/.test(w) && /break-point time T_2/.test(w));
     expect(said).toBeDefined();
     expect(said).toContain(`it gives ${expr}`);
     expect(said).toContain('Dr. Imre Calloway-Senn');
@@ -77,7 +77,7 @@ describe("a 'differs' check of a pulse-timing factor applies to the pulse rules"
     const shorter = evaluateBeam({ ...MODE_LOCKED, settings: differs(T_I_VISIBLE, '1e-6') });
     expect(Number(longer.mpe.H_Jm2)).toBeLessThan(Number(plain.mpe.H_Jm2));
     expect(shorter.mpe.H_Jm2).toBe(plain.mpe.H_Jm2);
-    for (const r of [longer, shorter]) expect(r.warnings.some((w) => /factor T_i/.test(w) && /pulse rules for the eye/.test(w))).toBe(true);
+    for (const r of [longer, shorter]) expect(r.warnings.some((w) => /pulse grouping time T_i/.test(w) && /pulse rules for the eye/.test(w))).toBe(true);
   });
 
   it("a 'matches' check of T2 changes nothing in the pulse rules", () => {
