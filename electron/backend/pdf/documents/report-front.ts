@@ -6,7 +6,7 @@ import { factTable, gridTable, heading, paragraph } from '../blocks.js';
 import * as fmt from '../format.js';
 import { COLOR, cautionBlock, DRAFT_HEADER } from '../page.js';
 import type { RoomView } from '../room-view.js';
-import { beamFigures, diffuseCases } from './beam-figures.js';
+import { beamFigures, diffuseCases, reportedDistance } from './beam-figures.js';
 
 const OPERATING_STATE: Readonly<Record<string, string>> = {
   normal: 'normal operation',
@@ -96,11 +96,12 @@ export function beamSummary(doc: DocumentInput, view: RoomView, units: UnitHabit
     ];
   });
   const warnings = view.beams.flatMap((b, i) => b.result.warnings.map((w) => `Beam ${i + 1} (${b.result.label}): ${w}`));
+  const cases = diffuseLines(view);
   return [
     heading('Summary per beam'),
     paragraph(
       `Limits are rounded down, distances, optical densities and scale numbers up (${units === 'ANSI' ? 'W/cm², J/cm²' : 'W/m², J/m²'}; distances in metres). ` +
-        'Diffuse: hazard zone radius for diffuse reflection (the governing viewing case; both cases are listed below the table). Class: estimate / as labelled — the manufacturer\'s class governs. ' +
+        `${diffuseLegend(view, cases.length > 0)} Class: estimate / as labelled — the manufacturer's class governs. ` +
         // the row name is the cross-reference; the readable citation is printed once, in the appendix
         'Row: the exposure-limit table row the limit comes from; its published source (document, edition, table) is named under "Limit-table rows used" in the appendix.',
       { fontSize: 8, color: COLOR.muted },
@@ -112,7 +113,7 @@ export function beamSummary(doc: DocumentInput, view: RoomView, units: UnitHabit
       [72, 32, 60, '*', 32, 32, 30, 30, 46, 30],
       7.2,
     ),
-    ...diffuseLines(view),
+    ...cases,
     ...(warnings.length === 0
       ? []
       : [
@@ -120,6 +121,17 @@ export function beamSummary(doc: DocumentInput, view: RoomView, units: UnitHabit
           { ul: warnings.map((w) => ({ text: w, color: COLOR.bad })), fontSize: 8.5, margin: [0, 0, 0, 4] } as Content,
         ]),
   ];
+}
+
+/**
+ * The legend of the Diffuse column says only what the page shows: the list of both viewing cases
+ * is promised only when it is printed under the table, and "not assessed" is explained only when a
+ * cell reads so (no diffusely reflecting surface was entered for that beam, so none was evaluated).
+ */
+function diffuseLegend(view: RoomView, listed: boolean): string {
+  const notAssessed = view.beams.some((b) => b.result.nhzDiffuse_m === null && reportedDistance(b.result, 'diffuse') === null);
+  const what = `Diffuse: hazard zone radius for diffuse reflection (the governing viewing case${listed ? '; the accidental and the deliberate case are listed below the table' : ''}).`;
+  return notAssessed ? `${what} “Not assessed” there means that no diffusely reflecting surface was entered for the beam, so none was evaluated.` : what;
 }
 
 /** One line per beam with diffuse viewing: the accidental and the deliberate case, and which governs. */

@@ -1,0 +1,73 @@
+// @vitest-environment node
+/**
+ * The assessment report says only what its pages show (the owner's rule: every page is read by an
+ * officer and an auditor; a document never claims what it does not show). Demo rooms (invented,
+ * assets/demo/demo-scenario.json), real pdfmake, real record store, text read back with poppler's
+ * pdftotext; no mocks. These are checks of wording, not of values.
+ *
+ * Sources: ISO 80000-1:2009 clause 7 (a number and its unit separated by a space; µm as the unit
+ * the trade uses above 10 µm is common practice in far-infrared work, e.g. "CO2 laser, 10.6 µm");
+ * three significant figures for a printed label is common practice (the result card prints the
+ * same figure).
+ */
+import { mkdtempSync, rmSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { openRecordStore, type RecordStore } from '../../../electron/backend/records/index.js';
+import { documentInputFromAssessment, renderReport, type RenderOptions } from '../../../electron/backend/pdf/index.js';
+import { pageTexts } from './pdf-tools.js';
+
+const A4_SI: RenderOptions = { paper: 'A4', units: 'SI' };
+let dir = '';
+let store: RecordStore;
+const assessmentOf = new Map<string, string>();
+const textOf = new Map<string, string>();
+
+/** The report of a demo room, all pages joined, up to the derivation appendix. */
+async function reportBody(code: string): Promise<string> {
+  const hit = textOf.get(code);
+  if (hit !== undefined) return hit;
+  const id = assessmentOf.get(code);
+  if (id === undefined) throw new Error(`demo room ${code} missing`);
+  const all = pageTexts(await renderReport(await documentInputFromAssessment(store, id), A4_SI)).join(' ');
+  const appendix = all.indexOf('Appendix — derivations');
+  const body = appendix > 0 ? all.slice(0, appendix) : all;
+  textOf.set(code, body);
+  return body;
+}
+
+beforeAll(async () => {
+  dir = mkdtempSync(join(tmpdir(), 'bw-pdf-says-'));
+  store = await openRecordStore({ path: join(dir, 'demo.sqlite'), keyDir: join(dir, 'keys') });
+  const site = await store.seedDemo();
+  for (const room of await store.listRooms(site.id)) {
+    const id = (await store.listAssessments(room.id))[0]?.id;
+    if (id !== undefined) assessmentOf.set(room.code, id);
+  }
+}, 120_000);
+
+afterAll(async () => {
+  await store?.close();
+  if (dir) rmSync(dir, { recursive: true, force: true });
+});
+
+describe('the summary legend of the Diffuse column', () => {
+  const cases = [
+    // room B2.16: no beam has a diffuse surface entered, every Diffuse cell reads "not assessed"
+    { room: 'B2.16', listed: false, notAssessed: true },
+    // room C1.03: both beams have diffuse viewing; both cases are printed under the table
+    { room: 'C1.03', listed: true, notAssessed: false },
+  ] as const;
+  for (const c of cases) {
+    it(`room ${c.room}: the legend promises the list of viewing cases only when it follows, and explains "not assessed" when shown`, async () => {
+      const body = await reportBody(c.room);
+      const listFollows = /diffuse reflection: accidental/.test(body);
+      expect(listFollows, 'the list of viewing cases').toBe(c.listed);
+      expect(body.includes('listed below the table'), 'the legend promises the list').toBe(listFollows);
+      const shown = body.replace(/“Not assessed” there means/g, '').includes('not assessed');
+      expect(shown, '"not assessed" in the table').toBe(c.notAssessed);
+      expect(body.includes('“Not assessed” there means that no diffusely reflecting surface was entered'), 'the legend explains "not assessed"').toBe(shown);
+    }, 120_000);
+  }
+});
