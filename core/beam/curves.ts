@@ -86,8 +86,9 @@ export function exposureAlongBeam(q: BeamCurveQuery, distances_m: readonly numbe
     quantity: eye.quantity,
     limit: crit.L.toString(),
     rule: crit.rule,
-    // 4 significant figures: a label on a plot (1.5*t^0.375 apertures have 40 digits)
-    aperture_mm: crit.aperture_m.mul(1000).toSignificantDigits(4).toString(),
+    // 3 significant figures, to nearest: a label on a plot, printed as every other figure of the
+    // documents and the result card (1.5*t^0.375 apertures have 40 digits; 3.557 mm -> 3.56 mm)
+    aperture_mm: crit.aperture_m.mul(1000).toSignificantDigits(3, Dec.ROUND_HALF_UP).toString(),
     points: distances_m.map((r) => [r, exposureAt(eye.S, spread, crit.aperture_m, new Dec(r), mu).toNumber()] as const),
   };
 }

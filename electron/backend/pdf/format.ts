@@ -5,6 +5,7 @@
  */
 import { dec, roundSig } from '../../../core/numeric/decimal.js';
 import { formatDensity, formatSI, plain, type UnitHabit } from '../../../core/units/quantities.js';
+import { quantityText } from '../../../core/units/display.js';
 import type { Emission } from '../../../core/model/inputs.js';
 import type { LaserClass, ScaleNumberRequirement } from '../../../core/model/results.js';
 
@@ -38,9 +39,9 @@ export function distanceFull(value_m: string | null): string {
   return distance(roundSig(value_m, 3, 'up').toString());
 }
 
+/** A wavelength: the core's one wavelength formatter (nm below 10 µm, µm from 10 µm, e.g. "10.6 µm"). */
 export function wavelength(nm: number): string {
-  if (nm >= 10000) return `${plain(dec(nm).div(1000))} µm`;
-  return `${plain(dec(nm))} nm`;
+  return quantityText(nm, 'nm');
 }
 
 /** A duration: seconds from 1 s up (e.g. "30 000 s"), SI prefixes below. */

@@ -71,3 +71,22 @@ describe('the summary legend of the Diffuse column', () => {
     }, 120_000);
   }
 });
+
+describe('the plot labels write numbers as the rest of the documents do', () => {
+  const cases = [
+    // room C1.03, beam 2: CO2 laser at 10 600 nm; limiting aperture 1.5 × 10^0.375 mm = 3.557 mm
+    // (ICNIRP 2013 / IEC 60825-1:2014, far infrared, t = 10 s)
+    { room: 'C1.03', wavelength: 'eye limit, 10.6 µm', notWavelength: 'eye limit, 10600 nm', aperture: 'direct beam, 3.56 mm aperture' },
+    // room A0.07: 1550 nm, the same 1.5 t^0.375 aperture at 10 s; below 10 µm the wavelength stays in nm
+    { room: 'A0.07', wavelength: 'eye limit, 1550 nm', notWavelength: 'eye limit, 1.55 µm', aperture: 'direct beam, 3.56 mm aperture' },
+  ] as const;
+  for (const c of cases) {
+    it(`room ${c.room}: "${c.wavelength}" (µm from 10 µm, as in the summary table) and "${c.aperture}" (3 significant figures)`, async () => {
+      const body = await reportBody(c.room);
+      expect(body).toContain(c.wavelength);
+      expect(body).not.toContain(c.notWavelength);
+      expect(body).toContain(c.aperture);
+      expect(body, 'no aperture printed with 4 significant figures').not.toMatch(/\d\.\d{3} mm aperture/);
+    }, 120_000);
+  }
+});

@@ -15,7 +15,7 @@ import {
   type RuleSetId,
   type UnitHabit,
 } from '../../../../core/index.js';
-import { limitH, duration } from '../format.js';
+import { limitH, duration, wavelength } from '../format.js';
 import { logPlotSvg } from './log-plot.js';
 import { BoundedMemo } from './curve-cache.js';
 
@@ -114,7 +114,7 @@ export function limitVsDurationSvg(beam: BeamResult, input: BeamInput | null, se
     height: width * 0.68,
     xLabel: 'exposure duration t / s',
     yLabel: `eye limit H / ${unit}`,
-    series: [{ label: `eye limit, ${beam.wavelength_nm} nm`, points: curve.map(([t, h]) => [t, h * factor] as const), color: '#111111' }],
+    series: [{ label: `eye limit, ${wavelength(beam.wavelength_nm)}`, points: curve.map(([t, h]) => [t, h * factor] as const), color: '#111111' }],
     markers,
   });
 }
