@@ -17,6 +17,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { openRecordStore, type RecordStore } from '../../../electron/backend/records/index.js';
 import { documentInputFromAssessment, renderReport, type RenderOptions } from '../../../electron/backend/pdf/index.js';
 import { pageTexts } from './pdf-tools.js';
+import { factorWords } from '../../../core/model/factor-words.js';
 
 const A4_SI: RenderOptions = { paper: 'A4', units: 'SI' };
 let dir = '';
@@ -89,4 +90,24 @@ describe('the plot labels write numbers as the rest of the documents do', () => 
       expect(body, 'no aperture printed with 4 significant figures').not.toMatch(/\d\.\d{3} mm aperture/);
     }, 120_000);
   }
+});
+
+describe('the pulse correction factor is written one way throughout the report', () => {
+  // Room B2.14 (conservative mode, pulse trains): the factor is named in "Points to check", in the
+  // rule-set section and in the appendix. Its name comes from core/model/factor-words.ts; the symbol
+  // is C with subscript P in ICNIRP 2013 and IEC 60825-1:2014 (from memory), written "C_P" on paper
+  // everywhere in this project (no page sets it as a typographic subscript, so none may).
+  it('room B2.14: "pulse correction factor C_P" in the points to check and the rule-set section, and the appendix writes C_P, never "CP"', async () => {
+    const id = assessmentOf.get('B2.14');
+    if (id === undefined) throw new Error('demo room B2.14 missing');
+    const all = pageTexts(await renderReport(await documentInputFromAssessment(store, id), A4_SI)).join(' ');
+    const name = factorWords('C_P');
+    const points = all.slice(all.indexOf('Points to check'), all.indexOf('Inputs and assumptions'));
+    const ruleSet = all.slice(all.indexOf('Rule set and conservative mode'), all.indexOf('Uncertainty bounds'));
+    expect(points).toContain(name);
+    expect(ruleSet).toContain(name);
+    expect(all.slice(all.indexOf('Appendix — derivations'))).toContain('C_P = ');
+    // the same symbol everywhere: no "CP" (typographic subscript read back) and no "C P"
+    expect(all.match(/\bC ?P\b/g) ?? []).toEqual([]);
+  }, 120_000);
 });
