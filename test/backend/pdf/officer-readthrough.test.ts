@@ -11,38 +11,16 @@
  * separated by a space and not split; "≥" for "greater than or equal to"). Keeping a heading with
  * the text it introduces is common practice in document layout.
  */
-import { mkdtempSync, rmSync } from 'node:fs';
-import { tmpdir } from 'node:os';
-import { join } from 'node:path';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { openRecordStore, type RecordStore } from '../../../electron/backend/records/index.js';
-import { documentInputFromAssessment, renderDoorNotice, renderEyewearSheet, renderReport, type RenderOptions } from '../../../electron/backend/pdf/index.js';
+import { beforeAll, describe, expect, it } from 'vitest';
+import { renderDoorNotice, renderEyewearSheet, renderReport, type RenderOptions } from '../../../electron/backend/pdf/index.js';
 import { layoutText, pageTexts } from './pdf-tools.js';
+import { useDemoRegister } from './demo-register.js';
 
 const A4_SI: RenderOptions = { paper: 'A4', units: 'SI' };
-let dir = '';
-let store: RecordStore;
-const assessmentOf = new Map<string, string>();
+const demo = useDemoRegister('bw-pdf-readthrough-');
 
-beforeAll(async () => {
-  dir = mkdtempSync(join(tmpdir(), 'bw-pdf-readthrough-'));
-  store = await openRecordStore({ path: join(dir, 'demo.sqlite'), keyDir: join(dir, 'keys') });
-  const site = await store.seedDemo();
-  for (const room of await store.listRooms(site.id)) {
-    const id = (await store.listAssessments(room.id))[0]?.id;
-    if (id !== undefined) assessmentOf.set(room.code, id);
-  }
-}, 120_000);
-
-afterAll(async () => {
-  await store?.close();
-  if (dir) rmSync(dir, { recursive: true, force: true });
-});
-
-async function docOf(code: string) {
-  const id = assessmentOf.get(code);
-  if (id === undefined) throw new Error(`demo room ${code} missing`);
-  return documentInputFromAssessment(store, id);
+function docOf(code: string) {
+  return demo.documentOf(code);
 }
 
 describe('the assessment report (room B2.16: two beams of one laser add on the retina)', () => {

@@ -10,48 +10,26 @@
  * three significant figures for a printed label is common practice (the result card prints the
  * same figure).
  */
-import { mkdtempSync, rmSync } from 'node:fs';
-import { tmpdir } from 'node:os';
-import { join } from 'node:path';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { openRecordStore, type RecordStore } from '../../../electron/backend/records/index.js';
-import { documentInputFromAssessment, renderReport, type RenderOptions } from '../../../electron/backend/pdf/index.js';
+import { describe, expect, it } from 'vitest';
+import { renderReport, type RenderOptions } from '../../../electron/backend/pdf/index.js';
 import { pageTexts } from './pdf-tools.js';
+import { useDemoRegister } from './demo-register.js';
 import { factorWords } from '../../../core/model/factor-words.js';
 
 const A4_SI: RenderOptions = { paper: 'A4', units: 'SI' };
-let dir = '';
-let store: RecordStore;
-const assessmentOf = new Map<string, string>();
+const demo = useDemoRegister('bw-pdf-says-');
 const textOf = new Map<string, string>();
 
 /** The report of a demo room, all pages joined, up to the derivation appendix. */
 async function reportBody(code: string): Promise<string> {
   const hit = textOf.get(code);
   if (hit !== undefined) return hit;
-  const id = assessmentOf.get(code);
-  if (id === undefined) throw new Error(`demo room ${code} missing`);
-  const all = pageTexts(await renderReport(await documentInputFromAssessment(store, id), A4_SI)).join(' ');
+  const all = pageTexts(await renderReport(await demo.documentOf(code), A4_SI)).join(' ');
   const appendix = all.indexOf('Appendix — derivations');
   const body = appendix > 0 ? all.slice(0, appendix) : all;
   textOf.set(code, body);
   return body;
 }
-
-beforeAll(async () => {
-  dir = mkdtempSync(join(tmpdir(), 'bw-pdf-says-'));
-  store = await openRecordStore({ path: join(dir, 'demo.sqlite'), keyDir: join(dir, 'keys') });
-  const site = await store.seedDemo();
-  for (const room of await store.listRooms(site.id)) {
-    const id = (await store.listAssessments(room.id))[0]?.id;
-    if (id !== undefined) assessmentOf.set(room.code, id);
-  }
-}, 120_000);
-
-afterAll(async () => {
-  await store?.close();
-  if (dir) rmSync(dir, { recursive: true, force: true });
-});
 
 describe('the summary legend of the Diffuse column', () => {
   const cases = [
@@ -98,9 +76,7 @@ describe('the pulse correction factor is written one way throughout the report',
   // is C with subscript P in ICNIRP 2013 and IEC 60825-1:2014 (from memory), written "C_P" on paper
   // everywhere in this project (no page sets it as a typographic subscript, so none may).
   it('room B2.14: "pulse correction factor C_P" in the points to check and the rule-set section, and the appendix writes C_P, never "CP"', async () => {
-    const id = assessmentOf.get('B2.14');
-    if (id === undefined) throw new Error('demo room B2.14 missing');
-    const all = pageTexts(await renderReport(await documentInputFromAssessment(store, id), A4_SI)).join(' ');
+    const all = pageTexts(await renderReport(await demo.documentOf('B2.14'), A4_SI)).join(' ');
     const name = factorWords('C_P');
     const points = all.slice(all.indexOf('Points to check'), all.indexOf('Inputs and assumptions'));
     const ruleSet = all.slice(all.indexOf('Rule set and conservative mode'), all.indexOf('Uncertainty bounds'));
