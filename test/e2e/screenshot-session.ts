@@ -27,6 +27,8 @@ export interface ScreenshotSession {
   newPage(): Promise<Page>;
   /** Waits `settleMs`, then writes the page, the whole page or one element to `<out>/<name>.png`. */
   shot(name: string, what?: ShotOptions): Promise<void>;
+  /** Opens the app on the first page, loads the invented demo site and dismisses its welcome message. */
+  loadDemo(): Promise<void>;
   /** Closes the browser and stops the host. */
   close(): Promise<void>;
 }
@@ -55,6 +57,12 @@ export async function openScreenshotSession(opts: {
       ctx,
       page,
       newPage: async () => reportErrors(await browser.newPage()),
+      async loadDemo() {
+        await page.goto(host.url);
+        await page.getByRole('button', { name: 'Load the demo site' }).click();
+        await page.getByRole('heading', { level: 1, name: 'Register' }).waitFor();
+        await page.getByRole('button', { name: 'Dismiss message' }).click();
+      },
       async shot(name, what = {}) {
         const file = path.join(opts.out, `${name}.png`);
         const shown = what.page ?? page;

@@ -20,10 +20,7 @@ async function main(): Promise<void> {
   });
   const dialog = page.getByRole('alertdialog');
   try {
-    await page.goto(host.url);
-    await page.getByRole('button', { name: 'Load the demo site' }).click();
-    await page.getByRole('heading', { level: 1, name: 'Register' }).waitFor();
-    await page.getByRole('button', { name: 'Dismiss message' }).click();
+    await s.loadDemo();
 
     // the workspace: remove a laser with two beams
     await page.getByRole('button', { name: /^B2\.16/ }).click();

@@ -12,12 +12,9 @@ const OUT = path.join(REPO, 'test', 'artifacts', 'screens', 'delete');
 
 async function main(): Promise<void> {
   const s = await openScreenshotSession({ out: OUT, viewport: { width: 1280, height: 800 }, settleMs: 300 });
-  const { host, page } = s;
+  const { page } = s;
   try {
-    await page.goto(host.url);
-    await page.getByRole('button', { name: 'Load the demo site' }).click();
-    await page.getByRole('heading', { name: 'Register' }).waitFor();
-    await page.getByRole('button', { name: 'Dismiss message' }).click();
+    await s.loadDemo();
     await page.getByRole('button', { name: /^B2\.14/ }).click();
     await page.getByRole('button', { name: 'Delete room…' }).click();
     await page.getByRole('alertdialog').waitFor();

@@ -16,10 +16,7 @@ async function main(): Promise<void> {
   const s = await openScreenshotSession({ out: OUT, viewport: { width: 1280, height: 800 }, settleMs: 300 });
   const { host, page, ctx } = s;
   try {
-    await page.goto(host.url);
-    await page.getByRole('button', { name: 'Load the demo site' }).click();
-    await page.getByRole('heading', { name: 'Register' }).waitFor();
-    await page.getByRole('button', { name: 'Dismiss message' }).click();
+    await s.loadDemo();
     await page.getByRole('button', { name: /^A0\.07/ }).click();
     await page.getByRole('button', { name: 'Open in workspace' }).click();
     await page.getByRole('heading', { level: 1, name: /Workspace · A0\.07/ }).waitFor();

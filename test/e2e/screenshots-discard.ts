@@ -13,12 +13,9 @@ const OUT = path.join(REPO, 'test', 'artifacts', 'screens', 'discard');
 
 async function main(): Promise<void> {
   const s = await openScreenshotSession({ out: OUT, viewport: { width: 1280, height: 800 }, settleMs: 300 });
-  const { host, page } = s;
+  const { page } = s;
   try {
-    await page.goto(host.url);
-    await page.getByRole('button', { name: 'Load the demo site' }).click();
-    await page.getByRole('heading', { name: 'Register' }).waitFor();
-    await page.getByRole('button', { name: 'Dismiss message' }).click();
+    await s.loadDemo();
     await page.getByRole('button', { name: /^B2\.14/ }).click();
     await page.getByRole('button', { name: 'Open in workspace' }).click();
     await page.getByRole('heading', { level: 1, name: /Workspace · B2\.14/ }).waitFor();
