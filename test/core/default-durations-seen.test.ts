@@ -1,7 +1,7 @@
 // The exposure duration the eye limit is taken over when the officer gives none
 // (core/limits/durations.ts), read where the officer reads it: the eye limit's duration and its
 // reason on the result, on both sides of the band edges 400 nm and 700 nm. Sources (common practice,
-// /work/shared/reference/trade-facts.json): 0.25 s for a glance into a visible beam
+// the trade-facts reference, copied in test/fixtures/trade-facts.json): 0.25 s for a glance into a visible beam
 // (aversion-response-time; TROS Laserstrahlung Teil 2, 4.1 and Table 2); 10 s for an invisible
 // infrared beam (fault-case-10s-ir; TROS Teil 2, 5.1 example; ANSI Z136.1 from memory); 30 000 s, a
 // working day, for ultraviolet (workday-30000s; TROS Teil 2, 4.1; AS/NZS IEC 60825.14:2011 5.1). The

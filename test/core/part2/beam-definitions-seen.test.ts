@@ -1,6 +1,6 @@
 // The beam as the hazard formulas see it (core/beam/beam-model.ts), checked through what the officer
 // reads: the NOHD, the warnings, the "Definition" line of the derivation and the exposure curve.
-// Sources: domain notes = the project's hazard-distance reference notes (/work/shared/reference/domain.md
+// Sources: domain notes = the project's hazard-distance reference notes (domain.md of the shared reference material
 // in the development set-up), sections 1.1 (definitions) and 1.2 (range equation).
 import { describe, expect, it } from 'vitest';
 import { evaluateBeam, exposureAlongBeam, type BeamInput } from '../../../core/index.js';
