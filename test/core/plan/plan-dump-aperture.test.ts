@@ -20,23 +20,12 @@
 // Rule (ours, the safe side): a beam exactly as wide as the aperture counts as passing it.
 import { describe, expect, it } from 'vitest';
 import { evaluateRoom, type BeamInput, type PathElement, type PlanFinding, type RoomInput, type RoomPlan } from '../../../core/index.js';
+import { beamA, eastDoorRoom, p } from './east-door-room.js';
 
-const beamA: BeamInput = { id: 'a', label: 'beam A', wavelength_nm: 633, emission: { kind: 'cw', power_W: 0.005 }, beam: { diameter_m: 0.001, divergence_rad: 0.001, definition: '1/e' }, viewing: { diffuse: { reflectance: 0.1 } } };
 const beamB: BeamInput = { ...beamA, id: 'b', label: 'beam B', beam: { diameter_m: 0.002, divergence_rad: 0.002, definition: '1/e2' } };
 
-const p = (x_m: number, y_m: number) => ({ x_m, y_m });
 /** An 8 m × 5 m room, door D1 in the east wall at y 1–2 m; the beam runs east along y = 1.5 m from (1, 1.5). */
-const base: RoomPlan = {
-  outline: [p(0, 0), p(8, 0), p(8, 5), p(0, 5)],
-  doors: [{ id: 'D1', label: 'D1', a: p(8, 1), b: p(8, 2) }],
-  windows: [],
-  walls: [],
-  barriers: [],
-  workPositions: [],
-  enclosures: [],
-  paths: [],
-  reflectionPoints: [],
-};
+const base = eastDoorRoom;
 const room = (beam: BeamInput, end: PathElement, plan: Partial<RoomPlan> = {}): RoomInput => ({
   lasers: [{ id: 'L2', name: 'Laser 2', beams: [beam] }],
   plan: { ...base, ...plan, paths: [{ laserId: 'L2', exit: p(1, 1.5), elements: [end] }] },

@@ -14,23 +14,12 @@
 //   7 m from the exit:   D = 8 mm,   r = 4 mm × √(2·ln(15.9/8))   = 4.69 mm → band 56.2 mm (56.19, up);
 //   1.5 m from the exit: D = 2.5 mm, r = 1.25 mm × √(2·ln(15.9/2.5)) = 2.41 mm → band 54 mm (53.91, up).
 import { describe, expect, it } from 'vitest';
-import { evaluateRoom, type BeamInput, type PlanFinding, type RoomInput, type RoomPlan } from '../../../core/index.js';
+import { evaluateRoom, type PlanFinding, type RoomInput, type RoomPlan } from '../../../core/index.js';
+import { beamA, eastDoorRoom, p } from './east-door-room.js';
 
-const beamA: BeamInput = { id: 'a', label: 'beam A', wavelength_nm: 633, emission: { kind: 'cw', power_W: 0.005 }, beam: { diameter_m: 0.001, divergence_rad: 0.001, definition: '1/e' }, viewing: { diffuse: { reflectance: 0.1 } } };
 
-const p = (x_m: number, y_m: number) => ({ x_m, y_m });
 /** An 8 m × 5 m room, door D1 in the east wall at y 1–2 m. */
-const base: RoomPlan = {
-  outline: [p(0, 0), p(8, 0), p(8, 5), p(0, 5)],
-  doors: [{ id: 'D1', label: 'D1', a: p(8, 1), b: p(8, 2) }],
-  windows: [],
-  walls: [],
-  barriers: [],
-  workPositions: [],
-  enclosures: [],
-  paths: [],
-  reflectionPoints: [],
-};
+const base = eastDoorRoom;
 const room = (plan: Partial<RoomPlan>): RoomInput => ({ lasers: [{ id: 'L1', name: 'Laser 1', beams: [beamA] }], plan: { ...base, ...plan } });
 const kinds = (fs: readonly PlanFinding[]) => fs.map((f) => `${f.kind}:${f.subjectId}`).sort();
 const east = [{ laserId: 'L1', exit: p(1, 1.5), elements: [], onward_deg: 0 }];
