@@ -45,3 +45,20 @@ describe.each(['eu2006', 'icnirp2013'] as const)('%s: gamma_p and alpha_max on t
     expect(rel(r.mpe.E_Wm2, 18 * 10 ** (0.002 * 100) * (50 / 1.5) * T2(50) ** -0.25)).toBeLessThan(1e-9);
   });
 });
+
+// The edge tolerance (core/limits/intervals.ts: within 1e-9 relative a value is ON the edge). C_C at
+// 1200 nm: 10^(0.018 (lambda - 1150)) = 10^0.9 = 7.94 from below, 8 from above (EU Table 2.5, read;
+// the same in icnirp2013, from memory); on the edge the lower is kept (EU Table 2.2 note a applied to
+// the factors). Retina 1050-1400 nm, t >= T2 = 10 s: E = 10 C_A C_C W/m², C_A = 5 (EU Table 2.3, read).
+describe.each(['eu2006', 'icnirp2013'] as const)('%s: C_C near its 1200 nm edge, 10 s', (ruleSet) => {
+  it.each([
+    ['exactly 1200 nm: on the edge, C_C = 10^0.9', 1200, 50 * 10 ** 0.9],
+    ['1200 nm + 5e-10 relative: on the edge, C_C = 10^(0.018 (lambda - 1150))', 1200.0000006, 50 * 10 ** (0.018 * (1200.0000006 - 1150))],
+    ['1200 nm + 1.7e-9 relative: past the edge, C_C = 8', 1200.000002, 400],
+    ['1200.0001 nm (8e-8 relative): past the edge, C_C = 8', 1200.0001, 400],
+    ['1199.9999 nm: below, C_C = 10^(0.018 (lambda - 1150))', 1199.9999, 50 * 10 ** (0.018 * (1199.9999 - 1150))],
+  ])('%s', (_n, wavelength_nm, E) => {
+    const r = evaluateBeam({ ruleSet, wavelength_nm, exposureDuration_s: 10, emission: { kind: 'cw', power_W: 1 }, beam });
+    expect(rel(r.mpe.E_Wm2, E)).toBeLessThan(1e-12);
+  });
+});
