@@ -8,7 +8,7 @@
 // lower, so it is the limit shown. Where a misreading of the grammar gives a value above 6.36 J/m², the
 // row as written would be shown instead, so the case fails too. Arithmetic derived by hand.
 import { describe, expect, it } from 'vitest';
-import { evaluateBeam, InputError, type BeamInput } from '../../../core/index.js';
+import { evaluateBeam, InputError, type BeamInput, type Trace } from '../../../core/index.js';
 
 const beam: BeamInput['beam'] = { diameter_m: 0.005, divergence_rad: 0.001, definition: '1/e' };
 const differs = (documentExpr: string): BeamInput => ({
@@ -31,7 +31,7 @@ describe('the document value read as written (532 nm, 0.25 s, 3 mrad source: as 
   });
   it.each([
     ['5', 5],
-    [' 2 + 3 ', 5], // spaces before, between and after the symbols
+    [' 2 + 3  ', 5], // spaces before, between and after the symbols
     ['7-2', 5],
     ['10-2-3', 5], // left to right: (10-2)-3, not 10-(2-3) = 11
     ['20/2/2', 5], // left to right: (20/2)/2, not 20/(2/2) = 20
@@ -52,6 +52,8 @@ describe('the document value read as written (532 nm, 0.25 s, 3 mrad source: as 
     ['20*t', 5], // the exposure duration t = 0.25 s
     ['2.5*CE', 5], // C_E = alpha/alpha_min = 3/1.5 = 2
     ['alpha_min*2', 3], // a symbol with an underscore: alpha_min = 1.5 mrad
+    ['0.5*T2', 0.5 * 10 * 10 ** (1.5 / 98.5)], // a symbol with a digit: T2 = 10 * 10^((3 - 1.5)/98.5) s (EU Table 2.5, read)
+    ['-(CE*2)+9', 5], // a symbol under a minus
     ['25^0.5', 5], // square root
     ['625^0.25', 5], // two square roots
     ['256^0.125+3', 5], // three square roots
@@ -65,7 +67,7 @@ describe('the document value read as written (532 nm, 0.25 s, 3 mrad source: as 
 });
 
 describe('a document value the grammar cannot read is refused, naming the field (no limit is computed)', () => {
-  it.each(['2 % 3', '(2', '2)', '2 3', 'foo', '2+', '*2', '()'])('%j', (expr) => {
+  it.each(['2 % 3', '(2', '2)', '2 3', 'foo', '-foo', '2*foo', 'foo*2', '2+', '*2', '()', '2 < 3'])('%j', (expr) => {
     let err: unknown;
     try {
       evaluateBeam(differs(expr));
@@ -95,6 +97,7 @@ describe('a document value using a symbol with no value here is refused, naming 
     ['C2 in a row of 532 nm', 'C2', 'C2 has no value at 532 nm'],
     ['T1 in a row of 532 nm', '2*T1', 'T1 has no value at 532 nm'],
     ['C_C in a row of 532 nm', 'CC*5', 'CC has no value at 532 nm'],
+    ['C2 under a minus', '-C2+10', 'C2 has no value at 532 nm'],
   ])('%s', (_n, expr, words) => {
     const e = refusal(differs(expr));
     expect(e.field).toBe('settings.rowChecks[0].documentExpr');
@@ -116,4 +119,12 @@ describe('a document value using a symbol with no value here is refused, naming 
     expect(e.field).toBe('settings.rowChecks[1].documentExpr');
     expect(e.validRange).toContain('C2 has no value at 1250 nm, 10 s');
   });
+});
+
+// The derivation the officer reads shows the document value with the values put in (the trace line of
+// the row), so the officer can check the arithmetic against the published text.
+it('the derivation shows the document value with its symbols replaced by their values', () => {
+  const r = evaluateBeam(differs('2.5*CE'));
+  const lines = (t: Trace): string[] => [...t.steps.map((x) => `${x.label}: ${x.detail ?? ''}`), ...t.children.flatMap(lines)];
+  expect(lines(r.trace)).toContain('Row H-E-VIS-4 (retinal thermal): H = 2.5*CE = 2.5*(2)');
 });
