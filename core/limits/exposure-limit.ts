@@ -302,8 +302,14 @@ function governingLimit(q: ExposureLimitQuery): GoverningLimit {
       for (const b of withDoc) {
         const i = candidates.findIndex((c) => c.rowId === b.rowId);
         const c = candidates[i];
-        const used = docFactors.filter((v) => variablesOf(b.expr).includes(v.name)).map((v) => v.fromDocument as RowCheck);
-        if (c && used.length > 0) candidates[i] = new Dec(b.H_Jm2).lt(c.H_Jm2) ? { ...b, factorFromDocument: used } : { ...c, factorFromDocument: used };
+        // A factor can change a row without appearing in its expression: gamma_p through the field
+        // of view, alpha_max through C_E, T2 through a row's condition. Where the document's factors
+        // changed the row (or made another row apply), every checked factor is named with it.
+        const direct = docFactors.filter((v) => variablesOf(b.expr).includes(v.name));
+        const changed = c === undefined || !new Dec(b.H_Jm2).eq(c.H_Jm2);
+        const used = (direct.length > 0 ? direct : changed ? docFactors : []).map((v) => v.fromDocument as RowCheck);
+        if (!c) candidates.push({ ...b, factorFromDocument: used });
+        else if (used.length > 0) candidates[i] = new Dec(b.H_Jm2).lt(c.H_Jm2) ? { ...b, factorFromDocument: used } : { ...c, factorFromDocument: used };
       }
     }
   }

@@ -66,3 +66,30 @@ describe('C2 at 310 nm over 100 s (a factor with one formula and its own band, 3
     expect(rel(r.mpe.H_Jm2, H)).toBeLessThan(1e-12);
   });
 });
+
+// A factor that changes a limit without appearing in the row's expression: gamma_p (the field of view
+// of the photochemical rows, (alpha/gamma_p)^2), alpha_max (through C_E = alpha^2/(alpha_min
+// alpha_max) above alpha_max) and T2 (which row applies: 18 C_E t^0.75 up to T2, 18 C_E T2^-0.25 W/m²
+// after). Sources as in factor-edges-seen.test.ts (EU Directive 2006/25/EC Tables 2.3 and 2.5, read;
+// the icnirp2013 rows the same, from memory). Before this session a 'differs' check of these factors
+// was ignored: the limit as written was shown even where the document's value gives a lower one.
+describe('a "differs" check of gamma_p, alpha_max or T2 (ICNIRP 2013 set): the lower limit is kept and the check named', () => {
+  const ext = (wavelength_nm: number, exposureDuration_s: number, sourceAngle_rad: number, settings?: Settings): BeamInput => ({
+    ...cw(wavelength_nm, exposureDuration_s, settings),
+    sourceAngle_rad,
+  });
+  const CA800 = 10 ** (0.002 * 100);
+  it.each([
+    ['gamma_p 10-100 s given as 22 mrad: 440 nm, 10 s, 50 mrad, H = 100 (50/22)^2 = 517 J/m² (11 mrad as written: 2066 J/m²)', ext(440, 10, 0.05, check('factor:gamma_p[10-100 s]', 'differs', '22')), 'H', 100 * (50 / 22) ** 2],
+    ['alpha_max given as 200 mrad: 800 nm, 3e4 s, 150 mrad, C_E = 150/1.5 = 100, T2 = 100 s: E = 18 C_A 100 * 100^-0.25 = 902 W/m²', ext(800, 30000, 0.15, check('factor:alpha_max[0.25-30000 s]', 'differs', '200')), 'E', 18 * CA800 * 100 * 100 ** -0.25],
+    ['T2 given as 100 s: 800 nm, 100 s, 50 mrad, E = 18 C_A (50/1.5) 100^-0.25 = 301 W/m² (T2 = 31 s as written: 403 W/m²)', ext(800, 100, 0.05, check('factor:T2[1.5 <= alpha <= 100]', 'differs', '100')), 'E', 18 * CA800 * (50 / 1.5) * 100 ** -0.25],
+  ] as const)('%s', (_n, x, q, want) => {
+    const r = evaluateBeam(x);
+    expect(rel(q === 'H' ? r.mpe.H_Jm2 : r.mpe.E_Wm2, want)).toBeLessThan(1e-12);
+    expect(r.warnings.some((w) => w.startsWith('Limit-table ') && w.includes('the lower limit is kept'))).toBe(true);
+  });
+  it('gamma_p given as 5 mrad (higher limit): the value as written (11 mrad, 2066 J/m²) is kept', () => {
+    const r = evaluateBeam(ext(440, 10, 0.05, check('factor:gamma_p[10-100 s]', 'differs', '5')));
+    expect(rel(r.mpe.H_Jm2, 100 * (50 / 11) ** 2)).toBeLessThan(1e-12);
+  });
+});
