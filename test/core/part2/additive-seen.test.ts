@@ -48,11 +48,16 @@ function sumSteps(r: RoomResult, tissue: 'eye' | 'skin'): TraceStep[] {
 }
 const step = (steps: TraceStep[], label: string): TraceStep | undefined => steps.find((s) => s.label === label);
 const rel = (got: string | undefined, want: number): number => Math.abs(Number(got) / want - 1);
+/** The room is evaluated once, inside the first case that reads it (not while the file is collected). */
+function once(input: RoomInput): () => RoomResult {
+  let r: RoomResult | undefined;
+  return () => (r ??= evaluateRoom(input));
+}
 
 describe('green CW, 1064 nm CW and a 1064 nm pulse train at one path (icnirp2013)', () => {
   // g: 0.1 mW at 532 nm over the default 0.25 s; ir: 1 mW at 1064 nm over the default 10 s;
   // p: 1 uJ, 10 ns at 1 kHz at 1064 nm over 10 s (rule 3 governs: 2e-2 x (1e4)^-0.25 = 2e-3 J/m² per pulse).
-  const r = evaluateRoom(room([cw('g', 532, 1e-4), cw('ir', 1064, 1e-3), pulsed('p', 1064, 1e-6, 1000)]));
+  const r = once(room([cw('g', 532, 1e-4), cw('ir', 1064, 1e-3), pulsed('p', 1064, 1e-6, 1000)]));
   const eyeSum = (1e-4 * 0.25 * A7) / (18 * 0.25 ** 0.75) + (1e-3 * 10 * A7) / (10 * 5 * 10) + (1e-6 * A7) / (2e-2 * 1e4 ** -0.25);
   const skinLimit10s = (CA: number): number => 1.1e4 * CA * 10 ** 0.25;
   const skinSum = (1e-4 * 10 * A35) / skinLimit10s(1) + (1e-3 * 10 * A35) / skinLimit10s(5) + (1e-6 * A35) / (skinLimit10s(5) / 1e4);
@@ -61,21 +66,21 @@ describe('green CW, 1064 nm CW and a 1064 nm pulse train at one path (icnirp2013
     { tissue: 'eye', effect: 'eye, retina, thermal', sum: eyeSum, over: true, source: 'H-E-VIS-4, H-E-NIR2-5p, H-E-NIR2-3 with C_P (exposure-limits.md 4.2, 4.6)' },
     { tissue: 'skin', effect: 'skin', sum: skinSum, over: false, source: 'H-S-400-2, H-S-700-2 (exposure-limits.md 4.3); the train per pulse H_T / N (rule 2, 4.6)' },
   ])('$effect: the three beams add to $sum [$source]', ({ tissue, effect, sum, over }) => {
-    const g = group(r, tissue, effect);
+    const g = group(r(), tissue, effect);
     expect(g?.beamIds).toEqual(['g', 'ir', 'p']);
     expect(rel(g?.sumOfFractions, sum)).toBeLessThan(1e-9);
     expect(g?.note).toContain(over ? '> 1: combined exposure above the limit' : '<= 1');
   });
 
   it('the derivation names each term with its row, the pulse train with its governing rule, and warns of the different durations', () => {
-    const eye = sumSteps(r, 'eye');
+    const eye = sumSteps(r(), 'eye');
     expect(step(eye, 'Sum, eye, retina, thermal')?.detail).toBe(
       'g (532 nm, row H-E-VIS-4): 0.649612 / 6.36396 + ir (1064 nm, row H-E-NIR2-5p): 259.845 / 500 + p (1064 nm, row H-E-NIR2-3 (governing per-pulse limit, pulse-train)): 0.0259845 / 0.002',
     );
     // the train is assessed over T = 10 s (rule 2's duration), not over one 10 ns pulse
     expect(step(eye, 'Durations differ')?.detail).toBe('eye: the limits were evaluated for different exposure durations (0.25, 10 s); each fraction is taken over its own duration');
     expect(step(eye, 'Largest sum')?.detail).toBe('eye, retina, thermal: above 1, the combined exposure exceeds the limit (rounded up: 13.7)');
-    const skin = sumSteps(r, 'skin');
+    const skin = sumSteps(r(), 'skin');
     expect(step(skin, 'Sum, skin')?.detail).toContain('p (1064 nm, row H-S-700-1 (governing per-pulse limit, average-power))');
     // every skin exposure here is taken over 10 s: no warning
     expect(step(skin, 'Durations differ')).toBeUndefined();
@@ -85,18 +90,18 @@ describe('green CW, 1064 nm CW and a 1064 nm pulse train at one path (icnirp2013
 describe('a blue CW beam and a blue pulse train over 100 s: the train counts in the photochemical group through rule 2', () => {
   // c: 1 uW at 450 nm; p: 1 nJ, 10 ns at 1 kHz at 450 nm (rule 3: 2e-3 x (1e4)^-0.25 = 2e-4 J/m² per
   // pulse). One 10 ns pulse has no photochemical row (those start at 10 s); the train over 100 s has.
-  const r = evaluateRoom(room([cw('c', 450, 1e-6, 100), pulsed('p', 450, 1e-9, 1000, 100)]));
+  const r = once(room([cw('c', 450, 1e-6, 100), pulsed('p', 450, 1e-9, 1000, 100)]));
   const perPulse = 2e-3 * 1e4 ** -0.25;
   it.each([
     { effect: 'eye, retina, thermal', sum: (1e-6 * 100 * A7) / (10 * 100) + (1e-9 * A7) / perPulse, source: 'H-E-VIS-5p, H-E-VIS-3 with C_P (exposure-limits.md 4.2, 4.6)' },
     { effect: 'eye, retina, photochemical', sum: (1e-6 * 100 * A7) / 100 + (1e-9 * A7) / perPulse, source: 'H-E-PC-1, C_B = 1 at 450 nm; the train at its governing per-pulse limit (ours)' },
   ])('$effect: both beams, sum $sum [$source]', ({ effect, sum }) => {
-    const g = group(r, 'eye', effect);
+    const g = group(r(), 'eye', effect);
     expect(g?.beamIds).toEqual(['c', 'p']);
     expect(rel(g?.sumOfFractions, sum)).toBeLessThan(1e-9);
   });
   it('the train keeps its single-pulse row in the thermal group; both at 100 s: no duration warning', () => {
-    const eye = sumSteps(r, 'eye');
+    const eye = sumSteps(r(), 'eye');
     expect(step(eye, 'Sum, eye, retina, thermal')?.detail).toContain('p (450 nm, row H-E-VIS-3 (governing per-pulse limit, pulse-train))');
     expect(step(eye, 'Sum, eye, retina, photochemical')?.detail).toContain('p (450 nm, row H-E-PC-1 (governing per-pulse limit, pulse-train))');
     expect(step(eye, 'Durations differ')).toBeUndefined();
@@ -106,12 +111,12 @@ describe('a blue CW beam and a blue pulse train over 100 s: the train counts in 
 describe('one 1064 nm pulse, a 1064 nm CW beam over 1 s and a CO2 beam at one path', () => {
   // s: one 1 uJ, 10 ns pulse (no rule 2: a single pulse); q: 0.1 mW over 1 s; co2: 1 mW at 10.6 um over
   // the default 10 s, alone in the cornea group.
-  const r = evaluateRoom(room([pulsed('s', 1064, 1e-6), cw('q', 1064, 1e-4, 1), cw('co2', 10600, 1e-3)]));
+  const r = once(room([pulsed('s', 1064, 1e-6), cw('q', 1064, 1e-4, 1), cw('co2', 10600, 1e-3)]));
   it('the retinal thermal sum exceeds 1 while the cornea group is within: the largest sum is reported above 1 [H-E-NIR2-3, H-E-NIR2-4]', () => {
-    const g = group(r, 'eye', 'eye, retina, thermal');
+    const g = group(r(), 'eye', 'eye, retina, thermal');
     expect(g?.beamIds).toEqual(['s', 'q']);
     expect(rel(g?.sumOfFractions, (1e-6 * A7) / 2e-2 + (1e-4 * 1 * A7) / 90)).toBeLessThan(1e-9);
-    const eye = sumSteps(r, 'eye');
+    const eye = sumSteps(r(), 'eye');
     expect(step(eye, 'Largest sum')?.detail).toMatch(/^eye, retina, thermal: above 1, the combined exposure exceeds the limit/);
     expect(step(eye, 'Sum, eye, cornea and lens')?.detail).toMatch(/^co2 \(10600 nm, row /);
     // the single pulse is assessed over its own 10 ns
