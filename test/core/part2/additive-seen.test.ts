@@ -48,16 +48,18 @@ function sumSteps(r: RoomResult, tissue: 'eye' | 'skin'): TraceStep[] {
 }
 const step = (steps: TraceStep[], label: string): TraceStep | undefined => steps.find((s) => s.label === label);
 const rel = (got: string | undefined, want: number): number => Math.abs(Number(got) / want - 1);
-/** The room is evaluated once, inside the first case that reads it (not while the file is collected). */
-function once(input: RoomInput): () => RoomResult {
-  let r: RoomResult | undefined;
-  return () => (r ??= evaluateRoom(input));
+/**
+ * The room is evaluated inside each case that reads it: neither while the file is collected nor
+ * kept between cases (the mutation runs re-run the cases in the same module, one mutant at a time).
+ */
+function inCase(input: RoomInput): () => RoomResult {
+  return () => evaluateRoom(input);
 }
 
 describe('green CW, 1064 nm CW and a 1064 nm pulse train at one path (icnirp2013)', () => {
   // g: 0.1 mW at 532 nm over the default 0.25 s; ir: 1 mW at 1064 nm over the default 10 s;
   // p: 1 uJ, 10 ns at 1 kHz at 1064 nm over 10 s (rule 3 governs: 2e-2 x (1e4)^-0.25 = 2e-3 J/m² per pulse).
-  const r = once(room([cw('g', 532, 1e-4), cw('ir', 1064, 1e-3), pulsed('p', 1064, 1e-6, 1000)]));
+  const r = inCase(room([cw('g', 532, 1e-4), cw('ir', 1064, 1e-3), pulsed('p', 1064, 1e-6, 1000)]));
   const eyeSum = (1e-4 * 0.25 * A7) / (18 * 0.25 ** 0.75) + (1e-3 * 10 * A7) / (10 * 5 * 10) + (1e-6 * A7) / (2e-2 * 1e4 ** -0.25);
   const skinLimit10s = (CA: number): number => 1.1e4 * CA * 10 ** 0.25;
   const skinSum = (1e-4 * 10 * A35) / skinLimit10s(1) + (1e-3 * 10 * A35) / skinLimit10s(5) + (1e-6 * A35) / (skinLimit10s(5) / 1e4);
@@ -90,7 +92,7 @@ describe('green CW, 1064 nm CW and a 1064 nm pulse train at one path (icnirp2013
 describe('a blue CW beam and a blue pulse train over 100 s: the train counts in the photochemical group through rule 2', () => {
   // c: 1 uW at 450 nm; p: 1 nJ, 10 ns at 1 kHz at 450 nm (rule 3: 2e-3 x (1e4)^-0.25 = 2e-4 J/m² per
   // pulse). One 10 ns pulse has no photochemical row (those start at 10 s); the train over 100 s has.
-  const r = once(room([cw('c', 450, 1e-6, 100), pulsed('p', 450, 1e-9, 1000, 100)]));
+  const r = inCase(room([cw('c', 450, 1e-6, 100), pulsed('p', 450, 1e-9, 1000, 100)]));
   const perPulse = 2e-3 * 1e4 ** -0.25;
   it.each([
     { effect: 'eye, retina, thermal', sum: (1e-6 * 100 * A7) / (10 * 100) + (1e-9 * A7) / perPulse, source: 'H-E-VIS-5p, H-E-VIS-3 with C_P (exposure-limits.md 4.2, 4.6)' },
@@ -111,7 +113,7 @@ describe('a blue CW beam and a blue pulse train over 100 s: the train counts in 
 describe('one 1064 nm pulse, a 1064 nm CW beam over 1 s and a CO2 beam at one path', () => {
   // s: one 1 uJ, 10 ns pulse (no rule 2: a single pulse); q: 0.1 mW over 1 s; co2: 1 mW at 10.6 um over
   // the default 10 s, alone in the cornea group.
-  const r = once(room([pulsed('s', 1064, 1e-6), cw('q', 1064, 1e-4, 1), cw('co2', 10600, 1e-3)]));
+  const r = inCase(room([pulsed('s', 1064, 1e-6), cw('q', 1064, 1e-4, 1), cw('co2', 10600, 1e-3)]));
   it('the retinal thermal sum exceeds 1 while the cornea group is within: the largest sum is reported above 1 [H-E-NIR2-3, H-E-NIR2-4]', () => {
     const g = group(r(), 'eye', 'eye, retina, thermal');
     expect(g?.beamIds).toEqual(['s', 'q']);

@@ -45,3 +45,33 @@ describe('entries replaced in conservative mode are named', () => {
     expect(m.conservativeReplacements).toContain(entry);
   });
 });
+
+describe('a conservative alternative equal to the row is not a replacement', () => {
+  it('355 nm, exactly 1000 s: 10 W/m² x 1000 s = 1e4 J/m² = the alternative 1e4/t x t; nothing named as replaced [H-S-UVA-long (exposure-limits.md 4.3)]', () => {
+    const r = evaluateBeam(beam(355, 1000));
+    expect(rel(r.skinMpe.H_Jm2, 1e4)).toBeLessThan(1e-9);
+    expect(r.skinMpe.conservativeReplacements).toEqual([]);
+  });
+});
+
+// The "not to exceed" 1000 W/m² on the 700-1400 nm extended-source rows (EU Table 2.3 note, from
+// memory; exposure-limits.md errata): part of the EU rows; applied to the ICNIRP 2013 set in
+// conservative mode only (the stricter EU value, not read for that set). 1064 nm, 100 s:
+// alpha = 100 mrad: T2 = 10 x 10^((100 - 1.5)/98.5) = 100 s, so t <= T2 and 90 t^0.75 C_C C_E with
+// C_E = alpha/alpha_min = 100/1.5 (H-E-NIR2-5x) gives 1897 W/m²; alpha = 20 mrad: t > T2 = 15.4 s,
+// 18 C_A C_C C_E T2^-0.25 (H-E-NIR2-6x) gives 605.7 W/m², below the cap (exposure-limits.md 4.1, 4.2).
+describe('the 1000 W/m² cap on extended sources at 1064 nm, 100 s', () => {
+  const T2 = (alpha_mrad: number): number => 10 * 10 ** ((alpha_mrad - 1.5) / 98.5);
+  const uncapped100 = (90 * 100 ** 0.75 * (100 / 1.5)) / 100;
+  const row20 = 18 * 5 * (20 / 1.5) * T2(20) ** -0.25;
+  it.each([
+    { ruleSet: 'icnirp2013', conservative: true, alpha: 0.1, E: 1000, replaced: ['H-E-NIR2-5x'], why: 'capped in conservative mode, and named as replaced' },
+    { ruleSet: 'icnirp2013', conservative: false, alpha: 0.1, E: uncapped100, replaced: [], why: 'not capped without conservative mode' },
+    { ruleSet: 'eu2006', conservative: false, alpha: 0.1, E: 1000, replaced: [], why: 'capped by the EU row itself, also without conservative mode; not a replacement' },
+    { ruleSet: 'eu2006', conservative: true, alpha: 0.02, E: row20, replaced: [], why: 'a row below the cap keeps its value' },
+  ] as const)('$ruleSet, conservative $conservative, $alpha rad: $E W/m² ($why)', ({ ruleSet, conservative, alpha, E, replaced }) => {
+    const r = evaluateBeam({ ...beam(1064, 100), ruleSet, sourceAngle_rad: alpha, settings: { conservative } });
+    expect(rel(r.mpe.H_Jm2, E * 100)).toBeLessThan(1e-9);
+    expect(r.mpe.conservativeReplacements).toEqual(replaced);
+  });
+});
