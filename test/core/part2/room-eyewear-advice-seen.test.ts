@@ -11,6 +11,9 @@
 //   1064 nm 1 W over the default 10 s: 10 C_A C_C = 50 W/m² (C_A = 5, C_C = 1; ICNIRP 2013 Table 5,
 //     from memory): OD log10(25 984 / 50) = 2.716 -> 2.8; D LB6; no RB (EN 208 covers 400-700 nm).
 //   1064 nm 1 uW: below the limit, OD 0.
+//   633 nm 0.9 mW over 100 s: 23.39 W/m² against 18 T2^-0.25 = 10.12 W/m² (T2 = 10 s; ICNIRP 2013
+//     Table 5, from memory): OD log10(2.31) = 0.364 -> 0.4; D LB3 (1146 W/m²); at or below the Class 2
+//     level, so RB0: no alignment rating is named (EN 208:2009 section 1, ours: RB0 is no requirement).
 // Eyewear invented.
 import { describe, expect, it } from 'vitest';
 import { evaluateRoom, type BeamInput, type EyewearSpec } from '../../../core/index.js';
@@ -21,8 +24,9 @@ const g = cw('g', 532, 1);
 const g5 = cw('g5', 532, 5);
 const ir = cw('ir', 1064, 1);
 const weak = cw('weak', 1064, 1e-6);
+const dim: BeamInput = { ...cw('dim', 633, 9e-4), exposureDuration_s: 100 };
 const odAt = (id: string, from_nm: number, to_nm: number, od: number, extra: Partial<EyewearSpec> = {}): EyewearSpec => ({ id, label: `Goggles ${id}`, od: [{ from_nm, to_nm, od }], ...extra });
-const advice = (beams: BeamInput[], eyewear?: EyewearSpec[]): string[] => evaluateRoom({ lasers: [{ id: 'A', name: 'Laser A', beams }], ...(eyewear ? { eyewear } : {}) }).purchaseAdvice;
+const advice = (beams: BeamInput[], eyewear?: EyewearSpec[]): readonly string[] => evaluateRoom({ lasers: [{ id: 'A', name: 'Laser A', beams }], ...(eyewear ? { eyewear } : {}) }).purchaseAdvice;
 
 describe('eyewear needed per wavelength', () => {
   it('the highest OD and scale numbers per wavelength, shortest wavelength first, whatever the order of the beams', () => {
@@ -41,11 +45,18 @@ describe('purchase advice', () => {
   it.each([
     ['every beam below its limit: none needed, whatever the shelf', [weak], [odAt('E', 190, 1100, 1)], [OK]],
     ['nothing on the shelf: what each beam needs', [g, weak], undefined, ['No eyewear is listed for this room. It needs, per beam:', '532 nm CW (532 nm): OD ≥ 3.1, D LB6, RB3 (alignment).']],
+    ['nothing on the shelf, a beam needing no alignment rating: no RB named', [dim], undefined, ['No eyewear is listed for this room. It needs, per beam:', '633 nm CW (633 nm): OD ≥ 0.4, D LB3.']],
     ['one pair covers both beams', [g, ir], [odAt('E', 500, 1100, 4)], ['Eyewear covering every beam: E.']],
     [
       'one pair covers both beams, transmitting 15 % of visible light: the room lighting is named',
       [g, ir],
       [odAt('E', 500, 1100, 4, { visibleTransmission: 0.15 })],
+      ['Eyewear covering every beam: E.', 'Goggles E transmits 15 % of visible light: check the room lighting (dark eyewear is the usual reason eyewear is not worn).'],
+    ],
+    [
+      'of two pairs on the shelf only the second covers both beams: only it is named, with its own transmission',
+      [g, ir],
+      [odAt('G', 500, 560, 5, { visibleTransmission: 0.1 }), odAt('E', 500, 1100, 4, { visibleTransmission: 0.15 })],
       ['Eyewear covering every beam: E.', 'Goggles E transmits 15 % of visible light: check the room lighting (dark eyewear is the usual reason eyewear is not worn).'],
     ],
     ['one pair covers both beams, transmitting 20 %: no remark (ours: below 20 %)', [g, ir], [odAt('E', 500, 1100, 4, { visibleTransmission: 0.2 })], ['Eyewear covering every beam: E.']],
