@@ -132,6 +132,10 @@ describe('accepted at the edges of each range', () => {
     expect(evaluateRoom({ lasers: [{ id: 'A', name: 'Laser A', beams: [b('a1')] }] }).ruleSet).toBe('icnirp2013');
     expect(evaluateRoom({ ruleSet: 'eu2006', lasers: [{ id: 'A', name: 'Laser A', beams: [b('a1')] }] }).ruleSet).toBe('eu2006');
   });
+  it('eyewear with empty lists of OD bands and markings is accepted: it protects at no wavelength', () => {
+    const r = evaluateRoom({ lasers: [{ id: 'A', name: 'Laser A', beams: [b('a1')] }], eyewear: [{ id: 'E', label: 'Goggles E', od: [], en207: [], en208: [] }] });
+    expect(r.coverage.map((v) => [v.eyewearId, v.odMargin])).toEqual([['E', null]]);
+  });
   it('no eyewear and no places listed: an empty shelf, the default places', () => {
     const r = evaluateRoom({ lasers: [{ id: 'A', name: 'Laser A', beams: [b('a1'), b('a2')] }], eyewear: [], exposurePlaces: [] });
     expect(r.coverage).toEqual([]);
