@@ -21,6 +21,7 @@ export function coverageMatrix(beams: readonly BeamResult[], eyewear: readonly E
   const keys = eyewear.map((ew) => JSON.stringify(ew));
   for (const b of beams) {
     let m = verdictMemo.get(b);
+    // Stryker disable next-line ConditionalExpression: equivalent, a fresh memo only recomputes the same verdict (speed, npm run bench)
     if (!m) {
       m = new Map<string, EyewearVerdict>();
       verdictMemo.set(b, m);
@@ -28,6 +29,7 @@ export function coverageMatrix(beams: readonly BeamResult[], eyewear: readonly E
     eyewear.forEach((ew, k) => {
       const key = keys[k] as string;
       let v = m.get(key);
+      // Stryker disable next-line ConditionalExpression: equivalent, the verdict is recomputed from the same beam need and eyewear (speed only)
       if (!v) {
         v = eyewearVerdict(needOf(b), ew);
         m.set(key, v);
@@ -39,6 +41,7 @@ export function coverageMatrix(beams: readonly BeamResult[], eyewear: readonly E
 }
 
 export function coveringAll(beams: readonly BeamResult[], eyewear: readonly EyewearSpec[], matrix: readonly EyewearVerdict[]): string[] {
+  // Stryker disable next-line ConditionalExpression,ArrayDeclaration: equivalent, unreachable: a room has at least one laser with at least one beam (validateRoomShape refuses 'lasers' and 'lasers[i].beams' empty)
   if (beams.length === 0) return [];
   return eyewear.filter((ew) => matrix.filter((v) => v.eyewearId === ew.id).every((v) => v.adequate)).map((ew) => ew.id);
 }
