@@ -4,17 +4,9 @@
 // input-rule table (core/model/input-rules.ts, ours, citing the limit tables' coverage where that sets
 // them: 180 nm to 1 mm, 1e-13 s to 30 000 s); the single-mode fibre rule is domain notes 1.6.
 import { describe, expect, it } from 'vitest';
-import { evaluateBeam, evaluateRoom, InputError, type BeamInput, type RoomInput } from '../../core/index.js';
+import { evaluateBeam, evaluateRoom, type BeamInput, type RoomInput } from '../../core/index.js';
+import { refusal } from './refusal.js';
 
-function refusal(f: () => unknown): InputError {
-  try {
-    f();
-  } catch (e) {
-    if (e instanceof InputError) return e;
-    throw new Error(`expected an InputError, got ${String(e)}`);
-  }
-  throw new Error('expected an InputError, nothing was thrown');
-}
 
 const cw: BeamInput = { wavelength_nm: 532, emission: { kind: 'cw', power_W: 0.001 }, beam: { diameter_m: 0.001, divergence_rad: 0.001, definition: '1/e' } };
 const pulsed: BeamInput = { ...cw, emission: { kind: 'pulsed', pulseEnergy_J: 1e-6, pulseDuration_s: 1e-3 } };

@@ -6,21 +6,12 @@ import { describe, expect, it } from 'vitest';
 import {
   additiveFractions,
   exposureLimit,
-  InputError,
   pulsedExposureLimit,
   type ExposureLimitQuery,
   type PulsedLimitQuery,
 } from '../../core/index.js';
+import { refusal } from './refusal.js';
 
-function thrown(f: () => unknown): InputError {
-  try {
-    f();
-  } catch (e) {
-    if (e instanceof InputError) return e;
-    throw new Error(`expected InputError, got ${String(e)}`);
-  }
-  throw new Error('expected InputError, nothing was thrown');
-}
 
 const OK: ExposureLimitQuery = { tissue: 'eye', wavelength_nm: 532, duration_s: 0.25 };
 
@@ -44,7 +35,7 @@ const LIMIT_CASES: ReadonlyArray<{ why: string; q: Record<string, unknown>; fiel
 
 describe('exposureLimit: each bad input names its field', () => {
   it.each(LIMIT_CASES)('$why -> $field ($code)', ({ q, field, code }) => {
-    const e = thrown(() => exposureLimit(q as unknown as ExposureLimitQuery));
+    const e = refusal(() => exposureLimit(q as unknown as ExposureLimitQuery));
     expect(e.field).toBe(field);
     expect(e.code).toBe(code);
     expect(e.message).toContain(field);
@@ -83,7 +74,7 @@ const PULSE_CASES: ReadonlyArray<{ why: string; q: Record<string, unknown>; fiel
 
 describe('pulsedExposureLimit: each bad input names its field', () => {
   it.each(PULSE_CASES)('$why -> $field ($code)', ({ q, field, code }) => {
-    const e = thrown(() => pulsedExposureLimit(q as unknown as PulsedLimitQuery));
+    const e = refusal(() => pulsedExposureLimit(q as unknown as PulsedLimitQuery));
     expect(e.field).toBe(field);
     expect(e.code).toBe(code);
   });
@@ -100,7 +91,7 @@ describe('additiveFractions: bad input names its field', () => {
     { why: 'NaN exposure', items: (limit: Limit): unknown[] => [{ label: 'a', H_Jm2: Number.NaN, limit }], field: 'items[0].H_Jm2', code: 'not_finite' },
   ])('$why -> $field ($code)', ({ items, field, code }) => {
     const limit = exposureLimit({ tissue: 'eye', wavelength_nm: 532, duration_s: 10 });
-    const e = thrown(() => additiveFractions(items(limit) as never));
+    const e = refusal(() => additiveFractions(items(limit) as never));
     expect(e.field).toBe(field);
     expect(e.code).toBe(code);
   });

@@ -8,21 +8,13 @@
  * published source. The officer's words are checked too (no path reaches the screen).
  */
 import { describe, expect, it } from 'vitest';
-import { evaluateBeam, evaluateRoom, InputError, type BeamInput, type RoomInput } from '../../core/index.js';
+import { evaluateBeam, evaluateRoom, type BeamInput, type RoomInput } from '../../core/index.js';
 import { officerWords } from '../../core/model/input-words.js';
+import { refusal } from './refusal.js';
 
 const BEAM: BeamInput = { wavelength_nm: 532, emission: { kind: 'cw', power_W: 0.005 }, beam: { diameter_m: 0.002, divergence_rad: 0.001, definition: '1/e' } };
 const CHECK = { key: 'H-E-VIS-4', verdict: 'matches', checkId: 'c1', reference: 'IEC 60825-1:2014 Table A.1', checkedBy: 'Dr. Imre Calloway-Senn', checkedOn: '2026-12-02' };
 
-function refusal(f: () => unknown): InputError {
-  try {
-    f();
-  } catch (e) {
-    if (e instanceof InputError) return e;
-    throw e;
-  }
-  throw new Error('expected an InputError, nothing was thrown');
-}
 
 const CASES: ReadonlyArray<{ why: string; settings: unknown; field: string; code: string; words: RegExp }> = [
   { why: 'settings not an object', settings: 'conservative', field: 'settings', code: 'missing', words: /^Limit settings is needed/ },

@@ -7,17 +7,9 @@
 // IEC 60825-1:2014 (1, 1M, 2, 2M, 3R, 3B, 4). Uniqueness of ids and one place per beam: ours (a beam
 // in two places would be counted in two sums; SAFETY.md "Additive rule by place").
 import { describe, expect, it } from 'vitest';
-import { evaluateRoom, InputError, type BeamInput, type RoomInput } from '../../../core/index.js';
+import { evaluateRoom, type BeamInput, type RoomInput } from '../../../core/index.js';
+import { refusal } from '../refusal.js';
 
-function refusal(f: () => unknown): InputError {
-  try {
-    f();
-  } catch (e) {
-    if (e instanceof InputError) return e;
-    throw new Error(`expected an InputError, got ${String(e)}`);
-  }
-  throw new Error('expected an InputError, nothing was thrown');
-}
 
 type Loose = Record<string, unknown>;
 const cw = (id?: string, extra: Loose = {}): Loose => ({ ...(id === undefined ? {} : { id }), wavelength_nm: 532, emission: { kind: 'cw', power_W: 0.001 }, beam: { diameter_m: 0.001, divergence_rad: 0.001, definition: '1/e' }, ...extra });

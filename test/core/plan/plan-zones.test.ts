@@ -4,25 +4,14 @@
 // → (0.01581 − 0.001)/0.001 = 14.81 m, reported 14.9 m (rounded up, 3 figures).
 import { describe, expect, it } from 'vitest';
 import { evaluateRoom, InputError, type BeamInput, type PlanFinding, type RoomInput, type RoomPlan } from '../../../core/index.js';
+import { beamA, eastDoorRoom, p } from './east-door-room.js';
 
-const beamA: BeamInput = { id: 'a', label: 'beam A', wavelength_nm: 633, emission: { kind: 'cw', power_W: 0.005 }, beam: { diameter_m: 0.001, divergence_rad: 0.001, definition: '1/e' }, viewing: { diffuse: { reflectance: 0.1 } } };
 // Its diffuse NHZ at ρ = 0.1 is √(0.1·0.005/(π·25.46)) = 2.5 mm (domain notes 1.4).
 // Beam B: 5 W CW at 532 nm, diffuse reflectance 1 at normal view: for accidental viewing (0.25 s) NHZ = √(ρ·P/(π·E_L)) = √(5/(π·25.46)) = 0.250 m (domain notes 1.4); the core also weighs deliberate viewing of the spot (domain errata), which can only make it larger.
 const beamB: BeamInput = { id: 'b', label: 'beam B', wavelength_nm: 532, emission: { kind: 'cw', power_W: 5 }, beam: { diameter_m: 0.0023, divergence_rad: 0.0004, definition: '1/e2' }, viewing: { diffuse: { reflectance: 1 } } };
 
-const p = (x_m: number, y_m: number) => ({ x_m, y_m });
-/** An 8 m × 5 m room, door D1 in the east wall at y 1–2, window W1 in the north wall at x 5–6. */
-const emptyPlan: RoomPlan = {
-  outline: [p(0, 0), p(8, 0), p(8, 5), p(0, 5)],
-  doors: [{ id: 'D1', label: 'D1', a: p(8, 1), b: p(8, 2) }],
-  windows: [{ id: 'W1', label: 'W1', a: p(5, 5), b: p(6, 5) }],
-  walls: [],
-  barriers: [],
-  workPositions: [],
-  enclosures: [],
-  paths: [],
-  reflectionPoints: [],
-};
+/** The shared 8 m × 5 m room with door D1 in the east wall at y 1–2, and window W1 in the north wall at x 5–6. */
+const emptyPlan: RoomPlan = { ...eastDoorRoom, windows: [{ id: 'W1', label: 'W1', a: p(5, 5), b: p(6, 5) }] };
 
 function room(beam: BeamInput, plan: Partial<RoomPlan>): RoomInput {
   return { lasers: [{ id: 'L1', name: 'Laser 1', beams: [beam] }], plan: { ...emptyPlan, ...plan } };
