@@ -207,12 +207,15 @@ function evaluateRow(ctx: Ctx, row: LimitRow, tableTissue: Tissue, apertureTissu
       checked = { check: rowCheck, documentUsed: false };
     }
   }
-  // A less strict reading of an uncertain row: kept aside until the row is verified with it.
+  // A less strict reading of an uncertain row: kept aside until the row is verified with it. A row
+  // that also carries a check is not switched to it: the check states what the published text gives
+  // ('matches': the row as written; 'differs': the lower of the two), and a limit above that is not
+  // used, whatever the verified list says (SAFETY.md "Checks of the limit tables").
   let relaxed: LimitCandidate['relaxed'];
   if (row.relaxed_alt && condition(row.relaxed_alt.when, vars)) {
     const alt = toH(evaluate(row.relaxed_alt.expr, vars));
     if (alt.gt(H)) {
-      const used = (ctx.settings?.verifiedRows ?? []).includes(row.id);
+      const used = rowCheck === undefined && (ctx.settings?.verifiedRows ?? []).includes(row.id);
       relaxed = { used, H_Jm2: recordString(alt), expr: row.relaxed_alt.expr, source: row.relaxed_alt.source, keptH_Jm2: recordString(H) };
       if (used) {
         H = alt;
@@ -419,7 +422,9 @@ export function exposureLimit(q: ExposureLimitQuery): ExposureLimitResult {
         (c.relaxed
           ? c.relaxed.used
             ? `; checked with the alternative reading ${c.relaxed.expr}: H = ${fmt(new Dec(c.relaxed.H_Jm2))} J/m² used instead of ${fmt(new Dec(c.relaxed.keptH_Jm2))} J/m²`
-            : `; unchecked entry: alternative reading ${c.relaxed.expr} = ${fmt(new Dec(c.relaxed.H_Jm2))} J/m² not used, the stricter ${fmt(new Dec(c.relaxed.keptH_Jm2))} J/m² is kept until the row is checked`
+            : c.check
+              ? `; alternative reading ${c.relaxed.expr} = ${fmt(new Dec(c.relaxed.H_Jm2))} J/m² not used: the row's check against the published document governs`
+              : `; unchecked entry: alternative reading ${c.relaxed.expr} = ${fmt(new Dec(c.relaxed.H_Jm2))} J/m² not used, the stricter ${fmt(new Dec(c.relaxed.keptH_Jm2))} J/m² is kept until the row is checked`
           : '') +
         (c.factorsFromBelow ? '; factors taken from the piece ending at this exact edge, which gives the lower value (EU Table 2.2 note a)' : '') +
         (c.cap
@@ -442,7 +447,7 @@ export function exposureLimit(q: ExposureLimitQuery): ExposureLimitResult {
       addStep(trace, { kind: 'warning', label: `Checked factor differs (row ${c.rowId})`, detail: `${entryWords(f.key)} was checked against ${f.reference} by ${f.checkedBy} on ${f.checkedOn}, and the published text differs: it gives ${f.documentExpr ?? ''}; row ${c.rowId} is evaluated with both and the lower limit is kept` });
     }
     if (c.cap) addStep(trace, { kind: c.cap.conservative ? 'conservative' : 'row', label: `Cap on row ${c.rowId}`, detail: `the limit is not to exceed ${c.cap.E_Wm2} W/m² (Table 2.3 note)`, source: c.cap.source, confidence: c.cap.confidence });
-    if (c.relaxed) addStep(trace, { kind: 'note', label: `Alternative reading of row ${c.rowId}`, detail: `older editions give ${c.relaxed.expr} J/m² here (10 W/m²); ${c.relaxed.used ? 'used: the row was checked with that reading' : 'not used until the row is checked with that reading'}`, source: c.relaxed.source, confidence: 'from memory, uncertain' });
+    if (c.relaxed) addStep(trace, { kind: 'note', label: `Alternative reading of row ${c.rowId}`, detail: `older editions give ${c.relaxed.expr} J/m² here (10 W/m²); ${c.relaxed.used ? 'used: the row was checked with that reading' : c.check ? "not used: the row's check against the published document governs" : 'not used until the row is checked with that reading'}`, source: c.relaxed.source, confidence: 'from memory, uncertain' });
   }
   if (candidates.length > 1) {
     addStep(trace, {

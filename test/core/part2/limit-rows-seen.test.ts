@@ -34,6 +34,19 @@ describe('rows just beside a band or duration edge do not apply', () => {
   });
 });
 
+// The edge tolerance is relative to the larger of the two values (core/limits/intervals.ts, ours): a
+// duration given as 9.99999999 s lies exactly 1e-9 x 10 s below the 10 s edge, so it is ON the edge
+// and both rows apply, the lower governing (EU Table 2.2 note a, read). Relative to the smaller value
+// (9.99999999 x 1e-9) the same point would fall just outside and the higher row alone would be shown.
+describe('a duration exactly 1e-9 (relative) short of an edge is on it', () => {
+  it('1064 nm, 9.99999999 s: both rows apply, the 10 s row 10 C_A C_C W/m² x t = 499.999999995 J/m² governs, not 90 t^0.75 = 506.1 J/m² [H-E-NIR2-4, H-E-NIR2-5p (exposure-limits.md 4.2); EU Table 2.2 note a]', () => {
+    const t = 9.99999999;
+    const r = evaluateBeam(beam(1064, t));
+    expect(rel(r.mpe.H_Jm2, 50 * t)).toBeLessThan(1e-12);
+    expect(r.mpe.governingRow).toBe('H-E-NIR2-5p');
+  });
+});
+
 describe('entries replaced in conservative mode are named', () => {
   it.each([
     { name: '1300 nm, 10 s: C_C = 8 (the stricter value) named as a replaced factor; eye limit 10 x 5 x 8 W/m² x 10 s', lambda: 1300, t: 10, tissue: 'eye', H: 4000, entry: 'factor:CC', source: 'H-E-NIR2-5p, C_C conservative alternative (exposure-limits.md 4.1, 4.2)' },

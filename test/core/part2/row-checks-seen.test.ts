@@ -1,0 +1,141 @@
+// The officer's checks of a limit-table row, a row's less strict alternative reading, and the words of
+// a row's derivation line, as the officer sees them through evaluateBeam: the eye limit, the entries
+// conservative mode replaced, the warnings on the result and the derivation printed with the report.
+// SAFETY.md "Checks of the limit tables": 'matches' uses the row as written; 'differs' keeps the lower
+// of the published value and the row, and a check never raises a limit above the value as written.
+// Sources of the values (arithmetic derived by hand):
+//  - 532 nm, 0.25 s, point source: H = 18 t^0.75 C_E J/m², C_E = 1 (EU Directive 2006/25/EC Table 2.2,
+//    read; the icnirp2013 row H-E-VIS-4 the same, from memory): 18 x 0.25^0.75 = 6.364 J/m².
+//  - 355 nm, eye, 10 s to 30 000 s: H = 1e4 J/m² (row H-E-UVA-long, ICNIRP 2013 / IEC 60825-1:2014,
+//    from memory, uncertain); older editions give E = 10 W/m² from 1000 s (its alternative reading,
+//    from memory): 10 x 2000 = 2e4 J/m² at 2000 s, used only once a named person verified the row.
+//  - 1064 nm, 100 s, point source: E = 10 C_A C_C W/m², C_A = 5, C_C = 1 (EU Table 2.3 and 2.5, read):
+//    50 W/m², H = E t = 5000 J/m².
+//  - 440 nm, 10 s, 50 mrad source: the photochemical row 100 C_B J/m² (C_B = 1 at 400-450 nm, EU
+//    Table 2.3 and 2.5, read) measured within gamma_p = 11 mrad (10-100 s, EU Table 2.5, read); a
+//    uniform source larger than gamma_p raises it by (alpha/gamma_p)^2 = (50/11)^2 = 20.66 (derived;
+//    limit specification sections 4.2 and 8): 2066 J/m².
+import { describe, expect, it } from 'vitest';
+import { allSteps, evaluateBeam, type BeamInput, type RowCheck, type TraceStep } from '../../../core/index.js';
+
+type Settings = NonNullable<BeamInput['settings']>;
+const rowCheck = (key: string, verdict: 'matches' | 'differs', documentExpr?: string): RowCheck => ({
+  key,
+  verdict,
+  ...(documentExpr !== undefined ? { documentExpr } : {}),
+  checkId: 'c11',
+  reference: 'IEC 60825-1:2014 Table A.1',
+  checkedBy: 'Dr. Imre Calloway-Senn',
+  checkedOn: '2026-11-30',
+});
+const cw = (wavelength_nm: number, exposureDuration_s: number, settings?: Settings, sourceAngle_rad?: number): BeamInput => ({
+  ruleSet: 'icnirp2013',
+  wavelength_nm,
+  exposureDuration_s,
+  emission: { kind: 'cw', power_W: 1e-3 },
+  beam: { diameter_m: 0.001, divergence_rad: 0.001, definition: '1/e' },
+  ...(settings ? { settings } : {}),
+  ...(sourceAngle_rad !== undefined ? { sourceAngle_rad } : {}),
+});
+const rel = (got: string, want: number): number => Math.abs(Number(got) / want - 1);
+/** The steps of the eye limit's derivation (the eye's part of the beam's trace). */
+const eyeSteps = (r: ReturnType<typeof evaluateBeam>): TraceStep[] => {
+  const eye = r.trace.children[0];
+  if (!eye) throw new Error('the beam result has no eye derivation');
+  return allSteps(eye);
+};
+const step = (r: ReturnType<typeof evaluateBeam>, label: string): TraceStep | undefined => eyeSteps(r).find((s) => s.label === label || s.label.startsWith(`${label} (`));
+const limitTableWarnings = (r: ReturnType<typeof evaluateBeam>): string[] => r.warnings.filter((w) => w.startsWith('Limit-table '));
+
+describe('a row checked against the published document (532 nm, 0.25 s: the row as written gives 6.364 J/m²)', () => {
+  const asWritten = 18 * 0.25 ** 0.75;
+  it.each([
+    { name: 'no check: the row as written, nothing flagged', check: undefined, H: asWritten, derivation: 'H = 18*t^0.75*CE = ', warning: undefined },
+    { name: '"differs", the document gives 5 J/m²: the lower 5 J/m² is used and its value shown in the derivation', check: rowCheck('H-E-VIS-4', 'differs', '5'), H: 5, derivation: 'H = 5 = 5', warning: 'it gives 5 (H = 5 J/m² here); that is lower and is used' },
+    { name: '"differs", the document gives 100 J/m²: the value as written is lower and is kept (a check never raises a limit)', check: rowCheck('H-E-VIS-4', 'differs', '100'), H: asWritten, derivation: 'H = 18*t^0.75*CE = ', warning: 'it gives 100 (H = 100 J/m² here); the value as written is lower and is kept' },
+  ])('$name [SAFETY.md "Checks of the limit tables"; EU Table 2.2]', ({ check, H, derivation, warning }) => {
+    const r = evaluateBeam(cw(532, 0.25, check ? { rowChecks: [check] } : undefined));
+    expect(rel(r.mpe.H_Jm2, H)).toBeLessThan(1e-12);
+    expect(r.mpe.governingRow).toBe('H-E-VIS-4');
+    expect(step(r, 'Row H-E-VIS-4')?.detail.startsWith(derivation)).toBe(true);
+    const flagged = limitTableWarnings(r);
+    if (warning === undefined) expect(flagged).toEqual([]);
+    else {
+      expect(flagged).toHaveLength(1);
+      expect(flagged[0]).toContain(warning);
+    }
+  });
+  it('"matches": the row as written (6.364 J/m²), no warning, and the derivation names the check and its signer [SAFETY.md "Checks of the limit tables"]', () => {
+    const r = evaluateBeam(cw(532, 0.25, { rowChecks: [rowCheck('H-E-VIS-4', 'matches')] }));
+    expect(rel(r.mpe.H_Jm2, asWritten)).toBeLessThan(1e-12);
+    expect(limitTableWarnings(r)).toEqual([]);
+    const note = step(r, 'Checked row H-E-VIS-4');
+    expect(note?.kind).toBe('note');
+    expect(note?.detail).toBe('checked against IEC 60825-1:2014 Table A.1 by Dr. Imre Calloway-Senn on 2026-11-30: matches the published text; the row is used as written');
+  });
+});
+
+describe('the alternative reading of the UV-A eye row over 1000 s (355 nm, 2000 s)', () => {
+  it.each([
+    { name: 'unverified: the stricter 1e4 J/m² is kept and named as replaced', settings: undefined, H: 1e4, replaced: true, line: 'H = 1e4 = 1e4; unchecked entry', note: 'not used until the row is checked with that reading' },
+    { name: 'verified by a named person: the older reading 10 W/m² x 2000 s = 2e4 J/m²', settings: { verifiedRows: ['H-E-UVA-long'] }, H: 2e4, replaced: false, line: 'H = 10*t = 10*(2000); checked with the alternative reading', note: 'used: the row was checked with that reading' },
+    { name: 'conservative mode off: the row as remembered, 1e4 J/m², nothing named as replaced', settings: { conservative: false }, H: 1e4, replaced: false, line: 'H = 1e4 = 1e4; unchecked entry', note: 'not used until the row is checked with that reading' },
+  ])('$name [H-E-UVA-long and its alternative reading, from memory]', ({ settings, H, replaced, line, note }) => {
+    const r = evaluateBeam(cw(355, 2000, settings));
+    expect(rel(r.mpe.H_Jm2, H)).toBeLessThan(1e-12);
+    expect(r.mpe.conservativeReplacements.includes('H-E-UVA-long')).toBe(replaced);
+    expect(step(r, 'Row H-E-UVA-long')?.detail.startsWith(line)).toBe(true);
+    expect(step(r, 'Alternative reading of row H-E-UVA-long')?.detail).toBe(`older editions give 10*t J/m² here (10 W/m²); ${note}`);
+  });
+  it('600 s, the row checked as differing with 5e3 J/m²: 5e3 J/m², and no alternative reading offered (it starts at 1000 s) [H-E-UVA-long; SAFETY.md "Checks of the limit tables"]', () => {
+    const r = evaluateBeam(cw(355, 600, { rowChecks: [rowCheck('H-E-UVA-long', 'differs', '5e3')] }));
+    expect(rel(r.mpe.H_Jm2, 5e3)).toBeLessThan(1e-12);
+    expect(step(r, 'Alternative reading of row H-E-UVA-long')).toBeUndefined();
+  });
+});
+
+// DEFECT fixed in this session (unsafe direction): a row both listed as verified (its older, less
+// strict reading used) and checked against the published document took the alternative reading even
+// where the officer's document gives a lower value: 2e4 J/m² was shown where the document gives
+// 5e3 J/m² (4x), under a warning saying the document's value "is lower and is used". A check states
+// what the published text gives, so the limit never exceeds it (SAFETY.md: 'matches' uses the row as
+// written, 'differs' the lower of the two; a check never selects the alternative reading).
+describe('a verified row that also carries a check: the check governs, never the alternative reading (355 nm, 2000 s)', () => {
+  it.each([
+    { name: '"differs", the document gives 5e3 J/m²: 5e3 J/m², not the alternative 2e4', check: rowCheck('H-E-UVA-long', 'differs', '5e3'), H: 5e3 },
+    { name: '"differs", the document gives 1.5e4 J/m²: the value as written, 1e4 J/m², is the lower and is kept', check: rowCheck('H-E-UVA-long', 'differs', '1.5e4'), H: 1e4 },
+    { name: '"matches": the row as written, 1e4 J/m²', check: rowCheck('H-E-UVA-long', 'matches'), H: 1e4 },
+  ])('$name [SAFETY.md "Checks of the limit tables"; H-E-UVA-long]', ({ check, H }) => {
+    const r = evaluateBeam(cw(355, 2000, { verifiedRows: ['H-E-UVA-long'], rowChecks: [check] }));
+    expect(rel(r.mpe.H_Jm2, H)).toBeLessThan(1e-12);
+    expect(step(r, 'Alternative reading of row H-E-UVA-long')?.detail).toBe("older editions give 10*t J/m² here (10 W/m²); not used: the row's check against the published document governs");
+    expect(step(r, 'Row H-E-UVA-long')?.detail).toContain("alternative reading 10*t = 20000 J/m² not used: the row's check against the published document governs");
+  });
+});
+
+describe("a row's derivation line says which quantity the table gives", () => {
+  it.each([
+    { name: '1064 nm, 100 s: an irradiance row, E = 10 C_A C_C = 50 W/m², then H = E t = 5000 J/m²', lambda: 1064, t: 100, row: 'H-E-NIR2-5p', H: 5000, line: 'E = 10*CA*CC = 10*(5)*(1), H = E * t', source: 'EU Table 2.3 and 2.5' },
+    { name: '532 nm, 0.25 s: a radiant-exposure row, H = 18 t^0.75 C_E = 6.364 J/m², no conversion', lambda: 532, t: 0.25, row: 'H-E-VIS-4', H: 18 * 0.25 ** 0.75, line: 'H = 18*t^0.75*CE = 18*(0.25)^0.75*(1)', source: 'EU Table 2.2' },
+  ])('$name [$source]', ({ lambda, t, row, H, line }) => {
+    const r = evaluateBeam(cw(lambda, t));
+    expect(rel(r.mpe.H_Jm2, H)).toBeLessThan(1e-12);
+    expect(step(r, `Row ${row}`)?.detail).toBe(line);
+  });
+});
+
+describe('the field of view of the photochemical row in the derivation (440 nm, 10 s)', () => {
+  it('50 mrad source: 100 C_B x (50/11)^2 = 2066 J/m², the factor 20.6612 and gamma_p = 11 mrad shown [EU Table 2.3 and 2.5; derived, limit specification 4.2 and 8]', () => {
+    const r = evaluateBeam(cw(440, 10, undefined, 0.05));
+    expect(r.mpe.governingRow).toBe('H-E-PC-1');
+    expect(rel(r.mpe.H_Jm2, 100 * (50 / 11) ** 2)).toBeLessThan(1e-12);
+    expect(step(r, 'Row H-E-PC-1')?.detail).toBe('H = 100*CB = 100*(1), times (alpha/gamma_p)^2 = 20.6612 for a source larger than gamma_p (derived)');
+    expect(step(r, 'gamma_p')?.value).toBe('11');
+  });
+  it('point source: 100 J/m², no field-of-view factor and no gamma_p line [EU Table 2.3]', () => {
+    const r = evaluateBeam(cw(440, 10));
+    expect(rel(r.mpe.H_Jm2, 100)).toBeLessThan(1e-12);
+    expect(step(r, 'Row H-E-PC-1')?.detail).toBe('H = 100*CB = 100*(1)');
+    expect(step(r, 'gamma_p')).toBeUndefined();
+  });
+});
