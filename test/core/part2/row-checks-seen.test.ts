@@ -246,3 +246,18 @@ describe('rows at an exact factor edge keep each their own value and aperture', 
     expect(r.od.odRequired_reported).toBe('2.7');
   });
 });
+
+// The 1000 W/m² "not to exceed" cap (EU Table 2.3 note, from memory) applied to the ICNIRP 2013 set
+// in conservative mode only: 1064 nm, 100 s, 100 mrad, the row 90 t^0.75 C_C C_E gives 1897 W/m²
+// (C_E = 100/1.5; values as in limit-rows-seen.test.ts), capped to 1000 W/m². The capped row is a
+// conservative step of the derivation (a stricter value used in conservative mode), without it a row.
+describe('a row capped in conservative mode is a conservative step', () => {
+  it.each([
+    { conservative: true, E: 1000, kind: 'conservative' },
+    { conservative: false, E: (90 * 100 ** 0.75 * (100 / 1.5)) / 100, kind: 'row' },
+  ] as const)('1064 nm, 100 s, 100 mrad, conservative mode $conservative: E = $E W/m², step $kind [EU Table 2.3 note; H-E-NIR2-5x]', ({ conservative, E, kind }) => {
+    const r = evaluateBeam(cw(1064, 100, { conservative }, 0.1));
+    expect(rel(r.mpe.E_Wm2, E)).toBeLessThan(1e-12);
+    expect(step(r, 'Row H-E-NIR2-5x')?.kind).toBe(kind);
+  });
+});
