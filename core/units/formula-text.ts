@@ -26,7 +26,7 @@ export interface FormulaRun {
 }
 
 /** Characters worth a closer look; most printed strings (names, plain numbers) have none. */
-const MAY_HOLD_FORMULA = /[*^_]|<=|>=|->|sqrt|lambda|alpha|gamma|phi|Phi|log10|\d x [A-Z(\d]|\dx[,;)\s]|\bpi\b|tau|\d[ \u00A0]?u[mJWs]\b|\d[ \u00A0]?deg\b|\/m2\b|\/cm2\b|CO2|\d{5}[ \u00A0]nm|\de\d+[ \u00A0]nm|\b[wD]0\b|\d[eE][-+]?\d|\bC[ABCEP]\b|\bT[12]\b/;
+const MAY_HOLD_FORMULA = /[*^_]|<=|>=|->|sqrt|lambda|alpha|gamma|phi|Phi|log10|1\/e2|d63|\d x [A-Z(\d]|\dx[,;)\s]|\bpi\b|tau|\d[ \u00A0]?u[mJWs]\b|\d[ \u00A0]?deg\b|\/m2\b|\/cm2\b|CO2|\d{5}[ \u00A0]nm|\de\d+[ \u00A0]nm|\b[wD]0\b|\d[eE][-+]?\d|\bC[ABCEP]\b|\bT[12]\b/;
 
 /** Words the core writes for Greek letters (ISO 80000-2 writes the letters). */
 const GREEK: Readonly<Record<string, string>> = { lambda: 'λ', alpha: 'α', gamma: 'γ', phi: 'φ', Phi: 'Φ', pi: 'π', tau: 'τ', theta: 'θ' };
@@ -88,6 +88,9 @@ function linear(text: string, joined = false): string {
     .replace(/\bsqrt\(/g, '√(')
     .replace(/(?<![A-Za-z])(lambda|alpha|gamma|phi|Phi|pi|tau|theta)(?![A-Za-z])/g, (w) => GREEK[w] ?? w)
     .replace(/\blog10\(/g, 'log₁₀(')
+    // "1/e2" (the beam-diameter convention) is 1/e²; d63 the diameter holding 63 % of the power (IEC 60825-1 writes d₆₃)
+    .replace(/\b1\/e2\b/g, '1/e²')
+    .replace(/\bd63\b/g, 'd₆₃')
     // "25.9 x AEL", "(10x, 20 mm objective)": the letter x written for the multiplication sign
     .replace(/(?<=\d) x (?=[A-Z(\d])/g, ' × ')
     .replace(/(?<=\b\d+)x(?=[,;)\s])/g, '×')

@@ -26,6 +26,11 @@ async function main(): Promise<void> {
       await page.getByRole('button', { name: new RegExp(`^${room.replace('.', '\\.')}`) }).click();
       await page.getByRole('button', { name: 'Open in workspace' }).click();
       await page.locator('[data-testid="nohd"]').first().waitFor({ timeout: 60_000 });
+      const warnings = page.locator('ul.warnings').first();
+      if ((await warnings.count()) > 0) {
+        await warnings.scrollIntoViewIfNeeded();
+        await page.screenshot({ path: path.join(OUT, `${room}-card.png`) });
+      }
       await page.getByRole('button', { name: 'Full derivation' }).first().click();
       await page.getByRole('dialog').waitFor();
       const body = page.getByTestId('derivation-body');
@@ -37,7 +42,7 @@ async function main(): Promise<void> {
         process.stdout.write(`${room}-derivation-${i + 1}.png\n`);
       }
       await page.keyboard.press('Escape');
-      await page.getByRole('button', { name: 'Register' }).first().click();
+      await page.keyboard.press('Alt+1');
       await page.getByRole('heading', { name: 'Register' }).waitFor();
     }
   } finally {
