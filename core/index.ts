@@ -3,6 +3,8 @@ export * from './model/inputs.js';
 export * from './errors.js';
 export * from './trace/trace.js';
 export * from './units/quantities.js';
+export * from './units/formula-text.js';
+export * from './eyewear/marking-text.js';
 export { quantityText, numberText, odText, angleText, plainDigits, type DisplayUnit, type DisplayOptions, type Rounding } from './units/display.js';
 export * from './units/read-back.js';
 export { traceText, traceQuantityText, traceStepValue } from './units/trace-numbers.js';

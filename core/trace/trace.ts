@@ -2,6 +2,8 @@
  * The derivation trace: structured data that the report and the UI render, with a plain-text form.
  * Every number an officer sees can be followed back to a table row, its source and its confidence.
  */
+import { formulaText } from '../units/formula-text.js';
+
 export type TraceKind =
   | 'input'
   | 'assumption'
@@ -43,12 +45,15 @@ export function addStep(trace: Trace, step: TraceStep): void {
   trace.steps.push(step);
 }
 
-/** Plain-text rendering, indented by depth. */
+/**
+ * Plain-text rendering, indented by depth; titles and formulas in the standards' notation through
+ * the one formula formatter (core/units/formula-text.ts), as on paper and on screen.
+ */
 export function traceToText(trace: Trace, depth = 0): string {
   const pad = '  '.repeat(depth);
-  const lines = [`${pad}${trace.title}`];
+  const lines = [`${pad}${formulaText(trace.title)}`];
   for (const s of trace.steps) {
-    let line = `${pad}  [${s.kind}] ${s.label}: ${s.detail}`;
+    let line = `${pad}  [${s.kind}] ${formulaText(s.label)}: ${formulaText(s.detail)}`;
     if (s.value !== undefined) line += ` = ${s.value}${s.unit ? ' ' + s.unit : ''}`;
     const tags = [s.source, s.confidence].filter((x): x is string => Boolean(x));
     if (tags.length) line += `  {${tags.join('; ')}}`;

@@ -29,24 +29,15 @@ export function spanText(e: CheckableEntry): string {
   return `${band} · ${t}${e.condition ? ` · where ${e.condition}` : ''}`;
 }
 
-const SUPERSCRIPT: Readonly<Record<string, string>> = { '-': '⁻', '+': '', 0: '⁰', 1: '¹', 2: '²', 3: '³', 4: '⁴', 5: '⁵', 6: '⁶', 7: '⁷', 8: '⁸', 9: '⁹' };
-
 /**
- * A table expression typeset for reading: "2e-3*CE" -> "2×10⁻³·CE" (powers of ten as printed in
- * the standards; the symbols stay as the tables name them, the same the officer types).
+ * "H = 2e-3*CE J/m²" as the tables write it; the screen sets it in the standards' notation with the
+ * core's one formula formatter (renderer/components/FormulaText.svelte, core/units/formula-text.ts):
+ * "H = 2 × 10⁻³ × C_E J/m²" with the exponent raised and the subscript lowered.
  */
-export function formulaText(expr: string): string {
-  return expr
-    .replace(/\s+/g, '')
-    .replace(/(\d+(?:\.\d+)?)e([+-]?\d+)/g, (_m, m: string, e: string) => `${m === '1' ? '' : `${m}×`}10${[...e].map((ch) => SUPERSCRIPT[ch] ?? ch).join('')}`)
-    .replace(/\*/g, '·');
-}
-
-/** "H = 2e-3·CE J/m²", "C_C = 8+10^(0.04·(lambda-1250))". */
 export function entryFormula(e: CheckableEntry, expr = e.expr): string {
   const lhs = e.kind === 'factor' ? e.name : e.quantity;
   const unit = unitText(e);
-  return `${lhs} = ${formulaText(expr)}${unit ? ` ${unit}` : ''}`;
+  return `${lhs} = ${expr.replace(/\s+/g, '')}${unit ? ` ${unit}` : ''}`;
 }
 
 /** A value of the entry as the officer reads it: limits rounded down, 3 significant figures. */

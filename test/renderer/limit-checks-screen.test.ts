@@ -47,7 +47,10 @@ describe('Limit table checks screen', () => {
     const li = entryOf('H-E-VIS-2');
     expect(li.textContent).toContain('Eye, retinal thermal · table row H-E-VIS-2');
     expect(li.textContent).toContain('400 nm – 700 nm · 10 ps – 1 ns');
-    expect(li.textContent).toContain('H = 2×10⁻³·CE J/m²');
+    // the standards' notation (core/units/formula-text.ts): 2 × 10^-3 × C_E, exponent raised, subscript lowered
+    expect(li.textContent).toContain('H = 2 × 10−3 × CE J/m²');
+    expect(li.querySelector('.formula sup')?.textContent).toBe('−3');
+    expect(li.querySelector('.formula sub')?.textContent).toBe('E');
     const first = within(li).getAllByRole('row')[1];
     expect(first?.textContent).toBe('400 nm, 10 ps, α = 1 mrad2 mJ/m²151 µJ/m²');
   });
@@ -67,7 +70,7 @@ describe('Limit table checks screen', () => {
     await fireEvent.click(screen.getByRole('button', { name: 'Sign the check' }));
     await until(() => screen.queryByTestId('recorded-checks') !== null, 10000);
     const row = within(screen.getByTestId('recorded-checks')).getByText('row H-E-VIS-2').closest('tr');
-    expect(row?.textContent).toMatch(/differs\s*10⁻³·CE/);
+    expect(row?.textContent).toMatch(/differs\s*10−3 × CE/);
     expect(row?.textContent).toContain('IEC 60825-1:2014 Table A.1');
     expect(row?.textContent).toContain('Dr. Imre Calloway-Senn');
     expect(row?.textContent).toContain('in use');

@@ -43,7 +43,7 @@ describe('searchRegister', () => {
   it.each([
     { q: '1064 nm', kind: 'laser', want: ['Q-switched Nd:YAG'], source: 'demo scenario: the only 1064 nm beam' },
     { q: '1000-1100 nm', kind: 'laser', want: ['Fibre laser with 160 mm focusing head', 'Q-switched Nd:YAG'], source: 'demo: 1064 and 1070 nm' },
-    { q: '10.6 µm', kind: 'laser', want: ['CO2 laser'], source: 'demo: 10 600 nm typed in µm' },
+    { q: '10.6 µm', kind: 'laser', want: ['CO₂ laser'], source: 'demo: 10 600 nm typed in µm' },
     { q: '1550 nm', kind: 'laser', want: ['Erbium fibre amplifier', 'Optical parametric amplifier (signal and idler, tunable 1150-2600 nm)'], source: 'demo: two 1550 nm beams' },
     { q: 'class 3B', kind: 'laser', want: ['Diode laser module', 'Erbium fibre amplifier'], source: 'demo: the two class 3B lasers' },
     { q: '1064 nm', kind: 'eyewear', want: ['EW-A'], source: 'demo: EW-A covers 740-1100 nm', prefix: true },

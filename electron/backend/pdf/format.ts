@@ -24,12 +24,14 @@ export function exposure(value: string, quantity: 'H' | 'E', units: UnitHabit): 
   return formatDensity(value, quantity === 'E' ? 'irradiance' : 'radiantExposure', units, 'up').text;
 }
 
-/** A hazard distance in metres: the core's reported value is already rounded up. */
+/** A hazard distance in mm, m or km: the core's reported value is already rounded up. */
 export function distance(reported_m: string | null): string {
   if (reported_m === null) return 'not assessed';
   const v = dec(reported_m);
   if (v.isZero()) return '0 m';
   if (v.gte(1000)) return `${plain(roundSig(v.div(1000), 3, 'up'))} km`;
+  // engineering notation (the owner's rule): "5.36 mm", not "0.00536 m" (same digits, exact)
+  if (v.lt(1)) return `${plain(v.mul(1000))} mm`;
   return `${plain(v)} m`;
 }
 

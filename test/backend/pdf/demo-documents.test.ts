@@ -208,7 +208,7 @@ function summaryRows(pages: readonly string[], beams: number): SummaryRow[] {
   const start = all.indexOf('Summary per beam');
   const end = all.indexOf('Inputs and assumptions', start);
   const seg = all.slice(start, end);
-  const token = new RegExp(`${NUM} ((?:k|m|µ|n)?(?:W|J)/c?m²) (?:per pulse|over)|${NUM} ?(k?m)\\b|(not assessed)|OD ${NUM}|(none needed)`, 'g');
+  const token = new RegExp(`${NUM} ((?:k|m|µ|n)?(?:W|J)/c?m²) (?:per pulse|over)|${NUM} ?((?:k|m)?m)\\b|(not assessed)|OD ${NUM}|(none needed)`, 'g');
   const rows: SummaryRow[] = [];
   let cur: Array<number | null> = [];
   for (const m of seg.matchAll(token)) {

@@ -33,8 +33,8 @@ describe('distances, outputs and OD are printed rounded up', () => {
   it.each(distances)('reported distance %s -> %s', (v, printed) => {
     expect(fmt.distance(v)).toBe(printed);
   });
-  it('a full-precision distance is rounded up to 3 figures: 0.0019301 m -> 0.00194 m', () => {
-    expect(fmt.distanceFull('0.0019301')).toBe('0.00194 m');
+  it('a full-precision distance is rounded up to 3 figures, in engineering notation: 0.0019301 m -> 1.94 mm', () => {
+    expect(fmt.distanceFull('0.0019301')).toBe('1.94 mm');
   });
   it('maximum output on the door is rounded up: 4.0004 mJ -> 4.01 mJ per pulse', () => {
     expect(fmt.emission({ kind: 'pulsed', pulseEnergy_J: 0.0040004, pulseDuration_s: 3.5e-14, repetitionRate_Hz: 1000 }).output).toBe('4.01 mJ per pulse');

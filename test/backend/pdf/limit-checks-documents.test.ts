@@ -80,7 +80,8 @@ describe('checked rows on paper', () => {
 
   it('a "differs" check: the lower published value is used and every result that uses the row is flagged', async () => {
     const p = await printed({ verdict: 'differs', documentExpr: '1e-3*CE' });
-    expect(p.report).toContain(`checked against IEC 60825-1:2014 Table A.1 by Dr. Imre Calloway-Senn on ${p.on}; the published text differs (1e-3*CE): the lower of the two values is used`);
+    // the published expression in the standards' notation (core/units/formula-text.ts), exponent and subscript read back inline
+    expect(p.report).toContain(`checked against IEC 60825-1:2014 Table A.1 by Dr. Imre Calloway-Senn on ${p.on}; the published text differs (10−3 × CE): the lower of the two values is used`);
     // the flag among the beam's warnings on the front pages
     expect(p.report).toMatch(/Beam 1 \(532 nm\): Limit-table row H-E-VIS-2 was checked against IEC 60825-1:2014 Table A\.1 by Dr\. Imre Calloway-Senn on \S+, and the published text differs/);
   });

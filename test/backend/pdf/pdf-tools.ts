@@ -10,6 +10,7 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import jsQR from 'jsqr';
 import { PNG } from 'pngjs';
+import { formulaRuns } from '../../../core/units/formula-text.js';
 
 function withFile<T>(pdf: Buffer, f: (file: string, dir: string) => T): T {
   const dir = mkdtempSync(join(tmpdir(), 'bw-pdf-test-'));
@@ -72,4 +73,13 @@ export function siValue(number: string, unit: string): number {
 /** Text of the whole document in poppler's layout mode (columns kept side by side, reading order by position). */
 export function layoutText(pdf: Buffer): string {
   return withFile(pdf, (file) => execFileSync('pdftotext', ['-layout', '-enc', 'UTF-8', file, '-'], { encoding: 'utf8' }));
+}
+
+/**
+ * A string as pdftotext reads it back from the page: the core's formula formatter raises exponents
+ * and lowers subscripts (pdfmake `sup` / `sub`), which pdftotext returns inline ("C_P" -> "CP",
+ * "t^0.75" -> "t0.75"); "*" reads "×", "lambda" reads "λ".
+ */
+export function readBack(text: string): string {
+  return formulaRuns(text).map((r) => r.text).join('');
 }

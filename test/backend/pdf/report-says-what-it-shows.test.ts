@@ -12,7 +12,7 @@
  */
 import { describe, expect, it } from 'vitest';
 import { renderReport, type RenderOptions } from '../../../electron/backend/pdf/index.js';
-import { pageTexts } from './pdf-tools.js';
+import { pageTexts, readBack } from './pdf-tools.js';
 import { useDemoRegister } from './demo-register.js';
 import { factorWords } from '../../../core/model/factor-words.js';
 
@@ -73,17 +73,18 @@ describe('the plot labels write numbers as the rest of the documents do', () => 
 describe('the pulse correction factor is written one way throughout the report', () => {
   // Room B2.14 (conservative mode, pulse trains): the factor is named in "Points to check", in the
   // rule-set section and in the appendix. Its name comes from core/model/factor-words.ts; the symbol
-  // is C with subscript P in ICNIRP 2013 and IEC 60825-1:2014 (from memory), written "C_P" on paper
-  // everywhere in this project (no page sets it as a typographic subscript, so none may).
-  it('room B2.14: "pulse correction factor C_P" in the points to check and the rule-set section, and the appendix writes C_P, never "CP"', async () => {
+  // is C with subscript P in ICNIRP 2013 and IEC 60825-1:2014 (from memory), set so on paper by the
+  // one formula formatter (core/units/formula-text.ts): pdftotext reads the lowered P inline, "CP".
+  it('room B2.14: "pulse correction factor C_P" (P lowered) in the points to check and the rule-set section, and the appendix writes it so, never "C_P" or "C P"', async () => {
     const all = pageTexts(await renderReport(await demo.documentOf('B2.14'), A4_SI)).join(' ');
-    const name = factorWords('C_P');
+    const name = readBack(factorWords('C_P'));
+    expect(name).toBe('pulse correction factor CP');
     const points = all.slice(all.indexOf('Points to check'), all.indexOf('Inputs and assumptions'));
     const ruleSet = all.slice(all.indexOf('Rule set and conservative mode'), all.indexOf('Uncertainty bounds'));
     expect(points).toContain(name);
     expect(ruleSet).toContain(name);
-    expect(all.slice(all.indexOf('Appendix — derivations'))).toContain('C_P = ');
-    // the same symbol everywhere: no "CP" (typographic subscript read back) and no "C P"
-    expect(all.match(/\bC ?P\b/g) ?? []).toEqual([]);
+    expect(all.slice(all.indexOf('Appendix — derivations'))).toContain('CP = ');
+    // the same symbol everywhere: never the underscore form nor a spaced "C P"
+    expect(all.match(/\bC_P\b|\bC P\b/g) ?? []).toEqual([]);
   }, 120_000);
 });

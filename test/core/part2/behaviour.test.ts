@@ -12,7 +12,8 @@ describe('beam definitions (domain notes 1.1, derived; trade fact d63-vs-1e2)', 
   it('1/e² values are divided by sqrt(2), and the trace says so', () => {
     const e2 = evaluateBeam({ ...base, beam: { diameter_m: 0.002 * Math.SQRT2, divergence_rad: 0.001 * Math.SQRT2, definition: '1/e2' } });
     expect(Number(e2.nohd_m)).toBeCloseTo(nohd(base), 6);
-    expect(traceToText(e2.trace)).toMatch(/divided by sqrt\(2\)/);
+    // the plain-text trace writes the standards' notation (core/units/formula-text.ts): √(2)
+    expect(traceToText(e2.trace)).toMatch(/divided by √\(2\)/);
   });
   it('d63 equals the 1/e diameter of a Gaussian beam', () => {
     expect(nohd({ ...base, beam: { ...base.beam, definition: 'd63' } })).toBeCloseTo(nohd(base), 9);

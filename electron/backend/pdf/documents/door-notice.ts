@@ -13,6 +13,7 @@
  */
 import type { Column, Content, TableCell, TDocumentDefinitions } from 'pdfmake/interfaces';
 import { dec } from '../../../../core/numeric/decimal.js';
+import { frameMarkingText } from '../../../../core/eyewear/marking-text.js';
 import type { DocumentInput, RenderOptions } from '../document-input.js';
 import * as fmt from '../format.js';
 import { baseDocument, cautionBlock, contentWidth, fingerprintStack } from '../page.js';
@@ -98,10 +99,8 @@ export function coveringEyewear(doc: DocumentInput): Array<{ readonly label: str
     const spec = specs.find((e) => e.id === tag);
     if (spec === undefined) return { label: tag, marking: '' };
     const nm = (a: number, b: number): string => (a === b ? `${a}` : `${a}–${b}`);
-    const en207 = (spec.en207 ?? []).map((m) => `${m.modes} ${nm(m.from_nm, m.to_nm)} LB${m.scale}`);
-    const en208 = (spec.en208 ?? []).map((m) => `${nm(m.from_nm, m.to_nm)} RB${m.scale}`);
     const od = (spec.od ?? []).map((m) => `OD ${m.od} ${nm(m.from_nm, m.to_nm)} nm`);
-    const marking = [...en207, ...en208].join(' + ') || od.join(', ');
+    const marking = frameMarkingText(spec) || od.join(', ');
     const label = spec.label.includes(spec.id) ? spec.label : `${spec.id} (${spec.label})`;
     return { label, marking };
   });

@@ -5,6 +5,7 @@
  */
 import type { Content, TableCell } from 'pdfmake/interfaces';
 import type { EyewearSpec } from '../../../../core/model/inputs.js';
+import { en207MarkingText, en208MarkingText } from '../../../../core/eyewear/marking-text.js';
 import type { EyewearVerdict } from '../../../../core/model/results.js';
 import { Dec, dec } from '../../../../core/numeric/decimal.js';
 import { plain } from '../../../../core/units/quantities.js';
@@ -27,8 +28,9 @@ export function requiredEyewearTable(doc: DocumentInput, fontSize: number, width
 export function eyewearMarkings(e: EyewearSpec): string {
   const parts: string[] = [];
   for (const b of e.od ?? []) parts.push(`OD ${b.od} at ${band(b.from_nm, b.to_nm)}`);
-  for (const b of e.en207 ?? []) parts.push(`${b.modes} LB${b.scale} at ${band(b.from_nm, b.to_nm)}`);
-  for (const b of e.en208 ?? []) parts.push(`RB${b.scale} at ${band(b.from_nm, b.to_nm)}`);
+  // EN 207 / EN 208 markings in the form on the frame ("D 740–1100 LB5"), one formatter everywhere
+  for (const b of e.en207 ?? []) parts.push(en207MarkingText(b));
+  for (const b of e.en208 ?? []) parts.push(en208MarkingText(b));
   if (e.visibleTransmission !== undefined) parts.push(`visible light transmission ${fmt.percent(e.visibleTransmission).replace(' %', '\u00a0%')}`); // a no-break space: the number keeps its unit (ISO 80000-1, clause 7)
   return parts.join('; ');
 }

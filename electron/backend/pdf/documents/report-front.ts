@@ -95,12 +95,12 @@ export function beamSummary(doc: DocumentInput, view: RoomView, units: UnitHabit
       `${f.classEstimate} / ${b.classAsLabelled ?? '–'}`,
     ];
   });
-  const warnings = view.beams.flatMap((b, i) => b.result.warnings.map((w) => `Beam ${i + 1} (${b.result.label}): ${w}`));
+  const warnings = pointsToCheck(view);
   const cases = diffuseLines(view);
   return [
     heading('Summary per beam'),
     paragraph(
-      `Limits are rounded down, distances, optical densities and scale numbers up (${units === 'ANSI' ? 'W/cm², J/cm²' : 'W/m², J/m²'}; distances in metres). ` +
+      `Limits are rounded down, distances, optical densities and scale numbers up (${units === 'ANSI' ? 'W/cm², J/cm²' : 'W/m², J/m²'}). ` +
         `${diffuseLegend(view, cases.length > 0)} Class: estimate / as labelled — the manufacturer's class governs. ` +
         // the row name is the cross-reference; the readable citation is printed once, in the appendix
         'Row: the exposure-limit table row the limit comes from; its published source (document, edition, table) is named under "Limit-table rows used" in the appendix.',
@@ -121,6 +121,27 @@ export function beamSummary(doc: DocumentInput, view: RoomView, units: UnitHabit
           { ul: warnings.map((w) => ({ text: w, color: COLOR.bad })), fontSize: 8.5, margin: [0, 0, 0, 4] } as Content,
         ]),
   ];
+}
+
+/**
+ * Each warning printed once, naming the beams it concerns ("Beams 3, 4 (Nd:YAG 1064 nm; Nd:YAG
+ * second harmonic 532 nm): …"), in the order of first appearance: the same sentence repeated once
+ * per beam hides the points that differ.
+ */
+export function pointsToCheck(view: RoomView): string[] {
+  const byText = new Map<string, number[]>();
+  view.beams.forEach((b, i) => {
+    for (const w of b.result.warnings) {
+      const beams = byText.get(w) ?? [];
+      if (!beams.includes(i)) beams.push(i);
+      byText.set(w, beams);
+    }
+  });
+  return [...byText].map(([w, beams]) => {
+    const numbers = beams.map((i) => i + 1).join(', ');
+    const labels = beams.map((i) => view.beams[i]?.result.label ?? '').join('; ');
+    return `${beams.length === 1 ? 'Beam' : 'Beams'} ${numbers} (${labels}): ${w}`;
+  });
 }
 
 /**

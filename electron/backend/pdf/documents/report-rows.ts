@@ -13,6 +13,7 @@ import { heading, paragraph } from '../blocks.js';
 import { COLOR } from '../page.js';
 import type { RowCheck } from '../../../../core/model/inputs.js';
 import { checkedWords, checksOf } from '../row-checks.js';
+import { traceText } from '../../../../core/units/trace-numbers.js';
 
 export interface RowUsed {
   readonly row: LimitRow;
@@ -51,9 +52,19 @@ export function rowsUsed(doc: DocumentInput): RowUsed[] {
   });
 }
 
-export function range(lo: number, hi: number, unit: string): string {
-  const f = (x: number): string => (x >= 1e4 || (x > 0 && x < 1e-2) ? x.toExponential().replace('e+', 'e') : String(x));
-  return `${f(lo)}–${f(hi)} ${unit}`;
+/**
+ * A band or a duration range in engineering notation (the owner's rule; ISO 80000-1): durations with
+ * an SI prefix ("100 fs–10 ps", "10 s–30 ks"); a band reaching 10 µm or beyond in micrometres
+ * ("2.6–1000 µm"), as the trade writes the far infrared; shorter bands in nanometres.
+ */
+export function range(lo: number, hi: number, unit: 's' | 'nm'): string {
+  if (unit === 's') return traceText(`${lo}–${hi} s`);
+  if (hi >= 1e4) return `${plainNumber(lo / 1000)}–${plainNumber(hi / 1000)} µm`;
+  return `${plainNumber(lo)}–${plainNumber(hi)} nm`;
+}
+
+function plainNumber(x: number): string {
+  return String(Number(x.toPrecision(6)));
 }
 
 /** Rows grouped under their citation and status, so each citation is printed once. */

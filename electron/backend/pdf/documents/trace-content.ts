@@ -23,6 +23,7 @@ import { COLOR } from '../page.js';
 import type { RowCheck } from '../../../../core/model/inputs.js';
 import { checkedWords } from '../row-checks.js';
 import { traceStepValue, traceText } from '../../../../core/units/trace-numbers.js';
+import { formulaLinear } from '../../../../core/units/formula-text.js';
 
 const KIND_STYLE: Readonly<Record<TraceKind, { tag: string; color: string; bold?: boolean }>> = {
   input: { tag: 'input', color: COLOR.muted },
@@ -76,8 +77,11 @@ function stepRuns(s: TraceStep, ref: string | null): Run[] {
   const k = KIND_STYLE[s.kind];
   // numbers with a unit in engineering notation, all figures kept (core/units/trace-numbers.ts);
   // a parameter whose table expression is its bare value ("1.5") reads with its unit ("1.5 mrad")
-  const valueText = traceStepValue(s);
-  const detail = s.value !== undefined && s.detail === s.value ? valueText : traceText(readableText(s.detail));
+  // the formula's words in the standards' notation and each number held to its unit before the text
+  // is cut into pieces (core/units/formula-text.ts; ISO 80000-1 clause 7); exponents and subscripts
+  // are set by the last pass (readable.ts)
+  const valueText = formulaLinear(traceStepValue(s));
+  const detail = formulaLinear(s.value !== undefined && s.detail === s.value ? traceStepValue(s) : traceText(readableText(s.detail)));
   const runs: Run[] = [
     { text: `${k.tag}  `, color: k.color, bold: true, fontSize: 6.3, noWrap: true },
     ...pieces(`${stepLabelText(s)}: `, { bold: true }),
