@@ -50,7 +50,8 @@ export function plotsSection(doc: DocumentInput, view: RoomView, units: UnitHabi
   return out;
 }
 
-export function derivationsSection(doc: DocumentInput, view: RoomView): Content[] {
+/** `width`: the report's text column (pt), in which the appendix's lines are set. */
+export function derivationsSection(doc: DocumentInput, view: RoomView, width: number): Content[] {
   const out: Content[] = [
     heading('Appendix — derivations'),
     paragraph(
@@ -62,7 +63,7 @@ export function derivationsSection(doc: DocumentInput, view: RoomView): Content[
   ];
   out.push(...rowsUsedSection(doc));
   const checks = checksOf(doc);
-  const printer = new TracePrinter(doc.results.ruleSetName, (s) => checkForStep(checks, doc.results.ruleSet, s));
+  const printer = new TracePrinter(doc.results.ruleSetName, (s) => checkForStep(checks, doc.results.ruleSet, s), width);
   view.beams.forEach((b, i) => {
     out.push(heading(`${i + 1}. ${b.result.label}`, 2));
     out.push(...printer.render(b.result.trace, `D${i + 1}`));
