@@ -77,12 +77,6 @@ const parsed: unknown[] = [];
 const tags = new Map<string, Uint8Array>();
 let done = false;
 
-/** The font parsed from `file` by shareParsedFonts, if it was. */
-export function sharedParsedFont(file: string): unknown {
-  const tag = tags.get(file);
-  return tag === undefined ? undefined : parsed[tag[MAGIC.length] ?? -1];
-}
-
 /** Parse every file of `fonts` once and make every later pdfmake document reuse them. Idempotent. */
 export function shareParsedFonts(fonts: TFontDictionary): void {
   if (done) return;

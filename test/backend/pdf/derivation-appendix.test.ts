@@ -1,9 +1,9 @@
 // @vitest-environment node
 /**
  * The derivation appendix of the report for a crowded room (ten lasers of the invented demo site),
- * read back with poppler. The appendix's lines are set by the program with the font's metrics and
- * handed to pdfmake as whole pieces to keep the report quick to print (electron/backend/pdf/line-setter.ts,
- * documents/trace-content.ts); these checks make sure that costs nothing on paper:
+ * read back with poppler. The appendix is handed to pdfmake in short unbreakable pieces to keep the
+ * report quick to print (electron/backend/pdf/documents/trace-content.ts); these checks make sure
+ * that costs nothing on paper:
  *  - every step of every trace (beams and room) is on paper: its label (a factor by its name in words,
  *    core/model/factor-words.ts), and its value with its unit;
  *  - no word runs past the right margin (40 pt) on A4 or US Letter.

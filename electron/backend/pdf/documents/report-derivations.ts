@@ -50,8 +50,7 @@ export function plotsSection(doc: DocumentInput, view: RoomView, units: UnitHabi
   return out;
 }
 
-/** `width`: the report's text column (pt), in which the appendix's lines are set. */
-export function derivationsSection(doc: DocumentInput, view: RoomView, width: number): Content[] {
+export function derivationsSection(doc: DocumentInput, view: RoomView): Content[] {
   const out: Content[] = [
     heading('Appendix — derivations'),
     paragraph(
@@ -63,7 +62,7 @@ export function derivationsSection(doc: DocumentInput, view: RoomView, width: nu
   ];
   out.push(...rowsUsedSection(doc));
   const checks = checksOf(doc);
-  const printer = new TracePrinter(doc.results.ruleSetName, (s) => checkForStep(checks, doc.results.ruleSet, s), width);
+  const printer = new TracePrinter(doc.results.ruleSetName, (s) => checkForStep(checks, doc.results.ruleSet, s));
   view.beams.forEach((b, i) => {
     out.push(heading(`${i + 1}. ${b.result.label}`, 2));
     out.push(...printer.render(b.result.trace, `D${i + 1}`));

@@ -25,7 +25,7 @@ export function reportDefinition(doc: DocumentInput, opts: RenderOptions): TDocu
     ...nonBeamSection(doc),
     ...notesSection(doc),
     ...signOffSection(doc),
-    ...derivationsSection(doc, view, width),
+    ...derivationsSection(doc, view),
   ];
   return {
     ...baseDocument(doc, opts.paper, 'Laser hazard assessment'),

@@ -24,7 +24,6 @@ import type { RowCheck } from '../../../../core/model/inputs.js';
 import { checkedWords } from '../row-checks.js';
 import { traceStepValue, traceText } from '../../../../core/units/trace-numbers.js';
 import { pieces } from '../text-pieces.js';
-import { setLines } from '../line-setter.js';
 
 const KIND_STYLE: Readonly<Record<TraceKind, { tag: string; color: string; bold?: boolean }>> = {
   input: { tag: 'input', color: COLOR.muted },
@@ -40,10 +39,7 @@ const KIND_STYLE: Readonly<Record<TraceKind, { tag: string; color: string; bold?
   note: { tag: 'note', color: COLOR.muted },
 };
 
-type Run = { text: string; bold?: boolean; italics?: boolean; color?: string; fontSize?: number; noWrap?: boolean };
-
-/** Size of the step lines (pt). */
-const STEP_PT = 7.2;
+type Run = { text: string; bold?: boolean; color?: string; fontSize?: number; noWrap?: boolean };
 
 function stepRuns(s: TraceStep, ref: string | null): Run[] {
   const k = KIND_STYLE[s.kind];
@@ -53,11 +49,11 @@ function stepRuns(s: TraceStep, ref: string | null): Run[] {
   const detail = s.value !== undefined && s.detail === s.value ? valueText : traceText(readableText(s.detail));
   const runs: Run[] = [
     { text: `${k.tag}  `, color: k.color, bold: true, fontSize: 6.3, noWrap: true },
-    { text: `${stepLabelText(s)}: `, bold: true },
-    { text: detail, ...(k.bold ? { bold: true } : {}), ...(s.kind === 'warning' ? { color: COLOR.bad } : {}) },
+    ...pieces(`${stepLabelText(s)}: `, { bold: true }),
+    ...pieces(detail, { ...(k.bold ? { bold: true } : {}), ...(s.kind === 'warning' ? { color: COLOR.bad } : {}) }),
   ];
   // "Wavelength: 800 nm = 800 nm": the value is not repeated when the detail already says it.
-  if (valueText !== '' && !detail.endsWith(valueText)) runs.push({ text: ` = ${valueText}`, bold: true });
+  if (valueText !== '' && !detail.endsWith(valueText)) runs.push(...pieces(` = ${valueText}`, { bold: true }));
   if (ref !== null) runs.push({ text: `  ${ref}`, color: COLOR.muted, fontSize: 6.6, noWrap: true });
   return runs;
 }
@@ -83,15 +79,7 @@ export class TracePrinter {
   constructor(
     private readonly ruleSetName: string,
     private readonly checkFor: (s: TraceStep) => RowCheck | undefined = () => undefined,
-    /** Width of the text column (pt): with it, lines are set here (../line-setter.ts); without, text goes in pieces. */
-    private readonly width?: number,
   ) {}
-
-  /** Runs of one paragraph as pdfmake text: set into lines when the column width is known, else in pieces. */
-  private lines(runs: readonly Run[], size: number, inset: number): Run[] {
-    const set = this.width === undefined ? null : setLines(runs, this.width - inset, size);
-    return set ?? runs.flatMap(({ text, ...style }) => (style.noWrap === true || text === '\n' ? [{ text, ...style }] : pieces(text, style)));
-  }
 
   /** Lines for one beam's (or the room's) trace, numbered `prefix`. */
   render(trace: Trace, prefix: string): Content[] {
@@ -106,9 +94,9 @@ export class TracePrinter {
     const runs: Run[] = [];
     for (const [line, ref] of this.sources) {
       if (runs.length > 0) runs.push({ text: '\n' });
-      runs.push({ text: `${ref} `, bold: true, noWrap: true }, { text: line });
+      runs.push({ text: `${ref} `, bold: true, noWrap: true }, ...pieces(line, {}));
     }
-    return [{ text: this.lines(runs, 7, 0), fontSize: 7, color: COLOR.ink, margin: [0, 2, 0, 2] }];
+    return [{ text: runs, fontSize: 7, color: COLOR.ink, margin: [0, 2, 0, 2] }];
   }
 
   private refFor(s: TraceStep): string | null {
@@ -158,9 +146,9 @@ export class TracePrinter {
     if (asIn.size > 0) {
       const n = [...asIn.values()].reduce((a, b) => a + b, 0);
       if (runs.length > 0) runs.push({ text: '\n' });
-      runs.push({ text: `(${n} further step${n === 1 ? '' : 's'} as in ${[...asIn.keys()].join(', ')})`, color: COLOR.muted, fontSize: 6.6 });
+      runs.push(...pieces(`(${n} further step${n === 1 ? '' : 's'} as in ${[...asIn.keys()].join(', ')})`, { color: COLOR.muted, fontSize: 6.6 }));
     }
-    if (runs.length > 0) out.push({ text: this.lines(runs, STEP_PT, indent + 4), fontSize: STEP_PT, margin: [indent + 4, 0, 0, 1] });
+    if (runs.length > 0) out.push({ text: runs, fontSize: 7.2, margin: [indent + 4, 0, 0, 1] });
     trace.children.forEach((c, i) => this.walk(c, `${number}.${i + 1}`, depth + 1, out));
   }
 }
