@@ -26,6 +26,26 @@
  *  time for the same digits (690 look-ups, 425 -> 264 ms in one process, interleaved).
  *  The 0.5 s target needs the appendix's run count halved or pdfmake's per-run cost cut (its style
  *  look-up and pdfkit's per-run text object), and the plot labels drawn without per-glyph SVG text.
+ *
+ * 3 December 2026 (same machine, load average 13-20 from other jobs; CPU time of the first print):
+ *  - kept: a line's touching words of one style drawn as one text run (electron/backend/pdf/merged-runs.ts):
+ *    13386 -> 5302 text objects, 308 -> 230 kB, 632 -> 560 ms (medians of 9, one process, interleaved,
+ *    load 11); the words stay where they were (test/backend/pdf/joined-runs.test.ts);
+ *  - kept: header, footer, caution band and the appendix's sub-titles in 40-character pieces
+ *    (electron/backend/pdf/text-pieces.ts): 13721 -> 11325 text inlines laid out, pages unchanged;
+ *  - whole bench, this version and the previous one alternately at load 13-14: 515, 513 ms against
+ *    572, 539 ms. The 0.5 s target is NOT met under that load (about 0.51 s); with the machine nearly
+ *    idle (load 3) the previous version already measured 0.48-0.59 s, so CPU time here grows with the
+ *    load on the shared cores, and A/B runs in separate processes at load 19 could not tell versions
+ *    10 % apart (6 rounds of 7 prints each).
+ *  - tried, not kept: the appendix set into lines by the program with fontkit's metrics (one piece per
+ *    line and style): 10 % fewer inlines, but its words were shaped by fontkit apart from pdfkit's
+ *    shared word shapes, about 0.9 s more for the first report of a running program. It would pay only
+ *    if it read and filled the shared word cache of shared-fonts.ts (the same runs pdfkit keeps).
+ *  Left (profile of this version): pdfmake's measure and layout of ~11300 inlines ~25 %, rendering
+ *  ~25 % (pdfkit text, 20 SVG plots ~8 %, page compression ~3 %), the eye-limit curves ~8 % (about 3
+ *  look-ups per breakpoint interval; an exact envelope from each candidate row's power law would need
+ *  2), garbage collection ~15 %.
  * Run alone: npx tsx test/bench/pdf.bench.ts
  */
 import { renderDoorNotice, renderReport, type RenderOptions } from '../../electron/backend/pdf/index.js';

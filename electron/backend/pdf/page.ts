@@ -7,6 +7,7 @@ import { RESULT_CAUTION } from '../../../core/model/results.js';
 import type { DocumentInput, Paper } from './document-input.js';
 import { calendarDate, shortFingerprint } from './format.js';
 import { checksSentence } from './row-checks.js';
+import { inPieces, pieces } from './text-pieces.js';
 
 export const PAGE_SIZE: Readonly<Record<Paper, 'A4' | 'LETTER'>> = { A4: 'A4', Letter: 'LETTER' };
 
@@ -157,7 +158,8 @@ export function headerFor(doc: DocumentInput, title: string, sideMargin: number)
   return () => ({
     margin: [sideMargin, 18, sideMargin, 0],
     columns: [
-      { text: [{ text: title, bold: true }, `  ·  ${where}`], fontSize: 8.5, color: COLOR.muted },
+      // in pieces (text-pieces.ts): the header is laid out again on every page
+      inPieces({ text: [{ text: title, bold: true }, `  ·  ${where}`], fontSize: 8.5, color: COLOR.muted }),
       isDraft(doc)
         ? { text: DRAFT_HEADER, bold: true, color: COLOR.draft, fontSize: 10, alignment: 'right', width: 'auto' }
         : doc.assessment.status === 'superseded'
@@ -184,7 +186,7 @@ export function cautionBand(width: number, fontSize: number): Content {
   return {
     stack: [
       { canvas: [{ type: 'rect', x: 0, y: 0, w: width, h, color: COLOR.caution, lineColor: COLOR.cautionEdge, lineWidth: 1.2 }] },
-      { text: RESULT_CAUTION, bold: true, fontSize, color: COLOR.ink, relativePosition: { x: 6, y: -h + 4 } },
+      { text: pieces(RESULT_CAUTION, {}), bold: true, fontSize, color: COLOR.ink, relativePosition: { x: 6, y: -h + 4 } },
     ],
   };
 }
@@ -202,7 +204,8 @@ export function footerFor(doc: DocumentInput, sideMargin: number, width: number)
         margin: [0, 3, 0, 0],
         columns: [
           { ...ruleSetLine(doc, 7), width: '*' },
-          { text: `${fp} · page ${currentPage} of ${pageCount}`, fontSize: 7, alignment: 'right', width: 300 },
+          // in pieces (text-pieces.ts): the footer is laid out again on every page; one line in its column
+          { text: pieces(`${fp} · page ${currentPage} of ${pageCount}`, {}), fontSize: 7, alignment: 'right', width: 300 },
         ],
         columnGap: 8,
       },

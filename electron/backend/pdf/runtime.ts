@@ -9,6 +9,7 @@ import pdfmake from 'pdfmake';
 import type { TDocumentDefinitions, TFontDictionary } from 'pdfmake/interfaces';
 import { shareParsedFonts } from './shared-fonts.js';
 import { readableDefinition } from './readable.js';
+import { drawJoinedRuns } from './merged-runs.js';
 
 const require = createRequire(import.meta.url);
 
@@ -29,6 +30,7 @@ const STANDARD_FONT = /^(Courier|Helvetica|Times|Symbol|ZapfDingbats)(-[A-Za-z]+
 
 function configure(): void {
   shareParsedFonts(FONTS); // once per process: every document then reuses the parsed Roboto files
+  drawJoinedRuns(); // once per process: a line's touching words of one style are drawn as one text run
   pdfmake.setFonts(FONTS);
   pdfmake.setUrlAccessPolicy(() => false); // documents never load anything from the network
   pdfmake.setLocalAccessPolicy((p: string) => p.startsWith(FONT_DIR + path.sep) || STANDARD_FONT.test(p));

@@ -12,8 +12,8 @@
  *    citation with its check status, instead of repeating the same long citation on every line;
  *  - the rule-set name, stated at the head of the appendix, is left out of the sub-titles.
  * Each sub-derivation is one text block (not one block per line): pdfmake lays out far fewer nodes.
- * Within the block, text is handed to pdfmake in short unbreakable pieces of a few words (see
- * `pieces`): pdfmake measures and draws every inline separately and would otherwise make one inline
+ * Within the block, text is handed to pdfmake in short unbreakable pieces of a few words
+ * (../text-pieces.ts): pdfmake measures every inline separately and would otherwise make one inline
  * per word; lines still break between the pieces, so nothing runs past the margin.
  */
 import type { Content } from 'pdfmake/interfaces';
@@ -24,6 +24,7 @@ import type { RowCheck } from '../../../../core/model/inputs.js';
 import { checkedWords } from '../row-checks.js';
 import { traceStepValue, traceText } from '../../../../core/units/trace-numbers.js';
 import { formulaLinear } from '../../../../core/units/formula-text.js';
+import { pieces } from '../text-pieces.js';
 
 const KIND_STYLE: Readonly<Record<TraceKind, { tag: string; color: string; bold?: boolean }>> = {
   input: { tag: 'input', color: COLOR.muted },
@@ -40,38 +41,6 @@ const KIND_STYLE: Readonly<Record<TraceKind, { tag: string; color: string; bold?
 };
 
 type Run = { text: string; bold?: boolean; color?: string; fontSize?: number; noWrap?: boolean };
-
-/**
- * About 40 characters at the appendix sizes (6.3-7.2 pt, about 170 pt bold) is well under half the narrowest text
- * column (A4 or Letter, deepest indent), so a line never has to break inside a piece.
- */
-const PIECE_CHARS = 40;
-/** A single word longer than this (a long formula without spaces) is left to pdfmake to break. */
-const LONG_WORD = 60;
-
-/** `text` cut at spaces into pieces of about PIECE_CHARS characters, each kept whole on its line. */
-function pieces(text: string, style: Omit<Run, 'text'>): Run[] {
-  const words = text.match(/[^ \n]*(?: +|\n|$)/g) ?? [text];
-  const out: Run[] = [];
-  let cur = '';
-  const flush = (): void => {
-    if (cur !== '') out.push({ text: cur, ...style, ...(cur.length <= LONG_WORD && !cur.includes('\n') ? { noWrap: true } : {}) });
-    cur = '';
-  };
-  for (const w of words) {
-    if (w === '') continue;
-    if (w.includes('\n') || w.length > LONG_WORD) {
-      flush();
-      cur = w;
-      flush();
-      continue;
-    }
-    if (cur.length + w.length > PIECE_CHARS) flush();
-    cur += w;
-  }
-  flush();
-  return out;
-}
 
 function stepRuns(s: TraceStep, ref: string | null): Run[] {
   const k = KIND_STYLE[s.kind];
@@ -157,14 +126,14 @@ export class TracePrinter {
     const earlier = this.printed.get(key);
     if (earlier !== undefined) {
       out.push({
-        text: [{ text: `${number}  ${this.title(trace)}`, bold: true }, { text: ` — as in ${earlier}`, italics: true, color: COLOR.muted }],
+        text: [...pieces(`${number}  ${this.title(trace)}`, { bold: true }), ...pieces(` — as in ${earlier}`, { italics: true, color: COLOR.muted })],
         fontSize: 7.6,
         margin: [indent, 2, 0, 1],
       });
       return;
     }
     this.printed.set(key, number);
-    out.push({ text: `${number}  ${this.title(trace)}`, bold: true, fontSize: depth === 0 ? 8.8 : 8, margin: [indent, depth === 0 ? 4 : 3, 0, 1] });
+    out.push({ text: pieces(`${number}  ${this.title(trace)}`, {}), bold: true, fontSize: depth === 0 ? 8.8 : 8, margin: [indent, depth === 0 ? 4 : 3, 0, 1] });
     const runs: Run[] = [];
     const asIn = new Map<string, number>();
     for (const s of trace.steps) {
