@@ -117,7 +117,8 @@ export class TracePrinter {
   }
 
   private title(t: Trace): string {
-    return traceText(t.title.replace(` (${this.ruleSetName})`, ''));
+    // words in the standards' notation before the title is cut into pieces (core/units/formula-text.ts)
+    return formulaLinear(traceText(t.title.replace(` (${this.ruleSetName})`, '')));
   }
 
   private walk(trace: Trace, number: string, depth: number, out: Content[]): void {
