@@ -2,9 +2,11 @@
 import { clearLimitCache } from './beam/limit-cache.js';
 import { clearTissueLimitCache } from './beam/tissue-limits.js';
 import { clearBeamCache } from './room/evaluate-room.js';
+import { clearExpressionCache } from './limits/expression.js';
 
 export function clearCoreCaches(): void {
   clearLimitCache();
   clearTissueLimitCache();
   clearBeamCache();
+  clearExpressionCache();
 }

@@ -26,6 +26,7 @@ export function eyeLimitsOf(input: BeamInput, ruleSet: RuleSetId, settings: Limi
     wavelength_nm: input.wavelength_nm,
     emission: input.emission,
     exposureDuration_s: T,
+    // Stryker disable next-line ConditionalExpression,EqualityOperator: trace wording only; the curves and the tolerance bounds read the criteria and the numbers, never this trace (test/mutation/EQUIVALENT.md)
     durationWhy: input.exposureDuration_s !== undefined ? 'given by the caller' : `${dd.why} (${dd.basis})`,
     ...(input.sourceAngle_rad !== undefined ? { sourceAngle_rad: input.sourceAngle_rad } : {}),
     ...(settings !== undefined ? { settings } : {}),

@@ -8,9 +8,11 @@
  * The entries themselves come from openPoints() (one enumerator of the open entries).
  */
 import { Dec } from '../numeric/decimal.js';
+import { InputError } from '../errors.js';
+import { numberText, quantityText } from '../units/display.js';
 import { openPoints, type CheckableEntry } from './open-points.js';
 import { ruleSetTable, type RULE_SET_IDS } from './rule-sets.js';
-import { condition, evaluate, variablesOf } from './expression.js';
+import { condition, evaluate, variablesOf, type Vars } from './expression.js';
 import { evaluateFactors, FACTOR_ORDER } from './factors.js';
 import type { RuleSetId } from '../model/inputs.js';
 import type { Interval } from './table-types.js';
@@ -39,7 +41,11 @@ const ALPHAS = ['1', '3', '10', '50', '200'] as const;
 const mid = (iv: Interval): Dec => new Dec(iv[0]).plus(iv[1]).div(2);
 const geoMid = (iv: Interval): Dec => (iv[0] > 0 ? new Dec(iv[0]).mul(iv[1]).sqrt() : new Dec(iv[1]).div(2));
 
-/** Three points across the entry's band and duration range: the start, the middle, the end. */
+/**
+ * Three points: the start of the entry's band at its shortest duration, the middle of the band at
+ * the middle duration (geometric; half the end for a range from 0 s), the middle of the band at the
+ * longest duration. Without a band: 550 nm; without durations: 1 ms, 1 s and 100 s.
+ */
 function points(e: CheckableEntry): Array<{ lambda: Dec; t: Dec }> {
   const b = e.band_nm;
   const ts = e.t_s;
@@ -63,7 +69,43 @@ function alphaFor(ruleSet: RuleSetId, e: CheckableEntry, lambda: Dec, t: Dec): D
   return new Dec(ALPHAS[0]);
 }
 
-/** The entry's value at three sample points: as written, the stricter alternative, and a typed document value. */
+const UNREADABLE = 'cannot be read: write it as in the table, for example 18*t^0.75*CE (numbers, + - * / ^, parentheses and the table’s symbols)';
+
+/**
+ * A typed document value that cannot be used, refused as an input error naming the check's field
+ * (the record's documentExpr), never with the expression reader's internal message; `words` say why
+ * in the officer's terms.
+ */
+export class DocumentValueError extends InputError {
+  constructor(
+    readonly words: string,
+    expr: string,
+  ) {
+    super('unparseable', 'documentExpr', expr, 'numbers, + - * / ^, parentheses and the table’s symbols that have a value over the entry’s band and durations', words);
+  }
+}
+
+function namesIn(documentExpr: string): string[] {
+  try {
+    return variablesOf(documentExpr);
+  } catch {
+    throw new DocumentValueError(UNREADABLE, documentExpr);
+  }
+}
+
+/** The typed value at one point; a symbol without a value there (C_C below 700 nm, C2 outside 302.5-315 nm) is refused. */
+function typedAt(documentExpr: string, vars: Vars, lambda: Dec, t: Dec): Dec {
+  const missing = namesIn(documentExpr).filter((n) => vars[n] === undefined);
+  if (missing.length > 0) {
+    throw new DocumentValueError(`uses ${missing.join(', ')}, which ${missing.length > 1 ? 'have' : 'has'} no value at ${quantityText(lambda, 'nm')} and ${quantityText(t, 's')}`, documentExpr);
+  }
+  return evaluate(documentExpr, vars);
+}
+
+/**
+ * The entry's value at three sample points: as written, the stricter alternative, and a typed
+ * document value (refused with DocumentValueError where it cannot be computed).
+ */
 export function entrySamples(ruleSet: RuleSetId, e: CheckableEntry, documentExpr?: string): SamplePoint[] {
   return points(e).map(({ lambda, t }) => {
     const alpha = alphaFor(ruleSet, e, lambda, t);
@@ -74,7 +116,7 @@ export function entrySamples(ruleSet: RuleSetId, e: CheckableEntry, documentExpr
       ...(alpha !== undefined ? { alpha_mrad: alpha.toString() } : {}),
       asWritten: evaluate(e.expr, vars).toString(),
       ...(e.stricterAlt !== undefined ? { stricter: evaluate(e.stricterAlt, vars).toString() } : {}),
-      ...(documentExpr !== undefined ? { typed: evaluate(documentExpr, vars).toString() } : {}),
+      ...(documentExpr !== undefined ? { typed: typedAt(documentExpr, vars, lambda, t).toString() } : {}),
     };
   });
 }
@@ -87,21 +129,18 @@ export const DOCUMENT_VARIABLES: readonly string[] = ['t', 'lambda', 'alpha', ..
  * with the tables' grammar (numbers in e-notation, + - * / ^, parentheses, the tables' variables).
  */
 export function documentValueProblem(ruleSet: RuleSetId, e: CheckableEntry, documentExpr: string): string | null {
-  let names: string[];
   try {
-    names = variablesOf(documentExpr);
-  } catch {
-    return 'cannot be read: write it as in the table, for example 18*t^0.75*CE (numbers, + - * / ^, parentheses and the table’s symbols)';
-  }
-  const unknown = names.filter((n) => !DOCUMENT_VARIABLES.includes(n));
-  if (unknown.length > 0) return `uses ${unknown.join(', ')}, which the tables do not define (allowed: ${DOCUMENT_VARIABLES.join(', ')})`;
-  try {
+    const unknown = namesIn(documentExpr).filter((n) => !DOCUMENT_VARIABLES.includes(n));
+    if (unknown.length > 0) return `uses ${unknown.join(', ')}, which the tables do not define (allowed: ${DOCUMENT_VARIABLES.join(', ')})`;
     for (const p of entrySamples(ruleSet, e, documentExpr)) {
       const d = new Dec(p.typed ?? 'NaN');
-      if (!d.isFinite() || d.lte(0)) return `gives ${d.toString()} at ${p.wavelength_nm} nm and ${p.duration_s} s; a limit or factor must be a positive number`;
+      if (!d.isFinite() || d.lte(0)) {
+        return `gives ${d.isFinite() ? numberText(d) : 'no finite number'} at ${quantityText(p.wavelength_nm, 'nm')} and ${quantityText(p.duration_s, 's')}; a limit or factor must be a positive number`;
+      }
     }
-  } catch {
-    return 'uses a symbol that has no value within this entry’s band and durations';
+  } catch (err) {
+    if (err instanceof DocumentValueError) return err.words;
+    throw err;
   }
   return null;
 }

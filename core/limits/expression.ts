@@ -100,11 +100,17 @@ const LN10 = Dec.ln(10);
  * n square roots (correctly rounded in decimal.js) then an integer power, and 10^b = exp(b*ln 10)
  * with ln 10 computed once. Both agree with a.pow(b) far beyond the 20 digits kept in records.
  */
+// The fast paths below give the value decimal.js's general a.pow(b) gives (to about 38 digits; records
+// keep 20): a mutant that skips or widens one of them changes only the speed (test/mutation/EQUIVALENT.md).
 function power(a: Dec, b: Dec): Dec {
+  // Stryker disable next-line ConditionalExpression: speed only (see above)
   if (b.isInteger()) return a.pow(b);
+  // Stryker disable next-line ConditionalExpression,BlockStatement: speed only; for a <= 0 the general power gives the same (0, or NaN for a negative base)
   if (a.gt(0)) {
+    // Stryker disable next-line ConditionalExpression,EqualityOperator,AssignmentOperator,BlockStatement: speed only (see above)
     for (let n = 1, scale = 2; n <= 3; n++, scale *= 2) {
       const k = b.mul(scale);
+      // Stryker disable next-line ConditionalExpression,BlockStatement: (a^(1/2^n))^(b 2^n) = a^b for any b: speed only
       if (k.isInteger()) {
         let r = a;
         for (let i = 0; i < n; i++) r = r.sqrt();
@@ -120,6 +126,7 @@ const exprCache = new Map<string, Node>();
 
 function parseExpression(src: string): Node {
   let n = exprCache.get(src);
+  // Stryker disable next-line ConditionalExpression: the parse memo; parsing again gives the same tree
   if (!n) {
     const p = new Parser(tokenize(src), src);
     n = p.expr();
@@ -185,6 +192,7 @@ const tokenCache = new Map<string, string[]>();
 
 export function substitute(src: string, vars: Vars, fmt: (d: Dec) => string): string {
   let toks = tokenCache.get(src);
+  // Stryker disable next-line ConditionalExpression: the token memo; reading again gives the same tokens
   if (!toks) {
     toks = tokenize(src);
     tokenCache.set(src, toks);
@@ -198,6 +206,16 @@ export function substitute(src: string, vars: Vars, fmt: (d: Dec) => string): st
       return t;
     })
     .join('');
+}
+
+/**
+ * Forget the parsed expressions and token lists (core/caches.ts): a test then reads every expression
+ * afresh, so a memo filled earlier can never stand in for the reader under test.
+ */
+// Stryker disable next-line BlockStatement: a kept parse is the same tree; the tests clear it so that the reader itself is tested
+export function clearExpressionCache(): void {
+  exprCache.clear();
+  tokenCache.clear();
 }
 
 /**

@@ -24,6 +24,7 @@
  * (table-types.ts, RepetitivePulseRules): this file never asks which rule set it is evaluating.
  */
 import { Dec, recordString } from '../numeric/decimal.js';
+import { fmt } from '../beam/format.js'; // the one trace formatter (six significant figures)
 import { InputError, requireInRange, requirePositive } from '../errors.js';
 import type { LimitSettings, RowCheck, RuleSetId, Tissue } from '../model/inputs.js';
 import type { CountingWindow, CpRuleData, PulseRuleText, RepetitivePulseRules, RuleSetTable } from './table-types.js';
@@ -95,12 +96,6 @@ export interface PulsedLimitResult {
 }
 
 
-/** Six significant figures for the trace; e-notation for very small or large values. */
-function fmt(d: Dec): string {
-  const r = d.toSignificantDigits(6);
-  const a = r.abs();
-  return !a.isZero() && (a.lt('1e-3') || a.gte('1e7')) ? r.toExponential().replace('e+', 'e') : r.toString();
-}
 
 function validatePulsed(q: PulsedLimitQuery): { tp: Dec; T: Dec; f: Dec | null } {
   const range = `${DURATION_RANGE_S[0]} to ${DURATION_RANGE_S[1]} s`;

@@ -33,6 +33,7 @@ const bandEdgeCache = new Map<RuleSetId, Set<number>>();
 /** Is the wavelength on an inner edge between limit-table bands of the rule set (either tissue; within 1e-9 relative, ./intervals.ts)? */
 export function onBandEdge(ruleSet: RuleSetId, wavelength_nm: number): boolean {
   let edges = bandEdgeCache.get(ruleSet);
+  // Stryker disable next-line ConditionalExpression: a memo of the table's fixed band edges; rebuilt each time it is the same set (test/mutation/EQUIVALENT.md)
   if (!edges) {
     edges = new Set<number>();
     const t = ruleSetTable(ruleSet);

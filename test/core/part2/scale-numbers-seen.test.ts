@@ -86,6 +86,11 @@ describe('EN 207 scale numbers through evaluateBeam (EN 207:2017 table via [WIKI
     // Above LB10 the note says that no EN 207 filter is adequate, and only then.
     if (n > 10) expect(s?.note).toMatch(/^above LB10: no EN 207 filter is adequate/);
     else expect(s?.note).not.toMatch(/above LB10/);
+    // The note's unrounded scale number log10(X/X1) + 1, shown to 6 significant figures (derived from
+    // the same table: N = ceil(log10(X/X1)) + 1).
+    const shown = /unrounded (-?[0-9.]+(?:e-?\d+)?)/.exec(s?.note ?? '')?.[1];
+    const want = Math.log10(X / X1) + 1;
+    expect(Math.abs(Number(shown) - want), `note: ${s?.note ?? ''}`).toBeLessThan(Math.max(Math.abs(want), 1e-3) * 1e-5);
   });
 });
 

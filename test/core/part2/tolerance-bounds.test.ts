@@ -290,3 +290,37 @@ it('532 nm, 100 us at 40.4 Hz, pulse duration ±10 % and repetition rate ±2 %: 
   expect(rel(r.bounds.limit_E_Wm2.conservative, 18 * 9e-5 ** 0.75 * 11 ** -0.25 * 40.4)).toBeLessThan(1e-9);
 });
 
+
+// The toleranced evaluations see the same beam as the nominal one: its source size and the lens on
+// the path reach every perturbed end (core/beam/core-numbers.ts), not only the nominal numbers.
+describe('the source size and the lens reach the toleranced ends', () => {
+  // 532 nm, 1 W, 0.25 s, a 10 mrad source: C_E = alpha/alpha_min = 10/1.5 (alpha_min = 1.5 mrad
+  // below alpha_max = 100 mrad at 0.25 s; EU Directive 2006/25/EC Table 2.5, read, ICNIRP 2013 the
+  // same, from memory), E = 18 t^0.75 C_E / t = 169.8 W/m². A point-source look-up at the +10 % end
+  // (25.5 W/m²) would lower the bound's limit and lengthen its NOHD.
+  it('a 10 mrad source, power ±10 %: limit bound 18 t^0.75 C_E / t, NOHD bound at 1.1 W with that limit', () => {
+    const Ex = E * (10 / 1.5);
+    const b = evaluateBeam({ ...green({ power: 0.1 }), sourceAngle_rad: 0.01 }).bounds;
+    expect(rel(b.limit_E_Wm2.conservative, Ex)).toBeLessThan(1e-9);
+    expect(rel(b.nohd_m.conservative, (Math.sqrt((4 * 1.1) / (Math.PI * Ex)) - 0.001) / 0.001)).toBeLessThan(1e-9);
+    expect(rel(b.odRequired.conservative, Math.log10((4 * 1.1) / (Math.PI * 0.007 ** 2) / Ex))).toBeLessThan(1e-9);
+  });
+  // A 20 mm beam at 532 nm, 1 W, 0.25 s, power ±10 %. With a lens on the path the whole beam can
+  // fall inside the 7 mm aperture: OD = log10(4 x 1.1 W / (pi (7 mm)²) / E) = 3.14; without, the
+  // 7 mm aperture takes the part of the 20 mm beam it covers: log10(4 x 1.1 W / (pi (20 mm)²) / E) =
+  // 2.14 (domain notes 2.1 item 2; ANSI Z136.1 section 4.6.2, from memory; derived).
+  it.each([
+    ['with a lens on the path', true, 0.007],
+    ['without a lens', false, 0.02],
+  ] as const)('a 20 mm beam %s, power ±10 %: OD bound log10(4.4 W / (pi d²) / E)', (_n, lens, d) => {
+    const b = evaluateBeam({
+      wavelength_nm: 532,
+      emission: { kind: 'cw', power_W: 1 },
+      beam: { diameter_m: 0.02, divergence_rad: 0.001, definition: '1/e' },
+      tolerances: { power: 0.1 },
+      ...(lens ? { viewing: { lens: { focalLength_m: 0.1 } } } : {}),
+    }).bounds;
+    expect(rel(b.odRequired.nominal, Math.log10(4 / (Math.PI * d ** 2) / E))).toBeLessThan(1e-9);
+    expect(rel(b.odRequired.conservative, Math.log10((4 * 1.1) / (Math.PI * d ** 2) / E))).toBeLessThan(1e-9);
+  });
+});
