@@ -24,7 +24,7 @@ function linesOf(spec: string): number[] {
 export function parseListedLines(markdown: string): ListedLines {
   const listed = new Map<string, Set<number>>();
   for (const row of markdown.split('\n')) {
-    const m = /^\|\s*(core\/[\w/-]+\.ts):([^|]*)\|/.exec(row);
+    const m = /^\|\s*(core\/[\w/-]+\.ts):((?:[^|\\]|\\.)*)\|/.exec(row);
     if (!m) continue;
     const set = listed.get(m[1]!) ?? new Set<number>();
     for (const l of linesOf(m[2]!)) set.add(l);

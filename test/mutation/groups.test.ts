@@ -141,3 +141,19 @@ describe('recording a report', () => {
     expect(() => expandPatterns(['core/{beam,room}/*.ts'])).toThrow(/only dir\/\*\*\/\*\.ext/);
   });
 });
+
+describe('lines EQUIVALENT.md lists', () => {
+  // Cases: first cells as EQUIVALENT.md writes them (project convention, not a published source).
+  const cases: { row: string; lines: number[] }[] = [
+    { row: '| core/hazard/range.ts:49, 65 | m | why |', lines: [49, 65] },
+    { row: '| core/hazard/diffuse.ts:81-83 (disabled) | m | why |', lines: [81, 82, 83] },
+    { row: '| core/beam/validate-beam.ts:94 (and 110 since the fourth session) | m | why |', lines: [94, 110] },
+    { row: '| core/beam/validate-beam.ts:112 (110 in the measured run) | m | why |', lines: [112] },
+    { row: '| core/hazard/diffuse.ts:51 (`\\|\\|` disabled; 7 stays) | m | why |', lines: [51] },
+    { row: '| File:line | Mutant | Why |', lines: [] },
+  ];
+  it.each(cases)('$row', ({ row, lines }) => {
+    const listed = parseListedLines(`${row}\n`);
+    expect([...(listed.values().next().value ?? [])]).toEqual(lines);
+  });
+});
