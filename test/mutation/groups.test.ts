@@ -119,6 +119,16 @@ describe('recording a report', () => {
     }
   });
 
+  it('a report made on another version of the source records nothing for that file', () => {
+    const scores: Scores = { about: '', files: {} };
+    const other = report([file]);
+    other.files[file]!.source = `${source}// another version\n`;
+    const { recorded, remarks } = foldReport(scores, other, 'report.json', ctx);
+    expect(recorded).toEqual([]);
+    expect(remarks).toEqual([`${file}: not recorded, the report was made on another version of the source (re-run its group here)`]);
+    expect(scores.files).toEqual({});
+  });
+
   it('a report that does not say what it mutated is refused', () => {
     const scores: Scores = { about: '', files: {} };
     expect(() => foldReport(scores, { files: report([file]).files }, 'old.json', ctx)).toThrow(/does not say what it mutated/);

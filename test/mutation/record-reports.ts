@@ -39,7 +39,7 @@ export async function recordReports(paths: readonly string[], measuredAt?: (path
       }
       outcome.recorded.push(...recorded);
     } catch (err) {
-      console.error(`Refused ${path}: ${err instanceof Error ? err.message : String(err)}`);
+      console.error(`Refused: ${err instanceof Error ? err.message : String(err)}`);
       outcome.refused.push(path);
     }
   }

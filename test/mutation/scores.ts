@@ -162,6 +162,12 @@ export function foldReport(scores: Scores, report: StrykerReport, name: string, 
     const listedEquivalent =
       fileResult?.mutants.filter((m) => (m.status === 'Survived' || m.status === 'NoCoverage') && (lines?.has(m.location.start.line) ?? false)).length ?? 0;
     const valid = killed + timeout + survived + noCoverage;
+    const current = ctx.currentSource(file);
+    if (current !== undefined && sha256(current) !== sha256(source)) {
+      // Recorded, it would be STALE at once: the score belongs to the other version of the file.
+      remarks.push(`${file}: not recorded, the report was made on another version of the source (re-run its group here)`);
+      continue;
+    }
     if (!fileResult) remarks.push(`${file}: no mutant in the report (nothing Stryker can mutate there), recorded as 0 valid`);
     scores.files[file] = {
       group,
