@@ -25,6 +25,7 @@ export interface GoverningSummary {
 /** The summary of `tl` naming the criterion with the highest ratio in `od` (same criteria, same order). */
 export function summaryByMargin(tl: TissueLimits, od: Pick<OdOutcome, 'ratios' | 'governing' | 'ratio'>, emission: Emission): GoverningSummary {
   const crit = tl.criteria;
+  // Stryker disable next-line ConditionalExpression,LogicalOperator: with one criterion the lowest-limit ratio is the OD ratio itself, so the next test returns the same summary (test/mutation/EQUIVALENT.md).
   if (crit.length < 2 || od.ratios.length !== crit.length) return { summary: tl.summary, step: null };
   const minL = crit.reduce((m, c) => (c.L.lt(m) ? c.L : m), crit[0]?.L as Dec);
   // the ratio of the lowest-limit criteria (the ones the summary was built from)

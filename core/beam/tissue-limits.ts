@@ -88,8 +88,10 @@ export function tissueLimits(q: TissueQuery): TissueLimits {
   const shape = e.kind === 'cw' ? { kind: 'cw' } : { kind: 'pulsed', t: e.pulseDuration_s, f: e.repetitionRate_Hz ?? null };
   const key = JSON.stringify([q.ruleSet, q.tissue, q.wavelength_nm, shape, q.exposureDuration_s, q.durationWhy, q.sourceAngle_rad ?? null, q.settings ?? null]);
   let hit = cache.get(key);
+  // Stryker disable next-line ConditionalExpression: the criteria memo changes only speed and memory; its key holds every input but the power (test/mutation/EQUIVALENT.md).
   if (!hit) {
     hit = computeTissueLimits(q);
+    // Stryker disable next-line ConditionalExpression,EqualityOperator: the criteria memo changes only speed and memory; its key holds every input but the power (test/mutation/EQUIVALENT.md).
     if (cache.size >= CACHE_MAX) cache.clear();
     cache.set(key, hit);
   }
@@ -97,6 +99,7 @@ export function tissueLimits(q: TissueQuery): TissueLimits {
 }
 
 /** Empty the criteria cache (benchmarks of a cold evaluation). */
+// Stryker disable next-line BlockStatement: the criteria memo changes only speed and memory; its key holds every input but the power (test/mutation/EQUIVALENT.md).
 export function clearTissueLimitCache(): void {
   cache.clear();
 }

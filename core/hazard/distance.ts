@@ -48,6 +48,7 @@ export function distanceOver(tl: LimitCriteria, spec: DistanceSpec): DistanceOut
   const setups = tl.criteria.map((c) => ({ c, setup: spec.setup(c) }));
   const round = (x: RangeSetup): boolean => x.spread.a.eq(x.spread.ay) && x.spread.phi.eq(x.spread.phiy) && !(x.mu && x.mu.gt(0));
   let best: { r: Dec; c: Criterion; range: RangeResult; setup: RangeSetup } | null = null;
+  // Stryker disable next-line MethodExpression: every criterion of one geometry has the same spread and attenuation, so `some` equals `every` here (test/mutation/EQUIVALENT.md).
   if (setups.every((x) => round(x.setup))) {
     // Round beam without attenuation: r = (sqrt(4S/(pi L)) - a)/phi grows with S/L, so only the
     // criterion with the largest S/L among those exceeded at the start needs the square root. Every
