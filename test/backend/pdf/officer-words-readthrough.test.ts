@@ -89,7 +89,9 @@ const MUST_NOT_APPEAR: ReadonlyArray<{ readonly what: string; readonly pattern: 
   { what: 'a Greek letter spelled out', pattern: /\b(?:lambda|alpha|gamma|phi|tau|pi)\b/, why: 'ISO 80000-2:2019 and the limit tables write λ, α, γ, φ, τ, π' },
   { what: 'programmer comparisons and arrows', pattern: /<=|>=|->/, why: 'ISO 80000-2:2019: ≤, ≥' },
   { what: 'a square root written sqrt(', pattern: /\bsqrt\(/, why: 'ISO 80000-2:2019: √' },
-  { what: 'a number in computer e-notation (1e-13, 2.7e5)', pattern: /(?<![0-9a-f])\d+(?:\.\d+)?e[-+]?\d+\b(?! [0-9a-f]{4}\b)/, why: 'the owner\'s rule: engineering notation with units; ISO 80000-1 clause 6.5.5 (× 10ⁿ)' },
+  // A group of a record fingerprint ("0f0f 6e46") is hex, not a number: a group next to another
+  // group, on the same line or across a line break, is not read as e-notation.
+  { what: 'a number in computer e-notation (1e-13, 2.7e5)', pattern: /(?<![0-9a-f])(?<![0-9a-f]{4}\s+)\d+(?:\.\d+)?e[-+]?\d+\b(?!\s+[0-9a-f]{4}\b)/, why: 'the owner\'s rule: engineering notation with units; ISO 80000-1 clause 6.5.5 (× 10ⁿ)' },
   { what: 'a micro prefix written "u" (um, uJ, uW, us)', pattern: /\d\s?u(?:m|J|W|s|rad)\b/, why: 'SI brochure (2019) Table 7: the prefix symbol is µ' },
   { what: 'a square written m^2, m2 or cm2', pattern: /\bc?m\^?2\b|\/c?m2\b/, why: 'SI brochure (2019) section 5.4.3: m²' },
   { what: 'degrees written "deg"', pattern: /\d\s?deg\b/, why: 'SI brochure (2019) Table 8: °' },
