@@ -19,7 +19,7 @@ import {
   type LabelRequest,
   type PlotPoint,
 } from '../../../../core/plot/label-placement.js';
-import type { CanvasElement, Content, ContentStack, ContentSvg, ContentText } from 'pdfmake/interfaces';
+import type { CanvasElement, Content, ContentStack, ContentText } from 'pdfmake/interfaces';
 
 /** Style names that mark, in the document definition, the plot's data vectors and its placed labels (no style is defined under them). */
 export const PLOT_DATA = 'plot-data';
@@ -77,14 +77,6 @@ export function decadeLabel(exp: number): string {
   return '10' + String(exp).split('').map((c) => SUPERSCRIPT[c] ?? c).join('');
 }
 
-function esc(s: string): string {
-  return s.replace(/&/g, '&amp;').replace(/</g, '&lt;').replace(/>/g, '&gt;').replace(/"/g, '&quot;');
-}
-
-function n(v: number): string {
-  return v.toFixed(1);
-}
-
 /** Rounded to 0.1 pt: positions in the definition stay short and a test reads them as drawn. */
 function r1(v: number): number {
   return Math.round(v * 10) / 10;
@@ -134,9 +126,11 @@ function dash(on: number, off: number): { length: number; space: number } {
  * axis texts are aligned within that width.
  */
 export function logPlot(p: LogPlot): ContentStack {
-  // The legend stands in a band above the frame (a short line and the series name per row), so it
-  // can never cover a curve: inside a crowded frame there is not always room for it.
-  const m = { left: 46, right: 10, top: 8 + p.series.length * LEGEND_ROW, bottom: 30 };
+  // The y-axis title stands level above the axis, in the first row of a band above the frame, and
+  // the legend (a short line and the series name per row) below it, so neither can cover a curve:
+  // inside a crowded frame there is not always room. A level title, not one turned along the axis:
+  // pdfmake's text cannot turn, and a turned one drawn as SVG cost about 6 % of the report's print.
+  const m = { left: 36, right: 10, top: 8 + (p.series.length + 1) * LEGEND_ROW, bottom: 30 };
   const w = p.width - m.left - m.right;
   const h = p.height - m.top - m.bottom;
   const xs = [...p.series.flatMap((s) => s.points.map((pt) => pt[0])), ...(p.markers ?? []).map((k) => k.x), ...(p.vLines ?? []).map((l) => l.at)];
@@ -221,7 +215,7 @@ export function logPlot(p: LogPlot): ContentStack {
   }
   const legend: CanvasElement[] = [];
   p.series.forEach((s, i) => {
-    const top = 4 + i * LEGEND_ROW;
+    const top = 4 + (i + 1) * LEGEND_ROW;
     const mid = r1(top + LEGEND_ROW / 2);
     legend.push({ type: 'line', x1: m.left + 2, y1: mid, x2: m.left + 16, y2: mid, lineColor: s.color, lineWidth: 1.4, ...(s.dashed === true ? { dash: dash(3, 2) } : {}) });
     texts.push(textAt({ text: s.label, fontSize: LABEL_PT, color: '#000000' }, m.left + LEGEND_SWATCH, top + (LEGEND_ROW - LABEL_PT * 1.2) / 2 + LABEL_PT * BASELINE));
@@ -238,12 +232,7 @@ export function logPlot(p: LogPlot): ContentStack {
     const t = labelOf.get(pl.id);
     if (t !== undefined) texts.push(textAt(t, pl.box.x, pl.box.y + t.fontSize * BASELINE, PLOT_LABEL));
   }
-  // The y-axis title is the one rotated text: pdfmake text cannot turn, so it stays a small SVG.
-  const yTitle: ContentSvg = {
-    svg: `<svg xmlns="http://www.w3.org/2000/svg" width="14" height="${n(h)}" viewBox="0 0 14 ${n(h)}"><text x="10" y="${n(h / 2)}" font-size="8" text-anchor="middle" fill="#000000" transform="rotate(-90 10 ${n(h / 2)})">${esc(p.yLabel)}</text></svg>`,
-    width: 14,
-    relativePosition: { x: 0, y: m.top },
-  };
+  texts.push(textAt({ text: p.yLabel, fontSize: 8, color: '#000000' }, 0, 4 + (LEGEND_ROW - 8 * 1.2) / 2 + 8 * BASELINE));
   // Everything is placed relative to the plot's top left corner and takes no room of its own, in
   // drawing order (grid and frame, data, text); an empty canvas as tall as the plot (a
   // rectangle of no height at its foot, which paints nothing) gives it its height.
@@ -253,7 +242,6 @@ export function logPlot(p: LogPlot): ContentStack {
       { canvas: grid, relativePosition: at0 },
       { canvas: [...data, ...marks, ...leaders, ...legend], style: PLOT_DATA, relativePosition: at0 },
       ...texts,
-      yTitle,
       { canvas: [{ type: 'rect', x: 0, y: p.height, w: p.width, h: 0, color: '#ffffff' }] },
     ],
   };
