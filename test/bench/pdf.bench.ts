@@ -18,7 +18,7 @@
  *  - pdfmake measure 215 ms: ~6000 inline runs of the derivation appendix (22 of the 32 pages; 22 style
  *    look-ups per run in pdfmake's StyleContextStack), the tables, and parsing the 20 plot SVGs;
  *  - layout 70 ms, headers and footers of 32 pages 60 ms;
- *  - rendering 470 ms: the text runs (pdfkit, one text object per run), the 20 SVG plots ~100 ms
+ *  - rendering 470 ms: the text runs (pdfkit, one text object per run), the 20 SVG plots ~100 ms (no SVG since)
  *    (svg-to-pdfkit places every label glyph by glyph), page compression;
  *  - font subsets and the end of the file 15 ms.
  *  By part: the appendix ~60 % of pdfmake's time, the plots ~30 % (curves plus SVG), the rest ~10 %.
@@ -46,6 +46,27 @@
  *  ~25 % (pdfkit text, 20 SVG plots ~8 %, page compression ~3 %), the eye-limit curves ~8 % (about 3
  *  look-ups per breakpoint interval; an exact envelope from each candidate row's power law would need
  *  2), garbage collection ~15 %.
+ *
+ * 3 December 2026, later (same machine, load average 6-15 from other jobs; CPU time of the first print;
+ * A/B: both versions imported into one process and printed alternately, 9-11 prints each):
+ *  - kept: the plots drawn with pdfmake's own canvas vectors and text lines instead of SVG
+ *    (electron/backend/pdf/plots/log-plot.ts; the labels are real text runs now): medians 619 -> 558 and
+ *    625 -> 552 ms (new below old in 18 of 18 pairs, load 12-13);
+ *  - kept: the y-axis title level above the axis instead of turned (the one text pdfmake cannot turn
+ *    had stayed a small SVG per plot): 588 -> 555 ms (8 of 9 pairs, load 13); so no report plot is SVG;
+ *  - both against the morning's version, two runs at load 6-13: paired ratio medians 0.90 and 0.91;
+ *    the bench run alone at load 8-9: 535 ms CPU (the morning's version right after it: 819 ms, which
+ *    shows how far CPU time moves with the load here). The 0.5 s target is NOT met under this load;
+ *    earlier runs of the morning's version at load 3 measured 0.48-0.51 s, so at that load this one
+ *    should be about 0.45 s, not measured (the machine was never that quiet this session).
+ *  - not done: an exact limit curve with 2 look-ups per interval. Without the candidate rows no
+ *    2-point curve is exact (two rows of a dual limit can cross inside an interval, and only a third
+ *    look-up or the rows' own power laws find the crossing); exposureLimit gives the rows but with its
+ *    derivation trace, about 1.6 times the cost of exposureLimitH, so 2 of them cost more than today's
+ *    3. It pays only with a trace-free look-up that returns the candidates (core/limits/exposure-limit.ts).
+ *  Left (cpu profile of 8 prints of this version, setup included): garbage collection ~13 %, pdfmake
+ *  ~18 % (style look-ups ~4 %), pdfkit ~18 % (text layout and encoding), decimal.js ~9 % (most of it
+ *  the limit curves), page compression ~3 %, label placement ~1.5 %.
  * Run alone: npx tsx test/bench/pdf.bench.ts
  */
 import { renderDoorNotice, renderReport, type RenderOptions } from '../../electron/backend/pdf/index.js';

@@ -4,7 +4,7 @@
  * core message it came from; then through the core's one formula formatter
  * (`core/units/formula-text.ts`): programmer notation becomes the standards' notation (×, λ,
  * exponents raised, subscripts lowered with pdfmake's `sup` / `sub`) and a number keeps its unit on
- * its line (no-break space, ISO 80000-1 clause 7). Plot SVGs and QR payloads are left as they are
+ * its line (no-break space, ISO 80000-1 clause 7). SVG drawings (room plans, signs) and QR payloads are left as they are
  * (no sentences in them).
  */
 import type { TDocumentDefinitions } from 'pdfmake/interfaces';

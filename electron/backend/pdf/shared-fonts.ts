@@ -12,7 +12,7 @@
  *    tag and returns the font parsed earlier.
  *  - pdfkit's `registerFont(name, src)` makes `font(name)` open `src` instead of the file `name`.
  *    Each new pdfmake document registers every font path with its tag before its first font is
- *    opened, so pdfmake's text and the text inside SVG plots (which asks pdfkit for the path
+ *    opened, so pdfmake's text and the text inside SVG drawings (which asks pdfkit for the path
  *    directly) both get the shared font, cached per document under the same path as before.
  * If any of this is missing or does not answer as expected (a changed library), nothing is
  * registered and pdfkit reads the files as before: slower, same output.

@@ -1,8 +1,8 @@
 /**
  * Report plots (issue 12, item 7): no label or legend covers a curve, a reference line (limit,
- * NOHD) or another label. Read from the report's document definition: every plot is an SVG whose
- * curves and lines carry data-role="line" and whose labels carry data-role="label"; each label's
- * box is its baseline position, its font size and the text width estimate, which a test in
+ * NOHD) or another label. Read from the report's document definition: every plot is a stack whose
+ * curves and lines are a canvas styled PLOT_DATA and whose labels are text styled PLOT_LABEL; each
+ * label's box is its baseline position, its font size and the text width estimate, which a test in
  * test/core/plot/label-placement.test.ts shows is never narrower than the printed Roboto text.
  * Rooms: the ten-laser room (20 plots) and the demo rooms, A4 in SI units and Letter in ANSI units.
  * (Self-consistency check of the drawing; no published source.)
@@ -16,23 +16,22 @@ import type { Content } from 'pdfmake/interfaces';
 import { reportDefinition } from '../../../electron/backend/pdf/documents/report.js';
 import { documentInputFromAssessment, type DocumentInput, type RenderOptions } from '../../../electron/backend/pdf/index.js';
 import { boxesOverlapArea, linesLengthInBox, textWidthEm, type LabelBox, type PlotPoint } from '../../../core/plot/label-placement.js';
+import { PLOT_DATA, PLOT_LABEL } from '../../../electron/backend/pdf/plots/log-plot.js';
 import { benchDocument, tenLaserRoom } from './ten-laser-room.js';
 
-function svgsOf(node: unknown, out: string[] = []): string[] {
-  if (Array.isArray(node)) for (const c of node) svgsOf(c, out);
+/** Every plot of the definition: a stack holding a canvas styled PLOT_DATA (its curves and lines). */
+function plotsOf(node: unknown, out: unknown[][] = []): unknown[][] {
+  if (Array.isArray(node)) for (const c of node) plotsOf(c, out);
   else if (node !== null && typeof node === 'object') {
-    for (const [k, v] of Object.entries(node)) {
-      if (k === 'svg' && typeof v === 'string') out.push(v);
-      else if (typeof v === 'object') svgsOf(v, out);
-    }
+    const stack = (node as { stack?: unknown }).stack;
+    if (Array.isArray(stack) && stack.some((c) => styleOf(c) === PLOT_DATA)) out.push(stack);
+    else for (const v of Object.values(node)) if (typeof v === 'object') plotsOf(v, out);
   }
   return out;
 }
 
-const attr = (el: string, name: string): string => new RegExp(`\\b${name}="([^"]*)"`).exec(el)?.[1] ?? '';
-
-function unescape(s: string): string {
-  return s.replace(/&lt;/g, '<').replace(/&gt;/g, '>').replace(/&quot;/g, '"').replace(/&amp;/g, '&');
+function styleOf(node: unknown): unknown {
+  return node !== null && typeof node === 'object' ? (node as { style?: unknown }).style : undefined;
 }
 
 interface Drawn {
@@ -40,28 +39,40 @@ interface Drawn {
   readonly labels: Array<{ text: string; box: LabelBox }>;
 }
 
-function drawnOf(svg: string): Drawn {
+interface Vector {
+  type: string;
+  x1?: number;
+  y1?: number;
+  x2?: number;
+  y2?: number;
+  points?: PlotPoint[];
+}
+
+interface PlacedText {
+  text: string;
+  fontSize: number;
+  lineHeight?: number;
+  relativePosition: { x: number; y: number };
+}
+
+function drawnOf(plot: readonly unknown[]): Drawn {
   const lines: PlotPoint[][] = [];
-  for (const el of svg.match(/<(line|path) data-role="line"[^>]*>/g) ?? []) {
-    if (el.startsWith('<line')) {
-      lines.push([
-        { x: Number(attr(el, 'x1')), y: Number(attr(el, 'y1')) },
-        { x: Number(attr(el, 'x2')), y: Number(attr(el, 'y2')) },
-      ]);
-    } else {
-      const pts = [...attr(el, 'd').matchAll(/[ML]([-\d.]+) ([-\d.]+)/g)].map((m) => ({ x: Number(m[1]), y: Number(m[2]) }));
-      lines.push(pts);
+  const labels: Array<{ text: string; box: LabelBox }> = [];
+  for (const node of plot) {
+    if (styleOf(node) === PLOT_DATA) {
+      for (const v of (node as { canvas: Vector[] }).canvas) {
+        if (v.type === 'line') lines.push([{ x: Number(v.x1), y: Number(v.y1) }, { x: Number(v.x2), y: Number(v.y2) }]);
+        else if (v.type === 'polyline') lines.push(v.points ?? []);
+      }
+    } else if (styleOf(node) === PLOT_LABEL) {
+      const t = node as PlacedText;
+      // pdfmake sets a line's baseline Roboto's ascent (1900/2048 em) below its top (lineHeight 1);
+      // Roboto: ascent about 0.93 em above the baseline, descent about 0.24 em below it.
+      expect(t.lineHeight).toBe(1);
+      const baseline = t.relativePosition.y + (1900 / 2048) * t.fontSize;
+      labels.push({ text: t.text, box: { x: t.relativePosition.x, y: baseline - 0.95 * t.fontSize, w: textWidthEm(t.text) * t.fontSize, h: 1.2 * t.fontSize } });
     }
   }
-  const labels = [...svg.matchAll(/<text data-role="label"([^>]*)>([^<]*)<\/text>/g)].map((m) => {
-    const el = m[1] ?? '';
-    const text = unescape(m[2] ?? '');
-    const size = Number(attr(el, 'font-size'));
-    const x = Number(attr(el, 'x'));
-    const baseline = Number(attr(el, 'y'));
-    // Roboto: ascent about 0.93 em above the baseline, descent about 0.24 em below it.
-    return { text, box: { x, y: baseline - 0.95 * size, w: textWidthEm(text) * size, h: 1.2 * size } };
-  });
   return { lines, labels };
 }
 
@@ -102,10 +113,10 @@ describe('report plots: labels cover no curve, line or other label', () => {
 
 // @vitest-environment node is the default here (test/vitest.config.ts); the store is real SQLite.
 function check(doc: DocumentInput, opts: RenderOptions, atLeastPlots: number): void {
-  const svgs = svgsOf(reportDefinition(doc, opts).content as Content).filter((s) => s.includes('data-role="label"'));
-  expect(svgs.length).toBeGreaterThanOrEqual(atLeastPlots);
-  for (const svg of svgs) {
-    const { lines, labels } = drawnOf(svg);
+  const plots = plotsOf(reportDefinition(doc, opts).content as Content);
+  expect(plots.length).toBeGreaterThanOrEqual(atLeastPlots);
+  for (const plot of plots) {
+    const { lines, labels } = drawnOf(plot);
     expect(lines.length).toBeGreaterThan(0);
     expect(labels.length).toBeGreaterThan(0);
     for (const l of labels) {

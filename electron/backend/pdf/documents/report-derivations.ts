@@ -7,8 +7,8 @@ import { heading, paragraph } from '../blocks.js';
 import * as fmt from '../format.js';
 import { COLOR } from '../page.js';
 import type { RoomView } from '../room-view.js';
-import { limitVsDurationSvg, type CurveCache } from '../plots/limit-vs-duration.js';
-import { exposureVsDistanceSvg } from '../plots/exposure-vs-distance.js';
+import { limitVsDurationPlot, type CurveCache } from '../plots/limit-vs-duration.js';
+import { exposureVsDistancePlot } from '../plots/exposure-vs-distance.js';
 import { TracePrinter } from './trace-content.js';
 import { rowsUsedSection } from './report-rows.js';
 
@@ -25,18 +25,18 @@ export function plotsSection(doc: DocumentInput, view: RoomView, units: UnitHabi
   ];
   view.beams.forEach((b, i) => {
     const settings = doc.content.input.settings;
-    const left = limitVsDurationSvg(b.result, b.input, b.input?.settings ?? settings, units, plotW, cache);
-    const right = exposureVsDistanceSvg(b.result, b.input, units, plotW, settings);
+    const left = limitVsDurationPlot(b.result, b.input, b.input?.settings ?? settings, units, plotW, cache);
+    const right = exposureVsDistancePlot(b.result, b.input, units, plotW, settings);
     out.push({
       unbreakable: true,
       stack: [
         { text: `${i + 1}. ${b.result.label} — ${fmt.wavelength(b.result.wavelength_nm)}`, bold: true, fontSize: 9.5, margin: [0, 6, 0, 2] },
         {
           columns: [
-            { svg: left, width: plotW },
+            { ...left, width: plotW },
             right === null
               ? { width: plotW, text: 'Exposure against distance: not drawn (no beam input for this result).', fontSize: 8, color: COLOR.muted }
-              : { svg: right, width: plotW },
+              : { ...right, width: plotW },
           ],
           columnGap: 12,
         },

@@ -7,13 +7,14 @@
  */
 import { exposureAlongBeam, type BeamInput, type BeamResult, type ExposureAlongBeam, type LimitSettings, type UnitHabit } from '../../../../core/index.js';
 import * as fmt from '../format.js';
-import { logPlotSvg } from './log-plot.js';
+import type { ContentStack } from 'pdfmake/interfaces';
+import { logPlot } from './log-plot.js';
 import { BoundedMemo } from './curve-cache.js';
 
 /** Exposure curves across renders, keyed by everything `exposureAlongBeam` reads. */
 const ALONG = new BoundedMemo<ExposureAlongBeam | null>(64);
 
-export function exposureVsDistanceSvg(beam: BeamResult, input: BeamInput | null, units: UnitHabit, width: number, settings?: LimitSettings): string | null {
+export function exposureVsDistancePlot(beam: BeamResult, input: BeamInput | null, units: UnitHabit, width: number, settings?: LimitSettings): ContentStack | null {
   if (input === null) return null;
   const scale = units === 'ANSI' ? 1e-4 : 1;
   const nohdNum = Number(beam.nohd_m_reported);
@@ -30,7 +31,7 @@ export function exposureVsDistanceSvg(beam: BeamResult, input: BeamInput | null,
   const unit = `${along.quantity === 'E' ? 'W' : 'J'}/${units === 'ANSI' ? 'cm²' : 'm²'}`;
   const what = along.quantity === 'E' ? 'E at the eye' : 'H per pulse at the eye';
   const limitText = along.quantity === 'E' ? fmt.limitE(along.limit, units) : fmt.limitH(along.limit, units);
-  return logPlotSvg({
+  return logPlot({
     width,
     height: width * 0.68,
     xLabel: 'distance from the exit r / m',

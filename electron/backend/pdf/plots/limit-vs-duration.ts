@@ -16,7 +16,8 @@ import {
   type UnitHabit,
 } from '../../../../core/index.js';
 import { limitH, duration, wavelength } from '../format.js';
-import { logPlotSvg } from './log-plot.js';
+import type { ContentStack } from 'pdfmake/interfaces';
+import { logPlot } from './log-plot.js';
 import { BoundedMemo } from './curve-cache.js';
 
 export type CurveCache = Map<string, ReadonlyArray<readonly [number, number]>>;
@@ -93,7 +94,7 @@ function sampleCurve(ruleSet: RuleSetId, wavelength_nm: number, sourceAngle_rad:
   return curve;
 }
 
-export function limitVsDurationSvg(beam: BeamResult, input: BeamInput | null, settings: LimitSettings | undefined, units: UnitHabit, width: number, cache?: CurveCache): string {
+export function limitVsDurationPlot(beam: BeamResult, input: BeamInput | null, settings: LimitSettings | undefined, units: UnitHabit, width: number, cache?: CurveCache): ContentStack {
   const { factor, unit } = hScale(units);
   const T = beam.mpe.exposureDuration_s;
   const pulse = input?.emission.kind === 'pulsed' ? input.emission.pulseDuration_s : null;
@@ -109,7 +110,7 @@ export function limitVsDurationSvg(beam: BeamResult, input: BeamInput | null, se
   if (pulse !== null) {
     markers.push({ x: pulse, y: Number(beam.mpe.H_Jm2) * factor, label: `per pulse (${beam.mpe.governingRule}): ${limitH(beam.mpe.H_Jm2, units)}`, color: '#0057B8' });
   }
-  return logPlotSvg({
+  return logPlot({
     width,
     height: width * 0.68,
     xLabel: 'exposure duration t / s',
