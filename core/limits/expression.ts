@@ -25,6 +25,7 @@ function tokenize(src: string): string[] {
     if (/^\s*$/.test(src.slice(pos))) break;
     TOKEN.lastIndex = pos;
     const m = TOKEN.exec(src);
+    // Stryker disable next-line MethodExpression: equivalent, an internal message never shown (every caller given an officer's text refuses it with its own words and field)
     if (!m || m[1] === undefined) throw new Error(`limit table expression: cannot read '${src.slice(pos)}' in '${src}'`);
     out.push(m[1]);
     pos = TOKEN.lastIndex;
@@ -199,6 +200,7 @@ export function substitute(src: string, vars: Vars, fmt: (d: Dec) => string): st
   }
   return toks
     .map((t) => {
+      // Stryker disable next-line ConditionalExpression: equivalent, every token is then looked up in the variables, and no operator, parenthesis or number is a variable name
       if (/^[A-Za-z_]/.test(t)) {
         const v = vars[t];
         return v === undefined ? t : `(${fmt(v)})`;
@@ -224,7 +226,9 @@ export function clearExpressionCache(): void {
  */
 export function condition(src: string, vars: Vars): boolean {
   return src.split(/\s+and\s+/).every((clause) => {
+    // Stryker disable next-line MethodExpression: equivalent, the expression reader skips spaces before and after a token
     const parts = clause.split(/(<=|>=|<|>)/).map((s) => s.trim());
+    // Stryker disable next-line LogicalOperator,ArithmeticOperator: equivalent on the data, every condition of both tables is a chain of comparisons; the guard only names a malformed table condition
     if (parts.length < 3 || parts.length % 2 === 0) throw new Error(`limit table condition: cannot read '${src}'`);
     for (let i = 1; i < parts.length; i += 2) {
       const left = evaluate(parts[i - 1] as string, vars);

@@ -100,6 +100,7 @@ export { entryWords } from '../model/input-words.js';
 
 /** True where the settings carry a 'differs' check with a document value for any factor. */
 export function hasFactorDocumentValues(settings: LimitSettings | undefined): boolean {
+  // Stryker disable next-line LogicalOperator: equivalent, a wider test only runs the document pass more often, and that pass finds a document value only through documentExprOf (a 'differs' check with a value under a factor key), so nothing changes
   return (settings?.rowChecks ?? []).some((c) => c.key.startsWith('factor:') && c.verdict === 'differs' && c.documentExpr !== undefined);
 }
 
@@ -136,6 +137,7 @@ export function evalFactor(
     const v = evaluate(p.expr, vars);
     if (p.conservative_alt && conservativeOn(settings, `factor:${name}`, pieceKey)) {
       const alt = evaluate(p.conservative_alt, vars);
+      // Stryker disable next-line ConditionalExpression: equivalent on the data, the only factor piece with a conservative alternative (icnirp2013 C_C over 1200-1400 nm: 8 against 8 + 10^(0.04 (lambda - 1250))) is always lower
       if (alt.lt(v)) {
         return { name, value: alt, expr: p.conservative_alt, source: p.source ?? source, confidence: p.confidence ?? def.confidence ?? '', conservativeApplied: true, remembered: v };
       }
@@ -184,6 +186,7 @@ export function evaluateFactors(
   const cache = new Map<string, FactorValue | null>();
   const get = (name: string): FactorValue | undefined => {
     let f = cache.get(name);
+    // Stryker disable next-line ConditionalExpression: equivalent, the factor evaluated again on every read has the same value (speed only)
     if (f === undefined) {
       f = evalFactor(table, name, vars, settings, side, useDocument) ?? null;
       cache.set(name, f);
@@ -191,6 +194,7 @@ export function evaluateFactors(
     return f ?? undefined;
   };
   for (const name of FACTOR_ORDER) {
+    // Stryker disable next-line BooleanLiteral: equivalent, no reader enumerates the variables map (expressions, conditions and substitute read each name directly)
     Object.defineProperty(vars, name, { enumerable: true, get: () => get(name)?.value });
   }
   return {
@@ -215,11 +219,13 @@ const edgeCache = new WeakMap<RuleSetTable, { lambda: Set<number>; t: Set<number
  */
 export function onFactorEdge(table: RuleSetTable, lambda: Dec, t: Dec): boolean {
   let e = edgeCache.get(table);
+  // Stryker disable next-line ConditionalExpression: equivalent, the edge sets built again are the same (speed only)
   if (!e) {
     e = { lambda: new Set(), t: new Set() };
     for (const def of Object.values(table.factors)) {
       for (const p of def.pieces ?? []) {
         if (p.band_nm) p.band_nm.forEach((x) => e?.lambda.add(x));
+        // Stryker disable next-line ArrowFunction: equivalent on the data, the pieces with durations (gamma_p, alpha_max) are continuous at their edges, so the piece ending at a duration edge never gives a lower value
         if (p.t_s) p.t_s.forEach((x) => e?.t.add(x));
       }
     }
