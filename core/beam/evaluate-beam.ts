@@ -44,6 +44,7 @@ export interface BeamContext {
 }
 
 /** Map a field named by a limit function to the beam input's own path. */
+// Stryker disable next-line ObjectLiteral: a static table, and unreachable: every field a limit function refuses is refused first by validateBeamInput with the full path (test/mutation/EQUIVALENT.md)
 const LIMIT_FIELD: Readonly<Record<string, string>> = {
   wavelength_nm: 'wavelength_nm',
   duration_s: 'exposureDuration_s',
@@ -59,8 +60,11 @@ function rethrowWithPath<T>(prefix: string, fn: () => T): T {
   try {
     return fn();
   } catch (err) {
+    // Stryker disable next-line BlockStatement: unreachable mapping: validation refuses first with the full path; the lens error already carries the prefix and is rethrown the same (test/mutation/EQUIVALENT.md)
     if (err instanceof InputError) {
+      // Stryker disable next-line ConditionalExpression: unreachable mapping, as above (test/mutation/EQUIVALENT.md)
       const field = err.field.startsWith(prefix) && prefix !== '' ? err.field : `${prefix}${LIMIT_FIELD[err.field] ?? err.field}`;
+      // Stryker disable next-line ConditionalExpression,EqualityOperator: unreachable mapping, as above: every variant rethrows an error with the same code, field, value and range (test/mutation/EQUIVALENT.md)
       if (field === err.field) throw err;
       throw new InputError(err.code, field, err.value, err.validRange);
     }
@@ -261,6 +265,7 @@ function evaluateValid(input: BeamInput, ruleSet: RuleSetId, settings: LimitSett
   trace.children.push(od.requirement.trace);
   // The summaries name the row with the lowest margin, which over its own aperture is not always the lowest limit.
   const eyeSummary = summaryByMargin(eye, od, input.emission);
+  // Stryker disable next-line ConditionalExpression,EqualityOperator: the skin criteria share one aperture and one S, so the lowest-limit summary is the same with or without the lens bound; the skin OD is not reported (test/mutation/EQUIVALENT.md)
   const skinSummary = summaryByMargin(skin, requiredOd(skin, m, lambda, position, v.lens !== undefined), input.emission);
   for (const g of [eyeSummary, skinSummary]) if (g.step) addStep(trace, g.step);
   const conservative = settings?.conservative !== false;

