@@ -133,7 +133,7 @@ class Session {
         await this.refreshOverview();
         const open = this.assessment;
         if (!open && this.draft && this.room && this.deletedElsewhere === null && this.roomOverview(this.room.id) === null) {
-          this.tellDeleted(whoDeleted(heard.changes, this.deletedIds()));
+          this.tellDeleted(await this.whoDeletedHeard(heard.changes));
         }
         if (open && heard.changes.some((c) => ['assessment', 'revision', 'signature', 'co_signature'].includes(c.table))) {
           const now = await invoke('assessment-get', { id: open.id }).catch((e: unknown) => {
@@ -141,7 +141,7 @@ class Session {
             return null;
           });
           if (now === null) {
-            if (this.assessment === open) this.tellDeleted(whoDeleted(heard.changes, this.deletedIds()));
+            if (this.assessment === open) this.tellDeleted(await this.whoDeletedHeard(heard.changes));
             this.askAgain(heard.changes.length);
             return;
           }
@@ -196,6 +196,23 @@ class Session {
         : `“${title}” of room ${code} was deleted from ${register} ${by} (its draft was discarded).`;
     const mine = this.dirty ? 'Your unsaved edits stay on screen, but what is on screen is stored nowhere now.' : 'What is on screen is stored nowhere now.';
     this.deletedElsewhere = `${what} ${mine}`;
+  }
+
+  /**
+   * Who deleted the open work, from the changes just heard; on a server, where those changes may
+   * not hold the deletion itself (it can arrive in an earlier or later batch than the change that
+   * revealed it), from every change the register keeps. Null when not known.
+   */
+  private async whoDeletedHeard(changes: readonly RegisterChange[]): Promise<string | null> {
+    const who = whoDeleted(changes, this.deletedIds());
+    if (who !== null || !this.onServer) return who;
+    try {
+      const all = await invoke('register-changes', { since: 0 });
+      return all.live ? whoDeleted(all.changes, this.deletedIds()) : null;
+    } catch {
+      // Who it was is a courtesy; the banner stands without it.
+      return null;
+    }
   }
 
   /**
